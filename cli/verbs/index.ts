@@ -1,0 +1,7 @@
+import type { Verb } from '../verb';
+
+/**
+ * Every verb, in the order `blockwise --help` lists them. A new verb is a
+ * module in this folder exporting a `Verb`, added here.
+ */
+export const verbs: readonly Verb[] = [];

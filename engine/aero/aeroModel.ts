@@ -1,0 +1,46 @@
+/**
+ * The contract between the airframe aerodynamics (drag polar) and its users.
+ * SI throughout. See engine/aero/dragPolar.ts for the implementation.
+ */
+export interface DragQuery {
+  /** Pressure altitude (m). */
+  readonly altitude_m: number;
+  readonly mach: number;
+  /** Aircraft mass (kg); lift = loadFactor * mass * g0. */
+  readonly mass_kg: number;
+  /** Load factor n (-), 1 in level flight. */
+  readonly loadFactor: number;
+  /** Flight-path angle (rad); lift = n m g cos(gamma) is NOT applied here: callers pass n. */
+}
+
+export interface DragBreakdown {
+  readonly cl: number;
+  /** Total drag coefficient (-). */
+  readonly cd: number;
+  /** Zero-lift parasite part CD0(M) (-). */
+  readonly cd0: number;
+  /** Added parasite increments (e.g. the inlet's external drag, user dCD0) (-). */
+  readonly cdIncrement: number;
+  /** Lift-dependent part K(M)(CL - CLmd)^2 (-). */
+  readonly cdInduced: number;
+  /** Compressibility (wave) drag (-). */
+  readonly cdWave: number;
+  /** Dynamic pressure (Pa). */
+  readonly q_Pa: number;
+  /** Drag force (N). */
+  readonly drag_N: number;
+  /** Lift-to-drag ratio (-). */
+  readonly liftToDrag: number;
+  /** Buffet-onset CL at this Mach (-) and the load factor to buffet onset (-). */
+  readonly buffetCl: number;
+  readonly buffetLoadFactor: number;
+  /** Maximum lift coefficient at this Mach (-). */
+  readonly clMax: number;
+}
+
+export interface AeroModel {
+  readonly wingArea_m2: number;
+  drag(query: DragQuery): DragBreakdown;
+  /** Same polar with an extra parasite increment (drag counts / 1e4) added. */
+  withIncrement(deltaCd0: number): AeroModel;
+}

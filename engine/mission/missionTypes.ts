@@ -1,0 +1,222 @@
+/**
+ * The mission contract: what the project file becomes after parsing (all SI)
+ * and what the solver returns. engine/project builds a MissionInput from a
+ * project file; engine/mission solves it; analyses and the renderer read
+ * MissionResult. Owned by engine/mission — extend, do not fork.
+ */
+import type { AeroModel } from '../aero/aeroModel';
+import type { Caution } from '../cautions/caution';
+import type { CautionSettings } from '../cautions/cautionSettings';
+import type { PropulsionModel, RatingName } from '../propulsion/propulsionModel';
+
+export interface Airframe {
+  /** Operating empty mass including the active inlet's weight (kg). */
+  readonly oew_kg: number;
+  readonly mzfw_kg: number;
+  readonly mtow_kg: number;
+  readonly mlw_kg: number;
+  readonly maxFuel_kg: number;
+  readonly wingArea_m2: number;
+  /** Maximum operating speed as CAS (m/s) and Mach (-). */
+  readonly vmo_m_s: number;
+  readonly mmo: number;
+}
+
+/** Per-leg atmosphere and wind; unset fields fall back to the mission's. */
+export interface LegEnvironment {
+  /** ISA temperature deviation (K). */
+  readonly isaDev_K?: number;
+  /** Along-track wind (m/s): positive is a tailwind, negative a headwind. */
+  readonly wind_m_s?: number;
+}
+
+/** Climb/descent speed schedule: a low CAS below a limit altitude, then a CAS, then a Mach above the crossover. */
+export interface SpeedSchedule {
+  /** CAS below `lowAltitudeLimit_m` (m/s), e.g. 250 kt below 10,000 ft. */
+  readonly lowCas_m_s: number;
+  readonly lowAltitudeLimit_m: number;
+  /** CAS above the limit (m/s). */
+  readonly cas_m_s: number;
+  /** Mach held above the CAS/Mach transition altitude (-). */
+  readonly mach: number;
+}
+
+export type CruiseSpeed =
+  | { readonly kind: 'mach'; readonly mach: number }
+  | { readonly kind: 'bestRange' }
+  | { readonly kind: 'longRange' };
+
+export type CruiseProfile =
+  | { readonly kind: 'constantAltitude' }
+  | { readonly kind: 'stepClimb'; readonly step_m: number; readonly maxAltitude_m: number }
+  | { readonly kind: 'cruiseClimb'; readonly maxAltitude_m: number };
+
+export type Leg = LegEnvironment & { readonly name: string } & (
+    | { readonly kind: 'taxiOut'; readonly time_s: number; readonly fuelFlow_kg_s: number | 'idle' }
+    | { readonly kind: 'takeoff'; readonly fuel_kg: number | null; readonly time_s: number }
+    | {
+        readonly kind: 'climb';
+        readonly toAltitude_m: number;
+        readonly schedule: SpeedSchedule;
+        readonly rating: RatingName;
+      }
+    | {
+        readonly kind: 'cruise';
+        readonly altitude_m: number;
+        readonly speed: CruiseSpeed;
+        readonly profile: CruiseProfile;
+        /** Still-air distance of this leg (m); null = solved so the mission meets its range. At most one cruise leg is null. */
+        readonly distance_m: number | null;
+      }
+    | {
+        readonly kind: 'descent';
+        readonly toAltitude_m: number;
+        readonly schedule: SpeedSchedule;
+        readonly mode: { readonly kind: 'idle' } | { readonly kind: 'rate'; readonly rate_m_s: number };
+      }
+    | {
+        readonly kind: 'hold';
+        readonly altitude_m: number;
+        readonly time_s: number;
+        readonly speed: { readonly kind: 'bestEndurance' } | { readonly kind: 'cas'; readonly cas_m_s: number };
+      }
+    | { readonly kind: 'approach'; readonly time_s: number; readonly fuel_kg: number | null }
+    | { readonly kind: 'taxiIn'; readonly time_s: number; readonly fuelFlow_kg_s: number | 'idle' }
+  );
+
+export type LegKind = Leg['kind'];
+
+/** How the alternate is flown: climb, cruise, descent with the same engine and airframe. */
+export interface AlternateSpec {
+  readonly distance_m: number;
+  readonly cruiseAltitude_m: number;
+  readonly cruiseMach: number;
+  /** Elevation of the alternate aerodrome (m); the final-reserve hold is 1,500 ft above it. */
+  readonly elevation_m: number;
+}
+
+export type ReservePolicy =
+  | {
+      /** ICAO Annex 6 Part I, 4.3.6.3 style: contingency, alternate, final reserve. */
+      readonly preset: 'icaoAnnex6';
+      readonly contingencyFraction: number;
+      readonly minContingency_s: number;
+      readonly alternate: AlternateSpec | null;
+      readonly finalReserve_s: number;
+    }
+  | {
+      /** 14 CFR 121.639: fly to the destination, then the most distant alternate, then 45 min at normal cruise fuel consumption. */
+      readonly preset: 'cfr121_639';
+      readonly alternate: AlternateSpec | null;
+      readonly finalReserve_s: number;
+    }
+  | {
+      /** 14 CFR 121.645(b): plus 10 % of the en-route flight time, alternate, and 30 min holding at 1,500 ft above the alternate. */
+      readonly preset: 'cfr121_645';
+      readonly enRouteFraction: number;
+      readonly alternate: AlternateSpec | null;
+      readonly finalReserve_s: number;
+    }
+  | {
+      readonly preset: 'custom';
+      readonly contingencyFraction: number;
+      readonly alternate: AlternateSpec | null;
+      readonly finalReserve_s: number;
+      readonly extraFuel_kg: number;
+    };
+
+export type SolveMode =
+  | { readonly kind: 'takeoffWeight'; readonly takeoffMass_kg: number; readonly payload_kg: number }
+  | { readonly kind: 'payloadRange'; readonly payload_kg: number; readonly range_m: number }
+  | { readonly kind: 'maxRange'; readonly payload_kg: number };
+
+export interface MissionInput {
+  readonly airframe: Airframe;
+  /** Polar including the active inlet's external drag increment. */
+  readonly aero: AeroModel;
+  readonly propulsion: PropulsionModel;
+  readonly legs: readonly Leg[];
+  readonly reserves: ReservePolicy;
+  readonly solve: SolveMode;
+  readonly cautionSettings: CautionSettings;
+  /** Mission-wide ISA deviation (K) and along-track wind (m/s, + tailwind). */
+  readonly isaDev_K: number;
+  readonly wind_m_s: number;
+}
+
+export interface LegRow {
+  readonly index: number;
+  readonly name: string;
+  readonly kind: LegKind | 'reserve';
+  readonly startTime_s: number;
+  readonly endTime_s: number;
+  readonly startDistance_m: number;
+  readonly endDistance_m: number;
+  readonly startAltitude_m: number;
+  readonly endAltitude_m: number;
+  readonly startMass_kg: number;
+  readonly endMass_kg: number;
+  readonly fuel_kg: number;
+}
+
+/** Time history, one sample per integrator step, columns as typed arrays. */
+export interface TimeHistory {
+  readonly time_s: Float64Array;
+  readonly distance_m: Float64Array;
+  readonly altitude_m: Float64Array;
+  readonly mach: Float64Array;
+  readonly cas_m_s: Float64Array;
+  readonly tas_m_s: Float64Array;
+  readonly mass_kg: Float64Array;
+  readonly thrustAvailable_N: Float64Array;
+  readonly thrustUsed_N: Float64Array;
+  readonly drag_N: Float64Array;
+  readonly fuelFlow_kg_s: Float64Array;
+  readonly cl: Float64Array;
+  readonly liftToDrag: Float64Array;
+  readonly climbRate_m_s: Float64Array;
+  /** Leg index of each sample. */
+  readonly legIndex: Int32Array;
+}
+
+export interface ReserveBreakdown {
+  readonly contingency_kg: number;
+  readonly alternate_kg: number;
+  readonly finalReserve_kg: number;
+  readonly extra_kg: number;
+  readonly total_kg: number;
+}
+
+export type MissionStatus =
+  | 'ok'
+  | 'did_not_converge'
+  | 'fuel_exhausted'
+  | 'thrust_below_drag'
+  | 'climb_not_reached'
+  | 'infeasible';
+
+export interface MissionResult {
+  readonly status: MissionStatus;
+  /** Human-readable reason when status is not 'ok'. */
+  readonly statusMessage: string;
+  readonly blockFuel_kg: number;
+  readonly blockTime_s: number;
+  readonly tripFuel_kg: number;
+  readonly tripTime_s: number;
+  readonly reserveFuel_kg: number;
+  readonly reserves: ReserveBreakdown;
+  readonly takeoffMass_kg: number;
+  readonly rampMass_kg: number;
+  readonly landingMass_kg: number;
+  readonly zeroFuelMass_kg: number;
+  readonly payload_kg: number;
+  /** Still-air and ground distance of the trip (m). */
+  readonly airDistance_m: number;
+  readonly groundDistance_m: number;
+  readonly legs: readonly LegRow[];
+  readonly history: TimeHistory;
+  readonly cautions: readonly Caution[];
+  /** Fuel-iteration report (solve modes b and c). */
+  readonly iterations: number;
+  readonly residual_kg: number;
+}

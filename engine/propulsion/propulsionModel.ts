@@ -1,0 +1,109 @@
+/**
+ * The contract between the propulsion layer (deck + installation) and its
+ * users (mission integrator, analyses, renderer). All quantities SI; all
+ * forces and flows are for the WHOLE AIRCRAFT (every engine), per engine
+ * values are in `perEngine`.
+ *
+ * Bookkeeping: `thrust_N` is the installed net propulsive force =
+ * deck thrust corrected for inlet recovery, bleed and power extraction,
+ * MINUS inlet spillage (additive) drag. The inlet's external (nacelle)
+ * drag increment is an airframe drag increment (see InletDesign
+ * `externalDragArea_m2` / dCD0) and is NOT in `thrust_N`.
+ */
+import type { Caution } from '../cautions/caution';
+
+export type RatingName = 'takeoff' | 'maxClimb' | 'maxCruise' | 'maxContinuous' | 'flightIdle';
+
+export const RATING_NAMES: readonly RatingName[] = [
+  'takeoff',
+  'maxClimb',
+  'maxCruise',
+  'maxContinuous',
+  'flightIdle',
+];
+
+/** The deck axis a lookup left, if any. */
+export type DeckAxis = 'altitude' | 'mach' | 'power' | 'isaDev';
+
+export interface FlightCondition {
+  /** Pressure altitude (m). */
+  readonly altitude_m: number;
+  readonly mach: number;
+  /** ISA temperature deviation (K). */
+  readonly isaDev_K: number;
+}
+
+/** One engine's numbers at a flight condition and power setting. */
+export interface EnginePoint {
+  /** Deck (uninstalled) net thrust (N). */
+  readonly uninstalledThrust_N: number;
+  /** Deck (uninstalled) fuel flow (kg/s). */
+  readonly uninstalledFuelFlow_kg_s: number;
+  /** Installed net thrust before spillage drag (N). */
+  readonly correctedThrust_N: number;
+  /** Inlet spillage (additive) drag net of lip suction (N); 0 when not computed. */
+  readonly spillageDrag_N: number;
+  /** Installed net propulsive force = correctedThrust_N - spillageDrag_N (N). */
+  readonly thrust_N: number;
+  /** Installed fuel flow (kg/s). */
+  readonly fuelFlow_kg_s: number;
+  /** Engine inlet corrected... physical airflow (kg/s), null when the deck has no airflow. */
+  readonly airflow_kg_s: number | null;
+  /** Inlet total-pressure recovery used (-) and the deck's reference recovery (-). */
+  readonly recovery: number;
+  readonly referenceRecovery: number;
+  /** Capture-area mass-flow ratio A0/Ac (-), null when not computed. */
+  readonly massFlowRatio: number | null;
+  readonly throatMach: number | null;
+  readonly fanFaceMach: number | null;
+}
+
+/** Whole-aircraft installed numbers at a condition and power setting. */
+export interface InstalledPoint extends FlightCondition {
+  /** Power setting on the deck's power axis (-). */
+  readonly power: number;
+  /** Installed net propulsive force, all engines (N). */
+  readonly thrust_N: number;
+  /** Installed fuel flow, all engines (kg/s). */
+  readonly fuelFlow_kg_s: number;
+  /** Installed TSFC (kg/(N s)); fuelFlow / thrust, NaN-free: Infinity when thrust <= 0 is reported as null. */
+  readonly tsfc_kg_N_s: number | null;
+  readonly perEngine: EnginePoint;
+  /** Deck axes the lookup left (empty when inside the table). */
+  readonly outsideTable: readonly DeckAxis[];
+  /** Cautions raised by this lookup (deck extrapolation, throat Mach, temperature approximation, no airflow...). */
+  readonly cautions: readonly Caution[];
+}
+
+export type ThrustLimit = 'within' | 'above_rating' | 'below_idle';
+
+export interface PartPowerPoint extends InstalledPoint {
+  /** 'within' when the thrust asked for lies between flight idle and the rating; else the point is AT the limit. */
+  readonly limit: ThrustLimit;
+  /** The thrust asked for, all engines (N). */
+  readonly thrustRequired_N: number;
+}
+
+export interface PropulsionModel {
+  readonly engineCount: number;
+  /** Deck title; parametric decks say "parametric" in it. */
+  readonly label: string;
+  readonly parametric: boolean;
+  /** Name of the inlet design applied. */
+  readonly inletName: string;
+  /** Installed numbers at a named rating. */
+  atRating(condition: FlightCondition, rating: RatingName): InstalledPoint;
+  /** Installed numbers at a power-axis value. */
+  atPower(condition: FlightCondition, power: number): InstalledPoint;
+  /**
+   * Part power: the setting between flight idle and `ceilingRating` (default
+   * maxCruise... callers pass what applies) where installed thrust equals
+   * `thrustRequired_N` (all engines). At a limit the point is the limit and
+   * `limit` says which.
+   */
+  forThrust(
+    condition: FlightCondition,
+    thrustRequired_N: number,
+    ceilingRating?: RatingName,
+  ): PartPowerPoint;
+}

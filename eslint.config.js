@@ -1,0 +1,60 @@
+import js from '@eslint/js';
+import tseslint from 'typescript-eslint';
+
+// The folders are the dependency graph (STYLE rule 1):
+//   renderer -> engine; electron -> engine; cli -> engine;
+//   renderer -> electron only for the bridge's *types*; engine -> nothing of ours.
+// Do not relax these rules; move the code instead.
+const nodeBuiltins = ['node:*', 'fs', 'path', 'os', 'child_process', 'url', 'util', 'worker_threads'];
+
+export default tseslint.config(
+  { ignores: ['node_modules/', 'dist/', 'dist-web/', 'dist-electron/', 'artifacts/', 'coverage/'] },
+  js.configs.recommended,
+  ...tseslint.configs.recommended,
+  {
+    rules: {
+      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+    },
+  },
+  {
+    files: ['engine/**/*.ts'],
+    rules: {
+      '@typescript-eslint/no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            { group: ['**/renderer/**', '**/electron/**', '**/cli/**', '**/test/**', '**/scripts/**'], message: 'engine/ depends on nothing of ours above it.' },
+            { group: nodeBuiltins, message: 'engine/ is pure: file and process access belong to its callers.' },
+            { group: ['react', 'react-dom', 'recharts', 'immer', 'electron'], message: 'engine/ uses zod at most.' },
+          ],
+        },
+      ],
+      'no-restricted-globals': ['error', 'Date', 'setTimeout', 'setInterval', 'performance', 'console'],
+      'no-restricted-properties': ['error', { object: 'Math', property: 'random', message: 'The engine is deterministic: take a seed.' }],
+    },
+  },
+  {
+    files: ['renderer/**/*.ts', 'renderer/**/*.tsx'],
+    rules: {
+      '@typescript-eslint/no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            { group: ['**/electron/**'], message: 'renderer/ may import electron/ only for the bridge types.', allowTypeImports: true },
+            { group: ['**/cli/**'], message: 'renderer/ does not depend on the CLI.' },
+            { group: nodeBuiltins, message: 'renderer/ runs in a sandboxed page.' },
+          ],
+        },
+      ],
+    },
+  },
+  {
+    files: ['electron/**/*.ts', 'cli/**/*.ts'],
+    rules: {
+      '@typescript-eslint/no-restricted-imports': [
+        'error',
+        { patterns: [{ group: ['**/renderer/**'], message: 'The shell and CLI do not import the renderer.' }] },
+      ],
+    },
+  },
+);
