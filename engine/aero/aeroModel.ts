@@ -36,6 +36,8 @@ export interface DragBreakdown {
   readonly buffetLoadFactor: number;
   /** Maximum lift coefficient at this Mach (-). */
   readonly clMax: number;
+  /** Polar tables this query left and was clamped on ('cd0', 'induced', 'compressibility', 'buffetCl', 'clMax'); empty inside. */
+  readonly outsideTables: readonly string[];
 }
 
 export interface AeroModel {

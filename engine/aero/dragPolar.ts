@@ -1,0 +1,204 @@
+/**
+ * The airframe drag polar (DESIGN.md §2.3), implementing AeroModel:
+ *   CD = CD0(M) + dCD0 + K(M) (CL - CLmd)^2 + CDwave(M, CL)
+ * with K = 1/(pi e AR) (Oswald) or K(M) tabulated, and CDwave from the Korn
+ * equation with Lock's rise (engine/aero/waveDrag.ts) or a CDwave(M, CL)
+ * table. Lift = n m g0 and q = (gamma/2) p M^2 at the pressure altitude
+ * (NACA Report 1135, gamma = 1.4). Every Mach or CL table is clamped at its
+ * ends and each breakdown lists the tables the query left.
+ */
+import { expectOk } from '../core/result';
+import type { Result } from '../core/result';
+import { interp1d, makeTable1d, type Table1d } from '../core/table1d';
+import { interp2d, makeTable2d, type Table2d } from '../core/table2d';
+import type { AeroModel, DragBreakdown, DragQuery } from './aeroModel';
+import { validatePolarSpec, type PolarIssue, type PolarSpec } from './polarSpec';
+import { atmosphere } from './standardAtmosphere';
+import { kornWaveDrag, type KornWing } from './waveDrag';
+
+/** Standard gravity g0 (m/s^2), exact by definition (CGPM 1901; U.S. Standard Atmosphere 1976). */
+export const STANDARD_GRAVITY_m_s2 = 9.80665;
+
+/** Ratio of specific heats of air used for q = (gamma/2) p M^2 (NACA Report 1135). */
+const GAMMA_AIR = 1.4;
+
+/** Names used in `outsideTables` when a query leaves a table and is clamped. */
+export type PolarTableName = 'cd0' | 'induced' | 'compressibility' | 'buffetCl' | 'clMax';
+
+/** The built tables of a polar (ready for lookups). */
+export interface PolarTables {
+  readonly cd0: Table1d;
+  /** Constant K or K(M) table. */
+  readonly induced: number | Table1d;
+  readonly wave:
+    | { readonly kind: 'none' }
+    | { readonly kind: 'korn'; readonly wing: KornWing }
+    | { readonly kind: 'table'; readonly table: Table2d };
+  readonly buffetCl: Table1d;
+  readonly clMax: Table1d;
+}
+
+export interface PolarCoefficients {
+  readonly cd0: number;
+  readonly cdIncrement: number;
+  readonly cdInduced: number;
+  readonly cdWave: number;
+  readonly cd: number;
+  /** Tables the lookup left (each value held at the table's end). */
+  readonly outsideTables: readonly PolarTableName[];
+}
+
+/** AeroModel with its spec and tables exposed for analyses. */
+export interface DragPolarModel extends AeroModel {
+  readonly spec: PolarSpec;
+  readonly tables: PolarTables;
+  withIncrement(deltaCd0: number): DragPolarModel;
+}
+
+function lookup(table: Table1d, x: number, name: PolarTableName, outside: PolarTableName[]): number {
+  const r = expectOk(interp1d(table, x, 'clamp'), `polar table ${name}`);
+  if (r.outside !== null && !outside.includes(name)) outside.push(name);
+  return r.value;
+}
+
+function buildTables(spec: PolarSpec): PolarTables {
+  const cd0 = expectOk(makeTable1d(spec.cd0.mach, spec.cd0.cd0, 'cd0'), 'validated cd0 table');
+  const ind = spec.induced;
+  const induced =
+    ind.kind === 'oswald'
+      ? 1 / (Math.PI * ind.oswaldEfficiency * ind.aspectRatio)
+      : expectOk(makeTable1d(ind.mach, ind.k, 'induced'), 'validated induced table');
+  const c = spec.compressibility;
+  const wave: PolarTables['wave'] =
+    c.kind === 'none'
+      ? { kind: 'none' }
+      : c.kind === 'korn'
+        ? {
+            kind: 'korn',
+            wing: { sweep_rad: c.sweep_rad, thicknessRatio: c.thicknessRatio, kornTechnologyFactor: c.kornTechnologyFactor },
+          }
+        : { kind: 'table', table: expectOk(makeTable2d(c.mach, c.cl, c.cdWave, 'compressibility'), 'validated wave table') };
+  return {
+    cd0,
+    induced,
+    wave,
+    buffetCl: expectOk(makeTable1d(spec.buffetCl.mach, spec.buffetCl.cl, 'buffetCl'), 'validated buffet table'),
+    clMax: expectOk(makeTable1d(spec.clMax.mach, spec.clMax.cl, 'clMax'), 'validated clMax table'),
+  };
+}
+
+function requireFinite(value: number, what: string): void {
+  if (!Number.isFinite(value)) throw new RangeError(`drag polar: ${what} is ${String(value)}, expected a finite number`);
+}
+
+/** Induced-drag factor K(M) (-), clamped to the table. */
+export function inducedFactor(model: DragPolarModel, mach: number): number {
+  const t = model.tables.induced;
+  return typeof t === 'number' ? t : lookup(t, mach, 'induced', []);
+}
+
+/**
+ * Drag coefficients at Mach `mach` (>= 0) and lift coefficient `cl` (any
+ * sign): CD0(M), dCD0, K(M)(CL - CLmd)^2, CDwave(M, CL) and their sum.
+ * Wave drag uses |CL| in the Korn equation. Throws RangeError for a
+ * non-finite or negative Mach or a non-finite CL (a caller bug).
+ */
+export function polarCoefficients(model: DragPolarModel, mach: number, cl: number): PolarCoefficients {
+  requireFinite(mach, 'Mach');
+  requireFinite(cl, 'CL');
+  if (mach < 0) throw new RangeError(`drag polar: Mach is ${mach}, expected >= 0`);
+  const outside: PolarTableName[] = [];
+  const t = model.tables;
+  const cd0 = lookup(t.cd0, mach, 'cd0', outside);
+  const k = typeof t.induced === 'number' ? t.induced : lookup(t.induced, mach, 'induced', outside);
+  const dcl = cl - model.spec.clMinDrag;
+  const cdInduced = k * dcl * dcl;
+  let cdWave = 0;
+  if (t.wave.kind === 'korn') {
+    cdWave = kornWaveDrag(t.wave.wing, mach, cl);
+  } else if (t.wave.kind === 'table') {
+    const w = expectOk(interp2d(t.wave.table, mach, cl, 'clamp'), 'polar table compressibility');
+    if (w.outsideX !== null || w.outsideY !== null) outside.push('compressibility');
+    cdWave = w.value;
+  }
+  const cdIncrement = model.spec.cdIncrement;
+  return { cd0, cdIncrement, cdInduced, cdWave, cd: cd0 + cdIncrement + cdInduced + cdWave, outsideTables: outside };
+}
+
+/** Buffet-onset CL (-) at a Mach, clamped to the table. */
+export function buffetClAt(model: DragPolarModel, mach: number): number {
+  return lookup(model.tables.buffetCl, mach, 'buffetCl', []);
+}
+
+/** Maximum lift coefficient (-) at a Mach, clamped to the table. */
+export function clMaxAt(model: DragPolarModel, mach: number): number {
+  return lookup(model.tables.clMax, mach, 'clMax', []);
+}
+
+function dragAt(model: DragPolarModel, query: DragQuery): DragBreakdown {
+  requireFinite(query.altitude_m, 'altitude_m');
+  requireFinite(query.mass_kg, 'mass_kg');
+  requireFinite(query.loadFactor, 'loadFactor');
+  requireFinite(query.mach, 'Mach');
+  if (!(query.mach > 0)) throw new RangeError(`drag polar: Mach is ${query.mach}, expected > 0 for a lifting query`);
+  if (!(query.mass_kg > 0)) throw new RangeError(`drag polar: mass_kg is ${query.mass_kg}, expected > 0`);
+  const atm = atmosphere(query.altitude_m);
+  if (!atm.ok) throw new RangeError(`drag polar: ${atm.error.message}`);
+  const q_Pa = 0.5 * GAMMA_AIR * atm.value.pressure_Pa * query.mach * query.mach;
+  const qS = q_Pa * model.wingArea_m2;
+  const weight_N = query.mass_kg * STANDARD_GRAVITY_m_s2;
+  const cl = (query.loadFactor * weight_N) / qS;
+  const c = polarCoefficients(model, query.mach, cl);
+  const outside = [...c.outsideTables];
+  const buffetCl = lookup(model.tables.buffetCl, query.mach, 'buffetCl', outside);
+  const clMax = lookup(model.tables.clMax, query.mach, 'clMax', outside);
+  return {
+    cl,
+    cd: c.cd,
+    cd0: c.cd0,
+    cdIncrement: c.cdIncrement,
+    cdInduced: c.cdInduced,
+    cdWave: c.cdWave,
+    q_Pa,
+    drag_N: qS * c.cd,
+    liftToDrag: cl / c.cd,
+    buffetCl,
+    // Load factor at which this mass reaches buffet onset here: CLbuffet / CL(1 g).
+    buffetLoadFactor: (buffetCl * qS) / weight_N,
+    clMax,
+    outsideTables: outside,
+  };
+}
+
+function assemble(spec: PolarSpec, tables: PolarTables, wingArea_m2: number): DragPolarModel {
+  const model: DragPolarModel = {
+    spec,
+    tables,
+    wingArea_m2,
+    drag: (query) => dragAt(model, query),
+    withIncrement: (deltaCd0) => {
+      requireFinite(deltaCd0, 'deltaCd0');
+      const cdIncrement = spec.cdIncrement + deltaCd0;
+      const lowest = Math.min(...tables.cd0.y);
+      if (lowest + cdIncrement <= 0) {
+        throw new RangeError(`drag polar: increment ${deltaCd0} makes CD0 + dCD0 <= 0 (lowest CD0 ${lowest})`);
+      }
+      return assemble({ ...spec, cdIncrement }, tables, wingArea_m2);
+    },
+  };
+  return model;
+}
+
+/**
+ * Builds the drag polar model for a wing reference area `wingArea_m2` (> 0).
+ * Returns every issue of the spec (validatePolarSpec) or of the area.
+ */
+export function makeAeroModel(spec: PolarSpec, wingArea_m2: number): Result<DragPolarModel, PolarIssue[]> {
+  const checked = validatePolarSpec(spec);
+  const issues = checked.ok ? [] : [...checked.error];
+  if (!Number.isFinite(wingArea_m2) || wingArea_m2 <= 0) {
+    issues.push({ path: 'wingArea_m2', message: `is ${String(wingArea_m2)}, expected a wing area > 0` });
+  }
+  if (issues.length > 0) return { ok: false, error: issues };
+  return { ok: true, value: assemble(spec, buildTables(spec), wingArea_m2) };
+}
