@@ -1,0 +1,32 @@
+/**
+ * Types shared by the analyses (crossover, envelope, specific range,
+ * payload-range, inlet comparison, trade factors).
+ */
+import type { AeroModel } from '../aero/aeroModel';
+import type { MissionInput, MissionResult } from '../mission/missionTypes';
+import type { PropulsionModel } from '../propulsion/propulsionModel';
+
+/** The two models every point-performance analysis needs. */
+export interface PerformanceModels {
+  readonly aero: AeroModel;
+  readonly propulsion: PropulsionModel;
+}
+
+/** Flies one mission; the analyses call engine/mission/solveMission through this. */
+export type MissionSolver = (input: MissionInput) => MissionResult;
+
+export type AnalysisErrorCode =
+  | 'invalid_input'
+  | 'atmosphere_out_of_range'
+  | 'mission_failed'
+  | 'cancelled'
+  | 'no_solution';
+
+export interface AnalysisError {
+  readonly code: AnalysisErrorCode;
+  /** One readable sentence: what failed, where, and with which value. */
+  readonly message: string;
+}
+
+/** Standard gravity (m/s^2), ISO 80000-3 / CGPM 1901 (exact). */
+export const STANDARD_GRAVITY_M_S2 = 9.80665;

@@ -1,0 +1,207 @@
+/**
+ * Thrust-drag crossover at one altitude, mass and rating: the curves of
+ * thrust available and drag over Mach, the low and high Machs where they
+ * cross (the level-flight speed band), the Mach of least thrust available
+ * (where ram recovery starts to win back the lapse), and the Machs of
+ * greatest excess thrust and greatest specific excess power.
+ */
+import type { Caution } from '../cautions/caution';
+import { err, ok, type Result } from '../core/result';
+import type { RatingName } from '../propulsion/propulsionModel';
+import type { AnalysisError, PerformanceModels } from './analysisTypes';
+import { liftLimitMachs } from './liftLimitMach';
+import { airAt, levelPoint } from './pointState';
+import { maximizeOnGrid, minimizeOnGrid, rootsOnPoints, uniformGrid } from './scalarSearch';
+
+export interface CrossoverQuery {
+  /** Pressure altitude (m). */
+  readonly altitude_m: number;
+  readonly mass_kg: number;
+  readonly rating: RatingName;
+  /** ISA temperature deviation (K). */
+  readonly isaDev_K: number;
+  /** Mach scan range; default [0.1, 0.95]. The low end is raised to the stall Mach. */
+  readonly machRange?: readonly [number, number];
+  /** Curve points; default 81, at least 5. */
+  readonly samples?: number;
+}
+
+export interface CrossoverCurves {
+  readonly mach: readonly number[];
+  readonly thrustAvailable_N: readonly number[];
+  readonly drag_N: readonly number[];
+  readonly excessThrust_N: readonly number[];
+  readonly specificExcessPower_m_s: readonly number[];
+}
+
+export type CrossoverStatus = 'ok' | 'above_ceiling';
+
+export interface CrossoverResult {
+  readonly status: CrossoverStatus;
+  /** One readable sentence on the result (above the ceiling: says so for this mass). */
+  readonly message: string;
+  readonly altitude_m: number;
+  readonly mass_kg: number;
+  readonly rating: RatingName;
+  readonly isaDev_K: number;
+  /** Mach at which CL at 1 g reaches CLmax; null when below the scan start. */
+  readonly stallMach: number | null;
+  /** Mach range actually considered: [max(scan start, stall Mach), scan end]. */
+  readonly machRange: readonly [number, number];
+  /** Low-speed crossover (T = D, excess thrust rising); null when thrust exceeds drag at the low end of the range. */
+  readonly lowMach: number | null;
+  /** High-speed crossover (T = D, excess thrust falling); null when thrust exceeds drag at the high end. */
+  readonly highMach: number | null;
+  /** Every crossing found, ascending. */
+  readonly crossings: readonly number[];
+  /** Mach of least thrust available; null when thrust is monotone over the range. */
+  readonly minThrustMach: number | null;
+  /** Mach of greatest excess thrust and that excess (N); null when CL at 1 g exceeds CLmax over the whole range. */
+  readonly maxExcessThrustMach: number | null;
+  readonly maxExcessThrust_N: number | null;
+  /** Mach of greatest Ps (best steady climb at constant TAS) and that Ps (m/s); null as above. */
+  readonly bestClimbMach: number | null;
+  readonly maxSpecificExcessPower_m_s: number | null;
+  readonly curves: CrossoverCurves;
+  /** Root tolerances: Mach (-) and |T - D| / D (-) at each crossing. */
+  readonly tolerance: { readonly mach: number; readonly relativeThrust: number };
+  /** Cautions raised by the thrust lookups at the crossings and the range ends. */
+  readonly cautions: readonly Caution[];
+}
+
+/** Mach tolerance of the crossover roots and extrema (-). */
+export const CROSSOVER_MACH_TOL = 1e-10;
+/** Stated bound on |T - D| / D at a reported crossover (-). */
+export const CROSSOVER_RELATIVE_THRUST_TOL = 1e-6;
+
+function validate(query: CrossoverQuery): string | null {
+  const [lo, hi] = query.machRange ?? [0.1, 0.95];
+  if (!Number.isFinite(query.altitude_m)) return `altitude ${query.altitude_m} m is not a finite number`;
+  if (!(query.mass_kg > 0) || !Number.isFinite(query.mass_kg)) return `mass ${query.mass_kg} kg must be a positive number`;
+  if (!Number.isFinite(query.isaDev_K)) return `ISA deviation ${query.isaDev_K} K is not a finite number`;
+  if (!(lo > 0) || !(hi > lo) || !Number.isFinite(hi)) return `Mach range [${lo}, ${hi}] must satisfy 0 < low < high`;
+  const n = query.samples ?? 81;
+  if (!Number.isInteger(n) || n < 5) return `samples ${n} must be an integer of at least 5`;
+  return null;
+}
+
+function uniqueCautions(lists: readonly (readonly Caution[])[]): Caution[] {
+  const seen = new Set<string>();
+  const out: Caution[] = [];
+  for (const list of lists) {
+    for (const c of list) {
+      if (!seen.has(c.id)) {
+        seen.add(c.id);
+        out.push(c);
+      }
+    }
+  }
+  return out;
+}
+
+/**
+ * Level-flight thrust-drag crossover (thrust-required vs thrust-available
+ * curves: Anderson, Aircraft Performance and Design, ch. 5). Crossings are
+ * bracketed on the Mach grid (plus the Mach of greatest excess thrust, so a
+ * narrow band near the ceiling is not missed) and refined by Brent's method
+ * to CROSSOVER_MACH_TOL. Mass in kg, altitude in m, Mach 0.05..~1. Returns
+ * `above_ceiling` status (not an error) when thrust never reaches drag.
+ */
+export function thrustDragCrossover(
+  models: PerformanceModels,
+  query: CrossoverQuery,
+): Result<CrossoverResult, AnalysisError> {
+  const bad = validate(query);
+  if (bad !== null) return err({ code: 'invalid_input', message: `crossover: ${bad}` });
+  const air = airAt(query.altitude_m, query.isaDev_K);
+  if (!air.ok) return air;
+  const a = air.value.speedOfSound_m_s;
+  const [scanLo, scanHi] = query.machRange ?? [0.1, 0.95];
+  const samples = query.samples ?? 81;
+  const conditions = { altitude_m: query.altitude_m, mass_kg: query.mass_kg, rating: query.rating, isaDev_K: query.isaDev_K };
+  const base = {
+    altitude_m: query.altitude_m,
+    mass_kg: query.mass_kg,
+    rating: query.rating,
+    isaDev_K: query.isaDev_K,
+    tolerance: { mach: CROSSOVER_MACH_TOL, relativeThrust: CROSSOVER_RELATIVE_THRUST_TOL },
+  };
+
+  const stall = liftLimitMachs(models.aero, { altitude_m: query.altitude_m, mass_kg: query.mass_kg, loadFactor: 1 }, 'clMax', Math.min(0.02, scanLo), scanHi);
+  const stallMach = stall.exceededEverywhere ? null : stall.lowMach;
+  const emptyCurves: CrossoverCurves = { mach: [], thrustAvailable_N: [], drag_N: [], excessThrust_N: [], specificExcessPower_m_s: [] };
+  if (stall.exceededEverywhere) {
+    return ok({
+      ...base,
+      status: 'above_ceiling',
+      message: `At ${query.altitude_m.toFixed(0)} m and ${query.mass_kg.toFixed(0)} kg the wing cannot lift the aircraft below Mach ${scanHi} (CLmax): above the ceiling for this mass.`,
+      stallMach: null,
+      machRange: [scanLo, scanHi],
+      lowMach: null,
+      highMach: null,
+      crossings: [],
+      minThrustMach: null,
+      maxExcessThrustMach: null,
+      maxExcessThrust_N: null,
+      bestClimbMach: null,
+      maxSpecificExcessPower_m_s: null,
+      curves: emptyCurves,
+      cautions: [],
+    });
+  }
+  const lo = Math.max(scanLo, stallMach ?? scanLo);
+  const hi = scanHi;
+  const point = (mach: number) => levelPoint(models, conditions, a, mach);
+  const excess = (mach: number) => point(mach).excessThrust_N;
+  const thrust = (mach: number) => point(mach).thrustAvailable_N;
+  const ps = (mach: number) => point(mach).specificExcessPower_m_s;
+
+  const xs = uniformGrid(lo, hi, samples);
+  const pts = xs.map(point);
+  const curves: CrossoverCurves = {
+    mach: xs,
+    thrustAvailable_N: pts.map((p) => p.thrustAvailable_N),
+    drag_N: pts.map((p) => p.drag_N),
+    excessThrust_N: pts.map((p) => p.excessThrust_N),
+    specificExcessPower_m_s: pts.map((p) => p.specificExcessPower_m_s),
+  };
+  const maxExcess = maximizeOnGrid(excess, lo, hi, samples, CROSSOVER_MACH_TOL);
+  const maxPs = maximizeOnGrid(ps, lo, hi, samples, CROSSOVER_MACH_TOL);
+  const minThrust = minimizeOnGrid(thrust, lo, hi, samples, CROSSOVER_MACH_TOL);
+  if (maxExcess === null || maxPs === null || minThrust === null) {
+    return err({ code: 'no_solution', message: `crossover at ${query.altitude_m} m: thrust or drag is not finite anywhere in Mach [${lo}, ${hi}]` });
+  }
+  const searchPoints = [...xs, maxExcess.x].sort((p, q) => p - q);
+  const crossings = rootsOnPoints(excess, searchPoints, CROSSOVER_MACH_TOL);
+  const dm = 1e-7;
+  const rising = crossings.filter((r) => excess(Math.min(hi, r + dm)) > excess(Math.max(lo, r - dm)));
+  const falling = crossings.filter((r) => !rising.includes(r));
+  const lowMach = excess(lo) >= 0 || rising.length === 0 ? null : rising[0]!;
+  const highMach = excess(hi) >= 0 || falling.length === 0 ? null : falling[falling.length - 1]!;
+  const aboveCeiling = maxExcess.fx < 0;
+
+  const lookups = [lo, hi, ...crossings].map(
+    (m) => models.propulsion.atRating({ altitude_m: query.altitude_m, mach: m, isaDev_K: query.isaDev_K }, query.rating).cautions,
+  );
+  const fmt = (m: number | null) => (m === null ? 'none' : `M ${m.toFixed(3)}`);
+  const message = aboveCeiling
+    ? `Thrust available at ${query.rating} stays below drag at every Mach from ${lo.toFixed(3)} to ${hi.toFixed(3)}: ${query.altitude_m.toFixed(0)} m is above the ceiling for ${query.mass_kg.toFixed(0)} kg (largest shortfall margin ${(-maxExcess.fx).toFixed(0)} N at M ${maxExcess.x.toFixed(3)}).`
+    : `Level flight at ${query.rating} from ${lowMach === null ? `M ${lo.toFixed(3)} (${stallMach !== null && lo === stallMach ? 'stall' : 'scan start'})` : fmt(lowMach)} to ${highMach === null ? `M ${hi.toFixed(3)} (scan end)` : fmt(highMach)}.`;
+  return ok({
+    ...base,
+    status: aboveCeiling ? 'above_ceiling' : 'ok',
+    message,
+    stallMach,
+    machRange: [lo, hi],
+    lowMach: aboveCeiling ? null : lowMach,
+    highMach: aboveCeiling ? null : highMach,
+    crossings,
+    minThrustMach: minThrust.atBound ? null : minThrust.x,
+    maxExcessThrustMach: maxExcess.x,
+    maxExcessThrust_N: maxExcess.fx,
+    bestClimbMach: maxPs.x,
+    maxSpecificExcessPower_m_s: maxPs.fx,
+    curves,
+    cautions: uniqueCautions(lookups),
+  });
+}

@@ -1,0 +1,126 @@
+/**
+ * One-dimensional searches shared by the analyses: sample a function on a
+ * uniform grid, then refine sign changes with Brent's root finder
+ * (engine/core/rootFind.ts) and maxima with golden-section search
+ * (Kiefer 1953; Press et al., Numerical Recipes, `golden`).
+ */
+import { brent } from '../core/rootFind';
+
+/** Uniform grid of `count` points from lo to hi inclusive (count >= 2). */
+export function uniformGrid(lo: number, hi: number, count: number): number[] {
+  const n = Math.max(2, Math.floor(count));
+  const out: number[] = [];
+  for (let i = 0; i < n; i++) out.push(i === n - 1 ? hi : lo + ((hi - lo) * i) / (n - 1));
+  return out;
+}
+
+export interface Extremum {
+  readonly x: number;
+  readonly fx: number;
+  /** True when the extremum lies at an end of [lo, hi] (the function is monotone there). */
+  readonly atBound: boolean;
+}
+
+const INV_PHI = (Math.sqrt(5) - 1) / 2;
+
+/**
+ * Maximum of f on [lo, hi]: the best of `samples` grid points, then a
+ * golden-section search between its neighbours to |dx| <= xTol. Assumes f is
+ * unimodal near the best sample. Returns null when f is not finite anywhere.
+ */
+export function maximizeOnGrid(
+  f: (x: number) => number,
+  lo: number,
+  hi: number,
+  samples: number,
+  xTol: number,
+): Extremum | null {
+  const xs = uniformGrid(lo, hi, samples);
+  let best = -1;
+  let bestF = -Infinity;
+  const fs = xs.map((x) => f(x));
+  fs.forEach((v, i) => {
+    if (Number.isFinite(v) && v > bestF) {
+      bestF = v;
+      best = i;
+    }
+  });
+  if (best < 0) return null;
+  let a = xs[Math.max(0, best - 1)]!;
+  let b = xs[Math.min(xs.length - 1, best + 1)]!;
+  let c = b - INV_PHI * (b - a);
+  let d = a + INV_PHI * (b - a);
+  let fc = f(c);
+  let fd = f(d);
+  for (let i = 0; i < 200 && b - a > xTol; i++) {
+    if (fc >= fd || !Number.isFinite(fd)) {
+      b = d;
+      d = c;
+      fd = fc;
+      c = b - INV_PHI * (b - a);
+      fc = f(c);
+    } else {
+      a = c;
+      c = d;
+      fc = fd;
+      d = a + INV_PHI * (b - a);
+      fd = f(d);
+    }
+  }
+  const xm = 0.5 * (a + b);
+  const fm = f(xm);
+  const candidates: [number, number][] = [
+    [xm, fm],
+    [xs[best]!, bestF],
+  ];
+  let [x, fx] = candidates[0]!;
+  for (const [cx, cf] of candidates) {
+    if (Number.isFinite(cf) && (!Number.isFinite(fx) || cf > fx)) {
+      x = cx;
+      fx = cf;
+    }
+  }
+  const span = hi - lo;
+  const atBound = Math.abs(x - lo) <= Math.max(xTol, 1e-9 * span) * 2 || Math.abs(x - hi) <= Math.max(xTol, 1e-9 * span) * 2;
+  return { x, fx, atBound };
+}
+
+/** Minimum of f on [lo, hi]; see maximizeOnGrid. */
+export function minimizeOnGrid(
+  f: (x: number) => number,
+  lo: number,
+  hi: number,
+  samples: number,
+  xTol: number,
+): Extremum | null {
+  const m = maximizeOnGrid((x) => -f(x), lo, hi, samples, xTol);
+  return m === null ? null : { x: m.x, fx: -m.fx, atBound: m.atBound };
+}
+
+/**
+ * Every sign change of f over the ordered points xs, each refined by Brent's
+ * method to xTol. Exact zeros at grid points count once.
+ */
+export function rootsOnPoints(
+  f: (x: number) => number,
+  xs: readonly number[],
+  xTol: number,
+): number[] {
+  const roots: number[] = [];
+  let xPrev = xs[0]!;
+  let fPrev = f(xPrev);
+  if (fPrev === 0) roots.push(xPrev);
+  for (let i = 1; i < xs.length; i++) {
+    const x = xs[i]!;
+    const fx = f(x);
+    if (fx === 0) {
+      roots.push(x);
+    } else if (Number.isFinite(fPrev) && Number.isFinite(fx) && fPrev !== 0 && (fPrev > 0) !== (fx > 0)) {
+      const r = brent(f, xPrev, x, { xTol });
+      if (r.ok) roots.push(r.value.x);
+    }
+    xPrev = x;
+    fPrev = fx;
+  }
+  return roots;
+}

@@ -1,0 +1,108 @@
+import { describe, expect, it } from 'vitest';
+import { CROSSOVER_RELATIVE_THRUST_TOL, thrustDragCrossover } from '../../../engine/analysis/crossover';
+import { expectOk } from '../../../engine/core/result';
+import { expectClose } from '../../support/assertInDelta';
+import { G0, TEST_POLAR, analyticPropulsion, isaPressure_Pa, parabolicAero } from './analyticModels';
+
+const constantThrust = {
+  aero: parabolicAero(TEST_POLAR),
+  propulsion: analyticPropulsion({ thrust_N: 30e3, lapse: 'constant', tsfc_kg_N_s: 1.6e-5 }),
+};
+const lapsed = {
+  aero: parabolicAero({ ...TEST_POLAR, mCrit: 0.78 }),
+  propulsion: analyticPropulsion({ thrust_N: 160e3, lapse: 'mattingly', tsfc_kg_N_s: 1.6e-5 }),
+};
+
+describe('thrustDragCrossover', () => {
+  it('thrustDragCrossover with constant thrust and a parabolic polar matches the closed-form quadratic in q', () => {
+    // Thrust required T = q S CD0 + K W^2 / (q S) = T_avail gives
+    // CD0 S q^2 - T q + K W^2 / S = 0 (Anderson, Aircraft Performance and Design, ch. 5, thrust-required curve).
+    const h = 5000;
+    const m = 40000;
+    const W = m * G0;
+    const { cd0, k, wingArea_m2: S } = TEST_POLAR;
+    const T = 30e3;
+    const disc = Math.sqrt(T * T - 4 * cd0 * k * W * W);
+    const qHigh = (T + disc) / (2 * cd0 * S);
+    const qLow = (T - disc) / (2 * cd0 * S);
+    const p = isaPressure_Pa(h);
+    const machOf = (q: number) => Math.sqrt(q / (0.7 * p)); // q = 0.7 p M^2 (NACA Report 1135)
+    const r = expectOk(thrustDragCrossover(constantThrust, { altitude_m: h, mass_kg: m, rating: 'maxCruise', isaDev_K: 0 }), 'crossover');
+    expect(r.status).toBe('ok');
+    expectClose(r.lowMach!, machOf(qLow), { rel: 1e-8 }, 'closed-form quadratic in q, low root');
+    expectClose(r.highMach!, machOf(qHigh), { rel: 1e-8 }, 'closed-form quadratic in q, high root');
+    // Constant thrust: no thrust minimum inside the range.
+    expect(r.minThrustMach).toBeNull();
+    // Max excess thrust = min drag, at CL = sqrt(CD0/K) (Anderson, minimum thrust required).
+    const qMinDrag = W / (S * Math.sqrt(cd0 / k));
+    expectClose(r.maxExcessThrustMach!, machOf(qMinDrag), { rel: 1e-6 }, 'minimum-drag speed, CL = sqrt(CD0/K)');
+  });
+
+  it('thrustDragCrossover with the Mattingly lapse finds both crossings of the scipy reference and T = D there', () => {
+    const r = expectOk(
+      thrustDragCrossover(lapsed, { altitude_m: 9000, mass_kg: 60000, rating: 'maxCruise', isaDev_K: 0 }),
+      'crossover',
+    );
+    // test/reference/analysisReference.py (scipy brentq): 0.5558286009, 0.8802441604
+    expectClose(r.lowMach!, 0.5558286009, { abs: 1e-8 }, 'scipy brentq reference');
+    expectClose(r.highMach!, 0.8802441604, { abs: 1e-8 }, 'scipy brentq reference');
+    for (const mach of [r.lowMach!, r.highMach!]) {
+      const d = lapsed.aero.drag({ altitude_m: 9000, mach, mass_kg: 60000, loadFactor: 1 }).drag_N;
+      const t = lapsed.propulsion.atRating({ altitude_m: 9000, mach, isaDev_K: 0 }, 'maxCruise').thrust_N;
+      expect(Math.abs(t - d) / d).toBeLessThan(CROSSOVER_RELATIVE_THRUST_TOL);
+    }
+    // Least thrust of alpha = delta0 (1 - 0.49 sqrt(M)): scipy minimize_scalar, M = 0.4113666755.
+    // It lies below the stall Mach at this weight, so search the unrestricted scan at light weight.
+    const light = expectOk(
+      thrustDragCrossover(lapsed, { altitude_m: 9000, mass_kg: 20000, rating: 'maxCruise', isaDev_K: 0 }),
+      'crossover',
+    );
+    expectClose(light.minThrustMach!, 0.4113666755, { abs: 1e-7 }, 'scipy minimize_scalar reference');
+    expect(light.stallMach!).toBeLessThan(0.41);
+  });
+
+  it('thrustDragCrossover curves hold thrust, drag, excess and Ps consistently', () => {
+    const r = expectOk(thrustDragCrossover(lapsed, { altitude_m: 9000, mass_kg: 60000, rating: 'maxCruise', isaDev_K: 0, samples: 11 }), 'crossover');
+    expect(r.curves.mach).toHaveLength(11);
+    expect(r.curves.mach[0]).toBeCloseTo(r.machRange[0], 12);
+    r.curves.mach.forEach((_, i) => {
+      expectClose(r.curves.excessThrust_N[i]!, r.curves.thrustAvailable_N[i]! - r.curves.drag_N[i]!, { abs: 1e-9 });
+    });
+    // The low end of the scan is the stall Mach: CL = CLmax there (CL = W / (q S)).
+    const q = 0.7 * isaPressure_Pa(9000) * r.stallMach! ** 2;
+    expectClose((60000 * G0) / (q * TEST_POLAR.wingArea_m2), TEST_POLAR.clMax, { rel: 1e-8 }, 'definition of CLmax');
+    expect(r.machRange[0]).toBe(r.stallMach);
+  });
+
+  it('thrustDragCrossover says above_ceiling with no crossings when thrust stays below drag', () => {
+    const r = expectOk(thrustDragCrossover(lapsed, { altitude_m: 13000, mass_kg: 60000, rating: 'maxCruise', isaDev_K: 0 }), 'crossover');
+    expect(r.status).toBe('above_ceiling');
+    expect(r.lowMach).toBeNull();
+    expect(r.highMach).toBeNull();
+    expect(r.message).toMatch(/above the ceiling/);
+  });
+
+  it('thrustDragCrossover band narrows with altitude', () => {
+    const widths = [5000, 7000, 9000].map((h) => {
+      const r = expectOk(thrustDragCrossover(lapsed, { altitude_m: h, mass_kg: 60000, rating: 'maxCruise', isaDev_K: 0 }), 'crossover');
+      const lo = r.lowMach ?? r.machRange[0];
+      const hi = r.highMach ?? r.machRange[1];
+      return hi - lo;
+    });
+    expect(widths[1]!).toBeLessThan(widths[0]!);
+    expect(widths[2]!).toBeLessThan(widths[1]!);
+  });
+
+  it('thrustDragCrossover rejects bad input with a message naming the field', () => {
+    const r = thrustDragCrossover(lapsed, { altitude_m: 9000, mass_kg: -1, rating: 'maxCruise', isaDev_K: 0 });
+    expect(r.ok).toBe(false);
+    if (!r.ok) {
+      expect(r.error.code).toBe('invalid_input');
+      expect(r.error.message).toMatch(/mass -1 kg/);
+    }
+    const r2 = thrustDragCrossover(lapsed, { altitude_m: 9000, mass_kg: 6e4, rating: 'maxCruise', isaDev_K: 0, machRange: [0.9, 0.5] });
+    expect(r2.ok).toBe(false);
+    const r3 = thrustDragCrossover(lapsed, { altitude_m: 1e6, mass_kg: 6e4, rating: 'maxCruise', isaDev_K: 0 });
+    expect(r3.ok ? 'ok' : r3.error.code).toBe('atmosphere_out_of_range');
+  });
+});
