@@ -1,0 +1,215 @@
+/**
+ * Reading the deck at a flight condition and power setting: multilinear
+ * interpolation on the ragged grid (deckGrid.ts), the out-of-table policy of
+ * each axis, and the corrected-parameter temperature approximation for decks
+ * without an ISA-deviation axis (deckTemperature.ts). Per engine, uninstalled.
+ */
+import type { Caution } from '../cautions/caution';
+import { err, ok, type Result } from '../core/result';
+import type { EngineDeck, OutOfTablePolicy } from './engineDeck';
+import type { DeckAxis, FlightCondition, RatingName } from './propulsionModel';
+import {
+  AXIS_ALTITUDE,
+  AXIS_ISA_DEV,
+  AXIS_MACH,
+  AXIS_POWER,
+  DECK_AXES,
+  createDeckNodeSet,
+  evaluateDeckNodesInto,
+  fillDeckNodes,
+  nodesPowerRangeInto,
+  type DeckNodeSet,
+} from './deckGrid';
+import { temperatureApproximationCaution, temperatureFlowFactor } from './deckTemperature';
+
+export interface DeckLookup {
+  /** Power setting asked for (-), on the deck's power axis. */
+  readonly power: number;
+  /** Uninstalled net thrust per engine (N). */
+  readonly thrust_N: number;
+  /** Uninstalled fuel flow per engine (kg/s). */
+  readonly fuelFlow_kg_s: number;
+  /** Engine airflow per engine (kg/s); null when the deck has none. */
+  readonly airflow_kg_s: number | null;
+  /** Axes the lookup left (empty when inside the table). */
+  readonly outside: readonly DeckAxis[];
+  readonly cautions: readonly Caution[];
+}
+
+export interface DeckLookupError {
+  readonly code: 'outside_deck';
+  readonly axis: DeckAxis;
+  readonly value: number;
+  readonly min: number;
+  readonly max: number;
+  readonly message: string;
+}
+
+const NOTHING: readonly never[] = Object.freeze([]);
+const scratch = createDeckNodeSet();
+const values = new Float64Array(3);
+const range = new Float64Array(2);
+
+/**
+ * Uninstalled thrust (N), fuel flow (kg/s) and airflow (kg/s) per engine at
+ * `condition` and power setting `power`. Multilinear on the deck's grid;
+ * off the table each axis follows `deck.policy` (extrapolate or clamp with a
+ * caution, or the error `outside_deck` for 'refuse'). A non-finite input is a
+ * caller bug and throws.
+ */
+export function lookupDeck(
+  deck: EngineDeck,
+  condition: FlightCondition,
+  power: number,
+): Result<DeckLookup, DeckLookupError> {
+  assertFiniteInputs(condition, power);
+  const s = scratch;
+  if (!fillDeckNodes(deck.grid, deck.policy, condition.isaDev_K, condition.altitude_m, condition.mach, s)) {
+    return err(refusal(deck, s));
+  }
+  if (!evaluateDeckNodesInto(deck.grid, s, power, deck.policy.power, values)) {
+    return err(refusal(deck, s));
+  }
+  return ok(finishLookup(deck, condition, power, s, values));
+}
+
+/**
+ * Builds the lookup from evaluated node values (thrust, fuel flow, airflow in
+ * v[0..2]) and the node set's outside flags. Shared with deckInversion.ts.
+ */
+export function finishLookup(
+  deck: EngineDeck,
+  condition: FlightCondition,
+  power: number,
+  s: DeckNodeSet,
+  v: Float64Array,
+): DeckLookup {
+  let fuelFlow = v[1]!;
+  let airflow: number | null = deck.hasAirflow ? v[2]! : null;
+  const approximateTemperature = !deck.hasIsaDev && condition.isaDev_K !== 0;
+  if (approximateTemperature) {
+    const f = temperatureFlowFactor(condition.altitude_m, condition.isaDev_K);
+    fuelFlow *= f;
+    if (airflow !== null) airflow /= f;
+  }
+  if (s.outsideMask === 0 && !approximateTemperature) {
+    return { power, thrust_N: v[0]!, fuelFlow_kg_s: fuelFlow, airflow_kg_s: airflow, outside: NOTHING, cautions: NOTHING };
+  }
+  const outside: DeckAxis[] = [];
+  const cautions: Caution[] = [];
+  for (let axis = 0; axis < 4; axis++) {
+    if ((s.outsideMask & (1 << axis)) === 0) continue;
+    outside.push(DECK_AXES[axis]!);
+    cautions.push(outsideCaution(deck, axis, s));
+  }
+  if (approximateTemperature) cautions.push(temperatureApproximationCaution(deck.title, condition.isaDev_K));
+  return { power, thrust_N: v[0]!, fuelFlow_kg_s: fuelFlow, airflow_kg_s: airflow, outside, cautions };
+}
+
+/** Describes the 'refuse' stop recorded in `s` as the `outside_deck` error. */
+export function refusal(deck: EngineDeck, s: DeckNodeSet): DeckLookupError {
+  const axis = s.refusedAxis;
+  const value = s.outsideValue[axis]!;
+  const min = s.outsideMin[axis]!;
+  const max = s.outsideMax[axis]!;
+  return {
+    code: 'outside_deck',
+    axis: DECK_AXES[axis]!,
+    value,
+    min,
+    max,
+    message:
+      `Deck "${deck.title}": ${describeValue(axis, value)} is outside the table ` +
+      `(${describeRange(axis, min, max)}) and the ${DECK_AXES[axis]} policy is 'refuse'.`,
+  };
+}
+
+function outsideCaution(deck: EngineDeck, axis: number, s: DeckNodeSet): Caution {
+  const value = s.outsideValue[axis]!;
+  const min = s.outsideMin[axis]!;
+  const max = s.outsideMax[axis]!;
+  const policy: OutOfTablePolicy = deck.policy[DECK_AXES[axis]!];
+  const above = value > max;
+  const bound = above ? max : min;
+  const what =
+    policy === 'clamp'
+      ? `read at the ${above ? 'highest' : 'lowest'} tabulated value`
+      : 'extrapolated linearly from the last two tabulated values';
+  return {
+    id: policy === 'clamp' ? 'deck_clamped' : 'deck_extrapolation',
+    severity: 'caution',
+    message:
+      `Deck "${deck.title}": ${describeValue(axis, value)} is ${above ? 'above' : 'below'} the table ` +
+      `(${describeRange(axis, min, max)}); ${what}.`,
+    value,
+    threshold: bound,
+  };
+}
+
+function describeValue(axis: number, value: number): string {
+  switch (axis) {
+    case AXIS_ALTITUDE:
+      return `altitude ${round(value)} m (${round(value / 0.3048)} ft)`;
+    case AXIS_MACH:
+      return `Mach ${round(value)}`;
+    case AXIS_POWER:
+      return `power ${round(value)}`;
+    case AXIS_ISA_DEV:
+      return `ISA deviation ${round(value)} K`;
+    default:
+      throw new RangeError(`unknown deck axis ${axis}`);
+  }
+}
+
+function describeRange(axis: number, min: number, max: number): string {
+  const unit = axis === AXIS_ALTITUDE ? ' m' : axis === AXIS_ISA_DEV ? ' K' : '';
+  const where = axis === AXIS_MACH ? ' at this altitude' : axis === AXIS_POWER ? ' at this condition' : '';
+  return `${round(min)} to ${round(max)}${unit}${where}`;
+}
+
+function round(x: number): number {
+  return Number(x.toPrecision(6));
+}
+
+function assertFiniteInputs(condition: FlightCondition, power: number): void {
+  if (
+    !Number.isFinite(condition.altitude_m) ||
+    !Number.isFinite(condition.mach) ||
+    !Number.isFinite(condition.isaDev_K) ||
+    !Number.isFinite(power)
+  ) {
+    throw new RangeError(
+      `deck lookup: non-finite input (altitude ${condition.altitude_m} m, Mach ${condition.mach}, ` +
+        `ISA deviation ${condition.isaDev_K} K, power ${power})`,
+    );
+  }
+}
+
+/** The power-axis value of a named rating (-), or `unknown_rating` when the deck does not define it. */
+export function ratingPower(
+  deck: EngineDeck,
+  rating: RatingName,
+): Result<number, { readonly code: 'unknown_rating'; readonly message: string }> {
+  const value = deck.ratings[rating];
+  if (value === undefined) {
+    const known = Object.keys(deck.ratings);
+    return err({
+      code: 'unknown_rating',
+      message: `Deck "${deck.title}" defines no rating "${rating}"${known.length ? ` (it has: ${known.join(', ')})` : ' (it has none)'}.`,
+    });
+  }
+  return ok(value);
+}
+
+/**
+ * The power range (-) at `condition`: `max` is the highest power tabulated
+ * at every surrounding (altitude, Mach) node; `idle` is the deck's
+ * flightIdle rating if it has one, else the lowest power tabulated at every
+ * surrounding node. 'refuse' policies act as 'clamp' here.
+ */
+export function powerBounds(deck: EngineDeck, condition: FlightCondition): { readonly idle: number; readonly max: number } {
+  assertFiniteInputs(condition, 0);
+  fillDeckNodes(deck.grid, deck.policy, condition.isaDev_K, condition.altitude_m, condition.mach, scratch, false);
+  nodesPowerRangeInto(deck.grid, scratch, range);
+  return { idle: deck.ratings.flightIdle ?? range[0]!, max: range[1]! };
+}

@@ -1,0 +1,58 @@
+/**
+ * An engine maker's uninstalled performance deck, parsed and gridded. ALL
+ * values are PER ENGINE and UNINSTALLED, i.e. at the deck's reference inlet
+ * recovery (`referenceRecovery`). SI inside.
+ */
+import type { DeckAxis, RatingName } from './propulsionModel';
+import type { DeckGrid } from './deckGrid';
+import { milE5008bRecovery } from './milE5008b';
+
+/** What a lookup does when it leaves the table on one axis. */
+export type OutOfTablePolicy = 'refuse' | 'clamp' | 'extrapolate';
+
+export type DeckPolicy = Readonly<Record<DeckAxis, OutOfTablePolicy>>;
+
+/**
+ * Default out-of-table policy: altitude and Mach extrapolate linearly from the
+ * last two grid values (with a `deck_extrapolation` caution); power and ISA
+ * deviation clamp to the nearest grid value (with a `deck_clamped` caution).
+ */
+export const DEFAULT_DECK_POLICY: DeckPolicy = {
+  altitude: 'extrapolate',
+  mach: 'extrapolate',
+  power: 'clamp',
+  isaDev: 'clamp',
+};
+
+/** The inlet recovery the deck's numbers assume. */
+export type ReferenceRecovery =
+  | { readonly kind: 'constant'; readonly value: number }
+  | { readonly kind: 'milE5008b' };
+
+export interface EngineDeck {
+  readonly title: string;
+  /** True when generated from a parametric model rather than tabulated by a maker. */
+  readonly parametric: boolean;
+  readonly referenceRecovery: ReferenceRecovery;
+  /** Named ratings as values on the power axis (-). */
+  readonly ratings: Readonly<Partial<Record<RatingName, number>>>;
+  readonly hasAirflow: boolean;
+  readonly hasIsaDev: boolean;
+  readonly notes: readonly string[];
+  readonly policy: DeckPolicy;
+  /** The tabulated points, ragged, in flat arrays (SI). */
+  readonly grid: DeckGrid;
+}
+
+/**
+ * The deck's reference inlet total-pressure recovery pt2/pt0 (-) at flight
+ * Mach `mach` (>= 0): the stated constant, or the MIL-E-5008B standard curve.
+ */
+export function referenceRecoveryAt(reference: ReferenceRecovery, mach: number): number {
+  return reference.kind === 'constant' ? reference.value : milE5008bRecovery(mach);
+}
+
+/** Human-readable form of a reference recovery, e.g. "MIL-E-5008B" or "constant 0.98". */
+export function describeReferenceRecovery(reference: ReferenceRecovery): string {
+  return reference.kind === 'constant' ? `constant ${reference.value}` : 'MIL-E-5008B';
+}
