@@ -13,14 +13,9 @@ import { interp1d, makeTable1d, type Table1d } from '../core/table1d';
 import { interp2d, makeTable2d, type Table2d } from '../core/table2d';
 import type { AeroModel, DragBreakdown, DragQuery } from './aeroModel';
 import { validatePolarSpec, type PolarIssue, type PolarSpec } from './polarSpec';
+import { g0, gamma } from './constants';
 import { atmosphere } from './standardAtmosphere';
 import { kornWaveDrag, type KornWing } from './waveDrag';
-
-/** Standard gravity g0 (m/s^2), exact by definition (CGPM 1901; U.S. Standard Atmosphere 1976). */
-export const STANDARD_GRAVITY_m_s2 = 9.80665;
-
-/** Ratio of specific heats of air used for q = (gamma/2) p M^2 (NACA Report 1135). */
-const GAMMA_AIR = 1.4;
 
 /** Names used in `outsideTables` when a query leaves a table and is clamped. */
 export type PolarTableName = 'cd0' | 'induced' | 'compressibility' | 'buffetCl' | 'clMax';
@@ -144,9 +139,9 @@ function dragAt(model: DragPolarModel, query: DragQuery): DragBreakdown {
   if (!(query.mass_kg > 0)) throw new RangeError(`drag polar: mass_kg is ${query.mass_kg}, expected > 0`);
   const atm = atmosphere(query.altitude_m);
   if (!atm.ok) throw new RangeError(`drag polar: ${atm.error.message}`);
-  const q_Pa = 0.5 * GAMMA_AIR * atm.value.pressure_Pa * query.mach * query.mach;
+  const q_Pa = 0.5 * gamma * atm.value.pressure_Pa * query.mach * query.mach;
   const qS = q_Pa * model.wingArea_m2;
-  const weight_N = query.mass_kg * STANDARD_GRAVITY_m_s2;
+  const weight_N = query.mass_kg * g0;
   const cl = (query.loadFactor * weight_N) / qS;
   const c = polarCoefficients(model, query.mach, cl);
   const outside = [...c.outsideTables];
