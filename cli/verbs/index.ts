@@ -1,7 +1,10 @@
 import type { Verb } from '../verb';
+import { airVerb } from './air';
 
 /**
  * Every verb, in the order `blockwise --help` lists them. A new verb is a
  * module in this folder exporting a `Verb`, added here.
  */
-export const verbs: readonly Verb[] = [];
+export const verbs: readonly Verb[] = [
+  airVerb,
+];
