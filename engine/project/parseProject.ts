@@ -1,0 +1,46 @@
+/**
+ * Reading a `*.blockwise.json` project: JSON text -> format/version check ->
+ * migrations -> schema (units to SI) -> cross-field checks. Every problem is
+ * a ProjectIssue naming the JSON path, the value and what was expected.
+ */
+import { err, ok, type Result } from '../core/result';
+import { parseJsonText } from './jsonText';
+import { checkProject } from './projectChecks';
+import { fromZodIssues, makeIssue, type ProjectIssue } from './projectIssue';
+import { migrateProject } from './projectMigrations';
+import { projectSchema, type Project } from './projectSchema';
+
+/**
+ * Parses project text from `sourceName` (used in messages only). Returns the
+ * project with SI numbers, or every issue found (JSON syntax errors carry
+ * line and column in `path`).
+ */
+export function parseProject(text: string, sourceName: string): Result<Project, readonly ProjectIssue[]> {
+  const json = parseJsonText(text);
+  if (!json.ok) {
+    const e = json.error;
+    const path = e.code === 'empty' ? '(file)' : `(line ${e.line}, column ${e.column})`;
+    const expected = e.code === 'empty' ? 'a JSON object' : 'valid JSON';
+    return err([{ path, value: e.code === 'empty' ? '(empty)' : '(invalid JSON)', expected, message: `${sourceName}: ${e.message}` }]);
+  }
+  return parseProjectData(json.value);
+}
+
+/** Same as parseProject for an already-parsed JSON value (e.g. from IPC or the clipboard). */
+export function parseProjectData(data: unknown): Result<Project, readonly ProjectIssue[]> {
+  const migrated = migrateProject(data);
+  if (!migrated.ok) return migrated;
+  const { doc, fromVersion } = migrated.value;
+  const parsed = projectSchema.safeParse(doc);
+  if (!parsed.success) {
+    const issues = fromZodIssues(parsed.error.issues, doc);
+    return err(fromVersion === doc.version ? issues : issues.map((i) => noteMigration(i, fromVersion)));
+  }
+  const issues = checkProject(parsed.data, doc);
+  if (issues.length > 0) return err(issues);
+  return ok(parsed.data);
+}
+
+function noteMigration(issue: ProjectIssue, fromVersion: number): ProjectIssue {
+  return makeIssue(issue.path, issue.value, issue.expected, `${issue.message.slice(issue.path.length + 2)} (path as in the current layout; the file is version ${fromVersion})`);
+}

@@ -1,0 +1,347 @@
+/**
+ * The `*.blockwise.json` project file, current layout (version 2), as a zod 4
+ * schema. Every physical field is a `quantity(dimension)`: a string with a
+ * unit or a bare SI number; the parsed `Project` holds SI numbers under the
+ * same field names (a field's unit is the SI unit of its dimension, see
+ * docs/project-format.md). Cross-field rules live in projectChecks.ts.
+ */
+import { z } from 'zod';
+import { quantity, ratio } from './quantityField';
+
+export const PROJECT_FORMAT = 'blockwise-project';
+export const CURRENT_VERSION = 2;
+
+const FT = 0.3048;
+/** Pressure-altitude range accepted for mission altitudes: -2,000 ft to 65,000 ft (common practice for the class). */
+export const MIN_ALTITUDE_M = -2000 * FT;
+export const MAX_ALTITUDE_M = 65000 * FT;
+
+function altitude() {
+  return quantity('length', { min: MIN_ALTITUDE_M, max: MAX_ALTITUDE_M, what: 'a pressure altitude from -2,000 ft to 65,000 ft' });
+}
+function positiveQuantity(dimension: Parameters<typeof quantity>[0], what: string) {
+  return quantity(dimension, { min: Number.MIN_VALUE, what });
+}
+function nonNegativeQuantity(dimension: Parameters<typeof quantity>[0], what: string) {
+  return quantity(dimension, { min: 0, what });
+}
+function subsonicMach() {
+  return quantity('dimensionless', { min: 0.05, max: 0.99, what: 'a Mach number from 0.05 to 0.99' });
+}
+function mach() {
+  return quantity('dimensionless', { min: 0, max: 5, what: 'a Mach number from 0 to 5' });
+}
+function fraction(what: string) {
+  return quantity('dimensionless', { min: 0, max: 1, what });
+}
+function label() {
+  return z.string().trim().min(1, { message: 'expected a non-empty name' });
+}
+
+// ---------------------------------------------------------------- airframe
+
+export const weightsSchema = z.strictObject({
+  operatingEmpty: positiveQuantity('mass', 'a mass > 0'),
+  maxZeroFuel: positiveQuantity('mass', 'a mass > 0'),
+  maxTakeoff: positiveQuantity('mass', 'a mass > 0'),
+  maxLanding: positiveQuantity('mass', 'a mass > 0'),
+  maxFuel: positiveQuantity('mass', 'a mass > 0'),
+});
+
+export const airframeSchema = z.strictObject({
+  /** Weights; the operating empty weight excludes the inlets (the active inlet's weight is added). */
+  weights: weightsSchema,
+  wingArea: positiveQuantity('area', 'an area > 0'),
+  /** Maximum operating speed, CAS. */
+  vmo: positiveQuantity('speed', 'a speed > 0'),
+  mmo: quantity('dimensionless', { min: 0.1, max: 5, what: 'a Mach number from 0.1 to 5' }),
+});
+
+// ---------------------------------------------------------------- polar
+
+const cd0Row = z.strictObject({ mach: mach(), cd0: ratio() });
+const kRow = z.strictObject({ mach: mach(), k: ratio() });
+const clRow = z.strictObject({ mach: mach(), cl: ratio() });
+
+export const polarSchema = z.strictObject({
+  /** CD0 against Mach, rows `{ mach, cd0 }`. */
+  cd0: z.array(cd0Row).min(1, { message: 'expected at least one { mach, cd0 } row' }),
+  cdIncrement: ratio().default(0),
+  induced: z.discriminatedUnion('kind', [
+    z.strictObject({ kind: z.literal('oswald'), aspectRatio: ratio(), oswaldEfficiency: ratio() }),
+    z.strictObject({ kind: z.literal('table'), rows: z.array(kRow).min(1) }),
+  ]),
+  clMinDrag: ratio().default(0),
+  compressibility: z.discriminatedUnion('kind', [
+    z.strictObject({ kind: z.literal('none') }),
+    z.strictObject({
+      kind: z.literal('korn'),
+      sweep: quantity('angle'),
+      thicknessRatio: ratio(),
+      kornTechnologyFactor: ratio(),
+    }),
+    z.strictObject({
+      kind: z.literal('table'),
+      mach: z.array(mach()).min(1),
+      cl: z.array(ratio()).min(1),
+      /** cdWave[i][j] at mach[i], cl[j]. */
+      cdWave: z.array(z.array(ratio())),
+    }),
+  ]),
+  buffetCl: z.array(clRow).min(1, { message: 'expected at least one { mach, cl } row' }),
+  clMax: z.array(clRow).min(1, { message: 'expected at least one { mach, cl } row' }),
+});
+
+// ---------------------------------------------------------------- engine
+
+export const parametricDeckSchema = z.strictObject({
+  kind: z.literal('parametric'),
+  model: z.enum(['highBypassTurbofan', 'lowBypassTurbofan', 'turbojet']),
+  title: label(),
+  seaLevelStaticThrust: positiveQuantity('force', 'a force > 0'),
+  throttleRatio: quantity('dimensionless', { min: 0.5, max: 2, what: 'a throttle ratio from 0.5 to 2' }),
+  seaLevelStaticTsfc: positiveQuantity('tsfc', 'a TSFC > 0'),
+  seaLevelStaticAirflow: positiveQuantity('massFlow', 'a mass flow > 0'),
+});
+
+export const deckSourceSchema = z.discriminatedUnion('kind', [
+  /** A deck file (CSV or JSON by extension), relative to the project file's folder. */
+  z.strictObject({ kind: z.literal('file'), path: label() }),
+  /** A deck in the JSON deck format (docs/deck-format.md), inline. */
+  z.strictObject({ kind: z.literal('embedded'), deck: z.record(z.string(), z.unknown()) }),
+  parametricDeckSchema,
+]);
+
+export const installationSchema = z.strictObject({
+  /** Customer bleed per engine: a fraction of core flow, or a mass flow with the core's share of deck airflow. */
+  bleed: z
+    .discriminatedUnion('kind', [
+      z.strictObject({ kind: z.literal('coreFraction'), fraction: fraction('a fraction of core flow from 0 to 1') }),
+      z.strictObject({
+        kind: z.literal('massFlow'),
+        massFlow: nonNegativeQuantity('massFlow', 'a mass flow >= 0'),
+        coreFlowFraction: quantity('dimensionless', { min: 0.01, max: 1, what: 'a fraction from 0.01 to 1' }),
+      }),
+    ])
+    .default({ kind: 'coreFraction', fraction: 0 }),
+  /** Shaft power extraction per engine. */
+  powerExtraction: nonNegativeQuantity('power', 'a power >= 0').default(0),
+  /** Raymer's ram-recovery correction coefficient C_ram; the propulsion default when absent. */
+  ramRecoveryFactor: nonNegativeQuantity('dimensionless', 'a number >= 0').optional(),
+  /** Raymer's bleed correction coefficient C_bleed; the propulsion default when absent. */
+  bleedFactor: nonNegativeQuantity('dimensionless', 'a number >= 0').optional(),
+});
+
+export const engineSchema = z.strictObject({
+  count: z.number().int({ message: 'expected a whole number of engines' }).min(1).max(8),
+  deck: deckSourceSchema,
+  installation: installationSchema.default({ bleed: { kind: 'coreFraction', fraction: 0 }, powerExtraction: 0 }),
+});
+
+// ---------------------------------------------------------------- inlets
+
+export const inletSchema = z.strictObject({
+  name: label(),
+  description: z.string().default(''),
+  source: z.discriminatedUnion('kind', [
+    z.strictObject({
+      kind: z.literal('recoveryTable'),
+      captureArea: positiveQuantity('area', 'an area > 0'),
+      /** Recovery against flight Mach, rows `{ mach, recovery }`. */
+      rows: z.array(z.strictObject({ mach: mach(), recovery: fraction('a recovery from 0 to 1') })).min(1),
+    }),
+    z.strictObject({
+      kind: z.literal('geometry'),
+      captureArea: positiveQuantity('area', 'an area > 0'),
+      throatArea: positiveQuantity('area', 'an area > 0'),
+      fanFaceArea: positiveQuantity('area', 'an area > 0'),
+      diffuserLossCoefficient: nonNegativeQuantity('dimensionless', 'a number >= 0'),
+    }),
+  ]),
+  lipSuctionFactor: fraction('a fraction from 0 to 1').default(0),
+  /** External (nacelle/inlet) drag area D/q per engine. */
+  externalDragArea: nonNegativeQuantity('area', 'an area >= 0'),
+  /** Weight per engine, added to the operating empty weight. */
+  weight: nonNegativeQuantity('mass', 'a mass >= 0'),
+});
+
+// ---------------------------------------------------------------- mission
+
+const environment = {
+  name: label().optional(),
+  isaDeviation: quantity('temperatureDelta', { min: -80, max: 80, what: 'an ISA deviation from -80 K to +80 K' }).optional(),
+  /** Along-track wind: positive tailwind, negative headwind. */
+  wind: quantity('speed', { min: -150, max: 150, what: 'a wind from -150 m/s to +150 m/s' }).optional(),
+};
+
+export const speedScheduleSchema = z.strictObject({
+  lowCas: positiveQuantity('speed', 'a speed > 0'),
+  lowAltitudeLimit: altitude(),
+  cas: positiveQuantity('speed', 'a speed > 0'),
+  mach: subsonicMach(),
+});
+
+const allowanceFuelFlow = z.union([z.literal('idle'), nonNegativeQuantity('massFlow', 'a mass flow >= 0')]);
+
+export const legSchema = z.discriminatedUnion('kind', [
+  z.strictObject({ kind: z.literal('taxiOut'), ...environment, time: nonNegativeQuantity('time', 'a time >= 0'), fuelFlow: allowanceFuelFlow }),
+  z.strictObject({
+    kind: z.literal('takeoff'),
+    ...environment,
+    time: nonNegativeQuantity('time', 'a time >= 0'),
+    /** A fuel allowance, or null/absent for time at the takeoff rating. */
+    fuel: nonNegativeQuantity('mass', 'a mass >= 0').nullable().default(null),
+  }),
+  z.strictObject({
+    kind: z.literal('climb'),
+    ...environment,
+    toAltitude: altitude(),
+    schedule: speedScheduleSchema,
+    rating: z.enum(['takeoff', 'maxClimb', 'maxCruise', 'maxContinuous', 'flightIdle']).default('maxClimb'),
+  }),
+  z.strictObject({
+    kind: z.literal('cruise'),
+    ...environment,
+    altitude: altitude(),
+    speed: z.discriminatedUnion('kind', [
+      z.strictObject({ kind: z.literal('mach'), mach: subsonicMach() }),
+      z.strictObject({ kind: z.literal('bestRange') }),
+      z.strictObject({ kind: z.literal('longRange') }),
+    ]),
+    profile: z
+      .discriminatedUnion('kind', [
+        z.strictObject({ kind: z.literal('constantAltitude') }),
+        z.strictObject({ kind: z.literal('stepClimb'), step: positiveQuantity('length', 'a length > 0'), maxAltitude: altitude() }),
+        z.strictObject({ kind: z.literal('cruiseClimb'), maxAltitude: altitude() }),
+      ])
+      .default({ kind: 'constantAltitude' }),
+    /** Still-air distance, or "solve" for the leg whose distance meets the mission range. */
+    distance: z.union([z.literal('solve'), nonNegativeQuantity('length', 'a length >= 0')]),
+  }),
+  z.strictObject({
+    kind: z.literal('descent'),
+    ...environment,
+    toAltitude: altitude(),
+    schedule: speedScheduleSchema,
+    mode: z
+      .discriminatedUnion('kind', [
+        z.strictObject({ kind: z.literal('idle') }),
+        z.strictObject({ kind: z.literal('rate'), rate: positiveQuantity('speed', 'a descent rate > 0') }),
+      ])
+      .default({ kind: 'idle' }),
+  }),
+  z.strictObject({
+    kind: z.literal('hold'),
+    ...environment,
+    altitude: altitude(),
+    time: nonNegativeQuantity('time', 'a time >= 0'),
+    speed: z
+      .discriminatedUnion('kind', [
+        z.strictObject({ kind: z.literal('bestEndurance') }),
+        z.strictObject({ kind: z.literal('cas'), cas: positiveQuantity('speed', 'a speed > 0') }),
+      ])
+      .default({ kind: 'bestEndurance' }),
+  }),
+  z.strictObject({
+    kind: z.literal('approach'),
+    ...environment,
+    time: nonNegativeQuantity('time', 'a time >= 0'),
+    fuel: nonNegativeQuantity('mass', 'a mass >= 0').nullable().default(null),
+  }),
+  z.strictObject({ kind: z.literal('taxiIn'), ...environment, time: nonNegativeQuantity('time', 'a time >= 0'), fuelFlow: allowanceFuelFlow }),
+]);
+
+export const alternateSchema = z.strictObject({
+  distance: positiveQuantity('length', 'a length > 0'),
+  cruiseAltitude: altitude(),
+  cruiseMach: subsonicMach(),
+  elevation: altitude().default(0),
+});
+
+export const reservesSchema = z.discriminatedUnion('preset', [
+  z.strictObject({
+    preset: z.literal('icaoAnnex6'),
+    contingencyFraction: fraction('a fraction from 0 to 1').default(0.05),
+    minContingencyTime: nonNegativeQuantity('time', 'a time >= 0').default(300),
+    alternate: alternateSchema.nullable(),
+    finalReserveTime: nonNegativeQuantity('time', 'a time >= 0').default(1800),
+  }),
+  z.strictObject({
+    preset: z.literal('cfr121_639'),
+    alternate: alternateSchema.nullable(),
+    finalReserveTime: nonNegativeQuantity('time', 'a time >= 0').default(2700),
+  }),
+  z.strictObject({
+    preset: z.literal('cfr121_645'),
+    enRouteFraction: fraction('a fraction from 0 to 1').default(0.1),
+    alternate: alternateSchema.nullable(),
+    finalReserveTime: nonNegativeQuantity('time', 'a time >= 0').default(1800),
+  }),
+  z.strictObject({
+    preset: z.literal('custom'),
+    contingencyFraction: fraction('a fraction from 0 to 1'),
+    alternate: alternateSchema.nullable(),
+    finalReserveTime: nonNegativeQuantity('time', 'a time >= 0'),
+    extraFuel: nonNegativeQuantity('mass', 'a mass >= 0').default(0),
+  }),
+]);
+
+export const solveSchema = z.discriminatedUnion('mode', [
+  z.strictObject({
+    mode: z.literal('takeoffWeight'),
+    takeoffWeight: positiveQuantity('mass', 'a mass > 0'),
+    payload: nonNegativeQuantity('mass', 'a mass >= 0'),
+  }),
+  z.strictObject({
+    mode: z.literal('payloadRange'),
+    payload: nonNegativeQuantity('mass', 'a mass >= 0'),
+    range: positiveQuantity('length', 'a length > 0'),
+  }),
+  z.strictObject({ mode: z.literal('maxRange'), payload: nonNegativeQuantity('mass', 'a mass >= 0') }),
+]);
+
+export const missionSchema = z.strictObject({
+  isaDeviation: quantity('temperatureDelta', { min: -80, max: 80, what: 'an ISA deviation from -80 K to +80 K' }).default(0),
+  wind: quantity('speed', { min: -150, max: 150, what: 'a wind from -150 m/s to +150 m/s' }).default(0),
+  legs: z.array(legSchema).min(1, { message: 'expected at least one leg' }),
+  reserves: reservesSchema,
+  solve: solveSchema,
+});
+
+// ---------------------------------------------------------------- cautions
+
+/** Threshold overrides; absent fields take DEFAULT_CAUTION_SETTINGS. */
+export const cautionsSchema = z.strictObject({
+  minResidualClimbRate: nonNegativeQuantity('speed', 'a climb rate >= 0').optional(),
+  minBuffetLoadFactor: quantity('dimensionless', { min: 1, max: 3, what: 'a load factor from 1 to 3' }).optional(),
+  vmoMargin: nonNegativeQuantity('speed', 'a speed >= 0').optional(),
+  mmoMargin: fraction('a Mach margin from 0 to 1').optional(),
+  minReserveFraction: nonNegativeQuantity('dimensionless', 'a fraction >= 0').optional(),
+  cautionOnDeckExtrapolation: z.boolean().optional(),
+  maxThroatMach: fraction('a Mach number from 0 to 1').optional(),
+  minFanFaceMach: fraction('a Mach number from 0 to 1').optional(),
+  maxFanFaceMach: fraction('a Mach number from 0 to 1').optional(),
+});
+
+// ---------------------------------------------------------------- project
+
+export const projectSchema = z.strictObject({
+  format: z.literal(PROJECT_FORMAT),
+  version: z.literal(CURRENT_VERSION),
+  name: label(),
+  notes: z.string().default(''),
+  airframe: airframeSchema,
+  polar: polarSchema,
+  engine: engineSchema,
+  inlets: z.array(inletSchema).min(1, { message: 'expected at least one inlet design' }),
+  activeInlet: label(),
+  mission: missionSchema,
+  cautions: cautionsSchema.default({}),
+});
+
+/** A parsed project: SI numbers throughout (see docs/project-format.md for each field's dimension). */
+export type Project = z.output<typeof projectSchema>;
+/** The file form before parsing (quantities as numbers or unit strings). */
+export type ProjectFile = z.input<typeof projectSchema>;
+export type ProjectLeg = Project['mission']['legs'][number];
+export type ProjectInlet = Project['inlets'][number];
