@@ -46,8 +46,29 @@ export function maximizeOnGrid(
     }
   });
   if (best < 0) return null;
-  let a = xs[Math.max(0, best - 1)]!;
-  let b = xs[Math.min(xs.length - 1, best + 1)]!;
+  const a = xs[Math.max(0, best - 1)]!;
+  const b = xs[Math.min(xs.length - 1, best + 1)]!;
+  const refined = refineMaximum(f, a, b, xs[best]!, bestF, xTol);
+  const span = hi - lo;
+  const edge = Math.max(xTol, 1e-9 * span) * 2;
+  return { ...refined, atBound: Math.abs(refined.x - lo) <= edge || Math.abs(refined.x - hi) <= edge };
+}
+
+/**
+ * Golden-section search for the maximum of f on [a, b] to |dx| <= xTol,
+ * starting from a known sample (xBest, fBest) inside, which is returned if
+ * nothing better is found.
+ */
+export function refineMaximum(
+  f: (x: number) => number,
+  a0: number,
+  b0: number,
+  xBest: number,
+  fBest: number,
+  xTol: number,
+): { x: number; fx: number } {
+  let a = a0;
+  let b = b0;
   let c = b - INV_PHI * (b - a);
   let d = a + INV_PHI * (b - a);
   let fc = f(c);
@@ -69,20 +90,8 @@ export function maximizeOnGrid(
   }
   const xm = 0.5 * (a + b);
   const fm = f(xm);
-  const candidates: [number, number][] = [
-    [xm, fm],
-    [xs[best]!, bestF],
-  ];
-  let [x, fx] = candidates[0]!;
-  for (const [cx, cf] of candidates) {
-    if (Number.isFinite(cf) && (!Number.isFinite(fx) || cf > fx)) {
-      x = cx;
-      fx = cf;
-    }
-  }
-  const span = hi - lo;
-  const atBound = Math.abs(x - lo) <= Math.max(xTol, 1e-9 * span) * 2 || Math.abs(x - hi) <= Math.max(xTol, 1e-9 * span) * 2;
-  return { x, fx, atBound };
+  if (Number.isFinite(fm) && (!Number.isFinite(fBest) || fm >= fBest)) return { x: xm, fx: fm };
+  return { x: xBest, fx: fBest };
 }
 
 /** Minimum of f on [lo, hi]; see maximizeOnGrid. */

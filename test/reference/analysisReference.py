@@ -64,3 +64,35 @@ def max_excess(hh):
     return -r.fun
 ceil = brentq(max_excess, 8000.0, 16000.0, xtol=1e-9)
 print(f"mattingly_absolute_ceiling_60t_m = {ceil:.6f}")
+
+# 5. Optimum altitude: Mattingly lapse T0 = 160 kN (maxCruise ceiling), drag rise above M 0.78,
+#    TSFC constant 1.6e-5 kg/(N s), 60000 kg: altitude maximising the best SR = M a / (c D)
+#    over the Mach band where thrust >= drag.
+def sound(h):
+    T = 288.15 - 0.0065 * h if h <= 11000 else 216.65
+    return np.sqrt(1.4 * 287.05287 * T)
+
+
+def best_sr(h, m=60000.0):
+    Ms = np.linspace(0.3, 0.95, 651)
+    ok = [M for M in Ms if mattingly(h, M, 160e3) >= drag(h, M, m, 0.78)]
+    if not ok:
+        return np.nan
+    lo, hi = min(ok), max(ok)
+    g = lambda M: mattingly(h, M, 160e3) - drag(h, M, m, 0.78)
+    if lo > Ms[0]:
+        lo = brentq(g, lo - (Ms[1] - Ms[0]), lo, xtol=1e-14)
+    if hi < Ms[-1]:
+        hi = brentq(g, hi, hi + (Ms[1] - Ms[0]), xtol=1e-14)
+    r = minimize_scalar(lambda M: -(M * sound(h) / (1.6e-5 * drag(h, M, m, 0.78))), bounds=(lo, hi),
+                        method="bounded", options={"xatol": 1e-10})
+    return -r.fun
+
+
+hs = np.linspace(3000, 12000, 91)
+vals = [best_sr(h) for h in hs]
+i = int(np.nanargmax(vals))
+r = minimize_scalar(lambda h: -best_sr(h), bounds=(hs[max(0, i - 1)], hs[min(len(hs) - 1, i + 1)]),
+                    method="bounded", options={"xatol": 1e-3})
+print(f"mattingly_optimum_altitude_60t_m = {r.x:.3f}")
+print(f"mattingly_optimum_best_sr_60t_m_kg = {-r.fun:.6f}")

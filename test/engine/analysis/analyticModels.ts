@@ -68,6 +68,7 @@ export function parabolicAero(polar: ParabolicPolar, increment = 0): AeroModel {
         buffetCl,
         buffetLoadFactor: buffetCl / (cl / query.loadFactor),
         clMax: polar.clMax,
+        outsideTables: [],
       };
     },
     withIncrement(deltaCd0: number): AeroModel {
