@@ -46,7 +46,7 @@ export interface QuantityBounds {
 export function quantity(dimension: Dimension, bounds?: QuantityBounds) {
   const expected = bounds ? `${DIMENSION_EXPECTED[dimension]}, ${bounds.what}` : DIMENSION_EXPECTED[dimension];
   const shown = (input: unknown): string => (typeof input === 'string' ? `"${input}"` : String(input));
-  return z
+  const schema = z
     .custom<number | string>(() => true)
     .transform((input, ctx): number => {
       if (input === undefined || input === null) {
@@ -77,6 +77,15 @@ export function quantity(dimension: Dimension, bounds?: QuantityBounds) {
       }
       return value;
     });
+  QUANTITY_DIMENSIONS.set(schema, dimension);
+  return schema;
+}
+
+const QUANTITY_DIMENSIONS = new WeakMap<object, Dimension>();
+
+/** The dimension of a schema made by `quantity`, else undefined (used by the project writer). */
+export function quantityDimensionOf(schema: object): Dimension | undefined {
+  return QUANTITY_DIMENSIONS.get(schema);
 }
 
 /** A plain dimensionless number field (finite; a bare number or e.g. "5 %"). */
