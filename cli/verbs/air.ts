@@ -82,7 +82,7 @@ Usage: blockwise air --altitude <length> [--isa-dev <temperature difference>]
                      [--cas <speed> | --eas <speed> | --tas <speed> | --mach <number>] [--json]
 
 Options:
-  --altitude   pressure altitude, e.g. "35000 ft", "10.67 km" (bare number = m); -5,000 m to 71,000 m
+  --altitude   pressure altitude, e.g. "35000 ft", "10.67 km" (bare number = m); -5,004 m to 71,000 m
   --isa-dev    temperature deviation from ISA, e.g. "+15 K", "-10 degC" (bare number = K); default 0
   --cas        calibrated airspeed, e.g. "250 kt", "128 m/s" (bare number = m/s)
   --eas        equivalent airspeed

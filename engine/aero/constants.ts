@@ -8,12 +8,17 @@ import { STANDARD_GRAVITY_M_S2 } from '../units/unitTable';
 
 /** Standard acceleration of gravity (m/s^2), exact. */
 export const g0 = STANDARD_GRAVITY_M_S2;
-/** Universal gas constant as used by the 1976 standard (J/(kmol K)). */
+/**
+ * Specific gas constant of air (J/(kg K)): R* / M with R* = 8314.32 J/(kmol K)
+ * and M = 28.96442 kg/kmol, as tabulated by ICAO Doc 7488/3. (The 1976
+ * standard's M0 = 28.9644 gives 287.0531; the two differ by 7e-7, below the
+ * tables' printed precision.)
+ */
+export const R_air = 287.05287;
+/** Universal gas constant of the 1976 standard (J/(kmol K)). */
 export const R_STAR_J_KMOL_K = 8314.32;
-/** Mean molar mass of sea-level air (kg/kmol). */
+/** Sea-level mean molar mass of air of the 1976 standard (kg/kmol). */
 export const M0_KG_KMOL = 28.9644;
-/** Specific gas constant of air R* / M0 = 287.05287 J/(kg K). */
-export const R_air = R_STAR_J_KMOL_K / M0_KG_KMOL;
 /** Ratio of specific heats of air (-). */
 export const gamma = 1.4;
 /** Sea-level standard pressure (Pa). */

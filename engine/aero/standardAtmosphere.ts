@@ -47,15 +47,21 @@ export type AtmosphereError =
   | { readonly code: 'not_finite'; readonly message: string }
   | { readonly code: 'temperature_not_positive'; readonly temperature_K: number; readonly message: string };
 
-/** Lowest pressure altitude served (m), the bottom of the 1976 tables. */
-export const MIN_PRESSURE_ALTITUDE_M = -5000;
+/**
+ * Lowest pressure altitude served (m): the bottom of the 1976 tables,
+ * geometric -5,000 m, as geopotential altitude (-5,003.94 m).
+ */
+export const MIN_PRESSURE_ALTITUDE_M = (r0_m * -5000) / (r0_m - 5000);
 /** Highest pressure altitude served (m), the top of the 1976 standard's 51-71 km layer. */
 export const MAX_PRESSURE_ALTITUDE_M = 71000;
 
 /** Layer base geopotential altitudes (m) and lapse rates (K/m), 1976 Table 4. */
 const BASE_H = [0, 11000, 20000, 32000, 47000, 51000, 71000] as const;
 const LAPSE = [-0.0065, 0, 0.001, 0.0028, 0, -0.0028, -0.002] as const;
-/** g0 M0 / R* (K/m): the hydrostatic constant of 1976 equations 33a/33b. */
+/**
+ * g0 M0 / R* (K/m): the hydrostatic constant of 1976 equations 33a/33b, with
+ * the 1976 M0 so that layer-base pressures match Table 4 to its 7 digits.
+ */
 const GMR = (g0 * M0_KG_KMOL) / R_STAR_J_KMOL_K;
 
 const BASE_T: number[] = [T0];
@@ -96,7 +102,7 @@ export const MAX_PRESSURE_PA = isaPressure(MIN_PRESSURE_ALTITUDE_M, 0);
 export const MIN_PRESSURE_PA = isaPressure(MAX_PRESSURE_ALTITUDE_M, layerIndex(MAX_PRESSURE_ALTITUDE_M));
 
 /**
- * The atmosphere at a geopotential pressure altitude (m), -5,000 m to
+ * The atmosphere at a geopotential pressure altitude (m), -5,003.9 m to
  * 71,000 m, with an ISA temperature deviation (K, default 0). The deviation
  * changes temperature, density and speed of sound, not pressure. Source:
  * U.S. Standard Atmosphere 1976 (= ICAO Doc 7488/3 to 32 km).
@@ -114,7 +120,7 @@ export function atmosphere(pressureAltitude_m: number, isaDev_K = 0): Result<Atm
       altitude_m: pressureAltitude_m,
       min_m: MIN_PRESSURE_ALTITUDE_M,
       max_m: MAX_PRESSURE_ALTITUDE_M,
-      message: `pressure altitude ${pressureAltitude_m} m is outside the standard atmosphere's range ${MIN_PRESSURE_ALTITUDE_M} m to ${MAX_PRESSURE_ALTITUDE_M} m`,
+      message: `pressure altitude ${pressureAltitude_m} m is outside the standard atmosphere's range ${MIN_PRESSURE_ALTITUDE_M.toFixed(0)} m to ${MAX_PRESSURE_ALTITUDE_M} m`,
     });
   }
   const i = layerIndex(pressureAltitude_m);
@@ -147,7 +153,7 @@ export function atmosphere(pressureAltitude_m: number, isaDev_K = 0): Result<Atm
  * The geopotential pressure altitude (m) at which the standard atmosphere has
  * this static pressure (Pa); the exact inverse of `atmosphere`'s pressure
  * (1976 equations 33a/33b solved for H). Range: the pressures at 71,000 m
- * and -5,000 m.
+ * and -5,003.9 m.
  */
 export function pressureAltitude(pressure_Pa: number): Result<number, AtmosphereError> {
   if (!Number.isFinite(pressure_Pa)) {
@@ -159,7 +165,7 @@ export function pressureAltitude(pressure_Pa: number): Result<number, Atmosphere
       pressure_Pa,
       min_Pa: MIN_PRESSURE_PA,
       max_Pa: MAX_PRESSURE_PA,
-      message: `pressure ${pressure_Pa} Pa is outside the standard atmosphere's range ${MIN_PRESSURE_PA.toPrecision(4)} Pa to ${MAX_PRESSURE_PA.toPrecision(6)} Pa (${MAX_PRESSURE_ALTITUDE_M} m to ${MIN_PRESSURE_ALTITUDE_M} m)`,
+      message: `pressure ${pressure_Pa} Pa is outside the standard atmosphere's range ${MIN_PRESSURE_PA.toPrecision(4)} Pa to ${MAX_PRESSURE_PA.toPrecision(6)} Pa (${MAX_PRESSURE_ALTITUDE_M} m to ${MIN_PRESSURE_ALTITUDE_M.toFixed(0)} m)`,
     });
   }
   let i = 0;
