@@ -59,7 +59,8 @@ export interface PolarIssue {
 }
 
 function tableIssue(prefix: string, names: Readonly<Record<string, string>>, e: TableError): PolarIssue {
-  const field = names[e.field] ?? e.field;
+  const base = e.field.replace(/\[.*$/, '');
+  const field = (names[base] ?? base) + e.field.slice(base.length);
   const at = e.index === undefined ? '' : `[${e.index}]`;
   const what: Record<TableError['code'], string> = {
     empty: 'has no points',

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { expectOk } from '../../../engine/core/result';
 import { interp1d, makeTable1d, tableRange, type Table1d } from '../../../engine/core/table1d';
 import { expectClose } from '../../support/assertInDelta';
-import ref from '../../reference/dragPolarReference.json';
+import { dragPolarReference as ref } from '../../reference/dragPolarReference';
 
 function table(x: readonly number[], y: readonly number[], method: 'linear' | 'monotoneCubic' = 'linear'): Table1d {
   return expectOk(makeTable1d(x, y, 'test', method), 'test table');

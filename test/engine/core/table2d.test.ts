@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { expectOk } from '../../../engine/core/result';
 import { interp2d, makeTable2d, type Table2d } from '../../../engine/core/table2d';
 import { expectClose } from '../../support/assertInDelta';
-import ref from '../../reference/dragPolarReference.json';
+import { dragPolarReference as ref } from '../../reference/dragPolarReference';
 
 function grid(): Table2d {
   return expectOk(makeTable2d(ref.bilinear.x, ref.bilinear.y, ref.bilinear.z, 'wave'), 'reference grid');
