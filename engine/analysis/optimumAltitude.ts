@@ -48,7 +48,7 @@ export const OPTIMUM_ALTITUDE_TOL_M = 0.5;
  * Altitude (m) of greatest maximum-range SR at a mass (kg). Each altitude's
  * best SR comes from specificRange (TAS / fuel flow at thrust = drag);
  * altitudes where level flight is impossible at the ceiling rating are
- * skipped. Raises `buffet_margin` when the load factor to buffet onset at the
+ * skipped. Raises `buffet_margin_low` (catalogue id) when the load factor to buffet onset at the
  * optimum is below the settings' minimum, and `mmo_exceeded` when the
  * best-range Mach exceeds MMO less its margin.
  */
@@ -107,7 +107,7 @@ export function optimumAltitude(
   const minN = query.cautionSettings.minBuffetLoadFactor;
   if (drag.buffetLoadFactor < minN) {
     cautions.push({
-      id: 'buffet_margin',
+      id: 'buffet_margin_low',
       severity: 'caution',
       message: `At the optimum altitude ${best.x.toFixed(0)} m and M ${mach.toFixed(3)} the load factor to buffet onset is ${drag.buffetLoadFactor.toFixed(2)} g, below the ${minN.toFixed(2)} g margin.`,
       value: drag.buffetLoadFactor,

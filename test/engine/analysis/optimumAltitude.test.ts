@@ -46,12 +46,12 @@ describe('optimumAltitude', () => {
     );
     const ids = r.cautions.map((c) => c.id);
     expect(ids).toContain('mmo_exceeded');
-    expect(ids).toContain('buffet_margin');
+    expect(ids).toContain('buffet_margin_low');
     const quiet = expectOk(
       optimumAltitude(models, { mass_kg: 60000, isaDev_K: 0, altitudeRange: [3000, 12000], mmo: 0.95, cautionSettings: { ...DEFAULT_CAUTION_SETTINGS, minBuffetLoadFactor: 1.0 } }),
       'optimum altitude',
     );
     expect(quiet.cautions.map((c) => c.id)).not.toContain('mmo_exceeded');
-    expect(quiet.cautions.map((c) => c.id)).not.toContain('buffet_margin');
+    expect(quiet.cautions.map((c) => c.id)).not.toContain('buffet_margin_low');
   });
 });

@@ -1,0 +1,75 @@
+import { describe, expect, it } from 'vitest';
+import { thrustDragCrossover } from '../../../engine/analysis/crossover';
+import { flightEnvelope } from '../../../engine/analysis/envelope';
+import { expectOk } from '../../../engine/core/result';
+import { expectClose } from '../../support/assertInDelta';
+import { G0, TEST_POLAR, analyticPropulsion, isaPressure_Pa, parabolicAero } from './analyticModels';
+
+const models = {
+  aero: parabolicAero({ ...TEST_POLAR, mCrit: 0.78 }),
+  propulsion: analyticPropulsion({ thrust_N: 160e3, lapse: 'mattingly', tsfc_kg_N_s: 1.6e-5 }),
+};
+const query = { mass_kg: 60000, rating: 'maxCruise' as const, isaDev_K: 0, altitudeRange: [0, 14000] as const, altitudeStep_m: 1000 };
+const env = expectOk(flightEnvelope(models, query), 'envelope');
+
+describe('flightEnvelope', () => {
+  it('flightEnvelope finds the absolute ceiling of the scipy reference', () => {
+    const abs = env.ceilings.find((c) => c.name === 'absolute')!;
+    // test/reference/analysisReference.py (scipy brentq on max over Mach of T - D): 9956.560136 m
+    expectClose(abs.altitude_m!, 9956.560136, { abs: 0.05 }, 'scipy reference');
+  });
+
+  it('flightEnvelope ceilings agree with the climb rate computed at them', () => {
+    for (const c of env.ceilings) {
+      const at = expectOk(
+        thrustDragCrossover(models, { altitude_m: c.altitude_m!, mass_kg: 60000, rating: 'maxCruise', isaDev_K: 0 }),
+        'crossover at ceiling',
+      );
+      // Ps = (T - D) V / W at the best-climb Mach equals the residual rate (definition; 100 and 300 ft/min common practice)
+      expectClose(at.maxSpecificExcessPower_m_s!, c.climbRate_m_s, { abs: 1e-4 }, `${c.name} ceiling definition`);
+      expectClose(c.climbRateAtCeiling_m_s!, c.climbRate_m_s, { abs: 1e-4 });
+    }
+    const [absolute, service, cruise] = env.ceilings;
+    expectClose(service!.climbRate_m_s, 100 * 0.3048 / 60, { rel: 1e-12 }, '100 ft/min, common practice');
+    expect(absolute!.altitude_m!).toBeGreaterThan(service!.altitude_m!);
+    expect(service!.altitude_m!).toBeGreaterThan(cruise!.altitude_m!);
+  });
+
+  it('flightEnvelope lowers the ceilings for a heavier aircraft', () => {
+    const heavy = expectOk(flightEnvelope(models, { ...query, mass_kg: 70000 }), 'envelope');
+    heavy.ceilings.forEach((c, i) => expect(c.altitude_m!).toBeLessThan(env.ceilings[i]!.altitude_m!));
+  });
+
+  it('flightEnvelope rows put buffet onset where n CL equals the buffet CL', () => {
+    const row = env.rows.find((r) => r.altitude_m === 9000)!;
+    expect(row.buffetMarginLowMach).not.toBeNull();
+    const m = row.buffetMarginLowMach!;
+    const q = 0.7 * isaPressure_Pa(9000) * m * m; // NACA Report 1135
+    const cl = (1.3 * 60000 * G0) / (q * TEST_POLAR.wingArea_m2);
+    expectClose(cl, TEST_POLAR.buffetCl - TEST_POLAR.buffetSlope! * m, { rel: 1e-7 }, 'buffet onset definition');
+    expect(row.buffetLowMach!).toBeLessThan(m);
+    // The margin boundary narrows the buffet-free band at both ends.
+    if (row.buffetHighMach !== null && row.buffetMarginHighMach !== null) expect(row.buffetMarginHighMach).toBeLessThan(row.buffetHighMach);
+    const top = env.rows[env.rows.length - 1]!;
+    expect(top.status).toBe('above_ceiling');
+  });
+
+  it('flightEnvelope speed-limit line is VMO / a0 at sea level (CAS = TAS in ISA at sea level)', () => {
+    const e = expectOk(
+      flightEnvelope(models, { ...query, altitudeRange: [0, 2000], speedLimits: { vmo_m_s: 350 * 1852 / 3600, mmo: 0.82 } }),
+      'envelope',
+    );
+    // a0 = 340.294 m/s, U.S. Standard Atmosphere 1976; CAS = TAS at sea level ISA (NACA Report 1135)
+    expectClose(e.rows[0]!.speedLimitMach!, (350 * 1852) / 3600 / 340.294, { rel: 1e-5 }, 'U.S. Standard Atmosphere 1976 a0');
+    const high = expectOk(flightEnvelope(models, { ...query, altitudeRange: [11000, 12000], speedLimits: { vmo_m_s: 350 * 1852 / 3600, mmo: 0.82 } }), 'envelope');
+    expect(high.rows[0]!.speedLimitMach).toBe(0.82);
+  });
+
+  it('flightEnvelope reports a ceiling above the altitude range as null with a message, and rejects bad rates', () => {
+    const low = expectOk(flightEnvelope(models, { ...query, altitudeRange: [0, 4000] }), 'envelope');
+    expect(low.ceilings[0]!.altitude_m).toBeNull();
+    expect(low.ceilings[0]!.message).toMatch(/above 4000 m/);
+    const bad = flightEnvelope(models, { ...query, residualClimbRates: [{ name: 'odd', climbRate_m_s: -1 }] });
+    expect(bad.ok ? '' : bad.error.message).toMatch(/"odd" -1 m\/s/);
+  });
+});
