@@ -1,0 +1,60 @@
+/** Errors found in a deck file (CSV or JSON), each saying where and what. */
+
+export type DeckFileErrorCode =
+  | 'empty_file'
+  | 'no_header'
+  | 'no_data'
+  | 'bad_column_header'
+  | 'duplicate_column'
+  | 'unknown_column'
+  | 'missing_column'
+  | 'unknown_unit'
+  | 'wrong_unit_dimension'
+  | 'ragged_row'
+  | 'empty_cell'
+  | 'not_a_number'
+  | 'not_finite'
+  | 'out_of_range'
+  | 'negative_flow'
+  | 'duplicate_point'
+  | 'thrust_not_rising'
+  | 'single_value_axis'
+  | 'bad_metadata'
+  | 'unknown_metadata'
+  | 'duplicate_metadata'
+  | 'bad_rating'
+  | 'bad_json'
+  | 'schema'
+  | 'too_many_errors';
+
+export interface DeckFileError {
+  readonly code: DeckFileErrorCode;
+  /** 1-based line in a CSV file; null for JSON and whole-file errors. */
+  readonly line: number | null;
+  /** Column header as written (CSV) or JSON path; null when not about one column. */
+  readonly column: string | null;
+  /** The offending text as written; null when there is none. */
+  readonly value: string | null;
+  /** What was expected there, in words. */
+  readonly expected: string;
+  /** One line: `<source> line <n>, column "<column>": <what>`. */
+  readonly message: string;
+}
+
+/** Where in a file, as the message prefix: `demo.csv line 14, column "thrust[lbf]"` or `deck.json, points[3][1]`. */
+export function deckFileWhere(source: string, line: number | null, column: string | null): string {
+  if (line !== null) return `${source} line ${line}${column !== null ? `, column "${column}"` : ''}`;
+  return column !== null ? `${source}, ${column}` : source;
+}
+
+export function deckFileError(
+  source: string,
+  code: DeckFileErrorCode,
+  line: number | null,
+  column: string | null,
+  value: string | null,
+  expected: string,
+  what: string,
+): DeckFileError {
+  return { code, line, column, value, expected, message: `${deckFileWhere(source, line, column)}: ${what}` };
+}
