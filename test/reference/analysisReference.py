@@ -96,3 +96,23 @@ r = minimize_scalar(lambda h: -best_sr(h), bounds=(hs[max(0, i - 1)], hs[min(len
                     method="bounded", options={"xatol": 1e-3})
 print(f"mattingly_optimum_altitude_60t_m = {r.x:.3f}")
 print(f"mattingly_optimum_best_sr_60t_m_kg = {-r.fun:.6f}")
+
+# 6. Shapley values by brute force over all 4! = 24 orderings (itertools), for a
+#    non-additive value function v(a, b, c, d) with a..d in {0, 1}.
+from itertools import permutations
+
+
+def v(bits):
+    a, b, c, d = bits
+    return 100 + 3 * a + 5 * b - 2 * c + 7 * d + 4 * a * b - 6 * b * c * d + 2.5 * a * c * d
+
+
+shares = [0.0] * 4
+perms = list(permutations(range(4)))
+for order in perms:
+    state = [0, 0, 0, 0]
+    for i in order:
+        before = v(state)
+        state[i] = 1
+        shares[i] += (v(state) - before) / len(perms)
+print("shapley_shares =", ", ".join(f"{x:.12f}" for x in shares))

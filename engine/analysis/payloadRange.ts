@@ -1,0 +1,141 @@
+/**
+ * Payload-range diagram: the corner points (maximum payload at MTOW, MTOW
+ * with full fuel, ferry = zero payload with full fuel) and points between
+ * them, each a whole mission with reserves flown by the mission solver in
+ * maximum-range mode.
+ */
+import type { Caution } from '../cautions/caution';
+import { err, ok, type Result } from '../core/result';
+import type { MissionInput, MissionResult } from '../mission/missionTypes';
+import type { AnalysisError, MissionSolver } from './analysisTypes';
+
+export type PayloadRangePointKind = 'maxPayload' | 'mtowFullFuel' | 'ferry' | 'between';
+
+export interface PayloadRangePoint {
+  readonly kind: PayloadRangePointKind;
+  readonly payload_kg: number;
+  /** Still-air and ground distance of the trip (m). */
+  readonly range_m: number;
+  readonly groundDistance_m: number;
+  readonly takeoffMass_kg: number;
+  readonly rampMass_kg: number;
+  /** Fuel on board at block-out = ramp mass - zero-fuel mass (kg). */
+  readonly fuelOnBoard_kg: number;
+  readonly blockFuel_kg: number;
+  readonly tripFuel_kg: number;
+  readonly reserveFuel_kg: number;
+  readonly blockTime_s: number;
+  readonly cautions: readonly Caution[];
+}
+
+export interface PayloadRangeResult {
+  /** Flown points in order of increasing range, maximum payload to ferry (the segment from zero range at maximum payload is implied). */
+  readonly points: readonly PayloadRangePoint[];
+  readonly maxPayload: PayloadRangePoint;
+  /** Null when full tanks never fit under MTOW at any payload >= 0 or always fit at maximum payload. */
+  readonly mtowFullFuel: PayloadRangePoint | null;
+  readonly ferry: PayloadRangePoint;
+  /** Missions flown. */
+  readonly missions: number;
+  readonly note: string;
+}
+
+export interface PayloadRangeOptions {
+  readonly solve: MissionSolver;
+  /** Points between corners on each segment; default 3. */
+  readonly pointsBetween?: number;
+  /** Called after each mission with (done, total). */
+  readonly onProgress?: (done: number, total: number) => void;
+  /** Polled before each mission; true stops the run with a `cancelled` error. */
+  readonly shouldCancel?: () => boolean;
+}
+
+function pointOf(kind: PayloadRangePointKind, r: MissionResult): PayloadRangePoint {
+  return {
+    kind,
+    payload_kg: r.payload_kg,
+    range_m: r.airDistance_m,
+    groundDistance_m: r.groundDistance_m,
+    takeoffMass_kg: r.takeoffMass_kg,
+    rampMass_kg: r.rampMass_kg,
+    fuelOnBoard_kg: r.rampMass_kg - r.zeroFuelMass_kg,
+    blockFuel_kg: r.blockFuel_kg,
+    tripFuel_kg: r.tripFuel_kg,
+    reserveFuel_kg: r.reserveFuel_kg,
+    blockTime_s: r.blockTime_s,
+    cautions: r.cautions,
+  };
+}
+
+/**
+ * Payload-range diagram of a mission input (its solve mode is replaced).
+ * Maximum payload = MZFW - OEW; the MTOW-full-fuel payload is
+ * MTOW + taxi-out fuel - OEW - max fuel, with the taxi-out fuel (ramp minus
+ * take-off mass) taken from the maximum-payload mission; every point is
+ * flown in `maxRange` mode, which loads the most fuel MTOW and the tanks
+ * allow. Cost: 3 + 2 * pointsBetween (+1) missions.
+ */
+export function payloadRangeDiagram(
+  base: MissionInput,
+  options: PayloadRangeOptions,
+): Result<PayloadRangeResult, AnalysisError> {
+  const between = options.pointsBetween ?? 3;
+  if (!Number.isInteger(between) || between < 0 || between > 50) {
+    return err({ code: 'invalid_input', message: `payload-range: points between corners ${between} must be an integer 0..50` });
+  }
+  const af = base.airframe;
+  const maxPayload_kg = af.mzfw_kg - af.oew_kg;
+  if (!(maxPayload_kg > 0)) {
+    return err({ code: 'invalid_input', message: `payload-range: MZFW ${af.mzfw_kg} kg is not above OEW ${af.oew_kg} kg, so no payload can be carried` });
+  }
+  const total = 3 + 2 * between;
+  let done = 0;
+  const fly = (payload_kg: number, what: string): Result<MissionResult, AnalysisError> => {
+    if (options.shouldCancel?.()) return err({ code: 'cancelled', message: `payload-range cancelled after ${done} of ${total} missions` });
+    const r = options.solve({ ...base, solve: { kind: 'maxRange', payload_kg } });
+    done++;
+    options.onProgress?.(done, total);
+    if (r.status !== 'ok') {
+      return err({ code: 'mission_failed', message: `payload-range: the ${what} mission (payload ${payload_kg.toFixed(0)} kg) failed: ${r.status}: ${r.statusMessage}` });
+    }
+    return ok(r);
+  };
+  const a = fly(maxPayload_kg, 'maximum-payload');
+  if (!a.ok) return a;
+  const taxiOut_kg = a.value.rampMass_kg - a.value.takeoffMass_kg;
+  const payloadB = af.mtow_kg + taxiOut_kg - af.oew_kg - af.maxFuel_kg;
+  const hasB = payloadB > 0 && payloadB < maxPayload_kg;
+  let b: MissionResult | null = null;
+  if (hasB) {
+    const rb = fly(payloadB, 'MTOW-full-fuel');
+    if (!rb.ok) return rb;
+    b = rb.value;
+  } else {
+    done++;
+  }
+  const c = fly(0, 'ferry');
+  if (!c.ok) return c;
+  const segments: [number, number][] = hasB ? [[maxPayload_kg, payloadB], [payloadB, 0]] : [[maxPayload_kg, 0]];
+  const mids: PayloadRangePoint[][] = [];
+  for (const [hi, lo] of segments) {
+    const list: PayloadRangePoint[] = [];
+    const n = hasB ? between : 2 * between;
+    for (let i = 1; i <= n; i++) {
+      const r = fly(hi + ((lo - hi) * i) / (n + 1), 'intermediate');
+      if (!r.ok) return r;
+      list.push(pointOf('between', r.value));
+    }
+    mids.push(list);
+  }
+  const pa = pointOf('maxPayload', a.value);
+  const pb = b === null ? null : pointOf('mtowFullFuel', b);
+  const pc = pointOf('ferry', c.value);
+  const points = pb === null ? [pa, ...mids[0]!, pc] : [pa, ...mids[0]!, pb, ...mids[1]!, pc];
+  const note =
+    pb === null
+      ? payloadB >= maxPayload_kg
+        ? 'Full tanks fit under MTOW even at maximum payload: the diagram has no MTOW-limited segment.'
+        : 'Full tanks never fit under MTOW, even with no payload: the ferry point is MTOW-limited.'
+      : 'Maximum payload to the MTOW-full-fuel corner is MTOW-limited; beyond it, fuel-capacity-limited.';
+  return ok({ points, maxPayload: pa, mtowFullFuel: pb, ferry: pc, missions: done, note });
+}
