@@ -1,0 +1,257 @@
+import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../engine/core/notice';
+import type { Result } from '../../engine/core/result';
+import { parseDeckCsv } from '../../engine/propulsion/deckCsv';
+import type { DeckFileError } from '../../engine/propulsion/deckFileError';
+import { deckGridPoints } from '../../engine/propulsion/deckGrid';
+import { parseDeckJson } from '../../engine/propulsion/deckJson';
+import { lookupDeck, ratingPower } from '../../engine/propulsion/deckLookup';
+import { describeReferenceRecovery, type EngineDeck } from '../../engine/propulsion/engineDeck';
+import { RATING_NAMES, type RatingName } from '../../engine/propulsion/propulsionModel';
+import { parseQuantity, type Dimension } from '../../engine/units/quantity';
+import { FOOT_M, POUND_FORCE_N, POUND_KG } from '../../engine/units/unitTable';
+import { optionalString, printJson, requireString, UsageError, type CliIo, type Verb } from '../verb';
+
+/** Reads and parses a deck file (JSON by extension, else CSV); null after printing why it could not be read. */
+function readDeck(file: string, io: CliIo): { text: string; result: Result<EngineDeck, readonly DeckFileError[]> } | null {
+  const path = resolve(io.cwd, file);
+  let text: string;
+  try {
+    text = readFileSync(path, 'utf8');
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    io.err(`blockwise deck: cannot read "${file}"${code ? ` (${code})` : ''}\n`);
+    return null;
+  }
+  const result = /\.json$/i.test(file) ? parseDeckJson(text, file) : parseDeckCsv(text, file);
+  return { text, result };
+}
+
+function onePositional(positionals: readonly string[]): string {
+  if (positionals.length !== 1) throw new UsageError(`give exactly one deck file (got ${positionals.length})`);
+  return positionals[0]!;
+}
+
+function round(x: number, digits = 6): number {
+  return Number(x.toPrecision(digits));
+}
+
+interface DeckSummary {
+  readonly title: string;
+  readonly parametric: boolean;
+  readonly referenceRecovery: string;
+  readonly points: number;
+  readonly nodes: number;
+  readonly altitude_m: { readonly min: number; readonly max: number };
+  readonly mach: { readonly min: number; readonly max: number };
+  readonly power: { readonly min: number; readonly max: number };
+  readonly isaDev_K: { readonly min: number; readonly max: number } | null;
+  readonly hasAirflow: boolean;
+  readonly ratings: Readonly<Partial<Record<RatingName, number>>>;
+  readonly policy: EngineDeck['policy'];
+  readonly notes: readonly string[];
+}
+
+function range(values: ArrayLike<number>): { min: number; max: number } {
+  let min = Infinity;
+  let max = -Infinity;
+  for (let i = 0; i < values.length; i++) {
+    min = Math.min(min, values[i]!);
+    max = Math.max(max, values[i]!);
+  }
+  return { min, max };
+}
+
+function summarize(deck: EngineDeck): DeckSummary {
+  const g = deck.grid;
+  return {
+    title: deck.title,
+    parametric: deck.parametric,
+    referenceRecovery: describeReferenceRecovery(deck.referenceRecovery),
+    points: deckGridPoints(g).length,
+    nodes: g.machs.length,
+    altitude_m: range(g.altitudes_m),
+    mach: range(g.machs),
+    power: range(g.power),
+    isaDev_K: deck.hasIsaDev ? range(g.isaDevs_K) : null,
+    hasAirflow: deck.hasAirflow,
+    ratings: deck.ratings,
+    policy: deck.policy,
+    notes: deck.notes,
+  };
+}
+
+function summaryText(file: string, s: DeckSummary): string {
+  const ratings = RATING_NAMES.filter((r) => s.ratings[r] !== undefined).map((r) => `${r} ${s.ratings[r]}`);
+  const lines = [
+    `Deck file ${file}: valid`,
+    `  title               ${s.title}`,
+    `  kind                ${s.parametric ? 'parametric (generated from a published model, not a maker\'s deck)' : 'tabulated'}`,
+    `  reference recovery  ${s.referenceRecovery}`,
+    `  points              ${s.points} at ${s.nodes} (altitude, Mach) nodes`,
+    `  altitude            ${round(s.altitude_m.min / FOOT_M)} to ${round(s.altitude_m.max / FOOT_M)} ft (${round(s.altitude_m.min)} to ${round(s.altitude_m.max)} m)`,
+    `  Mach                ${s.mach.min} to ${s.mach.max} (each altitude may have its own range)`,
+    `  power               ${s.power.min} to ${s.power.max}`,
+    `  ISA deviation       ${s.isaDev_K ? `${s.isaDev_K.min} to ${s.isaDev_K.max} K` : 'no axis (corrected-parameter approximation off ISA)'}`,
+    `  airflow             ${s.hasAirflow ? 'tabulated' : 'not tabulated'}`,
+    `  ratings             ${ratings.length ? ratings.join(', ') : 'none'}`,
+    `  outside the table   altitude ${s.policy.altitude}, Mach ${s.policy.mach}, power ${s.policy.power}, ISA deviation ${s.policy.isaDev}`,
+    ...s.notes.map((n, i) => `  ${i === 0 ? 'notes' : ''}`.padEnd(22) + n),
+    '  values are per engine and uninstalled',
+    '',
+    ...SAFETY_NOTICE_LINES,
+    '',
+  ];
+  return lines.join('\n');
+}
+
+export const deckCheckVerb: Verb = {
+  name: 'deck check',
+  summary: 'validate an engine deck file (CSV or JSON) and summarize it',
+  help: `blockwise deck check — validate an engine deck file and summarize it
+
+Usage: blockwise deck check <file> [--json]
+
+  <file>   deck CSV (name[unit] header, # metadata lines) or deck JSON (*.json);
+           see docs/deck-format.md
+  --json   print the summary (or the errors) as JSON
+
+Exit status: 0 when the deck is valid; 1 with one line per error (line and
+column) when it is not; 2 for a bad command line.
+`,
+  options: { json: { type: 'boolean' } },
+  allowPositionals: true,
+  run(values, positionals, io) {
+    const file = onePositional(positionals);
+    const read = readDeck(file, io);
+    if (read === null) return 1;
+    const { result } = read;
+    if (!result.ok) {
+      if (values.json === true) printJson(io, { ok: false, file, errors: result.error });
+      else io.err(`${result.error.map((e) => e.message).join('\n')}\n${file}: ${result.error.length} error${result.error.length === 1 ? '' : 's'}; deck not loaded\n`);
+      return 1;
+    }
+    const summary = summarize(result.value);
+    if (values.json === true) printJson(io, { ok: true, file, ...summary, notice: SAFETY_NOTICE });
+    else io.out(summaryText(file, summary));
+    return 0;
+  },
+};
+
+function readQuantityOption(values: Readonly<Record<string, unknown>>, name: string, dimension: Dimension, required: boolean): number | undefined {
+  const text = required ? requireString(values, name) : optionalString(values, name);
+  if (text === undefined) return undefined;
+  const parsed = parseQuantity(text, dimension);
+  if (!parsed.ok) throw new UsageError(`--${name}: ${parsed.error.message}`);
+  return parsed.value;
+}
+
+export const deckAtVerb: Verb = {
+  name: 'deck at',
+  summary: 'read an engine deck at an altitude, Mach and power setting',
+  help: `blockwise deck at — read an engine deck (per engine, uninstalled) at one point
+
+Usage: blockwise deck at <file> --altitude <altitude> --mach <mach> --power <power|rating>
+                         [--isa-dev <delta T>] [--json]
+
+  --altitude   pressure altitude with unit, e.g. "35000 ft" or "10.7 km" (bare number: m)
+  --mach       flight Mach number, e.g. 0.8
+  --power      a number on the deck's power axis, or a rating name:
+               ${RATING_NAMES.join(', ')}
+  --isa-dev    ISA temperature deviation, e.g. "10 K" (default 0)
+  --json       print the result as JSON (thrust_N, fuelFlow_kg_s, airflow_kg_s,
+               power, outsideTable, cautions)
+
+Off the table, each axis follows the deck's policy (extrapolate or clamp with a
+caution, or refuse: exit 1).
+`,
+  options: {
+    altitude: { type: 'string' },
+    mach: { type: 'string' },
+    power: { type: 'string' },
+    'isa-dev': { type: 'string' },
+    json: { type: 'boolean' },
+  },
+  allowPositionals: true,
+  run(values, positionals, io) {
+    const file = onePositional(positionals);
+    const altitude_m = readQuantityOption(values, 'altitude', 'length', true)!;
+    const mach = readQuantityOption(values, 'mach', 'dimensionless', true)!;
+    if (mach < 0) throw new UsageError(`--mach: a Mach number cannot be negative (got ${String(values.mach)})`);
+    const isaDev_K = readQuantityOption(values, 'isa-dev', 'temperatureDelta', false) ?? 0;
+    const powerText = requireString(values, 'power').trim();
+    const read = readDeck(file, io);
+    if (read === null) return 1;
+    if (!read.result.ok) {
+      io.err(`${read.result.error.map((e) => e.message).join('\n')}\n${file}: deck not loaded\n`);
+      return 1;
+    }
+    const deck = read.result.value;
+    let power: number;
+    let rating: RatingName | null = null;
+    const named = RATING_NAMES.find((r) => r === powerText);
+    if (named !== undefined) {
+      const r = ratingPower(deck, named);
+      if (!r.ok) {
+        io.err(`blockwise deck at: --power: ${r.error.message}\n`);
+        return 1;
+      }
+      power = r.value;
+      rating = named;
+    } else {
+      const parsed = parseQuantity(powerText, 'dimensionless');
+      if (!parsed.ok) {
+        throw new UsageError(`--power: "${powerText}" is neither a number nor a rating (${RATING_NAMES.join(', ')})`);
+      }
+      power = parsed.value;
+    }
+    const condition = { altitude_m, mach, isaDev_K };
+    const looked = lookupDeck(deck, condition, power);
+    if (!looked.ok) {
+      if (values.json === true) printJson(io, { ok: false, error: looked.error });
+      else io.err(`blockwise deck at: ${looked.error.message}\n`);
+      return 1;
+    }
+    const v = looked.value;
+    const tsfc = v.thrust_N > 0 ? v.fuelFlow_kg_s / v.thrust_N : null;
+    if (values.json === true) {
+      printJson(io, {
+        ok: true,
+        deck: deck.title,
+        parametric: deck.parametric,
+        perEngine: true,
+        uninstalled: true,
+        altitude_m,
+        mach,
+        isaDev_K,
+        rating,
+        power: v.power,
+        thrust_N: v.thrust_N,
+        fuelFlow_kg_s: v.fuelFlow_kg_s,
+        airflow_kg_s: v.airflow_kg_s,
+        tsfc_kg_N_s: tsfc,
+        outsideTable: v.outside,
+        cautions: v.cautions,
+        notice: SAFETY_NOTICE,
+      });
+      return 0;
+    }
+    const lbh = (kg_s: number): string => `${round((kg_s / POUND_KG) * 3600, 6)} lb/h`;
+    const lines = [
+      `${deck.title} — per engine, uninstalled (reference recovery ${describeReferenceRecovery(deck.referenceRecovery)})`,
+      `  at ${round(altitude_m / FOOT_M)} ft (${round(altitude_m)} m), Mach ${mach}, ISA${isaDev_K >= 0 ? '+' : ''}${round(isaDev_K)} K, power ${round(v.power)}${rating ? ` (${rating})` : ''}`,
+      `  thrust      ${round(v.thrust_N)} N   ${round(v.thrust_N / POUND_FORCE_N)} lbf`,
+      `  fuel flow   ${round(v.fuelFlow_kg_s)} kg/s   ${lbh(v.fuelFlow_kg_s)}`,
+      `  airflow     ${v.airflow_kg_s === null ? 'not tabulated' : `${round(v.airflow_kg_s)} kg/s   ${round(v.airflow_kg_s / POUND_KG)} lb/s`}`,
+      `  TSFC        ${tsfc === null ? 'n/a (thrust not positive)' : `${round(tsfc * 1e6)} mg/(N s)   ${round((tsfc * 3600 * POUND_FORCE_N) / POUND_KG)} lb/(lbf h)`}`,
+      `  table       ${v.outside.length === 0 ? 'inside' : `outside on ${v.outside.join(', ')}`}`,
+      ...v.cautions.map((c) => `  ${c.severity}: ${c.message}`),
+      '',
+      ...SAFETY_NOTICE_LINES,
+      '',
+    ];
+    io.out(lines.join('\n'));
+    return 0;
+  },
+};
