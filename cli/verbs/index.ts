@@ -1,5 +1,6 @@
 import type { Verb } from '../verb';
 import { airVerb } from './air';
+import { deckAtVerb, deckCheckVerb } from './deck';
 
 /**
  * Every verb, in the order `blockwise --help` lists them. A new verb is a
@@ -7,4 +8,6 @@ import { airVerb } from './air';
  */
 export const verbs: readonly Verb[] = [
   airVerb,
+  deckCheckVerb,
+  deckAtVerb,
 ];
