@@ -1,0 +1,76 @@
+/**
+ * Allowance legs: taxi out, take-off, approach, taxi in. Each burns fuel for a
+ * time at a fuel flow (or a set fuel) at the current altitude without
+ * distance:
+ * - taxi: set fuel flow, or the flightIdle fuel flow at Mach 0 (static);
+ * - take-off: set fuel, or the time at the takeoff rating at Mach 0 (static);
+ * - approach: set fuel, or the time at the flightIdle fuel flow at Mach 0.2.
+ * Common-practice allowances; the leg rows show them as such.
+ */
+import type { Leg, MissionInput } from './missionTypes';
+import type { InstalledPoint } from '../propulsion/propulsionModel';
+import { legOk, legFailed, type LegOutcome } from './legOutcome';
+import type { LegTarget, MissionContext } from './missionContext';
+import { S_ALT, S_MASS, S_TIME, type FlightSample, type StateVector } from './missionState';
+import { appendSample } from './timeHistoryBuilder';
+
+/** Mach (-) at which the approach allowance takes the flightIdle fuel flow. */
+export const APPROACH_MACH = 0.2;
+
+type AllowanceLeg = Extract<Leg, { kind: 'taxiOut' | 'takeoff' | 'approach' | 'taxiIn' }>;
+
+/** Fuel (kg) and time (s) of an allowance leg at pressure altitude (m) with ISA deviation (K). */
+export function allowanceFuel(
+  input: MissionInput,
+  leg: AllowanceLeg,
+  altitude_m: number,
+  isaDev_K: number,
+): { readonly fuel_kg: number; readonly time_s: number; readonly point: InstalledPoint | null } {
+  const time_s = Math.max(leg.time_s, 0);
+  if (leg.kind === 'taxiOut' || leg.kind === 'taxiIn') {
+    if (leg.fuelFlow_kg_s !== 'idle') return { fuel_kg: leg.fuelFlow_kg_s * time_s, time_s, point: null };
+    const p = input.propulsion.atRating({ altitude_m, mach: 0, isaDev_K }, 'flightIdle');
+    return { fuel_kg: p.fuelFlow_kg_s * time_s, time_s, point: p };
+  }
+  if (leg.fuel_kg !== null) return { fuel_kg: leg.fuel_kg, time_s, point: null };
+  const rating = leg.kind === 'takeoff' ? 'takeoff' : 'flightIdle';
+  const mach = leg.kind === 'takeoff' ? 0 : APPROACH_MACH;
+  const p = input.propulsion.atRating({ altitude_m, mach, isaDev_K }, rating);
+  return { fuel_kg: p.fuelFlow_kg_s * time_s, time_s, point: p };
+}
+
+function allowanceSample(altitude_m: number, fuelFlow_kg_s: number, point: InstalledPoint | null): FlightSample {
+  return {
+    altitude_m,
+    mach: 0,
+    cas_m_s: 0,
+    tas_m_s: 0,
+    thrustAvailable_N: point?.thrust_N ?? 0,
+    thrustUsed_N: point?.thrust_N ?? 0,
+    drag_N: 0,
+    fuelFlow_kg_s,
+    cl: 0,
+    clMax: 0,
+    buffetLoadFactor: 0,
+    liftToDrag: 0,
+    climbRate_m_s: 0,
+    throatMach: point?.perEngine.throatMach ?? null,
+    propulsionCautions: point?.cautions ?? [],
+  };
+}
+
+/** Flies an allowance leg: mass and time advance, distance does not. */
+export function flyAllowance(ctx: MissionContext, target: LegTarget, start: StateVector, leg: AllowanceLeg): LegOutcome {
+  const { fuel_kg, time_s, point } = allowanceFuel(ctx.input, leg, start[S_ALT], target.env.isaDev_K);
+  const flow = time_s > 0 ? fuel_kg / time_s : 0;
+  const state = Float64Array.from(start);
+  const sample = allowanceSample(start[S_ALT], flow, point);
+  appendSample(ctx.log, target, state, sample);
+  state[S_TIME] += time_s;
+  state[S_MASS] -= fuel_kg;
+  appendSample(ctx.log, target, state, sample);
+  if (!ctx.options.allowNegativeFuel && state[S_MASS] < ctx.zeroFuelMass_kg) {
+    return legFailed(state, 'fuel_exhausted', `Fuel exhausted during ${target.legName}.`, sample);
+  }
+  return legOk(state, sample);
+}

@@ -1,0 +1,101 @@
+/**
+ * Climb at a rating along a CAS/Mach speed schedule by the energy method:
+ * dHp/dt = (T_isa/T) (Thr - D) V / (m g0) f, with the energy share factor f
+ * for held CAS or Mach (energyShareFactor.ts), distance at V cos(gamma), and
+ * the level speed change at the low-altitude limit. Lift = weight (n = 1),
+ * common practice for the energy method.
+ */
+import type { RatingName } from '../propulsion/propulsionModel';
+import type { SpeedSchedule } from './missionTypes';
+import { energyShareFactor, pressureAltitudeRate } from './energyShareFactor';
+import { airPoint, fuelExhaustedG, makeSample, ratingPoint } from './flightPoint';
+import { flySegment } from './flySegment';
+import { legFailed, legOk, type LegOutcome } from './legOutcome';
+import { flyLevelSpeedChange } from './levelSpeedChange';
+import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
+import { machOfCas, missionAir } from './missionAtmosphere';
+import { S_ALT, S_MASS, S_TAS, STATE_SIZE, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
+import { schedulePhases } from './speedSchedule';
+
+/** Climb rate (m/s) below which a climb counts as stalled: 100 ft/min, the service-ceiling rate (common practice). */
+export const CLIMB_STALL_RATE_M_S = (100 * 0.3048) / 60;
+
+/** A held-CAS or held-Mach climb segment at a rating to `toAltitude_m`. */
+export function makeClimbSegment(
+  ctx: MissionContext,
+  target: LegTarget,
+  held: 'cas' | 'mach',
+  value: number,
+  toAltitude_m: number,
+  rating: RatingName,
+): Segment {
+  const input = ctx.input;
+  const dev = target.env.isaDev_K;
+  const evaluate: Segment['evaluate'] = (y) => {
+    const h = y[S_ALT];
+    const air = missionAir(h, dev);
+    const mach = held === 'mach' ? value : machOfCas(value, air.pressure_Pa);
+    const at = airPoint(input, h, mach, y[S_MASS], dev);
+    const th = ratingPoint(input, at, dev, rating);
+    const f = energyShareFactor(held, mach, air.lapse_K_m, air.temperature_K, air.isaTemperature_K);
+    const rate = pressureAltitudeRate(th.thrust_N, at.drag.drag_N, at.tas_m_s, y[S_MASS], f, air.temperature_K, air.isaTemperature_K);
+    const geometric = (rate * air.temperature_K) / air.isaTemperature_K;
+    const horizontal = Math.sqrt(Math.max(at.tas_m_s * at.tas_m_s - geometric * geometric, 0));
+    const d = new Float64Array(STATE_SIZE);
+    d[0] = 1;
+    d[1] = horizontal;
+    d[2] = horizontal + target.env.wind_m_s;
+    d[S_ALT] = rate;
+    d[S_MASS] = -th.fuelFlow_kg_s;
+    d[S_TAS] = 0;
+    return { derivative: d, sample: makeSample(at, th.thrust_N, th.thrust_N, th.fuelFlow_kg_s, rate, th) };
+  };
+  const events: SegmentEvent[] = [
+    { stop: 'altitude_reached', g: (y) => y[S_ALT] - toAltitude_m },
+    { stop: 'climb_stalled', g: (_y, s) => CLIMB_STALL_RATE_M_S - s.climbRate_m_s },
+  ];
+  if (!ctx.options.allowNegativeFuel) events.push({ stop: 'fuel_exhausted', g: (y) => fuelExhaustedG(ctx.zeroFuelMass_kg, y[S_MASS]) });
+  return { step_s: BASE_STEP_S.climb * ctx.options.stepScale, evaluate, events };
+}
+
+/** Flies a whole climb from the current altitude to `toAltitude_m` along `schedule` at `rating`. */
+export function flyClimb(
+  ctx: MissionContext,
+  target: LegTarget,
+  start: StateVector,
+  toAltitude_m: number,
+  schedule: SpeedSchedule,
+  rating: RatingName,
+): LegOutcome {
+  let state = Float64Array.from(start);
+  let last: FlightSample | null = null;
+  if (toAltitude_m <= state[S_ALT]) return legOk(state, null);
+  for (const phase of schedulePhases(schedule, state[S_ALT], toAltitude_m)) {
+    if (phase.kind === 'speedChange') {
+      const out = flyLevelSpeedChange(ctx, target, state, phase.toMach, rating);
+      if (out.status !== 'ok') return out;
+      state = out.state;
+      last = out.lastSample ?? last;
+      continue;
+    }
+    const run = flySegment(ctx, target, makeClimbSegment(ctx, target, phase.held, phase.value, phase.to_m, rating), state);
+    state = run.end;
+    last = run.endSample;
+    state[S_TAS] = run.endSample.tas_m_s;
+    if (run.stop === 'altitude_reached') {
+      state[S_ALT] = phase.to_m;
+      continue;
+    }
+    if (run.stop === 'fuel_exhausted') return legFailed(state, 'fuel_exhausted', `Fuel exhausted in the climb on ${target.legName}.`, last);
+    if (run.stop === 'climb_stalled') {
+      return legFailed(
+        state,
+        'climb_not_reached',
+        `The climb on ${target.legName} stalled at ${state[S_ALT].toFixed(0)} m, below its ${toAltitude_m.toFixed(0)} m target.`,
+        last,
+      );
+    }
+    return legFailed(state, 'infeasible', `The climb on ${target.legName} stopped: ${run.stop}.`, last);
+  }
+  return legOk(state, last);
+}

@@ -1,0 +1,184 @@
+/**
+ * Cruise leg: constant Mach (set, best-range or long-range) at constant
+ * altitude, with optional step climbs or a cruise-climb, flown for a
+ * still-air distance. Thrust = drag at part power (maxCruise ceiling).
+ *
+ * Step climb: a step of `step_m` is taken as soon as the higher level gives a
+ * better specific range at the current mass AND the climb rate at maxClimb
+ * there (held Mach, energy share factor) is at least the residual climb rate
+ * set in the caution settings; the step is flown as a held-Mach climb at
+ * maxClimb. Cruise-climb: the altitude follows the optimum (maximum specific
+ * range at the leg's speed rule) between the leg altitude and the maximum.
+ */
+import { bestRangeMach, goldenMaximum, longRangeMach, specificRange } from './bestSpeeds';
+import { makeClimbSegment } from './climbLeg';
+import { energyShareFactor, pressureAltitudeRate } from './energyShareFactor';
+import { airPoint, ratingPoint } from './flightPoint';
+import { flySegment } from './flySegment';
+import { legFailed, legOk, type LegOutcome } from './legOutcome';
+import { makeLevelSegment } from './levelFlight';
+import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
+import { missionAir } from './missionAtmosphere';
+import type { CruiseProfile, CruiseSpeed, MissionInput } from './missionTypes';
+import { S_AIR, S_ALT, S_MASS, S_TAS, type FlightSample, type SegmentEvent, type StateVector } from './missionState';
+import { appendCaution } from './timeHistoryBuilder';
+import { CAUTION_CATALOGUE } from '../cautions/cautionCatalogue';
+
+export interface CruiseSpec {
+  readonly altitude_m: number;
+  readonly speed: CruiseSpeed;
+  readonly profile: CruiseProfile;
+  /** Still-air distance to fly (m). */
+  readonly distance_m: number;
+}
+
+/** Cruise Mach (-) for a speed rule at altitude (m) and mass (kg). */
+export function cruiseMach(input: MissionInput, speed: CruiseSpeed, altitude_m: number, mass_kg: number, isaDev_K: number): number {
+  if (speed.kind === 'mach') return speed.mach;
+  if (speed.kind === 'bestRange') return bestRangeMach(input, altitude_m, mass_kg, isaDev_K);
+  return longRangeMach(input, altitude_m, mass_kg, isaDev_K);
+}
+
+/** Climb rate (m/s) at maxClimb holding Mach at altitude (m) and mass (kg). */
+function heldMachClimbRate(input: MissionInput, altitude_m: number, mach: number, mass_kg: number, isaDev_K: number): number {
+  const air = missionAir(altitude_m, isaDev_K);
+  const at = airPoint(input, altitude_m, mach, mass_kg, isaDev_K);
+  const thrust = ratingPoint(input, at, isaDev_K, 'maxClimb').thrust_N;
+  const f = energyShareFactor('mach', mach, air.lapse_K_m, air.temperature_K, air.isaTemperature_K);
+  return pressureAltitudeRate(thrust, at.drag.drag_N, at.tas_m_s, mass_kg, f, air.temperature_K, air.isaTemperature_K);
+}
+
+function failed(ctx: MissionContext, target: LegTarget, state: StateVector, stop: string, last: FlightSample): LegOutcome {
+  if (stop === 'fuel_exhausted') return legFailed(state, 'fuel_exhausted', `Fuel exhausted in the cruise on ${target.legName}.`, last);
+  if (stop === 'thrust_below_drag') {
+    appendCaution(
+      ctx.log,
+      target,
+      {
+        id: 'thrust_below_drag',
+        severity: CAUTION_CATALOGUE.thrust_below_drag.severity,
+        message: `On ${target.legName} the drag ${last.drag_N.toFixed(0)} N exceeds the maxCruise thrust ${last.thrustAvailable_N.toFixed(0)} N at Mach ${last.mach.toFixed(3)}, ${last.altitude_m.toFixed(0)} m.`,
+        value: last.thrustAvailable_N,
+        threshold: last.drag_N,
+      },
+      state[0],
+    );
+    return legFailed(state, 'thrust_below_drag', `Thrust below drag in the cruise on ${target.legName}.`, last);
+  }
+  return legFailed(state, 'infeasible', `The cruise on ${target.legName} stopped: ${stop}.`, last);
+}
+
+/** Flies a cruise leg from `start` for `spec.distance_m` of still air. */
+export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVector, spec: CruiseSpec): LegOutcome {
+  const input = ctx.input;
+  const dev = target.env.isaDev_K;
+  const endAir = start[S_AIR] + Math.max(spec.distance_m, 0);
+  let state = Float64Array.from(start);
+  state[S_ALT] = spec.altitude_m;
+  let last: FlightSample | null = null;
+  const step_s = BASE_STEP_S.cruise * ctx.options.stepScale;
+  const profile = spec.profile;
+
+  if (profile.kind === 'cruiseClimb') {
+    const floor = spec.altitude_m;
+    const ceiling = Math.max(profile.maxAltitude_m, floor);
+    const altitudeOf = (m: number) =>
+      ceiling - floor < 1
+        ? floor
+        : goldenMaximum((h) => specificRange(input, h, cruiseMach(input, spec.speed, h, m, dev), m, dev), floor, ceiling, 0.5);
+    const run = flySegment(
+      ctx,
+      target,
+      makeLevelSegment(ctx, target, {
+        altitudeOf,
+        algebraicAltitude: true,
+        machOf: (h, m) => cruiseMach(input, spec.speed, h, m, dev),
+        ceiling: 'maxCruise',
+        step_s,
+        endAirDistance_m: endAir,
+        endTime_s: null,
+      }),
+      state,
+    );
+    state = run.end;
+    state[S_TAS] = run.endSample.tas_m_s;
+    if (run.endSample.altitude_m >= ceiling - 1 && ceiling > floor) {
+      appendCaution(
+        ctx.log,
+        target,
+        {
+          id: 'profile_altitude_limited',
+          severity: CAUTION_CATALOGUE.profile_altitude_limited.severity,
+          message: `The cruise-climb on ${target.legName} reached its maximum altitude ${ceiling.toFixed(0)} m.`,
+          value: run.endSample.altitude_m,
+          threshold: ceiling,
+        },
+        state[0],
+      );
+    }
+    if (run.stop === 'distance_reached') {
+      state[S_AIR] = endAir;
+      return legOk(state, run.endSample);
+    }
+    return failed(ctx, target, state, run.stop, run.endSample);
+  }
+
+  for (let guard = 0; guard < 200; guard++) {
+    const h = state[S_ALT];
+    const extra: SegmentEvent[] = [];
+    const canStep = profile.kind === 'stepClimb' && profile.step_m > 0 && h + profile.step_m <= profile.maxAltitude_m + 1e-6;
+    if (canStep) {
+      const up = h + profile.step_m;
+      const minRate = Math.max(ctx.input.cautionSettings.minResidualClimbRate_m_s, 1e-3);
+      extra.push({
+        stop: 'step_climb_due',
+        g: (y, s) => {
+          const m = y[S_MASS];
+          const srNow = specificRange(input, h, s.mach, m, dev);
+          const machUp = cruiseMach(input, spec.speed, up, m, dev);
+          const srUp = specificRange(input, up, machUp, m, dev);
+          const gain = srNow > 0 ? (srUp - srNow) / srNow : srUp > 0 ? 1 : -1;
+          const rateMargin = (heldMachClimbRate(input, up, machUp, m, dev) - minRate) / minRate;
+          return Math.min(gain, rateMargin);
+        },
+      });
+    }
+    const run = flySegment(
+      ctx,
+      target,
+      makeLevelSegment(ctx, target, {
+        altitudeOf: () => h,
+        algebraicAltitude: false,
+        machOf: (alt, m) => cruiseMach(input, spec.speed, alt, m, dev),
+        ceiling: 'maxCruise',
+        step_s,
+        endAirDistance_m: endAir,
+        endTime_s: null,
+        extraEvents: extra,
+      }),
+      state,
+    );
+    state = run.end;
+    last = run.endSample;
+    state[S_TAS] = last.tas_m_s;
+    if (run.stop === 'distance_reached') {
+      state[S_AIR] = endAir;
+      return legOk(state, last);
+    }
+    if (run.stop !== 'step_climb_due' || profile.kind !== 'stepClimb') return failed(ctx, target, state, run.stop, last);
+    const up = h + profile.step_m;
+    const climbMach = last.mach;
+    const climb = flySegment(ctx, target, makeClimbSegment(ctx, target, 'mach', climbMach, up, 'maxClimb'), state);
+    state = climb.end;
+    last = climb.endSample;
+    state[S_TAS] = last.tas_m_s;
+    if (climb.stop !== 'altitude_reached') {
+      return climb.stop === 'fuel_exhausted'
+        ? failed(ctx, target, state, climb.stop, last)
+        : legFailed(state, 'climb_not_reached', `The step climb on ${target.legName} stalled at ${state[S_ALT].toFixed(0)} m.`, last);
+    }
+    state[S_ALT] = up;
+    if (state[S_AIR] >= endAir) return legOk(state, last);
+  }
+  return legFailed(state, 'infeasible', `Too many step climbs on ${target.legName}.`, last);
+}

@@ -1,0 +1,141 @@
+/**
+ * Descent along a CAS/Mach speed schedule to a pressure altitude: at idle
+ * (flightIdle rating, rate from the energy equation with the energy share
+ * factor) or at a set rate (thrust from the energy equation solved for
+ * thrust, then the part-power setting giving it). The level deceleration at
+ * the low-altitude speed limit is flown at idle. Energy method as in
+ * climbLeg.ts (BADA 3 User Manual total-energy model, from memory).
+ */
+import type { SpeedSchedule } from './missionTypes';
+import { energyShareFactor, pressureAltitudeRate } from './energyShareFactor';
+import { airPoint, fuelExhaustedG, makeSample, ratingPoint, thrustPoint } from './flightPoint';
+import { flySegment } from './flySegment';
+import { legFailed, legOk, type LegOutcome } from './legOutcome';
+import { flyLevelSpeedChange } from './levelSpeedChange';
+import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
+import { G0_M_S2, machOfCas, missionAir } from './missionAtmosphere';
+import { S_ALT, S_MASS, S_TAS, STATE_SIZE, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
+import { schedulePhases } from './speedSchedule';
+import { appendCaution } from './timeHistoryBuilder';
+import { CAUTION_CATALOGUE } from '../cautions/cautionCatalogue';
+
+export type DescentMode = { readonly kind: 'idle' } | { readonly kind: 'rate'; readonly rate_m_s: number };
+
+/** Least descent rate (m/s) that counts as progress at idle. */
+export const DESCENT_STALL_RATE_M_S = 0.05;
+
+function makeDescentSegment(
+  ctx: MissionContext,
+  target: LegTarget,
+  held: 'cas' | 'mach',
+  value: number,
+  toAltitude_m: number,
+  mode: DescentMode,
+  onBelowIdle: (time_s: number, thrustRequired_N: number, idle_N: number) => void,
+): Segment {
+  const input = ctx.input;
+  const dev = target.env.isaDev_K;
+  const evaluate: Segment['evaluate'] = (y) => {
+    const h = y[S_ALT];
+    const m = y[S_MASS];
+    const air = missionAir(h, dev);
+    const mach = held === 'mach' ? value : machOfCas(value, air.pressure_Pa);
+    const at = airPoint(input, h, mach, m, dev);
+    const f = energyShareFactor(held, mach, air.lapse_K_m, air.temperature_K, air.isaTemperature_K);
+    let rate: number;
+    let thrust: number;
+    let engine;
+    let thrustAvailable: number;
+    if (mode.kind === 'idle') {
+      engine = ratingPoint(input, at, dev, 'flightIdle');
+      thrust = engine.thrust_N;
+      thrustAvailable = thrust;
+      rate = pressureAltitudeRate(thrust, at.drag.drag_N, at.tas_m_s, m, f, air.temperature_K, air.isaTemperature_K);
+    } else {
+      rate = -Math.abs(mode.rate_m_s);
+      const denominator = at.tas_m_s * f;
+      const required =
+        denominator > 0 ? at.drag.drag_N + (m * G0_M_S2 * (air.temperature_K / air.isaTemperature_K) * rate) / denominator : at.drag.drag_N;
+      engine = thrustPoint(input, at, dev, required, 'maxClimb');
+      thrust = engine.thrust_N;
+      thrustAvailable = ratingPoint(input, at, dev, 'maxClimb').thrust_N;
+      if (engine.limit === 'below_idle') onBelowIdle(y[0], required, engine.thrust_N);
+    }
+    const geometric = (rate * air.temperature_K) / air.isaTemperature_K;
+    const horizontal = Math.sqrt(Math.max(at.tas_m_s * at.tas_m_s - geometric * geometric, 0));
+    const d = new Float64Array(STATE_SIZE);
+    d[0] = 1;
+    d[1] = horizontal;
+    d[2] = horizontal + target.env.wind_m_s;
+    d[S_ALT] = rate;
+    d[S_MASS] = -engine.fuelFlow_kg_s;
+    return { derivative: d, sample: makeSample(at, thrustAvailable, thrust, engine.fuelFlow_kg_s, rate, engine) };
+  };
+  const events: SegmentEvent[] = [
+    { stop: 'altitude_reached', g: (y) => toAltitude_m - y[S_ALT] },
+    { stop: 'descent_stalled', g: (_y, s) => s.climbRate_m_s + DESCENT_STALL_RATE_M_S },
+  ];
+  if (!ctx.options.allowNegativeFuel) events.push({ stop: 'fuel_exhausted', g: (y) => fuelExhaustedG(ctx.zeroFuelMass_kg, y[S_MASS]) });
+  return { step_s: BASE_STEP_S.descent * ctx.options.stepScale, evaluate, events };
+}
+
+/** Flies a whole descent from the current altitude to `toAltitude_m`. */
+export function flyDescent(
+  ctx: MissionContext,
+  target: LegTarget,
+  start: StateVector,
+  toAltitude_m: number,
+  schedule: SpeedSchedule,
+  mode: DescentMode,
+): LegOutcome {
+  let state = Float64Array.from(start);
+  let last: FlightSample | null = null;
+  if (toAltitude_m >= state[S_ALT]) return legOk(state, null);
+  let belowIdle: { time_s: number; required: number; idle: number } | null = null;
+  const onBelowIdle = (time_s: number, required: number, idle: number) => {
+    if (belowIdle === null) belowIdle = { time_s, required, idle };
+  };
+  for (const phase of schedulePhases(schedule, state[S_ALT], toAltitude_m)) {
+    if (phase.kind === 'speedChange') {
+      if (state[S_TAS] <= 0) state[S_TAS] = phase.fromMach * missionAir(state[S_ALT], target.env.isaDev_K).speedOfSound_m_s;
+      const out = flyLevelSpeedChange(ctx, target, state, phase.toMach, 'flightIdle');
+      if (out.status !== 'ok') return out;
+      state = out.state;
+      last = out.lastSample ?? last;
+      continue;
+    }
+    const run = flySegment(ctx, target, makeDescentSegment(ctx, target, phase.held, phase.value, phase.to_m, mode, onBelowIdle), state);
+    state = run.end;
+    last = run.endSample;
+    state[S_TAS] = run.endSample.tas_m_s;
+    if (run.stop === 'altitude_reached') {
+      state[S_ALT] = phase.to_m;
+      continue;
+    }
+    if (run.stop === 'fuel_exhausted') return legFailed(state, 'fuel_exhausted', `Fuel exhausted in the descent on ${target.legName}.`, last);
+    return legFailed(
+      state,
+      'infeasible',
+      run.stop === 'descent_stalled'
+        ? `Idle thrust exceeds drag: the descent on ${target.legName} cannot continue below ${state[S_ALT].toFixed(0)} m.`
+        : `The descent on ${target.legName} stopped: ${run.stop}.`,
+      last,
+    );
+  }
+  const found = belowIdle as { time_s: number; required: number; idle: number } | null;
+  if (found !== null) {
+    appendCaution(
+      ctx.log,
+      target,
+      {
+        id: 'descent_thrust_below_idle',
+        severity: CAUTION_CATALOGUE.descent_thrust_below_idle.severity,
+        message: `The set descent rate on ${target.legName} needs ${found.required.toFixed(0)} N, below idle thrust ${found.idle.toFixed(0)} N; idle fuel flow used.`,
+        value: found.required,
+        threshold: found.idle,
+      },
+      found.time_s,
+    );
+  }
+  return legOk(state, last);
+}

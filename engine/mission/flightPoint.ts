@@ -1,0 +1,81 @@
+/**
+ * Evaluates the airframe and the installed engines at one flight point and
+ * packs the result as a FlightSample.
+ */
+import type { DragBreakdown } from '../aero/aeroModel';
+import type { InstalledPoint, PartPowerPoint, RatingName } from '../propulsion/propulsionModel';
+import { casOfMach, missionAir, type MissionAir } from './missionAtmosphere';
+import type { MissionInput } from './missionTypes';
+import type { FlightSample } from './missionState';
+
+export interface AirPoint {
+  readonly altitude_m: number;
+  readonly air: MissionAir;
+  readonly mach: number;
+  readonly tas_m_s: number;
+  readonly cas_m_s: number;
+  readonly drag: DragBreakdown;
+}
+
+/** Air data and 1 g drag at pressure altitude (m), Mach (-), mass (kg), ISA deviation (K). */
+export function airPoint(input: MissionInput, altitude_m: number, mach: number, mass_kg: number, isaDev_K: number): AirPoint {
+  const air = missionAir(altitude_m, isaDev_K);
+  const drag = input.aero.drag({ altitude_m, mach, mass_kg, loadFactor: 1 });
+  return {
+    altitude_m,
+    air,
+    mach,
+    tas_m_s: mach * air.speedOfSound_m_s,
+    cas_m_s: casOfMach(mach, air.pressure_Pa),
+    drag,
+  };
+}
+
+/** Installed thrust and fuel flow (all engines) at a rating. */
+export function ratingPoint(input: MissionInput, at: AirPoint, isaDev_K: number, rating: RatingName): InstalledPoint {
+  return input.propulsion.atRating({ altitude_m: at.altitude_m, mach: at.mach, isaDev_K }, rating);
+}
+
+/** Part-power point giving `thrust_N` (all engines), limited by `ceiling`. */
+export function thrustPoint(
+  input: MissionInput,
+  at: AirPoint,
+  isaDev_K: number,
+  thrust_N: number,
+  ceiling: RatingName,
+): PartPowerPoint {
+  return input.propulsion.forThrust({ altitude_m: at.altitude_m, mach: at.mach, isaDev_K }, thrust_N, ceiling);
+}
+
+/** Packs a FlightSample. */
+export function makeSample(
+  at: AirPoint,
+  thrustAvailable_N: number,
+  thrustUsed_N: number,
+  fuelFlow_kg_s: number,
+  climbRate_m_s: number,
+  engine: InstalledPoint,
+): FlightSample {
+  return {
+    altitude_m: at.altitude_m,
+    mach: at.mach,
+    cas_m_s: at.cas_m_s,
+    tas_m_s: at.tas_m_s,
+    thrustAvailable_N,
+    thrustUsed_N,
+    drag_N: at.drag.drag_N,
+    fuelFlow_kg_s,
+    cl: at.drag.cl,
+    clMax: at.drag.clMax,
+    buffetLoadFactor: at.drag.buffetLoadFactor,
+    liftToDrag: at.drag.liftToDrag,
+    climbRate_m_s,
+    throatMach: engine.perEngine.throatMach,
+    propulsionCautions: engine.cautions,
+  };
+}
+
+/** Fuel-exhaustion event function: >= 0 once the mass reaches zero-fuel mass. */
+export function fuelExhaustedG(zeroFuelMass_kg: number, mass_kg: number): number {
+  return zeroFuelMass_kg - mass_kg;
+}

@@ -1,0 +1,137 @@
+/**
+ * Flies the mission's legs in order from block-out at a ramp mass, with the
+ * solvable cruise leg's distance given. Stops at the first leg that fails and
+ * says why. Leg rows and the trip's marks (take-off, landing) come back with
+ * the final state.
+ */
+import type { LegRow, MissionInput, MissionStatus } from './missionTypes';
+import { flyAllowance } from './allowanceLegs';
+import { flyClimb } from './climbLeg';
+import { flyCruise } from './cruiseLeg';
+import { flyDescent } from './descentLeg';
+import { flyHold } from './holdLeg';
+import type { LegOutcome } from './legOutcome';
+import { legEnvironment, type LegTarget, type MissionContext } from './missionContext';
+import { S_AIR, S_ALT, S_MASS, S_TIME, STATE_SIZE, type StateVector } from './missionState';
+import { appendCaution } from './timeHistoryBuilder';
+import { checkResidualClimb } from '../cautions/checks';
+import { CAUTION_CATALOGUE } from '../cautions/cautionCatalogue';
+
+export interface TripOutcome {
+  readonly status: MissionStatus;
+  readonly message: string;
+  readonly rows: readonly LegRow[];
+  readonly end: StateVector;
+  /** State at the start of the first airborne-side leg (after taxi out) and at landing (before taxi in). */
+  readonly takeoff: StateVector;
+  readonly landing: StateVector;
+  /** Still-air distance flown on the solvable cruise leg (m), 0 when there is none. */
+  readonly solvableDistance_m: number;
+}
+
+/** Index of the cruise leg whose distance is solved (distance_m null), or -1. */
+export function solvableLegIndex(input: MissionInput): number {
+  return input.legs.findIndex((l) => l.kind === 'cruise' && l.distance_m === null);
+}
+
+/** Index of the first leg that is not taxi out, and of the last that is not taxi in. */
+export function tripBounds(input: MissionInput): { readonly first: number; readonly last: number } {
+  let first = 0;
+  while (first < input.legs.length && input.legs[first].kind === 'taxiOut') first++;
+  let last = input.legs.length - 1;
+  while (last >= 0 && input.legs[last].kind === 'taxiIn') last--;
+  return { first, last };
+}
+
+export function initialState(rampMass_kg: number): StateVector {
+  const s = new Float64Array(STATE_SIZE);
+  s[S_MASS] = rampMass_kg;
+  return s;
+}
+
+function flyLeg(ctx: MissionContext, index: number, state: StateVector, solvedDistance_m: number): LegOutcome {
+  const leg = ctx.input.legs[index];
+  const target: LegTarget = { legIndex: index, legName: leg.name, env: legEnvironment(ctx.input, leg), recordHistory: true };
+  switch (leg.kind) {
+    case 'taxiOut':
+    case 'takeoff':
+    case 'approach':
+    case 'taxiIn':
+      return flyAllowance(ctx, target, state, leg);
+    case 'climb': {
+      const out = flyClimb(ctx, target, state, leg.toAltitude_m, leg.schedule, leg.rating);
+      if (out.status === 'ok' && out.lastSample !== null) {
+        appendCaution(
+          ctx.log,
+          target,
+          checkResidualClimb(out.lastSample.climbRate_m_s, ctx.input.cautionSettings.minResidualClimbRate_m_s),
+          out.state[S_TIME],
+        );
+      }
+      if (out.status === 'climb_not_reached') {
+        appendCaution(
+          ctx.log,
+          target,
+          {
+            id: 'climb_not_reached',
+            severity: CAUTION_CATALOGUE.climb_not_reached.severity,
+            message: out.message,
+            value: out.state[S_ALT],
+            threshold: leg.toAltitude_m,
+          },
+          out.state[S_TIME],
+        );
+      }
+      return out;
+    }
+    case 'cruise':
+      return flyCruise(ctx, target, state, {
+        altitude_m: leg.altitude_m,
+        speed: leg.speed,
+        profile: leg.profile,
+        distance_m: leg.distance_m ?? solvedDistance_m,
+      });
+    case 'descent':
+      return flyDescent(ctx, target, state, leg.toAltitude_m, leg.schedule, leg.mode);
+    case 'hold':
+      return flyHold(ctx, target, state, leg.altitude_m, leg.time_s, leg.speed);
+  }
+}
+
+/** Flies every leg from `rampMass_kg`; `solvedDistance_m` is the still-air distance of the solvable cruise leg. */
+export function flyTrip(ctx: MissionContext, rampMass_kg: number, solvedDistance_m: number): TripOutcome {
+  const { first, last } = tripBounds(ctx.input);
+  const solvable = solvableLegIndex(ctx.input);
+  let state = initialState(rampMass_kg);
+  let takeoff = state;
+  let landing = state;
+  let solvableDistance_m = 0;
+  const rows: LegRow[] = [];
+  for (let i = 0; i < ctx.input.legs.length; i++) {
+    if (i === first) takeoff = Float64Array.from(state);
+    const start = state;
+    const out = flyLeg(ctx, i, state, Math.max(solvedDistance_m, 0));
+    state = out.state;
+    rows.push({
+      index: i,
+      name: ctx.input.legs[i].name,
+      kind: ctx.input.legs[i].kind,
+      startTime_s: start[S_TIME],
+      endTime_s: state[S_TIME],
+      startDistance_m: start[S_AIR],
+      endDistance_m: state[S_AIR],
+      startAltitude_m: start[S_ALT],
+      endAltitude_m: state[S_ALT],
+      startMass_kg: start[S_MASS],
+      endMass_kg: state[S_MASS],
+      fuel_kg: start[S_MASS] - state[S_MASS],
+    });
+    if (i === solvable) solvableDistance_m = state[S_AIR] - start[S_AIR];
+    if (i === last) landing = Float64Array.from(state);
+    if (out.status !== 'ok') {
+      return { status: out.status, message: out.message, rows, end: state, takeoff, landing: state, solvableDistance_m };
+    }
+  }
+  if (last < first) landing = Float64Array.from(state);
+  return { status: 'ok', message: '', rows, end: state, takeoff, landing, solvableDistance_m };
+}

@@ -1,0 +1,130 @@
+/**
+ * Fuel iteration for the solve modes. One evaluation flies the trip and the
+ * reserves (fuel may pass below zero-fuel mass while iterating) and returns
+ * the residual = fuel at block-in - reserve fuel required.
+ *
+ * - payloadRange: the ramp mass is found by the secant method so the residual
+ *   is within FUEL_TOLERANCE_KG, while the solvable cruise leg's still-air
+ *   distance is reset each pass so the trip's total still-air distance equals
+ *   the range (within DISTANCE_TOLERANCE_M).
+ * - fixed ramp mass (maxRange, or takeoffWeight with a solvable leg): the
+ *   solvable leg's still-air distance is found by the secant method so the
+ *   residual vanishes.
+ * Secant method: any numerical-analysis text (e.g. Burden & Faires,
+ * Numerical Analysis, section 2.3).
+ */
+import { specificRange } from './bestSpeeds';
+import { cruiseMach } from './cruiseLeg';
+import { flyReserves, type ReserveFlight } from './reserves';
+import { flyTrip, solvableLegIndex, type TripOutcome } from './flyTrip';
+import { legEnvironment, type MissionContext } from './missionContext';
+import { S_AIR, S_MASS, S_TIME } from './missionState';
+import { createFlightLog } from './timeHistoryBuilder';
+
+/** Fuel residual tolerance (kg): the mission lands with the reserve to within this. */
+export const FUEL_TOLERANCE_KG = 0.1;
+/** Range tolerance (m) of the payloadRange mode. */
+export const DISTANCE_TOLERANCE_M = 1;
+export const MAX_ITERATIONS = 40;
+
+export interface MissionEvaluation {
+  readonly trip: TripOutcome;
+  readonly reserves: ReserveFlight;
+  readonly residual_kg: number;
+}
+
+/** Flies trip and reserves from `rampMass_kg` with the solvable leg at `distance_m`. */
+export function evaluateMission(ctx: MissionContext, rampMass_kg: number, distance_m: number): MissionEvaluation {
+  const trip = flyTrip(ctx, rampMass_kg, distance_m);
+  const tripFuel_kg = trip.takeoff[S_MASS] - trip.landing[S_MASS];
+  const tripTime_s = trip.landing[S_TIME] - trip.takeoff[S_TIME];
+  const reserves = flyReserves(ctx, { tripFuel_kg, tripTime_s, landing: trip.landing });
+  const residual_kg = trip.end[S_MASS] - ctx.zeroFuelMass_kg - reserves.breakdown.total_kg;
+  return { trip, reserves, residual_kg };
+}
+
+export interface IterationOutcome {
+  readonly converged: boolean;
+  readonly rampMass_kg: number;
+  readonly distance_m: number;
+  readonly iterations: number;
+  readonly residual_kg: number;
+  /** Set when a flight inside the iteration failed for a reason other than fuel. */
+  readonly failure: MissionEvaluation | null;
+}
+
+function scratch(ctx: MissionContext): MissionContext {
+  return {
+    ...ctx,
+    options: { ...ctx.options, allowNegativeFuel: true },
+    log: createFlightLog(ctx.input.airframe, ctx.input.cautionSettings),
+  };
+}
+
+function failedFlight(e: MissionEvaluation): boolean {
+  return e.trip.status !== 'ok' || e.reserves.status !== 'ok';
+}
+
+/** payloadRange: ramp mass (kg) and solvable distance (m) so the trip's still-air distance is `range_m` and the residual vanishes. */
+export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess_kg: number): IterationOutcome {
+  let x0 = firstGuess_kg;
+  let d = range_m;
+  let e0 = evaluateMission(scratch(ctx), x0, d);
+  if (failedFlight(e0)) return { converged: false, rampMass_kg: x0, distance_m: d, iterations: 1, residual_kg: e0.residual_kg, failure: e0 };
+  let other = e0.trip.end[S_AIR] - e0.trip.solvableDistance_m;
+  let x1 = x0 - e0.residual_kg / 0.85;
+  for (let k = 2; k <= MAX_ITERATIONS; k++) {
+    d = Math.max(range_m - other, 0);
+    const e1 = evaluateMission(scratch(ctx), x1, d);
+    if (failedFlight(e1)) return { converged: false, rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, failure: e1 };
+    other = e1.trip.end[S_AIR] - e1.trip.solvableDistance_m;
+    const distanceError = e1.trip.end[S_AIR] - range_m;
+    if (Math.abs(e1.residual_kg) <= FUEL_TOLERANCE_KG && Math.abs(distanceError) <= DISTANCE_TOLERANCE_M) {
+      return { converged: true, rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, failure: null };
+    }
+    const slope = (e1.residual_kg - e0.residual_kg) / (x1 - x0);
+    const next = Number.isFinite(slope) && Math.abs(slope) > 0.05 ? x1 - e1.residual_kg / slope : x1 - e1.residual_kg / 0.85;
+    x0 = x1;
+    e0 = e1;
+    x1 = next;
+    if (!Number.isFinite(x1) || x1 <= 0) break;
+  }
+  return { converged: false, rampMass_kg: x1, distance_m: d, iterations: MAX_ITERATIONS, residual_kg: e0.residual_kg, failure: null };
+}
+
+/** Fixed ramp mass: the solvable leg's still-air distance (m) so the residual vanishes. */
+export function iterateDistance(ctx: MissionContext, rampMass_kg: number): IterationOutcome {
+  const input = ctx.input;
+  let d0 = 0;
+  let e0 = evaluateMission(scratch(ctx), rampMass_kg, d0);
+  if (failedFlight(e0)) return { converged: false, rampMass_kg, distance_m: 0, iterations: 1, residual_kg: e0.residual_kg, failure: e0 };
+  if (e0.residual_kg < 0) {
+    return { converged: false, rampMass_kg, distance_m: 0, iterations: 1, residual_kg: e0.residual_kg, failure: null };
+  }
+  if (Math.abs(e0.residual_kg) <= FUEL_TOLERANCE_KG) {
+    return { converged: true, rampMass_kg, distance_m: 0, iterations: 1, residual_kg: e0.residual_kg, failure: null };
+  }
+  const leg = input.legs[solvableLegIndex(input)];
+  let sr = 0;
+  if (leg && leg.kind === 'cruise') {
+    const env = legEnvironment(input, leg);
+    const m = e0.trip.takeoff[S_MASS];
+    sr = specificRange(input, leg.altitude_m, cruiseMach(input, leg.speed, leg.altitude_m, m, env.isaDev_K), m, env.isaDev_K);
+  }
+  let d1 = e0.residual_kg * (sr > 0 ? sr : 100);
+  for (let k = 2; k <= MAX_ITERATIONS; k++) {
+    const e1 = evaluateMission(scratch(ctx), rampMass_kg, d1);
+    if (failedFlight(e1)) return { converged: false, rampMass_kg, distance_m: d1, iterations: k, residual_kg: e1.residual_kg, failure: e1 };
+    if (Math.abs(e1.residual_kg) <= FUEL_TOLERANCE_KG) {
+      return { converged: true, rampMass_kg, distance_m: d1, iterations: k, residual_kg: e1.residual_kg, failure: null };
+    }
+    const slope = (e1.residual_kg - e0.residual_kg) / (d1 - d0);
+    let next = Number.isFinite(slope) && slope < 0 ? d1 - e1.residual_kg / slope : d1 + e1.residual_kg * (sr > 0 ? sr : 100);
+    if (next < 0) next = 0.5 * d1;
+    d0 = d1;
+    e0 = e1;
+    d1 = next;
+    if (!Number.isFinite(d1)) break;
+  }
+  return { converged: false, rampMass_kg, distance_m: d1, iterations: MAX_ITERATIONS, residual_kg: e0.residual_kg, failure: null };
+}

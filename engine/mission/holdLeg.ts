@@ -1,0 +1,59 @@
+/**
+ * Hold at constant pressure altitude for a time, at the best-endurance speed
+ * (minimum drag for a jet; Anderson, Aircraft Performance and Design,
+ * section 5.14) re-chosen as mass falls, or at a set CAS. Thrust = drag at
+ * part power with a maxContinuous ceiling.
+ */
+import { minimumDragMach } from './bestSpeeds';
+import { flySegment } from './flySegment';
+import { legFailed, legOk, type LegOutcome } from './legOutcome';
+import { makeLevelSegment } from './levelFlight';
+import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
+import { machOfCas, missionAir } from './missionAtmosphere';
+import { S_ALT, S_TAS, S_TIME, type StateVector } from './missionState';
+import { appendCaution } from './timeHistoryBuilder';
+import { checkThrustBelowDrag } from '../cautions/checks';
+
+export type HoldSpeed = { readonly kind: 'bestEndurance' } | { readonly kind: 'cas'; readonly cas_m_s: number };
+
+export function flyHold(
+  ctx: MissionContext,
+  target: LegTarget,
+  start: StateVector,
+  altitude_m: number,
+  time_s: number,
+  speed: HoldSpeed,
+): LegOutcome {
+  const input = ctx.input;
+  const dev = target.env.isaDev_K;
+  const state = Float64Array.from(start);
+  state[S_ALT] = altitude_m;
+  if (!(time_s > 0)) return legOk(state, null);
+  const fixedMach = speed.kind === 'cas' ? machOfCas(speed.cas_m_s, missionAir(altitude_m, 0).pressure_Pa) : 0;
+  const run = flySegment(
+    ctx,
+    target,
+    makeLevelSegment(ctx, target, {
+      altitudeOf: () => altitude_m,
+      algebraicAltitude: false,
+      machOf: (h, m) => (speed.kind === 'cas' ? fixedMach : minimumDragMach(input, h, m, dev)),
+      ceiling: 'maxContinuous',
+      step_s: BASE_STEP_S.hold * ctx.options.stepScale,
+      endAirDistance_m: null,
+      endTime_s: state[S_TIME] + time_s,
+    }),
+    state,
+  );
+  const end = run.end;
+  end[S_TAS] = run.endSample.tas_m_s;
+  if (run.stop === 'time_reached') {
+    end[S_TIME] = state[S_TIME] + time_s;
+    return legOk(end, run.endSample);
+  }
+  if (run.stop === 'thrust_below_drag') {
+    appendCaution(ctx.log, target, checkThrustBelowDrag(run.endSample.thrustAvailable_N, run.endSample.drag_N), end[S_TIME]);
+    return legFailed(end, 'thrust_below_drag', `Thrust below drag in the hold on ${target.legName}.`, run.endSample);
+  }
+  if (run.stop === 'fuel_exhausted') return legFailed(end, 'fuel_exhausted', `Fuel exhausted in the hold on ${target.legName}.`, run.endSample);
+  return legFailed(end, 'infeasible', `The hold on ${target.legName} stopped: ${run.stop}.`, run.endSample);
+}

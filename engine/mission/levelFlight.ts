@@ -1,0 +1,58 @@
+/**
+ * Level (or cruise-climb) flight with thrust = drag: fuel flow from the
+ * part-power point giving the drag, distance at TAS, ground distance at
+ * TAS + wind. Used by cruise, hold and the reserve legs. The cruise-climb
+ * variant takes its altitude algebraically from the mass and neglects the
+ * slow climb's potential-energy term (flight-path angle about 1e-4 rad).
+ */
+import type { RatingName } from '../propulsion/propulsionModel';
+import { airPoint, fuelExhaustedG, makeSample, ratingPoint, thrustPoint } from './flightPoint';
+import type { LegTarget, MissionContext } from './missionContext';
+import { S_AIR, S_MASS, S_TIME, STATE_SIZE, type Segment, type SegmentEvent } from './missionState';
+
+export interface LevelFlightSpec {
+  /** Pressure altitude (m) as a function of mass (kg); constant for level flight. */
+  readonly altitudeOf: (mass_kg: number) => number;
+  readonly algebraicAltitude: boolean;
+  /** Mach (-) at an altitude (m) and mass (kg). */
+  readonly machOf: (altitude_m: number, mass_kg: number) => number;
+  /** Highest rating the part-power search may use. */
+  readonly ceiling: RatingName;
+  readonly step_s: number;
+  /** Absolute still-air distance (m) or time (s) at which the segment ends; null = none. */
+  readonly endAirDistance_m: number | null;
+  readonly endTime_s: number | null;
+  readonly extraEvents?: readonly SegmentEvent[];
+}
+
+export function makeLevelSegment(ctx: MissionContext, target: LegTarget, spec: LevelFlightSpec): Segment {
+  const input = ctx.input;
+  const dev = target.env.isaDev_K;
+  const evaluate: Segment['evaluate'] = (y) => {
+    const m = y[S_MASS];
+    const h = spec.altitudeOf(m);
+    const mach = spec.machOf(h, m);
+    const at = airPoint(input, h, mach, m, dev);
+    const engine = thrustPoint(input, at, dev, at.drag.drag_N, spec.ceiling);
+    const available = ratingPoint(input, at, dev, spec.ceiling).thrust_N;
+    const d = new Float64Array(STATE_SIZE);
+    d[0] = 1;
+    d[1] = at.tas_m_s;
+    d[2] = at.tas_m_s + target.env.wind_m_s;
+    d[S_MASS] = -engine.fuelFlow_kg_s;
+    return { derivative: d, sample: makeSample(at, available, engine.thrust_N, engine.fuelFlow_kg_s, 0, engine) };
+  };
+  const events: SegmentEvent[] = [{ stop: 'thrust_below_drag', g: (_y, s) => s.drag_N - s.thrustAvailable_N }];
+  if (spec.endAirDistance_m !== null) {
+    const end = spec.endAirDistance_m;
+    events.push({ stop: 'distance_reached', g: (y) => y[S_AIR] - end });
+  }
+  if (spec.endTime_s !== null) {
+    const end = spec.endTime_s;
+    events.push({ stop: 'time_reached', g: (y) => y[S_TIME] - end });
+  }
+  if (!ctx.options.allowNegativeFuel) events.push({ stop: 'fuel_exhausted', g: (y) => fuelExhaustedG(ctx.zeroFuelMass_kg, y[S_MASS]) });
+  events.push(...(spec.extraEvents ?? []));
+  return { step_s: spec.step_s, evaluate, events, algebraicAltitude: spec.algebraicAltitude };
+}
+

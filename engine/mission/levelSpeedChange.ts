@@ -1,0 +1,69 @@
+/**
+ * Level acceleration or deceleration at constant pressure altitude between two
+ * Mach numbers (the speed change at the low-altitude speed limit): TAS is a
+ * state, dV/dt = (Thr - D)/m at the given rating (point-mass equation, any
+ * performance text, e.g. Anderson, Aircraft Performance and Design, ch. 6).
+ */
+import type { RatingName } from '../propulsion/propulsionModel';
+import { fuelExhaustedG, airPoint, makeSample, ratingPoint } from './flightPoint';
+import { flySegment } from './flySegment';
+import { legFailed, legOk, type LegOutcome } from './legOutcome';
+import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
+import { missionAir } from './missionAtmosphere';
+import { S_ALT, S_MASS, S_TAS, STATE_SIZE, type Segment, type SegmentEvent, type StateVector } from './missionState';
+
+/** Least acceleration (m/s^2) that counts as progress; below it the speed change is abandoned. */
+export const MIN_SPEED_CHANGE_M_S2 = 0.01;
+
+export function flyLevelSpeedChange(
+  ctx: MissionContext,
+  target: LegTarget,
+  start: StateVector,
+  toMach: number,
+  rating: RatingName,
+): LegOutcome {
+  const input = ctx.input;
+  const dev = target.env.isaDev_K;
+  const altitude_m = start[S_ALT];
+  const a = missionAir(altitude_m, dev).speedOfSound_m_s;
+  const vTarget = toMach * a;
+  const direction = vTarget >= start[S_TAS] ? 1 : -1;
+  const evaluate: Segment['evaluate'] = (y) => {
+    const mach = y[S_TAS] / a;
+    const at = airPoint(input, altitude_m, mach, y[S_MASS], dev);
+    const th = ratingPoint(input, at, dev, rating);
+    const d = new Float64Array(STATE_SIZE);
+    d[0] = 1;
+    d[1] = at.tas_m_s;
+    d[2] = at.tas_m_s + target.env.wind_m_s;
+    d[S_MASS] = -th.fuelFlow_kg_s;
+    d[S_TAS] = y[S_MASS] > 0 ? (th.thrust_N - at.drag.drag_N) / y[S_MASS] : 0;
+    return { derivative: d, sample: makeSample(at, th.thrust_N, th.thrust_N, th.fuelFlow_kg_s, 0, th) };
+  };
+  const events: SegmentEvent[] = [
+    { stop: 'speed_reached', g: (y) => direction * (y[S_TAS] - vTarget) },
+    {
+      stop: 'climb_stalled',
+      g: (y, s) => MIN_SPEED_CHANGE_M_S2 - (direction * (s.thrustUsed_N - s.drag_N)) / Math.max(y[S_MASS], 1),
+    },
+  ];
+  if (!ctx.options.allowNegativeFuel) events.push({ stop: 'fuel_exhausted', g: (y) => fuelExhaustedG(ctx.zeroFuelMass_kg, y[S_MASS]) });
+  const startState = Float64Array.from(start);
+  startState[S_TAS] = start[S_TAS] > 0 ? start[S_TAS] : vTarget;
+  if (Math.abs(startState[S_TAS] - vTarget) < 1e-9) return legOk(startState, null);
+  const run = flySegment(ctx, target, { step_s: BASE_STEP_S.speedChange * ctx.options.stepScale, evaluate, events }, startState);
+  if (run.stop === 'speed_reached') {
+    run.end[S_TAS] = vTarget;
+    return legOk(run.end, run.endSample);
+  }
+  if (run.stop === 'fuel_exhausted') return legFailed(run.end, 'fuel_exhausted', `Fuel exhausted during the speed change on ${target.legName}.`, run.endSample);
+  if (run.stop === 'climb_stalled') {
+    return legFailed(
+      run.end,
+      direction > 0 ? 'climb_not_reached' : 'infeasible',
+      `${direction > 0 ? 'Thrust' : 'Idle drag'} cannot change the speed to Mach ${toMach.toFixed(3)} at ${altitude_m.toFixed(0)} m on ${target.legName}.`,
+      run.endSample,
+    );
+  }
+  return legFailed(run.end, 'infeasible', `Speed change on ${target.legName} stopped: ${run.stop}.`, run.endSample);
+}

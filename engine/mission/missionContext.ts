@@ -1,0 +1,51 @@
+/**
+ * What every leg needs while a mission is flown: the input, the leg's
+ * environment, integration options and the log the legs write to.
+ */
+import type { Leg, MissionInput } from './missionTypes';
+import type { FlightLog } from './timeHistoryBuilder';
+
+export interface LegEnvironmentResolved {
+  readonly isaDev_K: number;
+  readonly wind_m_s: number;
+}
+
+export interface FlightOptions {
+  /** Multiplies every leg's base step (1 = production steps; 0.5 halves them). */
+  readonly stepScale: number;
+  /** During fuel iteration the mass may pass below zero-fuel mass without stopping. */
+  readonly allowNegativeFuel: boolean;
+}
+
+export interface MissionContext {
+  readonly input: MissionInput;
+  readonly options: FlightOptions;
+  readonly zeroFuelMass_kg: number;
+  readonly log: FlightLog;
+}
+
+/** Where a leg's samples and cautions go. */
+export interface LegTarget {
+  readonly legIndex: number;
+  readonly legName: string;
+  readonly env: LegEnvironmentResolved;
+  /** Trip legs go into the time history; reserve legs only raise cautions. */
+  readonly recordHistory: boolean;
+}
+
+/** A leg's ISA deviation and wind, falling back to the mission's. */
+export function legEnvironment(input: MissionInput, leg: Leg | null): LegEnvironmentResolved {
+  return {
+    isaDev_K: leg?.isaDev_K ?? input.isaDev_K,
+    wind_m_s: leg?.wind_m_s ?? input.wind_m_s,
+  };
+}
+
+/** Base integration steps (s) per kind of segment, before `stepScale`; shown converged in test/engine/mission/solveMission.test.ts. */
+export const BASE_STEP_S = {
+  climb: 20,
+  speedChange: 5,
+  cruise: 300,
+  descent: 20,
+  hold: 120,
+} as const;

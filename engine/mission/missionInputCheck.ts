@@ -1,0 +1,117 @@
+/**
+ * Checks a MissionInput before it is flown: every number finite, masses and
+ * areas positive, legs well formed. Returns the first problem as a sentence
+ * naming the field, or null. (engine/project validates files; this guards
+ * the solver's own entry point so no NaN travels.)
+ */
+import type { MissionInput } from './missionTypes';
+
+function badNumber(path: string, value: unknown, rule: 'finite' | 'positive' | 'nonNegative'): string | null {
+  if (typeof value !== 'number' || !Number.isFinite(value)) return `${path} must be a finite number, got ${String(value)}.`;
+  if (rule === 'positive' && !(value > 0)) return `${path} must be positive, got ${value}.`;
+  if (rule === 'nonNegative' && value < 0) return `${path} must not be negative, got ${value}.`;
+  return null;
+}
+
+function first(...problems: (string | null)[]): string | null {
+  for (const p of problems) if (p !== null) return p;
+  return null;
+}
+
+/** The first problem with `input`, or null when it can be flown. */
+export function missionInputProblem(input: MissionInput): string | null {
+  const a = input.airframe;
+  const airframe = first(
+    badNumber('airframe.oew_kg', a.oew_kg, 'positive'),
+    badNumber('airframe.mzfw_kg', a.mzfw_kg, 'positive'),
+    badNumber('airframe.mtow_kg', a.mtow_kg, 'positive'),
+    badNumber('airframe.mlw_kg', a.mlw_kg, 'positive'),
+    badNumber('airframe.maxFuel_kg', a.maxFuel_kg, 'nonNegative'),
+    badNumber('airframe.wingArea_m2', a.wingArea_m2, 'positive'),
+    badNumber('airframe.vmo_m_s', a.vmo_m_s, 'positive'),
+    badNumber('airframe.mmo', a.mmo, 'positive'),
+    badNumber('isaDev_K', input.isaDev_K, 'finite'),
+    badNumber('wind_m_s', input.wind_m_s, 'finite'),
+  );
+  if (airframe) return airframe;
+  if (input.legs.length === 0) return 'legs must hold at least one leg.';
+  let solvable = 0;
+  for (let i = 0; i < input.legs.length; i++) {
+    const leg = input.legs[i];
+    const p = `legs[${i}] (${leg.name})`;
+    const env = first(
+      leg.isaDev_K === undefined ? null : badNumber(`${p}.isaDev_K`, leg.isaDev_K, 'finite'),
+      leg.wind_m_s === undefined ? null : badNumber(`${p}.wind_m_s`, leg.wind_m_s, 'finite'),
+    );
+    if (env) return env;
+    let problem: string | null = null;
+    switch (leg.kind) {
+      case 'taxiOut':
+      case 'taxiIn':
+        problem = first(
+          badNumber(`${p}.time_s`, leg.time_s, 'nonNegative'),
+          leg.fuelFlow_kg_s === 'idle' ? null : badNumber(`${p}.fuelFlow_kg_s`, leg.fuelFlow_kg_s, 'nonNegative'),
+        );
+        break;
+      case 'takeoff':
+      case 'approach':
+        problem = first(
+          badNumber(`${p}.time_s`, leg.time_s, 'nonNegative'),
+          leg.fuel_kg === null ? null : badNumber(`${p}.fuel_kg`, leg.fuel_kg, 'nonNegative'),
+        );
+        break;
+      case 'climb':
+      case 'descent':
+        problem = first(
+          badNumber(`${p}.toAltitude_m`, leg.toAltitude_m, 'finite'),
+          badNumber(`${p}.schedule.lowCas_m_s`, leg.schedule.lowCas_m_s, 'positive'),
+          badNumber(`${p}.schedule.lowAltitudeLimit_m`, leg.schedule.lowAltitudeLimit_m, 'finite'),
+          badNumber(`${p}.schedule.cas_m_s`, leg.schedule.cas_m_s, 'positive'),
+          badNumber(`${p}.schedule.mach`, leg.schedule.mach, 'positive'),
+          leg.kind === 'descent' && leg.mode.kind === 'rate' ? badNumber(`${p}.mode.rate_m_s`, leg.mode.rate_m_s, 'positive') : null,
+          leg.schedule.mach < 1 ? null : `${p}.schedule.mach must be below 1 (subsonic), got ${leg.schedule.mach}.`,
+        );
+        break;
+      case 'cruise':
+        if (leg.distance_m === null) solvable++;
+        problem = first(
+          badNumber(`${p}.altitude_m`, leg.altitude_m, 'finite'),
+          leg.distance_m === null ? null : badNumber(`${p}.distance_m`, leg.distance_m, 'nonNegative'),
+          leg.speed.kind === 'mach' ? badNumber(`${p}.speed.mach`, leg.speed.mach, 'positive') : null,
+          leg.profile.kind === 'stepClimb' ? badNumber(`${p}.profile.step_m`, leg.profile.step_m, 'positive') : null,
+          leg.profile.kind === 'constantAltitude' ? null : badNumber(`${p}.profile.maxAltitude_m`, leg.profile.maxAltitude_m, 'finite'),
+        );
+        break;
+      case 'hold':
+        problem = first(
+          badNumber(`${p}.altitude_m`, leg.altitude_m, 'finite'),
+          badNumber(`${p}.time_s`, leg.time_s, 'nonNegative'),
+          leg.speed.kind === 'cas' ? badNumber(`${p}.speed.cas_m_s`, leg.speed.cas_m_s, 'positive') : null,
+        );
+        break;
+    }
+    if (problem) return problem;
+  }
+  if (solvable > 1) return `At most one cruise leg may have distance_m null; ${solvable} have.`;
+  const s = input.solve;
+  const solve = first(
+    badNumber('solve.payload_kg', s.payload_kg, 'nonNegative'),
+    s.kind === 'takeoffWeight' ? badNumber('solve.takeoffMass_kg', s.takeoffMass_kg, 'positive') : null,
+    s.kind === 'payloadRange' ? badNumber('solve.range_m', s.range_m, 'nonNegative') : null,
+  );
+  if (solve) return solve;
+  if (s.kind !== 'takeoffWeight' && solvable === 0) return `solve.kind ${s.kind} needs one cruise leg with distance_m null (the leg whose distance is solved).`;
+  const r = input.reserves;
+  const alt = r.alternate;
+  return first(
+    badNumber('reserves.finalReserve_s', r.finalReserve_s, 'nonNegative'),
+    'contingencyFraction' in r ? badNumber('reserves.contingencyFraction', r.contingencyFraction, 'nonNegative') : null,
+    r.preset === 'icaoAnnex6' ? badNumber('reserves.minContingency_s', r.minContingency_s, 'nonNegative') : null,
+    r.preset === 'cfr121_645' ? badNumber('reserves.enRouteFraction', r.enRouteFraction, 'nonNegative') : null,
+    r.preset === 'custom' ? badNumber('reserves.extraFuel_kg', r.extraFuel_kg, 'nonNegative') : null,
+    alt === null ? null : badNumber('reserves.alternate.distance_m', alt.distance_m, 'nonNegative'),
+    alt === null ? null : badNumber('reserves.alternate.cruiseAltitude_m', alt.cruiseAltitude_m, 'finite'),
+    alt === null ? null : badNumber('reserves.alternate.cruiseMach', alt.cruiseMach, 'positive'),
+    alt === null ? null : badNumber('reserves.alternate.elevation_m', alt.elevation_m, 'finite'),
+  );
+}

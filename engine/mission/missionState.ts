@@ -1,0 +1,75 @@
+/**
+ * The integrator's state vector and what one evaluation of a flight segment
+ * returns. The state is a small Float64Array mutated only inside the
+ * integrator's hot loop (STYLE rule 7).
+ */
+import type { Caution } from '../cautions/caution';
+
+/** State layout: time (s), still-air distance (m), ground distance (m), pressure altitude (m), mass (kg), TAS (m/s). */
+export const S_TIME = 0;
+export const S_AIR = 1;
+export const S_GROUND = 2;
+export const S_ALT = 3;
+export const S_MASS = 4;
+export const S_TAS = 5;
+export const STATE_SIZE = 6;
+
+export type StateVector = Float64Array<ArrayBuffer>;
+
+/** Everything recorded about one flight point. */
+export interface FlightSample {
+  readonly altitude_m: number;
+  readonly mach: number;
+  readonly cas_m_s: number;
+  readonly tas_m_s: number;
+  readonly thrustAvailable_N: number;
+  readonly thrustUsed_N: number;
+  readonly drag_N: number;
+  readonly fuelFlow_kg_s: number;
+  readonly cl: number;
+  readonly clMax: number;
+  readonly buffetLoadFactor: number;
+  readonly liftToDrag: number;
+  /** Pressure-altitude rate (m/s). */
+  readonly climbRate_m_s: number;
+  /** Inlet throat Mach (-) when the installation computes it. */
+  readonly throatMach: number | null;
+  /** Cautions raised by the propulsion lookup at this point. */
+  readonly propulsionCautions: readonly Caution[];
+}
+
+export interface Evaluation {
+  /** d(state)/dt, STATE_SIZE entries. */
+  readonly derivative: Float64Array<ArrayBuffer>;
+  readonly sample: FlightSample;
+}
+
+/** Why a segment stopped. */
+export type SegmentStop =
+  | 'altitude_reached'
+  | 'speed_reached'
+  | 'distance_reached'
+  | 'time_reached'
+  | 'fuel_exhausted'
+  | 'thrust_below_drag'
+  | 'climb_stalled'
+  | 'descent_stalled'
+  | 'step_climb_due'
+  | 'numerical_failure'
+  | 'step_limit';
+
+/** A terminal event: the segment stops where g(state) crosses zero from below. */
+export interface SegmentEvent {
+  readonly stop: SegmentStop;
+  g(state: StateVector, sample: FlightSample): number;
+}
+
+/** One stretch of flight with smooth equations of motion. */
+export interface Segment {
+  /** Fixed step (s). */
+  readonly step_s: number;
+  evaluate(state: StateVector): Evaluation;
+  readonly events: readonly SegmentEvent[];
+  /** When true the altitude is algebraic (cruise-climb): the state takes the sample's altitude after each step. */
+  readonly algebraicAltitude?: boolean;
+}

@@ -1,0 +1,283 @@
+/**
+ * Reserve fuel flown with the same engine and airframe, as the published
+ * rules word it (paraphrased), starting from the landing mass at the
+ * destination. Items are flown in the rule's order, each from the mass the
+ * previous one leaves. Holds the rules place "in standard conditions" are
+ * flown at ISA and in still air; the alternate in the mission's ISA deviation
+ * and wind.
+ *
+ * - ICAO Annex 6 Part I, 4.3.6.3 (turbine aeroplanes): contingency fuel = the
+ *   larger of a fraction (5 %) of the planned trip fuel and the fuel to fly
+ *   5 minutes at holding speed at 450 m (1,500 ft) above the destination in
+ *   standard conditions; destination alternate fuel (climb, cruise, descent
+ *   to the alternate); final reserve fuel = 30 minutes at holding speed at
+ *   450 m (1,500 ft) above the alternate aerodrome (the destination when there
+ *   is none) in standard conditions.
+ * - 14 CFR 121.639 (domestic): enough fuel to fly to the destination, then to
+ *   fly to and land at the most distant alternate, then to fly 45 minutes at
+ *   normal cruising fuel consumption (flown here at the mission's first cruise
+ *   altitude and speed rule).
+ * - 14 CFR 121.645(b) (flag, turbine): to fly to and land at the destination;
+ *   then to fly 10 % of the total time to the destination at normal cruising
+ *   fuel consumption; then to fly to and land at the most distant alternate;
+ *   then to fly 30 minutes at holding speed at 1,500 ft above the alternate in
+ *   standard temperature conditions.
+ * - custom: contingency fraction of trip fuel, alternate, final-reserve hold
+ *   at 1,500 ft above the alternate, and a fixed extra fuel.
+ */
+import type { AlternateSpec, LegRow, MissionInput, MissionStatus, ReserveBreakdown, SpeedSchedule } from './missionTypes';
+import type { RatingName } from '../propulsion/propulsionModel';
+import { flyClimb } from './climbLeg';
+import { cruiseMach, flyCruise } from './cruiseLeg';
+import { flyDescent, type DescentMode } from './descentLeg';
+import { flyHold } from './holdLeg';
+import { makeLevelSegment } from './levelFlight';
+import { flySegment } from './flySegment';
+import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
+import { FEET_M } from './missionAtmosphere';
+import { S_AIR, S_ALT, S_GROUND, S_MASS, S_TIME, type StateVector } from './missionState';
+import { appendCaution, createFlightLog } from './timeHistoryBuilder';
+import { CAUTION_CATALOGUE } from '../cautions/cautionCatalogue';
+import { legFailed, legOk, type LegOutcome } from './legOutcome';
+
+/** 1,500 ft above the aerodrome (m): ICAO Annex 6 Part I 4.3.6.3 (450 m) and 14 CFR 121.645(b)(4). */
+export const HOLD_HEIGHT_M = 1500 * FEET_M;
+
+const DEFAULT_CLIMB: Omit<SpeedSchedule, 'mach'> = {
+  lowCas_m_s: (250 * 1852) / 3600,
+  lowAltitudeLimit_m: 10000 * FEET_M,
+  cas_m_s: (280 * 1852) / 3600,
+};
+
+export interface ReserveFlight {
+  readonly status: MissionStatus;
+  readonly message: string;
+  readonly breakdown: ReserveBreakdown;
+  readonly rows: readonly LegRow[];
+}
+
+export interface TripSummary {
+  readonly tripFuel_kg: number;
+  /** Take-off to landing (s). */
+  readonly tripTime_s: number;
+  /** State at landing at the destination. */
+  readonly landing: StateVector;
+}
+
+interface Flown {
+  readonly out: LegOutcome;
+  readonly fuel_kg: number;
+}
+
+function climbSettings(input: MissionInput, alternate: AlternateSpec): { schedule: SpeedSchedule; rating: RatingName } {
+  const climb = input.legs.find((l) => l.kind === 'climb');
+  if (climb && climb.kind === 'climb') return { schedule: climb.schedule, rating: climb.rating };
+  return { schedule: { ...DEFAULT_CLIMB, mach: alternate.cruiseMach }, rating: 'maxClimb' };
+}
+
+function descentSettings(input: MissionInput, alternate: AlternateSpec): { schedule: SpeedSchedule; mode: DescentMode } {
+  const descent = input.legs.find((l) => l.kind === 'descent');
+  if (descent && descent.kind === 'descent') return { schedule: descent.schedule, mode: descent.mode };
+  return { schedule: climbSettings(input, alternate).schedule, mode: { kind: 'idle' } };
+}
+
+/** Flies to the alternate: climb, cruise, descent to 1,500 ft above it. */
+function flyAlternate(ctx: MissionContext, target: LegTarget, start: StateVector, alt: AlternateSpec): LegOutcome {
+  const input = ctx.input;
+  const holdAltitude = alt.elevation_m + HOLD_HEIGHT_M;
+  const climbSpec = climbSettings(input, alt);
+  const descentSpec = descentSettings(input, alt);
+  const top = Math.max(alt.cruiseAltitude_m, holdAltitude);
+  const startAir = start[S_AIR];
+  const climb = flyClimb(ctx, target, start, top, climbSpec.schedule, climbSpec.rating);
+  if (climb.status !== 'ok') return climb;
+  const scratch: MissionContext = { ...ctx, log: createFlightLog(input.airframe, input.cautionSettings) };
+  const trial = flyDescent(scratch, target, climb.state, holdAltitude, descentSpec.schedule, descentSpec.mode);
+  if (trial.status !== 'ok') return trial;
+  const descentDistance = trial.state[S_AIR] - climb.state[S_AIR];
+  const cruiseDistance = alt.distance_m - (climb.state[S_AIR] - startAir) - descentDistance;
+  let state = climb.state;
+  if (cruiseDistance < 0) {
+    appendCaution(
+      ctx.log,
+      target,
+      {
+        id: 'alternate_too_short',
+        severity: CAUTION_CATALOGUE.alternate_too_short.severity,
+        message: `The alternate's ${alt.distance_m.toFixed(0)} m is shorter than its climb and descent; flown ${(alt.distance_m - cruiseDistance).toFixed(0)} m.`,
+        value: alt.distance_m,
+        threshold: alt.distance_m - cruiseDistance,
+      },
+      state[S_TIME],
+    );
+  } else {
+    const cruise = flyCruise(ctx, target, state, {
+      altitude_m: top,
+      speed: { kind: 'mach', mach: alt.cruiseMach },
+      profile: { kind: 'constantAltitude' },
+      distance_m: cruiseDistance,
+    });
+    if (cruise.status !== 'ok') return cruise;
+    state = cruise.state;
+  }
+  return flyDescent(ctx, target, state, holdAltitude, descentSpec.schedule, descentSpec.mode);
+}
+
+/** Flies `time_s` at the mission's normal cruise (first cruise leg's altitude and speed rule) from `start`. */
+function flyNormalCruiseTime(ctx: MissionContext, target: LegTarget, start: StateVector, time_s: number): LegOutcome {
+  const input = ctx.input;
+  const cruise = input.legs.find((l) => l.kind === 'cruise');
+  if (!cruise || cruise.kind !== 'cruise') {
+    return flyHold(ctx, target, start, start[S_ALT], time_s, { kind: 'bestEndurance' });
+  }
+  if (!(time_s > 0)) return legOk(Float64Array.from(start), null);
+  const dev = target.env.isaDev_K;
+  const state = Float64Array.from(start);
+  state[S_ALT] = cruise.altitude_m;
+  const run = flySegment(
+    ctx,
+    target,
+    makeLevelSegment(ctx, target, {
+      altitudeOf: () => cruise.altitude_m,
+      algebraicAltitude: false,
+      machOf: (h, m) => cruiseMach(input, cruise.speed, h, m, dev),
+      ceiling: 'maxCruise',
+      step_s: BASE_STEP_S.cruise * ctx.options.stepScale,
+      endAirDistance_m: null,
+      endTime_s: state[S_TIME] + time_s,
+    }),
+    state,
+  );
+  if (run.stop === 'time_reached') return legOk(run.end, run.endSample);
+  return legFailed(run.end, run.stop === 'fuel_exhausted' ? 'fuel_exhausted' : 'thrust_below_drag', `Reserve cruise on ${target.legName} stopped: ${run.stop}.`, run.endSample);
+}
+
+/** Flies the reserve policy from the landing state; one LegRow per reserve item (kind 'reserve'). */
+export function flyReserves(ctx: MissionContext, trip: TripSummary): ReserveFlight {
+  const input = ctx.input;
+  const policy = input.reserves;
+  const rows: LegRow[] = [];
+  const missionEnv = { isaDev_K: input.isaDev_K, wind_m_s: input.wind_m_s };
+  const standardEnv = { isaDev_K: 0, wind_m_s: 0 };
+  const destination = trip.landing[S_ALT];
+  let state = Float64Array.from(trip.landing);
+  state[S_AIR] = 0;
+  state[S_GROUND] = 0;
+  let contingency = 0;
+  let alternateFuel = 0;
+  let finalFuel = 0;
+  let status: MissionStatus = 'ok';
+  let message = '';
+
+  const run = (name: string, env: typeof missionEnv, fly: (t: LegTarget, s: StateVector) => LegOutcome): Flown | null => {
+    const target: LegTarget = { legIndex: input.legs.length + rows.length, legName: name, env, recordHistory: false };
+    const start = state;
+    const out = fly(target, start);
+    rows.push({
+      index: target.legIndex,
+      name,
+      kind: 'reserve',
+      startTime_s: start[S_TIME],
+      endTime_s: out.state[S_TIME],
+      startDistance_m: start[S_AIR],
+      endDistance_m: out.state[S_AIR],
+      startAltitude_m: start[S_ALT],
+      endAltitude_m: out.state[S_ALT],
+      startMass_kg: start[S_MASS],
+      endMass_kg: out.state[S_MASS],
+      fuel_kg: start[S_MASS] - out.state[S_MASS],
+    });
+    if (out.status !== 'ok') {
+      status = out.status;
+      message = `Reserve ${name}: ${out.message}`;
+      return null;
+    }
+    state = out.state;
+    return { out, fuel_kg: start[S_MASS] - out.state[S_MASS] };
+  };
+
+  // Contingency (ICAO, custom) or the 10 % en-route time (121.645(b)(2)).
+  if (policy.preset === 'icaoAnnex6') {
+    const fraction = policy.contingencyFraction * trip.tripFuel_kg;
+    const holdTarget: LegTarget = { legIndex: -1, legName: 'contingency minimum', env: standardEnv, recordHistory: false };
+    const scratch: MissionContext = { ...ctx, log: createFlightLog(input.airframe, input.cautionSettings) };
+    const hold = flyHold(scratch, holdTarget, state, destination + HOLD_HEIGHT_M, policy.minContingency_s, { kind: 'bestEndurance' });
+    const holdFuel = state[S_MASS] - hold.state[S_MASS];
+    contingency = Math.max(fraction, hold.status === 'ok' ? holdFuel : 0);
+    const start = state;
+    state = Float64Array.from(state);
+    state[S_MASS] -= contingency;
+    rows.push(reserveRow(input.legs.length + rows.length, 'reserve: contingency (ICAO Annex 6 4.3.6.3 c)', start, state));
+  } else if (policy.preset === 'custom') {
+    contingency = policy.contingencyFraction * trip.tripFuel_kg;
+    const start = state;
+    state = Float64Array.from(state);
+    state[S_MASS] -= contingency;
+    rows.push(reserveRow(input.legs.length + rows.length, 'reserve: contingency (custom)', start, state));
+  } else if (policy.preset === 'cfr121_645') {
+    const flown = run('reserve: 10 % en-route time (14 CFR 121.645(b)(2))', missionEnv, (t, s) =>
+      flyNormalCruiseTime(ctx, t, s, policy.enRouteFraction * trip.tripTime_s),
+    );
+    if (flown === null) return finish();
+    contingency = flown.fuel_kg;
+  }
+
+  if (policy.alternate !== null) {
+    const alternate = policy.alternate;
+    const flown = run('reserve: alternate', missionEnv, (t, s) => flyAlternate(ctx, t, s, alternate));
+    if (flown === null) return finish();
+    alternateFuel = flown.fuel_kg;
+  } else {
+    state = Float64Array.from(state);
+    state[S_ALT] = destination + HOLD_HEIGHT_M;
+  }
+
+  if (policy.preset === 'cfr121_639') {
+    const flown = run('reserve: 45 min at normal cruise (14 CFR 121.639)', missionEnv, (t, s) =>
+      flyNormalCruiseTime(ctx, t, s, policy.finalReserve_s),
+    );
+    if (flown === null) return finish();
+    finalFuel = flown.fuel_kg;
+  } else {
+    const holdAltitude = (policy.alternate?.elevation_m ?? destination) + HOLD_HEIGHT_M;
+    const flown = run('reserve: final reserve hold', standardEnv, (t, s) =>
+      flyHold(ctx, t, s, holdAltitude, policy.finalReserve_s, { kind: 'bestEndurance' }),
+    );
+    if (flown === null) return finish();
+    finalFuel = flown.fuel_kg;
+  }
+  return finish();
+
+  function finish(): ReserveFlight {
+    const extra = policy.preset === 'custom' ? policy.extraFuel_kg : 0;
+    return {
+      status,
+      message,
+      rows,
+      breakdown: {
+        contingency_kg: contingency,
+        alternate_kg: alternateFuel,
+        finalReserve_kg: finalFuel,
+        extra_kg: extra,
+        total_kg: contingency + alternateFuel + finalFuel + extra,
+      },
+    };
+  }
+}
+
+function reserveRow(index: number, name: string, start: StateVector, end: StateVector): LegRow {
+  return {
+    index,
+    name,
+    kind: 'reserve',
+    startTime_s: start[S_TIME],
+    endTime_s: end[S_TIME],
+    startDistance_m: start[S_AIR],
+    endDistance_m: end[S_AIR],
+    startAltitude_m: start[S_ALT],
+    endAltitude_m: end[S_ALT],
+    startMass_kg: start[S_MASS],
+    endMass_kg: end[S_MASS],
+    fuel_kg: start[S_MASS] - end[S_MASS],
+  };
+}

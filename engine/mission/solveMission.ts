@@ -1,0 +1,193 @@
+/**
+ * The one entry point of the mission solver: MissionInput -> MissionResult.
+ * Deterministic; never returns NaN (input is checked first; every failure is
+ * a status with a message).
+ *
+ * Solve modes:
+ * - takeoffWeight: flies from the given take-off mass and reports what is
+ *   left; when a cruise leg has distance_m null its still-air distance is
+ *   solved so the aircraft arrives at block-in with exactly the reserve.
+ * - payloadRange: the fuel (ramp mass) is iterated until the aircraft
+ *   arrives at block-in with exactly the reserve fuel (within 0.1 kg) and the
+ *   solvable cruise leg's distance until the trip's total STILL-AIR distance
+ *   equals the range (within 1 m). Wind changes the ground distance, not the
+ *   range matched.
+ * - maxRange: take-off mass = min(MTOW, zero-fuel mass + fuel capacity - taxi-out
+ *   fuel); the solvable cruise leg is stretched until block-in fuel equals the
+ *   reserve; the range is the trip's still-air distance.
+ * Block fuel is the fuel burned from block-out to block-in (taxi out, trip,
+ * taxi in); trip fuel is take-off to landing; the reserve is carried.
+ */
+import type { Caution } from '../cautions/caution';
+import { checkFuelCapacity, checkMlw, checkMtow, checkMzfw, checkReserve } from '../cautions/checks';
+import { allowanceFuel } from './allowanceLegs';
+import { evaluateMission, iterateDistance, iterateRampMass, FUEL_TOLERANCE_KG, type MissionEvaluation } from './fuelIteration';
+import { solvableLegIndex, tripBounds } from './flyTrip';
+import { legEnvironment, type FlightOptions, type LegTarget, type MissionContext } from './missionContext';
+import { missionInputProblem } from './missionInputCheck';
+import { S_AIR, S_GROUND, S_MASS, S_TIME } from './missionState';
+import type { MissionInput, MissionResult, MissionStatus, ReserveBreakdown } from './missionTypes';
+import { appendCaution, buildTimeHistory, createFlightLog } from './timeHistoryBuilder';
+
+const NO_RESERVES: ReserveBreakdown = { contingency_kg: 0, alternate_kg: 0, finalReserve_kg: 0, extra_kg: 0, total_kg: 0 };
+
+/** Fuel (kg) of the taxi-out legs that precede take-off. */
+export function taxiOutFuel(input: MissionInput): number {
+  let fuel = 0;
+  for (const leg of input.legs) {
+    if (leg.kind !== 'taxiOut') break;
+    fuel += allowanceFuel(input, leg, 0, legEnvironment(input, leg).isaDev_K).fuel_kg;
+  }
+  return fuel;
+}
+
+function emptyResult(input: MissionInput, status: MissionStatus, message: string): MissionResult {
+  const zfw = Number.isFinite(input.airframe?.oew_kg + input.solve?.payload_kg) ? input.airframe.oew_kg + input.solve.payload_kg : 0;
+  const log = createFlightLog(input.airframe, input.cautionSettings);
+  return {
+    status,
+    statusMessage: message,
+    blockFuel_kg: 0,
+    blockTime_s: 0,
+    tripFuel_kg: 0,
+    tripTime_s: 0,
+    reserveFuel_kg: 0,
+    reserves: NO_RESERVES,
+    takeoffMass_kg: 0,
+    rampMass_kg: 0,
+    landingMass_kg: 0,
+    zeroFuelMass_kg: zfw,
+    payload_kg: Number.isFinite(input.solve?.payload_kg) ? input.solve.payload_kg : 0,
+    airDistance_m: 0,
+    groundDistance_m: 0,
+    legs: [],
+    history: buildTimeHistory(log),
+    cautions: [],
+    iterations: 0,
+    residual_kg: 0,
+  };
+}
+
+/** Options of one solve; `stepScale` below 1 refines every integration step (convergence studies). */
+export interface SolveOptions {
+  readonly stepScale?: number;
+}
+
+/**
+ * Solves a mission (see file comment for the modes). All quantities SI.
+ * Returns status 'ok' or the reason it could not ('did_not_converge' with the
+ * residual, 'fuel_exhausted', 'thrust_below_drag', 'climb_not_reached',
+ * 'infeasible').
+ */
+export function solveMission(input: MissionInput, options: SolveOptions = {}): MissionResult {
+  const problem = missionInputProblem(input);
+  if (problem !== null) return emptyResult(input, 'infeasible', `Mission input: ${problem}`);
+  const stepScale = options.stepScale !== undefined && options.stepScale > 0 && Number.isFinite(options.stepScale) ? options.stepScale : 1;
+  const payload = input.solve.payload_kg;
+  const zfw = input.airframe.oew_kg + payload;
+  const taxi = taxiOutFuel(input);
+  const flightOptions: FlightOptions = { stepScale, allowNegativeFuel: false };
+  const base: MissionContext = { input, options: flightOptions, zeroFuelMass_kg: zfw, log: createFlightLog(input.airframe, input.cautionSettings) };
+  const solve = input.solve;
+  const hasSolvable = solvableLegIndex(input) >= 0;
+
+  let rampMass = 0;
+  let distance = 0;
+  let iterations = 0;
+  let converged = true;
+  let residual = 0;
+  let iterationMessage = '';
+  if (solve.kind === 'payloadRange') {
+    const guess = zfw + taxi + 0.1 * zfw;
+    const it = iterateRampMass(base, solve.range_m, guess);
+    ({ rampMass_kg: rampMass, distance_m: distance, iterations, converged, residual_kg: residual } = it);
+    if (!converged && it.failure === null) iterationMessage = `Fuel iteration did not converge after ${iterations} passes; residual ${residual.toFixed(2)} kg.`;
+  } else {
+    rampMass =
+      solve.kind === 'takeoffWeight'
+        ? solve.takeoffMass_kg + taxi
+        : Math.min(input.airframe.mtow_kg + taxi, zfw + input.airframe.maxFuel_kg);
+    if (rampMass <= zfw) {
+      return emptyResult(input, 'infeasible', `No fuel can be carried: ramp mass ${rampMass.toFixed(1)} kg is not above zero-fuel mass ${zfw.toFixed(1)} kg.`);
+    }
+    if (hasSolvable) {
+      const it = iterateDistance(base, rampMass);
+      ({ distance_m: distance, iterations, converged, residual_kg: residual } = it);
+      if (!converged && it.failure === null) {
+        iterationMessage =
+          iterations === 1
+            ? `The reserve cannot be carried even with the solvable cruise leg at zero length: short by ${(-residual).toFixed(1)} kg.`
+            : `Range iteration did not converge after ${iterations} passes; residual ${residual.toFixed(2)} kg.`;
+      }
+    }
+  }
+
+  // Final flight, recorded, fuel exhaustion enforced.
+  const ctx: MissionContext = { ...base, log: createFlightLog(input.airframe, input.cautionSettings) };
+  const final: MissionEvaluation = evaluateMission(ctx, rampMass, distance);
+  const { trip, reserves } = final;
+  if (solve.kind === 'takeoffWeight' && !hasSolvable) residual = final.residual_kg;
+
+  let status: MissionStatus = 'ok';
+  let message = '';
+  if (trip.status !== 'ok') {
+    status = trip.status;
+    message = trip.message;
+  } else if (reserves.status !== 'ok') {
+    status = reserves.status;
+    message = reserves.message;
+  } else if (!converged) {
+    status = iterationMessage.startsWith('The reserve cannot') ? 'infeasible' : 'did_not_converge';
+    message = iterationMessage;
+  }
+
+  const { first, last } = tripBounds(input);
+  const at = (index: number, name: string): LegTarget => ({
+    legIndex: Math.max(Math.min(index, input.legs.length - 1), 0),
+    legName: name,
+    env: legEnvironment(input, null),
+    recordHistory: false,
+  });
+  const legName = (i: number) => input.legs[Math.max(Math.min(i, input.legs.length - 1), 0)].name;
+  const takeoffMass = trip.takeoff[S_MASS];
+  const landingMass = trip.landing[S_MASS];
+  const blockInFuel = trip.end[S_MASS] - zfw;
+  appendCaution(ctx.log, at(first, legName(first)), checkMtow(takeoffMass, input.airframe.mtow_kg), trip.takeoff[S_TIME]);
+  appendCaution(ctx.log, at(0, legName(0)), checkMzfw(zfw, input.airframe.mzfw_kg), 0);
+  appendCaution(ctx.log, at(0, legName(0)), checkFuelCapacity(rampMass - zfw, input.airframe.maxFuel_kg), 0);
+  if (status === 'ok') {
+    appendCaution(ctx.log, at(last, legName(last)), checkMlw(landingMass, input.airframe.mlw_kg), trip.landing[S_TIME]);
+    const iterated = solve.kind !== 'takeoffWeight' || hasSolvable;
+    const reserveCheck = iterated ? blockInFuel + FUEL_TOLERANCE_KG : blockInFuel;
+    appendCaution(
+      ctx.log,
+      at(input.legs.length - 1, legName(input.legs.length - 1)),
+      checkReserve(reserveCheck, reserves.breakdown.total_kg, input.cautionSettings.minReserveFraction),
+      trip.end[S_TIME],
+    );
+  }
+
+  const cautions: Caution[] = [...ctx.log.cautions.values()].sort((a, b) => (a.time_s ?? 0) - (b.time_s ?? 0));
+  return {
+    status,
+    statusMessage: message,
+    blockFuel_kg: rampMass - trip.end[S_MASS],
+    blockTime_s: trip.end[S_TIME],
+    tripFuel_kg: takeoffMass - landingMass,
+    tripTime_s: trip.landing[S_TIME] - trip.takeoff[S_TIME],
+    reserveFuel_kg: reserves.breakdown.total_kg,
+    reserves: reserves.breakdown,
+    takeoffMass_kg: takeoffMass,
+    rampMass_kg: rampMass,
+    landingMass_kg: landingMass,
+    zeroFuelMass_kg: zfw,
+    payload_kg: payload,
+    airDistance_m: trip.end[S_AIR],
+    groundDistance_m: trip.end[S_GROUND],
+    legs: [...trip.rows, ...reserves.rows],
+    history: buildTimeHistory(ctx.log),
+    cautions,
+    iterations,
+    residual_kg: residual,
+  };
+}

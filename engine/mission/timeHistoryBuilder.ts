@@ -1,0 +1,120 @@
+/**
+ * The flight log a mission writes while it is flown: time-history columns
+ * and cautions (first occurrence per caution id and leg), built into the
+ * MissionResult's typed arrays at the end.
+ */
+import type { Caution } from '../cautions/caution';
+import {
+  checkBuffetMargin,
+  checkClMax,
+  checkMmo,
+  checkThroatMach,
+  checkVmo,
+  type CautionDraft,
+} from '../cautions/checks';
+import type { CautionSettings } from '../cautions/cautionSettings';
+import type { Airframe, TimeHistory } from './missionTypes';
+import { S_AIR, S_MASS, S_TIME, type FlightSample, type StateVector } from './missionState';
+import type { LegTarget } from './missionContext';
+
+const COLUMNS = [
+  'time_s',
+  'distance_m',
+  'altitude_m',
+  'mach',
+  'cas_m_s',
+  'tas_m_s',
+  'mass_kg',
+  'thrustAvailable_N',
+  'thrustUsed_N',
+  'drag_N',
+  'fuelFlow_kg_s',
+  'cl',
+  'liftToDrag',
+  'climbRate_m_s',
+] as const;
+
+type Column = (typeof COLUMNS)[number];
+
+export interface FlightLog {
+  readonly columns: Record<Column, number[]>;
+  readonly legIndex: number[];
+  readonly cautions: Map<string, Caution>;
+  readonly airframe: Airframe;
+  readonly settings: CautionSettings;
+}
+
+export function createFlightLog(airframe: Airframe, settings: CautionSettings): FlightLog {
+  const columns = {} as Record<Column, number[]>;
+  for (const c of COLUMNS) columns[c] = [];
+  return { columns, legIndex: [], cautions: new Map(), airframe, settings };
+}
+
+/** Adds a caution unless one with the same id was already raised on the same leg. */
+export function appendCaution(log: FlightLog, target: LegTarget, drafted: CautionDraft | Caution | null, time_s: number): void {
+  if (drafted === null) return;
+  const key = `${drafted.id}|${target.legIndex}`;
+  if (log.cautions.has(key)) return;
+  log.cautions.set(key, { ...drafted, legIndex: target.legIndex, legName: target.legName, time_s });
+}
+
+/** Records one accepted point: history row (trip legs) and the per-point caution checks. */
+export function appendSample(log: FlightLog, target: LegTarget, state: StateVector, sample: FlightSample): void {
+  const t = state[S_TIME];
+  if (target.recordHistory) {
+    const c = log.columns;
+    const n = log.legIndex.length;
+    const duplicate = n > 0 && log.legIndex[n - 1] === target.legIndex && c.time_s[n - 1] === t;
+    if (!duplicate) {
+      c.time_s.push(t);
+      c.distance_m.push(state[S_AIR]);
+      c.altitude_m.push(sample.altitude_m);
+      c.mach.push(sample.mach);
+      c.cas_m_s.push(sample.cas_m_s);
+      c.tas_m_s.push(sample.tas_m_s);
+      c.mass_kg.push(state[S_MASS]);
+      c.thrustAvailable_N.push(sample.thrustAvailable_N);
+      c.thrustUsed_N.push(sample.thrustUsed_N);
+      c.drag_N.push(sample.drag_N);
+      c.fuelFlow_kg_s.push(sample.fuelFlow_kg_s);
+      c.cl.push(sample.cl);
+      c.liftToDrag.push(sample.liftToDrag);
+      c.climbRate_m_s.push(sample.climbRate_m_s);
+      log.legIndex.push(target.legIndex);
+    }
+  }
+  if (sample.tas_m_s > 0) {
+    const s = log.settings;
+    appendCaution(log, target, checkVmo(sample.cas_m_s, log.airframe.vmo_m_s, s.vmoMargin_m_s), t);
+    appendCaution(log, target, checkMmo(sample.mach, log.airframe.mmo, s.mmoMargin), t);
+    appendCaution(log, target, checkClMax(sample.cl, sample.clMax), t);
+    appendCaution(log, target, checkBuffetMargin(sample.buffetLoadFactor, s.minBuffetLoadFactor), t);
+  }
+  appendCaution(log, target, checkThroatMach(sample.throatMach, log.settings.maxThroatMach), t);
+  for (const c of sample.propulsionCautions) {
+    if (c.id === 'deck_extrapolation' && !log.settings.cautionOnDeckExtrapolation) continue;
+    appendCaution(log, target, c, t);
+  }
+}
+
+/** The time history as typed arrays. */
+export function buildTimeHistory(log: FlightLog): TimeHistory {
+  const c = log.columns;
+  return {
+    time_s: Float64Array.from(c.time_s),
+    distance_m: Float64Array.from(c.distance_m),
+    altitude_m: Float64Array.from(c.altitude_m),
+    mach: Float64Array.from(c.mach),
+    cas_m_s: Float64Array.from(c.cas_m_s),
+    tas_m_s: Float64Array.from(c.tas_m_s),
+    mass_kg: Float64Array.from(c.mass_kg),
+    thrustAvailable_N: Float64Array.from(c.thrustAvailable_N),
+    thrustUsed_N: Float64Array.from(c.thrustUsed_N),
+    drag_N: Float64Array.from(c.drag_N),
+    fuelFlow_kg_s: Float64Array.from(c.fuelFlow_kg_s),
+    cl: Float64Array.from(c.cl),
+    liftToDrag: Float64Array.from(c.liftToDrag),
+    climbRate_m_s: Float64Array.from(c.climbRate_m_s),
+    legIndex: Int32Array.from(log.legIndex),
+  };
+}
