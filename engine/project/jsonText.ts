@@ -68,10 +68,8 @@ function locateJsonError(text: string): Failure {
     while (i < text.length && ' \t\n\r'.includes(text[i] as string)) i++;
   };
   const literal = (word: string): void => {
-    for (let k = 0; k < word.length; k++) {
-      if (text[i] !== word[k]) fail(`"${word}"`);
-      i++;
-    }
+    if (text.startsWith(word, i)) i += word.length;
+    else fail('a value (object, array, string, number, true, false or null)');
   };
   const string = (): void => {
     if (text[i] !== '"') fail('a string in double quotes');

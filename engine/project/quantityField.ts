@@ -5,25 +5,15 @@
  * becomes a zod issue whose `params.expected` says what was wanted.
  */
 import { z } from 'zod';
+import { DIMENSION_EXAMPLES, DIMENSION_PHRASE, SI_UNIT } from '../units/dimension';
 import { parseQuantity, type Dimension } from '../units/quantity';
 
-/** What a field of each dimension expects, with examples (used in messages and docs). */
-export const DIMENSION_EXPECTED: Readonly<Record<Dimension, string>> = {
-  length: 'a length (e.g. "41000 ft", "12.5 km", "3000 nmi" or metres as a number)',
-  speed: 'a speed (e.g. "250 kt", "128 m/s" or m/s as a number)',
-  mass: 'a mass (e.g. "4500 lb", "2000 kg" or kg as a number)',
-  force: 'a force (e.g. "6500 lbf", "29 kN" or newtons as a number)',
-  massFlow: 'a mass flow (e.g. "300 lb/h", "0.04 kg/s" or kg/s as a number)',
-  temperature: 'a temperature (e.g. "-40 degC", "288.15 K" or kelvin as a number)',
-  temperatureDelta: 'a temperature difference (e.g. "+10 K", "-5 degC" or kelvin as a number)',
-  pressure: 'a pressure (e.g. "101.3 kPa", "29.92 inHg" or pascals as a number)',
-  time: 'a time (e.g. "30 min", "1.5 h", "90 s" or seconds as a number)',
-  area: 'an area (e.g. "540 ft2", "50 m2" or m² as a number)',
-  power: 'a power (e.g. "40 kW", "50 hp" or watts as a number)',
-  angle: 'an angle (e.g. "27 deg", "0.47 rad" or radians as a number)',
-  tsfc: 'a specific fuel consumption (e.g. "0.65 lb/(lbf h)", "18 mg/(N s)" or kg/(N s) as a number)',
-  dimensionless: 'a plain number (e.g. 0.8, "5 %")',
-};
+/** What a field of a dimension expects, with examples and the SI unit of a bare number (for messages and docs). */
+export function expectedText(dimension: Dimension): string {
+  const [a, b] = DIMENSION_EXAMPLES[dimension];
+  const bare = dimension === 'dimensionless' ? '' : ` or a bare number in ${SI_UNIT[dimension]}`;
+  return `${DIMENSION_PHRASE[dimension]} (e.g. "${a}", "${b}"${bare})`;
+}
 
 /** Parameters carried by our custom issues so that parseProject can report `expected`. */
 export interface ExpectedParams {
@@ -44,7 +34,7 @@ export interface QuantityBounds {
  * are issues (never clamped).
  */
 export function quantity(dimension: Dimension, bounds?: QuantityBounds) {
-  const expected = bounds ? `${DIMENSION_EXPECTED[dimension]}, ${bounds.what}` : DIMENSION_EXPECTED[dimension];
+  const expected = bounds ? `${expectedText(dimension)}, ${bounds.what}` : expectedText(dimension);
   const shown = (input: unknown): string => (typeof input === 'string' ? `"${input}"` : String(input));
   const schema = z
     .custom<number | string>(() => true)

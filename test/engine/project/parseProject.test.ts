@@ -1,0 +1,161 @@
+import { readFileSync } from 'node:fs';
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { parseProject, parseProjectData } from '../../../engine/project/parseProject';
+import { expectClose } from '../../support/assertInDelta';
+
+const fixture = (path: string): string => readFileSync(new URL(`../../../fixtures/${path}`, import.meta.url), 'utf8');
+const demoText = fixture('demo/demo.blockwise.json');
+
+interface Expectation {
+  readonly stage: 'parse' | 'load';
+  readonly path: string;
+  readonly fragment: string;
+}
+const expected = JSON.parse(fixture('bad-projects/expected.json')) as Record<string, Expectation>;
+
+// Conversion factors: NIST SP 811 (ft = 0.3048 m, lb = 0.45359237 kg, kt = 1852/3600 m/s, nmi = 1852 m).
+const FT = 0.3048;
+const LB = 0.45359237;
+const KT = 1852 / 3600;
+const NMI = 1852;
+
+describe('parseProject on the demo project', () => {
+  const r = parseProject(demoText, 'demo.blockwise.json');
+
+  it('parseProject accepts the demo project', () => {
+    if (!r.ok) throw new Error(r.error.map((i) => i.message).join('\n'));
+    expect(r.ok).toBe(true);
+  });
+
+  it('parseProject converts the demo weights, speeds and distances to SI', () => {
+    if (!r.ok) throw new Error('demo did not parse');
+    const p = r.value;
+    expectClose(p.airframe.weights.maxTakeoff, 40000 * LB, { rel: 1e-15 }, 'NIST SP 811: lb');
+    expectClose(p.airframe.wingArea, 538 * FT * FT, { rel: 1e-15 }, 'NIST SP 811: ft2');
+    expectClose(p.airframe.vmo, 340 * KT, { rel: 1e-15 }, 'NIST SP 811: kt');
+    const climb = p.mission.legs[2]!;
+    expect(climb.kind).toBe('climb');
+    if (climb.kind === 'climb') {
+      expectClose(climb.toAltitude, 12496.8, { abs: 4e-12 }, '41000 ft, definition of the foot');
+      expectClose(climb.schedule.lowCas, 250 * KT, { rel: 1e-15 }, 'NIST SP 811: kt');
+    }
+    const solve = p.mission.solve;
+    expect(solve.mode).toBe('payloadRange');
+    if (solve.mode === 'payloadRange') {
+      expectClose(solve.range, 3000 * NMI, { rel: 1e-15 }, 'NIST SP 811: nmi');
+      expectClose(solve.payload, 1600 * LB, { rel: 1e-15 }, 'NIST SP 811: lb');
+    }
+    const reserves = p.mission.reserves;
+    expect(reserves.preset).toBe('icaoAnnex6');
+    if (reserves.preset === 'icaoAnnex6') {
+      expect(reserves.contingencyFraction).toBeCloseTo(0.05, 15);
+      expect(reserves.finalReserveTime).toBe(1800);
+    }
+  });
+
+  it('parseProject fills defaults the file leaves out', () => {
+    const doc = JSON.parse(demoText) as { cautions?: unknown; engine: { installation?: unknown } };
+    delete doc.cautions;
+    delete doc.engine.installation;
+    const p = parseProjectData(doc);
+    expect(p.ok).toBe(true);
+    if (p.ok) {
+      expect(p.value.cautions).toEqual({});
+      expect(p.value.engine.installation).toEqual({ bleed: { kind: 'coreFraction', fraction: 0 }, powerExtraction: 0 });
+    }
+  });
+});
+
+describe('parseProject on fixtures/bad-projects', () => {
+  const cases = Object.entries(expected).filter(([, e]) => e.stage === 'parse');
+
+  it.each(cases)('parseProject rejects %s at the expected path with the expected message', (file, e) => {
+    const r = parseProject(fixture(`bad-projects/${file}`), file);
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    const hit = r.error.find((i) => i.path === e.path && i.message.includes(e.fragment));
+    expect(hit, `issues: ${JSON.stringify(r.error, null, 1)}`).toBeDefined();
+    for (const issue of r.error) {
+      expect(issue.message.length).toBeGreaterThan(0);
+      expect(issue.expected.length).toBeGreaterThan(0);
+    }
+  });
+
+  it('the bad-project fixture with a missing deck parses (the CLI reports the missing file)', () => {
+    expect(parseProject(fixture('bad-projects/missing-deck.blockwise.json'), 'missing-deck').ok).toBe(true);
+  });
+
+  it('parseProject reports every issue of a file with several, not just the first', () => {
+    const doc = JSON.parse(demoText) as { airframe: { wingArea: unknown; vmo: unknown }; mission: { wind: unknown } };
+    doc.airframe.wingArea = '50 kg';
+    doc.airframe.vmo = 'fast';
+    doc.mission.wind = Infinity;
+    const r = parseProjectData(doc);
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.error.map((i) => i.path).sort()).toEqual(['airframe.vmo', 'airframe.wingArea', 'mission.wind']);
+  });
+
+  it('parseProject names the value and what was expected in each issue', () => {
+    const doc = JSON.parse(demoText) as { mission: { legs: { toAltitude?: unknown }[] } };
+    doc.mission.legs[2]!.toAltitude = '41000 kt';
+    const r = parseProjectData(doc);
+    expect(r.ok).toBe(false);
+    if (!r.ok) {
+      expect(r.error[0]).toMatchObject({ path: 'mission.legs[2].toAltitude', value: '"41000 kt"' });
+      expect(r.error[0]!.expected).toContain('a length');
+      expect(r.error[0]!.message).toContain('"41000 kt" is a speed, expected a length');
+    }
+  });
+});
+
+describe('parseProject robustness', () => {
+  it('parseProject never throws on arbitrary text and always explains a failure', () => {
+    fc.assert(
+      fc.property(fc.string(), (text) => {
+        const r = parseProject(text, 'random');
+        if (!r.ok) {
+          expect(r.error.length).toBeGreaterThan(0);
+          for (const i of r.error) expect(i.message).not.toBe('');
+        }
+      }),
+      { numRuns: 300 },
+    );
+  });
+
+  it('parseProject never throws on arbitrary JSON values and always explains a failure', () => {
+    fc.assert(
+      fc.property(fc.jsonValue(), (value) => {
+        const r = parseProjectData(value);
+        expect(r.ok).toBe(false);
+        if (!r.ok) for (const i of r.error) expect(i.path).not.toBe('');
+      }),
+      { numRuns: 300 },
+    );
+  });
+
+  it('parseProject never throws when a demo field is replaced by an arbitrary JSON value', () => {
+    const paths: readonly (readonly (string | number)[])[] = [
+      ['airframe', 'weights', 'maxTakeoff'],
+      ['polar', 'cd0', 1],
+      ['polar', 'induced'],
+      ['engine', 'deck'],
+      ['inlets', 0, 'source'],
+      ['mission', 'legs', 3],
+      ['mission', 'reserves', 'alternate'],
+      ['mission', 'solve'],
+      ['cautions'],
+    ];
+    fc.assert(
+      fc.property(fc.constantFrom(...paths), fc.jsonValue(), (path, value) => {
+        const doc = JSON.parse(demoText) as Record<string | number, unknown>;
+        let node = doc;
+        for (const key of path.slice(0, -1)) node = node[key] as Record<string | number, unknown>;
+        node[path[path.length - 1]!] = value;
+        const r = parseProjectData(doc);
+        if (!r.ok) for (const i of r.error) expect(i.message).toMatch(/\S/);
+      }),
+      { numRuns: 300 },
+    );
+  });
+});

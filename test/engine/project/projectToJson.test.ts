@@ -1,0 +1,58 @@
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { parseProject } from '../../../engine/project/parseProject';
+import { CURRENT_VERSION, type Project } from '../../../engine/project/projectSchema';
+import { projectToJson } from '../../../engine/project/projectToJson';
+
+const fixture = (path: string): string => readFileSync(new URL(`../../../fixtures/${path}`, import.meta.url), 'utf8');
+
+function parsed(text: string): Project {
+  const r = parseProject(text, 'test');
+  if (!r.ok) throw new Error(r.error.map((i) => i.message).join('\n'));
+  return r.value;
+}
+
+describe('projectToJson', () => {
+  it('projectToJson round-trips the demo project exactly', () => {
+    const project = parsed(fixture('demo/demo.blockwise.json'));
+    expect(parsed(projectToJson(project))).toEqual(project);
+  });
+
+  it('projectToJson writes a migrated version-1 project in the current version', () => {
+    const project = parsed(fixture('old-versions/v1.blockwise.json'));
+    const text = projectToJson(project);
+    const doc = JSON.parse(text) as { version: number; airframe: { weights: unknown } };
+    expect(doc.version).toBe(CURRENT_VERSION);
+    expect(doc.airframe.weights).toBeDefined();
+    expect(parsed(text)).toEqual(project);
+  });
+
+  it('projectToJson writes quantities with their SI unit and plain numbers without one', () => {
+    const project = parsed(fixture('demo/demo.blockwise.json'));
+    const doc = JSON.parse(projectToJson(project)) as {
+      airframe: { wingArea: string; mmo: number };
+      mission: { legs: { distance?: unknown; time?: unknown }[] };
+      polar: { compressibility: { sweep: string } };
+    };
+    expect(doc.airframe.wingArea).toMatch(/^[0-9.]+ m2$/);
+    expect(doc.airframe.mmo).toBe(0.85);
+    expect(doc.polar.compressibility.sweep).toMatch(/ rad$/);
+    expect(doc.mission.legs[3]!.distance).toBe('solve');
+    expect(doc.mission.legs[0]!.time).toBe('600 s');
+  });
+
+  it('projectToJson round-trips alternative layouts: other reserves, solve modes, legs and deck kinds', () => {
+    const doc = JSON.parse(fixture('demo/demo.blockwise.json')) as Record<string, any>; // eslint-disable-line @typescript-eslint/no-explicit-any
+    doc.mission.reserves = { preset: 'custom', contingencyFraction: 0.03, alternate: null, finalReserveTime: '45 min', extraFuel: '200 lb' };
+    doc.mission.solve = { mode: 'takeoffWeight', takeoffWeight: '38000 lb', payload: '1000 lb' };
+    doc.mission.legs[3].distance = '2500 nmi';
+    doc.mission.legs[3].profile = { kind: 'stepClimb', step: '2000 ft', maxAltitude: '45000 ft' };
+    doc.mission.legs.splice(5, 0, { kind: 'hold', altitude: '1500 ft', time: '10 min', speed: { kind: 'cas', cas: '200 kt' } });
+    doc.engine.installation = { bleed: { kind: 'massFlow', massFlow: '1 lb/s', coreFlowFraction: 0.2 }, powerExtraction: '20 kW', ramRecoveryFactor: 1.2 };
+    doc.engine.deck = { kind: 'embedded', deck: { title: 'anything', rows: [1, 2, 3] } };
+    doc.polar.induced = { kind: 'table', rows: [{ mach: 0, k: 0.05 }, { mach: 0.9, k: 0.06 }] };
+    doc.inlets[0].source = { kind: 'geometry', captureArea: '5.6 ft2', throatArea: '5.0 ft2', fanFaceArea: '6 ft2', diffuserLossCoefficient: 0.1 };
+    const project = parsed(JSON.stringify(doc));
+    expect(parsed(projectToJson(project))).toEqual(project);
+  });
+});
