@@ -83,14 +83,15 @@ Usage: blockwise air --altitude <length> [--isa-dev <temperature difference>]
 
 Options:
   --altitude   pressure altitude, e.g. "35000 ft", "10.67 km" (bare number = m); -5,004 m to 71,000 m
-  --isa-dev    temperature deviation from ISA, e.g. "+15 K", "-10 degC" (bare number = K); default 0
+  --isa-dev    temperature deviation from ISA, e.g. "+15 K", --isa-dev=-10degC (bare number = K); default 0
   --cas        calibrated airspeed, e.g. "250 kt", "128 m/s" (bare number = m/s)
   --eas        equivalent airspeed
   --tas        true airspeed
   --mach       Mach number, e.g. 0.78
   --json       print JSON (SI units, names carry the unit)
 
-Units are listed in docs/units.md. Give at most one speed.
+Units are listed in docs/units.md. Give at most one speed. A value starting
+with a minus sign needs an equals sign: --isa-dev=-10K, --altitude=-1000ft.
 `,
   options: {
     altitude: { type: 'string' },

@@ -130,7 +130,7 @@ export function atmosphere(pressureAltitude_m: number, isaDev_K = 0): Result<Atm
     return err({
       code: 'temperature_not_positive',
       temperature_K,
-      message: `ISA deviation ${isaDev_K} K gives a temperature of ${temperature_K} K at ${pressureAltitude_m} m`,
+      message: `ISA deviation ${isaDev_K} K gives a temperature of ${temperature_K.toFixed(2)} K at ${pressureAltitude_m} m pressure altitude`,
     });
   }
   const pressure_Pa = isaPressure(pressureAltitude_m, i);
