@@ -9,9 +9,12 @@
  * - a strictly decreasing axis is accepted and stored reversed (with its
  *   values); an axis with a repeated value or mixed order is refused, naming
  *   the first offending index;
- * - NaN or infinite axis values, table values or queries are refused;
+ * - NaN or infinite axis values, table values or queries are refused, and so
+ *   is a table whose slope between two nodes overflows;
  * - extrapolation is linear: the end segment's secant for 'linear', the end
- *   node's Hermite slope for 'monotoneCubic' (so the curve stays C1).
+ *   node's Hermite slope for 'monotoneCubic' (so the curve stays C1);
+ * - an answer beyond the floating-point range (a far extrapolation of a steep
+ *   table) is a `value_overflow` error, never Infinity or NaN.
  */
 import { err, ok, type Result } from './result';
 
@@ -49,7 +52,8 @@ export interface TableError {
 
 /** A lookup that cannot be answered (refused out of range, or a non-finite query). */
 export interface TableRangeError {
-  readonly code: 'outside_table' | 'not_finite_query';
+  /** `value_overflow`: the answer (usually an extrapolation far outside) is beyond the floating-point range. */
+  readonly code: 'outside_table' | 'not_finite_query' | 'value_overflow';
   readonly table: string;
   /** Axis name, 'x' for 1-D tables, 'x' or 'y' for 2-D. */
   readonly axis: string;
@@ -185,6 +189,19 @@ export function makeTable1d(
   if (!axis.ok) return axis;
   const xs = axis.value.values;
   const ys = axis.value.reversed ? [...y].reverse() : [...y];
+  for (let i = 1; i < xs.length; i++) {
+    if (!Number.isFinite((ys[i]! - ys[i - 1]!) / (xs[i]! - xs[i - 1]!))) {
+      const at = axis.value.reversed ? xs.length - 1 - i : i;
+      return err({
+        code: 'not_finite',
+        table: name,
+        field: 'y',
+        index: at,
+        value: ys[i]!,
+        message: `table "${name}": the slope from y[${axis.value.reversed ? at + 1 : at - 1}] to y[${at}] overflows the floating-point range`,
+      });
+    }
+  }
   const slopes = method === 'monotoneCubic' ? fritschCarlsonSlopes(xs, ys) : [];
   return ok({ name, x: xs, y: ys, method, slopes });
 }
@@ -260,16 +277,17 @@ export function interp1d(table: Table1d, x: number, policy: OutOfRangePolicy): I
   if (outside !== null) {
     const end = outside === 'below' ? 0 : n - 1;
     if (policy === 'clamp') return ok({ value: ys[end]!, outside });
-    const slope =
-      table.method === 'monotoneCubic'
-        ? table.slopes[end]!
-        : (ys[i + 1]! - ys[i]!) / (xs[i + 1]! - xs[i]!);
-    return ok({ value: ys[end]! + slope * (x - xs[end]!), outside });
+    if (table.method === 'monotoneCubic') {
+      const slope = table.slopes[end]!;
+      return answer(table, x, slope === 0 ? ys[end]! : ys[end]! + slope * (x - xs[end]!), outside);
+    }
+    return answer(table, x, lerp(ys[i]!, ys[i + 1]!, (x - xs[i]!) / (xs[i + 1]! - xs[i]!)), outside);
   }
   const h = xs[i + 1]! - xs[i]!;
   const t = (x - xs[i]!) / h;
+  if (t === 0) return ok({ value: ys[i]!, outside: null });
   if (table.method === 'linear') {
-    return ok({ value: ys[i]! + t * (ys[i + 1]! - ys[i]!), outside: null });
+    return answer(table, x, lerp(ys[i]!, ys[i + 1]!, t), null);
   }
   const t2 = t * t;
   const t3 = t2 * t;
@@ -278,7 +296,36 @@ export function interp1d(table: Table1d, x: number, policy: OutOfRangePolicy): I
   const h01 = -2 * t3 + 3 * t2;
   const h11 = t3 - t2;
   const value = h00 * ys[i]! + h10 * h * table.slopes[i]! + h01 * ys[i + 1]! + h11 * h * table.slopes[i + 1]!;
-  return ok({ value, outside: null });
+  return answer(table, x, value, null);
+}
+
+/**
+ * Straight line through a (t = 0) and b (t = 1): the two-weight form inside
+ * [0, 1] (cannot overflow for finite a, b), a + t (b - a) outside, and a
+ * flat line when a = b (so no infinity times zero).
+ */
+export function lerp(a: number, b: number, t: number): number {
+  if (t >= 0 && t <= 1) return (1 - t) * a + t * b;
+  return a === b ? a : a + t * (b - a);
+}
+
+/** The error for an answer that overflowed, or null when it is finite. */
+export function overflowCheck(value: number, table: string, axis: string, query: number, axisValues: readonly number[]): TableRangeError | null {
+  if (Number.isFinite(value)) return null;
+  return {
+    code: 'value_overflow',
+    table,
+    axis,
+    query,
+    min: axisValues[0]!,
+    max: axisValues[axisValues.length - 1]!,
+    message: `table "${table}": ${axis} = ${query} gives a value beyond the floating-point range`,
+  };
+}
+
+function answer(table: Table1d, x: number, value: number, outside: OutsideSide): Interp1dResult {
+  const bad = overflowCheck(value, table.name, 'x', x, table.x);
+  return bad ? err(bad) : ok({ value, outside });
 }
 
 /** Smallest and largest axis value. */

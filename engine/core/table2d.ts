@@ -8,7 +8,9 @@
 import { err, ok, type Result } from './result';
 import {
   checkAxis,
+  lerp,
   locate,
+  overflowCheck,
   rangeCheck,
   type OutOfRangePolicy,
   type OutsideSide,
@@ -118,7 +120,8 @@ export function interp2d(table: Table2d, x: number, y: number, policy: OutOfRang
   const z01 = z[wx.i]![j1]!;
   const z10 = z[i1]![wy.i]!;
   const z11 = z[i1]![j1]!;
-  const a = z00 + wy.t * (z01 - z00);
-  const b = z10 + wy.t * (z11 - z10);
-  return ok({ value: a + wx.t * (b - a), outsideX: wx.outside, outsideY: wy.outside });
+  const value = lerp(lerp(z00, z01, wy.t), lerp(z10, z11, wy.t), wx.t);
+  const bad = overflowCheck(value, table.name, wx.outside === null ? 'y' : 'x', wx.outside === null ? y : x, wx.outside === null ? table.y : table.x);
+  if (bad) return err(bad);
+  return ok({ value, outsideX: wx.outside, outsideY: wy.outside });
 }

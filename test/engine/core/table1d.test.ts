@@ -62,6 +62,11 @@ describe('makeTable1d', () => {
     expectClose(value(t, 0.7), 2.5, { abs: 1e-15 }, 'linear midpoint, hand computation');
   });
 
+  it('makeTable1d refuses a slope beyond the floating-point range, naming the index', () => {
+    const r = makeTable1d([0, 1e-300, 1], [0, 1e10, 2e10], 'steep');
+    expect(r.ok ? null : r.error).toMatchObject({ code: 'not_finite', field: 'y', index: 1 });
+  });
+
   it('makeTable1d does not alias the caller arrays', () => {
     const x = [0, 1];
     const y = [5, 6];
@@ -195,5 +200,36 @@ describe('interp1d', () => {
         return r.outside === null && Number.isFinite(r.value) && r.value >= lo - slack && r.value <= hi + slack;
       }),
     );
+  });
+
+  it('interp1d never answers NaN or infinity, for any finite data and query (property)', () => {
+    // "No NaN ever" (project rule): an answer is finite or an error value.
+    const finite = fc.double({ noNaN: true, noDefaultInfinity: true });
+    const data = fc
+      .uniqueArray(finite, { minLength: 1, maxLength: 8 })
+      .chain((xs) => fc.tuple(fc.constant(xs.sort((a, b) => a - b)), fc.array(finite, { minLength: xs.length, maxLength: xs.length })));
+    fc.assert(
+      fc.property(data, finite, fc.constantFrom('refuse', 'clamp', 'extrapolate'), fc.boolean(), ([xs, ys], q, policy, cubic) => {
+        const built = makeTable1d(xs, ys, 'wild', cubic ? 'monotoneCubic' : 'linear');
+        if (!built.ok) return built.error.code === 'not_increasing' || built.error.code === 'not_finite';
+        const r = interp1d(built.value, q, policy);
+        return r.ok ? Number.isFinite(r.value.value) : r.error.message.length > 0;
+      }),
+    );
+  });
+
+  it('interp1d reports value_overflow for a far extrapolation of a steep table', () => {
+    const t = table([0, 1], [0, 1e300]);
+    const r = interp1d(t, 1e10, 'extrapolate');
+    expect(r.ok ? null : r.error.code).toBe('value_overflow');
+    // A flat end extrapolates to its constant however far away.
+    expect(value(table([0, 1], [2, 2]), Number.MAX_VALUE, 'extrapolate')).toBe(2);
+  });
+
+  it('interp1d stays finite between nodes of opposite huge values', () => {
+    const t = table([0, 1], [-8e307, 8e307]);
+    expect(value(t, 0)).toBe(-8e307);
+    expectClose(value(t, 0.5), 0, { abs: 1e292 }, 'midpoint of a symmetric line');
+    expectClose(value(t, 0.75), 4e307, { rel: 1e-15 }, 'straight line, hand computation');
   });
 });

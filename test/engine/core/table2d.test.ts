@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { expectOk } from '../../../engine/core/result';
 import { interp2d, makeTable2d, type Table2d } from '../../../engine/core/table2d';
@@ -95,5 +96,42 @@ describe('interp2d', () => {
     expect(r).toEqual({ value: 2.5, outsideX: null, outsideY: null });
     const single = expectOk(makeTable2d([1], [2], [[7]], 'one point'), 'one point');
     expect(expectOk(interp2d(single, -9, 9, 'refuse'), 'constant').value).toBe(7);
+  });
+
+  it('interp2d never answers NaN or infinity, for any finite grid and query (property)', () => {
+    // "No NaN ever" (project rule): an answer is finite or an error value.
+    const finite = fc.double({ noNaN: true, noDefaultInfinity: true });
+    const axis = fc.uniqueArray(finite, { minLength: 1, maxLength: 4 }).map((a) => a.sort((p, q) => p - q));
+    const grid = fc
+      .tuple(axis, axis)
+      .chain(([xs, ys]) =>
+        fc.tuple(
+          fc.constant(xs),
+          fc.constant(ys),
+          fc.array(fc.array(finite, { minLength: ys.length, maxLength: ys.length }), { minLength: xs.length, maxLength: xs.length }),
+        ),
+      );
+    fc.assert(
+      fc.property(grid, finite, finite, fc.constantFrom('refuse', 'clamp', 'extrapolate'), ([xs, ys, zs], qx, qy, policy) => {
+        const built = makeTable2d(xs, ys, zs, 'wild');
+        if (!built.ok) return built.error.code === 'not_increasing';
+        const r = interp2d(built.value, qx, qy, policy);
+        return r.ok ? Number.isFinite(r.value.value) : r.error.message.length > 0;
+      }),
+    );
+  });
+
+  it('interp2d stays within the four corner values inside a cell (property)', () => {
+    // Bilinear interpolation is a convex combination of the cell corners (definition).
+    fc.assert(
+      fc.property(fc.double({ min: 0.5, max: 0.85, noNaN: true }), fc.double({ min: 0, max: 0.6, noNaN: true }), (x, y) => {
+        const r = expectOk(interp2d(grid(), x, y, 'refuse'), 'inside');
+        const { x: gx, y: gy, z } = ref.bilinear;
+        const i = Math.min(gx.findLastIndex((v) => v <= x), gx.length - 2);
+        const j = Math.min(gy.findLastIndex((v) => v <= y), gy.length - 2);
+        const corners = [z[i]![j]!, z[i]![j + 1]!, z[i + 1]![j]!, z[i + 1]![j + 1]!];
+        return r.value >= Math.min(...corners) - 1e-18 && r.value <= Math.max(...corners) + 1e-18;
+      }),
+    );
   });
 });
