@@ -127,8 +127,9 @@ describe('interp2d', () => {
       fc.property(fc.double({ min: 0.5, max: 0.85, noNaN: true }), fc.double({ min: 0, max: 0.6, noNaN: true }), (x, y) => {
         const r = expectOk(interp2d(grid(), x, y, 'refuse'), 'inside');
         const { x: gx, y: gy, z } = ref.bilinear;
-        const i = Math.min(gx.findLastIndex((v) => v <= x), gx.length - 2);
-        const j = Math.min(gy.findLastIndex((v) => v <= y), gy.length - 2);
+        const cell = (axis: readonly number[], q: number) => Math.min(axis.filter((v) => v <= q).length - 1, axis.length - 2);
+        const i = cell(gx, x);
+        const j = cell(gy, y);
         const corners = [z[i]![j]!, z[i]![j + 1]!, z[i + 1]![j]!, z[i + 1]![j + 1]!];
         return r.value >= Math.min(...corners) - 1e-18 && r.value <= Math.max(...corners) + 1e-18;
       }),
