@@ -1,0 +1,160 @@
+import { readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { expectOk } from '../../../engine/core/result';
+import { CUSTOMARY_DECK_UNITS, deckToCsv, parseDeckCsv } from '../../../engine/propulsion/deckCsv';
+import { deckGridPoints } from '../../../engine/propulsion/deckGrid';
+import { buildParametricDeck } from '../../../engine/propulsion/parametricDeck';
+import { DEMO_ENGINE_SPEC } from '../../../engine/propulsion/deckDemoSpec';
+import { expectClose } from '../../support/assertInDelta';
+import { raggedDeck, RAGGED_CSV } from './deckTestDecks';
+
+const badDir = fileURLToPath(new URL('../../../fixtures/bad-decks/', import.meta.url));
+const expected = JSON.parse(readFileSync(`${badDir}expected.json`, 'utf8')) as Record<string, string>;
+
+// Exact conversion factors, NIST SP 811 (2008) Appendix B.8.
+const LBF_N = 4.4482216152605;
+const LB_KG = 0.45359237;
+const FT_M = 0.3048;
+
+const CUSTOMARY = `## a free comment
+# title: small customary deck
+# parametric: no
+# reference recovery: MIL-E-5008B
+# rating takeoff: 100
+# rating flightIdle: 20
+# note: invented numbers
+# note: second note
+# outside altitude: refuse
+altitude[ft], mach[-], power[%], thrust[lbf], fuel_flow[lb/h], airflow[lb/s], isa_dev[degC]
+0,0,20,1000,500,50,0
+0,0,100,5000,2000,100,0
+0,0.5,20,800,450,55,0
+0,0.5,100,4000,1800,110,0
+10000,0,20,700,400,40,0
+10000,0,100,4000,1500,80,0
+10000,0.5,20,600,380,45,0
+10000,0.5,100,3500,1400,85,0
+0,0,20,900,520,48,20
+0,0,100,4600,2100,96,20
+0,0.5,20,700,470,53,20
+0,0.5,100,3700,1900,105,20
+10000,0,20,600,420,38,20
+10000,0,100,3700,1600,76,20
+10000,0.5,20,500,400,43,20
+10000,0.5,100,3200,1500,80,20
+`;
+
+describe('parseDeckCsv', () => {
+  it('parseDeckCsv reads customary units into SI with the exact NIST SP 811 factors', () => {
+    const deck = expectOk(parseDeckCsv(CUSTOMARY, 'small.csv'), 'customary');
+    const p = deckGridPoints(deck.grid);
+    const hot = p.find((q) => q.isaDev_K === 20 && q.altitude_m === 10000 * FT_M && q.mach === 0.5 && q.power === 1)!;
+    expectClose(hot.thrust_N, 3200 * LBF_N, { rel: 1e-15 }, 'NIST SP 811 lbf');
+    expectClose(hot.fuelFlow_kg_s, (1500 * LB_KG) / 3600, { rel: 1e-15 }, 'NIST SP 811 lb/h');
+    expectClose(hot.airflow_kg_s!, 80 * LB_KG, { rel: 1e-15 }, 'NIST SP 811 lb/s');
+    // degC in an isa_dev column is a temperature difference: 20 degC -> 20 K (no 273.15 offset)
+    expect(hot.isaDev_K).toBe(20);
+  });
+
+  it('parseDeckCsv reads the metadata lines', () => {
+    const deck = expectOk(parseDeckCsv(CUSTOMARY, 'small.csv'), 'customary');
+    expect(deck.title).toBe('small customary deck');
+    expect(deck.parametric).toBe(false);
+    expect(deck.referenceRecovery).toEqual({ kind: 'milE5008b' });
+    // ratings are in the power column's unit: 100 % -> 1, 20 % -> 0.2
+    expect(deck.ratings).toEqual({ takeoff: 1, flightIdle: 0.2 });
+    expect(deck.notes).toEqual(['invented numbers', 'second note']);
+    expect(deck.policy).toEqual({ altitude: 'refuse', mach: 'extrapolate', power: 'clamp', isaDev: 'clamp' });
+    expect(deck.hasAirflow).toBe(true);
+    expect(deck.hasIsaDev).toBe(true);
+  });
+
+  it('parseDeckCsv defaults: title from the file name, reference recovery constant 1, default policies', () => {
+    const deck = raggedDeck();
+    expect(deck.title).toBe('hand ragged');
+    const bare = expectOk(parseDeckCsv(RAGGED_CSV.replace('# title: hand ragged\n', ''), 'bare.csv'), 'bare');
+    expect(bare.title).toBe('bare.csv');
+    expect(bare.referenceRecovery).toEqual({ kind: 'constant', value: 1 });
+    expect(bare.policy).toEqual({ altitude: 'extrapolate', mach: 'extrapolate', power: 'clamp', isaDev: 'clamp' });
+  });
+
+  it('parseDeckCsv accepts CRLF line endings and a constant reference recovery', () => {
+    const text = `# reference recovery: 0.97\r\n${RAGGED_CSV.replace(/\n/g, '\r\n')}`;
+    const deck = expectOk(parseDeckCsv(text, 'crlf.csv'), 'crlf');
+    expect(deck.referenceRecovery).toEqual({ kind: 'constant', value: 0.97 });
+    expect(deckGridPoints(deck.grid)).toEqual(deckGridPoints(raggedDeck().grid));
+  });
+
+  it('parseDeckCsv rejects an unknown metadata key with its line', () => {
+    const r = parseDeckCsv(`# ratings takeoff: 1\n${RAGGED_CSV}`, 'meta.csv');
+    expect(r.ok).toBe(false);
+    if (!r.ok) {
+      expect(r.error[0]).toMatchObject({ code: 'unknown_metadata', line: 1 });
+      expect(r.error[0]!.message).toContain('free comments start with ##');
+    }
+  });
+
+  describe('bad decks (fixtures/bad-decks/expected.json)', () => {
+    for (const [file, fragment] of Object.entries(expected)) {
+      it(`parseDeckCsv rejects ${file} naming the line and column`, () => {
+        const r = parseDeckCsv(readFileSync(`${badDir}${file}`, 'utf8'), file);
+        expect(r.ok).toBe(false);
+        if (r.ok) return;
+        expect(r.error.map((e) => e.message).join('\n')).toContain(fragment);
+        expect(r.error.every((e) => e.line !== null && e.line >= 1)).toBe(true);
+      });
+    }
+  });
+
+  it('parseDeckCsv never throws and every error has a line (property, random input)', () => {
+    const token = fc.constantFrom(
+      'altitude[ft]', 'mach[-]', 'power[-]', 'thrust[lbf]', 'fuel_flow[lb/h]', 'airflow[lb/s]', 'isa_dev[K]', 'thrust[kg]',
+      '0', '1', '0.5', '-3', '1e400', 'NaN', 'Infinity', 'x', '', ' ', '# title: t', '# rating takeoff: 1', '#', '##', '[', ']', ':',
+    );
+    const line = fc.array(token, { maxLength: 8 }).map((cells) => cells.join(','));
+    const text = fc.oneof(fc.string({ maxLength: 200 }), fc.array(line, { maxLength: 12 }).map((ls) => ls.join('\n')));
+    fc.assert(
+      fc.property(text, (t) => {
+        const r = parseDeckCsv(t, 'random.csv');
+        if (!r.ok) {
+          expect(r.error.length).toBeGreaterThan(0);
+          for (const e of r.error) {
+            expect(Number.isInteger(e.line)).toBe(true);
+            expect(e.line!).toBeGreaterThanOrEqual(1);
+            expect(e.message.startsWith('random.csv line ')).toBe(true);
+          }
+        }
+      }),
+      { numRuns: 500 },
+    );
+  });
+});
+
+describe('deckToCsv', () => {
+  it('deckToCsv in SI round-trips every value exactly', () => {
+    const deck = buildParametricDeck(DEMO_ENGINE_SPEC);
+    const back = expectOk(parseDeckCsv(deckToCsv(deck), 'si.csv'), 'round trip');
+    expect(deckGridPoints(back.grid)).toEqual(deckGridPoints(deck.grid));
+    expect(back.ratings).toEqual(deck.ratings);
+    expect(back.title).toBe(deck.title);
+    expect(back.parametric).toBe(true);
+    expect(back.referenceRecovery).toEqual(deck.referenceRecovery);
+    expect(back.notes).toEqual(deck.notes);
+  });
+
+  it('deckToCsv in customary units round-trips to 1e-12', () => {
+    const deck = expectOk(parseDeckCsv(CUSTOMARY, 'small.csv'), 'customary');
+    const back = expectOk(parseDeckCsv(deckToCsv(deck, CUSTOMARY_DECK_UNITS), 'back.csv'), 'back');
+    const a = deckGridPoints(deck.grid);
+    const b = deckGridPoints(back.grid);
+    expect(b).toHaveLength(a.length);
+    a.forEach((p, i) => {
+      expectClose(b[i]!.thrust_N, p.thrust_N, { rel: 1e-12 }, 'lbf round trip');
+      expectClose(b[i]!.altitude_m, p.altitude_m, { rel: 1e-12, abs: 1e-12 }, 'ft round trip');
+    });
+    expect(back.policy).toEqual(deck.policy);
+    expect(back.hasIsaDev).toBe(true);
+  });
+});
