@@ -26,6 +26,8 @@ export const FUEL_TOLERANCE_KG = 0.1;
 /** Range tolerance (m) of the payloadRange mode. */
 export const DISTANCE_TOLERANCE_M = 1;
 export const MAX_ITERATIONS = 40;
+/** A ramp mass beyond this multiple of the heaviest plausible mass (MTOW, or zero-fuel mass + fuel capacity) ends the iteration as not converged. */
+export const RAMP_MASS_GUARD = 3;
 
 export interface MissionEvaluation {
   readonly trip: TripOutcome;
@@ -73,7 +75,11 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
   if (failedFlight(e0)) return { converged: false, rampMass_kg: x0, distance_m: d, iterations: 1, residual_kg: e0.residual_kg, failure: e0 };
   let other = e0.trip.end[S_AIR] - e0.trip.solvableDistance_m;
   let x1 = x0 - e0.residual_kg / 0.85;
+  const guard = RAMP_MASS_GUARD * Math.max(ctx.input.airframe.mtow_kg, ctx.zeroFuelMass_kg + ctx.input.airframe.maxFuel_kg);
   for (let k = 2; k <= MAX_ITERATIONS; k++) {
+    if (!Number.isFinite(x1) || x1 <= ctx.zeroFuelMass_kg * 0.5 || x1 > guard) {
+      return { converged: false, rampMass_kg: x0, distance_m: d, iterations: k - 1, residual_kg: e0.residual_kg, failure: null };
+    }
     d = Math.max(range_m - other, 0);
     const e1 = evaluateMission(scratch(ctx), x1, d);
     if (failedFlight(e1)) return { converged: false, rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, failure: e1 };
@@ -87,7 +93,6 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
     x0 = x1;
     e0 = e1;
     x1 = next;
-    if (!Number.isFinite(x1) || x1 <= 0) break;
   }
   return { converged: false, rampMass_kg: x1, distance_m: d, iterations: MAX_ITERATIONS, residual_kg: e0.residual_kg, failure: null };
 }

@@ -1,7 +1,10 @@
 /**
  * Hold at constant pressure altitude for a time, at the best-endurance speed
  * (minimum drag for a jet; Anderson, Aircraft Performance and Design,
- * section 5.14) re-chosen as mass falls, or at a set CAS. Thrust = drag at
+ * section 5.14), or at a set CAS. The minimum-drag Mach is searched at the
+ * start mass and then flown at constant lift coefficient, Mach proportional
+ * to sqrt(mass), which keeps it at minimum drag for a parabolic polar without
+ * compressibility (CL_md = sqrt(CD0/K) independent of mass). Thrust = drag at
  * part power with a maxContinuous ceiling.
  */
 import { minimumDragMach } from './bestSpeeds';
@@ -10,7 +13,7 @@ import { legFailed, legOk, type LegOutcome } from './legOutcome';
 import { makeLevelSegment } from './levelFlight';
 import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
 import { machOfCas, missionAir } from './missionAtmosphere';
-import { S_ALT, S_TAS, S_TIME, type StateVector } from './missionState';
+import { S_ALT, S_MASS, S_TAS, S_TIME, type StateVector } from './missionState';
 import { appendCaution } from './timeHistoryBuilder';
 import { checkThrustBelowDrag } from '../cautions/checks';
 
@@ -29,14 +32,18 @@ export function flyHold(
   const state = Float64Array.from(start);
   state[S_ALT] = altitude_m;
   if (!(time_s > 0)) return legOk(state, null);
-  const fixedMach = speed.kind === 'cas' ? machOfCas(speed.cas_m_s, missionAir(altitude_m, 0).pressure_Pa) : 0;
+  const mass0 = state[S_MASS];
+  const fixedMach =
+    speed.kind === 'cas'
+      ? machOfCas(speed.cas_m_s, missionAir(altitude_m, 0).pressure_Pa)
+      : minimumDragMach(input, altitude_m, mass0, dev);
   const run = flySegment(
     ctx,
     target,
     makeLevelSegment(ctx, target, {
       altitudeOf: () => altitude_m,
       algebraicAltitude: false,
-      machOf: (h, m) => (speed.kind === 'cas' ? fixedMach : minimumDragMach(input, h, m, dev)),
+      machOf: (_h, m) => (speed.kind === 'cas' || !(m > 0) ? fixedMach : fixedMach * Math.sqrt(m / mass0)),
       ceiling: 'maxContinuous',
       step_s: BASE_STEP_S.hold * ctx.options.stepScale,
       endAirDistance_m: null,

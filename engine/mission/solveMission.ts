@@ -130,15 +130,18 @@ export function solveMission(input: MissionInput, options: SolveOptions = {}): M
 
   let status: MissionStatus = 'ok';
   let message = '';
-  if (trip.status !== 'ok') {
+  if (!converged && iterationMessage !== '') {
+    status = iterationMessage.startsWith('The reserve cannot') ? 'infeasible' : 'did_not_converge';
+    message = iterationMessage;
+  } else if (trip.status !== 'ok') {
     status = trip.status;
     message = trip.message;
   } else if (reserves.status !== 'ok') {
     status = reserves.status;
     message = reserves.message;
   } else if (!converged) {
-    status = iterationMessage.startsWith('The reserve cannot') ? 'infeasible' : 'did_not_converge';
-    message = iterationMessage;
+    status = 'did_not_converge';
+    message = `The iteration stopped on a failed flight after ${iterations} passes; residual ${residual.toFixed(2)} kg.`;
   }
 
   const { first, last } = tripBounds(input);

@@ -1,0 +1,206 @@
+import { describe, expect, it } from 'vitest';
+import { solveMission } from '../../../engine/mission/solveMission';
+import type { Leg, MissionResult } from '../../../engine/mission/missionTypes';
+import { expectClose } from '../../support/assertInDelta';
+import { constantLiftToDragAero, constantTsfcPropulsion } from './support/analyticModels';
+import { demoLegs, FT, KT, missionInput, NO_RESERVES, TEST_AIRFRAME } from './support/missionFixtures';
+
+const G0 = 9.80665;
+// ISA above 11 km: T = 216.65 K (U.S. Standard Atmosphere 1976).
+const A_11KM = Math.sqrt(1.4 * 287.05287 * 216.65);
+const LD = 16;
+const TSFC = 1.6e-5;
+const breguetAero = constantLiftToDragAero(LD);
+const breguetEngines = constantTsfcPropulsion({ thrust0_N: 400000, tsfc_kg_N_s: TSFC, lapseExponent: 0 });
+
+function cruiseOnly(distance_m: number | null, mach = 0.8): Leg[] {
+  return [
+    {
+      kind: 'cruise',
+      name: 'cruise',
+      altitude_m: 11000,
+      speed: { kind: 'mach', mach },
+      profile: { kind: 'constantAltitude' },
+      distance_m,
+    },
+  ];
+}
+
+function expectNoNaN(r: MissionResult): void {
+  for (const [k, v] of Object.entries(r)) if (typeof v === 'number') expect(Number.isFinite(v), k).toBe(true);
+}
+
+describe('solveMission', () => {
+  it('solveMission flies a constant-L/D, constant-TSFC cruise as the Breguet range equation predicts', () => {
+    // Breguet range for jets: R = (V / (c g)) (L/D) ln(W0/W1) (Anderson, Aircraft Performance and Design, eq. 5.155 form).
+    const R = 3_000_000;
+    const w0 = 70000;
+    const r = solveMission(
+      missionInput({ legs: cruiseOnly(R), solve: { kind: 'takeoffWeight', takeoffMass_kg: w0, payload_kg: 10000 }, aero: breguetAero, propulsion: breguetEngines }),
+    );
+    expect(r.status).toBe('ok');
+    const V = 0.8 * A_11KM;
+    const w1 = w0 * Math.exp(-(R * TSFC * G0) / (V * LD));
+    expectClose(r.tripFuel_kg, w0 - w1, { rel: 0.001 }, 'Breguet range equation, within 0.1 %');
+    expectClose(r.tripFuel_kg, w0 - w1, { rel: 1e-7 }, 'Breguet range equation (RK4 is in fact far tighter)');
+    expectClose(r.tripTime_s, R / V, { rel: 1e-9 }, 'time = R / V at constant Mach');
+    expectClose(r.airDistance_m, R, { abs: 1e-3 }, 'distance event stops the leg exactly');
+  });
+
+  it('solveMission in payloadRange mode lands with exactly the reserve and matches the closed form', () => {
+    // Closed form with constant L/D and TSFC: final reserve hold of t_h seconds from landing mass mL leaves
+    // ZFW = mL exp(-c g t_h / (L/D)) (Breguet endurance, Anderson eq. 5.130 form); the cruise gives
+    // TOW = mL exp(R c g / (V L/D)) (Breguet range).
+    const R = 2_500_000;
+    const hold = 1800;
+    const zfw = TEST_AIRFRAME.oew_kg + 12000;
+    const r = solveMission(
+      missionInput({
+        legs: cruiseOnly(null),
+        solve: { kind: 'payloadRange', payload_kg: 12000, range_m: R },
+        aero: breguetAero,
+        propulsion: breguetEngines,
+        reserves: { preset: 'custom', contingencyFraction: 0, alternate: null, finalReserve_s: hold, extraFuel_kg: 0 },
+      }),
+    );
+    expect(r.status).toBe('ok');
+    const mL = zfw * Math.exp((TSFC * G0 * hold) / LD);
+    const tow = mL * Math.exp((R * TSFC * G0) / (0.8 * A_11KM * LD));
+    expectClose(r.landingMass_kg, mL, { abs: 0.2 }, 'closed-form landing mass');
+    expectClose(r.takeoffMass_kg, tow, { abs: 0.2 }, 'closed-form take-off mass');
+    expectClose(r.landingMass_kg - r.zeroFuelMass_kg, r.reserveFuel_kg, { abs: 0.1 }, 'lands with exactly the reserve (0.1 kg tolerance)');
+    expect(Math.abs(r.residual_kg)).toBeLessThanOrEqual(0.1);
+    expectClose(r.airDistance_m, R, { abs: 1 }, 'still-air distance equals the range');
+    expect(r.iterations).toBeGreaterThan(1);
+  });
+
+  it('solveMission converges on the demo-like mission in payloadRange mode with ICAO reserves', () => {
+    const r = solveMission(
+      missionInput({
+        legs: demoLegs(null),
+        solve: { kind: 'payloadRange', payload_kg: 10000, range_m: 3000 * 1852 },
+        reserves: {
+          preset: 'icaoAnnex6',
+          contingencyFraction: 0.05,
+          minContingency_s: 300,
+          alternate: { distance_m: 200 * 1852, cruiseAltitude_m: 25000 * FT, cruiseMach: 0.7, elevation_m: 0 },
+          finalReserve_s: 1800,
+        },
+      }),
+    );
+    expect(r.status).toBe('ok');
+    expectNoNaN(r);
+    expectClose(r.airDistance_m, 3000 * 1852, { abs: 1 }, 'range is matched in still air');
+    // Arrives at block-in with the reserve: the definition of the payloadRange mode.
+    expectClose(r.rampMass_kg - r.blockFuel_kg - r.zeroFuelMass_kg, r.reserveFuel_kg, { abs: 0.1 }, 'block-in fuel = reserve');
+    expect(r.legs.filter((l) => l.kind === 'reserve').length).toBe(3);
+    expect(r.history.time_s.length).toBeGreaterThan(20);
+    expect(r.history.legIndex.length).toBe(r.history.time_s.length);
+  });
+
+  it('solveMission block fuel changes by less than 0.05 % when every step is halved', () => {
+    // Convergence requirement of DESIGN.md section 8; RK4 global error falls as h^4.
+    const input = missionInput({
+      legs: demoLegs(null),
+      solve: { kind: 'payloadRange', payload_kg: 10000, range_m: 2500 * 1852 },
+      reserves: { preset: 'icaoAnnex6', contingencyFraction: 0.05, minContingency_s: 300, alternate: null, finalReserve_s: 1800 },
+      isaDev_K: 10,
+      wind_m_s: -15,
+    });
+    const coarse = solveMission(input);
+    const fine = solveMission(input, { stepScale: 0.5 });
+    expect(coarse.status).toBe('ok');
+    expect(fine.status).toBe('ok');
+    const change = Math.abs(coarse.blockFuel_kg - fine.blockFuel_kg) / fine.blockFuel_kg;
+    expect(change).toBeLessThan(0.0005);
+  });
+
+  it('solveMission in maxRange mode fills to MTOW or fuel capacity and lands with the reserve', () => {
+    const r = solveMission(
+      missionInput({
+        legs: demoLegs(null),
+        solve: { kind: 'maxRange', payload_kg: 10000 },
+        reserves: { preset: 'custom', contingencyFraction: 0.05, alternate: null, finalReserve_s: 1800, extraFuel_kg: 200 },
+      }),
+    );
+    expect(r.status).toBe('ok');
+    const fuelLimited = Math.min(TEST_AIRFRAME.mtow_kg, r.zeroFuelMass_kg + TEST_AIRFRAME.maxFuel_kg - (r.rampMass_kg - r.takeoffMass_kg));
+    expectClose(r.takeoffMass_kg, fuelLimited, { abs: 1e-6 }, 'TOW = min(MTOW, ZFW + capacity - taxi fuel)');
+    expectClose(r.rampMass_kg - r.blockFuel_kg - r.zeroFuelMass_kg, r.reserveFuel_kg, { abs: 0.1 }, 'block-in fuel = reserve');
+    expect(r.reserves.extra_kg).toBe(200);
+  });
+
+  it('solveMission applies the wind to ground distance only', () => {
+    const still = solveMission(missionInput({ legs: cruiseOnly(1_000_000), solve: { kind: 'takeoffWeight', takeoffMass_kg: 70000, payload_kg: 10000 } }));
+    const windy = solveMission(
+      missionInput({ legs: cruiseOnly(1_000_000), solve: { kind: 'takeoffWeight', takeoffMass_kg: 70000, payload_kg: 10000 }, wind_m_s: -30 }),
+    );
+    expectClose(windy.airDistance_m, still.airDistance_m, { abs: 1e-3 }, 'still-air distance unchanged by wind');
+    // ground = air + wind * time (definition of an along-track wind).
+    expectClose(windy.groundDistance_m, windy.airDistance_m - 30 * windy.tripTime_s, { rel: 1e-9 }, 'ground distance = air distance + wind x time');
+    expectClose(windy.tripFuel_kg, still.tripFuel_kg, { rel: 1e-9 }, 'fuel is flown in the air mass');
+  });
+
+  it('solveMission reports did_not_converge with the residual when no fuel load can close the mission', () => {
+    // Fuel flow c*D = b (m - m_f)^2 makes the landing mass saturate at m_f + 1/(b T) below the zero-fuel mass:
+    // no ramp mass lands with the reserve, so the iteration must say so instead of returning a number.
+    const b = 5e-8;
+    const mFloor = 40000;
+    const tsfc = 1e-5;
+    const aero = {
+      ...constantLiftToDragAero(16),
+      drag: (q: { altitude_m: number; mach: number; mass_kg: number; loadFactor: number }) => {
+        const base = constantLiftToDragAero(16).drag(q);
+        const u = Math.max(q.mass_kg - mFloor, 0);
+        return { ...base, drag_N: (b * u * u) / tsfc };
+      },
+    };
+    const r = solveMission(
+      missionInput({
+        legs: [...cruiseOnly(null), { kind: 'hold', name: 'hold', altitude_m: 11000, time_s: 3600, speed: { kind: 'cas', cas_m_s: 250 * KT } }],
+        solve: { kind: 'payloadRange', payload_kg: 10000, range_m: 0 },
+        aero,
+        propulsion: constantTsfcPropulsion({ thrust0_N: 1e9, tsfc_kg_N_s: tsfc, lapseExponent: 0 }),
+      }),
+    );
+    expect(r.status).toBe('did_not_converge');
+    expect(r.statusMessage).toMatch(/did not converge/);
+    expect(Number.isFinite(r.residual_kg)).toBe(true);
+    expect(Math.abs(r.residual_kg)).toBeGreaterThan(0.1);
+  });
+
+  it('solveMission says infeasible, naming the field, for bad input', () => {
+    const r = solveMission(missionInput({ legs: cruiseOnly(Number.NaN), solve: { kind: 'takeoffWeight', takeoffMass_kg: 70000, payload_kg: 0 } }));
+    expect(r.status).toBe('infeasible');
+    expect(r.statusMessage).toContain('legs[0] (cruise).distance_m');
+    const noLeg = solveMission(missionInput({ legs: demoLegs(1000), solve: { kind: 'payloadRange', payload_kg: 1000, range_m: 1e6 } }));
+    expect(noLeg.status).toBe('infeasible');
+    expect(noLeg.statusMessage).toContain('distance_m null');
+    expectNoNaN(noLeg);
+  });
+
+  it('solveMission reports fuel_exhausted when the fuel runs out', () => {
+    const r = solveMission(
+      missionInput({ legs: cruiseOnly(20_000_000), solve: { kind: 'takeoffWeight', takeoffMass_kg: 60000, payload_kg: 10000 }, aero: breguetAero, propulsion: breguetEngines }),
+    );
+    expect(r.status).toBe('fuel_exhausted');
+    expectClose(r.landingMass_kg, r.zeroFuelMass_kg, { abs: 1e-3 }, 'the fuel event stops the flight at zero fuel');
+    expectNoNaN(r);
+  });
+
+  it('solveMission with takeoffWeight and a solvable cruise finds the distance that leaves exactly the reserve', () => {
+    const r = solveMission(
+      missionInput({
+        legs: cruiseOnly(null),
+        solve: { kind: 'takeoffWeight', takeoffMass_kg: 65000, payload_kg: 10000 },
+        aero: breguetAero,
+        propulsion: breguetEngines,
+        reserves: NO_RESERVES,
+      }),
+    );
+    expect(r.status).toBe('ok');
+    // With no reserve the whole fuel is burnt: R = V/(c g) (L/D) ln(W0/ZFW) (Breguet).
+    const R = ((0.8 * A_11KM) / (TSFC * G0)) * LD * Math.log(65000 / 50000);
+    expectClose(r.airDistance_m, R, { rel: 1e-5 }, 'Breguet range to zero fuel');
+  });
+});
