@@ -5,6 +5,7 @@
 import { builtinModules } from 'node:module';
 import { dirname, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import process from 'node:process';
 import { build } from 'vite';
 
 const repo = resolve(dirname(fileURLToPath(import.meta.url)), '..');
