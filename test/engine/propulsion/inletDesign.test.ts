@@ -68,13 +68,13 @@ describe('validateInletDesign', () => {
 describe('inlet airframe increments', () => {
   it('inletDragIncrementCd0 is D/q x engines / wing area', () => {
     // Definition of a drag area: D = q (D/q), so dCD0 = n (D/q) / S (common practice).
-    // 2 engines x 0.55 m^2 / 120 m^2 = 0.0091667 (91.7 drag counts), by hand.
-    expectClose(inletDragIncrementCd0(LONG_PITOT, 2, 120), 0.0091667, { abs: 1e-7 }, 'by hand');
+    // 2 engines x 0.14 m^2 / 35 m^2 = 0.008 (80 drag counts), by hand.
+    expectClose(inletDragIncrementCd0(LONG_PITOT, 2, 35), 0.008, { abs: 1e-15 }, 'by hand');
     expect(() => inletDragIncrementCd0(LONG_PITOT, 2, 0)).toThrow(/wing area/);
   });
 
   it('inletWeight is per-engine weight times engine count', () => {
-    expect(inletWeight(SHORT_INLET, 2)).toBe(600);
-    expect(inletCaptureArea(TABLE_INLET)).toBe(2.2);
+    expect(inletWeight(SHORT_INLET, 2)).toBe(160);
+    expect(inletCaptureArea(TABLE_INLET)).toBe(0.55);
   });
 });

@@ -2,9 +2,9 @@ import { describe, expect, it } from 'vitest';
 import type { GeometrySource } from '../../../engine/propulsion/inletDesign';
 import { geometryInletFlow, streamTubeArea } from '../../../engine/propulsion/inletFlow';
 import { expectClose } from '../../support/assertInDelta';
-import ref from '../../reference/installationReference.json';
+import { ref, type GeometryInletRow } from './installationReference';
 
-function geometry(row: (typeof ref.geometryInlet)[number]): GeometrySource {
+function geometry(row: GeometryInletRow): GeometrySource {
   return {
     kind: 'geometry',
     captureArea_m2: row.throatArea_m2 * 1.1,

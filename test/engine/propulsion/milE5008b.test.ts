@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { milE5008bRecovery } from '../../../engine/propulsion/milE5008b';
 import { expectClose } from '../../support/assertInDelta';
-import ref from '../../reference/installationReference.json';
+import { ref } from './installationReference';
 
 describe('milE5008bRecovery', () => {
   it('milE5008bRecovery is 1 at and below Mach 1', () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { additiveDrag, spillageDrag } from '../../../engine/propulsion/spillageDrag';
 import { expectClose } from '../../support/assertInDelta';
-import ref from '../../reference/installationReference.json';
+import { ref } from './installationReference';
 
 describe('additiveDrag', () => {
   it('additiveDrag matches the 1-D momentum balance computed independently (NACA Report 1187 form)', () => {

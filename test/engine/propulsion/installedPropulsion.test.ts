@@ -1,0 +1,270 @@
+import { describe, expect, it } from 'vitest';
+import { DEFAULT_CAUTION_SETTINGS, type CautionSettings } from '../../../engine/cautions/cautionSettings';
+import { expectOk } from '../../../engine/core/result';
+import { lookupDeck } from '../../../engine/propulsion/deckLookup';
+import { DEMO_ENGINE_SPEC } from '../../../engine/propulsion/deckDemoSpec';
+import type { EngineDeck } from '../../../engine/propulsion/engineDeck';
+import type { InletDesign } from '../../../engine/propulsion/inletDesign';
+import type { InstallationSettings } from '../../../engine/propulsion/installationCorrections';
+import { FOR_THRUST_TOLERANCE } from '../../../engine/propulsion/installedModel';
+import {
+  inletDragIncrementCd0,
+  inletWeight,
+  makeInstalledPropulsion,
+  type InstalledPropulsionOptions,
+} from '../../../engine/propulsion/installedPropulsion';
+import { milE5008bRecovery } from '../../../engine/propulsion/milE5008b';
+import { buildParametricDeck } from '../../../engine/propulsion/parametricDeck';
+import type { FlightCondition, InstalledPoint, PropulsionModel } from '../../../engine/propulsion/propulsionModel';
+import { additiveDrag } from '../../../engine/propulsion/spillageDrag';
+import { expectClose } from '../../support/assertInDelta';
+import { LONG_PITOT, SHORT_INLET, TABLE_INLET } from './inletDesigns';
+
+const FT = 0.3048;
+const deck: EngineDeck = buildParametricDeck(DEMO_ENGINE_SPEC);
+const NO_INSTALL: InstallationSettings = { bleed: { kind: 'coreFraction', fraction: 0 }, powerExtraction_W: 0, powerExtractionFuel_kg_s_W: 0 };
+const CRUISE: FlightCondition = { altitude_m: 35000 * FT, mach: 0.8, isaDev_K: 0 };
+
+function model(inlet: InletDesign, extra: Partial<InstalledPropulsionOptions> = {}): PropulsionModel {
+  return makeInstalledPropulsion({
+    deck,
+    engineCount: 2,
+    inlet,
+    installation: NO_INSTALL,
+    cautionSettings: DEFAULT_CAUTION_SETTINGS,
+    ...extra,
+  });
+}
+
+/** An inlet whose recovery equals the deck's reference below Mach 1 and spills nothing measurable. */
+const IDEAL: InletDesign = {
+  ...TABLE_INLET,
+  name: 'Ideal',
+  source: { kind: 'recoveryTable', mach: [0, 1], recovery: [1, 1], captureArea_m2: 1e-6 },
+  lipSuctionFactor: 1,
+};
+
+function ids(p: InstalledPoint): string[] {
+  return p.cautions.map((c) => c.id);
+}
+
+describe('makeInstalledPropulsion', () => {
+  it('makeInstalledPropulsion with an ideal inlet and no installation losses returns the deck times the engine count', () => {
+    // Identity check against the deck lookup itself (no installation: recovery = reference, no spillage).
+    const p = model(IDEAL).atRating(CRUISE, 'maxCruise');
+    const d = expectOk(lookupDeck(deck, CRUISE, 0.88), 'deck');
+    expectClose(p.thrust_N, 2 * d.thrust_N, { rel: 1e-14 }, 'deck x 2');
+    expectClose(p.fuelFlow_kg_s, 2 * d.fuelFlow_kg_s, { rel: 1e-14 }, 'deck x 2');
+    expect(p.perEngine.recovery).toBe(1);
+    expect(p.perEngine.spillageDrag_N).toBe(0);
+    expect(model(IDEAL).label).toContain('parametric');
+    expect(model(IDEAL).inletName).toBe('Ideal');
+    expect(p.tsfc_kg_N_s).toBeCloseTo(p.fuelFlow_kg_s / p.thrust_N, 15);
+  });
+
+  it("makeInstalledPropulsion applies Raymer's ram correction: recovery 0.97 against 1.0 loses 4.05 %", () => {
+    // Raymer, installed thrust: % loss = C_ram (eta_ref - eta) x 100, C_ram 1.35 (from memory) -> 4.05 %.
+    const flat: InletDesign = { ...IDEAL, source: { kind: 'recoveryTable', mach: [0, 1], recovery: [0.97, 0.97], captureArea_m2: 1e-6 } };
+    const p = model(flat).atRating(CRUISE, 'maxCruise');
+    expectClose(p.perEngine.correctedThrust_N, p.perEngine.uninstalledThrust_N * (1 - 0.0405), { rel: 1e-13 }, 'Raymer worked number');
+    expect(p.perEngine.referenceRecovery).toBe(1); // MIL-E-5008B below Mach 1
+    expect(p.fuelFlow_kg_s).toBeCloseTo(2 * p.perEngine.uninstalledFuelFlow_kg_s, 15);
+  });
+
+  it('makeInstalledPropulsion measures recovery against MIL-E-5008B above Mach 1', () => {
+    // The deck states MIL-E-5008B as its reference; at M 0.9 (top of the table) it is 1.
+    const p = model(LONG_PITOT).atRating({ ...CRUISE, mach: 0.9 }, 'maxCruise');
+    expect(p.perEngine.referenceRecovery).toBe(milE5008bRecovery(0.9));
+  });
+
+  it('makeInstalledPropulsion charges spillage from the mass-flow ratio and ISA free stream', () => {
+    // 35,000 ft ISA: p 23,842 Pa, rho 0.37956 kg/m^3, a 296.54 m/s (U.S. Standard Atmosphere 1976 tables, from memory).
+    const p = model(LONG_PITOT).atRating(CRUISE, 'maxCruise');
+    const e = p.perEngine;
+    const a0 = e.airflow_kg_s! / (0.37956 * 0.8 * 296.54);
+    expectClose(e.massFlowRatio!, a0 / 0.56, { rel: 2e-4 }, 'A0/Ac from 1976 ISA tables');
+    const expected = (1 - 0.8) * additiveDrag(0.8, 23842, e.massFlowRatio!, 0.56).drag_N;
+    expectClose(e.spillageDrag_N, expected, { rel: 1e-4 }, 'NACA Report 1187 additive drag less lip suction');
+    expect(e.spillageDrag_N).toBeGreaterThan(0);
+    expectClose(e.thrust_N, e.correctedThrust_N - e.spillageDrag_N, { rel: 1e-15 }, 'bookkeeping');
+    expectClose(p.thrust_N, 2 * e.thrust_N, { rel: 1e-15 }, 'all engines');
+    // Engine holds corrected flow: physical airflow scales with recovery / reference.
+    const deckAirflow = expectOk(lookupDeck(deck, CRUISE, 0.88), 'deck').airflow_kg_s!;
+    expectClose(e.airflow_kg_s!, deckAirflow * e.recovery, { rel: 1e-14 }, 'corrected flow held');
+  });
+
+  it('makeInstalledPropulsion applies bleed and shaft power extraction', () => {
+    const base = model(IDEAL).atRating(CRUISE, 'maxCruise').perEngine;
+    const bled = model(IDEAL, {
+      installation: { bleed: { kind: 'coreFraction', fraction: 0.02 }, powerExtraction_W: 50e3 },
+    }).atRating(CRUISE, 'maxCruise').perEngine;
+    // Raymer: 2 % of core flow x C_bleed 2.0 = 4 % thrust; 50 kW / (0.35 x 43 MJ/kg) fuel (common practice).
+    expectClose(bled.correctedThrust_N, base.correctedThrust_N * 0.96, { rel: 1e-13 }, 'Raymer bleed');
+    expectClose(bled.fuelFlow_kg_s, base.fuelFlow_kg_s + 50e3 / (0.35 * 43e6), { rel: 1e-13 }, 'extraction fuel');
+  });
+});
+
+describe('hybrid recoveryFrom / spillageFrom', () => {
+  const cond: FlightCondition = { altitude_m: 30000 * FT, mach: 0.75, isaDev_K: 0 };
+
+  it('hybrid options set to the pure designs reproduce the pure models', () => {
+    const pureB = model(SHORT_INLET).atRating(cond, 'maxClimb');
+    const viaA = model(LONG_PITOT, { recoveryFrom: SHORT_INLET, spillageFrom: SHORT_INLET }).atRating(cond, 'maxClimb');
+    expect(viaA.perEngine).toEqual(pureB.perEngine);
+    expect(viaA.thrust_N).toBe(pureB.thrust_N);
+    const pureA = model(LONG_PITOT).atRating(cond, 'maxClimb');
+    const selfA = model(LONG_PITOT, { recoveryFrom: LONG_PITOT, spillageFrom: LONG_PITOT }).atRating(cond, 'maxClimb');
+    expect(selfA.perEngine).toEqual(pureA.perEngine);
+  });
+
+  it("hybrid B's recovery with A's spillage takes each part from its own design", () => {
+    const a = model(LONG_PITOT).atRating(cond, 'maxClimb').perEngine;
+    const b = model(SHORT_INLET).atRating(cond, 'maxClimb').perEngine;
+    const h = model(LONG_PITOT, { recoveryFrom: SHORT_INLET }).atRating(cond, 'maxClimb').perEngine;
+    expect(h.recovery).toBe(b.recovery);
+    expect(h.correctedThrust_N).toBe(b.correctedThrust_N);
+    expect(h.throatMach).toBe(b.throatMach);
+    // Spillage uses A's capture area at B's airflow.
+    expectClose(h.massFlowRatio!, (b.massFlowRatio! * 0.5) / 0.56, { rel: 1e-13 }, 'A0 over A capture');
+    expect(h.spillageDrag_N).not.toBe(b.spillageDrag_N);
+    expect(h.spillageDrag_N).not.toBe(a.spillageDrag_N);
+    // 30,000 ft ISA static pressure 30,090 Pa (U.S. Standard Atmosphere 1976 table, from memory); A's lip suction 0.8.
+    const expected = (1 - 0.8) * additiveDrag(0.75, 30090, h.massFlowRatio!, 0.56).drag_N;
+    expectClose(h.spillageDrag_N, expected, { rel: 1e-4 }, "NACA Report 1187 with A's capture area");
+  });
+});
+
+describe('forThrust', () => {
+  const m = model(LONG_PITOT, { installation: { bleed: { kind: 'coreFraction', fraction: 0.01 }, powerExtraction_W: 20e3 } });
+
+  it('forThrust round-trips installed thrust to the stated tolerance', () => {
+    const top = m.atRating(CRUISE, 'maxCruise');
+    for (const share of [0.15, 0.4, 0.63, 0.9, 0.999]) {
+      const want = share * top.thrust_N;
+      const p = m.forThrust(CRUISE, want, 'maxCruise');
+      expect(p.limit).toBe('within');
+      expect(p.thrustRequired_N).toBe(want);
+      expectClose(p.thrust_N, want, { rel: FOR_THRUST_TOLERANCE }, 'round trip');
+      expect(p.power).toBeGreaterThan(0.06);
+      expect(p.power).toBeLessThan(0.88);
+      // The point is the atPower point at that setting.
+      expectClose(m.atPower(CRUISE, p.power).thrust_N, p.thrust_N, { rel: 1e-14 }, 'same point');
+    }
+  });
+
+  it('forThrust reports above_rating at the rating and below_idle at idle', () => {
+    const top = m.atRating(CRUISE, 'maxCruise');
+    const over = m.forThrust(CRUISE, 1.5 * top.thrust_N, 'maxCruise');
+    expect(over.limit).toBe('above_rating');
+    expect(over.power).toBe(0.88);
+    expect(over.thrust_N).toBe(top.thrust_N);
+    const climbTop = m.forThrust(CRUISE, 1.01 * top.thrust_N, 'maxClimb');
+    expect(climbTop.limit).toBe('within');
+    // At flight idle in cruise the installed thrust is negative (spillage and extraction exceed the deck thrust).
+    const idle = m.atRating(CRUISE, 'flightIdle');
+    expect(idle.thrust_N).toBeLessThan(0);
+    const under = m.forThrust(CRUISE, idle.thrust_N - 100, 'maxCruise');
+    expect(under.limit).toBe('below_idle');
+    expect(under.power).toBe(0.06);
+    expect(under.thrust_N).toBe(idle.thrust_N);
+    expect(under.tsfc_kg_N_s).toBeNull();
+  });
+
+  it('forThrust defaults the ceiling to maxCruise', () => {
+    const top = m.atRating(CRUISE, 'maxCruise');
+    expect(m.forThrust(CRUISE, 1.2 * top.thrust_N).power).toBe(0.88);
+  });
+});
+
+describe('installed thrust shape (common practice)', () => {
+  it('installed thrust at a fixed rating falls with Mach, bottoms out subsonic, then partly recovers', () => {
+    // Common practice for a high-bypass turbofan (Mattingly's lapse delta0 (1 - 0.49 sqrt(M0))):
+    // net thrust falls with speed, then ram pressure wins part of it back.
+    const m = model(LONG_PITOT);
+    const machs = [0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9];
+    const thrust = machs.map((mach) => m.atRating({ altitude_m: 30000 * FT, mach, isaDev_K: 0 }, 'maxClimb').thrust_N);
+    const iMin = thrust.indexOf(Math.min(...thrust));
+    expect(machs[iMin]).toBeGreaterThan(0.3);
+    expect(machs[iMin]).toBeLessThan(0.9);
+    expect(thrust[0]!).toBeGreaterThan(thrust[iMin]!);
+    expect(thrust.at(-1)!).toBeGreaterThan(thrust[iMin]!);
+    // Installed below uninstalled everywhere (recovery < 1 and spillage > 0).
+    for (const mach of machs) {
+      const p = m.atRating({ altitude_m: 30000 * FT, mach, isaDev_K: 0 }, 'maxClimb');
+      expect(p.perEngine.thrust_N).toBeLessThan(p.perEngine.uninstalledThrust_N);
+    }
+  });
+});
+
+describe('two inlet designs', () => {
+  it('long pitot and short inlet give different installed thrust, and perEngine shows why', () => {
+    const long = model(LONG_PITOT).atRating(CRUISE, 'maxCruise').perEngine;
+    const short = model(SHORT_INLET).atRating(CRUISE, 'maxCruise').perEngine;
+    // Recovery: the long pitot's gentler diffuser (K_d 0.04 vs 0.1) loses less.
+    expect(long.recovery).toBeGreaterThan(short.recovery);
+    expect(long.correctedThrust_N).toBeGreaterThan(short.correctedThrust_N);
+    // Spillage: the long pitot's larger capture spills more (lower A0/Ac).
+    expect(long.massFlowRatio!).toBeLessThan(short.massFlowRatio!);
+    expect(long.spillageDrag_N).toBeGreaterThan(short.spillageDrag_N);
+    expect(long.thrust_N).not.toBeCloseTo(short.thrust_N, 0);
+    // Airframe side: more external drag and weight for the long pitot.
+    expect(inletDragIncrementCd0(LONG_PITOT, 2, 35)).toBeGreaterThan(inletDragIncrementCd0(SHORT_INLET, 2, 35));
+    expect(inletWeight(LONG_PITOT, 2)).toBeGreaterThan(inletWeight(SHORT_INLET, 2));
+  });
+});
+
+describe('cautions', () => {
+  it('every query carries throat and fan-face Mach cautions against the settings', () => {
+    const strict: CautionSettings = { ...DEFAULT_CAUTION_SETTINGS, maxThroatMach: 0.3, minFanFaceMach: 0.55, maxFanFaceMach: 0.6 };
+    const p = model(SHORT_INLET, { cautionSettings: strict }).atRating(CRUISE, 'maxCruise');
+    expect(ids(p)).toContain('throat_mach_high');
+    expect(ids(p)).toContain('fan_face_mach_range');
+    const high = p.cautions.find((c) => c.id === 'throat_mach_high')!;
+    expect(high.value).toBe(p.perEngine.throatMach);
+    expect(high.threshold).toBe(0.3);
+    const relaxed: CautionSettings = { ...DEFAULT_CAUTION_SETTINGS, maxThroatMach: 0.99, minFanFaceMach: 0.01, maxFanFaceMach: 0.99 };
+    expect(model(SHORT_INLET, { cautionSettings: relaxed }).atRating(CRUISE, 'maxCruise').cautions).toEqual([]);
+  });
+
+  it('a choked throat is reported with a warning and Mach 1', () => {
+    const tiny: InletDesign = { ...SHORT_INLET, name: 'Tiny throat', source: { ...SHORT_INLET.source, kind: 'geometry', captureArea_m2: 0.5, throatArea_m2: 0.2, fanFaceArea_m2: 0.6, diffuserLossCoefficient: 0.2 } };
+    const p = model(tiny).atRating({ altitude_m: 0, mach: 0.2, isaDev_K: 0 }, 'takeoff');
+    expect(p.perEngine.throatMach).toBe(1);
+    expect(ids(p)).toContain('inlet_throat_choked');
+  });
+
+  it('a deck without airflow skips spillage and says so', () => {
+    const noAir: EngineDeck = { ...deck, hasAirflow: false, grid: { ...deck.grid, airflow_kg_s: null } };
+    const p = makeInstalledPropulsion({ deck: noAir, engineCount: 2, inlet: TABLE_INLET, installation: NO_INSTALL, cautionSettings: DEFAULT_CAUTION_SETTINGS }).atRating(CRUISE, 'maxCruise');
+    expect(p.perEngine.spillageDrag_N).toBe(0);
+    expect(p.perEngine.massFlowRatio).toBeNull();
+    expect(p.perEngine.airflow_kg_s).toBeNull();
+    const c = p.cautions.find((x) => x.id === 'no_airflow_spillage_skipped')!;
+    expect(c.severity).toBe('info');
+  });
+
+  it('deck extrapolation cautions pass through, unless the settings turn them off', () => {
+    const beyond: FlightCondition = { ...CRUISE, mach: 0.95 };
+    expect(ids(model(TABLE_INLET).atRating(beyond, 'maxCruise'))).toContain('deck_extrapolation');
+    const quiet = model(TABLE_INLET, { cautionSettings: { ...DEFAULT_CAUTION_SETTINGS, cautionOnDeckExtrapolation: false } }).atRating(beyond, 'maxCruise');
+    expect(ids(quiet)).not.toContain('deck_extrapolation');
+    // The recovery table ends at M 0.9: its end value is held with a caution.
+    expect(ids(quiet)).toContain('inlet_recovery_table_range');
+    expect(quiet.outsideTable).toContain('mach');
+  });
+
+  it('a rating the deck does not name falls back to the deck bound with a caution', () => {
+    const fewer: EngineDeck = { ...deck, ratings: { takeoff: 1, flightIdle: 0.06 } };
+    const p = makeInstalledPropulsion({ deck: fewer, engineCount: 2, inlet: TABLE_INLET, installation: NO_INSTALL, cautionSettings: DEFAULT_CAUTION_SETTINGS }).atRating(CRUISE, 'maxCruise');
+    expect(p.power).toBe(1);
+    expect(ids(p)).toContain('rating_not_in_deck');
+  });
+
+  it('invalid designs, settings and conditions are refused with the field named', () => {
+    expect(() => model({ ...LONG_PITOT, lipSuctionFactor: 2 })).toThrow(/lipSuctionFactor/);
+    expect(() => model(LONG_PITOT, { engineCount: 0 })).toThrow(/engineCount/);
+    expect(() => model(LONG_PITOT, { installation: { ...NO_INSTALL, powerExtraction_W: -1 } })).toThrow(/powerExtraction_W/);
+    expect(() => model(LONG_PITOT).atPower({ ...CRUISE, mach: Number.NaN }, 0.5)).toThrow(/Mach/);
+    expect(() => model(LONG_PITOT).forThrust(CRUISE, Number.NaN)).toThrow(/thrust required/);
+  });
+});
