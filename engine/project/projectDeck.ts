@@ -1,10 +1,13 @@
 /**
  * The engine deck a project names: a file (read and parsed by the caller,
  * passed in `resources.deck`), a deck embedded in the JSON deck format, or a
- * parametric deck built from published thrust-lapse and TSFC models.
+ * parametric deck built from Mattingly's published thrust-lapse and TSFC
+ * models (engine/propulsion/parametricDeck.ts).
  */
 import { err, ok, type Result } from '../core/result';
+import { parseDeckJson } from '../propulsion/deckJson';
 import type { EngineDeck } from '../propulsion/engineDeck';
+import { buildParametricDeck, type ParametricDeckGrid, type ParametricDeckSpec } from '../propulsion/parametricDeck';
 import { makeIssue, type ProjectIssue } from './projectIssue';
 import type { Project } from './projectSchema';
 
@@ -23,7 +26,33 @@ export function deckReference(project: Project): DeckReference {
   return d.kind === 'file' ? { kind: 'file', path: d.path } : { kind: d.kind };
 }
 
-/** The project's deck: from `resources` for a file reference, else embedded or parametric. */
+const FT_M = 0.3048;
+
+/** Grid of a parametric deck when the project gives none: 0 to 51,000 ft every 3,000 ft, Mach 0 to 0.9, idle to full power. */
+export const DEFAULT_PARAMETRIC_GRID: ParametricDeckGrid = {
+  altitudes_m: Array.from({ length: 18 }, (_, i) => i * 3000 * FT_M),
+  machs: [0, 0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9],
+  powers: [0.06, 0.1, 0.15, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.88, 0.92, 0.95, 1],
+};
+
+type ParametricSource = Extract<Project['engine']['deck'], { kind: 'parametric' }>;
+
+/** The ParametricDeckSpec of a project's parametric deck (SI). */
+export function parametricSpecOf(d: ParametricSource): ParametricDeckSpec {
+  return {
+    kind: d.model,
+    title: d.title,
+    seaLevelStaticThrust_N: d.seaLevelStaticThrust,
+    throttleRatio: d.throttleRatio,
+    tsfcSeaLevelStatic_kg_N_s: d.seaLevelStaticTsfc,
+    seaLevelStaticAirflow_kg_s: d.seaLevelStaticAirflow,
+    ...(d.ratings === undefined ? {} : { ratings: Object.fromEntries(Object.entries(d.ratings).filter(([, v]) => v !== undefined)) }),
+    ...(d.partPowerFuelIntercept === undefined ? {} : { partPowerFuelIntercept: d.partPowerFuelIntercept }),
+    grid: d.grid === undefined ? DEFAULT_PARAMETRIC_GRID : { altitudes_m: d.grid.altitudes, machs: d.grid.machs, powers: d.grid.powers },
+  };
+}
+
+/** The project's deck: from `resources` for a file reference, else embedded (JSON deck format) or parametric. */
 export function projectDeck(project: Project, resources: { readonly deck?: EngineDeck }): Result<EngineDeck, ProjectIssue[]> {
   const d = project.engine.deck;
   if (d.kind === 'file') {
@@ -32,6 +61,18 @@ export function projectDeck(project: Project, resources: { readonly deck?: Engin
     }
     return ok(resources.deck);
   }
-  if (resources.deck !== undefined) return ok(resources.deck);
-  return err([makeIssue('engine.deck', `{ "kind": "${d.kind}" }`, 'a deck file', `${d.kind} decks are not available in this build yet`)]);
+  if (d.kind === 'embedded') {
+    const deck = parseDeckJson(JSON.stringify(d.deck), 'engine.deck.deck');
+    if (!deck.ok) {
+      return err(deck.error.map((e) => makeIssue(`engine.deck.deck${e.column ? `.${e.column}` : ''}`, e.value ?? '', e.expected, e.message)));
+    }
+    return ok(deck.value);
+  }
+  try {
+    return ok(buildParametricDeck(parametricSpecOf(d)));
+  } catch (e) {
+    // buildParametricDeck refuses a spec it cannot tabulate (e.g. a thrust lapse <= 0 on the grid).
+    const why = e instanceof Error ? e.message : String(e);
+    return err([makeIssue('engine.deck', '{ "kind": "parametric", ... }', 'a parametric deck that can be tabulated', why)]);
+  }
 }

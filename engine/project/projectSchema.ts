@@ -94,14 +94,34 @@ export const polarSchema = z.strictObject({
 
 // ---------------------------------------------------------------- engine
 
+const ratingPowers = z.strictObject({
+  takeoff: fraction('a power setting from 0 to 1').optional(),
+  maxClimb: fraction('a power setting from 0 to 1').optional(),
+  maxCruise: fraction('a power setting from 0 to 1').optional(),
+  maxContinuous: fraction('a power setting from 0 to 1').optional(),
+  flightIdle: fraction('a power setting from 0 to 1').optional(),
+});
+
+/** A deck generated from Mattingly's published thrust-lapse and TSFC models (engine/propulsion/parametricDeck.ts). */
 export const parametricDeckSchema = z.strictObject({
   kind: z.literal('parametric'),
   model: z.enum(['highBypassTurbofan', 'lowBypassTurbofan', 'turbojet']),
   title: label(),
   seaLevelStaticThrust: positiveQuantity('force', 'a force > 0'),
-  throttleRatio: quantity('dimensionless', { min: 0.5, max: 2, what: 'a throttle ratio from 0.5 to 2' }),
+  throttleRatio: quantity('dimensionless', { min: 0.9, max: 1.3, what: 'a throttle ratio from 0.9 to 1.3' }),
   seaLevelStaticTsfc: positiveQuantity('tsfc', 'a TSFC > 0'),
   seaLevelStaticAirflow: positiveQuantity('massFlow', 'a mass flow > 0'),
+  /** Ratings on the power axis (fraction of full-throttle thrust); the parametric defaults when absent. */
+  ratings: ratingPowers.optional(),
+  partPowerFuelIntercept: quantity('dimensionless', { min: 0, max: 0.5, what: 'a fuel-flow intercept from 0 to 0.5' }).optional(),
+  /** Tabulation grid; a built-in grid (0 to 51,000 ft, Mach 0 to 0.9) when absent. */
+  grid: z
+    .strictObject({
+      altitudes: z.array(altitude()).min(2),
+      machs: z.array(mach()).min(2),
+      powers: z.array(quantity('dimensionless', { min: 1e-6, max: 1, what: 'a power setting in (0, 1]' })).min(2),
+    })
+    .optional(),
 });
 
 export const deckSourceSchema = z.discriminatedUnion('kind', [

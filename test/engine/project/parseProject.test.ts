@@ -31,13 +31,13 @@ describe('parseProject on the demo project', () => {
   it('parseProject converts the demo weights, speeds and distances to SI', () => {
     if (!r.ok) throw new Error('demo did not parse');
     const p = r.value;
-    expectClose(p.airframe.weights.maxTakeoff, 40000 * LB, { rel: 1e-15 }, 'NIST SP 811: lb');
-    expectClose(p.airframe.wingArea, 538 * FT * FT, { rel: 1e-15 }, 'NIST SP 811: ft2');
+    expectClose(p.airframe.weights.maxTakeoff, 36500 * LB, { rel: 1e-15 }, 'NIST SP 811: lb');
+    expectClose(p.airframe.wingArea, 450 * FT * FT, { rel: 1e-15 }, 'NIST SP 811: ft2');
     expectClose(p.airframe.vmo, 340 * KT, { rel: 1e-15 }, 'NIST SP 811: kt');
     const climb = p.mission.legs[2]!;
     expect(climb.kind).toBe('climb');
     if (climb.kind === 'climb') {
-      expectClose(climb.toAltitude, 12496.8, { abs: 4e-12 }, '41000 ft, definition of the foot');
+      expectClose(climb.toAltitude, 10058.4, { abs: 4e-12 }, '33000 ft, definition of the foot');
       expectClose(climb.schedule.lowCas, 250 * KT, { rel: 1e-15 }, 'NIST SP 811: kt');
     }
     const solve = p.mission.solve;
