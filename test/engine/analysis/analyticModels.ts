@@ -84,8 +84,10 @@ export interface AnalyticEngine {
   readonly lapse: 'constant' | 'mattingly';
   /** Constant TSFC (kg/(N s)). */
   readonly tsfc_kg_N_s: number;
-  /** Thrust multiplier for a recovery offset, e.g. Raymer's 1 + C_ram * dEta. */
+  /** Thrust multiplier for a recovery offset, e.g. Raymer's 1 + C_ram * dEta; fuel flow is held at the power setting. */
   readonly thrustScale?: number;
+  /** Spillage drag subtracted from the thrust at every point, all engines (N). */
+  readonly spillage_N?: number;
 }
 
 function ratingThrust(engine: AnalyticEngine, c: FlightCondition): number {
@@ -97,22 +99,24 @@ function ratingThrust(engine: AnalyticEngine, c: FlightCondition): number {
 }
 
 export function analyticPropulsion(engine: AnalyticEngine): PropulsionModel {
+  const spill = engine.spillage_N ?? 0;
   const point = (c: FlightCondition, power: number): InstalledPoint => {
-    const thrust = ratingThrust(engine, c) * power;
-    const fuel = engine.tsfc_kg_N_s * thrust;
+    const gross = ratingThrust(engine, c) * power;
+    const thrust = gross - spill;
+    const fuel = (engine.tsfc_kg_N_s * gross) / (engine.thrustScale ?? 1);
     return {
       ...c,
       power,
       thrust_N: thrust,
       fuelFlow_kg_s: fuel,
-      tsfc_kg_N_s: thrust > 0 ? engine.tsfc_kg_N_s : null,
+      tsfc_kg_N_s: thrust > 0 ? fuel / thrust : null,
       perEngine: {
-        uninstalledThrust_N: thrust,
-        uninstalledFuelFlow_kg_s: fuel,
-        correctedThrust_N: thrust,
-        spillageDrag_N: 0,
-        thrust_N: thrust,
-        fuelFlow_kg_s: fuel,
+        uninstalledThrust_N: gross / (engine.thrustScale ?? 1) / 2,
+        uninstalledFuelFlow_kg_s: fuel / 2,
+        correctedThrust_N: gross / 2,
+        spillageDrag_N: spill / 2,
+        thrust_N: thrust / 2,
+        fuelFlow_kg_s: fuel / 2,
         airflow_kg_s: null,
         recovery: 1,
         referenceRecovery: 1,
@@ -134,7 +138,7 @@ export function analyticPropulsion(engine: AnalyticEngine): PropulsionModel {
     atPower: (c, p) => point(c, p),
     forThrust(c, required, ceiling = 'maxCruise'): PartPowerPoint {
       const full = ratingThrust(engine, c);
-      const p = required / full;
+      const p = (required + spill) / full;
       const top = ratingPower(ceiling);
       const limit = p > top ? 'above_rating' : p < 0.05 ? 'below_idle' : 'within';
       const used = limit === 'above_rating' ? top : limit === 'below_idle' ? 0.05 : p;

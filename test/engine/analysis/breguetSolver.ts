@@ -2,7 +2,8 @@
  * A stand-in mission solver for the analysis tests: one cruise at constant
  * altitude and Mach flown by the Breguet range equation
  * R = (V / (c g)) (L/D) ln(W0 / W1) (Anderson, Aircraft Performance and
- * Design, ch. 5), with L/D and TSFC taken at the cruise start mass, a fixed
+ * Design, ch. 5), with L/D and TSFC taken at MTOW (so the range factor is
+ * constant over the mission and closed forms hold), a fixed
  * taxi fuel, and reserves = 5 % of trip fuel + a fixed final reserve. It
  * honours MTOW and fuel capacity in maxRange mode. It lets the payload-range,
  * comparison and trade-factor code be checked against closed forms.
@@ -20,9 +21,10 @@ export const CONTINGENCY = 0.05;
 /** Speed of sound at 10,000 m ISA (m/s): sqrt(1.4 * 287.05287 * 223.15), U.S. Standard Atmosphere 1976. */
 const A_10KM = Math.sqrt(1.4 * 287.05287 * 223.15);
 
-function cruiseFactor(aero: AeroModel, propulsion: PropulsionModel, mass_kg: number): number {
+export function cruiseFactor(aero: AeroModel, propulsion: PropulsionModel, mass_kg: number): number {
   const d = aero.drag({ altitude_m: BREGUET_ALTITUDE_M, mach: BREGUET_MACH, mass_kg, loadFactor: 1 });
   const p = propulsion.forThrust({ altitude_m: BREGUET_ALTITUDE_M, mach: BREGUET_MACH, isaDev_K: 0 }, d.drag_N);
+  if (p.limit !== 'within') return Number.NaN;
   const c = (p.fuelFlow_kg_s * G0) / d.drag_N; // thrust-specific fuel consumption by weight (1/s)
   return ((BREGUET_MACH * A_10KM) / c) * d.liftToDrag; // V / c * L/D (m)
 }
@@ -40,7 +42,7 @@ export function makeBreguetSolver(counter?: BreguetCounter): (input: MissionInpu
     const fly = (tripFuel: number) => {
       const w1 = zfw + FINAL_RESERVE_KG + CONTINGENCY * tripFuel;
       const w0 = w1 + tripFuel;
-      return { w0, w1, range: cruiseFactor(aero, propulsion, w0) * Math.log(w0 / w1) };
+      return { w0, w1, range: cruiseFactor(aero, propulsion, airframe.mtow_kg) * Math.log(w0 / w1) };
     };
     let trip = 0;
     if (solve.kind === 'payloadRange') {
@@ -62,6 +64,7 @@ export function makeBreguetSolver(counter?: BreguetCounter): (input: MissionInpu
       trip = (totalFuel - TAXI_FUEL_KG - FINAL_RESERVE_KG) / (1 + CONTINGENCY);
     }
     const f = fly(trip);
+    if (!Number.isFinite(f.range)) throw new Error('stand-in solver: cruise thrust limited; pick a stronger test engine');
     const reserve = FINAL_RESERVE_KG + CONTINGENCY * trip;
     const empty = new Float64Array(0);
     return {

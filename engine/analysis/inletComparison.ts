@@ -1,0 +1,189 @@
+/**
+ * Inlet A vs inlet B on the same mission: block fuel, block time, trip fuel,
+ * take-off mass, crossover Machs and ceilings side by side with differences
+ * (B - A), and the block-fuel difference attributed to four factors of the
+ * installation (recovery, spillage drag, external drag, weight) by Shapley
+ * values: the parts add up to the total exactly, with interactions shared.
+ */
+import type { Caution } from '../cautions/caution';
+import { err, ok, type Result } from '../core/result';
+import type { MissionInput, MissionResult } from '../mission/missionTypes';
+import type { RatingName } from '../propulsion/propulsionModel';
+import type { AnalysisError, MissionSolver } from './analysisTypes';
+import { thrustDragCrossover } from './crossover';
+import { flightEnvelope, type Ceiling } from './envelope';
+import { shapleyValues } from './shapleyAttribution';
+
+export type InletFactor = 'recovery' | 'spillage' | 'externalDrag' | 'weight';
+
+/** The factors, in bit order of the attribution (bit 0 = recovery ... bit 3 = weight). */
+export const INLET_FACTORS: readonly InletFactor[] = ['recovery', 'spillage', 'externalDrag', 'weight'];
+
+export type FactorChoice = Readonly<Record<InletFactor, 'A' | 'B'>>;
+
+/** Builds the mission input with each factor taken from design A or B; all-A is design A's mission, all-B is B's. */
+export type InletFactorBuilder = (choice: FactorChoice) => MissionInput;
+
+export interface InletComparisonOptions {
+  readonly solve: MissionSolver;
+  readonly nameA: string;
+  readonly nameB: string;
+  /** Cruise altitude of the crossover comparison (m); default the first cruise leg's altitude. */
+  readonly crossoverAltitude_m?: number;
+  /** Rating of the crossover comparison; default maxCruise. Ceilings use maxClimb. */
+  readonly crossoverRating?: RatingName;
+  /** Altitude range and step of the ceiling search (m); default [0, 15000] by 1000 m. */
+  readonly ceilingAltitudeRange?: readonly [number, number];
+  readonly ceilingAltitudeStep_m?: number;
+  readonly onProgress?: (done: number, total: number) => void;
+  readonly shouldCancel?: () => boolean;
+}
+
+export interface DesignFigures {
+  readonly name: string;
+  readonly blockFuel_kg: number;
+  readonly blockTime_s: number;
+  readonly tripFuel_kg: number;
+  readonly takeoffMass_kg: number;
+  readonly crossover: {
+    readonly status: 'ok' | 'above_ceiling';
+    readonly lowMach: number | null;
+    readonly highMach: number | null;
+    readonly minThrustMach: number | null;
+  };
+  readonly ceilings: readonly Ceiling[];
+  readonly cautions: readonly Caution[];
+}
+
+export interface BreakdownPart {
+  readonly factor: InletFactor;
+  /** Share of the block-fuel difference B - A (kg). */
+  readonly blockFuel_kg: number;
+}
+
+export interface InletComparisonResult {
+  readonly designs: readonly [DesignFigures, DesignFigures];
+  /** B - A; null where either side is null. */
+  readonly difference: {
+    readonly blockFuel_kg: number;
+    readonly blockTime_s: number;
+    readonly tripFuel_kg: number;
+    readonly takeoffMass_kg: number;
+    readonly lowMach: number | null;
+    readonly highMach: number | null;
+    readonly ceilings: readonly { readonly name: string; readonly altitude_m: number | null }[];
+  };
+  /** Conditions of the crossover comparison: both designs at design A's mid-cruise mass. */
+  readonly crossoverCondition: { readonly altitude_m: number; readonly mass_kg: number; readonly rating: RatingName; readonly isaDev_K: number };
+  readonly breakdown: {
+    readonly method: 'shapley';
+    readonly parts: readonly BreakdownPart[];
+    /** Block fuel B - A (kg) and the sum of the parts (kg); equal to rounding. */
+    readonly total_kg: number;
+    readonly sumOfParts_kg: number;
+    /** Missions flown for the attribution (2^4). */
+    readonly missions: number;
+    readonly description: string;
+  };
+}
+
+export const SHAPLEY_DESCRIPTION =
+  'Shapley attribution: each factor\'s share is its effect on block fuel when switched from A to B, averaged over all 24 orders of switching the four factors (16 missions). The shares add up exactly to the total; interaction effects are shared between the factors involved, not left as a residual.';
+
+function choiceOf(mask: number): FactorChoice {
+  const pick = (bit: number): 'A' | 'B' => ((mask >> bit) & 1 ? 'B' : 'A');
+  return { recovery: pick(0), spillage: pick(1), externalDrag: pick(2), weight: pick(3) };
+}
+
+function midCruiseMass(r: MissionResult): number {
+  const cruise = r.legs.filter((l) => l.kind === 'cruise');
+  if (cruise.length === 0) return 0.5 * (r.takeoffMass_kg + r.landingMass_kg);
+  return 0.5 * (cruise[0]!.startMass_kg + cruise[cruise.length - 1]!.endMass_kg);
+}
+
+/**
+ * Flies the 16 missions with every mix of the four factors from A and B,
+ * then compares A and B and attributes the block-fuel difference by Shapley
+ * values (Shapley 1953). The crossover compares both designs at one stated
+ * condition: the cruise altitude and design A's mid-cruise mass (mean of the
+ * cruise start and end masses). Ceilings use maxClimb at the same mass.
+ */
+export function compareInlets(
+  build: InletFactorBuilder,
+  options: InletComparisonOptions,
+): Result<InletComparisonResult, AnalysisError> {
+  const total = 1 << INLET_FACTORS.length;
+  const results: MissionResult[] = [];
+  for (let mask = 0; mask < total; mask++) {
+    if (options.shouldCancel?.()) return err({ code: 'cancelled', message: `inlet comparison cancelled after ${mask} of ${total} missions` });
+    const choice = choiceOf(mask);
+    const r = options.solve(build(choice));
+    if (r.status !== 'ok') {
+      const mix = INLET_FACTORS.map((f) => `${f} ${choice[f]}`).join(', ');
+      return err({ code: 'mission_failed', message: `inlet comparison: the mission with ${mix} failed: ${r.status}: ${r.statusMessage}` });
+    }
+    results.push(r);
+    options.onProgress?.(mask + 1, total);
+  }
+  const attribution = shapleyValues(INLET_FACTORS.length, (mask) => results[mask]!.blockFuel_kg);
+  const a = results[0]!;
+  const b = results[total - 1]!;
+  const inputA = build(choiceOf(0));
+  const inputB = build(choiceOf(total - 1));
+  const cruiseLeg = inputA.legs.find((l) => l.kind === 'cruise');
+  const altitude_m = options.crossoverAltitude_m ?? (cruiseLeg && cruiseLeg.kind === 'cruise' ? cruiseLeg.altitude_m : 10000);
+  const rating = options.crossoverRating ?? 'maxCruise';
+  const mass_kg = midCruiseMass(a);
+  const condition = { altitude_m, mass_kg, rating, isaDev_K: inputA.isaDev_K };
+
+  const figures = (name: string, input: MissionInput, r: MissionResult): Result<DesignFigures, AnalysisError> => {
+    const models = { aero: input.aero, propulsion: input.propulsion };
+    const c = thrustDragCrossover(models, condition);
+    if (!c.ok) return err({ ...c.error, message: `inlet comparison, ${name}: ${c.error.message}` });
+    const env = flightEnvelope(models, {
+      mass_kg,
+      rating: 'maxClimb',
+      isaDev_K: input.isaDev_K,
+      altitudeRange: options.ceilingAltitudeRange ?? [0, 15000],
+      altitudeStep_m: options.ceilingAltitudeStep_m ?? 1000,
+    });
+    if (!env.ok) return err({ ...env.error, message: `inlet comparison, ${name}: ${env.error.message}` });
+    return ok({
+      name,
+      blockFuel_kg: r.blockFuel_kg,
+      blockTime_s: r.blockTime_s,
+      tripFuel_kg: r.tripFuel_kg,
+      takeoffMass_kg: r.takeoffMass_kg,
+      crossover: { status: c.value.status, lowMach: c.value.lowMach, highMach: c.value.highMach, minThrustMach: c.value.minThrustMach },
+      ceilings: env.value.ceilings,
+      cautions: [...r.cautions, ...c.value.cautions],
+    });
+  };
+  const fa = figures(options.nameA, inputA, a);
+  if (!fa.ok) return fa;
+  const fb = figures(options.nameB, inputB, b);
+  if (!fb.ok) return fb;
+  const diff = (x: number | null, y: number | null) => (x === null || y === null ? null : y - x);
+  const parts = INLET_FACTORS.map((factor, i) => ({ factor, blockFuel_kg: attribution.shares[i]! }));
+  return ok({
+    designs: [fa.value, fb.value],
+    difference: {
+      blockFuel_kg: b.blockFuel_kg - a.blockFuel_kg,
+      blockTime_s: b.blockTime_s - a.blockTime_s,
+      tripFuel_kg: b.tripFuel_kg - a.tripFuel_kg,
+      takeoffMass_kg: b.takeoffMass_kg - a.takeoffMass_kg,
+      lowMach: diff(fa.value.crossover.lowMach, fb.value.crossover.lowMach),
+      highMach: diff(fa.value.crossover.highMach, fb.value.crossover.highMach),
+      ceilings: fa.value.ceilings.map((c, i) => ({ name: c.name, altitude_m: diff(c.altitude_m, fb.value.ceilings[i]?.altitude_m ?? null) })),
+    },
+    crossoverCondition: condition,
+    breakdown: {
+      method: 'shapley',
+      parts,
+      total_kg: attribution.alternative - attribution.baseline,
+      sumOfParts_kg: parts.reduce((s, p) => s + p.blockFuel_kg, 0),
+      missions: total,
+      description: SHAPLEY_DESCRIPTION,
+    },
+  });
+}

@@ -1,0 +1,121 @@
+/**
+ * Trade factors at the design mission: the change in block fuel for +1 %
+ * inlet recovery, +1 drag count, +1 % TSFC and +100 kg OEW, each by central
+ * differences at two step sizes with a convergence check.
+ */
+import { err, ok, type Result } from '../core/result';
+import type { MissionInput, MissionResult } from '../mission/missionTypes';
+import type { PropulsionModel } from '../propulsion/propulsionModel';
+import { adjustPropulsion } from './adjustedPropulsion';
+import type { AnalysisError, MissionSolver } from './analysisTypes';
+
+export type TradeFactorName = 'recovery' | 'dragCount' | 'tsfc' | 'oew';
+
+export interface TradeFactor {
+  readonly name: TradeFactorName;
+  /** What one unit is, in words, e.g. "+1 % inlet recovery (+0.01)". */
+  readonly unit: string;
+  /** d(block fuel) per unit (kg) by central differences with a step of one unit. */
+  readonly blockFuelPerUnit_kg: number;
+  /** The same with a step of half a unit (kg). */
+  readonly blockFuelPerUnitHalfStep_kg: number;
+  /** |full - half| / |half| (-); null when half is 0. */
+  readonly relativeDifference: number | null;
+  /** True when the two steps agree within the stated tolerance. */
+  readonly converged: boolean;
+}
+
+export interface TradeFactorsResult {
+  /** The design mission: payload (kg) and still-air range (m) flown in payload-and-range mode. */
+  readonly designMission: { readonly payload_kg: number; readonly range_m: number };
+  readonly baselineBlockFuel_kg: number;
+  readonly factors: readonly TradeFactor[];
+  /** Step-convergence tolerance: |d_h - d_h/2| <= rel * |d_h/2| + abs_kg. */
+  readonly tolerance: { readonly rel: number; readonly abs_kg: number };
+  readonly missions: number;
+  readonly recoveryMethod: string;
+}
+
+export interface TradeFactorOptions {
+  readonly solve: MissionSolver;
+  /** C_ram of the installation for the recovery wrapper (-); default 1.35 (Raymer, subsonic). */
+  readonly cRam?: number;
+  /** Propulsion with recovery raised by `delta` (-), when the caller can build it exactly; default the C_ram wrapper. */
+  readonly recoveryModel?: (delta: number) => PropulsionModel;
+  readonly tolerance?: { readonly rel: number; readonly abs_kg: number };
+  readonly onProgress?: (done: number, total: number) => void;
+  readonly shouldCancel?: () => boolean;
+}
+
+const WRAPPER_METHOD =
+  "Recovery raised through Raymer's ram-recovery correction: installed thrust + engine count x C_ram x dEta x deck thrust at the same power setting and fuel flow (engine airflow's change with recovery not followed).";
+
+/**
+ * Trade factors by central differences d = (v(+h) - v(-h)) / (2h) at
+ * h = 1 unit and h = 1/2 unit (block fuel v in kg, from the mission solver
+ * in payload-and-range mode). When the input's solve mode is not
+ * payload-and-range, it is flown once and its payload and still-air range
+ * become the design mission. 1 (+1) + 16 missions.
+ */
+export function tradeFactors(input: MissionInput, options: TradeFactorOptions): Result<TradeFactorsResult, AnalysisError> {
+  const tolerance = options.tolerance ?? { rel: 0.05, abs_kg: 0.01 };
+  const cRam = options.cRam ?? 1.35;
+  if (!(cRam >= 0) || !Number.isFinite(cRam)) return err({ code: 'invalid_input', message: `trade factors: C_ram ${cRam} must be a number >= 0` });
+  const total = 17 + (input.solve.kind === 'payloadRange' ? 0 : 1);
+  let done = 0;
+  const fly = (mission: MissionInput, what: string): Result<MissionResult, AnalysisError> => {
+    if (options.shouldCancel?.()) return err({ code: 'cancelled', message: `trade factors cancelled after ${done} of ${total} missions` });
+    const r = options.solve(mission);
+    done++;
+    options.onProgress?.(done, total);
+    if (r.status !== 'ok') return err({ code: 'mission_failed', message: `trade factors: the ${what} mission failed: ${r.status}: ${r.statusMessage}` });
+    return ok(r);
+  };
+  let design = input;
+  if (input.solve.kind !== 'payloadRange') {
+    const first = fly(input, 'project');
+    if (!first.ok) return first;
+    design = { ...input, solve: { kind: 'payloadRange', payload_kg: first.value.payload_kg, range_m: first.value.airDistance_m } };
+  }
+  const base = fly(design, 'baseline');
+  if (!base.ok) return base;
+  const recoveryModel = options.recoveryModel ?? ((delta: number) => adjustPropulsion(design.propulsion, { recoveryDelta: delta, cRam, fuelFlowScale: 1 }));
+  const perturb: Record<TradeFactorName, { unit: string; apply: (units: number) => MissionInput }> = {
+    recovery: { unit: '+1 % inlet recovery (+0.01)', apply: (u) => ({ ...design, propulsion: recoveryModel(0.01 * u) }) },
+    dragCount: { unit: '+1 drag count (CD0 + 0.0001)', apply: (u) => ({ ...design, aero: design.aero.withIncrement(1e-4 * u) }) },
+    tsfc: {
+      unit: '+1 % TSFC (fuel flow x 1.01)',
+      apply: (u) => ({ ...design, propulsion: adjustPropulsion(design.propulsion, { recoveryDelta: 0, cRam, fuelFlowScale: 1 + 0.01 * u }) }),
+    },
+    oew: { unit: '+100 kg OEW', apply: (u) => ({ ...design, airframe: { ...design.airframe, oew_kg: design.airframe.oew_kg + 100 * u } }) },
+  };
+  const factors: TradeFactor[] = [];
+  for (const name of ['recovery', 'dragCount', 'tsfc', 'oew'] as const) {
+    const values: number[] = [];
+    for (const u of [1, -1, 0.5, -0.5]) {
+      const r = fly(perturb[name].apply(u), `${name} ${u > 0 ? '+' : ''}${u} unit`);
+      if (!r.ok) return r;
+      values.push(r.value.blockFuel_kg);
+    }
+    const full = (values[0]! - values[1]!) / 2;
+    const half = (values[2]! - values[3]!) / 1;
+    const gap = Math.abs(full - half);
+    factors.push({
+      name,
+      unit: perturb[name].unit,
+      blockFuelPerUnit_kg: full,
+      blockFuelPerUnitHalfStep_kg: half,
+      relativeDifference: half === 0 ? null : gap / Math.abs(half),
+      converged: gap <= tolerance.rel * Math.abs(half) + tolerance.abs_kg,
+    });
+  }
+  const payloadRange = design.solve.kind === 'payloadRange' ? design.solve : null;
+  return ok({
+    designMission: { payload_kg: payloadRange!.payload_kg, range_m: payloadRange!.range_m },
+    baselineBlockFuel_kg: base.value.blockFuel_kg,
+    factors,
+    tolerance,
+    missions: done,
+    recoveryMethod: options.recoveryModel ? 'Recovery raised by the caller\'s propulsion model.' : WRAPPER_METHOD,
+  });
+}
