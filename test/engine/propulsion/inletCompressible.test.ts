@@ -1,4 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import { machFromMassFlowParameter, massFlowParameter, normalShock } from '../../../engine/aero/compressibleFlow';
+import { expectOk } from '../../../engine/core/result';
 import {
   CHOKED_MASS_FLOW_FUNCTION,
   massFlowFunction,
@@ -54,5 +56,19 @@ describe('inletCompressible', () => {
     expectClose(normalShockTotalPressureRatio(1.6), 0.8952, { abs: 5e-5 }, 'NACA 1135 normal shock M 1.6');
     expectClose(normalShockTotalPressureRatio(1.5), 0.9298, { abs: 5e-5 }, 'NACA 1135 normal shock M 1.5');
     expect(normalShockTotalPressureRatio(0.9)).toBe(1);
+  });
+
+  it('inletCompressible agrees with the general engine/aero/compressibleFlow relations it fast-paths', () => {
+    // The inlet's closed forms (gamma 1.4, no Result allocation) must equal the project's general ones:
+    // massFlowParameter = sqrt(gamma) x massFlowFunction; same inverse; same normal-shock pt ratio.
+    for (const m of [0.05, 0.3, 0.55, 0.8, 0.97]) {
+      expectClose(Math.sqrt(1.4) * massFlowFunction(m), massFlowParameter(m), { rel: 1e-14 }, 'compressibleFlow.massFlowParameter');
+      const value = massFlowParameter(m);
+      const general = expectOk(machFromMassFlowParameter(value, 'subsonic'), 'general inverse');
+      expectClose(subsonicMachFromMassFlowFunction(value / Math.sqrt(1.4)), general, { abs: 1e-12 }, 'compressibleFlow.machFromMassFlowParameter');
+    }
+    for (const m of [1.2, 1.6, 2.5]) {
+      expectClose(normalShockTotalPressureRatio(m), normalShock(m).totalPressureRatio, { rel: 1e-13 }, 'compressibleFlow.normalShock');
+    }
   });
 });
