@@ -1,0 +1,49 @@
+import { describe, expect, it } from 'vitest';
+import { solveMission } from '../../../engine/mission/solveMission';
+import { expectClose } from '../../support/assertInDelta';
+import { constantTsfcPropulsion, constantLiftToDragAero, parabolicAero } from './support/analyticModels';
+import { KT, missionInput } from './support/missionFixtures';
+
+const G0 = 9.80665;
+
+describe('holdLeg', () => {
+  it('holdLeg burns what the Breguet endurance equation predicts at constant L/D and TSFC', () => {
+    // Jet endurance E = (1/(c g)) (L/D) ln(W0/W1) (Anderson, Aircraft Performance and Design, section 5.14).
+    const LD = 17;
+    const c = 1.7e-5;
+    const E = 7200;
+    const r = solveMission(
+      missionInput({
+        legs: [{ kind: 'hold', name: 'hold', altitude_m: 1500 * 0.3048, time_s: E, speed: { kind: 'cas', cas_m_s: 220 * KT } }],
+        solve: { kind: 'takeoffWeight', takeoffMass_kg: 65000, payload_kg: 10000 },
+        aero: constantLiftToDragAero(LD),
+        propulsion: constantTsfcPropulsion({ thrust0_N: 300000, tsfc_kg_N_s: c, lapseExponent: 0 }),
+      }),
+    );
+    expect(r.status).toBe('ok');
+    const w1 = 65000 * Math.exp((-c * G0 * E) / LD);
+    expectClose(r.tripFuel_kg, 65000 - w1, { rel: 0.001 }, 'Breguet endurance, within 0.1 %');
+    expectClose(r.tripFuel_kg, 65000 - w1, { rel: 1e-7 }, 'Breguet endurance (RK4 far tighter)');
+    expectClose(r.tripTime_s, E, { abs: 1e-9 }, 'time event ends the hold exactly');
+  });
+
+  it('holdLeg at best endurance flies the minimum-drag lift coefficient sqrt(CD0/K) of a parabolic polar', () => {
+    // Minimum drag of CD = CD0 + K CL^2 at CL = sqrt(CD0/K), so L/D max = 1/(2 sqrt(CD0 K)) (Anderson, section 5.4).
+    const cd0 = 0.02;
+    const k = 0.05;
+    const r = solveMission(
+      missionInput({
+        legs: [{ kind: 'hold', name: 'hold', altitude_m: 3000, time_s: 1800, speed: { kind: 'bestEndurance' } }],
+        solve: { kind: 'takeoffWeight', takeoffMass_kg: 65000, payload_kg: 10000 },
+        aero: parabolicAero(cd0, k, { wingArea_m2: 120 }),
+      }),
+    );
+    expect(r.status).toBe('ok');
+    const n = r.history.cl.length;
+    for (let i = 0; i < n; i++) {
+      if (r.history.tas_m_s[i] === 0) continue;
+      expectClose(r.history.cl[i], Math.sqrt(cd0 / k), { rel: 1e-4 }, 'CL_md = sqrt(CD0/K)');
+      expectClose(r.history.liftToDrag[i], 1 / (2 * Math.sqrt(cd0 * k)), { rel: 1e-6 }, '(L/D)max = 1/(2 sqrt(CD0 K))');
+    }
+  });
+});

@@ -1,0 +1,105 @@
+import { describe, expect, it } from 'vitest';
+import { solveMission } from '../../../engine/mission/solveMission';
+import type { Leg, ReservePolicy } from '../../../engine/mission/missionTypes';
+import { expectClose } from '../../support/assertInDelta';
+import { constantLiftToDragAero, constantTsfcPropulsion } from './support/analyticModels';
+import { missionInput } from './support/missionFixtures';
+
+// With constant L/D and constant TSFC every reserve item has a closed form:
+// cruise of distance d at speed V: m1 = m0 exp(-d c g / (V L/D)) (Breguet range);
+// any level flight of time t (hold or cruise): m1 = m0 exp(-t c g / (L/D)) (Breguet endurance).
+// (Anderson, Aircraft Performance and Design, sections 5.13-5.14.)
+const G0 = 9.80665;
+const LD = 16;
+const C = 1.6e-5;
+const H = 11000;
+const V = 0.8 * Math.sqrt(1.4 * 287.05287 * 216.65); // ISA 216.65 K above 11 km (U.S. Standard Atmosphere 1976)
+const HOLD_FT = 1500 * 0.3048; // ICAO Annex 6 450 m / 14 CFR 121.645 1,500 ft above the aerodrome
+const TRIP = 3_000_000;
+const TOW = 72000;
+
+const legs: Leg[] = [
+  { kind: 'cruise', name: 'cruise', altitude_m: H, speed: { kind: 'mach', mach: 0.8 }, profile: { kind: 'constantAltitude' }, distance_m: TRIP },
+];
+// The alternate starts and ends at the cruise level (elevation = H - 1,500 ft) so it is a pure cruise.
+const alternate = { distance_m: 400_000, cruiseAltitude_m: H, cruiseMach: 0.8, elevation_m: H - HOLD_FT };
+
+function fly(reserves: ReservePolicy) {
+  return solveMission(
+    missionInput({
+      legs,
+      solve: { kind: 'takeoffWeight', takeoffMass_kg: TOW, payload_kg: 10000 },
+      reserves,
+      aero: constantLiftToDragAero(LD),
+      propulsion: constantTsfcPropulsion({ thrust0_N: 400000, tsfc_kg_N_s: C, lapseExponent: 0 }),
+    }),
+  );
+}
+const timeBurn = (m0: number, t: number) => m0 * (1 - Math.exp((-t * C * G0) / LD));
+const rangeBurn = (m0: number, d: number) => m0 * (1 - Math.exp((-d * C * G0) / (V * LD)));
+const mLanding = TOW - rangeBurn(TOW, TRIP);
+const tripFuel = TOW - mLanding;
+
+describe('reserves', () => {
+  it('reserves per ICAO Annex 6 Part I 4.3.6.3: 5 % contingency, alternate, 30 min final reserve', () => {
+    const r = fly({ preset: 'icaoAnnex6', contingencyFraction: 0.05, minContingency_s: 300, alternate, finalReserve_s: 1800 });
+    expect(r.status).toBe('ok');
+    // 5 % of trip fuel exceeds 5 min holding here (about 3,000 kg x 5 % vs about 50 kg).
+    expectClose(r.reserves.contingency_kg, 0.05 * tripFuel, { rel: 1e-6 }, 'ICAO 4.3.6.3 c) 5 % of trip fuel');
+    const afterContingency = mLanding - r.reserves.contingency_kg;
+    const alt = rangeBurn(afterContingency, alternate.distance_m);
+    expectClose(r.reserves.alternate_kg, alt, { rel: 1e-5 }, 'ICAO 4.3.6.3 d) alternate, Breguet range');
+    expectClose(r.reserves.finalReserve_kg, timeBurn(afterContingency - alt, 1800), { rel: 1e-6 }, 'ICAO 4.3.6.3 e) 30 min hold');
+    expectClose(r.reserves.total_kg, r.reserves.contingency_kg + alt + r.reserves.finalReserve_kg, { rel: 1e-9 }, 'sum');
+    expect(r.legs.filter((l) => l.kind === 'reserve').map((l) => l.name)).toEqual([
+      'reserve: contingency (ICAO Annex 6 4.3.6.3 c)',
+      'reserve: alternate',
+      'reserve: final reserve hold',
+    ]);
+  });
+
+  it('reserves per ICAO Annex 6: the 5 min holding minimum wins over a small 5 % of a short trip', () => {
+    const r = fly({ preset: 'icaoAnnex6', contingencyFraction: 0.001, minContingency_s: 300, alternate: null, finalReserve_s: 1800 });
+    expect(r.status).toBe('ok');
+    expectClose(r.reserves.contingency_kg, timeBurn(mLanding, 300), { rel: 1e-6 }, 'ICAO 4.3.6.3 c) 5 min holding at 1,500 ft');
+    expect(r.reserves.contingency_kg).toBeGreaterThan(0.001 * tripFuel);
+  });
+
+  it('reserves per 14 CFR 121.639: most distant alternate then 45 min at normal cruise consumption', () => {
+    const r = fly({ preset: 'cfr121_639', alternate, finalReserve_s: 2700 });
+    expect(r.status).toBe('ok');
+    expect(r.reserves.contingency_kg).toBe(0);
+    const alt = rangeBurn(mLanding, alternate.distance_m);
+    expectClose(r.reserves.alternate_kg, alt, { rel: 1e-5 }, '121.639(b) alternate');
+    expectClose(r.reserves.finalReserve_kg, timeBurn(mLanding - alt, 2700), { rel: 1e-6 }, '121.639(c) 45 min at normal cruise');
+  });
+
+  it('reserves per 14 CFR 121.645(b): 10 % of en-route time, alternate, 30 min holding at 1,500 ft', () => {
+    const r = fly({ preset: 'cfr121_645', enRouteFraction: 0.1, alternate, finalReserve_s: 1800 });
+    expect(r.status).toBe('ok');
+    expectClose(r.tripTime_s, TRIP / V, { rel: 1e-9 }, 'en-route time = R / V');
+    const enRoute = timeBurn(mLanding, 0.1 * (TRIP / V));
+    expectClose(r.reserves.contingency_kg, enRoute, { rel: 1e-6 }, '121.645(b)(2) 10 % of the total time');
+    const alt = rangeBurn(mLanding - enRoute, alternate.distance_m);
+    expectClose(r.reserves.alternate_kg, alt, { rel: 1e-5 }, '121.645(b)(3) alternate');
+    expectClose(r.reserves.finalReserve_kg, timeBurn(mLanding - enRoute - alt, 1800), { rel: 1e-6 }, '121.645(b)(4) 30 min hold');
+  });
+
+  it('reserves custom: contingency fraction, final hold and a fixed extra fuel', () => {
+    const r = fly({ preset: 'custom', contingencyFraction: 0.03, alternate: null, finalReserve_s: 1200, extraFuel_kg: 500 });
+    expectClose(r.reserves.contingency_kg, 0.03 * tripFuel, { rel: 1e-6 }, 'custom fraction');
+    expectClose(r.reserves.finalReserve_kg, timeBurn(mLanding - 0.03 * tripFuel, 1200), { rel: 1e-6 }, 'custom hold');
+    expect(r.reserves.extra_kg).toBe(500);
+  });
+
+  it('reserves below the policy raise reserve_below_minimum, and not when the fuel suffices', () => {
+    const policy: ReservePolicy = { preset: 'custom', contingencyFraction: 0, alternate: null, finalReserve_s: 0, extraFuel_kg: 0 };
+    const ok = fly(policy);
+    const fuelLeft = ok.landingMass_kg - ok.zeroFuelMass_kg;
+    const justEnough = fly({ ...policy, extraFuel_kg: fuelLeft - 1 });
+    const tooMuch = fly({ ...policy, extraFuel_kg: fuelLeft + 1 });
+    expect(justEnough.cautions.some((c) => c.id === 'reserve_below_minimum')).toBe(false);
+    const c = tooMuch.cautions.find((x) => x.id === 'reserve_below_minimum');
+    expect(c?.threshold).toBeCloseTo(fuelLeft + 1, 6);
+  });
+});
