@@ -1,0 +1,112 @@
+/**
+ * The text summary of a flown mission: headline figures in customary and SI
+ * units, reserves by part, weights, distance, the legs table, the cautions
+ * with their leg and time, and the safety notice.
+ */
+import type { Caution } from '../../engine/cautions/caution';
+import { SAFETY_NOTICE_LINES } from '../../engine/core/notice';
+import type { LegRow, MissionResult } from '../../engine/mission/missionTypes';
+import { formatQuantity, type DisplayKind } from '../../engine/units/quantity';
+import { formatPairs, formatTable } from './textTable';
+
+export interface MissionSummaryContext {
+  readonly projectName: string;
+  readonly inletName: string;
+  readonly deckTitle: string;
+}
+
+function both(value_si: number, kind: DisplayKind, customaryDigits?: number, siDigits?: number): [string, string] {
+  return [formatQuantity(value_si, kind, 'customary', customaryDigits), formatQuantity(value_si, kind, 'si', siDigits)];
+}
+
+/** Mission time as "h:mm:ss" (e.g. 2 h 5 min 3 s -> "2:05:03"). */
+export function clockTime(time_s: number): string {
+  if (!Number.isFinite(time_s)) return '—';
+  const total = Math.round(Math.abs(time_s));
+  const h = Math.floor(total / 3600);
+  const m = Math.floor((total % 3600) / 60);
+  const s = total % 60;
+  return `${time_s < 0 ? '-' : ''}${h}:${String(m).padStart(2, '0')}:${String(s).padStart(2, '0')}`;
+}
+
+function legRows(legs: readonly LegRow[]): string[][] {
+  return legs.map((l) => [
+    String(l.index),
+    l.name,
+    l.kind,
+    clockTime(l.startTime_s),
+    clockTime(l.endTime_s - l.startTime_s),
+    formatQuantity(l.endDistance_m - l.startDistance_m, 'distance', 'customary', 1),
+    `${formatQuantity(l.startAltitude_m, 'altitude', 'customary')} -> ${formatQuantity(l.endAltitude_m, 'altitude', 'customary')}`,
+    formatQuantity(l.fuel_kg, 'mass', 'customary'),
+    formatQuantity(l.endMass_kg, 'mass', 'customary'),
+  ]);
+}
+
+/** One line per caution: severity, id, where and when, and its message. */
+export function cautionLines(cautions: readonly Caution[]): string[] {
+  return cautions.map((c) => {
+    const where = c.legName !== undefined ? `leg "${c.legName}"` : c.legIndex !== undefined ? `leg ${c.legIndex}` : 'mission';
+    const when = c.time_s !== undefined ? ` at ${clockTime(c.time_s)}` : '';
+    return `  [${c.severity}] ${c.id} (${where}${when}): ${c.message}`;
+  });
+}
+
+/** The whole text report of `blockwise fly`. */
+export function missionSummaryText(result: MissionResult, context: MissionSummaryContext): string {
+  const r = result;
+  const status =
+    r.status === 'ok'
+      ? `ok (${r.iterations} iteration${r.iterations === 1 ? '' : 's'}, fuel residual ${formatQuantity(Math.abs(r.residual_kg), 'mass', 'si', 2)})`
+      : `${r.status}: ${r.statusMessage}`;
+  const headline = formatPairs([
+    ['', 'customary', 'SI'],
+    ['Block fuel', ...both(r.blockFuel_kg, 'mass')],
+    ['Block time', formatQuantity(r.blockTime_s, 'time', 'customary'), formatQuantity(r.blockTime_s, 'time', 'si')],
+    ['Trip fuel', ...both(r.tripFuel_kg, 'mass')],
+    ['Trip time', formatQuantity(r.tripTime_s, 'time', 'customary'), formatQuantity(r.tripTime_s, 'time', 'si')],
+    ['Reserve fuel', ...both(r.reserveFuel_kg, 'mass')],
+    ['  contingency', ...both(r.reserves.contingency_kg, 'mass')],
+    ['  alternate', ...both(r.reserves.alternate_kg, 'mass')],
+    ['  final reserve', ...both(r.reserves.finalReserve_kg, 'mass')],
+    ['  extra', ...both(r.reserves.extra_kg, 'mass')],
+    ['Ramp weight', ...both(r.rampMass_kg, 'mass')],
+    ['Takeoff weight (TOW)', ...both(r.takeoffMass_kg, 'mass')],
+    ['Landing weight (LW)', ...both(r.landingMass_kg, 'mass')],
+    ['Zero-fuel weight (ZFW)', ...both(r.zeroFuelMass_kg, 'mass')],
+    ['Payload', ...both(r.payload_kg, 'mass')],
+    ['Distance (still air)', ...both(r.airDistance_m, 'distance', 1, 1)],
+    ['Distance (ground)', ...both(r.groundDistance_m, 'distance', 1, 1)],
+  ]);
+  const legs = formatTable(
+    [
+      { header: '#', align: 'right' },
+      { header: 'leg', align: 'left' },
+      { header: 'kind', align: 'left' },
+      { header: 'start', align: 'right' },
+      { header: 'duration', align: 'right' },
+      { header: 'distance', align: 'right' },
+      { header: 'altitude', align: 'right' },
+      { header: 'fuel', align: 'right' },
+      { header: 'end weight', align: 'right' },
+    ],
+    legRows(r.legs),
+  );
+  const cautions = r.cautions.length === 0 ? ['  none'] : cautionLines(r.cautions);
+  return [
+    `Mission: ${context.projectName}`,
+    `Inlet: ${context.inletName}    Deck: ${context.deckTitle}`,
+    `Status: ${status}`,
+    '',
+    headline,
+    '',
+    'Legs (times h:mm:ss from block-out):',
+    legs,
+    '',
+    `Cautions (${r.cautions.length}):`,
+    ...cautions,
+    '',
+    ...SAFETY_NOTICE_LINES,
+    '',
+  ].join('\n');
+}

@@ -1,0 +1,90 @@
+import { writeFile } from 'node:fs/promises';
+import { resolve } from 'node:path';
+import { solveMission } from '../../engine/mission/solveMission';
+import { buildMissionInput } from '../../engine/project/buildMissionInput';
+import { historyToCsv } from '../format/historyCsv';
+import { missionJson } from '../format/missionJson';
+import { missionSummaryText } from '../format/missionSummaryText';
+import { formatLoadFailure, readProjectDeck, readProjectFile } from '../projectFiles';
+import { optionalString, printJson, UsageError, type CliIo, type Verb } from '../verb';
+
+/** Exit code when the mission was flown but did not end with status "ok". */
+export const EXIT_MISSION_NOT_OK = 3;
+
+export const flyVerb: Verb = {
+  name: 'fly',
+  summary: 'fly a project\'s mission and print block fuel, time, reserves, legs and cautions',
+  help: `blockwise fly — fly the mission of a project file
+
+Usage: blockwise fly <project.blockwise.json> [--inlet <name>] [--json] [--csv <file>]
+
+Options:
+  --inlet   fly with this inlet design instead of the project's active one
+  --json    print the result as JSON (SI values; each key names its unit)
+  --csv     also write the time history to <file> (one column per field, units in the header)
+
+The deck file a project names is read relative to the project file's folder.
+The project format is described in docs/project-format.md.
+
+Exit codes: 0 flown, status ok; 1 the project (or its deck) cannot be read,
+with each problem's JSON path and reason; 2 bad command line; 3 flown, but the
+mission ended with a status other than ok (the result is still printed).
+`,
+  options: {
+    inlet: { type: 'string' },
+    json: { type: 'boolean' },
+    csv: { type: 'string' },
+  },
+  allowPositionals: true,
+  async run(values, positionals, io: CliIo): Promise<number> {
+    if (positionals.length === 0) throw new UsageError('missing the project file: blockwise fly <project.blockwise.json>');
+    if (positionals.length > 1) throw new UsageError(`one project file at a time (got ${positionals.length}: ${positionals.join(', ')})`);
+    const inletOption = optionalString(values, 'inlet');
+    if (inletOption !== undefined && inletOption.trim() === '') throw new UsageError('--inlet: give the name of an inlet design');
+    const csvOption = optionalString(values, 'csv');
+    if (csvOption !== undefined && csvOption.trim() === '') throw new UsageError('--csv: give a file name');
+
+    const path = resolve(io.cwd, positionals[0]!);
+    const read = await readProjectFile(path);
+    if (!read.ok) {
+      io.err(formatLoadFailure(read.error));
+      return 1;
+    }
+    const { project, projectPath } = read.value;
+    if (inletOption !== undefined && !project.inlets.some((i) => i.name === inletOption)) {
+      const names = project.inlets.map((i) => JSON.stringify(i.name)).join(', ');
+      throw new UsageError(`--inlet: ${JSON.stringify(inletOption)} is not an inlet design of ${positionals[0]}; it has ${names}`);
+    }
+    const deck = await readProjectDeck(projectPath, project);
+    if (!deck.ok) {
+      io.err(formatLoadFailure(deck.error));
+      return 1;
+    }
+    const built = buildMissionInput(project, deck.value.deck === undefined ? {} : { deck: deck.value.deck }, inletOption === undefined ? {} : { inletName: inletOption });
+    if (!built.ok) {
+      io.err(formatLoadFailure({ file: projectPath, issues: built.error }));
+      return 1;
+    }
+    const input = built.value;
+    const result = solveMission(input);
+    const context = {
+      projectName: project.name,
+      inletName: input.propulsion.inletName,
+      deckTitle: input.propulsion.label,
+      parametricDeck: input.propulsion.parametric,
+    };
+
+    if (csvOption !== undefined) {
+      const csvPath = resolve(io.cwd, csvOption);
+      try {
+        await writeFile(csvPath, historyToCsv(result.history), 'utf8');
+      } catch (e) {
+        io.err(`blockwise fly: cannot write the time history to ${csvPath}: ${e instanceof Error ? e.message : String(e)}\n`);
+        return 1;
+      }
+    }
+    if (values.json === true) printJson(io, missionJson(result, context));
+    else io.out(missionSummaryText(result, context));
+    return result.status === 'ok' ? 0 : EXIT_MISSION_NOT_OK;
+  },
+};
