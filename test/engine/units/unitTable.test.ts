@@ -58,3 +58,11 @@ describe('normalizeUnit and lookupUnit', () => {
     expect(unitsOf('tsfc')).toContain('mg/(N s)');
   });
 });
+
+describe('docs/units.md', () => {
+  it('lists every accepted unit spelling', async () => {
+    const { readFileSync } = await import('node:fs');
+    const doc = readFileSync(new URL('../../../docs/units.md', import.meta.url), 'utf8');
+    for (const unit of Object.keys(UNIT_TABLE)) expect(doc, unit).toContain(`\`${unit}\``);
+  });
+});
