@@ -95,13 +95,17 @@ export function inducedFactor(model: DragPolarModel, mach: number): number {
 /**
  * Drag coefficients at Mach `mach` (>= 0) and lift coefficient `cl` (any
  * sign): CD0(M), dCD0, K(M)(CL - CLmd)^2, CDwave(M, CL) and their sum.
- * Wave drag uses |CL| in the Korn equation. Throws RangeError for a
- * non-finite or negative Mach or a non-finite CL (a caller bug).
+ * Wave drag uses |CL| in the Korn equation (a CDwave table is read at CL as
+ * given). `source` is a built model or a spec; a spec is validated and its
+ * tables built on every call, so build a model for repeated use. Throws
+ * RangeError for an invalid spec, a non-finite or negative Mach or a
+ * non-finite CL (caller bugs).
  */
-export function polarCoefficients(model: DragPolarModel, mach: number, cl: number): PolarCoefficients {
+export function polarCoefficients(source: DragPolarModel | PolarSpec, mach: number, cl: number): PolarCoefficients {
   requireFinite(mach, 'Mach');
   requireFinite(cl, 'CL');
   if (mach < 0) throw new RangeError(`drag polar: Mach is ${mach}, expected >= 0`);
+  const model = 'tables' in source ? source : specModel(source);
   const outside: PolarTableName[] = [];
   const t = model.tables;
   const cd0 = lookup(t.cd0, mach, 'cd0', outside);
@@ -118,6 +122,14 @@ export function polarCoefficients(model: DragPolarModel, mach: number, cl: numbe
   }
   const cdIncrement = model.spec.cdIncrement;
   return { cd0, cdIncrement, cdInduced, cdWave, cd: cd0 + cdIncrement + cdInduced + cdWave, outsideTables: outside };
+}
+
+function specModel(spec: PolarSpec): { readonly spec: PolarSpec; readonly tables: PolarTables } {
+  const checked = validatePolarSpec(spec);
+  if (!checked.ok) {
+    throw new RangeError(`drag polar: invalid spec: ${checked.error.map((i) => `${i.path} ${i.message}`).join('; ')}`);
+  }
+  return { spec, tables: buildTables(spec) };
 }
 
 /** Buffet-onset CL (-) at a Mach, clamped to the table. */

@@ -185,6 +185,15 @@ describe('polarCoefficients', () => {
     expect(beyond.outsideTables).toEqual(['compressibility']);
   });
 
+  it('polarCoefficients on a spec equals polarCoefficients on its model', () => {
+    expect(polarCoefficients(transonic, 0.8, 0.55)).toEqual(polarCoefficients(model(transonic), 0.8, 0.55));
+  });
+
+  it('polarCoefficients throws on an invalid spec, naming the field', () => {
+    const bad: PolarSpec = { ...parabolic, induced: { kind: 'oswald', aspectRatio: 0, oswaldEfficiency: 0.8 } };
+    expect(() => polarCoefficients(bad, 0.5, 0.5)).toThrow(/induced\.aspectRatio/);
+  });
+
   it('polarCoefficients throws for a NaN or negative Mach (a caller bug)', () => {
     expect(() => polarCoefficients(model(parabolic), Number.NaN, 0.5)).toThrow(/Mach is NaN/);
     expect(() => polarCoefficients(model(parabolic), -0.1, 0.5)).toThrow(/Mach/);
