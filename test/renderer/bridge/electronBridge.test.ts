@@ -1,5 +1,5 @@
 import { describe, expect, it, vi } from 'vitest';
-import type { BlockwiseHost, HostReply } from '../../../electron/hostApi';
+import type { BlockwiseHost, HostReply, MenuCommand } from '../../../electron/hostApi';
 import { BridgeError } from '../../../renderer/bridge/bridge';
 import { createBridge } from '../../../renderer/bridge/createBridge';
 import { createElectronBridge } from '../../../renderer/bridge/electronBridge';
@@ -59,7 +59,7 @@ describe('createElectronBridge', () => {
 
   it('createElectronBridge forwards menu commands and their unsubscribe', () => {
     const stop = vi.fn();
-    const listeners: ((c: string, p?: string) => void)[] = [];
+    const listeners: ((c: MenuCommand, p?: string) => void)[] = [];
     const bridge = createElectronBridge(
       fakeHost({
         onMenuCommand: (l) => {
