@@ -7,7 +7,9 @@ import {
   polarCoefficients,
   type DragPolarModel,
 } from '../../../engine/aero/dragPolar';
+import { dynamicPressure_Pa } from '../../../engine/aero/airspeeds';
 import { validatePolarSpec, type PolarSpec } from '../../../engine/aero/polarSpec';
+import { atmosphere } from '../../../engine/aero/standardAtmosphere';
 import { expectOk } from '../../../engine/core/result';
 import { expectClose } from '../../support/assertInDelta';
 import { dragPolarReference as ref } from '../../reference/dragPolarReference';
@@ -144,6 +146,15 @@ describe('validatePolarSpec', () => {
     expect(negative.ok ? [] : negative.error.map((i) => i.path)).toEqual(['compressibility.cdWave[1][1]']);
   });
 
+  it('validatePolarSpec refuses an unknown induced or compressibility kind', () => {
+    const r = validatePolarSpec({
+      ...parabolic,
+      induced: { kind: 'quadratic' } as unknown as PolarSpec['induced'],
+      compressibility: { kind: 'magic' } as unknown as PolarSpec['compressibility'],
+    });
+    expect(r.ok ? [] : r.error.map((i) => i.path)).toEqual(['induced.kind', 'compressibility.kind']);
+  });
+
   it('validatePolarSpec refuses an unequal CLmax table and an empty induced table', () => {
     const r = validatePolarSpec({
       ...parabolic,
@@ -218,6 +229,17 @@ describe('AeroModel.drag', () => {
     expectClose(b.liftToDrag, d.cl / d.cd, { rel: 1e-6 }, 'L/D = CL/CD');
     // Only the CLmax table (to M 0.6) is left; the drag tables cover M 0.78.
     expect(b.outsideTables).toEqual(['clMax']);
+  });
+
+  it('drag uses the same dynamic pressure as the airspeed module at every altitude', () => {
+    // q = 0.7 p M^2 (NACA Report 1135) via engine/aero/airspeeds.ts on the shared atmosphere.
+    const m = model(parabolic);
+    for (const altitude_m of [-500, 0, 5000, 11000, 15000]) {
+      const p = expectOk(atmosphere(altitude_m), 'atmosphere').pressure_Pa;
+      const b = m.drag({ altitude_m, mach: 0.6, mass_kg: 50000, loadFactor: 1 });
+      expectClose(b.q_Pa, dynamicPressure_Pa(0.6, p), { rel: 1e-14 }, 'airspeeds.dynamicPressure_Pa');
+      expectClose(b.cl, (50000 * 9.80665) / (b.q_Pa * 122), { rel: 1e-14 }, 'CL = m g0 / (q S), g0 = 9.80665 m/s^2 exact');
+    }
   });
 
   it('drag reports buffet CL, CLmax and the load factor to buffet onset = CLbuffet / CL(1 g)', () => {

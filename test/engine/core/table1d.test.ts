@@ -165,6 +165,12 @@ describe('interp1d', () => {
     expect(r.outside).toBe('below');
   });
 
+  it('interp1d monotone cubic on a descending axis equals the ascending table', () => {
+    const asc = table(ref.pchip.x, ref.pchip.y, 'monotoneCubic');
+    const desc = table([...ref.pchip.x].reverse(), [...ref.pchip.y].reverse(), 'monotoneCubic');
+    ref.pchip.q.forEach((q) => expect(value(desc, q)).toBe(value(asc, q)));
+  });
+
   it('interp1d monotone cubic on two points is the straight line', () => {
     const t = table([0, 2], [1, 3], 'monotoneCubic');
     expectClose(value(t, 0.5), 1.5, { abs: 1e-15 }, 'straight line, hand computation');
