@@ -29,7 +29,7 @@ export function flyLevelSpeedChange(
   const vTarget = toMach * a;
   const direction = vTarget >= start[S_TAS] ? 1 : -1;
   const evaluate: Segment['evaluate'] = (y) => {
-    const mach = y[S_TAS] / a;
+    const mach = Math.max(y[S_TAS], 0) / a;
     const at = airPoint(input, altitude_m, mach, y[S_MASS], dev);
     const th = ratingPoint(input, at, dev, rating);
     const d = new Float64Array(STATE_SIZE);

@@ -1,19 +1,22 @@
 /**
- * The ISA and airspeed relations the mission integrator needs, kept local to
- * engine/mission so the solver does not depend on modules still being written.
- * Pressure altitude is the altitude variable throughout; an ISA deviation
- * shifts temperature at constant pressure (common practice).
+ * The ISA and airspeed relations the mission integrator needs, as a thin
+ * adapter over the shared engine/aero modules (standardAtmosphere.ts,
+ * airspeeds.ts): it adds the layer lapse rate the energy share factor needs
+ * and unwraps the atmosphere's Result, since mission input is range-checked
+ * first (missionInputCheck.ts) so a failure here is a bug.
  *
- * Sources: U.S. Standard Atmosphere 1976 (layers to 32 km); NACA Report 1135
- * (subsonic pitot relation between impact pressure and Mach number).
+ * Sources: U.S. Standard Atmosphere 1976; NACA Report 1135 (pitot relation).
  */
+import { atmosphere, pressureAltitude } from '../aero/standardAtmosphere';
+import { casFromMach, casMachTransitionAltitude, machFromCas } from '../aero/airspeeds';
+import { a0, g0, gamma, p0, R_air, T0 } from '../aero/constants';
 
-export const G0_M_S2 = 9.80665;
-export const GAS_CONSTANT_J_KG_K = 287.05287;
-export const GAMMA_AIR = 1.4;
-export const SEA_LEVEL_TEMPERATURE_K = 288.15;
-export const SEA_LEVEL_PRESSURE_PA = 101325;
-export const SEA_LEVEL_SPEED_OF_SOUND_M_S = Math.sqrt(GAMMA_AIR * GAS_CONSTANT_J_KG_K * SEA_LEVEL_TEMPERATURE_K);
+export const G0_M_S2 = g0;
+export const GAS_CONSTANT_J_KG_K = R_air;
+export const GAMMA_AIR = gamma;
+export const SEA_LEVEL_TEMPERATURE_K = T0;
+export const SEA_LEVEL_PRESSURE_PA = p0;
+export const SEA_LEVEL_SPEED_OF_SOUND_M_S = a0;
 export const TROPOSPHERE_LAPSE_K_M = -0.0065;
 export const TROPOPAUSE_M = 11000;
 export const FEET_M = 0.3048;
@@ -25,83 +28,62 @@ export interface MissionAir {
   readonly pressure_Pa: number;
   readonly density_kg_m3: number;
   readonly speedOfSound_m_s: number;
-  /** ISA temperature lapse dT/dHp at this altitude (K/m): -0.0065 below 11 km, 0 to 20 km, +0.001 above. */
+  /** ISA temperature lapse dT/dHp at this altitude (K/m), U.S. Standard Atmosphere 1976 layers to 32 km. */
   readonly lapse_K_m: number;
 }
 
-const LAYERS: readonly { readonly base_m: number; readonly lapse: number; readonly t_K: number; readonly p_Pa: number }[] = [
-  { base_m: 0, lapse: -0.0065, t_K: 288.15, p_Pa: 101325 },
-  { base_m: 11000, lapse: 0, t_K: 216.65, p_Pa: 22632.06 },
-  { base_m: 20000, lapse: 0.001, t_K: 216.65, p_Pa: 5474.889 },
-];
-
-function layerFor(altitude_m: number): (typeof LAYERS)[number] {
-  if (altitude_m >= 20000) return LAYERS[2];
-  if (altitude_m >= 11000) return LAYERS[1];
-  return LAYERS[0];
+/** ISA lapse rate (K/m) of the layer holding a pressure altitude (m), to 32 km (USSA 1976 Table 4). */
+export function layerLapse(altitude_m: number): number {
+  if (altitude_m < 11000) return -0.0065;
+  if (altitude_m < 20000) return 0;
+  return 0.001;
 }
 
 /**
- * ISA at a pressure altitude (m), valid from -2,000 m to 32,000 m, with an ISA
- * deviation (K). Source: U.S. Standard Atmosphere 1976, hydrostatic layers.
+ * ISA at a pressure altitude (m) with an ISA deviation (K), valid where
+ * engine/aero/standardAtmosphere.ts is (-5,004 m to 71,000 m, T > 0).
+ * Throws only for out-of-range input, which missionInputCheck.ts excludes.
  */
 export function missionAir(altitude_m: number, isaDev_K: number): MissionAir {
-  const layer = layerFor(altitude_m);
-  const dh = altitude_m - layer.base_m;
-  const tIsa = layer.t_K + layer.lapse * dh;
-  const gmr = G0_M_S2 / GAS_CONSTANT_J_KG_K;
-  const p =
-    layer.lapse === 0
-      ? layer.p_Pa * Math.exp((-gmr * dh) / layer.t_K)
-      : layer.p_Pa * Math.pow(tIsa / layer.t_K, -gmr / layer.lapse);
-  const t = tIsa + isaDev_K;
+  const r = atmosphere(altitude_m, isaDev_K);
+  if (!r.ok) throw new RangeError(`missionAir: ${r.error.message}`);
+  const a = r.value;
   return {
-    temperature_K: t,
-    isaTemperature_K: tIsa,
-    pressure_Pa: p,
-    density_kg_m3: p / (GAS_CONSTANT_J_KG_K * t),
-    speedOfSound_m_s: Math.sqrt(GAMMA_AIR * GAS_CONSTANT_J_KG_K * t),
-    lapse_K_m: layer.lapse,
+    temperature_K: a.temperature_K,
+    isaTemperature_K: a.isaTemperature_K,
+    pressure_Pa: a.pressure_Pa,
+    density_kg_m3: a.density_kg_m3,
+    speedOfSound_m_s: a.speedOfSound_m_s,
+    lapse_K_m: layerLapse(altitude_m),
   };
 }
 
-/** Pressure altitude (m) of an ISA pressure (Pa); inverse of missionAir, 500 Pa to 120 kPa. */
+/** Pressure altitude (m) of an ISA pressure (Pa); inverse of missionAir's pressure. */
 export function altitudeOfPressure(pressure_Pa: number): number {
-  const gmr = G0_M_S2 / GAS_CONSTANT_J_KG_K;
-  for (let i = LAYERS.length - 1; i >= 0; i--) {
-    const layer = LAYERS[i];
-    if (pressure_Pa <= layer.p_Pa || i === 0) {
-      if (layer.lapse === 0) return layer.base_m - (layer.t_K / gmr) * Math.log(pressure_Pa / layer.p_Pa);
-      const tRatio = Math.pow(pressure_Pa / layer.p_Pa, -layer.lapse / gmr);
-      return layer.base_m + (layer.t_K * (tRatio - 1)) / layer.lapse;
-    }
-  }
-  return 0;
+  const r = pressureAltitude(pressure_Pa);
+  if (!r.ok) throw new RangeError(`altitudeOfPressure: ${r.error.message}`);
+  return r.value;
 }
 
-/** Mach (-) from CAS (m/s) at a static pressure (Pa); subsonic pitot relation, NACA Report 1135. */
+/** Mach (-) from CAS (m/s) at a static pressure (Pa); NACA Report 1135 (engine/aero/airspeeds.ts). */
 export function machOfCas(cas_m_s: number, pressure_Pa: number): number {
-  const a0 = SEA_LEVEL_SPEED_OF_SOUND_M_S;
-  const qc = SEA_LEVEL_PRESSURE_PA * (Math.pow(1 + 0.2 * (cas_m_s / a0) ** 2, 3.5) - 1);
-  return Math.sqrt(5 * (Math.pow(qc / pressure_Pa + 1, 2 / 7) - 1));
+  return machFromCas(cas_m_s, pressure_Pa);
 }
 
-/** CAS (m/s) from Mach (-) at a static pressure (Pa); subsonic pitot relation, NACA Report 1135. */
+/** CAS (m/s) from Mach (-) at a static pressure (Pa); NACA Report 1135 (engine/aero/airspeeds.ts). */
 export function casOfMach(mach: number, pressure_Pa: number): number {
-  const a0 = SEA_LEVEL_SPEED_OF_SOUND_M_S;
-  const qc = pressure_Pa * (Math.pow(1 + 0.2 * mach * mach, 3.5) - 1);
-  return a0 * Math.sqrt(5 * (Math.pow(qc / SEA_LEVEL_PRESSURE_PA + 1, 2 / 7) - 1));
+  return casFromMach(mach, pressure_Pa);
 }
 
 /**
  * Pressure altitude (m) where a CAS (m/s) and a Mach (-) give the same speed
- * (the CAS/Mach transition altitude): the static pressure whose impact
- * pressure at that Mach equals the CAS's impact pressure. NACA Report 1135.
+ * (the CAS/Mach transition altitude); +Infinity when it lies above the
+ * atmosphere's range, -Infinity below (the schedule then holds one of them
+ * throughout). NACA Report 1135 via engine/aero/airspeeds.ts.
  */
 export function transitionAltitude(cas_m_s: number, mach: number): number {
-  const a0 = SEA_LEVEL_SPEED_OF_SOUND_M_S;
-  const qc = SEA_LEVEL_PRESSURE_PA * (Math.pow(1 + 0.2 * (cas_m_s / a0) ** 2, 3.5) - 1);
-  const denominator = Math.pow(1 + 0.2 * mach * mach, 3.5) - 1;
-  if (!(denominator > 0)) return Infinity;
-  return altitudeOfPressure(qc / denominator);
+  const r = casMachTransitionAltitude(cas_m_s, mach);
+  if (r.ok) return r.value;
+  if (r.error.code === 'pressure_out_of_range') return r.error.pressure_Pa < r.error.min_Pa ? Infinity : -Infinity;
+  return Infinity;
 }

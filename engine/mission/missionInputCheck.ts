@@ -13,6 +13,26 @@ function badNumber(path: string, value: unknown, rule: 'finite' | 'positive' | '
   return null;
 }
 
+/** Pressure altitudes the solver accepts (m): the troposphere and the layers above to 30 km. */
+export const MIN_ALTITUDE_M = -1000;
+export const MAX_ALTITUDE_M = 30000;
+/** ISA deviations the solver accepts (K). */
+export const MAX_ABS_ISA_DEV_K = 80;
+
+function badRange(path: string, value: number, lo: number, hi: number, unit: string): string | null {
+  const finite = badNumber(path, value, 'finite');
+  if (finite) return finite;
+  return value < lo || value > hi ? `${path} must lie between ${lo} and ${hi} ${unit}, got ${value}.` : null;
+}
+
+function badAltitude(path: string, value: number): string | null {
+  return badRange(path, value, MIN_ALTITUDE_M, MAX_ALTITUDE_M, 'm');
+}
+
+function badMach(path: string, value: number): string | null {
+  return badRange(path, value, 0.05, 0.99, '(subsonic Mach)');
+}
+
 function first(...problems: (string | null)[]): string | null {
   for (const p of problems) if (p !== null) return p;
   return null;
@@ -29,8 +49,8 @@ export function missionInputProblem(input: MissionInput): string | null {
     badNumber('airframe.maxFuel_kg', a.maxFuel_kg, 'nonNegative'),
     badNumber('airframe.wingArea_m2', a.wingArea_m2, 'positive'),
     badNumber('airframe.vmo_m_s', a.vmo_m_s, 'positive'),
-    badNumber('airframe.mmo', a.mmo, 'positive'),
-    badNumber('isaDev_K', input.isaDev_K, 'finite'),
+    badMach('airframe.mmo', a.mmo),
+    badRange('isaDev_K', input.isaDev_K, -MAX_ABS_ISA_DEV_K, MAX_ABS_ISA_DEV_K, 'K'),
     badNumber('wind_m_s', input.wind_m_s, 'finite'),
   );
   if (airframe) return airframe;
@@ -40,7 +60,7 @@ export function missionInputProblem(input: MissionInput): string | null {
     const leg = input.legs[i];
     const p = `legs[${i}] (${leg.name})`;
     const env = first(
-      leg.isaDev_K === undefined ? null : badNumber(`${p}.isaDev_K`, leg.isaDev_K, 'finite'),
+      leg.isaDev_K === undefined ? null : badRange(`${p}.isaDev_K`, leg.isaDev_K, -MAX_ABS_ISA_DEV_K, MAX_ABS_ISA_DEV_K, 'K'),
       leg.wind_m_s === undefined ? null : badNumber(`${p}.wind_m_s`, leg.wind_m_s, 'finite'),
     );
     if (env) return env;
@@ -63,28 +83,27 @@ export function missionInputProblem(input: MissionInput): string | null {
       case 'climb':
       case 'descent':
         problem = first(
-          badNumber(`${p}.toAltitude_m`, leg.toAltitude_m, 'finite'),
+          badAltitude(`${p}.toAltitude_m`, leg.toAltitude_m),
           badNumber(`${p}.schedule.lowCas_m_s`, leg.schedule.lowCas_m_s, 'positive'),
-          badNumber(`${p}.schedule.lowAltitudeLimit_m`, leg.schedule.lowAltitudeLimit_m, 'finite'),
+          badAltitude(`${p}.schedule.lowAltitudeLimit_m`, leg.schedule.lowAltitudeLimit_m),
           badNumber(`${p}.schedule.cas_m_s`, leg.schedule.cas_m_s, 'positive'),
-          badNumber(`${p}.schedule.mach`, leg.schedule.mach, 'positive'),
+          badMach(`${p}.schedule.mach`, leg.schedule.mach),
           leg.kind === 'descent' && leg.mode.kind === 'rate' ? badNumber(`${p}.mode.rate_m_s`, leg.mode.rate_m_s, 'positive') : null,
-          leg.schedule.mach < 1 ? null : `${p}.schedule.mach must be below 1 (subsonic), got ${leg.schedule.mach}.`,
         );
         break;
       case 'cruise':
         if (leg.distance_m === null) solvable++;
         problem = first(
-          badNumber(`${p}.altitude_m`, leg.altitude_m, 'finite'),
+          badAltitude(`${p}.altitude_m`, leg.altitude_m),
           leg.distance_m === null ? null : badNumber(`${p}.distance_m`, leg.distance_m, 'nonNegative'),
-          leg.speed.kind === 'mach' ? badNumber(`${p}.speed.mach`, leg.speed.mach, 'positive') : null,
+          leg.speed.kind === 'mach' ? badMach(`${p}.speed.mach`, leg.speed.mach) : null,
           leg.profile.kind === 'stepClimb' ? badNumber(`${p}.profile.step_m`, leg.profile.step_m, 'positive') : null,
-          leg.profile.kind === 'constantAltitude' ? null : badNumber(`${p}.profile.maxAltitude_m`, leg.profile.maxAltitude_m, 'finite'),
+          leg.profile.kind === 'constantAltitude' ? null : badAltitude(`${p}.profile.maxAltitude_m`, leg.profile.maxAltitude_m),
         );
         break;
       case 'hold':
         problem = first(
-          badNumber(`${p}.altitude_m`, leg.altitude_m, 'finite'),
+          badAltitude(`${p}.altitude_m`, leg.altitude_m),
           badNumber(`${p}.time_s`, leg.time_s, 'nonNegative'),
           leg.speed.kind === 'cas' ? badNumber(`${p}.speed.cas_m_s`, leg.speed.cas_m_s, 'positive') : null,
         );
@@ -110,8 +129,8 @@ export function missionInputProblem(input: MissionInput): string | null {
     r.preset === 'cfr121_645' ? badNumber('reserves.enRouteFraction', r.enRouteFraction, 'nonNegative') : null,
     r.preset === 'custom' ? badNumber('reserves.extraFuel_kg', r.extraFuel_kg, 'nonNegative') : null,
     alt === null ? null : badNumber('reserves.alternate.distance_m', alt.distance_m, 'nonNegative'),
-    alt === null ? null : badNumber('reserves.alternate.cruiseAltitude_m', alt.cruiseAltitude_m, 'finite'),
-    alt === null ? null : badNumber('reserves.alternate.cruiseMach', alt.cruiseMach, 'positive'),
-    alt === null ? null : badNumber('reserves.alternate.elevation_m', alt.elevation_m, 'finite'),
+    alt === null ? null : badAltitude('reserves.alternate.cruiseAltitude_m', alt.cruiseAltitude_m),
+    alt === null ? null : badMach('reserves.alternate.cruiseMach', alt.cruiseMach),
+    alt === null ? null : badAltitude('reserves.alternate.elevation_m', alt.elevation_m),
   );
 }
