@@ -73,7 +73,7 @@ async function start(): Promise<void> {
     initialProjectPath: projectArgument(process.argv),
   };
 
-  installSessionGuards(electronSession.defaultSession);
+  installSessionGuards(electronSession.defaultSession, devServerUrl === undefined);
   app.on('web-contents-created', (_event, contents) => installNavigationGuards(contents, appUrl));
 
   const handlers = createHostHandlers<IpcMainInvokeEvent>(

@@ -96,10 +96,15 @@ export type GuardedSession = Pick<Session, 'setPermissionRequestHandler' | 'setP
   readonly webRequest: Pick<Session['webRequest'], 'onHeadersReceived'>;
 };
 
-/** Denies every permission request (camera, notifications, ...) and adds the CSP header to responses. */
-export function installSessionGuards(session: GuardedSession): void {
+/**
+ * Denies every permission request (camera, notifications, ...) and, unless
+ * `cspHeader` is false (the dev server's hot reload needs an inline script),
+ * adds the CSP header to responses.
+ */
+export function installSessionGuards(session: GuardedSession, cspHeader = true): void {
   session.setPermissionRequestHandler((_contents, _permission, callback) => callback(false));
   session.setPermissionCheckHandler(() => false);
+  if (!cspHeader) return;
   session.webRequest.onHeadersReceived((details, callback) => {
     callback({
       responseHeaders: {

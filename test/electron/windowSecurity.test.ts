@@ -97,7 +97,7 @@ describe('installSessionGuards', () => {
       setPermissionCheckHandler: (fn: typeof check) => (check = fn),
       webRequest: { onHeadersReceived: (fn: typeof headers) => (headers = fn) },
     };
-    installSessionGuards(session as unknown as GuardedSession);
+    installSessionGuards(session as unknown as GuardedSession, true);
     for (const permission of ['media', 'geolocation', 'notifications', 'clipboard-read']) {
       const cb = vi.fn();
       request?.({}, permission, cb);
@@ -109,5 +109,22 @@ describe('installSessionGuards', () => {
     expect(cb).toHaveBeenCalledWith({
       responseHeaders: { 'Content-Type': ['text/html'], 'Content-Security-Policy': [CONTENT_SECURITY_POLICY] },
     });
+  });
+});
+
+describe('installSessionGuards for the dev server', () => {
+  it('installSessionGuards without the CSP header still denies permissions', () => {
+    const onHeadersReceived = vi.fn();
+    let request: ((c: unknown, p: string, cb: (granted: boolean) => void) => void) | undefined;
+    const session = {
+      setPermissionRequestHandler: (fn: typeof request) => (request = fn),
+      setPermissionCheckHandler: vi.fn(),
+      webRequest: { onHeadersReceived },
+    };
+    installSessionGuards(session as unknown as GuardedSession, false);
+    const cb = vi.fn();
+    request?.({}, 'media', cb);
+    expect(cb).toHaveBeenCalledWith(false);
+    expect(onHeadersReceived).not.toHaveBeenCalled();
   });
 });
