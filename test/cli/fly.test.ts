@@ -1,0 +1,212 @@
+import { execFile } from 'node:child_process';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { promisify } from 'node:util';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { runCli } from '../../cli/main';
+import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../engine/core/notice';
+import { expectClose } from '../support/assertInDelta';
+
+const repoRoot = fileURLToPath(new URL('../..', import.meta.url));
+const DEMO = 'fixtures/demo/demo.blockwise.json';
+// Conversion factors: NIST SP 811 (nmi = 1852 m, lb = 0.45359237 kg).
+const NMI = 1852;
+const LB = 0.45359237;
+
+interface Run {
+  readonly code: number;
+  readonly out: string;
+  readonly err: string;
+}
+
+async function run(...argv: string[]): Promise<Run> {
+  let out = '';
+  let err = '';
+  const code = await runCli(argv, { out: (t) => (out += t), err: (t) => (err += t), cwd: repoRoot });
+  return { code, out, err };
+}
+
+type Json = Record<string, unknown>;
+
+const REQUIRED_NUMBERS = [
+  'blockFuel_kg',
+  'blockTime_s',
+  'tripFuel_kg',
+  'tripTime_s',
+  'reserveFuel_kg',
+  'takeoffWeight_kg',
+  'landingWeight_kg',
+  'zeroFuelWeight_kg',
+  'payload_kg',
+  'distance_m',
+] as const;
+
+describe('blockwise fly <demo> --json', () => {
+  let demo: Json;
+  let code = -1;
+  beforeAll(async () => {
+    const r = await run('fly', DEMO, '--json');
+    code = r.code;
+    expect(r.err).toBe('');
+    demo = JSON.parse(r.out) as Json;
+  });
+
+  it('fly exits 0 with status ok on the demo project', () => {
+    expect(demo.status).toBe('ok');
+    expect(code).toBe(0);
+  });
+
+  it('fly --json has every required key, each a finite number', () => {
+    for (const key of REQUIRED_NUMBERS) {
+      expect(typeof demo[key], key).toBe('number');
+      expect(Number.isFinite(demo[key]), key).toBe(true);
+      expect(demo[key] as number, key).toBeGreaterThan(0);
+    }
+    expect(Array.isArray(demo.legs)).toBe(true);
+    expect(Array.isArray(demo.cautions)).toBe(true);
+    expect(demo.notice).toBe(SAFETY_NOTICE);
+    const reserves = demo.reserves as Record<string, number>;
+    for (const key of ['contingency_kg', 'alternate_kg', 'finalReserve_kg', 'extra_kg', 'total_kg']) {
+      expect(Number.isFinite(reserves[key]), key).toBe(true);
+    }
+  });
+
+  it('fly flies the range and carries the payload the demo file states', () => {
+    // The demo asks for 3,000 nmi with 1,600 lb payload (fixtures/demo/demo.blockwise.json).
+    expectClose(demo.distance_m as number, 3000 * NMI, { rel: 1e-3 }, 'project range, NIST SP 811 nmi');
+    expectClose(demo.payload_kg as number, 1600 * LB, { rel: 1e-12 }, 'project payload, NIST SP 811 lb');
+  });
+
+  it('fly --json figures add up: reserves = sum of parts, block fuel = sum of legs, landing = ZFW + reserve + taxi-in', () => {
+    // Definitions of block and trip fuel (common practice): block fuel is burnt from block-out to
+    // block-in; trip fuel from takeoff to landing; the reserve total is the sum of its parts.
+    const r = demo.reserves as Record<string, number>;
+    expectClose(r.total_kg!, r.contingency_kg! + r.alternate_kg! + r.finalReserve_kg! + r.extra_kg!, { abs: 1e-6 }, 'definition of the reserve total');
+    expectClose(demo.reserveFuel_kg as number, r.total_kg!, { abs: 1e-6 }, 'definition of the reserve total');
+    expect(demo.blockFuel_kg as number).toBeGreaterThan(demo.tripFuel_kg as number);
+    const legs = demo.legs as { fuel_kg: number; kind: string }[];
+    const taxiIn = legs.filter((l) => l.kind === 'taxiIn').reduce((s, l) => s + l.fuel_kg, 0);
+    expectClose((demo.landingWeight_kg as number) - taxiIn, (demo.zeroFuelWeight_kg as number) + (demo.reserveFuel_kg as number), { rel: 1e-4 }, 'payload-range mode blocks in with exactly the reserve (common practice)');
+    const legFuel = legs.filter((l) => l.kind !== 'reserve').reduce((s, l) => s + l.fuel_kg, 0);
+    expectClose(legFuel, demo.blockFuel_kg as number, { rel: 1e-9 }, 'block fuel is the sum of the mission legs');
+  });
+});
+
+describe('blockwise fly text output', () => {
+  it('fly prints the headline figures, the legs, the cautions and the safety notice', async () => {
+    const r = await run('fly', DEMO);
+    expect(r.code).toBe(0);
+    for (const text of ['Block fuel', 'Block time', 'Trip fuel', 'Reserve fuel', 'contingency', 'alternate', 'final reserve', 'Takeoff weight', 'Landing weight', 'Zero-fuel weight', 'Payload', 'Distance', 'Legs', 'Cruise', 'Cautions']) {
+      expect(r.out, text).toContain(text);
+    }
+    for (const line of SAFETY_NOTICE_LINES) expect(r.out).toContain(line);
+  });
+});
+
+describe('blockwise fly options', () => {
+  let dir = '';
+  beforeAll(() => {
+    dir = mkdtempSync(join(tmpdir(), 'blockwise-fly-'));
+  });
+  afterAll(() => {
+    rmSync(dir, { recursive: true, force: true });
+  });
+
+  it('fly --csv writes the time history with units in the header', async () => {
+    const file = join(dir, 'history.csv');
+    const r = await run('fly', DEMO, '--csv', file, '--json');
+    expect(r.code).toBe(0);
+    const lines = readFileSync(file, 'utf8').trimEnd().split('\n');
+    const header = lines[0]!.split(',');
+    for (const h of ['time[s]', 'distance[m]', 'altitude[m]', 'mach[-]', 'mass[kg]', 'fuelFlow[kg/s]', 'legIndex[-]']) expect(header).toContain(h);
+    expect(lines.length).toBeGreaterThan(20);
+    for (const line of lines.slice(1)) {
+      const cells = line.split(',');
+      expect(cells).toHaveLength(header.length);
+      for (const c of cells) expect(Number.isFinite(Number(c)), `cell ${c}`).toBe(true);
+    }
+    const time = header.indexOf('time[s]');
+    const last = Number(lines.at(-1)!.split(',')[time]);
+    const json = JSON.parse(r.out) as Json;
+    expect(last).toBeGreaterThanOrEqual((json.blockTime_s as number) * 0.999);
+  });
+
+  it('fly --inlet flies the named inlet design: the two demo inlets give different block fuel', async () => {
+    const a = JSON.parse((await run('fly', DEMO, '--json', '--inlet', 'long pitot')).out) as Json;
+    const b = JSON.parse((await run('fly', DEMO, '--json', '--inlet', 'short')).out) as Json;
+    expect(a.inlet).toBe('long pitot');
+    expect(b.inlet).toBe('short');
+    expect(a.status).toBe('ok');
+    expect(b.status).toBe('ok');
+    expect(a.blockFuel_kg).not.toBe(b.blockFuel_kg);
+    // The short inlet is 50 lb per engine lighter (fixtures/demo/demo.blockwise.json): OEW, hence ZFW, differs by 100 lb.
+    expectClose((a.zeroFuelWeight_kg as number) - (b.zeroFuelWeight_kg as number), 100 * LB, { rel: 1e-9 }, 'inlet weights in the demo file');
+  });
+
+  it('fly --inlet with an unknown name exits 2 and names the designs', async () => {
+    const r = await run('fly', DEMO, '--inlet', 'scoop');
+    expect(r.code).toBe(2);
+    expect(r.err).toContain('"scoop" is not an inlet design');
+    expect(r.err).toContain('"long pitot"');
+  });
+
+  it('fly without a project, with two projects or with an unknown option exits 2', async () => {
+    expect((await run('fly')).code).toBe(2);
+    expect((await run('fly', DEMO, DEMO)).code).toBe(2);
+    const r = await run('fly', DEMO, '--speed', 'fast');
+    expect(r.code).toBe(2);
+    expect(r.err).toContain('blockwise fly:');
+  });
+
+  it('fly --help prints the usage', async () => {
+    const r = await run('fly', '--help');
+    expect(r.code).toBe(0);
+    expect(r.out).toContain('Usage: blockwise fly');
+  });
+});
+
+describe('blockwise fly on broken and old project files', () => {
+  const expected = JSON.parse(readFileSync(join(repoRoot, 'fixtures/bad-projects/expected.json'), 'utf8')) as Record<
+    string,
+    { stage: string; path: string; fragment: string }
+  >;
+
+  it.each(Object.entries(expected))('fly exits 1 on %s with the file path, the JSON path and the reason', async (file, e) => {
+    const r = await run('fly', `fixtures/bad-projects/${file}`);
+    expect(r.code).toBe(1);
+    expect(r.out).toBe('');
+    expect(r.err).toContain(join(repoRoot, 'fixtures/bad-projects', file));
+    // Whole-file problems (empty, invalid JSON) have a pseudo-path; their message carries the line and column.
+    if (!e.path.startsWith('(')) expect(r.err).toContain(e.path);
+    expect(r.err).toContain(e.fragment);
+  });
+
+  it('fly exits 1 when the project file does not exist', async () => {
+    const r = await run('fly', 'fixtures/no-such-project.blockwise.json');
+    expect(r.code).toBe(1);
+    expect(r.err).toContain('no-such-project.blockwise.json');
+    expect(r.err).toContain('no such file');
+  });
+
+  it('fly migrates the version-1 sample and flies it', async () => {
+    const r = await run('fly', 'fixtures/old-versions/v1.blockwise.json', '--json');
+    expect(r.err).toBe('');
+    const j = JSON.parse(r.out) as Json;
+    expect(j.status).toBe('ok');
+    expect(r.code).toBe(0);
+    expect(j.inlet).toBe('short');
+    expectClose(j.distance_m as number, 3000 * NMI, { rel: 1e-3 }, 'project range, NIST SP 811 nmi');
+  });
+});
+
+describe('bin/blockwise.mjs fly (spawned)', () => {
+  it('node bin/blockwise.mjs fly <demo> --json prints the same block fuel as the in-process run', async () => {
+    const exec = promisify(execFile);
+    const { stdout } = await exec(process.execPath, ['bin/blockwise.mjs', 'fly', DEMO, '--json'], { cwd: repoRoot });
+    const spawned = JSON.parse(stdout) as Json;
+    const inProcess = JSON.parse((await run('fly', DEMO, '--json')).out) as Json;
+    expect(spawned.blockFuel_kg).toBe(inProcess.blockFuel_kg);
+  }, 60_000);
+});
