@@ -4,6 +4,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { expectOk } from '../../../engine/core/result';
 import { CUSTOMARY_DECK_UNITS, deckToCsv, parseDeckCsv } from '../../../engine/propulsion/deckCsv';
+import { parseDeckJson } from '../../../engine/propulsion/deckJson';
 import { deckGridPoints } from '../../../engine/propulsion/deckGrid';
 import { buildParametricDeck } from '../../../engine/propulsion/parametricDeck';
 import { DEMO_ENGINE_SPEC } from '../../../engine/propulsion/deckDemoSpec';
@@ -156,5 +157,25 @@ describe('deckToCsv', () => {
     });
     expect(back.policy).toEqual(deck.policy);
     expect(back.hasIsaDev).toBe(true);
+  });
+});
+
+describe('docs/deck-format.md examples', () => {
+  const doc = readFileSync(fileURLToPath(new URL('../../../docs/deck-format.md', import.meta.url)), 'utf8');
+  const block = (start: string): string => {
+    const from = doc.indexOf(start) + start.length;
+    return doc.slice(doc.indexOf('\n', from) + 1, doc.indexOf('```', from));
+  };
+
+  it('parseDeckCsv reads the documented CSV example', () => {
+    const deck = expectOk(parseDeckCsv(block('## CSV form\n\n```'), 'doc.csv'), 'doc example');
+    expect(deck.ratings.maxCruise).toBe(0.88);
+    expect(deck.referenceRecovery).toEqual({ kind: 'milE5008b' });
+  });
+
+  it('parseDeckJson reads the documented JSON example', () => {
+    const deck = expectOk(parseDeckJson(block('```json'), 'doc.json'), 'doc example');
+    expect(deck.hasAirflow).toBe(true);
+    expect(deck.notes).toEqual(['invented numbers']);
   });
 });
