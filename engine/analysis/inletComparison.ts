@@ -9,6 +9,7 @@ import type { Caution } from '../cautions/caution';
 import { err, ok, type Result } from '../core/result';
 import type { MissionInput, MissionResult } from '../mission/missionTypes';
 import type { RatingName } from '../propulsion/propulsionModel';
+import { solveMission } from '../mission/solveMission';
 import type { AnalysisError, MissionSolver } from './analysisTypes';
 import { thrustDragCrossover } from './crossover';
 import { flightEnvelope, type Ceiling } from './envelope';
@@ -25,7 +26,8 @@ export type FactorChoice = Readonly<Record<InletFactor, 'A' | 'B'>>;
 export type InletFactorBuilder = (choice: FactorChoice) => MissionInput;
 
 export interface InletComparisonOptions {
-  readonly solve: MissionSolver;
+  /** Mission solver; default engine/mission/solveMission. */
+  readonly solve?: MissionSolver;
   readonly nameA: string;
   readonly nameB: string;
   /** Cruise altitude of the crossover comparison (m); default the first cruise leg's altitude. */
@@ -112,12 +114,13 @@ export function compareInlets(
   build: InletFactorBuilder,
   options: InletComparisonOptions,
 ): Result<InletComparisonResult, AnalysisError> {
+  const solve: MissionSolver = options.solve ?? ((mission) => solveMission(mission));
   const total = 1 << INLET_FACTORS.length;
   const results: MissionResult[] = [];
   for (let mask = 0; mask < total; mask++) {
     if (options.shouldCancel?.()) return err({ code: 'cancelled', message: `inlet comparison cancelled after ${mask} of ${total} missions` });
     const choice = choiceOf(mask);
-    const r = options.solve(build(choice));
+    const r = solve(build(choice));
     if (r.status !== 'ok') {
       const mix = INLET_FACTORS.map((f) => `${f} ${choice[f]}`).join(', ');
       return err({ code: 'mission_failed', message: `inlet comparison: the mission with ${mix} failed: ${r.status}: ${r.statusMessage}` });

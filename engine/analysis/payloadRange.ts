@@ -7,6 +7,7 @@
 import type { Caution } from '../cautions/caution';
 import { err, ok, type Result } from '../core/result';
 import type { MissionInput, MissionResult } from '../mission/missionTypes';
+import { solveMission } from '../mission/solveMission';
 import type { AnalysisError, MissionSolver } from './analysisTypes';
 
 export type PayloadRangePointKind = 'maxPayload' | 'mtowFullFuel' | 'ferry' | 'between';
@@ -41,7 +42,8 @@ export interface PayloadRangeResult {
 }
 
 export interface PayloadRangeOptions {
-  readonly solve: MissionSolver;
+  /** Mission solver; default engine/mission/solveMission. */
+  readonly solve?: MissionSolver;
   /** Points between corners on each segment; default 3. */
   readonly pointsBetween?: number;
   /** Called after each mission with (done, total). */
@@ -79,6 +81,7 @@ export function payloadRangeDiagram(
   base: MissionInput,
   options: PayloadRangeOptions,
 ): Result<PayloadRangeResult, AnalysisError> {
+  const solve: MissionSolver = options.solve ?? ((mission) => solveMission(mission));
   const between = options.pointsBetween ?? 3;
   if (!Number.isInteger(between) || between < 0 || between > 50) {
     return err({ code: 'invalid_input', message: `payload-range: points between corners ${between} must be an integer 0..50` });
@@ -92,7 +95,7 @@ export function payloadRangeDiagram(
   let done = 0;
   const fly = (payload_kg: number, what: string): Result<MissionResult, AnalysisError> => {
     if (options.shouldCancel?.()) return err({ code: 'cancelled', message: `payload-range cancelled after ${done} of ${total} missions` });
-    const r = options.solve({ ...base, solve: { kind: 'maxRange', payload_kg } });
+    const r = solve({ ...base, solve: { kind: 'maxRange', payload_kg } });
     done++;
     options.onProgress?.(done, total);
     if (r.status !== 'ok') {

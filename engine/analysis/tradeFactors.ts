@@ -7,6 +7,7 @@ import { err, ok, type Result } from '../core/result';
 import type { MissionInput, MissionResult } from '../mission/missionTypes';
 import type { PropulsionModel } from '../propulsion/propulsionModel';
 import { adjustPropulsion } from './adjustedPropulsion';
+import { solveMission } from '../mission/solveMission';
 import type { AnalysisError, MissionSolver } from './analysisTypes';
 
 export type TradeFactorName = 'recovery' | 'dragCount' | 'tsfc' | 'oew';
@@ -15,14 +16,16 @@ export interface TradeFactor {
   readonly name: TradeFactorName;
   /** What one unit is, in words, e.g. "+1 % inlet recovery (+0.01)". */
   readonly unit: string;
-  /** d(block fuel) per unit (kg) by central differences with a step of one unit. */
-  readonly blockFuelPerUnit_kg: number;
-  /** The same with a step of half a unit (kg). */
-  readonly blockFuelPerUnitHalfStep_kg: number;
-  /** |full - half| / |half| (-); null when half is 0. */
+  /** d(block fuel) per unit (kg) by central differences with a step of one unit; null when a mission failed. */
+  readonly blockFuelPerUnit_kg: number | null;
+  /** The same with a step of half a unit (kg); null when a mission failed. */
+  readonly blockFuelPerUnitHalfStep_kg: number | null;
+  /** |full - half| / |half| (-); null when half is 0 or missing. */
   readonly relativeDifference: number | null;
   /** True when the two steps agree within the stated tolerance. */
   readonly converged: boolean;
+  /** Why a value is missing or not converged (a failed perturbed mission); null when converged. */
+  readonly note: string | null;
 }
 
 export interface TradeFactorsResult {
@@ -37,7 +40,8 @@ export interface TradeFactorsResult {
 }
 
 export interface TradeFactorOptions {
-  readonly solve: MissionSolver;
+  /** Mission solver; default engine/mission/solveMission. */
+  readonly solve?: MissionSolver;
   /** C_ram of the installation for the recovery wrapper (-); default 1.35 (Raymer, subsonic). */
   readonly cRam?: number;
   /** Propulsion with recovery raised by `delta` (-), when the caller can build it exactly; default the C_ram wrapper. */
@@ -58,6 +62,7 @@ const WRAPPER_METHOD =
  * become the design mission. 1 (+1) + 16 missions.
  */
 export function tradeFactors(input: MissionInput, options: TradeFactorOptions): Result<TradeFactorsResult, AnalysisError> {
+  const solve: MissionSolver = options.solve ?? ((mission) => solveMission(mission));
   const tolerance = options.tolerance ?? { rel: 0.05, abs_kg: 0.01 };
   const cRam = options.cRam ?? 1.35;
   if (!(cRam >= 0) || !Number.isFinite(cRam)) return err({ code: 'invalid_input', message: `trade factors: C_ram ${cRam} must be a number >= 0` });
@@ -65,7 +70,7 @@ export function tradeFactors(input: MissionInput, options: TradeFactorOptions): 
   let done = 0;
   const fly = (mission: MissionInput, what: string): Result<MissionResult, AnalysisError> => {
     if (options.shouldCancel?.()) return err({ code: 'cancelled', message: `trade factors cancelled after ${done} of ${total} missions` });
-    const r = options.solve(mission);
+    const r = solve(mission);
     done++;
     options.onProgress?.(done, total);
     if (r.status !== 'ok') return err({ code: 'mission_failed', message: `trade factors: the ${what} mission failed: ${r.status}: ${r.statusMessage}` });
@@ -91,22 +96,32 @@ export function tradeFactors(input: MissionInput, options: TradeFactorOptions): 
   };
   const factors: TradeFactor[] = [];
   for (const name of ['recovery', 'dragCount', 'tsfc', 'oew'] as const) {
-    const values: number[] = [];
+    const values: (number | null)[] = [];
+    const failures: string[] = [];
     for (const u of [1, -1, 0.5, -0.5]) {
       const r = fly(perturb[name].apply(u), `${name} ${u > 0 ? '+' : ''}${u} unit`);
-      if (!r.ok) return r;
-      values.push(r.value.blockFuel_kg);
+      if (!r.ok && r.error.code === 'cancelled') return r;
+      if (!r.ok) failures.push(r.error.message);
+      values.push(r.ok ? r.value.blockFuel_kg : null);
     }
-    const full = (values[0]! - values[1]!) / 2;
-    const half = (values[2]! - values[3]!) / 1;
-    const gap = Math.abs(full - half);
+    const [p1, m1, p2, m2] = values;
+    const full = p1 != null && m1 != null ? (p1 - m1) / 2 : null;
+    const half = p2 != null && m2 != null ? p2 - m2 : null;
+    const gap = full !== null && half !== null ? Math.abs(full - half) : null;
+    const converged = gap !== null && half !== null && gap <= tolerance.rel * Math.abs(half) + tolerance.abs_kg;
     factors.push({
       name,
       unit: perturb[name].unit,
       blockFuelPerUnit_kg: full,
       blockFuelPerUnitHalfStep_kg: half,
-      relativeDifference: half === 0 ? null : gap / Math.abs(half),
-      converged: gap <= tolerance.rel * Math.abs(half) + tolerance.abs_kg,
+      relativeDifference: gap === null || half === null || half === 0 ? null : gap / Math.abs(half),
+      converged,
+      note:
+        failures.length > 0
+          ? failures.join(' ')
+          : converged
+            ? null
+            : `The steps of 1 and 1/2 unit disagree by more than ${tolerance.rel * 100} % + ${tolerance.abs_kg} kg: block fuel is not smooth here (e.g. a step-climb or limit decision changes between the perturbed missions).`,
     });
   }
   const payloadRange = design.solve.kind === 'payloadRange' ? design.solve : null;

@@ -23,24 +23,27 @@ const denom = 1 - CONTINGENCY * (E - 1);
 
 describe('tradeFactors', () => {
   it('tradeFactors per 100 kg OEW matches the Breguet closed form', () => {
-    expectClose(factor('oew').blockFuelPerUnit_kg, (100 * (E - 1)) / denom, { rel: 1e-9 }, 'Breguet closed form, d trip / d Z');
+    expectClose(factor('oew').blockFuelPerUnit_kg!, (100 * (E - 1)) / denom, { rel: 1e-9 }, 'Breguet closed form, d trip / d Z');
     expect(factor('oew').converged).toBe(true);
   });
 
   it('tradeFactors per 1 % TSFC matches the Breguet closed-form derivative', () => {
     // d trip / dx with R/F scaled by (1 + x): Z E (R/F) / (1 - 0.05 (E - 1))^2 per unit x; 1 % = 0.01.
     const exact = (0.01 * Z * E * (R / F)) / (denom * denom);
-    expectClose(factor('tsfc').blockFuelPerUnit_kg, exact, { rel: 2e-4 }, 'Breguet derivative (central difference, O(h^2))');
-    expectClose(factor('tsfc').blockFuelPerUnitHalfStep_kg, exact, { rel: 5e-5 }, 'Breguet derivative, half step');
+    expectClose(factor('tsfc').blockFuelPerUnit_kg!, exact, { rel: 2e-4 }, 'Breguet derivative (central difference, O(h^2))');
+    expectClose(factor('tsfc').blockFuelPerUnitHalfStep_kg!, exact, { rel: 5e-5 }, 'Breguet derivative, half step');
     expect(factor('tsfc').converged).toBe(true);
   });
 
   it('tradeFactors signs: recovery saves fuel, drag and TSFC and weight cost fuel', () => {
-    expect(factor('recovery').blockFuelPerUnit_kg).toBeLessThan(0);
-    expect(factor('dragCount').blockFuelPerUnit_kg).toBeGreaterThan(0);
+    expect(factor('recovery').blockFuelPerUnit_kg!).toBeLessThan(0);
+    expect(factor('dragCount').blockFuelPerUnit_kg!).toBeGreaterThan(0);
     expect(r.missions).toBe(17);
     expectClose(r.baselineBlockFuel_kg, solve(input).blockFuel_kg, { abs: 1e-12 });
-    for (const f of r.factors) expect(f.converged).toBe(true);
+    for (const f of r.factors) {
+      expect(f.converged).toBe(true);
+      expect(f.note).toBeNull();
+    }
   });
 
   it('tradeFactors with the recovery wrapper agrees with a model whose thrust is scaled by 1 + C_ram dEta', () => {
@@ -53,7 +56,7 @@ describe('tradeFactors', () => {
       'trade factors',
     );
     const e = exact.factors.find((f) => f.name === 'recovery')!;
-    expectClose(factor('recovery').blockFuelPerUnit_kg, e.blockFuelPerUnit_kg, { rel: 1e-6 }, 'Raymer C_ram correction');
+    expectClose(factor('recovery').blockFuelPerUnit_kg!, e.blockFuelPerUnit_kg!, { rel: 1e-6 }, 'Raymer C_ram correction');
   });
 
   it('tradeFactors flies a non-design-mode input once to fix the design mission', () => {
@@ -62,5 +65,19 @@ describe('tradeFactors', () => {
     expect(t.missions).toBe(18);
     expectClose(t.designMission.range_m, solve(other).airDistance_m, { rel: 1e-12 });
     expect(tradeFactors(input, { solve, cRam: -1 }).ok).toBe(false);
+  });
+
+  it('tradeFactors keeps the other factors when one perturbed mission fails, and says which', () => {
+    const flaky = (i: typeof input) => {
+      const res = solve(i);
+      return i.airframe.oew_kg === input.airframe.oew_kg + 50 ? { ...res, status: 'did_not_converge' as const, statusMessage: 'residual 44 kg' } : res;
+    };
+    const t = expectOk(tradeFactors(input, { solve: flaky }), 'trade factors');
+    const oew = t.factors.find((f) => f.name === 'oew')!;
+    expect(oew.blockFuelPerUnitHalfStep_kg).toBeNull();
+    expect(oew.converged).toBe(false);
+    expect(oew.note).toMatch(/oew \+0.5 unit mission failed: did_not_converge: residual 44 kg/);
+    expectClose(oew.blockFuelPerUnit_kg!, factor('oew').blockFuelPerUnit_kg!, { rel: 1e-12 });
+    expect(t.factors.find((f) => f.name === 'tsfc')!.converged).toBe(true);
   });
 });
