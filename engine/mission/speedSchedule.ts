@@ -44,11 +44,13 @@ export function schedulePhases(schedule: SpeedSchedule, from_m: number, to_m: nu
   const hi = Math.max(from_m, to_m);
   const cuts = new Set<number>([from_m, to_m]);
   const limit = schedule.lowAltitudeLimit_m;
+  const lowTransition = transitionAltitude(schedule.lowCas_m_s, schedule.mach);
+  const highTransition = transitionAltitude(schedule.cas_m_s, schedule.mach);
   const candidates = [
     limit,
     TROPOPAUSE_M,
-    transitionAltitude(schedule.lowCas_m_s, schedule.mach),
-    transitionAltitude(schedule.cas_m_s, schedule.mach),
+    lowTransition < limit ? lowTransition : NaN,
+    highTransition >= limit ? highTransition : NaN,
   ];
   for (const c of candidates) if (c > lo && c < hi) cuts.add(c);
   const points = [...cuts].sort((a, b) => (up ? a - b : b - a));
