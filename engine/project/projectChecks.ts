@@ -126,6 +126,7 @@ export function checkProject(project: Project, doc: unknown): ProjectIssue[] {
         const p = `mission.legs[${i}].profile.maxAltitude`;
         issues.push(makeIssue(p, raw(p), 'at least the cruise altitude', `${raw(p)} is below the cruise altitude ${raw(`mission.legs[${i}].altitude`)}`));
       }
+      altitude_m = leg.altitude;
     }
   });
   return issues;

@@ -1,0 +1,88 @@
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { parseProjectData } from '../../../engine/project/parseProject';
+import type { ProjectIssue } from '../../../engine/project/projectIssue';
+
+const demoText = readFileSync(new URL('../../../fixtures/demo/demo.blockwise.json', import.meta.url), 'utf8');
+
+function issuesAfter(edit: (doc: Record<string, any>) => void): readonly ProjectIssue[] { // eslint-disable-line @typescript-eslint/no-explicit-any
+  const doc = JSON.parse(demoText) as Record<string, any>; // eslint-disable-line @typescript-eslint/no-explicit-any
+  edit(doc);
+  const r = parseProjectData(doc);
+  return r.ok ? [] : r.error;
+}
+
+function paths(issues: readonly ProjectIssue[]): string[] {
+  return issues.map((i) => i.path);
+}
+
+describe('checkProject (through parseProject)', () => {
+  it('checkProject refuses a landing weight above the maximum takeoff weight', () => {
+    const issues = issuesAfter((d) => (d.airframe.weights.maxLanding = '37000 lb'));
+    expect(paths(issues)).toEqual(['airframe.weights.maxLanding']);
+    expect(issues[0]!.message).toContain('is above the maximum takeoff weight');
+  });
+
+  it('checkProject refuses an OEW that with the inlets reaches the maximum zero-fuel weight', () => {
+    const issues = issuesAfter((d) => (d.airframe.weights.operatingEmpty = '21300 lb'));
+    expect(paths(issues)).toEqual(['airframe.weights.operatingEmpty']);
+  });
+
+  it('checkProject refuses two inlet designs with the same name', () => {
+    const issues = issuesAfter((d) => (d.inlets[1].name = 'long pitot'));
+    expect(paths(issues)).toEqual(['inlets[1].name']);
+  });
+
+  it('checkProject maps polar validator findings to project paths', () => {
+    // CD0 Mach axis out of order at row 2: the polar validator reports cd0.mach[2].
+    const issues = issuesAfter((d) => (d.polar.cd0[2].mach = 0.3));
+    expect(paths(issues)).toContain('polar.cd0[2].mach');
+  });
+
+  it('checkProject maps inlet validator findings to project paths', () => {
+    const issues = issuesAfter((d) => (d.inlets[0].source.rows[2].mach = 0.1));
+    expect(paths(issues)).toContain('inlets[0].source.rows[2].mach');
+  });
+
+  it('checkProject needs a solvable cruise leg in payload-range mode', () => {
+    const issues = issuesAfter((d) => (d.mission.legs[3].distance = '2000 nmi'));
+    expect(paths(issues)).toEqual(['mission.legs']);
+    expect(issues[0]!.message).toContain('"distance": "solve"');
+  });
+
+  it('checkProject accepts fixed cruise distances in takeoff-weight mode', () => {
+    const issues = issuesAfter((d) => {
+      d.mission.legs[3].distance = '2000 nmi';
+      d.mission.solve = { mode: 'takeoffWeight', takeoffWeight: '34000 lb', payload: '1600 lb' };
+    });
+    expect(issues).toEqual([]);
+  });
+
+  it('checkProject refuses a takeoff weight that leaves no fuel', () => {
+    const issues = issuesAfter((d) => {
+      d.mission.legs[3].distance = '2000 nmi';
+      d.mission.solve = { mode: 'takeoffWeight', takeoffWeight: '19500 lb', payload: '1600 lb' };
+    });
+    expect(paths(issues)).toEqual(['mission.solve.takeoffWeight']);
+  });
+
+  it('checkProject refuses a climb that does not go up and a cruise away from the altitude reached', () => {
+    const issues = issuesAfter((d) => {
+      d.mission.legs[2].toAltitude = '0 ft';
+    });
+    expect(paths(issues)).toEqual(['mission.legs[2].toAltitude', 'mission.legs[3].altitude']);
+  });
+
+  it('checkProject refuses a step-climb ceiling below the cruise altitude', () => {
+    const issues = issuesAfter((d) => (d.mission.legs[3].profile.maxAltitude = '31000 ft'));
+    expect(paths(issues)).toEqual(['mission.legs[3].profile.maxAltitude']);
+  });
+
+  it('checkProject refuses a fan-face Mach band upside down', () => {
+    const issues = issuesAfter((d) => {
+      d.cautions.minFanFaceMach = 0.6;
+      d.cautions.maxFanFaceMach = 0.4;
+    });
+    expect(paths(issues)).toEqual(['cautions.minFanFaceMach']);
+  });
+});
