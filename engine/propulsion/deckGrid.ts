@@ -152,6 +152,9 @@ export interface DeckNodeSet {
   readonly outsideValue: Float64Array;
   readonly outsideMin: Float64Array;
   readonly outsideMax: Float64Array;
+  /** Per axis: the tabulated altitude (m) and Mach of the level or node whose range was left (NaN where not applicable). */
+  readonly outsideAtAltitude_m: Float64Array;
+  readonly outsideAtMach: Float64Array;
   /** The axis whose 'refuse' policy stopped the lookup, or -1. */
   refusedAxis: number;
 }
@@ -165,6 +168,8 @@ export function createDeckNodeSet(): DeckNodeSet {
     outsideValue: new Float64Array(4),
     outsideMin: new Float64Array(4),
     outsideMax: new Float64Array(4),
+    outsideAtAltitude_m: new Float64Array(4),
+    outsideAtMach: new Float64Array(4),
     refusedAxis: -1,
   };
 }
@@ -206,13 +211,36 @@ function bracket(a: Float64Array, lo: number, hi: number, x: number, policy: Out
   return l;
 }
 
-function noteOutside(s: DeckNodeSet, axis: number, value: number, min: number, max: number): void {
+function noteOutside(
+  s: DeckNodeSet,
+  axis: number,
+  value: number,
+  min: number,
+  max: number,
+  atAltitude_m = Number.NaN,
+  atMach = Number.NaN,
+): void {
   const bit = 1 << axis;
   if ((s.outsideMask & bit) !== 0) return;
   s.outsideMask |= bit;
   s.outsideValue[axis] = value;
   s.outsideMin[axis] = min;
   s.outsideMax[axis] = max;
+  s.outsideAtAltitude_m[axis] = atAltitude_m;
+  s.outsideAtMach[axis] = atMach;
+}
+
+/** The tabulated altitude (m) of (altitude, Mach) node `node`. */
+function nodeAltitude_m(grid: DeckGrid, node: number): number {
+  let l = 0;
+  let h = grid.altitudes_m.length - 1;
+  // last altitude j with machStart[j] <= node
+  while (l < h) {
+    const m = (l + h + 1) >> 1;
+    if (grid.machStart[m]! <= node) l = m;
+    else h = m - 1;
+  }
+  return grid.altitudes_m[l]!;
 }
 
 function pushNode(s: DeckNodeSet, node: number, weight: number): void {
@@ -283,7 +311,7 @@ export function fillDeckNodes(
       const iMach = bracket(grid.machs, m0, m1, mach, machPolicy);
       const tMach = bracketT;
       if (bracketSide !== 0) {
-        noteOutside(s, AXIS_MACH, mach, grid.machs[m0]!, grid.machs[m1 - 1]!);
+        noteOutside(s, AXIS_MACH, mach, grid.machs[m0]!, grid.machs[m1 - 1]!, grid.altitudes_m[alt]!);
         if (machPolicy === 'refuse') {
           s.refusedAxis = AXIS_MACH;
           return false;
@@ -325,7 +353,9 @@ export function evaluateDeckNodesInto(
     const i = bracket(grid.power, p0, p1, power, powerPolicy);
     const t = bracketT;
     if (bracketSide !== 0) {
-      noteOutside(s, AXIS_POWER, power, grid.power[p0]!, grid.power[p1 - 1]!);
+      if ((s.outsideMask & (1 << AXIS_POWER)) === 0) {
+        noteOutside(s, AXIS_POWER, power, grid.power[p0]!, grid.power[p1 - 1]!, nodeAltitude_m(grid, node), grid.machs[node]!);
+      }
       if (powerPolicy === 'refuse') {
         s.refusedAxis = AXIS_POWER;
         return false;

@@ -92,8 +92,9 @@ export function finishLookup(
     fuelFlow *= f;
     if (airflow !== null) airflow /= f;
   }
-  if (s.outsideMask === 0 && !approximateTemperature) {
-    return { power, thrust_N: v[0]!, fuelFlow_kg_s: fuelFlow, airflow_kg_s: airflow, outside: NOTHING, cautions: NOTHING };
+  if (s.outsideMask === 0) {
+    const cautions = approximateTemperature ? temperatureCautionList(deck.title, condition.isaDev_K) : NOTHING;
+    return { power, thrust_N: v[0]!, fuelFlow_kg_s: fuelFlow, airflow_kg_s: airflow, outside: NOTHING, cautions };
   }
   const outside: DeckAxis[] = [];
   const cautions: Caution[] = [];
@@ -102,8 +103,30 @@ export function finishLookup(
     outside.push(DECK_AXES[axis]!);
     cautions.push(outsideCaution(deck, axis, s));
   }
-  if (approximateTemperature) cautions.push(temperatureApproximationCaution(deck.title, condition.isaDev_K));
+  if (approximateTemperature) cautions.push(temperatureCaution(deck.title, condition.isaDev_K));
   return { power, thrust_N: v[0]!, fuelFlow_kg_s: fuelFlow, airflow_kg_s: airflow, outside, cautions };
+}
+
+// The temperature caution is the same for every lookup of a deck at one ISA deviation (a mission
+// makes ~1e5 of them): keep the last one, frozen, instead of rebuilding its message each time.
+let cachedTitle = '';
+let cachedIsaDev_K = Number.NaN;
+let cachedCaution: Caution | null = null;
+let cachedList: readonly Caution[] = NOTHING;
+
+function temperatureCaution(title: string, isaDev_K: number): Caution {
+  if (cachedCaution === null || title !== cachedTitle || isaDev_K !== cachedIsaDev_K) {
+    cachedCaution = Object.freeze(temperatureApproximationCaution(title, isaDev_K));
+    cachedList = Object.freeze([cachedCaution]);
+    cachedTitle = title;
+    cachedIsaDev_K = isaDev_K;
+  }
+  return cachedCaution;
+}
+
+function temperatureCautionList(title: string, isaDev_K: number): readonly Caution[] {
+  temperatureCaution(title, isaDev_K);
+  return cachedList;
 }
 
 /** Describes the 'refuse' stop recorded in `s` as the `outside_deck` error. */
@@ -120,7 +143,7 @@ export function refusal(deck: EngineDeck, s: DeckNodeSet): DeckLookupError {
     max,
     message:
       `Deck "${deck.title}": ${describeValue(axis, value)} is outside the table ` +
-      `(${describeRange(axis, min, max)}) and the ${DECK_AXES[axis]} policy is 'refuse'.`,
+      `(${describeRange(axis, min, max, s)}) and the ${DECK_AXES[axis]} policy is 'refuse'.`,
   };
 }
 
@@ -140,7 +163,7 @@ function outsideCaution(deck: EngineDeck, axis: number, s: DeckNodeSet): Caution
     severity: 'caution',
     message:
       `Deck "${deck.title}": ${describeValue(axis, value)} is ${above ? 'above' : 'below'} the table ` +
-      `(${describeRange(axis, min, max)}); ${what}.`,
+      `(${describeRange(axis, min, max, s)}); ${what}.`,
     value,
     threshold: bound,
   };
@@ -161,9 +184,16 @@ function describeValue(axis: number, value: number): string {
   }
 }
 
-function describeRange(axis: number, min: number, max: number): string {
+function describeRange(axis: number, min: number, max: number, s: DeckNodeSet): string {
   const unit = axis === AXIS_ALTITUDE ? ' m' : axis === AXIS_ISA_DEV ? ' K' : '';
-  const where = axis === AXIS_MACH ? ' at this altitude' : axis === AXIS_POWER ? ' at this condition' : '';
+  const alt = s.outsideAtAltitude_m[axis]!;
+  const altText = `${round(alt)} m (${round(alt / 0.3048)} ft)`;
+  const where =
+    axis === AXIS_MACH
+      ? ` at the tabulated altitude ${altText}`
+      : axis === AXIS_POWER
+        ? ` at the tabulated node ${altText}, Mach ${round(s.outsideAtMach[axis]!)}`
+        : '';
   return `${round(min)} to ${round(max)}${unit}${where}`;
 }
 

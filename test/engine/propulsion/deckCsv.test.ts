@@ -88,6 +88,14 @@ describe('parseDeckCsv', () => {
     expect(deckGridPoints(deck.grid)).toEqual(deckGridPoints(raggedDeck().grid));
   });
 
+  it('parseDeckCsv reads rows in any order (descending altitude, Mach and power) into the same grid', () => {
+    const lines = RAGGED_CSV.trimEnd().split('\n');
+    const header = lines.findIndex((l) => l.startsWith('altitude'));
+    const reversed = [...lines.slice(0, header + 1), ...lines.slice(header + 1).reverse()].join('\n');
+    const deck = expectOk(parseDeckCsv(reversed, 'reversed.csv'), 'reversed');
+    expect(deckGridPoints(deck.grid)).toEqual(deckGridPoints(raggedDeck().grid));
+  });
+
   it('parseDeckCsv rejects an unknown metadata key with its line', () => {
     const r = parseDeckCsv(`# ratings takeoff: 1\n${RAGGED_CSV}`, 'meta.csv');
     expect(r.ok).toBe(false);

@@ -67,6 +67,7 @@ describe('lookupDeck', () => {
       // 15000 + 1.5 * (14500 - 15000) = 14250 N (hand calculation)
       expectClose(r.thrust_N, 14250, { rel: 1e-12 }, 'hand calculation');
       expect(r.outside).toEqual(['mach']);
+      expect(r.cautions[0]!.message).toContain('Mach 0.9 is above the table (0.2 to 0.8 at the tabulated altitude 3000 m');
     });
 
     it('extrapolates below the altitude\'s Mach range by default', () => {
@@ -95,6 +96,7 @@ describe('lookupDeck', () => {
       expect(r.outside).toEqual(['power']);
       expect(r.cautions.map((c) => c.id)).toEqual(['deck_clamped']);
       expect(r.power).toBe(1.2);
+      expect(r.cautions[0]!.message).toContain('power 1.2 is above the table (0.2 to 1 at the tabulated node 0 m (0 ft), Mach 0)');
       expect(thrust(raggedDeck(), at(0, 0), 0.1)).toBe(4000);
     });
 
