@@ -1,0 +1,110 @@
+import { thrustDragCrossover } from '../../engine/analysis/crossover';
+import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../engine/core/notice';
+import { formatTable } from '../format/textTable';
+import { optionalString, printJson, type CliIo, type Verb } from '../verb';
+import {
+  bothUnits,
+  EXIT_ANALYSIS_FAILED,
+  loadAnalysisProject,
+  machText,
+  positiveQuantityOption,
+  projectArgument,
+  quantityOption,
+  ratingOption,
+} from './analysisArgs';
+
+export const crossoverVerb: Verb = {
+  name: 'crossover',
+  summary: 'thrust available vs drag over Mach at an altitude and weight: the crossover Machs',
+  help: `blockwise crossover — where installed thrust available meets drag in level flight
+
+Usage: blockwise crossover <project.blockwise.json> --altitude <alt> --weight <mass>
+         [--rating maxCruise] [--inlet <name>] [--isa-dev <dT>] [--json]
+
+Options:
+  --altitude  pressure altitude, e.g. "35000 ft" or "10.5 km" (bare number = m)
+  --weight    aircraft mass, e.g. "15000 kg" or "33000 lb"
+  --rating    takeoff, maxClimb, maxCruise (default), maxContinuous or flightIdle
+  --inlet     use this inlet design instead of the project's active one
+  --isa-dev   ISA temperature deviation, e.g. "10 K" (default: the project's)
+  --json      print the result as JSON (SI; curves included)
+
+Prints the low and high crossover Machs (null where thrust exceeds drag at
+the end of the Mach scan), the Mach of least thrust available (where ram
+recovery starts to win back the lapse), the stall Mach that bounds the scan,
+and the thrust and drag curves. Above the ceiling for that weight the status
+says so. Exit codes: 0 done; 1 project unreadable; 2 bad command line;
+3 analysis failed (message on stderr).
+`,
+  options: {
+    altitude: { type: 'string' },
+    weight: { type: 'string' },
+    rating: { type: 'string' },
+    inlet: { type: 'string' },
+    'isa-dev': { type: 'string' },
+    json: { type: 'boolean' },
+  },
+  allowPositionals: true,
+  async run(values, positionals, io: CliIo): Promise<number> {
+    const file = projectArgument(positionals, 'crossover');
+    const altitude_m = quantityOption(values, 'altitude', 'length');
+    const mass_kg = positiveQuantityOption(values, 'weight', 'mass');
+    const rating = ratingOption(values, 'rating', 'maxCruise');
+    const loaded = await loadAnalysisProject(file, optionalString(values, 'inlet'), io);
+    if (typeof loaded === 'number') return loaded;
+    const { input } = loaded;
+    const isaDev_K = quantityOption(values, 'isa-dev', 'temperatureDelta', input.isaDev_K);
+    const r = thrustDragCrossover({ aero: input.aero, propulsion: input.propulsion }, { altitude_m, mass_kg, rating, isaDev_K });
+    if (!r.ok) {
+      io.err(`blockwise crossover: ${r.error.message}\n`);
+      return EXIT_ANALYSIS_FAILED;
+    }
+    const v = r.value;
+    if (values.json === true) {
+      printJson(io, { inlet: input.propulsion.inletName, deck: input.propulsion.label, ...v, notice: SAFETY_NOTICE });
+      return 0;
+    }
+    const step = Math.max(1, Math.round(v.curves.mach.length / 16));
+    const rows = v.curves.mach
+      .map((m, i) => [
+        m.toFixed(3),
+        (v.curves.thrustAvailable_N[i]! / 1000).toFixed(2),
+        (v.curves.drag_N[i]! / 1000).toFixed(2),
+        (v.curves.excessThrust_N[i]! / 1000).toFixed(2),
+        ((v.curves.specificExcessPower_m_s[i]! * 60) / 0.3048).toFixed(0),
+      ])
+      .filter((_, i) => i % step === 0 || i === v.curves.mach.length - 1);
+    io.out(
+      [
+        `Thrust-drag crossover — inlet "${input.propulsion.inletName}", ${v.rating}, ${bothUnits(altitude_m, 'altitude')}, ${bothUnits(mass_kg, 'mass')}, ISA${isaDev_K >= 0 ? '+' : ''}${isaDev_K.toFixed(1)} K`,
+        `Deck: ${input.propulsion.label}`,
+        '',
+        `  status                 ${v.status}`,
+        `  ${v.message}`,
+        `  low crossover Mach     ${machText(v.lowMach)}`,
+        `  high crossover Mach    ${machText(v.highMach)}`,
+        `  least-thrust Mach      ${machText(v.minThrustMach)}`,
+        `  stall Mach (CLmax)     ${machText(v.stallMach)}`,
+        `  most excess thrust at  M ${machText(v.maxExcessThrustMach)}`,
+        `  best climb (most Ps)   M ${machText(v.bestClimbMach)}, ${v.maxSpecificExcessPower_m_s === null ? '-' : bothUnits(v.maxSpecificExcessPower_m_s, 'climbRate')}`,
+        `  tolerance              Mach ${v.tolerance.mach}, |T - D|/D < ${v.tolerance.relativeThrust}`,
+        '',
+        formatTable(
+          [
+            { header: 'Mach', align: 'right' },
+            { header: 'thrust kN', align: 'right' },
+            { header: 'drag kN', align: 'right' },
+            { header: 'excess kN', align: 'right' },
+            { header: 'Ps ft/min', align: 'right' },
+          ],
+          rows,
+        ),
+        '',
+        ...(v.cautions.length > 0 ? ['Cautions:', ...v.cautions.map((c) => `  [${c.severity}] ${c.id}: ${c.message}`), ''] : []),
+        ...SAFETY_NOTICE_LINES,
+        '',
+      ].join('\n'),
+    );
+    return 0;
+  },
+};

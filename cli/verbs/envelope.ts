@@ -1,0 +1,130 @@
+import { DEFAULT_RESIDUAL_CLIMB_RATES, flightEnvelope } from '../../engine/analysis/envelope';
+import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../engine/core/notice';
+import { formatTable } from '../format/textTable';
+import { optionalString, printJson, UsageError, type CliIo, type Verb } from '../verb';
+import {
+  bothUnits,
+  EXIT_ANALYSIS_FAILED,
+  loadAnalysisProject,
+  machText,
+  positiveQuantityOption,
+  projectArgument,
+  quantityOption,
+  ratingOption,
+} from './analysisArgs';
+
+export const envelopeVerb: Verb = {
+  name: 'envelope',
+  summary: 'level-flight envelope over altitude and the absolute, service and cruise ceilings',
+  help: `blockwise envelope — level-flight envelope and ceilings at one weight
+
+Usage: blockwise envelope <project.blockwise.json> [--weight <mass>] [--rating maxClimb]
+         [--inlet <name>] [--isa-dev <dT>] [--top <alt>] [--step <alt>]
+         [--service-rate <rate>] [--cruise-rate <rate>] [--json]
+
+Options:
+  --weight        aircraft mass (default: the project's MTOW)
+  --rating        rating for thrust available (default maxClimb)
+  --inlet         use this inlet design instead of the project's active one
+  --isa-dev       ISA temperature deviation (default: the project's)
+  --top           highest altitude of the table and the ceiling search (default 50000 ft)
+  --step          altitude step of the table (default 2000 ft)
+  --service-rate  residual climb rate of the service ceiling (default 100 ft/min, common practice)
+  --cruise-rate   residual climb rate of the cruise ceiling (default 300 ft/min, common practice)
+  --json          print the result as JSON (SI)
+
+Each row gives the crossover Machs, the stall Mach, buffet onset at 1 g and at
+the project's buffet-margin load factor, and the VMO/MMO Mach. Climb rate is
+the steady climb rate Ps = (T - D) V / W at the best-climb Mach, at constant
+TAS (no acceleration factor). Exit codes: 0 done; 1 project unreadable;
+2 bad command line; 3 analysis failed.
+`,
+  options: {
+    weight: { type: 'string' },
+    rating: { type: 'string' },
+    inlet: { type: 'string' },
+    'isa-dev': { type: 'string' },
+    top: { type: 'string' },
+    step: { type: 'string' },
+    'service-rate': { type: 'string' },
+    'cruise-rate': { type: 'string' },
+    json: { type: 'boolean' },
+  },
+  allowPositionals: true,
+  async run(values, positionals, io: CliIo): Promise<number> {
+    const file = projectArgument(positionals, 'envelope');
+    const rating = ratingOption(values, 'rating', 'maxClimb');
+    const top_m = positiveQuantityOption(values, 'top', 'length', 50000 * 0.3048);
+    const step_m = positiveQuantityOption(values, 'step', 'length', 2000 * 0.3048);
+    if (top_m / step_m > 2000) throw new UsageError(`--step: ${String(values.step)} gives more than 2000 rows up to --top`);
+    const serviceRate = positiveQuantityOption(values, 'service-rate', 'speed', DEFAULT_RESIDUAL_CLIMB_RATES[0]!.climbRate_m_s);
+    const cruiseRate = positiveQuantityOption(values, 'cruise-rate', 'speed', DEFAULT_RESIDUAL_CLIMB_RATES[1]!.climbRate_m_s);
+    const loaded = await loadAnalysisProject(file, optionalString(values, 'inlet'), io);
+    if (typeof loaded === 'number') return loaded;
+    const { input } = loaded;
+    const mass_kg = positiveQuantityOption(values, 'weight', 'mass', input.airframe.mtow_kg);
+    const isaDev_K = quantityOption(values, 'isa-dev', 'temperatureDelta', input.isaDev_K);
+    const r = flightEnvelope(
+      { aero: input.aero, propulsion: input.propulsion },
+      {
+        mass_kg,
+        rating,
+        isaDev_K,
+        altitudeRange: [0, top_m],
+        altitudeStep_m: step_m,
+        buffetLoadFactor: input.cautionSettings.minBuffetLoadFactor,
+        residualClimbRates: [
+          { name: 'service', climbRate_m_s: serviceRate },
+          { name: 'cruise', climbRate_m_s: cruiseRate },
+        ],
+        speedLimits: { vmo_m_s: input.airframe.vmo_m_s, mmo: input.airframe.mmo },
+      },
+    );
+    if (!r.ok) {
+      io.err(`blockwise envelope: ${r.error.message}\n`);
+      return EXIT_ANALYSIS_FAILED;
+    }
+    const v = r.value;
+    if (values.json === true) {
+      printJson(io, { inlet: input.propulsion.inletName, deck: input.propulsion.label, ...v, notice: SAFETY_NOTICE });
+      return 0;
+    }
+    const rows = v.rows.map((row) => [
+      (row.altitude_m / 0.3048).toFixed(0),
+      machText(row.lowMach),
+      machText(row.highMach),
+      machText(row.stallMach),
+      `${machText(row.buffetLowMach)}/${machText(row.buffetHighMach)}`,
+      `${machText(row.buffetMarginLowMach)}/${machText(row.buffetMarginHighMach)}`,
+      machText(row.speedLimitMach),
+      row.maxClimbRate_m_s === null ? '-' : ((row.maxClimbRate_m_s * 60) / 0.3048).toFixed(0),
+    ]);
+    io.out(
+      [
+        `Level-flight envelope — inlet "${input.propulsion.inletName}", ${v.rating}, ${bothUnits(mass_kg, 'mass')}, ISA${isaDev_K >= 0 ? '+' : ''}${isaDev_K.toFixed(1)} K`,
+        '',
+        'Ceilings:',
+        ...v.ceilings.map((c) => `  ${c.name.padEnd(9)} ${c.altitude_m === null ? c.message : `${bothUnits(c.altitude_m, 'altitude')} at M ${machText(c.bestClimbMach)} (residual climb ${bothUnits(c.climbRate_m_s, 'climbRate')})`}`),
+        `  ${v.climbRateDefinition}`,
+        '',
+        formatTable(
+          [
+            { header: 'alt ft', align: 'right' },
+            { header: 'low M', align: 'right' },
+            { header: 'high M', align: 'right' },
+            { header: 'stall M', align: 'right' },
+            { header: 'buffet 1g', align: 'right' },
+            { header: `buffet ${v.buffetLoadFactor.toFixed(2)}g`, align: 'right' },
+            { header: 'VMO/MMO M', align: 'right' },
+            { header: 'climb ft/min', align: 'right' },
+          ],
+          rows,
+        ),
+        '',
+        ...SAFETY_NOTICE_LINES,
+        '',
+      ].join('\n'),
+    );
+    return 0;
+  },
+};
