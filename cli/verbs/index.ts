@@ -1,6 +1,8 @@
 import type { Verb } from '../verb';
 import { airVerb } from './air';
+import { crossoverVerb } from './crossover';
 import { deckAtVerb, deckCheckVerb } from './deck';
+import { envelopeVerb } from './envelope';
 import { flyVerb } from './fly';
 
 /**
@@ -12,4 +14,6 @@ export const verbs: readonly Verb[] = [
   airVerb,
   deckCheckVerb,
   deckAtVerb,
+  crossoverVerb,
+  envelopeVerb,
 ];
