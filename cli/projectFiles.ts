@@ -13,6 +13,7 @@ import { makeIssue, type ProjectIssue } from '../engine/project/projectIssue';
 import type { Project } from '../engine/project/projectSchema';
 import { parseProject } from '../engine/project/parseProject';
 import { parseDeckCsv } from '../engine/propulsion/deckCsv';
+import { parseDeckJson } from '../engine/propulsion/deckJson';
 import type { EngineDeck } from '../engine/propulsion/engineDeck';
 
 export interface LoadedProject {
@@ -48,9 +49,9 @@ async function readText(path: string): Promise<Result<string, string>> {
   }
 }
 
-/** Parses a deck file by its extension (.csv; JSON decks when the deck module offers them). */
+/** Parses a deck file by its extension: `.json` in the JSON deck form, anything else as deck CSV. */
 export function parseDeckFile(text: string, sourceName: string): ReturnType<typeof parseDeckCsv> {
-  return parseDeckCsv(text, sourceName);
+  return extname(sourceName).toLowerCase() === '.json' ? parseDeckJson(text, sourceName) : parseDeckCsv(text, sourceName);
 }
 
 /** Reads and parses a project file only (no deck). */
@@ -78,13 +79,6 @@ export async function readProjectDeck(
     return err({
       file: projectPath,
       issues: [makeIssue('engine.deck.path', JSON.stringify(ref.path), 'a readable deck file', `deck file ${JSON.stringify(ref.path)} (${deckPath}) cannot be read: ${text.error}`)],
-    });
-  }
-  const ext = extname(deckPath).toLowerCase();
-  if (ext !== '.csv') {
-    return err({
-      file: projectPath,
-      issues: [makeIssue('engine.deck.path', JSON.stringify(ref.path), 'a .csv deck file', `deck file ${JSON.stringify(ref.path)} has extension "${ext}"; expected a .csv deck file`)],
     });
   }
   const deck = parseDeckFile(text.value, ref.path);
