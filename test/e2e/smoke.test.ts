@@ -41,4 +41,22 @@ describe('the app in Chromium', () => {
     }
     expect(problems).toEqual([]);
   });
+
+  it('refuses an inline script under its Content-Security-Policy', async () => {
+    const { page, problems } = await openApp(browser, inject('baseUrl'));
+    await page.getByTestId('safety-notice').waitFor();
+    const outcome = await page.evaluate(
+      () =>
+        new Promise<{ ran: boolean; violated: string }>((resolve) => {
+          let violated = '';
+          document.addEventListener('securitypolicyviolation', (e) => (violated = e.effectiveDirective));
+          const script = document.createElement('script');
+          script.textContent = 'window.__inlineRan = true;';
+          document.head.append(script);
+          setTimeout(() => resolve({ ran: (window as unknown as { __inlineRan?: boolean }).__inlineRan === true, violated }), 200);
+        }),
+    );
+    expect(outcome).toEqual({ ran: false, violated: 'script-src-elem' });
+    expect(problems.every((p) => p.includes('Content Security Policy'))).toBe(true);
+  });
 });

@@ -32,9 +32,9 @@ export function requireChromium(): void {
  * Starts Chromium headless. playwright-core's launch() gives every browser a
  * fresh temporary --user-data-dir and removes it on close.
  */
-export async function launchChromium(): Promise<Browser> {
+export async function launchChromium(extraArgs: readonly string[] = []): Promise<Browser> {
   requireChromium();
-  return chromium.launch({ executablePath: CHROMIUM_PATH, headless: true, args: [...CHROMIUM_ARGS] });
+  return chromium.launch({ executablePath: CHROMIUM_PATH, headless: true, args: [...CHROMIUM_ARGS, ...extraArgs] });
 }
 
 /** A page of the app at `baseUrl` that records console errors, page errors and failed requests. */
