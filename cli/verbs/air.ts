@@ -83,7 +83,8 @@ Usage: blockwise air --altitude <length> [--isa-dev <temperature difference>]
 
 Options:
   --altitude   pressure altitude, e.g. "35000 ft", "10.67 km" (bare number = m); -5,004 m to 71,000 m
-  --isa-dev    temperature deviation from ISA, e.g. "+15 K", --isa-dev=-10degC (bare number = K); default 0
+  --isa-dev    temperature deviation from ISA, e.g. "+15 K", --isa-dev=-10degC (bare number = K);
+               -100 K to +100 K, default 0
   --cas        calibrated airspeed, e.g. "250 kt", "128 m/s" (bare number = m/s)
   --eas        equivalent airspeed
   --tas        true airspeed
@@ -108,7 +109,7 @@ with a minus sign needs an equals sign: --isa-dev=-10K, --altitude=-1000ft.
     const speed = readSpeed(values);
     const state = atmosphere(altitude_m, isaDev_K);
     if (!state.ok) {
-      const option = state.error.code === 'temperature_not_positive' ? '--isa-dev' : '--altitude';
+      const option = state.error.code === 'isa_dev_out_of_range' ? '--isa-dev' : '--altitude';
       throw new UsageError(`${option}: ${state.error.message}`);
     }
     let speeds: Airspeeds | null = null;

@@ -31,7 +31,8 @@ function requirePositive(value: number, name: string, what: string): void {
  */
 export function impactPressureRatio(mach: number): number {
   requireMach(mach, 'impactPressureRatio');
-  if (mach <= 1) return Math.pow(1 + G1 * mach * mach, EXP) - 1;
+  // expm1/log1p keep full relative precision at low Mach, where the ratio is about 0.7 M^2.
+  if (mach <= 1) return Math.expm1(EXP * Math.log1p(G1 * mach * mach));
   const m2 = mach * mach;
   const a = Math.pow(((gamma + 1) * (gamma + 1) * m2) / (4 * gamma * m2 - 2 * (gamma - 1)), EXP);
   return (a * (1 - gamma + 2 * gamma * m2)) / (gamma + 1) - 1;
@@ -46,7 +47,7 @@ export function machFromImpactPressureRatio(ratio: number): number {
   if (!(ratio >= 0) || !Number.isFinite(ratio)) {
     throw new RangeError(`machFromImpactPressureRatio: ratio must be finite and >= 0, got ${ratio}`);
   }
-  if (ratio <= SONIC_IMPACT_RATIO) return Math.sqrt((Math.pow(ratio + 1, 1 / EXP) - 1) / G1);
+  if (ratio <= SONIC_IMPACT_RATIO) return Math.sqrt(Math.expm1(Math.log1p(ratio) / EXP) / G1);
   // (qc/p + 1) / M^2 falls from 1.893 at M = 1 towards 1.2904 as M grows, so this bounds the root.
   const hi = Math.sqrt((ratio + 1) / 1.2) + 1;
   const root = brent((m) => impactPressureRatio(m) - ratio, 1, hi, { xTol: 1e-14 });

@@ -44,8 +44,14 @@ export type AtmosphereError =
       readonly max_Pa: number;
       readonly message: string;
     }
-  | { readonly code: 'not_finite'; readonly message: string }
-  | { readonly code: 'temperature_not_positive'; readonly temperature_K: number; readonly message: string };
+  | {
+      readonly code: 'isa_dev_out_of_range';
+      readonly isaDev_K: number;
+      readonly min_K: number;
+      readonly max_K: number;
+      readonly message: string;
+    }
+  | { readonly code: 'not_finite'; readonly message: string };
 
 /**
  * Lowest pressure altitude served (m): the bottom of the 1976 tables,
@@ -54,6 +60,14 @@ export type AtmosphereError =
 export const MIN_PRESSURE_ALTITUDE_M = (r0_m * -5000) / (r0_m - 5000);
 /** Highest pressure altitude served (m), the top of the 1976 standard's 51-71 km layer. */
 export const MAX_PRESSURE_ALTITUDE_M = 71000;
+
+/**
+ * ISA deviations accepted (K). Wider than any observed atmosphere (surface
+ * records lie within about -80 K and +60 K of ISA; common practice), and
+ * keeps the temperature positive everywhere in the altitude range.
+ */
+export const MIN_ISA_DEV_K = -100;
+export const MAX_ISA_DEV_K = 100;
 
 /** Layer base geopotential altitudes (m) and lapse rates (K/m), 1976 Table 4. */
 const BASE_H = [0, 11000, 20000, 32000, 47000, 51000, 71000] as const;
@@ -103,7 +117,8 @@ export const MIN_PRESSURE_PA = isaPressure(MAX_PRESSURE_ALTITUDE_M, layerIndex(M
 
 /**
  * The atmosphere at a geopotential pressure altitude (m), -5,003.9 m to
- * 71,000 m, with an ISA temperature deviation (K, default 0). The deviation
+ * 71,000 m, with an ISA temperature deviation (K, default 0; -100 K to
+ * +100 K). The deviation
  * changes temperature, density and speed of sound, not pressure. Source:
  * U.S. Standard Atmosphere 1976 (= ICAO Doc 7488/3 to 32 km).
  */
@@ -123,16 +138,18 @@ export function atmosphere(pressureAltitude_m: number, isaDev_K = 0): Result<Atm
       message: `pressure altitude ${pressureAltitude_m} m is outside the standard atmosphere's range ${MIN_PRESSURE_ALTITUDE_M.toFixed(0)} m to ${MAX_PRESSURE_ALTITUDE_M} m`,
     });
   }
+  if (isaDev_K < MIN_ISA_DEV_K || isaDev_K > MAX_ISA_DEV_K) {
+    return err({
+      code: 'isa_dev_out_of_range',
+      isaDev_K,
+      min_K: MIN_ISA_DEV_K,
+      max_K: MAX_ISA_DEV_K,
+      message: `ISA deviation ${isaDev_K} K is outside ${MIN_ISA_DEV_K} K to +${MAX_ISA_DEV_K} K`,
+    });
+  }
   const i = layerIndex(pressureAltitude_m);
   const isaTemperature_K = isaTemperature(pressureAltitude_m, i);
   const temperature_K = isaTemperature_K + isaDev_K;
-  if (!(temperature_K > 0)) {
-    return err({
-      code: 'temperature_not_positive',
-      temperature_K,
-      message: `ISA deviation ${isaDev_K} K gives a temperature of ${temperature_K.toFixed(2)} K at ${pressureAltitude_m} m pressure altitude`,
-    });
-  }
   const pressure_Pa = isaPressure(pressureAltitude_m, i);
   const density_kg_m3 = pressure_Pa / (R_air * temperature_K);
   return ok({

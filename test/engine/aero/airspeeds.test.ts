@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
   airspeedsAt,
@@ -203,5 +204,30 @@ describe('casMachTransitionAltitude', () => {
     // 600 kt CAS is Mach 0.5 only far below sea level.
     const low = casMachTransitionAltitude(600 * KT, 0.5);
     expect(low.ok ? 'ok' : low.error.code).toBe('pressure_out_of_range');
+  });
+});
+
+describe('airspeed inversions (property)', () => {
+  it('round-trip CAS, EAS and TAS through Mach at any altitude, deviation and speed up to Mach 4', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: -5000, max: 30000, noNaN: true }),
+        fc.double({ min: -60, max: 60, noNaN: true }),
+        fc.double({ min: 0, max: 4, noNaN: true }),
+        (h, dev, mach) => {
+          const s = at(h, dev);
+          const r = expectOk(airspeedsAt(s, { mach }), 'airspeedsAt');
+          const tol = (v: number, ref: number) => Math.abs(v - ref) <= 1e-9 * Math.abs(ref) + 1e-15;
+          return (
+            tol(machFromCas(r.cas_m_s, s.pressure_Pa), mach) &&
+            tol(machFromEas(r.eas_m_s, s.pressure_Pa), mach) &&
+            tol(machFromTas(r.tas_m_s, s.temperature_K), mach) &&
+            // Above sea level (p < p0) EAS <= CAS: the compressibility correction is subtracted (common practice).
+            (s.pressure_Pa > p0 || r.eas_m_s <= r.cas_m_s * (1 + 1e-12) + 1e-12)
+          );
+        },
+      ),
+      { numRuns: 500 },
+    );
   });
 });

@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { a0, p0, R_air, rho0, T0 } from '../../../engine/aero/constants';
 import {
@@ -143,10 +144,18 @@ describe('atmosphere with an ISA deviation', () => {
     expectClose(hot.speedOfSound_m_s, std.speedOfSound_m_s * Math.sqrt(hot.temperature_K / std.temperature_K), { rel: 1e-12 });
     expect(hot.isaDev_K).toBe(15);
   });
-  it('refuses a deviation that makes the temperature non-positive', () => {
-    const r = atmosphere(11000, -216.65);
-    expect(r.ok).toBe(false);
-    if (!r.ok) expect(r.error.code).toBe('temperature_not_positive');
+  it('accepts -100 K to +100 K and refuses a deviation outside, naming the range', () => {
+    // The coldest layer is 214.65 K (USSA 1976 Table 4, 71 km), so -100 K keeps T > 0.
+    expect(at(71000, -100).temperature_K).toBeCloseTo(114.65, 10);
+    expect(at(0, 100).temperature_K).toBeCloseTo(388.15, 10);
+    for (const dev of [-216.65, 100.5, 4e305]) {
+      const r = atmosphere(11000, dev);
+      expect(r.ok).toBe(false);
+      if (!r.ok) {
+        expect(r.error.code).toBe('isa_dev_out_of_range');
+        expect(r.error.message).toContain('-100 K to +100 K');
+      }
+    }
   });
 });
 
@@ -206,5 +215,33 @@ describe('pressureAltitude', () => {
     }
     const nan = pressureAltitude(Number.NaN);
     expect(nan.ok ? 'ok' : nan.error.code).toBe('not_finite');
+  });
+});
+
+describe('atmosphere over its whole range (property)', () => {
+  it('is finite and positive, and pressure falls with altitude, for any altitude and deviation', () => {
+    const altitude = fc.double({ min: MIN_PRESSURE_ALTITUDE_M, max: MAX_PRESSURE_ALTITUDE_M, noNaN: true });
+    fc.assert(
+      fc.property(altitude, altitude, fc.double({ min: -100, max: 100, noNaN: true }), (h1, h2, dev) => {
+        const a = at(h1, dev);
+        const b = at(h2, dev);
+        for (const v of [a.temperature_K, a.pressure_Pa, a.density_kg_m3, a.speedOfSound_m_s, a.theta, a.delta, a.sigma]) {
+          if (!(Number.isFinite(v) && v > 0)) return false;
+        }
+        // Hydrostatic balance: pressure decreases upwards (common practice); equal only within rounding.
+        return h1 <= h2 ? a.pressure_Pa >= b.pressure_Pa : a.pressure_Pa <= b.pressure_Pa;
+      }),
+      { numRuns: 1000 },
+    );
+  });
+  it('never returns a non-finite value for any double input', () => {
+    fc.assert(
+      fc.property(fc.double(), fc.double(), (h, dev) => {
+        const r = atmosphere(h, dev);
+        if (!r.ok) return r.error.message.length > 0;
+        return Object.values(r.value).every((v) => Number.isFinite(v));
+      }),
+      { numRuns: 1000 },
+    );
   });
 });
