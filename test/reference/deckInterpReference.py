@@ -9,10 +9,11 @@ Writes deckInterpReference.json next to this script:
   - "ragged": a ragged grid (each altitude its own Machs, each node its own
     powers) and values from numpy.interp along power, then Mach, then
     altitude, the order the engine uses.
-Run: python3 test/reference/deckInterpReference.py
+Run: python3 test/reference/deckInterpReference.py [output.json]
 """
 import json
 import os
+import sys
 
 import numpy as np
 from scipy.interpolate import RegularGridInterpolator
@@ -124,7 +125,7 @@ if __name__ == "__main__":
         "regular4": regular(True),
         "ragged": ragged(),
     }
-    path = os.path.join(os.path.dirname(os.path.abspath(__file__)), "deckInterpReference.json")
+    path = sys.argv[1] if len(sys.argv) > 1 else os.path.join(os.path.dirname(os.path.abspath(__file__)), "deckInterpReference.json")
     with open(path, "w") as fh:
         json.dump(doc, fh, indent=None, separators=(",", ":"))
         fh.write("\n")

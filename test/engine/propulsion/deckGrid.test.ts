@@ -1,3 +1,8 @@
+import { execFileSync } from 'node:child_process';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { expectOk } from '../../../engine/core/result';
@@ -5,7 +10,7 @@ import { AXIS_MACH, buildDeckGrid, createDeckNodeSet, deckGridPoints, fillDeckNo
 import { lookupDeck } from '../../../engine/propulsion/deckLookup';
 import type { EngineDeck } from '../../../engine/propulsion/engineDeck';
 import { expectClose } from '../../support/assertInDelta';
-import { loadInterpReference, raggedDeck, referenceDeck, type ReferenceCase } from './deckTestDecks';
+import { loadInterpReference, raggedDeck, referenceDeck, type ReferenceCase, type ReferenceFile } from './deckTestDecks';
 
 const ref = loadInterpReference();
 
@@ -110,4 +115,30 @@ describe('deckGrid', () => {
       ),
     );
   });
+});
+
+describe('deckInterpReference.json', () => {
+  it('is what test/reference/deckInterpReference.py computes now (numpy/scipy)', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'blockwise-deckref-'));
+    try {
+      const out = join(dir, 'ref.json');
+      const script = fileURLToPath(new URL('../../reference/deckInterpReference.py', import.meta.url));
+      execFileSync('python3', [script, out], { stdio: 'pipe' });
+      const committed = fileURLToPath(new URL('../../reference/deckInterpReference.json', import.meta.url));
+      const fresh = JSON.parse(readFileSync(out, 'utf8')) as ReferenceFile;
+      const saved = JSON.parse(readFileSync(committed, 'utf8')) as ReferenceFile;
+      expect(fresh.ragged.queries.length).toBeGreaterThan(200);
+      for (const key of ['regular', 'regular4', 'ragged'] as const) {
+        expect(fresh[key].rows).toEqual(saved[key].rows);
+        fresh[key].queries.forEach((q, i) => {
+          const s = saved[key].queries[i]!;
+          expectClose(q.thrust_N, s.thrust_N, { rel: 1e-14, abs: 1e-12 }, 'scipy re-run');
+          expectClose(q.fuelFlow_kg_s, s.fuelFlow_kg_s, { rel: 1e-14, abs: 1e-16 }, 'scipy re-run');
+        });
+      }
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+    // importing scipy can take seconds on a loaded machine; this is not a speed check
+  }, 60_000);
 });
