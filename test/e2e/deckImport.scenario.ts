@@ -1,0 +1,39 @@
+import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { openDemo, showView } from './support/appPage';
+import { launchChromium, openApp, screenshot } from './support/chromium';
+
+// The deck engineer's bad-deck fixtures carry the exact message each file
+// must produce (fixtures/bad-decks/expected.json); the engine view must show
+// it, with line and column, after an import through the browser's file picker.
+
+const badDecks = resolve(__dirname, '..', '..', 'fixtures', 'bad-decks');
+const expected = JSON.parse(readFileSync(resolve(badDecks, 'expected.json'), 'utf8')) as Record<string, string>;
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe('importing a deck', () => {
+  it('a deck with a non-numeric cell shows its line and column', async () => {
+    const { page } = await openApp(browser, inject('baseUrl'));
+    await openDemo(page);
+    await showView(page, 'engine');
+    const chooser = page.waitForEvent('filechooser');
+    await page.getByTestId('import-deck').click();
+    await (await chooser).setFiles(resolve(badDecks, 'non-numeric-cell.csv'));
+    const errors = page.getByTestId('deck-errors');
+    await errors.waitFor({ state: 'visible' });
+    const message = expected['non-numeric-cell.csv'];
+    expect(message).toMatch(/line 6, column "thrust\[lbf\]"/);
+    expect(await errors.textContent()).toContain(message);
+    await screenshot(page, 'deck-errors');
+    expect(await page.getByTestId('safety-notice').isVisible()).toBe(true);
+  });
+});

@@ -1,0 +1,46 @@
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { openDemo, readNumber, showView, waitForNumberChange } from './support/appPage';
+import { launchChromium, openApp, screenshot } from './support/chromium';
+
+// Drag polar CD = CD0 + K(CL - CLmd)^2 (Raymer, ch. 12): a higher CD0 means
+// more drag at every point of the mission, hence more thrust and more fuel,
+// so block fuel must rise (common practice; the engine's own tests pin the
+// numbers). Undo restores the exact previous figure.
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe('editing the demo project', () => {
+  it('raising CD0 raises block fuel and undo brings it back', async () => {
+    const { page, problems } = await openApp(browser, inject('baseUrl'));
+    await openDemo(page);
+    const before = await readNumber(page, 'headline-block-fuel');
+    expect(before).toBeGreaterThan(0);
+
+    await showView(page, 'airframe');
+    const cd0 = page.getByTestId('field-cd0-0');
+    const cd0Before = Number(await cd0.inputValue());
+    expect(cd0Before).toBeGreaterThan(0);
+    await cd0.fill(String(Math.round((cd0Before + 0.004) * 1e5) / 1e5));
+    await cd0.press('Enter');
+    await screenshot(page, 'edit-cd0');
+
+    await showView(page, 'results');
+    const after = await waitForNumberChange(page, 'headline-block-fuel', before);
+    expect(after).toBeGreaterThan(before);
+
+    await page.locator('body').click({ position: { x: 5, y: 5 } });
+    await page.keyboard.press('Control+z');
+    const undone = await waitForNumberChange(page, 'headline-block-fuel', after);
+    expect(undone).toBe(before);
+    await showView(page, 'airframe');
+    expect(Number(await page.getByTestId('field-cd0-0').inputValue())).toBe(cd0Before);
+    expect(problems).toEqual([]);
+  });
+});
