@@ -1,5 +1,5 @@
 import { execFile } from 'node:child_process';
-import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -143,6 +143,22 @@ describe('blockwise fly options', () => {
     expect(a.blockFuel_kg).not.toBe(b.blockFuel_kg);
     // The short inlet is 50 lb per engine lighter (fixtures/demo/demo.blockwise.json): OEW, hence ZFW, differs by 100 lb.
     expectClose((a.zeroFuelWeight_kg as number) - (b.zeroFuelWeight_kg as number), 100 * LB, { rel: 1e-9 }, 'inlet weights in the demo file');
+  });
+
+  it('fly exits 3 and still prints the result when the mission ends with a status other than ok', async () => {
+    // Climb and cruise at 45,000 ft at this weight: beyond what the invented 30 kN engines can reach.
+    const doc = JSON.parse(readFileSync(join(repoRoot, DEMO), 'utf8')) as Record<string, any>; // eslint-disable-line @typescript-eslint/no-explicit-any
+    doc.engine.deck.path = join(repoRoot, 'fixtures/demo/demo-engine.deck.csv');
+    doc.mission.legs[2].toAltitude = '45000 ft';
+    doc.mission.legs[3].altitude = '45000 ft';
+    doc.mission.legs[3].profile = { kind: 'constantAltitude' };
+    const file = join(dir, 'too-high.blockwise.json');
+    writeFileSync(file, JSON.stringify(doc));
+    const r = await run('fly', file, '--json');
+    const j = JSON.parse(r.out) as Json;
+    expect(j.status).not.toBe('ok');
+    expect(String(j.statusMessage)).not.toBe('');
+    expect(r.code).toBe(3);
   });
 
   it('fly --inlet with an unknown name exits 2 and names the designs', async () => {
