@@ -78,17 +78,23 @@ const LAPSE = [-0.0065, 0, 0.001, 0.0028, 0, -0.0028, -0.002] as const;
  */
 const GMR = (g0 * M0_KG_KMOL) / R_STAR_J_KMOL_K;
 
-const BASE_T: number[] = [T0];
-const BASE_P: number[] = [p0];
-for (let i = 1; i < BASE_H.length; i++) {
-  const dh = BASE_H[i] - BASE_H[i - 1];
-  const tb = BASE_T[i - 1]!;
-  const pb = BASE_P[i - 1]!;
-  const l = LAPSE[i - 1];
-  const t = tb + l * dh;
-  BASE_T.push(t);
-  BASE_P.push(l === 0 ? pb * Math.exp((-GMR * dh) / tb) : pb * Math.pow(tb / t, GMR / l));
+/** Layer base temperatures (K) and pressures (Pa), integrated up from sea level once. */
+function layerBases(): { readonly t: readonly number[]; readonly p: readonly number[] } {
+  const t = [T0];
+  const p = [p0];
+  for (let i = 1; i < BASE_H.length; i++) {
+    const dh = BASE_H[i] - BASE_H[i - 1];
+    const tb = t[i - 1]!;
+    const pb = p[i - 1]!;
+    const l = LAPSE[i - 1];
+    t.push(tb + l * dh);
+    p.push(l === 0 ? pb * Math.exp((-GMR * dh) / tb) : pb * Math.pow(tb / (tb + l * dh), GMR / l));
+  }
+  return { t, p };
 }
+const BASES = layerBases();
+const BASE_T = BASES.t;
+const BASE_P = BASES.p;
 
 function layerIndex(h: number): number {
   // Below 0 the first layer is extended (the 1976 tables do so down to -5 km).

@@ -22,7 +22,7 @@ export interface RootError {
 }
 
 export interface RootOptions {
-  /** Absolute tolerance on x; default 1e-12 * (1 + |x|)-scaled, see brent. */
+  /** Absolute tolerance on x, added to 4 eps |x|; default 1e-12. */
   readonly xTol?: number;
   /** Stop when |f(x)| <= fTol; default 0 (off). */
   readonly fTol?: number;
