@@ -77,7 +77,7 @@ function dynamicOverTotal(mach: number): number {
  * the throat Mach from continuity at pt_th = eta_shock pt0 (NACA Report
  * 1135 relations; diffuser loss as a multiple of throat dynamic pressure,
  * common practice, e.g. Seddon & Goldsmith, Intake Aerodynamics), iterated
- * with airflow = deck airflow * recovery / referenceRecovery to 1e-12.
+ * with airflow = deck airflow * recovery / referenceRecovery to 1e-13.
  * Valid for Mach 0..5 and positive areas; a choked throat or fan face is
  * reported (Mach 1) rather than refused.
  */
@@ -92,20 +92,33 @@ export function geometryInletFlow(
   const tt0 = free.temperature_K * totalToStaticTemperature(free.mach);
   const ptThroat = shockRecovery * pt0;
   const kd = geometry.diffuserLossCoefficient;
-  let recovery = shockRecovery;
-  let airflow = deckAirflow_kg_s;
+  // Fixed point eta = G(eta): airflow from eta, throat Mach from airflow, eta from the
+  // throat loss. G is a strong contraction (|G'| << 1); secant steps on eta - G(eta)
+  // converge in 3-4 evaluations, plain iteration is the fallback.
   let throatValue = 0;
   let throatMach = 0;
-  for (let i = 0; i < 60; i++) {
-    airflow = (deckAirflow_kg_s * recovery) / referenceRecovery;
-    throatValue = requiredMassFlowFunction(airflow, geometry.throatArea_m2, ptThroat, tt0);
+  const G = (eta: number): number => {
+    throatValue = requiredMassFlowFunction((deckAirflow_kg_s * eta) / referenceRecovery, geometry.throatArea_m2, ptThroat, tt0);
     throatMach = machOrChoked(throatValue);
-    const next = shockRecovery * (1 - kd * dynamicOverTotal(throatMach));
-    const change = Math.abs(next - recovery);
+    return shockRecovery * (1 - kd * dynamicOverTotal(throatMach));
+  };
+  let x0 = shockRecovery;
+  let r0 = G(x0) - x0;
+  let recovery = x0 + r0;
+  let converged = false;
+  for (let i = 0; i < 30 && !converged; i++) {
+    const r1 = G(recovery) - recovery;
+    // On convergence the throat state is already that of `recovery`.
+    converged = Math.abs(r1) <= 1e-13;
+    if (converged) break;
+    const slope = (r1 - r0) / (recovery - x0);
+    const next = slope !== 0 && Number.isFinite(slope) ? recovery - r1 / slope : recovery + r1;
+    x0 = recovery;
+    r0 = r1;
     recovery = next;
-    if (change <= 1e-12) break;
   }
-  airflow = (deckAirflow_kg_s * recovery) / referenceRecovery;
+  if (!converged) G(recovery);
+  const airflow = (deckAirflow_kg_s * recovery) / referenceRecovery;
   const fanValue = requiredMassFlowFunction(airflow, geometry.fanFaceArea_m2, recovery * pt0, tt0);
   return {
     recovery,

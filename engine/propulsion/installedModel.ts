@@ -63,6 +63,14 @@ export interface DeckAccess {
   powerBounds(condition: FlightCondition): { readonly idle: number; readonly max: number };
   /** Uninstalled power for a per-engine thrust (a first guess), or null. */
   powerForThrust(condition: FlightCondition, thrust_N: number, ceilingPower: number): number | null;
+  /**
+   * Optional fast path for solves at one condition: prepares the deck at
+   * `condition` and returns an evaluator writing thrust (N) and airflow
+   * (kg/s, NaN without airflow) at a power into out[0], out[1]; false when
+   * the deck refuses. Must agree with `lookup`. The evaluator may share
+   * buffers: it is valid until the next `curveAt` call.
+   */
+  curveAt?(condition: FlightCondition): (power: number, out: Float64Array) => boolean;
   /** Free-stream static pressure (Pa) and temperature (K). */
   ambient(condition: FlightCondition): Result<{ readonly pressure_Pa: number; readonly temperature_K: number }, AccessError>;
 }
@@ -170,10 +178,20 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
     return ratingCache.get(rating)!;
   }
 
-  /** Evaluates one engine at `power` into `s` (no allocation beyond the deck's own). */
-  function evaluateInto(s: Scratch, condition: FlightCondition, free: FreeStream, power: number): void {
-    const mach = condition.mach;
-    const deck = access.lookup(condition, power);
+  const curveOut = new Float64Array(2);
+  const fastScratch = newScratch();
+
+  function referenceAt(mach: number): number {
+    return access.referenceRecovery.kind === 'constant' ? access.referenceRecovery.value : milE5008bRecovery(mach);
+  }
+
+  /**
+   * Installation of one engine's deck point into `s`: recovery (and, with
+   * airflow, the physical airflow scaled by eta/eta_ref), throat and
+   * fan-face Mach, spillage from the spillage design's capture area, then
+   * the Raymer corrections.
+   */
+  function installInto(s: Scratch, mach: number, free: FreeStream, deckThrust: number, deckFuel: number, deckAirflow: number | null): void {
     s.throatMach = null;
     s.fanFaceMach = null;
     s.massFlowRatio = null;
@@ -181,27 +199,9 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
     s.fanFaceChoked = false;
     s.tableOutside = null;
     s.spillage = 0;
-    s.referenceRecovery = access.referenceRecovery.kind === 'constant' ? access.referenceRecovery.value : milE5008bRecovery(mach);
-    if (!deck.ok) {
-      s.deckError = deck.error;
-      s.deckThrust = 0;
-      s.deckFuel = 0;
-      s.airflow = null;
-      s.correctedThrust = 0;
-      s.fuel = 0;
-      s.recovery = s.referenceRecovery;
-      s.outside = NO_AXES;
-      s.deckCautions = NO_CAUTIONS;
-      return;
-    }
-    const d = deck.value;
-    s.deckError = null;
-    s.deckThrust = d.thrust_N;
-    s.deckFuel = d.fuelFlow_kg_s;
-    s.outside = d.outside;
-    s.deckCautions = d.cautions;
-    const deckAirflow = d.airflow_kg_s;
-    // Recovery (and, with airflow, the physical airflow scaled by eta/eta_ref).
+    s.referenceRecovery = referenceAt(mach);
+    s.deckThrust = deckThrust;
+    s.deckFuel = deckFuel;
     const source = recoveryInlet.design.source;
     if (source.kind === 'geometry') {
       if (deckAirflow !== null) {
@@ -223,7 +223,6 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
       s.tableOutside = r.outside;
       s.airflow = deckAirflow === null ? null : (deckAirflow * r.recovery) / s.referenceRecovery;
     }
-    // Spillage from the capture area of the spillage design.
     if (s.airflow !== null) {
       const a0 = streamTubeArea(s.airflow, free);
       s.massFlowRatio = Number.isFinite(a0) ? a0 / spillCapture_m2 : null;
@@ -232,8 +231,8 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
       }
     }
     const corrected = applyInstallationCorrections(
-      d.thrust_N,
-      d.fuelFlow_kg_s,
+      deckThrust,
+      deckFuel,
       s.referenceRecovery,
       s.recovery,
       bleedFraction(installation.bleed, s.airflow),
@@ -241,6 +240,26 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
     );
     s.correctedThrust = corrected.thrust_N;
     s.fuel = corrected.fuelFlow_kg_s;
+  }
+
+  /** Evaluates one engine at `power` into `s` through the full deck lookup. */
+  function evaluateInto(s: Scratch, condition: FlightCondition, free: FreeStream, power: number): void {
+    const deck = access.lookup(condition, power);
+    if (!deck.ok) {
+      installInto(s, condition.mach, free, 0, 0, null);
+      s.deckError = deck.error;
+      s.correctedThrust = 0;
+      s.fuel = 0;
+      s.recovery = s.referenceRecovery;
+      s.outside = NO_AXES;
+      s.deckCautions = NO_CAUTIONS;
+      return;
+    }
+    const d = deck.value;
+    s.deckError = null;
+    s.outside = d.outside;
+    s.deckCautions = d.cautions;
+    installInto(s, condition.mach, free, d.thrust_N, d.fuelFlow_kg_s, d.airflow_kg_s);
   }
 
   function cautionsOf(s: Scratch, source: InletDesign['source']): readonly Caution[] {
@@ -406,25 +425,41 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
       const point = assemble(scratch, condition, power, extra);
       return { ...point, limit, thrustRequired_N };
     };
-    const installedAt = (power: number): number => {
-      evaluateInto(scratch, condition, free, power);
-      return scratch.correctedThrust - scratch.spillage;
-    };
+    // Solve-only evaluation: the deck's fixed-condition curve when it offers one, else full lookups.
+    const curve = access.curveAt?.(condition);
+    const installedAt = curve
+      ? (power: number): number => {
+          if (!curve(power, curveOut)) {
+            evaluateInto(scratch, condition, free, power);
+            return scratch.correctedThrust - scratch.spillage;
+          }
+          const air = curveOut[1]!;
+          installInto(fastScratch, condition.mach, free, curveOut[0]!, 0, Number.isNaN(air) ? null : air);
+          return fastScratch.correctedThrust - fastScratch.spillage;
+        }
+      : (power: number): number => {
+          evaluateInto(scratch, condition, free, power);
+          return scratch.correctedThrust - scratch.spillage;
+        };
     const hiThrust = installedAt(ceiling.power);
-    const hiDeck = scratch.deckThrust;
     if (hiThrust <= perEngineRequired) return finish(ceiling.power, hiThrust === perEngineRequired ? 'within' : 'above_rating');
     const loThrust = installedAt(idle.power);
     if (loThrust >= perEngineRequired) return finish(idle.power, loThrust === perEngineRequired ? 'within' : 'below_idle');
-    // First guess: the deck inversion at the uninstalled thrust scaled by the ceiling's installation ratio.
+    // First guess: the deck inversion at the uninstalled thrust scaled by the
+    // ceiling's installed/uninstalled ratio, when the deck has no fast curve
+    // (the inversion costs several lookups); Brent's method from the bracket.
     let lo = idle.power;
     let hi = ceiling.power;
-    const ratio = hiThrust > 0 ? hiDeck / hiThrust : 1;
-    const guess = access.powerForThrust(condition, perEngineRequired * ratio, ceiling.power);
-    if (guess !== null && guess > lo && guess < hi) {
-      const g = installedAt(guess) - perEngineRequired;
-      if (g === 0) return finish(guess, 'within');
-      if (g > 0) hi = guess;
-      else lo = guess;
+    if (!curve) {
+      const hiDeck = scratch.deckThrust;
+      const ratio = hiThrust > 0 ? hiDeck / hiThrust : 1;
+      const guess = access.powerForThrust(condition, perEngineRequired * ratio, ceiling.power);
+      if (guess !== null && guess > lo && guess < hi) {
+        const g = installedAt(guess) - perEngineRequired;
+        if (g === 0) return finish(guess, 'within');
+        if (g > 0) hi = guess;
+        else lo = guess;
+      }
     }
     const fTol = FOR_THRUST_TOLERANCE * Math.max(Math.abs(perEngineRequired), 10);
     const root = brent((p) => installedAt(p) - perEngineRequired, lo, hi, {

@@ -5,13 +5,15 @@
  */
 import { atmosphere } from '../aero/standardAtmosphere';
 import type { CautionSettings } from '../cautions/cautionSettings';
+import { createDeckNodeSet, evaluateDeckNodesInto, fillDeckNodes } from './deckGrid';
 import { powerForThrust } from './deckInversion';
 import { lookupDeck, powerBounds, ratingPower } from './deckLookup';
+import { temperatureFlowFactor } from './deckTemperature';
 import type { EngineDeck } from './engineDeck';
 import type { InletDesign } from './inletDesign';
 import type { InstallationSettings } from './installationCorrections';
 import { makeInstalledModel, type DeckAccess } from './installedModel';
-import type { PropulsionModel } from './propulsionModel';
+import type { FlightCondition, PropulsionModel } from './propulsionModel';
 
 export { inletDragIncrementCd0, inletWeight } from './inletDesign';
 
@@ -30,6 +32,8 @@ export interface InstalledPropulsionOptions {
 
 /** The deck and the 1976 standard atmosphere as the installed model's DeckAccess. */
 export function deckAccess(deck: EngineDeck): DeckAccess {
+  const curve = deckCurve(deck);
+  const evaluate = curve.evaluate;
   return {
     title: deck.title,
     parametric: deck.parametric,
@@ -45,7 +49,41 @@ export function deckAccess(deck: EngineDeck): DeckAccess {
       const r = powerForThrust(deck, condition, thrust_N, ceilingPower);
       return r.ok ? r.value.lookup.power : null;
     },
+    curveAt: (condition) => {
+      curve.prepare(condition);
+      return evaluate;
+    },
     ambient: (condition) => atmosphere(condition.altitude_m, condition.isaDev_K),
+  };
+}
+
+/**
+ * The deck at one condition as a function of power: `prepare(condition)`
+ * finds the grid nodes and weights once, then `evaluate(power, out)` writes
+ * thrust (N) and airflow (kg/s, NaN without an airflow column) into
+ * out[0..1] by the same weights and temperature approximation as lookupDeck
+ * (deckGrid.ts, deckTemperature.ts). `evaluate` returns false where
+ * lookupDeck would refuse. One prepared condition at a time (buffers reused).
+ */
+export function deckCurve(deck: EngineDeck): {
+  prepare(condition: FlightCondition): void;
+  evaluate(power: number, out: Float64Array): boolean;
+} {
+  const nodes = createDeckNodeSet();
+  const values = new Float64Array(3);
+  let filled = false;
+  let airflowFactor = 1;
+  return {
+    prepare(condition) {
+      filled = fillDeckNodes(deck.grid, deck.policy, condition.isaDev_K, condition.altitude_m, condition.mach, nodes);
+      airflowFactor = !deck.hasIsaDev && condition.isaDev_K !== 0 ? 1 / temperatureFlowFactor(condition.altitude_m, condition.isaDev_K) : 1;
+    },
+    evaluate(power, out) {
+      if (!filled || !evaluateDeckNodesInto(deck.grid, nodes, power, deck.policy.power, values)) return false;
+      out[0] = values[0]!;
+      out[1] = deck.hasAirflow ? values[2]! * airflowFactor : Number.NaN;
+      return true;
+    },
   };
 }
 

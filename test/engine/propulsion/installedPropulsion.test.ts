@@ -6,8 +6,10 @@ import { DEMO_ENGINE_SPEC } from '../../../engine/propulsion/deckDemoSpec';
 import type { EngineDeck } from '../../../engine/propulsion/engineDeck';
 import type { InletDesign } from '../../../engine/propulsion/inletDesign';
 import type { InstallationSettings } from '../../../engine/propulsion/installationCorrections';
-import { FOR_THRUST_TOLERANCE } from '../../../engine/propulsion/installedModel';
+import { FOR_THRUST_TOLERANCE, makeInstalledModel } from '../../../engine/propulsion/installedModel';
 import {
+  deckAccess,
+  deckCurve,
   inletDragIncrementCd0,
   inletWeight,
   makeInstalledPropulsion,
@@ -266,5 +268,37 @@ describe('cautions', () => {
     expect(() => model(LONG_PITOT, { installation: { ...NO_INSTALL, powerExtraction_W: -1 } })).toThrow(/powerExtraction_W/);
     expect(() => model(LONG_PITOT).atPower({ ...CRUISE, mach: Number.NaN }, 0.5)).toThrow(/Mach/);
     expect(() => model(LONG_PITOT).forThrust(CRUISE, Number.NaN)).toThrow(/thrust required/);
+  });
+});
+
+describe('deckCurve', () => {
+  it('deckCurve evaluates exactly what lookupDeck returns, incl. off-table and ISA deviation', () => {
+    const curve = deckCurve(deck);
+    const out = new Float64Array(2);
+    for (const condition of [CRUISE, { ...CRUISE, mach: 0.95 }, { altitude_m: 1500, mach: 0.25, isaDev_K: 15 }, { altitude_m: 13000, mach: 0.85, isaDev_K: -10 }]) {
+      curve.prepare(condition);
+      for (const power of [0.06, 0.2, 0.5, 0.88, 1]) {
+        const d = expectOk(lookupDeck(deck, condition, power), 'deck');
+        expect(curve.evaluate(power, out)).toBe(true);
+        expectClose(out[0]!, d.thrust_N, { rel: 1e-15 }, 'lookupDeck thrust');
+        expectClose(out[1]!, d.airflow_kg_s!, { rel: 1e-15 }, 'lookupDeck airflow');
+      }
+    }
+  });
+
+  it('forThrust gives the same answer with and without the fast deck curve', () => {
+    const settings = { engineCount: 2, inlet: SHORT_INLET, installation: NO_INSTALL, cautionSettings: DEFAULT_CAUTION_SETTINGS };
+    const fast = makeInstalledModel(deckAccess(deck), settings);
+    const { curveAt: _unused, ...slowAccess } = deckAccess(deck);
+    const slow = makeInstalledModel(slowAccess, settings);
+    const cond = { altitude_m: 9000, mach: 0.7, isaDev_K: 10 };
+    const top = fast.atRating(cond, 'maxClimb').thrust_N;
+    for (const share of [0.2, 0.55, 0.95]) {
+      const a = fast.forThrust(cond, share * top, 'maxClimb');
+      const b = slow.forThrust(cond, share * top, 'maxClimb');
+      expectClose(a.thrust_N, share * top, { rel: FOR_THRUST_TOLERANCE }, 'round trip, fast');
+      expectClose(b.thrust_N, share * top, { rel: FOR_THRUST_TOLERANCE }, 'round trip, full lookups');
+      expectClose(a.power, b.power, { rel: 1e-6 }, 'same power');
+    }
   });
 });
