@@ -66,7 +66,8 @@ export function parseQuantity(input: string | number, expected: Dimension): Resu
     return fail('not_a_number', String(input), expected, `${JSON.stringify(input) ?? String(input)} is not a number or text`);
   }
   const text = input;
-  const trimmed = text.trim();
+  // A typographic minus (U+2212) reads as a hyphen-minus.
+  const trimmed = text.trim().replace(/^\u2212/, '-');
   if (trimmed === '') return fail('empty', text, expected, 'empty value');
   const quoted = JSON.stringify(trimmed);
   const m = NUMBER_AND_UNIT.exec(trimmed);

@@ -84,6 +84,14 @@ describe('parseQuantity conventions', () => {
     expectClose(si('0.6 lb / (lbf·h)', 'tsfc'), si('0.6 lb/(lbf h)', 'tsfc'), { rel: 1e-15 });
     expect(si('.5 km', 'length')).toBe(500);
   });
+  it('reads a typographic minus sign', () => {
+    expect(si('\u221240 degC', 'temperature')).toBeCloseTo(233.15, 12);
+  });
+  it('returns not_a_number for input that is neither text nor a number (e.g. JSON null)', () => {
+    const r = parseQuantity(null as unknown as string, 'mass');
+    expect(r.ok ? 'ok' : r.error.code).toBe('not_a_number');
+    if (!r.ok) expect(r.error.message).toContain('a mass');
+  });
   it('is case-sensitive and suggests the right case', () => {
     const r = parseQuantity('35000 FT', 'length');
     expect(r.ok).toBe(false);
