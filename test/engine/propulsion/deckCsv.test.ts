@@ -105,6 +105,47 @@ describe('parseDeckCsv', () => {
     }
   });
 
+  describe('metadata errors name their line', () => {
+    const cases: readonly (readonly [string, string, string])[] = [
+      ['# parametric: maybe', 'bad_metadata', 'parametric must be yes or no'],
+      ['# title: again', 'duplicate_metadata', 'the title is given twice'],
+      ['# rating cruise: 0.5', 'bad_metadata', 'unknown rating "cruise"'],
+      ['# rating maxCruise: fast', 'bad_metadata', '"fast" is not a number'],
+      ['# outside altitude: wrap', 'bad_metadata', 'must be refuse, clamp or extrapolate'],
+      ['# outside speed: clamp', 'bad_metadata', 'unknown axis'],
+      ['# reference recovery: 0', 'bad_metadata', 'reference recovery must be MIL-E-5008B'],
+      ['# just a comment', 'bad_metadata', 'free comments start with ##'],
+    ];
+    for (const [line, code, fragment] of cases) {
+      it(`parseDeckCsv rejects "${line}"`, () => {
+        const r = parseDeckCsv(`# title: t\n${line}\n${RAGGED_CSV.replace('# title: hand ragged\n', '')}`, 'meta.csv');
+        expect(r.ok).toBe(false);
+        if (r.ok) return;
+        expect(r.error[0]).toMatchObject({ code, line: 2 });
+        expect(r.error[0]!.message).toContain(`meta.csv line 2: `);
+        expect(r.error[0]!.message).toContain(fragment);
+      });
+    }
+
+    it('parseDeckCsv rejects a duplicate column and a flight idle above another rating', () => {
+      const dup = parseDeckCsv('altitude[ft],mach[-],power[-],thrust[lbf],fuel_flow[lb/h],thrust[N]\n', 'dup.csv');
+      expect(dup.ok).toBe(false);
+      if (!dup.ok) expect(dup.error[0]).toMatchObject({ code: 'duplicate_column', line: 1, column: 'thrust[N]' });
+      const idle = parseDeckCsv(`# rating maxClimb: 0.3\n${RAGGED_CSV.replace('# rating flightIdle: 0.2', '# rating flightIdle: 0.5')}`, 'idle.csv');
+      expect(idle.ok).toBe(false);
+      if (!idle.ok) expect(idle.error.map((e) => e.message).join('\n')).toContain('idle.csv line 1: rating maxClimb = 0.3 is not above flightIdle = 0.5');
+    });
+
+    it('parseDeckCsv needs a header and data rows', () => {
+      const noHeader = parseDeckCsv('# title: t\n## nothing else\n', 'nh.csv');
+      expect(noHeader.ok).toBe(false);
+      if (!noHeader.ok) expect(noHeader.error[0]!.code).toBe('no_header');
+      const noData = parseDeckCsv('altitude[ft],mach[-],power[-],thrust[lbf],fuel_flow[lb/h]\n\n', 'nd.csv');
+      expect(noData.ok).toBe(false);
+      if (!noData.ok) expect(noData.error[0]).toMatchObject({ code: 'no_data', line: 1 });
+    });
+  });
+
   describe('bad decks (fixtures/bad-decks/expected.json)', () => {
     for (const [file, fragment] of Object.entries(expected)) {
       it(`parseDeckCsv rejects ${file} naming the line and column`, () => {

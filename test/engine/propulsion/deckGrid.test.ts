@@ -7,6 +7,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { expectOk } from '../../../engine/core/result';
 import { AXIS_MACH, buildDeckGrid, createDeckNodeSet, deckGridPoints, fillDeckNodes } from '../../../engine/propulsion/deckGrid';
+import { parseDeckCsv } from '../../../engine/propulsion/deckCsv';
 import { lookupDeck } from '../../../engine/propulsion/deckLookup';
 import type { EngineDeck } from '../../../engine/propulsion/engineDeck';
 import { expectClose } from '../../support/assertInDelta';
@@ -47,6 +48,25 @@ describe('deckGrid', () => {
     expect(Array.from(g.machStart)).toEqual([0, 2, 5]);
     expect(Array.from(g.pointStart)).toEqual([0, 3, 6, 9, 13, 15]);
     expect(deckGridPoints(g)).toHaveLength(15);
+  });
+
+  it('interpolates ISA levels that each have their own altitudes (hand calculation)', () => {
+    const rows = [
+      // isa, alt, M, thrust at power 0 and 1
+      [0, 0, 0, 100, 200], [0, 0, 1, 90, 180], [0, 1000, 0, 80, 160], [0, 1000, 1, 70, 140],
+      [20, 0, 0, 95, 190], [20, 0, 1, 85, 170], [20, 2000, 0, 60, 120], [20, 2000, 1, 50, 100],
+    ];
+    const text = ['isa_dev[K],altitude[m],mach[-],power[-],thrust[N],fuel_flow[kg/s]']
+      .concat(rows.flatMap(([i, a, m, t0, t1]) => [`${i},${a},${m},0,${t0},0.1`, `${i},${a},${m},1,${t1},0.2`]))
+      .join('\n');
+    const deck = expectOk(parseDeckCsv(text, 'isa.csv'), 'isa deck');
+    // ISA+0: 500 m between 0 m (190 N at M 0.5) and 1000 m (150 N): 170 N.
+    // ISA+20: 500 m is a quarter of the way from 0 m (180 N) to 2000 m (110 N): 162.5 N.
+    // ISA+10 halfway: 166.25 N.
+    const r = expectOk(lookupDeck(deck, { altitude_m: 500, mach: 0.5, isaDev_K: 10 }, 1), 'isa lookup');
+    expectClose(r.thrust_N, 166.25, { rel: 1e-14 }, 'hand calculation');
+    expect(r.outside).toEqual([]);
+    expect(r.cautions).toEqual([]);
   });
 
   it('buildDeckGrid sorts points given in any order', () => {

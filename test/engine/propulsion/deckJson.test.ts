@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { expectOk } from '../../../engine/core/result';
 import { deckGridPoints } from '../../../engine/propulsion/deckGrid';
@@ -69,6 +70,21 @@ describe('parseDeckJson', () => {
     const empty = parseDeckJson('  ', 'deck.json');
     expect(empty.ok).toBe(false);
     if (!empty.ok) expect(empty.error[0]!.code).toBe('empty_file');
+  });
+});
+
+describe('parseDeckJson on random input', () => {
+  it('parseDeckJson never throws and names a path for every schema error (property)', () => {
+    fc.assert(
+      fc.property(fc.oneof(fc.json(), fc.string({ maxLength: 100 }), fc.jsonValue().map((v) => JSON.stringify({ ...SMALL, points: v }))), (text) => {
+        const r = parseDeckJson(text, 'random.json');
+        if (!r.ok) {
+          expect(r.error.length).toBeGreaterThan(0);
+          for (const e of r.error) expect(e.message.startsWith('random.json')).toBe(true);
+        }
+      }),
+      { numRuns: 300 },
+    );
   });
 });
 
