@@ -47,6 +47,7 @@ export function deckFileWhere(source: string, line: number | null, column: strin
   return column !== null ? `${source}, ${column}` : source;
 }
 
+/** One deck file error whose message is `<where>: <what>` (see deckFileWhere). */
 export function deckFileError(
   source: string,
   code: DeckFileErrorCode,

@@ -159,6 +159,7 @@ export interface DeckNodeSet {
   refusedAxis: number;
 }
 
+/** A fresh, empty node set (scratch buffers for up to 8 nodes: 2 ISA levels x 2 altitudes x 2 Machs). */
 export function createDeckNodeSet(): DeckNodeSet {
   return {
     count: 0,
