@@ -1,4 +1,5 @@
 import { readFileSync } from 'node:fs';
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { parseProject } from '../../../engine/project/parseProject';
 import { CURRENT_VERSION, type Project } from '../../../engine/project/projectSchema';
@@ -54,5 +55,27 @@ describe('projectToJson', () => {
     doc.inlets[0].source = { kind: 'geometry', captureArea: '5.6 ft2', throatArea: '5.0 ft2', fanFaceArea: '6 ft2', diffuserLossCoefficient: 0.1 };
     const project = parsed(JSON.stringify(doc));
     expect(parsed(projectToJson(project))).toEqual(project);
+  });
+
+  it('projectToJson round-trips arbitrary finite values of quantity fields exactly', () => {
+    const base = parsed(fixture('demo/demo.blockwise.json'));
+    fc.assert(
+      fc.property(
+        fc.double({ min: 1e-6, max: 1e9, noNaN: true }),
+        fc.double({ min: 1e-6, max: 1e4, noNaN: true }),
+        fc.double({ min: -80, max: 80, noNaN: true }),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        (mass, area, isaDev, fraction) => {
+          const project: Project = {
+            ...base,
+            airframe: { ...base.airframe, wingArea: area, weights: { ...base.airframe.weights, maxFuel: mass } },
+            mission: { ...base.mission, isaDeviation: isaDev },
+            inlets: base.inlets.map((i) => ({ ...i, lipSuctionFactor: fraction })),
+          };
+          expect(parsed(projectToJson(project))).toEqual(project);
+        },
+      ),
+      { numRuns: 200 },
+    );
   });
 });

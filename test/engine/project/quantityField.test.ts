@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
 import { expectedText, quantity, quantityDimensionOf, ratio } from '../../../engine/project/quantityField';
@@ -74,5 +75,23 @@ describe('quantity', () => {
   it('quantityDimensionOf names the dimension of a quantity schema and nothing else', () => {
     expect(quantityDimensionOf(quantity('force'))).toBe('force');
     expect(quantityDimensionOf(z.number())).toBeUndefined();
+  });
+
+  it('quantity never throws and gives a finite number or an issue with a message for any input', () => {
+    const schema = quantity('speed', { min: 0, max: 1000, what: 'a speed from 0 to 1000 m/s' });
+    fc.assert(
+      fc.property(fc.oneof(fc.string(), fc.double(), fc.jsonValue()), (input) => {
+        const r = schema.safeParse(input);
+        if (r.success) {
+          expect(Number.isFinite(r.data)).toBe(true);
+          expect(r.data).toBeGreaterThanOrEqual(0);
+          expect(r.data).toBeLessThanOrEqual(1000);
+        } else {
+          expect(r.error.issues.length).toBeGreaterThan(0);
+          for (const issue of r.error.issues) expect(issue.message).toMatch(/\S/);
+        }
+      }),
+      { numRuns: 500 },
+    );
   });
 });
