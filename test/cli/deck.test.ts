@@ -7,6 +7,7 @@ import { runCli } from '../../cli/main';
 import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../engine/core/notice';
 import { expectOk } from '../../engine/core/result';
 import { parseDeckCsv } from '../../engine/propulsion/deckCsv';
+import { deckToJson } from '../../engine/propulsion/deckJson';
 import { lookupDeck } from '../../engine/propulsion/deckLookup';
 import { expectClose } from '../support/assertInDelta';
 import { RAGGED_CSV } from '../engine/propulsion/deckTestDecks';
@@ -65,6 +66,26 @@ describe('blockwise deck check', () => {
     const j = JSON.parse(r.out);
     expect(j.ok).toBe(false);
     expect(j.errors[0]).toMatchObject({ code: 'not_a_number', line: 6, column: 'thrust[lbf]', value: '12x0' });
+  });
+
+  it('deck check reads the JSON form by its extension', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'blockwise-deck-'));
+    try {
+      const file = join(dir, 'ragged.json');
+      writeFileSync(file, deckToJson(expectOk(parseDeckCsv(RAGGED_CSV, 'ragged.csv'), 'ragged')));
+      const r = await run('deck', 'check', file, '--json');
+      expect(r.code).toBe(0);
+      const j = JSON.parse(r.out);
+      expect(j.title).toBe('hand ragged');
+      expect(j.points).toBe(15);
+      expect(j.mach).toEqual({ min: 0, max: 0.8 });
+      writeFileSync(file, '{"format": "blockwise-deck"');
+      const bad = await run('deck', 'check', file);
+      expect(bad.code).toBe(1);
+      expect(bad.err).toContain('not valid JSON');
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
   });
 
   it('deck check on a missing file exits 1 and names it', async () => {
