@@ -131,6 +131,20 @@ describe('buildParametricDeck', () => {
     expect(a[2]).toBeLessThan(a[1]!);
   });
 
+  it('buildParametricDeck scales the dry low-bypass and turbojet lapses by their static values (0.6, 0.8)', () => {
+    for (const [kind, lapse, staticLapse, tsfcRatio] of [
+      ['lowBypassTurbofan', 0.21521105874053192, 0.6, (0.9 + 0.3 * 0.8) / 0.9],
+      ['turbojet', 0.2458834121358747, 0.8, (1.1 + 0.3 * 0.8) / 1.1],
+    ] as const) {
+      const deck = buildParametricDeck({ ...SMALL, kind, throttleRatio: 1.0 });
+      const sls = expectOk(lookupDeck(deck, { altitude_m: 0, mach: 0, isaDev_K: 0 }, 1), 'SLS');
+      expectClose(sls.thrust_N, 30000, { rel: 1e-12 }, 'F_SLS is the full-throttle static thrust');
+      const r = expectOk(lookupDeck(deck, { altitude_m: 10668, mach: 0.8, isaDev_K: 0 }, 1), 'FL350');
+      expectClose(r.thrust_N, (30000 * lapse) / staticLapse, { rel: 1e-9 }, `Mattingly eq. 2.54 (${kind}), hand calculation`);
+      expectClose(r.fuelFlow_kg_s / r.thrust_N, 1.2e-5 * tsfcRatio * Math.sqrt(FL350.theta), { rel: 1e-9 }, `Mattingly eq. 2.55 (${kind})`);
+    }
+  });
+
   it('buildParametricDeck with isaDevs_K tabulates an ISA-deviation axis: hotter days lose thrust above the throttle break', () => {
     const deck = buildParametricDeck({ ...SMALL, grid: { ...SMALL.grid, isaDevs_K: [0, 20] } });
     expect(deck.hasIsaDev).toBe(true);
