@@ -1,0 +1,86 @@
+import { payloadRangeDiagram } from '../../engine/analysis/payloadRange';
+import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../engine/core/notice';
+import { formatTable } from '../format/textTable';
+import { optionalString, printJson, UsageError, type CliIo, type Verb } from '../verb';
+import { bothUnits, EXIT_ANALYSIS_FAILED, loadAnalysisProject, projectArgument } from './analysisArgs';
+
+export const payloadRangeVerb: Verb = {
+  name: 'payload-range',
+  summary: 'payload-range diagram: corner points and the curve, each a mission with reserves',
+  help: `blockwise payload-range — payload against range, each point a full mission with reserves
+
+Usage: blockwise payload-range <project.blockwise.json> [--inlet <name>] [--between <n>] [--json]
+
+Options:
+  --inlet    use this inlet design instead of the project's active one
+  --between  missions between corner points on each segment (default 3, at most 50)
+  --json     print the result as JSON (SI)
+
+Corner points: maximum payload (MZFW - OEW) at MTOW, MTOW with full tanks,
+and ferry (no payload, full tanks). Every point is flown by the mission
+solver in maximum-range mode with the project's legs and reserves. Exit
+codes: 0 done; 1 project unreadable; 2 bad command line; 3 a mission failed.
+`,
+  options: {
+    inlet: { type: 'string' },
+    between: { type: 'string' },
+    json: { type: 'boolean' },
+  },
+  allowPositionals: true,
+  async run(values, positionals, io: CliIo): Promise<number> {
+    const file = projectArgument(positionals, 'payload-range');
+    const betweenText = optionalString(values, 'between');
+    const between = betweenText === undefined ? 3 : Number(betweenText);
+    if (!Number.isInteger(between) || between < 0 || between > 50) {
+      throw new UsageError(`--between: expected a whole number 0..50, got ${JSON.stringify(betweenText)}`);
+    }
+    const loaded = await loadAnalysisProject(file, optionalString(values, 'inlet'), io);
+    if (typeof loaded === 'number') return loaded;
+    const { input } = loaded;
+    const r = payloadRangeDiagram(input, { pointsBetween: between });
+    if (!r.ok) {
+      io.err(`blockwise payload-range: ${r.error.message}\n`);
+      return EXIT_ANALYSIS_FAILED;
+    }
+    const v = r.value;
+    if (values.json === true) {
+      printJson(io, { inlet: input.propulsion.inletName, ...v, notice: SAFETY_NOTICE });
+      return 0;
+    }
+    const label: Record<string, string> = { maxPayload: 'max payload', mtowFullFuel: 'MTOW, full tanks', ferry: 'ferry', between: '' };
+    const rows = v.points.map((p) => [
+      label[p.kind] ?? p.kind,
+      (p.range_m / 1852).toFixed(0),
+      p.payload_kg.toFixed(0),
+      p.takeoffMass_kg.toFixed(0),
+      p.fuelOnBoard_kg.toFixed(0),
+      p.blockFuel_kg.toFixed(0),
+      p.reserveFuel_kg.toFixed(0),
+    ]);
+    io.out(
+      [
+        `Payload-range — inlet "${input.propulsion.inletName}"; MTOW ${bothUnits(input.airframe.mtow_kg, 'mass')}, max fuel ${bothUnits(input.airframe.maxFuel_kg, 'mass')}`,
+        `  ${v.note}`,
+        '',
+        formatTable(
+          [
+            { header: 'point', align: 'left' },
+            { header: 'range nmi', align: 'right' },
+            { header: 'payload kg', align: 'right' },
+            { header: 'TOW kg', align: 'right' },
+            { header: 'fuel on board kg', align: 'right' },
+            { header: 'block fuel kg', align: 'right' },
+            { header: 'reserve kg', align: 'right' },
+          ],
+          rows,
+        ),
+        '',
+        `  ${v.missions} missions flown.`,
+        '',
+        ...SAFETY_NOTICE_LINES,
+        '',
+      ].join('\n'),
+    );
+    return 0;
+  },
+};

@@ -1,0 +1,109 @@
+import { optimumAltitude } from '../../engine/analysis/optimumAltitude';
+import { specificRange } from '../../engine/analysis/specificRange';
+import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../engine/core/notice';
+import { formatTable } from '../format/textTable';
+import { optionalString, printJson, type CliIo, type Verb } from '../verb';
+import {
+  bothUnits,
+  EXIT_ANALYSIS_FAILED,
+  loadAnalysisProject,
+  machText,
+  positiveQuantityOption,
+  projectArgument,
+  quantityOption,
+} from './analysisArgs';
+
+const NMI_M = 1852;
+
+export const rangeSpeedsVerb: Verb = {
+  name: 'range-speeds',
+  summary: 'specific range over Mach, maximum-range and long-range Mach, and the optimum altitude',
+  help: `blockwise range-speeds — specific range, best cruise speeds and optimum altitude
+
+Usage: blockwise range-speeds <project.blockwise.json> --altitude <alt> --weight <mass>
+         [--inlet <name>] [--isa-dev <dT>] [--json]
+
+Options:
+  --altitude  pressure altitude, e.g. "35000 ft"
+  --weight    aircraft mass, e.g. "30000 lb"
+  --inlet     use this inlet design instead of the project's active one
+  --isa-dev   ISA temperature deviation (default: the project's)
+  --json      print the result as JSON (SI; specific range in m/kg)
+
+Specific range = TAS / fuel flow, with fuel flow at the part power where
+installed thrust equals drag (at most maxCruise). The long-range Mach is the
+faster Mach at 99 % of the best specific range (common practice). The
+optimum altitude maximises the best specific range at this weight; buffet
+margin and MMO cautions are raised there. Exit codes: 0 done; 1 project
+unreadable; 2 bad command line; 3 analysis failed.
+`,
+  options: {
+    altitude: { type: 'string' },
+    weight: { type: 'string' },
+    inlet: { type: 'string' },
+    'isa-dev': { type: 'string' },
+    json: { type: 'boolean' },
+  },
+  allowPositionals: true,
+  async run(values, positionals, io: CliIo): Promise<number> {
+    const file = projectArgument(positionals, 'range-speeds');
+    const altitude_m = quantityOption(values, 'altitude', 'length');
+    const mass_kg = positiveQuantityOption(values, 'weight', 'mass');
+    const loaded = await loadAnalysisProject(file, optionalString(values, 'inlet'), io);
+    if (typeof loaded === 'number') return loaded;
+    const { input } = loaded;
+    const isaDev_K = quantityOption(values, 'isa-dev', 'temperatureDelta', input.isaDev_K);
+    const models = { aero: input.aero, propulsion: input.propulsion };
+    const sr = specificRange(models, { altitude_m, mass_kg, isaDev_K });
+    if (!sr.ok) {
+      io.err(`blockwise range-speeds: ${sr.error.message}\n`);
+      return EXIT_ANALYSIS_FAILED;
+    }
+    const opt = optimumAltitude(models, { mass_kg, isaDev_K, mmo: input.airframe.mmo, cautionSettings: input.cautionSettings });
+    if (values.json === true) {
+      printJson(io, {
+        inlet: input.propulsion.inletName,
+        specificRange: sr.value,
+        optimumAltitude: opt.ok ? opt.value : null,
+        optimumAltitudeError: opt.ok ? null : opt.error,
+        notice: SAFETY_NOTICE,
+      });
+      return 0;
+    }
+    const v = sr.value;
+    const perKg = (x: number | null) => (x === null ? '-' : ((x / NMI_M) * 1000).toFixed(1));
+    const rows = v.curves.mach
+      .map((m, i) => [m.toFixed(3), ((v.curves.tas_m_s[i]! * 3600) / NMI_M).toFixed(0), v.curves.fuelFlow_kg_s[i] == null ? '-' : (v.curves.fuelFlow_kg_s[i]! * 3600).toFixed(0), perKg(v.curves.specificRange_m_kg[i]!)])
+      .filter((_, i) => i % 4 === 0 || i === v.curves.mach.length - 1);
+    const o = opt.ok ? opt.value : null;
+    io.out(
+      [
+        `Specific range — inlet "${input.propulsion.inletName}", ${bothUnits(altitude_m, 'altitude')}, ${bothUnits(mass_kg, 'mass')}, ISA${isaDev_K >= 0 ? '+' : ''}${isaDev_K.toFixed(1)} K`,
+        '',
+        `  maximum-range Mach      ${machText(v.maxRangeMach)}   (${perKg(v.maxSpecificRange_m_kg)} nmi per 1000 kg)`,
+        `  long-range Mach (99 %)  ${machText(v.longRangeMach)}${v.longRangeMach === null ? '   (beyond the level-flight band at maxCruise)' : ''}`,
+        `  level-flight band       M ${machText(v.feasibleMachRange[0])} to ${machText(v.feasibleMachRange[1])}`,
+        o === null
+          ? `  optimum altitude        - (${opt.ok ? '' : opt.error.message})`
+          : `  optimum altitude        ${bothUnits(o.altitude_m, 'altitude')} at M ${machText(o.maxRangeMach)} (${perKg(o.specificRange_m_kg)} nmi per 1000 kg; ${o.buffetLoadFactor.toFixed(2)} g to buffet)`,
+        '',
+        formatTable(
+          [
+            { header: 'Mach', align: 'right' },
+            { header: 'TAS kt', align: 'right' },
+            { header: 'fuel kg/h', align: 'right' },
+            { header: 'nmi/1000 kg', align: 'right' },
+          ],
+          rows,
+        ),
+        '',
+        ...([...v.cautions, ...(o?.cautions ?? [])].length > 0
+          ? ['Cautions:', ...[...v.cautions, ...(o?.cautions ?? [])].map((c) => `  [${c.severity}] ${c.id}: ${c.message}`), '']
+          : []),
+        ...SAFETY_NOTICE_LINES,
+        '',
+      ].join('\n'),
+    );
+    return 0;
+  },
+};

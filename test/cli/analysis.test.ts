@@ -1,0 +1,167 @@
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { runCli } from '../../cli/main';
+import { loadProjectFromDisk } from '../../cli/projectFiles';
+import { SAFETY_NOTICE_LINES } from '../../engine/core/notice';
+import { solveMission } from '../../engine/mission/solveMission';
+import { expectClose } from '../support/assertInDelta';
+
+const repoRoot = fileURLToPath(new URL('../..', import.meta.url));
+const DEMO = 'fixtures/demo/demo.blockwise.json';
+const FT = 0.3048; // NIST SP 811
+const LB = 0.45359237; // NIST SP 811
+// Slow missions on a shared machine: generous limits, not speed checks (speed lives in npm run bench).
+const LONG = 240_000;
+
+interface Run {
+  readonly code: number;
+  readonly out: string;
+  readonly err: string;
+}
+
+async function run(...argv: string[]): Promise<Run> {
+  let out = '';
+  let err = '';
+  const code = await runCli(argv, { out: (t) => (out += t), err: (t) => (err += t), cwd: repoRoot });
+  return { code, out, err };
+}
+
+type Json = Record<string, unknown>;
+
+// A lighter copy of the demo mission (800 nmi at constant cruise altitude) so the 16-mission comparison
+// and the trade factors stay light, and block fuel is smooth in the perturbations (no step-climb decisions).
+let dir = '';
+let shortProject = '';
+beforeAll(() => {
+  dir = mkdtempSync(join(tmpdir(), 'blockwise-analysis-'));
+  const demo = JSON.parse(readFileSync(join(repoRoot, DEMO), 'utf8')) as Json & { engine: { deck: Json }; mission: { solve: Json; legs: Json[] } };
+  if (demo.engine.deck.kind === 'file') demo.engine.deck.path = join(repoRoot, 'fixtures/demo', String(demo.engine.deck.path));
+  demo.mission.solve = { ...demo.mission.solve, range: '800 nmi' };
+  for (const leg of demo.mission.legs) if (leg.kind === 'cruise') leg.profile = { kind: 'constantAltitude' };
+  shortProject = join(dir, 'short.blockwise.json');
+  writeFileSync(shortProject, JSON.stringify(demo, null, 2));
+});
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+describe('blockwise crossover', () => {
+  it('crossover --json gives the crossover Machs with T = D there, within the stated tolerance', async () => {
+    const r = await run('crossover', DEMO, '--altitude', '33000 ft', '--weight', '31000 lb', '--json');
+    expect(r.code).toBe(0);
+    const j = JSON.parse(r.out) as Json & { curves: Json; tolerance: { relativeThrust: number } };
+    for (const key of ['lowMach', 'highMach', 'minThrustMach']) expect(key in j).toBe(true);
+    expect(j.status).toBe('ok');
+    expect(Array.isArray(j.curves.mach)).toBe(true);
+    const loaded = await loadProjectFromDisk(join(repoRoot, DEMO));
+    if (!loaded.ok) throw new Error('demo project must load');
+    const { aero, propulsion } = loaded.value.input;
+    const h = 33000 * FT;
+    const m = 31000 * LB;
+    for (const mach of [j.lowMach, j.highMach].filter((x): x is number => typeof x === 'number')) {
+      const t = propulsion.atRating({ altitude_m: h, mach, isaDev_K: 0 }, 'maxCruise').thrust_N;
+      const d = aero.drag({ altitude_m: h, mach, mass_kg: m, loadFactor: 1 }).drag_N;
+      expect(Math.abs(t - d) / d).toBeLessThan(j.tolerance.relativeThrust);
+    }
+    expect(typeof j.highMach).toBe('number');
+  }, LONG);
+
+  it('crossover text carries the notice; high altitude says above the ceiling', async () => {
+    const r = await run('crossover', DEMO, '--altitude', '51000 ft', '--weight', '36000 lb');
+    expect(r.code).toBe(0);
+    expect(r.out).toMatch(/above_ceiling/);
+    expect(r.out).toMatch(/above the ceiling/);
+    for (const line of SAFETY_NOTICE_LINES) expect(r.out).toContain(line);
+  }, LONG);
+
+  it('crossover refuses bad arguments with exit 2 and a message naming the option', async () => {
+    const missing = await run('crossover', DEMO, '--weight', '31000 lb');
+    expect(missing.code).toBe(2);
+    expect(missing.err).toMatch(/missing --altitude/);
+    const rating = await run('crossover', DEMO, '--altitude', '33000 ft', '--weight', '31000 lb', '--rating', 'max');
+    expect(rating.code).toBe(2);
+    expect(rating.err).toMatch(/--rating: "max" is not a rating/);
+    const unit = await run('crossover', DEMO, '--altitude', '33000 kg', '--weight', '31000 lb');
+    expect(unit.code).toBe(2);
+    expect(unit.err).toMatch(/--altitude/);
+    const inlet = await run('crossover', DEMO, '--altitude', '33000 ft', '--weight', '31000 lb', '--inlet', 'nope');
+    expect(inlet.code).toBe(2);
+    expect(inlet.err).toMatch(/--inlet: "nope" is not an inlet design/);
+    const noFile = await run('crossover', 'missing.blockwise.json', '--altitude', '33000 ft', '--weight', '31000 lb');
+    expect(noFile.code).toBe(1);
+    expect(noFile.err).toMatch(/no such file/);
+  }, LONG);
+});
+
+describe('blockwise envelope and range-speeds', () => {
+  it('envelope --json orders the ceilings and the climb rate at each is its residual rate', async () => {
+    const r = await run('envelope', DEMO, '--weight', '31000 lb', '--step', '5000 ft', '--json');
+    expect(r.code).toBe(0);
+    const j = JSON.parse(r.out) as { ceilings: { name: string; altitude_m: number; climbRate_m_s: number; climbRateAtCeiling_m_s: number }[] };
+    expect(j.ceilings.map((c) => c.name)).toEqual(['absolute', 'service', 'cruise']);
+    expect(j.ceilings[0]!.altitude_m).toBeGreaterThan(j.ceilings[1]!.altitude_m);
+    expect(j.ceilings[1]!.altitude_m).toBeGreaterThan(j.ceilings[2]!.altitude_m);
+    // 100 ft/min service, 300 ft/min cruise ceilings: common practice
+    expectClose(j.ceilings[2]!.climbRate_m_s, (300 * FT) / 60, { rel: 1e-12 }, '300 ft/min, common practice');
+    for (const c of j.ceilings) expectClose(c.climbRateAtCeiling_m_s, c.climbRate_m_s, { abs: 1e-3 }, 'ceiling definition');
+  }, LONG);
+
+  it('range-speeds --json puts the long-range Mach above the maximum-range Mach', async () => {
+    const r = await run('range-speeds', DEMO, '--altitude', '33000 ft', '--weight', '31000 lb', '--json');
+    expect(r.code).toBe(0);
+    const j = JSON.parse(r.out) as { specificRange: { maxRangeMach: number; longRangeMach: number | null; maxSpecificRange_m_kg: number; longRangeSpecificRange_m_kg: number } };
+    expect(j.specificRange.longRangeMach).not.toBeNull();
+    expect(j.specificRange.longRangeMach!).toBeGreaterThan(j.specificRange.maxRangeMach);
+    // 99 % of the best specific range (common practice)
+    expectClose(j.specificRange.longRangeSpecificRange_m_kg, 0.99 * j.specificRange.maxSpecificRange_m_kg, { rel: 1e-12 }, '99 % rule, common practice');
+  }, LONG);
+});
+
+describe('blockwise payload-range, compare and trade', () => {
+  it('payload-range --json corners agree with missions flown directly', async () => {
+    const r = await run('payload-range', shortProject, '--between', '0', '--json');
+    expect(r.code).toBe(0);
+    const j = JSON.parse(r.out) as { maxPayload: { payload_kg: number; range_m: number; blockFuel_kg: number }; ferry: { payload_kg: number } };
+    expect(j.ferry.payload_kg).toBe(0);
+    const loaded = await loadProjectFromDisk(shortProject);
+    if (!loaded.ok) throw new Error('short project must load');
+    const direct = solveMission({ ...loaded.value.input, solve: { kind: 'payloadRange', payload_kg: j.maxPayload.payload_kg, range_m: j.maxPayload.range_m } });
+    expect(direct.status).toBe('ok');
+    expectClose(direct.blockFuel_kg, j.maxPayload.blockFuel_kg, { rel: 2e-3 }, 'same mission flown in payload-and-range mode');
+  }, LONG);
+
+  it('compare --json breakdown adds up to the block-fuel difference and the designs match fly', async () => {
+    const r = await run('compare', shortProject, '--json');
+    expect(r.code).toBe(0);
+    const j = JSON.parse(r.out) as {
+      designs: { name: string; blockFuel_kg: number }[];
+      difference: { blockFuel_kg: number };
+      breakdown: { method: string; parts: { factor: string; blockFuel_kg: number }[] };
+    };
+    expect(j.designs).toHaveLength(2);
+    expect(j.breakdown.method).toBe('shapley');
+    const sum = j.breakdown.parts.reduce((s, p) => s + p.blockFuel_kg, 0);
+    expectClose(sum, j.difference.blockFuel_kg, { abs: 1e-9 }, 'Shapley efficiency (Shapley 1953)');
+    const flyA = await run('fly', shortProject, '--inlet', j.designs[0]!.name, '--json');
+    expectClose((JSON.parse(flyA.out) as { blockFuel_kg: number }).blockFuel_kg, j.designs[0]!.blockFuel_kg, { abs: 1e-9 }, 'blockwise fly');
+    const bad = await run('compare', shortProject, '--inlets', 'only-one');
+    expect(bad.code).toBe(2);
+    expect(bad.err).toMatch(/--inlets: expected two names/);
+  }, LONG);
+
+  it('trade --json gives the four factors with both step sizes', async () => {
+    const r = await run('trade', shortProject, '--json');
+    expect(r.code).toBe(0);
+    const j = JSON.parse(r.out) as { factors: { name: string; blockFuelPerUnit_kg: number | null; blockFuelPerUnitHalfStep_kg: number | null }[] };
+    expect(j.factors.map((f) => f.name)).toEqual(['recovery', 'dragCount', 'tsfc', 'oew']);
+    const oew = j.factors.find((f) => f.name === 'oew')!;
+    expect(oew.blockFuelPerUnit_kg!).toBeGreaterThan(0);
+    expect(j.factors.find((f) => f.name === 'recovery')!.blockFuelPerUnit_kg!).toBeLessThan(0);
+    expect(j.factors.find((f) => f.name === 'dragCount')!.blockFuelPerUnit_kg!).toBeGreaterThan(0);
+    // Steps of 1 and 1/2 unit agree (the stated 5 % tolerance) on a smooth mission.
+    for (const f of j.factors) expect((f as { converged: boolean }).converged).toBe(true);
+    const text = await run('trade', shortProject);
+    for (const line of SAFETY_NOTICE_LINES) expect(text.out).toContain(line);
+  }, LONG);
+});
