@@ -1,9 +1,13 @@
 import type { Verb } from '../verb';
 import { airVerb } from './air';
+import { compareVerb } from './compare';
 import { crossoverVerb } from './crossover';
 import { deckAtVerb, deckCheckVerb } from './deck';
 import { envelopeVerb } from './envelope';
 import { flyVerb } from './fly';
+import { payloadRangeVerb } from './payloadRange';
+import { rangeSpeedsVerb } from './rangeSpeeds';
+import { tradeVerb } from './trade';
 
 /**
  * Every verb, in the order `blockwise --help` lists them. A new verb is a
@@ -16,4 +20,8 @@ export const verbs: readonly Verb[] = [
   deckAtVerb,
   crossoverVerb,
   envelopeVerb,
+  rangeSpeedsVerb,
+  payloadRangeVerb,
+  compareVerb,
+  tradeVerb,
 ];
