@@ -5,6 +5,7 @@ import { crossoverVerb } from './crossover';
 import { deckAtVerb, deckCheckVerb } from './deck';
 import { envelopeVerb } from './envelope';
 import { flyVerb } from './fly';
+import { inletVerb } from './inlet';
 import { payloadRangeVerb } from './payloadRange';
 import { rangeSpeedsVerb } from './rangeSpeeds';
 import { tradeVerb } from './trade';
@@ -18,6 +19,7 @@ export const verbs: readonly Verb[] = [
   airVerb,
   deckCheckVerb,
   deckAtVerb,
+  inletVerb,
   crossoverVerb,
   envelopeVerb,
   rangeSpeedsVerb,
