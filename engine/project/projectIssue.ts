@@ -50,6 +50,20 @@ export function makeIssue(path: string, value: string, expected: string, reason:
   return { path, value, expected, message: `${path}: ${reason}` };
 }
 
+const TYPE_NAMES: Readonly<Record<string, string>> = {
+  int: 'a whole number',
+  number: 'a number',
+  string: 'a text string',
+  boolean: 'true or false',
+  object: 'an object',
+  array: 'a list (JSON array)',
+  null: 'null',
+};
+
+function typeName(expected: string): string {
+  return TYPE_NAMES[expected] ?? `a ${expected}`;
+}
+
 function expectedFromParams(issue: z.core.$ZodIssue): string | undefined {
   const params = (issue as { params?: { expected?: unknown } }).params;
   return typeof params?.expected === 'string' ? params.expected : undefined;
@@ -59,7 +73,7 @@ function describeBranch(issue: z.core.$ZodIssue): string {
   const fromParams = expectedFromParams(issue);
   if (fromParams) return fromParams;
   if (issue.code === 'invalid_value') return issue.values.map((v) => JSON.stringify(v)).join(' or ');
-  if (issue.code === 'invalid_type') return `a ${issue.expected}`;
+  if (issue.code === 'invalid_type') return typeName(issue.expected);
   return issue.message;
 }
 
@@ -77,7 +91,7 @@ export function fromZodIssues(issues: readonly z.core.$ZodIssue[], doc: unknown)
         break;
       }
       case 'invalid_type': {
-        const expected = `a ${issue.expected}`;
+        const expected = typeName(issue.expected);
         const reason = raw === undefined ? `missing; expected ${expected}` : `${value} is not ${expected}`;
         out.push(makeIssue(path, value, expected, reason));
         break;
