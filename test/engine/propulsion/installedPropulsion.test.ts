@@ -302,3 +302,49 @@ describe('deckCurve', () => {
     }
   });
 });
+
+describe('edge cases', () => {
+  it('at Mach 0 (static) nothing spills and the mass-flow ratio is not defined', () => {
+    const m = model(LONG_PITOT);
+    const p = m.atRating({ altitude_m: 0, mach: 0, isaDev_K: 0 }, 'takeoff');
+    expect(p.perEngine.massFlowRatio).toBeNull();
+    expect(p.perEngine.spillageDrag_N).toBe(0);
+    expect(p.perEngine.recovery).toBeLessThan(1);
+    expect(p.perEngine.throatMach!).toBeGreaterThan(0);
+    const half = m.forThrust({ altitude_m: 0, mach: 0, isaDev_K: 0 }, 0.5 * p.thrust_N, 'takeoff');
+    expectClose(half.thrust_N, 0.5 * p.thrust_N, { rel: FOR_THRUST_TOLERANCE }, 'static round trip');
+  });
+
+  it('a deck that refuses the condition gives zero thrust with a warning, not NaN', () => {
+    const strict: EngineDeck = { ...deck, policy: { ...deck.policy, altitude: 'refuse' } };
+    const m = makeInstalledPropulsion({ deck: strict, engineCount: 2, inlet: LONG_PITOT, installation: NO_INSTALL, cautionSettings: DEFAULT_CAUTION_SETTINGS });
+    const p = m.atRating({ altitude_m: 60000 * FT, mach: 0.8, isaDev_K: 0 }, 'maxCruise');
+    expect(p.thrust_N).toBe(0);
+    expect(p.fuelFlow_kg_s).toBe(0);
+    expect(p.tsfc_kg_N_s).toBeNull();
+    const c = p.cautions.find((x) => x.id === 'deck_lookup_failed')!;
+    expect(c.severity).toBe('warning');
+    expect(c.message).toContain('outside_deck');
+  });
+
+  it('above Mach 1 the reference and the geometry inlet both carry the MIL-E-5008B shock recovery', () => {
+    // The deck's reference is MIL-E-5008B; the geometry inlet adds its diffuser loss on top (docs/installation.md).
+    const p = model(LONG_PITOT, { cautionSettings: { ...DEFAULT_CAUTION_SETTINGS, cautionOnDeckExtrapolation: false } }).atRating({ altitude_m: 40000 * FT, mach: 1.2, isaDev_K: 0 }, 'maxCruise');
+    expect(p.perEngine.referenceRecovery).toBe(milE5008bRecovery(1.2));
+    expect(p.perEngine.recovery).toBeLessThan(milE5008bRecovery(1.2));
+    expect(p.perEngine.recovery).toBeGreaterThan(milE5008bRecovery(1.2) * 0.98);
+  });
+
+  it('an inlet better than a constant deck reference gains thrust (Raymer, negative loss)', () => {
+    const constantRef: EngineDeck = { ...deck, referenceRecovery: { kind: 'constant', value: 0.98 } };
+    const better: InletDesign = { ...IDEAL, source: { kind: 'recoveryTable', mach: [0, 1], recovery: [0.99, 0.99], captureArea_m2: 1e-6 } };
+    const p = makeInstalledPropulsion({ deck: constantRef, engineCount: 2, inlet: better, installation: NO_INSTALL, cautionSettings: DEFAULT_CAUTION_SETTINGS }).atRating(CRUISE, 'maxCruise');
+    // 1.35 x (0.98 - 0.99) = -1.35 %: a 1.35 % gain.
+    expectClose(p.perEngine.correctedThrust_N, p.perEngine.uninstalledThrust_N * 1.0135, { rel: 1e-13 }, 'Raymer C_ram, gain');
+  });
+
+  it('off-ISA queries carry the deck temperature approximation caution', () => {
+    const p = model(TABLE_INLET).atRating({ ...CRUISE, isaDev_K: 15 }, 'maxCruise');
+    expect(ids(p)).toContain('deck_temperature_approximation');
+  });
+});
