@@ -153,14 +153,14 @@ describe('blockwise payload-range, compare and trade', () => {
   it('trade --json gives the four factors with both step sizes', async () => {
     const r = await run('trade', shortProject, '--json');
     expect(r.code).toBe(0);
-    const j = JSON.parse(r.out) as { factors: { name: string; blockFuelPerUnit_kg: number | null; blockFuelPerUnitHalfStep_kg: number | null }[] };
+    const j = JSON.parse(r.out) as { factors: { name: string; blockFuelPerUnit_kg: number | null; blockFuelPerUnitHalfStep_kg: number | null; converged: boolean }[] };
     expect(j.factors.map((f) => f.name)).toEqual(['recovery', 'dragCount', 'tsfc', 'oew']);
     const oew = j.factors.find((f) => f.name === 'oew')!;
     expect(oew.blockFuelPerUnit_kg!).toBeGreaterThan(0);
     expect(j.factors.find((f) => f.name === 'recovery')!.blockFuelPerUnit_kg!).toBeLessThan(0);
     expect(j.factors.find((f) => f.name === 'dragCount')!.blockFuelPerUnit_kg!).toBeGreaterThan(0);
     // Steps of 1 and 1/2 unit agree (the stated 5 % tolerance) on a smooth mission.
-    for (const f of j.factors) expect((f as { converged: boolean }).converged).toBe(true);
+    for (const f of j.factors) expect(f.converged).toBe(true);
     const text = await run('trade', shortProject);
     for (const line of SAFETY_NOTICE_LINES) expect(text.out).toContain(line);
   }, LONG);

@@ -1,0 +1,52 @@
+import { readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { thrustDragCrossover } from '../../../engine/analysis/crossover';
+import { flightEnvelope } from '../../../engine/analysis/envelope';
+import { compareInlets } from '../../../engine/analysis/inletComparison';
+import { inletFactorBuilder } from '../../../engine/analysis/inletFactorBuilder';
+import { payloadRangeDiagram } from '../../../engine/analysis/payloadRange';
+import { specificRange } from '../../../engine/analysis/specificRange';
+import { tradeFactors } from '../../../engine/analysis/tradeFactors';
+import { expectOk } from '../../../engine/core/result';
+import { buildMissionInput, projectInlet } from '../../../engine/project/buildMissionInput';
+import { parseProject } from '../../../engine/project/parseProject';
+import { projectDeck } from '../../../engine/project/projectDeck';
+import { cautionSettingsOf, installationOf } from '../../../engine/project/projectSpecs';
+import { parseDeckCsv } from '../../../engine/propulsion/deckCsv';
+import type { BenchSection } from '../benchTypes';
+
+// The demo project (invented aircraft and engine); inputs cycle so each call differs.
+const root = fileURLToPath(new URL('../../../fixtures/demo/', import.meta.url));
+const project = expectOk(parseProject(readFileSync(`${root}demo.blockwise.json`, 'utf8'), 'demo.blockwise.json'), 'demo project');
+const deck = expectOk(parseDeckCsv(readFileSync(`${root}demo-engine.deck.csv`, 'utf8'), 'demo-engine.deck.csv'), 'demo deck');
+const input = expectOk(buildMissionInput(project, { deck }), 'demo input');
+const models = { aero: input.aero, propulsion: input.propulsion };
+const [nameA, nameB] = [project.inlets[0]!.name, project.inlets[1]!.name];
+const build = inletFactorBuilder({
+  inputA: expectOk(buildMissionInput(project, { deck }, { inletName: nameA }), 'A'),
+  inputB: expectOk(buildMissionInput(project, { deck }, { inletName: nameB }), 'B'),
+  inletA: expectOk(projectInlet(project, nameA), 'inlet A'),
+  inletB: expectOk(projectInlet(project, nameB), 'inlet B'),
+  deck: expectOk(projectDeck(project, { deck }), 'deck'),
+  engineCount: project.engine.count,
+  installation: installationOf(project),
+  cautionSettings: cautionSettingsOf(project),
+});
+
+let k = 0;
+function next(): number {
+  k = (k + 1) & 7;
+  return k;
+}
+
+export const section: BenchSection = {
+  title: 'analyses (demo project)',
+  cases: [
+    { name: 'thrustDragCrossover (81 Machs)', run: () => thrustDragCrossover(models, { altitude_m: 9000 + 100 * next(), mass_kg: 14000, rating: 'maxCruise', isaDev_K: 0 }) },
+    { name: 'specificRange (61 Machs)', run: () => specificRange(models, { altitude_m: 9000 + 100 * next(), mass_kg: 14000, isaDev_K: 0 }) },
+    { name: 'flightEnvelope (0-15 km by 1 km, 3 ceilings)', run: () => flightEnvelope(models, { mass_kg: 14000 + 100 * next(), rating: 'maxClimb', isaDev_K: 0, altitudeStep_m: 1000 }) },
+    { name: 'payloadRangeDiagram (9 missions)', run: () => payloadRangeDiagram(input, {}) },
+    { name: 'tradeFactors (17 missions)', run: () => tradeFactors(input, {}) },
+    { name: 'compareInlets (16 missions + crossovers, ceilings)', run: () => compareInlets(build, { nameA, nameB }) },
+  ],
+};
