@@ -45,9 +45,9 @@ describe('additiveDrag', () => {
   });
 
   it('additiveDrag at low Mach approaches the incompressible closed form', () => {
-    // Incompressible 1-D momentum (Seddon & Goldsmith, Intake Aerodynamics, ch. 3 form):
-    // C_D,add = 2 mfr (1 - mfr) + (1 - mfr^2) ... written as D/(q0 Ac) = (1 - mfr)^2 with V1 = mfr V0:
-    // p1 - p0 = q0 (1 - mfr^2), mdot (V1 - V0) = -2 q0 Ac mfr (1 - mfr)  =>  C = (1 - mfr)^2.
+    // Incompressible 1-D momentum (the low-speed limit of the same balance, as in Seddon & Goldsmith,
+    // Intake Aerodynamics): continuity gives V1 = mfr V0, Bernoulli p1 - p0 = q0 (1 - mfr^2), and
+    // mdot (V1 - V0) = -2 q0 Ac mfr (1 - mfr), so D/(q0 Ac) = (1 - mfr^2) - 2 mfr (1 - mfr) = (1 - mfr)^2.
     const mfr = 0.6;
     expectClose(additiveDrag(0.01, 101325, mfr, 1).coefficient, (1 - mfr) ** 2, { rel: 1e-3 }, 'incompressible closed form');
   });
