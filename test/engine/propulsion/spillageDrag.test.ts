@@ -44,6 +44,13 @@ describe('additiveDrag', () => {
     expectClose(c, (Math.pow(1.072, 3.5) - 1) / 0.252, { rel: 1e-6 }, 'stagnation limit, NACA 1135 pitot relation');
   });
 
+  it('additiveDrag of the open-nose inlet at mass-flow ratio 0 supersonic is the Rayleigh pitot limit', () => {
+    // Behind the normal shock the capture plane stagnates: D/(p0 Ac) -> p02/p0 - 1 (Sibulkin, NACA Report 1187,
+    // open-nose inlet). Rayleigh pitot ratio p02/p1 = 5.640 at M 2 (NACA Report 1135 normal-shock table, from memory):
+    // C_D,add = (5.640 - 1) / (0.7 x 4) = 1.657.
+    expectClose(additiveDrag(2, 20000, 1e-9, 1).coefficient, (5.64 - 1) / 2.8, { rel: 2e-4 }, 'Rayleigh pitot, NACA 1135');
+  });
+
   it('additiveDrag at low Mach approaches the incompressible closed form', () => {
     // Incompressible 1-D momentum (the low-speed limit of the same balance, as in Seddon & Goldsmith,
     // Intake Aerodynamics): continuity gives V1 = mfr V0, Bernoulli p1 - p0 = q0 (1 - mfr^2), and
