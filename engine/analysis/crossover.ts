@@ -69,7 +69,11 @@ export interface CrossoverResult {
   readonly cautions: readonly Caution[];
 }
 
-/** Mach tolerance of the crossover roots and extrema (-). */
+/**
+ * Mach tolerance of the crossover roots (-). The extrema (least thrust, most
+ * excess thrust, best climb) use it as the golden-section stopping width, but
+ * a flat extremum is located only to about sqrt(machine epsilon), ~1e-8.
+ */
 export const CROSSOVER_MACH_TOL = 1e-10;
 /** Stated bound on |T - D| / D at a reported crossover (-). */
 export const CROSSOVER_RELATIVE_THRUST_TOL = 1e-6;

@@ -53,7 +53,11 @@ export interface SpecificRangeResult {
   readonly cautions: readonly Caution[];
 }
 
-/** Mach tolerance of the best-range and long-range Machs (-). */
+/**
+ * Search tolerance of the best-range and long-range Machs (-). The long-range
+ * Mach (a root) meets it; the best-range Mach (a flat maximum) is located to
+ * about sqrt(machine epsilon), ~1e-8.
+ */
 export const SPECIFIC_RANGE_MACH_TOL = 1e-9;
 
 /**
