@@ -442,6 +442,7 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
           return scratch.correctedThrust - scratch.spillage;
         };
     const hiThrust = installedAt(ceiling.power);
+    const hiDeck = curve ? fastScratch.deckThrust : scratch.deckThrust;
     if (hiThrust <= perEngineRequired) return finish(ceiling.power, hiThrust === perEngineRequired ? 'within' : 'above_rating');
     const loThrust = installedAt(idle.power);
     if (loThrust >= perEngineRequired) return finish(idle.power, loThrust === perEngineRequired ? 'within' : 'below_idle');
@@ -451,7 +452,6 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
     let lo = idle.power;
     let hi = ceiling.power;
     if (!curve) {
-      const hiDeck = scratch.deckThrust;
       const ratio = hiThrust > 0 ? hiDeck / hiThrust : 1;
       const guess = access.powerForThrust(condition, perEngineRequired * ratio, ceiling.power);
       if (guess !== null && guess > lo && guess < hi) {
