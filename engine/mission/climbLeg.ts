@@ -51,10 +51,10 @@ export function makeClimbSegment(
     return { derivative: d, sample: makeSample(at, th.thrust_N, th.thrust_N, th.fuelFlow_kg_s, rate, th) };
   };
   const events: SegmentEvent[] = [
-    { stop: 'altitude_reached', g: (y) => y[S_ALT] - toAltitude_m },
+    { stop: 'altitude_reached', stateOnly: true, g: (y) => y[S_ALT] - toAltitude_m },
     { stop: 'climb_stalled', g: (_y, s) => CLIMB_STALL_RATE_M_S - s.climbRate_m_s },
   ];
-  if (!ctx.options.allowNegativeFuel) events.push({ stop: 'fuel_exhausted', g: (y) => fuelExhaustedG(ctx.zeroFuelMass_kg, y[S_MASS]) });
+  if (!ctx.options.allowNegativeFuel) events.push({ stop: 'fuel_exhausted', stateOnly: true, g: (y) => fuelExhaustedG(ctx.zeroFuelMass_kg, y[S_MASS]) });
   return { step_s: BASE_STEP_S.climb * ctx.options.stepScale, evaluate, events };
 }
 

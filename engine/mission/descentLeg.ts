@@ -72,10 +72,10 @@ function makeDescentSegment(
     return { derivative: d, sample: makeSample(at, thrustAvailable, thrust, engine.fuelFlow_kg_s, rate, engine) };
   };
   const events: SegmentEvent[] = [
-    { stop: 'altitude_reached', g: (y) => toAltitude_m - y[S_ALT] },
+    { stop: 'altitude_reached', stateOnly: true, g: (y) => toAltitude_m - y[S_ALT] },
     { stop: 'descent_stalled', g: (_y, s) => s.climbRate_m_s + DESCENT_STALL_RATE_M_S },
   ];
-  if (!ctx.options.allowNegativeFuel) events.push({ stop: 'fuel_exhausted', g: (y) => fuelExhaustedG(ctx.zeroFuelMass_kg, y[S_MASS]) });
+  if (!ctx.options.allowNegativeFuel) events.push({ stop: 'fuel_exhausted', stateOnly: true, g: (y) => fuelExhaustedG(ctx.zeroFuelMass_kg, y[S_MASS]) });
   return { step_s: BASE_STEP_S.descent * ctx.options.stepScale, evaluate, events };
 }
 

@@ -54,20 +54,79 @@ function accept(segment: Segment, y: StateVector): Evaluation {
   return ev;
 }
 
-/** Step length tau in (0, h] where event `index` first reaches zero; Illinois method on tau. */
-function locateEvent(segment: Segment, y: StateVector, k1: Float64Array, h: number, index: number, gStart: number): number {
+/** Cubic Hermite interpolant of the state at fraction theta of a step (dense output of order 3; Hairer, Norsett & Wanner, II.6). */
+function hermite(y0: StateVector, f0: Float64Array, y1: StateVector, f1: Float64Array, h: number, theta: number): StateVector {
+  const t2 = theta * theta;
+  const t3 = t2 * theta;
+  const h00 = 2 * t3 - 3 * t2 + 1;
+  const h10 = t3 - 2 * t2 + theta;
+  const h01 = -2 * t3 + 3 * t2;
+  const h11 = t3 - t2;
+  const out = new Float64Array(STATE_SIZE);
+  for (let i = 0; i < STATE_SIZE; i++) out[i] = h00 * y0[i] + h10 * h * f0[i] + h01 * y1[i] + h11 * h * f1[i];
+  return out;
+}
+
+/**
+ * Step length tau in (0, h] where event `index` first reaches zero, by the
+ * Illinois method: on the step's Hermite interpolant for state-only events
+ * (no extra evaluations), else on RK4 steps of length tau from the step start.
+ */
+function locateEvent(
+  segment: Segment,
+  y: StateVector,
+  k1: Float64Array,
+  h: number,
+  index: number,
+  gStart: number,
+  end: Evaluation & { readonly state: StateVector },
+): number {
   const event = segment.events[index];
-  let a = 0;
-  let ga = gStart;
+  const onStep = (tau: number) => {
+    const yt = rk4Step(segment, y, k1, tau);
+    return event.g(yt, segment.evaluate(yt).sample);
+  };
+  if (event.stateOnly) {
+    const guess = illinois((tau) => event.g(hermite(y, k1, end.state, end.derivative, h, tau / h), end.sample), gStart, h, 0);
+    return refineOnStep(onStep, guess, gStart, event.g(end.state, end.sample), h);
+  }
+  return illinois(onStep, gStart, h, 0);
+}
+
+/**
+ * Secant refinement of an interpolated event time on the true RK4 step (the
+ * interpolant is only third order and the model may change at the event, e.g.
+ * at the tropopause); falls back to the Illinois method when it strays.
+ */
+function refineOnStep(onStep: (tau: number) => number, guess: number, gStart: number, gEnd: number, h: number): number {
+  let x0 = guess;
+  let g0 = onStep(x0);
+  let x1 = h;
+  let g1 = gEnd;
+  for (let i = 0; i < 6; i++) {
+    if (g0 === 0 || Math.abs(x1 - x0) <= 1e-10 * h) return x0;
+    const next = x0 - (g0 * (x0 - x1)) / (g0 - g1);
+    if (!(next > 0 && next <= h) || !Number.isFinite(next)) break;
+    x1 = x0;
+    g1 = g0;
+    x0 = next;
+    g0 = onStep(x0);
+  }
+  if (Math.abs(x1 - x0) <= 1e-10 * h) return x0;
+  return illinois(onStep, gStart, h, 0);
+}
+
+/** Illinois method for the first zero of `at` on (lo, h] with at(lo) = gLo < 0; returns the bracket end where g >= 0. */
+function illinois(at: (tau: number) => number, gLo: number, h: number, lo: number): number {
+  let a = lo;
+  let ga = gLo;
   let b = h;
-  const yb = rk4Step(segment, y, k1, b);
-  let gb = event.g(yb, segment.evaluate(yb).sample);
+  let gb = at(b);
   let side = 0;
   for (let iter = 0; iter < 80 && b - a > 1e-10 * h; iter++) {
     let c = b - (gb * (b - a)) / (gb - ga);
     if (!(c > a && c < b)) c = 0.5 * (a + b);
-    const yc = rk4Step(segment, y, k1, c);
-    const gc = event.g(yc, segment.evaluate(yc).sample);
+    const gc = at(c);
     if (!Number.isFinite(gc)) break;
     if (gc >= 0) {
       b = c;
@@ -114,7 +173,7 @@ export function integrateSegment(segment: Segment, start: StateVector, sink: Sam
     for (let i = 0; i < segment.events.length; i++) {
       const g = segment.events[i].g(next, nextEv.sample);
       if (g >= 0 || !Number.isFinite(g)) {
-        const tau = locateEvent(segment, current, ev.derivative, h, i, gNow[i]);
+        const tau = locateEvent(segment, current, ev.derivative, h, i, gNow[i], { ...nextEv, state: next });
         if (tau < firstTau) {
           firstTau = tau;
           firstIndex = i;

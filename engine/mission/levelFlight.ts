@@ -45,13 +45,13 @@ export function makeLevelSegment(ctx: MissionContext, target: LegTarget, spec: L
   const events: SegmentEvent[] = [{ stop: 'thrust_below_drag', g: (_y, s) => s.drag_N - s.thrustAvailable_N }];
   if (spec.endAirDistance_m !== null) {
     const end = spec.endAirDistance_m;
-    events.push({ stop: 'distance_reached', g: (y) => y[S_AIR] - end });
+    events.push({ stop: 'distance_reached', stateOnly: true, g: (y) => y[S_AIR] - end });
   }
   if (spec.endTime_s !== null) {
     const end = spec.endTime_s;
-    events.push({ stop: 'time_reached', g: (y) => y[S_TIME] - end });
+    events.push({ stop: 'time_reached', stateOnly: true, g: (y) => y[S_TIME] - end });
   }
-  if (!ctx.options.allowNegativeFuel) events.push({ stop: 'fuel_exhausted', g: (y) => fuelExhaustedG(ctx.zeroFuelMass_kg, y[S_MASS]) });
+  if (!ctx.options.allowNegativeFuel) events.push({ stop: 'fuel_exhausted', stateOnly: true, g: (y) => fuelExhaustedG(ctx.zeroFuelMass_kg, y[S_MASS]) });
   events.push(...(spec.extraEvents ?? []));
   return { step_s: spec.step_s, evaluate, events, algebraicAltitude: spec.algebraicAltitude };
 }

@@ -41,13 +41,13 @@ export function flyLevelSpeedChange(
     return { derivative: d, sample: makeSample(at, th.thrust_N, th.thrust_N, th.fuelFlow_kg_s, 0, th) };
   };
   const events: SegmentEvent[] = [
-    { stop: 'speed_reached', g: (y) => direction * (y[S_TAS] - vTarget) },
+    { stop: 'speed_reached', stateOnly: true, g: (y) => direction * (y[S_TAS] - vTarget) },
     {
       stop: 'climb_stalled',
       g: (y, s) => MIN_SPEED_CHANGE_M_S2 - (direction * (s.thrustUsed_N - s.drag_N)) / Math.max(y[S_MASS], 1),
     },
   ];
-  if (!ctx.options.allowNegativeFuel) events.push({ stop: 'fuel_exhausted', g: (y) => fuelExhaustedG(ctx.zeroFuelMass_kg, y[S_MASS]) });
+  if (!ctx.options.allowNegativeFuel) events.push({ stop: 'fuel_exhausted', stateOnly: true, g: (y) => fuelExhaustedG(ctx.zeroFuelMass_kg, y[S_MASS]) });
   const startState = Float64Array.from(start);
   startState[S_TAS] = start[S_TAS] > 0 ? start[S_TAS] : vTarget;
   if (Math.abs(startState[S_TAS] - vTarget) < 1e-9) return legOk(startState, null);

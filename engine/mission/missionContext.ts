@@ -43,9 +43,9 @@ export function legEnvironment(input: MissionInput, leg: Leg | null): LegEnviron
 
 /** Base integration steps (s) per kind of segment, before `stepScale`; shown converged in test/engine/mission/solveMission.test.ts. */
 export const BASE_STEP_S = {
-  climb: 20,
-  speedChange: 5,
-  cruise: 300,
-  descent: 20,
-  hold: 120,
+  climb: 60,
+  speedChange: 10,
+  cruise: 900,
+  descent: 60,
+  hold: 600,
 } as const;

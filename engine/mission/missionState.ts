@@ -61,6 +61,8 @@ export type SegmentStop =
 /** A terminal event: the segment stops where g(state) crosses zero from below. */
 export interface SegmentEvent {
   readonly stop: SegmentStop;
+  /** True when g reads only the state (not the sample): the event is then located on the step's cubic Hermite interpolant. */
+  readonly stateOnly?: boolean;
   g(state: StateVector, sample: FlightSample): number;
 }
 
