@@ -5,10 +5,12 @@
  * Speed is measured here, never in unit tests.
  */
 import { readdirSync } from 'node:fs';
+import { cpus } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { formatTable, runCase } from './benchRunner';
 import type { BenchResult, BenchSection } from './benchTypes';
+import { formatSideBySide, runSideBySide } from './sideBySide';
 
 const here = dirname(fileURLToPath(import.meta.url));
 const sectionDir = join(here, 'sections');
@@ -33,4 +35,9 @@ for (const file of files) {
   }
 }
 
-process.stdout.write(`Node ${process.version}, ${results.length} cases\n\n${formatTable(results)}\n`);
+process.stdout.write(`Node ${process.version}, ${cpus().length} cores, ${results.length} cases\n\n${formatTable(results)}\n`);
+
+// Printed last: Blockwise against the scripted Python peer (test/bench/sideBySide.ts).
+if (filters.length === 0 || filters.some((f) => 'side by side python peer'.includes(f))) {
+  process.stdout.write(`\n${formatSideBySide(runSideBySide())}\n`);
+}
