@@ -106,3 +106,50 @@ describe('thrustDragCrossover', () => {
     expect(r3.ok ? 'ok' : r3.error.code).toBe('atmosphere_out_of_range');
   });
 });
+
+describe('thrustDragCrossover edge cases', () => {
+  it('thrustDragCrossover is above_ceiling with null extremes when the wing cannot lift the mass in the range', () => {
+    const r = expectOk(thrustDragCrossover(lapsed, { altitude_m: 15000, mass_kg: 300000, rating: 'maxCruise', isaDev_K: 0 }), 'crossover');
+    expect(r.status).toBe('above_ceiling');
+    expect(r.stallMach).toBeNull();
+    expect(r.maxExcessThrustMach).toBeNull();
+    expect(r.curves.mach).toHaveLength(0);
+    expect(r.message).toMatch(/CLmax/);
+  });
+
+  it('thrustDragCrossover refuses too few samples', () => {
+    const r = thrustDragCrossover(lapsed, { altitude_m: 9000, mass_kg: 60000, rating: 'maxCruise', isaDev_K: 0, samples: 3 });
+    expect(r.ok ? '' : r.error.message).toMatch(/samples 3/);
+  });
+});
+
+describe('thrustDragCrossover on the demo deck', () => {
+  it('thrustDragCrossover on the demo deck: T = D at the crossings; the band narrows with altitude and weight', async () => {
+    const { readFileSync } = await import('node:fs');
+    const { fileURLToPath } = await import('node:url');
+    const { parseProject } = await import('../../../engine/project/parseProject');
+    const { parseDeckCsv } = await import('../../../engine/propulsion/deckCsv');
+    const { buildMissionInput } = await import('../../../engine/project/buildMissionInput');
+    const root = fileURLToPath(new URL('../../../fixtures/demo/', import.meta.url));
+    const project = expectOk(parseProject(readFileSync(`${root}demo.blockwise.json`, 'utf8'), 'demo'), 'demo');
+    const deck = expectOk(parseDeckCsv(readFileSync(`${root}demo-engine.deck.csv`, 'utf8'), 'deck'), 'deck');
+    const input = expectOk(buildMissionInput(project, { deck }), 'input');
+    const models = { aero: input.aero, propulsion: input.propulsion };
+    const at = (altitude_m: number, mass_kg: number) =>
+      expectOk(thrustDragCrossover(models, { altitude_m, mass_kg, rating: 'maxCruise', isaDev_K: 0 }), 'crossover');
+    const width = (r: ReturnType<typeof at>) => (r.highMach ?? r.machRange[1]) - (r.lowMach ?? r.machRange[0]);
+    const bands = [10000, 11000, 12000].map((h) => at(h, 14000));
+    for (const b of bands) expect(b.status).toBe('ok');
+    expect(width(bands[1]!)).toBeLessThan(width(bands[0]!));
+    expect(width(bands[2]!)).toBeLessThan(width(bands[1]!));
+    expect(width(at(11000, 15500))).toBeLessThan(width(bands[1]!));
+    for (const b of bands) {
+      for (const m of [b.lowMach, b.highMach].filter((x): x is number => x !== null)) {
+        const t = models.propulsion.atRating({ altitude_m: b.altitude_m, mach: m, isaDev_K: 0 }, 'maxCruise').thrust_N;
+        const d = models.aero.drag({ altitude_m: b.altitude_m, mach: m, mass_kg: 14000, loadFactor: 1 }).drag_N;
+        expect(Math.abs(t - d) / d).toBeLessThan(CROSSOVER_RELATIVE_THRUST_TOL);
+      }
+    }
+    expect(bands[2]!.lowMach).not.toBeNull();
+  });
+});
