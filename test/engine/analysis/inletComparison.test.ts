@@ -82,6 +82,12 @@ describe('compareInlets', () => {
     expect(r.difference.ceilings[0]!.altitude_m!).toBeGreaterThan(0);
   });
 
+  it('compareInlets reports progress after each of the 16 missions', () => {
+    const seen: number[] = [];
+    expectOk(compareInlets(builder(A, B), { solve, nameA: 'A', nameB: 'B', onProgress: (d, t) => seen.push(d * 100 + t) }), 'compare');
+    expect(seen).toEqual(Array.from({ length: 16 }, (_, i) => (i + 1) * 100 + 16));
+  });
+
   it('compareInlets stops on cancel and names a failed mission mix', () => {
     const c = compareInlets(builder(A, B), { solve, nameA: 'A', nameB: 'B', shouldCancel: () => true });
     expect(c.ok ? '' : c.error.code).toBe('cancelled');

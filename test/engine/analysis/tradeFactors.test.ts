@@ -67,6 +67,16 @@ describe('tradeFactors', () => {
     expect(tradeFactors(input, { solve, cRam: -1 }).ok).toBe(false);
   });
 
+  it('tradeFactors reports progress and stops when cancelled', () => {
+    const seen: [number, number][] = [];
+    expectOk(tradeFactors(input, { solve, onProgress: (d, t) => seen.push([d, t]) }), 'trade factors');
+    expect(seen).toHaveLength(17);
+    expect(seen[16]).toEqual([17, 17]);
+    let polls = 0;
+    const c = tradeFactors(input, { solve, shouldCancel: () => ++polls > 5 });
+    expect(c.ok ? '' : c.error.code).toBe('cancelled');
+  });
+
   it('tradeFactors keeps the other factors when one perturbed mission fails, and says which', () => {
     const flaky = (i: typeof input) => {
       const res = solve(i);
