@@ -54,7 +54,7 @@ unreadable; 2 bad command line; 3 analysis failed.
     const { input } = loaded;
     const isaDev_K = quantityOption(values, 'isa-dev', 'temperatureDelta', input.isaDev_K);
     const models = { aero: input.aero, propulsion: input.propulsion };
-    const sr = specificRange(models, { altitude_m, mass_kg, isaDev_K });
+    const sr = specificRange(models, { altitude_m, mass_kg, isaDev_K, cautionSettings: input.cautionSettings, mmo: input.airframe.mmo });
     if (!sr.ok) {
       io.err(`blockwise range-speeds: ${sr.error.message}\n`);
       return EXIT_ANALYSIS_FAILED;

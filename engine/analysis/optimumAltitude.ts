@@ -9,6 +9,7 @@ import type { CautionSettings } from '../cautions/cautionSettings';
 import { err, ok, type Result } from '../core/result';
 import type { RatingName } from '../propulsion/propulsionModel';
 import type { AnalysisError, PerformanceModels } from './analysisTypes';
+import { cruisePointCautions } from './cruiseCautions';
 import { refineMaximum } from './scalarSearch';
 import { specificRange } from './specificRange';
 
@@ -103,27 +104,10 @@ export function optimumAltitude(
   if (!atBest.ok) return atBest;
   const mach = atBest.value.maxRangeMach;
   const drag = models.aero.drag({ altitude_m: best.x, mach, mass_kg: query.mass_kg, loadFactor: 1 });
-  const cautions: Caution[] = [...atBest.value.cautions];
-  const minN = query.cautionSettings.minBuffetLoadFactor;
-  if (drag.buffetLoadFactor < minN) {
-    cautions.push({
-      id: 'buffet_margin_low',
-      severity: 'caution',
-      message: `At the optimum altitude ${best.x.toFixed(0)} m and M ${mach.toFixed(3)} the load factor to buffet onset is ${drag.buffetLoadFactor.toFixed(2)} g, below the ${minN.toFixed(2)} g margin.`,
-      value: drag.buffetLoadFactor,
-      threshold: minN,
-    });
-  }
-  if (query.mmo !== undefined && mach > query.mmo - query.cautionSettings.mmoMargin) {
-    const limit = query.mmo - query.cautionSettings.mmoMargin;
-    cautions.push({
-      id: 'mmo_exceeded',
-      severity: 'warning',
-      message: `The best-range Mach ${mach.toFixed(3)} at the optimum altitude exceeds MMO ${query.mmo.toFixed(3)} less its margin (${limit.toFixed(3)}).`,
-      value: mach,
-      threshold: limit,
-    });
-  }
+  const cautions: Caution[] = [
+    ...atBest.value.cautions,
+    ...cruisePointCautions(models.aero, { altitude_m: best.x, mach, mass_kg: query.mass_kg }, query.cautionSettings, query.mmo, 'the optimum altitude and its best-range Mach'),
+  ];
   if (best.atBound) {
     cautions.push({
       id: 'optimum_at_scan_limit',

@@ -5,11 +5,13 @@
  * best SR, common practice).
  */
 import type { Caution } from '../cautions/caution';
+import type { CautionSettings } from '../cautions/cautionSettings';
 import { brent } from '../core/rootFind';
 import { err, ok, type Result } from '../core/result';
 import type { RatingName } from '../propulsion/propulsionModel';
 import type { AnalysisError, PerformanceModels } from './analysisTypes';
 import { thrustDragCrossover } from './crossover';
+import { cruisePointCautions } from './cruiseCautions';
 import { airAt } from './pointState';
 import { maximizeOnGrid, uniformGrid } from './scalarSearch';
 
@@ -25,6 +27,9 @@ export interface SpecificRangeQuery {
   readonly ceilingRating?: RatingName;
   /** Fraction of the best SR that defines the long-range Mach; default 0.99 (common practice). */
   readonly longRangeFraction?: number;
+  /** When given, buffet-margin and MMO cautions are raised at the maximum-range and long-range Machs. */
+  readonly cautionSettings?: CautionSettings;
+  readonly mmo?: number;
 }
 
 export interface SpecificRangeCurves {
@@ -124,6 +129,13 @@ export function specificRange(
     if (!seen.has(c.id)) {
       seen.add(c.id);
       cautions.push(c);
+    }
+  }
+  if (query.cautionSettings) {
+    const at = { altitude_m: query.altitude_m, mass_kg: query.mass_kg };
+    cautions.push(...cruisePointCautions(models.aero, { ...at, mach: best.x }, query.cautionSettings, query.mmo, 'the maximum-range Mach'));
+    if (longRangeMach !== null) {
+      cautions.push(...cruisePointCautions(models.aero, { ...at, mach: longRangeMach }, query.cautionSettings, query.mmo, 'the long-range Mach'));
     }
   }
   return ok({

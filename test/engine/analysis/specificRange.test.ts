@@ -66,3 +66,19 @@ describe('specificRange', () => {
     expect(r2.ok ? 'ok' : r2.error.message).toMatch(/long-range fraction 1.2/);
   });
 });
+
+describe('specificRange cautions', () => {
+  it('specificRange raises buffet-margin and MMO cautions at the best-range and long-range Machs when asked', async () => {
+    const { DEFAULT_CAUTION_SETTINGS } = await import('../../../engine/cautions/cautionSettings');
+    const q = { altitude_m: 8000, mass_kg: 55000, isaDev_K: 0 };
+    const quiet = expectOk(specificRange(constantTsfc, q), 'specific range');
+    expect(quiet.cautions.map((c) => c.id)).not.toContain('mmo_exceeded');
+    // best-range M 0.790, long-range M 0.860 (scipy reference): MMO 0.82 is exceeded only at the long-range Mach.
+    const r = expectOk(specificRange(constantTsfc, { ...q, mmo: 0.82, cautionSettings: { ...DEFAULT_CAUTION_SETTINGS, minBuffetLoadFactor: 3 } }), 'specific range');
+    const mmo = r.cautions.filter((c) => c.id === 'mmo_exceeded');
+    expect(mmo).toHaveLength(1);
+    expectClose(mmo[0]!.value!, 0.8599661287, { abs: 1e-7 }, 'scipy reference');
+    expect(mmo[0]!.message).toMatch(/long-range Mach/);
+    expect(r.cautions.filter((c) => c.id === 'buffet_margin_low').length).toBe(2);
+  });
+});
