@@ -7,8 +7,10 @@
  * better specific range at the current mass AND the climb rate at maxClimb
  * there (held Mach, energy share factor) is at least the residual climb rate
  * set in the caution settings; the step is flown as a held-Mach climb at
- * maxClimb. Cruise-climb: the altitude follows the optimum (maximum specific
- * range at the leg's speed rule) between the leg altitude and the maximum.
+ * maxClimb. Cruise-climb: starts at the optimum altitude (maximum specific
+ * range at the leg's speed rule) between the leg altitude and the maximum,
+ * then holds that Mach and lift coefficient, so the altitude rises as mass
+ * falls (pressure proportional to mass).
  */
 import { bestRangeMach, goldenMaximum, longRangeMach, specificRange } from './bestSpeeds';
 import { makeClimbSegment } from './climbLeg';
@@ -18,7 +20,7 @@ import { flySegment } from './flySegment';
 import { legFailed, legOk, type LegOutcome } from './legOutcome';
 import { makeLevelSegment } from './levelFlight';
 import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
-import { missionAir } from './missionAtmosphere';
+import { altitudeOfPressure, missionAir } from './missionAtmosphere';
 import type { CruiseProfile, CruiseSpeed, MissionInput } from './missionTypes';
 import { S_AIR, S_ALT, S_MASS, S_TAS, type FlightSample, type SegmentEvent, type StateVector } from './missionState';
 import { appendCaution } from './timeHistoryBuilder';
@@ -32,11 +34,50 @@ export interface CruiseSpec {
   readonly distance_m: number;
 }
 
-/** Cruise Mach (-) for a speed rule at altitude (m) and mass (kg). */
+/** Cruise Mach (-) for a speed rule at altitude (m) and mass (kg), searched afresh. */
 export function cruiseMach(input: MissionInput, speed: CruiseSpeed, altitude_m: number, mass_kg: number, isaDev_K: number): number {
   if (speed.kind === 'mach') return speed.mach;
   if (speed.kind === 'bestRange') return bestRangeMach(input, altitude_m, mass_kg, isaDev_K);
   return longRangeMach(input, altitude_m, mass_kg, isaDev_K);
+}
+
+/** Mass nodes of the cruise-Mach table. */
+const MACH_TABLE_NODES = 5;
+
+/**
+ * The speed rule's Mach at one altitude as a smooth function of mass (kg):
+ * searched at 5 masses spread evenly from `heavy_kg` down to 55 % of it and
+ * interpolated by the Lagrange polynomial through them (mass clamped to that
+ * band), so the integrator sees a smooth right-hand side at the cost of five
+ * searches per level instead of one per evaluation.
+ */
+export function cruiseMachOfMass(
+  input: MissionInput,
+  speed: CruiseSpeed,
+  altitude_m: number,
+  heavy_kg: number,
+  isaDev_K: number,
+): (mass_kg: number) => number {
+  if (speed.kind === 'mach') return () => speed.mach;
+  const hi = Math.max(heavy_kg, 1);
+  const lo = 0.55 * hi;
+  const xs: number[] = [];
+  const ys: number[] = [];
+  for (let i = 0; i < MACH_TABLE_NODES; i++) {
+    const m = lo + ((hi - lo) * i) / (MACH_TABLE_NODES - 1);
+    xs.push(m);
+    ys.push(cruiseMach(input, speed, altitude_m, m, isaDev_K));
+  }
+  return (mass_kg) => {
+    const m = Math.min(Math.max(mass_kg, lo), hi);
+    let sum = 0;
+    for (let i = 0; i < xs.length; i++) {
+      let w = 1;
+      for (let j = 0; j < xs.length; j++) if (j !== i) w *= (m - xs[j]) / (xs[i] - xs[j]);
+      sum += w * ys[i];
+    }
+    return sum;
+  };
 }
 
 /** Climb rate (m/s) at maxClimb holding Mach at altitude (m) and mass (kg). */
@@ -80,19 +121,32 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
   const profile = spec.profile;
 
   if (profile.kind === 'cruiseClimb') {
+    // Optimum altitude and Mach at the start mass, then constant Mach and constant CL: p(h) = p(h0) m / m0,
+    // the classic cruise-climb that stays at the optimum while specific range depends on W/delta only
+    // (common practice; Anderson, Aircraft Performance and Design, section 5.13).
     const floor = spec.altitude_m;
     const ceiling = Math.max(profile.maxAltitude_m, floor);
-    const altitudeOf = (m: number) =>
+    const m0 = state[S_MASS];
+    const h0 =
       ceiling - floor < 1
         ? floor
-        : goldenMaximum((h) => specificRange(input, h, cruiseMach(input, spec.speed, h, m, dev), m, dev), floor, ceiling, 0.5);
+        : goldenMaximum((h) => specificRange(input, h, cruiseMach(input, spec.speed, h, m0, dev), m0, dev), floor, ceiling, 1);
+    const mach = cruiseMach(input, spec.speed, h0, m0, dev);
+    const p0 = missionAir(h0, 0).pressure_Pa;
+    const pCeiling = missionAir(ceiling, 0).pressure_Pa;
+    const pFloor = missionAir(floor, 0).pressure_Pa;
+    const altitudeOf = (m: number) => {
+      const p = Math.min(Math.max((p0 * Math.max(m, 1)) / m0, pCeiling), pFloor);
+      return Math.min(Math.max(altitudeOfPressure(p), floor), ceiling);
+    };
+    state[S_ALT] = h0;
     const run = flySegment(
       ctx,
       target,
       makeLevelSegment(ctx, target, {
         altitudeOf,
         algebraicAltitude: true,
-        machOf: (h, m) => cruiseMach(input, spec.speed, h, m, dev),
+        machOf: () => mach,
         ceiling: 'maxCruise',
         step_s,
         endAirDistance_m: endAir,
@@ -125,17 +179,19 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
 
   for (let guard = 0; guard < 200; guard++) {
     const h = state[S_ALT];
+    const machHere = cruiseMachOfMass(input, spec.speed, h, state[S_MASS], dev);
     const extra: SegmentEvent[] = [];
     const canStep = profile.kind === 'stepClimb' && profile.step_m > 0 && h + profile.step_m <= profile.maxAltitude_m + 1e-6;
     if (canStep) {
       const up = h + profile.step_m;
+      const machUpOf = cruiseMachOfMass(input, spec.speed, up, state[S_MASS], dev);
       const minRate = Math.max(ctx.input.cautionSettings.minResidualClimbRate_m_s, 1e-3);
       extra.push({
         stop: 'step_climb_due',
         g: (y, s) => {
           const m = y[S_MASS];
           const srNow = specificRange(input, h, s.mach, m, dev);
-          const machUp = cruiseMach(input, spec.speed, up, m, dev);
+          const machUp = machUpOf(m);
           const srUp = specificRange(input, up, machUp, m, dev);
           const gain = srNow > 0 ? (srUp - srNow) / srNow : srUp > 0 ? 1 : -1;
           const rateMargin = (heldMachClimbRate(input, up, machUp, m, dev) - minRate) / minRate;
@@ -149,7 +205,7 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
       makeLevelSegment(ctx, target, {
         altitudeOf: () => h,
         algebraicAltitude: false,
-        machOf: (alt, m) => cruiseMach(input, spec.speed, alt, m, dev),
+        machOf: (_alt, m) => machHere(m),
         ceiling: 'maxCruise',
         step_s,
         endAirDistance_m: endAir,

@@ -28,7 +28,7 @@
 import type { AlternateSpec, LegRow, MissionInput, MissionStatus, ReserveBreakdown, SpeedSchedule } from './missionTypes';
 import type { RatingName } from '../propulsion/propulsionModel';
 import { flyClimb } from './climbLeg';
-import { cruiseMach, flyCruise } from './cruiseLeg';
+import { cruiseMachOfMass, flyCruise } from './cruiseLeg';
 import { flyDescent, type DescentMode } from './descentLeg';
 import { flyHold } from './holdLeg';
 import { makeLevelSegment } from './levelFlight';
@@ -134,13 +134,14 @@ function flyNormalCruiseTime(ctx: MissionContext, target: LegTarget, start: Stat
   const dev = target.env.isaDev_K;
   const state = Float64Array.from(start);
   state[S_ALT] = cruise.altitude_m;
+  const machOf = cruiseMachOfMass(input, cruise.speed, cruise.altitude_m, state[S_MASS], dev);
   const run = flySegment(
     ctx,
     target,
     makeLevelSegment(ctx, target, {
       altitudeOf: () => cruise.altitude_m,
       algebraicAltitude: false,
-      machOf: (h, m) => cruiseMach(input, cruise.speed, h, m, dev),
+      machOf: (_h, m) => machOf(m),
       ceiling: 'maxCruise',
       step_s: BASE_STEP_S.cruise * ctx.options.stepScale,
       endAirDistance_m: null,

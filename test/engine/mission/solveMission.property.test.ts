@@ -92,7 +92,8 @@ describe('solveMission properties', () => {
         allNumbers(r, 'result', numbers);
         for (const [path, v] of numbers) expect(Number.isFinite(v), path).toBe(true);
       }),
-      { numRuns: 30, seed: 20261202 },
+      { numRuns: 24, seed: 20261202 },
     );
-  });
+    // Generous limit for a shared, loaded machine: this is not a speed check (speed lives in `npm run bench`).
+  }, 300_000);
 });
