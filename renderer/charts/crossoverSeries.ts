@@ -1,0 +1,49 @@
+/** Crossover curves -> rows of Mach with thrust available and drag per inlet design, and the marked Machs. */
+import { displayUnit, toDisplay, type UnitSystem } from '../../engine/units/quantity';
+import type { CrossoverSet } from '../worker/engineProtocol';
+import type { SeriesDef } from './polarSeries';
+import { seriesKey } from './seriesKeys';
+
+type Row = Record<string, number | null>;
+
+export interface CrossoverMarker {
+  readonly inletName: string;
+  readonly what: 'low crossover' | 'high crossover' | 'thrust minimum';
+  readonly mach: number;
+}
+
+/**
+ * Rows `{ mach, t0, d0, t1, d1 }` (force display units) on the union of the
+ * designs' Mach grids (each design's columns null off its own grid), the
+ * series, and the low/high crossover and thrust-minimum Machs per design.
+ */
+export function crossoverSeries(set: CrossoverSet, units: UnitSystem): { rows: Row[]; series: SeriesDef[]; markers: CrossoverMarker[]; unit: string } {
+  const byMach = new Map<number, Row>();
+  set.curves.forEach(({ result }, i) => {
+    const c = result.curves;
+    c.mach.forEach((m, j) => {
+      const row = byMach.get(m) ?? { mach: m };
+      row[seriesKey('t', i)] = toDisplay(c.thrustAvailable_N[j]!, 'force', units);
+      row[seriesKey('d', i)] = toDisplay(c.drag_N[j]!, 'force', units);
+      byMach.set(m, row);
+    });
+  });
+  const rows = [...byMach.values()].sort((a, b) => (a.mach as number) - (b.mach as number));
+  for (const row of rows) {
+    set.curves.forEach((_, i) => {
+      if (!(seriesKey('t', i) in row)) row[seriesKey('t', i)] = null;
+      if (!(seriesKey('d', i) in row)) row[seriesKey('d', i)] = null;
+    });
+  }
+  const series = set.curves.flatMap(({ inletName }, i) => [
+    { key: seriesKey('t', i), name: `thrust available, ${inletName}` },
+    { key: seriesKey('d', i), name: `drag, ${inletName}` },
+  ]);
+  const markers: CrossoverMarker[] = [];
+  for (const { inletName, result } of set.curves) {
+    if (result.lowMach !== null) markers.push({ inletName, what: 'low crossover', mach: result.lowMach });
+    if (result.highMach !== null) markers.push({ inletName, what: 'high crossover', mach: result.highMach });
+    if (result.minThrustMach !== null) markers.push({ inletName, what: 'thrust minimum', mach: result.minThrustMach });
+  }
+  return { rows, series, markers, unit: displayUnit('force', units) };
+}

@@ -1,0 +1,16 @@
+/** Keys and labels shared by chart adapters. */
+
+/** A data key safe for recharts (no dots): 'M0.78' -> 'M0_78'. */
+export function seriesKey(prefix: string, index: number): string {
+  return `${prefix}${index}`;
+}
+
+/** Every `step`-th index of n samples, always keeping the first and last (for long time histories). */
+export function sampleIndices(n: number, maxPoints: number): number[] {
+  if (n <= 0) return [];
+  if (n <= maxPoints) return Array.from({ length: n }, (_, i) => i);
+  const step = (n - 1) / (maxPoints - 1);
+  const out: number[] = [];
+  for (let k = 0; k < maxPoints; k++) out.push(Math.round(k * step));
+  return out;
+}

@@ -1,0 +1,26 @@
+import { Bar, BarChart, CartesianGrid, Cell, ReferenceLine, Tooltip, XAxis, YAxis } from 'recharts';
+import type { WaterfallRow } from '../charts/compareSeries';
+import { DEFAULT_CHART_SIZE, type ChartSize } from './LineChartPanel';
+
+/** Block-fuel breakdown as a waterfall: an invisible base bar stacked under the visible step. */
+export function WaterfallChart(props: { readonly rows: readonly WaterfallRow[]; readonly unit: string; readonly size?: ChartSize }) {
+  const size = props.size ?? DEFAULT_CHART_SIZE;
+  return (
+    <figure className="chart" data-testid="chart-breakdown">
+      <figcaption>Block fuel B - A by factor ({props.unit}); positive costs fuel</figcaption>
+      <BarChart width={size.width} height={size.height} data={props.rows as WaterfallRow[]} margin={{ top: 8, right: 24, bottom: 24, left: 16 }}>
+        <CartesianGrid strokeDasharray="3 3" />
+        <XAxis dataKey="name" />
+        <YAxis label={{ value: props.unit, angle: -90, position: 'insideLeft' }} />
+        <Tooltip formatter={(_v, _n, item) => [(item.payload as WaterfallRow).value.toFixed(1), 'B - A']} />
+        <ReferenceLine y={0} stroke="#000" />
+        <Bar dataKey="base" stackId="w" fill="transparent" isAnimationActive={false} />
+        <Bar dataKey="height" stackId="w" isAnimationActive={false}>
+          {props.rows.map((r) => (
+            <Cell key={r.name} fill={r.total ? '#555555' : r.value > 0 ? '#c2571a' : '#2e8540'} />
+          ))}
+        </Bar>
+      </BarChart>
+    </figure>
+  );
+}

@@ -1,0 +1,85 @@
+import { SAFETY_NOTICE_LINES } from '../../engine/core/notice';
+import type { Project } from '../../engine/project/projectSchema';
+import { displayUnit, formatQuantity, type UnitSystem } from '../../engine/units/quantity';
+import { profileSeries } from '../charts/profileSeries';
+import { CautionList } from '../components/CautionList';
+import { HeadlineFigures } from '../components/HeadlineFigures';
+import { LegsTable } from '../components/LegsTable';
+import { LineChartPanel } from '../components/LineChartPanel';
+import { LEG_KIND_LABEL } from '../state/legTemplates';
+import { RESERVE_PRESET_LABEL } from '../state/reservePresets';
+import type { StudySnapshot } from '../worker/engineProtocol';
+
+const REPORT_CHART = { width: 680, height: 240 };
+
+/** The whole study on one printable page (hidden on screen; print.css shows it). */
+export function StudyReport(props: { readonly project: Project; readonly snapshot: StudySnapshot; readonly units: UnitSystem; readonly stale: boolean }) {
+  const { project: p, snapshot: s, units: u } = props;
+  const m = s.mission;
+  const rows = profileSeries(m.history, u, 200);
+  const w = p.airframe.weights;
+  return (
+    <article className="print-report" data-testid="print-report" aria-hidden="true">
+      <h1>{p.name}</h1>
+      <p className="report-notice" data-testid="report-notice">
+        {SAFETY_NOTICE_LINES.join(' ')}
+      </p>
+      {props.stale ? <p className="stale-mark">The results below are from before the latest edit.</p> : null}
+      <h2>Inputs</h2>
+      <table className="report-inputs">
+        <tbody>
+          <tr>
+            <td>Weights</td>
+            <td>
+              OEW {formatQuantity(w.operatingEmpty, 'mass', u)} (without inlets), MZFW {formatQuantity(w.maxZeroFuel, 'mass', u)}, MTOW {formatQuantity(w.maxTakeoff, 'mass', u)}, MLW{' '}
+              {formatQuantity(w.maxLanding, 'mass', u)}, fuel capacity {formatQuantity(w.maxFuel, 'mass', u)}
+            </td>
+          </tr>
+          <tr>
+            <td>Wing, limits</td>
+            <td>
+              {formatQuantity(p.airframe.wingArea, 'area', u)}; VMO {formatQuantity(p.airframe.vmo, 'speed', u)}, MMO {p.airframe.mmo}
+            </td>
+          </tr>
+          <tr>
+            <td>Engine</td>
+            <td>
+              {p.engine.count} x {s.deck.title}
+              {s.deck.parametric ? ' (parametric deck)' : ''}; reference recovery {s.deck.referenceRecovery}
+            </td>
+          </tr>
+          <tr>
+            <td>Inlet flown</td>
+            <td>
+              {s.inletName} (designs: {p.inlets.map((i) => i.name).join(', ')})
+            </td>
+          </tr>
+          <tr>
+            <td>Legs</td>
+            <td>{p.mission.legs.map((l, k) => `${k + 1}. ${l.name ?? LEG_KIND_LABEL[l.kind]}`).join('; ')}</td>
+          </tr>
+          <tr>
+            <td>Reserves</td>
+            <td>{RESERVE_PRESET_LABEL[p.mission.reserves.preset]}</td>
+          </tr>
+          <tr>
+            <td>Solve</td>
+            <td>
+              {p.mission.solve.mode}, payload {formatQuantity(p.mission.solve.payload, 'mass', u)}
+            </td>
+          </tr>
+        </tbody>
+      </table>
+      <h2>Results</h2>
+      <p>Mission status: {m.status}{m.statusMessage ? ` — ${m.statusMessage}` : ''}</p>
+      <HeadlineFigures result={m} units={u} idPrefix="report-headline" />
+      <LineChartPanel title="Altitude against distance" testId="report-chart-altitude" data={rows} xKey="distance" xLabel={`distance (${displayUnit('distance', u)})`} yLabel={`altitude (${displayUnit('altitude', u)})`} series={[{ key: 'altitude', name: 'pressure altitude' }]} size={REPORT_CHART} />
+      <LineChartPanel title="Mass against distance" testId="report-chart-mass" data={rows} xKey="distance" xLabel={`distance (${displayUnit('distance', u)})`} yLabel={`mass (${displayUnit('mass', u)})`} series={[{ key: 'mass', name: 'aircraft mass' }]} size={REPORT_CHART} />
+      <h2>Legs</h2>
+      <LegsTable legs={m.legs} units={u} highlightLeg={null} testId="report-legs" />
+      <h2>Cautions</h2>
+      <CautionList cautions={m.cautions} units={u} testId="report-cautions" />
+      <p className="report-notice">{SAFETY_NOTICE_LINES.join(' ')}</p>
+    </article>
+  );
+}

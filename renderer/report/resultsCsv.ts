@@ -1,0 +1,73 @@
+/**
+ * Results as CSV text for export: the time history (one row per integrator
+ * step) and the legs table. SI columns with the unit in each header, as the
+ * deck and project files name units; "." decimal point, "," separator.
+ */
+import type { MissionResult } from '../../engine/mission/missionTypes';
+
+const HISTORY_COLUMNS = [
+  ['time[s]', 'time_s'],
+  ['distance[m]', 'distance_m'],
+  ['altitude[m]', 'altitude_m'],
+  ['mach[-]', 'mach'],
+  ['cas[m/s]', 'cas_m_s'],
+  ['tas[m/s]', 'tas_m_s'],
+  ['mass[kg]', 'mass_kg'],
+  ['thrust_available[N]', 'thrustAvailable_N'],
+  ['thrust_used[N]', 'thrustUsed_N'],
+  ['drag[N]', 'drag_N'],
+  ['fuel_flow[kg/s]', 'fuelFlow_kg_s'],
+  ['cl[-]', 'cl'],
+  ['lift_to_drag[-]', 'liftToDrag'],
+  ['climb_rate[m/s]', 'climbRate_m_s'],
+  ['leg[-]', 'legIndex'],
+] as const;
+
+function csvText(value: string): string {
+  return /[",\n\r]/.test(value) ? `"${value.replace(/"/g, '""')}"` : value;
+}
+
+function num(value: number): string {
+  return Number.isFinite(value) ? String(value) : '';
+}
+
+/** The time history as CSV; a non-finite value is an empty cell. */
+export function historyCsv(result: MissionResult): string {
+  const h = result.history;
+  const lines = [HISTORY_COLUMNS.map(([head]) => head).join(',')];
+  for (let i = 0; i < h.time_s.length; i++) {
+    lines.push(HISTORY_COLUMNS.map(([, key]) => num(h[key][i]!)).join(','));
+  }
+  return `${lines.join('\n')}\n`;
+}
+
+/** The legs table as CSV (reserve rows have leg number "R"). */
+export function legsCsv(result: MissionResult): string {
+  const head = 'leg,name,kind,start_time[s],end_time[s],start_distance[m],end_distance[m],start_altitude[m],end_altitude[m],start_mass[kg],end_mass[kg],fuel[kg]';
+  const lines = [head];
+  for (const l of result.legs) {
+    lines.push(
+      [
+        l.kind === 'reserve' ? 'R' : String(l.index + 1),
+        csvText(l.name),
+        l.kind,
+        num(l.startTime_s),
+        num(l.endTime_s),
+        num(l.startDistance_m),
+        num(l.endDistance_m),
+        num(l.startAltitude_m),
+        num(l.endAltitude_m),
+        num(l.startMass_kg),
+        num(l.endMass_kg),
+        num(l.fuel_kg),
+      ].join(','),
+    );
+  }
+  return `${lines.join('\n')}\n`;
+}
+
+/** File name stem from a project file name: "demo.blockwise.json" -> "demo". */
+export function fileStem(name: string): string {
+  const base = name.replace(/\.blockwise\.json$/i, '').replace(/\.json$/i, '').trim();
+  return base === '' ? 'blockwise' : base;
+}

@@ -1,0 +1,43 @@
+/** Default legs the mission editor adds (SI; a starting point the user edits). */
+import type { ProjectLeg } from '../../engine/project/projectSchema';
+
+const FT = 0.3048;
+const KT = 1852 / 3600;
+
+export const LEG_KINDS = ['taxiOut', 'takeoff', 'climb', 'cruise', 'descent', 'hold', 'approach', 'taxiIn'] as const;
+export type LegKindName = (typeof LEG_KINDS)[number];
+
+/** Our labels for leg kinds. */
+export const LEG_KIND_LABEL: Readonly<Record<LegKindName, string>> = {
+  taxiOut: 'Taxi out',
+  takeoff: 'Takeoff',
+  climb: 'Climb',
+  cruise: 'Cruise',
+  descent: 'Descent',
+  hold: 'Hold',
+  approach: 'Approach',
+  taxiIn: 'Taxi in',
+};
+
+const SCHEDULE = { lowCas: 250 * KT, lowAltitudeLimit: 10000 * FT, cas: 280 * KT, mach: 0.76 };
+
+/** A new leg of `kind` with class-typical values (common practice). */
+export function newLeg(kind: LegKindName): ProjectLeg {
+  switch (kind) {
+    case 'taxiOut':
+    case 'taxiIn':
+      return { kind, time: 600, fuelFlow: 'idle' };
+    case 'takeoff':
+      return { kind, time: 60, fuel: null };
+    case 'climb':
+      return { kind, toAltitude: 35000 * FT, schedule: { ...SCHEDULE }, rating: 'maxClimb' };
+    case 'cruise':
+      return { kind, altitude: 35000 * FT, speed: { kind: 'mach', mach: 0.76 }, profile: { kind: 'constantAltitude' }, distance: 500 * 1852 };
+    case 'descent':
+      return { kind, toAltitude: 1500 * FT, schedule: { ...SCHEDULE }, mode: { kind: 'idle' } };
+    case 'hold':
+      return { kind, altitude: 1500 * FT, time: 1800, speed: { kind: 'bestEndurance' } };
+    case 'approach':
+      return { kind, time: 300, fuel: null };
+  }
+}

@@ -1,0 +1,11 @@
+/** Validates an edited project exactly as a saved file would be read back. */
+import { parseProjectData } from '../../engine/project/parseProject';
+import type { ProjectIssue } from '../../engine/project/projectIssue';
+import type { Project } from '../../engine/project/projectSchema';
+import { projectToJson } from '../../engine/project/projectToJson';
+
+/** Every issue the project would have if saved and reopened (empty when valid). */
+export function projectIssues(project: Project): readonly ProjectIssue[] {
+  const parsed = parseProjectData(JSON.parse(projectToJson(project)) as unknown);
+  return parsed.ok ? [] : parsed.error;
+}

@@ -1,0 +1,30 @@
+/** Every change to the study is one of these named actions (see studyReducer.ts). */
+import type { Project, ProjectLeg } from '../../engine/project/projectSchema';
+import type { ProjectIssue } from '../../engine/project/projectIssue';
+import type { UnitSystem } from '../../engine/units/quantity';
+import type { FieldUnit } from './fieldUnits';
+import type { LegKindName } from './legTemplates';
+import type { DocPath } from './projectPath';
+import type { DeckFile, Highlight } from './studyState';
+
+export type StudyAction =
+  | { readonly type: 'projectOpened'; readonly project: Project; readonly name: string; readonly deckFile: DeckFile | null }
+  | { readonly type: 'projectOpenFailed'; readonly name: string; readonly issues: readonly ProjectIssue[] }
+  | { readonly type: 'deckImported'; readonly deckFile: DeckFile }
+  /** Text typed into a quantity field; accepted only when it parses and passes the project's rules. */
+  | { readonly type: 'fieldEdited'; readonly path: DocPath; readonly text: string; readonly unit: FieldUnit; readonly label: string }
+  /** A typed value set as is (choices, names, switches); `undefined` removes an optional field. */
+  | { readonly type: 'valueSet'; readonly path: DocPath; readonly value: unknown; readonly label: string }
+  | { readonly type: 'rowAdded'; readonly path: DocPath; readonly label: string }
+  | { readonly type: 'rowRemoved'; readonly path: DocPath; readonly index: number; readonly label: string }
+  | { readonly type: 'legAdded'; readonly kind: LegKindName }
+  | { readonly type: 'legRemoved'; readonly index: number }
+  | { readonly type: 'legDuplicated'; readonly index: number }
+  | { readonly type: 'legMoved'; readonly index: number; readonly by: -1 | 1 }
+  | { readonly type: 'legReplaced'; readonly index: number; readonly leg: ProjectLeg }
+  | { readonly type: 'draftDiscarded'; readonly path: DocPath }
+  | { readonly type: 'undo' }
+  | { readonly type: 'redo' }
+  | { readonly type: 'unitsChosen'; readonly units: UnitSystem }
+  | { readonly type: 'highlighted'; readonly highlight: Highlight | null }
+  | { readonly type: 'saved' };

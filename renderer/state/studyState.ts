@@ -1,0 +1,58 @@
+/**
+ * The renderer's state: the project document with its undo history, the
+ * deck file it uses, the unit system (display only), field drafts that did
+ * not parse, and what the results view highlights.
+ */
+import type { ProjectIssue } from '../../engine/project/projectIssue';
+import type { Project } from '../../engine/project/projectSchema';
+import type { UnitSystem } from '../../engine/units/quantity';
+import type { Undoable } from './undoHistory';
+
+/** A deck file as read (the worker parses it). */
+export interface DeckFile {
+  readonly name: string;
+  readonly text: string;
+}
+
+/** Text typed into a field that was not accepted, and why. */
+export interface FieldDraft {
+  readonly text: string;
+  readonly message: string;
+}
+
+/** A leg and mission time the results view points at (from a clicked caution). */
+export interface Highlight {
+  readonly legIndex: number | null;
+  readonly time_s: number | null;
+}
+
+export interface StudyState {
+  /** Null until a project is opened. */
+  readonly doc: Undoable<Project> | null;
+  readonly documentName: string;
+  readonly deckFile: DeckFile | null;
+  readonly units: UnitSystem;
+  /** Rejected field texts by JSON path text (`airframe.weights.maxTakeoff`). */
+  readonly drafts: Readonly<Record<string, FieldDraft>>;
+  /** Whole-document issues of the present project (cross-field rules), from the project validator. */
+  readonly issues: readonly ProjectIssue[];
+  /** Issues of the last project that failed to open (the open project stays). */
+  readonly openIssues: readonly ProjectIssue[];
+  /** Number of undo steps at the last save (null: never saved). */
+  readonly savedAtStep: number | null;
+  readonly highlight: Highlight | null;
+}
+
+export function emptyStudy(): StudyState {
+  return {
+    doc: null,
+    documentName: '',
+    deckFile: null,
+    units: 'customary',
+    drafts: {},
+    issues: [],
+    openIssues: [],
+    savedAtStep: null,
+    highlight: null,
+  };
+}

@@ -1,0 +1,158 @@
+/**
+ * The app's commands against the bridge (open, save, import deck, export,
+ * print, demo) and the keyboard and menu routes to them. Errors become a
+ * message for the status line, never an exception.
+ */
+import { useCallback, useEffect, useRef, useState } from 'react';
+import { projectToJson } from '../../engine/project/projectToJson';
+import type { Bridge, MenuCommand } from '../bridge/bridge';
+import type { ToolbarCommand } from '../components/Toolbar';
+import { fileStem, historyCsv, legsCsv } from '../report/resultsCsv';
+import { openProjectAction } from './documentActions';
+import type { StudyStore } from './studyContext';
+import { undoKeyCommand } from './undoKeys';
+import type { StudySnapshot } from '../worker/engineProtocol';
+
+function describe(e: unknown): string {
+  return e instanceof Error ? e.message : String(e);
+}
+
+function saveName(name: string): string {
+  return name.endsWith('.blockwise.json') ? name : `${fileStem(name)}.blockwise.json`;
+}
+
+const MENU_TO_TOOLBAR: Partial<Record<MenuCommand, ToolbarCommand>> = {
+  openProject: 'open',
+  openDemo: 'openDemo',
+  saveProject: 'save',
+  saveProjectAs: 'saveAs',
+  importDeck: 'importDeck',
+  printReport: 'print',
+  undo: 'undo',
+  redo: 'redo',
+};
+
+export function useAppCommands(bridge: Bridge, store: StudyStore, snapshot: StudySnapshot | null) {
+  const { state, dispatch } = store;
+  const [message, setMessage] = useState<string | null>(null);
+  const latest = useRef({ state, snapshot });
+  latest.current = { state, snapshot };
+
+  const openDemo = useCallback(async () => {
+    const demo = await bridge.loadDemo();
+    dispatch(openProjectAction(demo.projectName, demo.projectText, { name: demo.deckName, text: demo.deckText }));
+  }, [bridge, dispatch]);
+
+  const run = useCallback(
+    async (command: ToolbarCommand) => {
+      const { state: s, snapshot: snap } = latest.current;
+      const project = s.doc?.present ?? null;
+      const stem = fileStem(s.documentName);
+      try {
+        switch (command) {
+          case 'undo':
+          case 'redo':
+            dispatch({ type: command });
+            return;
+          case 'open': {
+            const opened = await bridge.openProject();
+            if (opened) dispatch(openProjectAction(opened.name, opened.text, null));
+            return;
+          }
+          case 'openDemo':
+            await openDemo();
+            return;
+          case 'save':
+          case 'saveAs': {
+            if (project === null) return;
+            const text = projectToJson(project);
+            const saved = command === 'save' ? await bridge.saveProject(text, saveName(s.documentName)) : await bridge.saveProjectAs(text, saveName(s.documentName));
+            if (saved) {
+              dispatch({ type: 'saved' });
+              setMessage(`Saved to ${saved.path ?? saved.name}.`);
+            }
+            return;
+          }
+          case 'importDeck': {
+            const deck = await bridge.importDeck();
+            if (deck) dispatch({ type: 'deckImported', deckFile: { name: deck.name, text: deck.text } });
+            return;
+          }
+          case 'exportHistory':
+          case 'exportLegs': {
+            if (snap === null) return;
+            const history = command === 'exportHistory';
+            const saved = await bridge.exportText(history ? historyCsv(snap.mission) : legsCsv(snap.mission), `${stem}-${history ? 'time-history' : 'legs'}.csv`, 'text/csv');
+            if (saved) setMessage(`Exported ${saved.path ?? saved.name}.`);
+            return;
+          }
+          case 'print': {
+            const saved = await bridge.printReport(`${stem}-report.pdf`);
+            if (saved) setMessage(`Report written to ${saved.path ?? saved.name}.`);
+            return;
+          }
+        }
+      } catch (e) {
+        setMessage(describe(e));
+      }
+    },
+    [bridge, dispatch, openDemo],
+  );
+
+  // First document: the one the app was started with, else the demo.
+  useEffect(() => {
+    let live = true;
+    void (async () => {
+      try {
+        const initial = await bridge.initialDocument();
+        if (!live) return;
+        if (initial) dispatch(openProjectAction(initial.name, initial.text, null));
+        else await openDemo();
+      } catch (e) {
+        if (live) setMessage(describe(e));
+      }
+    })();
+    return () => {
+      live = false;
+    };
+  }, [bridge, dispatch, openDemo]);
+
+  useEffect(
+    () =>
+      bridge.onMenuCommand((command, path) => {
+        if (command === 'openRecent' && path !== undefined) {
+          void bridge.openRecent(path).then(
+            (opened) => dispatch(openProjectAction(opened.name, opened.text, null)),
+            (e: unknown) => setMessage(describe(e)),
+          );
+          return;
+        }
+        if (command === 'exportResultsCsv') {
+          void run('exportHistory').then(() => run('exportLegs'));
+          return;
+        }
+        const mapped = MENU_TO_TOOLBAR[command];
+        if (mapped) void run(mapped);
+      }),
+    [bridge, dispatch, run],
+  );
+
+  useEffect(() => {
+    const onKey = (event: KeyboardEvent) => {
+      const command = undoKeyCommand(event);
+      if (command === null) return;
+      event.preventDefault();
+      dispatch({ type: command });
+    };
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, [dispatch]);
+
+  const dirty = state.doc !== null && state.savedAtStep !== state.doc.past.length;
+  useEffect(() => {
+    if (state.doc === null) return;
+    bridge.setDocumentState({ name: state.documentName, dirty }).catch(() => undefined);
+  }, [bridge, state.documentName, dirty, state.doc === null]);
+
+  return { run, message, clearMessage: () => setMessage(null) };
+}

@@ -1,0 +1,184 @@
+import { useState } from 'react';
+import { displayUnit, formatQuantity } from '../../engine/units/quantity';
+import { breakdownWaterfall, FACTOR_LABEL, payloadRangeRows } from '../charts/compareSeries';
+import { ChoiceField } from '../components/ChoiceField';
+import { FailureNotice } from '../components/IssueList';
+import { JobProgress } from '../components/JobProgress';
+import { LineChartPanel, type ChartSize } from '../components/LineChartPanel';
+import { WaterfallChart } from '../components/WaterfallChart';
+import { useStudy } from '../state/studyContext';
+import { useEngineJob, type LiveStudy } from '../worker/useEngine';
+
+function mach(m: number | null): string {
+  return m === null ? '—' : m.toFixed(3);
+}
+
+/** Inlet A against B on block fuel with the breakdown, the payload-range diagram and the trade factors. */
+export function CompareView(props: { readonly live: LiveStudy; readonly chartSize?: ChartSize }) {
+  const { state } = useStudy();
+  const project = state.doc!.present;
+  const names = project.inlets.map((i) => i.name);
+  const [nameA, setA] = useState(names[0] ?? '');
+  const [nameB, setB] = useState(names[1] ?? names[0] ?? '');
+  const compare = useEngineJob<'compare'>();
+  const payloadRange = useEngineJob<'payloadRange'>();
+  const trade = useEngineJob<'tradeFactors'>();
+  const inputs = { project, deckFile: state.deckFile };
+  const u = state.units;
+  const size = props.chartSize ? { size: props.chartSize } : {};
+  const c = compare.state;
+  const pr = payloadRange.state;
+  const t = trade.state;
+  const choices = names.map((n) => ({ value: n, label: n }));
+  return (
+    <section>
+      <h2>Inlet A against inlet B</h2>
+      <div className="field-grid">
+        <ChoiceField label="Design A" testId="compare-inlet-a" value={nameA} choices={choices} onChoose={setA} />
+        <ChoiceField label="Design B" testId="compare-inlet-b" value={nameB} choices={choices} onChoose={setB} />
+        <button type="button" data-testid="compare-run" disabled={nameA === nameB || c.status === 'running'} onClick={() => compare.start({ kind: 'compare', ...inputs, nameA, nameB })}>
+          Compare (16 missions)
+        </button>
+      </div>
+      {nameA === nameB ? <p>Choose two different designs.</p> : null}
+      <JobProgress state={c} onCancel={compare.cancel} testId="compare-progress" />
+      {c.status === 'failed' ? <FailureNotice failure={c.failure} testId="compare-failure" /> : null}
+      {c.status === 'done' ? (
+        <>
+          <table data-testid="compare-table" className="compare-table">
+            <thead>
+              <tr>
+                <th />
+                {c.value.designs.map((d, k) => (
+                  <th key={k} data-testid={`compare-design-name-${k}`}>
+                    {k === 0 ? 'A: ' : 'B: '}
+                    {d.name}
+                  </th>
+                ))}
+                <th>B - A</th>
+              </tr>
+            </thead>
+            <tbody>
+              <tr>
+                <td>Block fuel</td>
+                {c.value.designs.map((d, k) => (
+                  <td key={k}>{formatQuantity(d.blockFuel_kg, 'mass', u)}</td>
+                ))}
+                <td data-testid="compare-diff-block-fuel">{formatQuantity(c.value.difference.blockFuel_kg, 'mass', u)}</td>
+              </tr>
+              <tr>
+                <td>Block time</td>
+                {c.value.designs.map((d, k) => (
+                  <td key={k}>{formatQuantity(d.blockTime_s, 'time', u)}</td>
+                ))}
+                <td>{formatQuantity(c.value.difference.blockTime_s, 'time', u)}</td>
+              </tr>
+              <tr>
+                <td>Trip fuel</td>
+                {c.value.designs.map((d, k) => (
+                  <td key={k}>{formatQuantity(d.tripFuel_kg, 'mass', u)}</td>
+                ))}
+                <td>{formatQuantity(c.value.difference.tripFuel_kg, 'mass', u)}</td>
+              </tr>
+              <tr>
+                <td>Take-off mass</td>
+                {c.value.designs.map((d, k) => (
+                  <td key={k}>{formatQuantity(d.takeoffMass_kg, 'mass', u)}</td>
+                ))}
+                <td>{formatQuantity(c.value.difference.takeoffMass_kg, 'mass', u)}</td>
+              </tr>
+              <tr>
+                <td>Low / high crossover Mach</td>
+                {c.value.designs.map((d, k) => (
+                  <td key={k}>
+                    {mach(d.crossover.lowMach)} / {mach(d.crossover.highMach)}
+                  </td>
+                ))}
+                <td>
+                  {mach(c.value.difference.lowMach)} / {mach(c.value.difference.highMach)}
+                </td>
+              </tr>
+              {c.value.difference.ceilings.map((ceiling, k) => (
+                <tr key={ceiling.name}>
+                  <td>Ceiling: {ceiling.name}</td>
+                  {c.value.designs.map((d, j) => (
+                    <td key={j}>{formatQuantity(d.ceilings[k]?.altitude_m ?? NaN, 'altitude', u)}</td>
+                  ))}
+                  <td>{ceiling.altitude_m === null ? '—' : formatQuantity(ceiling.altitude_m, 'altitude', u)}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+          <p className="small">
+            Crossover compared at {formatQuantity(c.value.crossoverCondition.altitude_m, 'altitude', u)}, {formatQuantity(c.value.crossoverCondition.mass_kg, 'mass', u)},{' '}
+            {c.value.crossoverCondition.rating}.
+          </p>
+          <WaterfallChart rows={breakdownWaterfall(c.value, u)} unit={displayUnit('mass', u)} {...size} />
+          <ul data-testid="compare-breakdown">
+            {c.value.breakdown.parts.map((p) => (
+              <li key={p.factor}>
+                {FACTOR_LABEL[p.factor]}: {formatQuantity(p.blockFuel_kg, 'mass', u)}
+              </li>
+            ))}
+          </ul>
+          <p className="small">{c.value.breakdown.description}</p>
+        </>
+      ) : null}
+
+      <h3>Payload against range ({project.activeInlet})</h3>
+      <button type="button" data-testid="payload-range-run" disabled={pr.status === 'running'} onClick={() => payloadRange.start({ kind: 'payloadRange', ...inputs })}>
+        Fly the payload-range diagram
+      </button>
+      <JobProgress state={pr} onCancel={payloadRange.cancel} testId="payload-range-progress" />
+      {pr.status === 'failed' ? <FailureNotice failure={pr.failure} testId="payload-range-failure" /> : null}
+      {pr.status === 'done' ? (
+        <>
+          <LineChartPanel
+            title="Payload-range diagram (reserves carried)"
+            testId="chart-payload-range"
+            data={payloadRangeRows(pr.value, u)}
+            xKey="range"
+            xLabel={`still-air range (${displayUnit('distance', u)})`}
+            yLabel={`payload (${displayUnit('mass', u)})`}
+            series={[{ key: 'payload', name: 'payload' }]}
+            {...size}
+          />
+          <p className="small">{pr.value.note}</p>
+        </>
+      ) : null}
+
+      <h3>Trade factors ({project.activeInlet})</h3>
+      <button type="button" data-testid="trade-run" disabled={t.status === 'running'} onClick={() => trade.start({ kind: 'tradeFactors', ...inputs })}>
+        Compute trade factors
+      </button>
+      <JobProgress state={t} onCancel={trade.cancel} testId="trade-progress" />
+      {t.status === 'failed' ? <FailureNotice failure={t.failure} testId="trade-failure" /> : null}
+      {t.status === 'done' ? (
+        <>
+          <table data-testid="trade-table">
+            <thead>
+              <tr>
+                <th>Change</th>
+                <th>Block fuel change</th>
+                <th>Step check</th>
+              </tr>
+            </thead>
+            <tbody>
+              {t.value.factors.map((f) => (
+                <tr key={f.name}>
+                  <td>{f.unit}</td>
+                  <td>{f.blockFuelPerUnit_kg === null ? '—' : formatQuantity(f.blockFuelPerUnit_kg, 'mass', u, 1)}</td>
+                  <td>{f.converged ? 'converged' : (f.note ?? 'not converged')}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+          <p className="small">
+            Baseline block fuel {formatQuantity(t.value.baselineBlockFuel_kg, 'mass', u)} for {formatQuantity(t.value.designMission.payload_kg, 'mass', u)} over{' '}
+            {formatQuantity(t.value.designMission.range_m, 'distance', u)}. {t.value.recoveryMethod}
+          </p>
+        </>
+      ) : null}
+    </section>
+  );
+}

@@ -1,0 +1,86 @@
+import { useEffect, useMemo, useState } from 'react';
+import { RATING_NAMES, type RatingName } from '../../engine/propulsion/propulsionModel';
+import { crossoverSeries } from '../charts/crossoverSeries';
+import { ChoiceField } from '../components/ChoiceField';
+import { FailureNotice } from '../components/IssueList';
+import { LineChartPanel, type ChartSize } from '../components/LineChartPanel';
+import { LocalQuantityField } from '../components/LocalQuantityField';
+import { useStudy } from '../state/studyContext';
+import type { CrossoverRequestQuery } from '../worker/engineProtocol';
+import { useEngineJob, type LiveStudy } from '../worker/useEngine';
+
+const FT = 0.3048;
+
+/** Thrust available and drag against Mach at a chosen altitude, mass and rating, with the crossovers and thrust minimum marked. */
+export function CrossoverView(props: { readonly live: LiveStudy; readonly chartSize?: ChartSize }) {
+  const { state } = useStudy();
+  const project = state.doc!.present;
+  const firstCruise = project.mission.legs.find((l) => l.kind === 'cruise');
+  const [altitude_m, setAltitude] = useState(firstCruise?.kind === 'cruise' ? firstCruise.altitude : 35000 * FT);
+  const [mass_kg, setMass] = useState(0.9 * project.airframe.weights.maxTakeoff);
+  const [rating, setRating] = useState<RatingName>('maxCruise');
+  const [allInlets, setAllInlets] = useState(false);
+  const job = useEngineJob<'crossover'>();
+  const query = useMemo<CrossoverRequestQuery>(() => ({ altitude_m, mass_kg, rating, isaDev_K: project.mission.isaDeviation, allInlets }), [altitude_m, mass_kg, rating, allInlets, project.mission.isaDeviation]);
+  const { start } = job;
+  useEffect(() => {
+    start({ kind: 'crossover', project, deckFile: state.deckFile, query });
+  }, [start, project, state.deckFile, query]);
+  const u = state.units;
+  const s = job.state;
+  const plot = s.status === 'done' ? crossoverSeries(s.value, u) : null;
+  return (
+    <section>
+      <h2>Thrust against drag</h2>
+      <div className="field-grid">
+        <LocalQuantityField label="Pressure altitude" value_si={altitude_m} unit="altitude" units={u} testId="field-crossover-altitude" onValue={setAltitude} />
+        <LocalQuantityField label="Aircraft mass" value_si={mass_kg} unit="mass" units={u} testId="field-crossover-mass" onValue={setMass} />
+        <ChoiceField label="Rating" testId="crossover-rating" value={rating} choices={RATING_NAMES.map((r) => ({ value: r, label: r }))} onChoose={setRating} />
+        <label className="toggle">
+          <input type="checkbox" data-testid="crossover-all-inlets" checked={allInlets} onChange={(e) => setAllInlets(e.target.checked)} /> Every inlet design
+        </label>
+      </div>
+      {s.status === 'failed' ? <FailureNotice failure={s.failure} testId="crossover-failure" /> : null}
+      {s.status === 'running' ? <p>Computing…</p> : null}
+      {plot && s.status === 'done' ? (
+        <>
+          {s.value.curves.map(({ inletName, result }) => (
+            <p key={inletName} data-testid="crossover-message">
+              {inletName}: {result.message}
+            </p>
+          ))}
+          <LineChartPanel
+            title="Thrust available and drag in level flight"
+            testId="chart-crossover"
+            data={plot.rows}
+            xKey="mach"
+            xLabel="Mach"
+            yLabel={`force (${plot.unit})`}
+            series={plot.series}
+            dashed={(k) => k.startsWith('d')}
+            verticalMarks={plot.markers.map((m) => ({ x: m.mach, label: m.what }))}
+            {...(props.chartSize ? { size: props.chartSize } : {})}
+          />
+          <table data-testid="crossover-markers">
+            <thead>
+              <tr>
+                <th>Inlet</th>
+                <th>Point</th>
+                <th>Mach</th>
+              </tr>
+            </thead>
+            <tbody>
+              {plot.markers.map((m) => (
+                <tr key={`${m.inletName}-${m.what}`}>
+                  <td>{m.inletName}</td>
+                  <td>{m.what}</td>
+                  <td>{m.mach.toFixed(3)}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </>
+      ) : null}
+    </section>
+  );
+}

@@ -1,0 +1,136 @@
+import { formatQuantity } from '../../engine/units/quantity';
+import { lapseSeries } from '../charts/lapseSeries';
+import { FailureNotice } from '../components/IssueList';
+import { LineChartPanel, type ChartSize } from '../components/LineChartPanel';
+import { QuantityField } from '../components/QuantityField';
+import { StaleMark } from '../components/StaleMark';
+import type { ToolbarCommand } from '../components/Toolbar';
+import { useStudy } from '../state/studyContext';
+import type { LiveStudy } from '../worker/useEngine';
+
+/** The deck (import, errors by line and column, grid summary), the installation, and thrust lapse and TSFC plots. */
+export function EngineView(props: { readonly live: LiveStudy; readonly chartSize?: ChartSize; readonly onCommand?: (command: ToolbarCommand) => void }) {
+  const { state } = useStudy();
+  const project = state.doc!.present;
+  const deckSource = project.engine.deck;
+  const { snapshot, failure } = props.live;
+  const u = state.units;
+  const deckErrors = failure?.kind === 'deck' ? failure.errors : [];
+  const lapse = snapshot ? lapseSeries(snapshot.lapse, u) : null;
+  const size = props.chartSize ? { size: props.chartSize } : {};
+  return (
+    <section>
+      <h2>Engine deck and installation</h2>
+      <p>
+        Deck source: {deckSource.kind === 'file' ? `file ${deckSource.path}` : deckSource.kind === 'parametric' ? `parametric (${deckSource.title})` : 'embedded in the project'}
+        {state.deckFile ? ` — loaded ${state.deckFile.name}` : ''}{' '}
+        <button type="button" data-testid="engine-import-deck" onClick={() => props.onCommand?.('importDeck')}>
+          Import deck file…
+        </button>
+      </p>
+      {deckErrors.length > 0 ? (
+        <section className="issues" data-testid="deck-errors" role="alert">
+          <h3>The deck file has {deckErrors.length} error{deckErrors.length === 1 ? '' : 's'}</h3>
+          <table>
+            <thead>
+              <tr>
+                <th>Line</th>
+                <th>Column</th>
+                <th>Problem</th>
+              </tr>
+            </thead>
+            <tbody>
+              {deckErrors.map((e, k) => (
+                <tr key={k} data-testid={`deck-error-${k}`}>
+                  <td>{e.line ?? '—'}</td>
+                  <td>{e.column ?? '—'}</td>
+                  <td>{e.message}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </section>
+      ) : (
+        <FailureNotice failure={failure} testId="engine-failure" />
+      )}
+      {snapshot ? (
+        <dl className="deck-summary" data-testid="deck-summary">
+          <dt>Title</dt>
+          <dd>
+            {snapshot.deck.title}
+            {snapshot.deck.parametric ? ' (parametric)' : ''}
+          </dd>
+          <dt>Points</dt>
+          <dd>{snapshot.deck.points}</dd>
+          <dt>Altitudes</dt>
+          <dd>
+            {snapshot.deck.altitudeCount} from {formatQuantity(snapshot.deck.altitudes_m[0], 'altitude', u)} to {formatQuantity(snapshot.deck.altitudes_m[1], 'altitude', u)}
+          </dd>
+          <dt>Mach</dt>
+          <dd>
+            {snapshot.deck.machs[0]} to {snapshot.deck.machs[1]}
+          </dd>
+          <dt>Power setting</dt>
+          <dd>
+            {snapshot.deck.powers[0]} to {snapshot.deck.powers[1]}
+          </dd>
+          <dt>Ratings</dt>
+          <dd>{snapshot.deck.ratings.map((r) => `${r.name} ${r.power}`).join(', ')}</dd>
+          <dt>Reference recovery</dt>
+          <dd>{snapshot.deck.referenceRecovery}</dd>
+          <dt>Airflow column</dt>
+          <dd>{snapshot.deck.hasAirflow ? 'yes' : 'no (spillage drag not computed)'}</dd>
+        </dl>
+      ) : null}
+      <div className="field-grid">
+        <fieldset>
+          <legend>Installation</legend>
+          <QuantityField label="Engines" path={['engine', 'count']} unit="dimensionless" testId="field-engine-count" />
+          {project.engine.installation.bleed.kind === 'coreFraction' ? (
+            <QuantityField label="Customer bleed, fraction of core flow" path={['engine', 'installation', 'bleed', 'fraction']} unit="percent" testId="field-bleed" />
+          ) : (
+            <QuantityField label="Customer bleed" path={['engine', 'installation', 'bleed', 'massFlow']} unit="massFlow" testId="field-bleed" />
+          )}
+          <QuantityField label="Shaft power extraction per engine" path={['engine', 'installation', 'powerExtraction']} unit="power" testId="field-power-extraction" />
+          <QuantityField label="Ram-recovery factor C_ram (blank: default)" path={['engine', 'installation', 'ramRecoveryFactor']} unit="dimensionless" testId="field-c-ram" optional />
+        </fieldset>
+        {deckSource.kind === 'parametric' ? (
+          <fieldset>
+            <legend>Parametric deck</legend>
+            <QuantityField label="Sea-level static thrust" path={['engine', 'deck', 'seaLevelStaticThrust']} unit="force" testId="field-sls-thrust" />
+            <QuantityField label="Sea-level static TSFC" path={['engine', 'deck', 'seaLevelStaticTsfc']} unit="tsfc" testId="field-sls-tsfc" />
+            <QuantityField label="Sea-level static airflow" path={['engine', 'deck', 'seaLevelStaticAirflow']} unit="massFlow" testId="field-sls-airflow" />
+            <QuantityField label="Throttle ratio" path={['engine', 'deck', 'throttleRatio']} unit="dimensionless" testId="field-throttle-ratio" />
+          </fieldset>
+        ) : null}
+      </div>
+      <StaleMark stale={props.live.stale} running={props.live.running} />
+      {lapse ? (
+        <div className="chart-row">
+          <LineChartPanel
+            title={`Thrust at ${snapshot!.lapse.rating}, all engines, ISA: uninstalled (dashed) and installed with ${snapshot!.inletName}`}
+            testId="chart-thrust-lapse"
+            data={lapse.thrust}
+            xKey="mach"
+            xLabel="Mach"
+            yLabel={`thrust (${lapse.thrustUnit})`}
+            series={lapse.series}
+            dashed={(key) => key.startsWith('u')}
+            {...size}
+          />
+          <LineChartPanel
+            title="TSFC at the same rating: uninstalled (dashed) and installed"
+            testId="chart-tsfc"
+            data={lapse.tsfc}
+            xKey="mach"
+            xLabel="Mach"
+            yLabel={`TSFC (${lapse.tsfcUnit})`}
+            series={lapse.series}
+            dashed={(key) => key.startsWith('u')}
+            {...size}
+          />
+        </div>
+      ) : null}
+    </section>
+  );
+}

@@ -1,0 +1,82 @@
+import { formatQuantity } from '../../engine/units/quantity';
+import { inletSeries } from '../charts/inletSeries';
+import { ChoiceField } from '../components/ChoiceField';
+import { IssueList } from '../components/IssueList';
+import { LineChartPanel, type ChartSize } from '../components/LineChartPanel';
+import { QuantityField } from '../components/QuantityField';
+import { RowTableEditor } from '../components/RowTableEditor';
+import { StaleMark } from '../components/StaleMark';
+import { selectIssuesUnder } from '../state/selectors';
+import { useStudy } from '../state/studyContext';
+import type { LiveStudy } from '../worker/useEngine';
+
+/** The inlet designs' inputs, which one is flown, and recovery, spillage, throat and fan-face Mach against Mach. */
+export function InletsView(props: { readonly live: LiveStudy; readonly chartSize?: ChartSize }) {
+  const { state, dispatch } = useStudy();
+  const project = state.doc!.present;
+  const snapshot = props.live.snapshot;
+  const series = snapshot && snapshot.inlets.length > 0 ? inletSeries(snapshot.inlets, state.units) : null;
+  const size = props.chartSize ? { size: props.chartSize } : {};
+  return (
+    <section>
+      <h2>Inlet designs</h2>
+      <IssueList issues={selectIssuesUnder(state, 'inlets')} testId="project-issues" title="Rules the inlet designs break" />
+      <ChoiceField
+        label="Inlet flown in the mission"
+        testId="active-inlet"
+        value={project.activeInlet}
+        choices={project.inlets.map((i) => ({ value: i.name, label: i.name }))}
+        onChoose={(name) => dispatch({ type: 'valueSet', path: ['activeInlet'], value: name, label: `Fly inlet ${name}` })}
+      />
+      <div className="field-grid">
+        {project.inlets.map((inlet, n) => {
+          const base = ['inlets', n] as const;
+          const id = (f: string) => `field-inlet-${n}-${f}`;
+          return (
+            <fieldset key={n} data-testid={`inlet-${n}`} className={inlet.name === project.activeInlet ? 'active-design' : undefined}>
+              <legend>
+                {inlet.name}
+                {inlet.name === project.activeInlet ? ' (flown)' : ''}
+              </legend>
+              {inlet.description ? <p className="small">{inlet.description}</p> : null}
+              <QuantityField label="Capture area" path={[...base, 'source', 'captureArea']} unit="area" testId={id('capture')} />
+              {inlet.source.kind === 'geometry' ? (
+                <>
+                  <QuantityField label="Throat area" path={[...base, 'source', 'throatArea']} unit="area" testId={id('throat')} />
+                  <QuantityField label="Fan-face area" path={[...base, 'source', 'fanFaceArea']} unit="area" testId={id('fan-face')} />
+                  <QuantityField label="Diffuser loss coefficient" path={[...base, 'source', 'diffuserLossCoefficient']} unit="dimensionless" testId={id('diffuser-loss')} />
+                </>
+              ) : (
+                <RowTableEditor
+                  title="Recovery against Mach"
+                  path={[...base, 'source', 'rows']}
+                  prefix={`inlet-${n}-recovery`}
+                  columns={[
+                    { key: 'mach', label: 'Mach', unit: 'dimensionless', idPart: 'mach' },
+                    { key: 'recovery', label: 'Recovery', unit: 'dimensionless', idPart: '' },
+                  ]}
+                />
+              )}
+              <QuantityField label="Lip suction factor" path={[...base, 'lipSuctionFactor']} unit="dimensionless" testId={id('lip-suction')} />
+              <QuantityField label="External drag area D/q per engine" path={[...base, 'externalDragArea']} unit="area" testId={id('external-drag')} />
+              <QuantityField label="Weight per engine" path={[...base, 'weight']} unit="mass" testId={id('weight')} />
+            </fieldset>
+          );
+        })}
+      </div>
+      <StaleMark stale={props.live.stale} running={props.live.running} />
+      {series ? (
+        <>
+          <p className="small">
+            At {formatQuantity(snapshot!.inlets[0]!.altitude_m, 'altitude', state.units)} (first cruise altitude), maxCruise rating, ISA.
+          </p>
+          <div className="chart-row">
+            <LineChartPanel title="Total-pressure recovery against Mach" testId="chart-recovery" data={series.recovery} xKey="mach" xLabel="Mach" yLabel="recovery pt2/pt0" series={series.recoverySeries} dashed={(k) => k === 'ref'} {...size} />
+            <LineChartPanel title="Spillage drag per engine against Mach" testId="chart-spillage" data={series.spillage} xKey="mach" xLabel="Mach" yLabel={`spillage drag (${series.spillageUnit})`} series={series.spillageSeries} {...size} />
+            <LineChartPanel title="Throat and fan-face Mach against flight Mach" testId="chart-inlet-mach" data={series.internalMach} xKey="mach" xLabel="flight Mach" yLabel="internal Mach" series={series.machSeries} dashed={(k) => k.startsWith('f')} {...size} />
+          </div>
+        </>
+      ) : null}
+    </section>
+  );
+}

@@ -1,0 +1,127 @@
+/**
+ * Messages between the renderer and the engine worker. Requests carry the
+ * project (SI) and the deck file; replies carry plain data (structured clone).
+ */
+import type { CrossoverResult } from '../../engine/analysis/crossover';
+import type { InletComparisonResult } from '../../engine/analysis/inletComparison';
+import type { PayloadRangeResult } from '../../engine/analysis/payloadRange';
+import type { TradeFactorsResult } from '../../engine/analysis/tradeFactors';
+import type { MissionResult } from '../../engine/mission/missionTypes';
+import type { ProjectIssue } from '../../engine/project/projectIssue';
+import type { Project } from '../../engine/project/projectSchema';
+import type { DeckFileError } from '../../engine/propulsion/deckFileError';
+import type { RatingName } from '../../engine/propulsion/propulsionModel';
+import type { DeckFile } from '../state/studyState';
+
+export interface StudyInputs {
+  readonly project: Project;
+  readonly deckFile: DeckFile | null;
+}
+
+export interface CrossoverRequestQuery {
+  readonly altitude_m: number;
+  readonly mass_kg: number;
+  readonly rating: RatingName;
+  readonly isaDev_K: number;
+  /** Also compute the curves of every other inlet design. */
+  readonly allInlets: boolean;
+}
+
+export type EngineRequest =
+  | ({ readonly kind: 'study' } & StudyInputs)
+  | ({ readonly kind: 'crossover'; readonly query: CrossoverRequestQuery } & StudyInputs)
+  | ({ readonly kind: 'payloadRange' } & StudyInputs)
+  | ({ readonly kind: 'tradeFactors' } & StudyInputs)
+  | ({ readonly kind: 'compare'; readonly nameA: string; readonly nameB: string } & StudyInputs);
+
+export type EngineRequestKind = EngineRequest['kind'];
+
+/** CD against CL at several Mach numbers (the drag polar plot). */
+export interface PolarCurves {
+  readonly machs: readonly number[];
+  readonly cl: readonly number[];
+  /** cd[i][j] at machs[i], cl[j]. */
+  readonly cd: readonly (readonly number[])[];
+}
+
+/** Whole-aircraft thrust and TSFC at a rating against Mach, at several altitudes. */
+export interface LapseCurves {
+  readonly rating: RatingName;
+  readonly mach: readonly number[];
+  readonly altitudes_m: readonly number[];
+  /** [altitude][mach], N, all engines; NaN-free: null where the lookup failed. */
+  readonly uninstalledThrust_N: readonly (readonly (number | null)[])[];
+  readonly installedThrust_N: readonly (readonly (number | null)[])[];
+  readonly uninstalledTsfc_kg_N_s: readonly (readonly (number | null)[])[];
+  readonly installedTsfc_kg_N_s: readonly (readonly (number | null)[])[];
+}
+
+/** One inlet design's numbers against Mach at the cruise altitude and maxCruise rating. */
+export interface InletCurves {
+  readonly name: string;
+  readonly active: boolean;
+  readonly altitude_m: number;
+  readonly mach: readonly number[];
+  readonly recovery: readonly (number | null)[];
+  readonly referenceRecovery: readonly (number | null)[];
+  /** Per engine (N). */
+  readonly spillageDrag_N: readonly (number | null)[];
+  readonly throatMach: readonly (number | null)[];
+  readonly fanFaceMach: readonly (number | null)[];
+}
+
+export interface DeckSummary {
+  readonly title: string;
+  readonly parametric: boolean;
+  readonly points: number;
+  readonly altitudes_m: readonly [number, number];
+  readonly altitudeCount: number;
+  readonly machs: readonly [number, number];
+  readonly powers: readonly [number, number];
+  readonly ratings: readonly { readonly name: string; readonly power: number }[];
+  readonly referenceRecovery: string;
+  readonly hasAirflow: boolean;
+  readonly notes: readonly string[];
+}
+
+export interface StudySnapshot {
+  readonly mission: MissionResult;
+  readonly inletName: string;
+  readonly deck: DeckSummary;
+  readonly polar: PolarCurves;
+  readonly lapse: LapseCurves;
+  readonly inlets: readonly InletCurves[];
+}
+
+export interface CrossoverSet {
+  readonly curves: readonly { readonly inletName: string; readonly result: CrossoverResult }[];
+}
+
+export interface EngineReplies {
+  readonly study: StudySnapshot;
+  readonly crossover: CrossoverSet;
+  readonly payloadRange: PayloadRangeResult;
+  readonly tradeFactors: TradeFactorsResult;
+  readonly compare: InletComparisonResult;
+}
+
+/** Why a request produced no result: the project's issues, the deck file's errors, or an analysis error. */
+export type EngineFailure =
+  | { readonly kind: 'project'; readonly issues: readonly ProjectIssue[] }
+  | { readonly kind: 'deck'; readonly errors: readonly DeckFileError[] }
+  | { readonly kind: 'analysis'; readonly code: string; readonly message: string };
+
+export type EngineOutcome<K extends EngineRequestKind> =
+  | { readonly ok: true; readonly value: EngineReplies[K] }
+  | { readonly ok: false; readonly failure: EngineFailure };
+
+/** Main thread -> worker. */
+export interface WorkerRequestMessage {
+  readonly id: number;
+  readonly request: EngineRequest;
+}
+
+/** Worker -> main thread. */
+export type WorkerReplyMessage =
+  | { readonly id: number; readonly type: 'progress'; readonly done: number; readonly total: number }
+  | { readonly id: number; readonly type: 'done'; readonly outcome: EngineOutcome<EngineRequestKind> };

@@ -1,0 +1,68 @@
+/** A Bridge for component tests: the demo files from fixtures/demo, recorded exports and prints. */
+import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import type { Bridge, DemoFiles, OpenedDeck, OpenedProject } from '../../../renderer/bridge/bridge';
+
+const root = resolve(import.meta.dirname, '../../..');
+
+export function demoFiles(): DemoFiles {
+  return {
+    projectName: 'demo.blockwise.json',
+    projectText: readFileSync(resolve(root, 'fixtures/demo/demo.blockwise.json'), 'utf8'),
+    deckName: 'demo-engine.deck.csv',
+    deckText: readFileSync(resolve(root, 'fixtures/demo/demo-engine.deck.csv'), 'utf8'),
+  };
+}
+
+export function fixtureText(path: string): string {
+  return readFileSync(resolve(root, path), 'utf8');
+}
+
+export interface FakeBridge extends Bridge {
+  readonly exports: { text: string; name: string; mime: string }[];
+  readonly saves: { text: string; name: string }[];
+  readonly prints: string[];
+  nextDeck: OpenedDeck | null;
+  nextProject: OpenedProject | null;
+}
+
+export function createFakeBridge(): FakeBridge {
+  const bridge: FakeBridge = {
+    kind: 'browser',
+    exports: [],
+    saves: [],
+    prints: [],
+    nextDeck: null,
+    nextProject: null,
+    openProject: async () => bridge.nextProject,
+    openRecent: async () => {
+      throw new Error('no recent files in tests');
+    },
+    initialDocument: async () => null,
+    saveProject: async (text, name) => {
+      bridge.saves.push({ text, name });
+      return { name };
+    },
+    saveProjectAs: async (text, name) => {
+      bridge.saves.push({ text, name });
+      return { name };
+    },
+    importDeck: async () => bridge.nextDeck,
+    exportText: async (text, name, mime) => {
+      bridge.exports.push({ text, name, mime });
+      return { name };
+    },
+    printReport: async (name) => {
+      bridge.prints.push(name);
+      return { name };
+    },
+    recentFiles: async () => [],
+    loadDemo: async () => demoFiles(),
+    autosave: async () => undefined,
+    recoveryOffer: async () => null,
+    discardRecovery: async () => undefined,
+    setDocumentState: async () => undefined,
+    onMenuCommand: () => () => undefined,
+  };
+  return bridge;
+}
