@@ -62,7 +62,14 @@ export function projectDeck(project: Project, resources: { readonly deck?: Engin
     return ok(resources.deck);
   }
   if (d.kind === 'embedded') {
-    const deck = parseDeckJson(JSON.stringify(d.deck), 'engine.deck.deck');
+    let text: string;
+    try {
+      text = JSON.stringify(d.deck);
+    } catch {
+      // Nesting deeper than JSON.stringify's stack: a corrupt or hostile file, not a deck.
+      return err([makeIssue('engine.deck.deck', '{...}', 'a deck in the JSON deck form', 'the embedded deck is nested too deeply to be a deck (docs/deck-format.md)')]);
+    }
+    const deck = parseDeckJson(text, 'engine.deck.deck');
     if (!deck.ok) {
       return err(deck.error.map((e) => makeIssue(`engine.deck.deck${e.column ? `.${e.column}` : ''}`, e.value ?? '', e.expected, e.message)));
     }

@@ -41,7 +41,14 @@ export function showValue(value: unknown): string {
   if (value === undefined) return '(missing)';
   let text: string;
   if (typeof value === 'number' && !Number.isFinite(value)) text = String(value);
-  else text = JSON.stringify(value) ?? String(value);
+  else {
+    try {
+      text = JSON.stringify(value) ?? String(value);
+    } catch {
+      // Nesting deeper than JSON.stringify's stack (a corrupt or hostile file): show only the container kind.
+      text = Array.isArray(value) ? '[...]' : '{...}';
+    }
+  }
   return text.length > 60 ? `${text.slice(0, 57)}...` : text;
 }
 

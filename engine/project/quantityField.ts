@@ -7,6 +7,7 @@
 import { z } from 'zod';
 import { DIMENSION_EXAMPLES, DIMENSION_PHRASE, SI_UNIT } from '../units/dimension';
 import { parseQuantity, type Dimension } from '../units/quantity';
+import { showValue } from './projectIssue';
 
 /** What a field of a dimension expects, with examples and the SI unit of a bare number (for messages and docs). */
 export function expectedText(dimension: Dimension): string {
@@ -44,7 +45,7 @@ export function quantity(dimension: Dimension, bounds?: QuantityBounds) {
         return z.NEVER;
       }
       if (typeof input !== 'number' && typeof input !== 'string') {
-        ctx.issues.push({ code: 'custom', input, message: `${JSON.stringify(input)} is not a number or a quantity string; expected ${expected}`, params: { expected } });
+        ctx.issues.push({ code: 'custom', input, message: `${showValue(input)} is not a number or a quantity string; expected ${expected}`, params: { expected } });
         return z.NEVER;
       }
       if (typeof input === 'number' && !Number.isFinite(input)) {
