@@ -19,6 +19,7 @@ export type MissionCautionId =
   | 'reserve_below_minimum'
   | 'deck_extrapolation'
   | 'throat_mach_high'
+  | 'polar_table_clamped'
   | 'thrust_below_drag'
   | 'climb_not_reached'
   | 'descent_thrust_below_idle'
@@ -134,6 +135,14 @@ export const CAUTION_CATALOGUE: Readonly<Record<MissionCautionId, CautionEntry>>
     defaultThreshold: S.maxThroatMach,
     unit: '-',
     source: 'About 0.8 throat Mach, common practice in inlet sizing; also passed through from the propulsion model',
+  },
+  polar_table_clamped: {
+    id: 'polar_table_clamped',
+    title: 'Drag polar read outside its tables (clamped)',
+    severity: 'caution',
+    defaultThreshold: null,
+    unit: '-',
+    source: "The polar's out-of-range policy (engine/aero): clamped at the table edge; raised first time per leg",
   },
   thrust_below_drag: {
     id: 'thrust_below_drag',

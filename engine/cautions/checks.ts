@@ -116,3 +116,15 @@ export function checkThrustBelowDrag(thrustAvailable_N: number, thrustRequired_N
       )
     : null;
 }
+
+/** The drag polar left one of its tables and clamped (names of the tables); empty passes. */
+export function checkPolarClamped(outsideTables: readonly string[]): CautionDraft | null {
+  return outsideTables.length > 0
+    ? draft(
+        'polar_table_clamped',
+        `The drag polar was read outside its ${outsideTables.join(', ')} table${outsideTables.length > 1 ? 's' : ''} and clamped at the edge.`,
+        outsideTables.length,
+        0,
+      )
+    : null;
+}

@@ -55,6 +55,7 @@ function allowanceSample(altitude_m: number, fuelFlow_kg_s: number, point: Insta
     liftToDrag: 0,
     climbRate_m_s: 0,
     throatMach: point?.perEngine.throatMach ?? null,
+    polarOutside: [],
     propulsionCautions: point?.cautions ?? [],
   };
 }

@@ -71,6 +71,7 @@ export function makeSample(
     liftToDrag: at.drag.liftToDrag,
     climbRate_m_s,
     throatMach: engine.perEngine.throatMach,
+    polarOutside: at.drag.outsideTables ?? [],
     propulsionCautions: engine.cautions,
   };
 }

@@ -8,6 +8,7 @@ import {
   checkBuffetMargin,
   checkClMax,
   checkMmo,
+  checkPolarClamped,
   checkThroatMach,
   checkVmo,
   type CautionDraft,
@@ -91,6 +92,7 @@ export function appendSample(log: FlightLog, target: LegTarget, state: StateVect
     appendCaution(log, target, checkBuffetMargin(sample.buffetLoadFactor, s.minBuffetLoadFactor), t);
   }
   appendCaution(log, target, checkThroatMach(sample.throatMach, log.settings.maxThroatMach), t);
+  appendCaution(log, target, checkPolarClamped(sample.polarOutside), t);
   for (const c of sample.propulsionCautions) {
     if (c.id === 'deck_extrapolation' && !log.settings.cautionOnDeckExtrapolation) continue;
     appendCaution(log, target, c, t);

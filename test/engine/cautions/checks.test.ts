@@ -7,6 +7,7 @@ import {
   checkMmo,
   checkMtow,
   checkMzfw,
+  checkPolarClamped,
   checkReserve,
   checkResidualClimb,
   checkThroatMach,
@@ -61,6 +62,11 @@ describe('checks', () => {
   it('checkReserve scales the required reserve by the fraction', () => {
     expect(checkReserve(1999, 2500, 0.8)).not.toBeNull();
     expect(checkReserve(2000, 2500, 0.8)).toBeNull();
+  });
+
+  it('checkPolarClamped fires when any polar table was left and passes when none was', () => {
+    expect(checkPolarClamped([])).toBeNull();
+    expect(checkPolarClamped(['cd0', 'clMax'])?.message).toMatch(/cd0, clMax tables/);
   });
 
   it('checkThroatMach passes when the installation does not compute a throat Mach', () => {

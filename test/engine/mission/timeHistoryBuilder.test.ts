@@ -53,12 +53,20 @@ describe('timeHistoryBuilder', () => {
     expect(r.cautions.some((c) => c.id === 'cl_above_clmax')).toBe(true);
   });
 
+  it('raises polar_table_clamped once per leg when the polar reports a table it clamped on', () => {
+    const aero = parabolicAero(0.022, 0.045, { wingArea_m2: 120, outsideTables: ['compressibility'] });
+    const r = solveMission(missionInput({ legs: demoLegs(1_000_000), solve: { kind: 'takeoffWeight', takeoffMass_kg: 70000, payload_kg: 10000 }, aero }));
+    const clamped = r.cautions.filter((c) => c.id === 'polar_table_clamped');
+    expect(clamped.length).toBe(new Set(clamped.map((c) => c.legIndex)).size);
+    expect(clamped.find((c) => c.legName === 'cruise')?.message).toMatch(/compressibility/);
+  });
+
   it('fills every history column with one finite sample per step', () => {
     const r = solveMission(missionInput({ legs: demoLegs(1_500_000), solve: { kind: 'takeoffWeight', takeoffMass_kg: 70000, payload_kg: 10000 } }));
     const n = r.history.time_s.length;
     for (const [name, col] of Object.entries(r.history)) {
       expect(col.length, name).toBe(n);
-      for (const v of col as ArrayLike<number>) expect(Number.isFinite(v), name).toBe(true);
+      for (const v of Array.from(col as ArrayLike<number>)) expect(Number.isFinite(v), name).toBe(true);
     }
     for (let i = 1; i < n; i++) expect(r.history.time_s[i]).toBeGreaterThanOrEqual(r.history.time_s[i - 1]);
     expect(r.history.altitude_m.reduce((a, b) => Math.max(a, b), 0)).toBeCloseTo(35000 * FT, 6);

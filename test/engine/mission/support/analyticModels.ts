@@ -24,6 +24,8 @@ export interface AeroOptions {
   readonly wingArea_m2?: number;
   readonly clMax?: number;
   readonly buffetCl?: number;
+  /** Polar tables reported as left (to test the caution pass-through). */
+  readonly outsideTables?: readonly string[];
 }
 
 function breakdown(q: DragQuery, cd: number, cd0: number, area: number, liftToDrag: number | null, opts: AeroOptions): DragBreakdown {
@@ -46,6 +48,7 @@ function breakdown(q: DragQuery, cd: number, cd0: number, area: number, liftToDr
     buffetCl,
     buffetLoadFactor: cl > 0 ? buffetCl / cl : 99,
     clMax: opts.clMax ?? 1.5,
+    outsideTables: opts.outsideTables ?? [],
   };
 }
 
