@@ -9,6 +9,7 @@ import { deckFileError, type DeckFileError } from './deckFileError';
 import { deckGridPoints, type DeckGridPoint } from './deckGrid';
 import { DEFAULT_DECK_POLICY, type EngineDeck } from './engineDeck';
 import { RATING_NAMES, type RatingName } from './propulsionModel';
+import { parseJsonText } from '../project/jsonText';
 
 const JSON_COLUMNS = ['altitude_m', 'mach', 'power', 'thrust_N', 'fuelFlow_kg_s', 'airflow_kg_s', 'isaDev_K'] as const;
 type JsonColumn = (typeof JSON_COLUMNS)[number];
@@ -85,8 +86,10 @@ export function parseDeckJson(text: string, sourceName: string): Result<EngineDe
   let raw: unknown;
   try {
     raw = JSON.parse(text);
-  } catch (e) {
-    const what = e instanceof Error ? e.message : String(e);
+  } catch {
+    // Locate the first offending character (line, column) with the project's JSON scanner.
+    const located = parseJsonText(text);
+    const what = located.ok ? 'the JSON parser refused it' : located.error.message;
     return err([deckFileError(src, 'bad_json', null, null, null, 'valid JSON', `not valid JSON: ${what}`)]);
   }
   const parsed = deckJsonSchema.safeParse(raw);
