@@ -116,3 +116,16 @@ for order in perms:
         state[i] = 1
         shares[i] += (v(state) - before) / len(perms)
 print("shapley_shares =", ", ".join(f"{x:.12f}" for x in shares))
+
+# 7. Service (100 ft/min) and cruise (300 ft/min) ceilings, same model as 4 (common practice
+#    residual rates): max over Mach of Ps = (T - D) M a / (m g0) equals the residual rate.
+def max_ps(hh, m=60000.0):
+    r = minimize_scalar(lambda M: -((mattingly(hh, M, 160e3) - drag(hh, M, m, 0.78)) * M * sound(hh) / (m * G0)),
+                        bounds=(0.2, 0.95), method="bounded", options={"xatol": 1e-12})
+    return -r.fun
+
+
+for name, rate_fpm in (("service", 100.0), ("cruise", 300.0)):
+    rate = rate_fpm * 0.3048 / 60
+    hc = brentq(lambda hh: max_ps(hh) - rate, 6000.0, 12000.0, xtol=1e-9)
+    print(f"mattingly_{name}_ceiling_60t_m = {hc:.6f}")

@@ -13,10 +13,13 @@ const query = { mass_kg: 60000, rating: 'maxCruise' as const, isaDev_K: 0, altit
 const env = expectOk(flightEnvelope(models, query), 'envelope');
 
 describe('flightEnvelope', () => {
-  it('flightEnvelope finds the absolute ceiling of the scipy reference', () => {
+  it('flightEnvelope finds the absolute, service and cruise ceilings of the scipy reference', () => {
     const abs = env.ceilings.find((c) => c.name === 'absolute')!;
     // test/reference/analysisReference.py (scipy brentq on max over Mach of T - D): 9956.560136 m
     expectClose(abs.altitude_m!, 9956.560136, { abs: 0.05 }, 'scipy reference');
+    // test/reference/analysisReference.py: service (100 ft/min) 9676.708104 m, cruise (300 ft/min) 9126.187228 m
+    expectClose(env.ceilings[1]!.altitude_m!, 9676.708104, { abs: 0.05 }, 'scipy reference');
+    expectClose(env.ceilings[2]!.altitude_m!, 9126.187228, { abs: 0.05 }, 'scipy reference');
   });
 
   it('flightEnvelope ceilings agree with the climb rate computed at them', () => {
