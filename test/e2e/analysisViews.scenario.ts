@@ -20,13 +20,14 @@ describe('analysis views', () => {
     await openDemo(page);
 
     await showView(page, 'crossover');
-    await page.locator('[data-testid="view-crossover"] svg.recharts-surface').first().waitFor({ state: 'visible', timeout: 30_000 });
+    await page.locator('[data-testid="chart-crossover"] svg').first().waitFor({ state: 'visible', timeout: 30_000 });
     expect(await page.getByTestId('safety-notice').isVisible()).toBe(true);
     await screenshot(page, 'crossover-demo');
 
     await showView(page, 'compare');
-    const names = page.getByTestId('compare-design-name');
-    await names.first().waitFor({ state: 'visible', timeout: 30_000 });
+    await page.getByTestId('compare-run').click();
+    const names = page.locator('[data-testid^="compare-design-name-"]');
+    await names.first().waitFor({ state: 'visible', timeout: 60_000 });
     const texts = (await names.allTextContents()).map((t) => t.trim());
     expect(texts.length).toBe(2);
     expect(texts[0]).not.toBe('');

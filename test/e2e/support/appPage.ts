@@ -1,24 +1,29 @@
-import type { Page } from 'playwright-core';
+import type { Locator, Page } from 'playwright-core';
+
+/** The results view's block fuel (the printable report repeats the same test id, hidden on screen). */
+export function blockFuel(page: Page): Locator {
+  return page.getByTestId('view-results').getByTestId('headline-block-fuel');
+}
 
 /**
  * Reads the first number in an element's text ("12,345 lb" -> 12345).
  * Fails with the text when there is none.
  */
-export async function readNumber(page: Page, testId: string): Promise<number> {
-  const text = (await page.getByTestId(testId).textContent()) ?? '';
+export async function readNumber(target: Locator): Promise<number> {
+  const text = (await target.textContent()) ?? '';
   const match = /-?\d[\d,\u202f\u00a0 ]*(?:\.\d+)?/.exec(text);
-  if (match === null) throw new Error(`no number in [data-testid=${testId}]: "${text}"`);
+  if (match === null) throw new Error(`no number in ${target.toString()}: "${text}"`);
   return Number(match[0].replace(/[,\u202f\u00a0 ]/g, ''));
 }
 
 /** Waits until the element's number differs from `previous` and returns it. */
-export async function waitForNumberChange(page: Page, testId: string, previous: number, timeout_ms = 30_000): Promise<number> {
+export async function waitForNumberChange(target: Locator, previous: number, timeout_ms = 30_000): Promise<number> {
   const deadline = Date.now() + timeout_ms;
   for (;;) {
-    const value = await readNumber(page, testId).catch(() => previous);
+    const value = await readNumber(target).catch(() => previous);
     if (value !== previous) return value;
-    if (Date.now() > deadline) throw new Error(`[data-testid=${testId}] stayed at ${previous} for ${timeout_ms} ms`);
-    await page.waitForTimeout(100);
+    if (Date.now() > deadline) throw new Error(`${target.toString()} stayed at ${previous} for ${timeout_ms} ms`);
+    await target.page().waitForTimeout(100);
   }
 }
 
@@ -28,16 +33,23 @@ export async function showView(page: Page, viewId: string): Promise<void> {
   await page.getByTestId(`view-${viewId}`).waitFor({ state: 'attached' });
 }
 
-/** Opens the bundled demo project (button `open-demo`) unless a project is already shown, and waits for the block fuel. */
+/**
+ * Makes sure the demo study is open (the browser build opens it on start;
+ * otherwise the toolbar's demo command does), shows the results view and
+ * waits for a block fuel figure.
+ */
 export async function openDemo(page: Page): Promise<void> {
-  const headline = page.getByTestId('headline-block-fuel');
-  const demoButton = page.getByTestId('open-demo');
-  await headline.or(demoButton).first().waitFor({ state: 'visible', timeout: 30_000 });
-  if (!(await headline.isVisible())) await demoButton.click();
+  const headline = blockFuel(page);
+  await page.getByTestId('command-openDemo').waitFor({ state: 'visible', timeout: 30_000 });
   await showView(page, 'results');
-  await headline.waitFor({ state: 'visible', timeout: 30_000 });
+  try {
+    await headline.waitFor({ state: 'visible', timeout: 15_000 });
+  } catch {
+    await page.getByTestId('command-openDemo').click();
+    await headline.waitFor({ state: 'visible', timeout: 30_000 });
+  }
   await page.waitForFunction(
-    () => /\d/.test(document.querySelector('[data-testid="headline-block-fuel"]')?.textContent ?? ''),
+    () => /\d/.test(document.querySelector('[data-testid="view-results"] [data-testid="headline-block-fuel"]')?.textContent ?? ''),
     undefined,
     { timeout: 30_000 },
   );

@@ -26,7 +26,7 @@ describe('importing a deck', () => {
     await openDemo(page);
     await showView(page, 'engine');
     const chooser = page.waitForEvent('filechooser');
-    await page.getByTestId('import-deck').click();
+    await page.getByTestId('command-importDeck').click();
     await (await chooser).setFiles(resolve(badDecks, 'non-numeric-cell.csv'));
     const errors = page.getByTestId('deck-errors');
     await errors.waitFor({ state: 'visible' });

@@ -1,6 +1,6 @@
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { openDemo, readNumber, showView, waitForNumberChange } from './support/appPage';
+import { blockFuel, openDemo, readNumber, showView, waitForNumberChange } from './support/appPage';
 import { launchChromium, openApp, screenshot } from './support/chromium';
 
 // Drag polar CD = CD0 + K(CL - CLmd)^2 (Raymer, ch. 12): a higher CD0 means
@@ -20,7 +20,7 @@ describe('editing the demo project', () => {
   it('raising CD0 raises block fuel and undo brings it back', async () => {
     const { page, problems } = await openApp(browser, inject('baseUrl'));
     await openDemo(page);
-    const before = await readNumber(page, 'headline-block-fuel');
+    const before = await readNumber(blockFuel(page));
     expect(before).toBeGreaterThan(0);
 
     await showView(page, 'airframe');
@@ -32,12 +32,12 @@ describe('editing the demo project', () => {
     await screenshot(page, 'edit-cd0');
 
     await showView(page, 'results');
-    const after = await waitForNumberChange(page, 'headline-block-fuel', before);
+    const after = await waitForNumberChange(blockFuel(page), before);
     expect(after).toBeGreaterThan(before);
 
     await page.locator('body').click({ position: { x: 5, y: 5 } });
     await page.keyboard.press('Control+z');
-    const undone = await waitForNumberChange(page, 'headline-block-fuel', after);
+    const undone = await waitForNumberChange(blockFuel(page), after);
     expect(undone).toBe(before);
     await showView(page, 'airframe');
     expect(Number(await page.getByTestId('field-cd0-0').inputValue())).toBe(cd0Before);

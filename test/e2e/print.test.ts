@@ -1,0 +1,38 @@
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { openDemo } from './support/appPage';
+import { launchChromium, openApp } from './support/chromium';
+
+// The report prints through a print stylesheet (DESIGN.md §2.7: export a
+// report as PDF; §7: every report carries the safety notice).
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe('printing', () => {
+  it('the page has print rules and the printed page keeps the safety notice and hides the tabs', async () => {
+    const { page } = await openApp(browser, inject('baseUrl'));
+    await openDemo(page);
+    const printRules = await page.evaluate(() => {
+      let count = 0;
+      for (const sheet of Array.from(document.styleSheets)) {
+        const sheetIsPrint = sheet.media.mediaText.includes('print');
+        for (const rule of Array.from(sheet.cssRules)) {
+          if (sheetIsPrint || (rule instanceof CSSMediaRule && rule.media.mediaText.includes('print'))) count += 1;
+        }
+      }
+      return count;
+    });
+    expect(printRules).toBeGreaterThan(0);
+    await page.emulateMedia({ media: 'print' });
+    expect(await page.getByTestId('safety-notice').isVisible()).toBe(true);
+    expect(await page.locator('[role="tablist"]').isVisible()).toBe(false);
+    const pdf = await page.pdf({ format: 'A4' });
+    expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
+  });
+});
