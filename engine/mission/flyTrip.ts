@@ -27,6 +27,8 @@ export interface TripOutcome {
   readonly landing: StateVector;
   /** Still-air distance flown on the solvable cruise leg (m), 0 when there is none. */
   readonly solvableDistance_m: number;
+  /** Still-air distance flown after the solvable cruise leg (m), 0 when there is none. */
+  readonly afterSolvable_m: number;
 }
 
 /** Index of the cruise leg whose distance is solved (distance_m null), or -1. */
@@ -48,6 +50,9 @@ export function initialState(rampMass_kg: number): StateVector {
   s[S_MASS] = rampMass_kg;
   return s;
 }
+
+/** The solvable leg's still-air distance (m), given the still-air distance flown when it starts (m). */
+export type SolvedDistance = number | ((airDistanceAtStart_m: number) => number);
 
 function flyLeg(ctx: MissionContext, index: number, state: StateVector, solvedDistance_m: number): LegOutcome {
   const leg = ctx.input.legs[index];
@@ -98,19 +103,21 @@ function flyLeg(ctx: MissionContext, index: number, state: StateVector, solvedDi
   }
 }
 
-/** Flies every leg from `rampMass_kg`; `solvedDistance_m` is the still-air distance of the solvable cruise leg. */
-export function flyTrip(ctx: MissionContext, rampMass_kg: number, solvedDistance_m: number): TripOutcome {
+/** Flies every leg from `rampMass_kg`; `solvedDistance` gives the still-air distance of the solvable cruise leg. */
+export function flyTrip(ctx: MissionContext, rampMass_kg: number, solvedDistance: SolvedDistance): TripOutcome {
   const { first, last } = tripBounds(ctx.input);
   const solvable = solvableLegIndex(ctx.input);
   let state = initialState(rampMass_kg);
   let takeoff = state;
   let landing = state;
   let solvableDistance_m = 0;
+  let solvableEnd_m = 0;
   const rows: LegRow[] = [];
   for (let i = 0; i < ctx.input.legs.length; i++) {
     if (i === first) takeoff = Float64Array.from(state);
     const start = state;
-    const out = flyLeg(ctx, i, state, Math.max(solvedDistance_m, 0));
+    const solved = i === solvable && typeof solvedDistance === 'function' ? solvedDistance(state[S_AIR]) : solvedDistance;
+    const out = flyLeg(ctx, i, state, typeof solved === 'number' && solved > 0 ? solved : 0);
     state = out.state;
     rows.push({
       index: i,
@@ -126,12 +133,16 @@ export function flyTrip(ctx: MissionContext, rampMass_kg: number, solvedDistance
       endMass_kg: state[S_MASS],
       fuel_kg: start[S_MASS] - state[S_MASS],
     });
-    if (i === solvable) solvableDistance_m = state[S_AIR] - start[S_AIR];
+    if (i === solvable) {
+      solvableDistance_m = state[S_AIR] - start[S_AIR];
+      solvableEnd_m = state[S_AIR];
+    }
     if (i === last) landing = Float64Array.from(state);
     if (out.status !== 'ok') {
-      return { status: out.status, message: out.message, rows, end: state, takeoff, landing: state, solvableDistance_m };
+      return { status: out.status, message: out.message, rows, end: state, takeoff, landing: state, solvableDistance_m, afterSolvable_m: 0 };
     }
   }
   if (last < first) landing = Float64Array.from(state);
-  return { status: 'ok', message: '', rows, end: state, takeoff, landing, solvableDistance_m };
+  const afterSolvable_m = solvable >= 0 ? state[S_AIR] - solvableEnd_m : 0;
+  return { status: 'ok', message: '', rows, end: state, takeoff, landing, solvableDistance_m, afterSolvable_m };
 }

@@ -16,7 +16,7 @@
 import { specificRange } from './bestSpeeds';
 import { cruiseMach } from './cruiseLeg';
 import { flyReserves, type ReserveFlight } from './reserves';
-import { flyTrip, solvableLegIndex, type TripOutcome } from './flyTrip';
+import { flyTrip, solvableLegIndex, type SolvedDistance, type TripOutcome } from './flyTrip';
 import { legEnvironment, type MissionContext } from './missionContext';
 import { S_AIR, S_MASS, S_TIME } from './missionState';
 import { createFlightLog } from './timeHistoryBuilder';
@@ -35,9 +35,9 @@ export interface MissionEvaluation {
   readonly residual_kg: number;
 }
 
-/** Flies trip and reserves from `rampMass_kg` with the solvable leg at `distance_m`. */
-export function evaluateMission(ctx: MissionContext, rampMass_kg: number, distance_m: number): MissionEvaluation {
-  const trip = flyTrip(ctx, rampMass_kg, distance_m);
+/** Flies trip and reserves from `rampMass_kg` with the solvable leg's distance given (or given by the distance flown so far). */
+export function evaluateMission(ctx: MissionContext, rampMass_kg: number, distance: SolvedDistance): MissionEvaluation {
+  const trip = flyTrip(ctx, rampMass_kg, distance);
   const tripFuel_kg = trip.takeoff[S_MASS] - trip.landing[S_MASS];
   const tripTime_s = trip.landing[S_TIME] - trip.takeoff[S_TIME];
   const reserves = flyReserves(ctx, { tripFuel_kg, tripTime_s, landing: trip.landing });
@@ -67,23 +67,33 @@ function failedFlight(e: MissionEvaluation): boolean {
   return e.trip.status !== 'ok' || e.reserves.status !== 'ok';
 }
 
-/** payloadRange: ramp mass (kg) and solvable distance (m) so the trip's still-air distance is `range_m` and the residual vanishes. */
+/**
+ * payloadRange: ramp mass (kg) so the residual vanishes while the trip's
+ * still-air distance is `range_m`: the solvable leg flies the range less the
+ * distance flown before it (known when it starts) and less the distance the
+ * legs after it took on the previous pass (within DISTANCE_TOLERANCE_M at
+ * convergence).
+ */
 export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess_kg: number): IterationOutcome {
+  let after = 0;
+  const distance = (flown_m: number) => Math.max(range_m - flown_m - after, 0);
   let x0 = firstGuess_kg;
-  let d = range_m;
-  let e0 = evaluateMission(scratch(ctx), x0, d);
+  let e0 = evaluateMission(scratch(ctx), x0, distance);
+  let d = e0.trip.solvableDistance_m;
   if (failedFlight(e0)) return { converged: false, rampMass_kg: x0, distance_m: d, iterations: 1, residual_kg: e0.residual_kg, failure: e0 };
-  let other = e0.trip.end[S_AIR] - e0.trip.solvableDistance_m;
-  let x1 = x0 - e0.residual_kg / 0.85;
+  after = e0.trip.afterSolvable_m;
+  // First slope: for a Breguet-like flight, d(block-in fuel)/d(ramp mass) = block-in mass / ramp mass.
+  const ratio = e0.trip.end[S_MASS] / x0;
+  let x1 = x0 - e0.residual_kg / (Number.isFinite(ratio) && ratio > 0.2 && ratio <= 1 ? ratio : 0.85);
   const guard = RAMP_MASS_GUARD * Math.max(ctx.input.airframe.mtow_kg, ctx.zeroFuelMass_kg + ctx.input.airframe.maxFuel_kg);
   for (let k = 2; k <= MAX_ITERATIONS; k++) {
     if (!Number.isFinite(x1) || x1 <= ctx.zeroFuelMass_kg * 0.5 || x1 > guard) {
       return { converged: false, rampMass_kg: x0, distance_m: d, iterations: k - 1, residual_kg: e0.residual_kg, failure: null };
     }
-    d = Math.max(range_m - other, 0);
-    const e1 = evaluateMission(scratch(ctx), x1, d);
+    const e1 = evaluateMission(scratch(ctx), x1, distance);
+    d = e1.trip.solvableDistance_m;
     if (failedFlight(e1)) return { converged: false, rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, failure: e1 };
-    other = e1.trip.end[S_AIR] - e1.trip.solvableDistance_m;
+    after = e1.trip.afterSolvable_m;
     const distanceError = e1.trip.end[S_AIR] - range_m;
     if (Math.abs(e1.residual_kg) <= FUEL_TOLERANCE_KG && Math.abs(distanceError) <= DISTANCE_TOLERANCE_M) {
       return { converged: true, rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, failure: null };
