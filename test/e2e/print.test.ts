@@ -1,10 +1,12 @@
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { SAFETY_NOTICE_LINES } from '../../engine/core/notice';
 import { openDemo } from './support/appPage';
 import { launchChromium, openApp } from './support/chromium';
 
 // The report prints through a print stylesheet (DESIGN.md §2.7: export a
-// report as PDF; §7: every report carries the safety notice).
+// report as PDF; §7: every report carries the safety notice). On screen the
+// report is hidden; in print only the report shows.
 
 let browser: Browser;
 beforeAll(async () => {
@@ -15,7 +17,7 @@ afterAll(async () => {
 });
 
 describe('printing', () => {
-  it('the page has print rules and the printed page keeps the safety notice and hides the tabs', async () => {
+  it('the page has print rules: the printed page is the report with the safety notice, without the screen', async () => {
     const { page } = await openApp(browser, inject('baseUrl'));
     await openDemo(page);
     const printRules = await page.evaluate(() => {
@@ -29,8 +31,13 @@ describe('printing', () => {
       return count;
     });
     expect(printRules).toBeGreaterThan(0);
+    const report = page.getByTestId('print-report');
+    expect(await report.isVisible()).toBe(false);
     await page.emulateMedia({ media: 'print' });
-    expect(await page.getByTestId('safety-notice').isVisible()).toBe(true);
+    expect(await report.isVisible()).toBe(true);
+    const notice = report.getByTestId('report-notice');
+    expect(await notice.isVisible()).toBe(true);
+    for (const line of SAFETY_NOTICE_LINES) expect(await notice.textContent()).toContain(line);
     expect(await page.locator('[role="tablist"]').isVisible()).toBe(false);
     const pdf = await page.pdf({ format: 'A4' });
     expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
