@@ -69,7 +69,8 @@ export function parseQuantity(input: string | number, expected: Dimension): Resu
   // A typographic minus (U+2212) reads as a hyphen-minus.
   const trimmed = text.trim().replace(/^\u2212/, '-');
   if (trimmed === '') return fail('empty', text, expected, 'empty value');
-  const quoted = JSON.stringify(trimmed);
+  // Messages quote the text, shortened so a pasted document does not become the message.
+  const quoted = JSON.stringify(trimmed.length > 60 ? `${trimmed.slice(0, 57)}...` : trimmed);
   const m = NUMBER_AND_UNIT.exec(trimmed);
   if (m === null) {
     return fail('not_a_number', text, expected, `${quoted} does not start with a number`);
