@@ -1,0 +1,96 @@
+import { describe, expect, it } from 'vitest';
+import type { LegRow, MissionResult, TimeHistory } from '../../../engine/mission/missionTypes';
+import { fileStem, historyCsv, legsCsv } from '../../../renderer/report/resultsCsv';
+
+/** RFC 4180 field splitter (quoted fields with doubled quotes), written here independently of the writer. */
+function splitCsvLine(line: string): string[] {
+  const out: string[] = [];
+  let field = '';
+  let quoted = false;
+  for (let i = 0; i < line.length; i++) {
+    const ch = line[i]!;
+    if (quoted) {
+      if (ch === '"' && line[i + 1] === '"') {
+        field += '"';
+        i++;
+      } else if (ch === '"') quoted = false;
+      else field += ch;
+    } else if (ch === '"') quoted = true;
+    else if (ch === ',') {
+      out.push(field);
+      field = '';
+    } else field += ch;
+  }
+  out.push(field);
+  return out;
+}
+
+function result(): MissionResult {
+  const n = 3;
+  const col = (f: (i: number) => number) => Float64Array.from({ length: n }, (_, i) => f(i));
+  const history: TimeHistory = {
+    time_s: col((i) => i * 10),
+    distance_m: col((i) => i * 1000),
+    altitude_m: col((i) => i * 100),
+    mach: col(() => 0.5),
+    cas_m_s: col(() => 100),
+    tas_m_s: col(() => 160),
+    mass_kg: col((i) => 9000 - i),
+    thrustAvailable_N: col(() => 20000),
+    thrustUsed_N: col(() => 15000),
+    drag_N: col(() => 14000),
+    fuelFlow_kg_s: col(() => 0.25),
+    cl: col(() => 0.45),
+    liftToDrag: col((i) => (i === 1 ? Number.NaN : 15)),
+    climbRate_m_s: col(() => 10),
+    legIndex: Int32Array.from([0, 0, 1]),
+  };
+  const leg = (index: number, name: string, kind: LegRow['kind']): LegRow => ({
+    index,
+    name,
+    kind,
+    startTime_s: 0,
+    endTime_s: 60,
+    startDistance_m: 0,
+    endDistance_m: 1000,
+    startAltitude_m: 0,
+    endAltitude_m: 100,
+    startMass_kg: 9000,
+    endMass_kg: 8990,
+    fuel_kg: 10,
+  });
+  return { history, legs: [leg(0, 'Climb, "fast"', 'climb'), leg(1, 'Final reserve', 'reserve')] } as unknown as MissionResult;
+}
+
+describe('historyCsv', () => {
+  it('writes one row per sample with units in the headers; a non-finite value is an empty cell', () => {
+    const lines = historyCsv(result()).trimEnd().split('\n');
+    expect(lines).toHaveLength(4);
+    const head = splitCsvLine(lines[0]!);
+    expect(head[0]).toBe('time[s]');
+    expect(head).toContain('fuel_flow[kg/s]');
+    const row = splitCsvLine(lines[2]!);
+    expect(row).toHaveLength(head.length);
+    expect(Number(row[head.indexOf('distance[m]')])).toBe(1000);
+    expect(row[head.indexOf('lift_to_drag[-]')]).toBe('');
+    expect(Number(splitCsvLine(lines[3]!)[head.indexOf('leg[-]')])).toBe(1);
+  });
+});
+
+describe('legsCsv', () => {
+  it('quotes names with commas and quotes (RFC 4180) and numbers reserve rows R', () => {
+    const lines = legsCsv(result()).trimEnd().split('\n');
+    const first = splitCsvLine(lines[1]!);
+    expect(first.slice(0, 3)).toEqual(['1', 'Climb, "fast"', 'climb']);
+    expect(splitCsvLine(lines[2]!)[0]).toBe('R');
+    expect(splitCsvLine(lines[0]!)).toHaveLength(first.length);
+  });
+});
+
+describe('fileStem', () => {
+  it('drops the project extension', () => {
+    expect(fileStem('demo.blockwise.json')).toBe('demo');
+    expect(fileStem('other.json')).toBe('other');
+    expect(fileStem('')).toBe('blockwise');
+  });
+});
