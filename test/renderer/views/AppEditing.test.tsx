@@ -1,0 +1,128 @@
+import { act, fireEvent, render, screen, waitFor } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import { SAFETY_NOTICE_LINES } from '../../../engine/core/notice';
+import { App } from '../../../renderer/App';
+import { createInThreadClient } from '../../../renderer/worker/engineClient';
+import { expectClose } from '../../support/assertInDelta';
+import { createFakeBridge, fixtureText } from '../support/fakeBridge';
+import { TEST_CHART } from '../support/studyHarness';
+
+function numberIn(text: string | null): number {
+  const m = /-?\d[\d,]*(?:\.\d+)?/.exec(text ?? '');
+  if (m === null) throw new Error(`no number in "${text}"`);
+  return Number(m[0].replace(/,/g, ''));
+}
+
+async function blockFuel(): Promise<number> {
+  const el = await screen.findByTestId('headline-block-fuel', {}, { timeout: 15000 });
+  return numberIn(el.textContent);
+}
+
+async function waitForChange(previous: number): Promise<number> {
+  let now = previous;
+  await waitFor(
+    () => {
+      now = numberIn(screen.getByTestId('headline-block-fuel').textContent);
+      expect(now).not.toBe(previous);
+    },
+    { timeout: 15000 },
+  );
+  return now;
+}
+
+function renderApp() {
+  const bridge = createFakeBridge();
+  render(<App bridge={bridge} engine={createInThreadClient()} chartSize={TEST_CHART} />);
+  return bridge;
+}
+
+describe('the App with the demo study', () => {
+  it('shows an invalid CD0 inline, keeps the last result, then re-flies a valid one; Ctrl+Z restores it', async () => {
+    renderApp();
+    const before = await blockFuel();
+    fireEvent.click(screen.getByTestId('view-tab-airframe'));
+    const cd0 = screen.getByTestId('field-cd0-0') as HTMLInputElement;
+    const cd0Before = Number(cd0.value);
+    expect(cd0Before).toBeGreaterThan(0);
+
+    fireEvent.change(cd0, { target: { value: '0.02 parsecs' } });
+    fireEvent.keyDown(cd0, { key: 'Enter' });
+    expect(screen.getByTestId('field-cd0-0-error').textContent).toMatch(/unknown unit "parsecs"/);
+    for (const line of SAFETY_NOTICE_LINES) expect(screen.getByTestId('safety-notice').textContent).toContain(line);
+    fireEvent.click(screen.getByTestId('view-tab-results'));
+    expect(await blockFuel()).toBe(before);
+
+    fireEvent.click(screen.getByTestId('view-tab-airframe'));
+    const field = screen.getByTestId('field-cd0-0') as HTMLInputElement;
+    fireEvent.change(field, { target: { value: String(cd0Before + 0.004) } });
+    fireEvent.keyDown(field, { key: 'Enter' });
+    expect(screen.queryByTestId('field-cd0-0-error')).toBeNull();
+    fireEvent.click(screen.getByTestId('view-tab-results'));
+    // Parabolic polar CD = CD0 + K (CL - CLmd)^2 (Raymer ch. 12): more CD0 is more drag everywhere, hence more fuel
+    const after = await waitForChange(before);
+    expect(after).toBeGreaterThan(before);
+
+    act(() => {
+      window.dispatchEvent(new KeyboardEvent('keydown', { key: 'z', ctrlKey: true }));
+    });
+    expect(await waitForChange(after)).toBe(before);
+    fireEvent.click(screen.getByTestId('view-tab-airframe'));
+    expect(Number((screen.getByTestId('field-cd0-0') as HTMLInputElement).value)).toBe(cd0Before);
+    act(() => {
+      window.dispatchEvent(new KeyboardEvent('keydown', { key: 'y', ctrlKey: true }));
+    });
+    expect(Number((screen.getByTestId('field-cd0-0') as HTMLInputElement).value)).toBe(cd0Before + 0.004);
+  }, 60000);
+
+  it('switching units changes the display only: kg = lb x 0.45359237', async () => {
+    renderApp();
+    const lb = await blockFuel();
+    expect(screen.getByTestId('headline-block-fuel').textContent).toMatch(/lb$/);
+    fireEvent.change(screen.getByTestId('unit-system-toggle'), { target: { value: 'si' } });
+    const text = screen.getByTestId('headline-block-fuel').textContent;
+    expect(text).toMatch(/kg$/);
+    // NIST SP 811 appendix B: 1 lb = 0.45359237 kg; both figures rounded to whole units
+    expectClose(numberIn(text), lb * 0.45359237, { abs: 1 }, 'NIST SP 811');
+    expect(screen.queryByTestId('results-stale')).toBeNull();
+  }, 60000);
+
+  it('imports a bad deck through the bridge and lists its errors with line and column', async () => {
+    const bridge = renderApp();
+    await blockFuel();
+    bridge.nextDeck = { name: 'non-numeric-cell.csv', text: fixtureText('fixtures/bad-decks/non-numeric-cell.csv') };
+    fireEvent.click(screen.getByTestId('view-tab-engine'));
+    fireEvent.click(screen.getByTestId('command-importDeck'));
+    const errors = await screen.findByTestId('deck-errors', {}, { timeout: 15000 });
+    const expected = (JSON.parse(fixtureText('fixtures/bad-decks/expected.json')) as Record<string, string>)['non-numeric-cell.csv']!;
+    expect(errors.textContent).toContain(expected);
+    expect(screen.getByTestId('deck-error-0').textContent).toMatch(/^6thrust\[lbf\]/);
+    fireEvent.click(screen.getByTestId('view-tab-results'));
+    expect(screen.getByTestId('results-stale')).toBeInTheDocument();
+  }, 60000);
+
+  it('exports the time history and legs as CSV and prints the report through the bridge', async () => {
+    const bridge = renderApp();
+    await blockFuel();
+    fireEvent.click(screen.getByTestId('command-exportHistory'));
+    fireEvent.click(screen.getByTestId('command-exportLegs'));
+    fireEvent.click(screen.getByTestId('command-print'));
+    await waitFor(() => expect(bridge.exports).toHaveLength(2));
+    expect(bridge.exports.map((e) => e.name)).toEqual(['demo-time-history.csv', 'demo-legs.csv']);
+    expect(bridge.exports[0]!.mime).toBe('text/csv');
+    expect(bridge.exports[0]!.text.split('\n')[0]).toMatch(/^time\[s\],distance\[m\]/);
+    await waitFor(() => expect(bridge.prints).toEqual(['demo-report.pdf']));
+    const report = screen.getByTestId('print-report');
+    expect(report.textContent).toContain(SAFETY_NOTICE_LINES[0]);
+    expect(screen.getByTestId('report-headline-block-fuel').textContent).toBe(screen.getByTestId('headline-block-fuel').textContent);
+  }, 60000);
+
+  it('saves the project as JSON that reads back, and marks the document clean', async () => {
+    const bridge = renderApp();
+    await blockFuel();
+    fireEvent.click(screen.getByTestId('command-save'));
+    await waitFor(() => expect(bridge.saves).toHaveLength(1));
+    expect(bridge.saves[0]!.name).toBe('demo.blockwise.json');
+    expect(JSON.parse(bridge.saves[0]!.text)).toMatchObject({ format: 'blockwise-project', version: 2 });
+    expect(screen.getByTestId('document-name').textContent).toBe('demo.blockwise.json');
+  }, 60000);
+});
