@@ -59,7 +59,7 @@ function scratch(ctx: MissionContext): MissionContext {
   return {
     ...ctx,
     options: { ...ctx.options, allowNegativeFuel: true },
-    log: createFlightLog(ctx.input.airframe, ctx.input.cautionSettings),
+    log: createFlightLog(ctx.input.airframe, ctx.input.cautionSettings, true),
   };
 }
 

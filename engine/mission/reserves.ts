@@ -91,7 +91,7 @@ function flyAlternate(ctx: MissionContext, target: LegTarget, start: StateVector
   const startAir = start[S_AIR];
   const climb = flyClimb(ctx, target, start, top, climbSpec.schedule, climbSpec.rating);
   if (climb.status !== 'ok') return climb;
-  const scratch: MissionContext = { ...ctx, log: createFlightLog(input.airframe, input.cautionSettings) };
+  const scratch: MissionContext = { ...ctx, log: createFlightLog(input.airframe, input.cautionSettings, true) };
   const trial = flyDescent(scratch, target, climb.state, holdAltitude, descentSpec.schedule, descentSpec.mode);
   if (trial.status !== 'ok') return trial;
   const descentDistance = trial.state[S_AIR] - climb.state[S_AIR];
@@ -201,7 +201,7 @@ export function flyReserves(ctx: MissionContext, trip: TripSummary): ReserveFlig
   if (policy.preset === 'icaoAnnex6') {
     const fraction = policy.contingencyFraction * trip.tripFuel_kg;
     const holdTarget: LegTarget = { legIndex: -1, legName: 'contingency minimum', env: standardEnv, recordHistory: false };
-    const scratch: MissionContext = { ...ctx, log: createFlightLog(input.airframe, input.cautionSettings) };
+    const scratch: MissionContext = { ...ctx, log: createFlightLog(input.airframe, input.cautionSettings, true) };
     const hold = flyHold(scratch, holdTarget, state, destination + HOLD_HEIGHT_M, policy.minContingency_s, { kind: 'bestEndurance' });
     const holdFuel = state[S_MASS] - hold.state[S_MASS];
     contingency = Math.max(fraction, hold.status === 'ok' ? holdFuel : 0);

@@ -43,17 +43,19 @@ export interface FlightLog {
   readonly cautions: Map<string, Caution>;
   readonly airframe: Airframe;
   readonly settings: CautionSettings;
+  /** A quiet log (fuel-iteration passes) records neither history nor cautions. */
+  readonly quiet: boolean;
 }
 
-export function createFlightLog(airframe: Airframe, settings: CautionSettings): FlightLog {
+export function createFlightLog(airframe: Airframe, settings: CautionSettings, quiet = false): FlightLog {
   const columns = {} as Record<Column, number[]>;
   for (const c of COLUMNS) columns[c] = [];
-  return { columns, legIndex: [], cautions: new Map(), airframe, settings };
+  return { columns, legIndex: [], cautions: new Map(), airframe, settings, quiet };
 }
 
 /** Adds a caution unless one with the same id was already raised on the same leg. */
 export function appendCaution(log: FlightLog, target: LegTarget, drafted: CautionDraft | Caution | null, time_s: number): void {
-  if (drafted === null) return;
+  if (drafted === null || log.quiet) return;
   const key = `${drafted.id}|${target.legIndex}`;
   if (log.cautions.has(key)) return;
   log.cautions.set(key, { ...drafted, legIndex: target.legIndex, legName: target.legName, time_s });
@@ -61,6 +63,7 @@ export function appendCaution(log: FlightLog, target: LegTarget, drafted: Cautio
 
 /** Records one accepted point: history row (trip legs) and the per-point caution checks. */
 export function appendSample(log: FlightLog, target: LegTarget, state: StateVector, sample: FlightSample): void {
+  if (log.quiet) return;
   const t = state[S_TIME];
   if (target.recordHistory) {
     const c = log.columns;
