@@ -23,6 +23,7 @@ export type MissionCautionId =
   | 'thrust_below_drag'
   | 'climb_not_reached'
   | 'descent_thrust_below_idle'
+  | 'idle_thrust_above_drag'
   | 'alternate_too_short'
   | 'profile_altitude_limited';
 
@@ -167,6 +168,14 @@ export const CAUTION_CATALOGUE: Readonly<Record<MissionCautionId, CautionEntry>>
     defaultThreshold: null,
     unit: 'N',
     source: 'Idle thrust of the propulsion model; the rate is held and idle fuel flow used (drag devices assumed)',
+  },
+  idle_thrust_above_drag: {
+    id: 'idle_thrust_above_drag',
+    title: 'Level-flight drag below idle thrust',
+    severity: 'info',
+    defaultThreshold: null,
+    unit: 'N',
+    source: 'Idle thrust of the propulsion model; idle fuel flow used, the excess thrust assumed cancelled by drag devices',
   },
   alternate_too_short: {
     id: 'alternate_too_short',

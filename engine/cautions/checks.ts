@@ -128,3 +128,13 @@ export function checkPolarClamped(outsideTables: readonly string[]): CautionDraf
       )
     : null;
 }
+
+/** Level flight whose drag (N) is below idle thrust (N): flown at idle fuel flow as if the excess were cancelled (info). */
+export function idleAboveDragCaution(drag_N: number, idleThrust_N: number): CautionDraft {
+  return draft(
+    'idle_thrust_above_drag',
+    `Drag ${drag_N.toFixed(0)} N is below idle thrust ${idleThrust_N.toFixed(0)} N in level flight; idle fuel flow used (drag devices assumed).`,
+    drag_N,
+    idleThrust_N,
+  );
+}

@@ -56,6 +56,7 @@ function allowanceSample(altitude_m: number, fuelFlow_kg_s: number, point: Insta
     climbRate_m_s: 0,
     throatMach: point?.perEngine.throatMach ?? null,
     polarOutside: [],
+    idleAboveDrag: false,
     propulsionCautions: point?.cautions ?? [],
   };
 }

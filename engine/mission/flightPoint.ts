@@ -71,6 +71,7 @@ export function makeSample(
     liftToDrag: at.drag.liftToDrag,
     climbRate_m_s,
     throatMach: engine.perEngine.throatMach,
+    idleAboveDrag: 'limit' in engine && engine.limit === 'below_idle' && at.drag.drag_N < engine.thrust_N && climbRate_m_s === 0,
     polarOutside: at.drag.outsideTables ?? [],
     propulsionCautions: engine.cautions,
   };

@@ -53,6 +53,8 @@ export interface IterationOutcome {
   readonly residual_kg: number;
   /** Set when a flight inside the iteration failed for a reason other than fuel. */
   readonly failure: MissionEvaluation | null;
+  /** Set when the problem has no solution for a reason the iteration can name (status 'infeasible'). */
+  readonly infeasible?: string;
 }
 
 function scratch(ctx: MissionContext): MissionContext {
@@ -95,6 +97,17 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
     if (failedFlight(e1)) return { converged: false, rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, failure: e1 };
     after = e1.trip.afterSolvable_m;
     const distanceError = e1.trip.end[S_AIR] - range_m;
+    if (d === 0 && distanceError > DISTANCE_TOLERANCE_M) {
+      return {
+        converged: false,
+        rampMass_kg: x1,
+        distance_m: 0,
+        iterations: k,
+        residual_kg: e1.residual_kg,
+        failure: null,
+        infeasible: `The range ${(range_m / 1000).toFixed(1)} km is shorter than the other legs' ${(e1.trip.end[S_AIR] / 1000).toFixed(1)} km of still air.`,
+      };
+    }
     if (Math.abs(e1.residual_kg) <= FUEL_TOLERANCE_KG && Math.abs(distanceError) <= DISTANCE_TOLERANCE_M) {
       return { converged: true, rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, failure: null };
     }

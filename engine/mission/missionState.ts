@@ -34,6 +34,8 @@ export interface FlightSample {
   readonly climbRate_m_s: number;
   /** Inlet throat Mach (-) when the installation computes it. */
   readonly throatMach: number | null;
+  /** True when the drag to balance is below idle thrust (level flight flown at idle fuel flow). */
+  readonly idleAboveDrag: boolean;
   /** Polar tables the drag lookup left and was clamped on (empty inside). */
   readonly polarOutside: readonly string[];
   /** Cautions raised by the propulsion lookup at this point. */

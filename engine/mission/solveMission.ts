@@ -101,6 +101,9 @@ export function solveMission(input: MissionInput, options: SolveOptions = {}): M
     const guess = zfw + taxi + 0.1 * zfw;
     const it = iterateRampMass(base, solve.range_m, guess);
     ({ rampMass_kg: rampMass, distance_m: distance, iterations, converged, residual_kg: residual } = it);
+    if (it.infeasible !== undefined) {
+      return { ...emptyResult(input, 'infeasible', it.infeasible), iterations, residual_kg: residual };
+    }
     if (!converged && it.failure === null) iterationMessage = `Fuel iteration did not converge after ${iterations} passes; residual ${residual.toFixed(2)} kg.`;
   } else {
     rampMass =

@@ -11,6 +11,7 @@ import {
   checkPolarClamped,
   checkThroatMach,
   checkVmo,
+  idleAboveDragCaution,
   type CautionDraft,
 } from '../cautions/checks';
 import type { CautionSettings } from '../cautions/cautionSettings';
@@ -96,6 +97,7 @@ export function appendSample(log: FlightLog, target: LegTarget, state: StateVect
   }
   appendCaution(log, target, checkThroatMach(sample.throatMach, log.settings.maxThroatMach), t);
   appendCaution(log, target, checkPolarClamped(sample.polarOutside), t);
+  if (sample.idleAboveDrag) appendCaution(log, target, idleAboveDragCaution(sample.drag_N, sample.thrustUsed_N), t);
   for (const c of sample.propulsionCautions) {
     if (c.id === 'deck_extrapolation' && !log.settings.cautionOnDeckExtrapolation) continue;
     appendCaution(log, target, c, t);

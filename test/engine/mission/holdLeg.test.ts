@@ -46,4 +46,20 @@ describe('holdLeg', () => {
       expectClose(r.history.liftToDrag[i], 1 / (2 * Math.sqrt(cd0 * k)), { rel: 1e-6 }, '(L/D)max = 1/(2 sqrt(CD0 K))');
     }
   });
+
+  it('holdLeg raises idle_thrust_above_drag when idle thrust exceeds the drag to balance', () => {
+    const r = solveMission(
+      missionInput({
+        legs: [{ kind: 'hold', name: 'hold', altitude_m: 457.2, time_s: 600, speed: { kind: 'cas', cas_m_s: 200 * KT } }],
+        solve: { kind: 'takeoffWeight', takeoffMass_kg: 65000, payload_kg: 10000 },
+        aero: constantLiftToDragAero(17),
+        propulsion: constantTsfcPropulsion({ thrust0_N: 400000, tsfc_kg_N_s: 1.7e-5, lapseExponent: 0, ratings: { flightIdle: 0.2 } }),
+      }),
+    );
+    expect(r.status).toBe('ok');
+    const c = r.cautions.find((x) => x.id === 'idle_thrust_above_drag');
+    expect(c).toMatchObject({ legIndex: 0, severity: 'info' });
+    // Idle fuel flow is used: c x idle thrust for the whole hold.
+    expectClose(r.tripFuel_kg, 1.7e-5 * 0.2 * 400000 * 600, { rel: 1e-9 }, 'idle fuel flow x time');
+  });
 });

@@ -5,7 +5,7 @@ import { expectClose } from '../../support/assertInDelta';
 
 const SAMPLE: FlightSample = {
   altitude_m: 0, mach: 0, cas_m_s: 0, tas_m_s: 0, thrustAvailable_N: 0, thrustUsed_N: 0, drag_N: 0, fuelFlow_kg_s: 0,
-  cl: 0, clMax: 0, buffetLoadFactor: 0, liftToDrag: 0, climbRate_m_s: 0, throatMach: null, polarOutside: [], propulsionCautions: [],
+  cl: 0, clMax: 0, buffetLoadFactor: 0, liftToDrag: 0, climbRate_m_s: 0, throatMach: null, idleAboveDrag: false, polarOutside: [], propulsionCautions: [],
 };
 
 /** dm/dt = -k m: m(t) = m0 exp(-k t) (exact solution of the linear ODE). */

@@ -179,6 +179,13 @@ describe('solveMission', () => {
     expectNoNaN(noLeg);
   });
 
+  it('solveMission says infeasible when the range is shorter than the climb and descent', () => {
+    const r = solveMission(missionInput({ legs: demoLegs(null), solve: { kind: 'payloadRange', payload_kg: 10000, range_m: 50_000 } }));
+    expect(r.status).toBe('infeasible');
+    expect(r.statusMessage).toMatch(/shorter than the other legs/);
+    expectNoNaN(r);
+  });
+
   it('solveMission reports fuel_exhausted when the fuel runs out', () => {
     const r = solveMission(
       missionInput({ legs: cruiseOnly(20_000_000), solve: { kind: 'takeoffWeight', takeoffMass_kg: 60000, payload_kg: 10000 }, aero: breguetAero, propulsion: breguetEngines }),
