@@ -28,6 +28,7 @@
 import type { AlternateSpec, LegRow, MissionInput, MissionStatus, ReserveBreakdown, SpeedSchedule } from './missionTypes';
 import type { RatingName } from '../propulsion/propulsionModel';
 import { flyClimb } from './climbLeg';
+import { specificRange } from './bestSpeeds';
 import { cruiseMachOfMass, flyCruise } from './cruiseLeg';
 import { flyDescent, type DescentMode } from './descentLeg';
 import { flyHold } from './holdLeg';
@@ -91,11 +92,23 @@ function flyAlternate(ctx: MissionContext, target: LegTarget, start: StateVector
   const startAir = start[S_AIR];
   const climb = flyClimb(ctx, target, start, top, climbSpec.schedule, climbSpec.rating);
   if (climb.status !== 'ok') return climb;
+  // Descent distance from a trial descent at the estimated top-of-descent mass (cruise fuel from the
+  // specific range at the top of climb), so the alternate's still-air distance is met closely.
   const scratch: MissionContext = { ...ctx, log: createFlightLog(input.airframe, input.cautionSettings, true) };
-  const trial = flyDescent(scratch, target, climb.state, holdAltitude, descentSpec.schedule, descentSpec.mode);
-  if (trial.status !== 'ok') return trial;
-  const descentDistance = trial.state[S_AIR] - climb.state[S_AIR];
-  const cruiseDistance = alt.distance_m - (climb.state[S_AIR] - startAir) - descentDistance;
+  const climbed = climb.state[S_AIR] - startAir;
+  const trialDescent = (mass_kg: number) => {
+    const from = Float64Array.from(climb.state);
+    from[S_MASS] = mass_kg;
+    const trial = flyDescent(scratch, target, from, holdAltitude, descentSpec.schedule, descentSpec.mode);
+    return { trial, distance_m: trial.state[S_AIR] - from[S_AIR] };
+  };
+  const first = trialDescent(climb.state[S_MASS]);
+  if (first.trial.status !== 'ok') return first.trial;
+  const sr = specificRange(input, top, alt.cruiseMach, climb.state[S_MASS], target.env.isaDev_K);
+  const cruiseEstimate = Math.max(alt.distance_m - climbed - first.distance_m, 0);
+  const second = sr > 0 ? trialDescent(climb.state[S_MASS] - cruiseEstimate / sr) : first;
+  const descentDistance = second.trial.status === 'ok' ? second.distance_m : first.distance_m;
+  const cruiseDistance = alt.distance_m - climbed - descentDistance;
   let state = climb.state;
   if (cruiseDistance < 0) {
     appendCaution(
