@@ -3,7 +3,7 @@ import { solveMission } from '../../../engine/mission/solveMission';
 import type { Leg, ReservePolicy } from '../../../engine/mission/missionTypes';
 import { expectClose } from '../../support/assertInDelta';
 import { constantLiftToDragAero, constantTsfcPropulsion } from './support/analyticModels';
-import { missionInput } from './support/missionFixtures';
+import { demoLegs, missionInput } from './support/missionFixtures';
 
 // With constant L/D and constant TSFC every reserve item has a closed form:
 // cruise of distance d at speed V: m1 = m0 exp(-d c g / (V L/D)) (Breguet range);
@@ -101,5 +101,20 @@ describe('reserves', () => {
     expect(justEnough.cautions.some((c) => c.id === 'reserve_below_minimum')).toBe(false);
     const c = tooMuch.cautions.find((x) => x.id === 'reserve_below_minimum');
     expect(c?.threshold).toBeCloseTo(fuelLeft + 1, 6);
+  });
+
+  it('reserves fly the alternate (climb, cruise, descent) over its still-air distance', () => {
+    const distance_m = 200 * 1852;
+    const r = solveMission(
+      missionInput({
+        legs: demoLegs(1_500_000),
+        solve: { kind: 'takeoffWeight', takeoffMass_kg: 70000, payload_kg: 10000 },
+        reserves: { preset: 'icaoAnnex6', contingencyFraction: 0.05, minContingency_s: 300, alternate: { distance_m, cruiseAltitude_m: 7600, cruiseMach: 0.7, elevation_m: 0 }, finalReserve_s: 1800 },
+      }),
+    );
+    expect(r.status).toBe('ok');
+    const row = r.legs.find((l) => l.name === 'reserve: alternate')!;
+    expectClose(row.endDistance_m - row.startDistance_m, distance_m, { rel: 1e-3 }, 'AlternateSpec.distance_m');
+    expectClose(row.endAltitude_m, HOLD_FT, { abs: 1e-6 }, 'descends to 1,500 ft above the alternate');
   });
 });
