@@ -16,7 +16,11 @@ const repo = resolve(__dirname, '..', '..', '..');
 /** Builds the renderer (vite build -> dist-web/) and serves it on 127.0.0.1 for the e2e tests. */
 export default async function setup(project: TestProject): Promise<() => Promise<void>> {
   requireChromium();
-  await build({ configFile: resolve(repo, 'vite.config.ts'), logLevel: 'warn' });
+  try {
+    await build({ configFile: resolve(repo, 'vite.config.ts'), logLevel: 'warn' });
+  } catch (e) {
+    throw new Error(`e2e setup: the renderer does not build ("npm run build:web" fails), so nothing can be tested in the browser: ${(e as Error).message}`, { cause: e });
+  }
   const server = await serveFolder(resolve(repo, 'dist-web'));
   project.provide('baseUrl', server.url);
   return server.close;
