@@ -1,6 +1,3 @@
-import { thrustDragCrossover } from '../../../engine/analysis/crossover';
-import { payloadRangeDiagram } from '../../../engine/analysis/payloadRange';
-import { tradeFactors } from '../../../engine/analysis/tradeFactors';
 import type { MissionInput } from '../../../engine/mission/missionTypes';
 import { solveMission } from '../../../engine/mission/solveMission';
 import { DEMO_ENGINE_SPEC } from '../../../engine/propulsion/deckDemoSpec';
@@ -9,9 +6,11 @@ import { buildParametricDeck } from '../../../engine/propulsion/parametricDeck';
 import { loadDemoInput } from '../peer/demoInput';
 import type { BenchSection } from '../benchTypes';
 
-// The demo mission and the analyses built on it, plus a regular-grid deck
-// lookup to set beside the ragged one in deck.ts. The side by side with the
-// Python peer is printed after the table (test/bench/sideBySide.ts).
+// What the owners' sections do not time: a regular-grid deck lookup beside the
+// ragged one in deck.ts, and one pass of the demo mission (no fuel iteration)
+// beside the converged one in mission.ts. The converged mission, crossover,
+// payload-range and trade factors are in mission.ts and analysis.ts; the side
+// by side with the Python peer is printed after the table (sideBySide.ts).
 const { input } = loadDemoInput();
 // One pass: the converged take-off mass and cruise distance flown once (trip and reserves, no iteration).
 const converged = solveMission(input);
@@ -23,7 +22,6 @@ const onePass: MissionInput = {
   legs: input.legs.map((l) => (l.kind === 'cruise' && l.distance_m === null ? { ...l, distance_m: cruise_m } : l)),
 };
 const regular = buildParametricDeck({ ...DEMO_ENGINE_SPEC, grid: { ...DEMO_ENGINE_SPEC.grid, machRanges: undefined } });
-const crossoverQuery = { altitude_m: 10668, mass_kg: 14500, rating: 'maxCruise', isaDev_K: 0 } as const;
 
 let k = 0;
 function next(): number {
@@ -32,16 +30,12 @@ function next(): number {
 }
 
 export const section: BenchSection = {
-  title: 'demo mission and analyses',
+  title: 'demo one pass, regular deck',
   cases: [
     {
       name: 'lookupDeck inside (regular, 3 axes)',
       run: () => lookupDeck(regular, { altitude_m: 9000 + 20 * next(), mach: 0.7 + 0.002 * k, isaDev_K: 0 }, 0.5 + 0.005 * k),
     },
     { name: 'demo mission, one pass (given TOW, fixed cruise)', run: () => solveMission(onePass) },
-    { name: 'demo mission, converged (payload + range)', run: () => solveMission(input) },
-    { name: 'crossover curve (81 Machs, FL350)', run: () => thrustDragCrossover(input, crossoverQuery) },
-    { name: 'payload-range diagram (9 missions)', run: () => payloadRangeDiagram(input, {}) },
-    { name: 'trade-factor table (17 missions)', run: () => tradeFactors(input, {}) },
   ],
 };
