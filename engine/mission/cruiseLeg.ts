@@ -32,6 +32,8 @@ export interface CruiseSpec {
   readonly profile: CruiseProfile;
   /** Still-air distance to fly (m). */
   readonly distance_m: number;
+  /** When set, the leg ends at this absolute still-air distance (m) as a function of mass (kg) instead (top of descent predicted by the fuel iteration). */
+  readonly endAirOf?: (mass_kg: number) => number;
 }
 
 /** Cruise Mach (-) for a speed rule at altitude (m) and mass (kg), searched afresh. */
@@ -113,7 +115,10 @@ function failed(ctx: MissionContext, target: LegTarget, state: StateVector, stop
 export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVector, spec: CruiseSpec): LegOutcome {
   const input = ctx.input;
   const dev = target.env.isaDev_K;
-  const endAir = start[S_AIR] + Math.max(spec.distance_m, 0);
+  const fixedEnd = start[S_AIR] + Math.max(spec.distance_m, 0);
+  const endOf = spec.endAirOf;
+  const endAir: number | ((mass_kg: number) => number) = endOf ? (m: number) => Math.max(endOf(m), start[S_AIR]) : fixedEnd;
+  const endAt = (mass_kg: number) => (typeof endAir === 'number' ? endAir : endAir(mass_kg));
   let state = Float64Array.from(start);
   state[S_ALT] = spec.altitude_m;
   let last: FlightSample | null = null;
@@ -171,7 +176,7 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
       );
     }
     if (run.stop === 'distance_reached') {
-      state[S_AIR] = endAir;
+      state[S_AIR] = endAt(state[S_MASS]);
       return legOk(state, run.endSample);
     }
     return failed(ctx, target, state, run.stop, run.endSample);
@@ -218,7 +223,7 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
     last = run.endSample;
     state[S_TAS] = last.tas_m_s;
     if (run.stop === 'distance_reached') {
-      state[S_AIR] = endAir;
+      state[S_AIR] = endAt(state[S_MASS]);
       return legOk(state, last);
     }
     if (run.stop !== 'step_climb_due' || profile.kind !== 'stepClimb') return failed(ctx, target, state, run.stop, last);
@@ -234,7 +239,7 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
         : legFailed(state, 'climb_not_reached', `The step climb on ${target.legName} stalled at ${state[S_ALT].toFixed(0)} m.`, last);
     }
     state[S_ALT] = up;
-    if (state[S_AIR] >= endAir) return legOk(state, last);
+    if (state[S_AIR] >= endAt(state[S_MASS])) return legOk(state, last);
   }
   return legFailed(state, 'infeasible', `Too many step climbs on ${target.legName}.`, last);
 }

@@ -29,6 +29,8 @@ export interface TripOutcome {
   readonly solvableDistance_m: number;
   /** Still-air distance flown after the solvable cruise leg (m), 0 when there is none. */
   readonly afterSolvable_m: number;
+  /** Mass at the end of the solvable cruise leg (kg), 0 when there is none. */
+  readonly solvableEndMass_kg: number;
 }
 
 /** Index of the cruise leg whose distance is solved (distance_m null), or -1. */
@@ -51,10 +53,14 @@ export function initialState(rampMass_kg: number): StateVector {
   return s;
 }
 
-/** The solvable leg's still-air distance (m), given the still-air distance flown when it starts (m). */
-export type SolvedDistance = number | ((airDistanceAtStart_m: number) => number);
+/**
+ * The solvable leg's still-air distance (m): a number, or where it ends as
+ * an absolute still-air distance (m) that depends on the mass (kg) (top of
+ * descent predicted from the previous passes).
+ */
+export type SolvedDistance = number | { readonly endAirOf: (mass_kg: number) => number };
 
-function flyLeg(ctx: MissionContext, index: number, state: StateVector, solvedDistance_m: number): LegOutcome {
+function flyLeg(ctx: MissionContext, index: number, state: StateVector, solved: SolvedDistance, isSolvable: boolean): LegOutcome {
   const leg = ctx.input.legs[index];
   const target: LegTarget = { legIndex: index, legName: leg.name, env: legEnvironment(ctx.input, leg), recordHistory: true };
   switch (leg.kind) {
@@ -94,7 +100,8 @@ function flyLeg(ctx: MissionContext, index: number, state: StateVector, solvedDi
         altitude_m: leg.altitude_m,
         speed: leg.speed,
         profile: leg.profile,
-        distance_m: leg.distance_m ?? solvedDistance_m,
+        distance_m: leg.distance_m ?? (typeof solved === 'number' ? Math.max(solved, 0) : 0),
+        endAirOf: isSolvable && typeof solved !== 'number' ? solved.endAirOf : undefined,
       });
     case 'descent':
       return flyDescent(ctx, target, state, leg.toAltitude_m, leg.schedule, leg.mode);
@@ -112,12 +119,12 @@ export function flyTrip(ctx: MissionContext, rampMass_kg: number, solvedDistance
   let landing = state;
   let solvableDistance_m = 0;
   let solvableEnd_m = 0;
+  let solvableEndMass_kg = 0;
   const rows: LegRow[] = [];
   for (let i = 0; i < ctx.input.legs.length; i++) {
     if (i === first) takeoff = Float64Array.from(state);
     const start = state;
-    const solved = i === solvable && typeof solvedDistance === 'function' ? solvedDistance(state[S_AIR]) : solvedDistance;
-    const out = flyLeg(ctx, i, state, typeof solved === 'number' && solved > 0 ? solved : 0);
+    const out = flyLeg(ctx, i, state, solvedDistance, i === solvable);
     state = out.state;
     rows.push({
       index: i,
@@ -136,13 +143,14 @@ export function flyTrip(ctx: MissionContext, rampMass_kg: number, solvedDistance
     if (i === solvable) {
       solvableDistance_m = state[S_AIR] - start[S_AIR];
       solvableEnd_m = state[S_AIR];
+      solvableEndMass_kg = state[S_MASS];
     }
     if (i === last) landing = Float64Array.from(state);
     if (out.status !== 'ok') {
-      return { status: out.status, message: out.message, rows, end: state, takeoff, landing: state, solvableDistance_m, afterSolvable_m: 0 };
+      return { status: out.status, message: out.message, rows, end: state, takeoff, landing: state, solvableDistance_m, afterSolvable_m: 0, solvableEndMass_kg };
     }
   }
   if (last < first) landing = Float64Array.from(state);
   const afterSolvable_m = solvable >= 0 ? state[S_AIR] - solvableEnd_m : 0;
-  return { status: 'ok', message: '', rows, end: state, takeoff, landing, solvableDistance_m, afterSolvable_m };
+  return { status: 'ok', message: '', rows, end: state, takeoff, landing, solvableDistance_m, afterSolvable_m, solvableEndMass_kg };
 }

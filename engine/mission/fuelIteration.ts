@@ -71,19 +71,31 @@ function failedFlight(e: MissionEvaluation): boolean {
 
 /**
  * payloadRange: ramp mass (kg) so the residual vanishes while the trip's
- * still-air distance is `range_m`: the solvable leg flies the range less the
- * distance flown before it (known when it starts) and less the distance the
- * legs after it took on the previous pass (within DISTANCE_TOLERANCE_M at
+ * still-air distance is `range_m`. The solvable leg ends at its top of
+ * descent: where the distance flown plus the distance the legs after it will
+ * take equals the range, the latter predicted as a linear function of the
+ * mass there from the last two passes (within DISTANCE_TOLERANCE_M at
  * convergence).
  */
 export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess_kg: number): IterationOutcome {
-  let after = 0;
-  const distance = (flown_m: number) => Math.max(range_m - flown_m - after, 0);
+  const seen: { readonly mass_kg: number; readonly after_m: number }[] = [];
+  const afterOf = (mass_kg: number) => {
+    const n = seen.length;
+    if (n === 0) return 0;
+    const b = seen[n - 1];
+    if (n === 1 || Math.abs(b.mass_kg - seen[n - 2].mass_kg) < 1) return b.after_m;
+    const a = seen[n - 2];
+    return b.after_m + ((b.after_m - a.after_m) / (b.mass_kg - a.mass_kg)) * (mass_kg - b.mass_kg);
+  };
+  const distance = { endAirOf: (mass_kg: number) => range_m - afterOf(mass_kg) };
+  const remember = (e: MissionEvaluation) => {
+    if (e.trip.solvableDistance_m > 0) seen.push({ mass_kg: e.trip.solvableEndMass_kg, after_m: e.trip.afterSolvable_m });
+  };
   let x0 = firstGuess_kg;
   let e0 = evaluateMission(scratch(ctx), x0, distance);
   let d = e0.trip.solvableDistance_m;
   if (failedFlight(e0)) return { converged: false, rampMass_kg: x0, distance_m: d, iterations: 1, residual_kg: e0.residual_kg, failure: e0 };
-  after = e0.trip.afterSolvable_m;
+  remember(e0);
   // First slope: for a Breguet-like flight, d(block-in fuel)/d(ramp mass) = block-in mass / ramp mass.
   const ratio = e0.trip.end[S_MASS] / x0;
   let x1 = x0 - e0.residual_kg / (Number.isFinite(ratio) && ratio > 0.2 && ratio <= 1 ? ratio : 0.85);
@@ -95,8 +107,10 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
     const e1 = evaluateMission(scratch(ctx), x1, distance);
     d = e1.trip.solvableDistance_m;
     if (failedFlight(e1)) return { converged: false, rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, failure: e1 };
-    after = e1.trip.afterSolvable_m;
     const distanceError = e1.trip.end[S_AIR] - range_m;
+    if (Math.abs(e1.residual_kg) <= FUEL_TOLERANCE_KG && Math.abs(distanceError) <= DISTANCE_TOLERANCE_M) {
+      return { converged: true, rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, failure: null };
+    }
     if (d === 0 && distanceError > DISTANCE_TOLERANCE_M) {
       return {
         converged: false,
@@ -108,16 +122,26 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
         infeasible: `The range ${(range_m / 1000).toFixed(1)} km is shorter than the other legs' ${(e1.trip.end[S_AIR] / 1000).toFixed(1)} km of still air.`,
       };
     }
-    if (Math.abs(e1.residual_kg) <= FUEL_TOLERANCE_KG && Math.abs(distanceError) <= DISTANCE_TOLERANCE_M) {
-      return { converged: true, rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, failure: null };
-    }
-    const slope = (e1.residual_kg - e0.residual_kg) / (x1 - x0);
-    const next = Number.isFinite(slope) && Math.abs(slope) > 0.05 ? x1 - e1.residual_kg / slope : x1 - e1.residual_kg / 0.85;
+    remember(e1);
+    // Secant slope with the previous residual moved to this pass's solvable distance (fuel per metre of that leg).
+    const shifted = e0.residual_kg + (e0.trip.solvableDistance_m - d) * solvableFuelPerMetre(e0);
+    const slope = (e1.residual_kg - shifted) / (x1 - x0);
+    const ratio1 = e1.trip.end[S_MASS] / x1;
+    const fallback = Number.isFinite(ratio1) && ratio1 > 0.2 && ratio1 <= 1 ? ratio1 : 0.85;
+    const comparable = Math.abs(e0.trip.solvableDistance_m - d) <= 0.01 * Math.max(d, 1);
+    const next = comparable && Number.isFinite(slope) && Math.abs(slope) > 0.05 ? x1 - e1.residual_kg / slope : x1 - e1.residual_kg / fallback;
     x0 = x1;
     e0 = e1;
     x1 = next;
   }
   return { converged: false, rampMass_kg: x1, distance_m: d, iterations: MAX_ITERATIONS, residual_kg: e0.residual_kg, failure: null };
+}
+
+/** Fuel burned per metre of still air on the solvable cruise leg of a pass (kg/m), 0 when unknown. */
+function solvableFuelPerMetre(e: MissionEvaluation): number {
+  const row = e.trip.rows.find((r) => r.kind === 'cruise' && r.endDistance_m - r.startDistance_m === e.trip.solvableDistance_m);
+  const d = e.trip.solvableDistance_m;
+  return row && d > 0 ? row.fuel_kg / d : 0;
 }
 
 /** Fixed ramp mass: the solvable leg's still-air distance (m) so the residual vanishes. */

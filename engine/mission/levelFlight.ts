@@ -19,8 +19,8 @@ export interface LevelFlightSpec {
   /** Highest rating the part-power search may use. */
   readonly ceiling: RatingName;
   readonly step_s: number;
-  /** Absolute still-air distance (m) or time (s) at which the segment ends; null = none. */
-  readonly endAirDistance_m: number | null;
+  /** Absolute still-air distance (m), or that distance as a function of mass (kg), or time (s) at which the segment ends; null = none. */
+  readonly endAirDistance_m: number | ((mass_kg: number) => number) | null;
   readonly endTime_s: number | null;
   readonly extraEvents?: readonly SegmentEvent[];
 }
@@ -45,7 +45,7 @@ export function makeLevelSegment(ctx: MissionContext, target: LegTarget, spec: L
   const events: SegmentEvent[] = [{ stop: 'thrust_below_drag', g: (_y, s) => s.drag_N - s.thrustAvailable_N }];
   if (spec.endAirDistance_m !== null) {
     const end = spec.endAirDistance_m;
-    events.push({ stop: 'distance_reached', stateOnly: true, g: (y) => y[S_AIR] - end });
+    events.push({ stop: 'distance_reached', stateOnly: true, g: (y) => y[S_AIR] - (typeof end === 'number' ? end : end(y[S_MASS])) });
   }
   if (spec.endTime_s !== null) {
     const end = spec.endTime_s;

@@ -21,6 +21,8 @@
 import type { Caution } from '../cautions/caution';
 import { checkFuelCapacity, checkMlw, checkMtow, checkMzfw, checkReserve } from '../cautions/checks';
 import { allowanceFuel } from './allowanceLegs';
+import { specificRange } from './bestSpeeds';
+import { cruiseMach } from './cruiseLeg';
 import { evaluateMission, iterateDistance, iterateRampMass, FUEL_TOLERANCE_KG, type MissionEvaluation } from './fuelIteration';
 import { solvableLegIndex, tripBounds } from './flyTrip';
 import { legEnvironment, type FlightOptions, type LegTarget, type MissionContext } from './missionContext';
@@ -68,6 +70,25 @@ function emptyResult(input: MissionInput, status: MissionStatus, message: string
   };
 }
 
+/**
+ * First guess of the ramp mass (kg) for payloadRange: the Breguet range
+ * equation m_TO = m_L exp(R / (SR m)) with the specific range SR of the
+ * solvable cruise leg at 1.2 x zero-fuel mass and a landing mass of 1.05 x
+ * zero-fuel mass (Anderson, Aircraft Performance and Design, section 5.13).
+ * Falls back to 1.1 x zero-fuel mass when the specific range is not positive.
+ */
+function breguetRampGuess(input: MissionInput, zfw_kg: number, taxi_kg: number, range_m: number): number {
+  const fallback = 1.1 * zfw_kg + taxi_kg;
+  const leg = input.legs[solvableLegIndex(input)];
+  if (!leg || leg.kind !== 'cruise') return fallback;
+  const dev = legEnvironment(input, leg).isaDev_K;
+  const m = 1.2 * zfw_kg;
+  const sr = specificRange(input, leg.altitude_m, cruiseMach(input, leg.speed, leg.altitude_m, m, dev), m, dev);
+  if (!(sr > 0)) return fallback;
+  const exponent = Math.min(range_m / (sr * m), 2);
+  return 1.05 * zfw_kg * Math.exp(exponent) + taxi_kg;
+}
+
 /** Options of one solve; `stepScale` below 1 refines every integration step (convergence studies). */
 export interface SolveOptions {
   readonly stepScale?: number;
@@ -98,7 +119,7 @@ export function solveMission(input: MissionInput, options: SolveOptions = {}): M
   let residual = 0;
   let iterationMessage = '';
   if (solve.kind === 'payloadRange') {
-    const guess = zfw + taxi + 0.1 * zfw;
+    const guess = breguetRampGuess(input, zfw, taxi, solve.range_m);
     const it = iterateRampMass(base, solve.range_m, guess);
     ({ rampMass_kg: rampMass, distance_m: distance, iterations, converged, residual_kg: residual } = it);
     if (it.infeasible !== undefined) {
