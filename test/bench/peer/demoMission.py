@@ -499,6 +499,11 @@ class DemoMission:
         self.payload = si(solve['payload'])
         self.range = si(solve['range'])
         self.zfw = self.ac.oew + self.payload
+        mission = pr['mission']
+        if si(mission.get('isaDeviation', 0)) != 0 or si(mission.get('wind', 0)) != 0:
+            raise ValueError('this script models ISA and still air only (mission.isaDeviation and mission.wind must be 0)')
+        if rs['preset'] != 'icaoAnnex6' or solve['mode'] != 'payloadRange':
+            raise ValueError('this script flies ICAO Annex 6 reserves in payload-and-range mode only')
         self.descent_guess = 140e3
         self.last = None
 
