@@ -1,0 +1,57 @@
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { openDemo, showView } from './support/appPage';
+import { launchChromium, openApp, screenshot } from './support/chromium';
+
+// The crossover view plots thrust available against drag and marks the low
+// and high crossover Mach (DESIGN.md §2.5: the low crossover lies below the
+// high one, with the thrust minimum between). The demo study has two inlet
+// designs, which the compare view offers as A and B. (Both inlets drawn
+// together and the full comparison: bothInlets.scenario.ts.)
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+async function markerMach(page: import('playwright-core').Page, point: string): Promise<number> {
+  const row = page.getByTestId('crossover-markers').locator('tr', { hasText: point });
+  return Number((await row.locator('td').nth(2).textContent()) ?? 'NaN');
+}
+
+describe('analysis views', () => {
+  it('the crossover view draws thrust and drag with ordered crossover marks', async () => {
+    const { page, problems } = await openApp(browser, inject('baseUrl'));
+    await openDemo(page);
+    await showView(page, 'crossover');
+    await page.locator('[data-testid="chart-crossover"] svg').first().waitFor({ state: 'visible', timeout: 30_000 });
+    const low = await markerMach(page, 'low crossover');
+    const high = await markerMach(page, 'high crossover');
+    const minimum = await markerMach(page, 'thrust minimum');
+    expect(low).toBeGreaterThan(0);
+    expect(low).toBeLessThan(high);
+    expect(minimum).toBeGreaterThanOrEqual(low);
+    expect(minimum).toBeLessThanOrEqual(high);
+    expect(await page.getByTestId('safety-notice').isVisible()).toBe(true);
+    await screenshot(page, 'crossover-demo');
+    expect(problems).toEqual([]);
+  });
+
+  it('the compare view offers the two inlet designs as A and B', async () => {
+    const { page, problems } = await openApp(browser, inject('baseUrl'));
+    await openDemo(page);
+    await showView(page, 'compare');
+    const optionsA = await page.getByTestId('compare-inlet-a').locator('option').allTextContents();
+    const optionsB = await page.getByTestId('compare-inlet-b').locator('option').allTextContents();
+    expect(optionsA.length).toBe(2);
+    expect(new Set(optionsA).size).toBe(2);
+    expect(optionsB).toEqual(optionsA);
+    expect(await page.getByTestId('compare-inlet-a').inputValue()).not.toBe(await page.getByTestId('compare-inlet-b').inputValue());
+    expect(await page.getByTestId('safety-notice').isVisible()).toBe(true);
+    await screenshot(page, 'compare-demo');
+    expect(problems).toEqual([]);
+  });
+});
