@@ -19,7 +19,7 @@ import { flyReserves, type ReserveFlight } from './reserves';
 import { flyTrip, solvableLegIndex, type SolvedDistance, type TripOutcome } from './flyTrip';
 import { legEnvironment, type MissionContext } from './missionContext';
 import { S_AIR, S_MASS, S_TIME } from './missionState';
-import { createFlightLog } from './timeHistoryBuilder';
+import { createFlightLog, type FlightLog } from './timeHistoryBuilder';
 
 /** Fuel residual tolerance (kg): the mission lands with the reserve to within this. */
 export const FUEL_TOLERANCE_KG = 0.1;
@@ -33,6 +33,8 @@ export interface MissionEvaluation {
   readonly trip: TripOutcome;
   readonly reserves: ReserveFlight;
   readonly residual_kg: number;
+  /** The log the flight wrote (history and cautions). */
+  readonly log: FlightLog;
 }
 
 /** Flies trip and reserves from `rampMass_kg` with the solvable leg's distance given (or given by the distance flown so far). */
@@ -42,7 +44,7 @@ export function evaluateMission(ctx: MissionContext, rampMass_kg: number, distan
   const tripTime_s = trip.landing[S_TIME] - trip.takeoff[S_TIME];
   const reserves = flyReserves(ctx, { tripFuel_kg, tripTime_s, landing: trip.landing });
   const residual_kg = trip.end[S_MASS] - ctx.zeroFuelMass_kg - reserves.breakdown.total_kg;
-  return { trip, reserves, residual_kg };
+  return { trip, reserves, residual_kg, log: ctx.log };
 }
 
 export interface IterationOutcome {
@@ -55,13 +57,16 @@ export interface IterationOutcome {
   readonly failure: MissionEvaluation | null;
   /** Set when the problem has no solution for a reason the iteration can name (status 'infeasible'). */
   readonly infeasible?: string;
+  /** The converged pass (recorded like a final flight, but flown with fuel exhaustion not enforced). */
+  readonly convergedPass?: MissionEvaluation;
 }
 
+/** A pass of the iteration: fuel may pass below zero-fuel mass; history and cautions recorded so a converged pass can be the result. */
 function scratch(ctx: MissionContext): MissionContext {
   return {
     ...ctx,
     options: { ...ctx.options, allowNegativeFuel: true },
-    log: createFlightLog(ctx.input.airframe, ctx.input.cautionSettings, true),
+    log: createFlightLog(ctx.input.airframe, ctx.input.cautionSettings),
   };
 }
 
@@ -109,7 +114,7 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
     if (failedFlight(e1)) return { converged: false, rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, failure: e1 };
     const distanceError = e1.trip.end[S_AIR] - range_m;
     if (Math.abs(e1.residual_kg) <= FUEL_TOLERANCE_KG && Math.abs(distanceError) <= DISTANCE_TOLERANCE_M) {
-      return { converged: true, rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, failure: null };
+      return { converged: true, rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, failure: null, convergedPass: e1 };
     }
     if (d === 0 && distanceError > DISTANCE_TOLERANCE_M) {
       return {
@@ -154,7 +159,7 @@ export function iterateDistance(ctx: MissionContext, rampMass_kg: number): Itera
     return { converged: false, rampMass_kg, distance_m: 0, iterations: 1, residual_kg: e0.residual_kg, failure: null };
   }
   if (Math.abs(e0.residual_kg) <= FUEL_TOLERANCE_KG) {
-    return { converged: true, rampMass_kg, distance_m: 0, iterations: 1, residual_kg: e0.residual_kg, failure: null };
+    return { converged: true, rampMass_kg, distance_m: 0, iterations: 1, residual_kg: e0.residual_kg, failure: null, convergedPass: e0 };
   }
   const leg = input.legs[solvableLegIndex(input)];
   let sr = 0;
@@ -168,7 +173,7 @@ export function iterateDistance(ctx: MissionContext, rampMass_kg: number): Itera
     const e1 = evaluateMission(scratch(ctx), rampMass_kg, d1);
     if (failedFlight(e1)) return { converged: false, rampMass_kg, distance_m: d1, iterations: k, residual_kg: e1.residual_kg, failure: e1 };
     if (Math.abs(e1.residual_kg) <= FUEL_TOLERANCE_KG) {
-      return { converged: true, rampMass_kg, distance_m: d1, iterations: k, residual_kg: e1.residual_kg, failure: null };
+      return { converged: true, rampMass_kg, distance_m: d1, iterations: k, residual_kg: e1.residual_kg, failure: null, convergedPass: e1 };
     }
     const slope = (e1.residual_kg - e0.residual_kg) / (d1 - d0);
     let next = Number.isFinite(slope) && slope < 0 ? d1 - e1.residual_kg / slope : d1 + e1.residual_kg * (sr > 0 ? sr : 100);

@@ -118,6 +118,7 @@ export function solveMission(input: MissionInput, options: SolveOptions = {}): M
   let converged = true;
   let residual = 0;
   let iterationMessage = '';
+  let convergedPass: MissionEvaluation | undefined;
   if (solve.kind === 'payloadRange') {
     const guess = breguetRampGuess(input, zfw, taxi, solve.range_m);
     const it = iterateRampMass(base, solve.range_m, guess);
@@ -125,6 +126,7 @@ export function solveMission(input: MissionInput, options: SolveOptions = {}): M
     if (it.infeasible !== undefined) {
       return { ...emptyResult(input, 'infeasible', it.infeasible), iterations, residual_kg: residual };
     }
+    convergedPass = it.convergedPass;
     if (!converged && it.failure === null) iterationMessage = `Fuel iteration did not converge after ${iterations} passes; residual ${residual.toFixed(2)} kg.`;
   } else {
     rampMass =
@@ -137,6 +139,7 @@ export function solveMission(input: MissionInput, options: SolveOptions = {}): M
     if (hasSolvable) {
       const it = iterateDistance(base, rampMass);
       ({ distance_m: distance, iterations, converged, residual_kg: residual } = it);
+      convergedPass = it.convergedPass;
       if (!converged && it.failure === null) {
         iterationMessage =
           iterations === 1
@@ -147,8 +150,14 @@ export function solveMission(input: MissionInput, options: SolveOptions = {}): M
   }
 
   // Final flight, recorded, fuel exhaustion enforced.
-  const ctx: MissionContext = { ...base, log: createFlightLog(input.airframe, input.cautionSettings) };
-  const final: MissionEvaluation = evaluateMission(ctx, rampMass, distance);
+  // The converged pass is the result when it never went below zero-fuel mass (its mass only falls, so
+  // checking block-in suffices); otherwise the final flight is flown again with fuel exhaustion enforced.
+  const reuse = convergedPass !== undefined && convergedPass.trip.end[S_MASS] >= zfw && convergedPass.reserves.status === 'ok';
+  const final: MissionEvaluation =
+    reuse && convergedPass !== undefined
+      ? convergedPass
+      : evaluateMission({ ...base, log: createFlightLog(input.airframe, input.cautionSettings) }, rampMass, distance);
+  const ctx = { log: final.log };
   const { trip, reserves } = final;
   if (solve.kind === 'takeoffWeight' && !hasSolvable) residual = final.residual_kg;
 
