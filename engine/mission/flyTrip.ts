@@ -47,6 +47,7 @@ export function tripBounds(input: MissionInput): { readonly first: number; reado
   return { first, last };
 }
 
+/** The state at block-out: time, distances and altitude 0, mass = ramp mass (kg). */
 export function initialState(rampMass_kg: number): StateVector {
   const s = new Float64Array(STATE_SIZE);
   s[S_MASS] = rampMass_kg;

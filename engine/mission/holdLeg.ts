@@ -19,6 +19,7 @@ import { checkThrustBelowDrag } from '../cautions/checks';
 
 export type HoldSpeed = { readonly kind: 'bestEndurance' } | { readonly kind: 'cas'; readonly cas_m_s: number };
 
+/** Flies a hold of `time_s` (s) at pressure altitude `altitude_m` (m) from `start`. */
 export function flyHold(
   ctx: MissionContext,
   target: LegTarget,

@@ -11,10 +11,12 @@ export interface LegOutcome {
   readonly lastSample: FlightSample | null;
 }
 
+/** A leg that ended normally. */
 export function legOk(state: StateVector, lastSample: FlightSample | null): LegOutcome {
   return { state, status: 'ok', message: '', lastSample };
 }
 
+/** A leg that ended the mission, with the status and a readable reason. */
 export function legFailed(state: StateVector, status: MissionStatus, message: string, lastSample: FlightSample | null): LegOutcome {
   return { state, status, message, lastSample };
 }

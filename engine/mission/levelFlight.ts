@@ -25,6 +25,7 @@ export interface LevelFlightSpec {
   readonly extraEvents?: readonly SegmentEvent[];
 }
 
+/** A level (or cruise-climb) segment with thrust = drag, ending on the spec's distance or time, fuel exhaustion or thrust below drag. */
 export function makeLevelSegment(ctx: MissionContext, target: LegTarget, spec: LevelFlightSpec): Segment {
   const input = ctx.input;
   const dev = target.env.isaDev_K;

@@ -15,6 +15,7 @@ import { S_ALT, S_MASS, S_TAS, STATE_SIZE, type Segment, type SegmentEvent, type
 /** Least acceleration (m/s^2) that counts as progress; below it the speed change is abandoned. */
 export const MIN_SPEED_CHANGE_M_S2 = 0.01;
 
+/** Flies a level speed change at the current altitude to Mach `toMach` (-) at `rating`. */
 export function flyLevelSpeedChange(
   ctx: MissionContext,
   target: LegTarget,

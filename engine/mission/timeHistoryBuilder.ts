@@ -48,6 +48,7 @@ export interface FlightLog {
   readonly quiet: boolean;
 }
 
+/** An empty flight log; a quiet one ignores samples and cautions. */
 export function createFlightLog(airframe: Airframe, settings: CautionSettings, quiet = false): FlightLog {
   const columns = {} as Record<Column, number[]>;
   for (const c of COLUMNS) columns[c] = [];
