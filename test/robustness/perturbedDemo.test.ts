@@ -126,6 +126,69 @@ function perturbedProject(p: Perturbation): string {
   return JSON.stringify(doc, null, 2);
 }
 
+// Unbiased draws: fast-check's default bias would put most values at the range ends.
+const dn = (min: number, max: number) => fc.noBias(d(min, max));
+
+const engineVariant = fc.record({
+  deck: fc.oneof(
+    fc.constant({ kind: 'file' as const }),
+    fc.record({
+      kind: fc.constant('parametric' as const),
+      model: fc.constantFrom('highBypassTurbofan', 'lowBypassTurbofan', 'turbojet'),
+      thrust_kN: dn(15, 45),
+      throttleRatio: dn(0.95, 1.2),
+      tsfc_lb_lbf_h: dn(0.35, 0.9),
+      airflow_kg_s: dn(30, 150),
+    }),
+  ),
+  inlet: fc.record({
+    capture_m2: dn(0.3, 0.7),
+    throatRatio: dn(0.7, 1.05),
+    fanFace_m2: dn(0.3, 0.8),
+    diffuserLoss: dn(0, 0.2),
+    lip: dn(0, 1),
+  }),
+  bleed: fc.oneof(
+    fc.record({ kind: fc.constant('coreFraction' as const), pct: dn(0, 60) }),
+    fc.record({ kind: fc.constant('massFlow' as const), kg_s: dn(0, 1.5), core: dn(0.05, 0.4) }),
+  ),
+  ramRecoveryFactor: fc.option(dn(0, 6), { nil: undefined }),
+  count: fc.integer({ min: 1, max: 4 }),
+});
+
+type EngineVariant = typeof engineVariant extends fc.Arbitrary<infer T> ? T : never;
+
+/** The demo project with another engine (parametric deck), a geometry inlet and other installation settings. */
+function engineProject(v: EngineVariant): string {
+  const doc = JSON.parse(demoText) as Json;
+  doc.engine.count = v.count;
+  if (v.deck.kind === 'parametric') {
+    doc.engine.deck = {
+      kind: 'parametric',
+      model: v.deck.model,
+      title: 'perturbed parametric engine (invented)',
+      seaLevelStaticThrust: `${v.deck.thrust_kN} kN`,
+      throttleRatio: v.deck.throttleRatio,
+      seaLevelStaticTsfc: `${v.deck.tsfc_lb_lbf_h} lb/(lbf h)`,
+      seaLevelStaticAirflow: `${v.deck.airflow_kg_s} kg/s`,
+    };
+  }
+  doc.inlets[0].source = {
+    kind: 'geometry',
+    captureArea: `${v.inlet.capture_m2} m2`,
+    throatArea: `${v.inlet.capture_m2 * v.inlet.throatRatio} m2`,
+    fanFaceArea: `${v.inlet.fanFace_m2} m2`,
+    diffuserLossCoefficient: v.inlet.diffuserLoss,
+  };
+  doc.inlets[0].lipSuctionFactor = v.inlet.lip;
+  doc.engine.installation = {
+    bleed: v.bleed.kind === 'coreFraction' ? { kind: 'coreFraction', fraction: `${v.bleed.pct} %` } : { kind: 'massFlow', massFlow: `${v.bleed.kg_s} kg/s`, coreFlowFraction: v.bleed.core },
+    powerExtraction: '30 kW',
+    ...(v.ramRecoveryFactor === undefined ? {} : { ramRecoveryFactor: v.ramRecoveryFactor }),
+  };
+  return JSON.stringify(doc, null, 2);
+}
+
 function checkResult(r: MissionResult): void {
   expect(STATUSES).toContain(r.status);
   if (r.status !== 'ok') expect(r.statusMessage).toMatch(/\S/);
@@ -168,5 +231,29 @@ describe('perturbed demo projects, parsed, built and flown', () => {
     );
     // The property is not vacuous: most generated projects are accepted and flown.
     expect(flown).toBeGreaterThan(runs / 2);
+  }, 60_000);
+
+  it('buildMissionInput never throws and solveMission never returns a non-finite number with other engines, geometry inlets and installations', () => {
+    let flown = 0;
+    let runs = 0;
+    fc.assert(
+      fc.property(engineVariant, (v) => {
+        runs++;
+        const parsed = parseProject(engineProject(v), 'engine-variant.blockwise.json');
+        if (!parsed.ok) {
+          for (const issue of parsed.error) expect(issue.path).toMatch(/\S/);
+          return;
+        }
+        const built = buildMissionInput(parsed.value, { deck });
+        if (!built.ok) {
+          for (const issue of built.error) expect(issue.path).toMatch(/\S/);
+          return;
+        }
+        flown++;
+        checkResult(solveMission(built.value));
+      }),
+      { numRuns: 12, seed: 8_2026_12 },
+    );
+    expect(flown).toBeGreaterThan(runs / 3);
   }, 60_000);
 });
