@@ -115,7 +115,7 @@ export const CAUTION_CATALOGUE: Readonly<Record<MissionCautionId, CautionEntry>>
   },
   reserve_below_minimum: {
     id: 'reserve_below_minimum',
-    title: "Fuel at block-in below the reserve policy's minimum",
+    title: "Fuel on board at landing below the reserve policy's minimum",
     severity: 'warning',
     defaultThreshold: S.minReserveFraction,
     unit: '-',

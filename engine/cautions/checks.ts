@@ -85,14 +85,14 @@ export function checkFuelCapacity(rampFuel_kg: number, maxFuel_kg: number): Caut
   return massCheck('fuel_capacity_exceeded', 'Fuel at block-out', rampFuel_kg, maxFuel_kg);
 }
 
-/** Fuel at block-in (kg) below `fraction` (-) of the policy's reserve (kg). */
-export function checkReserve(fuelAtBlockIn_kg: number, requiredReserve_kg: number, fraction: number): CautionDraft | null {
+/** Fuel on board at landing (kg) below `fraction` (-) of the policy's reserve (kg). */
+export function checkReserve(fuelAtLanding_kg: number, requiredReserve_kg: number, fraction: number): CautionDraft | null {
   const limit = requiredReserve_kg * fraction;
-  return fuelAtBlockIn_kg < limit
+  return fuelAtLanding_kg < limit
     ? draft(
         'reserve_below_minimum',
-        `Fuel at block-in ${fuelAtBlockIn_kg.toFixed(1)} kg is below the required reserve ${limit.toFixed(1)} kg.`,
-        fuelAtBlockIn_kg,
+        `Fuel on board at landing ${fuelAtLanding_kg.toFixed(1)} kg is below the required reserve ${limit.toFixed(1)} kg.`,
+        fuelAtLanding_kg,
         limit,
       )
     : null;

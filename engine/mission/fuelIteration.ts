@@ -1,7 +1,7 @@
 /**
  * Fuel iteration for the solve modes. One evaluation flies the trip and the
  * reserves (fuel may pass below zero-fuel mass while iterating) and returns
- * the residual = fuel at block-in - reserve fuel required.
+ * the residual = fuel on board at landing - reserve fuel required.
  *
  * - payloadRange: the ramp mass is found by the secant method so the residual
  *   is within FUEL_TOLERANCE_KG, while the solvable cruise leg's still-air
@@ -43,7 +43,7 @@ export function evaluateMission(ctx: MissionContext, rampMass_kg: number, distan
   const tripFuel_kg = trip.takeoff[S_MASS] - trip.landing[S_MASS];
   const tripTime_s = trip.landing[S_TIME] - trip.takeoff[S_TIME];
   const reserves = flyReserves(ctx, { tripFuel_kg, tripTime_s, landing: trip.landing });
-  const residual_kg = trip.end[S_MASS] - ctx.zeroFuelMass_kg - reserves.breakdown.total_kg;
+  const residual_kg = trip.landing[S_MASS] - ctx.zeroFuelMass_kg - reserves.breakdown.total_kg;
   return { trip, reserves, residual_kg, log: ctx.log };
 }
 
@@ -101,8 +101,8 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
   let d = e0.trip.solvableDistance_m;
   if (failedFlight(e0)) return { converged: false, rampMass_kg: x0, distance_m: d, iterations: 1, residual_kg: e0.residual_kg, failure: e0 };
   remember(e0);
-  // First slope: for a Breguet-like flight, d(block-in fuel)/d(ramp mass) = block-in mass / ramp mass.
-  const ratio = e0.trip.end[S_MASS] / x0;
+  // First slope: for a Breguet-like flight, d(landing fuel)/d(ramp mass) = landing mass / ramp mass.
+  const ratio = e0.trip.landing[S_MASS] / x0;
   let x1 = x0 - e0.residual_kg / (Number.isFinite(ratio) && ratio > 0.2 && ratio <= 1 ? ratio : 0.85);
   const guard = RAMP_MASS_GUARD * Math.max(ctx.input.airframe.mtow_kg, ctx.zeroFuelMass_kg + ctx.input.airframe.maxFuel_kg);
   for (let k = 2; k <= MAX_ITERATIONS; k++) {
@@ -131,7 +131,7 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
     // Secant slope with the previous residual moved to this pass's solvable distance (fuel per metre of that leg).
     const shifted = e0.residual_kg + (e0.trip.solvableDistance_m - d) * solvableFuelPerMetre(e0);
     const slope = (e1.residual_kg - shifted) / (x1 - x0);
-    const ratio1 = e1.trip.end[S_MASS] / x1;
+    const ratio1 = e1.trip.landing[S_MASS] / x1;
     const fallback = Number.isFinite(ratio1) && ratio1 > 0.2 && ratio1 <= 1 ? ratio1 : 0.85;
     const comparable = Math.abs(e0.trip.solvableDistance_m - d) <= 0.01 * Math.max(d, 1);
     const next = comparable && Number.isFinite(slope) && Math.abs(slope) > 0.05 ? x1 - e1.residual_kg / slope : x1 - e1.residual_kg / fallback;

@@ -6,14 +6,14 @@
  * Solve modes:
  * - takeoffWeight: flies from the given take-off mass and reports what is
  *   left; when a cruise leg has distance_m null its still-air distance is
- *   solved so the aircraft arrives at block-in with exactly the reserve.
+ *   solved so the aircraft lands with exactly the reserve.
  * - payloadRange: the fuel (ramp mass) is iterated until the aircraft
- *   arrives at block-in with exactly the reserve fuel (within 0.1 kg) and the
+ *   lands with exactly the reserve fuel on board (within 0.1 kg) and the
  *   solvable cruise leg's distance until the trip's total STILL-AIR distance
  *   equals the range (within 1 m). Wind changes the ground distance, not the
  *   range matched.
  * - maxRange: take-off mass = min(MTOW, zero-fuel mass + fuel capacity - taxi-out
- *   fuel); the solvable cruise leg is stretched until block-in fuel equals the
+ *   fuel); the solvable cruise leg is stretched until the fuel at landing equals the
  *   reserve; the range is the trip's still-air distance.
  * Block fuel is the fuel burned from block-out to block-in (taxi out, trip,
  * taxi in); trip fuel is take-off to landing; the reserve is carried.
@@ -151,7 +151,7 @@ export function solveMission(input: MissionInput, options: SolveOptions = {}): M
 
   // Final flight, recorded, fuel exhaustion enforced.
   // The converged pass is the result when it never went below zero-fuel mass (its mass only falls, so
-  // checking block-in suffices); otherwise the final flight is flown again with fuel exhaustion enforced.
+  // checking block-in suffices; taxi in is burned after landing); otherwise the final flight is flown again with fuel exhaustion enforced.
   const reuse = convergedPass !== undefined && convergedPass.trip.end[S_MASS] >= zfw && convergedPass.reserves.status === 'ok';
   const final: MissionEvaluation =
     reuse && convergedPass !== undefined
@@ -187,19 +187,19 @@ export function solveMission(input: MissionInput, options: SolveOptions = {}): M
   const legName = (i: number) => input.legs[Math.max(Math.min(i, input.legs.length - 1), 0)].name;
   const takeoffMass = trip.takeoff[S_MASS];
   const landingMass = trip.landing[S_MASS];
-  const blockInFuel = trip.end[S_MASS] - zfw;
+  const landingFuel = landingMass - zfw;
   appendCaution(ctx.log, at(first, legName(first)), checkMtow(takeoffMass, input.airframe.mtow_kg), trip.takeoff[S_TIME]);
   appendCaution(ctx.log, at(0, legName(0)), checkMzfw(zfw, input.airframe.mzfw_kg), 0);
   appendCaution(ctx.log, at(0, legName(0)), checkFuelCapacity(rampMass - zfw, input.airframe.maxFuel_kg), 0);
   if (status === 'ok') {
     appendCaution(ctx.log, at(last, legName(last)), checkMlw(landingMass, input.airframe.mlw_kg), trip.landing[S_TIME]);
     const iterated = solve.kind !== 'takeoffWeight' || hasSolvable;
-    const reserveCheck = iterated ? blockInFuel + FUEL_TOLERANCE_KG : blockInFuel;
+    const reserveCheck = iterated ? landingFuel + FUEL_TOLERANCE_KG : landingFuel;
     appendCaution(
       ctx.log,
-      at(input.legs.length - 1, legName(input.legs.length - 1)),
+      at(last, legName(last)),
       checkReserve(reserveCheck, reserves.breakdown.total_kg, input.cautionSettings.minReserveFraction),
-      trip.end[S_TIME],
+      trip.landing[S_TIME],
     );
   }
 

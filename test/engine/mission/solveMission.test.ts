@@ -91,8 +91,9 @@ describe('solveMission', () => {
     expect(r.status).toBe('ok');
     expectNoNaN(r);
     expectClose(r.airDistance_m, 3000 * 1852, { abs: 1 }, 'range is matched in still air');
-    // Arrives at block-in with the reserve: the definition of the payloadRange mode.
-    expectClose(r.rampMass_kg - r.blockFuel_kg - r.zeroFuelMass_kg, r.reserveFuel_kg, { abs: 0.1 }, 'block-in fuel = reserve');
+    // Lands with the reserve on board: the definition of the payloadRange mode.
+    expectClose(r.landingMass_kg - r.zeroFuelMass_kg, r.reserveFuel_kg, { abs: 0.1 }, 'landing fuel = reserve');
+    expect(r.blockFuel_kg).toBeGreaterThan(r.tripFuel_kg);
     expect(r.legs.filter((l) => l.kind === 'reserve').length).toBe(3);
     expect(r.history.time_s.length).toBeGreaterThan(20);
     expect(r.history.legIndex.length).toBe(r.history.time_s.length);
@@ -126,7 +127,7 @@ describe('solveMission', () => {
     expect(r.status).toBe('ok');
     const fuelLimited = Math.min(TEST_AIRFRAME.mtow_kg, r.zeroFuelMass_kg + TEST_AIRFRAME.maxFuel_kg - (r.rampMass_kg - r.takeoffMass_kg));
     expectClose(r.takeoffMass_kg, fuelLimited, { abs: 1e-6 }, 'TOW = min(MTOW, ZFW + capacity - taxi fuel)');
-    expectClose(r.rampMass_kg - r.blockFuel_kg - r.zeroFuelMass_kg, r.reserveFuel_kg, { abs: 0.1 }, 'block-in fuel = reserve');
+    expectClose(r.landingMass_kg - r.zeroFuelMass_kg, r.reserveFuel_kg, { abs: 0.1 }, 'landing fuel = reserve');
     expect(r.reserves.extra_kg).toBe(200);
   });
 
