@@ -6,7 +6,8 @@
  * Stable data-testid attributes for end-to-end tests:
  *   shell:    safety-notice, view-tab-<id>, view-<id>, unit-system-toggle,
  *             command-<open|openDemo|save|saveAs|importDeck|exportHistory|exportLegs|print|undo|redo>,
- *             app-message, open-issues, document-name, print-report
+ *             app-message, open-issues, document-name, print-report,
+ *             recovery-offer, recovery-restore, recovery-discard
  *   results:  headline-<block-fuel|block-time|trip-fuel|reserve-fuel|tow|lw|zfw|distance>,
  *             mission-status, results-stale, results-failure, results-waiting,
  *             chart-altitude, chart-mass, legs-table, legs-row-<n>, caution-list,
@@ -16,7 +17,8 @@
  *             induced-kind, field-aspect-ratio, field-oswald, field-k-mach-<n>, field-k-<n>,
  *             field-cl-min-drag, field-cd-increment, compressibility-kind, field-sweep,
  *             field-thickness, field-korn-factor, chart-polar, project-issues
- *   engine:   command-importDeck, deck-errors, deck-summary, field-engine-count,
+ *   engine:   command-importDeck, engine-import-deck, deck-errors, deck-error-<n>, deck-summary,
+ *             lapse-rating, field-engine-count, field-bleed, field-power-extraction, field-c-ram,
  *             chart-thrust-lapse, chart-tsfc
  *   inlets:   active-inlet, inlet-<n>, field-inlet-<n>-capture ..., chart-recovery,
  *             chart-spillage, chart-inlet-mach
@@ -34,6 +36,7 @@
 import { useMemo, useState } from 'react';
 import type { Bridge } from './bridge/bridge';
 import { IssueList } from './components/IssueList';
+import { RecoveryBanner } from './components/RecoveryBanner';
 import type { ChartSize } from './components/LineChartPanel';
 import { SafetyNotice } from './components/SafetyNotice';
 import { Toolbar } from './components/Toolbar';
@@ -44,6 +47,7 @@ import { StudyContext } from './state/studyContext';
 import { useStudyStore } from './state/useStudyStore';
 import type { ViewId } from './state/viewNames';
 import { useAppCommands } from './state/useAppCommands';
+import { useRecovery } from './state/useRecovery';
 import { CurrentView } from './views/CurrentView';
 import type { EngineClient } from './worker/engineClient';
 import type { StudyInputs } from './worker/engineProtocol';
@@ -73,6 +77,7 @@ function Shell(props: AppProps) {
   const inputs = useMemo<StudyInputs | null>(() => (project === null ? null : { project, deckFile: state.deckFile }), [project, state.deckFile]);
   const live = useLiveStudy(inputs);
   const commands = useAppCommands(props.bridge, store, live.snapshot);
+  const recovery = useRecovery(props.bridge, store);
   return (
     <StudyContext.Provider value={store}>
       <div className="app">
@@ -102,6 +107,8 @@ function Shell(props: AppProps) {
               </button>
             </p>
           ) : null}
+          <RecoveryBanner offer={recovery.offer} onRestore={recovery.restore} onDiscard={recovery.discard} />
+          {recovery.problem ? <p className="app-message">{recovery.problem}</p> : null}
           <IssueList issues={state.openIssues} testId="open-issues" title="That project could not be opened" />
           <main className="view" data-testid={`view-${view}`}>
             {project === null ? <p>Opening…</p> : <CurrentView view={view} live={live} onCommand={(c) => void commands.run(c)} {...(props.chartSize ? { chartSize: props.chartSize } : {})} />}

@@ -1,6 +1,8 @@
 import { SAFETY_NOTICE_LINES } from '../../engine/core/notice';
 import type { Project } from '../../engine/project/projectSchema';
 import { displayUnit, formatQuantity, type UnitSystem } from '../../engine/units/quantity';
+import { lapseSeries } from '../charts/lapseSeries';
+import { polarSeries } from '../charts/polarSeries';
 import { profileSeries } from '../charts/profileSeries';
 import { CautionList } from '../components/CautionList';
 import { HeadlineFigures } from '../components/HeadlineFigures';
@@ -18,6 +20,8 @@ export function StudyReport(props: { readonly project: Project; readonly snapsho
   const m = s.mission;
   const rows = profileSeries(m.history, u, 200);
   const w = p.airframe.weights;
+  const polar = polarSeries(s.polar);
+  const lapse = s.lapse.length > 0 ? lapseSeries(s.lapse[0]!, u) : null;
   return (
     <article className="print-report" data-testid="print-report" aria-hidden="true">
       <h1>{p.name}</h1>
@@ -75,6 +79,20 @@ export function StudyReport(props: { readonly project: Project; readonly snapsho
       <HeadlineFigures result={m} units={u} idPrefix="report-headline" />
       <LineChartPanel title="Altitude against distance" testId="report-chart-altitude" data={rows} xKey="distance" xLabel={`distance (${displayUnit('distance', u)})`} yLabel={`altitude (${displayUnit('altitude', u)})`} series={[{ key: 'altitude', name: 'pressure altitude' }]} size={REPORT_CHART} />
       <LineChartPanel title="Mass against distance" testId="report-chart-mass" data={rows} xKey="distance" xLabel={`distance (${displayUnit('distance', u)})`} yLabel={`mass (${displayUnit('mass', u)})`} series={[{ key: 'mass', name: 'aircraft mass' }]} size={REPORT_CHART} />
+      {polar ? <LineChartPanel title={`Drag polar with ${s.inletName}'s external drag`} testId="report-chart-polar" data={polar.rows} xKey="cl" xLabel="CL" yLabel="CD" series={polar.series} size={REPORT_CHART} /> : null}
+      {lapse ? (
+        <LineChartPanel
+          title={`Thrust at ${s.lapse[0]!.rating}, all engines: uninstalled (dashed) and installed`}
+          testId="report-chart-lapse"
+          data={lapse.thrust}
+          xKey="mach"
+          xLabel="Mach"
+          yLabel={`thrust (${lapse.thrustUnit})`}
+          series={lapse.series}
+          dashed={(key) => key.startsWith('u')}
+          size={REPORT_CHART}
+        />
+      ) : null}
       <h2>Legs</h2>
       <LegsTable legs={m.legs} units={u} highlightLeg={null} testId="report-legs" />
       <h2>Cautions</h2>

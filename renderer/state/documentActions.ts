@@ -6,11 +6,16 @@ import { parseProject } from '../../engine/project/parseProject';
 import type { StudyAction } from './studyActions';
 import type { DeckFile } from './studyState';
 
-/** Parses project text; `deckFile` is the deck that came with it (the demo's), if any. */
+/**
+ * Parses project text. `deckFile` is a deck already at hand (the demo's, or
+ * the one in use); it is kept only when the project names a deck file of
+ * that name.
+ */
 export function openProjectAction(name: string, text: string, deckFile: DeckFile | null): StudyAction {
   const parsed = parseProject(text, name);
   if (!parsed.ok) return { type: 'projectOpenFailed', name, issues: parsed.error };
   const project = parsed.value;
-  const usesFile = project.engine.deck.kind === 'file';
-  return { type: 'projectOpened', project, name, deckFile: usesFile ? deckFile : null };
+  const deck = project.engine.deck;
+  const keep = deck.kind === 'file' && deckFile !== null && deck.path === deckFile.name;
+  return { type: 'projectOpened', project, name, deckFile: keep ? deckFile : null };
 }

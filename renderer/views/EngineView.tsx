@@ -1,4 +1,7 @@
+import { useState } from 'react';
+import type { RatingName } from '../../engine/propulsion/propulsionModel';
 import { formatQuantity } from '../../engine/units/quantity';
+import { ChoiceField } from '../components/ChoiceField';
 import { lapseSeries } from '../charts/lapseSeries';
 import { FailureNotice } from '../components/IssueList';
 import { LineChartPanel, type ChartSize } from '../components/LineChartPanel';
@@ -16,7 +19,9 @@ export function EngineView(props: { readonly live: LiveStudy; readonly chartSize
   const { snapshot, failure } = props.live;
   const u = state.units;
   const deckErrors = failure?.kind === 'deck' ? failure.errors : [];
-  const lapse = snapshot ? lapseSeries(snapshot.lapse, u) : null;
+  const [rating, setRating] = useState<RatingName>('maxCruise');
+  const curves = snapshot?.lapse.find((l) => l.rating === rating) ?? snapshot?.lapse[0] ?? null;
+  const lapse = curves ? lapseSeries(curves, u) : null;
   const size = props.chartSize ? { size: props.chartSize } : {};
   return (
     <section>
@@ -105,10 +110,13 @@ export function EngineView(props: { readonly live: LiveStudy; readonly chartSize
         ) : null}
       </div>
       <StaleMark stale={props.live.stale} running={props.live.running} />
-      {lapse ? (
+      {snapshot && snapshot.lapse.length > 0 ? (
+        <ChoiceField label="Rating plotted" testId="lapse-rating" value={curves?.rating ?? rating} choices={snapshot.lapse.map((l) => ({ value: l.rating, label: l.rating }))} onChoose={setRating} />
+      ) : null}
+      {lapse && curves ? (
         <div className="chart-row">
           <LineChartPanel
-            title={`Thrust at ${snapshot!.lapse.rating}, all engines, ISA: uninstalled (dashed) and installed with ${snapshot!.inletName}`}
+            title={`Thrust at ${curves.rating}, all engines, ISA: uninstalled (dashed) and installed with ${snapshot!.inletName}`}
             testId="chart-thrust-lapse"
             data={lapse.thrust}
             xKey="mach"

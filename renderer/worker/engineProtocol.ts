@@ -89,7 +89,8 @@ export interface StudySnapshot {
   readonly inletName: string;
   readonly deck: DeckSummary;
   readonly polar: PolarCurves;
-  readonly lapse: LapseCurves;
+  /** One set per rating the deck names (flight idle left out), maxCruise first when present. */
+  readonly lapse: readonly LapseCurves[];
   readonly inlets: readonly InletCurves[];
 }
 

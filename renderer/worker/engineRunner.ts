@@ -19,7 +19,7 @@ import { parseDeckCsv } from '../../engine/propulsion/deckCsv';
 import type { EngineDeck } from '../../engine/propulsion/engineDeck';
 import type { AnalysisError } from '../../engine/analysis/analysisTypes';
 import type { EngineFailure, EngineOutcome, EngineReplies, EngineRequest, EngineRequestKind, StudyInputs } from './engineProtocol';
-import { deckSummary, inletCurves, lapseCurves, polarCurves } from './studyCurves';
+import { deckSummary, inletCurves, LAPSE_RATINGS, lapseCurves, polarCurves } from './studyCurves';
 
 export interface RunHooks {
   readonly onProgress?: (done: number, total: number) => void;
@@ -95,7 +95,7 @@ function runStudy(inputs: StudyInputs, cache: DeckCache): Result<EngineReplies['
     inletName: input.propulsion.inletName,
     deck: deckSummary(deck),
     polar: polarCurves(input.aero),
-    lapse: lapseCurves(input.propulsion, 'maxCruise'),
+    lapse: LAPSE_RATINGS.filter((r) => deck.ratings[r] !== undefined).map((r) => lapseCurves(input.propulsion, r)),
     inlets,
   });
 }

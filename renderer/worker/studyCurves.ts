@@ -10,6 +10,8 @@ const FT = 0.3048;
 export const PLOT_MACHS: readonly number[] = Array.from({ length: 18 }, (_, i) => 0.05 * (i + 1));
 export const POLAR_MACHS: readonly number[] = [0.4, 0.7, 0.78, 0.82, 0.85];
 export const POLAR_CLS: readonly number[] = Array.from({ length: 21 }, (_, i) => i * 0.05);
+/** Ratings plotted in the engine view, in menu order. */
+export const LAPSE_RATINGS: readonly RatingName[] = ['maxCruise', 'maxClimb', 'maxContinuous', 'takeoff'];
 export const LAPSE_ALTITUDES_M: readonly number[] = [0, 10000 * FT, 20000 * FT, 30000 * FT, 40000 * FT];
 
 function finiteOrNull(x: number | null | undefined): number | null {

@@ -1,7 +1,7 @@
 /** A Bridge for component tests: the demo files from fixtures/demo, recorded exports and prints. */
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
-import type { Bridge, DemoFiles, OpenedDeck, OpenedProject } from '../../../renderer/bridge/bridge';
+import type { Bridge, DemoFiles, OpenedDeck, OpenedProject, RecoveryOffer } from '../../../renderer/bridge/bridge';
 
 const root = resolve(import.meta.dirname, '../../..');
 
@@ -24,6 +24,8 @@ export interface FakeBridge extends Bridge {
   readonly prints: string[];
   nextDeck: OpenedDeck | null;
   nextProject: OpenedProject | null;
+  recovery: RecoveryOffer | null;
+  discarded: number;
 }
 
 export function createFakeBridge(): FakeBridge {
@@ -34,6 +36,8 @@ export function createFakeBridge(): FakeBridge {
     prints: [],
     nextDeck: null,
     nextProject: null,
+    recovery: null,
+    discarded: 0,
     openProject: async () => bridge.nextProject,
     openRecent: async () => {
       throw new Error('no recent files in tests');
@@ -59,8 +63,11 @@ export function createFakeBridge(): FakeBridge {
     recentFiles: async () => [],
     loadDemo: async () => demoFiles(),
     autosave: async () => undefined,
-    recoveryOffer: async () => null,
-    discardRecovery: async () => undefined,
+    recoveryOffer: async () => bridge.recovery,
+    discardRecovery: async () => {
+      bridge.discarded += 1;
+      bridge.recovery = null;
+    },
     setDocumentState: async () => undefined,
     onMenuCommand: () => () => undefined,
   };

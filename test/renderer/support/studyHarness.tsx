@@ -41,3 +41,14 @@ export function renderWithStudy(ui: ReactNode, initial: StudyState = demoState()
   );
   return { ...result, probe };
 }
+
+/** An engine client that answers every request with `value` (for views whose engine run is tested elsewhere). */
+export function cannedClient(value: unknown, requests: string[] = []): EngineClient {
+  return {
+    run: (request) => {
+      requests.push(request.kind);
+      return { outcome: Promise.resolve({ ok: true, value } as never), cancel: () => undefined };
+    },
+    dispose: () => undefined,
+  };
+}

@@ -4,7 +4,7 @@ import { SAFETY_NOTICE_LINES } from '../../../engine/core/notice';
 import { App } from '../../../renderer/App';
 import { createInThreadClient } from '../../../renderer/worker/engineClient';
 import { expectClose } from '../../support/assertInDelta';
-import { createFakeBridge, fixtureText } from '../support/fakeBridge';
+import { createFakeBridge, fixtureText, demoFiles, type FakeBridge } from '../support/fakeBridge';
 import { TEST_CHART } from '../support/studyHarness';
 
 function numberIn(text: string | null): number {
@@ -30,8 +30,9 @@ async function waitForChange(previous: number): Promise<number> {
   return now;
 }
 
-function renderApp() {
+function renderApp(setup: (bridge: FakeBridge) => void = () => undefined) {
   const bridge = createFakeBridge();
+  setup(bridge);
   render(<App bridge={bridge} engine={createInThreadClient()} chartSize={TEST_CHART} />);
   return bridge;
 }
@@ -124,5 +125,29 @@ describe('the App with the demo study', () => {
     expect(bridge.saves[0]!.name).toBe('demo.blockwise.json');
     expect(JSON.parse(bridge.saves[0]!.text)).toMatchObject({ format: 'blockwise-project', version: 2 });
     expect(screen.getByTestId('document-name').textContent).toBe('demo.blockwise.json');
+  }, 60000);
+
+  it('offers unsaved work from an earlier session and restores it with the deck in use', async () => {
+    const edited = demoFiles().projectText.replace('"payload": "1600 lb"', '"payload": "1800 lb"');
+    expect(edited).not.toBe(demoFiles().projectText);
+    renderApp((b) => {
+      b.recovery = { name: 'demo.blockwise.json', text: edited, savedAt_ms: Date.UTC(2026, 0, 2, 3, 4), projectPath: null };
+    });
+    const before = await blockFuel();
+    expect(screen.getByTestId('recovery-offer').textContent).toContain('2026-01-02 03:04 UTC');
+    fireEvent.click(screen.getByTestId('recovery-restore'));
+    // 200 lb more payload over the same range needs more fuel (Breguet: fuel grows with the weight carried)
+    const after = await waitForChange(before);
+    expect(after).toBeGreaterThan(before);
+    expect(screen.queryByTestId('recovery-offer')).toBeNull();
+  }, 60000);
+
+  it('discarding the recovery copy tells the bridge', async () => {
+    const bridge = renderApp((b) => {
+      b.recovery = { name: 'x.blockwise.json', text: '{}', savedAt_ms: 0, projectPath: null };
+    });
+    fireEvent.click(await screen.findByTestId('recovery-discard'));
+    await waitFor(() => expect(bridge.discarded).toBe(1));
+    expect(screen.queryByTestId('recovery-offer')).toBeNull();
   }, 60000);
 });

@@ -11,7 +11,7 @@ import type { StudySnapshot } from '../../../renderer/worker/engineProtocol';
 import type { EngineClient } from '../../../renderer/worker/engineClient';
 import type { InletComparisonResult } from '../../../engine/analysis/inletComparison';
 import type { LiveStudy } from '../../../renderer/worker/useEngine';
-import { demoState, renderWithStudy, TEST_CHART } from '../support/studyHarness';
+import { cannedClient, demoState, renderWithStudy, TEST_CHART } from '../support/studyHarness';
 
 let snapshot: StudySnapshot;
 beforeAll(() => {
@@ -161,10 +161,28 @@ describe('CompareView', () => {
     expect(screen.queryByTestId('trade-table')).toBeNull();
   });
 
-  it('flies the payload-range diagram and draws it', async () => {
+  it('flies the payload-range diagram and draws it, or says which mission failed', async () => {
     renderWithStudy(<CompareView live={live()} chartSize={TEST_CHART} />);
     fireEvent.click(screen.getByTestId('payload-range-run'));
-    const chart = await screen.findByTestId('chart-payload-range', {}, { timeout: 30000 });
-    expect(chart.querySelector('svg')).not.toBeNull();
+    await waitFor(() => expect(screen.queryByTestId('chart-payload-range') ?? screen.queryByTestId('payload-range-failure')).not.toBeNull(), { timeout: 30000 });
+    const failure = screen.queryByTestId('payload-range-failure');
+    if (failure) expect(failure.textContent).toMatch(/payload-range: the .* mission \(payload \d+ kg\) failed/);
+    else expect(screen.getByTestId('chart-payload-range').querySelector('svg')).not.toBeNull();
   }, 60000);
+
+  it('draws a payload-range result from maximum payload at zero range to the ferry point', async () => {
+    const NMI = 1852;
+    const point = (kind: string, payload_kg: number, range_nmi: number) => ({ kind, payload_kg, range_m: range_nmi * NMI });
+    const canned = {
+      maxPayload: point('maxPayload', 1000, 2500),
+      points: [point('maxPayload', 1000, 2500), point('mtowFullFuel', 700, 3100), point('ferry', 0, 3400)],
+      missions: 3,
+      note: 'reserves carried',
+    };
+    renderWithStudy(<CompareView live={live()} chartSize={TEST_CHART} />, demoState(), cannedClient(canned));
+    fireEvent.click(screen.getByTestId('payload-range-run'));
+    const chart = await screen.findByTestId('chart-payload-range');
+    expect(chart.querySelectorAll('path.recharts-curve').length).toBeGreaterThan(0);
+    expect(screen.getByText('reserves carried')).toBeInTheDocument();
+  });
 });

@@ -1,0 +1,57 @@
+/**
+ * Crash recovery through the bridge: unsaved work is sent for safekeeping
+ * every few seconds while the document is dirty (renderer/bridge/autosaveTimer.ts),
+ * and an earlier session's unsaved work is offered back at start.
+ */
+import { useCallback, useEffect, useRef, useState } from 'react';
+import { projectToJson } from '../../engine/project/projectToJson';
+import { startAutosave } from '../bridge/autosaveTimer';
+import type { Bridge, RecoveryOffer } from '../bridge/bridge';
+import { openProjectAction } from './documentActions';
+import type { StudyStore } from './studyContext';
+
+export function useRecovery(bridge: Bridge, store: StudyStore) {
+  const { state, dispatch } = store;
+  const [offer, setOffer] = useState<RecoveryOffer | null>(null);
+  const [problem, setProblem] = useState<string | null>(null);
+  const latest = useRef(state);
+  latest.current = state;
+
+  useEffect(() => {
+    let live = true;
+    bridge.recoveryOffer().then(
+      (o) => live && setOffer(o),
+      () => undefined,
+    );
+    return () => {
+      live = false;
+    };
+  }, [bridge]);
+
+  useEffect(
+    () =>
+      startAutosave(
+        bridge,
+        () => {
+          const s = latest.current;
+          if (s.doc === null) return null;
+          return { name: s.documentName, text: projectToJson(s.doc.present), dirty: s.savedAtStep !== s.doc.past.length };
+        },
+        (e) => setProblem(`Could not keep a recovery copy: ${e instanceof Error ? e.message : String(e)}`),
+      ),
+    [bridge],
+  );
+
+  const restore = useCallback(() => {
+    if (offer === null) return;
+    dispatch(openProjectAction(offer.name, offer.text, latest.current.deckFile));
+    setOffer(null);
+  }, [offer, dispatch]);
+
+  const discard = useCallback(() => {
+    setOffer(null);
+    bridge.discardRecovery().catch((e: unknown) => setProblem(e instanceof Error ? e.message : String(e)));
+  }, [bridge]);
+
+  return { offer, problem, restore, discard };
+}
