@@ -31,9 +31,10 @@ written down in docs/benchmarks.md ("The Python peer"); in short:
   minimum-drag speed).
 * Integration: scipy solve_ivp (RK45, rtol 1e-7) with terminal events for
   altitude, speed, distance, time and the step-climb condition.
-* Fuel iteration: scipy brentq on the ramp mass so the aircraft arrives at
-  block-in with exactly the reserve; the cruise distance is set each pass so
-  the trip's still-air distance equals the range.
+* Fuel iteration: scipy brentq on the ramp mass so the aircraft lands with
+  exactly the reserve on board (taxi-in fuel is burned after landing); the
+  cruise distance is set each pass so the trip's still-air distance equals
+  the range.
 
 Usage: python3 demoMission.py [project.json] [--repeat N]
 Prints one JSON object on stdout.
@@ -553,10 +554,15 @@ class DemoMission:
         hold_alt = self.alt_elev + 1500 * FT
         top, v = f.climb(y, 0.0, self.climb_sched, self.alt_h)
         trial, _ = f.descent(top, v, self.descent_sched, hold_alt)
-        cruise_x = self.alt_distance - top[1] - (trial[1] - top[1])
-        end, _ = f.level(top, self.alt_mach, end_x=top[1] + cruise_x)
-        a = math.sqrt(GAMMA * R * isa(end[2])[0])
-        end, _ = f.descent(end, self.alt_mach * a, self.descent_sched, hold_alt)
+        descent_x = trial[1] - top[1]
+        for _ in range(4):
+            # Cruise to the top of descent, descend; fly again until the alternate's distance is met within 1 m.
+            tod, _ = f.level(top, self.alt_mach, end_x=self.alt_distance - descent_x)
+            a = math.sqrt(GAMMA * R * isa(tod[2])[0])
+            end, _ = f.descent(tod, self.alt_mach * a, self.descent_sched, hold_alt)
+            if abs(end[1] - self.alt_distance) <= 1.0:
+                break
+            descent_x = end[1] - tod[1]
         alternate = start_mass - end[3]
         final = f.hold(end, hold_alt, self.final_s)
         final_fuel = end[3] - final[3]
@@ -566,7 +572,8 @@ class DemoMission:
         tow, landing, block_in = self.trip(ramp)
         reserve = self.reserves(tow, landing)
         self.last = (ramp, tow, landing, block_in, reserve)
-        return block_in[3] - self.zfw - reserve
+        # Land with exactly the reserve on board; taxi-in fuel is burned after landing, on top of it.
+        return landing[3] - self.zfw - reserve
 
     def solve(self):
         guess = self.zfw * 1.6
