@@ -56,7 +56,7 @@ export function useAppCommands(bridge: Bridge, store: StudyStore, snapshot: Stud
             return;
           case 'open': {
             const opened = await bridge.openProject();
-            if (opened) dispatch(openProjectAction(opened.name, opened.text, null));
+            if (opened) dispatch(openProjectAction(opened.name, opened.text, s.deckFile));
             return;
           }
           case 'openDemo':
@@ -122,7 +122,7 @@ export function useAppCommands(bridge: Bridge, store: StudyStore, snapshot: Stud
       bridge.onMenuCommand((command, path) => {
         if (command === 'openRecent' && path !== undefined) {
           void bridge.openRecent(path).then(
-            (opened) => dispatch(openProjectAction(opened.name, opened.text, null)),
+            (opened) => dispatch(openProjectAction(opened.name, opened.text, latest.current.state.deckFile)),
             (e: unknown) => setMessage(describe(e)),
           );
           return;

@@ -1,0 +1,133 @@
+import { act, renderHook, waitFor } from '@testing-library/react';
+import type { ReactNode } from 'react';
+import { describe, expect, it } from 'vitest';
+import type { EngineClient, EngineRun } from '../../../renderer/worker/engineClient';
+import type { EngineOutcome, EngineRequest, EngineRequestKind, StudyInputs, StudySnapshot } from '../../../renderer/worker/engineProtocol';
+import { EngineContext, REFLY_DELAY_MS, useEngineJob, useLiveStudy } from '../../../renderer/worker/useEngine';
+import { demoState } from '../support/studyHarness';
+
+interface Pending {
+  readonly request: EngineRequest;
+  readonly onProgress: ((done: number, total: number) => void) | undefined;
+  resolve(outcome: EngineOutcome<EngineRequestKind> | 'cancelled'): void;
+  cancelled: boolean;
+}
+
+/** A client whose runs the test finishes by hand. */
+function manualClient(): EngineClient & { readonly runs: Pending[] } {
+  const runs: Pending[] = [];
+  return {
+    runs,
+    run<K extends EngineRequestKind>(request: Extract<EngineRequest, { kind: K }>, onProgress?: (done: number, total: number) => void): EngineRun<K> {
+      let resolve!: Pending['resolve'];
+      const outcome = new Promise<EngineOutcome<K> | 'cancelled'>((r) => {
+        resolve = r as Pending['resolve'];
+      });
+      const pending: Pending = { request, onProgress, resolve, cancelled: false };
+      runs.push(pending);
+      return {
+        outcome,
+        cancel() {
+          pending.cancelled = true;
+          resolve('cancelled');
+        },
+      };
+    },
+    dispose() {},
+  };
+}
+
+function wrapper(client: EngineClient) {
+  return ({ children }: { children: ReactNode }) => <EngineContext.Provider value={client}>{children}</EngineContext.Provider>;
+}
+
+const snapshot = (tag: number) => ({ mission: { blockFuel_kg: tag } }) as unknown as StudySnapshot;
+
+function inputs(): StudyInputs {
+  const s = demoState();
+  return { project: s.doc!.present, deckFile: s.deckFile };
+}
+
+describe('useLiveStudy', () => {
+  it('waits a little after an edit, flies once for a burst of edits, and tags the result with its revision', async () => {
+    const client = manualClient();
+    const first = inputs();
+    const { result, rerender } = renderHook(({ i }) => useLiveStudy(i), { wrapper: wrapper(client), initialProps: { i: first } });
+    expect(client.runs).toHaveLength(0);
+    rerender({ i: { ...first } });
+    rerender({ i: { ...first } });
+    await waitFor(() => expect(client.runs).toHaveLength(1));
+    expect(REFLY_DELAY_MS).toBeGreaterThan(0);
+    expect(result.current.running).toBe(true);
+    await act(async () => client.runs[0]!.resolve({ ok: true, value: snapshot(1) }));
+    expect(result.current.snapshot).toEqual(snapshot(1));
+    expect(result.current.snapshotRevision).toBe(result.current.revision);
+    expect(result.current.stale).toBe(false);
+    expect(result.current.running).toBe(false);
+  });
+
+  it('keeps the last good result, marked stale, when newer inputs fail; a late older reply is dropped', async () => {
+    const client = manualClient();
+    const first = inputs();
+    const { result, rerender } = renderHook(({ i }) => useLiveStudy(i), { wrapper: wrapper(client), initialProps: { i: first } });
+    await waitFor(() => expect(client.runs).toHaveLength(1));
+    await act(async () => client.runs[0]!.resolve({ ok: true, value: snapshot(1) }));
+
+    rerender({ i: { ...first } });
+    await waitFor(() => expect(client.runs).toHaveLength(2));
+    rerender({ i: { ...first } });
+    await waitFor(() => expect(client.runs).toHaveLength(3));
+    expect(result.current.stale).toBe(true);
+    const failure = { kind: 'analysis' as const, code: 'x', message: 'no' };
+    await act(async () => client.runs[2]!.resolve({ ok: false, failure }));
+    expect(result.current.failure).toEqual(failure);
+    expect(result.current.snapshot).toEqual(snapshot(1));
+    expect(result.current.stale).toBe(true);
+    // the reply to the older request arrives last and must not replace anything
+    await act(async () => client.runs[1]!.resolve({ ok: true, value: snapshot(2) }));
+    expect(result.current.snapshot).toEqual(snapshot(1));
+  });
+
+  it('does nothing without a project', async () => {
+    const client = manualClient();
+    const { result } = renderHook(() => useLiveStudy(null), { wrapper: wrapper(client) });
+    await new Promise((r) => setTimeout(r, REFLY_DELAY_MS * 2));
+    expect(client.runs).toHaveLength(0);
+    expect(result.current.snapshot).toBeNull();
+  });
+});
+
+describe('useEngineJob', () => {
+  it('shows progress, then the value', async () => {
+    const client = manualClient();
+    const { result } = renderHook(() => useEngineJob<'payloadRange'>(), { wrapper: wrapper(client) });
+    act(() => result.current.start({ kind: 'payloadRange', ...inputs() }));
+    expect(result.current.state).toEqual({ status: 'running', done: 0, total: 0 });
+    act(() => client.runs[0]!.onProgress?.(2, 9));
+    expect(result.current.state).toEqual({ status: 'running', done: 2, total: 9 });
+    const value = { points: [] } as never;
+    await act(async () => client.runs[0]!.resolve({ ok: true, value }));
+    expect(result.current.state).toEqual({ status: 'done', value });
+  });
+
+  it('cancel stops the run and says cancelled; a new start cancels the run before it', async () => {
+    const client = manualClient();
+    const { result } = renderHook(() => useEngineJob<'tradeFactors'>(), { wrapper: wrapper(client) });
+    act(() => result.current.start({ kind: 'tradeFactors', ...inputs() }));
+    act(() => result.current.start({ kind: 'tradeFactors', ...inputs() }));
+    expect(client.runs[0]!.cancelled).toBe(true);
+    await act(async () => undefined);
+    expect(result.current.state.status).toBe('running');
+    act(() => result.current.cancel());
+    expect(client.runs[1]!.cancelled).toBe(true);
+    await waitFor(() => expect(result.current.state).toEqual({ status: 'cancelled' }));
+  });
+
+  it('cancels its run when the view goes away', () => {
+    const client = manualClient();
+    const { result, unmount } = renderHook(() => useEngineJob<'compare'>(), { wrapper: wrapper(client) });
+    act(() => result.current.start({ kind: 'compare', ...inputs(), nameA: 'a', nameB: 'b' }));
+    unmount();
+    expect(client.runs[0]!.cancelled).toBe(true);
+  });
+});
