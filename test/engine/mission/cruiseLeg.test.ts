@@ -75,4 +75,18 @@ describe('cruiseLeg', () => {
     expect(c).toMatchObject({ legIndex: 0, legName: 'cruise' });
     expect(c!.value!).toBeLessThanOrEqual(c!.threshold!);
   });
+
+  it('cruiseLeg does not step up when the climb rate at the higher level would be below the residual climb rate', () => {
+    // Same aircraft, but maxClimb thrust barely above cruise drag: the step rule's climb-rate condition fails.
+    const weakClimb = constantTsfcPropulsion({ thrust0_N: 260000, tsfc_kg_N_s: 1.7e-5, lapseExponent: 0.75, ratings: { maxClimb: 0.2, maxCruise: 0.9 } });
+    const r = solveMission(
+      missionInput({
+        legs: cruise({ kind: 'mach', mach: 0.78 }, { kind: 'stepClimb', step_m: 2000 * FT, maxAltitude_m: 41000 * FT }, 29000 * FT),
+        solve: { kind: 'takeoffWeight', takeoffMass_kg: 78000, payload_kg: 10000 },
+        propulsion: weakClimb,
+      }),
+    );
+    expect(r.status).toBe('ok');
+    expect(Math.max(...r.history.altitude_m)).toBeCloseTo(29000 * FT, 6);
+  });
 });

@@ -142,6 +142,18 @@ describe('solveMission', () => {
     expectClose(windy.tripFuel_kg, still.tripFuel_kg, { rel: 1e-9 }, 'fuel is flown in the air mass');
   });
 
+  it('solveMission takes the leg wind and ISA deviation over the mission ones', () => {
+    const leg = (extra: object): Leg[] => [{ ...cruiseOnly(1_000_000)[0], ...extra } as Leg];
+    const solve = { kind: 'takeoffWeight', takeoffMass_kg: 70000, payload_kg: 10000 } as const;
+    const own = solveMission(missionInput({ legs: leg({ wind_m_s: 25, isaDev_K: 12 }), solve, wind_m_s: -40, isaDev_K: -5 }));
+    const mission = solveMission(missionInput({ legs: leg({}), solve, wind_m_s: 25, isaDev_K: 12 }));
+    expectClose(own.groundDistance_m, mission.groundDistance_m, { rel: 1e-12 }, 'leg wind wins');
+    expectClose(own.tripFuel_kg, mission.tripFuel_kg, { rel: 1e-12 }, 'leg ISA deviation wins');
+    // ISA+12 at constant Mach: TAS scales with sqrt(T), so the time for 1,000 km falls (definition of TAS = M a).
+    const isa = solveMission(missionInput({ legs: leg({}), solve }));
+    expectClose(isa.tripTime_s / own.tripTime_s, Math.sqrt((216.65 + 12) / 216.65), { rel: 1e-9 }, 'TAS = M sqrt(kappa R T)');
+  });
+
   it('solveMission reports did_not_converge with the residual when no fuel load can close the mission', () => {
     // Fuel flow c*D = b (m - m_f)^2 makes the landing mass saturate at m_f + 1/(b T) below the zero-fuel mass:
     // no ramp mass lands with the reserve, so the iteration must say so instead of returning a number.
