@@ -25,6 +25,7 @@ export type MissionCautionId =
   | 'descent_thrust_below_idle'
   | 'idle_thrust_above_drag'
   | 'alternate_too_short'
+  | 'altitude_jump'
   | 'profile_altitude_limited';
 
 export interface CautionEntry {
@@ -184,6 +185,14 @@ export const CAUTION_CATALOGUE: Readonly<Record<MissionCautionId, CautionEntry>>
     defaultThreshold: null,
     unit: 'm',
     source: 'Alternate specification; its cruise is dropped and the distance flown is longer than specified',
+  },
+  altitude_jump: {
+    id: 'altitude_jump',
+    title: 'Leg starts away from the altitude the previous leg reached',
+    severity: 'info',
+    defaultThreshold: 1,
+    unit: 'm',
+    source: 'Leg input: cruise and hold legs fly at their own altitude; the change is not flown (more than 1 m)',
   },
   profile_altitude_limited: {
     id: 'profile_altitude_limited',

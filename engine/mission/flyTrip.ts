@@ -61,6 +61,23 @@ export function initialState(rampMass_kg: number): StateVector {
  */
 export type SolvedDistance = number | { readonly endAirOf: (mass_kg: number) => number };
 
+/** Cruise and hold legs fly at their own altitude; a jump from the altitude reached is flagged (info), not flown. */
+function noteAltitudeJump(ctx: MissionContext, target: LegTarget, state: StateVector, altitude_m: number): void {
+  if (Math.abs(state[S_ALT] - altitude_m) <= 1) return;
+  appendCaution(
+    ctx.log,
+    target,
+    {
+      id: 'altitude_jump',
+      severity: CAUTION_CATALOGUE.altitude_jump.severity,
+      message: `${target.legName} starts at ${altitude_m.toFixed(0)} m but the previous leg ended at ${state[S_ALT].toFixed(0)} m; the change is not flown.`,
+      value: altitude_m,
+      threshold: state[S_ALT],
+    },
+    state[S_TIME],
+  );
+}
+
 function flyLeg(ctx: MissionContext, index: number, state: StateVector, solved: SolvedDistance, isSolvable: boolean): LegOutcome {
   const leg = ctx.input.legs[index];
   const target: LegTarget = { legIndex: index, legName: leg.name, env: legEnvironment(ctx.input, leg), recordHistory: true };
@@ -97,6 +114,7 @@ function flyLeg(ctx: MissionContext, index: number, state: StateVector, solved: 
       return out;
     }
     case 'cruise':
+      noteAltitudeJump(ctx, target, state, leg.altitude_m);
       return flyCruise(ctx, target, state, {
         altitude_m: leg.altitude_m,
         speed: leg.speed,
@@ -107,6 +125,7 @@ function flyLeg(ctx: MissionContext, index: number, state: StateVector, solved: 
     case 'descent':
       return flyDescent(ctx, target, state, leg.toAltitude_m, leg.schedule, leg.mode);
     case 'hold':
+      noteAltitudeJump(ctx, target, state, leg.altitude_m);
       return flyHold(ctx, target, state, leg.altitude_m, leg.time_s, leg.speed);
   }
 }

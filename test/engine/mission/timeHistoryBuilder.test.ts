@@ -72,4 +72,12 @@ describe('timeHistoryBuilder', () => {
     expect(r.history.altitude_m.reduce((a, b) => Math.max(a, b), 0)).toBeCloseTo(35000 * FT, 6);
     expect(r.history.cas_m_s.reduce((a, b) => Math.max(a, b), 0)).toBeLessThanOrEqual(290 * KT + 1e-6);
   });
+
+  it('flags a cruise leg that starts away from the altitude reached (altitude_jump, info)', () => {
+    const legs = demoLegs(1_000_000).map((l) => (l.kind === 'cruise' ? { ...l, altitude_m: 37000 * FT } : l));
+    const r = solveMission(missionInput({ legs, solve: { kind: 'takeoffWeight', takeoffMass_kg: 70000, payload_kg: 10000 } }));
+    expect(r.cautions.find((c) => c.id === 'altitude_jump')).toMatchObject({ legName: 'cruise', severity: 'info' });
+    const level = solveMission(missionInput({ legs: demoLegs(1_000_000), solve: { kind: 'takeoffWeight', takeoffMass_kg: 70000, payload_kg: 10000 } }));
+    expect(level.cautions.some((c) => c.id === 'altitude_jump')).toBe(false);
+  });
 });
