@@ -1,7 +1,7 @@
 /** A Bridge for component tests: the demo files from fixtures/demo, recorded exports and prints. */
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
-import type { Bridge, DemoFiles, OpenedDeck, OpenedProject, RecoveryOffer } from '../../../renderer/bridge/bridge';
+import type { Bridge, DemoFiles, DocumentState, MenuCommand, OpenedDeck, OpenedProject, RecoveryOffer } from '../../../renderer/bridge/bridge';
 
 const root = resolve(import.meta.dirname, '../../..');
 
@@ -26,10 +26,18 @@ export interface FakeBridge extends Bridge {
   nextProject: OpenedProject | null;
   recovery: RecoveryOffer | null;
   discarded: number;
+  /** Sends a menu command as the desktop shell would. */
+  menu(command: MenuCommand, path?: string): void;
+  documentStates: DocumentState[];
 }
 
 export function createFakeBridge(): FakeBridge {
+  const listeners = new Set<(command: MenuCommand, path?: string) => void>();
   const bridge: FakeBridge = {
+    menu: (command, path) => {
+      for (const l of listeners) l(command, path);
+    },
+    documentStates: [],
     kind: 'browser',
     exports: [],
     saves: [],
@@ -68,8 +76,13 @@ export function createFakeBridge(): FakeBridge {
       bridge.discarded += 1;
       bridge.recovery = null;
     },
-    setDocumentState: async () => undefined,
-    onMenuCommand: () => () => undefined,
+    setDocumentState: async (state) => {
+      bridge.documentStates.push(state);
+    },
+    onMenuCommand: (listener) => {
+      listeners.add(listener);
+      return () => listeners.delete(listener);
+    },
   };
   return bridge;
 }

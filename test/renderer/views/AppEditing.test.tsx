@@ -150,4 +150,36 @@ describe('the App with the demo study', () => {
     await waitFor(() => expect(bridge.discarded).toBe(1));
     expect(screen.queryByTestId('recovery-offer')).toBeNull();
   }, 60000);
+
+  it('a project that cannot be read lists its issues and keeps the open study', async () => {
+    const bridge = renderApp();
+    const before = await blockFuel();
+    bridge.nextProject = { name: 'weights-out-of-order.blockwise.json', text: fixtureText('fixtures/bad-projects/weights-out-of-order.blockwise.json') };
+    fireEvent.click(screen.getByTestId('command-open'));
+    const issues = await screen.findByTestId('open-issues');
+    // fixtures/bad-projects/expected.json: the path and a fragment of the message each bad file must produce
+    const expected = (JSON.parse(fixtureText('fixtures/bad-projects/expected.json')) as Record<string, { path: string; fragment: string }>)['weights-out-of-order.blockwise.json']!;
+    expect(issues.textContent).toContain(expected.path);
+    expect(issues.textContent).toContain(expected.fragment);
+    expect(numberIn(screen.getByTestId('headline-block-fuel').textContent)).toBe(before);
+    expect(screen.getByTestId('document-name').textContent).toBe('demo.blockwise.json');
+  }, 60000);
+
+  it('follows the menu: undo and redo, and tells the shell when the document is edited', async () => {
+    const bridge = renderApp();
+    await blockFuel();
+    fireEvent.click(screen.getByTestId('view-tab-mission'));
+    fireEvent.click(screen.getByTestId('leg-0-duplicate'));
+    expect(screen.getByTestId('document-name').textContent).toBe('demo.blockwise.json (edited)');
+    await waitFor(() => expect(bridge.documentStates.at(-1)).toEqual({ name: 'demo.blockwise.json', dirty: true }));
+    const legs = () => screen.getAllByTestId(/^leg-\d+$/).length;
+    const n = legs();
+    act(() => bridge.menu('undo'));
+    expect(legs()).toBe(n - 1);
+    await waitFor(() => expect(bridge.documentStates.at(-1)).toEqual({ name: 'demo.blockwise.json', dirty: false }));
+    act(() => bridge.menu('redo'));
+    expect(legs()).toBe(n);
+    act(() => bridge.menu('exportResultsCsv'));
+    await waitFor(() => expect(bridge.exports.map((e) => e.name)).toEqual(['demo-time-history.csv', 'demo-legs.csv']));
+  }, 60000);
 });
