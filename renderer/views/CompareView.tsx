@@ -13,25 +13,21 @@ function mach(m: number | null): string {
   return m === null ? '—' : m.toFixed(3);
 }
 
-/** Inlet A against B on block fuel with the breakdown, the payload-range diagram and the trade factors. */
-export function CompareView(props: { readonly live: LiveStudy; readonly chartSize?: ChartSize }) {
+/** Inlet A against B on block fuel, side by side, with the breakdown of the difference. */
+function InletComparisonPanel(props: { readonly chartSize?: ChartSize }) {
   const { state } = useStudy();
   const project = state.doc!.present;
   const names = project.inlets.map((i) => i.name);
   const [nameA, setA] = useState(names[0] ?? '');
   const [nameB, setB] = useState(names[1] ?? names[0] ?? '');
   const compare = useEngineJob<'compare'>();
-  const payloadRange = useEngineJob<'payloadRange'>();
-  const trade = useEngineJob<'tradeFactors'>();
   const inputs = { project, deckFile: state.deckFile };
   const u = state.units;
   const size = props.chartSize ? { size: props.chartSize } : {};
   const c = compare.state;
-  const pr = payloadRange.state;
-  const t = trade.state;
   const choices = names.map((n) => ({ value: n, label: n }));
   return (
-    <section>
+    <>
       <h2>Inlet A against inlet B</h2>
       <div className="field-grid">
         <ChoiceField label="Design A" testId="compare-inlet-a" value={nameA} choices={choices} onChoose={setA} />
@@ -125,6 +121,21 @@ export function CompareView(props: { readonly live: LiveStudy; readonly chartSiz
         </>
       ) : null}
 
+    </>
+  );
+}
+
+/** The payload-range diagram of the flown inlet, run on request with progress and cancel. */
+function PayloadRangePanel(props: { readonly chartSize?: ChartSize }) {
+  const { state } = useStudy();
+  const project = state.doc!.present;
+  const payloadRange = useEngineJob<'payloadRange'>();
+  const inputs = { project, deckFile: state.deckFile };
+  const u = state.units;
+  const size = props.chartSize ? { size: props.chartSize } : {};
+  const pr = payloadRange.state;
+  return (
+    <>
       <h3>Payload against range ({project.activeInlet})</h3>
       <button type="button" data-testid="payload-range-run" disabled={pr.status === 'running'} onClick={() => payloadRange.start({ kind: 'payloadRange', ...inputs })}>
         Fly the payload-range diagram
@@ -147,6 +158,20 @@ export function CompareView(props: { readonly live: LiveStudy; readonly chartSiz
         </>
       ) : null}
 
+    </>
+  );
+}
+
+/** Trade factors of the flown inlet, run on request with progress and cancel. */
+function TradeFactorsPanel() {
+  const { state } = useStudy();
+  const project = state.doc!.present;
+  const trade = useEngineJob<'tradeFactors'>();
+  const inputs = { project, deckFile: state.deckFile };
+  const u = state.units;
+  const t = trade.state;
+  return (
+    <>
       <h3>Trade factors ({project.activeInlet})</h3>
       <button type="button" data-testid="trade-run" disabled={t.status === 'running'} onClick={() => trade.start({ kind: 'tradeFactors', ...inputs })}>
         Compute trade factors
@@ -179,6 +204,18 @@ export function CompareView(props: { readonly live: LiveStudy; readonly chartSiz
           </p>
         </>
       ) : null}
+    </>
+  );
+}
+
+/** Inlet A against B on block fuel with the breakdown, the payload-range diagram and the trade factors. */
+export function CompareView(props: { readonly live: LiveStudy; readonly chartSize?: ChartSize }) {
+  const size = props.chartSize ? { chartSize: props.chartSize } : {};
+  return (
+    <section>
+      <InletComparisonPanel {...size} />
+      <PayloadRangePanel {...size} />
+      <TradeFactorsPanel />
     </section>
   );
 }
