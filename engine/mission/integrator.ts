@@ -99,12 +99,13 @@ function locateEvent(
  * at the tropopause); falls back to the Illinois method when it strays.
  */
 function refineOnStep(onStep: (tau: number) => number, guess: number, gStart: number, gEnd: number, h: number): number {
+  const scale = 1e-9 * Math.abs(gEnd - gStart);
   let x0 = guess;
   let g0 = onStep(x0);
   let x1 = h;
   let g1 = gEnd;
   for (let i = 0; i < 6; i++) {
-    if (g0 === 0 || Math.abs(x1 - x0) <= 1e-10 * h) return x0;
+    if (Math.abs(g0) <= scale || Math.abs(x1 - x0) <= 1e-10 * h) return x0;
     const next = x0 - (g0 * (x0 - x1)) / (g0 - g1);
     if (!(next > 0 && next <= h) || !Number.isFinite(next)) break;
     x1 = x0;
