@@ -4,6 +4,7 @@ import { fieldUnitLabel } from '../state/fieldUnits';
 import type { DocPath } from '../state/projectPath';
 import { selectFieldView } from '../state/selectors';
 import { useStudy } from '../state/studyContext';
+import { undoKeyCommand } from '../state/undoKeys';
 
 export interface QuantityFieldProps {
   readonly label: string;
@@ -51,6 +52,8 @@ export function QuantityField(props: QuantityFieldProps) {
         onChange={(e) => setText(e.target.value)}
         onBlur={commit}
         onKeyDown={(e) => {
+          // While the field holds uncommitted text, Ctrl+Z edits that text, not the project.
+          if (text !== view.text && undoKeyCommand(e) !== null) e.stopPropagation();
           if (e.key === 'Enter') commit();
           if (e.key === 'Escape') {
             dispatch({ type: 'draftDiscarded', path: props.path });
