@@ -102,7 +102,12 @@ export function parseDeckCsv(text: string, sourceName: string): Result<EngineDec
       continue;
     }
     readRow(raw, lineNo);
-    if (errors.length >= 100) break;
+    if (errors.length >= 100) {
+      if (i + 1 < lines.length) {
+        errors.push(deckFileError(src, 'too_many_errors', lineNo, null, null, 'at most 100 errors', `stopped after 100 errors; lines ${lineNo + 1} to ${lines.length} were not checked`));
+      }
+      break;
+    }
   }
 
   if (headerLine === 0) {

@@ -75,17 +75,21 @@ describe('huge decks', () => {
     expect(JSON.parse(r.out).points).toBe(110000);
   });
 
-  it('parseDeckCsv stops at 100 errors on 200,000 garbage rows, each naming its line', () => {
+  it('parseDeckCsv stops at 100 errors on 200,000 garbage rows, each naming its line, and says where it stopped', () => {
     const lines = ['altitude[ft],mach[-],power[-],thrust[lbf],fuel_flow[lb/h],airflow[lb/s]'];
     for (let i = 0; i < 200_000; i++) lines.push('x,y,z,w,v,u');
     const r = parseDeckCsv(lines.join('\n'), 'garbage.csv');
     expect(r.ok).toBe(false);
     if (r.ok) return;
-    expect(r.error.length).toBeLessThanOrEqual(101);
+    expect(r.error.length).toBe(101);
     for (const e of r.error) {
       expect(e.line).toBeGreaterThanOrEqual(2);
       expect(e.message).toMatch(/^garbage\.csv line \d+/);
     }
+    // The last entry says the check stopped and which lines it did not read.
+    const last = r.error.at(-1)!;
+    expect(last.code).toBe('too_many_errors');
+    expect(last.message).toContain(`to ${lines.length} were not checked`);
   });
 
   it('parseDeckJson refuses JSON nested 100,000 deep with a located message', () => {
