@@ -55,6 +55,7 @@ export type HostErrorCode =
   | 'write_failed'
   | 'too_large'
   | 'not_recent'
+  | 'outside_project'
   | 'no_window';
 
 export interface HostError {
@@ -81,6 +82,11 @@ export interface BlockwiseHost {
   saveProject(text: string, suggestedName: string): Promise<HostReply<HostSaved | null>>;
   saveProjectAs(text: string, suggestedName: string): Promise<HostReply<HostSaved | null>>;
   importDeck(): Promise<HostReply<{ readonly name: string; readonly text: string } | null>>;
+  /**
+   * Reads a file the open project names by a relative path (its deck), from
+   * the project's folder or below; null when no project file is open.
+   */
+  readBesideProject(relativePath: string): Promise<HostReply<{ readonly name: string; readonly text: string } | null>>;
   exportResultsCsv(text: string, suggestedName: string): Promise<HostReply<HostSaved | null>>;
   /** Prints the current page (with its print stylesheet) to a PDF the user places. */
   printReportPdf(suggestedName: string): Promise<HostReply<HostSaved | null>>;

@@ -1,4 +1,4 @@
-import { basename, join } from 'node:path';
+import { basename, dirname, join, resolve, sep } from 'node:path';
 import { atomicWriteFile } from './atomicWrite';
 import { discardRecovery, readRecoveryOffer, writeRecovery } from './autosave';
 import { readTextFile, withExtension } from './fileText';
@@ -114,6 +114,16 @@ export function createHostHandlers<E extends InvokeEventLike>(deps: HostDeps<E>,
     importDeck: async () => {
       const path = await deps.chooseFileToOpen('Import engine deck', DECK_FILTERS);
       if (path === null) return hostOk(null);
+      const read = await readTextFile(path);
+      return read.ok ? hostOk({ name: basename(path), text: read.value }) : read;
+    },
+    readBesideProject: async (_event, relativePath) => {
+      if (session.projectPath === null) return hostOk(null);
+      const folder = dirname(session.projectPath);
+      const path = resolve(folder, relativePath);
+      if (!path.startsWith(folder + sep)) {
+        return hostError('outside_project', `"${relativePath}" leads outside the project folder ${folder}`);
+      }
       const read = await readTextFile(path);
       return read.ok ? hostOk({ name: basename(path), text: read.value }) : read;
     },

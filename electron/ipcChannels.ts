@@ -10,6 +10,7 @@ export const IPC_CHANNELS = {
   saveProject: 'blockwise:save-project',
   saveProjectAs: 'blockwise:save-project-as',
   importDeck: 'blockwise:import-deck',
+  readBesideProject: 'blockwise:read-beside-project',
   exportResultsCsv: 'blockwise:export-results-csv',
   printReportPdf: 'blockwise:print-report-pdf',
   recentFiles: 'blockwise:recent-files',

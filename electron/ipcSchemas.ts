@@ -16,6 +16,14 @@ const suggestedName = z
 const documentText = z.string().max(MAX_TEXT_CHARS, `text longer than ${MAX_TEXT_CHARS} characters`);
 const filePath = z.string().min(1).max(4096);
 
+/** A path relative to the open project's folder, as a project file names its deck. */
+const relativePath = z
+  .string()
+  .min(1, 'a relative path is required')
+  .max(1024)
+  .refine((s) => !s.startsWith('/') && !s.startsWith('\\') && !/^[A-Za-z]:/.test(s), 'the path must be relative to the project folder')
+  .refine((s) => !s.includes('\u0000'), 'the path must not contain NUL');
+
 /**
  * The argument list each invoke channel accepts, parsed in the main process
  * before anything is done with it (STYLE rule 9). `strict` tuples: extra
@@ -28,6 +36,7 @@ export const IPC_PAYLOADS = {
   saveProject: z.tuple([documentText, suggestedName]),
   saveProjectAs: z.tuple([documentText, suggestedName]),
   importDeck: z.tuple([]),
+  readBesideProject: z.tuple([relativePath]),
   exportResultsCsv: z.tuple([documentText, suggestedName]),
   printReportPdf: z.tuple([suggestedName]),
   recentFiles: z.tuple([]),

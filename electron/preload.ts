@@ -20,6 +20,7 @@ const host: BlockwiseHost = {
   saveProject: (text, suggestedName) => invoke(IPC_CHANNELS.saveProject, text, suggestedName),
   saveProjectAs: (text, suggestedName) => invoke(IPC_CHANNELS.saveProjectAs, text, suggestedName),
   importDeck: () => invoke(IPC_CHANNELS.importDeck),
+  readBesideProject: (relativePath) => invoke(IPC_CHANNELS.readBesideProject, relativePath),
   exportResultsCsv: (text, suggestedName) => invoke(IPC_CHANNELS.exportResultsCsv, text, suggestedName),
   printReportPdf: (suggestedName) => invoke(IPC_CHANNELS.printReportPdf, suggestedName),
   recentFiles: () => invoke(IPC_CHANNELS.recentFiles),

@@ -44,6 +44,7 @@ export type BridgeErrorCode =
   | 'write_failed'
   | 'too_large'
   | 'not_recent'
+  | 'outside_project'
   | 'no_window'
   | 'not_available'
   | 'demo_missing'
@@ -75,6 +76,13 @@ export interface Bridge {
   saveProject(text: string, suggestedName: string): Promise<SavedTo | null>;
   saveProjectAs(text: string, suggestedName: string): Promise<SavedTo | null>;
   importDeck(): Promise<OpenedDeck | null>;
+  /**
+   * Reads the file an opened project names by a relative path (its deck file),
+   * from the project's folder (desktop only: the browser rejects with
+   * not_available; ask the user to import the deck). Null when no project
+   * file is open. Optional only so that existing test fakes stay valid.
+   */
+  readBesideProject?(relativePath: string): Promise<OpenedDeck | null>;
   /** Exports text (results CSV) under a suggested file name. */
   exportText(text: string, suggestedName: string, mime: string): Promise<SavedTo | null>;
   /** Prints the current page with its print stylesheet (desktop: to a PDF file). */

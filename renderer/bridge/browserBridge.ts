@@ -144,6 +144,9 @@ export function createBrowserBridge(env: BrowserEnvironment = defaultEnvironment
       if (file === null) return null;
       return { name: file.name, text: await readPicked(file) };
     },
+    readBesideProject: async (relativePath) => {
+      throw new BridgeError('not_available', `a browser cannot read "${relativePath}" next to the project by itself; import the deck file`);
+    },
     exportText: async (text, suggestedName, mime) => {
       download(env.document, text, suggestedName, mime);
       return { name: suggestedName };

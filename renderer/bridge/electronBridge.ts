@@ -17,6 +17,7 @@ export function createElectronBridge(host: BlockwiseHost): Bridge {
     saveProject: async (text, name) => unwrap(await host.saveProject(text, name)),
     saveProjectAs: async (text, name) => unwrap(await host.saveProjectAs(text, name)),
     importDeck: async () => unwrap(await host.importDeck()),
+    readBesideProject: async (relativePath) => unwrap(await host.readBesideProject(relativePath)),
     exportText: async (text, name) => unwrap(await host.exportResultsCsv(text, name)),
     printReport: async (name) => unwrap(await host.printReportPdf(name)),
     recentFiles: async () => unwrap(await host.recentFiles()),

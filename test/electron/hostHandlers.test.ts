@@ -136,6 +136,27 @@ describe('createHostHandlers', () => {
     expect(session.projectPath).toBeNull();
   });
 
+  it('readBesideProject reads the deck named relative to the open project', async () => {
+    const h = createHostHandlers(deps, session);
+    expect(await h.readBesideProject(event, 'demo-engine.deck.csv')).toEqual({ ok: true, value: null });
+    await import('node:fs/promises').then((f) => f.mkdir(join(folder, 'decks')));
+    await writeFile(join(folder, 'decks', 'engine.deck.csv'), 'altitude[ft],mach[-]\n');
+    session.projectPath = join(folder, 'jet.blockwise.json');
+    expect(await h.readBesideProject(event, 'decks/engine.deck.csv')).toEqual({
+      ok: true,
+      value: { name: 'engine.deck.csv', text: 'altitude[ft],mach[-]\n' },
+    });
+    expect(await h.readBesideProject(event, 'missing.csv')).toMatchObject({ ok: false, error: { code: 'read_failed' } });
+  });
+
+  it('readBesideProject refuses a path that leads outside the project folder', async () => {
+    session.projectPath = join(folder, 'docs', 'jet.blockwise.json');
+    await writeFile(join(folder, 'secret.txt'), 'not for the page');
+    const r = await createHostHandlers(deps, session).readBesideProject(event, '../secret.txt');
+    expect(r).toMatchObject({ ok: false, error: { code: 'outside_project' } });
+    if (!r.ok) expect(r.error.message).toContain('"../secret.txt" leads outside the project folder');
+  });
+
   it('exportResultsCsv writes the text where the user chose', async () => {
     const target = join(folder, 'results.csv');
     deps.saveAnswers.push(target);

@@ -33,6 +33,16 @@ describe('IPC_PAYLOADS', () => {
   });
 });
 
+describe('IPC_PAYLOADS.readBesideProject', () => {
+  it('IPC_PAYLOADS.readBesideProject accepts relative paths and refuses absolute ones', () => {
+    expect(IPC_PAYLOADS.readBesideProject.safeParse(['demo-engine.deck.csv']).success).toBe(true);
+    expect(IPC_PAYLOADS.readBesideProject.safeParse(['decks/a.csv']).success).toBe(true);
+    for (const p of ['/etc/passwd', '\\\\server\\share\\a.csv', 'C:\\decks\\a.csv', 'a\u0000.csv', '']) {
+      expect(IPC_PAYLOADS.readBesideProject.safeParse([p]).success, JSON.stringify(p)).toBe(false);
+    }
+  });
+});
+
 describe('describePayloadIssues', () => {
   it('describePayloadIssues names the argument path of each problem', () => {
     const r = IPC_PAYLOADS.documentState.safeParse([{ name: 5, dirty: 'no' }]);

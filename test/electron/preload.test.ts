@@ -37,10 +37,12 @@ describe('preload', () => {
     const host = exposed.get('blockwiseHost') as BlockwiseHost;
     await host.saveProject('{"format":1}', 'Demo jet');
     await host.exportResultsCsv('a,b', 'results');
+    await host.readBesideProject('demo-engine.deck.csv');
     await host.setDocumentState({ name: 'Demo jet', dirty: true, extra: 'dropped' } as never);
     expect(invoke.mock.calls).toEqual([
       [IPC_CHANNELS.saveProject, '{"format":1}', 'Demo jet'],
       [IPC_CHANNELS.exportResultsCsv, 'a,b', 'results'],
+      [IPC_CHANNELS.readBesideProject, 'demo-engine.deck.csv'],
       [IPC_CHANNELS.documentState, { name: 'Demo jet', dirty: true }],
     ]);
   });

@@ -133,6 +133,13 @@ describe('createBrowserBridge', () => {
     expect(new Set(recent.map((r) => r.name)).size).toBe(10);
   });
 
+  it('readBesideProject is not available in the browser and says to import the deck', async () => {
+    await expect(createBrowserBridge(env).readBesideProject?.('demo-engine.deck.csv')).rejects.toMatchObject({
+      code: 'not_available',
+      message: expect.stringContaining('import the deck file'),
+    });
+  });
+
   it('openRecent is not available in the browser', async () => {
     await expect(createBrowserBridge(env).openRecent('/p/jet.json')).rejects.toMatchObject({ code: 'not_available' });
   });

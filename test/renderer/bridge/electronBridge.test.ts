@@ -19,6 +19,7 @@ function fakeHost(overrides: Partial<BlockwiseHost> = {}): BlockwiseHost {
     saveProject: vi.fn(() => ok({ name: 'jet.blockwise.json', path: '/p/jet.blockwise.json' })),
     saveProjectAs: () => ok(null),
     importDeck: () => ok({ name: 'd.csv', text: 'x' }),
+    readBesideProject: vi.fn(() => ok({ name: 'demo-engine.deck.csv', text: 'altitude[ft]' })),
     exportResultsCsv: vi.fn(() => ok({ name: 'r.csv', path: '/p/r.csv' })),
     printReportPdf: () => ok({ name: 'r.pdf', path: '/p/r.pdf' }),
     recentFiles: () => ok([]),
@@ -40,6 +41,12 @@ describe('createElectronBridge', () => {
     expect(await bridge.saveProject('{"a":1}', 'jet')).toEqual({ name: 'jet.blockwise.json', path: '/p/jet.blockwise.json' });
     expect(host.saveProject).toHaveBeenCalledWith('{"a":1}', 'jet');
     expect(await bridge.saveProjectAs('{}', 'jet')).toBeNull();
+  });
+
+  it('createElectronBridge reads the file a project names beside it', async () => {
+    const host = fakeHost();
+    expect(await createElectronBridge(host).readBesideProject?.('demo-engine.deck.csv')).toEqual({ name: 'demo-engine.deck.csv', text: 'altitude[ft]' });
+    expect(host.readBesideProject).toHaveBeenCalledWith('demo-engine.deck.csv');
   });
 
   it('createElectronBridge sends exported text through the CSV export channel', async () => {
