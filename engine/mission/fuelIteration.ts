@@ -101,9 +101,11 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
   let d = e0.trip.solvableDistance_m;
   if (failedFlight(e0)) return { converged: false, rampMass_kg: x0, distance_m: d, iterations: 1, residual_kg: e0.residual_kg, failure: e0 };
   remember(e0);
+  // The residual each pass would have had at exactly the range: the distance error costs the solvable leg's fuel per metre.
+  const atRange = (e: MissionEvaluation) => e.residual_kg + (e.trip.end[S_AIR] - range_m) * solvableFuelPerMetre(e);
   // First slope: for a Breguet-like flight, d(landing fuel)/d(ramp mass) = landing mass / ramp mass.
   const ratio = e0.trip.landing[S_MASS] / x0;
-  let x1 = x0 - e0.residual_kg / (Number.isFinite(ratio) && ratio > 0.2 && ratio <= 1 ? ratio : 0.85);
+  let x1 = x0 - atRange(e0) / (Number.isFinite(ratio) && ratio > 0.2 && ratio <= 1 ? ratio : 0.85);
   const guard = RAMP_MASS_GUARD * Math.max(ctx.input.airframe.mtow_kg, ctx.zeroFuelMass_kg + ctx.input.airframe.maxFuel_kg);
   for (let k = 2; k <= MAX_ITERATIONS; k++) {
     if (!Number.isFinite(x1) || x1 <= ctx.zeroFuelMass_kg * 0.5 || x1 > guard) {
@@ -128,13 +130,13 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
       };
     }
     remember(e1);
-    // Secant slope with the previous residual moved to this pass's solvable distance (fuel per metre of that leg).
-    const shifted = e0.residual_kg + (e0.trip.solvableDistance_m - d) * solvableFuelPerMetre(e0);
-    const slope = (e1.residual_kg - shifted) / (x1 - x0);
+    // Secant method on the residual at exactly the range.
+    const f0 = atRange(e0);
+    const f1 = atRange(e1);
+    const slope = (f1 - f0) / (x1 - x0);
     const ratio1 = e1.trip.landing[S_MASS] / x1;
     const fallback = Number.isFinite(ratio1) && ratio1 > 0.2 && ratio1 <= 1 ? ratio1 : 0.85;
-    const comparable = Math.abs(e0.trip.solvableDistance_m - d) <= 0.01 * Math.max(d, 1);
-    const next = comparable && Number.isFinite(slope) && Math.abs(slope) > 0.05 ? x1 - e1.residual_kg / slope : x1 - e1.residual_kg / fallback;
+    const next = Number.isFinite(slope) && Math.abs(slope) > 0.05 ? x1 - f1 / slope : x1 - f1 / fallback;
     x0 = x1;
     e0 = e1;
     x1 = next;
