@@ -49,9 +49,11 @@ export function buildMenuTemplate(
     },
     {
       label: 'Edit',
+      // The page handles Ctrl/Cmd+Z and Ctrl+Y itself (renderer/state/undoKeys.ts); the
+      // menu shows the keys without registering them, so one key press is one undo.
       submenu: [
-        item('Undo Edit', 'undo', 'CmdOrCtrl+Z'),
-        item('Redo Edit', 'redo', platform === 'darwin' ? 'Cmd+Shift+Z' : 'Ctrl+Y'),
+        { ...item('Undo Edit', 'undo', 'CmdOrCtrl+Z'), registerAccelerator: false },
+        { ...item('Redo Edit', 'redo', platform === 'darwin' ? 'Cmd+Shift+Z' : 'Ctrl+Y'), registerAccelerator: false },
         { type: 'separator' },
         { role: 'cut' },
         { role: 'copy' },

@@ -53,6 +53,13 @@ describe('buildMenuTemplate', () => {
     }
   });
 
+  it('buildMenuTemplate shows the undo keys without registering them (the page handles them)', () => {
+    const t = buildMenuTemplate(actions(), [], 'linux', false);
+    expect(find(t, 'Undo Edit')?.registerAccelerator).toBe(false);
+    expect(find(t, 'Redo Edit')?.registerAccelerator).toBe(false);
+    expect(find(t, 'Save Project')?.registerAccelerator).toBeUndefined();
+  });
+
   it('buildMenuTemplate lists recent projects and opens them by path', () => {
     const a = actions();
     const t = buildMenuTemplate(a, [{ path: '/p/jet.blockwise.json', name: 'jet.blockwise.json', openedAt_ms: 1 }], 'linux', false);
