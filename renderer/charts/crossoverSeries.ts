@@ -10,6 +10,18 @@ export interface CrossoverMarker {
   readonly inletName: string;
   readonly what: 'low crossover' | 'high crossover' | 'thrust minimum';
   readonly mach: number;
+  /** Thrust available at that Mach (force display units), linear between curve points; null off the curve. */
+  readonly thrust: number | null;
+}
+
+/** y at x on a polyline with ascending xs (linear interpolation); null outside. */
+export function interpolateAt(xs: readonly number[], ys: readonly number[], x: number): number | null {
+  for (let i = 0; i + 1 < xs.length; i++) {
+    const x0 = xs[i]!;
+    const x1 = xs[i + 1]!;
+    if (x >= x0 && x <= x1) return x1 === x0 ? ys[i]! : ys[i]! + ((ys[i + 1]! - ys[i]!) * (x - x0)) / (x1 - x0);
+  }
+  return null;
 }
 
 /**
@@ -41,9 +53,13 @@ export function crossoverSeries(set: CrossoverSet, units: UnitSystem): { rows: R
   ]);
   const markers: CrossoverMarker[] = [];
   for (const { inletName, result } of set.curves) {
-    if (result.lowMach !== null) markers.push({ inletName, what: 'low crossover', mach: result.lowMach });
-    if (result.highMach !== null) markers.push({ inletName, what: 'high crossover', mach: result.highMach });
-    if (result.minThrustMach !== null) markers.push({ inletName, what: 'thrust minimum', mach: result.minThrustMach });
+    const at = (mach: number) => {
+      const t = interpolateAt(result.curves.mach, result.curves.thrustAvailable_N, mach);
+      return t === null ? null : toDisplay(t, 'force', units);
+    };
+    if (result.lowMach !== null) markers.push({ inletName, what: 'low crossover', mach: result.lowMach, thrust: at(result.lowMach) });
+    if (result.highMach !== null) markers.push({ inletName, what: 'high crossover', mach: result.highMach, thrust: at(result.highMach) });
+    if (result.minThrustMach !== null) markers.push({ inletName, what: 'thrust minimum', mach: result.minThrustMach, thrust: at(result.minThrustMach) });
   }
   return { rows, series, markers, unit: displayUnit('force', units) };
 }

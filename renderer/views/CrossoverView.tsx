@@ -59,6 +59,7 @@ export function CrossoverView(props: { readonly live: LiveStudy; readonly chartS
             series={plot.series}
             dashed={(k) => k.startsWith('d')}
             verticalMarks={plot.markers.map((m) => ({ x: m.mach, label: m.what }))}
+            points={plot.markers.flatMap((m) => (m.thrust === null ? [] : [{ x: m.mach, y: m.thrust, label: `${m.inletName} ${m.what}` }]))}
             {...(props.chartSize ? { size: props.chartSize } : {})}
           />
           <table data-testid="crossover-markers">
@@ -67,6 +68,7 @@ export function CrossoverView(props: { readonly live: LiveStudy; readonly chartS
                 <th>Inlet</th>
                 <th>Point</th>
                 <th>Mach</th>
+                <th>Thrust available ({plot.unit})</th>
               </tr>
             </thead>
             <tbody>
@@ -75,6 +77,7 @@ export function CrossoverView(props: { readonly live: LiveStudy; readonly chartS
                   <td>{m.inletName}</td>
                   <td>{m.what}</td>
                   <td>{m.mach.toFixed(3)}</td>
+                  <td>{m.thrust === null ? '—' : m.thrust.toFixed(2)}</td>
                 </tr>
               ))}
             </tbody>

@@ -4,7 +4,7 @@ import type { InletComparisonResult } from '../../../engine/analysis/inletCompar
 import type { PayloadRangeResult } from '../../../engine/analysis/payloadRange';
 import type { TimeHistory } from '../../../engine/mission/missionTypes';
 import { breakdownWaterfall, payloadRangeRows } from '../../../renderer/charts/compareSeries';
-import { crossoverSeries } from '../../../renderer/charts/crossoverSeries';
+import { crossoverSeries, interpolateAt } from '../../../renderer/charts/crossoverSeries';
 import { inletSeries } from '../../../renderer/charts/inletSeries';
 import { lapseSeries } from '../../../renderer/charts/lapseSeries';
 import { polarSeries } from '../../../renderer/charts/polarSeries';
@@ -150,12 +150,17 @@ describe('crossoverSeries', () => {
     expect(s.rows.map((r) => r.mach)).toEqual([0.3, 0.4, 0.5]);
     expect(s.rows[0]).toEqual({ mach: 0.3, t0: 2, d0: 2.5, t1: null, d1: null });
     expect(s.rows[1]).toEqual({ mach: 0.4, t1: 1.9, d1: 2.4, t0: null, d0: null });
-    expect(s.markers).toEqual([
-      { inletName: 'A', what: 'low crossover', mach: 0.35 },
-      { inletName: 'A', what: 'high crossover', mach: 0.8 },
-      { inletName: 'A', what: 'thrust minimum', mach: 0.6 },
-      { inletName: 'B', what: 'low crossover', mach: 0.37 },
+    expect(s.markers.map(({ inletName, what, mach }) => [inletName, what, mach])).toEqual([
+      ['A', 'low crossover', 0.35],
+      ['A', 'high crossover', 0.8],
+      ['A', 'thrust minimum', 0.6],
+      ['B', 'low crossover', 0.37],
     ]);
+    // thrust at the low crossover, linear between (0.3, 2000 N) and (0.5, 1800 N): 1950 N = 1.95 kN
+    expectClose(s.markers[0]!.thrust!, 1.95, { rel: 1e-12 }, 'linear interpolation by hand');
+    expect(s.markers[1]!.thrust).toBeNull();
+    expect(interpolateAt([0, 1], [5, 7], 0.25)).toBe(5.5);
+    expect(interpolateAt([0, 1], [5, 7], 1.5)).toBeNull();
   });
 });
 

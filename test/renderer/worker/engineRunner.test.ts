@@ -4,6 +4,7 @@ import type { Project } from '../../../engine/project/projectSchema';
 import { createDeckCache, runEngineRequest } from '../../../renderer/worker/engineRunner';
 import type { EngineReplies, StudyInputs } from '../../../renderer/worker/engineProtocol';
 import { POLAR_CLS, POLAR_MACHS } from '../../../renderer/worker/studyCurves';
+import { interpolateAt } from '../../../renderer/charts/crossoverSeries';
 import { expectClose } from '../../support/assertInDelta';
 import { demoFiles, fixtureText } from '../support/fakeBridge';
 
@@ -145,11 +146,22 @@ describe('runEngineRequest long runs', () => {
     if (!r.ok) throw new Error(JSON.stringify(r.failure));
     const set = r.value as EngineReplies['crossover'];
     expect(set.curves.map((c) => c.inletName)).toEqual(demo.project.inlets.map((i) => i.name));
+    let checked = 0;
     for (const { result } of set.curves) {
-      if (result.highMach !== null) {
-        expect(result.highMach).toBeGreaterThan(result.machRange[0]);
-        expect(result.highMach).toBeLessThanOrEqual(result.machRange[1]);
+      for (const m of [result.lowMach, result.highMach]) {
+        if (m === null) continue;
+        checked++;
+        expect(m).toBeGreaterThanOrEqual(result.machRange[0]);
+        expect(m).toBeLessThanOrEqual(result.machRange[1]);
+        // a crossover is where thrust available equals drag (Anderson, Aircraft Performance and Design, ch. 5);
+        // read off the plotted curves by linear interpolation, so only to the curve spacing
+        const c = result.curves;
+        const t = interpolateAt(c.mach, c.thrustAvailable_N, m)!;
+        const d = interpolateAt(c.mach, c.drag_N, m)!;
+        expectClose(t, d, { rel: 0.02 }, 'T = D at a crossover');
       }
     }
+    // at FL350 and 15 t the demo has a high-speed crossover below Mach 0.95 for each design
+    expect(checked).toBeGreaterThanOrEqual(set.curves.length);
   });
 });
