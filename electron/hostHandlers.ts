@@ -17,6 +17,11 @@ export interface FileFilter {
 export interface HostDeps<E> {
   readonly userDataFolder: string;
   readonly documentsFolder: string;
+  /**
+   * Folders whose projects are templates (the bundled demo): they open, but
+   * Save asks where instead of writing over them.
+   */
+  readonly templateFolders: readonly string[];
   readonly now_ms: () => number;
   /** Shows an open dialog; the chosen path or null. */
   readonly chooseFileToOpen: (title: string, filters: readonly FileFilter[]) => Promise<string | null>;
@@ -56,7 +61,8 @@ export function createHostHandlers<E extends InvokeEventLike>(deps: HostDeps<E>,
   async function openPath(path: string): Promise<HostReply<{ name: string; path: string; text: string }>> {
     const read = await readTextFile(path);
     if (!read.ok) return read;
-    session.projectPath = path;
+    const isTemplate = deps.templateFolders.some((folder) => path.startsWith(resolve(folder) + sep));
+    session.projectPath = isTemplate ? null : path;
     await remember(path);
     return hostOk({ name: basename(path), path, text: read.value });
   }

@@ -80,6 +80,7 @@ async function start(): Promise<void> {
     {
       userDataFolder,
       documentsFolder: app.getPath('documents'),
+      templateFolders: [resolve(__dirname, '..', 'fixtures')],
       now_ms: () => Date.now(),
       chooseFileToOpen: async (title, filters) => {
         const options = { title, filters: filters.map((f) => ({ name: f.name, extensions: [...f.extensions] })), properties: ['openFile' as const] };

@@ -31,6 +31,7 @@ beforeEach(async () => {
     warnings,
     userDataFolder: userData,
     documentsFolder: join(folder, 'docs'),
+    templateFolders: [join(folder, 'templates')],
     now_ms: () => (clock += 1000),
     chooseFileToOpen: vi.fn(async () => openAnswers.shift() ?? null),
     chooseFileToSave: vi.fn(async () => saveAnswers.shift() ?? null),
@@ -116,6 +117,22 @@ describe('createHostHandlers', () => {
     const r = await createHostHandlers(deps, session).openRecent(event, gone);
     expect(r).toMatchObject({ ok: false, error: { code: 'read_failed' } });
     expect(session.recent).toEqual([]);
+  });
+
+  it('a project opened from a template folder is never saved over', async () => {
+    const templates = join(folder, 'templates');
+    await import('node:fs/promises').then((f) => f.mkdir(templates));
+    const demo = join(templates, 'demo.blockwise.json');
+    await writeFile(demo, '{"demo":true}');
+    session.initialProjectPath = demo;
+    const h = createHostHandlers(deps, session);
+    expect(await h.initialDocument(event)).toMatchObject({ ok: true, value: { path: demo, text: '{"demo":true}' } });
+    const copy = join(folder, 'my-study.blockwise.json');
+    deps.saveAnswers.push(copy);
+    expect(await h.saveProject(event, '{"demo":"edited"}', 'demo')).toEqual({ ok: true, value: { name: 'my-study.blockwise.json', path: copy } });
+    expect(deps.chooseFileToSave).toHaveBeenCalled();
+    expect(await readFile(demo, 'utf8')).toBe('{"demo":true}');
+    expect(await readFile(copy, 'utf8')).toBe('{"demo":"edited"}');
   });
 
   it('initialDocument opens the command-line project once', async () => {
