@@ -199,6 +199,43 @@ describe('solveMission', () => {
     expectNoNaN(r);
   });
 
+  it('solveMission in maxRange mode says infeasible when the reserve cannot be carried at all', () => {
+    // Payload so large that MTOW leaves 300 kg of fuel, less than the 30 min final reserve needs.
+    const r = solveMission(
+      missionInput({
+        legs: demoLegs(null),
+        solve: { kind: 'maxRange', payload_kg: TEST_AIRFRAME.mtow_kg - TEST_AIRFRAME.oew_kg - 300 },
+        reserves: { preset: 'custom', contingencyFraction: 0, alternate: null, finalReserve_s: 1800, extraFuel_kg: 0 },
+      }),
+    );
+    expect(r.status).toBe('infeasible');
+    expect(r.statusMessage).toMatch(/cannot be carried/);
+    expect(r.residual_kg).toBeLessThan(0);
+    expectNoNaN(r);
+  });
+
+  it('solveMission history runs leg by leg: leg index never decreases', () => {
+    const r = solveMission(
+      missionInput({
+        legs: demoLegs(null),
+        solve: { kind: 'payloadRange', payload_kg: 8000, range_m: 2_000_000 },
+        reserves: { preset: 'custom', contingencyFraction: 0.05, alternate: null, finalReserve_s: 1800, extraFuel_kg: 0 },
+      }),
+    );
+    expect(r.status).toBe('ok');
+    for (let i = 1; i < r.history.legIndex.length; i++) expect(r.history.legIndex[i]).toBeGreaterThanOrEqual(r.history.legIndex[i - 1]);
+    expect(new Set(r.history.legIndex).size).toBe(r.legs.filter((l) => l.kind !== 'reserve').length);
+  });
+
+  it('solveMission in payloadRange mode with no reserve runs out taxiing in (the reserve is what lands)', () => {
+    // The mode lands with exactly the reserve; taxi-in fuel comes out of it, so a zero reserve cannot taxi in.
+    const r = solveMission(missionInput({ legs: demoLegs(null), solve: { kind: 'payloadRange', payload_kg: 8000, range_m: 2_000_000 } }));
+    expect(r.status).toBe('fuel_exhausted');
+    const flown = r.legs.filter((l) => l.kind !== 'reserve');
+    expect(flown[flown.length - 1].kind).toBe('taxiIn');
+    expect(r.statusMessage).toMatch(/taxi in/);
+  });
+
   it('solveMission reports fuel_exhausted when the fuel runs out', () => {
     const r = solveMission(
       missionInput({ legs: cruiseOnly(20_000_000), solve: { kind: 'takeoffWeight', takeoffMass_kg: 60000, payload_kg: 10000 }, aero: breguetAero, propulsion: breguetEngines }),
