@@ -54,8 +54,9 @@ class JsonScanFailure extends Error {
 
 function describeAt(text: string, i: number): string {
   if (i >= text.length) return 'the end of the file';
-  const c = text[i];
-  return c === '\n' ? 'a line break' : `"${c}"`;
+  const c = text[i]!;
+  // JSON.stringify escapes control characters, so a binary file does not print raw bytes.
+  return c === '\n' ? 'a line break' : JSON.stringify(c);
 }
 
 /** Finds the offset of the first syntax error; the text is known not to parse. */

@@ -43,8 +43,25 @@ export interface DeckFileError {
 
 /** Where in a file, as the message prefix: `demo.csv line 14, column "thrust[lbf]"` or `deck.json, points[3][1]`. */
 export function deckFileWhere(source: string, line: number | null, column: string | null): string {
-  if (line !== null) return `${source} line ${line}${column !== null ? `, column "${column}"` : ''}`;
-  return column !== null ? `${source}, ${column}` : source;
+  const shown = column === null ? null : printable(column);
+  if (line !== null) return `${source} line ${line}${shown !== null ? `, column "${shown}"` : ''}`;
+  return shown !== null ? `${source}, ${shown}` : source;
+}
+
+/** Control characters escaped as \uXXXX, so a message about a binary file does not print raw bytes. */
+export function escapeControls(text: string): string {
+  let out = '';
+  for (let i = 0; i < text.length; i++) {
+    const code = text.charCodeAt(i);
+    out += code < 0x20 || code === 0x7f ? `\\u${code.toString(16).padStart(4, '0')}` : text[i];
+  }
+  return out;
+}
+
+/** A column or path from the file as the message shows it: controls escaped, over 60 characters shortened. */
+export function printable(text: string): string {
+  const escaped = escapeControls(text);
+  return escaped.length > 60 ? `${escaped.slice(0, 57)}...` : escaped;
 }
 
 /** One deck file error whose message is `<where>: <what>` (see deckFileWhere). */
@@ -57,5 +74,5 @@ export function deckFileError(
   expected: string,
   what: string,
 ): DeckFileError {
-  return { code, line, column, value, expected, message: `${deckFileWhere(source, line, column)}: ${what}` };
+  return { code, line, column, value, expected, message: `${deckFileWhere(source, line, column)}: ${escapeControls(what)}` };
 }

@@ -33,6 +33,15 @@ async function run(...argv: string[]): Promise<{ code: number; out: string; err:
   return { code, out, err };
 }
 
+/** True when a message line holds a raw control character (a binary file's bytes printed as they are). */
+function hasControl(text: string): boolean {
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if ((c < 0x20 && c !== 0x0a) || c === 0x7f) return true;
+  }
+  return false;
+}
+
 function deckErrors(file: string, kind: 'deckCsv' | 'deckJson') {
   return kind === 'deckCsv' ? parseDeckCsv(read(file), file) : parseDeckJson(read(file), file);
 }
@@ -56,6 +65,7 @@ describe('corpus through the engine parsers', () => {
         expect(first.message.startsWith(file)).toBe(true);
         expect(first.message).toContain(e.where);
         expect(first.message).toContain(e.fragment);
+        expect(hasControl(first.message)).toBe(false);
         if (e.kind === 'deckCsv') expect(first.line).toBeGreaterThanOrEqual(1);
       });
     }
@@ -67,6 +77,7 @@ describe('corpus through the engine parsers', () => {
         const issue = r.error.find((i) => i.path === e.where);
         expect(issue, `issues: ${r.error.map((i) => i.message).join(' | ')}`).toBeDefined();
         expect(issue!.message).toContain(e.fragment);
+        expect(hasControl(issue!.message)).toBe(false);
       });
     }
     if (e.kind === 'project' && e.stage === 'load') {
@@ -126,6 +137,7 @@ describe('corpus through the CLI', () => {
         expect(first.startsWith(path)).toBe(true);
         expect(first).toContain(e.where);
         expect(first).toContain(e.fragment);
+        expect(hasControl(r.err)).toBe(false);
       });
     } else {
       it(`blockwise fly ${path} exits 1 naming ${e.where}`, async () => {
@@ -139,6 +151,7 @@ describe('corpus through the CLI', () => {
         // A JSON syntax issue's path "(line L, column C)" reads "line L, column C" in the message.
         expect(body).toContain(e.where.replace(/^\((.*)\)$/, '$1'));
         expect(body).toContain(e.fragment);
+        expect(hasControl(r.err)).toBe(false);
       });
     }
   }

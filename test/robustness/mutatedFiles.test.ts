@@ -79,6 +79,15 @@ function applyEdit(text: string, e: Edit): string {
   }
 }
 
+/** True when a message holds a raw control character (bytes from the file printed as they are). */
+function hasControl(text: string): boolean {
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (c < 0x20 || c === 0x7f) return true;
+  }
+  return false;
+}
+
 const edits = fc.array(edit, { minLength: 1, maxLength: 3 });
 const lineCount = (text: string) => text.split('\n').length;
 
@@ -95,6 +104,7 @@ describe('parsers on damaged demo files', () => {
           expect(e.line!).toBeGreaterThanOrEqual(1);
           expect(e.line!).toBeLessThanOrEqual(lineCount(text) + 1);
           expect(e.message.startsWith(`damaged.csv line ${e.line}`)).toBe(true);
+          expect(hasControl(e.message), e.message).toBe(false);
         }
       }),
       { numRuns: 150, seed: 20261202 },
@@ -109,6 +119,7 @@ describe('parsers on damaged demo files', () => {
         if (r.ok) return;
         for (const e of r.error) {
           expect(e.message.startsWith('damaged.json')).toBe(true);
+          expect(hasControl(e.message), e.message).toBe(false);
           if (e.code === 'bad_json') expect(e.message).toMatch(/line \d+, column \d+|the JSON parser refused it/);
           else if (e.code !== 'empty_file') expect(e.column ?? e.message).toMatch(/\S/);
         }
@@ -126,6 +137,7 @@ describe('parsers on damaged demo files', () => {
         for (const issue of r.error) {
           expect(issue.path).toMatch(/\S/);
           expect(issue.message).toMatch(/\S/);
+          expect(hasControl(issue.message), issue.message).toBe(false);
           const syntax = /^\(line (\d+), column (\d+)\)$/.exec(issue.path);
           if (syntax) expect(Number(syntax[1])).toBeLessThanOrEqual(lineCount(text) + 1);
         }
