@@ -20,10 +20,10 @@ export const CHROMIUM_ARGS: readonly string[] = [
 export const SCREENSHOT_FOLDER = resolve(__dirname, '..', '..', '..', 'artifacts', 'screenshots');
 
 /** Fails with the fix when Chromium is not installed (never skips silently). */
-export function requireChromium(): void {
-  if (!existsSync(CHROMIUM_PATH)) {
+export function requireChromium(path: string = CHROMIUM_PATH): void {
+  if (!existsSync(path)) {
     throw new Error(
-      `End-to-end tests need Chromium at ${CHROMIUM_PATH}, which is missing. Install it with "apt-get install -y chromium" (Debian/Ubuntu), or set BLOCKWISE_CHROMIUM to a Chromium binary.`,
+      `End-to-end tests need Chromium at ${path}, which is missing. Install it with "apt-get install -y chromium" (Debian/Ubuntu), or set BLOCKWISE_CHROMIUM to a Chromium binary.`,
     );
   }
 }
