@@ -20,7 +20,7 @@ export function CrossoverView(props: { readonly live: LiveStudy; readonly chartS
   const [mass_kg, setMass] = useState(0.9 * project.airframe.weights.maxTakeoff);
   const [rating, setRating] = useState<RatingName>('maxCruise');
   const [allInlets, setAllInlets] = useState(false);
-  const job = useEngineJob<'crossover'>();
+  const job = useEngineJob<'crossover'>({ cancelOnRestart: false });
   const query = useMemo<CrossoverRequestQuery>(() => ({ altitude_m, mass_kg, rating, isaDev_K: project.mission.isaDeviation, allInlets }), [altitude_m, mass_kg, rating, allInlets, project.mission.isaDeviation]);
   const { start } = job;
   useEffect(() => {
@@ -28,7 +28,8 @@ export function CrossoverView(props: { readonly live: LiveStudy; readonly chartS
   }, [start, project, state.deckFile, query]);
   const u = state.units;
   const s = job.state;
-  const plot = s.status === 'done' ? crossoverSeries(s.value, u) : null;
+  const shown = job.lastValue;
+  const plot = shown ? crossoverSeries(shown, u) : null;
   return (
     <section>
       <h2>Thrust against drag</h2>
@@ -41,10 +42,10 @@ export function CrossoverView(props: { readonly live: LiveStudy; readonly chartS
         </label>
       </div>
       {s.status === 'failed' ? <FailureNotice failure={s.failure} testId="crossover-failure" /> : null}
-      {s.status === 'running' ? <p>Computing…</p> : null}
-      {plot && s.status === 'done' ? (
+      {s.status === 'running' ? <p role="status">Computing…</p> : null}
+      {plot && shown ? (
         <>
-          {s.value.curves.map(({ inletName, result }) => (
+          {shown.curves.map(({ inletName, result }) => (
             <p key={inletName} data-testid="crossover-message">
               {inletName}: {result.message}
             </p>

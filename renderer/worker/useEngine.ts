@@ -80,14 +80,22 @@ export type JobState<K extends EngineRequestKind> =
 
 export interface EngineJob<K extends EngineRequestKind> {
   readonly state: JobState<K>;
+  /** The value of the last run that finished, kept while a newer one runs. */
+  readonly lastValue: EngineReplies[K] | null;
   start(request: Extract<EngineRequest, { kind: K }>): void;
   cancel(): void;
 }
 
-/** A long engine run (payload-range, trade factors, compare) with progress and cancel; a new start cancels the old. */
-export function useEngineJob<K extends EngineRequestKind>(): EngineJob<K> {
+/**
+ * An engine run with progress and cancel (payload-range, trade factors,
+ * compare, crossover). A new start cancels the run before it, or with
+ * `cancelOnRestart: false` leaves it to the client to drop (live kinds).
+ */
+export function useEngineJob<K extends EngineRequestKind>(options: { readonly cancelOnRestart?: boolean } = {}): EngineJob<K> {
+  const cancelOnRestart = options.cancelOnRestart ?? true;
   const client = useEngineClient();
   const [state, setState] = useState<JobState<K>>({ status: 'idle' });
+  const [lastValue, setLastValue] = useState<EngineReplies[K] | null>(null);
   const runRef = useRef<EngineRun<K> | null>(null);
 
   const cancel = useCallback(() => {
@@ -97,7 +105,7 @@ export function useEngineJob<K extends EngineRequestKind>(): EngineJob<K> {
 
   const start = useCallback(
     (request: Extract<EngineRequest, { kind: K }>) => {
-      runRef.current?.cancel();
+      if (cancelOnRestart) runRef.current?.cancel();
       setState({ status: 'running', done: 0, total: 0 });
       const run = client.run<K>(request, (done, total) => {
         if (runRef.current === run) setState({ status: 'running', done, total });
@@ -110,12 +118,13 @@ export function useEngineJob<K extends EngineRequestKind>(): EngineJob<K> {
         }
         if (runRef.current !== run) return;
         runRef.current = null;
+        if (outcome.ok) setLastValue(outcome.value);
         setState(outcome.ok ? { status: 'done', value: outcome.value } : { status: 'failed', failure: outcome.failure });
       });
     },
-    [client],
+    [client, cancelOnRestart],
   );
 
   useEffect(() => () => runRef.current?.cancel(), []);
-  return { state, start, cancel };
+  return { state, lastValue, start, cancel };
 }

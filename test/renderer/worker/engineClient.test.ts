@@ -54,9 +54,9 @@ describe('createWorkerClient', () => {
     const c = client();
     c.run({ kind: 'compare', ...inputs(), nameA: 'a', nameB: 'b' });
     c.run({ kind: 'study', ...inputs() });
-    c.run({ kind: 'study', ...inputs() });
     expect(FakeWorker.created).toHaveLength(2);
-    expect(FakeWorker.created[1]!.posted).toHaveLength(2);
+    expect(FakeWorker.created[0]!.posted[0]!.request.kind).toBe('compare');
+    expect(FakeWorker.created[1]!.posted[0]!.request.kind).toBe('study');
   });
 
   it('cancel terminates that worker, resolves "cancelled", and the next request starts a fresh one', async () => {
@@ -101,5 +101,42 @@ describe('createInThreadClient', () => {
     expect(await cancelled.outcome).toBe('cancelled');
     const flown = await c.run({ kind: 'study', ...inputs() }).outcome;
     expect(flown !== 'cancelled' && flown.ok).toBe(true);
+  });
+});
+
+describe('createWorkerClient latest wins for live kinds', () => {
+  it('runs one study at a time; only the newest waiting request runs next, the ones it replaced resolve cancelled', async () => {
+    const c = client();
+    const first = c.run({ kind: 'study', ...inputs() });
+    const second = c.run({ kind: 'study', ...inputs() });
+    const third = c.run({ kind: 'study', ...inputs() });
+    const w = FakeWorker.created[0]!;
+    expect(w.posted).toHaveLength(1);
+    expect(await second.outcome).toBe('cancelled');
+    w.reply({ id: w.posted[0]!.id, type: 'done', outcome: failure });
+    expect(await first.outcome).toEqual(failure);
+    expect(w.posted).toHaveLength(2);
+    w.reply({ id: w.posted[1]!.id, type: 'done', outcome: failure });
+    expect(await third.outcome).toEqual(failure);
+    expect(w.terminated).toBe(false);
+  });
+
+  it('cancelling the waiting request drops it without stopping the one running', async () => {
+    const c = client();
+    c.run({ kind: 'crossover', ...inputs(), query: { altitude_m: 1, mass_kg: 1, rating: 'maxCruise', isaDev_K: 0, allInlets: false } });
+    const waiting = c.run({ kind: 'crossover', ...inputs(), query: { altitude_m: 2, mass_kg: 1, rating: 'maxCruise', isaDev_K: 0, allInlets: false } });
+    waiting.cancel();
+    expect(await waiting.outcome).toBe('cancelled');
+    const w = FakeWorker.created[0]!;
+    expect(w.terminated).toBe(false);
+    w.reply({ id: w.posted[0]!.id, type: 'done', outcome: failure });
+    expect(w.posted).toHaveLength(1);
+  });
+
+  it('long jobs are not coalesced: every request is posted', () => {
+    const c = client();
+    c.run({ kind: 'payloadRange', ...inputs() });
+    c.run({ kind: 'payloadRange', ...inputs() });
+    expect(FakeWorker.created[0]!.posted).toHaveLength(2);
   });
 });

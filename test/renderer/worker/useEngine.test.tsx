@@ -130,4 +130,24 @@ describe('useEngineJob', () => {
     unmount();
     expect(client.runs[0]!.cancelled).toBe(true);
   });
+
+  it('with cancelOnRestart false leaves the old run to the client and keeps the last value while a newer one runs', async () => {
+    const client = manualClient();
+    const { result } = renderHook(() => useEngineJob<'crossover'>({ cancelOnRestart: false }), { wrapper: wrapper(client) });
+    const query = { altitude_m: 10000, mass_kg: 15000, rating: 'maxCruise' as const, isaDev_K: 0, allInlets: false };
+    act(() => result.current.start({ kind: 'crossover', ...inputs(), query }));
+    const value = { curves: [] };
+    await act(async () => client.runs[0]!.resolve({ ok: true, value }));
+    act(() => result.current.start({ kind: 'crossover', ...inputs(), query }));
+    act(() => result.current.start({ kind: 'crossover', ...inputs(), query }));
+    expect(client.runs[1]!.cancelled).toBe(false);
+    expect(result.current.state.status).toBe('running');
+    expect(result.current.lastValue).toBe(value);
+    // the older of the two late runs answering must not win
+    await act(async () => client.runs[1]!.resolve({ ok: true, value: { curves: [1] } as never }));
+    expect(result.current.lastValue).toBe(value);
+    const newest = { curves: [2] } as never;
+    await act(async () => client.runs[2]!.resolve({ ok: true, value: newest }));
+    expect(result.current.lastValue).toBe(newest);
+  });
 });
