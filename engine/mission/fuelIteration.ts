@@ -21,8 +21,15 @@ import { legEnvironment, type MissionContext } from './missionContext';
 import { S_AIR, S_MASS, S_TIME } from './missionState';
 import { createFlightLog, type FlightLog } from './timeHistoryBuilder';
 
-/** Fuel residual tolerance (kg): the mission lands with the reserve to within this. */
+/** Fuel residual tolerance (kg): the mission lands with the reserve plus 0 to this much (never less). */
 export const FUEL_TOLERANCE_KG = 0.1;
+/** The iteration aims at the middle of the band [0, FUEL_TOLERANCE_KG] so the reserve is never undercut. */
+const AIM_KG = FUEL_TOLERANCE_KG / 2;
+
+/** True when a residual (kg) lies in [0, FUEL_TOLERANCE_KG]. */
+function fuelConverged(residual_kg: number): boolean {
+  return residual_kg >= 0 && residual_kg <= FUEL_TOLERANCE_KG;
+}
 /** Range tolerance (m) of the payloadRange mode. */
 export const DISTANCE_TOLERANCE_M = 1;
 export const MAX_ITERATIONS = 40;
@@ -102,7 +109,7 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
   if (failedFlight(e0)) return { converged: false, rampMass_kg: x0, distance_m: d, iterations: 1, residual_kg: e0.residual_kg, failure: e0 };
   remember(e0);
   // The residual each pass would have had at exactly the range: the distance error costs the solvable leg's fuel per metre.
-  const atRange = (e: MissionEvaluation) => e.residual_kg + (e.trip.end[S_AIR] - range_m) * solvableFuelPerMetre(e);
+  const atRange = (e: MissionEvaluation) => e.residual_kg - AIM_KG + (e.trip.end[S_AIR] - range_m) * solvableFuelPerMetre(e);
   // First slope: for a Breguet-like flight, d(landing fuel)/d(ramp mass) = landing mass / ramp mass.
   const ratio = e0.trip.landing[S_MASS] / x0;
   let x1 = x0 - atRange(e0) / (Number.isFinite(ratio) && ratio > 0.2 && ratio <= 1 ? ratio : 0.85);
@@ -115,7 +122,7 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
     d = e1.trip.solvableDistance_m;
     if (failedFlight(e1)) return { converged: false, rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, failure: e1 };
     const distanceError = e1.trip.end[S_AIR] - range_m;
-    if (Math.abs(e1.residual_kg) <= FUEL_TOLERANCE_KG && Math.abs(distanceError) <= DISTANCE_TOLERANCE_M) {
+    if (fuelConverged(e1.residual_kg) && Math.abs(distanceError) <= DISTANCE_TOLERANCE_M) {
       return { converged: true, rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, failure: null, convergedPass: e1 };
     }
     if (d === 0 && distanceError > DISTANCE_TOLERANCE_M) {
@@ -160,7 +167,7 @@ export function iterateDistance(ctx: MissionContext, rampMass_kg: number): Itera
   if (e0.residual_kg < 0) {
     return { converged: false, rampMass_kg, distance_m: 0, iterations: 1, residual_kg: e0.residual_kg, failure: null };
   }
-  if (Math.abs(e0.residual_kg) <= FUEL_TOLERANCE_KG) {
+  if (fuelConverged(e0.residual_kg)) {
     return { converged: true, rampMass_kg, distance_m: 0, iterations: 1, residual_kg: e0.residual_kg, failure: null, convergedPass: e0 };
   }
   const leg = input.legs[solvableLegIndex(input)];
@@ -170,15 +177,16 @@ export function iterateDistance(ctx: MissionContext, rampMass_kg: number): Itera
     const m = e0.trip.takeoff[S_MASS];
     sr = specificRange(input, leg.altitude_m, cruiseMach(input, leg.speed, leg.altitude_m, m, env.isaDev_K), m, env.isaDev_K);
   }
-  let d1 = e0.residual_kg * (sr > 0 ? sr : 100);
+  let d1 = (e0.residual_kg - AIM_KG) * (sr > 0 ? sr : 100);
   for (let k = 2; k <= MAX_ITERATIONS; k++) {
     const e1 = evaluateMission(scratch(ctx), rampMass_kg, d1);
     if (failedFlight(e1)) return { converged: false, rampMass_kg, distance_m: d1, iterations: k, residual_kg: e1.residual_kg, failure: e1 };
-    if (Math.abs(e1.residual_kg) <= FUEL_TOLERANCE_KG) {
+    if (fuelConverged(e1.residual_kg)) {
       return { converged: true, rampMass_kg, distance_m: d1, iterations: k, residual_kg: e1.residual_kg, failure: null, convergedPass: e1 };
     }
     const slope = (e1.residual_kg - e0.residual_kg) / (d1 - d0);
-    let next = Number.isFinite(slope) && slope < 0 ? d1 - e1.residual_kg / slope : d1 + e1.residual_kg * (sr > 0 ? sr : 100);
+    const aimed = e1.residual_kg - AIM_KG;
+    let next = Number.isFinite(slope) && slope < 0 ? d1 - aimed / slope : d1 + aimed * (sr > 0 ? sr : 100);
     if (next < 0) next = 0.5 * d1;
     d0 = d1;
     e0 = e1;

@@ -23,7 +23,7 @@ import { checkFuelCapacity, checkMlw, checkMtow, checkMzfw, checkReserve } from 
 import { allowanceFuel } from './allowanceLegs';
 import { specificRange } from './bestSpeeds';
 import { cruiseMach } from './cruiseLeg';
-import { evaluateMission, iterateDistance, iterateRampMass, FUEL_TOLERANCE_KG, type MissionEvaluation } from './fuelIteration';
+import { evaluateMission, iterateDistance, iterateRampMass, type MissionEvaluation } from './fuelIteration';
 import { solvableLegIndex, tripBounds } from './flyTrip';
 import { legEnvironment, type FlightOptions, type LegTarget, type MissionContext } from './missionContext';
 import { missionInputProblem } from './missionInputCheck';
@@ -193,8 +193,7 @@ export function solveMission(input: MissionInput, options: SolveOptions = {}): M
   appendCaution(ctx.log, at(0, legName(0)), checkFuelCapacity(rampMass - zfw, input.airframe.maxFuel_kg), 0);
   if (status === 'ok') {
     appendCaution(ctx.log, at(last, legName(last)), checkMlw(landingMass, input.airframe.mlw_kg), trip.landing[S_TIME]);
-    const iterated = solve.kind !== 'takeoffWeight' || hasSolvable;
-    const reserveCheck = iterated ? landingFuel + FUEL_TOLERANCE_KG : landingFuel;
+    const reserveCheck = landingFuel;
     appendCaution(
       ctx.log,
       at(last, legName(last)),
