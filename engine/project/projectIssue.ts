@@ -3,6 +3,7 @@
  * was expected, and a readable sentence that says all three.
  */
 import type { z } from 'zod';
+import { escapeControls } from '../propulsion/deckFileError';
 
 export interface ProjectIssue {
   /** JSON path such as `mission.legs[3].toAltitude`; `(file)` for the whole document. */
@@ -52,9 +53,9 @@ export function showValue(value: unknown): string {
   return text.length > 60 ? `${text.slice(0, 57)}...` : text;
 }
 
-/** Builds an issue whose message reads `path: reason`. */
+/** Builds an issue whose message reads `path: reason` (control characters from the file escaped as \uXXXX). */
 export function makeIssue(path: string, value: string, expected: string, reason: string): ProjectIssue {
-  return { path, value, expected, message: `${path}: ${reason}` };
+  return { path, value, expected, message: escapeControls(`${path}: ${reason}`) };
 }
 
 const TYPE_NAMES: Readonly<Record<string, string>> = {

@@ -11,6 +11,7 @@ import { runCli } from '../../cli/main';
 import { parseProject } from '../../engine/project/parseProject';
 import { parseDeckCsv } from '../../engine/propulsion/deckCsv';
 import { parseDeckJson } from '../../engine/propulsion/deckJson';
+import { escapeControls } from '../../engine/propulsion/deckFileError';
 import { lookupDeck } from '../../engine/propulsion/deckLookup';
 import { expectClose } from '../support/assertInDelta';
 
@@ -149,7 +150,8 @@ describe('corpus through the CLI', () => {
         expect(head).toContain(e.stage === 'load' ? 'fixtures/corpus/' : file);
         const body = rest.join('\n');
         // A JSON syntax issue's path "(line L, column C)" reads "line L, column C" in the message.
-        expect(body).toContain(e.where.replace(/^\((.*)\)$/, '$1'));
+        // Control characters in a path read as \uXXXX escapes in the message.
+        expect(body).toContain(escapeControls(e.where.replace(/^\((.*)\)$/, '$1')));
         expect(body).toContain(e.fragment);
         expect(hasControl(r.err)).toBe(false);
       });
