@@ -323,6 +323,8 @@ export const solveSchema = z.discriminatedUnion('mode', [
 export const missionSchema = z.strictObject({
   isaDeviation: quantity('temperatureDelta', { min: -80, max: 80, what: 'an ISA deviation from -80 K to +80 K' }).default(0),
   wind: quantity('speed', { min: -150, max: 150, what: 'a wind from -150 m/s to +150 m/s' }).default(0),
+  /** Elevation of the destination aerodrome; absent = 0 ft. The last descent ends 1,500 ft above it (common practice). */
+  destinationElevation: altitude().optional(),
   legs: z.array(legSchema).min(1, { message: 'expected at least one leg' }),
   reserves: reservesSchema,
   solve: solveSchema,

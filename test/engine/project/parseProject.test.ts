@@ -67,6 +67,40 @@ describe('parseProject on the demo project', () => {
   });
 });
 
+describe('parseProject mission.destinationElevation', () => {
+  const withElevation = (value: unknown): unknown => {
+    const doc = JSON.parse(demoText) as { mission: Record<string, unknown> };
+    if (value === undefined) delete doc.mission.destinationElevation;
+    else doc.mission.destinationElevation = value;
+    return doc;
+  };
+
+  it('parseProject converts mission.destinationElevation to metres', () => {
+    const p = parseProjectData(withElevation('450 ft'));
+    if (!p.ok) throw new Error(p.error.map((i) => i.message).join('\n'));
+    // NIST SP 811: 1 ft = 0.3048 m exactly.
+    expectClose(p.value.mission.destinationElevation!, 450 * FT, { rel: 1e-15 }, 'NIST SP 811: ft');
+  });
+
+  it('parseProject leaves mission.destinationElevation absent when the file has none', () => {
+    const p = parseProjectData(withElevation(undefined));
+    expect(p.ok).toBe(true);
+    if (p.ok) expect(p.value.mission.destinationElevation).toBeUndefined();
+  });
+
+  it('parseProject rejects a destination elevation that is not a length, naming the field', () => {
+    const p = parseProjectData(withElevation('450 kt'));
+    expect(p.ok).toBe(false);
+    if (!p.ok) expect(p.error.some((i) => i.path === 'mission.destinationElevation' && /speed/.test(i.message))).toBe(true);
+  });
+
+  it('parseProject rejects a destination elevation above 65,000 ft, naming the field and the range', () => {
+    const p = parseProjectData(withElevation('70000 ft'));
+    expect(p.ok).toBe(false);
+    if (!p.ok) expect(p.error.some((i) => i.path === 'mission.destinationElevation' && i.message.includes('65,000 ft'))).toBe(true);
+  });
+});
+
 describe('parseProject on fixtures/bad-projects', () => {
   const cases = Object.entries(expected).filter(([, e]) => e.stage === 'parse');
 

@@ -57,6 +57,19 @@ describe('projectToJson', () => {
     expect(parsed(projectToJson(project))).toEqual(project);
   });
 
+  it('projectToJson writes mission.destinationElevation in metres and only when the project has one', () => {
+    const doc = JSON.parse(fixture('demo/demo.blockwise.json')) as { mission: Record<string, unknown> };
+    doc.mission.destinationElevation = '450 ft';
+    const project = parsed(JSON.stringify(doc));
+    const written = JSON.parse(projectToJson(project)) as { mission: { destinationElevation?: string } };
+    // 450 ft = 137.16 m (NIST SP 811: 1 ft = 0.3048 m).
+    expect(written.mission.destinationElevation).toBe('137.16 m');
+    expect(parsed(projectToJson(project))).toEqual(project);
+    delete doc.mission.destinationElevation;
+    const without = JSON.parse(projectToJson(parsed(JSON.stringify(doc)))) as { mission: Record<string, unknown> };
+    expect('destinationElevation' in without.mission).toBe(false);
+  });
+
   it('projectToJson round-trips arbitrary finite values of quantity fields exactly', () => {
     const base = parsed(fixture('demo/demo.blockwise.json'));
     fc.assert(
