@@ -2,9 +2,11 @@
  * One-dimensional searches shared by the analyses: sample a function on a
  * uniform grid, then refine sign changes with Brent's root finder
  * (engine/core/rootFind.ts) and maxima with golden-section search
- * (Kiefer 1953; Press et al., Numerical Recipes, `golden`).
+ * (engine/core/scalarMaximum.ts: Kiefer 1953; Press et al., Numerical
+ * Recipes, `golden`).
  */
 import { brent } from '../core/rootFind';
+import { goldenSectionBracket } from '../core/scalarMaximum';
 
 /** Uniform grid of `count` points from lo to hi inclusive (count >= 2). */
 export function uniformGrid(lo: number, hi: number, count: number): number[] {
@@ -20,8 +22,6 @@ export interface Extremum {
   /** True when the extremum lies at an end of [lo, hi] (the function is monotone there). */
   readonly atBound: boolean;
 }
-
-const INV_PHI = (Math.sqrt(5) - 1) / 2;
 
 /**
  * Maximum of f on [lo, hi]: the best of `samples` grid points, then a
@@ -67,27 +67,7 @@ export function refineMaximum(
   fBest: number,
   xTol: number,
 ): { x: number; fx: number } {
-  let a = a0;
-  let b = b0;
-  let c = b - INV_PHI * (b - a);
-  let d = a + INV_PHI * (b - a);
-  let fc = f(c);
-  let fd = f(d);
-  for (let i = 0; i < 200 && b - a > xTol; i++) {
-    if (fc >= fd || !Number.isFinite(fd)) {
-      b = d;
-      d = c;
-      fd = fc;
-      c = b - INV_PHI * (b - a);
-      fc = f(c);
-    } else {
-      a = c;
-      c = d;
-      fc = fd;
-      d = a + INV_PHI * (b - a);
-      fd = f(d);
-    }
-  }
+  const { a, b } = goldenSectionBracket(f, a0, b0, xTol);
   const xm = 0.5 * (a + b);
   const fm = f(xm);
   if (Number.isFinite(fm) && (!Number.isFinite(fBest) || fm >= fBest)) return { x: xm, fx: fm };

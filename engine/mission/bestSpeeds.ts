@@ -6,6 +6,7 @@
  * TSFC independent of speed is minimum fuel flow; Anderson, Aircraft
  * Performance and Design, section 5.14).
  */
+import { goldenMaximum } from '../core/scalarMaximum';
 import { airPoint, thrustPoint } from './flightPoint';
 import { machOfCas, missionAir } from './missionAtmosphere';
 import type { MissionInput } from './missionTypes';
@@ -14,34 +15,6 @@ import type { MissionInput } from './missionTypes';
 export const MIN_SEARCH_MACH = 0.15;
 /** Long-range cruise: fraction of the best specific range (common practice). */
 export const LONG_RANGE_FRACTION = 0.99;
-
-const INV_PHI = (Math.sqrt(5) - 1) / 2;
-
-/** Golden-section search for the maximum of a unimodal f on [lo, hi]; returns x to about 1e-5 (Kiefer 1953). */
-export function goldenMaximum(f: (x: number) => number, lo: number, hi: number, tolerance = 1e-5): number {
-  let a = lo;
-  let b = hi;
-  let c = b - INV_PHI * (b - a);
-  let d = a + INV_PHI * (b - a);
-  let fc = f(c);
-  let fd = f(d);
-  for (let i = 0; i < 100 && b - a > tolerance; i++) {
-    if (fc >= fd) {
-      b = d;
-      d = c;
-      fd = fc;
-      c = b - INV_PHI * (b - a);
-      fc = f(c);
-    } else {
-      a = c;
-      c = d;
-      fc = fd;
-      d = a + INV_PHI * (b - a);
-      fd = f(d);
-    }
-  }
-  return 0.5 * (a + b);
-}
 
 /** Highest Mach (-) the searches consider at an altitude: MMO or the Mach of VMO, whichever is lower. */
 export function maxSearchMach(input: MissionInput, altitude_m: number): number {
@@ -54,7 +27,7 @@ export function maxSearchMach(input: MissionInput, altitude_m: number): number {
  * mass (kg): TAS / fuel flow with thrust = drag (maxCruise ceiling); 0 where
  * the rating cannot balance the drag or fuel flow is not positive.
  */
-export function specificRange(input: MissionInput, altitude_m: number, mach: number, mass_kg: number, isaDev_K: number): number {
+export function specificRangeAt(input: MissionInput, altitude_m: number, mach: number, mass_kg: number, isaDev_K: number): number {
   const at = airPoint(input, altitude_m, mach, mass_kg, isaDev_K);
   const p = thrustPoint(input, at, isaDev_K, at.drag.drag_N, 'maxCruise');
   if (p.limit === 'above_rating' || !(p.fuelFlow_kg_s > 0)) return 0;
@@ -64,19 +37,19 @@ export function specificRange(input: MissionInput, altitude_m: number, mach: num
 
 /** Best-range Mach (-) at altitude (m) and mass (kg). */
 export function bestRangeMach(input: MissionInput, altitude_m: number, mass_kg: number, isaDev_K: number): number {
-  return goldenMaximum((m) => specificRange(input, altitude_m, m, mass_kg, isaDev_K), MIN_SEARCH_MACH, maxSearchMach(input, altitude_m));
+  return goldenMaximum((m) => specificRangeAt(input, altitude_m, m, mass_kg, isaDev_K), MIN_SEARCH_MACH, maxSearchMach(input, altitude_m));
 }
 
 /** Long-range Mach (-): the Mach above best-range Mach where specific range is 99 % of its best. */
 export function longRangeMach(input: MissionInput, altitude_m: number, mass_kg: number, isaDev_K: number): number {
   const best = bestRangeMach(input, altitude_m, mass_kg, isaDev_K);
-  const target = LONG_RANGE_FRACTION * specificRange(input, altitude_m, best, mass_kg, isaDev_K);
+  const target = LONG_RANGE_FRACTION * specificRangeAt(input, altitude_m, best, mass_kg, isaDev_K);
   let lo = best;
   let hi = maxSearchMach(input, altitude_m);
-  if (specificRange(input, altitude_m, hi, mass_kg, isaDev_K) >= target) return hi;
+  if (specificRangeAt(input, altitude_m, hi, mass_kg, isaDev_K) >= target) return hi;
   for (let i = 0; i < 60 && hi - lo > 1e-7; i++) {
     const mid = 0.5 * (lo + hi);
-    if (specificRange(input, altitude_m, mid, mass_kg, isaDev_K) >= target) lo = mid;
+    if (specificRangeAt(input, altitude_m, mid, mass_kg, isaDev_K) >= target) lo = mid;
     else hi = mid;
   }
   return 0.5 * (lo + hi);

@@ -12,7 +12,8 @@
  * then holds that Mach and lift coefficient, so the altitude rises as mass
  * falls (pressure proportional to mass).
  */
-import { bestRangeMach, goldenMaximum, longRangeMach, specificRange } from './bestSpeeds';
+import { goldenMaximum } from '../core/scalarMaximum';
+import { bestRangeMach, longRangeMach, specificRangeAt } from './bestSpeeds';
 import { makeClimbSegment } from './climbLeg';
 import { energyShareFactor, pressureAltitudeRate } from './energyShareFactor';
 import { airPoint, ratingPoint } from './flightPoint';
@@ -135,7 +136,7 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
     const h0 =
       ceiling - floor < 1
         ? floor
-        : goldenMaximum((h) => specificRange(input, h, cruiseMach(input, spec.speed, h, m0, dev), m0, dev), floor, ceiling, 1);
+        : goldenMaximum((h) => specificRangeAt(input, h, cruiseMach(input, spec.speed, h, m0, dev), m0, dev), floor, ceiling, 1);
     const mach = cruiseMach(input, spec.speed, h0, m0, dev);
     const p0 = missionAir(h0, 0).pressure_Pa;
     const pCeiling = missionAir(ceiling, 0).pressure_Pa;
@@ -195,9 +196,9 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
         stop: 'step_climb_due',
         g: (y, s) => {
           const m = y[S_MASS];
-          const srNow = specificRange(input, h, s.mach, m, dev);
+          const srNow = specificRangeAt(input, h, s.mach, m, dev);
           const machUp = machUpOf(m);
-          const srUp = specificRange(input, up, machUp, m, dev);
+          const srUp = specificRangeAt(input, up, machUp, m, dev);
           const gain = srNow > 0 ? (srUp - srNow) / srNow : srUp > 0 ? 1 : -1;
           const rateMargin = (heldMachClimbRate(input, up, machUp, m, dev) - minRate) / minRate;
           return Math.min(gain, rateMargin);

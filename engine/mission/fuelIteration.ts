@@ -13,7 +13,7 @@
  * Secant method: any numerical-analysis text (e.g. Burden & Faires,
  * Numerical Analysis, section 2.3).
  */
-import { specificRange } from './bestSpeeds';
+import { specificRangeAt } from './bestSpeeds';
 import { cruiseMach } from './cruiseLeg';
 import { flyReserves, type ReserveFlight } from './reserves';
 import { flyTrip, solvableLegIndex, type SolvedDistance, type TripOutcome } from './flyTrip';
@@ -175,7 +175,7 @@ export function iterateDistance(ctx: MissionContext, rampMass_kg: number): Itera
   if (leg && leg.kind === 'cruise') {
     const env = legEnvironment(input, leg);
     const m = e0.trip.takeoff[S_MASS];
-    sr = specificRange(input, leg.altitude_m, cruiseMach(input, leg.speed, leg.altitude_m, m, env.isaDev_K), m, env.isaDev_K);
+    sr = specificRangeAt(input, leg.altitude_m, cruiseMach(input, leg.speed, leg.altitude_m, m, env.isaDev_K), m, env.isaDev_K);
   }
   let d1 = (e0.residual_kg - AIM_KG) * (sr > 0 ? sr : 100);
   for (let k = 2; k <= MAX_ITERATIONS; k++) {

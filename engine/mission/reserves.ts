@@ -28,7 +28,7 @@
 import type { AlternateSpec, LegRow, MissionInput, MissionStatus, ReserveBreakdown, SpeedSchedule } from './missionTypes';
 import type { RatingName } from '../propulsion/propulsionModel';
 import { flyClimb } from './climbLeg';
-import { specificRange } from './bestSpeeds';
+import { specificRangeAt } from './bestSpeeds';
 import { cruiseMachOfMass, flyCruise } from './cruiseLeg';
 import { flyDescent, type DescentMode } from './descentLeg';
 import { flyHold } from './holdLeg';
@@ -104,7 +104,7 @@ function flyAlternate(ctx: MissionContext, target: LegTarget, start: StateVector
   };
   const first = trialDescent(climb.state[S_MASS]);
   if (first.trial.status !== 'ok') return first.trial;
-  const sr = specificRange(input, top, alt.cruiseMach, climb.state[S_MASS], target.env.isaDev_K);
+  const sr = specificRangeAt(input, top, alt.cruiseMach, climb.state[S_MASS], target.env.isaDev_K);
   const cruiseEstimate = Math.max(alt.distance_m - climbed - first.distance_m, 0);
   const second = sr > 0 ? trialDescent(climb.state[S_MASS] - cruiseEstimate / sr) : first;
   const descentDistance = second.trial.status === 'ok' ? second.distance_m : first.distance_m;

@@ -21,7 +21,7 @@
 import type { Caution } from '../cautions/caution';
 import { checkFuelCapacity, checkMlw, checkMtow, checkMzfw, checkReserve } from '../cautions/checks';
 import { allowanceFuel } from './allowanceLegs';
-import { specificRange } from './bestSpeeds';
+import { specificRangeAt } from './bestSpeeds';
 import { cruiseMach } from './cruiseLeg';
 import { evaluateMission, iterateDistance, iterateRampMass, type MissionEvaluation } from './fuelIteration';
 import { solvableLegIndex, tripBounds } from './flyTrip';
@@ -83,7 +83,7 @@ function breguetRampGuess(input: MissionInput, zfw_kg: number, taxi_kg: number, 
   if (!leg || leg.kind !== 'cruise') return fallback;
   const dev = legEnvironment(input, leg).isaDev_K;
   const m = 1.2 * zfw_kg;
-  const sr = specificRange(input, leg.altitude_m, cruiseMach(input, leg.speed, leg.altitude_m, m, dev), m, dev);
+  const sr = specificRangeAt(input, leg.altitude_m, cruiseMach(input, leg.speed, leg.altitude_m, m, dev), m, dev);
   if (!(sr > 0)) return fallback;
   const exponent = Math.min(range_m / (sr * m), 2);
   return 1.05 * zfw_kg * Math.exp(exponent) + taxi_kg;

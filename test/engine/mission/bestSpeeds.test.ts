@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { bestRangeMach, longRangeMach, minimumDragMach, specificRange } from '../../../engine/mission/bestSpeeds';
+import { bestRangeMach, longRangeMach, minimumDragMach, specificRangeAt } from '../../../engine/mission/bestSpeeds';
 import { missionAir } from '../../../engine/mission/missionAtmosphere';
 import { expectClose } from '../../support/assertInDelta';
 import { constantTsfcPropulsion, parabolicAero } from './support/analyticModels';
@@ -42,11 +42,11 @@ describe('bestSpeeds', () => {
     const lrc = longRangeMach(input, 9000, 60000, 0);
     expect(lrc).toBeGreaterThan(best);
     // 99 % of the best specific range: long-range cruise definition, common practice.
-    expectClose(specificRange(input, 9000, lrc, 60000, 0), 0.99 * specificRange(input, 9000, best, 60000, 0), { rel: 1e-6 }, '99 % rule');
+    expectClose(specificRangeAt(input, 9000, lrc, 60000, 0), 0.99 * specificRangeAt(input, 9000, best, 60000, 0), { rel: 1e-6 }, '99 % rule');
   });
 
-  it('specificRange is 0 where the maxCruise rating cannot balance the drag', () => {
+  it('specificRangeAt is 0 where the maxCruise rating cannot balance the drag', () => {
     const weak = { ...input, propulsion: constantTsfcPropulsion({ thrust0_N: 1000, tsfc_kg_N_s: 1.7e-5, lapseExponent: 0 }) };
-    expect(specificRange(weak, 9000, 0.7, 60000, 0)).toBe(0);
+    expect(specificRangeAt(weak, 9000, 0.7, 60000, 0)).toBe(0);
   });
 });

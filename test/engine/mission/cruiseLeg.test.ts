@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { solveMission } from '../../../engine/mission/solveMission';
-import { specificRange } from '../../../engine/mission/bestSpeeds';
+import { specificRangeAt } from '../../../engine/mission/bestSpeeds';
 import type { CruiseProfile, CruiseSpeed, Leg } from '../../../engine/mission/missionTypes';
 import { expectClose } from '../../support/assertInDelta';
 import { constantTsfcPropulsion } from './support/analyticModels';
@@ -47,8 +47,8 @@ describe('cruiseLeg', () => {
     for (let i = 1; i < h.length; i++) {
       if (h[i] > h[i - 1] + 1 && h[i - 1] === h[Math.max(i - 2, 0)]) {
         const input = missionInput({ legs: [], solve: { kind: 'takeoffWeight', takeoffMass_kg: 1, payload_kg: 0 }, propulsion: engines });
-        const here = specificRange(input, h[i - 1], 0.78, m[i - 1], 0);
-        const up = specificRange(input, h[i - 1] + 2000 * FT, 0.78, m[i - 1], 0);
+        const here = specificRangeAt(input, h[i - 1], 0.78, m[i - 1], 0);
+        const up = specificRangeAt(input, h[i - 1] + 2000 * FT, 0.78, m[i - 1], 0);
         expect(up).toBeGreaterThanOrEqual(here * (1 - 1e-9));
       }
     }
