@@ -48,8 +48,8 @@ export function crossoverSeries(set: CrossoverSet, units: UnitSystem): { rows: R
     });
   }
   const series = set.curves.flatMap(({ inletName }, i) => [
-    { key: seriesKey('t', i), name: `thrust available, ${inletName}` },
-    { key: seriesKey('d', i), name: `drag, ${inletName}` },
+    { key: seriesKey('t', i), name: `thrust available, ${inletName}`, colorIndex: 2 * i },
+    { key: seriesKey('d', i), name: `drag, ${inletName}`, colorIndex: 2 * i + 1 },
   ]);
   const markers: CrossoverMarker[] = [];
   for (const { inletName, result } of set.curves) {

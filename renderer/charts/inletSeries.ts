@@ -41,11 +41,11 @@ export function inletSeries(inlets: readonly InletCurves[], units: UnitSystem): 
     recovery,
     spillage,
     internalMach,
-    recoverySeries: [{ key: 'ref', name: 'deck reference' }, ...inlets.map((inlet, i) => ({ key: seriesKey('r', i), name: inlet.name }))],
-    spillageSeries: inlets.map((inlet, i) => ({ key: seriesKey('s', i), name: inlet.name })),
+    recoverySeries: [{ key: 'ref', name: 'deck reference', colorIndex: 7 }, ...inlets.map((inlet, i) => ({ key: seriesKey('r', i), name: inlet.name, colorIndex: i }))],
+    spillageSeries: inlets.map((inlet, i) => ({ key: seriesKey('s', i), name: inlet.name, colorIndex: i })),
     machSeries: inlets.flatMap((inlet, i) => [
-      { key: seriesKey('t', i), name: `${inlet.name} throat` },
-      { key: seriesKey('f', i), name: `${inlet.name} fan face` },
+      { key: seriesKey('t', i), name: `${inlet.name} throat`, colorIndex: i },
+      { key: seriesKey('f', i), name: `${inlet.name} fan face`, colorIndex: i },
     ]),
     spillageUnit: displayUnit('force', units),
   };

@@ -34,8 +34,8 @@ export function lapseSeries(curves: LapseCurves, units: UnitSystem): { thrust: R
   const series = curves.altitudes_m.flatMap((alt, i) => {
     const at = formatQuantity(alt, 'altitude', units);
     return [
-      { key: seriesKey('u', i), name: `uninstalled, ${at}` },
-      { key: seriesKey('i', i), name: `installed, ${at}` },
+      { key: seriesKey('u', i), name: `uninstalled, ${at}`, colorIndex: i },
+      { key: seriesKey('i', i), name: `installed, ${at}`, colorIndex: i },
     ];
   });
   return { thrust, tsfc: tsfcRows, series, thrustUnit: displayUnit('force', units), tsfcUnit: displayUnit('tsfc', units) };

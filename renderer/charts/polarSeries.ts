@@ -5,6 +5,8 @@ import { seriesKey } from './seriesKeys';
 export interface SeriesDef {
   readonly key: string;
   readonly name: string;
+  /** Series with the same colour index share a colour (e.g. one altitude, uninstalled and installed). */
+  readonly colorIndex?: number;
 }
 
 /** Rows `{ cl, m0: cd at machs[0], m1: ... }` and the series names ("M 0.78"). */

@@ -14,3 +14,11 @@ export function sampleIndices(n: number, maxPoints: number): number[] {
   for (let k = 0; k < maxPoints; k++) out.push(Math.round(k * step));
   return out;
 }
+
+/** Axis tick text: at most four significant digits, no float noise ("2999.99999" -> "3000"). */
+export function tickText(value: number): string {
+  if (!Number.isFinite(value)) return '';
+  if (value === 0) return '0';
+  const rounded = Number(value.toPrecision(4));
+  return Math.abs(rounded) >= 1e5 || Math.abs(rounded) < 1e-3 ? value.toExponential(2) : String(rounded);
+}

@@ -1,5 +1,6 @@
 import { CartesianGrid, Legend, Line, LineChart, ReferenceDot, ReferenceLine, Tooltip, XAxis, YAxis } from 'recharts';
 import type { SeriesDef } from '../charts/polarSeries';
+import { tickText } from '../charts/seriesKeys';
 
 const PALETTE = ['#1f5fa8', '#c2571a', '#2e8540', '#8a3fa0', '#a8871f', '#1f9aa8', '#a81f4a', '#555555', '#6b8e23', '#d2691e'];
 
@@ -9,7 +10,7 @@ export interface ChartSize {
 }
 
 /** The size charts use in the app; tests pass their own. */
-export const DEFAULT_CHART_SIZE: ChartSize = { width: 640, height: 300 };
+export const DEFAULT_CHART_SIZE: ChartSize = { width: 640, height: 360 };
 
 export interface LineChartPanelProps {
   readonly title: string;
@@ -35,13 +36,13 @@ export function LineChartPanel(props: LineChartPanelProps) {
   return (
     <figure className="chart" data-testid={props.testId}>
       <figcaption>{props.title}</figcaption>
-      <LineChart width={size.width} height={size.height} data={props.data as object[]} margin={{ top: 8, right: 24, bottom: 24, left: 16 }}>
+      <LineChart width={size.width} height={size.height} data={props.data as object[]} margin={{ top: 8, right: 24, bottom: 8, left: 16 }}>
         <CartesianGrid strokeDasharray="3 3" />
-        <XAxis dataKey={props.xKey} type="number" domain={['dataMin', 'dataMax']} label={{ value: props.xLabel, position: 'insideBottom', offset: -12 }} />
-        <YAxis yAxisId="left" label={{ value: props.yLabel, angle: -90, position: 'insideLeft' }} domain={['auto', 'auto']} />
+        <XAxis dataKey={props.xKey} type="number" domain={['auto', 'auto']} tickFormatter={tickText} label={{ value: props.xLabel, position: 'insideBottom', offset: -12 }} />
+        <YAxis yAxisId="left" label={{ value: props.yLabel, angle: -90, position: 'insideLeft' }} domain={['auto', 'auto']} tickFormatter={tickText} width={64} />
         {second.size > 0 ? <YAxis yAxisId="right" orientation="right" label={{ value: props.secondAxisLabel ?? '', angle: 90, position: 'insideRight' }} /> : null}
-        <Tooltip />
-        <Legend verticalAlign="top" />
+        <Tooltip formatter={(v) => (typeof v === 'number' ? tickText(v) : String(v))} labelFormatter={(v) => (typeof v === 'number' ? tickText(v) : String(v))} />
+        <Legend verticalAlign="bottom" wrapperStyle={{ paddingTop: 28, fontSize: 11 }} />
         {props.series.map((s, i) => (
           <Line
             key={s.key}
@@ -49,7 +50,7 @@ export function LineChartPanel(props: LineChartPanelProps) {
             type="monotone"
             dataKey={s.key}
             name={s.name}
-            stroke={PALETTE[i % PALETTE.length]}
+            stroke={PALETTE[(s.colorIndex ?? i) % PALETTE.length]}
             strokeDasharray={props.dashed?.(s.key) ? '5 4' : undefined}
             dot={false}
             isAnimationActive={false}
@@ -57,7 +58,7 @@ export function LineChartPanel(props: LineChartPanelProps) {
           />
         ))}
         {(props.verticalMarks ?? []).map((m) => (
-          <ReferenceLine key={`${m.label}-${m.x}`} yAxisId="left" x={m.x} stroke="#888" strokeDasharray="2 2" label={{ value: m.label, position: 'top', fontSize: 10 }} />
+          <ReferenceLine key={`${m.label}-${m.x}`} yAxisId="left" x={m.x} stroke="#888" strokeDasharray="2 2" label={{ value: m.label, position: 'insideTopLeft', fontSize: 10, angle: -90, dx: 4, dy: 70 }} />
         ))}
         {(props.points ?? []).map((p) => (
           <ReferenceDot key={`${p.label}-${p.x}`} yAxisId="left" x={p.x} y={p.y} r={4} fill="#c00" stroke="none" />

@@ -9,7 +9,7 @@ import { inletSeries } from '../../../renderer/charts/inletSeries';
 import { lapseSeries } from '../../../renderer/charts/lapseSeries';
 import { polarSeries } from '../../../renderer/charts/polarSeries';
 import { profileSeries } from '../../../renderer/charts/profileSeries';
-import { sampleIndices } from '../../../renderer/charts/seriesKeys';
+import { sampleIndices, tickText } from '../../../renderer/charts/seriesKeys';
 import type { CrossoverSet, InletCurves, LapseCurves } from '../../../renderer/worker/engineProtocol';
 import { expectClose } from '../../support/assertInDelta';
 
@@ -199,5 +199,16 @@ describe('breakdownWaterfall and payloadRangeRows', () => {
     expect(rows[0]!.range).toBe(0);
     expectClose(rows[2]!.range, 2000, { rel: 1e-12 }, NIST);
     expectClose(rows[2]!.payload, 1000 / LB, { rel: 1e-12 }, NIST);
+  });
+});
+
+describe('tickText', () => {
+  it('shows at most four significant digits without float noise', () => {
+    expect(tickText(2999.999990090659)).toBe('3000');
+    expect(tickText(0.5248502732003647)).toBe('0.5249');
+    expect(tickText(0)).toBe('0');
+    expect(tickText(-1050)).toBe('-1050');
+    expect(tickText(123456)).toBe('1.23e+5');
+    expect(tickText(Number.NaN)).toBe('');
   });
 });
