@@ -28,5 +28,3 @@ export interface AnalysisError {
   readonly message: string;
 }
 
-/** Standard gravity (m/s^2), ISO 80000-3 / CGPM 1901 (exact). */
-export const STANDARD_GRAVITY_M_S2 = 9.80665;

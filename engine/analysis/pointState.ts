@@ -5,7 +5,8 @@
 import { atmosphere } from '../aero/standardAtmosphere';
 import { err, ok, type Result } from '../core/result';
 import type { RatingName } from '../propulsion/propulsionModel';
-import { STANDARD_GRAVITY_M_S2, type AnalysisError, type PerformanceModels } from './analysisTypes';
+import { g0 } from '../aero/constants';
+import type { AnalysisError, PerformanceModels } from './analysisTypes';
 
 export interface LevelPoint {
   readonly mach: number;
@@ -72,7 +73,7 @@ export function levelPoint(
     thrustAvailable_N: t.thrust_N,
     drag_N: d.drag_N,
     excessThrust_N: excess,
-    specificExcessPower_m_s: (excess * tas_m_s) / (conditions.mass_kg * STANDARD_GRAVITY_M_S2),
+    specificExcessPower_m_s: (excess * tas_m_s) / (conditions.mass_kg * g0),
     cl: d.cl,
     clMax: d.clMax,
     buffetCl: d.buffetCl,

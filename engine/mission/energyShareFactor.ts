@@ -16,7 +16,8 @@
  * re-derived here from the pitot relation of NACA Report 1135 and the ISA
  * lapse, and checked numerically in test/reference/missionReference.py).
  */
-import { G0_M_S2, GAMMA_AIR, GAS_CONSTANT_J_KG_K } from './missionAtmosphere';
+import { gamma as GAMMA_AIR } from '../aero/constants';
+import { G0_M_S2, GAS_CONSTANT_J_KG_K } from './missionAtmosphere';
 
 export type HeldSpeed = 'cas' | 'mach' | 'tas';
 

@@ -9,11 +9,10 @@
  */
 import { atmosphere, pressureAltitude } from '../aero/standardAtmosphere';
 import { casFromMach, casMachTransitionAltitude, machFromCas } from '../aero/airspeeds';
-import { a0, g0, gamma, p0, R_air, T0 } from '../aero/constants';
+import { a0, g0, p0, R_air, T0 } from '../aero/constants';
 
 export const G0_M_S2 = g0;
 export const GAS_CONSTANT_J_KG_K = R_air;
-export const GAMMA_AIR = gamma;
 export const SEA_LEVEL_TEMPERATURE_K = T0;
 export const SEA_LEVEL_PRESSURE_PA = p0;
 export const SEA_LEVEL_SPEED_OF_SOUND_M_S = a0;

@@ -12,12 +12,17 @@ export const PROJECT_FORMAT = 'blockwise-project';
 export const CURRENT_VERSION = 2;
 
 const FT = 0.3048;
-/** Pressure-altitude range accepted for mission altitudes: -2,000 ft to 65,000 ft (common practice for the class). */
-export const MIN_ALTITUDE_M = -2000 * FT;
-export const MAX_ALTITUDE_M = 65000 * FT;
+/**
+ * Pressure-altitude range a project file accepts for its altitudes: -2,000 ft
+ * to 65,000 ft (common practice for the class). Named apart from the mission
+ * input check's own range (engine/mission/missionInputCheck.ts, -1 km to 30 km,
+ * which is wider at the top) so both can be re-exported from one index.
+ */
+export const PROJECT_MIN_ALTITUDE_M = -2000 * FT;
+export const PROJECT_MAX_ALTITUDE_M = 65000 * FT;
 
 function altitude() {
-  return quantity('length', { min: MIN_ALTITUDE_M, max: MAX_ALTITUDE_M, what: 'a pressure altitude from -2,000 ft to 65,000 ft' });
+  return quantity('length', { min: PROJECT_MIN_ALTITUDE_M, max: PROJECT_MAX_ALTITUDE_M, what: 'a pressure altitude from -2,000 ft to 65,000 ft' });
 }
 function positiveQuantity(dimension: Parameters<typeof quantity>[0], what: string) {
   return quantity(dimension, { min: Number.MIN_VALUE, what });
