@@ -14,6 +14,8 @@ export interface InletSeries {
   readonly spillageSeries: SeriesDef[];
   readonly machSeries: SeriesDef[];
   readonly spillageUnit: string;
+  /** False when no design has throat or fan-face Mach (recovery-table designs have no geometry). */
+  readonly hasInternalMach: boolean;
 }
 
 /** Rows over the shared Mach axis of the designs (all computed on PLOT_MACHS); spillage per engine in force display units. */
@@ -48,5 +50,6 @@ export function inletSeries(inlets: readonly InletCurves[], units: UnitSystem): 
       { key: seriesKey('f', i), name: `${inlet.name} fan face`, colorIndex: i },
     ]),
     spillageUnit: displayUnit('force', units),
+    hasInternalMach: inlets.some((inlet) => inlet.throatMach.some((m) => m !== null) || inlet.fanFaceMach.some((m) => m !== null)),
   };
 }

@@ -73,7 +73,13 @@ export function InletsView(props: { readonly live: LiveStudy; readonly chartSize
           <div className="chart-row">
             <LineChartPanel title="Total-pressure recovery against Mach" testId="chart-recovery" data={series.recovery} xKey="mach" xLabel="Mach" yLabel="recovery pt2/pt0" series={series.recoverySeries} dashed={(k) => k === 'ref'} {...size} />
             <LineChartPanel title="Spillage drag per engine against Mach" testId="chart-spillage" data={series.spillage} xKey="mach" xLabel="Mach" yLabel={`spillage drag (${series.spillageUnit})`} series={series.spillageSeries} {...size} />
-            <LineChartPanel title="Throat and fan-face Mach against flight Mach" testId="chart-inlet-mach" data={series.internalMach} xKey="mach" xLabel="flight Mach" yLabel="internal Mach" series={series.machSeries} dashed={(k) => k.startsWith('f')} {...size} />
+            {series.hasInternalMach ? (
+              <LineChartPanel title="Throat and fan-face Mach against flight Mach" testId="chart-inlet-mach" data={series.internalMach} xKey="mach" xLabel="flight Mach" yLabel="internal Mach" series={series.machSeries} dashed={(k) => k.startsWith('f')} {...size} />
+            ) : (
+              <p className="small" data-testid="inlet-mach-none">
+                Throat and fan-face Mach come from inlet geometry (capture, throat and fan-face areas); these designs are given as recovery tables.
+              </p>
+            )}
           </div>
         </>
       ) : null}

@@ -124,6 +124,9 @@ describe('inletSeries', () => {
     expect(s.internalMach[1]).toEqual({ mach: 0.8, t0: 0.7, f0: 0.5, t1: 0.75, f1: 0.5 });
     expect(s.recoverySeries.map((x) => x.name)).toEqual(['deck reference', 'short', 'long']);
     expect(s.spillageUnit).toBe('lbf');
+    expect(s.hasInternalMach).toBe(true);
+    const tableOnly = { ...inlet('t', 0), throatMach: [null, null], fanFaceMach: [null, null] };
+    expect(inletSeries([tableOnly], 'si').hasInternalMach).toBe(false);
   });
 });
 
