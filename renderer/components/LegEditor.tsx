@@ -38,7 +38,7 @@ export function LegFields(props: { readonly leg: ProjectLeg; readonly n: number 
     case 'taxiIn':
       return (
         <>
-          <QuantityField label="Time" path={[...p, 'time']} unit="time" testId={id('time')} />
+          <QuantityField label="Time" path={[...p, 'time']} unit="duration" testId={id('time')} />
           <Toggle label="Fuel flow at idle" testId={id('idle')} checked={leg.fuelFlow === 'idle'} onChange={(c) => set(['fuelFlow'], c ? 'idle' : 0.05, 'fuel flow')} />
           {leg.fuelFlow !== 'idle' ? <QuantityField label="Fuel flow" path={[...p, 'fuelFlow']} unit="fuelFlow" testId={id('fuel-flow')} /> : null}
         </>
@@ -47,7 +47,7 @@ export function LegFields(props: { readonly leg: ProjectLeg; readonly n: number 
     case 'approach':
       return (
         <>
-          <QuantityField label="Time" path={[...p, 'time']} unit="time" testId={id('time')} />
+          <QuantityField label="Time" path={[...p, 'time']} unit="duration" testId={id('time')} />
           <Toggle label="Fuel as a fixed allowance" testId={id('fixed-fuel')} checked={leg.fuel !== null} onChange={(c) => set(['fuel'], c ? 100 : null, 'fuel allowance')} />
           {leg.fuel !== null ? <QuantityField label="Fuel allowance" path={[...p, 'fuel']} unit="mass" testId={id('fuel')} /> : null}
         </>
@@ -112,7 +112,7 @@ export function LegFields(props: { readonly leg: ProjectLeg; readonly n: number 
       return (
         <>
           <QuantityField label="Altitude" path={[...p, 'altitude']} unit="altitude" testId={id('altitude')} />
-          <QuantityField label="Time" path={[...p, 'time']} unit="time" testId={id('time')} />
+          <QuantityField label="Time" path={[...p, 'time']} unit="duration" testId={id('time')} />
           <Toggle label="Best-endurance speed" testId={id('best-endurance')} checked={leg.speed.kind === 'bestEndurance'} onChange={(c) => set(['speed'], c ? { kind: 'bestEndurance' } : { kind: 'cas', cas: 210 * 1852 / 3600 }, 'hold speed')} />
           {leg.speed.kind === 'cas' ? <QuantityField label="CAS" path={[...p, 'speed', 'cas']} unit="speed" testId={id('hold-cas')} /> : null}
         </>

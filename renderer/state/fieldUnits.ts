@@ -8,7 +8,8 @@ import { groupDigits } from '../../engine/units/displayUnits';
 import { displayUnit, fromSi, parseQuantity, toDisplay, type DisplayKind, type Dimension, type UnitSystem } from '../../engine/units/quantity';
 
 /** A display kind, or a unit that is the same in both systems. */
-export type FieldUnit = DisplayKind | 'angle' | 'dimensionless' | 'percent' | 'massFlow';
+/** `duration` is a time shown in minutes in both systems (leg and reserve times). */
+export type FieldUnit = DisplayKind | 'angle' | 'dimensionless' | 'percent' | 'massFlow' | 'duration';
 
 const DIMENSION_OF: Readonly<Record<FieldUnit, Dimension>> = {
   altitude: 'length',
@@ -29,12 +30,14 @@ const DIMENSION_OF: Readonly<Record<FieldUnit, Dimension>> = {
   angle: 'angle',
   dimensionless: 'dimensionless',
   percent: 'dimensionless',
+  duration: 'time',
 };
 
 const FIXED_UNIT: Partial<Record<FieldUnit, Record<UnitSystem, string>>> = {
   angle: { si: 'deg', customary: 'deg' },
   massFlow: { si: 'kg/s', customary: 'lb/s' },
   percent: { si: '%', customary: '%' },
+  duration: { si: 'min', customary: 'min' },
 };
 
 /** The dimension a field's text is parsed as. */

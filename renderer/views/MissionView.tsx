@@ -27,9 +27,9 @@ function Reserves() {
         onChoose={(preset) => dispatch({ type: 'valueSet', path: p, value: reservesForPreset(preset, r.alternate), label: `Reserves: ${preset}` })}
       />
       {r.preset === 'icaoAnnex6' || r.preset === 'custom' ? <QuantityField label="Contingency fraction of trip fuel" path={[...p, 'contingencyFraction']} unit="percent" testId="field-contingency" /> : null}
-      {r.preset === 'icaoAnnex6' ? <QuantityField label="Least contingency (time at holding)" path={[...p, 'minContingencyTime']} unit="time" testId="field-min-contingency" /> : null}
+      {r.preset === 'icaoAnnex6' ? <QuantityField label="Least contingency (time at holding)" path={[...p, 'minContingencyTime']} unit="duration" testId="field-min-contingency" /> : null}
       {r.preset === 'cfr121_645' ? <QuantityField label="Fraction of en-route time" path={[...p, 'enRouteFraction']} unit="percent" testId="field-en-route-fraction" /> : null}
-      <QuantityField label="Final reserve time" path={[...p, 'finalReserveTime']} unit="time" testId="field-final-reserve" />
+      <QuantityField label="Final reserve time" path={[...p, 'finalReserveTime']} unit="duration" testId="field-final-reserve" />
       {r.preset === 'custom' ? <QuantityField label="Extra fuel" path={[...p, 'extraFuel']} unit="mass" testId="field-extra-fuel" /> : null}
       <label className="toggle">
         <input

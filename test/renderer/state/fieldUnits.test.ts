@@ -15,6 +15,10 @@ describe('formatField', () => {
     expect(formatField(450 * 0.09290304, 'area', 'customary')).toBe('450 ft2');
     expect(formatField((27 * Math.PI) / 180, 'angle', 'si')).toBe('27 deg');
     expect(formatField(0.015, 'percent', 'si')).toBe('1.5 %');
+    // durations in minutes in both systems: 600 s = 10 min
+    expect(formatField(600, 'duration', 'customary')).toBe('10 min');
+    const d = parseField('45', 'duration', 'si');
+    expect(d).toEqual({ ok: true, value: 2700 });
   });
 
   it('shows dimensionless values exactly and non-finite values as empty', () => {
