@@ -230,10 +230,18 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
     if (run.stop !== 'step_climb_due' || profile.kind !== 'stepClimb') return failed(ctx, target, state, run.stop, last);
     const up = h + profile.step_m;
     const climbMach = last.mach;
-    const climb = flySegment(ctx, target, makeClimbSegment(ctx, target, 'mach', climbMach, up, 'maxClimb'), state);
+    // The leg's end stops a step climb too (top of descent reached while climbing), so the distance flown,
+    // and with it the fuel-iteration residual, stays a continuous function of the mass.
+    const climbSegment = makeClimbSegment(ctx, target, 'mach', climbMach, up, 'maxClimb');
+    const legEnd: SegmentEvent = { stop: 'distance_reached', stateOnly: true, g: (y) => y[S_AIR] - endAt(y[S_MASS]) };
+    const climb = flySegment(ctx, target, { ...climbSegment, events: [...climbSegment.events, legEnd] }, state);
     state = climb.end;
     last = climb.endSample;
     state[S_TAS] = last.tas_m_s;
+    if (climb.stop === 'distance_reached') {
+      state[S_AIR] = endAt(state[S_MASS]);
+      return legOk(state, last);
+    }
     if (climb.stop !== 'altitude_reached') {
       return climb.stop === 'fuel_exhausted'
         ? failed(ctx, target, state, climb.stop, last)
