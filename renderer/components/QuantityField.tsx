@@ -15,6 +15,8 @@ export interface QuantityFieldProps {
   readonly hint?: string;
   /** Empty text removes the value (the project's default applies). */
   readonly optional?: boolean;
+  /** The label is read by assistive technology but not shown (a table row already says it). */
+  readonly hideLabel?: boolean;
 }
 
 /**
@@ -39,7 +41,7 @@ export function QuantityField(props: QuantityFieldProps) {
   const unitLabel = fieldUnitLabel(props.unit, state.units);
   return (
     <div className={view.error ? 'field field-invalid' : 'field'}>
-      <label htmlFor={id}>
+      <label htmlFor={id} className={props.hideLabel ? 'visually-hidden' : undefined}>
         {props.label}
         {unitLabel ? <span className="field-unit"> ({unitLabel})</span> : null}
         {props.hint ? <span className="field-hint"> {props.hint}</span> : null}

@@ -14,7 +14,7 @@ export function CautionsView() {
         <thead>
           <tr>
             <th>Limit</th>
-            <th>Value</th>
+            <th>Value (blank: default)</th>
             <th>Default</th>
             <th>Source of the default</th>
             <th />
@@ -25,7 +25,7 @@ export function CautionsView() {
             <tr key={l.key} data-testid={`caution-limit-${l.key}`}>
               <td>{l.label}</td>
               <td>
-                <QuantityField label={l.label} path={['cautions', l.key]} unit={l.unit} testId={`field-caution-${l.key}`} optional />
+                <QuantityField label={l.label} path={['cautions', l.key]} unit={l.unit} testId={`field-caution-${l.key}`} optional hideLabel />
               </td>
               <td>{formatField(l.default_si, l.unit, state.units)}</td>
               <td className="small">{l.source}</td>
