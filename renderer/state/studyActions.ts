@@ -8,7 +8,8 @@ import type { DocPath } from './projectPath';
 import type { DeckFile, Highlight } from './studyState';
 
 export type StudyAction =
-  | { readonly type: 'projectOpened'; readonly project: Project; readonly name: string; readonly deckFile: DeckFile | null }
+  /** `unsaved`: the text is not what is on disk (recovered work), so the document starts edited. */
+  | { readonly type: 'projectOpened'; readonly project: Project; readonly name: string; readonly deckFile: DeckFile | null; readonly unsaved?: boolean }
   | { readonly type: 'projectOpenFailed'; readonly name: string; readonly issues: readonly ProjectIssue[] }
   | { readonly type: 'deckImported'; readonly deckFile: DeckFile }
   /** Text typed into a quantity field; accepted only when it parses and passes the project's rules. */

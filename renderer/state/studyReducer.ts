@@ -61,7 +61,7 @@ export function studyReducer(state: StudyState, action: StudyAction): StudyState
         drafts: {},
         issues: projectIssues(action.project),
         openIssues: [],
-        savedAtStep: 0,
+        savedAtStep: action.unsaved === true ? null : 0,
         highlight: null,
       };
     case 'projectOpenFailed':

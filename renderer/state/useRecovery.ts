@@ -44,7 +44,8 @@ export function useRecovery(bridge: Bridge, store: StudyStore) {
 
   const restore = useCallback(() => {
     if (offer === null) return;
-    dispatch(openProjectAction(offer.name, offer.text, latest.current.deckFile));
+    const action = openProjectAction(offer.name, offer.text, latest.current.deckFile);
+    dispatch(action.type === 'projectOpened' ? { ...action, unsaved: true } : action);
     setOffer(null);
   }, [offer, dispatch]);
 

@@ -30,6 +30,13 @@ describe('studyReducer', () => {
     expectClose(s.doc!.present.airframe.weights.operatingEmpty, 19000 * LB, { rel: 1e-12 }, 'NIST SP 811 lb');
   });
 
+  it('projectOpened with unsaved work starts edited', () => {
+    const s = demoState();
+    const again = run(s, { type: 'projectOpened', project: s.doc!.present, name: 'x', deckFile: null, unsaved: true });
+    expect(again.savedAtStep).toBeNull();
+    expect(run(again, { type: 'saved' }).savedAtStep).toBe(0);
+  });
+
   it('projectOpenFailed keeps the open project and lists every issue with its path', () => {
     const s = demoState();
     const bad = run(s, openProjectAction('weights-out-of-order.blockwise.json', fixtureText('fixtures/bad-projects/weights-out-of-order.blockwise.json'), null));

@@ -140,6 +140,7 @@ describe('the App with the demo study', () => {
     const after = await waitForChange(before);
     expect(after).toBeGreaterThan(before);
     expect(screen.queryByTestId('recovery-offer')).toBeNull();
+    expect(screen.getByTestId('document-name').textContent).toBe('demo.blockwise.json (edited)');
   }, 60000);
 
   it('discarding the recovery copy tells the bridge', async () => {
