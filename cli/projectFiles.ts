@@ -95,7 +95,11 @@ export async function readProjectDeck(
 export async function loadProjectFromDisk(path: string, options: BuildOptions = {}): Promise<Result<LoadedProject, LoadFailure>> {
   const read = await readProjectFile(path);
   if (!read.ok) return read;
-  const { projectPath, project } = read.value;
+  return buildFromProject(read.value.projectPath, read.value.project, options);
+}
+
+/** For a project already read from `projectPath`: reads the deck it names and builds the mission input (inlet per `options`). */
+export async function buildFromProject(projectPath: string, project: Project, options: BuildOptions = {}): Promise<Result<LoadedProject, LoadFailure>> {
   const deck = await readProjectDeck(projectPath, project);
   if (!deck.ok) return deck;
   const input = buildMissionInput(project, deck.value.deck === undefined ? {} : { deck: deck.value.deck }, options);

@@ -4,10 +4,10 @@
  * with their leg and time, and the safety notice.
  */
 import type { Caution } from '../../engine/cautions/caution';
-import { SAFETY_NOTICE_LINES } from '../../engine/core/notice';
 import type { LegRow, MissionResult } from '../../engine/mission/missionTypes';
 import { formatQuantity, type DisplayKind } from '../../engine/units/quantity';
 import { formatPairs, formatTable } from './textTable';
+import { reportText } from '../common/report';
 
 export interface MissionSummaryContext {
   readonly projectName: string;
@@ -93,7 +93,7 @@ export function missionSummaryText(result: MissionResult, context: MissionSummar
     legRows(r.legs),
   );
   const cautions = r.cautions.length === 0 ? ['  none'] : cautionLines(r.cautions);
-  return [
+  return reportText([
     `Mission: ${context.projectName}`,
     `Inlet: ${context.inletName}    Deck: ${context.deckTitle}`,
     `Status: ${status}`,
@@ -105,8 +105,5 @@ export function missionSummaryText(result: MissionResult, context: MissionSummar
     '',
     `Cautions (${r.cautions.length}):`,
     ...cautions,
-    '',
-    ...SAFETY_NOTICE_LINES,
-    '',
-  ].join('\n');
+  ]);
 }

@@ -1,20 +1,13 @@
 import { airspeedsAt, type Airspeeds, type SpeedInput } from '../../engine/aero/airspeeds';
 import { atmosphere, type AtmosphereState } from '../../engine/aero/standardAtmosphere';
-import { SAFETY_NOTICE_LINES } from '../../engine/core/notice';
-import { formatQuantity, fromSi, parseQuantity, type Dimension, type DisplayKind } from '../../engine/units/quantity';
+import { formatQuantity, fromSi, type DisplayKind } from '../../engine/units/quantity';
 import { groupDigits } from '../../engine/units/displayUnits';
 import { FOOT_M, POUND_KG } from '../../engine/units/unitTable';
-import { optionalString, printJson, requireString, UsageError, type CliIo, type Verb } from '../verb';
+import { optionalQuantityOption, quantityOption } from '../common/quantityOptions';
+import { printJsonReport, reportText } from '../common/report';
+import { optionalString, UsageError, type CliIo, type Verb } from '../verb';
 
 const SPEED_OPTIONS = ['cas', 'eas', 'tas', 'mach'] as const;
-
-function readOption(values: Readonly<Record<string, unknown>>, name: string, dimension: Dimension): number {
-  const text = name === 'altitude' ? requireString(values, name) : optionalString(values, name);
-  if (text === undefined) throw new Error(`bug: --${name} read when absent`);
-  const parsed = parseQuantity(text, dimension);
-  if (!parsed.ok) throw new UsageError(`--${name}: ${parsed.error.message}`);
-  return parsed.value;
-}
 
 function readSpeed(values: Readonly<Record<string, unknown>>): SpeedInput | null {
   const given = SPEED_OPTIONS.filter((n) => optionalString(values, n) !== undefined);
@@ -23,7 +16,7 @@ function readSpeed(values: Readonly<Record<string, unknown>>): SpeedInput | null
   }
   const name = given[0];
   if (name === undefined) return null;
-  const value = readOption(values, name, name === 'mach' ? 'dimensionless' : 'speed');
+  const value = optionalQuantityOption(values, name, name === 'mach' ? 'dimensionless' : 'speed')!;
   if (value < 0) throw new UsageError(`--${name}: a speed cannot be negative (got ${String(values[name])})`);
   if (name === 'cas') return { cas_m_s: value };
   if (name === 'eas') return { eas_m_s: value };
@@ -69,8 +62,7 @@ function textReport(state: AtmosphereState, speeds: Airspeeds | null): string {
       row('impact pressure', `${groupDigits(speeds.impactPressure_Pa, 0)} Pa`, `${groupDigits(fromSi(speeds.impactPressure_Pa, 'psf'), 1)} psf`),
     );
   }
-  lines.push('', ...SAFETY_NOTICE_LINES, '');
-  return lines.join('\n');
+  return reportText(lines);
 }
 
 export const airVerb: Verb = {
@@ -104,8 +96,8 @@ with a minus sign needs an equals sign: --isa-dev=-10K, --altitude=-1000ft.
     json: { type: 'boolean' },
   },
   run(values, _positionals, io: CliIo): number {
-    const altitude_m = readOption(values, 'altitude', 'length');
-    const isaDev_K = optionalString(values, 'isa-dev') === undefined ? 0 : readOption(values, 'isa-dev', 'temperatureDelta');
+    const altitude_m = quantityOption(values, 'altitude', 'length');
+    const isaDev_K = optionalQuantityOption(values, 'isa-dev', 'temperatureDelta') ?? 0;
     const speed = readSpeed(values);
     const state = atmosphere(altitude_m, isaDev_K);
     if (!state.ok) {
@@ -120,7 +112,7 @@ with a minus sign needs an equals sign: --isa-dev=-10K, --altitude=-1000ft.
     }
     if (values.json === true) {
       const s = state.value;
-      printJson(io, {
+      printJsonReport(io, {
         pressureAltitude_m: s.pressureAltitude_m,
         isaDev_K: s.isaDev_K,
         temperature_K: s.temperature_K,

@@ -1,14 +1,15 @@
 import { compareInlets } from '../../engine/analysis/inletComparison';
 import { inletFactorBuilder } from '../../engine/analysis/inletFactorBuilder';
-import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../engine/core/notice';
 import { buildMissionInput, projectInlet } from '../../engine/project/buildMissionInput';
 import { projectDeck } from '../../engine/project/projectDeck';
 import { cautionSettingsOf, installationOf } from '../../engine/project/projectSpecs';
 import { formatQuantity } from '../../engine/units/displayUnits';
+import { checkInletName, loadVerbProject, projectArgument } from '../common/projectArgs';
+import { analysisFailed, printJsonReport, printReport } from '../common/report';
 import { formatTable } from '../format/textTable';
 import { formatLoadFailure } from '../projectFiles';
-import { optionalString, printJson, UsageError, type CliIo, type Verb } from '../verb';
-import { bothUnits, checkInletName, EXIT_ANALYSIS_FAILED, loadAnalysisProject, machText, projectArgument } from './analysisArgs';
+import { optionalString, UsageError, type CliIo, type Verb } from '../verb';
+import { bothUnits, JSON_OPTION, machText } from './analysisArgs';
 
 function signed(x: number | null, digits: number): string {
   if (x === null) return '-';
@@ -39,7 +40,7 @@ analysis failed.
 `,
   options: {
     inlets: { type: 'string' },
-    json: { type: 'boolean' },
+    ...JSON_OPTION,
   },
   allowPositionals: true,
   async run(values, positionals, io: CliIo): Promise<number> {
@@ -52,7 +53,7 @@ analysis failed.
       if (parts[0] === parts[1]) throw new UsageError(`--inlets: give two different designs (got ${JSON.stringify(parts[0])} twice)`);
       names = [parts[0]!, parts[1]!];
     }
-    const loadedA = await loadAnalysisProject(file, names?.[0], io);
+    const loadedA = await loadVerbProject(file, names?.[0], io);
     if (typeof loadedA === 'number') return loadedA;
     const { project, projectPath, deck } = loadedA;
     if (names === null) {
@@ -85,13 +86,10 @@ analysis failed.
       cautionSettings: cautionSettingsOf(project),
     });
     const r = compareInlets(build, { nameA: names[0], nameB: names[1] });
-    if (!r.ok) {
-      io.err(`blockwise compare: ${r.error.message}\n`);
-      return EXIT_ANALYSIS_FAILED;
-    }
+    if (!r.ok) return analysisFailed(io, 'compare', r.error.message);
     const v = r.value;
     if (values.json === true) {
-      printJson(io, { ...v, notice: SAFETY_NOTICE });
+      printJsonReport(io, { ...v });
       return 0;
     }
     const [a, b] = v.designs;
@@ -103,44 +101,39 @@ analysis failed.
       return [`${c.name} ceiling ft`, ft(c.altitude_m), ft(cb?.altitude_m), d.ceilings[i]?.altitude_m == null ? '-' : signed(d.ceilings[i]!.altitude_m! / 0.3048, 0)];
     });
     const cond = v.crossoverCondition;
-    io.out(
-      [
-        `Inlet comparison — "${a.name}" (A) vs "${b.name}" (B), project "${project.name}"`,
-        '',
-        formatTable(
-          [
-            { header: '', align: 'left' },
-            { header: 'A', align: 'right' },
-            { header: 'B', align: 'right' },
-            { header: 'B - A', align: 'right' },
-          ],
-          [
-            ['block fuel kg', a.blockFuel_kg.toFixed(1), b.blockFuel_kg.toFixed(1), signed(d.blockFuel_kg, 1)],
-            ['block time min', minutes(a.blockTime_s), minutes(b.blockTime_s), signed(d.blockTime_s / 60, 2)],
-            ['trip fuel kg', a.tripFuel_kg.toFixed(1), b.tripFuel_kg.toFixed(1), signed(d.tripFuel_kg, 1)],
-            ['take-off mass kg', a.takeoffMass_kg.toFixed(0), b.takeoffMass_kg.toFixed(0), signed(d.takeoffMass_kg, 1)],
-            ['low crossover Mach', machText(a.crossover.lowMach), machText(b.crossover.lowMach), signed(d.lowMach, 4)],
-            ['high crossover Mach', machText(a.crossover.highMach), machText(b.crossover.highMach), signed(d.highMach, 4)],
-            ['least-thrust Mach', machText(a.crossover.minThrustMach), machText(b.crossover.minThrustMach), ''],
-            ...ceilingRows,
-          ],
-        ),
-        `  Crossovers at ${bothUnits(cond.altitude_m, 'altitude')}, ${formatQuantity(cond.mass_kg, 'mass', 'si')} (A's mid-cruise mass), ${cond.rating}; ceilings at maxClimb, same mass.`,
-        '',
-        `Block-fuel difference B - A = ${signed(v.breakdown.total_kg, 2)} kg, by factor (method: ${v.breakdown.method}):`,
-        formatTable(
-          [
-            { header: 'factor', align: 'left' },
-            { header: 'kg', align: 'right' },
-          ],
-          [...v.breakdown.parts.map((p) => [p.factor, signed(p.blockFuel_kg, 2)]), ['sum of parts', signed(v.breakdown.sumOfParts_kg, 2)]],
-        ),
-        `  ${v.breakdown.description}`,
-        '',
-        ...SAFETY_NOTICE_LINES,
-        '',
-      ].join('\n'),
-    );
+    printReport(io, [
+      `Inlet comparison — "${a.name}" (A) vs "${b.name}" (B), project "${project.name}"`,
+      '',
+      formatTable(
+        [
+          { header: '', align: 'left' },
+          { header: 'A', align: 'right' },
+          { header: 'B', align: 'right' },
+          { header: 'B - A', align: 'right' },
+        ],
+        [
+          ['block fuel kg', a.blockFuel_kg.toFixed(1), b.blockFuel_kg.toFixed(1), signed(d.blockFuel_kg, 1)],
+          ['block time min', minutes(a.blockTime_s), minutes(b.blockTime_s), signed(d.blockTime_s / 60, 2)],
+          ['trip fuel kg', a.tripFuel_kg.toFixed(1), b.tripFuel_kg.toFixed(1), signed(d.tripFuel_kg, 1)],
+          ['take-off mass kg', a.takeoffMass_kg.toFixed(0), b.takeoffMass_kg.toFixed(0), signed(d.takeoffMass_kg, 1)],
+          ['low crossover Mach', machText(a.crossover.lowMach), machText(b.crossover.lowMach), signed(d.lowMach, 4)],
+          ['high crossover Mach', machText(a.crossover.highMach), machText(b.crossover.highMach), signed(d.highMach, 4)],
+          ['least-thrust Mach', machText(a.crossover.minThrustMach), machText(b.crossover.minThrustMach), ''],
+          ...ceilingRows,
+        ],
+      ),
+      `  Crossovers at ${bothUnits(cond.altitude_m, 'altitude')}, ${formatQuantity(cond.mass_kg, 'mass', 'si')} (A's mid-cruise mass), ${cond.rating}; ceilings at maxClimb, same mass.`,
+      '',
+      `Block-fuel difference B - A = ${signed(v.breakdown.total_kg, 2)} kg, by factor (method: ${v.breakdown.method}):`,
+      formatTable(
+        [
+          { header: 'factor', align: 'left' },
+          { header: 'kg', align: 'right' },
+        ],
+        [...v.breakdown.parts.map((p) => [p.factor, signed(p.blockFuel_kg, 2)]), ['sum of parts', signed(v.breakdown.sumOfParts_kg, 2)]],
+      ),
+      `  ${v.breakdown.description}`,
+    ]);
     return 0;
   },
 };

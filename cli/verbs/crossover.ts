@@ -1,17 +1,9 @@
 import { thrustDragCrossover } from '../../engine/analysis/crossover';
-import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../engine/core/notice';
+import { analysisFailed, cautionBlock, isaText, printJsonReport, printReport } from '../common/report';
+import { positiveQuantityOption, quantityOption } from '../common/quantityOptions';
 import { formatTable } from '../format/textTable';
-import { optionalString, printJson, type CliIo, type Verb } from '../verb';
-import {
-  bothUnits,
-  EXIT_ANALYSIS_FAILED,
-  loadAnalysisProject,
-  machText,
-  positiveQuantityOption,
-  projectArgument,
-  quantityOption,
-  ratingOption,
-} from './analysisArgs';
+import type { CliIo, Verb } from '../verb';
+import { bothUnits, INLET_OPTION, ISA_DEV_OPTION, isaDevOption, JSON_OPTION, machText, openAnalysisProject, ratingOption } from './analysisArgs';
 
 export const crossoverVerb: Verb = {
   name: 'crossover',
@@ -40,28 +32,24 @@ says so. Exit codes: 0 done; 1 project unreadable; 2 bad command line;
     altitude: { type: 'string' },
     weight: { type: 'string' },
     rating: { type: 'string' },
-    inlet: { type: 'string' },
-    'isa-dev': { type: 'string' },
-    json: { type: 'boolean' },
+    ...INLET_OPTION,
+    ...ISA_DEV_OPTION,
+    ...JSON_OPTION,
   },
   allowPositionals: true,
   async run(values, positionals, io: CliIo): Promise<number> {
-    const file = projectArgument(positionals, 'crossover');
     const altitude_m = quantityOption(values, 'altitude', 'length');
     const mass_kg = positiveQuantityOption(values, 'weight', 'mass');
     const rating = ratingOption(values, 'rating', 'maxCruise');
-    const loaded = await loadAnalysisProject(file, optionalString(values, 'inlet'), io);
+    const loaded = await openAnalysisProject(values, positionals, 'crossover', io);
     if (typeof loaded === 'number') return loaded;
     const { input } = loaded;
-    const isaDev_K = quantityOption(values, 'isa-dev', 'temperatureDelta', input.isaDev_K);
+    const isaDev_K = isaDevOption(values, input.isaDev_K);
     const r = thrustDragCrossover({ aero: input.aero, propulsion: input.propulsion }, { altitude_m, mass_kg, rating, isaDev_K });
-    if (!r.ok) {
-      io.err(`blockwise crossover: ${r.error.message}\n`);
-      return EXIT_ANALYSIS_FAILED;
-    }
+    if (!r.ok) return analysisFailed(io, 'crossover', r.error.message);
     const v = r.value;
     if (values.json === true) {
-      printJson(io, { inlet: input.propulsion.inletName, deck: input.propulsion.label, ...v, notice: SAFETY_NOTICE });
+      printJsonReport(io, { inlet: input.propulsion.inletName, deck: input.propulsion.label, ...v });
       return 0;
     }
     const step = Math.max(1, Math.round(v.curves.mach.length / 16));
@@ -74,37 +62,32 @@ says so. Exit codes: 0 done; 1 project unreadable; 2 bad command line;
         ((v.curves.specificExcessPower_m_s[i]! * 60) / 0.3048).toFixed(0),
       ])
       .filter((_, i) => i % step === 0 || i === v.curves.mach.length - 1);
-    io.out(
-      [
-        `Thrust-drag crossover — inlet "${input.propulsion.inletName}", ${v.rating}, ${bothUnits(altitude_m, 'altitude')}, ${bothUnits(mass_kg, 'mass')}, ISA${isaDev_K >= 0 ? '+' : ''}${isaDev_K.toFixed(1)} K`,
-        `Deck: ${input.propulsion.label}`,
-        '',
-        `  status                 ${v.status}`,
-        `  ${v.message}`,
-        `  low crossover Mach     ${machText(v.lowMach)}`,
-        `  high crossover Mach    ${machText(v.highMach)}`,
-        `  least-thrust Mach      ${machText(v.minThrustMach)}`,
-        `  stall Mach (CLmax)     ${machText(v.stallMach)}`,
-        `  most excess thrust at  M ${machText(v.maxExcessThrustMach)}`,
-        `  best climb (most Ps)   M ${machText(v.bestClimbMach)}, ${v.maxSpecificExcessPower_m_s === null ? '-' : bothUnits(v.maxSpecificExcessPower_m_s, 'climbRate')}`,
-        `  tolerance              Mach ${v.tolerance.mach}, |T - D|/D < ${v.tolerance.relativeThrust}`,
-        '',
-        formatTable(
-          [
-            { header: 'Mach', align: 'right' },
-            { header: 'thrust kN', align: 'right' },
-            { header: 'drag kN', align: 'right' },
-            { header: 'excess kN', align: 'right' },
-            { header: 'Ps ft/min', align: 'right' },
-          ],
-          rows,
-        ),
-        '',
-        ...(v.cautions.length > 0 ? ['Cautions:', ...v.cautions.map((c) => `  [${c.severity}] ${c.id}: ${c.message}`), ''] : []),
-        ...SAFETY_NOTICE_LINES,
-        '',
-      ].join('\n'),
-    );
+    printReport(io, [
+      `Thrust-drag crossover — inlet "${input.propulsion.inletName}", ${v.rating}, ${bothUnits(altitude_m, 'altitude')}, ${bothUnits(mass_kg, 'mass')}, ${isaText(isaDev_K)}`,
+      `Deck: ${input.propulsion.label}`,
+      '',
+      `  status                 ${v.status}`,
+      `  ${v.message}`,
+      `  low crossover Mach     ${machText(v.lowMach)}`,
+      `  high crossover Mach    ${machText(v.highMach)}`,
+      `  least-thrust Mach      ${machText(v.minThrustMach)}`,
+      `  stall Mach (CLmax)     ${machText(v.stallMach)}`,
+      `  most excess thrust at  M ${machText(v.maxExcessThrustMach)}`,
+      `  best climb (most Ps)   M ${machText(v.bestClimbMach)}, ${v.maxSpecificExcessPower_m_s === null ? '-' : bothUnits(v.maxSpecificExcessPower_m_s, 'climbRate')}`,
+      `  tolerance              Mach ${v.tolerance.mach}, |T - D|/D < ${v.tolerance.relativeThrust}`,
+      '',
+      formatTable(
+        [
+          { header: 'Mach', align: 'right' },
+          { header: 'thrust kN', align: 'right' },
+          { header: 'drag kN', align: 'right' },
+          { header: 'excess kN', align: 'right' },
+          { header: 'Ps ft/min', align: 'right' },
+        ],
+        rows,
+      ),
+      ...cautionBlock(v.cautions),
+    ]);
     return 0;
   },
 };

@@ -1,32 +1,14 @@
-import { readFileSync } from 'node:fs';
-import { resolve } from 'node:path';
-import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../engine/core/notice';
-import type { Result } from '../../engine/core/result';
-import { parseDeckCsv } from '../../engine/propulsion/deckCsv';
-import type { DeckFileError } from '../../engine/propulsion/deckFileError';
 import { deckGridPoints } from '../../engine/propulsion/deckGrid';
-import { parseDeckJson } from '../../engine/propulsion/deckJson';
 import { lookupDeck, ratingPower } from '../../engine/propulsion/deckLookup';
 import { describeReferenceRecovery, type EngineDeck } from '../../engine/propulsion/engineDeck';
 import { RATING_NAMES, type RatingName } from '../../engine/propulsion/propulsionModel';
-import { parseQuantity, type Dimension } from '../../engine/units/quantity';
 import { FOOT_M, POUND_FORCE_N, POUND_KG } from '../../engine/units/unitTable';
-import { optionalString, printJson, requireString, UsageError, type CliIo, type Verb } from '../verb';
-
-/** Reads and parses a deck file (JSON by extension, else CSV); null after printing why it could not be read. */
-function readDeck(file: string, io: CliIo): { text: string; result: Result<EngineDeck, readonly DeckFileError[]> } | null {
-  const path = resolve(io.cwd, file);
-  let text: string;
-  try {
-    text = readFileSync(path, 'utf8');
-  } catch (e) {
-    const code = (e as NodeJS.ErrnoException).code;
-    io.err(`blockwise deck: cannot read "${file}"${code ? ` (${code})` : ''}\n`);
-    return null;
-  }
-  const result = /\.json$/i.test(file) ? parseDeckJson(text, file) : parseDeckCsv(text, file);
-  return { text, result };
-}
+import { significant } from '../common/numberText';
+import { powerOrRating } from '../common/powerOption';
+import { optionalQuantityOption, quantityOption } from '../common/quantityOptions';
+import { printJsonReport, reportText } from '../common/report';
+import { deckErrorsText, readDeckFile } from '../common/textFile';
+import { requireString, UsageError, type Verb } from '../verb';
 
 function onePositional(positionals: readonly string[]): string {
   if (positionals.length !== 1) throw new UsageError(`give exactly one deck file (got ${positionals.length})`);
@@ -34,7 +16,7 @@ function onePositional(positionals: readonly string[]): string {
 }
 
 function round(x: number, digits = 6): number {
-  return Number(x.toPrecision(digits));
+  return significant(x, digits);
 }
 
 interface DeckSummary {
@@ -99,11 +81,8 @@ function summaryText(file: string, s: DeckSummary): string {
     `  outside the table   altitude ${s.policy.altitude}, Mach ${s.policy.mach}, power ${s.policy.power}, ISA deviation ${s.policy.isaDev}`,
     ...s.notes.map((n, i) => `  ${i === 0 ? 'notes' : ''}`.padEnd(22) + n),
     '  values are per engine and uninstalled',
-    '',
-    ...SAFETY_NOTICE_LINES,
-    '',
   ];
-  return lines.join('\n');
+  return reportText(lines);
 }
 
 export const deckCheckVerb: Verb = {
@@ -124,28 +103,19 @@ column) when it is not; 2 for a bad command line.
   allowPositionals: true,
   run(values, positionals, io) {
     const file = onePositional(positionals);
-    const read = readDeck(file, io);
-    if (read === null) return 1;
-    const { result } = read;
+    const result = readDeckFile(file, 'deck', io);
+    if (result === null) return 1;
     if (!result.ok) {
-      if (values.json === true) printJson(io, { ok: false, file, errors: result.error });
-      else io.err(`${result.error.map((e) => e.message).join('\n')}\n${file}: ${result.error.length} error${result.error.length === 1 ? '' : 's'}; deck not loaded\n`);
+      if (values.json === true) printJsonReport(io, { ok: false, file, errors: result.error });
+      else io.err(deckErrorsText(file, result.error, `${result.error.length} error${result.error.length === 1 ? '' : 's'}; deck not loaded`));
       return 1;
     }
     const summary = summarize(result.value);
-    if (values.json === true) printJson(io, { ok: true, file, ...summary, notice: SAFETY_NOTICE });
+    if (values.json === true) printJsonReport(io, { ok: true, file, ...summary });
     else io.out(summaryText(file, summary));
     return 0;
   },
 };
-
-function readQuantityOption(values: Readonly<Record<string, unknown>>, name: string, dimension: Dimension, required: boolean): number | undefined {
-  const text = required ? requireString(values, name) : optionalString(values, name);
-  if (text === undefined) return undefined;
-  const parsed = parseQuantity(text, dimension);
-  if (!parsed.ok) throw new UsageError(`--${name}: ${parsed.error.message}`);
-  return parsed.value;
-}
 
 export const deckAtVerb: Verb = {
   name: 'deck at',
@@ -176,47 +146,42 @@ caution, or refuse: exit 1).
   allowPositionals: true,
   run(values, positionals, io) {
     const file = onePositional(positionals);
-    const altitude_m = readQuantityOption(values, 'altitude', 'length', true)!;
-    const mach = readQuantityOption(values, 'mach', 'dimensionless', true)!;
+    const altitude_m = quantityOption(values, 'altitude', 'length');
+    const mach = quantityOption(values, 'mach', 'dimensionless');
     if (mach < 0) throw new UsageError(`--mach: a Mach number cannot be negative (got ${String(values.mach)})`);
-    const isaDev_K = readQuantityOption(values, 'isa-dev', 'temperatureDelta', false) ?? 0;
-    const powerText = requireString(values, 'power').trim();
-    const read = readDeck(file, io);
+    const isaDev_K = optionalQuantityOption(values, 'isa-dev', 'temperatureDelta') ?? 0;
+    const choice = powerOrRating(requireString(values, 'power'));
+    const read = readDeckFile(file, 'deck', io);
     if (read === null) return 1;
-    if (!read.result.ok) {
-      io.err(`${read.result.error.map((e) => e.message).join('\n')}\n${file}: deck not loaded\n`);
+    if (!read.ok) {
+      io.err(deckErrorsText(file, read.error));
       return 1;
     }
-    const deck = read.result.value;
+    const deck = read.value;
     let power: number;
     let rating: RatingName | null = null;
-    const named = RATING_NAMES.find((r) => r === powerText);
-    if (named !== undefined) {
-      const r = ratingPower(deck, named);
+    if (choice.kind === 'rating') {
+      const r = ratingPower(deck, choice.rating);
       if (!r.ok) {
         io.err(`blockwise deck at: --power: ${r.error.message}\n`);
         return 1;
       }
       power = r.value;
-      rating = named;
+      rating = choice.rating;
     } else {
-      const parsed = parseQuantity(powerText, 'dimensionless');
-      if (!parsed.ok) {
-        throw new UsageError(`--power: "${powerText}" is neither a number nor a rating (${RATING_NAMES.join(', ')})`);
-      }
-      power = parsed.value;
+      power = choice.power;
     }
     const condition = { altitude_m, mach, isaDev_K };
     const looked = lookupDeck(deck, condition, power);
     if (!looked.ok) {
-      if (values.json === true) printJson(io, { ok: false, error: looked.error });
+      if (values.json === true) printJsonReport(io, { ok: false, error: looked.error });
       else io.err(`blockwise deck at: ${looked.error.message}\n`);
       return 1;
     }
     const v = looked.value;
     const tsfc = v.thrust_N > 0 ? v.fuelFlow_kg_s / v.thrust_N : null;
     if (values.json === true) {
-      printJson(io, {
+      printJsonReport(io, {
         ok: true,
         deck: deck.title,
         parametric: deck.parametric,
@@ -233,7 +198,6 @@ caution, or refuse: exit 1).
         tsfc_kg_N_s: tsfc,
         outsideTable: v.outside,
         cautions: v.cautions,
-        notice: SAFETY_NOTICE,
       });
       return 0;
     }
@@ -247,11 +211,8 @@ caution, or refuse: exit 1).
       `  TSFC        ${tsfc === null ? 'n/a (thrust not positive)' : `${round(tsfc * 1e6)} mg/(N s)   ${round((tsfc * 3600 * POUND_FORCE_N) / POUND_KG)} lb/(lbf h)`}`,
       `  table       ${v.outside.length === 0 ? 'inside' : `outside on ${v.outside.join(', ')}`}`,
       ...v.cautions.map((c) => `  ${c.severity}: ${c.message}`),
-      '',
-      ...SAFETY_NOTICE_LINES,
-      '',
     ];
-    io.out(lines.join('\n'));
+    io.out(reportText(lines));
     return 0;
   },
 };

@@ -1,17 +1,9 @@
 import { DEFAULT_RESIDUAL_CLIMB_RATES, flightEnvelope } from '../../engine/analysis/envelope';
-import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../engine/core/notice';
+import { analysisFailed, isaText, printJsonReport, printReport } from '../common/report';
+import { positiveQuantityOption } from '../common/quantityOptions';
 import { formatTable } from '../format/textTable';
-import { optionalString, printJson, UsageError, type CliIo, type Verb } from '../verb';
-import {
-  bothUnits,
-  EXIT_ANALYSIS_FAILED,
-  loadAnalysisProject,
-  machText,
-  positiveQuantityOption,
-  projectArgument,
-  quantityOption,
-  ratingOption,
-} from './analysisArgs';
+import { UsageError, type CliIo, type Verb } from '../verb';
+import { bothUnits, INLET_OPTION, ISA_DEV_OPTION, isaDevOption, JSON_OPTION, machText, openAnalysisProject, ratingOption } from './analysisArgs';
 
 export const envelopeVerb: Verb = {
   name: 'envelope',
@@ -42,28 +34,27 @@ TAS (no acceleration factor). Exit codes: 0 done; 1 project unreadable;
   options: {
     weight: { type: 'string' },
     rating: { type: 'string' },
-    inlet: { type: 'string' },
-    'isa-dev': { type: 'string' },
+    ...INLET_OPTION,
+    ...ISA_DEV_OPTION,
     top: { type: 'string' },
     step: { type: 'string' },
     'service-rate': { type: 'string' },
     'cruise-rate': { type: 'string' },
-    json: { type: 'boolean' },
+    ...JSON_OPTION,
   },
   allowPositionals: true,
   async run(values, positionals, io: CliIo): Promise<number> {
-    const file = projectArgument(positionals, 'envelope');
     const rating = ratingOption(values, 'rating', 'maxClimb');
     const top_m = positiveQuantityOption(values, 'top', 'length', 50000 * 0.3048);
     const step_m = positiveQuantityOption(values, 'step', 'length', 2000 * 0.3048);
     if (top_m / step_m > 2000) throw new UsageError(`--step: ${String(values.step)} gives more than 2000 rows up to --top`);
     const serviceRate = positiveQuantityOption(values, 'service-rate', 'speed', DEFAULT_RESIDUAL_CLIMB_RATES[0]!.climbRate_m_s);
     const cruiseRate = positiveQuantityOption(values, 'cruise-rate', 'speed', DEFAULT_RESIDUAL_CLIMB_RATES[1]!.climbRate_m_s);
-    const loaded = await loadAnalysisProject(file, optionalString(values, 'inlet'), io);
+    const loaded = await openAnalysisProject(values, positionals, 'envelope', io);
     if (typeof loaded === 'number') return loaded;
     const { input } = loaded;
     const mass_kg = positiveQuantityOption(values, 'weight', 'mass', input.airframe.mtow_kg);
-    const isaDev_K = quantityOption(values, 'isa-dev', 'temperatureDelta', input.isaDev_K);
+    const isaDev_K = isaDevOption(values, input.isaDev_K);
     const r = flightEnvelope(
       { aero: input.aero, propulsion: input.propulsion },
       {
@@ -80,13 +71,10 @@ TAS (no acceleration factor). Exit codes: 0 done; 1 project unreadable;
         speedLimits: { vmo_m_s: input.airframe.vmo_m_s, mmo: input.airframe.mmo },
       },
     );
-    if (!r.ok) {
-      io.err(`blockwise envelope: ${r.error.message}\n`);
-      return EXIT_ANALYSIS_FAILED;
-    }
+    if (!r.ok) return analysisFailed(io, 'envelope', r.error.message);
     const v = r.value;
     if (values.json === true) {
-      printJson(io, { inlet: input.propulsion.inletName, deck: input.propulsion.label, ...v, notice: SAFETY_NOTICE });
+      printJsonReport(io, { inlet: input.propulsion.inletName, deck: input.propulsion.label, ...v });
       return 0;
     }
     const rows = v.rows.map((row) => [
@@ -99,32 +87,27 @@ TAS (no acceleration factor). Exit codes: 0 done; 1 project unreadable;
       machText(row.speedLimitMach),
       row.maxClimbRate_m_s === null ? '-' : ((row.maxClimbRate_m_s * 60) / 0.3048).toFixed(0),
     ]);
-    io.out(
-      [
-        `Level-flight envelope — inlet "${input.propulsion.inletName}", ${v.rating}, ${bothUnits(mass_kg, 'mass')}, ISA${isaDev_K >= 0 ? '+' : ''}${isaDev_K.toFixed(1)} K`,
-        '',
-        'Ceilings:',
-        ...v.ceilings.map((c) => `  ${c.name.padEnd(9)} ${c.altitude_m === null ? c.message : `${bothUnits(c.altitude_m, 'altitude')} at M ${machText(c.bestClimbMach)} (residual climb ${bothUnits(c.climbRate_m_s, 'climbRate')})`}`),
-        `  ${v.climbRateDefinition}`,
-        '',
-        formatTable(
-          [
-            { header: 'alt ft', align: 'right' },
-            { header: 'low M', align: 'right' },
-            { header: 'high M', align: 'right' },
-            { header: 'stall M', align: 'right' },
-            { header: 'buffet 1g', align: 'right' },
-            { header: `buffet ${v.buffetLoadFactor.toFixed(2)}g`, align: 'right' },
-            { header: 'VMO/MMO M', align: 'right' },
-            { header: 'climb ft/min', align: 'right' },
-          ],
-          rows,
-        ),
-        '',
-        ...SAFETY_NOTICE_LINES,
-        '',
-      ].join('\n'),
-    );
+    printReport(io, [
+      `Level-flight envelope — inlet "${input.propulsion.inletName}", ${v.rating}, ${bothUnits(mass_kg, 'mass')}, ${isaText(isaDev_K)}`,
+      '',
+      'Ceilings:',
+      ...v.ceilings.map((c) => `  ${c.name.padEnd(9)} ${c.altitude_m === null ? c.message : `${bothUnits(c.altitude_m, 'altitude')} at M ${machText(c.bestClimbMach)} (residual climb ${bothUnits(c.climbRate_m_s, 'climbRate')})`}`),
+      `  ${v.climbRateDefinition}`,
+      '',
+      formatTable(
+        [
+          { header: 'alt ft', align: 'right' },
+          { header: 'low M', align: 'right' },
+          { header: 'high M', align: 'right' },
+          { header: 'stall M', align: 'right' },
+          { header: 'buffet 1g', align: 'right' },
+          { header: `buffet ${v.buffetLoadFactor.toFixed(2)}g`, align: 'right' },
+          { header: 'VMO/MMO M', align: 'right' },
+          { header: 'climb ft/min', align: 'right' },
+        ],
+        rows,
+      ),
+    ]);
     return 0;
   },
 };

@@ -1,12 +1,12 @@
 import { writeFile } from 'node:fs/promises';
 import { resolve } from 'node:path';
 import { solveMission } from '../../engine/mission/solveMission';
-import { buildMissionInput } from '../../engine/project/buildMissionInput';
+import { loadVerbProject, projectArgument } from '../common/projectArgs';
 import { historyToCsv } from '../format/historyCsv';
 import { missionJson } from '../format/missionJson';
 import { missionSummaryText } from '../format/missionSummaryText';
-import { formatLoadFailure, readProjectDeck, readProjectFile } from '../projectFiles';
 import { optionalString, printJson, UsageError, type CliIo, type Verb } from '../verb';
+import { INLET_OPTION, JSON_OPTION } from './analysisArgs';
 
 /** Exit code when the mission was flown but did not end with status "ok". */
 export const EXIT_MISSION_NOT_OK = 3;
@@ -30,42 +30,15 @@ Exit codes: 0 flown, status ok; 1 the project (or its deck) cannot be read,
 with each problem's JSON path and reason; 2 bad command line; 3 flown, but the
 mission ended with a status other than ok (the result is still printed).
 `,
-  options: {
-    inlet: { type: 'string' },
-    json: { type: 'boolean' },
-    csv: { type: 'string' },
-  },
+  options: { ...INLET_OPTION, ...JSON_OPTION, csv: { type: 'string' } },
   allowPositionals: true,
   async run(values, positionals, io: CliIo): Promise<number> {
-    if (positionals.length === 0) throw new UsageError('missing the project file: blockwise fly <project.blockwise.json>');
-    if (positionals.length > 1) throw new UsageError(`one project file at a time (got ${positionals.length}: ${positionals.join(', ')})`);
-    const inletOption = optionalString(values, 'inlet');
-    if (inletOption !== undefined && inletOption.trim() === '') throw new UsageError('--inlet: give the name of an inlet design');
+    const file = projectArgument(positionals, 'fly');
     const csvOption = optionalString(values, 'csv');
     if (csvOption !== undefined && csvOption.trim() === '') throw new UsageError('--csv: give a file name');
-
-    const path = resolve(io.cwd, positionals[0]!);
-    const read = await readProjectFile(path);
-    if (!read.ok) {
-      io.err(formatLoadFailure(read.error));
-      return 1;
-    }
-    const { project, projectPath } = read.value;
-    if (inletOption !== undefined && !project.inlets.some((i) => i.name === inletOption)) {
-      const names = project.inlets.map((i) => JSON.stringify(i.name)).join(', ');
-      throw new UsageError(`--inlet: ${JSON.stringify(inletOption)} is not an inlet design of ${positionals[0]}; it has ${names}`);
-    }
-    const deck = await readProjectDeck(projectPath, project);
-    if (!deck.ok) {
-      io.err(formatLoadFailure(deck.error));
-      return 1;
-    }
-    const built = buildMissionInput(project, deck.value.deck === undefined ? {} : { deck: deck.value.deck }, inletOption === undefined ? {} : { inletName: inletOption });
-    if (!built.ok) {
-      io.err(formatLoadFailure({ file: projectPath, issues: built.error }));
-      return 1;
-    }
-    const input = built.value;
+    const loaded = await loadVerbProject(file, optionalString(values, 'inlet'), io);
+    if (typeof loaded === 'number') return loaded;
+    const { project, input } = loaded;
     const result = solveMission(input);
     const context = {
       projectName: project.name,

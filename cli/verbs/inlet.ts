@@ -1,33 +1,21 @@
-import { readFileSync } from 'node:fs';
-import { resolve } from 'node:path';
 import { DEFAULT_CAUTION_SETTINGS } from '../../engine/cautions/cautionSettings';
-import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../engine/core/notice';
-import { parseDeckCsv } from '../../engine/propulsion/deckCsv';
-import { parseDeckJson } from '../../engine/propulsion/deckJson';
 import { describeReferenceRecovery, type EngineDeck } from '../../engine/propulsion/engineDeck';
 import { validateInletDesign, type InletDesign } from '../../engine/propulsion/inletDesign';
 import { validateInstallation, type InstallationSettings } from '../../engine/propulsion/installationCorrections';
 import { installedLossBreakdown, type InstalledLossBreakdown } from '../../engine/propulsion/installedLossBreakdown';
 import { makeInstalledPropulsion } from '../../engine/propulsion/installedPropulsion';
-import { RATING_NAMES, type InstalledPoint, type RatingName } from '../../engine/propulsion/propulsionModel';
+import { RATING_NAMES, type InstalledPoint } from '../../engine/propulsion/propulsionModel';
 import { parseJsonText } from '../../engine/project/jsonText';
 import { fromZodIssues } from '../../engine/project/projectIssue';
 import { inletSchema } from '../../engine/project/projectSchema';
 import { inletDesignOf } from '../../engine/project/projectSpecs';
-import { parseQuantity, type Dimension } from '../../engine/units/quantity';
 import { FOOT_M } from '../../engine/units/unitTable';
-import { optionalString, printJson, requireString, UsageError, type CliIo, type Verb } from '../verb';
-
-/** Reads a file relative to the working directory; null after printing why it could not be read. */
-function readText(file: string, io: CliIo): string | null {
-  try {
-    return readFileSync(resolve(io.cwd, file), 'utf8');
-  } catch (e) {
-    const code = (e as NodeJS.ErrnoException).code;
-    io.err(`blockwise inlet: cannot read "${file}"${code ? ` (${code})` : ''}\n`);
-    return null;
-  }
-}
+import { significant } from '../common/numberText';
+import { powerOrRating } from '../common/powerOption';
+import { optionalQuantityOption, quantityOption } from '../common/quantityOptions';
+import { printJsonReport, reportText } from '../common/report';
+import { deckErrorsText, readDeckFile, readTextFile } from '../common/textFile';
+import { optionalString, UsageError, type CliIo, type Verb } from '../verb';
 
 /**
  * The inlet designs in a design file: one inlet object, an array of them, or
@@ -36,7 +24,7 @@ function readText(file: string, io: CliIo): string | null {
  * and the JSON path.
  */
 function readDesigns(file: string, io: CliIo): InletDesign[] | null {
-  const text = readText(file, io);
+  const text = readTextFile(file, 'inlet', io);
   if (text === null) return null;
   const parsed = parseJsonText(text);
   if (!parsed.ok) {
@@ -87,16 +75,8 @@ function readDesigns(file: string, io: CliIo): InletDesign[] | null {
   return designs;
 }
 
-function readQuantityOption(values: Readonly<Record<string, unknown>>, name: string, dimension: Dimension, required: boolean): number | undefined {
-  const text = required ? requireString(values, name) : optionalString(values, name);
-  if (text === undefined) return undefined;
-  const parsed = parseQuantity(text, dimension);
-  if (!parsed.ok) throw new UsageError(`--${name}: ${parsed.error.message}`);
-  return parsed.value;
-}
-
 function round(x: number, digits = 5): number {
-  return Number(x.toPrecision(digits));
+  return significant(x, digits);
 }
 
 function fixed(x: number | null, digits: number): string {
@@ -151,8 +131,8 @@ function textReport(deck: EngineDeck, results: readonly DesignResult[], engineCo
   for (const r of results) {
     for (const c of r.point.cautions) lines.push(`  ${c.severity} (${r.design.name}): ${c.message}`);
   }
-  lines.push('  thrust is net of spillage drag; external drag and weight are airframe items (docs/installation.md)', '', ...SAFETY_NOTICE_LINES, '');
-  return lines.join('\n');
+  lines.push('  thrust is net of spillage drag; external drag and weight are airframe items (docs/installation.md)');
+  return reportText(lines);
 }
 
 export const inletVerb: Verb = {
@@ -201,23 +181,22 @@ against the first is split into its parts. Methods: docs/installation.md.
     const deckFile = positionals[0]!;
     const designFiles = (Array.isArray(values.design) ? values.design : []).filter((v): v is string => typeof v === 'string');
     if (designFiles.length === 0) throw new UsageError('missing --design (an inlet design JSON file)');
-    const altitude_m = readQuantityOption(values, 'altitude', 'length', true)!;
-    const mach = readQuantityOption(values, 'mach', 'dimensionless', true)!;
+    const altitude_m = quantityOption(values, 'altitude', 'length');
+    const mach = quantityOption(values, 'mach', 'dimensionless');
     if (!(mach >= 0) || mach > 5) throw new UsageError(`--mach: expected a Mach number from 0 to 5 (got ${String(values.mach)})`);
-    const isaDev_K = readQuantityOption(values, 'isa-dev', 'temperatureDelta', false) ?? 0;
+    const isaDev_K = optionalQuantityOption(values, 'isa-dev', 'temperatureDelta') ?? 0;
     const enginesText = optionalString(values, 'engines') ?? '2';
     const engineCount = Number(enginesText);
     if (!Number.isInteger(engineCount) || engineCount < 1 || engineCount > 8) {
       throw new UsageError(`--engines: expected a whole number from 1 to 8 (got "${enginesText}")`);
     }
-    const bleed = readQuantityOption(values, 'bleed', 'dimensionless', false) ?? 0;
-    const extraction_W = readQuantityOption(values, 'extraction', 'power', false) ?? 0;
+    const bleed = optionalQuantityOption(values, 'bleed', 'dimensionless') ?? 0;
+    const extraction_W = optionalQuantityOption(values, 'extraction', 'power') ?? 0;
     const installation: InstallationSettings = { bleed: { kind: 'coreFraction', fraction: bleed }, powerExtraction_W: extraction_W };
-    const deckText = readText(deckFile, io);
-    if (deckText === null) return 1;
-    const deckResult = /\.json$/i.test(deckFile) ? parseDeckJson(deckText, deckFile) : parseDeckCsv(deckText, deckFile);
+    const deckResult = readDeckFile(deckFile, 'inlet', io);
+    if (deckResult === null) return 1;
     if (!deckResult.ok) {
-      io.err(`${deckResult.error.map((e) => e.message).join('\n')}\n${deckFile}: deck not loaded\n`);
+      io.err(deckErrorsText(deckFile, deckResult.error));
       return 1;
     }
     const deck = deckResult.value;
@@ -232,14 +211,9 @@ against the first is split into its parts. Methods: docs/installation.md.
       if (read === null) return 1;
       designs.push(...read);
     }
-    const powerText = (optionalString(values, 'power') ?? 'maxCruise').trim();
-    const rating = RATING_NAMES.find((r) => r === powerText) as RatingName | undefined;
-    let power: number | null = null;
-    if (rating === undefined) {
-      const parsed = parseQuantity(powerText, 'dimensionless');
-      if (!parsed.ok) throw new UsageError(`--power: "${powerText}" is neither a number nor a rating (${RATING_NAMES.join(', ')})`);
-      power = parsed.value;
-    }
+    const choice = powerOrRating(optionalString(values, 'power') ?? 'maxCruise');
+    const rating = choice.kind === 'rating' ? choice.rating : undefined;
+    const power = choice.kind === 'power' ? choice.power : null;
     const condition = { altitude_m, mach, isaDev_K };
     const results: DesignResult[] = designs.map((design) => {
       const model = makeInstalledPropulsion({ deck, engineCount, inlet: design, installation, cautionSettings: DEFAULT_CAUTION_SETTINGS });
@@ -248,7 +222,7 @@ against the first is split into its parts. Methods: docs/installation.md.
     });
     const what = rating !== undefined ? `${rating} (power ${round(results[0]!.point.power)})` : `power ${round(power!)}`;
     if (values.json === true) {
-      printJson(io, {
+      printJsonReport(io, {
         ok: true,
         deck: deck.title,
         parametric: deck.parametric,
@@ -258,7 +232,6 @@ against the first is split into its parts. Methods: docs/installation.md.
         rating: rating ?? null,
         installation,
         designs: results.map((r) => ({ design: r.design, point: r.point, lossPerEngine: r.loss })),
-        notice: SAFETY_NOTICE,
       });
       return 0;
     }

@@ -1,8 +1,8 @@
 import { payloadRangeDiagram } from '../../engine/analysis/payloadRange';
-import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../engine/core/notice';
+import { analysisFailed, printJsonReport, printReport } from '../common/report';
 import { formatTable } from '../format/textTable';
-import { optionalString, printJson, UsageError, type CliIo, type Verb } from '../verb';
-import { bothUnits, EXIT_ANALYSIS_FAILED, loadAnalysisProject, projectArgument } from './analysisArgs';
+import { optionalString, UsageError, type CliIo, type Verb } from '../verb';
+import { bothUnits, INLET_OPTION, JSON_OPTION, openAnalysisProject } from './analysisArgs';
 
 export const payloadRangeVerb: Verb = {
   name: 'payload-range',
@@ -21,30 +21,22 @@ and ferry (no payload, full tanks). Every point is flown by the mission
 solver in maximum-range mode with the project's legs and reserves. Exit
 codes: 0 done; 1 project unreadable; 2 bad command line; 3 a mission failed.
 `,
-  options: {
-    inlet: { type: 'string' },
-    between: { type: 'string' },
-    json: { type: 'boolean' },
-  },
+  options: { ...INLET_OPTION, between: { type: 'string' }, ...JSON_OPTION },
   allowPositionals: true,
   async run(values, positionals, io: CliIo): Promise<number> {
-    const file = projectArgument(positionals, 'payload-range');
     const betweenText = optionalString(values, 'between');
     const between = betweenText === undefined ? 3 : Number(betweenText);
     if (!Number.isInteger(between) || between < 0 || between > 50) {
       throw new UsageError(`--between: expected a whole number 0..50, got ${JSON.stringify(betweenText)}`);
     }
-    const loaded = await loadAnalysisProject(file, optionalString(values, 'inlet'), io);
+    const loaded = await openAnalysisProject(values, positionals, 'payload-range', io);
     if (typeof loaded === 'number') return loaded;
     const { input } = loaded;
     const r = payloadRangeDiagram(input, { pointsBetween: between });
-    if (!r.ok) {
-      io.err(`blockwise payload-range: ${r.error.message}\n`);
-      return EXIT_ANALYSIS_FAILED;
-    }
+    if (!r.ok) return analysisFailed(io, 'payload-range', r.error.message);
     const v = r.value;
     if (values.json === true) {
-      printJson(io, { inlet: input.propulsion.inletName, ...v, notice: SAFETY_NOTICE });
+      printJsonReport(io, { inlet: input.propulsion.inletName, ...v });
       return 0;
     }
     const label: Record<string, string> = { maxPayload: 'max payload', mtowFullFuel: 'MTOW, full tanks', ferry: 'ferry', between: '' };
@@ -57,30 +49,25 @@ codes: 0 done; 1 project unreadable; 2 bad command line; 3 a mission failed.
       p.blockFuel_kg.toFixed(0),
       p.reserveFuel_kg.toFixed(0),
     ]);
-    io.out(
-      [
-        `Payload-range — inlet "${input.propulsion.inletName}"; MTOW ${bothUnits(input.airframe.mtow_kg, 'mass')}, max fuel ${bothUnits(input.airframe.maxFuel_kg, 'mass')}`,
-        `  ${v.note}`,
-        '',
-        formatTable(
-          [
-            { header: 'point', align: 'left' },
-            { header: 'range nmi', align: 'right' },
-            { header: 'payload kg', align: 'right' },
-            { header: 'TOW kg', align: 'right' },
-            { header: 'fuel on board kg', align: 'right' },
-            { header: 'block fuel kg', align: 'right' },
-            { header: 'reserve kg', align: 'right' },
-          ],
-          rows,
-        ),
-        '',
-        `  ${v.missions} missions flown.`,
-        '',
-        ...SAFETY_NOTICE_LINES,
-        '',
-      ].join('\n'),
-    );
+    printReport(io, [
+      `Payload-range — inlet "${input.propulsion.inletName}"; MTOW ${bothUnits(input.airframe.mtow_kg, 'mass')}, max fuel ${bothUnits(input.airframe.maxFuel_kg, 'mass')}`,
+      `  ${v.note}`,
+      '',
+      formatTable(
+        [
+          { header: 'point', align: 'left' },
+          { header: 'range nmi', align: 'right' },
+          { header: 'payload kg', align: 'right' },
+          { header: 'TOW kg', align: 'right' },
+          { header: 'fuel on board kg', align: 'right' },
+          { header: 'block fuel kg', align: 'right' },
+          { header: 'reserve kg', align: 'right' },
+        ],
+        rows,
+      ),
+      '',
+      `  ${v.missions} missions flown.`,
+    ]);
     return 0;
   },
 };

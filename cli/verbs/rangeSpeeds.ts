@@ -1,17 +1,10 @@
 import { optimumAltitude } from '../../engine/analysis/optimumAltitude';
 import { specificRange } from '../../engine/analysis/specificRange';
-import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../engine/core/notice';
+import { analysisFailed, cautionBlock, isaText, printJsonReport, printReport } from '../common/report';
+import { positiveQuantityOption, quantityOption } from '../common/quantityOptions';
 import { formatTable } from '../format/textTable';
-import { optionalString, printJson, type CliIo, type Verb } from '../verb';
-import {
-  bothUnits,
-  EXIT_ANALYSIS_FAILED,
-  loadAnalysisProject,
-  machText,
-  positiveQuantityOption,
-  projectArgument,
-  quantityOption,
-} from './analysisArgs';
+import type { CliIo, Verb } from '../verb';
+import { bothUnits, INLET_OPTION, ISA_DEV_OPTION, isaDevOption, JSON_OPTION, machText, openAnalysisProject } from './analysisArgs';
 
 const NMI_M = 1852;
 
@@ -40,33 +33,28 @@ unreadable; 2 bad command line; 3 analysis failed.
   options: {
     altitude: { type: 'string' },
     weight: { type: 'string' },
-    inlet: { type: 'string' },
-    'isa-dev': { type: 'string' },
-    json: { type: 'boolean' },
+    ...INLET_OPTION,
+    ...ISA_DEV_OPTION,
+    ...JSON_OPTION,
   },
   allowPositionals: true,
   async run(values, positionals, io: CliIo): Promise<number> {
-    const file = projectArgument(positionals, 'range-speeds');
     const altitude_m = quantityOption(values, 'altitude', 'length');
     const mass_kg = positiveQuantityOption(values, 'weight', 'mass');
-    const loaded = await loadAnalysisProject(file, optionalString(values, 'inlet'), io);
+    const loaded = await openAnalysisProject(values, positionals, 'range-speeds', io);
     if (typeof loaded === 'number') return loaded;
     const { input } = loaded;
-    const isaDev_K = quantityOption(values, 'isa-dev', 'temperatureDelta', input.isaDev_K);
+    const isaDev_K = isaDevOption(values, input.isaDev_K);
     const models = { aero: input.aero, propulsion: input.propulsion };
     const sr = specificRange(models, { altitude_m, mass_kg, isaDev_K, cautionSettings: input.cautionSettings, mmo: input.airframe.mmo });
-    if (!sr.ok) {
-      io.err(`blockwise range-speeds: ${sr.error.message}\n`);
-      return EXIT_ANALYSIS_FAILED;
-    }
+    if (!sr.ok) return analysisFailed(io, 'range-speeds', sr.error.message);
     const opt = optimumAltitude(models, { mass_kg, isaDev_K, mmo: input.airframe.mmo, cautionSettings: input.cautionSettings });
     if (values.json === true) {
-      printJson(io, {
+      printJsonReport(io, {
         inlet: input.propulsion.inletName,
         specificRange: sr.value,
         optimumAltitude: opt.ok ? opt.value : null,
         optimumAltitudeError: opt.ok ? null : opt.error,
-        notice: SAFETY_NOTICE,
       });
       return 0;
     }
@@ -76,34 +64,27 @@ unreadable; 2 bad command line; 3 analysis failed.
       .map((m, i) => [m.toFixed(3), ((v.curves.tas_m_s[i]! * 3600) / NMI_M).toFixed(0), v.curves.fuelFlow_kg_s[i] == null ? '-' : (v.curves.fuelFlow_kg_s[i]! * 3600).toFixed(0), perKg(v.curves.specificRange_m_kg[i]!)])
       .filter((_, i) => i % 4 === 0 || i === v.curves.mach.length - 1);
     const o = opt.ok ? opt.value : null;
-    io.out(
-      [
-        `Specific range — inlet "${input.propulsion.inletName}", ${bothUnits(altitude_m, 'altitude')}, ${bothUnits(mass_kg, 'mass')}, ISA${isaDev_K >= 0 ? '+' : ''}${isaDev_K.toFixed(1)} K`,
-        '',
-        `  maximum-range Mach      ${machText(v.maxRangeMach)}   (${perKg(v.maxSpecificRange_m_kg)} nmi per 1000 kg)`,
-        `  long-range Mach (99 %)  ${machText(v.longRangeMach)}${v.longRangeMach === null ? '   (beyond the level-flight band at maxCruise)' : ''}`,
-        `  level-flight band       M ${machText(v.feasibleMachRange[0])} to ${machText(v.feasibleMachRange[1])}`,
-        o === null
-          ? `  optimum altitude        - (${opt.ok ? '' : opt.error.message})`
-          : `  optimum altitude        ${bothUnits(o.altitude_m, 'altitude')} at M ${machText(o.maxRangeMach)} (${perKg(o.specificRange_m_kg)} nmi per 1000 kg; ${o.buffetLoadFactor.toFixed(2)} g to buffet)`,
-        '',
-        formatTable(
-          [
-            { header: 'Mach', align: 'right' },
-            { header: 'TAS kt', align: 'right' },
-            { header: 'fuel kg/h', align: 'right' },
-            { header: 'nmi/1000 kg', align: 'right' },
-          ],
-          rows,
-        ),
-        '',
-        ...([...v.cautions, ...(o?.cautions ?? [])].length > 0
-          ? ['Cautions:', ...[...v.cautions, ...(o?.cautions ?? [])].map((c) => `  [${c.severity}] ${c.id}: ${c.message}`), '']
-          : []),
-        ...SAFETY_NOTICE_LINES,
-        '',
-      ].join('\n'),
-    );
+    printReport(io, [
+      `Specific range — inlet "${input.propulsion.inletName}", ${bothUnits(altitude_m, 'altitude')}, ${bothUnits(mass_kg, 'mass')}, ${isaText(isaDev_K)}`,
+      '',
+      `  maximum-range Mach      ${machText(v.maxRangeMach)}   (${perKg(v.maxSpecificRange_m_kg)} nmi per 1000 kg)`,
+      `  long-range Mach (99 %)  ${machText(v.longRangeMach)}${v.longRangeMach === null ? '   (beyond the level-flight band at maxCruise)' : ''}`,
+      `  level-flight band       M ${machText(v.feasibleMachRange[0])} to ${machText(v.feasibleMachRange[1])}`,
+      o === null
+        ? `  optimum altitude        - (${opt.ok ? '' : opt.error.message})`
+        : `  optimum altitude        ${bothUnits(o.altitude_m, 'altitude')} at M ${machText(o.maxRangeMach)} (${perKg(o.specificRange_m_kg)} nmi per 1000 kg; ${o.buffetLoadFactor.toFixed(2)} g to buffet)`,
+      '',
+      formatTable(
+        [
+          { header: 'Mach', align: 'right' },
+          { header: 'TAS kt', align: 'right' },
+          { header: 'fuel kg/h', align: 'right' },
+          { header: 'nmi/1000 kg', align: 'right' },
+        ],
+        rows,
+      ),
+      ...cautionBlock([...v.cautions, ...(o?.cautions ?? [])]),
+    ]);
     return 0;
   },
 };

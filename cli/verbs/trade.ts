@@ -1,9 +1,9 @@
 import { tradeFactors } from '../../engine/analysis/tradeFactors';
-import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../engine/core/notice';
 import { installationOf } from '../../engine/project/projectSpecs';
+import { analysisFailed, printJsonReport, printReport } from '../common/report';
 import { formatTable } from '../format/textTable';
-import { optionalString, printJson, type CliIo, type Verb } from '../verb';
-import { EXIT_ANALYSIS_FAILED, loadAnalysisProject, projectArgument } from './analysisArgs';
+import type { CliIo, Verb } from '../verb';
+import { INLET_OPTION, JSON_OPTION, openAnalysisProject } from './analysisArgs';
 
 export const tradeVerb: Verb = {
   name: 'trade',
@@ -23,49 +23,37 @@ central differences with steps of one and half a unit; both are printed and
 flagged when they disagree by more than 5 %. Exit codes: 0 done; 1 project
 unreadable; 2 bad command line; 3 the design mission failed.
 `,
-  options: {
-    inlet: { type: 'string' },
-    json: { type: 'boolean' },
-  },
+  options: { ...INLET_OPTION, ...JSON_OPTION },
   allowPositionals: true,
   async run(values, positionals, io: CliIo): Promise<number> {
-    const file = projectArgument(positionals, 'trade');
-    const loaded = await loadAnalysisProject(file, optionalString(values, 'inlet'), io);
+    const loaded = await openAnalysisProject(values, positionals, 'trade', io);
     if (typeof loaded === 'number') return loaded;
     const { input, project } = loaded;
     const cRam = installationOf(project).cRam;
     const r = tradeFactors(input, cRam === undefined ? {} : { cRam });
-    if (!r.ok) {
-      io.err(`blockwise trade: ${r.error.message}\n`);
-      return EXIT_ANALYSIS_FAILED;
-    }
+    if (!r.ok) return analysisFailed(io, 'trade', r.error.message);
     const v = r.value;
     if (values.json === true) {
-      printJson(io, { inlet: input.propulsion.inletName, ...v, notice: SAFETY_NOTICE });
+      printJsonReport(io, { inlet: input.propulsion.inletName, ...v });
       return 0;
     }
     const kg = (x: number | null) => (x === null ? '-' : `${x >= 0 ? '+' : ''}${x.toFixed(2)}`);
-    io.out(
-      [
-        `Trade factors — inlet "${input.propulsion.inletName}", design mission ${(v.designMission.range_m / 1852).toFixed(0)} nmi with ${v.designMission.payload_kg.toFixed(0)} kg payload; block fuel ${v.baselineBlockFuel_kg.toFixed(1)} kg`,
-        '',
-        formatTable(
-          [
-            { header: 'change', align: 'left' },
-            { header: 'block fuel kg', align: 'right' },
-            { header: 'half step kg', align: 'right' },
-            { header: 'steps agree', align: 'left' },
-          ],
-          v.factors.map((f) => [f.unit, kg(f.blockFuelPerUnit_kg), kg(f.blockFuelPerUnitHalfStep_kg), f.converged ? 'yes' : 'NO']),
-        ),
-        ...v.factors.filter((f) => f.note !== null).map((f) => `  ${f.name}: ${f.note}`),
-        `  Steps agree when |d(1) - d(1/2)| <= ${v.tolerance.rel * 100} % of d(1/2) + ${v.tolerance.abs_kg} kg. ${v.missions} missions flown.`,
-        `  ${v.recoveryMethod}`,
-        '',
-        ...SAFETY_NOTICE_LINES,
-        '',
-      ].join('\n'),
-    );
+    printReport(io, [
+      `Trade factors — inlet "${input.propulsion.inletName}", design mission ${(v.designMission.range_m / 1852).toFixed(0)} nmi with ${v.designMission.payload_kg.toFixed(0)} kg payload; block fuel ${v.baselineBlockFuel_kg.toFixed(1)} kg`,
+      '',
+      formatTable(
+        [
+          { header: 'change', align: 'left' },
+          { header: 'block fuel kg', align: 'right' },
+          { header: 'half step kg', align: 'right' },
+          { header: 'steps agree', align: 'left' },
+        ],
+        v.factors.map((f) => [f.unit, kg(f.blockFuelPerUnit_kg), kg(f.blockFuelPerUnitHalfStep_kg), f.converged ? 'yes' : 'NO']),
+      ),
+      ...v.factors.filter((f) => f.note !== null).map((f) => `  ${f.name}: ${f.note}`),
+      `  Steps agree when |d(1) - d(1/2)| <= ${v.tolerance.rel * 100} % of d(1/2) + ${v.tolerance.abs_kg} kg. ${v.missions} missions flown.`,
+      `  ${v.recoveryMethod}`,
+    ]);
     return 0;
   },
 };

@@ -1,18 +1,10 @@
 import { execFile } from 'node:child_process';
-import { fileURLToPath } from 'node:url';
 import { promisify } from 'node:util';
 import { describe, expect, it } from 'vitest';
-import { runCli } from '../../cli/main';
 import { expectClose } from '../support/assertInDelta';
+import { repoRoot, run } from './support/cliRun';
 
-const repoRoot = fileURLToPath(new URL('../..', import.meta.url));
 
-async function run(...argv: string[]): Promise<{ code: number; out: string; err: string }> {
-  let out = '';
-  let err = '';
-  const code = await runCli(argv, { out: (t) => (out += t), err: (t) => (err += t), cwd: repoRoot });
-  return { code, out, err };
-}
 
 async function json(...argv: string[]): Promise<Record<string, number>> {
   const r = await run(...argv, '--json');

@@ -1,35 +1,18 @@
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { runCli } from '../../cli/main';
 import { loadProjectFromDisk } from '../../cli/projectFiles';
 import { SAFETY_NOTICE_LINES } from '../../engine/core/notice';
 import { solveMission } from '../../engine/mission/solveMission';
 import { expectClose } from '../support/assertInDelta';
+import { DEMO_PROJECT as DEMO, repoRoot, run, writeShortDemo, type Json } from './support/cliRun';
 
-const repoRoot = fileURLToPath(new URL('../..', import.meta.url));
-const DEMO = 'fixtures/demo/demo.blockwise.json';
 const FT = 0.3048; // NIST SP 811
 const LB = 0.45359237; // NIST SP 811
 // Slow missions on a shared machine: generous limits, not speed checks (speed lives in npm run bench).
 const LONG = 240_000;
 
-interface Run {
-  readonly code: number;
-  readonly out: string;
-  readonly err: string;
-}
-
-async function run(...argv: string[]): Promise<Run> {
-  let out = '';
-  let err = '';
-  const code = await runCli(argv, { out: (t) => (out += t), err: (t) => (err += t), cwd: repoRoot });
-  return { code, out, err };
-}
-
-type Json = Record<string, unknown>;
 
 // A lighter copy of the demo mission (800 nmi at constant cruise altitude) so the 16-mission comparison
 // and the trade factors stay light, and block fuel is smooth in the perturbations (no step-climb decisions).
@@ -37,12 +20,7 @@ let dir = '';
 let shortProject = '';
 beforeAll(() => {
   dir = mkdtempSync(join(tmpdir(), 'blockwise-analysis-'));
-  const demo = JSON.parse(readFileSync(join(repoRoot, DEMO), 'utf8')) as Json & { engine: { deck: Json }; mission: { solve: Json; legs: Json[] } };
-  if (demo.engine.deck.kind === 'file') demo.engine.deck.path = join(repoRoot, 'fixtures/demo', String(demo.engine.deck.path));
-  demo.mission.solve = { ...demo.mission.solve, range: '800 nmi' };
-  for (const leg of demo.mission.legs) if (leg.kind === 'cruise') leg.profile = { kind: 'constantAltitude' };
-  shortProject = join(dir, 'short.blockwise.json');
-  writeFileSync(shortProject, JSON.stringify(demo, null, 2));
+  shortProject = writeShortDemo(dir);
 });
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 

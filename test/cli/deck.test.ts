@@ -1,29 +1,21 @@
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
-import { runCli } from '../../cli/main';
 import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../engine/core/notice';
 import { expectOk } from '../../engine/core/result';
 import { parseDeckCsv } from '../../engine/propulsion/deckCsv';
 import { deckToJson } from '../../engine/propulsion/deckJson';
 import { lookupDeck } from '../../engine/propulsion/deckLookup';
 import { expectClose } from '../support/assertInDelta';
+import { repoRoot, run } from './support/cliRun';
 import { RAGGED_CSV } from '../engine/propulsion/deckTestDecks';
 
-const repoRoot = fileURLToPath(new URL('../..', import.meta.url));
 const DEMO = 'fixtures/demo/demo-engine.deck.csv';
 const expected = JSON.parse(readFileSync(`${repoRoot}fixtures/bad-decks/expected.json`, 'utf8')) as Record<string, string>;
 // NIST SP 811 (2008) B.8: 1 ft = 0.3048 m exactly.
 const FT = 0.3048;
 
-async function run(...argv: string[]): Promise<{ code: number; out: string; err: string }> {
-  let out = '';
-  let err = '';
-  const code = await runCli(argv, { out: (t) => (out += t), err: (t) => (err += t), cwd: repoRoot });
-  return { code, out, err };
-}
 
 describe('blockwise deck check', () => {
   it('deck check on the demo deck exits 0 with a summary and the safety notice', async () => {

@@ -2,33 +2,17 @@ import { execFile } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { promisify } from 'node:util';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { runCli } from '../../cli/main';
 import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../engine/core/notice';
 import { expectClose } from '../support/assertInDelta';
+import { DEMO_PROJECT, repoRoot, run, type Json } from './support/cliRun';
 
-const repoRoot = fileURLToPath(new URL('../..', import.meta.url));
-const DEMO = 'fixtures/demo/demo.blockwise.json';
+const DEMO = DEMO_PROJECT;
 // Conversion factors: NIST SP 811 (nmi = 1852 m, lb = 0.45359237 kg).
 const NMI = 1852;
 const LB = 0.45359237;
 
-interface Run {
-  readonly code: number;
-  readonly out: string;
-  readonly err: string;
-}
-
-async function run(...argv: string[]): Promise<Run> {
-  let out = '';
-  let err = '';
-  const code = await runCli(argv, { out: (t) => (out += t), err: (t) => (err += t), cwd: repoRoot });
-  return { code, out, err };
-}
-
-type Json = Record<string, unknown>;
 
 const REQUIRED_NUMBERS = [
   'blockFuel_kg',

@@ -1,17 +1,15 @@
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { afterAll, describe, expect, it } from 'vitest';
-import { runCli } from '../../cli/main';
 import { DEFAULT_CAUTION_SETTINGS } from '../../engine/cautions/cautionSettings';
 import { SAFETY_NOTICE_LINES } from '../../engine/core/notice';
 import { expectOk } from '../../engine/core/result';
 import { parseDeckCsv } from '../../engine/propulsion/deckCsv';
 import { makeInstalledPropulsion } from '../../engine/propulsion/installedPropulsion';
 import { expectClose } from '../support/assertInDelta';
+import { repoRoot, run } from './support/cliRun';
 
-const repoRoot = fileURLToPath(new URL('../..', import.meta.url));
 const DEMO_DECK = 'fixtures/demo/demo-engine.deck.csv';
 const DEMO_PROJECT = 'fixtures/demo/demo.blockwise.json';
 // NIST SP 811 (2008) B.8: 1 ft = 0.3048 m exactly.
@@ -19,12 +17,6 @@ const FT = 0.3048;
 const dir = mkdtempSync(join(tmpdir(), 'blockwise-inlet-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
-async function run(...argv: string[]): Promise<{ code: number; out: string; err: string }> {
-  let out = '';
-  let err = '';
-  const code = await runCli(argv, { out: (t) => (out += t), err: (t) => (err += t), cwd: repoRoot });
-  return { code, out, err };
-}
 
 const GEOMETRY_INLET = {
   name: 'geometry one',
