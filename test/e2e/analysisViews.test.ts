@@ -6,8 +6,8 @@ import { launchChromium, openApp, screenshot } from './support/chromium';
 // The crossover view plots thrust available against drag and marks the low
 // and high crossover Mach (DESIGN.md §2.5: the low crossover lies below the
 // high one, with the thrust minimum between). The demo study has two inlet
-// designs, which the compare view offers as A and B. (Both inlets drawn
-// together and the full comparison: bothInlets.scenario.ts.)
+// designs, which the compare view offers as A and B and compares on block
+// fuel. (Both inlets drawn together on the crossover: bothInlets.scenario.ts.)
 
 let browser: Browser;
 beforeAll(async () => {
@@ -54,4 +54,23 @@ describe('analysis views', () => {
     await screenshot(page, 'compare-demo');
     expect(problems).toEqual([]);
   });
+
+  it('the compare view compares the two inlet designs on block fuel', async () => {
+    const { page, problems } = await openApp(browser, inject('baseUrl'));
+    await openDemo(page);
+    await showView(page, 'compare');
+    await page.getByTestId('compare-run').click();
+    const first = page.getByTestId('compare-design-name-0');
+    const failure = page.getByTestId('compare-failure');
+    await first.or(failure).first().waitFor({ state: 'visible', timeout: 120_000 });
+    expect(await failure.isVisible(), (await failure.textContent().catch(() => '')) ?? '').toBe(false);
+    const names = [(await first.textContent())?.trim(), (await page.getByTestId('compare-design-name-1').textContent())?.trim()];
+    expect(names[0]).toBeTruthy();
+    expect(names[1]).toBeTruthy();
+    expect(names[0]).not.toBe(names[1]);
+    expect(await page.getByTestId('compare-diff-block-fuel').textContent()).toMatch(/\d/);
+    expect(await page.getByTestId('safety-notice').isVisible()).toBe(true);
+    await screenshot(page, 'compare-demo');
+    expect(problems).toEqual([]);
+  }, 180_000);
 });
