@@ -4,7 +4,12 @@
  * distance:
  * - taxi: set fuel flow, or the flightIdle fuel flow at Mach 0 (static);
  * - take-off: set fuel, or the time at the takeoff rating at Mach 0 (static);
- * - approach: set fuel, or the time at the flightIdle fuel flow at Mach 0.2.
+ * - approach: set fuel, or the time at the flightIdle fuel flow at Mach 0.2;
+ *   it ends the trip at the destination elevation (MissionInput
+ *   destinationElevation_m, default 0 m): the altitude falls linearly from
+ *   where the descent left it to the elevation over the allowance's time,
+ *   and the flightIdle fuel flow is taken at the middle altitude;
+ * - taxi in: at the destination elevation.
  * Common-practice allowances; the leg rows show them as such.
  */
 import type { Leg, MissionInput } from './missionTypes';
@@ -61,15 +66,25 @@ function allowanceSample(altitude_m: number, fuelFlow_kg_s: number, point: Insta
   };
 }
 
-/** Flies an allowance leg: mass and time advance, distance does not. */
+/** Elevation of the destination aerodrome (m): MissionInput.destinationElevation_m, or 0 m (sea level) when absent. */
+export function destinationElevation(input: MissionInput): number {
+  return input.destinationElevation_m ?? 0;
+}
+
+/** Flies an allowance leg: mass and time advance, distance does not; approach and taxi in end at the destination elevation. */
 export function flyAllowance(ctx: MissionContext, target: LegTarget, start: StateVector, leg: AllowanceLeg): LegOutcome {
-  const { fuel_kg, time_s, point } = allowanceFuel(ctx.input, leg, start[S_ALT], target.env.isaDev_K);
+  const arriving = leg.kind === 'approach' || leg.kind === 'taxiIn';
+  const startAltitude_m = leg.kind === 'taxiIn' ? destinationElevation(ctx.input) : start[S_ALT];
+  const endAltitude_m = arriving ? destinationElevation(ctx.input) : start[S_ALT];
+  const { fuel_kg, time_s, point } = allowanceFuel(ctx.input, leg, 0.5 * (startAltitude_m + endAltitude_m), target.env.isaDev_K);
   const flow = time_s > 0 ? fuel_kg / time_s : 0;
   const state = Float64Array.from(start);
-  const sample = allowanceSample(start[S_ALT], flow, point);
-  appendSample(ctx.log, target, state, sample);
+  state[S_ALT] = startAltitude_m;
+  appendSample(ctx.log, target, state, allowanceSample(startAltitude_m, flow, point));
   state[S_TIME] += time_s;
   state[S_MASS] -= fuel_kg;
+  state[S_ALT] = endAltitude_m;
+  const sample = allowanceSample(endAltitude_m, flow, point);
   appendSample(ctx.log, target, state, sample);
   if (!ctx.options.allowNegativeFuel && state[S_MASS] < ctx.zeroFuelMass_kg) {
     return legFailed(state, 'fuel_exhausted', `Fuel exhausted during ${target.legName}.`, sample);

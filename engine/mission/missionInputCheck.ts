@@ -52,6 +52,7 @@ export function missionInputProblem(input: MissionInput): string | null {
     badMach('airframe.mmo', a.mmo),
     badRange('isaDev_K', input.isaDev_K, -MAX_ABS_ISA_DEV_K, MAX_ABS_ISA_DEV_K, 'K'),
     badNumber('wind_m_s', input.wind_m_s, 'finite'),
+    input.destinationElevation_m === undefined ? null : badAltitude('destinationElevation_m', input.destinationElevation_m),
   );
   if (airframe) return airframe;
   if (input.legs.length === 0) return 'legs must hold at least one leg.';

@@ -142,6 +142,12 @@ export interface MissionInput {
   /** Mission-wide ISA deviation (K) and along-track wind (m/s, + tailwind). */
   readonly isaDev_K: number;
   readonly wind_m_s: number;
+  /**
+   * Elevation of the destination aerodrome (m, pressure altitude); absent = 0 m (sea level). The approach
+   * allowance ends the trip at it, taxi in is flown at it, the reserves' holds "1,500 ft above the destination"
+   * and the alternate start from it.
+   */
+  readonly destinationElevation_m?: number;
 }
 
 export interface LegRow {

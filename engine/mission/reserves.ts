@@ -27,6 +27,7 @@
  */
 import type { AlternateSpec, LegRow, MissionInput, MissionStatus, ReserveBreakdown, SpeedSchedule } from './missionTypes';
 import type { RatingName } from '../propulsion/propulsionModel';
+import { destinationElevation } from './allowanceLegs';
 import { flyClimb } from './climbLeg';
 import { specificRangeAt } from './bestSpeeds';
 import { cruiseMachOfMass, flyCruise } from './cruiseLeg';
@@ -173,8 +174,10 @@ export function flyReserves(ctx: MissionContext, trip: TripSummary): ReserveFlig
   const rows: LegRow[] = [];
   const missionEnv = { isaDev_K: input.isaDev_K, wind_m_s: input.wind_m_s };
   const standardEnv = { isaDev_K: 0, wind_m_s: 0 };
-  const destination = trip.landing[S_ALT];
+  // The reserves start on the ground at the destination (MissionInput.destinationElevation_m, default 0 m).
+  const destination = destinationElevation(input);
   let state = Float64Array.from(trip.landing);
+  state[S_ALT] = destination;
   state[S_AIR] = 0;
   state[S_GROUND] = 0;
   let contingency = 0;

@@ -200,7 +200,7 @@ def allowance(f, seconds, ff):
     f.m -= ff * seconds
 
 
-def demo_mission(tow, cruise_distance, dev, wind):
+def demo_mission(tow, cruise_distance, dev, wind, elevation=0.0):
     low_cas, limit, cas, mach = 250 * KT, 10000 * FT, 290 * KT, 0.78
     taxi_ff = TSFC * thrust(0.0, dev, "flightIdle")
     f = Flight(tow + 600 * taxi_ff, dev, wind)
@@ -215,9 +215,11 @@ def demo_mission(tow, cruise_distance, dev, wind):
     f.v = mach * isa(f.h, dev)[4]
     fly_schedule(f, 1500 * FT, low_cas, limit, cas, mach, lambda hp, m: thrust(hp, dev, "flightIdle"))
     f.row("descent")
-    allowance(f, 300, TSFC * thrust(f.h, dev, "flightIdle"))
+    # Approach: flightIdle fuel flow at the middle altitude while the altitude falls to the destination elevation.
+    allowance(f, 300, TSFC * thrust(0.5 * (f.h + elevation), dev, "flightIdle"))
+    f.h = elevation
     f.row("approach")
-    allowance(f, 300, TSFC * thrust(f.h, dev, "flightIdle"))
+    allowance(f, 300, TSFC * thrust(elevation, dev, "flightIdle"))
     f.row("taxi in")
     ramp = tow + 600 * taxi_ff
     return {
@@ -225,6 +227,7 @@ def demo_mission(tow, cruise_distance, dev, wind):
         "cruiseDistance_m": cruise_distance,
         "isaDev_K": dev,
         "wind_m_s": wind,
+        "destinationElevation_m": elevation,
         "rampMass_kg": ramp,
         "blockFuel_kg": ramp - f.m,
         "blockTime_s": f.t,
@@ -263,6 +266,7 @@ if __name__ == "__main__":
         "source": "test/reference/missionReference.py (scipy solve_ivp DOP853, rtol 1e-11)",
         "demoIsa": demo_mission(70000.0, 2000e3, 0.0, 0.0),
         "demoHotHeadwind": demo_mission(72000.0, 1500e3, 10.0, -20.0),
+        "demoElevatedDestination": demo_mission(70000.0, 2000e3, 0.0, 0.0, 300.0),
         "climbConstantMachTroposphere": {
             "mach": 0.6, "from_m": 1000.0, "to_m": 9000.0, "excessThrust_N": 60000.0, "mass_kg": 60000.0,
             "time_s": constant_mach_troposphere(0.6, 1000.0, 9000.0, 60000.0, 60000.0),

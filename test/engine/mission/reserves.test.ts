@@ -4,6 +4,12 @@ import type { Leg, ReservePolicy } from '../../../engine/mission/missionTypes';
 import { expectClose } from '../../support/assertInDelta';
 import { constantLiftToDragAero, constantTsfcPropulsion } from './support/analyticModels';
 import { demoLegs, missionInput } from './support/missionFixtures';
+import { demoMissionInput } from './support/demoProject';
+import { initialState } from '../../../engine/mission/flyTrip';
+import { flyHold } from '../../../engine/mission/holdLeg';
+import { S_ALT, S_MASS } from '../../../engine/mission/missionState';
+import { HOLD_HEIGHT_M } from '../../../engine/mission/reserves';
+import { createFlightLog } from '../../../engine/mission/timeHistoryBuilder';
 
 // With constant L/D and constant TSFC every reserve item has a closed form:
 // cruise of distance d at speed V: m1 = m0 exp(-d c g / (V L/D)) (Breguet range);
@@ -24,16 +30,19 @@ const legs: Leg[] = [
 // The alternate starts and ends at the cruise level (elevation = H - 1,500 ft) so it is a pure cruise.
 const alternate = { distance_m: 400_000, cruiseAltitude_m: H, cruiseMach: 0.8, elevation_m: H - HOLD_FT };
 
+// The destination is placed at the cruise level so the alternate departs level (its holds, 1,500 ft higher, burn
+// the same with constant L/D and TSFC).
 function fly(reserves: ReservePolicy) {
-  return solveMission(
-    missionInput({
+  return solveMission({
+    ...missionInput({
       legs,
       solve: { kind: 'takeoffWeight', takeoffMass_kg: TOW, payload_kg: 10000 },
       reserves,
       aero: constantLiftToDragAero(LD),
       propulsion: constantTsfcPropulsion({ thrust0_N: 400000, tsfc_kg_N_s: C, lapseExponent: 0 }),
     }),
-  );
+    destinationElevation_m: H,
+  });
 }
 const timeBurn = (m0: number, t: number) => m0 * (1 - Math.exp((-t * C * G0) / LD));
 const rangeBurn = (m0: number, d: number) => m0 * (1 - Math.exp((-d * C * G0) / (V * LD)));
@@ -116,5 +125,48 @@ describe('reserves', () => {
     const row = r.legs.find((l) => l.name === 'reserve: alternate')!;
     expectClose(row.endDistance_m - row.startDistance_m, distance_m, { rel: 1e-3 }, 'AlternateSpec.distance_m');
     expectClose(row.endAltitude_m, HOLD_FT, { abs: 1e-6 }, 'descends to 1,500 ft above the alternate');
+  });
+
+  it('reserves hold 1,500 ft above a destination at elevation, and the alternate departs from it (ICAO Annex 6 4.3.6.3)', () => {
+    // Demo project (invented aircraft and deck), destination at 1,200 m. ICAO Annex 6 Part I 4.3.6.3 c): the
+    // contingency minimum is 5 min holding at 450 m (1,500 ft) above the DESTINATION; e): the final reserve is held
+    // 1,500 ft above the alternate (here at 0 m). A tiny 0.1 % fraction makes the 5 min hold decide the contingency.
+    const demo = demoMissionInput();
+    const elevation = 1200;
+    const input = {
+      ...demo,
+      destinationElevation_m: elevation,
+      reserves: {
+        preset: 'icaoAnnex6',
+        contingencyFraction: 0.001,
+        minContingency_s: 300,
+        alternate: { distance_m: 200 * 1852, cruiseAltitude_m: 7620, cruiseMach: 0.7, elevation_m: 0 },
+        finalReserve_s: 1800,
+      },
+    } as const;
+    const r = solveMission(input);
+    expect(r.status).toBe('ok');
+    const byKind = (k: string) => r.legs.filter((l) => l.kind === k);
+    expectClose(byKind('approach')[0].endAltitude_m, elevation, { abs: 1e-9 }, 'the approach ends at the destination elevation');
+    expectClose(byKind('taxiIn')[0].startAltitude_m, elevation, { abs: 1e-9 }, 'taxi in at the destination');
+    expectClose(byKind('taxiIn')[0].endAltitude_m, elevation, { abs: 1e-9 }, 'taxi in at the destination');
+    const reserveRows = byKind('reserve');
+    const alternateRow = reserveRows.find((l) => l.name === 'reserve: alternate')!;
+    expectClose(alternateRow.startAltitude_m, elevation, { abs: 1e-9 }, 'the alternate departs from the destination');
+    expectClose(alternateRow.endAltitude_m, HOLD_FT, { abs: 1e-6 }, 'descends to 1,500 ft above the alternate');
+    const finalRow = reserveRows.find((l) => l.name === 'reserve: final reserve hold')!;
+    expectClose(finalRow.endAltitude_m, HOLD_FT, { abs: 1e-9 }, 'ICAO 4.3.6.3 e) 1,500 ft above the alternate');
+    // The contingency equals a 5 min best-endurance hold at elevation + 1,500 ft from the landing mass, ISA, still air.
+    const holdFuel = (altitude_m: number) => {
+      const ctx = { input, options: { stepScale: 1, allowNegativeFuel: true }, zeroFuelMass_kg: r.zeroFuelMass_kg, log: createFlightLog(input.airframe, input.cautionSettings, true) };
+      const start = initialState(r.landingMass_kg);
+      start[S_ALT] = altitude_m;
+      const target = { legIndex: -1, legName: 'check', env: { isaDev_K: 0, wind_m_s: 0 }, recordHistory: false };
+      return r.landingMass_kg - flyHold(ctx, target, start, altitude_m, 300, { kind: 'bestEndurance' }).state[S_MASS];
+    };
+    expectClose(HOLD_HEIGHT_M, HOLD_FT, { abs: 1e-12 }, '1,500 ft = 457.2 m');
+    expectClose(r.reserves.contingency_kg, holdFuel(elevation + HOLD_HEIGHT_M), { rel: 1e-9 }, 'ICAO 4.3.6.3 c) 5 min at 1,500 ft above the destination');
+    // Not the hold 1,500 ft above sea level: a jet burns visibly more lower down (common practice).
+    expect(holdFuel(HOLD_HEIGHT_M) - r.reserves.contingency_kg).toBeGreaterThan(0.5);
   });
 });

@@ -139,6 +139,36 @@ describe('solveMission', () => {
     expect(cutSteps).toBeGreaterThan(0);
   });
 
+  it('solveMission ends the demo trip at the destination elevation: sea level by default, else the given elevation', () => {
+    // The demo's descent ends at 1,500 ft; the approach allowance then descends to the destination aerodrome and taxi
+    // in is flown there (docs/mission.md). The time history's last samples sit on the aerodrome too.
+    const demo = demoMissionInput();
+    for (const elevation of [undefined, 350]) {
+      const r = solveMission(elevation === undefined ? demo : { ...demo, destinationElevation_m: elevation });
+      expect(r.status).toBe('ok');
+      const expected = elevation ?? 0;
+      const descent = r.legs.find((l) => l.kind === 'descent')!;
+      const approach = r.legs.find((l) => l.kind === 'approach')!;
+      const taxiIn = r.legs.find((l) => l.kind === 'taxiIn')!;
+      expectClose(descent.endAltitude_m, 1500 * FT, { abs: 1e-6 }, 'descent ends at 1,500 ft');
+      expectClose(approach.startAltitude_m, 1500 * FT, { abs: 1e-6 }, 'approach starts where the descent ends');
+      expectClose(approach.endAltitude_m, expected, { abs: 1e-9 }, 'approach ends at the destination elevation');
+      expectClose(taxiIn.endAltitude_m, expected, { abs: 1e-9 }, 'taxi in at the destination elevation');
+      const h = r.history.altitude_m;
+      expectClose(h[h.length - 1], expected, { abs: 1e-9 }, 'last history sample on the aerodrome');
+      expect(r.legs.find((l) => l.name === 'reserve: final reserve hold')!.endAltitude_m).toBeCloseTo(1500 * FT, 6);
+    }
+  });
+
+  it('solveMission says infeasible, naming destinationElevation_m, for an elevation that is not finite or out of range', () => {
+    const demo = demoMissionInput();
+    for (const bad of [Number.NaN, 40000]) {
+      const r = solveMission({ ...demo, destinationElevation_m: bad });
+      expect(r.status).toBe('infeasible');
+      expect(r.statusMessage).toContain('destinationElevation_m');
+    }
+  });
+
   it('solveMission in maxRange mode fills to MTOW or fuel capacity and lands with the reserve', () => {
     const r = solveMission(
       missionInput({
