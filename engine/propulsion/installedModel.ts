@@ -376,9 +376,17 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
   }
 
   /** Rating power, or the deck's bound with a caution when the deck does not name the rating. */
-  function resolveRating(condition: FlightCondition, rating: RatingName): { power: number; caution: Caution | null } {
+  const namedRatings = new Map<RatingName, { readonly power: number; readonly caution: null }>();
+
+  function resolveRating(condition: FlightCondition, rating: RatingName): { readonly power: number; readonly caution: Caution | null } {
+    const named = namedRatings.get(rating);
+    if (named !== undefined) return named;
     const p = ratingPower(rating);
-    if (p !== null) return { power: p, caution: null };
+    if (p !== null) {
+      const resolved = { power: p, caution: null };
+      namedRatings.set(rating, resolved);
+      return resolved;
+    }
     const bounds = access.powerBounds(condition);
     const power = rating === 'flightIdle' ? bounds.idle : bounds.max;
     return {
@@ -408,6 +416,41 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
     return assemble(scratch, condition, power, caution ? [caution] : NO_CAUTIONS);
   }
 
+  // State of the one forThrust solve in progress (set at its start, read by the residual below; never escapes a call).
+  // Named functions instead of per-call closures: forThrust runs thousands of times per mission.
+  let solveCondition: FlightCondition | null = null;
+  let solveFree: FreeStream | null = null;
+  let solveCurve: ((power: number, out: Float64Array) => boolean) | undefined;
+  let solveRequired = 0;
+
+  /** Installed thrust per engine (N) at `power` for the solve in progress: the deck's fixed-condition curve when it offers one, else full lookups. */
+  function solveThrustAt(power: number): number {
+    if (solveCurve !== undefined && solveCurve(power, curveOut)) {
+      const air = curveOut[1]!;
+      installInto(fastScratch, solveCondition!.mach, solveFree!, curveOut[0]!, 0, Number.isNaN(air) ? null : air);
+      return fastScratch.correctedThrust - fastScratch.spillage;
+    }
+    evaluateInto(scratch, solveCondition!, solveFree!, power);
+    return scratch.correctedThrust - scratch.spillage;
+  }
+
+  function solveResidual(power: number): number {
+    return solveThrustAt(power) - solveRequired;
+  }
+
+  function partPowerPoint(
+    condition: FlightCondition,
+    free: FreeStream,
+    power: number,
+    limit: ThrustLimit,
+    thrustRequired_N: number,
+    extra: readonly Caution[],
+  ): PartPowerPoint {
+    evaluateInto(scratch, condition, free, power);
+    const point = assemble(scratch, condition, power, extra);
+    return { ...point, limit, thrustRequired_N };
+  }
+
   function forThrust(condition: FlightCondition, thrustRequired_N: number, ceilingRating: RatingName = 'maxCruise'): PartPowerPoint {
     checkCondition(condition);
     if (!Number.isFinite(thrustRequired_N)) {
@@ -416,36 +459,23 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
     const free = freeStreamOf(condition);
     const ceiling = resolveRating(condition, ceilingRating);
     const idle = resolveRating(condition, 'flightIdle');
-    const extra: Caution[] = [];
-    if (ceiling.caution) extra.push(ceiling.caution);
-    if (idle.caution) extra.push(idle.caution);
+    const extra: readonly Caution[] =
+      ceiling.caution === null && idle.caution === null ? NO_CAUTIONS : [ceiling.caution, idle.caution].filter((c): c is Caution => c !== null);
     const perEngineRequired = thrustRequired_N / engineCount;
-    const finish = (power: number, limit: ThrustLimit): PartPowerPoint => {
-      evaluateInto(scratch, condition, free, power);
-      const point = assemble(scratch, condition, power, extra);
-      return { ...point, limit, thrustRequired_N };
-    };
-    // Solve-only evaluation: the deck's fixed-condition curve when it offers one, else full lookups.
-    const curve = access.curveAt?.(condition);
-    const installedAt = curve
-      ? (power: number): number => {
-          if (!curve(power, curveOut)) {
-            evaluateInto(scratch, condition, free, power);
-            return scratch.correctedThrust - scratch.spillage;
-          }
-          const air = curveOut[1]!;
-          installInto(fastScratch, condition.mach, free, curveOut[0]!, 0, Number.isNaN(air) ? null : air);
-          return fastScratch.correctedThrust - fastScratch.spillage;
-        }
-      : (power: number): number => {
-          evaluateInto(scratch, condition, free, power);
-          return scratch.correctedThrust - scratch.spillage;
-        };
-    const hiThrust = installedAt(ceiling.power);
+    solveCondition = condition;
+    solveFree = free;
+    solveCurve = access.curveAt?.(condition);
+    solveRequired = perEngineRequired;
+    const curve = solveCurve;
+    const hiThrust = solveThrustAt(ceiling.power);
     const hiDeck = curve ? fastScratch.deckThrust : scratch.deckThrust;
-    if (hiThrust <= perEngineRequired) return finish(ceiling.power, hiThrust === perEngineRequired ? 'within' : 'above_rating');
-    const loThrust = installedAt(idle.power);
-    if (loThrust >= perEngineRequired) return finish(idle.power, loThrust === perEngineRequired ? 'within' : 'below_idle');
+    if (hiThrust <= perEngineRequired) {
+      return partPowerPoint(condition, free, ceiling.power, hiThrust === perEngineRequired ? 'within' : 'above_rating', thrustRequired_N, extra);
+    }
+    const loThrust = solveThrustAt(idle.power);
+    if (loThrust >= perEngineRequired) {
+      return partPowerPoint(condition, free, idle.power, loThrust === perEngineRequired ? 'within' : 'below_idle', thrustRequired_N, extra);
+    }
     // First guess: the deck inversion at the uninstalled thrust scaled by the
     // ceiling's installed/uninstalled ratio, when the deck has no fast curve
     // (the inversion costs several lookups); Brent's method from the bracket.
@@ -455,14 +485,14 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
       const ratio = hiThrust > 0 ? hiDeck / hiThrust : 1;
       const guess = access.powerForThrust(condition, perEngineRequired * ratio, ceiling.power);
       if (guess !== null && guess > lo && guess < hi) {
-        const g = installedAt(guess) - perEngineRequired;
-        if (g === 0) return finish(guess, 'within');
+        const g = solveResidual(guess);
+        if (g === 0) return partPowerPoint(condition, free, guess, 'within', thrustRequired_N, extra);
         if (g > 0) hi = guess;
         else lo = guess;
       }
     }
     const fTol = FOR_THRUST_TOLERANCE * Math.max(Math.abs(perEngineRequired), 10);
-    const root = brent((p) => installedAt(p) - perEngineRequired, lo, hi, {
+    const root = brent(solveResidual, lo, hi, {
       fTol,
       xTol: 1e-12 * Math.max(1, Math.abs(ceiling.power - idle.power)),
       maxIterations: 100,
@@ -471,7 +501,7 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
       // Thrust is bracketed between idle and the ceiling, so only a non-monotone or broken deck lands here.
       throw new Error(`installed propulsion: forThrust could not solve for ${fmt(thrustRequired_N, 1)} N: ${root.error.message}`);
     }
-    return finish(root.value.x, 'within');
+    return partPowerPoint(condition, free, root.value.x, 'within', thrustRequired_N, extra);
   }
 
   return {
