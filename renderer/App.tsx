@@ -75,7 +75,7 @@ function Shell(props: AppProps) {
   const [view, setView] = useState<ViewId>(props.initialView ?? 'results');
   const project = state.doc?.present ?? null;
   const inputs = useMemo<StudyInputs | null>(() => (project === null ? null : { project, deckFile: state.deckFile }), [project, state.deckFile]);
-  const live = useLiveStudy(inputs);
+  const live = useLiveStudy(inputs, state.issues);
   const commands = useAppCommands(props.bridge, store, live.snapshot);
   const recovery = useRecovery(props.bridge, store);
   return (

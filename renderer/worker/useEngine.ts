@@ -4,6 +4,7 @@
  * progress and cancel.
  */
 import { createContext, useCallback, useContext, useEffect, useRef, useState } from 'react';
+import type { ProjectIssue } from '../../engine/project/projectIssue';
 import type { EngineClient, EngineRun } from './engineClient';
 import type { EngineFailure, EngineReplies, EngineRequest, EngineRequestKind, StudyInputs, StudySnapshot } from './engineProtocol';
 
@@ -21,6 +22,8 @@ export function useEngineClient(): EngineClient {
   return client;
 }
 
+const NO_ISSUES: readonly ProjectIssue[] = [];
+
 /** Wait after an edit before re-flying (ms). */
 export const REFLY_DELAY_MS = 120;
 
@@ -37,8 +40,12 @@ export interface LiveStudy {
   readonly failure: EngineFailure | null;
 }
 
-/** Re-flies the study whenever `inputs` changes (by identity). */
-export function useLiveStudy(inputs: StudyInputs | null): LiveStudy {
+/**
+ * Re-flies the study whenever `inputs` changes (by identity). With
+ * `blockingIssues` (rules the project breaks), nothing is flown: the issues
+ * become the failure and the last result stays, marked stale.
+ */
+export function useLiveStudy(inputs: StudyInputs | null, blockingIssues: readonly ProjectIssue[] = NO_ISSUES): LiveStudy {
   const client = useEngineClient();
   const revisionRef = useRef(0);
   const [revision, setRevision] = useState(0);
@@ -53,6 +60,10 @@ export function useLiveStudy(inputs: StudyInputs | null): LiveStudy {
     if (inputs === null) return undefined;
     const rev = ++revisionRef.current;
     setRevision(rev);
+    if (blockingIssues.length > 0) {
+      setState((s) => ({ ...s, failure: { kind: 'project', issues: blockingIssues }, running: false }));
+      return undefined;
+    }
     setState((s) => ({ ...s, running: true }));
     let run: EngineRun<'study'> | null = null;
     const timer = setTimeout(() => {
@@ -67,7 +78,7 @@ export function useLiveStudy(inputs: StudyInputs | null): LiveStudy {
       });
     }, REFLY_DELAY_MS);
     return () => clearTimeout(timer);
-  }, [client, inputs]);
+  }, [client, inputs, blockingIssues]);
 
   return {
     ...state,

@@ -183,4 +183,22 @@ describe('the App with the demo study', () => {
     act(() => bridge.menu('exportResultsCsv'));
     await waitFor(() => expect(bridge.exports.map((e) => e.name)).toEqual(['demo-time-history.csv', 'demo-legs.csv']));
   }, 60000);
+
+  it('a project that breaks a rule is not flown: the last result stays, marked stale, with the rule shown', async () => {
+    renderApp();
+    const before = await blockFuel();
+    fireEvent.click(screen.getByTestId('view-tab-airframe'));
+    const mtow = screen.getByTestId('field-mtow');
+    // below the demo's MZFW of 21,500 lb: the rule is at maxZeroFuel, so the edit is taken and the project listed as broken
+    fireEvent.change(mtow, { target: { value: '21000' } });
+    fireEvent.keyDown(mtow, { key: 'Enter' });
+    expect(screen.getByTestId('project-issues').textContent).toContain('airframe.weights.maxZeroFuel');
+    fireEvent.click(screen.getByTestId('view-tab-results'));
+    await screen.findByTestId('results-stale');
+    expect(screen.getByTestId('results-failure').textContent).toContain('is above the maximum takeoff weight');
+    expect(numberIn(screen.getByTestId('headline-block-fuel').textContent)).toBe(before);
+    fireEvent.click(screen.getByTestId('command-undo'));
+    await waitFor(() => expect(screen.queryByTestId('results-stale')).toBeNull(), { timeout: 15000 });
+    expect(screen.queryByTestId('results-failure')).toBeNull();
+  }, 60000);
 });

@@ -88,6 +88,21 @@ describe('useLiveStudy', () => {
     expect(result.current.snapshot).toEqual(snapshot(1));
   });
 
+  it('flies nothing while the project breaks a rule: the issues are the failure and the last result is stale', async () => {
+    const client = manualClient();
+    const first = inputs();
+    const issues = [{ path: 'airframe.weights.maxZeroFuel', value: '1', expected: 'x', message: 'too heavy' }];
+    const { result, rerender } = renderHook(({ i, b }) => useLiveStudy(i, b), { wrapper: wrapper(client), initialProps: { i: first, b: [] as typeof issues } });
+    await waitFor(() => expect(client.runs).toHaveLength(1));
+    await act(async () => client.runs[0]!.resolve({ ok: true, value: snapshot(1) }));
+    rerender({ i: { ...first }, b: issues });
+    await new Promise((r) => setTimeout(r, REFLY_DELAY_MS * 2));
+    expect(client.runs).toHaveLength(1);
+    expect(result.current.failure).toEqual({ kind: 'project', issues });
+    expect(result.current.stale).toBe(true);
+    expect(result.current.snapshot).toEqual(snapshot(1));
+  });
+
   it('does nothing without a project', async () => {
     const client = manualClient();
     const { result } = renderHook(() => useLiveStudy(null), { wrapper: wrapper(client) });
