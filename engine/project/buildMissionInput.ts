@@ -210,5 +210,6 @@ export function buildMissionInput(
     cautionSettings,
     isaDev_K: overrides.isaDev_K ?? project.mission.isaDeviation,
     wind_m_s: overrides.wind_m_s ?? project.mission.wind,
+    destinationElevation_m: project.mission.destinationElevation ?? 0,
   });
 }

@@ -1,7 +1,7 @@
 /**
  * Cross-field rules a schema cannot state field by field: weights in order,
  * the active inlet exists, one solvable cruise leg, climbs go up and descents
- * down, and the polar and inlet designs pass their own validators. Each
+ * down, the legs end no lower than the destination elevation, and the polar and inlet designs pass their own validators. Each
  * finding is a ProjectIssue with the JSON path it concerns.
  */
 import { validatePolarSpec } from '../aero/polarSpec';
@@ -129,5 +129,10 @@ export function checkProject(project: Project, doc: unknown): ProjectIssue[] {
       altitude_m = leg.altitude;
     }
   });
+  const elevation_m = project.mission.destinationElevation;
+  if (elevation_m !== undefined && elevation_m > altitude_m + ALTITUDE_MATCH_TOLERANCE_M) {
+    const p = 'mission.destinationElevation';
+    issues.push(makeIssue(p, raw(p), `at most ${ft(altitude_m)} (the altitude the legs end at)`, `${raw(p)} is above ${ft(altitude_m)}, the altitude the legs end at; the last descent should end above the destination (1,500 ft above it is common practice)`));
+  }
   return issues;
 }

@@ -144,6 +144,17 @@ describe('buildMissionInput mission', () => {
     expect(input.wind_m_s).toBe(0);
   });
 
+  it('buildMissionInput passes mission.destinationElevation in metres, and 0 m when the file has none', () => {
+    const doc = demoDoc();
+    doc.mission.destinationElevation = '450 ft';
+    const withElevation = buildMissionInput(parsedProject(doc), { deck });
+    if (!withElevation.ok) throw new Error(withElevation.error.map((e) => e.message).join('\n'));
+    expectClose(withElevation.value.destinationElevation_m!, 450 * FT, { rel: 1e-15 }, 'NIST SP 811 ft');
+    delete doc.mission.destinationElevation;
+    const without = buildMissionInput(parsedProject(doc), { deck });
+    expect(without.ok && without.value.destinationElevation_m).toBe(0);
+  });
+
   it('buildMissionInput applies the caution overrides on the defaults', () => {
     // 300 ft/min = 300 x 0.3048 / 60 m/s (NIST SP 811 ft, definition of the minute).
     expectClose(input.cautionSettings.minResidualClimbRate_m_s, (300 * FT) / 60, { rel: 1e-15 }, 'NIST SP 811 ft/min');

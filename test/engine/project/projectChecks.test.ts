@@ -73,6 +73,26 @@ describe('checkProject (through parseProject)', () => {
     expect(paths(issues)).toEqual(['mission.legs[2].toAltitude', 'mission.legs[3].altitude']);
   });
 
+  it('checkProject refuses a destination elevation above the altitude the last descent ends at', () => {
+    const issues = issuesAfter((d) => {
+      d.mission.legs[4].toAltitude = '1500 ft';
+      d.mission.destinationElevation = '5000 ft';
+    });
+    expect(paths(issues)).toEqual(['mission.destinationElevation']);
+    expect(issues[0]!.message).toContain('1500 ft');
+  });
+
+  it('checkProject accepts a destination elevation at or below the altitude the last descent ends at', () => {
+    expect(issuesAfter((d) => {
+      d.mission.legs[4].toAltitude = '1500 ft';
+      d.mission.destinationElevation = '1500 ft';
+    })).toEqual([]);
+    expect(issuesAfter((d) => {
+      d.mission.legs[4].toAltitude = '1500 ft';
+      delete d.mission.destinationElevation;
+    })).toEqual([]);
+  });
+
   it('checkProject refuses a step-climb ceiling below the cruise altitude', () => {
     const issues = issuesAfter((d) => (d.mission.legs[3].profile.maxAltitude = '31000 ft'));
     expect(paths(issues)).toEqual(['mission.legs[3].profile.maxAltitude']);
