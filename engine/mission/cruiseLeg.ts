@@ -196,7 +196,9 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
         stop: 'step_climb_due',
         g: (y, s) => {
           const m = y[S_MASS];
-          const srNow = specificRangeAt(input, h, s.mach, m, dev);
+          // Specific range here from the sample the integrator just evaluated (same thrust = drag point as
+          // specificRangeAt, without solving it again); 0 where maxCruise cannot balance the drag.
+          const srNow = s.drag_N > s.thrustAvailable_N || !(s.fuelFlow_kg_s > 0) ? 0 : s.tas_m_s / s.fuelFlow_kg_s;
           const machUp = machUpOf(m);
           const srUp = specificRangeAt(input, up, machUp, m, dev);
           const gain = srNow > 0 ? (srUp - srNow) / srNow : srUp > 0 ? 1 : -1;

@@ -263,19 +263,17 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
   }
 
   function cautionsOf(s: Scratch, source: InletDesign['source']): readonly Caution[] {
+    // Pushed inline (no helper closure: this runs on every propulsion query).
     let list: Caution[] | null = null;
-    const add = (c: Caution): void => {
-      (list ??= []).push(c);
-    };
     if (s.deckError) {
-      add({ id: 'deck_lookup_failed', severity: 'warning', message: `Deck lookup failed (${s.deckError.code}): ${s.deckError.message}; thrust and fuel flow set to 0.` });
+      (list ??= []).push({ id: 'deck_lookup_failed', severity: 'warning', message: `Deck lookup failed (${s.deckError.code}): ${s.deckError.message}; thrust and fuel flow set to 0.` });
     }
     for (const c of s.deckCautions) {
       if (!settings.cautionOnDeckExtrapolation && c.id === 'deck_extrapolation') continue;
-      add(c);
+      (list ??= []).push(c);
     }
     if (s.airflow === null && !s.deckError) {
-      add({
+      (list ??= []).push({
         id: 'no_airflow_spillage_skipped',
         severity: 'info',
         message:
@@ -285,7 +283,7 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
       });
     }
     if (s.tableOutside !== null) {
-      add({
+      (list ??= []).push({
         id: 'inlet_recovery_table_range',
         severity: 'caution',
         message: `Flight Mach is ${s.tableOutside} the inlet recovery table of "${recoveryInlet.design.name}"; its end recovery ${fmt(s.recovery, 4)} is held.`,
@@ -293,7 +291,7 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
       });
     }
     if (s.throatMach !== null && s.throatMach > settings.maxThroatMach) {
-      add({
+      (list ??= []).push({
         id: 'throat_mach_high',
         severity: 'caution',
         message: `Inlet throat Mach ${fmt(s.throatMach)} is above the limit ${fmt(settings.maxThroatMach)}.`,
@@ -302,7 +300,7 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
       });
     }
     if (s.throatChoked) {
-      add({
+      (list ??= []).push({
         id: 'inlet_throat_choked',
         severity: 'warning',
         message: `The inlet throat of "${recoveryInlet.design.name}" is choked: the engine asks for more airflow than the throat passes at Mach 1; figures assume throat Mach 1.`,
@@ -311,7 +309,7 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
     }
     if (s.fanFaceMach !== null && (s.fanFaceMach < settings.minFanFaceMach || s.fanFaceMach > settings.maxFanFaceMach)) {
       const low = s.fanFaceMach < settings.minFanFaceMach;
-      add({
+      (list ??= []).push({
         id: 'fan_face_mach_range',
         severity: 'caution',
         message: `Fan-face Mach ${fmt(s.fanFaceMach)} is outside the band ${fmt(settings.minFanFaceMach)} to ${fmt(settings.maxFanFaceMach)}${s.fanFaceChoked ? ' (fan face choked)' : ''}.`,
@@ -322,14 +320,13 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
     return list ?? NO_CAUTIONS;
   }
 
-  function assemble(s: Scratch, condition: FlightCondition, power: number, extra: readonly Caution[]): InstalledPoint {
-    const installed = s.correctedThrust - s.spillage;
-    const perEngine: EnginePoint = {
+  function perEngineOf(s: Scratch): EnginePoint {
+    return {
       uninstalledThrust_N: s.deckThrust,
       uninstalledFuelFlow_kg_s: s.deckFuel,
       correctedThrust_N: s.correctedThrust,
       spillageDrag_N: s.spillage,
-      thrust_N: installed,
+      thrust_N: s.correctedThrust - s.spillage,
       fuelFlow_kg_s: s.fuel,
       airflow_kg_s: s.airflow,
       recovery: s.recovery,
@@ -338,9 +335,16 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
       throatMach: s.throatMach,
       fanFaceMach: s.fanFaceMach,
     };
-    const thrust_N = installed * engineCount;
-    const fuelFlow_kg_s = s.fuel * engineCount;
+  }
+
+  function cautionsWith(s: Scratch, extra: readonly Caution[]): readonly Caution[] {
     const own = cautionsOf(s, recoveryInlet.design.source);
+    return extra.length === 0 ? own : own.length === 0 ? extra : [...extra, ...own];
+  }
+
+  function assemble(s: Scratch, condition: FlightCondition, power: number, extra: readonly Caution[]): InstalledPoint {
+    const thrust_N = (s.correctedThrust - s.spillage) * engineCount;
+    const fuelFlow_kg_s = s.fuel * engineCount;
     return {
       altitude_m: condition.altitude_m,
       mach: condition.mach,
@@ -349,9 +353,36 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
       thrust_N,
       fuelFlow_kg_s,
       tsfc_kg_N_s: thrust_N > 0 ? fuelFlow_kg_s / thrust_N : null,
-      perEngine,
+      perEngine: perEngineOf(s),
       outsideTable: s.outside,
-      cautions: extra.length === 0 ? own : own.length === 0 ? extra : [...extra, ...own],
+      cautions: cautionsWith(s, extra),
+    };
+  }
+
+  /** As assemble, with the part-power fields written into the same literal (an object spread per query was a measurable cost). */
+  function assemblePartPower(
+    s: Scratch,
+    condition: FlightCondition,
+    power: number,
+    extra: readonly Caution[],
+    limit: ThrustLimit,
+    thrustRequired_N: number,
+  ): PartPowerPoint {
+    const thrust_N = (s.correctedThrust - s.spillage) * engineCount;
+    const fuelFlow_kg_s = s.fuel * engineCount;
+    return {
+      altitude_m: condition.altitude_m,
+      mach: condition.mach,
+      isaDev_K: condition.isaDev_K,
+      power,
+      thrust_N,
+      fuelFlow_kg_s,
+      tsfc_kg_N_s: thrust_N > 0 ? fuelFlow_kg_s / thrust_N : null,
+      perEngine: perEngineOf(s),
+      outsideTable: s.outside,
+      cautions: cautionsWith(s, extra),
+      limit,
+      thrustRequired_N,
     };
   }
 
@@ -447,8 +478,7 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
     extra: readonly Caution[],
   ): PartPowerPoint {
     evaluateInto(scratch, condition, free, power);
-    const point = assemble(scratch, condition, power, extra);
-    return { ...point, limit, thrustRequired_N };
+    return assemblePartPower(scratch, condition, power, extra, limit, thrustRequired_N);
   }
 
   function forThrust(condition: FlightCondition, thrustRequired_N: number, ceilingRating: RatingName = 'maxCruise'): PartPowerPoint {
