@@ -1,4 +1,5 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
+import type { TradeFactorsResult } from '../../../engine/analysis/tradeFactors';
 import type { WorkerReplyMessage, WorkerRequestMessage } from '../../../renderer/worker/engineProtocol';
 import { demoState } from '../support/studyHarness';
 
@@ -30,6 +31,6 @@ describe('engineWorker', () => {
     if (last.type !== 'done') throw new Error('unreachable');
     // either the trade factors or the engine's reason, never a thrown error
     if (!last.outcome.ok) expect(last.outcome.failure.kind).toBe('analysis');
-    else expect((last.outcome.value as { factors: { name: string }[] }).factors.map((f) => f.name)).toEqual(['recovery', 'dragCount', 'tsfc', 'oew']);
+    else expect((last.outcome.value as TradeFactorsResult).factors.map((f) => f.name)).toEqual(['recovery', 'dragCount', 'tsfc', 'oew']);
   }, 60000);
 });
