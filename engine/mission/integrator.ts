@@ -87,8 +87,10 @@ function locateEvent(
     return event.g(yt, segment.evaluate(yt).sample);
   };
   if (event.stateOnly) {
+    // A state-only event ignores the sample: no evaluation at the trial point (a quarter of each trial's cost).
+    const onStepState = (tau: number) => event.g(rk4Step(segment, y, k1, tau), end.sample);
     const guess = illinois((tau) => event.g(hermite(y, k1, end.state, end.derivative, h, tau / h), end.sample), gStart, h, 0);
-    return refineOnStep(onStep, guess, gStart, event.g(end.state, end.sample), h);
+    return refineOnStep(onStepState, guess, gStart, event.g(end.state, end.sample), h);
   }
   return illinois(onStep, gStart, h, 0);
 }

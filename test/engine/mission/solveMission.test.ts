@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { solveMission } from '../../../engine/mission/solveMission';
-import type { Leg, MissionResult } from '../../../engine/mission/missionTypes';
+import type { Leg, MissionInput, MissionResult } from '../../../engine/mission/missionTypes';
 import { expectClose } from '../../support/assertInDelta';
 import { constantLiftToDragAero, constantTsfcPropulsion } from './support/analyticModels';
 import { demoMissionInput } from './support/demoProject';
@@ -139,24 +139,33 @@ describe('solveMission', () => {
     expect(cutSteps).toBeGreaterThan(0);
   });
 
-  it('solveMission ends the demo trip at the destination elevation: sea level by default, else the given elevation', () => {
-    // The demo's descent ends at 1,500 ft; the approach allowance then descends to the destination aerodrome and taxi
-    // in is flown there (docs/mission.md). The time history's last samples sit on the aerodrome too.
+  it('solveMission ends the demo trip at the destination elevation: the project one, sea level when absent, or a given one', () => {
+    // The demo's descent ends at its own altitude; the approach allowance then descends to the destination aerodrome and
+    // taxi in is flown there (docs/mission.md). The time history's last samples sit on the aerodrome too.
     const demo = demoMissionInput();
-    for (const elevation of [undefined, 350]) {
-      const r = solveMission(elevation === undefined ? demo : { ...demo, destinationElevation_m: elevation });
+    const descentLeg = demo.legs.find((l) => l.kind === 'descent')!;
+    const descentTo = descentLeg.kind === 'descent' ? descentLeg.toAltitude_m : Number.NaN;
+    const alternateElevation = demo.reserves.alternate?.elevation_m ?? Number.NaN;
+    const { destinationElevation_m: _, ...withoutElevation } = demo;
+    const cases: [MissionInput, number][] = [
+      [demo, demo.destinationElevation_m ?? 0],
+      [withoutElevation, 0],
+      [{ ...demo, destinationElevation_m: 350 }, 350],
+    ];
+    for (const [input, expected] of cases) {
+      const r = solveMission(input);
       expect(r.status).toBe('ok');
-      const expected = elevation ?? 0;
       const descent = r.legs.find((l) => l.kind === 'descent')!;
       const approach = r.legs.find((l) => l.kind === 'approach')!;
       const taxiIn = r.legs.find((l) => l.kind === 'taxiIn')!;
-      expectClose(descent.endAltitude_m, 1500 * FT, { abs: 1e-6 }, 'descent ends at 1,500 ft');
-      expectClose(approach.startAltitude_m, 1500 * FT, { abs: 1e-6 }, 'approach starts where the descent ends');
+      expectClose(descent.endAltitude_m, descentTo, { abs: 1e-6 }, 'descent ends at its own altitude');
+      expectClose(approach.startAltitude_m, descentTo, { abs: 1e-6 }, 'approach starts where the descent ends');
       expectClose(approach.endAltitude_m, expected, { abs: 1e-9 }, 'approach ends at the destination elevation');
       expectClose(taxiIn.endAltitude_m, expected, { abs: 1e-9 }, 'taxi in at the destination elevation');
       const h = r.history.altitude_m;
       expectClose(h[h.length - 1], expected, { abs: 1e-9 }, 'last history sample on the aerodrome');
-      expect(r.legs.find((l) => l.name === 'reserve: final reserve hold')!.endAltitude_m).toBeCloseTo(1500 * FT, 6);
+      // ICAO Annex 6 4.3.6.3 e): the final reserve is held 1,500 ft above the alternate.
+      expectClose(r.legs.find((l) => l.name === 'reserve: final reserve hold')!.endAltitude_m, alternateElevation + 1500 * FT, { abs: 1e-6 }, 'final hold');
     }
   });
 
