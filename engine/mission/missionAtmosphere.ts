@@ -38,12 +38,27 @@ export function layerLapse(altitude_m: number): number {
   return 0.001;
 }
 
+// One-entry memo of missionAir, keyed purely by its arguments (a leg evaluation asks for the same point two or
+// three times in a row); the value is immutable, so sharing it cannot change any answer.
+let memoAltitude_m = Number.NaN;
+let memoIsaDev_K = Number.NaN;
+let memoAir: MissionAir | null = null;
+
 /**
  * ISA at a pressure altitude (m) with an ISA deviation (K), valid where
  * engine/aero/standardAtmosphere.ts is (-5,004 m to 71,000 m, T > 0).
  * Throws only for out-of-range input, which missionInputCheck.ts excludes.
  */
 export function missionAir(altitude_m: number, isaDev_K: number): MissionAir {
+  if (memoAir !== null && altitude_m === memoAltitude_m && isaDev_K === memoIsaDev_K) return memoAir;
+  const air = computeMissionAir(altitude_m, isaDev_K);
+  memoAltitude_m = altitude_m;
+  memoIsaDev_K = isaDev_K;
+  memoAir = air;
+  return air;
+}
+
+function computeMissionAir(altitude_m: number, isaDev_K: number): MissionAir {
   const r = atmosphere(altitude_m, isaDev_K);
   if (!r.ok) throw new RangeError(`missionAir: ${r.error.message}`);
   const a = r.value;

@@ -34,6 +34,11 @@ export interface InstalledPropulsionOptions {
 export function deckAccess(deck: EngineDeck): DeckAccess {
   const curve = deckCurve(deck);
   const evaluate = curve.evaluate;
+  // One-entry memo of the ambient air, keyed purely by altitude and ISA deviation (a mission asks for the same
+  // condition several times in a row); the Result is immutable, so sharing it cannot change any answer.
+  let ambientAltitude_m = Number.NaN;
+  let ambientIsaDev_K = Number.NaN;
+  let ambientValue: ReturnType<typeof atmosphere> | null = null;
   return {
     title: deck.title,
     parametric: deck.parametric,
@@ -53,7 +58,14 @@ export function deckAccess(deck: EngineDeck): DeckAccess {
       curve.prepare(condition);
       return evaluate;
     },
-    ambient: (condition) => atmosphere(condition.altitude_m, condition.isaDev_K),
+    ambient: (condition) => {
+      if (ambientValue === null || condition.altitude_m !== ambientAltitude_m || condition.isaDev_K !== ambientIsaDev_K) {
+        ambientValue = atmosphere(condition.altitude_m, condition.isaDev_K);
+        ambientAltitude_m = condition.altitude_m;
+        ambientIsaDev_K = condition.isaDev_K;
+      }
+      return ambientValue;
+    },
   };
 }
 
