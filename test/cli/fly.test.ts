@@ -63,6 +63,18 @@ describe('blockwise fly <demo> --json', () => {
     expectClose(demo.payload_kg as number, 1600 * LB, { rel: 1e-12 }, 'project payload, NIST SP 811 lb');
   });
 
+  it('fly lands the demo at its destination elevation after a descent to 1,500 ft above it', () => {
+    // The demo's destination is at 420 ft and its descent ends at 1,920 ft (fixtures/demo/demo.blockwise.json);
+    // 1,500 ft above the aerodrome before the approach is common practice. NIST SP 811: 1 ft = 0.3048 m.
+    const FT = 0.3048;
+    const legs = demo.legs as { kind: string; startAltitude_m: number; endAltitude_m: number }[];
+    const byKind = (kind: string) => legs.find((l) => l.kind === kind)!;
+    expectClose(byKind('descent').endAltitude_m, 1920 * FT, { abs: 1e-6 }, 'descent target, demo file');
+    expectClose(byKind('approach').endAltitude_m, 420 * FT, { abs: 1e-6 }, 'destination elevation, demo file');
+    expectClose(byKind('taxiIn').startAltitude_m, 420 * FT, { abs: 1e-6 }, 'taxi in at the destination');
+    expect(demo.cautions).toEqual([]);
+  });
+
   it('fly --json figures add up: reserves = sum of parts, block fuel = sum of legs, landing = ZFW + reserve', () => {
     // Definitions of block and trip fuel (common practice): block fuel is burnt from block-out to
     // block-in; trip fuel from takeoff to landing; the reserve total is the sum of its parts.
