@@ -9,7 +9,7 @@ import { formatQuantity, type DisplayKind } from '../../engine/units/displayUnit
 import { RATING_NAMES, type RatingName } from '../../engine/propulsion/propulsionModel';
 import type { LoadedProject } from '../projectFiles';
 import { loadVerbProject, projectArgument } from '../common/projectArgs';
-import { quantityOption } from '../common/quantityOptions';
+import { positiveQuantityOption, quantityOption } from '../common/quantityOptions';
 import { optionalString, UsageError, type CliIo } from '../verb';
 
 type Options = NonNullable<ParseArgsConfig['options']>;
@@ -20,6 +20,13 @@ export const INLET_OPTION: Options = { inlet: { type: 'string' } };
 export const ISA_DEV_OPTION: Options = { 'isa-dev': { type: 'string' } };
 /** `--json`: print the result as JSON. */
 export const JSON_OPTION: Options = { json: { type: 'boolean' } };
+/** `--altitude <alt> --weight <mass>`: the flight condition of the point analyses (crossover, range-speeds). */
+export const POINT_OPTIONS: Options = { altitude: { type: 'string' }, weight: { type: 'string' } };
+
+/** The required `--altitude` (m) and `--weight` (kg, positive) of a point analysis. */
+export function pointCondition(values: Readonly<Record<string, unknown>>): { readonly altitude_m: number; readonly mass_kg: number } {
+  return { altitude_m: quantityOption(values, 'altitude', 'length'), mass_kg: positiveQuantityOption(values, 'weight', 'mass') };
+}
 
 /** The project positional of an analysis verb, read with the `--inlet` option's design; the exit code 1 after printing why it cannot be used. */
 export function openAnalysisProject(

@@ -1,9 +1,19 @@
 import { thrustDragCrossover } from '../../engine/analysis/crossover';
 import { analysisFailed, cautionBlock, isaText, printJsonReport, printReport } from '../common/report';
-import { positiveQuantityOption, quantityOption } from '../common/quantityOptions';
 import { formatTable } from '../format/textTable';
 import type { CliIo, Verb } from '../verb';
-import { bothUnits, INLET_OPTION, ISA_DEV_OPTION, isaDevOption, JSON_OPTION, machText, openAnalysisProject, ratingOption } from './analysisArgs';
+import {
+  bothUnits,
+  INLET_OPTION,
+  ISA_DEV_OPTION,
+  isaDevOption,
+  JSON_OPTION,
+  machText,
+  openAnalysisProject,
+  pointCondition,
+  POINT_OPTIONS,
+  ratingOption,
+} from './analysisArgs';
 
 export const crossoverVerb: Verb = {
   name: 'crossover',
@@ -29,8 +39,7 @@ says so. Exit codes: 0 done; 1 project unreadable; 2 bad command line;
 3 analysis failed (message on stderr).
 `,
   options: {
-    altitude: { type: 'string' },
-    weight: { type: 'string' },
+    ...POINT_OPTIONS,
     rating: { type: 'string' },
     ...INLET_OPTION,
     ...ISA_DEV_OPTION,
@@ -38,8 +47,7 @@ says so. Exit codes: 0 done; 1 project unreadable; 2 bad command line;
   },
   allowPositionals: true,
   async run(values, positionals, io: CliIo): Promise<number> {
-    const altitude_m = quantityOption(values, 'altitude', 'length');
-    const mass_kg = positiveQuantityOption(values, 'weight', 'mass');
+    const { altitude_m, mass_kg } = pointCondition(values);
     const rating = ratingOption(values, 'rating', 'maxCruise');
     const loaded = await openAnalysisProject(values, positionals, 'crossover', io);
     if (typeof loaded === 'number') return loaded;

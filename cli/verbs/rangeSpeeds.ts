@@ -1,10 +1,9 @@
 import { optimumAltitude } from '../../engine/analysis/optimumAltitude';
 import { specificRange } from '../../engine/analysis/specificRange';
 import { analysisFailed, cautionBlock, isaText, printJsonReport, printReport } from '../common/report';
-import { positiveQuantityOption, quantityOption } from '../common/quantityOptions';
 import { formatTable } from '../format/textTable';
 import type { CliIo, Verb } from '../verb';
-import { bothUnits, INLET_OPTION, ISA_DEV_OPTION, isaDevOption, JSON_OPTION, machText, openAnalysisProject } from './analysisArgs';
+import { bothUnits, INLET_OPTION, ISA_DEV_OPTION, isaDevOption, JSON_OPTION, machText, openAnalysisProject, pointCondition, POINT_OPTIONS } from './analysisArgs';
 
 const NMI_M = 1852;
 
@@ -30,17 +29,10 @@ optimum altitude maximises the best specific range at this weight; buffet
 margin and MMO cautions are raised there. Exit codes: 0 done; 1 project
 unreadable; 2 bad command line; 3 analysis failed.
 `,
-  options: {
-    altitude: { type: 'string' },
-    weight: { type: 'string' },
-    ...INLET_OPTION,
-    ...ISA_DEV_OPTION,
-    ...JSON_OPTION,
-  },
+  options: { ...POINT_OPTIONS, ...INLET_OPTION, ...ISA_DEV_OPTION, ...JSON_OPTION },
   allowPositionals: true,
   async run(values, positionals, io: CliIo): Promise<number> {
-    const altitude_m = quantityOption(values, 'altitude', 'length');
-    const mass_kg = positiveQuantityOption(values, 'weight', 'mass');
+    const { altitude_m, mass_kg } = pointCondition(values);
     const loaded = await openAnalysisProject(values, positionals, 'range-speeds', io);
     if (typeof loaded === 'number') return loaded;
     const { input } = loaded;
