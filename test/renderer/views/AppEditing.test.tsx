@@ -107,11 +107,11 @@ describe('the App with the demo study', () => {
     fireEvent.click(screen.getByTestId('command-exportHistory'));
     fireEvent.click(screen.getByTestId('command-exportLegs'));
     fireEvent.click(screen.getByTestId('command-print'));
-    await waitFor(() => expect(bridge.exports).toHaveLength(2));
+    await waitFor(() => expect(bridge.exports).toHaveLength(2), { timeout: 15000 });
     expect(bridge.exports.map((e) => e.name)).toEqual(['demo-time-history.csv', 'demo-legs.csv']);
     expect(bridge.exports[0]!.mime).toBe('text/csv');
     expect(bridge.exports[0]!.text.split('\n')[0]).toMatch(/^time\[s\],distance\[m\]/);
-    await waitFor(() => expect(bridge.prints).toEqual(['demo-report.pdf']));
+    await waitFor(() => expect(bridge.prints).toEqual(['demo-report.pdf']), { timeout: 15000 });
     const report = screen.getByTestId('print-report');
     expect(report.textContent).toContain(SAFETY_NOTICE_LINES[0]);
     expect(screen.getByTestId('report-headline-block-fuel').textContent).toBe(screen.getByTestId('headline-block-fuel').textContent);
@@ -121,7 +121,7 @@ describe('the App with the demo study', () => {
     const bridge = renderApp();
     await blockFuel();
     fireEvent.click(screen.getByTestId('command-save'));
-    await waitFor(() => expect(bridge.saves).toHaveLength(1));
+    await waitFor(() => expect(bridge.saves).toHaveLength(1), { timeout: 15000 });
     expect(bridge.saves[0]!.name).toBe('demo.blockwise.json');
     expect(JSON.parse(bridge.saves[0]!.text)).toMatchObject({ format: 'blockwise-project', version: 2 });
     expect(screen.getByTestId('document-name').textContent).toBe('demo.blockwise.json');
@@ -147,8 +147,8 @@ describe('the App with the demo study', () => {
     const bridge = renderApp((b) => {
       b.recovery = { name: 'x.blockwise.json', text: '{}', savedAt_ms: 0, projectPath: null };
     });
-    fireEvent.click(await screen.findByTestId('recovery-discard'));
-    await waitFor(() => expect(bridge.discarded).toBe(1));
+    fireEvent.click(await screen.findByTestId('recovery-discard', {}, { timeout: 15000 }));
+    await waitFor(() => expect(bridge.discarded).toBe(1), { timeout: 15000 });
     expect(screen.queryByTestId('recovery-offer')).toBeNull();
   }, 60000);
 
@@ -157,7 +157,7 @@ describe('the App with the demo study', () => {
     const before = await blockFuel();
     bridge.nextProject = { name: 'weights-out-of-order.blockwise.json', text: fixtureText('fixtures/bad-projects/weights-out-of-order.blockwise.json') };
     fireEvent.click(screen.getByTestId('command-open'));
-    const issues = await screen.findByTestId('open-issues');
+    const issues = await screen.findByTestId('open-issues', {}, { timeout: 15000 });
     // fixtures/bad-projects/expected.json: the path and a fragment of the message each bad file must produce
     const expected = (JSON.parse(fixtureText('fixtures/bad-projects/expected.json')) as Record<string, { path: string; fragment: string }>)['weights-out-of-order.blockwise.json']!;
     expect(issues.textContent).toContain(expected.path);
@@ -172,16 +172,16 @@ describe('the App with the demo study', () => {
     fireEvent.click(screen.getByTestId('view-tab-mission'));
     fireEvent.click(screen.getByTestId('leg-0-duplicate'));
     expect(screen.getByTestId('document-name').textContent).toBe('demo.blockwise.json (edited)');
-    await waitFor(() => expect(bridge.documentStates.at(-1)).toEqual({ name: 'demo.blockwise.json', dirty: true }));
+    await waitFor(() => expect(bridge.documentStates.at(-1)).toEqual({ name: 'demo.blockwise.json', dirty: true }), { timeout: 15000 });
     const legs = () => screen.getAllByTestId(/^leg-\d+$/).length;
     const n = legs();
     act(() => bridge.menu('undo'));
     expect(legs()).toBe(n - 1);
-    await waitFor(() => expect(bridge.documentStates.at(-1)).toEqual({ name: 'demo.blockwise.json', dirty: false }));
+    await waitFor(() => expect(bridge.documentStates.at(-1)).toEqual({ name: 'demo.blockwise.json', dirty: false }), { timeout: 15000 });
     act(() => bridge.menu('redo'));
     expect(legs()).toBe(n);
     act(() => bridge.menu('exportResultsCsv'));
-    await waitFor(() => expect(bridge.exports.map((e) => e.name)).toEqual(['demo-time-history.csv', 'demo-legs.csv']));
+    await waitFor(() => expect(bridge.exports.map((e) => e.name)).toEqual(['demo-time-history.csv', 'demo-legs.csv']), { timeout: 15000 });
   }, 60000);
 
   it('a project that breaks a rule is not flown: the last result stays, marked stale, with the rule shown', async () => {
@@ -194,7 +194,7 @@ describe('the App with the demo study', () => {
     fireEvent.keyDown(mtow, { key: 'Enter' });
     expect(screen.getByTestId('project-issues').textContent).toContain('airframe.weights.maxZeroFuel');
     fireEvent.click(screen.getByTestId('view-tab-results'));
-    await screen.findByTestId('results-stale');
+    await screen.findByTestId('results-stale', {}, { timeout: 15000 });
     expect(screen.getByTestId('results-failure').textContent).toContain('is above the maximum takeoff weight');
     expect(numberIn(screen.getByTestId('headline-block-fuel').textContent)).toBe(before);
     fireEvent.click(screen.getByTestId('command-undo'));

@@ -15,6 +15,6 @@ describe('ResultsView in the App', () => {
     expect(screen.getByTestId('legs-table')).toBeInTheDocument();
     expect(screen.getByTestId('mission-status').textContent).toContain('ok');
     for (const line of SAFETY_NOTICE_LINES) expect(screen.getByTestId('safety-notice').textContent).toContain(line);
-    await waitFor(() => expect(screen.getByTestId('chart-altitude').querySelector('svg')).not.toBeNull());
+    await waitFor(() => expect(screen.getByTestId('chart-altitude').querySelector('svg')).not.toBeNull(), { timeout: 15000 });
   }, 30000);
 });

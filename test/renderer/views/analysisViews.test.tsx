@@ -134,7 +134,7 @@ describe('CompareView', () => {
     };
     renderWithStudy(<CompareView live={live()} chartSize={TEST_CHART} />, demoState(), engine);
     fireEvent.click(screen.getByTestId('compare-run'));
-    await screen.findByTestId('compare-table');
+    await screen.findByTestId('compare-table', {}, { timeout: 15000 });
     expect(requests).toEqual(['compare']);
     expect(screen.getByTestId('compare-design-name-0').textContent).toBe(`A: ${names[0]}`);
     expect(screen.getByTestId('compare-design-name-1').textContent).toBe(`B: ${names[1]}`);
@@ -157,7 +157,7 @@ describe('CompareView', () => {
     renderWithStudy(<CompareView live={live()} chartSize={TEST_CHART} />);
     fireEvent.click(screen.getByTestId('trade-run'));
     fireEvent.click(screen.getByTestId('trade-progress-cancel'));
-    expect(await screen.findByTestId('trade-progress-cancelled')).toBeInTheDocument();
+    expect(await screen.findByTestId('trade-progress-cancelled', {}, { timeout: 15000 })).toBeInTheDocument();
     expect(screen.queryByTestId('trade-table')).toBeNull();
   });
 
@@ -181,7 +181,7 @@ describe('CompareView', () => {
     };
     renderWithStudy(<CompareView live={live()} chartSize={TEST_CHART} />, demoState(), cannedClient(canned));
     fireEvent.click(screen.getByTestId('payload-range-run'));
-    const chart = await screen.findByTestId('chart-payload-range');
+    const chart = await screen.findByTestId('chart-payload-range', {}, { timeout: 15000 });
     expect(chart.querySelectorAll('path.recharts-curve').length).toBeGreaterThan(0);
     expect(screen.getByText('reserves carried')).toBeInTheDocument();
   });

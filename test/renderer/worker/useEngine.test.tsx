@@ -56,7 +56,7 @@ describe('useLiveStudy', () => {
     expect(client.runs).toHaveLength(0);
     rerender({ i: { ...first } });
     rerender({ i: { ...first } });
-    await waitFor(() => expect(client.runs).toHaveLength(1));
+    await waitFor(() => expect(client.runs).toHaveLength(1), { timeout: 15000 });
     expect(REFLY_DELAY_MS).toBeGreaterThan(0);
     expect(result.current.running).toBe(true);
     await act(async () => client.runs[0]!.resolve({ ok: true, value: snapshot(1) }));
@@ -70,13 +70,13 @@ describe('useLiveStudy', () => {
     const client = manualClient();
     const first = inputs();
     const { result, rerender } = renderHook(({ i }) => useLiveStudy(i), { wrapper: wrapper(client), initialProps: { i: first } });
-    await waitFor(() => expect(client.runs).toHaveLength(1));
+    await waitFor(() => expect(client.runs).toHaveLength(1), { timeout: 15000 });
     await act(async () => client.runs[0]!.resolve({ ok: true, value: snapshot(1) }));
 
     rerender({ i: { ...first } });
-    await waitFor(() => expect(client.runs).toHaveLength(2));
+    await waitFor(() => expect(client.runs).toHaveLength(2), { timeout: 15000 });
     rerender({ i: { ...first } });
-    await waitFor(() => expect(client.runs).toHaveLength(3));
+    await waitFor(() => expect(client.runs).toHaveLength(3), { timeout: 15000 });
     expect(result.current.stale).toBe(true);
     const failure = { kind: 'analysis' as const, code: 'x', message: 'no' };
     await act(async () => client.runs[2]!.resolve({ ok: false, failure }));
@@ -93,7 +93,7 @@ describe('useLiveStudy', () => {
     const first = inputs();
     const issues = [{ path: 'airframe.weights.maxZeroFuel', value: '1', expected: 'x', message: 'too heavy' }];
     const { result, rerender } = renderHook(({ i, b }) => useLiveStudy(i, b), { wrapper: wrapper(client), initialProps: { i: first, b: [] as typeof issues } });
-    await waitFor(() => expect(client.runs).toHaveLength(1));
+    await waitFor(() => expect(client.runs).toHaveLength(1), { timeout: 15000 });
     await act(async () => client.runs[0]!.resolve({ ok: true, value: snapshot(1) }));
     rerender({ i: { ...first }, b: issues });
     await new Promise((r) => setTimeout(r, REFLY_DELAY_MS * 2));
@@ -135,7 +135,7 @@ describe('useEngineJob', () => {
     expect(result.current.state.status).toBe('running');
     act(() => result.current.cancel());
     expect(client.runs[1]!.cancelled).toBe(true);
-    await waitFor(() => expect(result.current.state).toEqual({ status: 'cancelled' }));
+    await waitFor(() => expect(result.current.state).toEqual({ status: 'cancelled' }), { timeout: 15000 });
   });
 
   it('cancels its run when the view goes away', () => {
