@@ -3,35 +3,44 @@
  * report (print only) and the safety notice. Views live in renderer/views/,
  * state in renderer/state/, the engine runs in renderer/worker/.
  *
- * Stable data-testid attributes for end-to-end tests:
- *   shell:    safety-notice, view-tab-<id>, view-<id>, unit-system-toggle,
- *             command-<open|openDemo|save|saveAs|importDeck|exportHistory|exportLegs|print|undo|redo>,
- *             app-message, open-issues, document-name, print-report,
- *             recovery-offer, recovery-restore, recovery-discard
- *   results:  headline-<block-fuel|block-time|trip-fuel|reserve-fuel|tow|lw|zfw|distance>,
- *             mission-status, results-stale, results-failure, results-waiting,
- *             chart-altitude, chart-mass, legs-table, legs-row-<n>, caution-list,
- *             caution-list-empty, caution-<n>, highlight-note
- *   airframe: field-oew, field-mzfw, field-mtow, field-mlw, field-max-fuel, field-wing-area,
- *             field-vmo, field-mmo, field-cd0-mach-<n>, field-cd0-<n>, cd0-add-row, cd0-remove-<n>,
- *             induced-kind, field-aspect-ratio, field-oswald, field-k-mach-<n>, field-k-<n>,
- *             field-cl-min-drag, field-cd-increment, compressibility-kind, field-sweep,
- *             field-thickness, field-korn-factor, chart-polar, project-issues
- *   engine:   command-importDeck, engine-import-deck, deck-errors, deck-error-<n>, deck-summary,
- *             lapse-rating, field-engine-count, field-bleed, field-power-extraction, field-c-ram,
- *             chart-thrust-lapse, chart-tsfc
- *   inlets:   active-inlet, inlet-<n>, field-inlet-<n>-capture ..., chart-recovery,
- *             chart-spillage, chart-inlet-mach
- *   mission:  leg-<n>, leg-<n>-kind, leg-<n>-up, leg-<n>-down, leg-<n>-duplicate, leg-<n>-remove,
- *             leg-add-kind, leg-add, field-leg-<n>-<field>, reserves-preset, solve-mode,
- *             field-payload, field-range, field-tow
- *   cautions: caution-limit-<key>, caution-limit-<key>-reset, field-caution-<key>
- *   crossover: field-crossover-altitude, field-crossover-mass, crossover-rating,
- *             crossover-all-inlets, chart-crossover, crossover-markers, crossover-message
- *   compare:  compare-inlet-a, compare-inlet-b, compare-run, compare-progress(-cancel),
- *             compare-design-name-<0|1>, compare-table, chart-breakdown,
- *             payload-range-run, payload-range-progress(-cancel), chart-payload-range,
- *             trade-run, trade-progress(-cancel), trade-table
+ * Stable data-testid attributes for end-to-end tests (<n> counts from 0):
+ *   shell:     safety-notice, view-tab-<id>, view-<id> (ids in state/viewNames.ts), unit-system-toggle
+ *              (values si | customary), command-<open|openDemo|save|saveAs|importDeck|exportHistory|
+ *              exportLegs|print|undo|redo>, document-name, app-message, open-issues,
+ *              recovery-offer, recovery-restore, recovery-discard, print-report
+ *   fields:    every project field is an <input> with an inline message `<field id>-error` when its
+ *              text is refused; project-issues lists rules the project breaks on the editor views
+ *   results:   headline-<block-fuel|block-time|trip-fuel|reserve-fuel|tow|lw|zfw|distance>,
+ *              mission-status, results-stale, results-failure, results-waiting, chart-altitude,
+ *              chart-mass, legs-table, legs-row-<n>, caution-list, caution-list-empty, caution-<n>,
+ *              highlight-note
+ *   airframe:  field-oew, field-mzfw, field-mtow, field-mlw, field-max-fuel, field-wing-area,
+ *              field-vmo, field-mmo, induced-kind, field-aspect-ratio, field-oswald, field-cl-min-drag,
+ *              field-cd-increment, compressibility-kind, field-sweep, field-thickness,
+ *              field-korn-factor, chart-polar; tables cd0 | k | buffet | clmax: <t>-table,
+ *              field-<t>-mach-<n>, field-<t>-<n>, <t>-add-row, <t>-remove-<n>
+ *   engine:    engine-import-deck, deck-errors, deck-error-<n>, engine-failure, deck-summary,
+ *              field-engine-count, field-bleed, field-power-extraction, field-c-ram, field-sls-*,
+ *              field-throttle-ratio, lapse-rating, chart-thrust-lapse, chart-tsfc
+ *   inlets:    active-inlet, inlet-<n>, field-inlet-<n>-<capture|throat|fan-face|diffuser-loss|
+ *              lip-suction|external-drag|weight>, inlet-<n>-recovery table, chart-recovery,
+ *              chart-spillage, chart-inlet-mach or inlet-mach-none
+ *   mission:   solve-mode, field-payload, field-range, field-tow, reserves-preset, field-contingency,
+ *              field-min-contingency, field-en-route-fraction, field-final-reserve, field-extra-fuel,
+ *              alternate-toggle, field-alternate-<distance|altitude|mach|elevation>,
+ *              field-mission-isa, field-mission-wind, leg-<n>, leg-<n>-<kind|name|up|down|duplicate|
+ *              remove>, field-leg-<n>-<time|fuel|fuel-flow|to-altitude|altitude|mach|distance|...>,
+ *              leg-add-kind, leg-add
+ *   cautions:  caution-limit-<key>, field-caution-<key>, caution-limit-<key>-reset, caution-fixed
+ *   crossover: field-crossover-altitude, field-crossover-mass, crossover-rating, crossover-all-inlets,
+ *              crossover-message, chart-crossover, crossover-markers, crossover-failure
+ *   compare:   compare-inlet-a, compare-inlet-b, compare-run, compare-progress(-cancel|-cancelled),
+ *              compare-failure, compare-table, compare-design-name-<0|1>, compare-diff-block-fuel,
+ *              chart-breakdown, compare-breakdown, payload-range-run, payload-range-progress(...),
+ *              payload-range-failure, chart-payload-range, trade-run, trade-progress(...),
+ *              trade-failure, trade-table
+ *   report:    report-notice, report-headline-<id>, report-chart-<altitude|mass|polar|lapse>,
+ *              report-legs-table, report-cautions
  */
 import { useMemo, useState } from 'react';
 import type { Bridge } from './bridge/bridge';
