@@ -29,17 +29,18 @@ export function checkInletName(project: Project, name: string, option: string, f
  * Reads the project `file` (relative to the working folder) and its deck and
  * builds the mission input for `inletName` (default the active inlet).
  * Returns the exit code 1 after printing the problems when the project
- * cannot be used; an unknown inlet name is a UsageError.
+ * cannot be used; an unknown inlet name is a UsageError naming `option`,
+ * the command-line option it came from.
  */
-export async function loadVerbProject(file: string, inletName: string | undefined, io: CliIo): Promise<LoadedProject | number> {
-  if (inletName !== undefined && inletName.trim() === '') throw new UsageError('--inlet: give the name of an inlet design');
+export async function loadVerbProject(file: string, inletName: string | undefined, io: CliIo, option = '--inlet'): Promise<LoadedProject | number> {
+  if (inletName !== undefined && inletName.trim() === '') throw new UsageError(`${option}: give the name of an inlet design`);
   const read = await readProjectFile(resolve(io.cwd, file));
   if (!read.ok) {
     io.err(formatLoadFailure(read.error));
     return 1;
   }
   const { project, projectPath } = read.value;
-  if (inletName !== undefined) checkInletName(project, inletName, '--inlet', file);
+  if (inletName !== undefined) checkInletName(project, inletName, option, file);
   const loaded = await buildFromProject(projectPath, project, inletName === undefined ? {} : { inletName });
   if (!loaded.ok) {
     io.err(formatLoadFailure(loaded.error));

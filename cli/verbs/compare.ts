@@ -53,7 +53,7 @@ analysis failed.
       if (parts[0] === parts[1]) throw new UsageError(`--inlets: give two different designs (got ${JSON.stringify(parts[0])} twice)`);
       names = [parts[0]!, parts[1]!];
     }
-    const loadedA = await loadVerbProject(file, names?.[0], io);
+    const loadedA = await loadVerbProject(file, names?.[0], io, '--inlets');
     if (typeof loadedA === 'number') return loadedA;
     const { project, projectPath, deck } = loadedA;
     if (names === null) {

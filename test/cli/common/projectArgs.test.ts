@@ -29,6 +29,7 @@ describe('loadVerbProject', () => {
     const { cli } = io();
     await expect(loadVerbProject(DEMO_PROJECT, 'scoop', cli)).rejects.toThrow(/"scoop" is not an inlet design .* it has "long pitot", "short"/);
     await expect(loadVerbProject(DEMO_PROJECT, ' ', cli)).rejects.toThrow('--inlet: give the name of an inlet design');
+    await expect(loadVerbProject(DEMO_PROJECT, 'scoop', cli, '--inlets')).rejects.toThrow(/^--inlets: "scoop"/);
   });
 
   it('loadVerbProject prints why a project cannot be read and returns exit code 1', async () => {
