@@ -44,6 +44,9 @@ export function cruiseMach(input: MissionInput, speed: CruiseSpeed, altitude_m: 
   return longRangeMach(input, altitude_m, mass_kg, isaDev_K);
 }
 
+/** Time (s) to which the start of a step climb is located (the fuel it moves is of order fuel flow x 1 s x the few-% flow change). */
+export const STEP_DECISION_S = 1;
+
 /** Mass nodes of the cruise-Mach table. */
 const MACH_TABLE_NODES = 5;
 
@@ -194,6 +197,8 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
       const minRate = Math.max(ctx.input.cautionSettings.minResidualClimbRate_m_s, 1e-3);
       extra.push({
         stop: 'step_climb_due',
+        // When to step is a decision, not a state to hit: located to a second, not to 1e-7 s (STEP_DECISION_S).
+        timeTolerance_s: STEP_DECISION_S,
         g: (y, s) => {
           const m = y[S_MASS];
           // Specific range here from the sample the integrator just evaluated (same thrust = drag point as

@@ -92,7 +92,7 @@ function locateEvent(
     const guess = illinois((tau) => event.g(hermite(y, k1, end.state, end.derivative, h, tau / h), end.sample), gStart, h, 0);
     return refineOnStep(onStepState, guess, gStart, event.g(end.state, end.sample), h);
   }
-  return illinois(onStep, gStart, h, 0);
+  return illinois(onStep, gStart, h, 0, event.timeTolerance_s ?? 0);
 }
 
 /**
@@ -119,14 +119,18 @@ function refineOnStep(onStep: (tau: number) => number, guess: number, gStart: nu
   return illinois(onStep, gStart, h, 0);
 }
 
-/** Illinois method for the first zero of `at` on (lo, h] with at(lo) = gLo < 0; returns the bracket end where g >= 0. */
-function illinois(at: (tau: number) => number, gLo: number, h: number, lo: number): number {
+/**
+ * Illinois method for the first zero of `at` on (lo, h] with at(lo) = gLo < 0, to a bracket of 1e-10 h or
+ * `tolerance` (s) if larger; returns the bracket end where g >= 0.
+ */
+function illinois(at: (tau: number) => number, gLo: number, h: number, lo: number, tolerance = 0): number {
+  const width = Math.max(1e-10 * h, tolerance);
   let a = lo;
   let ga = gLo;
   let b = h;
   let gb = at(b);
   let side = 0;
-  for (let iter = 0; iter < 80 && b - a > 1e-10 * h; iter++) {
+  for (let iter = 0; iter < 80 && b - a > width; iter++) {
     let c = b - (gb * (b - a)) / (gb - ga);
     if (!(c > a && c < b)) c = 0.5 * (a + b);
     const gc = at(c);

@@ -67,6 +67,11 @@ export interface SegmentEvent {
   readonly stop: SegmentStop;
   /** True when g reads only the state (not the sample): the event is then located on the step's cubic Hermite interpolant. */
   readonly stateOnly?: boolean;
+  /**
+   * Time (s) to which the event is located when that is coarser than the integrator's default (1e-10 of the step):
+   * for a decision such as a step climb, whose exact second does not matter, so each trial (a full RK4 step) is saved.
+   */
+  readonly timeTolerance_s?: number;
   g(state: StateVector, sample: FlightSample): number;
 }
 
