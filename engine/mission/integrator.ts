@@ -30,14 +30,19 @@ export type SampleSink = (state: StateVector, sample: FlightSample) => void;
 
 const MAX_STEPS = 20000;
 
+/** Right-hand side at a stage point: the segment's sample-free derivative when it has one. */
+function stageDerivative(segment: Segment, y: StateVector): Float64Array {
+  return segment.derivative !== undefined ? segment.derivative(y) : segment.evaluate(y).derivative;
+}
+
 function rk4Step(segment: Segment, y: StateVector, k1: Float64Array, h: number): StateVector {
   const tmp = new Float64Array(STATE_SIZE);
   for (let i = 0; i < STATE_SIZE; i++) tmp[i] = y[i] + 0.5 * h * k1[i];
-  const k2 = segment.evaluate(tmp).derivative;
+  const k2 = stageDerivative(segment, tmp);
   for (let i = 0; i < STATE_SIZE; i++) tmp[i] = y[i] + 0.5 * h * k2[i];
-  const k3 = segment.evaluate(tmp).derivative;
+  const k3 = stageDerivative(segment, tmp);
   for (let i = 0; i < STATE_SIZE; i++) tmp[i] = y[i] + h * k3[i];
-  const k4 = segment.evaluate(tmp).derivative;
+  const k4 = stageDerivative(segment, tmp);
   const out = new Float64Array(STATE_SIZE);
   for (let i = 0; i < STATE_SIZE; i++) out[i] = y[i] + (h / 6) * (k1[i] + 2 * k2[i] + 2 * k3[i] + k4[i]);
   return out;

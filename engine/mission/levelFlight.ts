@@ -6,9 +6,10 @@
  * slow climb's potential-energy term (flight-path angle about 1e-4 rad).
  */
 import type { RatingName } from '../propulsion/propulsionModel';
-import { airPoint, fuelExhaustedG, makeSample, ratingPoint, thrustPoint } from './flightPoint';
+import type { PartPowerPoint } from '../propulsion/propulsionModel';
+import { airPoint, fuelExhaustedG, makeSample, ratingPoint, thrustPoint, type AirPoint } from './flightPoint';
 import type { LegTarget, MissionContext } from './missionContext';
-import { S_AIR, S_MASS, S_TIME, STATE_SIZE, type Segment, type SegmentEvent } from './missionState';
+import { S_AIR, S_MASS, S_TIME, STATE_SIZE, type Evaluation, type Segment, type SegmentEvent, type StateVector } from './missionState';
 
 export interface LevelFlightSpec {
   /** Pressure altitude (m) as a function of mass (kg); constant for level flight. */
@@ -29,19 +30,29 @@ export interface LevelFlightSpec {
 export function makeLevelSegment(ctx: MissionContext, target: LegTarget, spec: LevelFlightSpec): Segment {
   const input = ctx.input;
   const dev = target.env.isaDev_K;
-  const evaluate: Segment['evaluate'] = (y) => {
-    const m = y[S_MASS];
-    const h = spec.altitudeOf(m);
-    const mach = spec.machOf(h, m);
-    const at = airPoint(input, h, mach, m, dev);
-    const engine = thrustPoint(input, at, dev, at.drag.drag_N, spec.ceiling);
-    const available = ratingPoint(input, at, dev, spec.ceiling).thrust_N;
+  const derivativeOf = (at: AirPoint, engine: PartPowerPoint): Evaluation['derivative'] => {
     const d = new Float64Array(STATE_SIZE);
     d[0] = 1;
     d[1] = at.tas_m_s;
     d[2] = at.tas_m_s + target.env.wind_m_s;
     d[S_MASS] = -engine.fuelFlow_kg_s;
-    return { derivative: d, sample: makeSample(at, available, engine.thrust_N, engine.fuelFlow_kg_s, 0, engine) };
+    return d;
+  };
+  const pointOf = (y: StateVector): { at: AirPoint; engine: PartPowerPoint } => {
+    const m = y[S_MASS];
+    const h = spec.altitudeOf(m);
+    const at = airPoint(input, h, spec.machOf(h, m), m, dev);
+    return { at, engine: thrustPoint(input, at, dev, at.drag.drag_N, spec.ceiling) };
+  };
+  const evaluate: Segment['evaluate'] = (y) => {
+    const { at, engine } = pointOf(y);
+    const available = ratingPoint(input, at, dev, spec.ceiling).thrust_N;
+    return { derivative: derivativeOf(at, engine), sample: makeSample(at, available, engine.thrust_N, engine.fuelFlow_kg_s, 0, engine) };
+  };
+  // RK4 stages need no sample, so no thrust-available query (a full rated-thrust lookup) and no sample object.
+  const derivative = (y: StateVector): Evaluation['derivative'] => {
+    const { at, engine } = pointOf(y);
+    return derivativeOf(at, engine);
   };
   const events: SegmentEvent[] = [{ stop: 'thrust_below_drag', g: (_y, s) => s.drag_N - s.thrustAvailable_N }];
   if (spec.endAirDistance_m !== null) {
@@ -54,6 +65,6 @@ export function makeLevelSegment(ctx: MissionContext, target: LegTarget, spec: L
   }
   if (!ctx.options.allowNegativeFuel) events.push({ stop: 'fuel_exhausted', stateOnly: true, g: (y) => fuelExhaustedG(ctx.zeroFuelMass_kg, y[S_MASS]) });
   events.push(...(spec.extraEvents ?? []));
-  return { step_s: spec.step_s, evaluate, events, algebraicAltitude: spec.algebraicAltitude };
+  return { step_s: spec.step_s, evaluate, derivative, events, algebraicAltitude: spec.algebraicAltitude };
 }
 

@@ -80,6 +80,11 @@ export interface Segment {
   /** Fixed step (s). */
   readonly step_s: number;
   evaluate(state: StateVector): Evaluation;
+  /**
+   * Optional cheaper right-hand side for the RK4 stages, whose samples nobody reads: must return exactly
+   * `evaluate(state).derivative`.
+   */
+  derivative?(state: StateVector): Float64Array;
   readonly events: readonly SegmentEvent[];
   /** When true the altitude is algebraic (cruise-climb): the state takes the sample's altitude after each step. */
   readonly algebraicAltitude?: boolean;
