@@ -1,6 +1,6 @@
 /**
  * The INVENTED demo engine: a parametric high-bypass turbofan (bypass ratio
- * about 4.5) sized for an invented mid-size business twinjet, about 30 kN
+ * about 4.5) sized for an invented mid-size business twinjet, about 36 kN
  * sea-level static thrust per engine. Not any real engine's data.
  * fixtures/demo/demo-engine.deck.csv is this deck written by
  * scripts/writeDemoDeck.ts.
@@ -26,12 +26,12 @@ const MACH_RANGES: readonly (readonly [number, number])[] = [
 
 export const DEMO_ENGINE_SPEC: ParametricDeckSpec = {
   kind: 'highBypassTurbofan',
-  title: 'Blockwise demo turbofan, 30 kN class (invented, parametric)',
-  seaLevelStaticThrust_N: 30000,
+  title: 'Blockwise demo turbofan, 36 kN class (invented, parametric)',
+  seaLevelStaticThrust_N: 36000,
   throttleRatio: 1.05,
   // 0.43 lb/(lbf h) at sea-level static, an invented value for bypass ratio ~4.5.
   tsfcSeaLevelStatic_kg_N_s: (0.43 * POUND_KG) / (POUND_FORCE_N * 3600),
-  seaLevelStaticAirflow_kg_s: 95,
+  seaLevelStaticAirflow_kg_s: 114,
   ratings: { takeoff: 1, maxContinuous: 0.95, maxClimb: 0.92, maxCruise: 0.88, flightIdle: 0.06 },
   partPowerFuelIntercept: 0.1,
   grid: {

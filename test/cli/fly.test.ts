@@ -142,7 +142,7 @@ describe('blockwise fly options', () => {
   });
 
   it('fly exits 3 and still prints the result when the mission ends with a status other than ok', async () => {
-    // Climb and cruise at 45,000 ft at this weight: beyond what the invented 30 kN engines can reach.
+    // Climb and cruise at 45,000 ft at this weight: beyond what the invented 36 kN engines can reach.
     const doc = JSON.parse(readFileSync(join(repoRoot, DEMO), 'utf8')) as Record<string, any>; // eslint-disable-line @typescript-eslint/no-explicit-any
     doc.engine.deck.path = join(repoRoot, 'fixtures/demo/demo-engine.deck.csv');
     doc.mission.legs[2].toAltitude = '45000 ft';

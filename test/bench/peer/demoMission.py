@@ -442,6 +442,13 @@ class Flight:
                     thr, _ = ac.at_rating(up, mach, 'maxClimb')
                     rate = (thr - ac.drag(up, mach, m)) * v * share_factor('mach', mach, lapse) / (m * G0)
                     return min((sr_up - sr_now) / sr_now, (rate - ac.min_rate) / ac.min_rate)
+            if step_event is not None and step_event(0.0, y) > 0:
+                # The step already pays at the start of this level (solve_ivp's
+                # events only see sign changes): climb now.
+                y, _ = self.climb_segment(y, 'mach', mach, h + step)
+                if y[1] >= end_x:
+                    return y
+                continue
             y, ev = self.level(y, mach, end_x=end_x, extra_event=step_event)
             if ev is not step_event:
                 y[1] = end_x
@@ -501,6 +508,7 @@ class DemoMission:
         self.range = si(solve['range'])
         self.zfw = self.ac.oew + self.payload
         mission = pr['mission']
+        self.dest_elev = si(mission.get('destinationElevation', 0))
         if si(mission.get('isaDeviation', 0)) != 0 or si(mission.get('wind', 0)) != 0:
             raise ValueError('this script models ISA and still air only (mission.isaDeviation and mission.wind must be 0)')
         if rs['preset'] != 'icaoAnnex6' or solve['mode'] != 'payloadRange':
@@ -532,6 +540,7 @@ class DemoMission:
         y = end.copy()
         y[0] += si(lg['approach']['time'])
         y[3] -= si(lg['approach']['fuel'])
+        y[2] = self.dest_elev  # the approach allowance ends on the destination runway
         landing = y.copy()
         taxi_in = self.idle_fuel_flow(landing[2]) * si(lg['taxiIn']['time'])
         block_in = landing.copy()

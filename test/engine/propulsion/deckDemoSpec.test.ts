@@ -21,9 +21,9 @@ describe('demo engine deck', () => {
     expect(deck.title).toMatch(/invented/);
     expect(Object.keys(deck.ratings).sort()).toEqual(['flightIdle', 'maxClimb', 'maxContinuous', 'maxCruise', 'takeoff']);
     expect(deck.referenceRecovery).toEqual({ kind: 'milE5008b' });
-    // about 30 kN sea-level static thrust per engine at takeoff (the invented spec; 7 significant digits in the file)
+    // about 36 kN sea-level static thrust per engine at takeoff (the invented spec; 7 significant digits in the file)
     const slsto = expectOk(lookupDeck(deck, { altitude_m: 0, mach: 0, isaDev_K: 0 }, 1), 'SLS');
-    expectClose(slsto.thrust_N, 30000, { rel: 1e-6 }, 'demo spec');
+    expectClose(slsto.thrust_N, 36000, { rel: 1e-6 }, 'demo spec');
     // altitudes 0..51000 ft
     expect(deck.grid.altitudes_m[0]).toBe(0);
     expectClose(deck.grid.altitudes_m.at(-1)!, 51000 * 0.3048, { rel: 1e-12 }, 'demo grid');
