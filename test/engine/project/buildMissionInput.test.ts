@@ -108,7 +108,7 @@ describe('buildMissionInput mission', () => {
     expect(takeoff).toMatchObject({ time_s: 60 });
     if (takeoff?.kind === 'takeoff') expectClose(takeoff.fuel_kg!, 150 * LB, { rel: 1e-15 }, 'NIST SP 811 lb');
     if (climb?.kind !== 'climb' || cruise?.kind !== 'cruise' || descent?.kind !== 'descent') throw new Error('leg kinds');
-    expectClose(climb.toAltitude_m, 33000 * FT, { rel: 1e-15 }, 'NIST SP 811 ft');
+    expectClose(climb.toAltitude_m, 37000 * FT, { rel: 1e-15 }, 'NIST SP 811 ft');
     expectClose(climb.schedule.lowCas_m_s, 250 * KT, { rel: 1e-15 }, 'NIST SP 811 kt');
     expectClose(climb.schedule.lowAltitudeLimit_m, 10000 * FT, { rel: 1e-15 }, 'NIST SP 811 ft');
     expectClose(climb.schedule.cas_m_s, 280 * KT, { rel: 1e-15 }, 'NIST SP 811 kt');
