@@ -14,7 +14,7 @@ import { legFailed, legOk, type LegOutcome } from './legOutcome';
 import { flyLevelSpeedChange } from './levelSpeedChange';
 import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
 import { machOfCas, missionAir } from './missionAtmosphere';
-import { S_ALT, S_MASS, S_TAS, STATE_SIZE, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
+import { S_ALT, S_MASS, S_TAS, STATE_SIZE, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
 import { schedulePhases } from './speedSchedule';
 
 /** Climb rate (m/s) below which a climb counts as stalled: 100 ft/min, the service-ceiling rate (common practice). */
@@ -31,7 +31,7 @@ export function makeClimbSegment(
 ): Segment {
   const input = ctx.input;
   const dev = target.env.isaDev_K;
-  const evaluate: Segment['evaluate'] = (y) => {
+  const pointOf = (y: StateVector) => {
     const h = y[S_ALT];
     const air = missionAir(h, dev);
     const mach = held === 'mach' ? value : machOfCas(value, air.pressure_Pa);
@@ -48,14 +48,20 @@ export function makeClimbSegment(
     d[S_ALT] = rate;
     d[S_MASS] = -th.fuelFlow_kg_s;
     d[S_TAS] = 0;
+    return { d, at, th, rate };
+  };
+  const evaluate: Segment['evaluate'] = (y) => {
+    const { d, at, th, rate } = pointOf(y);
     return { derivative: d, sample: makeSample(at, th.thrust_N, th.thrust_N, th.fuelFlow_kg_s, rate, th) };
   };
+  // RK4 stages need no sample.
+  const derivative = (y: StateVector): Evaluation['derivative'] => pointOf(y).d;
   const events: SegmentEvent[] = [
     { stop: 'altitude_reached', stateOnly: true, g: (y) => y[S_ALT] - toAltitude_m },
     { stop: 'climb_stalled', g: (_y, s) => CLIMB_STALL_RATE_M_S - s.climbRate_m_s },
   ];
   if (!ctx.options.allowNegativeFuel) events.push({ stop: 'fuel_exhausted', stateOnly: true, g: (y) => fuelExhaustedG(ctx.zeroFuelMass_kg, y[S_MASS]) });
-  return { step_s: BASE_STEP_S.climb * ctx.options.stepScale, evaluate, events };
+  return { step_s: BASE_STEP_S.climb * ctx.options.stepScale, evaluate, derivative, events };
 }
 
 /** Flies a whole climb from the current altitude to `toAltitude_m` along `schedule` at `rating`. */

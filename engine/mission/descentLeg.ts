@@ -14,7 +14,7 @@ import { legFailed, legOk, type LegOutcome } from './legOutcome';
 import { flyLevelSpeedChange } from './levelSpeedChange';
 import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
 import { G0_M_S2, machOfCas, missionAir } from './missionAtmosphere';
-import { S_ALT, S_MASS, S_TAS, STATE_SIZE, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
+import { S_ALT, S_MASS, S_TAS, STATE_SIZE, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
 import { schedulePhases } from './speedSchedule';
 import { appendCaution } from './timeHistoryBuilder';
 import { CAUTION_CATALOGUE } from '../cautions/cautionCatalogue';
@@ -35,7 +35,7 @@ function makeDescentSegment(
 ): Segment {
   const input = ctx.input;
   const dev = target.env.isaDev_K;
-  const evaluate: Segment['evaluate'] = (y) => {
+  const pointOf = (y: StateVector, withSample: boolean) => {
     const h = y[S_ALT];
     const m = y[S_MASS];
     const air = missionAir(h, dev);
@@ -58,7 +58,8 @@ function makeDescentSegment(
         denominator > 0 ? at.drag.drag_N + (m * G0_M_S2 * (air.temperature_K / air.isaTemperature_K) * rate) / denominator : at.drag.drag_N;
       engine = thrustPoint(input, at, dev, required, 'maxClimb');
       thrust = engine.thrust_N;
-      thrustAvailable = ratingPoint(input, at, dev, 'maxClimb').thrust_N;
+      // Thrust available is only for the sample (the RK4 stages skip it).
+      thrustAvailable = withSample ? ratingPoint(input, at, dev, 'maxClimb').thrust_N : Number.NaN;
       if (engine.limit === 'below_idle') onBelowIdle(y[0], required, engine.thrust_N);
     }
     const geometric = (rate * air.temperature_K) / air.isaTemperature_K;
@@ -69,14 +70,21 @@ function makeDescentSegment(
     d[2] = horizontal + target.env.wind_m_s;
     d[S_ALT] = rate;
     d[S_MASS] = -engine.fuelFlow_kg_s;
-    return { derivative: d, sample: makeSample(at, thrustAvailable, thrust, engine.fuelFlow_kg_s, rate, engine) };
+    return { derivative: d, sample: withSample ? makeSample(at, thrustAvailable, thrust, engine.fuelFlow_kg_s, rate, engine) : null };
   };
+  const evaluate: Segment['evaluate'] = (y) => {
+    const { derivative, sample } = pointOf(y, true);
+    return { derivative, sample: sample! };
+  };
+  // RK4 stages need no sample.
+  const derivative = (y: StateVector): Evaluation['derivative'] => pointOf(y, false).derivative;
+
   const events: SegmentEvent[] = [
     { stop: 'altitude_reached', stateOnly: true, g: (y) => toAltitude_m - y[S_ALT] },
     { stop: 'descent_stalled', g: (_y, s) => s.climbRate_m_s + DESCENT_STALL_RATE_M_S },
   ];
   if (!ctx.options.allowNegativeFuel) events.push({ stop: 'fuel_exhausted', stateOnly: true, g: (y) => fuelExhaustedG(ctx.zeroFuelMass_kg, y[S_MASS]) });
-  return { step_s: BASE_STEP_S.descent * ctx.options.stepScale, evaluate, events };
+  return { step_s: BASE_STEP_S.descent * ctx.options.stepScale, evaluate, derivative, events };
 }
 
 /** Flies a whole descent from the current altitude to `toAltitude_m`. */
