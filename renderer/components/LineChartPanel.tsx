@@ -1,5 +1,6 @@
 import { CartesianGrid, Legend, Line, LineChart, ReferenceDot, ReferenceLine, Tooltip, XAxis, YAxis } from 'recharts';
 import type { SeriesDef } from '../charts/polarSeries';
+import { niceTicks, numericExtent, type NiceAxis } from '../charts/niceTicks';
 import { tickText } from '../charts/seriesKeys';
 
 const PALETTE = ['#1f5fa8', '#c2571a', '#2e8540', '#8a3fa0', '#a8871f', '#1f9aa8', '#a81f4a', '#555555', '#6b8e23', '#d2691e'];
@@ -29,18 +30,40 @@ export interface LineChartPanelProps {
   readonly secondAxisLabel?: string;
 }
 
+/** recharts props for an axis with round ticks (Heckbert's nice numbers), or its automatic axis when there is no data. */
+function axisTicks(axis: NiceAxis | null): { ticks?: number[]; domain: [number, number] | ['auto', 'auto'] } {
+  return axis === null ? { domain: ['auto', 'auto'] } : { ticks: [...axis.ticks], domain: [axis.domain[0], axis.domain[1]] };
+}
+
+/**
+ * React keys for chart marks: label, position and the mark's index, so two
+ * inlets marking the same point at the same Mach do not share a key.
+ */
+export function markKeys(marks: readonly { readonly x: number; readonly label: string }[]): string[] {
+  return marks.map((m, i) => `${m.label}-${m.x}-${i}`);
+}
+
 /** A titled line chart with fixed width and height (recharts needs a size without layout). */
 export function LineChartPanel(props: LineChartPanelProps) {
   const size = props.size ?? DEFAULT_CHART_SIZE;
   const second = new Set(props.secondAxisKeys ?? []);
+  const marks = props.verticalMarks ?? [];
+  const points = props.points ?? [];
+  const leftKeys = props.series.filter((s) => !second.has(s.key)).map((s) => s.key);
+  const rightKeys = props.series.filter((s) => second.has(s.key)).map((s) => s.key);
+  const xAxis = niceTicks(...numericExtent(props.data, [props.xKey], [...marks.map((m) => m.x), ...points.map((p) => p.x)]));
+  const leftAxis = niceTicks(...numericExtent(props.data, leftKeys, points.map((p) => p.y)));
+  const rightAxis = niceTicks(...numericExtent(props.data, rightKeys));
+  const markKey = markKeys(marks);
+  const pointKey = markKeys(points);
   return (
     <figure className="chart" data-testid={props.testId}>
       <figcaption>{props.title}</figcaption>
       <LineChart width={size.width} height={size.height} data={props.data as object[]} margin={{ top: 8, right: 24, bottom: 8, left: 16 }}>
         <CartesianGrid strokeDasharray="3 3" />
-        <XAxis dataKey={props.xKey} type="number" domain={['auto', 'auto']} tickFormatter={tickText} label={{ value: props.xLabel, position: 'insideBottom', offset: -12 }} />
-        <YAxis yAxisId="left" label={{ value: props.yLabel, angle: -90, position: 'insideLeft' }} domain={['auto', 'auto']} tickFormatter={tickText} width={64} />
-        {second.size > 0 ? <YAxis yAxisId="right" orientation="right" label={{ value: props.secondAxisLabel ?? '', angle: 90, position: 'insideRight' }} /> : null}
+        <XAxis dataKey={props.xKey} type="number" {...axisTicks(xAxis)} interval={0} tickFormatter={tickText} label={{ value: props.xLabel, position: 'insideBottom', offset: -12 }} />
+        <YAxis yAxisId="left" label={{ value: props.yLabel, angle: -90, position: 'insideLeft' }} {...axisTicks(leftAxis)} interval={0} tickFormatter={tickText} width={64} />
+        {second.size > 0 ? <YAxis yAxisId="right" orientation="right" label={{ value: props.secondAxisLabel ?? '', angle: 90, position: 'insideRight' }} {...axisTicks(rightAxis)} interval={0} tickFormatter={tickText} width={64} /> : null}
         <Tooltip formatter={(v) => (typeof v === 'number' ? tickText(v) : String(v))} labelFormatter={(v) => (typeof v === 'number' ? tickText(v) : String(v))} />
         <Legend verticalAlign="bottom" wrapperStyle={{ paddingTop: 28, fontSize: 11 }} />
         {props.series.map((s, i) => (
@@ -57,11 +80,11 @@ export function LineChartPanel(props: LineChartPanelProps) {
             connectNulls={false}
           />
         ))}
-        {(props.verticalMarks ?? []).map((m) => (
-          <ReferenceLine key={`${m.label}-${m.x}`} yAxisId="left" x={m.x} stroke="#888" strokeDasharray="2 2" label={{ value: m.label, position: 'insideTopLeft', fontSize: 10, angle: -90, dx: 4, dy: 70 }} />
+        {marks.map((m, i) => (
+          <ReferenceLine key={markKey[i]} yAxisId="left" x={m.x} stroke="#888" strokeDasharray="2 2" label={{ value: m.label, position: 'insideTopLeft', fontSize: 10, angle: -90, dx: 4, dy: 70 }} />
         ))}
-        {(props.points ?? []).map((p) => (
-          <ReferenceDot key={`${p.label}-${p.x}`} yAxisId="left" x={p.x} y={p.y} r={4} fill="#c00" stroke="none" />
+        {points.map((p, i) => (
+          <ReferenceDot key={pointKey[i]} yAxisId="left" x={p.x} y={p.y} r={4} fill="#c00" stroke="none" />
         ))}
       </LineChart>
     </figure>

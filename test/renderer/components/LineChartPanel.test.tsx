@@ -1,0 +1,78 @@
+import { render, waitFor } from '@testing-library/react';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { LineChartPanel, markKeys } from '../../../renderer/components/LineChartPanel';
+
+// Two inlet designs can share a marker at the same Mach (e.g. the thrust
+// minimum where both thrust curves bottom out on the same sample); React
+// requires sibling keys to be unique (React docs, "Rules of keys": common practice).
+
+const ROWS = [
+  { mach: 0.3752, t0: 2282.4, d0: 2350.1, t1: 2270.9 },
+  { mach: 0.4501, t0: 2278.2, d0: 1900.7, t1: 2266.3 },
+  { mach: 0.5248502732003647, t0: 2290.6, d0: 1800.2, t1: 2280.1 },
+  { mach: 0.8183, t0: 2471.3, d0: 2471.3, t1: 2460.8 },
+];
+const SERIES = [
+  { key: 't0', name: 'thrust available, A' },
+  { key: 'd0', name: 'drag' },
+  { key: 't1', name: 'thrust available, B' },
+];
+const MARKS = [
+  { x: 0.4501, label: 'thrust minimum' },
+  { x: 0.4501, label: 'thrust minimum' },
+  { x: 0.8183, label: 'high crossover' },
+];
+
+afterEach(() => vi.restoreAllMocks());
+
+function tickTexts(chart: HTMLElement, axis: 'xAxis' | 'yAxis'): string[] {
+  const orientation = axis === 'xAxis' ? 'bottom' : 'left';
+  return [...chart.querySelectorAll(`text.recharts-cartesian-axis-tick-value[orientation="${orientation}"]`)].map((t) => t.textContent ?? '');
+}
+
+/** Renders the panel and waits until recharts has drawn the axes and the marks (it draws them after mounting). */
+async function renderPanel(): Promise<HTMLElement> {
+  const { getByTestId } = render(
+    <LineChartPanel
+      title="t"
+      testId="chart-test"
+      data={ROWS}
+      xKey="mach"
+      xLabel="Mach"
+      yLabel="force (lbf)"
+      series={SERIES}
+      verticalMarks={MARKS}
+      points={MARKS.map((m, i) => ({ x: m.x, y: 2278.2 - i, label: m.label }))}
+      size={{ width: 400, height: 200 }}
+    />,
+  );
+  const chart = getByTestId('chart-test');
+  await waitFor(() => expect(tickTexts(chart, 'xAxis').length).toBeGreaterThan(0), { timeout: 10_000 });
+  await waitFor(() => expect(chart.querySelectorAll('.recharts-reference-line').length).toBe(MARKS.length), { timeout: 10_000 });
+  return chart;
+}
+
+describe('LineChartPanel', () => {
+  it('markKeys gives two inlets marking the same point at the same Mach different keys', () => {
+    const keys = markKeys(MARKS);
+    expect(new Set(keys).size).toBe(MARKS.length);
+  });
+
+  it('LineChartPanel draws two equal marks without a React key warning', async () => {
+    const errors = vi.spyOn(console, 'error').mockImplementation(() => undefined);
+    const chart = await renderPanel();
+    expect(chart.querySelectorAll('.recharts-reference-dot').length).toBe(MARKS.length);
+    const keyWarnings = errors.mock.calls.filter((c) => c.map(String).join(' ').includes('same key'));
+    expect(keyWarnings).toEqual([]);
+  });
+
+  it('LineChartPanel labels the Mach axis with round ticks (no float noise)', async () => {
+    const chart = await renderPanel();
+    const xTicks = tickTexts(chart, 'xAxis');
+    // Heckbert nice numbers for 0.3752..0.8183 Mach: steps of 0.1 (test/reference/niceTicksReference.py).
+    expect(xTicks).toEqual(['0.3', '0.4', '0.5', '0.6', '0.7', '0.8', '0.9']);
+    const yTicks = tickTexts(chart, 'yAxis');
+    expect(yTicks.length).toBeGreaterThanOrEqual(3);
+    for (const t of yTicks) expect(t).toMatch(/^\d+$/);
+  });
+});
