@@ -1,5 +1,6 @@
 import { Bar, BarChart, CartesianGrid, Cell, ReferenceLine, Tooltip, XAxis, YAxis } from 'recharts';
 import type { WaterfallRow } from '../charts/compareSeries';
+import { tickText } from '../charts/seriesKeys';
 import { DEFAULT_CHART_SIZE, type ChartSize } from './LineChartPanel';
 
 /** Block-fuel breakdown as a waterfall: an invisible base bar stacked under the visible step. */
@@ -8,10 +9,11 @@ export function WaterfallChart(props: { readonly rows: readonly WaterfallRow[]; 
   return (
     <figure className="chart" data-testid="chart-breakdown">
       <figcaption>Block fuel B - A by factor ({props.unit}); positive costs fuel</figcaption>
-      <BarChart width={size.width} height={size.height} data={props.rows as WaterfallRow[]} margin={{ top: 8, right: 24, bottom: 24, left: 16 }}>
+      <BarChart width={size.width} height={size.height} data={props.rows as WaterfallRow[]} margin={{ top: 8, right: 24, bottom: 8, left: 16 }}>
         <CartesianGrid strokeDasharray="3 3" />
-        <XAxis dataKey="name" />
-        <YAxis label={{ value: props.unit, angle: -90, position: 'insideLeft' }} />
+        {/* Every factor keeps its label (recharts would skip some): angled so long names fit. */}
+        <XAxis dataKey="name" interval={0} angle={-20} textAnchor="end" height={56} tick={{ fontSize: 11 }} />
+        <YAxis label={{ value: props.unit, angle: -90, position: 'insideLeft' }} tickFormatter={tickText} width={64} />
         <Tooltip formatter={(_v, _n, item) => [(item.payload as WaterfallRow).value.toFixed(1), 'B - A']} />
         <ReferenceLine y={0} stroke="#000" />
         <Bar dataKey="base" stackId="w" fill="transparent" isAnimationActive={false} />

@@ -8,6 +8,7 @@ import { CautionList } from '../components/CautionList';
 import { HeadlineFigures } from '../components/HeadlineFigures';
 import { LegsTable } from '../components/LegsTable';
 import { LineChartPanel } from '../components/LineChartPanel';
+import { deckTitleText } from '../state/deckTitle';
 import { LEG_KIND_LABEL } from '../state/legTemplates';
 import { RESERVE_PRESET_LABEL } from '../state/reservePresets';
 import type { StudySnapshot } from '../worker/engineProtocol';
@@ -48,8 +49,7 @@ export function StudyReport(props: { readonly project: Project; readonly snapsho
           <tr>
             <td>Engine</td>
             <td>
-              {p.engine.count} x {s.deck.title}
-              {s.deck.parametric ? ' (parametric deck)' : ''}; reference recovery {s.deck.referenceRecovery}
+              {p.engine.count} x {deckTitleText(s.deck.title, s.deck.parametric)}; reference recovery {s.deck.referenceRecovery}
             </td>
           </tr>
           <tr>

@@ -9,6 +9,7 @@ import { QuantityField } from '../components/QuantityField';
 import { StaleMark } from '../components/StaleMark';
 import type { ToolbarCommand } from '../components/Toolbar';
 import { useStudy } from '../state/studyContext';
+import { deckTitleText } from '../state/deckTitle';
 import type { LiveStudy } from '../worker/useEngine';
 
 /** The deck (import, errors by line and column, grid summary), the installation, and thrust lapse and TSFC plots. */
@@ -62,8 +63,7 @@ export function EngineView(props: { readonly live: LiveStudy; readonly chartSize
         <dl className="deck-summary" data-testid="deck-summary">
           <dt>Title</dt>
           <dd>
-            {snapshot.deck.title}
-            {snapshot.deck.parametric ? ' (parametric)' : ''}
+            {deckTitleText(snapshot.deck.title, snapshot.deck.parametric)}
           </dd>
           <dt>Points</dt>
           <dd>{snapshot.deck.points}</dd>

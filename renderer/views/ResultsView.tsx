@@ -7,6 +7,7 @@ import { LegsTable } from '../components/LegsTable';
 import { LineChartPanel, type ChartSize } from '../components/LineChartPanel';
 import { StaleMark } from '../components/StaleMark';
 import { useStudy } from '../state/studyContext';
+import { deckTitleText } from '../state/deckTitle';
 import type { LiveStudy } from '../worker/useEngine';
 
 function distanceAtTime(rows: ReturnType<typeof profileSeries>, time_s: number): number | null {
@@ -41,8 +42,7 @@ export function ResultsView(props: { readonly live: LiveStudy; readonly chartSiz
       <FailureNotice failure={failure} testId="results-failure" />
       <p data-testid="mission-status" className={m.status === 'ok' ? 'status-ok' : 'status-bad'}>
         Mission status: {m.status}
-        {m.statusMessage ? ` — ${m.statusMessage}` : ''} (inlet {snapshot.inletName}; deck {snapshot.deck.title}
-        {snapshot.deck.parametric ? ', parametric' : ''})
+        {m.statusMessage ? ` — ${m.statusMessage}` : ''} (inlet {snapshot.inletName}; deck {deckTitleText(snapshot.deck.title, snapshot.deck.parametric)})
       </p>
       <HeadlineFigures result={m} units={u} />
       <div className="chart-row">
