@@ -52,20 +52,33 @@ export function fieldUnitLabel(unit: FieldUnit, system: UnitSystem): string {
   return fixed ? fixed[system] : displayUnit(unit as DisplayKind, system);
 }
 
-function shortest(value: number, digits: number): string {
-  // Up to `digits` significant decimals, trailing zeros dropped.
-  const text = groupDigits(value, digits);
+/** Most decimals a field shows (a value below 1e-6 of its unit shows as 0). */
+const MAX_DECIMALS = 6;
+
+/**
+ * `significant` significant digits, but never fewer than the whole digits
+ * (36,500 lb stays 36,500, 40.2307 hp shows 40.23); trailing zeros dropped.
+ */
+function significantText(value: number, significant: number): string {
+  const magnitude = value === 0 ? 0 : Math.floor(Math.log10(Math.abs(value)));
+  const decimals = Math.min(Math.max(significant - 1 - magnitude, 0), MAX_DECIMALS);
+  const text = groupDigits(value, decimals);
   return text.includes('.') ? text.replace(/\.?0+$/, '') : text;
 }
 
-/** The SI value as field text in the display unit, e.g. 10668 m -> "35,000 ft". */
+/**
+ * The SI value as field text in the display unit with 4 significant digits,
+ * e.g. 10668 m -> "35,000 ft", 30 kW -> "40.23 hp". Only the text is rounded:
+ * a field whose text is not edited sends nothing back, so the stored SI value
+ * stays as it was.
+ */
 export function formatField(value_si: number, unit: FieldUnit, system: UnitSystem): string {
   if (!Number.isFinite(value_si)) return '';
   if (unit === 'dimensionless') return String(value_si);
   const label = fieldUnitLabel(unit, system);
   const fixed = FIXED_UNIT[unit];
   const shown = fixed ? fromSi(value_si, fixed[system]) : toDisplay(value_si, unit as DisplayKind, system);
-  return `${shortest(shown, 4)} ${label}`;
+  return `${significantText(shown, 4)} ${label}`;
 }
 
 const BARE_NUMBER = /^[+-]?(?:\d{1,3}(?:,\d{3})+(?:\.\d*)?|\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;

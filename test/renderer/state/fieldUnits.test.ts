@@ -21,6 +21,18 @@ describe('formatField', () => {
     expect(d).toEqual({ ok: true, value: 2700 });
   });
 
+  it('shows four significant digits but never rounds whole digits away', () => {
+    // 1 hp (550 ft lbf/s) = 745.699 87 W, NIST SP 811 appendix B: 30 kW = 40.2307 hp
+    expect(formatField(30000, 'power', 'customary')).toBe('40.23 hp');
+    expect(formatField(30000, 'power', 'si')).toBe('30 kW');
+    // 17,000 kg = 37,478.58 lb (NIST): whole digits kept beyond four significant ones
+    expect(formatField(17000, 'mass', 'customary')).toBe('37,479 lb');
+    // 0.3 ft2 = 0.02787091 m2 (NIST): four significant digits of a small value
+    expect(formatField(0.3 * 0.09290304, 'area', 'si')).toBe('0.02787 m2');
+    expect(formatField(-2.5, 'temperatureDelta', 'si')).toMatch(/^-2\.5 /);
+    expect(formatField(0, 'mass', 'si')).toBe('0 kg');
+  });
+
   it('shows dimensionless values exactly and non-finite values as empty', () => {
     expect(formatField(0.0172, 'dimensionless', 'si')).toBe('0.0172');
     expect(formatField(Number.NaN, 'mass', 'si')).toBe('');
@@ -55,8 +67,8 @@ describe('parseField', () => {
       for (const system of ['si', 'customary'] as const) {
         const back = parseField(formatField(v, unit, system), unit, system);
         if (!back.ok) throw new Error(back.error);
-        // four decimals shown: relative error below 1e-5 for these magnitudes
-        expectClose(back.value, v, { rel: 1e-5 }, 'display rounding');
+        // four significant digits shown: relative error at most half a unit in the fourth digit
+        expectClose(back.value, v, { rel: 5e-4 }, 'display rounding');
       }
     }
   });

@@ -29,9 +29,30 @@ describe('QuantityField', () => {
     fireEvent.change(input, { target: { value: '17000 kg' } });
     fireEvent.keyDown(input, { key: 'Enter' });
     expect(probe.current.doc!.present.airframe.weights.maxTakeoff).toBe(17000);
-    // shown back in lb: 17,000 kg / 0.45359237 kg/lb (NIST SP 811), four decimals
+    // shown back in lb: 17,000 kg / 0.45359237 kg/lb (NIST SP 811), whole pounds
     expect(input.value).toMatch(/ lb$/);
-    expectClose(Number(input.value.replace(/,/g, '').replace(' lb', '')), 17000 / 0.45359237, { abs: 5e-5 }, 'NIST SP 811');
+    expectClose(Number(input.value.replace(/,/g, '').replace(' lb', '')), 17000 / 0.45359237, { abs: 0.5 }, 'NIST SP 811');
+  });
+
+  it('shows 30 kW as 40.23 hp and leaves the stored 30 kW alone when the field is left without an edit', () => {
+    const POWER = ['engine', 'installation', 'powerExtraction'] as const;
+    const s = studyReducer(demoState(), { type: 'valueSet', path: POWER, value: 30000, label: 'p' });
+    const { probe } = renderWithStudy(<QuantityField label="Shaft power" path={POWER} unit="power" testId="f" />, s);
+    const input = screen.getByTestId('f') as HTMLInputElement;
+    // 30,000 W / 745.69987 W/hp (NIST SP 811 appendix B) = 40.2307 hp, four significant digits
+    expect(input.value).toBe('40.23 hp');
+    fireEvent.focus(input);
+    fireEvent.keyDown(input, { key: 'Enter' });
+    fireEvent.blur(input);
+    expect(probe.current.doc!.present.engine.installation.powerExtraction).toBe(30000);
+    expect(probe.current.doc!.past).toHaveLength(s.doc!.past.length);
+    // Retyping the shown text is no edit (30 kW kept, not 29,999.8 W); a changed value is read as typed.
+    fireEvent.change(input, { target: { value: '40.23 hp' } });
+    fireEvent.keyDown(input, { key: 'Enter' });
+    expect(probe.current.doc!.present.engine.installation.powerExtraction).toBe(30000);
+    fireEvent.change(input, { target: { value: '40.24 hp' } });
+    fireEvent.keyDown(input, { key: 'Enter' });
+    expectClose(probe.current.doc!.present.engine.installation.powerExtraction!, 40.24 * 745.69987158, { rel: 1e-9 }, 'NIST SP 811');
   });
 
   it('keeps Ctrl+Z for the text while it is being typed; after commit Ctrl+Z reaches the window', () => {
