@@ -3,6 +3,7 @@ import { ChoiceField } from '../components/ChoiceField';
 import { IssueList } from '../components/IssueList';
 import { LegEditor } from '../components/LegEditor';
 import { QuantityField } from '../components/QuantityField';
+import { formatField } from '../state/fieldUnits';
 import { LEG_KIND_LABEL, LEG_KINDS, type LegKindName } from '../state/legTemplates';
 import { RESERVE_PRESET_LABEL, reservesForPreset, type ReservePreset } from '../state/reservePresets';
 import { selectIssuesUnder } from '../state/selectors';
@@ -98,7 +99,7 @@ function Solve() {
   );
 }
 
-/** The mission: legs in order (add, remove, duplicate, move), atmosphere and wind, reserves, and what is solved. */
+/** The mission: legs in order (add, remove, duplicate, move), atmosphere, wind and destination elevation, reserves, and what is solved. */
 export function MissionView() {
   const { state, dispatch } = useStudy();
   const legs = state.doc!.present.mission.legs;
@@ -111,9 +112,17 @@ export function MissionView() {
         <Solve />
         <Reserves />
         <fieldset>
-          <legend>Atmosphere and wind (whole mission)</legend>
+          <legend>Whole mission: atmosphere, wind, destination</legend>
           <QuantityField label="ISA deviation" path={['mission', 'isaDeviation']} unit="temperatureDelta" testId="field-mission-isa" />
           <QuantityField label="Along-track wind (+ tail)" path={['mission', 'wind']} unit="speed" testId="field-mission-wind" />
+          <QuantityField
+            label="Destination elevation"
+            path={['mission', 'destinationElevation']}
+            unit="altitude"
+            testId="field-destination-elevation"
+            hint={`blank: ${formatField(0, 'altitude', state.units)}`}
+            optional
+          />
         </fieldset>
       </div>
       <h3>Legs</h3>

@@ -57,6 +57,31 @@ describe('MissionView', () => {
   });
 });
 
+describe('MissionView destination elevation', () => {
+  it('edits the destination elevation next to ISA deviation and wind, clears it to the 0 ft default, and refuses one above the legs\' end', () => {
+    const { probe } = renderWithStudy(<MissionView />);
+    const field = screen.getByTestId('field-destination-elevation') as HTMLInputElement;
+    // Same fieldset as the other mission-wide fields.
+    expect(field.closest('fieldset')).toBe(screen.getByTestId('field-mission-isa').closest('fieldset'));
+    const start = probe.current.doc!.present.mission.destinationElevation;
+    expect(field.value).toBe(start === undefined ? '' : `${Math.round(start / 0.3048).toLocaleString('en-US')} ft`);
+    fireEvent.change(field, { target: { value: '1,200' } });
+    fireEvent.blur(field);
+    // a bare number is read in the field's unit: 1,200 ft = 365.76 m (NIST SP 811, 1 ft = 0.3048 m)
+    expectClose(probe.current.doc!.present.mission.destinationElevation!, 365.76, { abs: 1e-9 }, 'NIST SP 811');
+    fireEvent.change(field, { target: { value: '' } });
+    fireEvent.blur(field);
+    expect(probe.current.doc!.present.mission.destinationElevation).toBeUndefined();
+    expect(field.value).toBe('');
+    expect(screen.getByText(/blank: 0 ft/)).toBeInTheDocument();
+    // Above where the legs end (the demo's last descent ends low): the project rule's message, project unchanged.
+    fireEvent.change(field, { target: { value: '60000 ft' } });
+    fireEvent.blur(field);
+    expect(screen.getByTestId('field-destination-elevation-error').textContent).toMatch(/above .*the altitude the legs end at/);
+    expect(probe.current.doc!.present.mission.destinationElevation).toBeUndefined();
+  });
+});
+
 describe('CautionsView', () => {
   it('lists every limit with its default and the source from the caution catalogue', () => {
     renderWithStudy(<CautionsView />);
