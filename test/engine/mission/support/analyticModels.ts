@@ -108,8 +108,11 @@ export function constantTsfcPropulsion(opts: EngineOptions): PropulsionModel {
     const rho = missionAir(c.altitude_m, c.isaDev_K).density_kg_m3;
     return opts.thrust0_N * power * Math.pow(rho / rho0, opts.lapseExponent);
   };
+  // Literal fields, no object spreads: the bench flies these models thousands of times per mission.
   const point = (c: FlightCondition, power: number, thrust: number): InstalledPoint => ({
-    ...c,
+    altitude_m: c.altitude_m,
+    mach: c.mach,
+    isaDev_K: c.isaDev_K,
     power,
     thrust_N: thrust,
     fuelFlow_kg_s: opts.tsfc_kg_N_s * Math.max(thrust, 0),
@@ -141,10 +144,10 @@ export function constantTsfcPropulsion(opts: EngineOptions): PropulsionModel {
     forThrust: (c, required, ceiling = 'maxCruise'): PartPowerPoint => {
       const top = ratingThrust(c, ratings[ceiling]);
       const idle = ratingThrust(c, ratings.flightIdle);
-      const limit = required > top ? 'above_rating' : required < idle ? 'below_idle' : 'within';
+      const limit: PartPowerPoint['limit'] = required > top ? 'above_rating' : required < idle ? 'below_idle' : 'within';
       const thrust = limit === 'above_rating' ? top : limit === 'below_idle' ? idle : required;
       const full = ratingThrust(c, 1);
-      return { ...point(c, full > 0 ? thrust / (full) : 0, thrust), limit, thrustRequired_N: required };
+      return Object.assign(point(c, full > 0 ? thrust / full : 0, thrust), { limit, thrustRequired_N: required });
     },
   };
 }
