@@ -43,6 +43,20 @@ export function markKeys(marks: readonly { readonly x: number; readonly label: s
   return marks.map((m, i) => `${m.label}-${m.x}-${i}`);
 }
 
+/**
+ * Whether each mark's label is drawn: a label equal to one already drawn
+ * within `near` (x units) is left off, so two inlets' crossovers a few
+ * thousandths of Mach apart do not print their names over each other.
+ */
+export function markLabelShown(marks: readonly { readonly x: number; readonly label: string }[], near: number): boolean[] {
+  const drawn: { x: number; label: string }[] = [];
+  return marks.map((m) => {
+    const clash = drawn.some((d) => d.label === m.label && Math.abs(d.x - m.x) <= near);
+    if (!clash) drawn.push({ x: m.x, label: m.label });
+    return !clash;
+  });
+}
+
 /** A titled line chart with fixed width and height (recharts needs a size without layout). */
 export function LineChartPanel(props: LineChartPanelProps) {
   const size = props.size ?? DEFAULT_CHART_SIZE;
@@ -55,6 +69,8 @@ export function LineChartPanel(props: LineChartPanelProps) {
   const leftAxis = niceTicks(...numericExtent(props.data, leftKeys, points.map((p) => p.y)));
   const rightAxis = niceTicks(...numericExtent(props.data, rightKeys));
   const markKey = markKeys(marks);
+  // Same-label marks closer than 3 % of the axis share one label.
+  const labelShown = markLabelShown(marks, xAxis === null ? 0 : 0.03 * (xAxis.domain[1] - xAxis.domain[0]));
   const pointKey = markKeys(points);
   return (
     <figure className="chart" data-testid={props.testId}>
@@ -81,7 +97,7 @@ export function LineChartPanel(props: LineChartPanelProps) {
           />
         ))}
         {marks.map((m, i) => (
-          <ReferenceLine key={markKey[i]} yAxisId="left" x={m.x} stroke="#888" strokeDasharray="2 2" label={{ value: m.label, position: 'insideTopLeft', fontSize: 10, angle: -90, dx: 4, dy: 70 }} />
+          <ReferenceLine key={markKey[i]} yAxisId="left" x={m.x} stroke="#888" strokeDasharray="2 2" label={labelShown[i] ? { value: m.label, position: 'insideTopLeft', fontSize: 10, angle: -90, dx: 4, dy: 70 } : undefined} />
         ))}
         {points.map((p, i) => (
           <ReferenceDot key={pointKey[i]} yAxisId="left" x={p.x} y={p.y} r={4} fill="#c00" stroke="none" />

@@ -7,7 +7,7 @@ import { launchChromium, openApp, screenshot } from './support/chromium';
 // and high crossover Mach (DESIGN.md §2.5: the low crossover lies below the
 // high one, with the thrust minimum between). The demo study has two inlet
 // designs, which the compare view offers as A and B and compares on block
-// fuel. (Both inlets drawn together on the crossover: bothInlets.scenario.ts.)
+// fuel. (Both inlets drawn together on the crossover: bothInlets.test.ts.)
 
 let browser: Browser;
 beforeAll(async () => {

@@ -54,8 +54,19 @@ export async function openApp(browser: Browser, baseUrl: string): Promise<{ read
   return { page, problems };
 }
 
-/** Saves a full-page screenshot to artifacts/screenshots/<name>.png. */
+/**
+ * Saves a full-page screenshot to artifacts/screenshots/<name>.png. The window
+ * is made as tall as the page for the shot, so the notice sticky at the
+ * window's bottom is drawn where it really ends up, below the content.
+ */
 export async function screenshot(page: Page, name: string): Promise<void> {
   await mkdir(SCREENSHOT_FOLDER, { recursive: true });
-  await page.screenshot({ path: join(SCREENSHOT_FOLDER, `${name}.png`), fullPage: true });
+  const viewport = page.viewportSize();
+  const height = await page.evaluate(() => document.documentElement.scrollHeight);
+  if (viewport !== null && height > viewport.height) await page.setViewportSize({ width: viewport.width, height });
+  try {
+    await page.screenshot({ path: join(SCREENSHOT_FOLDER, `${name}.png`), fullPage: true });
+  } finally {
+    if (viewport !== null && height > viewport.height) await page.setViewportSize(viewport);
+  }
 }

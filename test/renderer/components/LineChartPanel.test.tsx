@@ -1,6 +1,6 @@
 import { render, waitFor } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { LineChartPanel, markKeys } from '../../../renderer/components/LineChartPanel';
+import { LineChartPanel, markKeys, markLabelShown } from '../../../renderer/components/LineChartPanel';
 
 // Two inlet designs can share a marker at the same Mach (e.g. the thrust
 // minimum where both thrust curves bottom out on the same sample); React
@@ -56,6 +56,24 @@ describe('LineChartPanel', () => {
   it('markKeys gives two inlets marking the same point at the same Mach different keys', () => {
     const keys = markKeys(MARKS);
     expect(new Set(keys).size).toBe(MARKS.length);
+  });
+
+  it('markLabelShown leaves off a label repeated nearby, keeps it far away and for other labels', () => {
+    const marks = [
+      { x: 0.878, label: 'high crossover' },
+      { x: 0.882, label: 'high crossover' },
+      { x: 0.88, label: 'thrust minimum' },
+      { x: 0.95, label: 'high crossover' },
+    ];
+    expect(markLabelShown(marks, 0.018)).toEqual([true, false, true, true]);
+    expect(markLabelShown(marks, 0)).toEqual([true, true, true, true]);
+  });
+
+  it('LineChartPanel draws a repeated mark once labelled', async () => {
+    const chart = await renderPanel();
+    const labels = [...chart.querySelectorAll('text.recharts-label')].map((t) => t.textContent);
+    expect(labels.filter((t) => t === 'thrust minimum')).toHaveLength(1);
+    expect(labels.filter((t) => t === 'high crossover')).toHaveLength(1);
   });
 
   it('LineChartPanel draws two equal marks without a React key warning', async () => {
