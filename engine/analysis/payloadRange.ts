@@ -75,9 +75,10 @@ function pointOf(kind: PayloadRangePointKind, r: MissionResult): PayloadRangePoi
  * MTOW + taxi-out fuel - OEW - max fuel, with the taxi-out fuel (ramp minus
  * take-off mass) taken from the maximum-payload mission; every point is
  * flown in `maxRange` mode, which loads the most fuel MTOW and the tanks
- * allow. Cost: 3 + 2 * pointsBetween missions (one fewer without an
- * MTOW-full-fuel corner); onProgress is called 3 + 2 * pointsBetween times
- * either way, ending at (total, total).
+ * allow. Cost: 3 + 2 * pointsBetween missions, one fewer without an
+ * MTOW-full-fuel corner; onProgress(done, total) is called once after each
+ * mission flown and ends at (missions, missions) (total drops by one after
+ * the first mission when that corner does not exist).
  */
 export function payloadRangeDiagram(
   base: MissionInput,
@@ -93,15 +94,12 @@ export function payloadRangeDiagram(
   if (!(maxPayload_kg > 0)) {
     return err({ code: 'invalid_input', message: `payload-range: MZFW ${af.mzfw_kg} kg is not above OEW ${af.oew_kg} kg, so no payload can be carried` });
   }
-  const total = 3 + 2 * between;
-  // `done` counts progress slots (every mission, plus the MTOW-full-fuel slot
-  // when that corner does not exist); `flown` counts missions actually solved.
+  // Missions to fly; one fewer once the MTOW-full-fuel corner turns out not to exist.
+  let total = 3 + 2 * between;
   let done = 0;
-  let flown = 0;
   const fly = (payload_kg: number, what: string): Result<MissionResult, AnalysisError> => {
-    if (options.shouldCancel?.()) return err({ code: 'cancelled', message: `payload-range cancelled after ${flown} of ${total} missions` });
+    if (options.shouldCancel?.()) return err({ code: 'cancelled', message: `payload-range cancelled after ${done} of ${total} missions` });
     const r = solve({ ...base, solve: { kind: 'maxRange', payload_kg } });
-    flown++;
     done++;
     options.onProgress?.(done, total);
     if (r.status !== 'ok') {
@@ -120,9 +118,8 @@ export function payloadRangeDiagram(
     if (!rb.ok) return rb;
     b = rb.value;
   } else {
-    // No MTOW-full-fuel corner: its slot is skipped, and progress still says so.
-    done++;
-    options.onProgress?.(done, total);
+    // No MTOW-full-fuel corner: no mission for it, so the count to fly drops by one.
+    total--;
   }
   const c = fly(0, 'ferry');
   if (!c.ok) return c;
@@ -148,5 +145,5 @@ export function payloadRangeDiagram(
         ? 'Full tanks fit under MTOW even at maximum payload: the diagram has no MTOW-limited segment.'
         : 'Full tanks never fit under MTOW, even with no payload: the ferry point is MTOW-limited.'
       : 'Maximum payload to the MTOW-full-fuel corner is MTOW-limited; beyond it, fuel-capacity-limited.';
-  return ok({ points, maxPayload: pa, mtowFullFuel: pb, ferry: pc, missions: flown, note });
+  return ok({ points, maxPayload: pa, mtowFullFuel: pb, ferry: pc, missions: done, note });
 }

@@ -49,10 +49,10 @@ describe('payloadRangeDiagram', () => {
     expect(cancelled.ok ? 'ok' : cancelled.error.code).toBe('cancelled');
   });
 
-  it('payloadRangeDiagram reports every progress slot, including the skipped MTOW-full-fuel corner', () => {
-    // Without an MTOW-limited segment (MTOW raised so full tanks fit at maximum payload) only
-    // 2 + 2 * pointsBetween missions are flown, but progress still counts 3 + 2 * pointsBetween
-    // slots one by one and ends at (total, total) (the documented cost of payloadRangeDiagram).
+  it('payloadRangeDiagram reports progress once per mission flown, with or without the MTOW-full-fuel corner', () => {
+    // Without an MTOW-limited segment (MTOW raised so full tanks fit at maximum payload) the
+    // MTOW-full-fuel corner is not flown: 2 + 2 * pointsBetween missions (the documented cost of
+    // payloadRangeDiagram), each reported once, the last report saying (missions, missions).
     const input = testMissionInput();
     const roomy = { ...input, airframe: { ...input.airframe, mtow_kg: 80000 } };
     for (const pointsBetween of [0, 1, 2]) {
@@ -62,19 +62,21 @@ describe('payloadRangeDiagram', () => {
         payloadRangeDiagram(roomy, { solve: makeBreguetSolver(counter), pointsBetween, onProgress: (d, t) => seen.push([d, t]) }),
         'payload-range',
       );
-      const total = 3 + 2 * pointsBetween;
+      const flown = 2 + 2 * pointsBetween;
       expect(r.mtowFullFuel).toBeNull();
-      expect(seen.map(([d]) => d)).toEqual(Array.from({ length: total }, (_, i) => i + 1));
-      expect(seen.every(([, t]) => t === total)).toBe(true);
-      expect(counter.calls).toBe(total - 1);
-      expect(r.missions).toBe(counter.calls);
+      expect(counter.calls).toBe(flown);
+      expect(r.missions).toBe(flown);
+      expect(seen.map(([d]) => d)).toEqual(Array.from({ length: flown }, (_, i) => i + 1));
+      // the first report still counts the corner that might exist; from the second on it is known
+      expect(seen[0]).toEqual([1, flown + 1]);
+      expect(seen[seen.length - 1]).toEqual([flown, flown]);
     }
-    // With both corners every slot is a mission: one report per mission flown.
+    // With both corners every planned mission is flown and reported.
     const counter: BreguetCounter = { calls: 0 };
-    const seen: number[] = [];
-    const r = expectOk(payloadRangeDiagram(input, { solve: makeBreguetSolver(counter), pointsBetween: 1, onProgress: (d) => seen.push(d) }), 'payload-range');
+    const seen: [number, number][] = [];
+    const r = expectOk(payloadRangeDiagram(input, { solve: makeBreguetSolver(counter), pointsBetween: 1, onProgress: (d, t) => seen.push([d, t]) }), 'payload-range');
     expect(r.mtowFullFuel).not.toBeNull();
-    expect(seen).toEqual([1, 2, 3, 4, 5]);
+    expect(seen).toEqual([1, 2, 3, 4, 5].map((d) => [d, 5]));
     expect(counter.calls).toBe(5);
     expect(r.missions).toBe(5);
   });

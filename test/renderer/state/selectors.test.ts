@@ -29,7 +29,8 @@ describe('selectors', () => {
     expect(selectFieldView(s0, OEW, 'mass')).toEqual({ text: '19,000 lb', error: null });
     const si = studyReducer(s0, { type: 'unitsChosen', units: 'si' });
     // 19,000 lb x 0.45359237 kg/lb = 8,618.25503 kg (NIST SP 811)
-    expect(selectFieldView(si, OEW, 'mass').text).toBe('8,618.255 kg');
+    // shown with four significant digits, whole digits kept: 8,618 kg
+    expect(selectFieldView(si, OEW, 'mass').text).toBe('8,618 kg');
     const bad = studyReducer(s0, { type: 'fieldEdited', path: OEW, text: 'heavy', unit: 'mass', label: 'x' });
     const view = selectFieldView(bad, OEW, 'mass');
     expect(view.text).toBe('heavy');
