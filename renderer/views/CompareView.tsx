@@ -108,6 +108,9 @@ function InletComparisonPanel(props: { readonly chartSize?: ChartSize }) {
           <p className="small">
             Crossover compared at {formatQuantity(c.value.crossoverCondition.altitude_m, 'altitude', u)}, {formatQuantity(c.value.crossoverCondition.mass_kg, 'mass', u)},{' '}
             {c.value.crossoverCondition.rating}.
+            {c.value.designs.some((d) => d.crossover.lowMach === null || d.crossover.highMach === null)
+              ? ' A crossover shown as — does not exist there: thrust exceeds drag down to the stall or the lowest Mach examined (low), or up to the highest (high).'
+              : ''}
           </p>
           <WaterfallChart rows={breakdownWaterfall(c.value, u)} unit={displayUnit('mass', u)} {...size} />
           <ul data-testid="compare-breakdown">

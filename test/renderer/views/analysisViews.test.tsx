@@ -99,18 +99,18 @@ describe('CrossoverView', () => {
 describe('CompareView', () => {
   it('shows the comparison side by side with B - A and the breakdown whose parts add up to the total', async () => {
     const names = demoState().doc!.present.inlets.map((i) => i.name);
-    const design = (name: string, fuel: number) => ({
+    const design = (name: string, fuel: number, lowMach: number | null = 0.5) => ({
       name,
       blockFuel_kg: fuel,
       blockTime_s: 20000,
       tripFuel_kg: fuel - 500,
       takeoffMass_kg: 16000,
-      crossover: { status: 'ok' as const, lowMach: 0.5, highMach: 0.82, minThrustMach: 0.7 },
+      crossover: { status: 'ok' as const, lowMach, highMach: 0.82, minThrustMach: 0.7 },
       ceilings: [{ name: 'service', altitude_m: 12000 }] as unknown as InletComparisonResult['designs'][0]['ceilings'],
       cautions: [],
     });
     const canned: InletComparisonResult = {
-      designs: [design(names[0]!, 4000), design(names[1]!, 4025)],
+      designs: [design(names[0]!, 4000), design(names[1]!, 4025, null)],
       difference: { blockFuel_kg: 25, blockTime_s: 0, tripFuel_kg: 25, takeoffMass_kg: 25, lowMach: 0, highMach: 0, ceilings: [{ name: 'service', altitude_m: 0 }] },
       crossoverCondition: { altitude_m: 10000, mass_kg: 15000, rating: 'maxCruise', isaDev_K: 0 },
       breakdown: {
@@ -145,6 +145,9 @@ describe('CompareView', () => {
     expect(screen.getByTestId('compare-diff-block-fuel').textContent).toBe('55 lb');
     expect(screen.getByTestId('compare-breakdown').querySelectorAll('li')).toHaveLength(4);
     expect(screen.getByTestId('chart-breakdown').querySelector('svg')).not.toBeNull();
+    // B has no low crossover: its cell reads — and the note says why.
+    expect(screen.getByText('— / 0.820')).toBeInTheDocument();
+    expect(screen.getByText(/A crossover shown as — does not exist there/)).toBeInTheDocument();
   });
 
   it('runs the real comparison in-thread and shows its table or the reason it stopped', async () => {
