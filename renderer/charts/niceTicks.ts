@@ -9,6 +9,9 @@ export interface NiceAxis {
   readonly decimals: number;
 }
 
+/** Fraction of a step by which a value may pass a tick and still count as on it. */
+const SNAP = 1e-6;
+
 function niceNumber(x: number, round: boolean): number {
   const exponent = Math.floor(Math.log10(x));
   const fraction = x / 10 ** exponent;
@@ -22,6 +25,8 @@ function niceNumber(x: number, round: boolean): number {
  * "Loose" axis labels covering [min, max] with about `count` ticks at steps of
  * 1, 2 or 5 x 10^k (Heckbert, "Nice numbers for graph labels", Graphics Gems,
  * 1990). A single value (min = max) gets a range of +-10 % (+-1 at zero).
+ * Values within 1e-6 of a step past a tick count as on it (no extra tick for
+ * float noise).
  * Null when min or max is not finite or min > max: the caller keeps its
  * default axis.
  */
@@ -34,8 +39,10 @@ export function niceTicks(min: number, max: number, count = 5): NiceAxis | null 
   const range = niceNumber(max - min, false);
   const step = niceNumber(range / Math.max(count - 1, 1), true);
   const decimals = Math.max(-Math.floor(Math.log10(step)), 0);
-  const first = Math.floor(min / step);
-  const last = Math.ceil(max / step);
+  // A value past a tick by float noise (3,000.0000001 nmi) does not add a tick:
+  // within SNAP of a step it counts as on the tick.
+  const first = Math.floor(min / step + SNAP);
+  const last = Math.ceil(max / step - SNAP);
   const ticks: number[] = [];
   for (let k = first; k <= last; k++) ticks.push(Number((k * step).toFixed(decimals)));
   return { ticks, domain: [ticks[0]!, ticks[ticks.length - 1]!], decimals };

@@ -120,7 +120,7 @@ export function MissionView() {
             path={['mission', 'destinationElevation']}
             unit="altitude"
             testId="field-destination-elevation"
-            hint={`blank: ${formatField(0, 'altitude', state.units)}`}
+            hint={`(blank: ${formatField(0, 'altitude', state.units)})`}
             optional
           />
         </fieldset>

@@ -40,6 +40,14 @@ describe('niceTicks', () => {
     }
   });
 
+  it('niceTicks adds no tick for float noise past the last or before the first tick', () => {
+    // 3,000 nmi flown, summed to 3,000.0000001: the axis still ends at 3,000 (Heckbert: 0..3000 by 1000)
+    expect(niceTicks(0, 3000.0000001)!.ticks).toEqual([0, 1000, 2000, 3000]);
+    expect(niceTicks(-0.0000001, 3000)!.ticks).toEqual([0, 1000, 2000, 3000]);
+    // a real overshoot still gets its tick
+    expect(niceTicks(0, 3001)!.ticks).toEqual([0, 1000, 2000, 3000, 4000]);
+  });
+
   it('niceTicks widens a single value and refuses non-finite or reversed ranges', () => {
     const one = niceTicks(0.78, 0.78)!;
     expect(one.ticks[0]!).toBeLessThan(0.78);
