@@ -56,7 +56,7 @@ describe('inletFactorBuilder', () => {
     // whenever the two capture areas differ.
     const spill = build({ recovery: 'A', spillage: 'B', externalDrag: 'A', weight: 'A' }).propulsion.atRating(cond, 'maxCruise').perEngine;
     expectClose(spill.recovery, pa.recovery, { abs: 1e-12 }, 'recovery from A');
-    // The demo inlets differ in capture area (5.6 vs 5.4 ft2) and lip suction (0.7 vs 0.5), so spillage differs;
+    // The demo inlets differ in capture area (6.3 vs 6.1 ft2) and lip suction (0.7 vs 0.5), so spillage differs;
     // with B's capture area and lip, the mix's spillage lies near B's (airflow differs slightly through recovery).
     expect(pa.spillageDrag_N).not.toBe(pb.spillageDrag_N);
     expect(Math.abs(spill.spillageDrag_N - pb.spillageDrag_N)).toBeLessThan(Math.abs(spill.spillageDrag_N - pa.spillageDrag_N));
