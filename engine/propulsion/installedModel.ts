@@ -12,6 +12,7 @@ import type { CautionSettings } from '../cautions/cautionSettings';
 import { brent } from '../core/rootFind';
 import type { Result } from '../core/result';
 import type { ReferenceRecovery } from './engineDeck';
+import type { DeckLookup } from './deckLookup';
 import type { InletDesign } from './inletDesign';
 import { geometryInletFlow, streamTubeArea, type FreeStream } from './inletFlow';
 import { prepareInlet, tableRecovery, type PreparedInlet } from './inletRecovery';
@@ -34,15 +35,8 @@ import type {
   ThrustLimit,
 } from './propulsionModel';
 
-/** One engine's uninstalled deck numbers at a condition and power (as the deck lookup returns them). */
-export interface DeckPoint {
-  readonly power: number;
-  readonly thrust_N: number;
-  readonly fuelFlow_kg_s: number;
-  readonly airflow_kg_s: number | null;
-  readonly outside: readonly DeckAxis[];
-  readonly cautions: readonly Caution[];
-}
+/** One engine's uninstalled deck numbers at a condition and power: the deck lookup's own result. */
+export type DeckPoint = DeckLookup;
 
 /** A failed deck or atmosphere query: a literal code and a readable message. */
 export interface AccessError {
