@@ -3,6 +3,7 @@
  * the header as `name[unit]` (the deck CSV convention), SI values at full
  * precision, one row per integrator sample.
  */
+import { noticeCsvComment } from '../../engine/core/notice';
 import type { TimeHistory } from '../../engine/mission/missionTypes';
 
 /** Unit suffixes of history field names, longest first. */
@@ -23,12 +24,12 @@ export function historyHeader(field: string): string {
   return `${field}[-]`;
 }
 
-/** The time history as CSV text with a header row and a trailing newline. */
+/** The time history as CSV text: the notice as `#` lines, a header row, the rows, a trailing newline. */
 export function historyToCsv(history: TimeHistory): string {
   const fields = Object.keys(history) as (keyof TimeHistory)[];
   const columns = fields.map((f) => history[f]);
   const rows = Math.min(...columns.map((c) => c.length));
   const lines = [fields.map((f) => historyHeader(f)).join(',')];
   for (let i = 0; i < rows; i++) lines.push(columns.map((c) => String(c[i])).join(','));
-  return `${lines.join('\n')}\n`;
+  return `${noticeCsvComment()}${lines.join('\n')}\n`;
 }

@@ -8,3 +8,11 @@ export const SAFETY_NOTICE_LINES: readonly string[] = [
 ];
 
 export const SAFETY_NOTICE: string = SAFETY_NOTICE_LINES.join(' ');
+
+/**
+ * The notice as `#` comment lines for the top of an exported CSV file (the
+ * same comment convention as the deck CSV), ending with a newline.
+ */
+export function noticeCsvComment(): string {
+  return SAFETY_NOTICE_LINES.map((line) => `# ${line}\n`).join('');
+}

@@ -3,6 +3,7 @@
  * step) and the legs table. SI columns with the unit in each header, as the
  * deck and project files name units; "." decimal point, "," separator.
  */
+import { noticeCsvComment } from '../../engine/core/notice';
 import type { MissionResult } from '../../engine/mission/missionTypes';
 
 const HISTORY_COLUMNS = [
@@ -38,7 +39,7 @@ export function historyCsv(result: MissionResult): string {
   for (let i = 0; i < h.time_s.length; i++) {
     lines.push(HISTORY_COLUMNS.map(([, key]) => num(h[key][i]!)).join(','));
   }
-  return `${lines.join('\n')}\n`;
+  return `${noticeCsvComment()}${lines.join('\n')}\n`;
 }
 
 /** The legs table as CSV (reserve rows have leg number "R"). */
@@ -63,7 +64,7 @@ export function legsCsv(result: MissionResult): string {
       ].join(','),
     );
   }
-  return `${lines.join('\n')}\n`;
+  return `${noticeCsvComment()}${lines.join('\n')}\n`;
 }
 
 /** File name stem from a project file name: "demo.blockwise.json" -> "demo". */

@@ -114,7 +114,10 @@ describe('blockwise fly options', () => {
     const file = join(dir, 'history.csv');
     const r = await run('fly', DEMO, '--csv', file, '--json');
     expect(r.code).toBe(0);
-    const lines = readFileSync(file, 'utf8').trimEnd().split('\n');
+    const all = readFileSync(file, 'utf8').trimEnd().split('\n');
+    // The safety notice heads the file as # comment lines (DESIGN.md §7).
+    expect(all.slice(0, SAFETY_NOTICE_LINES.length)).toEqual(SAFETY_NOTICE_LINES.map((l) => `# ${l}`));
+    const lines = all.slice(SAFETY_NOTICE_LINES.length);
     const header = lines[0]!.split(',');
     for (const h of ['time[s]', 'distance[m]', 'altitude[m]', 'mach[-]', 'mass[kg]', 'fuelFlow[kg/s]', 'legIndex[-]']) expect(header).toContain(h);
     expect(lines.length).toBeGreaterThan(20);

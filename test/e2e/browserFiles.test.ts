@@ -39,7 +39,10 @@ describe('files in the browser build', () => {
     await page.getByTestId('command-exportLegs').click();
     const csv = await exporting;
     expect(csv.suggestedFilename()).toMatch(/\.csv$/);
-    const lines = (await downloadedText(csv)).trim().split('\n');
+    const all = (await downloadedText(csv)).trim().split('\n');
+    // The safety notice heads every export as # comment lines (DESIGN.md §7).
+    expect(all[0]).toMatch(/^# Conceptual planning figures only/);
+    const lines = all.filter((l) => !l.startsWith('#'));
     expect(lines.length).toBeGreaterThan(2);
     const width = lines[0]?.split(',').length ?? 0;
     expect(width).toBeGreaterThan(2);

@@ -1,3 +1,4 @@
+import { SAFETY_NOTICE_LINES } from '../../../engine/core/notice';
 import { describe, expect, it } from 'vitest';
 import type { LegRow, MissionResult, TimeHistory } from '../../../engine/mission/missionTypes';
 import { fileStem, historyCsv, legsCsv } from '../../../renderer/report/resultsCsv';
@@ -64,7 +65,10 @@ function result(): MissionResult {
 
 describe('historyCsv', () => {
   it('writes one row per sample with units in the headers; a non-finite value is an empty cell', () => {
-    const lines = historyCsv(result()).trimEnd().split('\n');
+    const all = historyCsv(result()).trimEnd().split('\n');
+    // The safety notice heads the file as # comment lines (DESIGN.md §7).
+    expect(all.filter((l) => l.startsWith('# '))).toEqual(SAFETY_NOTICE_LINES.map((l) => `# ${l}`));
+    const lines = all.filter((l) => !l.startsWith('#'));
     expect(lines).toHaveLength(4);
     const head = splitCsvLine(lines[0]!);
     expect(head[0]).toBe('time[s]');
@@ -79,7 +83,9 @@ describe('historyCsv', () => {
 
 describe('legsCsv', () => {
   it('quotes names with commas and quotes (RFC 4180) and numbers reserve rows R', () => {
-    const lines = legsCsv(result()).trimEnd().split('\n');
+    const all = legsCsv(result()).trimEnd().split('\n');
+    expect(all[0]).toBe(`# ${SAFETY_NOTICE_LINES[0]}`);
+    const lines = all.filter((l) => !l.startsWith('#'));
     const first = splitCsvLine(lines[1]!);
     expect(first.slice(0, 3)).toEqual(['1', 'Climb, "fast"', 'climb']);
     expect(splitCsvLine(lines[2]!)[0]).toBe('R');

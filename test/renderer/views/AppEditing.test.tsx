@@ -110,7 +110,10 @@ describe('the App with the demo study', () => {
     await waitFor(() => expect(bridge.exports).toHaveLength(2), { timeout: 15000 });
     expect(bridge.exports.map((e) => e.name)).toEqual(['demo-time-history.csv', 'demo-legs.csv']);
     expect(bridge.exports[0]!.mime).toBe('text/csv');
-    expect(bridge.exports[0]!.text.split('\n')[0]).toMatch(/^time\[s\],distance\[m\]/);
+    const exported = bridge.exports[0]!.text.split('\n');
+    // The safety notice heads every export as # comment lines (DESIGN.md §7).
+    expect(exported[0]).toBe(`# ${SAFETY_NOTICE_LINES[0]}`);
+    expect(exported.find((l) => !l.startsWith('#'))).toMatch(/^time\[s\],distance\[m\]/);
     await waitFor(() => expect(bridge.prints).toEqual(['demo-report.pdf']), { timeout: 15000 });
     const report = screen.getByTestId('print-report');
     expect(report.textContent).toContain(SAFETY_NOTICE_LINES[0]);
