@@ -8,13 +8,13 @@
 import type { RatingName } from '../propulsion/propulsionModel';
 import type { SpeedSchedule } from './missionTypes';
 import { energyShareFactor, pressureAltitudeRate } from './energyShareFactor';
-import { airPoint, fuelExhaustedG, makeSample, ratingPoint } from './flightPoint';
+import { airPoint, fuelExhaustedEvents, makeSample, pathDerivative, ratingPoint } from './flightPoint';
 import { flySegment } from './flySegment';
 import { legFailed, legOk, type LegOutcome } from './legOutcome';
 import { flyLevelSpeedChange } from './levelSpeedChange';
 import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
 import { machOfCas, missionAir } from './missionAtmosphere';
-import { S_ALT, S_MASS, S_TAS, STATE_SIZE, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
+import { S_ALT, S_MASS, S_TAS, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
 import { schedulePhases } from './speedSchedule';
 
 /** Climb rate (m/s) below which a climb counts as stalled: 100 ft/min, the service-ceiling rate (common practice). */
@@ -39,15 +39,7 @@ export function makeClimbSegment(
     const th = ratingPoint(input, at, dev, rating);
     const f = energyShareFactor(held, mach, air.lapse_K_m, air.temperature_K, air.isaTemperature_K);
     const rate = pressureAltitudeRate(th.thrust_N, at.drag.drag_N, at.tas_m_s, y[S_MASS], f, air.temperature_K, air.isaTemperature_K);
-    const geometric = (rate * air.temperature_K) / air.isaTemperature_K;
-    const horizontal = Math.sqrt(Math.max(at.tas_m_s * at.tas_m_s - geometric * geometric, 0));
-    const d = new Float64Array(STATE_SIZE);
-    d[0] = 1;
-    d[1] = horizontal;
-    d[2] = horizontal + target.env.wind_m_s;
-    d[S_ALT] = rate;
-    d[S_MASS] = -th.fuelFlow_kg_s;
-    d[S_TAS] = 0;
+    const d = pathDerivative(rate, at.tas_m_s, air, target.env.wind_m_s, th.fuelFlow_kg_s);
     return { d, at, th, rate };
   };
   const evaluate: Segment['evaluate'] = (y) => {
@@ -60,7 +52,7 @@ export function makeClimbSegment(
     { stop: 'altitude_reached', stateOnly: true, g: (y) => y[S_ALT] - toAltitude_m },
     { stop: 'climb_stalled', g: (_y, s) => CLIMB_STALL_RATE_M_S - s.climbRate_m_s },
   ];
-  if (!ctx.options.allowNegativeFuel) events.push({ stop: 'fuel_exhausted', stateOnly: true, g: (y) => fuelExhaustedG(ctx.zeroFuelMass_kg, y[S_MASS]) });
+  events.push(...fuelExhaustedEvents(ctx));
   return { step_s: BASE_STEP_S.climb * ctx.options.stepScale, evaluate, derivative, events };
 }
 

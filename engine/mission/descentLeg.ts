@@ -8,13 +8,13 @@
  */
 import type { SpeedSchedule } from './missionTypes';
 import { energyShareFactor, pressureAltitudeRate } from './energyShareFactor';
-import { airPoint, fuelExhaustedG, makeSample, ratingPoint, thrustPoint } from './flightPoint';
+import { airPoint, fuelExhaustedEvents, makeSample, pathDerivative, ratingPoint, thrustPoint } from './flightPoint';
 import { flySegment } from './flySegment';
 import { legFailed, legOk, type LegOutcome } from './legOutcome';
 import { flyLevelSpeedChange } from './levelSpeedChange';
 import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
 import { G0_M_S2, machOfCas, missionAir } from './missionAtmosphere';
-import { S_ALT, S_MASS, S_TAS, STATE_SIZE, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
+import { S_ALT, S_MASS, S_TAS, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
 import { schedulePhases } from './speedSchedule';
 import { appendCaution } from './timeHistoryBuilder';
 import { CAUTION_CATALOGUE } from '../cautions/cautionCatalogue';
@@ -62,14 +62,7 @@ function makeDescentSegment(
       thrustAvailable = withSample ? ratingPoint(input, at, dev, 'maxClimb').thrust_N : Number.NaN;
       if (engine.limit === 'below_idle') onBelowIdle(y[0], required, engine.thrust_N);
     }
-    const geometric = (rate * air.temperature_K) / air.isaTemperature_K;
-    const horizontal = Math.sqrt(Math.max(at.tas_m_s * at.tas_m_s - geometric * geometric, 0));
-    const d = new Float64Array(STATE_SIZE);
-    d[0] = 1;
-    d[1] = horizontal;
-    d[2] = horizontal + target.env.wind_m_s;
-    d[S_ALT] = rate;
-    d[S_MASS] = -engine.fuelFlow_kg_s;
+    const d = pathDerivative(rate, at.tas_m_s, air, target.env.wind_m_s, engine.fuelFlow_kg_s);
     return { derivative: d, sample: withSample ? makeSample(at, thrustAvailable, thrust, engine.fuelFlow_kg_s, rate, engine) : null };
   };
   const evaluate: Segment['evaluate'] = (y) => {
@@ -83,7 +76,7 @@ function makeDescentSegment(
     { stop: 'altitude_reached', stateOnly: true, g: (y) => toAltitude_m - y[S_ALT] },
     { stop: 'descent_stalled', g: (_y, s) => s.climbRate_m_s + DESCENT_STALL_RATE_M_S },
   ];
-  if (!ctx.options.allowNegativeFuel) events.push({ stop: 'fuel_exhausted', stateOnly: true, g: (y) => fuelExhaustedG(ctx.zeroFuelMass_kg, y[S_MASS]) });
+  events.push(...fuelExhaustedEvents(ctx));
   return { step_s: BASE_STEP_S.descent * ctx.options.stepScale, evaluate, derivative, events };
 }
 

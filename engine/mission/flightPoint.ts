@@ -6,7 +6,8 @@ import type { DragBreakdown } from '../aero/aeroModel';
 import type { InstalledPoint, PartPowerPoint, RatingName } from '../propulsion/propulsionModel';
 import { casOfMach, missionAir, type MissionAir } from './missionAtmosphere';
 import type { MissionInput } from './missionTypes';
-import type { FlightSample } from './missionState';
+import type { MissionContext } from './missionContext';
+import { S_ALT, S_MASS, STATE_SIZE, type Evaluation, type FlightSample, type SegmentEvent } from './missionState';
 
 export interface AirPoint {
   readonly altitude_m: number;
@@ -80,4 +81,34 @@ export function makeSample(
 /** Fuel-exhaustion event function: >= 0 once the mass reaches zero-fuel mass. */
 export function fuelExhaustedG(zeroFuelMass_kg: number, mass_kg: number): number {
   return zeroFuelMass_kg - mass_kg;
+}
+
+/** The fuel-exhausted stop of a segment; none when the options let fuel go negative (convergence studies). */
+export function fuelExhaustedEvents(ctx: MissionContext): SegmentEvent[] {
+  if (ctx.options.allowNegativeFuel) return [];
+  return [{ stop: 'fuel_exhausted', stateOnly: true, g: (y) => fuelExhaustedG(ctx.zeroFuelMass_kg, y[S_MASS]) }];
+}
+
+/**
+ * d(state)/dt on a climbing or descending path at constant TAS: the
+ * pressure-altitude rate (m/s) becomes a geometric rate through T/T_isa, the
+ * horizontal speed is what the TAS leaves of it, and the wind (m/s, + tail)
+ * adds to the ground track. Fuel flow in kg/s.
+ */
+export function pathDerivative(
+  pressureAltitudeRate_m_s: number,
+  tas_m_s: number,
+  air: MissionAir,
+  wind_m_s: number,
+  fuelFlow_kg_s: number,
+): Evaluation['derivative'] {
+  const geometric = (pressureAltitudeRate_m_s * air.temperature_K) / air.isaTemperature_K;
+  const horizontal = Math.sqrt(Math.max(tas_m_s * tas_m_s - geometric * geometric, 0));
+  const d = new Float64Array(STATE_SIZE);
+  d[0] = 1;
+  d[1] = horizontal;
+  d[2] = horizontal + wind_m_s;
+  d[S_ALT] = pressureAltitudeRate_m_s;
+  d[S_MASS] = -fuelFlow_kg_s;
+  return d;
 }

@@ -7,7 +7,7 @@
  */
 import type { RatingName } from '../propulsion/propulsionModel';
 import type { PartPowerPoint } from '../propulsion/propulsionModel';
-import { airPoint, fuelExhaustedG, makeSample, ratingPoint, thrustPoint, type AirPoint } from './flightPoint';
+import { airPoint, fuelExhaustedEvents, makeSample, ratingPoint, thrustPoint, type AirPoint } from './flightPoint';
 import type { LegTarget, MissionContext } from './missionContext';
 import { S_AIR, S_MASS, S_TIME, STATE_SIZE, type Evaluation, type Segment, type SegmentEvent, type StateVector } from './missionState';
 
@@ -63,7 +63,7 @@ export function makeLevelSegment(ctx: MissionContext, target: LegTarget, spec: L
     const end = spec.endTime_s;
     events.push({ stop: 'time_reached', stateOnly: true, g: (y) => y[S_TIME] - end });
   }
-  if (!ctx.options.allowNegativeFuel) events.push({ stop: 'fuel_exhausted', stateOnly: true, g: (y) => fuelExhaustedG(ctx.zeroFuelMass_kg, y[S_MASS]) });
+  events.push(...fuelExhaustedEvents(ctx));
   events.push(...(spec.extraEvents ?? []));
   return { step_s: spec.step_s, evaluate, derivative, events, algebraicAltitude: spec.algebraicAltitude };
 }

@@ -5,7 +5,7 @@
  * performance text, e.g. Anderson, Aircraft Performance and Design, ch. 6).
  */
 import type { RatingName } from '../propulsion/propulsionModel';
-import { fuelExhaustedG, airPoint, makeSample, ratingPoint } from './flightPoint';
+import { fuelExhaustedEvents, airPoint, makeSample, ratingPoint } from './flightPoint';
 import { flySegment } from './flySegment';
 import { legFailed, legOk, type LegOutcome } from './legOutcome';
 import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
@@ -48,7 +48,7 @@ export function flyLevelSpeedChange(
       g: (y, s) => MIN_SPEED_CHANGE_M_S2 - (direction * (s.thrustUsed_N - s.drag_N)) / Math.max(y[S_MASS], 1),
     },
   ];
-  if (!ctx.options.allowNegativeFuel) events.push({ stop: 'fuel_exhausted', stateOnly: true, g: (y) => fuelExhaustedG(ctx.zeroFuelMass_kg, y[S_MASS]) });
+  events.push(...fuelExhaustedEvents(ctx));
   const startState = Float64Array.from(start);
   startState[S_TAS] = start[S_TAS] > 0 ? start[S_TAS] : vTarget;
   if (Math.abs(startState[S_TAS] - vTarget) < 1e-9) return legOk(startState, null);
