@@ -7,6 +7,7 @@ import { profileSeries } from '../charts/profileSeries';
 import { CautionList } from '../components/CautionList';
 import { HeadlineFigures } from '../components/HeadlineFigures';
 import { LegsTable } from '../components/LegsTable';
+import { ThrustLapseChart } from '../components/LapseCharts';
 import { LineChartPanel } from '../components/LineChartPanel';
 import { deckTitleText } from '../state/deckTitle';
 import { LEG_KIND_LABEL } from '../state/legTemplates';
@@ -81,15 +82,10 @@ export function StudyReport(props: { readonly project: Project; readonly snapsho
       <LineChartPanel title="Mass against distance" testId="report-chart-mass" data={rows} xKey="distance" xLabel={`distance (${displayUnit('distance', u)})`} yLabel={`mass (${displayUnit('mass', u)})`} series={[{ key: 'mass', name: 'aircraft mass' }]} size={REPORT_CHART} />
       {polar ? <LineChartPanel title={`Drag polar with ${s.inletName}'s external drag`} testId="report-chart-polar" data={polar.rows} xKey="cl" xLabel="CL" yLabel="CD" series={polar.series} size={REPORT_CHART} /> : null}
       {lapse ? (
-        <LineChartPanel
+        <ThrustLapseChart
           title={`Thrust at ${s.lapse[0]!.rating}, all engines: uninstalled (dashed) and installed`}
           testId="report-chart-lapse"
-          data={lapse.thrust}
-          xKey="mach"
-          xLabel="Mach"
-          yLabel={`thrust (${lapse.thrustUnit})`}
-          series={lapse.series}
-          dashed={(key) => key.startsWith('u')}
+          lapse={lapse}
           size={REPORT_CHART}
         />
       ) : null}

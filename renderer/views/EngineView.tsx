@@ -4,7 +4,8 @@ import { formatQuantity } from '../../engine/units/quantity';
 import { ChoiceField } from '../components/ChoiceField';
 import { lapseSeries } from '../charts/lapseSeries';
 import { FailureNotice } from '../components/IssueList';
-import { LineChartPanel, type ChartSize } from '../components/LineChartPanel';
+import { ThrustLapseChart, TsfcLapseChart } from '../components/LapseCharts';
+import type { ChartSize } from '../components/LineChartPanel';
 import { QuantityField } from '../components/QuantityField';
 import { StaleMark } from '../components/StaleMark';
 import type { ToolbarCommand } from '../components/Toolbar';
@@ -115,28 +116,13 @@ export function EngineView(props: { readonly live: LiveStudy; readonly chartSize
       ) : null}
       {lapse && curves ? (
         <div className="chart-row">
-          <LineChartPanel
+          <ThrustLapseChart
             title={`Thrust at ${curves.rating}, all engines, ISA: uninstalled (dashed) and installed with ${snapshot!.inletName}`}
             testId="chart-thrust-lapse"
-            data={lapse.thrust}
-            xKey="mach"
-            xLabel="Mach"
-            yLabel={`thrust (${lapse.thrustUnit})`}
-            series={lapse.series}
-            dashed={(key) => key.startsWith('u')}
+            lapse={lapse}
             {...size}
           />
-          <LineChartPanel
-            title="TSFC at the same rating: uninstalled (dashed) and installed"
-            testId="chart-tsfc"
-            data={lapse.tsfc}
-            xKey="mach"
-            xLabel="Mach"
-            yLabel={`TSFC (${lapse.tsfcUnit})`}
-            series={lapse.series}
-            dashed={(key) => key.startsWith('u')}
-            {...size}
-          />
+          <TsfcLapseChart title="TSFC at the same rating: uninstalled (dashed) and installed" testId="chart-tsfc" lapse={lapse} {...size} />
         </div>
       ) : null}
     </section>
