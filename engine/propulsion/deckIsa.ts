@@ -1,51 +1,28 @@
 /**
- * ISA temperature and pressure ratios at a pressure altitude, as needed by the
- * deck's temperature correction and the parametric deck. Layers and constants
- * of the U.S. Standard Atmosphere 1976 (identical to ICAO Doc 7488 to 32 km),
- * with the altitude read as geopotential (the definition of pressure altitude).
+ * ISA temperature and pressure ratio at a pressure altitude, as the deck's
+ * temperature correction and the parametric deck need them: a thin adapter
+ * over the one standard atmosphere (engine/aero/standardAtmosphere.ts, U.S.
+ * Standard Atmosphere 1976) that throws for an altitude it does not serve,
+ * since deck callers validate conditions first.
  */
+import { T0 } from '../aero/constants';
+import { atmosphere, type AtmosphereState } from '../aero/standardAtmosphere';
 
-/** Sea-level standard temperature (K) and pressure (Pa), U.S. Standard Atmosphere 1976. */
-export const ISA_SEA_LEVEL_TEMPERATURE_K = 288.15;
-export const ISA_SEA_LEVEL_PRESSURE_PA = 101325;
+/** Sea-level standard temperature (K), U.S. Standard Atmosphere 1976. */
+export const ISA_SEA_LEVEL_TEMPERATURE_K = T0;
 
-// g0 * M0 / R* (K/m): 9.80665 * 0.0289644 / 8.31432, U.S. Standard Atmosphere 1976.
-const G_M_OVER_R = (9.80665 * 0.0289644) / 8.31432;
-const BASE_M = [0, 11000, 20000, 32000, 47000, 51000, 71000, 84852];
-const LAPSE_K_M = [-0.0065, 0, 0.001, 0.0028, 0, -0.0028, -0.002];
-const BASE_T_K: number[] = [ISA_SEA_LEVEL_TEMPERATURE_K];
-const BASE_DELTA: number[] = [1];
-for (let i = 0; i < LAPSE_K_M.length; i++) {
-  const dh = BASE_M[i + 1]! - BASE_M[i]!;
-  const t0 = BASE_T_K[i]!;
-  const lapse = LAPSE_K_M[i]!;
-  const t1 = t0 + lapse * dh;
-  BASE_T_K.push(t1);
-  BASE_DELTA.push(BASE_DELTA[i]! * layerPressureRatio(t0, lapse, dh));
+function isaState(altitude_m: number): AtmosphereState {
+  const state = atmosphere(altitude_m, 0);
+  if (!state.ok) throw new RangeError(`ISA: ${state.error.message}`);
+  return state.value;
 }
 
-function layerPressureRatio(baseT_K: number, lapse_K_m: number, dh_m: number): number {
-  if (lapse_K_m === 0) return Math.exp((-G_M_OVER_R * dh_m) / baseT_K);
-  return Math.pow((baseT_K + lapse_K_m * dh_m) / baseT_K, -G_M_OVER_R / lapse_K_m);
-}
-
-function layerIndex(altitude_m: number): number {
-  if (!(altitude_m >= -5000 && altitude_m <= 84852)) {
-    throw new RangeError(`ISA: pressure altitude must be within -5000..84852 m, got ${altitude_m}`);
-  }
-  let i = 0;
-  while (i < LAPSE_K_M.length - 1 && altitude_m > BASE_M[i + 1]!) i++;
-  return i;
-}
-
-/** ISA static temperature (K) at pressure altitude -5 km..84.852 km (U.S. Standard Atmosphere 1976). */
+/** ISA static temperature (K) at a pressure altitude within the standard atmosphere's range. */
 export function isaTemperature_K(altitude_m: number): number {
-  const i = layerIndex(altitude_m);
-  return BASE_T_K[i]! + LAPSE_K_M[i]! * (altitude_m - BASE_M[i]!);
+  return isaState(altitude_m).isaTemperature_K;
 }
 
-/** ISA static pressure ratio delta = p / 101325 Pa (-) at pressure altitude -5 km..84.852 km (U.S. Standard Atmosphere 1976). */
+/** ISA static pressure ratio delta = p / 101325 Pa (-) at a pressure altitude within the standard atmosphere's range. */
 export function isaPressureRatio(altitude_m: number): number {
-  const i = layerIndex(altitude_m);
-  return BASE_DELTA[i]! * layerPressureRatio(BASE_T_K[i]!, LAPSE_K_M[i]!, altitude_m - BASE_M[i]!);
+  return isaState(altitude_m).delta;
 }
