@@ -103,6 +103,11 @@ function layerIndex(h: number): number {
   return i;
 }
 
+/** ISA temperature lapse rate dT/dH (K/m) of the 1976 layer holding a pressure altitude (m); the lowest layer extends below sea level (1976 Table 4). */
+export function isaLapseRate_K_m(pressureAltitude_m: number): number {
+  return LAPSE[layerIndex(pressureAltitude_m)];
+}
+
 /** ISA temperature (K) at a geopotential altitude already known to be in range. */
 function isaTemperature(h: number, i: number): number {
   return BASE_T[i]! + LAPSE[i] * (h - BASE_H[i]);

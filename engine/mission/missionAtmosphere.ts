@@ -7,7 +7,7 @@
  *
  * Sources: U.S. Standard Atmosphere 1976; NACA Report 1135 (pitot relation).
  */
-import { atmosphere, pressureAltitude } from '../aero/standardAtmosphere';
+import { atmosphere, isaLapseRate_K_m, pressureAltitude } from '../aero/standardAtmosphere';
 import { casFromMach, casMachTransitionAltitude, machFromCas } from '../aero/airspeeds';
 import { a0, g0, p0, R_air, T0 } from '../aero/constants';
 
@@ -16,9 +16,7 @@ export const GAS_CONSTANT_J_KG_K = R_air;
 export const SEA_LEVEL_TEMPERATURE_K = T0;
 export const SEA_LEVEL_PRESSURE_PA = p0;
 export const SEA_LEVEL_SPEED_OF_SOUND_M_S = a0;
-export const TROPOSPHERE_LAPSE_K_M = -0.0065;
 export const TROPOPAUSE_M = 11000;
-export const FEET_M = 0.3048;
 
 export interface MissionAir {
   readonly temperature_K: number;
@@ -29,13 +27,6 @@ export interface MissionAir {
   readonly speedOfSound_m_s: number;
   /** ISA temperature lapse dT/dHp at this altitude (K/m), U.S. Standard Atmosphere 1976 layers to 32 km. */
   readonly lapse_K_m: number;
-}
-
-/** ISA lapse rate (K/m) of the layer holding a pressure altitude (m), to 32 km (USSA 1976 Table 4). */
-export function layerLapse(altitude_m: number): number {
-  if (altitude_m < 11000) return -0.0065;
-  if (altitude_m < 20000) return 0;
-  return 0.001;
 }
 
 // One-entry memo of missionAir, keyed purely by its arguments (a leg evaluation asks for the same point two or
@@ -68,7 +59,7 @@ function computeMissionAir(altitude_m: number, isaDev_K: number): MissionAir {
     pressure_Pa: a.pressure_Pa,
     density_kg_m3: a.density_kg_m3,
     speedOfSound_m_s: a.speedOfSound_m_s,
-    lapse_K_m: layerLapse(altitude_m),
+    lapse_K_m: isaLapseRate_K_m(altitude_m),
   };
 }
 

@@ -36,18 +36,18 @@ import { flyHold } from './holdLeg';
 import { makeLevelSegment } from './levelFlight';
 import { flySegment } from './flySegment';
 import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
-import { FEET_M } from './missionAtmosphere';
+import { FOOT_M } from '../units/unitTable';
 import { S_AIR, S_ALT, S_GROUND, S_MASS, S_TIME, type StateVector } from './missionState';
 import { appendCaution, createFlightLog } from './timeHistoryBuilder';
 import { CAUTION_CATALOGUE } from '../cautions/cautionCatalogue';
 import { legFailed, legOk, type LegOutcome } from './legOutcome';
 
 /** 1,500 ft above the aerodrome (m): ICAO Annex 6 Part I 4.3.6.3 (450 m) and 14 CFR 121.645(b)(4). */
-export const HOLD_HEIGHT_M = 1500 * FEET_M;
+export const HOLD_HEIGHT_M = 1500 * FOOT_M;
 
 const DEFAULT_CLIMB: Omit<SpeedSchedule, 'mach'> = {
   lowCas_m_s: (250 * 1852) / 3600,
-  lowAltitudeLimit_m: 10000 * FEET_M,
+  lowAltitudeLimit_m: 10000 * FOOT_M,
   cas_m_s: (280 * 1852) / 3600,
 };
 

@@ -5,6 +5,7 @@ import {
   atmosphere,
   geometricFromGeopotential,
   geopotentialFromGeometric,
+  isaLapseRate_K_m,
   MAX_PRESSURE_ALTITUDE_M,
   MIN_PRESSURE_ALTITUDE_M,
   pressureAltitude,
@@ -243,5 +244,18 @@ describe('atmosphere over its whole range (property)', () => {
       }),
       { numRuns: 1000 },
     );
+  });
+});
+
+describe('isaLapseRate_K_m', () => {
+  it('isaLapseRate_K_m gives each layer its 1976 Table 4 lapse rate, the first layer extended below sea level', () => {
+    // U.S. Standard Atmosphere 1976, Table 4 (geopotential layer bases and lapse rates; from memory)
+    expect(isaLapseRate_K_m(-2000)).toBe(-0.0065);
+    expect(isaLapseRate_K_m(10999)).toBe(-0.0065);
+    expect(isaLapseRate_K_m(11000)).toBe(0);
+    expect(isaLapseRate_K_m(20000)).toBe(0.001);
+    expect(isaLapseRate_K_m(40000)).toBe(0.0028);
+    expect(isaLapseRate_K_m(50000)).toBe(0);
+    expect(isaLapseRate_K_m(60000)).toBe(-0.0028);
   });
 });
