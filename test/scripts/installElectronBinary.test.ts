@@ -1,5 +1,5 @@
 import { spawnSync } from 'node:child_process';
-import { copyFileSync, mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { copyFileSync, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
@@ -77,8 +77,8 @@ describe('scripts/installElectronBinary.mjs', () => {
     expect(r.stderr).toBe('');
   });
 
-  it('package.json denies electron’s own install script and runs this one after the install', async () => {
-    const pkg = (await import('../../package.json', { with: { type: 'json' } })).default as {
+  it('package.json denies electron’s own install script and runs this one after the install', () => {
+    const pkg = JSON.parse(readFileSync(resolve(__dirname, '..', '..', 'package.json'), 'utf8')) as {
       scripts: Record<string, string>;
       allowScripts: Record<string, boolean>;
     };
