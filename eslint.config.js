@@ -8,7 +8,7 @@ import tseslint from 'typescript-eslint';
 const nodeBuiltins = ['node:*', 'fs', 'path', 'os', 'child_process', 'url', 'util', 'worker_threads'];
 
 export default tseslint.config(
-  { ignores: ['node_modules/', 'dist/', 'dist-web/', 'dist-electron/', 'artifacts/', 'coverage/'] },
+  { ignores: ['node_modules/', 'dist/', 'dist-web/', 'dist-electron/', 'dist-cli/', 'artifacts/', 'coverage/'] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {

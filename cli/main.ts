@@ -1,10 +1,10 @@
 import { SAFETY_NOTICE } from '../engine/core/notice';
 import { parseVerbArgs, UsageError, type CliIo, type Verb } from './verb';
-import { verbs } from './verbs/index';
+import { VERB_CATALOGUE } from './verbs/catalogue';
 
 function overview(): string {
-  const width = Math.max(...verbs.map((v) => v.name.length));
-  const lines = verbs.map((v) => `  ${v.name.padEnd(width)}  ${v.summary}`);
+  const width = Math.max(...VERB_CATALOGUE.map((v) => v.name.length));
+  const lines = VERB_CATALOGUE.map((v) => `  ${v.name.padEnd(width)}  ${v.summary}`);
   return [
     'blockwise — mission performance on installed engine thrust',
     '',
@@ -25,6 +25,9 @@ export async function runCli(argv: readonly string[], io: CliIo): Promise<number
     io.out(overview());
     return name === undefined ? 2 : 0;
   }
+  // The verbs (and the engine behind them) load only when one runs, so the
+  // overview above prints at once.
+  const { verbs } = await import('./verbs/index');
   // Verbs with sub-verbs (e.g. `deck check`) are registered as "deck check".
   const sub = rest[0];
   const verb: Verb | undefined =

@@ -6,6 +6,7 @@ import { FOOT_M, POUND_KG } from '../../engine/units/unitTable';
 import { optionalQuantityOption, quantityOption } from '../common/quantityOptions';
 import { printJsonReport, reportText } from '../common/report';
 import { optionalString, UsageError, type CliIo, type Verb } from '../verb';
+import { verbSummary } from './catalogue';
 
 const SPEED_OPTIONS = ['cas', 'eas', 'tas', 'mach'] as const;
 
@@ -67,7 +68,7 @@ function textReport(state: AtmosphereState, speeds: Airspeeds | null): string {
 
 export const airVerb: Verb = {
   name: 'air',
-  summary: 'standard atmosphere and airspeeds at a pressure altitude',
+  summary: verbSummary('air'),
   help: `blockwise air — standard atmosphere (U.S. Standard Atmosphere 1976) and airspeeds
 
 Usage: blockwise air --altitude <length> [--isa-dev <temperature difference>]

@@ -10,6 +10,7 @@ import { formatTable } from '../format/textTable';
 import { formatLoadFailure } from '../projectFiles';
 import { optionalString, UsageError, type CliIo, type Verb } from '../verb';
 import { bothUnits, JSON_OPTION, machText } from './analysisArgs';
+import { verbSummary } from './catalogue';
 
 function signed(x: number | null, digits: number): string {
   if (x === null) return '-';
@@ -18,7 +19,7 @@ function signed(x: number | null, digits: number): string {
 
 export const compareVerb: Verb = {
   name: 'compare',
-  summary: 'inlet A vs inlet B on the same mission, with the block-fuel difference broken down',
+  summary: verbSummary('compare'),
   help: `blockwise compare — two inlet designs on the same mission
 
 Usage: blockwise compare <project.blockwise.json> [--inlets <A>,<B>] [--json]

@@ -14,10 +14,11 @@ import {
   POINT_OPTIONS,
   ratingOption,
 } from './analysisArgs';
+import { verbSummary } from './catalogue';
 
 export const crossoverVerb: Verb = {
   name: 'crossover',
-  summary: 'thrust available vs drag over Mach at an altitude and weight: the crossover Machs',
+  summary: verbSummary('crossover'),
   help: `blockwise crossover — where installed thrust available meets drag in level flight
 
 Usage: blockwise crossover <project.blockwise.json> --altitude <alt> --weight <mass>

@@ -9,6 +9,7 @@ import { optionalQuantityOption, quantityOption } from '../common/quantityOption
 import { printJsonReport, reportText } from '../common/report';
 import { deckErrorsText, readDeckFile } from '../common/textFile';
 import { requireString, UsageError, type Verb } from '../verb';
+import { verbSummary } from './catalogue';
 
 function onePositional(positionals: readonly string[]): string {
   if (positionals.length !== 1) throw new UsageError(`give exactly one deck file (got ${positionals.length})`);
@@ -87,7 +88,7 @@ function summaryText(file: string, s: DeckSummary): string {
 
 export const deckCheckVerb: Verb = {
   name: 'deck check',
-  summary: 'validate an engine deck file (CSV or JSON) and summarize it',
+  summary: verbSummary('deck check'),
   help: `blockwise deck check — validate an engine deck file and summarize it
 
 Usage: blockwise deck check <file> [--json]
@@ -119,7 +120,7 @@ column) when it is not; 2 for a bad command line.
 
 export const deckAtVerb: Verb = {
   name: 'deck at',
-  summary: 'read an engine deck at an altitude, Mach and power setting',
+  summary: verbSummary('deck at'),
   help: `blockwise deck at — read an engine deck (per engine, uninstalled) at one point
 
 Usage: blockwise deck at <file> --altitude <altitude> --mach <mach> --power <power|rating>

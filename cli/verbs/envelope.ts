@@ -4,10 +4,11 @@ import { positiveQuantityOption } from '../common/quantityOptions';
 import { formatTable } from '../format/textTable';
 import { UsageError, type CliIo, type Verb } from '../verb';
 import { bothUnits, INLET_OPTION, ISA_DEV_OPTION, isaDevOption, JSON_OPTION, machText, openAnalysisProject, ratingOption } from './analysisArgs';
+import { verbSummary } from './catalogue';
 
 export const envelopeVerb: Verb = {
   name: 'envelope',
-  summary: 'level-flight envelope over altitude and the absolute, service and cruise ceilings',
+  summary: verbSummary('envelope'),
   help: `blockwise envelope — level-flight envelope and ceilings at one weight
 
 Usage: blockwise envelope <project.blockwise.json> [--weight <mass>] [--rating maxClimb]

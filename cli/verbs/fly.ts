@@ -7,13 +7,14 @@ import { missionJson } from '../format/missionJson';
 import { missionSummaryText } from '../format/missionSummaryText';
 import { optionalString, printJson, UsageError, type CliIo, type Verb } from '../verb';
 import { INLET_OPTION, JSON_OPTION } from './analysisArgs';
+import { verbSummary } from './catalogue';
 
 /** Exit code when the mission was flown but did not end with status "ok". */
 export const EXIT_MISSION_NOT_OK = 3;
 
 export const flyVerb: Verb = {
   name: 'fly',
-  summary: 'fly a project\'s mission and print block fuel, time, reserves, legs and cautions',
+  summary: verbSummary('fly'),
   help: `blockwise fly — fly the mission of a project file
 
 Usage: blockwise fly <project.blockwise.json> [--inlet <name>] [--json] [--csv <file>]

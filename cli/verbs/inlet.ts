@@ -16,6 +16,7 @@ import { optionalQuantityOption, quantityOption } from '../common/quantityOption
 import { printJsonReport, reportText } from '../common/report';
 import { deckErrorsText, readDeckFile, readTextFile } from '../common/textFile';
 import { optionalString, UsageError, type CliIo, type Verb } from '../verb';
+import { verbSummary } from './catalogue';
 
 /**
  * The inlet designs in a design file: one inlet object, an array of them, or
@@ -137,7 +138,7 @@ function textReport(deck: EngineDeck, results: readonly DesignResult[], engineCo
 
 export const inletVerb: Verb = {
   name: 'inlet',
-  summary: 'install an engine deck behind one or more inlet designs and show why they differ',
+  summary: verbSummary('inlet'),
   help: `blockwise inlet — installed thrust of an engine deck behind inlet designs, with the loss breakdown
 
 Usage: blockwise inlet <deck file> --design <file> [--design <file> ...]

@@ -3,10 +3,11 @@ import { analysisFailed, printJsonReport, printReport } from '../common/report';
 import { formatTable } from '../format/textTable';
 import { optionalString, UsageError, type CliIo, type Verb } from '../verb';
 import { bothUnits, INLET_OPTION, JSON_OPTION, openAnalysisProject } from './analysisArgs';
+import { verbSummary } from './catalogue';
 
 export const payloadRangeVerb: Verb = {
   name: 'payload-range',
-  summary: 'payload-range diagram: corner points and the curve, each a mission with reserves',
+  summary: verbSummary('payload-range'),
   help: `blockwise payload-range — payload against range, each point a full mission with reserves
 
 Usage: blockwise payload-range <project.blockwise.json> [--inlet <name>] [--between <n>] [--json]

@@ -4,12 +4,13 @@ import { analysisFailed, cautionBlock, isaText, printJsonReport, printReport } f
 import { formatTable } from '../format/textTable';
 import type { CliIo, Verb } from '../verb';
 import { bothUnits, INLET_OPTION, ISA_DEV_OPTION, isaDevOption, JSON_OPTION, machText, openAnalysisProject, pointCondition, POINT_OPTIONS } from './analysisArgs';
+import { verbSummary } from './catalogue';
 
 const NMI_M = 1852;
 
 export const rangeSpeedsVerb: Verb = {
   name: 'range-speeds',
-  summary: 'specific range over Mach, maximum-range and long-range Mach, and the optimum altitude',
+  summary: verbSummary('range-speeds'),
   help: `blockwise range-speeds — specific range, best cruise speeds and optimum altitude
 
 Usage: blockwise range-speeds <project.blockwise.json> --altitude <alt> --weight <mass>

@@ -4,10 +4,11 @@ import { analysisFailed, printJsonReport, printReport } from '../common/report';
 import { formatTable } from '../format/textTable';
 import type { CliIo, Verb } from '../verb';
 import { INLET_OPTION, JSON_OPTION, openAnalysisProject } from './analysisArgs';
+import { verbSummary } from './catalogue';
 
 export const tradeVerb: Verb = {
   name: 'trade',
-  summary: 'trade factors: block fuel per 1 % recovery, per drag count, per 1 % TSFC, per 100 kg OEW',
+  summary: verbSummary('trade'),
   help: `blockwise trade — what a change in the installation is worth in block fuel
 
 Usage: blockwise trade <project.blockwise.json> [--inlet <name>] [--json]

@@ -1,0 +1,78 @@
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, rmSync, utimesSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
+import { pathToFileURL } from 'node:url';
+import { afterAll, describe, expect, it } from 'vitest';
+// @ts-expect-error plain .mjs build script without types
+import { buildCli } from '../../scripts/buildCli.mjs';
+// @ts-expect-error plain .mjs start-up check without types
+import { bundleProblem } from '../../bin/cliBundle.mjs';
+import { DEMO_PROJECT, repoRoot, run } from '../cli/support/cliRun';
+
+// Task brief (issue 13): the command line is bundled at install; the bundle
+// gives the same output as the TypeScript sources, and a bundle older than
+// its sources is never run.
+
+const repo = resolve(__dirname, '..', '..');
+const scratch = mkdtempSync(join(tmpdir(), 'blockwise-cli-bundle-'));
+afterAll(() => rmSync(scratch, { recursive: true, force: true }));
+
+describe('scripts/buildCli.mjs', () => {
+  it('buildCli bundles the CLI, which prints the same fly JSON and overview as the sources', async () => {
+    const out = join(scratch, 'dist');
+    const built = (await buildCli(out)) as { inputs: number };
+    expect(built.inputs).toBeGreaterThan(50);
+    expect(bundleProblem(pathToFileURL(`${repo}/`), pathToFileURL(`${out}/`))).toBeNull();
+
+    const bundled = spawnSync(process.execPath, [join(out, 'blockwise.mjs'), 'fly', DEMO_PROJECT, '--json'], { cwd: repoRoot, encoding: 'utf8', timeout: 60_000 });
+    expect(bundled.stderr).toBe('');
+    const sources = await run('fly', DEMO_PROJECT, '--json');
+    expect(bundled.status).toBe(sources.code);
+    expect(bundled.stdout).toBe(sources.out);
+
+    const help = spawnSync(process.execPath, [join(out, 'blockwise.mjs'), '--help'], { cwd: repoRoot, encoding: 'utf8', timeout: 60_000 });
+    expect(help.status).toBe(0);
+    expect(help.stdout).toBe((await run('--help')).out);
+  }, 120_000);
+});
+
+describe('bin/cliBundle.mjs', () => {
+  const root = join(scratch, 'root');
+  const dist = join(scratch, 'root', 'dist');
+  const source = join(root, 'a.ts');
+  function writeBundle(mtime_s: number): void {
+    spawnSync('mkdir', ['-p', dist]);
+    writeFileSync(source, 'export const a = 1;\n');
+    utimesSync(source, mtime_s, mtime_s);
+    writeFileSync(join(dist, 'blockwise.mjs'), '');
+    writeFileSync(join(dist, 'inputs.json'), JSON.stringify({ inputs: [['a.ts', mtime_s * 1000, 20]] }));
+  }
+  const check = () => bundleProblem(pathToFileURL(`${root}/`), pathToFileURL(`${dist}/`)) as string | null;
+
+  it('bundleProblem is null while every source keeps its recorded time and size', () => {
+    writeBundle(1_700_000_000);
+    expect(check()).toBeNull();
+  });
+  it('bundleProblem names the source that changed after the build', () => {
+    writeBundle(1_700_000_000);
+    utimesSync(source, 1_700_000_001, 1_700_000_001);
+    expect(check()).toBe('is older than the sources (a.ts changed)');
+    writeBundle(1_700_000_000);
+    writeFileSync(source, 'export const a = 12;\n');
+    utimesSync(source, 1_700_000_000, 1_700_000_000);
+    expect(check()).toBe('is older than the sources (a.ts changed)');
+  });
+  it('bundleProblem says the bundle is not built when inputs.json or the bundle is missing', () => {
+    writeBundle(1_700_000_000);
+    rmSync(join(dist, 'blockwise.mjs'));
+    expect(check()).toBe('is not built');
+    rmSync(dist, { recursive: true });
+    expect(check()).toBe('is not built');
+  });
+  it('bundleProblem says which source is gone', () => {
+    writeBundle(1_700_000_000);
+    rmSync(source);
+    expect(check()).toBe('is older than the sources (a.ts is gone)');
+  });
+});
