@@ -33,3 +33,12 @@ export const DEFAULT_CAUTION_SETTINGS: CautionSettings = {
   minFanFaceMach: 0.4,
   maxFanFaceMach: 0.6,
 };
+
+/**
+ * Whether a caution passed on from the propulsion model is shown under
+ * `settings`: deck extrapolation only when `cautionOnDeckExtrapolation`;
+ * everything else always. The one place this setting is read.
+ */
+export function propulsionCautionShown(caution: { readonly id: string }, settings: CautionSettings): boolean {
+  return settings.cautionOnDeckExtrapolation || caution.id !== 'deck_extrapolation';
+}

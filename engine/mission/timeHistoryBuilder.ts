@@ -14,7 +14,7 @@ import {
   idleAboveDragCaution,
   type CautionDraft,
 } from '../cautions/checks';
-import type { CautionSettings } from '../cautions/cautionSettings';
+import { propulsionCautionShown, type CautionSettings } from '../cautions/cautionSettings';
 import type { Airframe, TimeHistory } from './missionTypes';
 import { S_AIR, S_MASS, S_TIME, type FlightSample, type StateVector } from './missionState';
 import type { LegTarget } from './missionContext';
@@ -100,8 +100,7 @@ export function appendSample(log: FlightLog, target: LegTarget, state: StateVect
   appendCaution(log, target, checkPolarClamped(sample.polarOutside), t);
   if (sample.idleAboveDrag) appendCaution(log, target, idleAboveDragCaution(sample.drag_N, sample.thrustUsed_N), t);
   for (const c of sample.propulsionCautions) {
-    if (c.id === 'deck_extrapolation' && !log.settings.cautionOnDeckExtrapolation) continue;
-    appendCaution(log, target, c, t);
+    if (propulsionCautionShown(c, log.settings)) appendCaution(log, target, c, t);
   }
 }
 

@@ -12,7 +12,8 @@ import { temperatureFlowFactor } from './deckTemperature';
 import type { EngineDeck } from './engineDeck';
 import type { InletDesign } from './inletDesign';
 import type { InstallationSettings } from './installationCorrections';
-import { makeInstalledModel, type DeckAccess } from './installedModel';
+import type { DeckAccess } from './deckAccess';
+import { makeInstalledModel } from './installedModel';
 import type { FlightCondition, PropulsionModel } from './propulsionModel';
 
 export { inletDragIncrementCd0, inletWeight } from './inletDesign';

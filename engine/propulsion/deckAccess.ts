@@ -1,0 +1,44 @@
+/**
+ * The seam between the installed model and an uninstalled deck: what the
+ * installed model asks of a deck and the atmosphere (installedPropulsion.ts
+ * wires it to the engine deck and the standard atmosphere).
+ */
+import type { Result } from '../core/result';
+import type { DeckLookup } from './deckLookup';
+import type { ReferenceRecovery } from './engineDeck';
+import type { FlightCondition, RatingName } from './propulsionModel';
+
+/** One engine's uninstalled deck numbers at a condition and power: the deck lookup's own result. */
+export type DeckPoint = DeckLookup;
+
+/** A failed deck or atmosphere query: a literal code and a readable message. */
+export interface AccessError {
+  readonly code: string;
+  readonly message: string;
+}
+
+/** Evaluator of the deck at one prepared condition: thrust (N) and airflow (kg/s, NaN without airflow) into out[0], out[1]; false where the deck refuses. */
+export type DeckCurve = (power: number, out: Float64Array) => boolean;
+
+/** What the installed model needs from an uninstalled deck and the atmosphere. */
+export interface DeckAccess {
+  readonly title: string;
+  readonly parametric: boolean;
+  readonly hasAirflow: boolean;
+  readonly referenceRecovery: ReferenceRecovery;
+  lookup(condition: FlightCondition, power: number): Result<DeckPoint, AccessError>;
+  /** Power-axis value of a rating, or null when the deck does not name it. */
+  ratingPower(rating: RatingName): number | null;
+  /** Smallest and largest power on the deck at this condition. */
+  powerBounds(condition: FlightCondition): { readonly idle: number; readonly max: number };
+  /** Uninstalled power for a per-engine thrust (a first guess), or null. */
+  powerForThrust(condition: FlightCondition, thrust_N: number, ceilingPower: number): number | null;
+  /**
+   * Optional fast path for solves at one condition: prepares the deck at
+   * `condition` and returns its DeckCurve. Must agree with `lookup`. The
+   * evaluator may share buffers: it is valid until the next `curveAt` call.
+   */
+  curveAt?(condition: FlightCondition): DeckCurve;
+  /** Free-stream static pressure (Pa) and temperature (K). */
+  ambient(condition: FlightCondition): Result<{ readonly pressure_Pa: number; readonly temperature_K: number }, AccessError>;
+}

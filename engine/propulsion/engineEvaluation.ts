@@ -1,0 +1,243 @@
+/**
+ * One engine's installed point, as pure functions over an explicit scratch
+ * record: deck point -> inlet recovery and airflow (inletFlow.ts,
+ * inletRecovery.ts) -> the installation-correction step
+ * (installationMethod.ts) -> spillage drag (spillageDrag.ts); then the
+ * cautions of the point (engine/cautions) and the whole-aircraft
+ * InstalledPoint. The scratch is reused inside a query and never escapes:
+ * `assembleInstalledPoint` copies what it needs into a fresh object.
+ */
+import type { Caution } from '../cautions/caution';
+import { checkThroatMach } from '../cautions/checks';
+import { propulsionCautionShown, type CautionSettings } from '../cautions/cautionSettings';
+import {
+  checkFanFaceMach,
+  deckLookupFailedCaution,
+  noAirflowCaution,
+  recoveryTableRangeCaution,
+  throatChokedCaution,
+} from '../cautions/propulsionCautions';
+import type { AccessError, DeckAccess } from './deckAccess';
+import { referenceRecoveryAt, type ReferenceRecovery } from './engineDeck';
+import { geometryInletFlow, streamTubeArea, type FreeStream } from './inletFlow';
+import { tableRecovery, type PreparedInlet } from './inletRecovery';
+import { correctDeckPoint, type InstallationMethodId } from './installationMethod';
+import type { InstallationSettings } from './installationCorrections';
+import { milE5008bRecovery } from './milE5008b';
+import type { DeckAxis, FlightCondition, InstalledPoint } from './propulsionModel';
+import { additiveDrag, spillageDrag } from './spillageDrag';
+
+export const NO_CAUTIONS: readonly Caution[] = Object.freeze([]);
+const NO_AXES: readonly DeckAxis[] = Object.freeze([]);
+
+/** The fixed parts of one installation, prepared once per model. */
+export interface InstallationContext {
+  /** Design whose recovery, throat and fan-face Mach are used. */
+  readonly recoveryInlet: PreparedInlet;
+  /** Capture area (m^2) and lip-suction factor (-) of the design that sets spillage. */
+  readonly spillCapture_m2: number;
+  readonly spillLip: number;
+  readonly installation: InstallationSettings;
+  readonly method: InstallationMethodId;
+  readonly referenceRecovery: ReferenceRecovery;
+  readonly cautionSettings: CautionSettings;
+  readonly engineCount: number;
+}
+
+/** Scratch of one engine evaluation (SI, per engine). Mutated only by the `...Into` functions below. */
+export interface EngineScratch {
+  /** Uninstalled deck thrust (N), fuel flow (kg/s), and the physical airflow at the inlet's recovery (kg/s, null without an airflow column). */
+  readonly deck: { thrust_N: number; fuelFlow_kg_s: number; airflow_kg_s: number | null };
+  /** Inlet recovery pt2/pt0 (-) and the deck's reference recovery (-). */
+  readonly inlet: { recovery: number; referenceRecovery: number };
+  massFlowRatio: number | null;
+  throatMach: number | null;
+  fanFaceMach: number | null;
+  throatChoked: boolean;
+  fanFaceChoked: boolean;
+  tableOutside: 'below' | 'above' | null;
+  /** After the installation-correction step, before spillage (N, kg/s, kg/s). */
+  correctedThrust_N: number;
+  fuelFlow_kg_s: number;
+  airflow_kg_s: number | null;
+  spillage_N: number;
+  deckError: AccessError | null;
+  outside: readonly DeckAxis[];
+  deckCautions: readonly Caution[];
+}
+
+export function newEngineScratch(): EngineScratch {
+  return {
+    deck: { thrust_N: 0, fuelFlow_kg_s: 0, airflow_kg_s: null },
+    inlet: { recovery: 1, referenceRecovery: 1 },
+    massFlowRatio: null,
+    throatMach: null,
+    fanFaceMach: null,
+    throatChoked: false,
+    fanFaceChoked: false,
+    tableOutside: null,
+    correctedThrust_N: 0,
+    fuelFlow_kg_s: 0,
+    airflow_kg_s: null,
+    spillage_N: 0,
+    deckError: null,
+    outside: NO_AXES,
+    deckCautions: NO_CAUTIONS,
+  };
+}
+
+/**
+ * Installs one engine's deck point into `s`: recovery (and, with airflow,
+ * the physical airflow scaled by eta/eta_ref), throat and fan-face Mach of
+ * the recovery design; the correction step; spillage from the spillage
+ * design's capture area at the corrected airflow (NACA Report 1187 additive
+ * drag less lip suction). Thrust N, fuel kg/s, airflow kg/s (null: none).
+ */
+export function installDeckPointInto(
+  s: EngineScratch,
+  ctx: InstallationContext,
+  free: FreeStream,
+  deckThrust_N: number,
+  deckFuelFlow_kg_s: number,
+  deckAirflow_kg_s: number | null,
+): void {
+  const mach = free.mach;
+  s.throatMach = null;
+  s.fanFaceMach = null;
+  s.massFlowRatio = null;
+  s.throatChoked = false;
+  s.fanFaceChoked = false;
+  s.tableOutside = null;
+  s.spillage_N = 0;
+  const inlet = s.inlet;
+  const deck = s.deck;
+  inlet.referenceRecovery = referenceRecoveryAt(ctx.referenceRecovery, mach);
+  deck.thrust_N = deckThrust_N;
+  deck.fuelFlow_kg_s = deckFuelFlow_kg_s;
+  const source = ctx.recoveryInlet.design.source;
+  if (source.kind === 'geometry') {
+    if (deckAirflow_kg_s !== null) {
+      const flow = geometryInletFlow(source, free, deckAirflow_kg_s, inlet.referenceRecovery);
+      inlet.recovery = flow.recovery;
+      deck.airflow_kg_s = flow.airflow_kg_s;
+      s.throatMach = flow.throatMach;
+      s.fanFaceMach = flow.fanFaceMach;
+      s.throatChoked = flow.throatChoked;
+      s.fanFaceChoked = flow.fanFaceChoked;
+    } else {
+      // Without airflow only the shock part of the recovery is known.
+      inlet.recovery = milE5008bRecovery(mach);
+      deck.airflow_kg_s = null;
+    }
+  } else {
+    const r = tableRecovery(ctx.recoveryInlet.table!, mach);
+    inlet.recovery = r.recovery;
+    s.tableOutside = r.outside;
+    deck.airflow_kg_s = deckAirflow_kg_s === null ? null : (deckAirflow_kg_s * r.recovery) / inlet.referenceRecovery;
+  }
+  const corrected = correctDeckPoint(ctx.method, deck, inlet, ctx.installation);
+  s.correctedThrust_N = corrected.thrust_N;
+  s.fuelFlow_kg_s = corrected.fuelFlow_kg_s;
+  s.airflow_kg_s = corrected.airflow_kg_s;
+  if (s.airflow_kg_s !== null) {
+    const a0 = streamTubeArea(s.airflow_kg_s, free);
+    s.massFlowRatio = Number.isFinite(a0) ? a0 / ctx.spillCapture_m2 : null;
+    if (s.massFlowRatio !== null) {
+      s.spillage_N = spillageDrag(additiveDrag(mach, free.pressure_Pa, s.massFlowRatio, ctx.spillCapture_m2).drag_N, ctx.spillLip);
+    }
+  }
+}
+
+/**
+ * Evaluates one engine at `power` into `s` through the full deck lookup. A
+ * refused lookup leaves zero thrust and fuel flow at the reference recovery
+ * and records the deck's error (raised as deck_lookup_failed).
+ */
+export function evaluateEngineInto(
+  s: EngineScratch,
+  ctx: InstallationContext,
+  access: DeckAccess,
+  condition: FlightCondition,
+  free: FreeStream,
+  power: number,
+): void {
+  const looked = access.lookup(condition, power);
+  if (!looked.ok) {
+    installDeckPointInto(s, ctx, free, 0, 0, null);
+    s.deckError = looked.error;
+    s.correctedThrust_N = 0;
+    s.fuelFlow_kg_s = 0;
+    s.inlet.recovery = s.inlet.referenceRecovery;
+    s.outside = NO_AXES;
+    s.deckCautions = NO_CAUTIONS;
+    return;
+  }
+  const d = looked.value;
+  s.deckError = null;
+  s.outside = d.outside;
+  s.deckCautions = d.cautions;
+  installDeckPointInto(s, ctx, free, d.thrust_N, d.fuelFlow_kg_s, d.airflow_kg_s);
+}
+
+/** Installed net propulsive force of one engine in `s` (N): corrected thrust less spillage. */
+export function netThrustOf(s: EngineScratch): number {
+  return s.correctedThrust_N - s.spillage_N;
+}
+
+/** The cautions of the point in `s`, after `extra` (rating fallbacks); built by engine/cautions, in a fixed order. */
+export function engineCautions(s: EngineScratch, ctx: InstallationContext, extra: readonly Caution[]): readonly Caution[] {
+  // Pushed inline (no helper closure: this runs on every propulsion query).
+  const settings = ctx.cautionSettings;
+  const design = ctx.recoveryInlet.design;
+  let list: Caution[] | null = extra.length === 0 ? null : [...extra];
+  if (s.deckError) (list ??= []).push(deckLookupFailedCaution(s.deckError.code, s.deckError.message));
+  for (const c of s.deckCautions) {
+    if (propulsionCautionShown(c, settings)) (list ??= []).push(c);
+  }
+  if (s.airflow_kg_s === null && !s.deckError) (list ??= []).push(noAirflowCaution(design.source.kind === 'geometry'));
+  if (s.tableOutside !== null) (list ??= []).push(recoveryTableRangeCaution(s.tableOutside, design.name, s.inlet.recovery));
+  const throat = checkThroatMach(s.throatMach, settings.maxThroatMach);
+  if (throat !== null) (list ??= []).push(throat);
+  if (s.throatChoked) (list ??= []).push(throatChokedCaution(design.name));
+  const fanFace = checkFanFaceMach(s.fanFaceMach, settings.minFanFaceMach, settings.maxFanFaceMach, s.fanFaceChoked);
+  if (fanFace !== null) (list ??= []).push(fanFace);
+  return list ?? extra;
+}
+
+/** The whole-aircraft point (every engine) of the engine in `s` at `condition` and `power`, with its cautions. */
+export function assembleInstalledPoint(
+  s: EngineScratch,
+  ctx: InstallationContext,
+  condition: FlightCondition,
+  power: number,
+  extra: readonly Caution[],
+): InstalledPoint {
+  const perEngineThrust_N = netThrustOf(s);
+  const thrust_N = perEngineThrust_N * ctx.engineCount;
+  const fuelFlow_kg_s = s.fuelFlow_kg_s * ctx.engineCount;
+  return {
+    altitude_m: condition.altitude_m,
+    mach: condition.mach,
+    isaDev_K: condition.isaDev_K,
+    power,
+    thrust_N,
+    fuelFlow_kg_s,
+    tsfc_kg_N_s: thrust_N > 0 ? fuelFlow_kg_s / thrust_N : null,
+    perEngine: {
+      uninstalledThrust_N: s.deck.thrust_N,
+      uninstalledFuelFlow_kg_s: s.deck.fuelFlow_kg_s,
+      correctedThrust_N: s.correctedThrust_N,
+      spillageDrag_N: s.spillage_N,
+      thrust_N: perEngineThrust_N,
+      fuelFlow_kg_s: s.fuelFlow_kg_s,
+      airflow_kg_s: s.airflow_kg_s,
+      recovery: s.inlet.recovery,
+      referenceRecovery: s.inlet.referenceRecovery,
+      massFlowRatio: s.massFlowRatio,
+      throatMach: s.throatMach,
+      fanFaceMach: s.fanFaceMach,
+    },
+    outsideTable: s.outside,
+    cautions: engineCautions(s, ctx, extra),
+  };
+}

@@ -1,0 +1,121 @@
+/**
+ * The part-power solve: the power between flight idle and a ceiling rating
+ * where one engine's installed thrust equals the thrust asked for, by
+ * Brent's method (engine/core/rootFind.ts) on installed thrust. Its state
+ * lives in one PartPowerSolve object per model (reused; a solve sets it at
+ * its start), so the residual is one function made once, not a closure per
+ * call (forThrust runs thousands of times per mission).
+ */
+import { brent } from '../core/rootFind';
+import type { DeckAccess, DeckCurve } from './deckAccess';
+import {
+  evaluateEngineInto,
+  installDeckPointInto,
+  netThrustOf,
+  newEngineScratch,
+  type EngineScratch,
+  type InstallationContext,
+} from './engineEvaluation';
+import type { FreeStream } from './inletFlow';
+import type { FlightCondition, ThrustLimit } from './propulsionModel';
+
+/** Relative thrust tolerance of `forThrust` (-): |installed - required| <= this x required (or 1e-6 N). */
+export const FOR_THRUST_TOLERANCE = 1e-7;
+
+export interface PartPowerSolve {
+  readonly ctx: InstallationContext;
+  readonly access: DeckAccess;
+  /** Scratch of full lookups (shared with the model's point queries) and of the fast deck curve. */
+  readonly full: EngineScratch;
+  readonly fast: EngineScratch;
+  readonly curveOut: Float64Array;
+  /** Installed thrust per engine at a power less `required_N` (N): made once per solve object. */
+  readonly residual: (power: number) => number;
+  condition: FlightCondition;
+  free: FreeStream;
+  curve: DeckCurve | undefined;
+  /** Per-engine thrust asked for (N). */
+  required_N: number;
+}
+
+export function newPartPowerSolve(ctx: InstallationContext, access: DeckAccess, full: EngineScratch): PartPowerSolve {
+  const solve: PartPowerSolve = {
+    ctx,
+    access,
+    full,
+    fast: newEngineScratch(),
+    curveOut: new Float64Array(2),
+    residual: (power) => solveThrustAt(solve, power) - solve.required_N,
+    condition: { altitude_m: 0, mach: 0, isaDev_K: 0 },
+    free: { mach: 0, pressure_Pa: 0, temperature_K: 0 },
+    curve: undefined,
+    required_N: 0,
+  };
+  return solve;
+}
+
+/** Installed thrust per engine (N) at `power` for the solve in progress: the deck's fixed-condition curve when it offers one, else full lookups. */
+export function solveThrustAt(solve: PartPowerSolve, power: number): number {
+  if (solve.curve !== undefined && solve.curve(power, solve.curveOut)) {
+    const air = solve.curveOut[1]!;
+    installDeckPointInto(solve.fast, solve.ctx, solve.free, solve.curveOut[0]!, 0, Number.isNaN(air) ? null : air);
+    return netThrustOf(solve.fast);
+  }
+  evaluateEngineInto(solve.full, solve.ctx, solve.access, solve.condition, solve.free, power);
+  return netThrustOf(solve.full);
+}
+
+/** The power found and where it sits against the limits. */
+export type PartPowerRoot =
+  | { readonly ok: true; readonly power: number; readonly limit: ThrustLimit }
+  | { readonly ok: false; readonly error: { readonly code: 'did_not_converge'; readonly message: string } };
+
+/**
+ * Power (-) in [idlePower, ceilingPower] where one engine's installed thrust
+ * is `perEngineRequired_N` at `condition`: the ceiling (above_rating) or idle
+ * (below_idle) when the thrust lies outside their range. Without a fast
+ * curve, the first guess is the deck inversion at the uninstalled thrust
+ * scaled by the ceiling's installed/uninstalled ratio.
+ */
+export function solvePartPower(
+  solve: PartPowerSolve,
+  condition: FlightCondition,
+  free: FreeStream,
+  perEngineRequired_N: number,
+  idlePower: number,
+  ceilingPower: number,
+): PartPowerRoot {
+  solve.condition = condition;
+  solve.free = free;
+  solve.curve = solve.access.curveAt?.(condition);
+  solve.required_N = perEngineRequired_N;
+  const curve = solve.curve;
+  const hiThrust = solveThrustAt(solve, ceilingPower);
+  const hiDeck = curve ? solve.fast.deck.thrust_N : solve.full.deck.thrust_N;
+  if (hiThrust <= perEngineRequired_N) {
+    return { ok: true, power: ceilingPower, limit: hiThrust === perEngineRequired_N ? 'within' : 'above_rating' };
+  }
+  const loThrust = solveThrustAt(solve, idlePower);
+  if (loThrust >= perEngineRequired_N) {
+    return { ok: true, power: idlePower, limit: loThrust === perEngineRequired_N ? 'within' : 'below_idle' };
+  }
+  let lo = idlePower;
+  let hi = ceilingPower;
+  if (!curve) {
+    const ratio = hiThrust > 0 ? hiDeck / hiThrust : 1;
+    const guess = solve.access.powerForThrust(condition, perEngineRequired_N * ratio, ceilingPower);
+    if (guess !== null && guess > lo && guess < hi) {
+      const g = solve.residual(guess);
+      if (g === 0) return { ok: true, power: guess, limit: 'within' };
+      if (g > 0) hi = guess;
+      else lo = guess;
+    }
+  }
+  const root = brent(solve.residual, lo, hi, {
+    fTol: FOR_THRUST_TOLERANCE * Math.max(Math.abs(perEngineRequired_N), 10),
+    xTol: 1e-12 * Math.max(1, Math.abs(ceilingPower - idlePower)),
+    maxIterations: 100,
+  });
+  if (!root.ok) return { ok: false, error: { code: 'did_not_converge', message: root.error.message } };
+  return { ok: true, power: root.value.x, limit: 'within' };
+}
