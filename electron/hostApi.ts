@@ -3,6 +3,7 @@
  * The renderer imports these types only (eslint enforces it); everything the
  * page may ask of the desktop shell is listed here.
  */
+import type { Result } from '../engine/core/result';
 
 /** Commands the application menu sends to the page. */
 export const MENU_COMMANDS = [
@@ -64,7 +65,7 @@ export interface HostError {
 }
 
 /** Every invoke answers with a value or an error; `null` values mean the user cancelled. */
-export type HostReply<T> = { readonly ok: true; readonly value: T } | { readonly ok: false; readonly error: HostError };
+export type HostReply<T> = Result<T, HostError>;
 
 export interface DocumentState {
   readonly name: string;

@@ -1,6 +1,7 @@
 import { IPC_CHANNELS } from './ipcChannels';
 import { IPC_PAYLOADS, describePayloadIssues, type InvokeChannelKey, type IpcPayload } from './ipcSchemas';
-import type { HostErrorCode, HostReply } from './hostApi';
+import { ok, type Err, type Result } from '../engine/core/result';
+import type { HostError, HostErrorCode, HostReply } from './hostApi';
 import { isAppUrl } from './windowSecurity';
 
 /** What the validation needs from an IPC invoke event (Electron's IpcMainInvokeEvent fits). */
@@ -18,7 +19,7 @@ export type HostHandlers<E> = {
   readonly [K in InvokeChannelKey]: (event: E, ...args: IpcPayload<K>) => Promise<HostReply<unknown>>;
 };
 
-export function hostError(code: HostErrorCode, message: string): HostReply<never> {
+export function hostError(code: HostErrorCode, message: string): Err<HostError> {
   return { ok: false, error: { code, message } };
 }
 
@@ -29,26 +30,27 @@ export function hostOk<T>(value: T): HostReply<T> {
 /**
  * Checks one invoke before its handler runs: the sender must be the top
  * frame of the app page, and the arguments must parse with the channel's
- * zod schema. Returns the parsed arguments or the error reply.
+ * zod schema. Returns the parsed arguments or the error (in the engine's
+ * Result shape, which HostReply shares).
  */
 export function checkInvoke<K extends InvokeChannelKey>(
   key: K,
   event: InvokeEventLike,
   args: readonly unknown[],
   appUrl: string,
-): { readonly ok: true; readonly args: IpcPayload<K> } | { readonly ok: false; readonly reply: HostReply<never> } {
+): Result<IpcPayload<K>, HostError> {
   const frame = event.senderFrame;
   if (frame === null || frame.parent !== null || !isAppUrl(frame.url, appUrl)) {
-    return {
-      ok: false,
-      reply: hostError('foreign_sender', `${IPC_CHANNELS[key]}: refused a call from ${frame === null ? 'a destroyed frame' : `"${frame.url}"`}, which is not the Blockwise page`),
-    };
+    return hostError(
+      'foreign_sender',
+      `${IPC_CHANNELS[key]}: refused a call from ${frame === null ? 'a destroyed frame' : `"${frame.url}"`}, which is not the Blockwise page`,
+    );
   }
   const parsed = IPC_PAYLOADS[key].safeParse(args);
   if (!parsed.success) {
-    return { ok: false, reply: hostError('bad_payload', `${IPC_CHANNELS[key]}: ${describePayloadIssues(parsed.error)}`) };
+    return hostError('bad_payload', `${IPC_CHANNELS[key]}: ${describePayloadIssues(parsed.error)}`);
   }
-  return { ok: true, args: parsed.data as IpcPayload<K> };
+  return ok(parsed.data as IpcPayload<K>);
 }
 
 /** Registers every invoke channel with sender and payload checks in front of its handler. */
@@ -60,9 +62,9 @@ export function registerHostHandlers<E extends InvokeEventLike>(
   for (const key of Object.keys(IPC_PAYLOADS) as InvokeChannelKey[]) {
     ipcMain.handle(IPC_CHANNELS[key], async (event: E, ...args: unknown[]) => {
       const checked = checkInvoke(key, event, args, appUrl());
-      if (!checked.ok) return checked.reply;
+      if (!checked.ok) return checked;
       const handler = handlers[key] as (event: E, ...a: readonly unknown[]) => Promise<HostReply<unknown>>;
-      return handler(event, ...checked.args);
+      return handler(event, ...checked.value);
     });
   }
 }

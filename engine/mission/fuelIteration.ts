@@ -54,18 +54,33 @@ export function evaluateMission(ctx: MissionContext, rampMass_kg: number, distan
   return { trip, reserves, residual_kg, log: ctx.log };
 }
 
-export interface IterationOutcome {
-  readonly converged: boolean;
+/** Where the iteration stopped: ramp mass (kg), solvable-leg still-air distance (m), passes, last residual (kg). */
+interface IterationPoint {
   readonly rampMass_kg: number;
   readonly distance_m: number;
   readonly iterations: number;
   readonly residual_kg: number;
-  /** Set when a flight inside the iteration failed for a reason other than fuel. */
-  readonly failure: MissionEvaluation | null;
-  /** Set when the problem has no solution for a reason the iteration can name (status 'infeasible'). */
-  readonly infeasible?: string;
-  /** The converged pass (recorded like a final flight, but flown with fuel exhaustion not enforced). */
-  readonly convergedPass?: MissionEvaluation;
+}
+
+/**
+ * How a fuel iteration ended, one case each: converged (the pass, recorded
+ * like a final flight but flown with fuel exhaustion not enforced, may be
+ * the result); a flight inside the iteration failed for a reason other than
+ * fuel; the problem has no solution for a reason the iteration names; or it
+ * did not converge within its passes or guard.
+ */
+export type IterationOutcome =
+  | (IterationPoint & { readonly kind: 'converged'; readonly pass: MissionEvaluation })
+  | (IterationPoint & { readonly kind: 'flightFailed'; readonly failure: MissionEvaluation })
+  | (IterationPoint & { readonly kind: 'infeasible'; readonly message: string })
+  | (IterationPoint & { readonly kind: 'notConverged'; readonly message: string });
+
+function notConverged(what: string, point: IterationPoint): IterationOutcome {
+  return {
+    kind: 'notConverged',
+    ...point,
+    message: `${what} iteration did not converge after ${point.iterations} passes; residual ${point.residual_kg.toFixed(2)} kg.`,
+  };
 }
 
 /** A pass of the iteration: fuel may pass below zero-fuel mass; history and cautions recorded so a converged pass can be the result. */
@@ -106,7 +121,7 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
   let x0 = firstGuess_kg;
   let e0 = evaluateMission(scratch(ctx), x0, distance);
   let d = e0.trip.solvableDistance_m;
-  if (failedFlight(e0)) return { converged: false, rampMass_kg: x0, distance_m: d, iterations: 1, residual_kg: e0.residual_kg, failure: e0 };
+  if (failedFlight(e0)) return { kind: 'flightFailed', rampMass_kg: x0, distance_m: d, iterations: 1, residual_kg: e0.residual_kg, failure: e0 };
   remember(e0);
   // The residual each pass would have had at exactly the range: the distance error costs the solvable leg's fuel per metre.
   const atRange = (e: MissionEvaluation) => e.residual_kg - AIM_KG + (e.trip.end[S_AIR] - range_m) * solvableFuelPerMetre(e);
@@ -116,24 +131,23 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
   const guard = RAMP_MASS_GUARD * Math.max(ctx.input.airframe.mtow_kg, ctx.zeroFuelMass_kg + ctx.input.airframe.maxFuel_kg);
   for (let k = 2; k <= MAX_ITERATIONS; k++) {
     if (!Number.isFinite(x1) || x1 <= ctx.zeroFuelMass_kg * 0.5 || x1 > guard) {
-      return { converged: false, rampMass_kg: x0, distance_m: d, iterations: k - 1, residual_kg: e0.residual_kg, failure: null };
+      return notConverged('Fuel', { rampMass_kg: x0, distance_m: d, iterations: k - 1, residual_kg: e0.residual_kg });
     }
     const e1 = evaluateMission(scratch(ctx), x1, distance);
     d = e1.trip.solvableDistance_m;
-    if (failedFlight(e1)) return { converged: false, rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, failure: e1 };
+    if (failedFlight(e1)) return { kind: 'flightFailed', rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, failure: e1 };
     const distanceError = e1.trip.end[S_AIR] - range_m;
     if (fuelConverged(e1.residual_kg) && Math.abs(distanceError) <= DISTANCE_TOLERANCE_M) {
-      return { converged: true, rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, failure: null, convergedPass: e1 };
+      return { kind: 'converged', rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, pass: e1 };
     }
     if (d === 0 && distanceError > DISTANCE_TOLERANCE_M) {
       return {
-        converged: false,
+        kind: 'infeasible',
         rampMass_kg: x1,
         distance_m: 0,
         iterations: k,
         residual_kg: e1.residual_kg,
-        failure: null,
-        infeasible: `The range ${(range_m / 1000).toFixed(1)} km is shorter than the other legs' ${(e1.trip.end[S_AIR] / 1000).toFixed(1)} km of still air.`,
+        message: `The range ${(range_m / 1000).toFixed(1)} km is shorter than the other legs' ${(e1.trip.end[S_AIR] / 1000).toFixed(1)} km of still air.`,
       };
     }
     remember(e1);
@@ -148,7 +162,7 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
     e0 = e1;
     x1 = next;
   }
-  return { converged: false, rampMass_kg: x1, distance_m: d, iterations: MAX_ITERATIONS, residual_kg: e0.residual_kg, failure: null };
+  return notConverged('Fuel', { rampMass_kg: x1, distance_m: d, iterations: MAX_ITERATIONS, residual_kg: e0.residual_kg });
 }
 
 /** Fuel burned per metre of still air on the solvable cruise leg of a pass (kg/m), 0 when unknown. */
@@ -163,12 +177,19 @@ export function iterateDistance(ctx: MissionContext, rampMass_kg: number): Itera
   const input = ctx.input;
   let d0 = 0;
   let e0 = evaluateMission(scratch(ctx), rampMass_kg, d0);
-  if (failedFlight(e0)) return { converged: false, rampMass_kg, distance_m: 0, iterations: 1, residual_kg: e0.residual_kg, failure: e0 };
+  if (failedFlight(e0)) return { kind: 'flightFailed', rampMass_kg, distance_m: 0, iterations: 1, residual_kg: e0.residual_kg, failure: e0 };
   if (e0.residual_kg < 0) {
-    return { converged: false, rampMass_kg, distance_m: 0, iterations: 1, residual_kg: e0.residual_kg, failure: null };
+    return {
+      kind: 'infeasible',
+      rampMass_kg,
+      distance_m: 0,
+      iterations: 1,
+      residual_kg: e0.residual_kg,
+      message: `The reserve cannot be carried even with the solvable cruise leg at zero length: short by ${(-e0.residual_kg).toFixed(1)} kg.`,
+    };
   }
   if (fuelConverged(e0.residual_kg)) {
-    return { converged: true, rampMass_kg, distance_m: 0, iterations: 1, residual_kg: e0.residual_kg, failure: null, convergedPass: e0 };
+    return { kind: 'converged', rampMass_kg, distance_m: 0, iterations: 1, residual_kg: e0.residual_kg, pass: e0 };
   }
   const leg = input.legs[solvableLegIndex(input)];
   let sr = 0;
@@ -180,9 +201,9 @@ export function iterateDistance(ctx: MissionContext, rampMass_kg: number): Itera
   let d1 = (e0.residual_kg - AIM_KG) * (sr > 0 ? sr : 100);
   for (let k = 2; k <= MAX_ITERATIONS; k++) {
     const e1 = evaluateMission(scratch(ctx), rampMass_kg, d1);
-    if (failedFlight(e1)) return { converged: false, rampMass_kg, distance_m: d1, iterations: k, residual_kg: e1.residual_kg, failure: e1 };
+    if (failedFlight(e1)) return { kind: 'flightFailed', rampMass_kg, distance_m: d1, iterations: k, residual_kg: e1.residual_kg, failure: e1 };
     if (fuelConverged(e1.residual_kg)) {
-      return { converged: true, rampMass_kg, distance_m: d1, iterations: k, residual_kg: e1.residual_kg, failure: null, convergedPass: e1 };
+      return { kind: 'converged', rampMass_kg, distance_m: d1, iterations: k, residual_kg: e1.residual_kg, pass: e1 };
     }
     const slope = (e1.residual_kg - e0.residual_kg) / (d1 - d0);
     const aimed = e1.residual_kg - AIM_KG;
@@ -193,5 +214,5 @@ export function iterateDistance(ctx: MissionContext, rampMass_kg: number): Itera
     d1 = next;
     if (!Number.isFinite(d1)) break;
   }
-  return { converged: false, rampMass_kg, distance_m: d1, iterations: MAX_ITERATIONS, residual_kg: e0.residual_kg, failure: null };
+  return notConverged('Range', { rampMass_kg, distance_m: d1, iterations: MAX_ITERATIONS, residual_kg: e0.residual_kg });
 }

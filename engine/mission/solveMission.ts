@@ -23,7 +23,7 @@ import { checkFuelCapacity, checkMlw, checkMtow, checkMzfw, checkReserve } from 
 import { allowanceFuel } from './allowanceLegs';
 import { specificRangeAt } from './bestSpeeds';
 import { cruiseMach } from './cruiseLeg';
-import { evaluateMission, iterateDistance, iterateRampMass, type MissionEvaluation } from './fuelIteration';
+import { evaluateMission, iterateDistance, iterateRampMass, type IterationOutcome, type MissionEvaluation } from './fuelIteration';
 import { solvableLegIndex, tripBounds } from './flyTrip';
 import { legEnvironment, type FlightOptions, type LegTarget, type MissionContext } from './missionContext';
 import { missionInputProblem } from './missionInputCheck';
@@ -89,6 +89,35 @@ function breguetRampGuess(input: MissionInput, zfw_kg: number, taxi_kg: number, 
   return 1.05 * zfw_kg * Math.exp(exponent) + taxi_kg;
 }
 
+/**
+ * The mission's status from how the iteration ended (null: nothing
+ * iterated) and the final flight: the iteration's own verdict first, then
+ * the final flight's trip and reserves; a converged or single flight that
+ * flew is ok.
+ */
+function missionStatus(outcome: IterationOutcome | null, final: MissionEvaluation): { readonly status: MissionStatus; readonly message: string } {
+  if (outcome !== null) {
+    switch (outcome.kind) {
+      case 'notConverged':
+        return { status: 'did_not_converge', message: outcome.message };
+      case 'infeasible':
+        return { status: 'infeasible', message: outcome.message };
+      case 'converged':
+      case 'flightFailed':
+        break;
+    }
+  }
+  if (final.trip.status !== 'ok') return { status: final.trip.status, message: final.trip.message };
+  if (final.reserves.status !== 'ok') return { status: final.reserves.status, message: final.reserves.message };
+  if (outcome?.kind === 'flightFailed') {
+    return {
+      status: 'did_not_converge',
+      message: `The iteration stopped on a failed flight after ${outcome.iterations} passes; residual ${outcome.residual_kg.toFixed(2)} kg.`,
+    };
+  }
+  return { status: 'ok', message: '' };
+}
+
 /** Options of one solve; `stepScale` below 1 refines every integration step (convergence studies). */
 export interface SolveOptions {
   readonly stepScale?: number;
@@ -115,19 +144,16 @@ export function solveMission(input: MissionInput, options: SolveOptions = {}): M
   let rampMass = 0;
   let distance = 0;
   let iterations = 0;
-  let converged = true;
   let residual = 0;
-  let iterationMessage = '';
-  let convergedPass: MissionEvaluation | undefined;
+  // null: one flight from a given mass, nothing iterated.
+  let outcome: IterationOutcome | null = null;
   if (solve.kind === 'payloadRange') {
     const guess = breguetRampGuess(input, zfw, taxi, solve.range_m);
-    const it = iterateRampMass(base, solve.range_m, guess);
-    ({ rampMass_kg: rampMass, distance_m: distance, iterations, converged, residual_kg: residual } = it);
-    if (it.infeasible !== undefined) {
-      return { ...emptyResult(input, 'infeasible', it.infeasible), iterations, residual_kg: residual };
+    outcome = iterateRampMass(base, solve.range_m, guess);
+    ({ rampMass_kg: rampMass, distance_m: distance, iterations, residual_kg: residual } = outcome);
+    if (outcome.kind === 'infeasible') {
+      return { ...emptyResult(input, 'infeasible', outcome.message), iterations, residual_kg: residual };
     }
-    convergedPass = it.convergedPass;
-    if (!converged && it.failure === null) iterationMessage = `Fuel iteration did not converge after ${iterations} passes; residual ${residual.toFixed(2)} kg.`;
   } else {
     rampMass =
       solve.kind === 'takeoffWeight'
@@ -137,21 +163,15 @@ export function solveMission(input: MissionInput, options: SolveOptions = {}): M
       return emptyResult(input, 'infeasible', `No fuel can be carried: ramp mass ${rampMass.toFixed(1)} kg is not above zero-fuel mass ${zfw.toFixed(1)} kg.`);
     }
     if (hasSolvable) {
-      const it = iterateDistance(base, rampMass);
-      ({ distance_m: distance, iterations, converged, residual_kg: residual } = it);
-      convergedPass = it.convergedPass;
-      if (!converged && it.failure === null) {
-        iterationMessage =
-          iterations === 1
-            ? `The reserve cannot be carried even with the solvable cruise leg at zero length: short by ${(-residual).toFixed(1)} kg.`
-            : `Range iteration did not converge after ${iterations} passes; residual ${residual.toFixed(2)} kg.`;
-      }
+      outcome = iterateDistance(base, rampMass);
+      ({ distance_m: distance, iterations, residual_kg: residual } = outcome);
     }
   }
 
   // Final flight, recorded, fuel exhaustion enforced.
   // The converged pass is the result when it never went below zero-fuel mass (its mass only falls, so
   // checking block-in suffices; taxi in is burned after landing); otherwise the final flight is flown again with fuel exhaustion enforced.
+  const convergedPass = outcome?.kind === 'converged' ? outcome.pass : undefined;
   const reuse = convergedPass !== undefined && convergedPass.trip.end[S_MASS] >= zfw && convergedPass.reserves.status === 'ok';
   const final: MissionEvaluation =
     reuse && convergedPass !== undefined
@@ -160,22 +180,7 @@ export function solveMission(input: MissionInput, options: SolveOptions = {}): M
   const ctx = { log: final.log };
   const { trip, reserves } = final;
   if (solve.kind === 'takeoffWeight' && !hasSolvable) residual = final.residual_kg;
-
-  let status: MissionStatus = 'ok';
-  let message = '';
-  if (!converged && iterationMessage !== '') {
-    status = iterationMessage.startsWith('The reserve cannot') ? 'infeasible' : 'did_not_converge';
-    message = iterationMessage;
-  } else if (trip.status !== 'ok') {
-    status = trip.status;
-    message = trip.message;
-  } else if (reserves.status !== 'ok') {
-    status = reserves.status;
-    message = reserves.message;
-  } else if (!converged) {
-    status = 'did_not_converge';
-    message = `The iteration stopped on a failed flight after ${iterations} passes; residual ${residual.toFixed(2)} kg.`;
-  }
+  const { status, message } = missionStatus(outcome, final);
 
   const { first, last } = tripBounds(input);
   const at = (index: number, name: string): LegTarget => ({

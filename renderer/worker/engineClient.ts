@@ -99,7 +99,7 @@ export function createWorkerClient(makeWorker: WorkerFactory = defaultWorker): E
       created.worker.onerror = (event: ErrorEvent) => {
         for (const [id, p] of created.pending) {
           created.pending.delete(id);
-          p.resolve({ ok: false, failure: { kind: 'analysis', code: 'worker_error', message: `engine worker failed: ${event.message}` } });
+          p.resolve({ ok: false, error: { kind: 'analysis', code: 'worker_error', message: `engine worker failed: ${event.message}` } });
         }
         created.inFlight = null;
         created.waiting = null;

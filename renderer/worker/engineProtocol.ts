@@ -11,6 +11,7 @@ import type { ProjectIssue } from '../../engine/project/projectIssue';
 import type { Project } from '../../engine/project/projectSchema';
 import type { DeckFileError } from '../../engine/propulsion/deckFileError';
 import type { RatingName } from '../../engine/propulsion/propulsionModel';
+import type { Result } from '../../engine/core/result';
 import type { DeckFile } from '../state/studyState';
 
 export interface StudyInputs {
@@ -112,9 +113,8 @@ export type EngineFailure =
   | { readonly kind: 'deck'; readonly errors: readonly DeckFileError[] }
   | { readonly kind: 'analysis'; readonly code: string; readonly message: string };
 
-export type EngineOutcome<K extends EngineRequestKind> =
-  | { readonly ok: true; readonly value: EngineReplies[K] }
-  | { readonly ok: false; readonly failure: EngineFailure };
+/** A request's reply in the engine's one Result shape (engine/core/result.ts): the value, or why there is none. */
+export type EngineOutcome<K extends EngineRequestKind> = Result<EngineReplies[K], EngineFailure>;
 
 /** Main thread -> worker. */
 export interface WorkerRequestMessage {

@@ -166,9 +166,8 @@ function dispatch(request: EngineRequest, cache: DeckCache, hooks: RunHooks): Re
 /** Runs `request`; an exception inside the engine (a bug) comes back as an analysis failure with its message. */
 export function runEngineRequest(request: EngineRequest, cache: DeckCache, hooks: RunHooks = {}): EngineOutcome<EngineRequestKind> {
   try {
-    const r = dispatch(request, cache, hooks);
-    return r.ok ? { ok: true, value: r.value } : { ok: false, failure: r.error };
+    return dispatch(request, cache, hooks);
   } catch (e) {
-    return { ok: false, failure: { kind: 'analysis', code: 'internal_error', message: `engine error: ${e instanceof Error ? e.message : String(e)}` } };
+    return { ok: false, error: { kind: 'analysis', code: 'internal_error', message: `engine error: ${e instanceof Error ? e.message : String(e)}` } };
   }
 }

@@ -73,7 +73,7 @@ export function useLiveStudy(inputs: StudyInputs | null, blockingIssues: readonl
         setState((s) =>
           outcome.ok
             ? { snapshot: outcome.value, snapshotRevision: rev, failure: null, running: false }
-            : { ...s, failure: outcome.failure, running: false },
+            : { ...s, failure: outcome.error, running: false },
         );
       });
     }, REFLY_DELAY_MS);
@@ -135,7 +135,7 @@ export function useEngineJob<K extends EngineRequestKind>(options: { readonly ca
         if (runRef.current !== run) return;
         runRef.current = null;
         if (outcome.ok) setLastValue(outcome.value);
-        setState(outcome.ok ? { status: 'done', value: outcome.value } : { status: 'failed', failure: outcome.failure });
+        setState(outcome.ok ? { status: 'done', value: outcome.value } : { status: 'failed', failure: outcome.error });
       });
     },
     [client, cancelOnRestart],

@@ -26,15 +26,15 @@ function handlersRecording(calls: string[]): HostHandlers<InvokeEventLike> {
 describe('checkInvoke', () => {
   it('checkInvoke accepts the app page with a valid payload', () => {
     const r = checkInvoke('saveProject', fromApp, ['{"format":1}', 'Demo jet'], APP);
-    expect(r).toEqual({ ok: true, args: ['{"format":1}', 'Demo jet'] });
+    expect(r).toEqual({ ok: true, value: ['{"format":1}', 'Demo jet'] });
   });
 
   it('checkInvoke refuses a foreign page', () => {
     const r = checkInvoke('openProject', { senderFrame: { url: 'https://example.invalid/', parent: null } }, [], APP);
     expect(r.ok).toBe(false);
     if (!r.ok) {
-      expect(r.reply).toMatchObject({ ok: false, error: { code: 'foreign_sender' } });
-      if (!r.reply.ok) expect(r.reply.error.message).toContain('https://example.invalid/');
+      expect(r.error.code).toBe('foreign_sender');
+      expect(r.error.message).toContain('https://example.invalid/');
     }
   });
 
@@ -42,27 +42,27 @@ describe('checkInvoke', () => {
     const other = checkInvoke('openProject', { senderFrame: { url: 'file:///tmp/evil.html', parent: null } }, [], APP);
     const sub = checkInvoke('openProject', { senderFrame: { url: APP, parent: {} } }, [], APP);
     const gone = checkInvoke('openProject', { senderFrame: null }, [], APP);
-    for (const r of [other, sub, gone]) expect(r).toMatchObject({ ok: false, reply: { error: { code: 'foreign_sender' } } });
+    for (const r of [other, sub, gone]) expect(r).toMatchObject({ ok: false, error: { code: 'foreign_sender' } });
   });
 
   it('checkInvoke rejects a wrong type with the argument index and the channel', () => {
     const r = checkInvoke('saveProject', fromApp, [42, 'Demo'], APP);
     expect(r.ok).toBe(false);
-    if (!r.ok && !r.reply.ok) {
-      expect(r.reply.error.code).toBe('bad_payload');
-      expect(r.reply.error.message).toMatch(/^blockwise:save-project: argument 0: /);
+    if (!r.ok) {
+      expect(r.error.code).toBe('bad_payload');
+      expect(r.error.message).toMatch(/^blockwise:save-project: argument 0: /);
     }
   });
 
   it('checkInvoke rejects extra and missing arguments', () => {
-    expect(checkInvoke('openProject', fromApp, ['/etc/passwd'], APP)).toMatchObject({ ok: false, reply: { error: { code: 'bad_payload' } } });
-    expect(checkInvoke('exportResultsCsv', fromApp, ['a,b'], APP)).toMatchObject({ ok: false, reply: { error: { code: 'bad_payload' } } });
+    expect(checkInvoke('openProject', fromApp, ['/etc/passwd'], APP)).toMatchObject({ ok: false, error: { code: 'bad_payload' } });
+    expect(checkInvoke('exportResultsCsv', fromApp, ['a,b'], APP)).toMatchObject({ ok: false, error: { code: 'bad_payload' } });
   });
 
   it('checkInvoke rejects a suggested name that names a folder', () => {
     for (const name of ['../escape', 'a/b.csv', 'C:\\x.csv', '..', 'bell\u0007.csv', '']) {
       const r = checkInvoke('exportResultsCsv', fromApp, ['a,b', name], APP);
-      expect(r, name).toMatchObject({ ok: false, reply: { error: { code: 'bad_payload' } } });
+      expect(r, name).toMatchObject({ ok: false, error: { code: 'bad_payload' } });
     }
   });
 

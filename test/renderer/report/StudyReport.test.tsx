@@ -12,7 +12,7 @@ describe('StudyReport', () => {
     const s = demoState();
     const project = s.doc!.present;
     const r = runEngineRequest({ kind: 'study', project, deckFile: s.deckFile }, createDeckCache());
-    if (!r.ok) throw new Error(JSON.stringify(r.failure));
+    if (!r.ok) throw new Error(JSON.stringify(r.error));
     const snapshot = r.value as StudySnapshot;
     render(<StudyReport project={project} snapshot={snapshot} units="si" stale={true} />);
     const report = screen.getByTestId('print-report');

@@ -17,7 +17,7 @@ let snapshot: StudySnapshot;
 beforeAll(() => {
   const s = demoState();
   const r = runEngineRequest({ kind: 'study', project: s.doc!.present, deckFile: s.deckFile }, createDeckCache());
-  if (!r.ok) throw new Error(JSON.stringify(r.failure));
+  if (!r.ok) throw new Error(JSON.stringify(r.error));
   snapshot = r.value as StudySnapshot;
 });
 

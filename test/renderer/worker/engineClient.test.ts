@@ -33,7 +33,7 @@ const inputs = () => {
   const s = demoState();
   return { project: s.doc!.present, deckFile: s.deckFile };
 };
-const failure: EngineOutcome<EngineRequestKind> = { ok: false, failure: { kind: 'analysis', code: 'x', message: 'm' } };
+const failure: EngineOutcome<EngineRequestKind> = { ok: false, error: { kind: 'analysis', code: 'x', message: 'm' } };
 
 describe('createWorkerClient', () => {
   it('posts each request with an id and resolves with the matching reply, passing progress on', async () => {
@@ -81,7 +81,7 @@ describe('createWorkerClient', () => {
     const c = client();
     const run = c.run({ kind: 'study', ...inputs() });
     FakeWorker.created[0]!.onerror?.({ message: 'boom' } as ErrorEvent);
-    expect(await run.outcome).toEqual({ ok: false, failure: { kind: 'analysis', code: 'worker_error', message: 'engine worker failed: boom' } });
+    expect(await run.outcome).toEqual({ ok: false, error: { kind: 'analysis', code: 'worker_error', message: 'engine worker failed: boom' } });
   });
 
   it('dispose terminates every worker', () => {

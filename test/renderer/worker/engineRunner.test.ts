@@ -20,7 +20,7 @@ beforeAll(() => {
 
 function study(inputs: StudyInputs): EngineReplies['study'] {
   const r = runEngineRequest({ kind: 'study', ...inputs }, createDeckCache());
-  if (!r.ok) throw new Error(JSON.stringify(r.failure));
+  if (!r.ok) throw new Error(JSON.stringify(r.error));
   return r.value as EngineReplies['study'];
 }
 
@@ -89,9 +89,9 @@ describe('runEngineRequest failures', () => {
   it('asks for the deck file when the project names one and none was imported', () => {
     const r = runEngineRequest({ kind: 'study', project: demo.project, deckFile: null }, createDeckCache());
     expect(r.ok).toBe(false);
-    if (!r.ok && r.failure.kind === 'project') {
-      expect(r.failure.issues[0]!.path).toBe('engine.deck.path');
-      expect(r.failure.issues[0]!.message).toMatch(/import it/);
+    if (!r.ok && r.error.kind === 'project') {
+      expect(r.error.issues[0]!.path).toBe('engine.deck.path');
+      expect(r.error.issues[0]!.message).toMatch(/import it/);
     } else throw new Error('expected a project failure');
   });
 
@@ -99,17 +99,17 @@ describe('runEngineRequest failures', () => {
     const expected = JSON.parse(fixtureText('fixtures/bad-decks/expected.json')) as Record<string, string>;
     for (const name of ['non-numeric-cell.csv', 'ragged-row.csv', 'unknown-unit.csv']) {
       const r = runEngineRequest({ kind: 'study', project: demo.project, deckFile: { name, text: fixtureText(`fixtures/bad-decks/${name}`) } }, createDeckCache());
-      if (r.ok || r.failure.kind !== 'deck') throw new Error(`expected deck errors for ${name}`);
+      if (r.ok || r.error.kind !== 'deck') throw new Error(`expected deck errors for ${name}`);
       // expected.json holds the start of each message (the parser may add detail after it)
-      expect(r.failure.errors.some((e) => e.message.startsWith(expected[name]!))).toBe(true);
-      expect(r.failure.errors[0]!.line).not.toBeNull();
+      expect(r.error.errors.some((e) => e.message.startsWith(expected[name]!))).toBe(true);
+      expect(r.error.errors[0]!.line).not.toBeNull();
     }
   });
 
   it('reports an analysis error as a failure with its code', () => {
     const r = runEngineRequest({ kind: 'crossover', ...demo, query: { altitude_m: 10000, mass_kg: -5, rating: 'maxCruise', isaDev_K: 0, allInlets: false } }, createDeckCache());
     expect(r.ok).toBe(false);
-    if (!r.ok) expect(r.failure).toMatchObject({ kind: 'analysis', code: 'invalid_input' });
+    if (!r.ok) expect(r.error).toMatchObject({ kind: 'analysis', code: 'invalid_input' });
   });
 });
 
@@ -122,7 +122,7 @@ describe('runEngineRequest long runs', () => {
     for (const [d, t] of progress) expect(d).toBeLessThanOrEqual(t);
     if (!r.ok) {
       // the engine may refuse a point it cannot converge; the runner passes its code and message on
-      expect(r.failure).toMatchObject({ kind: 'analysis', code: 'mission_failed' });
+      expect(r.error).toMatchObject({ kind: 'analysis', code: 'mission_failed' });
       return;
     }
     const value = r.value as EngineReplies['payloadRange'];
@@ -137,13 +137,13 @@ describe('runEngineRequest long runs', () => {
     let flown = 0;
     const r = runEngineRequest({ kind: 'tradeFactors', ...demo }, createDeckCache(), { onProgress: () => flown++, shouldCancel: () => flown >= 2 });
     expect(r.ok).toBe(false);
-    if (!r.ok) expect(r.failure).toMatchObject({ kind: 'analysis', code: 'cancelled' });
+    if (!r.ok) expect(r.error).toMatchObject({ kind: 'analysis', code: 'cancelled' });
     expect(flown).toBe(2);
   });
 
   it('crossover with every inlet gives one curve set per design with crossovers inside the Mach range', () => {
     const r = runEngineRequest({ kind: 'crossover', ...demo, query: { altitude_m: 35000 * FT, mass_kg: 15000, rating: 'maxCruise', isaDev_K: 0, allInlets: true } }, createDeckCache());
-    if (!r.ok) throw new Error(JSON.stringify(r.failure));
+    if (!r.ok) throw new Error(JSON.stringify(r.error));
     const set = r.value as EngineReplies['crossover'];
     expect(set.curves.map((c) => c.inletName)).toEqual(demo.project.inlets.map((i) => i.name));
     let checked = 0;

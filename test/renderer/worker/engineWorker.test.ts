@@ -30,7 +30,7 @@ describe('engineWorker', () => {
     const last = done[0]!;
     if (last.type !== 'done') throw new Error('unreachable');
     // either the trade factors or the engine's reason, never a thrown error
-    if (!last.outcome.ok) expect(last.outcome.failure.kind).toBe('analysis');
+    if (!last.outcome.ok) expect(last.outcome.error.kind).toBe('analysis');
     else expect((last.outcome.value as TradeFactorsResult).factors.map((f) => f.name)).toEqual(['recovery', 'dragCount', 'tsfc', 'oew']);
   }, 60000);
 });

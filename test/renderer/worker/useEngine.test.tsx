@@ -79,7 +79,7 @@ describe('useLiveStudy', () => {
     await waitFor(() => expect(client.runs).toHaveLength(3), { timeout: 15000 });
     expect(result.current.stale).toBe(true);
     const failure = { kind: 'analysis' as const, code: 'x', message: 'no' };
-    await act(async () => client.runs[2]!.resolve({ ok: false, failure }));
+    await act(async () => client.runs[2]!.resolve({ ok: false, error: failure }));
     expect(result.current.failure).toEqual(failure);
     expect(result.current.snapshot).toEqual(snapshot(1));
     expect(result.current.stale).toBe(true);
