@@ -13,6 +13,8 @@ export type Dimension =
   | 'power'
   | 'angle'
   | 'tsfc'
+  | 'specificHeat'
+  | 'specificEnergy'
   | 'dimensionless';
 
 export type UnitSystem = 'si' | 'customary';
@@ -32,6 +34,8 @@ export const SI_UNIT: Readonly<Record<Dimension, string>> = {
   power: 'W',
   angle: 'rad',
   tsfc: 'kg/(N s)',
+  specificHeat: 'J/(kg K)',
+  specificEnergy: 'J/kg',
   dimensionless: '-',
 };
 
@@ -50,6 +54,8 @@ export const DIMENSION_PHRASE: Readonly<Record<Dimension, string>> = {
   power: 'a power',
   angle: 'an angle',
   tsfc: 'a thrust-specific fuel consumption',
+  specificHeat: 'a specific heat',
+  specificEnergy: 'a specific energy',
   dimensionless: 'a plain number',
 };
 
@@ -68,5 +74,7 @@ export const DIMENSION_EXAMPLES: Readonly<Record<Dimension, readonly [string, st
   power: ['150 kW', '200 hp'],
   angle: ['3 deg', '0.05 rad'],
   tsfc: ['0.6 lb/(lbf h)', '17 mg/(N s)'],
+  specificHeat: ['1004.5 J/(kg K)', '0.24 Btu/(lb degR)'],
+  specificEnergy: ['42.8 MJ/kg', '18400 Btu/lb'],
   dimensionless: ['0.78', '2 %'],
 };

@@ -38,6 +38,8 @@ export const INCH_HG_PA = 3386.389;
 export const MM_HG_PA = 133.3224;
 /** Mechanical horsepower = 550 ft lbf/s = 745.69987... W (NIST SP 811, B.8). */
 export const HORSEPOWER_W = 550 * FOOT_M * POUND_FORCE_N;
+/** British thermal unit (International Table), exact: 1055.05585262 J (NIST SP 811, B.8). */
+export const BTU_IT_J = 1055.05585262;
 /** Standard atmosphere, exact (NIST SP 811, B.8). */
 export const ATMOSPHERE_PA = 101325;
 
@@ -148,6 +150,15 @@ export const UNIT_TABLE: Readonly<Record<string, UnitDef>> = {
   // fuel weight flow per unit thrust (weight = mass x g0); 1/h equals lb/(lbf h) exactly
   '1/h': u('tsfc', 1 / (STANDARD_GRAVITY_M_S2 * 3600)),
   '1/s': u('tsfc', 1 / STANDARD_GRAVITY_M_S2),
+  // specific heat (cycle gas properties); Btu(IT)/(lb degR) = 4186.8 J/(kg K) exactly
+  'J/(kg K)': u('specificHeat', 1),
+  'kJ/(kg K)': u('specificHeat', 1000),
+  'Btu/(lb degR)': u('specificHeat', BTU_IT_J / (POUND_KG * (5 / 9))),
+  // specific energy (fuel heating value); Btu(IT)/lb = 2326 J/kg exactly
+  'J/kg': u('specificEnergy', 1),
+  'kJ/kg': u('specificEnergy', 1000),
+  'MJ/kg': u('specificEnergy', 1e6),
+  'Btu/lb': u('specificEnergy', BTU_IT_J / POUND_KG),
   // dimensionless
   '-': u('dimensionless', 1),
   '%': u('dimensionless', 0.01),
