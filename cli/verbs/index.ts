@@ -2,6 +2,7 @@ import type { Verb } from '../verb';
 import { airVerb } from './air';
 import { compareVerb } from './compare';
 import { crossoverVerb } from './crossover';
+import { cycleVerbs } from './cycle/index';
 import { deckAtVerb, deckCheckVerb } from './deck';
 import { envelopeVerb } from './envelope';
 import { flyVerb } from './fly';
@@ -26,4 +27,5 @@ export const verbs: readonly Verb[] = [
   payloadRangeVerb,
   compareVerb,
   tradeVerb,
+  ...cycleVerbs,
 ];

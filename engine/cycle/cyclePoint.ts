@@ -189,7 +189,7 @@ function limitedRating(engine: CycleEngine, free: FreeStream, inst: Installation
           worstRatio = ratio;
         }
       }
-      if (worst === null) return converged(engine, o, candidate.name, inst, candidate.name, `${rating}: held by ${candidate.name} at ${candidate.max.toPrecision(6)} ${LIMIT_UNITS[candidate.name]}`);
+      if (worst === null) return converged(engine, o, candidate.name, inst, candidate.name, `${rating}: held by ${candidate.name} at ${Number(candidate.max.toPrecision(6))} ${LIMIT_UNITS[candidate.name]}`);
     } else {
       lastFailure = unmatched(o, throttle, inst);
       worst = limits.find((l) => !tried.has(l.name)) ?? null;
