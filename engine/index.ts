@@ -79,6 +79,7 @@ export * from './mission/missionAtmosphere';
 export * from './mission/missionContext';
 export * from './mission/missionInputCheck';
 export * from './mission/missionState';
+export * from './mission/missionStatus';
 export * from './mission/missionTypes';
 export * from './mission/reserves';
 export * from './mission/solveMission';

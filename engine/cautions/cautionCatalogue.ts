@@ -18,6 +18,7 @@ export type MissionCautionId =
   | 'fuel_capacity_exceeded'
   | 'reserve_below_minimum'
   | 'deck_extrapolation'
+  | 'deck_output_floored'
   | 'throat_mach_high'
   | 'polar_table_clamped'
   | 'thrust_below_drag'
@@ -129,6 +130,14 @@ export const CAUTION_CATALOGUE: Readonly<Record<MissionCautionId, CautionEntry>>
     defaultThreshold: null,
     unit: '-',
     source: 'Passed through from the propulsion model, first time per leg',
+  },
+  deck_output_floored: {
+    id: 'deck_output_floored',
+    title: 'Extrapolated engine deck value below zero, read as zero',
+    severity: 'warning',
+    defaultThreshold: 0,
+    unit: '-',
+    source: 'A linear extrapolation off the table gave a negative thrust, fuel flow or airflow; it is floored at zero (no engine makes negative fuel flow or airflow)',
   },
   throat_mach_high: {
     id: 'throat_mach_high',

@@ -15,6 +15,7 @@
 import type { Leg, MissionInput } from './missionTypes';
 import type { InstalledPoint } from '../propulsion/propulsionModel';
 import { legOk, legFailed, type LegOutcome } from './legOutcome';
+import { MASS_FLOOR_FRACTION } from './flySegment';
 import type { LegTarget, MissionContext } from './missionContext';
 import { S_ALT, S_MASS, S_TIME, type FlightSample, type StateVector } from './missionState';
 import { appendSample } from './timeHistoryBuilder';
@@ -71,7 +72,12 @@ export function destinationElevation(input: MissionInput): number {
   return input.destinationElevation_m ?? 0;
 }
 
-/** Flies an allowance leg: mass and time advance, distance does not; approach and taxi in end at the destination elevation. */
+/**
+ * Flies an allowance leg: mass and time advance, distance does not; approach and taxi in end at the destination
+ * elevation. The allowance stops where the fuel runs out (at zero-fuel mass, the time cut in proportion): always
+ * when fuel exhaustion is enforced, and during the fuel iteration at the mission domain's mass floor
+ * (flySegment.ts MASS_FLOOR_FRACTION), so no leg ever starts from a mass the models cannot fly.
+ */
 export function flyAllowance(ctx: MissionContext, target: LegTarget, start: StateVector, leg: AllowanceLeg): LegOutcome {
   const arriving = leg.kind === 'approach' || leg.kind === 'taxiIn';
   const startAltitude_m = leg.kind === 'taxiIn' ? destinationElevation(ctx.input) : start[S_ALT];
@@ -81,13 +87,23 @@ export function flyAllowance(ctx: MissionContext, target: LegTarget, start: Stat
   const state = Float64Array.from(start);
   state[S_ALT] = startAltitude_m;
   appendSample(ctx.log, target, state, allowanceSample(startAltitude_m, flow, point));
-  state[S_TIME] += time_s;
-  state[S_MASS] -= fuel_kg;
-  state[S_ALT] = endAltitude_m;
-  const sample = allowanceSample(endAltitude_m, flow, point);
+  const floor_kg = ctx.options.allowNegativeFuel ? MASS_FLOOR_FRACTION * ctx.zeroFuelMass_kg : ctx.zeroFuelMass_kg;
+  const available_kg = Math.max(state[S_MASS] - floor_kg, 0);
+  const exhausted = fuel_kg > available_kg;
+  const share = exhausted && fuel_kg > 0 ? available_kg / fuel_kg : 1;
+  state[S_TIME] += time_s * share;
+  state[S_MASS] -= exhausted ? available_kg : fuel_kg;
+  state[S_ALT] = startAltitude_m + (endAltitude_m - startAltitude_m) * share;
+  const sample = allowanceSample(state[S_ALT], flow, point);
   appendSample(ctx.log, target, state, sample);
-  if (!ctx.options.allowNegativeFuel && state[S_MASS] < ctx.zeroFuelMass_kg) {
-    return legFailed(state, 'fuel_exhausted', `Fuel exhausted during ${target.legName}.`, sample);
+  if (exhausted) {
+    const minutes = (time_s * share) / 60;
+    return legFailed(
+      state,
+      'fuel_exhausted',
+      `Fuel exhausted during ${target.legName} after ${minutes.toFixed(1)} of its ${(time_s / 60).toFixed(1)} min: it needs ${fuel_kg.toFixed(1)} kg, ${available_kg.toFixed(1)} kg was left.`,
+      sample,
+    );
   }
   return legOk(state, sample);
 }

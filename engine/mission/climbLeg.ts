@@ -9,8 +9,8 @@ import type { RatingName } from '../propulsion/propulsionModel';
 import type { SpeedSchedule } from './missionTypes';
 import { energyShareFactor, pressureAltitudeRate } from './energyShareFactor';
 import { airPoint, fuelExhaustedEvents, makeSample, pathDerivative, ratingPoint } from './flightPoint';
-import { flySegment } from './flySegment';
-import { legFailed, legOk, type LegOutcome } from './legOutcome';
+import { flySegment, missionDomain } from './flySegment';
+import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
 import { flyLevelSpeedChange } from './levelSpeedChange';
 import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
 import { machOfCas, missionAir } from './missionAtmosphere';
@@ -84,7 +84,6 @@ export function flyClimb(
       state[S_ALT] = phase.to_m;
       continue;
     }
-    if (run.stop === 'fuel_exhausted') return legFailed(state, 'fuel_exhausted', `Fuel exhausted in the climb on ${target.legName}.`, last);
     if (run.stop === 'climb_stalled') {
       return legFailed(
         state,
@@ -93,7 +92,7 @@ export function flyClimb(
         last,
       );
     }
-    return legFailed(state, 'infeasible', `The climb on ${target.legName} stopped: ${run.stop}.`, last);
+    return segmentStopFailure(state, run, `the climb on ${target.legName}`, missionDomain(ctx, target), last);
   }
   return legOk(state, last);
 }

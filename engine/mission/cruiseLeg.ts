@@ -17,10 +17,11 @@ import { bestRangeMach, longRangeMach, specificRangeAt } from './bestSpeeds';
 import { makeClimbSegment } from './climbLeg';
 import { energyShareFactor, pressureAltitudeRate } from './energyShareFactor';
 import { airPoint, ratingPoint } from './flightPoint';
-import { flySegment } from './flySegment';
-import { legFailed, legOk, type LegOutcome } from './legOutcome';
+import { flySegment, missionDomain } from './flySegment';
+import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
 import { makeLevelSegment } from './levelFlight';
 import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
+import type { SegmentRun } from './integrator';
 import { altitudeOfPressure, missionAir } from './missionAtmosphere';
 import type { CruiseProfile, CruiseSpeed, MissionInput } from './missionTypes';
 import { S_AIR, S_ALT, S_MASS, S_TAS, type FlightSample, type SegmentEvent, type StateVector } from './missionState';
@@ -95,9 +96,8 @@ function heldMachClimbRate(input: MissionInput, altitude_m: number, mach: number
   return pressureAltitudeRate(thrust, at.drag.drag_N, at.tas_m_s, mass_kg, f, air.temperature_K, air.isaTemperature_K);
 }
 
-function failed(ctx: MissionContext, target: LegTarget, state: StateVector, stop: string, last: FlightSample): LegOutcome {
-  if (stop === 'fuel_exhausted') return legFailed(state, 'fuel_exhausted', `Fuel exhausted in the cruise on ${target.legName}.`, last);
-  if (stop === 'thrust_below_drag') {
+function failed(ctx: MissionContext, target: LegTarget, state: StateVector, run: Pick<SegmentRun, 'stop' | 'domainExit'>, last: FlightSample): LegOutcome {
+  if (run.stop === 'thrust_below_drag') {
     appendCaution(
       ctx.log,
       target,
@@ -112,7 +112,7 @@ function failed(ctx: MissionContext, target: LegTarget, state: StateVector, stop
     );
     return legFailed(state, 'thrust_below_drag', `Thrust below drag in the cruise on ${target.legName}.`, last);
   }
-  return legFailed(state, 'infeasible', `The cruise on ${target.legName} stopped: ${stop}.`, last);
+  return segmentStopFailure(state, run, `the cruise on ${target.legName}`, missionDomain(ctx, target), last);
 }
 
 /** Flies a cruise leg from `start` for `spec.distance_m` of still air. */
@@ -183,7 +183,7 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
       state[S_AIR] = endAt(state[S_MASS]);
       return legOk(state, run.endSample);
     }
-    return failed(ctx, target, state, run.stop, run.endSample);
+    return failed(ctx, target, state, run, run.endSample);
   }
 
   for (let guard = 0; guard < 200; guard++) {
@@ -234,7 +234,7 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
       state[S_AIR] = endAt(state[S_MASS]);
       return legOk(state, last);
     }
-    if (run.stop !== 'step_climb_due' || profile.kind !== 'stepClimb') return failed(ctx, target, state, run.stop, last);
+    if (run.stop !== 'step_climb_due' || profile.kind !== 'stepClimb') return failed(ctx, target, state, run, last);
     const up = h + profile.step_m;
     const climbMach = last.mach;
     // The leg's end stops a step climb too (top of descent reached while climbing), so the distance flown,
@@ -250,8 +250,8 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
       return legOk(state, last);
     }
     if (climb.stop !== 'altitude_reached') {
-      return climb.stop === 'fuel_exhausted'
-        ? failed(ctx, target, state, climb.stop, last)
+      return climb.stop !== 'climb_stalled'
+        ? failed(ctx, target, state, climb, last)
         : legFailed(state, 'climb_not_reached', `The step climb on ${target.legName} stalled at ${state[S_ALT].toFixed(0)} m.`, last);
     }
     state[S_ALT] = up;

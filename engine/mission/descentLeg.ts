@@ -9,8 +9,8 @@
 import type { SpeedSchedule } from './missionTypes';
 import { energyShareFactor, pressureAltitudeRate } from './energyShareFactor';
 import { airPoint, fuelExhaustedEvents, makeSample, pathDerivative, ratingPoint, thrustPoint } from './flightPoint';
-import { flySegment } from './flySegment';
-import { legFailed, legOk, type LegOutcome } from './legOutcome';
+import { flySegment, missionDomain } from './flySegment';
+import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
 import { flyLevelSpeedChange } from './levelSpeedChange';
 import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
 import { G0_M_S2, machOfCas, missionAir } from './missionAtmosphere';
@@ -113,15 +113,10 @@ export function flyDescent(
       state[S_ALT] = phase.to_m;
       continue;
     }
-    if (run.stop === 'fuel_exhausted') return legFailed(state, 'fuel_exhausted', `Fuel exhausted in the descent on ${target.legName}.`, last);
-    return legFailed(
-      state,
-      'infeasible',
-      run.stop === 'descent_stalled'
-        ? `Idle thrust exceeds drag: the descent on ${target.legName} cannot continue below ${state[S_ALT].toFixed(0)} m.`
-        : `The descent on ${target.legName} stopped: ${run.stop}.`,
-      last,
-    );
+    if (run.stop === 'descent_stalled') {
+      return legFailed(state, 'infeasible', `Idle thrust exceeds drag: the descent on ${target.legName} cannot continue below ${state[S_ALT].toFixed(0)} m.`, last);
+    }
+    return segmentStopFailure(state, run, `the descent on ${target.legName}`, missionDomain(ctx, target), last);
   }
   const found = belowIdle as { time_s: number; required: number; idle: number } | null;
   if (found !== null) {

@@ -10,7 +10,7 @@ import { flyClimb } from './climbLeg';
 import { flyCruise } from './cruiseLeg';
 import { flyDescent } from './descentLeg';
 import { flyHold } from './holdLeg';
-import type { LegOutcome } from './legOutcome';
+import { legFailed, type LegOutcome } from './legOutcome';
 import { legEnvironment, type LegTarget, type MissionContext } from './missionContext';
 import { S_AIR, S_ALT, S_MASS, S_TIME, STATE_SIZE, type StateVector } from './missionState';
 import { appendCaution } from './timeHistoryBuilder';
@@ -130,6 +130,17 @@ function flyLeg(ctx: MissionContext, index: number, state: StateVector, solved: 
   }
 }
 
+/** flyLeg with a last-resort guard: a fault inside a leg (a bug) ends the trip with 'internal_error' naming the leg. */
+function flyLegGuarded(ctx: MissionContext, index: number, state: StateVector, solved: SolvedDistance, isSolvable: boolean): LegOutcome {
+  try {
+    return flyLeg(ctx, index, state, solved, isSolvable);
+  } catch (e) {
+    const leg = ctx.input.legs[index];
+    const what = e instanceof Error ? e.message : String(e);
+    return legFailed(Float64Array.from(state), 'internal_error', `Internal error while flying leg ${index + 1} (${leg.kind} "${leg.name}"): ${what}. Please report it with the project file.`, null);
+  }
+}
+
 /** Flies every leg from `rampMass_kg`; `solvedDistance` gives the still-air distance of the solvable cruise leg. */
 export function flyTrip(ctx: MissionContext, rampMass_kg: number, solvedDistance: SolvedDistance): TripOutcome {
   const { first, last } = tripBounds(ctx.input);
@@ -144,7 +155,7 @@ export function flyTrip(ctx: MissionContext, rampMass_kg: number, solvedDistance
   for (let i = 0; i < ctx.input.legs.length; i++) {
     if (i === first) takeoff = Float64Array.from(state);
     const start = state;
-    const out = flyLeg(ctx, i, state, solvedDistance, i === solvable);
+    const out = flyLegGuarded(ctx, i, state, solvedDistance, i === solvable);
     state = out.state;
     rows.push({
       index: i,

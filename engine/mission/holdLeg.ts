@@ -8,8 +8,8 @@
  * part power with a maxContinuous ceiling.
  */
 import { minimumDragMach } from './bestSpeeds';
-import { flySegment } from './flySegment';
-import { legFailed, legOk, type LegOutcome } from './legOutcome';
+import { flySegment, missionDomain } from './flySegment';
+import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
 import { makeLevelSegment } from './levelFlight';
 import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
 import { machOfCas, missionAir } from './missionAtmosphere';
@@ -62,6 +62,5 @@ export function flyHold(
     appendCaution(ctx.log, target, checkThrustBelowDrag(run.endSample.thrustAvailable_N, run.endSample.drag_N), end[S_TIME]);
     return legFailed(end, 'thrust_below_drag', `Thrust below drag in the hold on ${target.legName}.`, run.endSample);
   }
-  if (run.stop === 'fuel_exhausted') return legFailed(end, 'fuel_exhausted', `Fuel exhausted in the hold on ${target.legName}.`, run.endSample);
-  return legFailed(end, 'infeasible', `The hold on ${target.legName} stopped: ${run.stop}.`, run.endSample);
+  return segmentStopFailure(end, run, `the hold on ${target.legName}`, missionDomain(ctx, target), run.endSample);
 }

@@ -6,11 +6,19 @@
  * leg ends on the event (altitude reached, distance reached, fuel exhausted,
  * thrust below drag...) to within a few parts in 1e10 of the step.
  *
+ * The state never leaves the models' domain unannounced: a step whose end or
+ * any RK4 stage falls outside `StateDomain` (altitude, mass, TAS) is halved,
+ * down to 1/1024 of the segment's step; a state still outside then ends the
+ * segment with 'left_domain' at the last state inside.
+ *
  * Sources: RK4 - Hairer, Norsett & Wanner, Solving Ordinary Differential
  * Equations I, section II.1; Illinois method - Dowell & Jarratt (1971).
  */
 import {
   S_ALT,
+  S_GROUND,
+  S_MASS,
+  S_TAS,
   STATE_SIZE,
   type Evaluation,
   type FlightSample,
@@ -21,31 +29,102 @@ import {
 
 export interface SegmentRun {
   readonly end: StateVector;
+  /** The last sample (when the segment started outside its domain, nothing was evaluated: a blank sample at the start). */
   readonly endSample: FlightSample;
   readonly stop: SegmentStop;
+  /** With stop 'left_domain': the bound the state would have passed. */
+  readonly domainExit?: DomainExit;
 }
 
 /** Receives every accepted point (including the segment's first). */
 export type SampleSink = (state: StateVector, sample: FlightSample) => void;
 
 const MAX_STEPS = 20000;
+/** Smallest step tried when a full step leaves the domain, as a fraction of the segment's step. */
+const MIN_STEP_FRACTION = 1 / 1024;
+
+/** Where the models (atmosphere, polar, deck) are defined: every state the integrator evaluates lies inside. */
+export interface StateDomain {
+  readonly minAltitude_m: number;
+  readonly maxAltitude_m: number;
+  /** Mass (kg) at or below which the state is outside (the polar needs a positive weight). */
+  readonly minMass_kg: number;
+  /** Highest TAS (m/s) evaluated. */
+  readonly maxTas_m_s: number;
+  /** When true, an accepted point whose ground speed (d ground distance / dt) is <= 0 stops the segment ('no_ground_progress'). */
+  readonly requireGroundProgress?: boolean;
+  /** The leg's along-track wind (m/s, + tail), to say why the ground speed fell to zero. */
+  readonly wind_m_s?: number;
+}
+
+/** A domain wide enough for any state; for callers that have their own limits. */
+export const UNBOUNDED_DOMAIN: StateDomain = { minAltitude_m: -Infinity, maxAltitude_m: Infinity, minMass_kg: 0, maxTas_m_s: Infinity };
+
+/** Which bound of the domain a state is past. */
+export type DomainExit = 'not_finite' | 'altitude_low' | 'altitude_high' | 'mass_low' | 'tas_out_of_range';
+
+/** The bound `y` is past, or null when it is finite and inside `domain`. */
+export function domainExit(domain: StateDomain, y: StateVector): DomainExit | null {
+  if (!finiteState(y)) return 'not_finite';
+  const h = y[S_ALT];
+  if (h < domain.minAltitude_m) return 'altitude_low';
+  if (h > domain.maxAltitude_m) return 'altitude_high';
+  if (!(y[S_MASS] > domain.minMass_kg)) return 'mass_low';
+  if (y[S_TAS] < 0 || y[S_TAS] > domain.maxTas_m_s) return 'tas_out_of_range';
+  return null;
+}
 
 /** Right-hand side at a stage point: the segment's sample-free derivative when it has one. */
 function stageDerivative(segment: Segment, y: StateVector): Float64Array {
   return segment.derivative !== undefined ? segment.derivative(y) : segment.evaluate(y).derivative;
 }
 
-function rk4Step(segment: Segment, y: StateVector, k1: Float64Array, h: number): StateVector {
+/** One RK4 step of length h, or the bound a stage or the end would pass (nothing is evaluated outside `domain`). */
+function rk4Step(segment: Segment, domain: StateDomain, y: StateVector, k1: Float64Array, h: number): StateVector | DomainExit {
   const tmp = new Float64Array(STATE_SIZE);
   for (let i = 0; i < STATE_SIZE; i++) tmp[i] = y[i] + 0.5 * h * k1[i];
+  const e2 = domainExit(domain, tmp);
+  if (e2 !== null) return e2;
   const k2 = stageDerivative(segment, tmp);
   for (let i = 0; i < STATE_SIZE; i++) tmp[i] = y[i] + 0.5 * h * k2[i];
+  const e3 = domainExit(domain, tmp);
+  if (e3 !== null) return e3;
   const k3 = stageDerivative(segment, tmp);
   for (let i = 0; i < STATE_SIZE; i++) tmp[i] = y[i] + h * k3[i];
+  const e4 = domainExit(domain, tmp);
+  if (e4 !== null) return e4;
   const k4 = stageDerivative(segment, tmp);
   const out = new Float64Array(STATE_SIZE);
   for (let i = 0; i < STATE_SIZE; i++) out[i] = y[i] + (h / 6) * (k1[i] + 2 * k2[i] + 2 * k3[i] + k4[i]);
-  return out;
+  return domainExit(domain, out) ?? out;
+}
+
+/** A sample that was not evaluated (a start outside the domain): its altitude and TAS from the state where finite, every force 0. */
+function blankSample(y: StateVector): FlightSample {
+  const finite = (v: number) => (Number.isFinite(v) ? v : 0);
+  return {
+    altitude_m: finite(y[S_ALT]),
+    mach: 0,
+    cas_m_s: 0,
+    tas_m_s: Math.max(finite(y[S_TAS]), 0),
+    thrustAvailable_N: 0,
+    thrustUsed_N: 0,
+    drag_N: 0,
+    fuelFlow_kg_s: 0,
+    cl: 0,
+    clMax: 0,
+    buffetLoadFactor: 0,
+    liftToDrag: 0,
+    climbRate_m_s: 0,
+    throatMach: null,
+    idleAboveDrag: false,
+    polarOutside: [],
+    propulsionCautions: [],
+  };
+}
+
+function noGroundProgress(domain: StateDomain, ev: Evaluation): boolean {
+  return domain.requireGroundProgress === true && !(ev.derivative[S_GROUND] > 0);
 }
 
 function finiteState(y: StateVector): boolean {
@@ -79,6 +158,7 @@ function hermite(y0: StateVector, f0: Float64Array, y1: StateVector, f1: Float64
  */
 function locateEvent(
   segment: Segment,
+  domain: StateDomain,
   y: StateVector,
   k1: Float64Array,
   h: number,
@@ -87,13 +167,17 @@ function locateEvent(
   end: Evaluation & { readonly state: StateVector },
 ): number {
   const event = segment.events[index];
+  // A trial step that leaves the domain reads as NaN: the root finders then keep the bracket they have.
   const onStep = (tau: number) => {
-    const yt = rk4Step(segment, y, k1, tau);
-    return event.g(yt, segment.evaluate(yt).sample);
+    const yt = rk4Step(segment, domain, y, k1, tau);
+    return typeof yt === 'string' ? Number.NaN : event.g(yt, segment.evaluate(yt).sample);
   };
   if (event.stateOnly) {
     // A state-only event ignores the sample: no evaluation at the trial point (a quarter of each trial's cost).
-    const onStepState = (tau: number) => event.g(rk4Step(segment, y, k1, tau), end.sample);
+    const onStepState = (tau: number) => {
+      const yt = rk4Step(segment, domain, y, k1, tau);
+      return typeof yt === 'string' ? Number.NaN : event.g(yt, end.sample);
+    };
     const guess = illinois((tau) => event.g(hermite(y, k1, end.state, end.derivative, h, tau / h), end.sample), gStart, h, 0);
     return refineOnStep(onStepState, guess, gStart, event.g(end.state, end.sample), h);
   }
@@ -156,26 +240,47 @@ function illinois(at: (tau: number) => number, gLo: number, h: number, lo: numbe
   return b;
 }
 
+/** The longest step in [h MIN_STEP_FRACTION, h], halving from h, whose stages and end stay inside `domain`; else the bound the shortest passed. */
+function stepInside(segment: Segment, domain: StateDomain, y: StateVector, k1: Float64Array, h: number): { readonly h: number; readonly next: StateVector } | DomainExit {
+  let exit: DomainExit = 'not_finite';
+  for (let trial = h; trial >= h * MIN_STEP_FRACTION; trial *= 0.5) {
+    const next = rk4Step(segment, domain, y, k1, trial);
+    if (typeof next !== 'string') return { h: trial, next };
+    exit = next;
+  }
+  return exit;
+}
+
 /**
  * Integrates `segment` from `start` (not modified) until a terminal event
  * fires, handing each accepted point to `sink`. Events already met at the
- * start stop the segment at once. Stops with 'numerical_failure' on a
- * non-finite state and 'step_limit' after 20,000 steps; never returns NaN
- * silently.
+ * start stop the segment at once. Stops with 'left_domain' when the state
+ * would leave `domain` even on a step of 1/1024 of the segment's step (or
+ * starts outside it), 'numerical_failure' on a non-finite state and
+ * 'step_limit' after 20,000 steps; never returns NaN silently.
  */
-export function integrateSegment(segment: Segment, start: StateVector, sink: SampleSink): SegmentRun {
+export function integrateSegment(segment: Segment, start: StateVector, sink: SampleSink, domain: StateDomain = UNBOUNDED_DOMAIN): SegmentRun {
   const y = Float64Array.from(start);
+  const outside = domainExit(domain, y);
+  if (outside !== null) return { end: y, endSample: blankSample(y), stop: 'left_domain', domainExit: outside };
   let ev = accept(segment, y);
   if (!finiteState(y) || !finiteState(ev.derivative)) return { end: y, endSample: ev.sample, stop: 'numerical_failure' };
   sink(y, ev.sample);
+  if (noGroundProgress(domain, ev)) return { end: y, endSample: ev.sample, stop: 'no_ground_progress' };
   const gNow = segment.events.map((e) => e.g(y, ev.sample));
   for (let i = 0; i < gNow.length; i++) {
     if (gNow[i] >= 0) return { end: y, endSample: ev.sample, stop: segment.events[i].stop };
   }
   let current = y;
   for (let step = 0; step < MAX_STEPS; step++) {
-    const h = segment.step_s;
-    let next = rk4Step(segment, current, ev.derivative, h);
+    const inside = stepInside(segment, domain, current, ev.derivative, segment.step_s);
+    if (typeof inside === 'string') {
+      return inside === 'not_finite'
+        ? { end: current, endSample: ev.sample, stop: 'numerical_failure' }
+        : { end: current, endSample: ev.sample, stop: 'left_domain', domainExit: inside };
+    }
+    const h = inside.h;
+    let next = inside.next;
     let nextEv = accept(segment, next);
     if (!finiteState(next) || !finiteState(nextEv.derivative)) {
       return { end: current, endSample: ev.sample, stop: 'numerical_failure' };
@@ -185,7 +290,7 @@ export function integrateSegment(segment: Segment, start: StateVector, sink: Sam
     for (let i = 0; i < segment.events.length; i++) {
       const g = segment.events[i].g(next, nextEv.sample);
       if (g >= 0 || !Number.isFinite(g)) {
-        const tau = locateEvent(segment, current, ev.derivative, h, i, gNow[i], { ...nextEv, state: next });
+        const tau = locateEvent(segment, domain, current, ev.derivative, h, i, gNow[i], { ...nextEv, state: next });
         if (tau < firstTau) {
           firstTau = tau;
           firstIndex = i;
@@ -196,13 +301,16 @@ export function integrateSegment(segment: Segment, start: StateVector, sink: Sam
     }
     if (firstIndex >= 0) {
       if (firstTau < h) {
-        next = rk4Step(segment, current, ev.derivative, firstTau);
+        const located = rk4Step(segment, domain, current, ev.derivative, firstTau);
+        if (typeof located === 'string') return { end: current, endSample: ev.sample, stop: 'left_domain', domainExit: located };
+        next = located;
         nextEv = accept(segment, next);
       }
       sink(next, nextEv.sample);
       return { end: next, endSample: nextEv.sample, stop: segment.events[firstIndex].stop };
     }
     sink(next, nextEv.sample);
+    if (noGroundProgress(domain, nextEv)) return { end: next, endSample: nextEv.sample, stop: 'no_ground_progress' };
     current = next;
     ev = nextEv;
   }

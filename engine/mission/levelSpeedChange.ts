@@ -6,8 +6,8 @@
  */
 import type { RatingName } from '../propulsion/propulsionModel';
 import { fuelExhaustedEvents, airPoint, makeSample, ratingPoint } from './flightPoint';
-import { flySegment } from './flySegment';
-import { legFailed, legOk, type LegOutcome } from './legOutcome';
+import { flySegment, missionDomain } from './flySegment';
+import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
 import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
 import { missionAir } from './missionAtmosphere';
 import { S_ALT, S_MASS, S_TAS, STATE_SIZE, type Segment, type SegmentEvent, type StateVector } from './missionState';
@@ -57,7 +57,6 @@ export function flyLevelSpeedChange(
     run.end[S_TAS] = vTarget;
     return legOk(run.end, run.endSample);
   }
-  if (run.stop === 'fuel_exhausted') return legFailed(run.end, 'fuel_exhausted', `Fuel exhausted during the speed change on ${target.legName}.`, run.endSample);
   if (run.stop === 'climb_stalled') {
     return legFailed(
       run.end,
@@ -66,5 +65,5 @@ export function flyLevelSpeedChange(
       run.endSample,
     );
   }
-  return legFailed(run.end, 'infeasible', `Speed change on ${target.legName} stopped: ${run.stop}.`, run.endSample);
+  return segmentStopFailure(run.end, run, `the speed change on ${target.legName}`, missionDomain(ctx, target), run.endSample);
 }

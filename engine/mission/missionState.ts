@@ -60,7 +60,11 @@ export type SegmentStop =
   | 'descent_stalled'
   | 'step_climb_due'
   | 'numerical_failure'
-  | 'step_limit';
+  | 'step_limit'
+  /** The next step would leave the models' domain (integrator.ts StateDomain) even when cut to 1/1024. */
+  | 'left_domain'
+  /** Ground speed at or below zero on a leg that must advance over the ground (a headwind at least the airspeed). */
+  | 'no_ground_progress';
 
 /** A terminal event: the segment stops where g(state) crosses zero from below. */
 export interface SegmentEvent {

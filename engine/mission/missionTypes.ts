@@ -193,13 +193,28 @@ export interface ReserveBreakdown {
   readonly total_kg: number;
 }
 
+/**
+ * How a mission ended. Only 'ok' is a flight that reaches its destination
+ * within the hard limits; each other status has a sentence in
+ * MissionResult.statusMessage and a class in missionStatus.ts.
+ */
 export type MissionStatus =
   | 'ok'
   | 'did_not_converge'
   | 'fuel_exhausted'
   | 'thrust_below_drag'
   | 'climb_not_reached'
-  | 'infeasible';
+  | 'infeasible'
+  /** Ground speed <= 0 on a leg that must advance: the destination cannot be reached. */
+  | 'no_ground_progress'
+  /** The flight would leave the altitudes or speeds the atmosphere, polar and deck cover. */
+  | 'outside_model_range'
+  /** Hard limits: flown, but take-off above MTOW, fuel above the tanks' capacity, or landing above MLW. */
+  | 'above_mtow'
+  | 'fuel_above_capacity'
+  | 'landing_above_mlw'
+  /** A fault inside the solver (a bug): the leg and what was being done are in the message. */
+  | 'internal_error';
 
 export interface MissionResult {
   readonly status: MissionStatus;

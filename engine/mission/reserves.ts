@@ -34,13 +34,13 @@ import { cruiseMachOfMass, flyCruise } from './cruiseLeg';
 import { flyDescent, type DescentMode } from './descentLeg';
 import { flyHold } from './holdLeg';
 import { makeLevelSegment } from './levelFlight';
-import { flySegment } from './flySegment';
+import { flySegment, missionDomain } from './flySegment';
 import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
 import { FOOT_M } from '../units/unitTable';
 import { S_AIR, S_ALT, S_GROUND, S_MASS, S_TIME, type StateVector } from './missionState';
 import { appendCaution, createFlightLog } from './timeHistoryBuilder';
 import { CAUTION_CATALOGUE } from '../cautions/cautionCatalogue';
-import { legFailed, legOk, type LegOutcome } from './legOutcome';
+import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
 
 /** 1,500 ft above the aerodrome (m): ICAO Annex 6 Part I 4.3.6.3 (450 m) and 14 CFR 121.645(b)(4). */
 export const HOLD_HEIGHT_M = 1500 * FOOT_M;
@@ -164,7 +164,18 @@ function flyNormalCruiseTime(ctx: MissionContext, target: LegTarget, start: Stat
     state,
   );
   if (run.stop === 'time_reached') return legOk(run.end, run.endSample);
-  return legFailed(run.end, run.stop === 'fuel_exhausted' ? 'fuel_exhausted' : 'thrust_below_drag', `Reserve cruise on ${target.legName} stopped: ${run.stop}.`, run.endSample);
+  if (run.stop === 'thrust_below_drag') return legFailed(run.end, 'thrust_below_drag', `Thrust below drag in the reserve cruise on ${target.legName}.`, run.endSample);
+  return segmentStopFailure(run.end, run, `the reserve cruise on ${target.legName}`, missionDomain(ctx, target), run.endSample);
+}
+
+/** A reserve item flown with a last-resort guard: a fault inside it (a bug) is 'internal_error' naming the item. */
+function flyGuarded(fly: (t: LegTarget, s: StateVector) => LegOutcome, target: LegTarget, start: StateVector): LegOutcome {
+  try {
+    return fly(target, start);
+  } catch (e) {
+    const what = e instanceof Error ? e.message : String(e);
+    return legFailed(Float64Array.from(start), 'internal_error', `Internal error while flying the reserve ${target.legName}: ${what}. Please report it with the project file.`, null);
+  }
 }
 
 /** Flies the reserve policy from the landing state; one LegRow per reserve item (kind 'reserve'). */
@@ -189,7 +200,7 @@ export function flyReserves(ctx: MissionContext, trip: TripSummary): ReserveFlig
   const run = (name: string, env: typeof missionEnv, fly: (t: LegTarget, s: StateVector) => LegOutcome): Flown | null => {
     const target: LegTarget = { legIndex: input.legs.length + rows.length, legName: name, env, recordHistory: false };
     const start = state;
-    const out = fly(target, start);
+    const out = flyGuarded(fly, target, start);
     rows.push({
       index: target.legIndex,
       name,

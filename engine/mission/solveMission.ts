@@ -118,6 +118,35 @@ function missionStatus(outcome: IterationOutcome | null, final: MissionEvaluatio
   return { status: 'ok', message: '' };
 }
 
+/** Relative excess (-) over a hard limit that still counts as at the limit (rounding of a flight flown to it). */
+const HARD_LIMIT_TOLERANCE = 1e-9;
+
+/**
+ * The first hard limit a flown mission breaks (take-off mass above MTOW, fuel at block-out above the tanks'
+ * capacity, landing mass above MLW), as a status and a sentence; null when none is broken. The same limits are
+ * raised as cautions with their figures (engine/cautions/checks.ts).
+ */
+function hardLimitBroken(
+  input: MissionInput,
+  takeoffMass_kg: number,
+  rampFuel_kg: number,
+  landingMass_kg: number,
+): { readonly status: MissionStatus; readonly message: string } | null {
+  const a = input.airframe;
+  const above = (value: number, limit: number) => value > limit * (1 + HARD_LIMIT_TOLERANCE);
+  const kg = (v: number) => `${v.toFixed(0)} kg`;
+  if (above(takeoffMass_kg, a.mtow_kg)) {
+    return { status: 'above_mtow', message: `The take-off mass ${kg(takeoffMass_kg)} is above the maximum take-off mass ${kg(a.mtow_kg)} by ${kg(takeoffMass_kg - a.mtow_kg)}.` };
+  }
+  if (above(rampFuel_kg, a.maxFuel_kg)) {
+    return { status: 'fuel_above_capacity', message: `The fuel at block-out ${kg(rampFuel_kg)} is above the tanks' capacity ${kg(a.maxFuel_kg)} by ${kg(rampFuel_kg - a.maxFuel_kg)}.` };
+  }
+  if (above(landingMass_kg, a.mlw_kg)) {
+    return { status: 'landing_above_mlw', message: `The landing mass ${kg(landingMass_kg)} is above the maximum landing mass ${kg(a.mlw_kg)} by ${kg(landingMass_kg - a.mlw_kg)}.` };
+  }
+  return null;
+}
+
 /** Options of one solve; `stepScale` below 1 refines every integration step (convergence studies). */
 export interface SolveOptions {
   readonly stepScale?: number;
@@ -125,11 +154,20 @@ export interface SolveOptions {
 
 /**
  * Solves a mission (see file comment for the modes). All quantities SI.
- * Returns status 'ok' or the reason it could not ('did_not_converge' with the
- * residual, 'fuel_exhausted', 'thrust_below_drag', 'climb_not_reached',
- * 'infeasible').
+ * Returns status 'ok' or the reason it could not (missionStatus.ts lists every
+ * status and its class: not solved, cannot reach, hard limit, internal error).
  */
 export function solveMission(input: MissionInput, options: SolveOptions = {}): MissionResult {
+  try {
+    return solveGuarded(input, options);
+  } catch (e) {
+    // Last-resort guard: a fault inside the solver is a bug, reported as a status instead of escaping.
+    const what = e instanceof Error ? e.message : String(e);
+    return emptyResult(input, 'internal_error', `Internal error while solving the mission (${input.solve?.kind ?? 'unknown'} mode): ${what}. Please report it with the project file.`);
+  }
+}
+
+function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult {
   const problem = missionInputProblem(input);
   if (problem !== null) return emptyResult(input, 'infeasible', `Mission input: ${problem}`);
   const stepScale = options.stepScale !== undefined && options.stepScale > 0 && Number.isFinite(options.stepScale) ? options.stepScale : 1;
@@ -180,7 +218,7 @@ export function solveMission(input: MissionInput, options: SolveOptions = {}): M
   const ctx = { log: final.log };
   const { trip, reserves } = final;
   if (solve.kind === 'takeoffWeight' && !hasSolvable) residual = final.residual_kg;
-  const { status, message } = missionStatus(outcome, final);
+  let { status, message } = missionStatus(outcome, final);
 
   const { first, last } = tripBounds(input);
   const at = (index: number, name: string): LegTarget => ({
@@ -193,10 +231,14 @@ export function solveMission(input: MissionInput, options: SolveOptions = {}): M
   const takeoffMass = trip.takeoff[S_MASS];
   const landingMass = trip.landing[S_MASS];
   const landingFuel = landingMass - zfw;
+  if (status === 'ok') {
+    const broken = hardLimitBroken(input, takeoffMass, rampMass - zfw, landingMass);
+    if (broken !== null) ({ status, message } = broken);
+  }
   appendCaution(ctx.log, at(first, legName(first)), checkMtow(takeoffMass, input.airframe.mtow_kg), trip.takeoff[S_TIME]);
   appendCaution(ctx.log, at(0, legName(0)), checkMzfw(zfw, input.airframe.mzfw_kg), 0);
   appendCaution(ctx.log, at(0, legName(0)), checkFuelCapacity(rampMass - zfw, input.airframe.maxFuel_kg), 0);
-  if (status === 'ok') {
+  if (status === 'ok' || status === 'landing_above_mlw') {
     appendCaution(ctx.log, at(last, legName(last)), checkMlw(landingMass, input.airframe.mlw_kg), trip.landing[S_TIME]);
     const reserveCheck = landingFuel;
     appendCaution(

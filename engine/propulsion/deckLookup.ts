@@ -104,7 +104,27 @@ export function finishLookup(
     cautions.push(outsideCaution(deck, axis, s));
   }
   if (approximateTemperature) cautions.push(temperatureCaution(deck.title, condition.isaDev_K));
-  return { power, thrust_N: v[0]!, fuelFlow_kg_s: fuelFlow, airflow_kg_s: airflow, outside, cautions };
+  // Off the table, a linear extrapolation can fall below zero: no engine gives negative fuel flow or airflow,
+  // and the installed model needs thrust >= 0; each is floored at zero with a caution naming the value.
+  const floored: string[] = [];
+  const floor = (name: string, value: number, unit: string): number => {
+    if (value >= 0) return value;
+    floored.push(`${name} ${round(value)} ${unit}`);
+    return 0;
+  };
+  const thrust = floor('thrust', v[0]!, 'N');
+  fuelFlow = floor('fuel flow', fuelFlow, 'kg/s');
+  if (airflow !== null) airflow = floor('airflow', airflow, 'kg/s');
+  if (floored.length > 0) {
+    cautions.push({
+      id: 'deck_output_floored',
+      severity: 'warning',
+      message: `Deck "${deck.title}": the extrapolation off the table gave ${floored.join(', ')}; read as 0 (${outside.join(', ')} outside the table).`,
+      value: v[0]!,
+      threshold: 0,
+    });
+  }
+  return { power, thrust_N: thrust, fuelFlow_kg_s: fuelFlow, airflow_kg_s: airflow, outside, cautions };
 }
 
 // The temperature caution is the same for every lookup of a deck at one ISA deviation (a mission

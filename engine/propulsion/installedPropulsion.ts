@@ -75,7 +75,7 @@ export function deckAccess(deck: EngineDeck): DeckAccess {
  * finds the grid nodes and weights once, then `evaluate(power, out)` writes
  * thrust (N) and airflow (kg/s, NaN without an airflow column) into
  * out[0..1] by the same weights and temperature approximation as lookupDeck
- * (deckGrid.ts, deckTemperature.ts). `evaluate` returns false where
+ * (deckGrid.ts, deckTemperature.ts), floored at zero like lookupDeck's extrapolations. `evaluate` returns false where
  * lookupDeck would refuse. One prepared condition at a time (buffers reused).
  */
 export function deckCurve(deck: EngineDeck): {
@@ -93,8 +93,9 @@ export function deckCurve(deck: EngineDeck): {
     },
     evaluate(power, out) {
       if (!filled || !evaluateDeckNodesInto(deck.grid, nodes, power, deck.policy.power, values)) return false;
-      out[0] = values[0]!;
-      out[1] = deck.hasAirflow ? values[2]! * airflowFactor : Number.NaN;
+      // Floored at zero as lookupDeck floors them (the point finally evaluated carries its caution).
+      out[0] = Math.max(values[0]!, 0);
+      out[1] = deck.hasAirflow ? Math.max(values[2]! * airflowFactor, 0) : Number.NaN;
       return true;
     },
   };

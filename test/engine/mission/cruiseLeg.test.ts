@@ -12,8 +12,9 @@ function cruise(speed: CruiseSpeed, profile: CruiseProfile, altitude_m = 31000 *
   return [{ kind: 'cruise', name: 'cruise', altitude_m, speed, profile, distance_m: 4_000_000 }];
 }
 
+// Payload 13,000 kg: 25,000 kg of fuel, the test airframe's tank capacity (a fuller tank is its own status, above capacity).
 function fly(legs: Leg[]) {
-  return solveMission(missionInput({ legs, solve: { kind: 'takeoffWeight', takeoffMass_kg: 78000, payload_kg: 10000 }, propulsion: engines }));
+  return solveMission(missionInput({ legs, solve: { kind: 'takeoffWeight', takeoffMass_kg: 78000, payload_kg: 13000 }, propulsion: engines }));
 }
 
 describe('cruiseLeg', () => {
@@ -82,7 +83,7 @@ describe('cruiseLeg', () => {
     const r = solveMission(
       missionInput({
         legs: cruise({ kind: 'mach', mach: 0.78 }, { kind: 'stepClimb', step_m: 2000 * FT, maxAltitude_m: 41000 * FT }, 29000 * FT),
-        solve: { kind: 'takeoffWeight', takeoffMass_kg: 78000, payload_kg: 10000 },
+        solve: { kind: 'takeoffWeight', takeoffMass_kg: 78000, payload_kg: 13000 },
         propulsion: weakClimb,
       }),
     );

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { integrateSegment } from '../../../engine/mission/integrator';
-import { S_MASS, STATE_SIZE, type FlightSample, type Segment } from '../../../engine/mission/missionState';
+import { S_ALT, S_GROUND, S_MASS, STATE_SIZE, type FlightSample, type Segment } from '../../../engine/mission/missionState';
 import { expectClose } from '../../support/assertInDelta';
 
 const SAMPLE: FlightSample = {
@@ -70,5 +70,58 @@ describe('integrator', () => {
     const run = integrateSegment(seg, start(100), () => {});
     expect(run.stop).toBe('numerical_failure');
     expect(Number.isFinite(run.end[S_MASS])).toBe(true);
+  });
+});
+
+describe('integrator domain', () => {
+  // dh/dt = 100 m/s from 0 m: h(t) = 100 t (closed form); the domain ends at 1,000 m.
+  const DOMAIN = { minAltitude_m: -100, maxAltitude_m: 1000, minMass_kg: 0, maxTas_m_s: 500 };
+  const rising = (step_s: number): Segment => ({
+    step_s,
+    evaluate: (y) => {
+      if (y[S_ALT] > DOMAIN.maxAltitude_m) throw new Error(`evaluated outside the domain at ${y[S_ALT]} m`);
+      const d = new Float64Array(STATE_SIZE);
+      d[0] = 1;
+      d[S_ALT] = 100;
+      d[S_GROUND] = 50;
+      return { derivative: d, sample: SAMPLE };
+    },
+    events: [],
+  });
+
+  it('integrateSegment cuts the step so no stage leaves the domain, then stops with left_domain at the last state inside', () => {
+    const run = integrateSegment(rising(7), start(100), () => {}, DOMAIN);
+    expect(run.stop).toBe('left_domain');
+    expect(run.domainExit).toBe('altitude_high');
+    expect(run.end[S_ALT]).toBeLessThanOrEqual(1000);
+    // The last step tried was 7/1024 s: the state stops within 100 m/s x 7/1024 s of the bound.
+    expect(run.end[S_ALT]).toBeGreaterThan(1000 - (100 * 7) / 1024);
+    expectClose(run.end[S_ALT], 100 * run.end[0], { rel: 1e-12 }, 'h = 100 t (exact for a constant rate)');
+  });
+
+  it('integrateSegment refuses a start outside the domain without evaluating it', () => {
+    const s = start(100);
+    s[S_ALT] = 2000;
+    const run = integrateSegment(rising(1), s, () => {}, DOMAIN);
+    expect(run.stop).toBe('left_domain');
+    expect(run.domainExit).toBe('altitude_high');
+  });
+
+  it('integrateSegment stops with no_ground_progress where the ground speed is not positive, when the domain asks', () => {
+    const backwards: Segment = {
+      step_s: 1,
+      evaluate: (y) => {
+        const d = new Float64Array(STATE_SIZE);
+        d[0] = 1;
+        d[S_GROUND] = 5 - y[0];
+        return { derivative: d, sample: SAMPLE };
+      },
+      events: [],
+    };
+    const run = integrateSegment(backwards, start(100), () => {}, { ...DOMAIN, requireGroundProgress: true });
+    expect(run.stop).toBe('no_ground_progress');
+    // Ground speed 5 - t reaches 0 at t = 5 s, an accepted point on the 1 s grid.
+    expect(run.end[0]).toBe(5);
+    expect(integrateSegment({ ...backwards, events: [{ stop: 'time_reached', g: (y) => y[0] - 10 }] }, start(100), () => {}, DOMAIN).stop).toBe('time_reached');
   });
 });

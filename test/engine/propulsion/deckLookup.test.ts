@@ -199,3 +199,38 @@ describe('powerBounds', () => {
     expect(powerBounds(raggedDeck('# outside altitude: refuse\n'), at(9000, 0.3))).toEqual({ idle: 0.2, max: 1 });
   });
 });
+
+describe('deckLookup floors', () => {
+  // Thrust falls 4,000 N per 0.1 Mach, fuel flow 0.05 kg/s and airflow 10 kg/s per 0.1 Mach: linear extrapolation
+  // to Mach 1.2 gives 10,000 - 48,000 = -38,000 N, 0.5 - 0.6 = -0.1 kg/s and 100 - 120 = -20 kg/s (hand calculation).
+  const CSV = [
+    'altitude[m],mach[-],power[-],thrust[N],fuel_flow[kg/s],airflow[kg/s]',
+    '0,0,0.5,5000,0.25,50',
+    '0,0,1,10000,0.5,100',
+    '0,0.1,0.5,3000,0.225,45',
+    '0,0.1,1,6000,0.45,90',
+    '1000,0,0.5,5000,0.25,50',
+    '1000,0,1,10000,0.5,100',
+    '1000,0.1,0.5,3000,0.225,45',
+    '1000,0.1,1,6000,0.45,90',
+  ].join('\n');
+  const deck = expectOk(parseDeckCsv(CSV, 'falling.csv'), 'falling deck');
+
+  it('lookupDeck floors extrapolated thrust, fuel flow and airflow at zero with a warning naming each', () => {
+    const v = expectOk(lookupDeck(deck, at(500, 1.2), 1), 'lookup');
+    expect(v.thrust_N).toBe(0);
+    expect(v.fuelFlow_kg_s).toBe(0);
+    expect(v.airflow_kg_s).toBe(0);
+    const floored = v.cautions.find((c) => c.id === 'deck_output_floored');
+    expect(floored?.severity).toBe('warning');
+    expect(floored?.message).toContain('thrust -38000 N');
+    expect(floored?.message).toContain('fuel flow -0.1 kg/s');
+    expect(floored?.message).toContain('airflow -20 kg/s');
+  });
+
+  it('lookupDeck keeps a positive extrapolation as it is, with no floor warning', () => {
+    const v = expectOk(lookupDeck(deck, at(500, 0.2), 1), 'lookup');
+    expectClose(v.thrust_N, 2000, { abs: 1e-9 }, '10,000 - 2 x 4,000 N (hand calculation)');
+    expect(v.cautions.map((c) => c.id)).not.toContain('deck_output_floored');
+  });
+});
