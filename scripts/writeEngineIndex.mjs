@@ -6,7 +6,7 @@ import { fileURLToPath } from 'node:url';
 import process from 'node:process';
 import { URL } from 'node:url';
 
-const FOLDERS = ['core', 'units', 'aero', 'propulsion', 'cautions', 'project', 'mission', 'analysis'];
+const FOLDERS = ['core', 'units', 'aero', 'propulsion', 'cautions', 'project', 'mission', 'analysis', 'uncertainty'];
 const engineDir = fileURLToPath(new URL('../engine/', import.meta.url));
 
 export function engineIndexText() {

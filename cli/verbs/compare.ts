@@ -11,6 +11,7 @@ import { formatLoadFailure } from '../projectFiles';
 import { optionalString, UsageError, type CliIo, type Verb } from '../verb';
 import { bothUnits, JSON_OPTION, machText } from './analysisArgs';
 import { verbSummary } from './catalogue';
+import { printUncertainty, UNCERTAINTY_OPTIONS, uncertaintyOptions } from './uncertainty';
 
 function signed(x: number | null, digits: number): string {
   if (x === null) return '-';
@@ -22,12 +23,18 @@ export const compareVerb: Verb = {
   summary: verbSummary('compare'),
   help: `blockwise compare — two inlet designs on the same mission
 
-Usage: blockwise compare <project.blockwise.json> [--inlets <A>,<B>] [--json]
+Usage: blockwise compare <project.blockwise.json> [--inlets <A>,<B>]
+                          [--uncertainty [--samples N] [--seed S]] [--json]
 
 Options:
-  --inlets  the two inlet designs, comma-separated (default: the project's first two)
-  --json    print the result as JSON (SI): designs (name, blockFuel_kg, ...),
-            difference (B - A) and breakdown (parts and method)
+  --inlets       the two inlet designs, comma-separated (default: the project's first two)
+  --uncertainty  also fly the project's declared uncertainties (a seeded Monte
+                 Carlo, common random numbers for A and B) and print the band of
+                 B - A, P(B burns less) and the drivers (as blockwise uncertainty)
+  --samples, --seed  size and seed of that Monte Carlo (default the project's)
+  --json         print the result as JSON (SI): designs (name, blockFuel_kg, ...),
+                 difference (B - A) and breakdown (parts and method); with
+                 --uncertainty also "uncertainty" (see blockwise uncertainty --help)
 
 Flies the project's mission with A and with B and lists block fuel, block
 time, trip fuel, take-off mass, the crossover Machs (at the cruise altitude
@@ -41,11 +48,16 @@ analysis failed.
 `,
   options: {
     inlets: { type: 'string' },
+    uncertainty: { type: 'boolean' },
+    ...UNCERTAINTY_OPTIONS,
     ...JSON_OPTION,
   },
   allowPositionals: true,
   async run(values, positionals, io: CliIo): Promise<number> {
     const file = projectArgument(positionals, 'compare');
+    const withUncertainty = values.uncertainty === true;
+    const size = uncertaintyOptions(values);
+    if (!withUncertainty && (size.samples !== undefined || size.seed !== undefined)) throw new UsageError('--samples and --seed go with --uncertainty');
     const inletsText = optionalString(values, 'inlets');
     let names: [string, string] | null = null;
     if (inletsText !== undefined) {
@@ -89,7 +101,9 @@ analysis failed.
     const r = compareInlets(build, { nameA: names[0], nameB: names[1] });
     if (!r.ok) return analysisFailed(io, 'compare', r.error.message);
     const v = r.value;
+    const study = { project, resources, designs: names, ...size };
     if (values.json === true) {
+      if (withUncertainty) return printUncertainty(io, 'compare', study, true, [], { ...v });
       printJsonReport(io, { ...v });
       return 0;
     }
@@ -102,7 +116,7 @@ analysis failed.
       return [`${c.name} ceiling ft`, ft(c.altitude_m), ft(cb?.altitude_m), d.ceilings[i]?.altitude_m == null ? '-' : signed(d.ceilings[i]!.altitude_m! / 0.3048, 0)];
     });
     const cond = v.crossoverCondition;
-    printReport(io, [
+    const lines = [
       `Inlet comparison — "${a.name}" (A) vs "${b.name}" (B), project "${project.name}"`,
       '',
       formatTable(
@@ -134,7 +148,9 @@ analysis failed.
         [...v.breakdown.parts.map((p) => [p.factor, signed(p.blockFuel_kg, 2)]), ['sum of parts', signed(v.breakdown.sumOfParts_kg, 2)]],
       ),
       `  ${v.breakdown.description}`,
-    ]);
+    ];
+    if (withUncertainty) return printUncertainty(io, 'compare', study, false, [...lines, '']);
+    printReport(io, lines);
     return 0;
   },
 };

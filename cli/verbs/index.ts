@@ -10,6 +10,7 @@ import { inletVerb } from './inlet';
 import { payloadRangeVerb } from './payloadRange';
 import { rangeSpeedsVerb } from './rangeSpeeds';
 import { tradeVerb } from './trade';
+import { uncertaintyVerb } from './uncertainty';
 
 /**
  * Every verb, in the order `blockwise --help` lists them. A new verb is a
@@ -27,5 +28,6 @@ export const verbs: readonly Verb[] = [
   payloadRangeVerb,
   compareVerb,
   tradeVerb,
+  uncertaintyVerb,
   ...cycleVerbs,
 ];

@@ -9,6 +9,7 @@ import { validateInletDesign } from '../propulsion/inletDesign';
 import { makeIssue, showValue, valueAtPath, type ProjectIssue } from './projectIssue';
 import type { Project } from './projectSchema';
 import { inletDesignOf, inletIssuePath, polarIssuePath, polarSpecOf } from './projectSpecs';
+import { checkUncertainty } from './uncertaintyChecks';
 
 /** Altitude agreement accepted between a cruise leg and the legs before it (m). */
 const ALTITUDE_MATCH_TOLERANCE_M = 1;
@@ -134,5 +135,6 @@ export function checkProject(project: Project, doc: unknown): ProjectIssue[] {
     const p = 'mission.destinationElevation';
     issues.push(makeIssue(p, raw(p), `at most ${ft(altitude_m)} (the altitude the legs end at)`, `${raw(p)} is above ${ft(altitude_m)}, the altitude the legs end at; the last descent should end above the destination (1,500 ft above it is common practice)`));
   }
+  issues.push(...checkUncertainty(project, raw));
   return issues;
 }

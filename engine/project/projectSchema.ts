@@ -7,6 +7,7 @@
  */
 import { z } from 'zod';
 import { quantity, ratio } from './quantityField';
+import { uncertaintySchema } from './uncertaintySchema';
 
 export const PROJECT_FORMAT = 'blockwise-project';
 export const CURRENT_VERSION = 2;
@@ -364,6 +365,8 @@ export const projectSchema = z.strictObject({
   activeInlet: label(),
   mission: missionSchema,
   cautions: cautionsSchema.default({}),
+  /** Inputs declared uncertain and the Monte-Carlo settings (engine/uncertainty); absent = none declared. */
+  uncertainty: uncertaintySchema.optional(),
 });
 
 /** A parsed project: SI numbers throughout (see docs/project-format.md for each field's dimension). */

@@ -80,6 +80,7 @@ const ARGUMENTS: Readonly<Record<string, (project: string) => string[]>> = {
   'payload-range': (p) => ['payload-range', p, '--between', '0'],
   compare: (p) => ['compare', p],
   trade: (p) => ['trade', p],
+  uncertainty: (p) => ['uncertainty', p, '--samples', '3'],
   'cycle point': () => ['cycle', 'point', 'fixtures/cycle/demo-turbofan.cycle.json', '--altitude', '35000 ft', '--mach', '0.78', '--rating', 'maxCruise'],
 };
 

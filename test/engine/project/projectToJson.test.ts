@@ -52,6 +52,8 @@ describe('projectToJson', () => {
     doc.engine.installation = { bleed: { kind: 'massFlow', massFlow: '1 lb/s', coreFlowFraction: 0.2 }, powerExtraction: '20 kW', ramRecoveryFactor: 1.2 };
     doc.engine.deck = { kind: 'embedded', deck: { title: 'anything', rows: [1, 2, 3] } };
     doc.polar.induced = { kind: 'table', rows: [{ mach: 0, k: 0.05 }, { mach: 0.9, k: 0.06 }] };
+    delete doc.uncertainty.inputs[5]; // a recovery offset needs a recovery-table inlet (uncertaintyChecks.ts)
+    doc.uncertainty.inputs = doc.uncertainty.inputs.filter(Boolean);
     doc.inlets[0].source = { kind: 'geometry', captureArea: '5.6 ft2', throatArea: '5.0 ft2', fanFaceArea: '6 ft2', diffuserLossCoefficient: 0.1 };
     const project = parsed(JSON.stringify(doc));
     expect(parsed(projectToJson(project))).toEqual(project);
