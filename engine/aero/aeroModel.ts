@@ -43,6 +43,8 @@ export interface DragBreakdown {
 export interface AeroModel {
   readonly wingArea_m2: number;
   drag(query: DragQuery): DragBreakdown;
+  /** Machs (-) at which the drag has slope breaks (its tables' nodes), ascending; absent for a smooth polar. Mission climbs and descents end steps there. */
+  readonly slopeBreakMachs?: readonly number[];
   /** Same polar with an extra parasite increment (drag counts / 1e4) added. */
   withIncrement(deltaCd0: number): AeroModel;
 }

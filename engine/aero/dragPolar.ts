@@ -177,11 +177,20 @@ function dragAt(model: DragPolarModel, query: DragQuery): DragBreakdown {
   };
 }
 
+/** The Mach nodes of the tables the drag reads (CD0, K(M), the wave-drag table), ascending. */
+function polarSlopeBreakMachs(tables: PolarTables): number[] {
+  const machs = [...tables.cd0.x];
+  if (typeof tables.induced !== 'number') machs.push(...tables.induced.x);
+  if (tables.wave.kind === 'table') machs.push(...tables.wave.table.x);
+  return [...new Set(machs)].sort((a, b) => a - b);
+}
+
 function assemble(spec: PolarSpec, tables: PolarTables, wingArea_m2: number): DragPolarModel {
   const model: DragPolarModel = {
     spec,
     tables,
     wingArea_m2,
+    slopeBreakMachs: polarSlopeBreakMachs(tables),
     drag: (query) => dragAt(model, query),
     withIncrement: (deltaCd0) => {
       requireFinite(deltaCd0, 'deltaCd0');

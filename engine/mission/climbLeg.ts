@@ -9,10 +9,11 @@ import type { RatingName } from '../propulsion/propulsionModel';
 import type { SpeedSchedule } from './missionTypes';
 import { energyShareFactor, pressureAltitudeRate } from './energyShareFactor';
 import { airPoint, fuelExhaustedEvents, makeSample, pathDerivative, ratingPoint } from './flightPoint';
-import { flySegment, missionDomain } from './flySegment';
+import { flyMonotoneSegment, missionDomain } from './flySegment';
+import { pathBreakAltitudes } from './stepBreaks';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
 import { flyLevelSpeedChange } from './levelSpeedChange';
-import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
+import { BASE_MONOTONE_STEP, BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
 import { machOfCas, missionAir } from './missionAtmosphere';
 import { S_ALT, S_MASS, S_TAS, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
 import { schedulePhases } from './speedSchedule';
@@ -76,7 +77,14 @@ export function flyClimb(
       last = out.lastSample ?? last;
       continue;
     }
-    const run = flySegment(ctx, target, makeClimbSegment(ctx, target, phase.held, phase.value, phase.to_m, rating), state);
+    const run = flyMonotoneSegment(ctx, target, makeClimbSegment(ctx, target, phase.held, phase.value, phase.to_m, rating), state, {
+      component: S_ALT,
+      to: phase.to_m,
+      breaks: pathBreakAltitudes(ctx.input, phase.held, phase.value, state[S_ALT], phase.to_m),
+      maxStep: BASE_MONOTONE_STEP.altitude_m * ctx.options.stepScale,
+      minRate: CLIMB_STALL_RATE_M_S,
+      targetStop: 'altitude_reached',
+    });
     state = run.end;
     last = run.endSample;
     state[S_TAS] = run.endSample.tas_m_s;

@@ -9,10 +9,11 @@
 import type { SpeedSchedule } from './missionTypes';
 import { energyShareFactor, pressureAltitudeRate } from './energyShareFactor';
 import { airPoint, fuelExhaustedEvents, makeSample, pathDerivative, ratingPoint, thrustPoint } from './flightPoint';
-import { flySegment, missionDomain } from './flySegment';
+import { flyMonotoneSegment, missionDomain } from './flySegment';
+import { pathBreakAltitudes } from './stepBreaks';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
 import { flyLevelSpeedChange } from './levelSpeedChange';
-import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
+import { BASE_MONOTONE_STEP, BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
 import { G0_M_S2, machOfCas, missionAir } from './missionAtmosphere';
 import { S_ALT, S_MASS, S_TAS, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
 import { schedulePhases } from './speedSchedule';
@@ -20,6 +21,9 @@ import { appendCaution } from './timeHistoryBuilder';
 import { CAUTION_CATALOGUE } from '../cautions/cautionCatalogue';
 
 export type DescentMode = { readonly kind: 'idle' } | { readonly kind: 'rate'; readonly rate_m_s: number };
+
+/** Least descent rate (m/s) for stepping a descent in altitude; slower descents go to the time integrator. */
+const MONOTONE_DESCENT_RATE_M_S = 0.5;
 
 /** Least descent rate (m/s) that counts as progress at idle. */
 export const DESCENT_STALL_RATE_M_S = 0.05;
@@ -105,7 +109,14 @@ export function flyDescent(
       last = out.lastSample ?? last;
       continue;
     }
-    const run = flySegment(ctx, target, makeDescentSegment(ctx, target, phase.held, phase.value, phase.to_m, mode, onBelowIdle), state);
+    const run = flyMonotoneSegment(ctx, target, makeDescentSegment(ctx, target, phase.held, phase.value, phase.to_m, mode, onBelowIdle), state, {
+      component: S_ALT,
+      to: phase.to_m,
+      breaks: pathBreakAltitudes(ctx.input, phase.held, phase.value, state[S_ALT], phase.to_m),
+      maxStep: BASE_MONOTONE_STEP.altitude_m * ctx.options.stepScale,
+      minRate: MONOTONE_DESCENT_RATE_M_S,
+      targetStop: 'altitude_reached',
+    });
     state = run.end;
     last = run.endSample;
     state[S_TAS] = run.endSample.tas_m_s;

@@ -1,7 +1,8 @@
-/** Integrates one segment of a leg into the flight log, inside the mission's domain. */
+/** Integrates one segment of a leg into the flight log, inside the mission's domain: in time, or along a monotone component (altitude, speed). */
 import { integrateSegment, type SegmentRun, type StateDomain } from './integrator';
 import type { MissionContext, LegTarget } from './missionContext';
 import { MAX_ALTITUDE_M, MIN_ALTITUDE_M } from './missionInputCheck';
+import { integrateMonotone, type MonotonePlan } from './monotoneStepper';
 import type { Segment, StateVector } from './missionState';
 import { appendSample } from './timeHistoryBuilder';
 
@@ -36,4 +37,9 @@ export function missionDomain(ctx: MissionContext, target: LegTarget): StateDoma
 /** Integrates `segment` from `start`, writing every accepted point to the context's flight log for `target`. */
 export function flySegment(ctx: MissionContext, target: LegTarget, segment: Segment, start: StateVector): SegmentRun {
   return integrateSegment(segment, start, (state, sample) => appendSample(ctx.log, target, state, sample), missionDomain(ctx, target));
+}
+
+/** Integrates `segment` from `start` along a monotone component (monotoneStepper.ts), writing every accepted point to the flight log. */
+export function flyMonotoneSegment(ctx: MissionContext, target: LegTarget, segment: Segment, start: StateVector, plan: MonotonePlan): SegmentRun {
+  return integrateMonotone(segment, start, (state, sample) => appendSample(ctx.log, target, state, sample), plan, missionDomain(ctx, target));
 }

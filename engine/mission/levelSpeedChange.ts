@@ -6,11 +6,15 @@
  */
 import type { RatingName } from '../propulsion/propulsionModel';
 import { fuelExhaustedEvents, airPoint, makeSample, ratingPoint } from './flightPoint';
-import { flySegment, missionDomain } from './flySegment';
+import { flyMonotoneSegment, missionDomain } from './flySegment';
+import { speedBreaks } from './stepBreaks';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
-import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
+import { BASE_MONOTONE_STEP, BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
 import { missionAir } from './missionAtmosphere';
 import { S_ALT, S_MASS, S_TAS, STATE_SIZE, type Segment, type SegmentEvent, type StateVector } from './missionState';
+
+/** Least acceleration (m/s^2) for stepping a speed change in TAS; a slower change goes to the time integrator. */
+const MONOTONE_SPEED_CHANGE_M_S2 = 0.05;
 
 /** Least acceleration (m/s^2) that counts as progress; below it the speed change is abandoned. */
 export const MIN_SPEED_CHANGE_M_S2 = 0.01;
@@ -52,7 +56,14 @@ export function flyLevelSpeedChange(
   const startState = Float64Array.from(start);
   startState[S_TAS] = start[S_TAS] > 0 ? start[S_TAS] : vTarget;
   if (Math.abs(startState[S_TAS] - vTarget) < 1e-9) return legOk(startState, null);
-  const run = flySegment(ctx, target, { step_s: BASE_STEP_S.speedChange * ctx.options.stepScale, evaluate, events }, startState);
+  const run = flyMonotoneSegment(ctx, target, { step_s: BASE_STEP_S.speedChange * ctx.options.stepScale, evaluate, events }, startState, {
+    component: S_TAS,
+    to: vTarget,
+    breaks: speedBreaks(input, a, startState[S_TAS], vTarget),
+    maxStep: BASE_MONOTONE_STEP.speed_m_s * ctx.options.stepScale,
+    minRate: MONOTONE_SPEED_CHANGE_M_S2,
+    targetStop: 'speed_reached',
+  });
   if (run.stop === 'speed_reached') {
     run.end[S_TAS] = vTarget;
     return legOk(run.end, run.endSample);

@@ -49,3 +49,14 @@ export const BASE_STEP_S = {
   descent: 60,
   hold: 600,
 } as const;
+
+/**
+ * Longest steps of the climbs and descents in pressure altitude (m) and of
+ * the level speed changes in TAS (m/s), before `stepScale`, where those are
+ * stepped along altitude or speed with step ends on the models' slope breaks
+ * (monotoneStepper.ts); shown converged in test/engine/mission/solveMission.test.ts.
+ */
+export const BASE_MONOTONE_STEP = {
+  altitude_m: 600,
+  speed_m_s: 40,
+} as const;

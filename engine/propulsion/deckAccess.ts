@@ -6,7 +6,7 @@
 import type { Result } from '../core/result';
 import type { DeckLookup } from './deckLookup';
 import type { ReferenceRecovery } from './engineDeck';
-import type { FlightCondition, RatingName } from './propulsionModel';
+import type { FlightCondition, RatingName, SlopeBreaks } from './propulsionModel';
 
 /** One engine's uninstalled deck numbers at a condition and power: the deck lookup's own result. */
 export type DeckPoint = DeckLookup;
@@ -39,6 +39,8 @@ export interface DeckAccess {
    * evaluator may share buffers: it is valid until the next `curveAt` call.
    */
   curveAt?(condition: FlightCondition): DeckCurve;
+  /** The deck's grid altitudes (m) and Machs (-), ascending: where its interpolated numbers have slope breaks. */
+  readonly slopeBreaks?: SlopeBreaks;
   /** Free-stream static pressure (Pa) and temperature (K). */
   ambient(condition: FlightCondition): Result<{ readonly pressure_Pa: number; readonly temperature_K: number }, AccessError>;
 }

@@ -25,7 +25,7 @@ import { prepareInlet, type PreparedInlet } from './inletRecovery';
 import type { InstallationMethodId } from './installationMethod';
 import { validateInstallation, type InstallationSettings } from './installationCorrections';
 import { newPartPowerSolve, solvePartPower } from './partPowerSolve';
-import type { FlightCondition, InstalledPoint, PartPowerPoint, PropulsionModel, RatingName, ThrustLimit } from './propulsionModel';
+import type { FlightCondition, InstalledPoint, PartPowerPoint, PropulsionModel, RatingName, SlopeBreaks, ThrustLimit } from './propulsionModel';
 
 export type { AccessError, DeckAccess, DeckPoint } from './deckAccess';
 export { FOR_THRUST_TOLERANCE } from './partPowerSolve';
@@ -123,6 +123,15 @@ function resolveRating(access: DeckAccess, named: Map<RatingName, ResolvedRating
  * (validate them first with validateInletDesign / validateInstallation)
  * and throw with every issue and its field path.
  */
+/** The deck's slope breaks with the recovery table's Machs added. */
+function installedSlopeBreaks(access: DeckAccess, ctx: InstallationContext): SlopeBreaks | undefined {
+  const deck = access.slopeBreaks;
+  const recovery = ctx.recoveryInlet.table?.x ?? [];
+  if (deck === undefined && recovery.length === 0) return undefined;
+  const machs = [...new Set([...(deck?.machs ?? []), ...recovery])].sort((a, b) => a - b);
+  return { altitudes_m: deck?.altitudes_m ?? [], machs };
+}
+
 export function makeInstalledModel(access: DeckAccess, options: InstalledModelOptions): PropulsionModel {
   const ctx = installationContext(access, options);
   const scratch = newEngineScratch();
@@ -172,6 +181,7 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
     label: access.title,
     parametric: access.parametric,
     inletName: options.inlet.name,
+    slopeBreaks: installedSlopeBreaks(access, ctx),
     atRating,
     atPower,
     forThrust,

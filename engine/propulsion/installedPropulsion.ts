@@ -31,6 +31,11 @@ export interface InstalledPropulsionOptions {
   readonly cautionSettings: CautionSettings;
 }
 
+/** The distinct values of `values`, ascending. */
+export function sortedUnique(values: ArrayLike<number>): number[] {
+  return [...new Set(Array.from(values))].sort((a, b) => a - b);
+}
+
 /** The deck and the 1976 standard atmosphere as the installed model's DeckAccess. */
 export function deckAccess(deck: EngineDeck): DeckAccess {
   const curve = deckCurve(deck);
@@ -45,6 +50,7 @@ export function deckAccess(deck: EngineDeck): DeckAccess {
     parametric: deck.parametric,
     hasAirflow: deck.hasAirflow,
     referenceRecovery: deck.referenceRecovery,
+    slopeBreaks: { altitudes_m: sortedUnique(deck.grid.altitudes_m), machs: sortedUnique(deck.grid.machs) },
     lookup: (condition, power) => lookupDeck(deck, condition, power),
     ratingPower: (rating) => {
       const r = ratingPower(deck, rating);

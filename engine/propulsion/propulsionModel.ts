@@ -84,6 +84,12 @@ export interface PartPowerPoint extends InstalledPoint {
   readonly thrustRequired_N: number;
 }
 
+/** Pressure altitudes (m) and Machs (-) at which a model's numbers have slope breaks, ascending. */
+export interface SlopeBreaks {
+  readonly altitudes_m: readonly number[];
+  readonly machs: readonly number[];
+}
+
 export interface PropulsionModel {
   readonly engineCount: number;
   /** Deck title; parametric decks say "parametric" in it. */
@@ -91,6 +97,12 @@ export interface PropulsionModel {
   readonly parametric: boolean;
   /** Name of the inlet design applied. */
   readonly inletName: string;
+  /**
+   * Where the installed numbers have slope breaks (the deck's grid altitudes
+   * and Machs, the inlet's recovery-table Machs): mission climbs, descents
+   * and speed changes end their steps there. Absent for smooth models.
+   */
+  readonly slopeBreaks?: SlopeBreaks;
   /** Installed numbers at a named rating. */
   atRating(condition: FlightCondition, rating: RatingName): InstalledPoint;
   /** Installed numbers at a power-axis value. */

@@ -1,0 +1,45 @@
+/**
+ * Where the steps of a climb, descent or level speed change must end: the
+ * slope breaks of the engine and airframe models (propulsionModel.ts
+ * `slopeBreaks`, aeroModel.ts `slopeBreakMachs`) met along the path. Steps
+ * that straddle a break lose the integrator's order there (common practice
+ * for piecewise-linear tables).
+ */
+import { transitionAltitude } from './missionAtmosphere';
+import type { MissionInput } from './missionTypes';
+
+/** The models' break Machs (-), positive, ascending, distinct. */
+export function breakMachs(input: MissionInput): number[] {
+  const machs = [...(input.propulsion.slopeBreaks?.machs ?? []), ...(input.aero.slopeBreakMachs ?? [])].filter((m) => m > 0);
+  return [...new Set(machs)].sort((a, b) => a - b);
+}
+
+/**
+ * Pressure altitudes (m) strictly between `from_m` and `to_m` where a climb
+ * or descent holding CAS (m/s) or Mach (-) meets a slope break: the deck's
+ * grid altitudes and, holding CAS, the altitude where the Mach reaches each
+ * break Mach (the CAS/Mach transition altitude of that pair, NACA Report
+ * 1135 via missionAtmosphere.ts).
+ */
+export function pathBreakAltitudes(input: MissionInput, held: 'cas' | 'mach', value: number, from_m: number, to_m: number): number[] {
+  const lo = Math.min(from_m, to_m);
+  const hi = Math.max(from_m, to_m);
+  const out: number[] = [];
+  for (const h of input.propulsion.slopeBreaks?.altitudes_m ?? []) if (h > lo && h < hi) out.push(h);
+  if (held === 'cas') {
+    for (const mach of breakMachs(input)) {
+      const h = transitionAltitude(value, mach);
+      if (Number.isFinite(h) && h > lo && h < hi) out.push(h);
+    }
+  }
+  return out;
+}
+
+/** TAS values (m/s) strictly between `fromTas_m_s` and `toTas_m_s` at the break Machs, for a level speed change where the speed of sound is `speedOfSound_m_s`. */
+export function speedBreaks(input: MissionInput, speedOfSound_m_s: number, fromTas_m_s: number, toTas_m_s: number): number[] {
+  const lo = Math.min(fromTas_m_s, toTas_m_s);
+  const hi = Math.max(fromTas_m_s, toTas_m_s);
+  return breakMachs(input)
+    .map((m) => m * speedOfSound_m_s)
+    .filter((v) => v > lo && v < hi);
+}

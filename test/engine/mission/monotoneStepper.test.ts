@@ -1,0 +1,96 @@
+import { describe, expect, it } from 'vitest';
+import { integrateMonotone, monotoneStepEnds } from '../../../engine/mission/monotoneStepper';
+import { S_ALT, S_MASS, S_TIME, STATE_SIZE, type FlightSample, type Segment, type StateVector } from '../../../engine/mission/missionState';
+import { expectClose } from '../../support/assertInDelta';
+
+const SAMPLE: FlightSample = {
+  altitude_m: 0, mach: 0, cas_m_s: 0, tas_m_s: 0, thrustAvailable_N: 0, thrustUsed_N: 0, drag_N: 0, fuelFlow_kg_s: 0,
+  cl: 0, clMax: 0, buffetLoadFactor: 0, liftToDrag: 0, climbRate_m_s: 0, throatMach: null, idleAboveDrag: false, polarOutside: [], propulsionCautions: [],
+};
+
+/**
+ * Climb with dh/dt = a - b h (rate falling linearly to zero at the absolute ceiling a / b) and constant fuel flow q:
+ * closed form t(h) = ln(a / (a - b h)) / b, m(h) = m0 - q t(h) (separable linear ODE).
+ */
+function linearCeilingClimb(a: number, b: number, q: number, zeroFuel_kg = 0, to_m = 9000): Segment {
+  const f = (y: StateVector) => {
+    const d = new Float64Array(STATE_SIZE);
+    d[S_TIME] = 1;
+    d[S_ALT] = a - b * y[S_ALT];
+    d[S_MASS] = -q;
+    return d;
+  };
+  return {
+    step_s: 5,
+    evaluate: (y) => ({ derivative: f(y), sample: { ...SAMPLE, altitude_m: y[S_ALT], climbRate_m_s: a - b * y[S_ALT] } }),
+    derivative: f,
+    events: [
+      { stop: 'altitude_reached', stateOnly: true, g: (y) => y[S_ALT] - to_m },
+      { stop: 'climb_stalled', g: (_y, s) => 0.5 - s.climbRate_m_s },
+      { stop: 'fuel_exhausted', stateOnly: true, g: (y) => zeroFuel_kg - y[S_MASS] },
+    ],
+  };
+}
+
+function start(mass_kg: number): StateVector {
+  const y = new Float64Array(STATE_SIZE) as StateVector;
+  y[S_MASS] = mass_kg;
+  return y;
+}
+
+const plan = (maxStep: number, breaks: readonly number[] = []) =>
+  ({ component: S_ALT, to: 9000, breaks, maxStep, minRate: 0.5, targetStop: 'altitude_reached' }) as const;
+
+describe('monotoneStepEnds', () => {
+  it('monotoneStepEnds ends a step on every break between the ends and cuts intervals evenly to the longest step', () => {
+    expect(monotoneStepEnds(0, 1000, [250, 1200, -5, 250], 400)).toEqual([250, 625, 1000]);
+    expect(monotoneStepEnds(1000, 0, [250, 600], 500)).toEqual([600, 250, 0]);
+    expect(monotoneStepEnds(0, 100, [], 1000)).toEqual([100]);
+  });
+});
+
+describe('integrateMonotone', () => {
+  // a = 20 m/s, b = 1/900 1/s: the ceiling is at 18,000 m, the rate at 9,000 m is 10 m/s.
+  const a = 20;
+  const b = 1 / 900;
+  const q = 0.3;
+  const exactTime = Math.log(a / (a - b * 9000)) / b;
+
+  it('integrateMonotone lands exactly on the target altitude with the closed-form time and fuel (separable linear ODE)', () => {
+    const run = integrateMonotone(linearCeilingClimb(a, b, q), start(10000), () => {}, plan(600));
+    expect(run.stop).toBe('altitude_reached');
+    expect(run.end[S_ALT]).toBe(9000);
+    expectClose(run.end[S_TIME], exactTime, { rel: 1e-7 }, 'closed form ln(a / (a - b h)) / b');
+    expectClose(run.end[S_MASS], 10000 - q * exactTime, { rel: 1e-8 }, 'closed form m0 - q t');
+  });
+
+  it('integrateMonotone converges at fourth order as the altitude step halves (RK4, Hairer, Norsett & Wanner II.1)', () => {
+    const err = (step: number) => Math.abs(integrateMonotone(linearCeilingClimb(a, b, q), start(10000), () => {}, plan(step)).end[S_TIME] - exactTime);
+    const ratio = err(3000) / err(1500);
+    expect(ratio).toBeGreaterThan(12);
+    expect(ratio).toBeLessThan(20);
+  });
+
+  it('integrateMonotone ends a step on each break and hands every accepted point to the sink', () => {
+    const seen: number[] = [];
+    integrateMonotone(linearCeilingClimb(a, b, q), start(10000), (y) => seen.push(y[S_ALT]), plan(5000, [1234.5]));
+    expect(seen).toEqual([0, 1234.5, 5117.25, 9000]);
+  });
+
+  it('integrateMonotone hands a stalling climb to the time integrator, which stops it at the stall rate', () => {
+    // Ceiling at 9,450 m: the rate falls to the 0.5 m/s stall rate at 9,213.75 m, below the 9,400 m target.
+    const seg = linearCeilingClimb(20, 20 / 9450, q, 0, 9400);
+    const run = integrateMonotone(seg, start(10000), () => {}, { ...plan(600), to: 9400 });
+    // Stall where a - b h = 0.5: h = (a - 0.5) / b (closed form).
+    expect(run.stop).toBe('climb_stalled');
+    expectClose(run.end[S_ALT], (20 - 0.5) / (20 / 9450), { abs: 1e-3 }, 'closed form h = (a - 0.5) / b');
+  });
+
+  it('integrateMonotone hands over to the time integrator where fuel runs out, which locates it', () => {
+    const run = integrateMonotone(linearCeilingClimb(a, b, q, 9900), start(10000), () => {}, plan(600));
+    expect(run.stop).toBe('fuel_exhausted');
+    expectClose(run.end[S_MASS], 9900, { abs: 1e-6 }, 'the zero-fuel mass the event is set at');
+    // 100 kg at 0.3 kg/s: t = 333.3 s, so h = (a / b)(1 - exp(-b t)) (closed form).
+    expectClose(run.end[S_ALT], (a / b) * (1 - Math.exp((-b * 100) / q)), { rel: 1e-6 }, 'closed form h(t)');
+  });
+});
