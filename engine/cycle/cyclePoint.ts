@@ -74,6 +74,8 @@ export interface CyclePointResult {
   readonly activeLimit: LimitName | null;
   /** Hard limits a fixed setting exceeds (a rating never exceeds its limits). */
   readonly exceededLimits: readonly LimitName[];
+  /** Where a converged point stretches the model's assumptions (empty otherwise). */
+  readonly cautions: readonly CycleCaution[];
   readonly recovery: number;
   readonly bleedFraction: number;
   readonly powerExtraction_W: number;
@@ -83,6 +85,29 @@ export interface CyclePointResult {
 }
 
 const LIMIT_TOLERANCE = 1e-9;
+
+/** LP turbine expansion ratio below which its choked-nozzle-guide-vane assumption is weak (a caution, not a refusal). */
+export const MIN_CHOKED_LPT_EXPANSION = 1.5;
+
+export type CycleCautionCode = 'lp_turbine_unchoking' | 'thrust_not_positive';
+
+/** A converged point where the model's assumptions are stretched. */
+export interface CycleCaution {
+  readonly code: CycleCautionCode;
+  readonly message: string;
+}
+
+function cautionsOf(s: CycleState): CycleCaution[] {
+  const out: CycleCaution[] = [];
+  if (s.lptExpansionRatio < MIN_CHOKED_LPT_EXPANSION) {
+    out.push({
+      code: 'lp_turbine_unchoking',
+      message: `LP turbine expansion ratio ${s.lptExpansionRatio.toFixed(3)} is below ${MIN_CHOKED_LPT_EXPANSION}: its guide vanes are unlikely to be choked, so the choked-turbine match is only indicative here (sub-idle)`,
+    });
+  }
+  if (!(s.thrust_N > 0)) out.push({ code: 'thrust_not_positive', message: `net thrust ${s.thrust_N.toFixed(0)} N is not positive (windmilling or sub-idle setting)` });
+  return out;
+}
 
 function failed(status: CyclePointStatus, message: string, inst: Installation, residual: number | null = null, iterations = 0): CyclePointResult {
   return {
@@ -103,6 +128,7 @@ function failed(status: CyclePointStatus, message: string, inst: Installation, r
     overallPressureRatio: null,
     activeLimit: null,
     exceededLimits: [],
+    cautions: [],
     recovery: inst.recovery,
     bleedFraction: inst.bleedFraction,
     powerExtraction_W: inst.powerExtraction_W,
@@ -141,6 +167,7 @@ function converged(engine: CycleEngine, o: ThrottleOutcome, quantity: LimitName,
     overallPressureRatio: s.pt3_Pa / s.pt2_Pa,
     activeLimit,
     exceededLimits: activeLimit === null ? exceededHardLimits(engine, s) : [],
+    cautions: cautionsOf(s),
     recovery: inst.recovery,
     bleedFraction: inst.bleedFraction,
     powerExtraction_W: inst.powerExtraction_W,

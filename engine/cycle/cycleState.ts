@@ -91,6 +91,9 @@ export interface CycleState {
   readonly reason: string;
 }
 
+/** Highest turbine inlet temperature the constant-property relations are used to (K): near-stoichiometric beyond. */
+export const MAX_CYCLE_TT4_K = 2500;
+
 function positiveFinite(...xs: readonly number[]): boolean {
   for (const x of xs) if (!(x > 0) || !Number.isFinite(x)) return false;
   return true;
@@ -138,6 +141,7 @@ export function evaluateCycle(c: CycleConstants, free: FreeStream, v: CycleVaria
   else if (v.tauFan < 1 || v.tauCompressor < 1) reason = 'a compressor would expand the flow';
   else if (v.tauHpt > 1 || v.tauLpt > 1) reason = 'a turbine would compress the flow';
   else if (!(f >= 0) || !Number.isFinite(f) || !(k.burnerEfficiency * h > hot.cp * v.tt4_K)) reason = 'the turbine inlet temperature is below the compressor exit temperature (no fuel to burn)';
+  else if (v.tt4_K > MAX_CYCLE_TT4_K) reason = `the turbine inlet temperature would pass ${MAX_CYCLE_TT4_K} K`;
   else if (!(v.bypassRatio >= 0)) reason = 'the bypass ratio went negative';
   else if (!(m31 > 0)) reason = 'the bleed takes the whole core flow';
   return {

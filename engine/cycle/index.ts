@@ -18,10 +18,11 @@ export type { CycleSpec, CycleRating, CycleSize, CycleComponents, CycleDesignPoi
 export { LIMIT_NAMES } from './cycleSpec';
 export type { CycleEngine, CycleSizes, CycleDesignSummary } from './cycleEngine';
 export type { CycleState, CycleVariables } from './cycleState';
+export { MAX_CYCLE_TT4_K } from './cycleState';
 export type { NozzleState } from './nozzleExit';
 export type { FreeStream } from './freeStream';
 export { designEngine, type CycleError, type CycleErrorCode } from './designPoint';
-export { runCyclePoint, type CyclePointRequest, type CyclePointResult, type CyclePointStatus, type CycleThrottle, type CycleWarmStart } from './cyclePoint';
+export { runCyclePoint, type CyclePointRequest, type CyclePointResult, type CyclePointStatus, type CycleThrottle, type CycleWarmStart, type CycleCaution, type CycleCautionCode, MIN_CHOKED_LPT_EXPANSION } from './cyclePoint';
 export { spoolSpeeds, type SpoolSpeeds } from './spoolSpeeds';
 export { limitAt, LIMIT_UNITS } from './limitSchedule';
 export { stationTable, type StationRow } from './stationTable';

@@ -80,6 +80,7 @@ function jsonOf(file: string, title: string, request: CyclePointRequest, p: Cycl
     overallPressureRatio: p.overallPressureRatio,
     activeLimit: p.activeLimit,
     exceededLimits: p.exceededLimits,
+    cautions: p.cautions,
     recovery: p.recovery,
     bleedFraction: p.bleedFraction,
     powerExtraction_W: p.powerExtraction_W,
@@ -115,6 +116,7 @@ function textOf(title: string, request: CyclePointRequest, p: CyclePointResult):
     `  Tt4         ${r6(p.turbineInletTemperature_K!)} K`,
     `  ratios      bypass ${r6(p.bypassRatio!)}, fan ${r6(p.fanPressureRatio!)}, overall ${r6(p.overallPressureRatio!)}`,
     `  limit       ${p.activeLimit ?? 'none (fixed setting)'}${p.exceededLimits.length ? `; exceeds the hard limits on ${p.exceededLimits.join(', ')}` : ''}`,
+    ...p.cautions.map((c) => `  caution     ${c.code}: ${c.message}`),
     '',
     ...stationLines(p.stations),
   ];
