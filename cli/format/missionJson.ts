@@ -4,6 +4,7 @@
  */
 import { SAFETY_NOTICE } from '../../engine/core/notice';
 import type { MissionResult } from '../../engine/mission/missionTypes';
+import { distanceBasisText } from './missionSummaryText';
 
 export interface MissionJsonContext {
   readonly projectName: string;
@@ -39,7 +40,10 @@ export function missionJson(result: MissionResult, context: MissionJsonContext) 
     landingWeight_kg: finite(r.landingMass_kg),
     zeroFuelWeight_kg: finite(r.zeroFuelMass_kg),
     payload_kg: finite(r.payload_kg),
+    distanceBasis: r.distanceBasis,
+    distanceBasisNote: distanceBasisText(r.distanceBasis),
     distance_m: finite(r.airDistance_m),
+    airDistance_m: finite(r.airDistance_m),
     groundDistance_m: finite(r.groundDistance_m),
     iterations: r.iterations,
     residual_kg: finite(r.residual_kg),
@@ -51,6 +55,8 @@ export function missionJson(result: MissionResult, context: MissionJsonContext) 
       endTime_s: finite(l.endTime_s),
       startDistance_m: finite(l.startDistance_m),
       endDistance_m: finite(l.endDistance_m),
+      startGroundDistance_m: finite(l.startGroundDistance_m),
+      endGroundDistance_m: finite(l.endGroundDistance_m),
       startAltitude_m: finite(l.startAltitude_m),
       endAltitude_m: finite(l.endAltitude_m),
       startMass_kg: finite(l.startMass_kg),

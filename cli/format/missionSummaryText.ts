@@ -37,6 +37,7 @@ function legRows(legs: readonly LegRow[]): string[][] {
     clockTime(l.startTime_s),
     clockTime(l.endTime_s - l.startTime_s),
     formatQuantity(l.endDistance_m - l.startDistance_m, 'distance', 'customary', 1),
+    formatQuantity(l.endGroundDistance_m - l.startGroundDistance_m, 'distance', 'customary', 1),
     `${formatQuantity(l.startAltitude_m, 'altitude', 'customary')} -> ${formatQuantity(l.endAltitude_m, 'altitude', 'customary')}`,
     formatQuantity(l.fuel_kg, 'mass', 'customary'),
     formatQuantity(l.endMass_kg, 'mass', 'customary'),
@@ -50,6 +51,13 @@ export function cautionLines(cautions: readonly Caution[]): string[] {
     const when = c.time_s !== undefined ? ` at ${clockTime(c.time_s)}` : '';
     return `  [${c.severity}] ${c.id} (${where}${when}): ${c.message}`;
   });
+}
+
+/** What the mission's distances measured, in one sentence (text and JSON reports). */
+export function distanceBasisText(basis: MissionResult['distanceBasis']): string {
+  return basis === 'ground'
+    ? 'over the ground: the range and set distances are ground distances; the wind changes the air distance, fuel and time'
+    : 'still air (design-range study): the range and set distances are still-air distances; the wind changes only the ground distance';
 }
 
 /** The whole text report of `blockwise fly`. */
@@ -85,7 +93,8 @@ export function missionSummaryText(result: MissionResult, context: MissionSummar
       { header: 'kind', align: 'left' },
       { header: 'start', align: 'right' },
       { header: 'duration', align: 'right' },
-      { header: 'distance', align: 'right' },
+      { header: 'air distance', align: 'right' },
+      { header: 'ground distance', align: 'right' },
       { header: 'altitude', align: 'right' },
       { header: 'fuel', align: 'right' },
       { header: 'end weight', align: 'right' },
@@ -97,6 +106,7 @@ export function missionSummaryText(result: MissionResult, context: MissionSummar
     `Mission: ${context.projectName}`,
     `Inlet: ${context.inletName}    Deck: ${context.deckTitle}`,
     `Status: ${status}`,
+    `Distances: ${distanceBasisText(r.distanceBasis)}`,
     '',
     headline,
     '',

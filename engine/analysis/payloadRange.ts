@@ -15,8 +15,10 @@ export type PayloadRangePointKind = 'maxPayload' | 'mtowFullFuel' | 'ferry' | 'b
 export interface PayloadRangePoint {
   readonly kind: PayloadRangePointKind;
   readonly payload_kg: number;
-  /** Still-air and ground distance of the trip (m). */
+  /** Range (m) in the mission's distance basis (over the ground, or in still air in a design-range study). */
   readonly range_m: number;
+  /** Still-air and ground distance of the trip (m). */
+  readonly airDistance_m: number;
   readonly groundDistance_m: number;
   readonly takeoffMass_kg: number;
   readonly rampMass_kg: number;
@@ -56,7 +58,8 @@ function pointOf(kind: PayloadRangePointKind, r: MissionResult): PayloadRangePoi
   return {
     kind,
     payload_kg: r.payload_kg,
-    range_m: r.airDistance_m,
+    range_m: r.distanceBasis === 'ground' ? r.groundDistance_m : r.airDistance_m,
+    airDistance_m: r.airDistance_m,
     groundDistance_m: r.groundDistance_m,
     takeoffMass_kg: r.takeoffMass_kg,
     rampMass_kg: r.rampMass_kg,

@@ -29,7 +29,7 @@ export interface TradeFactor {
 }
 
 export interface TradeFactorsResult {
-  /** The design mission: payload (kg) and still-air range (m) flown in payload-and-range mode. */
+  /** The design mission: payload (kg) and range (m, in the mission's distance basis) flown in payload-and-range mode. */
   readonly designMission: { readonly payload_kg: number; readonly range_m: number };
   readonly baselineBlockFuel_kg: number;
   readonly factors: readonly TradeFactor[];
@@ -58,7 +58,8 @@ const WRAPPER_METHOD =
  * Trade factors by central differences d = (v(+h) - v(-h)) / (2h) at
  * h = 1 unit and h = 1/2 unit (block fuel v in kg, from the mission solver
  * in payload-and-range mode). When the input's solve mode is not
- * payload-and-range, it is flown once and its payload and still-air range
+ * payload-and-range, it is flown once and its payload and range (in the
+ * mission's distance basis)
  * become the design mission. 1 (+1) + 16 missions.
  */
 export function tradeFactors(input: MissionInput, options: TradeFactorOptions): Result<TradeFactorsResult, AnalysisError> {
@@ -80,7 +81,7 @@ export function tradeFactors(input: MissionInput, options: TradeFactorOptions): 
   if (input.solve.kind !== 'payloadRange') {
     const first = fly(input, 'project');
     if (!first.ok) return first;
-    design = { ...input, solve: { kind: 'payloadRange', payload_kg: first.value.payload_kg, range_m: first.value.airDistance_m } };
+    design = { ...input, solve: { kind: 'payloadRange', payload_kg: first.value.payload_kg, range_m: first.value.distanceBasis === 'ground' ? first.value.groundDistance_m : first.value.airDistance_m } };
   }
   const base = fly(design, 'baseline');
   if (!base.ok) return base;

@@ -27,7 +27,8 @@ export type MissionCautionId =
   | 'idle_thrust_above_drag'
   | 'alternate_too_short'
   | 'altitude_jump'
-  | 'profile_altitude_limited';
+  | 'profile_altitude_limited'
+  | 'still_air_distances';
 
 export interface CautionEntry {
   readonly id: MissionCautionId;
@@ -210,5 +211,13 @@ export const CAUTION_CATALOGUE: Readonly<Record<MissionCautionId, CautionEntry>>
     defaultThreshold: null,
     unit: 'm',
     source: 'Step or cruise-climb profile maximum altitude (input)',
+  },
+  still_air_distances: {
+    id: 'still_air_distances',
+    title: 'Distances flown in still air (design-range study)',
+    severity: 'info',
+    defaultThreshold: null,
+    unit: 'm/s',
+    source: 'Mission input distanceBasis "stillAir": the range, set cruise distances and the alternate are still-air distances; the wind changes only the ground distance, not the fuel or the time',
   },
 };

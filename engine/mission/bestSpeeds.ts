@@ -35,6 +35,23 @@ export function specificRangeAt(input: MissionInput, altitude_m: number, mach: n
   return Number.isFinite(sr) ? sr : 0;
 }
 
+/**
+ * Specific range (m/kg) in the mission's distance basis: the specific air range `sr_m_kg` at a Mach, times
+ * ground speed / TAS over the ground when the wind is not zero (dx/dm = (V + w) / fuel flow), else unchanged;
+ * 0 when the ground speed is not positive.
+ */
+export function basisSpecificRange(
+  input: MissionInput,
+  sr_m_kg: number,
+  altitude_m: number,
+  mach: number,
+  env: { readonly isaDev_K: number; readonly wind_m_s: number },
+): number {
+  if ((input.distanceBasis ?? 'ground') !== 'ground' || env.wind_m_s === 0) return sr_m_kg;
+  const tas = mach * missionAir(altitude_m, env.isaDev_K).speedOfSound_m_s;
+  return tas > 0 && tas + env.wind_m_s > 0 ? (sr_m_kg * (tas + env.wind_m_s)) / tas : 0;
+}
+
 /** Best-range Mach (-) at altitude (m) and mass (kg). */
 export function bestRangeMach(input: MissionInput, altitude_m: number, mass_kg: number, isaDev_K: number): number {
   return goldenMaximum((m) => specificRangeAt(input, altitude_m, m, mass_kg, isaDev_K), MIN_SEARCH_MACH, maxSearchMach(input, altitude_m));

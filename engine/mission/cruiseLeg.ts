@@ -20,11 +20,11 @@ import { airPoint, ratingPoint } from './flightPoint';
 import { flySegment, missionDomain } from './flySegment';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
 import { makeLevelSegment } from './levelFlight';
-import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
+import { BASE_STEP_S, distanceIndex, type LegTarget, type MissionContext } from './missionContext';
 import type { SegmentRun } from './integrator';
 import { altitudeOfPressure, missionAir } from './missionAtmosphere';
 import type { CruiseProfile, CruiseSpeed, MissionInput } from './missionTypes';
-import { S_AIR, S_ALT, S_MASS, S_TAS, type FlightSample, type SegmentEvent, type StateVector } from './missionState';
+import { S_AIR, S_ALT, S_GROUND, S_MASS, S_TAS, type FlightSample, type SegmentEvent, type StateVector } from './missionState';
 import { appendCaution } from './timeHistoryBuilder';
 import { CAUTION_CATALOGUE } from '../cautions/cautionCatalogue';
 
@@ -32,10 +32,10 @@ export interface CruiseSpec {
   readonly altitude_m: number;
   readonly speed: CruiseSpeed;
   readonly profile: CruiseProfile;
-  /** Still-air distance to fly (m). */
+  /** Distance to fly (m) in the mission's distance basis (over the ground unless the mission is a still-air study). */
   readonly distance_m: number;
-  /** When set, the leg ends at this absolute still-air distance (m) as a function of mass (kg) instead (top of descent predicted by the fuel iteration). */
-  readonly endAirOf?: (mass_kg: number) => number;
+  /** When set, the leg ends at this absolute distance (m, same basis) as a function of mass (kg) instead (top of descent predicted by the fuel iteration). */
+  readonly endDistanceOf?: (mass_kg: number) => number;
 }
 
 /** Cruise Mach (-) for a speed rule at altitude (m) and mass (kg), searched afresh. */
@@ -115,13 +115,24 @@ function failed(ctx: MissionContext, target: LegTarget, state: StateVector, run:
   return segmentStopFailure(state, run, `the cruise on ${target.legName}`, missionDomain(ctx, target), last);
 }
 
-/** Flies a cruise leg from `start` for `spec.distance_m` of still air. */
+/**
+ * Sets the distance in basis `k` to its exact end value and moves the other distance by the same amount (both
+ * to the value when they are equal, as in still air, so a windless flight is the same whichever the basis).
+ */
+function setEndDistance(state: StateVector, k: typeof S_AIR | typeof S_GROUND, value: number): void {
+  const other = k === S_AIR ? S_GROUND : S_AIR;
+  state[other] = state[other] === state[k] ? value : state[other] + (value - state[k]);
+  state[k] = value;
+}
+
+/** Flies a cruise leg from `start` for `spec.distance_m` (over the ground, or in still air in a still-air study). */
 export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVector, spec: CruiseSpec): LegOutcome {
   const input = ctx.input;
   const dev = target.env.isaDev_K;
-  const fixedEnd = start[S_AIR] + Math.max(spec.distance_m, 0);
-  const endOf = spec.endAirOf;
-  const endAir: number | ((mass_kg: number) => number) = endOf ? (m: number) => Math.max(endOf(m), start[S_AIR]) : fixedEnd;
+  const k = distanceIndex(input);
+  const fixedEnd = start[k] + Math.max(spec.distance_m, 0);
+  const endOf = spec.endDistanceOf;
+  const endAir: number | ((mass_kg: number) => number) = endOf ? (m: number) => Math.max(endOf(m), start[k]) : fixedEnd;
   const endAt = (mass_kg: number) => (typeof endAir === 'number' ? endAir : endAir(mass_kg));
   let state = Float64Array.from(start);
   state[S_ALT] = spec.altitude_m;
@@ -158,7 +169,7 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
         machOf: () => mach,
         ceiling: 'maxCruise',
         step_s,
-        endAirDistance_m: endAir,
+        endDistance_m: endAir,
         endTime_s: null,
       }),
       state,
@@ -180,7 +191,7 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
       );
     }
     if (run.stop === 'distance_reached') {
-      state[S_AIR] = endAt(state[S_MASS]);
+      setEndDistance(state, k, endAt(state[S_MASS]));
       return legOk(state, run.endSample);
     }
     return failed(ctx, target, state, run, run.endSample);
@@ -221,7 +232,7 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
         machOf: (_alt, m) => machHere(m),
         ceiling: 'maxCruise',
         step_s,
-        endAirDistance_m: endAir,
+        endDistance_m: endAir,
         endTime_s: null,
         extraEvents: extra,
       }),
@@ -231,7 +242,7 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
     last = run.endSample;
     state[S_TAS] = last.tas_m_s;
     if (run.stop === 'distance_reached') {
-      state[S_AIR] = endAt(state[S_MASS]);
+      setEndDistance(state, k, endAt(state[S_MASS]));
       return legOk(state, last);
     }
     if (run.stop !== 'step_climb_due' || profile.kind !== 'stepClimb') return failed(ctx, target, state, run, last);
@@ -240,13 +251,13 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
     // The leg's end stops a step climb too (top of descent reached while climbing), so the distance flown,
     // and with it the fuel-iteration residual, stays a continuous function of the mass.
     const climbSegment = makeClimbSegment(ctx, target, 'mach', climbMach, up, 'maxClimb');
-    const legEnd: SegmentEvent = { stop: 'distance_reached', stateOnly: true, g: (y) => y[S_AIR] - endAt(y[S_MASS]) };
+    const legEnd: SegmentEvent = { stop: 'distance_reached', stateOnly: true, g: (y) => y[k] - endAt(y[S_MASS]) };
     const climb = flySegment(ctx, target, { ...climbSegment, events: [...climbSegment.events, legEnd] }, state);
     state = climb.end;
     last = climb.endSample;
     state[S_TAS] = last.tas_m_s;
     if (climb.stop === 'distance_reached') {
-      state[S_AIR] = endAt(state[S_MASS]);
+      setEndDistance(state, k, endAt(state[S_MASS]));
       return legOk(state, last);
     }
     if (climb.stop !== 'altitude_reached') {
@@ -255,7 +266,7 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
         : legFailed(state, 'climb_not_reached', `The step climb on ${target.legName} stalled at ${state[S_ALT].toFixed(0)} m.`, last);
     }
     state[S_ALT] = up;
-    if (state[S_AIR] >= endAt(state[S_MASS])) return legOk(state, last);
+    if (state[k] >= endAt(state[S_MASS])) return legOk(state, last);
   }
   return legFailed(state, 'infeasible', `Too many step climbs on ${target.legName}.`, last);
 }

@@ -11,8 +11,8 @@ import { flyCruise } from './cruiseLeg';
 import { flyDescent } from './descentLeg';
 import { flyHold } from './holdLeg';
 import { legFailed, type LegOutcome } from './legOutcome';
-import { legEnvironment, type LegTarget, type MissionContext } from './missionContext';
-import { S_AIR, S_ALT, S_MASS, S_TIME, STATE_SIZE, type StateVector } from './missionState';
+import { distanceIndex, legEnvironment, type LegTarget, type MissionContext } from './missionContext';
+import { S_AIR, S_ALT, S_GROUND, S_MASS, S_TIME, STATE_SIZE, type StateVector } from './missionState';
 import { appendCaution } from './timeHistoryBuilder';
 import { checkResidualClimb } from '../cautions/checks';
 import { CAUTION_CATALOGUE } from '../cautions/cautionCatalogue';
@@ -25,10 +25,12 @@ export interface TripOutcome {
   /** State at the start of the first airborne-side leg (after taxi out) and at landing (before taxi in). */
   readonly takeoff: StateVector;
   readonly landing: StateVector;
-  /** Still-air distance flown on the solvable cruise leg (m), 0 when there is none. */
+  /** Distance flown on the solvable cruise leg (m, in the mission's distance basis), 0 when there is none. */
   readonly solvableDistance_m: number;
-  /** Still-air distance flown after the solvable cruise leg (m), 0 when there is none. */
+  /** Distance flown after the solvable cruise leg (m, same basis), 0 when there is none. */
   readonly afterSolvable_m: number;
+  /** Fuel burned on the solvable cruise leg (kg), 0 when there is none. */
+  readonly solvableFuel_kg: number;
   /** Mass at the end of the solvable cruise leg (kg), 0 when there is none. */
   readonly solvableEndMass_kg: number;
 }
@@ -55,11 +57,10 @@ export function initialState(rampMass_kg: number): StateVector {
 }
 
 /**
- * The solvable leg's still-air distance (m): a number, or where it ends as
- * an absolute still-air distance (m) that depends on the mass (kg) (top of
- * descent predicted from the previous passes).
+ * The solvable leg's distance (m, in the mission's distance basis): a number, or where it ends as an absolute
+ * distance (m) that depends on the mass (kg) (top of descent predicted from the previous passes).
  */
-export type SolvedDistance = number | { readonly endAirOf: (mass_kg: number) => number };
+export type SolvedDistance = number | { readonly endDistanceOf: (mass_kg: number) => number };
 
 /** Cruise and hold legs fly at their own altitude; a jump from the altitude reached is flagged (info), not flown. */
 function noteAltitudeJump(ctx: MissionContext, target: LegTarget, state: StateVector, altitude_m: number): void {
@@ -120,7 +121,7 @@ function flyLeg(ctx: MissionContext, index: number, state: StateVector, solved: 
         speed: leg.speed,
         profile: leg.profile,
         distance_m: leg.distance_m ?? (typeof solved === 'number' ? Math.max(solved, 0) : 0),
-        endAirOf: isSolvable && typeof solved !== 'number' ? solved.endAirOf : undefined,
+        endDistanceOf: isSolvable && typeof solved !== 'number' ? solved.endDistanceOf : undefined,
       });
     case 'descent':
       return flyDescent(ctx, target, state, leg.toAltitude_m, leg.schedule, leg.mode);
@@ -141,16 +142,18 @@ function flyLegGuarded(ctx: MissionContext, index: number, state: StateVector, s
   }
 }
 
-/** Flies every leg from `rampMass_kg`; `solvedDistance` gives the still-air distance of the solvable cruise leg. */
+/** Flies every leg from `rampMass_kg`; `solvedDistance` gives the distance of the solvable cruise leg (mission's basis). */
 export function flyTrip(ctx: MissionContext, rampMass_kg: number, solvedDistance: SolvedDistance): TripOutcome {
   const { first, last } = tripBounds(ctx.input);
   const solvable = solvableLegIndex(ctx.input);
+  const k = distanceIndex(ctx.input);
   let state = initialState(rampMass_kg);
   let takeoff = state;
   let landing = state;
   let solvableDistance_m = 0;
   let solvableEnd_m = 0;
   let solvableEndMass_kg = 0;
+  let solvableFuel_kg = 0;
   const rows: LegRow[] = [];
   for (let i = 0; i < ctx.input.legs.length; i++) {
     if (i === first) takeoff = Float64Array.from(state);
@@ -165,6 +168,8 @@ export function flyTrip(ctx: MissionContext, rampMass_kg: number, solvedDistance
       endTime_s: state[S_TIME],
       startDistance_m: start[S_AIR],
       endDistance_m: state[S_AIR],
+      startGroundDistance_m: start[S_GROUND],
+      endGroundDistance_m: state[S_GROUND],
       startAltitude_m: start[S_ALT],
       endAltitude_m: state[S_ALT],
       startMass_kg: start[S_MASS],
@@ -172,16 +177,17 @@ export function flyTrip(ctx: MissionContext, rampMass_kg: number, solvedDistance
       fuel_kg: start[S_MASS] - state[S_MASS],
     });
     if (i === solvable) {
-      solvableDistance_m = state[S_AIR] - start[S_AIR];
-      solvableEnd_m = state[S_AIR];
+      solvableDistance_m = state[k] - start[k];
+      solvableEnd_m = state[k];
       solvableEndMass_kg = state[S_MASS];
+      solvableFuel_kg = start[S_MASS] - state[S_MASS];
     }
     if (i === last) landing = Float64Array.from(state);
     if (out.status !== 'ok') {
-      return { status: out.status, message: out.message, rows, end: state, takeoff, landing: state, solvableDistance_m, afterSolvable_m: 0, solvableEndMass_kg };
+      return { status: out.status, message: out.message, rows, end: state, takeoff, landing: state, solvableDistance_m, afterSolvable_m: 0, solvableEndMass_kg, solvableFuel_kg };
     }
   }
   if (last < first) landing = Float64Array.from(state);
-  const afterSolvable_m = solvable >= 0 ? state[S_AIR] - solvableEnd_m : 0;
-  return { status: 'ok', message: '', rows, end: state, takeoff, landing, solvableDistance_m, afterSolvable_m, solvableEndMass_kg };
+  const afterSolvable_m = solvable >= 0 ? state[k] - solvableEnd_m : 0;
+  return { status: 'ok', message: '', rows, end: state, takeoff, landing, solvableDistance_m, afterSolvable_m, solvableEndMass_kg, solvableFuel_kg };
 }

@@ -4,20 +4,21 @@
  * the residual = fuel on board at landing - reserve fuel required.
  *
  * - payloadRange: the ramp mass is found by the secant method so the residual
- *   is within FUEL_TOLERANCE_KG, while the solvable cruise leg's still-air
- *   distance is reset each pass so the trip's total still-air distance equals
- *   the range (within DISTANCE_TOLERANCE_M).
+ *   is within FUEL_TOLERANCE_KG, while the solvable cruise leg's distance is
+ *   reset each pass so the trip's total distance equals the range (within
+ *   DISTANCE_TOLERANCE_M). Distances are in the mission's distance basis:
+ *   over the ground (default) or in still air (missionContext.ts).
  * - fixed ramp mass (maxRange, or takeoffWeight with a solvable leg): the
- *   solvable leg's still-air distance is found by the secant method so the
+ *   solvable leg's distance is found by the secant method so the
  *   residual vanishes.
  * Secant method: any numerical-analysis text (e.g. Burden & Faires,
  * Numerical Analysis, section 2.3).
  */
-import { specificRangeAt } from './bestSpeeds';
+import { basisSpecificRange, specificRangeAt } from './bestSpeeds';
 import { cruiseMach } from './cruiseLeg';
 import { flyReserves, type ReserveFlight } from './reserves';
 import { flyTrip, solvableLegIndex, type SolvedDistance, type TripOutcome } from './flyTrip';
-import { legEnvironment, type MissionContext } from './missionContext';
+import { distanceIndex, legEnvironment, type MissionContext } from './missionContext';
 import { S_AIR, S_MASS, S_TIME } from './missionState';
 import { createFlightLog, type FlightLog } from './timeHistoryBuilder';
 
@@ -98,7 +99,7 @@ function failedFlight(e: MissionEvaluation): boolean {
 
 /**
  * payloadRange: ramp mass (kg) so the residual vanishes while the trip's
- * still-air distance is `range_m`. The solvable leg ends at its top of
+ * distance (mission's basis) is `range_m`. The solvable leg ends at its top of
  * descent: where the distance flown plus the distance the legs after it will
  * take equals the range, the latter predicted as a linear function of the
  * mass there from the last two passes (within DISTANCE_TOLERANCE_M at
@@ -114,7 +115,8 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
     const a = seen[n - 2];
     return b.after_m + ((b.after_m - a.after_m) / (b.mass_kg - a.mass_kg)) * (mass_kg - b.mass_kg);
   };
-  const distance = { endAirOf: (mass_kg: number) => range_m - afterOf(mass_kg) };
+  const distance = { endDistanceOf: (mass_kg: number) => range_m - afterOf(mass_kg) };
+  const basis = distanceIndex(ctx.input);
   const remember = (e: MissionEvaluation) => {
     if (e.trip.solvableDistance_m > 0) seen.push({ mass_kg: e.trip.solvableEndMass_kg, after_m: e.trip.afterSolvable_m });
   };
@@ -124,7 +126,7 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
   if (failedFlight(e0)) return { kind: 'flightFailed', rampMass_kg: x0, distance_m: d, iterations: 1, residual_kg: e0.residual_kg, failure: e0 };
   remember(e0);
   // The residual each pass would have had at exactly the range: the distance error costs the solvable leg's fuel per metre.
-  const atRange = (e: MissionEvaluation) => e.residual_kg - AIM_KG + (e.trip.end[S_AIR] - range_m) * solvableFuelPerMetre(e);
+  const atRange = (e: MissionEvaluation) => e.residual_kg - AIM_KG + (e.trip.end[basis] - range_m) * solvableFuelPerMetre(e);
   // First slope: for a Breguet-like flight, d(landing fuel)/d(ramp mass) = landing mass / ramp mass.
   const ratio = e0.trip.landing[S_MASS] / x0;
   let x1 = x0 - atRange(e0) / (Number.isFinite(ratio) && ratio > 0.2 && ratio <= 1 ? ratio : 0.85);
@@ -136,7 +138,7 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
     const e1 = evaluateMission(scratch(ctx), x1, distance);
     d = e1.trip.solvableDistance_m;
     if (failedFlight(e1)) return { kind: 'flightFailed', rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, failure: e1 };
-    const distanceError = e1.trip.end[S_AIR] - range_m;
+    const distanceError = e1.trip.end[basis] - range_m;
     if (fuelConverged(e1.residual_kg) && Math.abs(distanceError) <= DISTANCE_TOLERANCE_M) {
       return { kind: 'converged', rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, pass: e1 };
     }
@@ -147,7 +149,7 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
         distance_m: 0,
         iterations: k,
         residual_kg: e1.residual_kg,
-        message: `The range ${(range_m / 1000).toFixed(1)} km is shorter than the other legs' ${(e1.trip.end[S_AIR] / 1000).toFixed(1)} km of still air.`,
+        message: `The range ${(range_m / 1000).toFixed(1)} km is shorter than the other legs' ${(e1.trip.end[basis] / 1000).toFixed(1)} km ${basis === S_AIR ? 'of still air' : 'over the ground'}.`,
       };
     }
     remember(e1);
@@ -165,14 +167,13 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
   return notConverged('Fuel', { rampMass_kg: x1, distance_m: d, iterations: MAX_ITERATIONS, residual_kg: e0.residual_kg });
 }
 
-/** Fuel burned per metre of still air on the solvable cruise leg of a pass (kg/m), 0 when unknown. */
+/** Fuel burned per metre (of the mission's distance basis) on the solvable cruise leg of a pass (kg/m), 0 when unknown. */
 function solvableFuelPerMetre(e: MissionEvaluation): number {
-  const row = e.trip.rows.find((r) => r.kind === 'cruise' && r.endDistance_m - r.startDistance_m === e.trip.solvableDistance_m);
   const d = e.trip.solvableDistance_m;
-  return row && d > 0 ? row.fuel_kg / d : 0;
+  return d > 0 ? e.trip.solvableFuel_kg / d : 0;
 }
 
-/** Fixed ramp mass: the solvable leg's still-air distance (m) so the residual vanishes. */
+/** Fixed ramp mass: the solvable leg's distance (m, mission's basis) so the residual vanishes. */
 export function iterateDistance(ctx: MissionContext, rampMass_kg: number): IterationOutcome {
   const input = ctx.input;
   let d0 = 0;
@@ -196,7 +197,8 @@ export function iterateDistance(ctx: MissionContext, rampMass_kg: number): Itera
   if (leg && leg.kind === 'cruise') {
     const env = legEnvironment(input, leg);
     const m = e0.trip.takeoff[S_MASS];
-    sr = specificRangeAt(input, leg.altitude_m, cruiseMach(input, leg.speed, leg.altitude_m, m, env.isaDev_K), m, env.isaDev_K);
+    const mach = cruiseMach(input, leg.speed, leg.altitude_m, m, env.isaDev_K);
+    sr = basisSpecificRange(input, specificRangeAt(input, leg.altitude_m, mach, m, env.isaDev_K), leg.altitude_m, mach, env);
   }
   let d1 = (e0.residual_kg - AIM_KG) * (sr > 0 ? sr : 100);
   for (let k = 2; k <= MAX_ITERATIONS; k++) {

@@ -47,7 +47,7 @@ export function flyHold(
       machOf: (_h, m) => (speed.kind === 'cas' || !(m > 0) ? fixedMach : fixedMach * Math.sqrt(m / mass0)),
       ceiling: 'maxContinuous',
       step_s: BASE_STEP_S.hold * ctx.options.stepScale,
-      endAirDistance_m: null,
+      endDistance_m: null,
       endTime_s: state[S_TIME] + time_s,
     }),
     state,

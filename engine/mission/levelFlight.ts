@@ -1,15 +1,15 @@
 /**
  * Level (or cruise-climb) flight with thrust = drag: fuel flow from the
  * part-power point giving the drag, distance at TAS, ground distance at
- * TAS + wind. Used by cruise, hold and the reserve legs. The cruise-climb
+ * TAS + wind; a set end distance is measured in the mission's distance basis. Used by cruise, hold and the reserve legs. The cruise-climb
  * variant takes its altitude algebraically from the mass and neglects the
  * slow climb's potential-energy term (flight-path angle about 1e-4 rad).
  */
 import type { RatingName } from '../propulsion/propulsionModel';
 import type { PartPowerPoint } from '../propulsion/propulsionModel';
 import { airPoint, fuelExhaustedEvents, makeSample, ratingPoint, thrustPoint, type AirPoint } from './flightPoint';
-import type { LegTarget, MissionContext } from './missionContext';
-import { S_AIR, S_MASS, S_TIME, STATE_SIZE, type Evaluation, type Segment, type SegmentEvent, type StateVector } from './missionState';
+import { distanceIndex, type LegTarget, type MissionContext } from './missionContext';
+import { S_MASS, S_TIME, STATE_SIZE, type Evaluation, type Segment, type SegmentEvent, type StateVector } from './missionState';
 
 export interface LevelFlightSpec {
   /** Pressure altitude (m) as a function of mass (kg); constant for level flight. */
@@ -20,8 +20,11 @@ export interface LevelFlightSpec {
   /** Highest rating the part-power search may use. */
   readonly ceiling: RatingName;
   readonly step_s: number;
-  /** Absolute still-air distance (m), or that distance as a function of mass (kg), or time (s) at which the segment ends; null = none. */
-  readonly endAirDistance_m: number | ((mass_kg: number) => number) | null;
+  /**
+   * Absolute distance (m) in the mission's distance basis (missionContext.ts distanceIndex: over the ground or
+   * in still air), or that distance as a function of mass (kg), at which the segment ends; null = none.
+   */
+  readonly endDistance_m: number | ((mass_kg: number) => number) | null;
   readonly endTime_s: number | null;
   readonly extraEvents?: readonly SegmentEvent[];
 }
@@ -55,9 +58,10 @@ export function makeLevelSegment(ctx: MissionContext, target: LegTarget, spec: L
     return derivativeOf(at, engine);
   };
   const events: SegmentEvent[] = [{ stop: 'thrust_below_drag', g: (_y, s) => s.drag_N - s.thrustAvailable_N }];
-  if (spec.endAirDistance_m !== null) {
-    const end = spec.endAirDistance_m;
-    events.push({ stop: 'distance_reached', stateOnly: true, g: (y) => y[S_AIR] - (typeof end === 'number' ? end : end(y[S_MASS])) });
+  if (spec.endDistance_m !== null) {
+    const end = spec.endDistance_m;
+    const k = distanceIndex(input);
+    events.push({ stop: 'distance_reached', stateOnly: true, g: (y) => y[k] - (typeof end === 'number' ? end : end(y[S_MASS])) });
   }
   if (spec.endTime_s !== null) {
     const end = spec.endTime_s;

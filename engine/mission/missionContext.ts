@@ -2,7 +2,8 @@
  * What every leg needs while a mission is flown: the input, the leg's
  * environment, integration options and the log the legs write to.
  */
-import type { Leg, MissionInput } from './missionTypes';
+import type { DistanceBasis, Leg, MissionInput } from './missionTypes';
+import { S_AIR, S_GROUND } from './missionState';
 import type { FlightLog } from './timeHistoryBuilder';
 
 export interface LegEnvironmentResolved {
@@ -60,3 +61,13 @@ export const BASE_MONOTONE_STEP = {
   altitude_m: 600,
   speed_m_s: 40,
 } as const;
+
+/** The mission's distance basis (MissionInput.distanceBasis, default 'ground'). */
+export function distanceBasis(input: MissionInput): DistanceBasis {
+  return input.distanceBasis ?? 'ground';
+}
+
+/** State index of the distance the mission's distances are measured in: S_GROUND over the ground, S_AIR in still air. */
+export function distanceIndex(input: MissionInput): typeof S_GROUND | typeof S_AIR {
+  return distanceBasis(input) === 'ground' ? S_GROUND : S_AIR;
+}

@@ -52,6 +52,9 @@ export function missionInputProblem(input: MissionInput): string | null {
     badMach('airframe.mmo', a.mmo),
     badRange('isaDev_K', input.isaDev_K, -MAX_ABS_ISA_DEV_K, MAX_ABS_ISA_DEV_K, 'K'),
     badNumber('wind_m_s', input.wind_m_s, 'finite'),
+    input.distanceBasis === undefined || input.distanceBasis === 'ground' || input.distanceBasis === 'stillAir'
+      ? null
+      : `distanceBasis ${JSON.stringify(input.distanceBasis)} is neither "ground" nor "stillAir".`,
     input.destinationElevation_m === undefined ? null : badAltitude('destinationElevation_m', input.destinationElevation_m),
   );
   if (airframe) return airframe;
@@ -133,5 +136,6 @@ export function missionInputProblem(input: MissionInput): string | null {
     alt === null ? null : badAltitude('reserves.alternate.cruiseAltitude_m', alt.cruiseAltitude_m),
     alt === null ? null : badMach('reserves.alternate.cruiseMach', alt.cruiseMach),
     alt === null ? null : badAltitude('reserves.alternate.elevation_m', alt.elevation_m),
+    alt === null || alt.wind_m_s === undefined ? null : badNumber('reserves.alternate.wind_m_s', alt.wind_m_s, 'finite'),
   );
 }

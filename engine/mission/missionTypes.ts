@@ -65,7 +65,7 @@ export type Leg = LegEnvironment & { readonly name: string } & (
         readonly altitude_m: number;
         readonly speed: CruiseSpeed;
         readonly profile: CruiseProfile;
-        /** Still-air distance of this leg (m); null = solved so the mission meets its range. At most one cruise leg is null. */
+        /** Distance of this leg (m) in the mission's distance basis (over the ground by default); null = solved so the mission meets its range. At most one cruise leg is null. */
         readonly distance_m: number | null;
       }
     | {
@@ -86,13 +86,25 @@ export type Leg = LegEnvironment & { readonly name: string } & (
 
 export type LegKind = Leg['kind'];
 
+/**
+ * What a mission's distances (the range, a cruise leg's set distance, the alternate's distance) measure:
+ * - 'ground': over the ground, as between two aerodromes; the air distance, the fuel and the time follow
+ *   each leg's wind (default);
+ * - 'stillAir': in still air, for design-range studies; the wind then changes only the ground distance
+ *   reported, and every result says so.
+ */
+export type DistanceBasis = 'ground' | 'stillAir';
+
 /** How the alternate is flown: climb, cruise, descent with the same engine and airframe. */
 export interface AlternateSpec {
+  /** Distance from the destination to the alternate (m) in the mission's distance basis. */
   readonly distance_m: number;
   readonly cruiseAltitude_m: number;
   readonly cruiseMach: number;
   /** Elevation of the alternate aerodrome (m); the final-reserve hold is 1,500 ft above it. */
   readonly elevation_m: number;
+  /** Along-track wind on the way to the alternate (m/s, + tailwind); absent = the mission's wind. */
+  readonly wind_m_s?: number;
 }
 
 export type ReservePolicy =
@@ -142,6 +154,8 @@ export interface MissionInput {
   /** Mission-wide ISA deviation (K) and along-track wind (m/s, + tailwind). */
   readonly isaDev_K: number;
   readonly wind_m_s: number;
+  /** What the distances measure; absent = 'ground'. */
+  readonly distanceBasis?: DistanceBasis;
   /**
    * Elevation of the destination aerodrome (m, pressure altitude); absent = 0 m (sea level). The approach
    * allowance ends the trip at it, taxi in is flown at it, the reserves' holds "1,500 ft above the destination"
@@ -156,8 +170,12 @@ export interface LegRow {
   readonly kind: LegKind | 'reserve';
   readonly startTime_s: number;
   readonly endTime_s: number;
+  /** Still-air distance (m) from block-out (reserve items: from the start of the reserves). */
   readonly startDistance_m: number;
   readonly endDistance_m: number;
+  /** Ground distance (m), counted like the still-air distance. */
+  readonly startGroundDistance_m: number;
+  readonly endGroundDistance_m: number;
   readonly startAltitude_m: number;
   readonly endAltitude_m: number;
   readonly startMass_kg: number;
@@ -234,6 +252,8 @@ export interface MissionResult {
   /** Still-air and ground distance of the trip (m). */
   readonly airDistance_m: number;
   readonly groundDistance_m: number;
+  /** What the range and the set distances measured (MissionInput.distanceBasis); 'stillAir' = a design-range study. */
+  readonly distanceBasis: DistanceBasis;
   readonly legs: readonly LegRow[];
   readonly history: TimeHistory;
   readonly cautions: readonly Caution[];

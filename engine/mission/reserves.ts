@@ -29,13 +29,13 @@ import type { AlternateSpec, LegRow, MissionInput, MissionStatus, ReserveBreakdo
 import type { RatingName } from '../propulsion/propulsionModel';
 import { destinationElevation } from './allowanceLegs';
 import { flyClimb } from './climbLeg';
-import { specificRangeAt } from './bestSpeeds';
+import { basisSpecificRange, specificRangeAt } from './bestSpeeds';
 import { cruiseMachOfMass, flyCruise } from './cruiseLeg';
 import { flyDescent, type DescentMode } from './descentLeg';
 import { flyHold } from './holdLeg';
 import { makeLevelSegment } from './levelFlight';
 import { flySegment, missionDomain } from './flySegment';
-import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
+import { BASE_STEP_S, distanceIndex, type LegTarget, type MissionContext } from './missionContext';
 import { FOOT_M } from '../units/unitTable';
 import { S_AIR, S_ALT, S_GROUND, S_MASS, S_TIME, type StateVector } from './missionState';
 import { appendCaution, createFlightLog } from './timeHistoryBuilder';
@@ -90,22 +90,23 @@ function flyAlternate(ctx: MissionContext, target: LegTarget, start: StateVector
   const climbSpec = climbSettings(input, alt);
   const descentSpec = descentSettings(input, alt);
   const top = Math.max(alt.cruiseAltitude_m, holdAltitude);
-  const startAir = start[S_AIR];
+  const k = distanceIndex(input);
+  const startAir = start[k];
   const climb = flyClimb(ctx, target, start, top, climbSpec.schedule, climbSpec.rating);
   if (climb.status !== 'ok') return climb;
   // Descent distance from a trial descent at the estimated top-of-descent mass (cruise fuel from the
   // specific range at the top of climb), so the alternate's still-air distance is met closely.
   const scratch: MissionContext = { ...ctx, log: createFlightLog(input.airframe, input.cautionSettings, true) };
-  const climbed = climb.state[S_AIR] - startAir;
+  const climbed = climb.state[k] - startAir;
   const trialDescent = (mass_kg: number) => {
     const from = Float64Array.from(climb.state);
     from[S_MASS] = mass_kg;
     const trial = flyDescent(scratch, target, from, holdAltitude, descentSpec.schedule, descentSpec.mode);
-    return { trial, distance_m: trial.state[S_AIR] - from[S_AIR] };
+    return { trial, distance_m: trial.state[k] - from[k] };
   };
   const first = trialDescent(climb.state[S_MASS]);
   if (first.trial.status !== 'ok') return first.trial;
-  const sr = specificRangeAt(input, top, alt.cruiseMach, climb.state[S_MASS], target.env.isaDev_K);
+  const sr = basisSpecificRange(input, specificRangeAt(input, top, alt.cruiseMach, climb.state[S_MASS], target.env.isaDev_K), top, alt.cruiseMach, target.env);
   const cruiseEstimate = Math.max(alt.distance_m - climbed - first.distance_m, 0);
   const second = sr > 0 ? trialDescent(climb.state[S_MASS] - cruiseEstimate / sr) : first;
   const descentDistance = second.trial.status === 'ok' ? second.distance_m : first.distance_m;
@@ -158,7 +159,7 @@ function flyNormalCruiseTime(ctx: MissionContext, target: LegTarget, start: Stat
       machOf: (_h, m) => machOf(m),
       ceiling: 'maxCruise',
       step_s: BASE_STEP_S.cruise * ctx.options.stepScale,
-      endAirDistance_m: null,
+      endDistance_m: null,
       endTime_s: state[S_TIME] + time_s,
     }),
     state,
@@ -184,6 +185,7 @@ export function flyReserves(ctx: MissionContext, trip: TripSummary): ReserveFlig
   const policy = input.reserves;
   const rows: LegRow[] = [];
   const missionEnv = { isaDev_K: input.isaDev_K, wind_m_s: input.wind_m_s };
+  const alternateEnv = { isaDev_K: input.isaDev_K, wind_m_s: policy.alternate?.wind_m_s ?? input.wind_m_s };
   const standardEnv = { isaDev_K: 0, wind_m_s: 0 };
   // The reserves start on the ground at the destination (MissionInput.destinationElevation_m, default 0 m).
   const destination = destinationElevation(input);
@@ -209,6 +211,8 @@ export function flyReserves(ctx: MissionContext, trip: TripSummary): ReserveFlig
       endTime_s: out.state[S_TIME],
       startDistance_m: start[S_AIR],
       endDistance_m: out.state[S_AIR],
+      startGroundDistance_m: start[S_GROUND],
+      endGroundDistance_m: out.state[S_GROUND],
       startAltitude_m: start[S_ALT],
       endAltitude_m: out.state[S_ALT],
       startMass_kg: start[S_MASS],
@@ -252,7 +256,7 @@ export function flyReserves(ctx: MissionContext, trip: TripSummary): ReserveFlig
 
   if (policy.alternate !== null) {
     const alternate = policy.alternate;
-    const flown = run('reserve: alternate', missionEnv, (t, s) => flyAlternate(ctx, t, s, alternate));
+    const flown = run('reserve: alternate', alternateEnv, (t, s) => flyAlternate(ctx, t, s, alternate));
     if (flown === null) return finish();
     alternateFuel = flown.fuel_kg;
   } else {
@@ -302,6 +306,8 @@ function reserveRow(index: number, name: string, start: StateVector, end: StateV
     endTime_s: end[S_TIME],
     startDistance_m: start[S_AIR],
     endDistance_m: end[S_AIR],
+    startGroundDistance_m: start[S_GROUND],
+    endGroundDistance_m: end[S_GROUND],
     startAltitude_m: start[S_ALT],
     endAltitude_m: end[S_ALT],
     startMass_kg: start[S_MASS],

@@ -9,29 +9,42 @@
  *   solved so the aircraft lands with exactly the reserve.
  * - payloadRange: the fuel (ramp mass) is iterated until the aircraft
  *   lands with exactly the reserve fuel on board (within 0.1 kg) and the
- *   solvable cruise leg's distance until the trip's total STILL-AIR distance
- *   equals the range (within 1 m). Wind changes the ground distance, not the
- *   range matched.
+ *   solvable cruise leg's distance until the trip's total distance equals
+ *   the range (within 1 m). The distances are GROUND distances (the wind
+ *   changes the air distance, the fuel and the time), or still-air ones in a
+ *   design-range study (MissionInput.distanceBasis 'stillAir', which every
+ *   result then says: distanceBasis and the still_air_distances caution).
  * - maxRange: take-off mass = min(MTOW, zero-fuel mass + fuel capacity - taxi-out
  *   fuel); the solvable cruise leg is stretched until the fuel at landing equals the
- *   reserve; the range is the trip's still-air distance.
+ *   reserve; the range is the trip's distance in the mission's basis.
  * Block fuel is the fuel burned from block-out to block-in (taxi out, trip,
  * taxi in); trip fuel is take-off to landing; the reserve is carried.
  */
 import type { Caution } from '../cautions/caution';
+import { CAUTION_CATALOGUE } from '../cautions/cautionCatalogue';
 import { checkFuelCapacity, checkMlw, checkMtow, checkMzfw, checkReserve } from '../cautions/checks';
 import { allowanceFuel } from './allowanceLegs';
-import { specificRangeAt } from './bestSpeeds';
+import { basisSpecificRange, specificRangeAt } from './bestSpeeds';
 import { cruiseMach } from './cruiseLeg';
 import { evaluateMission, iterateDistance, iterateRampMass, type IterationOutcome, type MissionEvaluation } from './fuelIteration';
 import { solvableLegIndex, tripBounds } from './flyTrip';
-import { legEnvironment, type FlightOptions, type LegTarget, type MissionContext } from './missionContext';
+import { distanceBasis, legEnvironment, type FlightOptions, type LegTarget, type MissionContext } from './missionContext';
 import { missionInputProblem } from './missionInputCheck';
 import { S_AIR, S_GROUND, S_MASS, S_TIME } from './missionState';
 import type { MissionInput, MissionResult, MissionStatus, ReserveBreakdown } from './missionTypes';
 import { appendCaution, buildTimeHistory, createFlightLog } from './timeHistoryBuilder';
 
 const NO_RESERVES: ReserveBreakdown = { contingency_kg: 0, alternate_kg: 0, finalReserve_kg: 0, extra_kg: 0, total_kg: 0 };
+
+/** The info caution every still-air (design-range) result carries. */
+function stillAirCaution(input: MissionInput): Caution {
+  return {
+    id: 'still_air_distances',
+    severity: CAUTION_CATALOGUE.still_air_distances.severity,
+    message: `Still-air distances (design-range study): the range, set cruise distances and the alternate are flown in still air; the wind (mission ${input.wind_m_s.toFixed(1)} m/s) changes only the ground distance, not the fuel or the time.`,
+    value: input.wind_m_s,
+  };
+}
 
 /** Fuel (kg) of the taxi-out legs that precede take-off. */
 export function taxiOutFuel(input: MissionInput): number {
@@ -62,6 +75,7 @@ function emptyResult(input: MissionInput, status: MissionStatus, message: string
     payload_kg: Number.isFinite(input.solve?.payload_kg) ? input.solve.payload_kg : 0,
     airDistance_m: 0,
     groundDistance_m: 0,
+    distanceBasis: distanceBasis(input),
     legs: [],
     history: buildTimeHistory(log),
     cautions: [],
@@ -81,9 +95,11 @@ function breguetRampGuess(input: MissionInput, zfw_kg: number, taxi_kg: number, 
   const fallback = 1.1 * zfw_kg + taxi_kg;
   const leg = input.legs[solvableLegIndex(input)];
   if (!leg || leg.kind !== 'cruise') return fallback;
-  const dev = legEnvironment(input, leg).isaDev_K;
+  const env = legEnvironment(input, leg);
+  const dev = env.isaDev_K;
   const m = 1.2 * zfw_kg;
-  const sr = specificRangeAt(input, leg.altitude_m, cruiseMach(input, leg.speed, leg.altitude_m, m, dev), m, dev);
+  const mach = cruiseMach(input, leg.speed, leg.altitude_m, m, dev);
+  const sr = basisSpecificRange(input, specificRangeAt(input, leg.altitude_m, mach, m, dev), leg.altitude_m, mach, env);
   if (!(sr > 0)) return fallback;
   const exponent = Math.min(range_m / (sr * m), 2);
   return 1.05 * zfw_kg * Math.exp(exponent) + taxi_kg;
@@ -249,6 +265,8 @@ function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult
     );
   }
 
+  if (distanceBasis(input) === 'stillAir') appendCaution(ctx.log, at(0, legName(0)), stillAirCaution(input), 0);
+
   const cautions: Caution[] = [...ctx.log.cautions.values()].sort((a, b) => (a.time_s ?? 0) - (b.time_s ?? 0));
   return {
     status,
@@ -266,6 +284,7 @@ function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult
     payload_kg: payload,
     airDistance_m: trip.end[S_AIR],
     groundDistance_m: trip.end[S_GROUND],
+    distanceBasis: distanceBasis(input),
     legs: [...trip.rows, ...reserves.rows],
     history: buildTimeHistory(ctx.log),
     cautions,

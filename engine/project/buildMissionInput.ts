@@ -6,7 +6,7 @@
  */
 import { makeAeroModel } from '../aero/dragPolar';
 import { err, ok, type Result } from '../core/result';
-import type { AlternateSpec, Leg, MissionInput, ReservePolicy, SolveMode } from '../mission/missionTypes';
+import type { AlternateSpec, DistanceBasis, Leg, MissionInput, ReservePolicy, SolveMode } from '../mission/missionTypes';
 import type { EngineDeck } from '../propulsion/engineDeck';
 import { inletDragIncrementCd0, inletWeight, type InletDesign } from '../propulsion/inletDesign';
 import { validateInstallation } from '../propulsion/installationCorrections';
@@ -28,6 +28,7 @@ export interface MissionOverrides {
   readonly wind_m_s?: number;
   readonly solve?: SolveMode;
   readonly reserves?: ReservePolicy;
+  readonly distanceBasis?: DistanceBasis;
 }
 
 export interface BuildOptions {
@@ -117,7 +118,14 @@ function scheduleOf(s: { lowCas: number; lowAltitudeLimit: number; cas: number; 
 type ProjectReserves = Project['mission']['reserves'];
 
 function alternateOf(a: ProjectReserves['alternate']): AlternateSpec | null {
-  return a === null ? null : { distance_m: a.distance, cruiseAltitude_m: a.cruiseAltitude, cruiseMach: a.cruiseMach, elevation_m: a.elevation };
+  if (a === null) return null;
+  return {
+    distance_m: a.distance,
+    cruiseAltitude_m: a.cruiseAltitude,
+    cruiseMach: a.cruiseMach,
+    elevation_m: a.elevation,
+    ...(a.wind === undefined ? {} : { wind_m_s: a.wind }),
+  };
 }
 
 /** The project's reserve policy in SI. */
@@ -211,5 +219,6 @@ export function buildMissionInput(
     isaDev_K: overrides.isaDev_K ?? project.mission.isaDeviation,
     wind_m_s: overrides.wind_m_s ?? project.mission.wind,
     destinationElevation_m: project.mission.destinationElevation ?? 0,
+    distanceBasis: overrides.distanceBasis ?? project.mission.distanceBasis,
   });
 }

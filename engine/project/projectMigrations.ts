@@ -6,7 +6,10 @@
  *
  * Version 1: weights flat in `airframe` (oew, mzfw, mtow, mlw, maxFuel) and one
  *   inlet under `engine.inlet`, no inlet list.
- * Version 2 (current): `airframe.weights`, `inlets` list and `activeInlet`.
+ * Version 2: `airframe.weights`, `inlets` list and `activeInlet`; the range, set
+ *   cruise distances and the alternate's distance were still-air distances.
+ * Version 3 (current): `mission.distanceBasis` ("ground" by default, the wind
+ *   changes fuel and time); the alternate's own `wind` (optional).
  */
 import { err, ok, type Result } from '../core/result';
 import { makeIssue, showValue, type ProjectIssue } from './projectIssue';
@@ -49,9 +52,32 @@ export function migrateV1toV2(doc: JsonObject): JsonObject {
   return { ...rest, version: 2, airframe: newAirframe, engine: newEngine, inlets, activeInlet };
 }
 
+/** True when a wind field of a version-2 file is absent or reads as zero (a bare 0, or "0" with any unit). */
+function windIsZero(value: unknown): boolean {
+  if (value === undefined || value === null) return true;
+  if (typeof value === 'number') return value === 0;
+  if (typeof value !== 'string') return false;
+  const number = /^\s*([+-]?[0-9.]+(?:e[+-]?[0-9]+)?)/i.exec(value);
+  return number !== null && Number(number[1]) === 0;
+}
+
+/**
+ * Version 2 -> 3: a version-2 file's distances were still-air distances. Where any wind is set (the mission's,
+ * a leg's) the file keeps that meaning with `mission.distanceBasis: "stillAir"`; without wind the two bases fly
+ * the same mission, so the file takes the new default ("ground").
+ */
+export function migrateV2toV3(doc: JsonObject): JsonObject {
+  const { mission, ...rest } = doc;
+  if (!isObject(mission)) return { ...rest, version: 3, mission };
+  const legs = Array.isArray(mission.legs) ? mission.legs : [];
+  const windy = !windIsZero(mission.wind) || legs.some((l) => isObject(l) && !windIsZero(l.wind));
+  return { ...rest, version: 3, mission: windy ? { ...mission, distanceBasis: 'stillAir' } : mission };
+}
+
 /** Steps by the version they start from. */
 export const MIGRATIONS: Readonly<Record<number, (doc: JsonObject) => JsonObject>> = {
   1: migrateV1toV2,
+  2: migrateV2toV3,
 };
 
 export const OLDEST_VERSION = 1;

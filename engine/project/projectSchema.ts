@@ -1,5 +1,5 @@
 /**
- * The `*.blockwise.json` project file, current layout (version 2), as a zod 4
+ * The `*.blockwise.json` project file, current layout (version 3), as a zod 4
  * schema. Every physical field is a `quantity(dimension)`: a string with a
  * unit or a bare SI number; the parsed `Project` holds SI numbers under the
  * same field names (a field's unit is the SI unit of its dimension, see
@@ -10,7 +10,7 @@ import { quantity, ratio } from './quantityField';
 import { uncertaintySchema } from './uncertaintySchema';
 
 export const PROJECT_FORMAT = 'blockwise-project';
-export const CURRENT_VERSION = 2;
+export const CURRENT_VERSION = 3;
 
 const FT = 0.3048;
 /**
@@ -241,7 +241,7 @@ export const legSchema = z.discriminatedUnion('kind', [
         z.strictObject({ kind: z.literal('cruiseClimb'), maxAltitude: altitude() }),
       ])
       .default({ kind: 'constantAltitude' }),
-    /** Still-air distance, or "solve" for the leg whose distance meets the mission range. */
+    /** Distance (over the ground, or in still air when mission.distanceBasis is "stillAir"), or "solve" for the leg whose distance meets the mission range. */
     distance: z.union([z.literal('solve'), nonNegativeQuantity('length', 'a length >= 0')]),
   }),
   z.strictObject({
@@ -282,6 +282,8 @@ export const alternateSchema = z.strictObject({
   cruiseAltitude: altitude(),
   cruiseMach: subsonicMach(),
   elevation: altitude().default(0),
+  /** Along-track wind on the way to the alternate (+ tailwind); absent = the mission's wind. */
+  wind: quantity('speed', { min: -150, max: 150, what: 'a wind from -150 m/s to +150 m/s' }).optional(),
 });
 
 export const reservesSchema = z.discriminatedUnion('preset', [
@@ -331,6 +333,11 @@ export const missionSchema = z.strictObject({
   wind: quantity('speed', { min: -150, max: 150, what: 'a wind from -150 m/s to +150 m/s' }).default(0),
   /** Elevation of the destination aerodrome; absent = 0 ft. The last descent ends 1,500 ft above it (common practice). */
   destinationElevation: altitude().optional(),
+  /**
+   * What the range, set cruise distances and the alternate's distance measure: "ground" (between aerodromes; the
+   * wind changes air distance, fuel and time) or "stillAir" (a design-range study; every result says so).
+   */
+  distanceBasis: z.enum(['ground', 'stillAir']).default('ground'),
   legs: z.array(legSchema).min(1, { message: 'expected at least one leg' }),
   reserves: reservesSchema,
   solve: solveSchema,

@@ -96,7 +96,7 @@ export function LegFields(props: { readonly leg: ProjectLeg; readonly n: number 
           {leg.profile.kind === 'stepClimb' ? <QuantityField label="Step" path={[...p, 'profile', 'step']} unit="altitude" testId={id('step')} /> : null}
           {leg.profile.kind !== 'constantAltitude' ? <QuantityField label="Highest altitude" path={[...p, 'profile', 'maxAltitude']} unit="altitude" testId={id('max-altitude')} /> : null}
           <Toggle label="Distance solved to meet the mission range" testId={id('solve-distance')} checked={leg.distance === 'solve'} onChange={(c) => set(['distance'], c ? 'solve' : 500 * 1852, 'distance')} />
-          {leg.distance !== 'solve' ? <QuantityField label="Still-air distance" path={[...p, 'distance']} unit="distance" testId={id('distance')} /> : null}
+          {leg.distance !== 'solve' ? <QuantityField label="Distance" path={[...p, 'distance']} unit="distance" testId={id('distance')} /> : null}
         </>
       );
     case 'descent':

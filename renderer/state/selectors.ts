@@ -64,6 +64,8 @@ export function selectHeadline(result: MissionResult, units: UnitSystem): readon
     { id: 'tow', label: 'Take-off mass', text: formatQuantity(result.takeoffMass_kg, 'mass', units) },
     { id: 'lw', label: 'Landing mass', text: formatQuantity(result.landingMass_kg, 'mass', units) },
     { id: 'zfw', label: 'Zero-fuel mass', text: formatQuantity(result.zeroFuelMass_kg, 'mass', units) },
-    { id: 'distance', label: 'Still-air distance', text: formatQuantity(result.airDistance_m, 'distance', units) },
+    result.distanceBasis === 'ground'
+      ? { id: 'distance', label: 'Ground distance', text: formatQuantity(result.groundDistance_m, 'distance', units) }
+      : { id: 'distance', label: 'Still-air distance (design-range study)', text: formatQuantity(result.airDistance_m, 'distance', units) },
   ];
 }

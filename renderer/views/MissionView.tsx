@@ -93,7 +93,7 @@ function Solve() {
         }
       />
       <QuantityField label="Payload" path={[...p, 'payload']} unit="mass" testId="field-payload" />
-      {s.mode === 'payloadRange' ? <QuantityField label="Range (still air)" path={[...p, 'range']} unit="distance" testId="field-range" /> : null}
+      {s.mode === 'payloadRange' ? <QuantityField label="Range" path={[...p, 'range']} unit="distance" testId="field-range" /> : null}
       {s.mode === 'takeoffWeight' ? <QuantityField label="Take-off mass" path={[...p, 'takeoffWeight']} unit="mass" testId="field-tow" /> : null}
     </fieldset>
   );

@@ -83,8 +83,9 @@ export function makeBreguetSolver(counter?: BreguetCounter): (input: MissionInpu
       payload_kg: solve.payload_kg,
       airDistance_m: f.range,
       groundDistance_m: f.range,
+      distanceBasis: 'ground',
       legs: [
-        { index: 0, name: 'cruise', kind: 'cruise', startTime_s: 0, endTime_s: 1, startDistance_m: 0, endDistance_m: f.range, startAltitude_m: BREGUET_ALTITUDE_M, endAltitude_m: BREGUET_ALTITUDE_M, startMass_kg: f.w0, endMass_kg: f.w1, fuel_kg: trip },
+        { index: 0, name: 'cruise', kind: 'cruise', startTime_s: 0, endTime_s: 1, startDistance_m: 0, endDistance_m: f.range, startGroundDistance_m: 0, endGroundDistance_m: f.range, startAltitude_m: BREGUET_ALTITUDE_M, endAltitude_m: BREGUET_ALTITUDE_M, startMass_kg: f.w0, endMass_kg: f.w1, fuel_kg: trip },
       ],
       history: {
         time_s: empty, distance_m: empty, altitude_m: empty, mach: empty, cas_m_s: empty, tas_m_s: empty, mass_kg: empty,

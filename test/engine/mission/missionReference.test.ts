@@ -46,6 +46,8 @@ describe('solveMission against the scipy solve_ivp reference', () => {
           wind_m_s: ref.wind_m_s,
         }),
         destinationElevation_m: ref.destinationElevation_m,
+        // The reference integrates a set still-air cruise distance (test/reference/missionReference.py).
+        distanceBasis: 'stillAir',
       });
       expect(r.status).toBe('ok');
       const src = 'test/reference/missionReference.py (scipy solve_ivp)';

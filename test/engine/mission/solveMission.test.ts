@@ -193,15 +193,36 @@ describe('solveMission', () => {
     expect(r.reserves.extra_kg).toBe(200);
   });
 
-  it('solveMission applies the wind to ground distance only', () => {
-    const still = solveMission(missionInput({ legs: cruiseOnly(1_000_000), solve: { kind: 'takeoffWeight', takeoffMass_kg: 70000, payload_kg: 10000 } }));
-    const windy = solveMission(
-      missionInput({ legs: cruiseOnly(1_000_000), solve: { kind: 'takeoffWeight', takeoffMass_kg: 70000, payload_kg: 10000 }, wind_m_s: -30 }),
-    );
+  it('solveMission in a still-air study applies the wind to the ground distance only, and says so', () => {
+    const solve = { kind: 'takeoffWeight', takeoffMass_kg: 70000, payload_kg: 10000 } as const;
+    const still = solveMission({ ...missionInput({ legs: cruiseOnly(1_000_000), solve }), distanceBasis: 'stillAir' });
+    const windy = solveMission({ ...missionInput({ legs: cruiseOnly(1_000_000), solve, wind_m_s: -30 }), distanceBasis: 'stillAir' });
     expectClose(windy.airDistance_m, still.airDistance_m, { abs: 1e-3 }, 'still-air distance unchanged by wind');
     // ground = air + wind * time (definition of an along-track wind).
     expectClose(windy.groundDistance_m, windy.airDistance_m - 30 * windy.tripTime_s, { rel: 1e-9 }, 'ground distance = air distance + wind x time');
     expectClose(windy.tripFuel_kg, still.tripFuel_kg, { rel: 1e-9 }, 'fuel is flown in the air mass');
+    expect(windy.distanceBasis).toBe('stillAir');
+    expect(windy.cautions.some((c) => c.id === 'still_air_distances')).toBe(true);
+  });
+
+  it('solveMission flies a set cruise distance over the ground: Breguet range with the ground speed', () => {
+    // Constant L/D, TSFC and TAS in a steady along-track wind w: dx/dt = V + w and dm/dt = -c m g / (L/D), so
+    // x = ((V + w) / (c g)) (L/D) ln(W0/W1): the Breguet range equation with the ground speed (closed form;
+    // Anderson, Aircraft Performance and Design, section 5.13, with V replaced by V + w).
+    const R = 2_000_000;
+    const w0 = 70000;
+    const V = 0.8 * A_11KM;
+    const solve = { kind: 'takeoffWeight', takeoffMass_kg: w0, payload_kg: 10000 } as const;
+    for (const wind of [-50, 0, 40]) {
+      const r = solveMission(missionInput({ legs: cruiseOnly(R), solve, aero: breguetAero, propulsion: breguetEngines, wind_m_s: wind }));
+      expect(r.status).toBe('ok');
+      expect(r.distanceBasis).toBe('ground');
+      const w1 = w0 * Math.exp(-(R * TSFC * G0) / ((V + wind) * LD));
+      expectClose(r.tripFuel_kg, w0 - w1, { rel: 1e-7 }, `Breguet range with ground speed V + w, w = ${wind} m/s`);
+      expectClose(r.groundDistance_m, R, { abs: 1e-3 }, 'the set distance is a ground distance');
+      expectClose(r.airDistance_m, (R * V) / (V + wind), { rel: 1e-9 }, 'air distance = ground distance x V / (V + w)');
+      expectClose(r.tripTime_s, R / (V + wind), { rel: 1e-9 }, 'time = ground distance / ground speed');
+    }
   });
 
   it('solveMission takes the leg wind and ISA deviation over the mission ones', () => {
@@ -209,11 +230,14 @@ describe('solveMission', () => {
     const solve = { kind: 'takeoffWeight', takeoffMass_kg: 70000, payload_kg: 10000 } as const;
     const own = solveMission(missionInput({ legs: leg({ wind_m_s: 25, isaDev_K: 12 }), solve, wind_m_s: -40, isaDev_K: -5 }));
     const mission = solveMission(missionInput({ legs: leg({}), solve, wind_m_s: 25, isaDev_K: 12 }));
-    expectClose(own.groundDistance_m, mission.groundDistance_m, { rel: 1e-12 }, 'leg wind wins');
+    expectClose(own.airDistance_m, mission.airDistance_m, { rel: 1e-12 }, 'leg wind wins');
     expectClose(own.tripFuel_kg, mission.tripFuel_kg, { rel: 1e-12 }, 'leg ISA deviation wins');
-    // ISA+12 at constant Mach: TAS scales with sqrt(T), so the time for 1,000 km falls (definition of TAS = M a).
+    // ISA+12 at constant Mach: TAS scales with sqrt(T) (definition of TAS = M a); 1,000 km over the ground take
+    // 1,000 km / (TAS + wind).
     const isa = solveMission(missionInput({ legs: leg({}), solve }));
-    expectClose(isa.tripTime_s / own.tripTime_s, Math.sqrt((216.65 + 12) / 216.65), { rel: 1e-9 }, 'TAS = M sqrt(kappa R T)');
+    const vIsa = 0.8 * A_11KM;
+    const vHot = vIsa * Math.sqrt((216.65 + 12) / 216.65);
+    expectClose(isa.tripTime_s / own.tripTime_s, (vHot + 25) / vIsa, { rel: 1e-9 }, 'TAS = M sqrt(kappa R T), time = distance / ground speed');
   });
 
   it('solveMission reports that no fuel load can close the mission instead of returning a number', () => {

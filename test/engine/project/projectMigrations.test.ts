@@ -1,11 +1,12 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { CURRENT_VERSION } from '../../../engine/project/projectSchema';
-import { migrateProject, migrateV1toV2, MIGRATIONS, OLDEST_VERSION, V1_INLET_DEFAULT_NAME } from '../../../engine/project/projectMigrations';
+import { migrateProject, migrateV1toV2, migrateV2toV3, MIGRATIONS, OLDEST_VERSION, V1_INLET_DEFAULT_NAME } from '../../../engine/project/projectMigrations';
 import { parseProject } from '../../../engine/project/parseProject';
 
 const v1Text = readFileSync(new URL('../../../fixtures/old-versions/v1.blockwise.json', import.meta.url), 'utf8');
 const demoText = readFileSync(new URL('../../../fixtures/demo/demo.blockwise.json', import.meta.url), 'utf8');
+const v2Text = readFileSync(new URL('../../../fixtures/old-versions/v2.blockwise.json', import.meta.url), 'utf8');
 
 describe('migrateV1toV2', () => {
   it('migrateV1toV2 moves flat weights into airframe.weights with their new names', () => {
@@ -40,6 +41,32 @@ describe('migrateV1toV2', () => {
     const input = { version: 1, airframe: { oew: 1 }, engine: { inlet: { name: 'a' } } };
     const copy = structuredClone(input);
     migrateV1toV2(input);
+    expect(input).toEqual(copy);
+  });
+});
+
+describe('migrateV2toV3', () => {
+  it('migrateV2toV3 keeps a windy version-2 mission a still-air study (what version 2 meant by its distances)', () => {
+    for (const wind of ['-40 kt', 12, '+5 m/s']) {
+      const out = migrateV2toV3({ version: 2, mission: { wind, legs: [] } });
+      expect(out.version).toBe(3);
+      expect((out.mission as Record<string, unknown>).distanceBasis, String(wind)).toBe('stillAir');
+    }
+    const legWind = migrateV2toV3({ version: 2, mission: { wind: '0 kt', legs: [{ kind: 'cruise', wind: '-20 kt' }] } });
+    expect((legWind.mission as Record<string, unknown>).distanceBasis).toBe('stillAir');
+  });
+
+  it('migrateV2toV3 gives a windless version-2 mission the new default (both bases fly it the same)', () => {
+    for (const wind of [undefined, 0, '0 kt', '0.0 m/s']) {
+      const out = migrateV2toV3({ version: 2, mission: { wind, legs: [{ kind: 'cruise' }] } });
+      expect((out.mission as Record<string, unknown>).distanceBasis, String(wind)).toBeUndefined();
+    }
+  });
+
+  it('migrateV2toV3 does not modify its input', () => {
+    const input = { version: 2, mission: { wind: '-10 kt', legs: [] } };
+    const copy = structuredClone(input);
+    migrateV2toV3(input);
     expect(input).toEqual(copy);
   });
 });
@@ -90,5 +117,21 @@ describe('version-1 sample (fixtures/old-versions/v1.blockwise.json)', () => {
     expect(v1.value.inlets).toHaveLength(1);
     expect(v1.value.inlets[0]).toEqual(demo.value.inlets[1]);
     expect(v1.value.activeInlet).toBe(demo.value.inlets[1]!.name);
+  });
+});
+
+describe('version-2 sample (fixtures/old-versions/v2.blockwise.json)', () => {
+  it('parseProject migrates the windy version-2 sample to a still-air study and keeps the rest', () => {
+    const v2 = parseProject(v2Text, 'v2.blockwise.json');
+    const demo = parseProject(demoText, 'demo.blockwise.json');
+    expect(v2.ok).toBe(true);
+    expect(demo.ok).toBe(true);
+    if (!v2.ok || !demo.ok) return;
+    expect(v2.value.version).toBe(CURRENT_VERSION);
+    expect(v2.value.mission.distanceBasis).toBe('stillAir');
+    expect(demo.value.mission.distanceBasis).toBe('ground');
+    // 40 kt = 40 x 1852 / 3600 m/s (NIST SP 811).
+    expect(v2.value.mission.wind).toBeCloseTo((-40 * 1852) / 3600, 9);
+    expect(v2.value.mission.legs).toEqual(demo.value.mission.legs);
   });
 });

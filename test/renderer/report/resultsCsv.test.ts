@@ -54,6 +54,8 @@ function result(): MissionResult {
     endTime_s: 60,
     startDistance_m: 0,
     endDistance_m: 1000,
+    startGroundDistance_m: 0,
+    endGroundDistance_m: 1000,
     startAltitude_m: 0,
     endAltitude_m: 100,
     startMass_kg: 9000,
