@@ -46,9 +46,9 @@ export function legEnvironment(input: MissionInput, leg: Leg | null): LegEnviron
 export const BASE_STEP_S = {
   climb: 60,
   speedChange: 10,
-  cruise: 900,
+  cruise: 3600,
   descent: 60,
-  hold: 600,
+  hold: 1800,
 } as const;
 
 /**
@@ -58,7 +58,7 @@ export const BASE_STEP_S = {
  * (monotoneStepper.ts); shown converged in test/engine/mission/solveMission.test.ts.
  */
 export const BASE_MONOTONE_STEP = {
-  altitude_m: 600,
+  altitude_m: 1200,
   speed_m_s: 40,
 } as const;
 

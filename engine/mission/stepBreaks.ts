@@ -8,10 +8,45 @@
 import { transitionAltitude } from './missionAtmosphere';
 import type { MissionInput } from './missionTypes';
 
+/**
+ * Break Machs and the CAS/Mach break altitudes of each held CAS, per pair of models: a pure function of the
+ * (readonly) models, remembered because every pass of the fuel iteration flies the same schedules.
+ */
+interface ModelBreaks {
+  readonly machs: readonly number[];
+  readonly casAltitudes: Map<number, readonly number[]>;
+}
+const memo = new WeakMap<object, WeakMap<object, ModelBreaks>>();
+
+function modelBreaks(input: MissionInput): ModelBreaks {
+  let byAero = memo.get(input.propulsion);
+  if (byAero === undefined) {
+    byAero = new WeakMap();
+    memo.set(input.propulsion, byAero);
+  }
+  let found = byAero.get(input.aero);
+  if (found === undefined) {
+    const machs = [...(input.propulsion.slopeBreaks?.machs ?? []), ...(input.aero.slopeBreakMachs ?? [])].filter((m) => m > 0);
+    found = { machs: [...new Set(machs)].sort((a, b) => a - b), casAltitudes: new Map() };
+    byAero.set(input.aero, found);
+  }
+  return found;
+}
+
 /** The models' break Machs (-), positive, ascending, distinct. */
-export function breakMachs(input: MissionInput): number[] {
-  const machs = [...(input.propulsion.slopeBreaks?.machs ?? []), ...(input.aero.slopeBreakMachs ?? [])].filter((m) => m > 0);
-  return [...new Set(machs)].sort((a, b) => a - b);
+export function breakMachs(input: MissionInput): readonly number[] {
+  return modelBreaks(input).machs;
+}
+
+/** Pressure altitudes (m) where a held CAS (m/s) reaches each break Mach (finite ones only). */
+function casBreakAltitudes(input: MissionInput, cas_m_s: number): readonly number[] {
+  const breaks = modelBreaks(input);
+  let found = breaks.casAltitudes.get(cas_m_s);
+  if (found === undefined) {
+    found = breaks.machs.map((mach) => transitionAltitude(cas_m_s, mach)).filter((h) => Number.isFinite(h));
+    breaks.casAltitudes.set(cas_m_s, found);
+  }
+  return found;
 }
 
 /**
@@ -26,12 +61,7 @@ export function pathBreakAltitudes(input: MissionInput, held: 'cas' | 'mach', va
   const hi = Math.max(from_m, to_m);
   const out: number[] = [];
   for (const h of input.propulsion.slopeBreaks?.altitudes_m ?? []) if (h > lo && h < hi) out.push(h);
-  if (held === 'cas') {
-    for (const mach of breakMachs(input)) {
-      const h = transitionAltitude(value, mach);
-      if (Number.isFinite(h) && h > lo && h < hi) out.push(h);
-    }
-  }
+  if (held === 'cas') for (const h of casBreakAltitudes(input, value)) if (h > lo && h < hi) out.push(h);
   return out;
 }
 
