@@ -3,6 +3,7 @@ import tseslint from 'typescript-eslint';
 
 // The folders are the dependency graph (STYLE rule 1):
 //   renderer -> engine; electron -> engine; cli -> engine;
+//   cli, electron -> hostio (Node-only file and terminal helpers) -> engine;
 //   renderer -> electron only for the bridge's *types*; engine -> nothing of ours.
 // Do not relax these rules; move the code instead.
 const nodeBuiltins = ['node:*', 'fs', 'path', 'os', 'child_process', 'url', 'util', 'worker_threads'];
@@ -23,7 +24,7 @@ export default tseslint.config(
         'error',
         {
           patterns: [
-            { group: ['**/renderer/**', '**/electron/**', '**/cli/**', '**/test/**', '**/scripts/**'], message: 'engine/ depends on nothing of ours above it.' },
+            { group: ['**/renderer/**', '**/electron/**', '**/cli/**', '**/hostio/**', '**/test/**', '**/scripts/**'], message: 'engine/ depends on nothing of ours above it.' },
             { group: nodeBuiltins, message: 'engine/ is pure: file and process access belong to its callers.' },
             { group: ['react', 'react-dom', 'recharts', 'immer', 'electron'], message: 'engine/ uses zod at most.' },
           ],
@@ -42,9 +43,19 @@ export default tseslint.config(
           patterns: [
             { group: ['**/electron/**'], message: 'renderer/ may import electron/ only for the bridge types.', allowTypeImports: true },
             { group: ['**/cli/**'], message: 'renderer/ does not depend on the CLI.' },
+            { group: ['**/hostio/**'], message: 'hostio/ is Node-only; the renderer runs in a sandboxed page.' },
             { group: nodeBuiltins, message: 'renderer/ runs in a sandboxed page.' },
           ],
         },
+      ],
+    },
+  },
+  {
+    files: ['hostio/**/*.ts'],
+    rules: {
+      '@typescript-eslint/no-restricted-imports': [
+        'error',
+        { patterns: [{ group: ['**/renderer/**', '**/electron/**', '**/cli/**'], message: 'hostio/ serves the CLI and the shell; it imports neither (engine/ at most).' }] },
       ],
     },
   },

@@ -1,4 +1,6 @@
 import { SAFETY_NOTICE } from '../engine/core/notice';
+import { escapeControlCharacters } from '../hostio/terminalText';
+import { EXIT_INTERNAL, EXIT_OK, EXIT_USAGE } from './exitCodes';
 import { parseVerbArgs, UsageError, type CliIo, type Verb } from './verb';
 import { VERB_CATALOGUE } from './verbs/catalogue';
 
@@ -18,38 +20,79 @@ function overview(): string {
   ].join('\n');
 }
 
-/** Runs the command line in-process and returns the exit code. */
-export async function runCli(argv: readonly string[], io: CliIo): Promise<number> {
+/** The sub-verbs of a verb group ("deck" -> "deck check", "deck at"), from the verbs and the catalogue. */
+function subVerbs(group: string, names: readonly { readonly name: string; readonly summary: string }[]): string[] {
+  return names.filter((v) => v.name.startsWith(`${group} `)).map((v) => `${v.name.slice(group.length + 1)} (${v.summary})`);
+}
+
+/** What was being done, for the one line of an internal error: the command line (cut to 160 characters). */
+function doing(argv: readonly string[]): string {
+  const line = ['blockwise', ...argv].join(' ');
+  return `running "${line.length > 160 ? `${line.slice(0, 157)}...` : line}"`;
+}
+
+/** The one line printed for a fault inside Blockwise (never a stack trace). */
+export function internalErrorLine(what: string, e: unknown): string {
+  const reason = (e instanceof Error ? e.message : String(e)).split('\n')[0]!.slice(0, 300);
+  return `blockwise: internal error while ${what}: ${reason}. This is a fault in Blockwise; please report it with the command line and the files (exit ${EXIT_INTERNAL}).\n`;
+}
+
+/** An io whose every text has its control characters escaped (names and values from files reach the terminal). */
+function escapedIo(io: CliIo): CliIo {
+  return { ...io, out: (t) => io.out(escapeControlCharacters(t)), err: (t) => io.err(escapeControlCharacters(t)) };
+}
+
+/**
+ * Runs the command line in-process and returns the exit code (cli/exitCodes.ts). Never throws: a bad command
+ * line is one line on stderr (exit 2), and a fault inside Blockwise one line saying what was being done (exit 70).
+ */
+export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<number> {
+  const io = escapedIo(rawIo);
   const [name, ...rest] = argv;
   if (name === undefined || name === '--help' || name === '-h' || name === 'help') {
     io.out(overview());
-    return name === undefined ? 2 : 0;
+    return name === undefined ? EXIT_USAGE : EXIT_OK;
   }
-  // The verbs (and the engine behind them) load only when one runs, so the
-  // overview above prints at once.
-  const { verbs } = await import('./verbs/index');
-  // Verbs with sub-verbs (e.g. `deck check`) are registered as "deck check".
-  const sub = rest[0];
-  const verb: Verb | undefined =
-    (sub !== undefined && verbs.find((v) => v.name === `${name} ${sub}`)) ||
-    verbs.find((v) => v.name === name);
-  if (!verb) {
-    io.err(`blockwise: unknown verb "${name}"; run "blockwise --help" for the list\n`);
-    return 2;
-  }
-  const verbArgv = verb.name.includes(' ') ? rest.slice(1) : rest;
   try {
-    const parsed = parseVerbArgs(verb, verbArgv);
-    if (parsed.values.help === true) {
-      io.out(`${verb.help.trimEnd()}\n`);
-      return 0;
+    // The verbs (and the engine behind them) load only when one runs, so the
+    // overview above prints at once.
+    const { verbs } = await import('./verbs/index');
+    // Verbs with sub-verbs (e.g. `deck check`) are registered as "deck check".
+    const sub = rest[0];
+    const verb: Verb | undefined =
+      (sub !== undefined && verbs.find((v) => v.name === `${name} ${sub}`)) ||
+      verbs.find((v) => v.name === name);
+    if (!verb) {
+      const subs = subVerbs(name, verbs);
+      if (subs.length > 0) {
+        if (sub === '--help' || sub === '-h') {
+          io.out(`blockwise ${name} <sub-verb> ...: ${subs.join('; ')}\n`);
+          return EXIT_OK;
+        }
+        const given = sub === undefined || sub.startsWith('-') ? '' : `${JSON.stringify(sub)} is not one of its sub-verbs; `;
+        io.err(`blockwise ${name}: ${given}give a sub-verb: ${subs.join('; ')}\n`);
+        return EXIT_USAGE;
+      }
+      io.err(`blockwise: unknown verb ${JSON.stringify(name)}; run "blockwise --help" for the list\n`);
+      return EXIT_USAGE;
     }
-    return await verb.run(parsed.values, parsed.positionals, io);
+    const verbArgv = verb.name.includes(' ') ? rest.slice(1) : rest;
+    try {
+      const parsed = parseVerbArgs(verb, verbArgv);
+      if (parsed.values.help === true) {
+        io.out(`${verb.help.trimEnd()}\n`);
+        return EXIT_OK;
+      }
+      return await verb.run(parsed.values, parsed.positionals, io);
+    } catch (e) {
+      if (e instanceof UsageError || (e instanceof TypeError && 'code' in e)) {
+        io.err(`blockwise ${verb.name}: ${e.message.split('\n')[0]}\n`);
+        return EXIT_USAGE;
+      }
+      throw e;
+    }
   } catch (e) {
-    if (e instanceof UsageError || (e instanceof TypeError && 'code' in e)) {
-      io.err(`blockwise ${verb.name}: ${e.message.split('\n')[0]}\n`);
-      return 2;
-    }
-    throw e;
+    io.err(internalErrorLine(doing(argv), e));
+    return EXIT_INTERNAL;
   }
 }

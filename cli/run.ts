@@ -1,4 +1,19 @@
-import { runCli } from './main';
+/**
+ * The process around runCli: exit code, and a last guard so that nothing a
+ * user sees is a stack trace (a fault outside runCli, or a closed pipe).
+ */
+import { EXIT_INTERNAL } from './exitCodes';
+import { internalErrorLine, runCli } from './main';
+
+function lastResort(e: unknown): void {
+  // A reader that closed the pipe (`blockwise ... | head`) is not an error of ours: stop quietly.
+  if ((e as NodeJS.ErrnoException | null)?.code === 'EPIPE') process.exit(0);
+  process.stderr.write(internalErrorLine('running the command line', e));
+  process.exit(EXIT_INTERNAL);
+}
+process.on('uncaughtException', lastResort);
+process.on('unhandledRejection', lastResort);
+process.stdout.on('error', lastResort);
 
 const code = await runCli(process.argv.slice(2), {
   out: (t) => process.stdout.write(t),

@@ -5,10 +5,11 @@
  */
 import type { Caution } from '../../engine/cautions/caution';
 import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../engine/core/notice';
+import { EXIT_NOT_SOLVED } from '../exitCodes';
 import { printJson, type CliIo } from '../verb';
 
 /** Exit code when the analysis ran but could not produce its result (message on stderr). */
-export const EXIT_ANALYSIS_FAILED = 3;
+export const EXIT_ANALYSIS_FAILED = EXIT_NOT_SOLVED;
 
 /** The report's lines, a blank line, the safety notice and a final newline, as one text. */
 export function reportText(lines: readonly string[]): string {

@@ -3,7 +3,10 @@ import { atmosphere, type AtmosphereState } from '../../engine/aero/standardAtmo
 import { formatQuantity, fromSi, type DisplayKind } from '../../engine/units/quantity';
 import { groupDigits } from '../../engine/units/displayUnits';
 import { FOOT_M, POUND_KG } from '../../engine/units/unitTable';
-import { optionalQuantityOption, quantityOption } from '../common/quantityOptions';
+import { OPTION_RANGES, optionalQuantityOption, quantityOption } from '../common/quantityOptions';
+
+/** The standard atmosphere's own ISA-deviation range (engine/aero/standardAtmosphere.ts). */
+const AIR_ISA_DEV = { min: -100, max: 100, what: 'an ISA deviation from -100 K to +100 K' };
 import { printJsonReport, reportText } from '../common/report';
 import { optionalString, UsageError, type CliIo, type Verb } from '../verb';
 import { verbSummary } from './catalogue';
@@ -17,7 +20,7 @@ function readSpeed(values: Readonly<Record<string, unknown>>): SpeedInput | null
   }
   const name = given[0];
   if (name === undefined) return null;
-  const value = optionalQuantityOption(values, name, name === 'mach' ? 'dimensionless' : 'speed')!;
+  const value = name === 'mach' ? optionalQuantityOption(values, name, 'dimensionless', OPTION_RANGES.mach)! : optionalQuantityOption(values, name, 'speed', OPTION_RANGES.airspeed)!;
   if (value < 0) throw new UsageError(`--${name}: a speed cannot be negative (got ${String(values[name])})`);
   if (name === 'cas') return { cas_m_s: value };
   if (name === 'eas') return { eas_m_s: value };
@@ -97,8 +100,8 @@ with a minus sign needs an equals sign: --isa-dev=-10K, --altitude=-1000ft.
     json: { type: 'boolean' },
   },
   run(values, _positionals, io: CliIo): number {
-    const altitude_m = quantityOption(values, 'altitude', 'length');
-    const isaDev_K = optionalQuantityOption(values, 'isa-dev', 'temperatureDelta') ?? 0;
+    const altitude_m = quantityOption(values, 'altitude', 'length', OPTION_RANGES.atmosphereAltitude);
+    const isaDev_K = optionalQuantityOption(values, 'isa-dev', 'temperatureDelta', AIR_ISA_DEV) ?? 0;
     const speed = readSpeed(values);
     const state = atmosphere(altitude_m, isaDev_K);
     if (!state.ok) {

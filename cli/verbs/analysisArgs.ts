@@ -9,7 +9,7 @@ import { formatQuantity, type DisplayKind } from '../../engine/units/displayUnit
 import { RATING_NAMES, type RatingName } from '../../engine/propulsion/propulsionModel';
 import type { LoadedProject } from '../projectFiles';
 import { loadVerbProject, projectArgument } from '../common/projectArgs';
-import { positiveQuantityOption, quantityOption } from '../common/quantityOptions';
+import { OPTION_RANGES, quantityOption } from '../common/quantityOptions';
 import { optionalString, UsageError, type CliIo } from '../verb';
 
 type Options = NonNullable<ParseArgsConfig['options']>;
@@ -25,7 +25,10 @@ export const POINT_OPTIONS: Options = { altitude: { type: 'string' }, weight: { 
 
 /** The required `--altitude` (m) and `--weight` (kg, positive) of a point analysis. */
 export function pointCondition(values: Readonly<Record<string, unknown>>): { readonly altitude_m: number; readonly mass_kg: number } {
-  return { altitude_m: quantityOption(values, 'altitude', 'length'), mass_kg: positiveQuantityOption(values, 'weight', 'mass') };
+  return {
+    altitude_m: quantityOption(values, 'altitude', 'length', OPTION_RANGES.flightAltitude),
+    mass_kg: quantityOption(values, 'weight', 'mass', OPTION_RANGES.aircraftMass),
+  };
 }
 
 /** The project positional of an analysis verb, read with the `--inlet` option's design; the exit code 1 after printing why it cannot be used. */
@@ -41,7 +44,7 @@ export function openAnalysisProject(
 
 /** `--isa-dev` in K, or the project's ISA deviation when absent. */
 export function isaDevOption(values: Readonly<Record<string, unknown>>, projectIsaDev_K: number): number {
-  return quantityOption(values, 'isa-dev', 'temperatureDelta', projectIsaDev_K);
+  return quantityOption(values, 'isa-dev', 'temperatureDelta', OPTION_RANGES.isaDeviation, projectIsaDev_K);
 }
 
 /** A rating option, checked against the rating names. */

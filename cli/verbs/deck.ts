@@ -5,7 +5,7 @@ import { RATING_NAMES, type RatingName } from '../../engine/propulsion/propulsio
 import { FOOT_M, POUND_FORCE_N, POUND_KG } from '../../engine/units/unitTable';
 import { significant } from '../common/numberText';
 import { powerOrRating } from '../common/powerOption';
-import { optionalQuantityOption, quantityOption } from '../common/quantityOptions';
+import { OPTION_RANGES, optionalQuantityOption, quantityOption } from '../common/quantityOptions';
 import { printJsonReport, reportText } from '../common/report';
 import { deckErrorsText, readDeckFile } from '../common/textFile';
 import { requireString, UsageError, type Verb } from '../verb';
@@ -147,10 +147,9 @@ caution, or refuse: exit 1).
   allowPositionals: true,
   run(values, positionals, io) {
     const file = onePositional(positionals);
-    const altitude_m = quantityOption(values, 'altitude', 'length');
-    const mach = quantityOption(values, 'mach', 'dimensionless');
-    if (mach < 0) throw new UsageError(`--mach: a Mach number cannot be negative (got ${String(values.mach)})`);
-    const isaDev_K = optionalQuantityOption(values, 'isa-dev', 'temperatureDelta') ?? 0;
+    const altitude_m = quantityOption(values, 'altitude', 'length', OPTION_RANGES.atmosphereAltitude);
+    const mach = quantityOption(values, 'mach', 'dimensionless', OPTION_RANGES.mach);
+    const isaDev_K = optionalQuantityOption(values, 'isa-dev', 'temperatureDelta', OPTION_RANGES.isaDeviation) ?? 0;
     const choice = powerOrRating(requireString(values, 'power'));
     const read = readDeckFile(file, 'deck', io);
     if (read === null) return 1;

@@ -1,6 +1,9 @@
 import { DEFAULT_RESIDUAL_CLIMB_RATES, flightEnvelope } from '../../engine/analysis/envelope';
 import { analysisFailed, isaText, printJsonReport, printReport } from '../common/report';
-import { positiveQuantityOption } from '../common/quantityOptions';
+import { OPTION_RANGES, quantityOption } from '../common/quantityOptions';
+
+/** --top: above the ground, at most the highest altitude the mission models cover. */
+const TOP_RANGE = { ...OPTION_RANGES.flightAltitude, min: 0, minExclusive: true, what: `an altitude above 0 and at most ${OPTION_RANGES.flightAltitude.max} m (98,425 ft), the highest the mission models cover` };
 import { formatTable } from '../format/textTable';
 import { UsageError, type CliIo, type Verb } from '../verb';
 import { bothUnits, INLET_OPTION, ISA_DEV_OPTION, isaDevOption, JSON_OPTION, machText, openAnalysisProject, ratingOption } from './analysisArgs';
@@ -46,15 +49,19 @@ TAS (no acceleration factor). Exit codes: 0 done; 1 project unreadable;
   allowPositionals: true,
   async run(values, positionals, io: CliIo): Promise<number> {
     const rating = ratingOption(values, 'rating', 'maxClimb');
-    const top_m = positiveQuantityOption(values, 'top', 'length', 50000 * 0.3048);
-    const step_m = positiveQuantityOption(values, 'step', 'length', 2000 * 0.3048);
-    if (top_m / step_m > 2000) throw new UsageError(`--step: ${String(values.step)} gives more than 2000 rows up to --top`);
-    const serviceRate = positiveQuantityOption(values, 'service-rate', 'speed', DEFAULT_RESIDUAL_CLIMB_RATES[0]!.climbRate_m_s);
-    const cruiseRate = positiveQuantityOption(values, 'cruise-rate', 'speed', DEFAULT_RESIDUAL_CLIMB_RATES[1]!.climbRate_m_s);
+    const top_m = quantityOption(values, 'top', 'length', TOP_RANGE, 50000 * 0.3048);
+    const step_m = quantityOption(values, 'step', 'length', OPTION_RANGES.altitudeStep, 2000 * 0.3048);
+    if (top_m / step_m > 2000) {
+      // Blame the option the user gave (both given: the step, which sets the row count).
+      const blamed = values.step === undefined ? 'top' : 'step';
+      throw new UsageError(`--${blamed}: ${String(values[blamed])} gives ${Math.ceil(top_m / step_m)} rows from 0 to --top ${(top_m / 0.3048).toFixed(0)} ft in steps of ${(step_m / 0.3048).toFixed(0)} ft; at most 2000`);
+    }
+    const serviceRate = quantityOption(values, 'service-rate', 'speed', OPTION_RANGES.climbRate, DEFAULT_RESIDUAL_CLIMB_RATES[0]!.climbRate_m_s);
+    const cruiseRate = quantityOption(values, 'cruise-rate', 'speed', OPTION_RANGES.climbRate, DEFAULT_RESIDUAL_CLIMB_RATES[1]!.climbRate_m_s);
     const loaded = await openAnalysisProject(values, positionals, 'envelope', io);
     if (typeof loaded === 'number') return loaded;
     const { input } = loaded;
-    const mass_kg = positiveQuantityOption(values, 'weight', 'mass', input.airframe.mtow_kg);
+    const mass_kg = quantityOption(values, 'weight', 'mass', OPTION_RANGES.aircraftMass, input.airframe.mtow_kg);
     const isaDev_K = isaDevOption(values, input.isaDev_K);
     const r = flightEnvelope(
       { aero: input.aero, propulsion: input.propulsion },

@@ -7,10 +7,9 @@ import { missionJson } from '../format/missionJson';
 import { missionSummaryText } from '../format/missionSummaryText';
 import { optionalString, printJson, UsageError, type CliIo, type Verb } from '../verb';
 import { INLET_OPTION, JSON_OPTION } from './analysisArgs';
+import { missionExitCode } from '../exitCodes';
 import { verbSummary } from './catalogue';
 
-/** Exit code when the mission was flown but did not end with status "ok". */
-export const EXIT_MISSION_NOT_OK = 3;
 
 export const flyVerb: Verb = {
   name: 'fly',
@@ -28,8 +27,11 @@ The deck file a project names is read relative to the project file's folder.
 The project format is described in docs/project-format.md.
 
 Exit codes: 0 flown, status ok; 1 the project (or its deck) cannot be read,
-with each problem's JSON path and reason; 2 bad command line; 3 flown, but the
-mission ended with a status other than ok (the result is still printed).
+with each problem's JSON path and reason; 2 bad command line; 3 no solution
+(did not converge, infeasible); 4 the destination cannot be reached (fuel
+exhausted, climb or thrust short, no ground progress, outside the models'
+range); 5 a hard limit is broken (MTOW, fuel capacity, MLW); 70 internal
+error. The result is printed whatever the status.
 `,
   options: { ...INLET_OPTION, ...JSON_OPTION, csv: { type: 'string' } },
   allowPositionals: true,
@@ -59,6 +61,6 @@ mission ended with a status other than ok (the result is still printed).
     }
     if (values.json === true) printJson(io, missionJson(result, context));
     else io.out(missionSummaryText(result, context));
-    return result.status === 'ok' ? 0 : EXIT_MISSION_NOT_OK;
+    return missionExitCode(result.status);
   },
 };

@@ -12,7 +12,7 @@ import { inletDesignOf } from '../../engine/project/projectSpecs';
 import { FOOT_M } from '../../engine/units/unitTable';
 import { significant } from '../common/numberText';
 import { powerOrRating } from '../common/powerOption';
-import { optionalQuantityOption, quantityOption } from '../common/quantityOptions';
+import { OPTION_RANGES, optionalQuantityOption, quantityOption } from '../common/quantityOptions';
 import { printJsonReport, reportText } from '../common/report';
 import { deckErrorsText, readDeckFile, readTextFile } from '../common/textFile';
 import { optionalString, UsageError, type CliIo, type Verb } from '../verb';
@@ -182,17 +182,17 @@ against the first is split into its parts. Methods: docs/installation.md.
     const deckFile = positionals[0]!;
     const designFiles = (Array.isArray(values.design) ? values.design : []).filter((v): v is string => typeof v === 'string');
     if (designFiles.length === 0) throw new UsageError('missing --design (an inlet design JSON file)');
-    const altitude_m = quantityOption(values, 'altitude', 'length');
-    const mach = quantityOption(values, 'mach', 'dimensionless');
+    const altitude_m = quantityOption(values, 'altitude', 'length', OPTION_RANGES.flightAltitude);
+    const mach = quantityOption(values, 'mach', 'dimensionless', OPTION_RANGES.mach);
     if (!(mach >= 0) || mach > 5) throw new UsageError(`--mach: expected a Mach number from 0 to 5 (got ${String(values.mach)})`);
-    const isaDev_K = optionalQuantityOption(values, 'isa-dev', 'temperatureDelta') ?? 0;
+    const isaDev_K = optionalQuantityOption(values, 'isa-dev', 'temperatureDelta', OPTION_RANGES.isaDeviation) ?? 0;
     const enginesText = optionalString(values, 'engines') ?? '2';
     const engineCount = Number(enginesText);
     if (!Number.isInteger(engineCount) || engineCount < 1 || engineCount > 8) {
       throw new UsageError(`--engines: expected a whole number from 1 to 8 (got "${enginesText}")`);
     }
-    const bleed = optionalQuantityOption(values, 'bleed', 'dimensionless') ?? 0;
-    const extraction_W = optionalQuantityOption(values, 'extraction', 'power') ?? 0;
+    const bleed = optionalQuantityOption(values, 'bleed', 'dimensionless', OPTION_RANGES.fraction) ?? 0;
+    const extraction_W = optionalQuantityOption(values, 'extraction', 'power', OPTION_RANGES.shaftPower) ?? 0;
     const installation: InstallationSettings = { bleed: { kind: 'coreFraction', fraction: bleed }, powerExtraction_W: extraction_W };
     const deckResult = readDeckFile(deckFile, 'inlet', io);
     if (deckResult === null) return 1;

@@ -10,7 +10,7 @@ import { lookupUnit, normalizeUnit, UNIT_TABLE, type UnitDef } from './unitTable
 export type { Dimension, UnitSystem };
 export { displayUnit, formatQuantity, toDisplay, type DisplayKind } from './displayUnits';
 
-export type QuantityErrorCode = 'empty' | 'not_a_number' | 'unknown_unit' | 'wrong_dimension' | 'not_finite';
+export type QuantityErrorCode = 'empty' | 'not_a_number' | 'unknown_unit' | 'wrong_dimension' | 'not_finite' | 'not_physical';
 
 export interface QuantityError {
   readonly code: QuantityErrorCode;
@@ -50,16 +50,35 @@ function applyUnit(value: number, def: UnitDef, expected: Dimension): number {
   return expected === 'temperatureDelta' ? value * def.scale : value * def.scale + def.offset;
 }
 
+/** Smallest positive normal double (2^-1022): a smaller non-zero magnitude is subnormal (IEEE 754-2008, 3.4). */
+export const MIN_NORMAL = 2.2250738585072014e-308;
+/**
+ * Largest SI magnitude any quantity Blockwise reads may have (1e12: a trillion metres, newtons, watts...;
+ * every field and option has its own, narrower range on top).
+ */
+export const MAX_PHYSICAL_MAGNITUDE = 1e12;
+
+/** Why an SI value cannot be a physical quantity (subnormal, or beyond MAX_PHYSICAL_MAGNITUDE), or null. */
+function physicalProblem(si: number, shown: string): string | null {
+  const size = Math.abs(si);
+  if (size !== 0 && size < MIN_NORMAL) return `${shown} is a subnormal number (non-zero but below 2.2e-308 in magnitude), not a physical value`;
+  if (size > MAX_PHYSICAL_MAGNITUDE) return `${shown} is ${si.toExponential(2)} in SI units, beyond any physical value (at most 1e12 in magnitude)`;
+  return null;
+}
+
 /**
  * Reads a quantity with an optional unit and returns its SI value (units of
  * SI_UNIT[expected]). Bare numbers and numeric strings without a unit are SI;
  * for 'dimensionless', "%" divides by 100. Temperatures read as
  * 'temperatureDelta' ("+15 K", "10 degC") are differences (no offset).
- * Never throws.
+ * Subnormal numbers and SI magnitudes above MAX_PHYSICAL_MAGNITUDE are refused
+ * ('not_physical'). Never throws.
  */
 export function parseQuantity(input: string | number, expected: Dimension): Result<number, QuantityError> {
   if (typeof input === 'number') {
     if (!Number.isFinite(input)) return fail('not_finite', String(input), expected, `${input} is not a finite number`);
+    const problem = physicalProblem(input, String(input));
+    if (problem !== null) return fail('not_physical', String(input), expected, problem);
     return ok(input);
   }
   if (typeof input !== 'string') {
@@ -80,7 +99,10 @@ export function parseQuantity(input: string | number, expected: Dimension): Resu
     return fail('not_finite', text, expected, `${quoted} is not a finite number`);
   }
   const unitText = m[2]!.trim();
-  if (unitText === '') return ok(value);
+  if (unitText === '') {
+    const problem = physicalProblem(value, quoted);
+    return problem === null ? ok(value) : fail('not_physical', text, expected, problem);
+  }
   const def = lookupUnit(unitText);
   if (def === undefined) {
     return fail('unknown_unit', text, expected, `${quoted} has an unknown unit "${unitText}"${caseHint(unitText)}`);
@@ -90,6 +112,8 @@ export function parseQuantity(input: string | number, expected: Dimension): Resu
   }
   const si = applyUnit(value, def, expected);
   if (!Number.isFinite(si)) return fail('not_finite', text, expected, `${quoted} is not a finite number in SI`);
+  const problem = physicalProblem(si, quoted);
+  if (problem !== null) return fail('not_physical', text, expected, problem);
   return ok(si);
 }
 

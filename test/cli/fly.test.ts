@@ -144,7 +144,7 @@ describe('blockwise fly options', () => {
     expectClose((a.zeroFuelWeight_kg as number) - (b.zeroFuelWeight_kg as number), 100 * LB, { rel: 1e-9 }, 'inlet weights in the demo file');
   });
 
-  it('fly exits 3 and still prints the result when the mission ends with a status other than ok', async () => {
+  it('fly exits 4 (cannot reach) and still prints the result when the climb cannot reach its altitude', async () => {
     // Climb and cruise at 45,000 ft at this weight: beyond what the invented 36 kN engines can reach.
     const doc = JSON.parse(readFileSync(join(repoRoot, DEMO), 'utf8')) as Record<string, any>; // eslint-disable-line @typescript-eslint/no-explicit-any
     doc.engine.deck.path = join(repoRoot, 'fixtures/demo/demo-engine.deck.csv');
@@ -157,7 +157,8 @@ describe('blockwise fly options', () => {
     const j = JSON.parse(r.out) as Json;
     expect(j.status).not.toBe('ok');
     expect(String(j.statusMessage)).not.toBe('');
-    expect(r.code).toBe(3);
+    expect(j.status).toBe('climb_not_reached');
+    expect(r.code).toBe(4);
   });
 
   it('fly --inlet with an unknown name exits 2 and names the designs', async () => {

@@ -12,6 +12,7 @@ import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { runCli } from '../../cli/main';
 import { verbs } from '../../cli/verbs/index';
+import { EXIT_CODES, EXIT_INTERNAL } from '../../cli/exitCodes';
 
 const repoRoot = fileURLToPath(new URL('../..', import.meta.url));
 
@@ -64,7 +65,9 @@ describe('blockwise command lines', () => {
         let out = '';
         let err = '';
         const code = await runCli(argv, { out: (t) => (out += t), err: (t) => (err += t), cwd: repoRoot });
-        expect([0, 1, 2, 3]).toContain(code);
+        expect(EXIT_CODES).toContain(code);
+        expect(code).not.toBe(EXIT_INTERNAL);
+        expect(err).not.toMatch(/\n\s+at /);
         expect(hasControl(err), err).toBe(false);
         if (argv.length === 0) {
           // No verb: the overview on stdout, exit 2.

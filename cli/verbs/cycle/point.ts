@@ -4,7 +4,7 @@ import { RATING_NAMES, type RatingName } from '../../../engine/propulsion/propul
 import { parseQuantity } from '../../../engine/units/quantity';
 import { FOOT_M, POUND_FORCE_N, POUND_KG } from '../../../engine/units/unitTable';
 import { significant } from '../../common/numberText';
-import { optionalQuantityOption, quantityOption } from '../../common/quantityOptions';
+import { OPTION_RANGES, optionalQuantityOption, quantityOption } from '../../common/quantityOptions';
 import { analysisFailed, isaText, printJsonReport, reportText } from '../../common/report';
 import { optionalString, UsageError, type Verb } from '../../verb';
 import { runCyclePoint } from '../../../engine/cycle/index';
@@ -32,19 +32,17 @@ function throttleOf(values: Readonly<Record<string, unknown>>): CycleThrottle {
 }
 
 function requestOf(values: Readonly<Record<string, unknown>>): CyclePointRequest {
-  const altitude_m = quantityOption(values, 'altitude', 'length');
-  const mach = quantityOption(values, 'mach', 'dimensionless');
-  if (mach < 0) throw new UsageError(`--mach: a Mach number cannot be negative (got ${String(values.mach)})`);
+  const altitude_m = quantityOption(values, 'altitude', 'length', OPTION_RANGES.flightAltitude);
+  const mach = quantityOption(values, 'mach', 'dimensionless', OPTION_RANGES.mach);
   const recovery = fraction(values, 'recovery');
   const bleedFraction = fraction(values, 'bleed');
   if (recovery !== undefined && !(recovery > 0 && recovery <= 1)) throw new UsageError(`--recovery: ${recovery} is outside (0, 1]`);
   if (bleedFraction !== undefined && !(bleedFraction >= 0 && bleedFraction < 0.3)) throw new UsageError(`--bleed: ${bleedFraction} is outside [0, 0.3) of core flow`);
-  const powerExtraction_W = optionalQuantityOption(values, 'power-extraction', 'power');
-  if (powerExtraction_W !== undefined && !(powerExtraction_W >= 0)) throw new UsageError('--power-extraction: must be zero or positive');
+  const powerExtraction_W = optionalQuantityOption(values, 'power-extraction', 'power', OPTION_RANGES.shaftPower);
   return {
     altitude_m,
     mach,
-    isaDeviation_K: optionalQuantityOption(values, 'isa-dev', 'temperatureDelta') ?? 0,
+    isaDeviation_K: optionalQuantityOption(values, 'isa-dev', 'temperatureDelta', OPTION_RANGES.isaDeviation) ?? 0,
     throttle: throttleOf(values),
     ...(recovery === undefined ? {} : { recovery }),
     ...(bleedFraction === undefined ? {} : { bleedFraction }),
