@@ -3,6 +3,7 @@ import { ChoiceField } from '../components/ChoiceField';
 import { IssueList } from '../components/IssueList';
 import { LineChartPanel, type ChartSize } from '../components/LineChartPanel';
 import { QuantityField } from '../components/QuantityField';
+import { UncertaintyRows } from '../components/UncertaintyRows';
 import { RowTableEditor } from '../components/RowTableEditor';
 import { StaleMark } from '../components/StaleMark';
 import { selectIssuesUnder } from '../state/selectors';
@@ -31,6 +32,7 @@ export function AirframeView(props: { readonly live: LiveStudy; readonly chartSi
           <QuantityField label="Maximum take-off" path={[...W, 'maxTakeoff']} unit="mass" testId="field-mtow" />
           <QuantityField label="Maximum landing" path={[...W, 'maxLanding']} unit="mass" testId="field-mlw" />
           <QuantityField label="Fuel capacity" path={[...W, 'maxFuel']} unit="mass" testId="field-max-fuel" />
+          <UncertaintyRows kinds={['oew']} testId="uncertain-weights" />
         </fieldset>
         <fieldset>
           <legend>Geometry and limits</legend>
@@ -75,6 +77,7 @@ export function AirframeView(props: { readonly live: LiveStudy; readonly chartSi
           )}
           <QuantityField label="CL of minimum drag (CLmd)" path={['polar', 'clMinDrag']} unit="dimensionless" testId="field-cl-min-drag" />
           <QuantityField label="Parasite increment dCD0" path={['polar', 'cdIncrement']} unit="dimensionless" testId="field-cd-increment" />
+          <UncertaintyRows kinds={['cd0', 'k']} testId="uncertain-polar" />
         </fieldset>
         <fieldset>
           <legend>Compressibility drag</legend>

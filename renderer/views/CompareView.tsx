@@ -5,6 +5,7 @@ import { ChoiceField } from '../components/ChoiceField';
 import { FailureNotice } from '../components/IssueList';
 import { JobProgress } from '../components/JobProgress';
 import { LineChartPanel, type ChartSize } from '../components/LineChartPanel';
+import { UncertaintyBand } from '../components/UncertaintyBand';
 import { WaterfallChart } from '../components/WaterfallChart';
 import { useStudy } from '../state/studyContext';
 import { useEngineJob, type LiveStudy } from '../worker/useEngine';
@@ -123,6 +124,7 @@ function InletComparisonPanel(props: { readonly chartSize?: ChartSize }) {
           <p className="small">{c.value.breakdown.description}</p>
         </>
       ) : null}
+      <UncertaintyBand designs={[nameA, nameB]} testId="compare-uncertainty" {...(props.chartSize ? { chartSize: props.chartSize } : {})} />
 
     </>
   );

@@ -7,6 +7,7 @@ import { FailureNotice } from '../components/IssueList';
 import { ThrustLapseChart, TsfcLapseChart } from '../components/LapseCharts';
 import type { ChartSize } from '../components/LineChartPanel';
 import { QuantityField } from '../components/QuantityField';
+import { UncertaintyRows } from '../components/UncertaintyRows';
 import { StaleMark } from '../components/StaleMark';
 import type { ToolbarCommand } from '../components/Toolbar';
 import { useStudy } from '../state/studyContext';
@@ -99,6 +100,7 @@ export function EngineView(props: { readonly live: LiveStudy; readonly chartSize
           )}
           <QuantityField label="Shaft power extraction per engine" path={['engine', 'installation', 'powerExtraction']} unit="power" testId="field-power-extraction" />
           <QuantityField label="Ram-recovery factor C_ram (blank: default)" path={['engine', 'installation', 'ramRecoveryFactor']} unit="dimensionless" testId="field-c-ram" optional />
+          <UncertaintyRows kinds={['tsfc', 'cRam', 'cBleed']} testId="uncertain-engine" />
         </fieldset>
         {deckSource.kind === 'parametric' ? (
           <fieldset>

@@ -4,6 +4,7 @@ import { ChoiceField } from '../components/ChoiceField';
 import { IssueList } from '../components/IssueList';
 import { LineChartPanel, type ChartSize } from '../components/LineChartPanel';
 import { QuantityField } from '../components/QuantityField';
+import { UncertaintyRows } from '../components/UncertaintyRows';
 import { RowTableEditor } from '../components/RowTableEditor';
 import { StaleMark } from '../components/StaleMark';
 import { selectIssuesUnder } from '../state/selectors';
@@ -60,6 +61,7 @@ export function InletsView(props: { readonly live: LiveStudy; readonly chartSize
               <QuantityField label="Lip suction factor" path={[...base, 'lipSuctionFactor']} unit="dimensionless" testId={id('lip-suction')} />
               <QuantityField label="External drag area D/q per engine" path={[...base, 'externalDragArea']} unit="area" testId={id('external-drag')} />
               <QuantityField label="Weight per engine" path={[...base, 'weight']} unit="mass" testId={id('weight')} />
+              <UncertaintyRows kinds={inlet.source.kind === 'recoveryTable' ? ['recovery', 'lipSuction'] : ['lipSuction']} inlet={inlet.name} testId={id('uncertain')} />
             </fieldset>
           );
         })}

@@ -6,6 +6,7 @@ import { FailureNotice } from '../components/IssueList';
 import { LegsTable } from '../components/LegsTable';
 import { LineChartPanel, type ChartSize } from '../components/LineChartPanel';
 import { StaleMark } from '../components/StaleMark';
+import { UncertaintyBand } from '../components/UncertaintyBand';
 import { useStudy } from '../state/studyContext';
 import { deckTitleText } from '../state/deckTitle';
 import type { LiveStudy } from '../worker/useEngine';
@@ -45,6 +46,7 @@ export function ResultsView(props: { readonly live: LiveStudy; readonly chartSiz
         {m.statusMessage ? ` — ${m.statusMessage}` : ''} (inlet {snapshot.inletName}; deck {deckTitleText(snapshot.deck.title, snapshot.deck.parametric)})
       </p>
       <HeadlineFigures result={m} units={u} />
+      <UncertaintyBand designs={[snapshot.inletName]} testId="results-uncertainty" {...(props.chartSize ? { chartSize: props.chartSize } : {})} />
       <div className="chart-row">
         <LineChartPanel
           title="Altitude against distance"

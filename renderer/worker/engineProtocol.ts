@@ -6,6 +6,7 @@ import type { CrossoverResult } from '../../engine/analysis/crossover';
 import type { InletComparisonResult } from '../../engine/analysis/inletComparison';
 import type { PayloadRangeResult } from '../../engine/analysis/payloadRange';
 import type { TradeFactorsResult } from '../../engine/analysis/tradeFactors';
+import type { UncertaintyResult } from '../../engine/uncertainty/uncertaintyRun';
 import type { MissionResult } from '../../engine/mission/missionTypes';
 import type { ProjectIssue } from '../../engine/project/projectIssue';
 import type { Project } from '../../engine/project/projectSchema';
@@ -33,7 +34,9 @@ export type EngineRequest =
   | ({ readonly kind: 'crossover'; readonly query: CrossoverRequestQuery } & StudyInputs)
   | ({ readonly kind: 'payloadRange' } & StudyInputs)
   | ({ readonly kind: 'tradeFactors' } & StudyInputs)
-  | ({ readonly kind: 'compare'; readonly nameA: string; readonly nameB: string } & StudyInputs);
+  | ({ readonly kind: 'compare'; readonly nameA: string; readonly nameB: string } & StudyInputs)
+  /** The declared uncertainties' Monte Carlo over one design (its band) or two (A, B: the band of B - A). */
+  | ({ readonly kind: 'uncertainty'; readonly designs: readonly string[]; readonly samples?: number; readonly seed?: number } & StudyInputs);
 
 export type EngineRequestKind = EngineRequest['kind'];
 
@@ -105,6 +108,7 @@ export interface EngineReplies {
   readonly payloadRange: PayloadRangeResult;
   readonly tradeFactors: TradeFactorsResult;
   readonly compare: InletComparisonResult;
+  readonly uncertainty: UncertaintyResult;
 }
 
 /** Why a request produced no result: the project's issues, the deck file's errors, or an analysis error. */

@@ -18,6 +18,7 @@ import { cautionSettingsOf, inletDesignOf, installationOf } from '../../engine/p
 import { parseDeckCsv } from '../../engine/propulsion/deckCsv';
 import type { EngineDeck } from '../../engine/propulsion/engineDeck';
 import type { AnalysisError } from '../../engine/analysis/analysisTypes';
+import { runUncertainty } from '../../engine/uncertainty/uncertaintyRun';
 import type { EngineFailure, EngineOutcome, EngineReplies, EngineRequest, EngineRequestKind, StudyInputs } from './engineProtocol';
 import { deckSummary, inletCurves, LAPSE_RATINGS, lapseCurves, polarCurves } from './studyCurves';
 
@@ -160,6 +161,13 @@ function dispatch(request: EngineRequest, cache: DeckCache, hooks: RunHooks): Re
     }
     case 'compare':
       return runCompare(request, cache, hooks);
+    case 'uncertainty': {
+      const file = deckOf(request, cache);
+      if (!file.ok) return file;
+      const size = { ...(request.samples === undefined ? {} : { samples: request.samples }), ...(request.seed === undefined ? {} : { seed: request.seed }) };
+      const r = runUncertainty({ project: request.project, resources: file.value === undefined ? {} : { deck: file.value }, designs: request.designs, ...size }, hooks);
+      return r.ok ? r : err(analysisFailure(r.error));
+    }
   }
 }
 
