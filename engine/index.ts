@@ -41,6 +41,7 @@ export * from './propulsion/inletFlow';
 export * from './propulsion/inletRecovery';
 export * from './propulsion/installationCorrections';
 export * from './propulsion/installationMethod';
+export * from './propulsion/installationSensitivities';
 export * from './propulsion/installedLossBreakdown';
 export * from './propulsion/installedModel';
 export * from './propulsion/installedPropulsion';

@@ -5,12 +5,15 @@
 import { SAFETY_NOTICE } from '../../engine/core/notice';
 import type { MissionResult } from '../../engine/mission/missionTypes';
 import { distanceBasisText } from './missionSummaryText';
+import type { InstallationMethodId } from '../../engine/propulsion/installationMethod';
 
 export interface MissionJsonContext {
   readonly projectName: string;
   readonly inletName: string;
   readonly deckTitle: string;
   readonly parametricDeck: boolean;
+  /** How recovery, bleed and extraction were applied to the deck. */
+  readonly installationMethod: InstallationMethodId;
 }
 
 /** A plain object ready for JSON.stringify (no typed arrays, no NaN: non-finite numbers become null). */
@@ -21,6 +24,7 @@ export function missionJson(result: MissionResult, context: MissionJsonContext) 
     project: context.projectName,
     inlet: context.inletName,
     deck: { title: context.deckTitle, parametric: context.parametricDeck },
+    installationMethod: context.installationMethod,
     status: r.status,
     statusMessage: r.statusMessage,
     blockFuel_kg: finite(r.blockFuel_kg),

@@ -6,6 +6,7 @@
 import type { Caution } from '../../engine/cautions/caution';
 import type { LegRow, MissionResult } from '../../engine/mission/missionTypes';
 import { formatQuantity, type DisplayKind } from '../../engine/units/quantity';
+import { describeInstallationMethod, type InstallationMethodId } from '../../engine/propulsion/installationMethod';
 import { formatPairs, formatTable } from './textTable';
 import { reportText } from '../common/report';
 
@@ -13,6 +14,7 @@ export interface MissionSummaryContext {
   readonly projectName: string;
   readonly inletName: string;
   readonly deckTitle: string;
+  readonly installationMethod: InstallationMethodId;
 }
 
 function both(value_si: number, kind: DisplayKind, customaryDigits?: number, siDigits?: number): [string, string] {
@@ -105,6 +107,7 @@ export function missionSummaryText(result: MissionResult, context: MissionSummar
   return reportText([
     `Mission: ${context.projectName}`,
     `Inlet: ${context.inletName}    Deck: ${context.deckTitle}`,
+    `Installation method: ${describeInstallationMethod(context.installationMethod)}`,
     `Status: ${status}`,
     `Distances: ${distanceBasisText(r.distanceBasis)}`,
     '',

@@ -1,3 +1,4 @@
+import { describeInstallationMethod } from '../../engine/propulsion/installationMethod';
 import { compareInlets } from '../../engine/analysis/inletComparison';
 import { inletFactorBuilder } from '../../engine/analysis/inletFactorBuilder';
 import { buildMissionInput, projectInlet } from '../../engine/project/buildMissionInput';
@@ -103,8 +104,8 @@ analysis failed.
     const v = r.value;
     const study = { project, resources, designs: names, ...size };
     if (values.json === true) {
-      if (withUncertainty) return printUncertainty(io, 'compare', study, true, [], { ...v });
-      printJsonReport(io, { ...v });
+      if (withUncertainty) return printUncertainty(io, 'compare', study, true, [], { installationMethod: builtB.value.propulsion.installationMethod, ...v });
+      printJsonReport(io, { installationMethod: builtB.value.propulsion.installationMethod, ...v });
       return 0;
     }
     const [a, b] = v.designs;
@@ -118,6 +119,7 @@ analysis failed.
     const cond = v.crossoverCondition;
     const lines = [
       `Inlet comparison — "${a.name}" (A) vs "${b.name}" (B), project "${project.name}"`,
+      `  installation method: ${describeInstallationMethod(builtB.value.propulsion.installationMethod)}`,
       '',
       formatTable(
         [

@@ -31,6 +31,7 @@ interface DeckSummary {
   readonly power: { readonly min: number; readonly max: number };
   readonly isaDev_K: { readonly min: number; readonly max: number } | null;
   readonly hasAirflow: boolean;
+  readonly hasSensitivities: boolean;
   readonly ratings: Readonly<Partial<Record<RatingName, number>>>;
   readonly policy: EngineDeck['policy'];
   readonly notes: readonly string[];
@@ -59,6 +60,7 @@ function summarize(deck: EngineDeck): DeckSummary {
     power: range(g.power),
     isaDev_K: deck.hasIsaDev ? range(g.isaDevs_K) : null,
     hasAirflow: deck.hasAirflow,
+    hasSensitivities: deck.hasSensitivities,
     ratings: deck.ratings,
     policy: deck.policy,
     notes: deck.notes,
@@ -78,6 +80,7 @@ function summaryText(file: string, s: DeckSummary): string {
     `  power               ${s.power.min} to ${s.power.max}`,
     `  ISA deviation       ${s.isaDev_K ? `${s.isaDev_K.min} to ${s.isaDev_K.max} K` : 'no axis (corrected-parameter approximation off ISA)'}`,
     `  airflow             ${s.hasAirflow ? 'tabulated' : 'not tabulated'}`,
+    `  installation        ${s.hasSensitivities ? "the deck's sensitivity columns (recovery, bleed, extraction)" : "no sensitivity columns: Raymer's rule"}`,
     `  ratings             ${ratings.length ? ratings.join(', ') : 'none'}`,
     `  outside the table   altitude ${s.policy.altitude}, Mach ${s.policy.mach}, power ${s.policy.power}, ISA deviation ${s.policy.isaDev}`,
     ...s.notes.map((n, i) => `  ${i === 0 ? 'notes' : ''}`.padEnd(22) + n),
@@ -195,6 +198,7 @@ caution, or refuse: exit 1).
         thrust_N: v.thrust_N,
         fuelFlow_kg_s: v.fuelFlow_kg_s,
         airflow_kg_s: v.airflow_kg_s,
+        sensitivities: v.sensitivities,
         tsfc_kg_N_s: tsfc,
         outsideTable: v.outside,
         cautions: v.cautions,

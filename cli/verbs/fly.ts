@@ -48,6 +48,7 @@ error. The result is printed whatever the status.
       inletName: input.propulsion.inletName,
       deckTitle: input.propulsion.label,
       parametricDeck: input.propulsion.parametric,
+      installationMethod: input.propulsion.installationMethod,
     };
 
     if (csvOption !== undefined) {

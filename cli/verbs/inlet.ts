@@ -3,6 +3,7 @@ import { describeReferenceRecovery, type EngineDeck } from '../../engine/propuls
 import { validateInletDesign, type InletDesign } from '../../engine/propulsion/inletDesign';
 import { validateInstallation, type InstallationSettings } from '../../engine/propulsion/installationCorrections';
 import { installedLossBreakdown, type InstalledLossBreakdown } from '../../engine/propulsion/installedLossBreakdown';
+import { describeInstallationMethod } from '../../engine/propulsion/installationMethod';
 import { makeInstalledPropulsion } from '../../engine/propulsion/installedPropulsion';
 import { RATING_NAMES, type InstalledPoint } from '../../engine/propulsion/propulsionModel';
 import { parseJsonText } from '../../engine/project/jsonText';
@@ -117,6 +118,7 @@ function textReport(deck: EngineDeck, results: readonly DesignResult[], engineCo
   const lines = [
     `${deck.title} — installed, ${engineCount} engine${engineCount === 1 ? '' : 's'}`,
     `  at ${round(r0.altitude_m / FOOT_M)} ft (${round(r0.altitude_m)} m), Mach ${r0.mach}, ISA${r0.isaDev_K >= 0 ? '+' : ''}${round(r0.isaDev_K)} K, ${what}`,
+    `  installation method: ${describeInstallationMethod(r0.perEngine.installationMethod)}`,
     ...table(rows),
   ];
   if (results.length >= 2) {
@@ -162,7 +164,9 @@ Usage: blockwise inlet <deck file> --design <file> [--design <file> ...]
 
 Each design's recovery, mass-flow ratio, throat and fan-face Mach, thrust
 losses (recovery, bleed, extraction, spillage) and installed thrust are shown
-side by side; with two or more designs, the thrust difference of the second
+side by side. Recovery, bleed and extraction act through the deck's
+installation sensitivities when it carries them, else by Raymer's rule; the
+report names which; with two or more designs, the thrust difference of the second
 against the first is split into its parts. Methods: docs/installation.md.
 `,
   options: {
@@ -219,7 +223,7 @@ against the first is split into its parts. Methods: docs/installation.md.
     const results: DesignResult[] = designs.map((design) => {
       const model = makeInstalledPropulsion({ deck, engineCount, inlet: design, installation, cautionSettings: DEFAULT_CAUTION_SETTINGS });
       const point = rating !== undefined ? model.atRating(condition, rating) : model.atPower(condition, power!);
-      return { design, point, loss: installedLossBreakdown(point.perEngine, installation) };
+      return { design, point, loss: installedLossBreakdown(point.perEngine) };
     });
     const what = rating !== undefined ? `${rating} (power ${round(results[0]!.point.power)})` : `power ${round(power!)}`;
     if (values.json === true) {
@@ -228,6 +232,7 @@ against the first is split into its parts. Methods: docs/installation.md.
         deck: deck.title,
         parametric: deck.parametric,
         referenceRecovery: describeReferenceRecovery(deck.referenceRecovery),
+        installationMethod: results[0]!.point.perEngine.installationMethod,
         engineCount,
         condition,
         rating: rating ?? null,

@@ -35,7 +35,7 @@ unreadable; 2 bad command line; 3 the design mission failed.
     if (!r.ok) return analysisFailed(io, 'trade', r.error.message);
     const v = r.value;
     if (values.json === true) {
-      printJsonReport(io, { inlet: input.propulsion.inletName, ...v });
+      printJsonReport(io, { inlet: input.propulsion.inletName, installationMethod: input.propulsion.installationMethod, ...v });
       return 0;
     }
     const kg = (x: number | null) => (x === null ? '-' : `${x >= 0 ? '+' : ''}${x.toFixed(2)}`);

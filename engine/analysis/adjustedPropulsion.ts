@@ -52,6 +52,7 @@ export function adjustPropulsion(base: PropulsionModel, adj: PropulsionAdjustmen
     label: base.label,
     parametric: base.parametric,
     inletName: base.inletName,
+    installationMethod: base.installationMethod,
     atRating: (c, r) => adjust(base.atRating(c, r)),
     atPower,
     forThrust(c: FlightCondition, required: number, ceilingRating: RatingName = 'maxCruise'): PartPowerPoint {

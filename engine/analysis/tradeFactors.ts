@@ -7,6 +7,7 @@ import { err, ok, type Result } from '../core/result';
 import type { MissionInput, MissionResult } from '../mission/missionTypes';
 import type { PropulsionModel } from '../propulsion/propulsionModel';
 import { adjustPropulsion } from './adjustedPropulsion';
+import { describeInstallationMethod } from '../propulsion/installationMethod';
 import { solveMission } from '../mission/solveMission';
 import type { AnalysisError, MissionSolver } from './analysisTypes';
 
@@ -44,7 +45,11 @@ export interface TradeFactorOptions {
   readonly solve?: MissionSolver;
   /** C_ram of the installation for the recovery wrapper (-); default 1.35 (Raymer, subsonic). */
   readonly cRam?: number;
-  /** Propulsion with recovery raised by `delta` (-), when the caller can build it exactly; default the C_ram wrapper. */
+  /**
+   * Propulsion with recovery raised by `delta` (-), when the caller can build
+   * it exactly; default the propulsion's own `withRecoveryOffset` (the
+   * installation method carries the change), else the C_ram wrapper.
+   */
   readonly recoveryModel?: (delta: number) => PropulsionModel;
   readonly tolerance?: { readonly rel: number; readonly abs_kg: number };
   readonly onProgress?: (done: number, total: number) => void;
@@ -85,7 +90,9 @@ export function tradeFactors(input: MissionInput, options: TradeFactorOptions): 
   }
   const base = fly(design, 'baseline');
   if (!base.ok) return base;
-  const recoveryModel = options.recoveryModel ?? ((delta: number) => adjustPropulsion(design.propulsion, { recoveryDelta: delta, cRam, fuelFlowScale: 1 }));
+  const own = design.propulsion.withRecoveryOffset?.bind(design.propulsion);
+  const recoveryModel =
+    options.recoveryModel ?? own ?? ((delta: number) => adjustPropulsion(design.propulsion, { recoveryDelta: delta, cRam, fuelFlowScale: 1 }));
   const perturb: Record<TradeFactorName, { unit: string; apply: (units: number) => MissionInput }> = {
     recovery: { unit: '+1 % inlet recovery (+0.01)', apply: (u) => ({ ...design, propulsion: recoveryModel(0.01 * u) }) },
     dragCount: { unit: '+1 drag count (CD0 + 0.0001)', apply: (u) => ({ ...design, aero: design.aero.withIncrement(1e-4 * u) }) },
@@ -132,6 +139,10 @@ export function tradeFactors(input: MissionInput, options: TradeFactorOptions): 
     factors,
     tolerance,
     missions: done,
-    recoveryMethod: options.recoveryModel ? 'Recovery raised by the caller\'s propulsion model.' : WRAPPER_METHOD,
+    recoveryMethod: options.recoveryModel
+      ? "Recovery raised by the caller's propulsion model."
+      : own
+        ? `Recovery raised at the inlet and carried through the installation: ${describeInstallationMethod(design.propulsion.installationMethod)}; engine airflow, spillage and bleed fraction follow.`
+        : WRAPPER_METHOD,
   });
 }

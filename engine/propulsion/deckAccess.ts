@@ -7,6 +7,7 @@ import type { Result } from '../core/result';
 import type { DeckLookup } from './deckLookup';
 import type { ReferenceRecovery } from './engineDeck';
 import type { FlightCondition, RatingName, SlopeBreaks } from './propulsionModel';
+import { SENSITIVITY_STRIDE } from './installationSensitivities';
 
 /** One engine's uninstalled deck numbers at a condition and power: the deck lookup's own result. */
 export type DeckPoint = DeckLookup;
@@ -17,14 +18,25 @@ export interface AccessError {
   readonly message: string;
 }
 
-/** Evaluator of the deck at one prepared condition: thrust (N) and airflow (kg/s, NaN without airflow) into out[0], out[1]; false where the deck refuses. */
+/**
+ * Evaluator of the deck at one prepared condition: thrust (N) and airflow
+ * (kg/s, NaN without airflow) into out[0], out[1], and for a deck with
+ * sensitivities the nine of them (slot order of SENSITIVITY_FIELDS,
+ * installationSensitivities.ts) into out[2..10]; `out` has CURVE_VALUES
+ * entries. False where the deck refuses.
+ */
 export type DeckCurve = (power: number, out: Float64Array) => boolean;
+
+/** Length of the buffer a DeckCurve writes: thrust, airflow and the nine sensitivities. */
+export const CURVE_VALUES = 2 + SENSITIVITY_STRIDE;
 
 /** What the installed model needs from an uninstalled deck and the atmosphere. */
 export interface DeckAccess {
   readonly title: string;
   readonly parametric: boolean;
   readonly hasAirflow: boolean;
+  /** The deck carries installation sensitivities (its lookups and curves then return them). */
+  readonly hasSensitivities: boolean;
   readonly referenceRecovery: ReferenceRecovery;
   lookup(condition: FlightCondition, power: number): Result<DeckPoint, AccessError>;
   /** Power-axis value of a rating, or null when the deck does not name it. */

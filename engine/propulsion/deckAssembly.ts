@@ -9,11 +9,19 @@ import { buildDeckGrid, type DeckGridPoint } from './deckGrid';
 import { deckFileError, type DeckFileError } from './deckFileError';
 import type { DeckPolicy, EngineDeck, ReferenceRecovery } from './engineDeck';
 import type { RatingName } from './propulsionModel';
+import { requiredSensitivityFields, SENSITIVITY_FIELDS, type SensitivityCsvName } from './installationSensitivities';
+
+/** The sensitivity columns of a deck file, by their CSV names (installationSensitivities.ts). */
+export type SensitivityColumn = SensitivityCsvName;
 
 /** The columns of a deck file. */
-export type DeckColumn = 'altitude' | 'mach' | 'power' | 'thrust' | 'fuel_flow' | 'airflow' | 'isa_dev';
+export type DeckColumn = 'altitude' | 'mach' | 'power' | 'thrust' | 'fuel_flow' | 'airflow' | 'isa_dev' | SensitivityColumn;
 
-/** Plausible limits in SI (common practice: the largest engines give ~0.5 MN, ~5 kg/s fuel, ~1.5 t/s air). */
+/**
+ * Plausible limits in SI (common practice: the largest engines give ~0.5 MN,
+ * ~5 kg/s fuel, ~1.5 t/s air; the sensitivity bounds are generous, set
+ * to catch a unit mistake rather than to judge the engine).
+ */
 export const DECK_VALUE_LIMITS: Readonly<Record<DeckColumn, readonly [number, number]>> = {
   altitude: [-5000, 84852],
   mach: [0, 10],
@@ -22,7 +30,63 @@ export const DECK_VALUE_LIMITS: Readonly<Record<DeckColumn, readonly [number, nu
   fuel_flow: [0, 1e3],
   airflow: [0, 1e4],
   isa_dev: [-100, 100],
+  dthrust_drecovery: [-1e8, 1e8],
+  dfuel_flow_drecovery: [-1e4, 1e4],
+  dairflow_drecovery: [-1e5, 1e5],
+  dthrust_dbleed: [-1e8, 1e8],
+  dfuel_flow_dbleed: [-1e4, 1e4],
+  dairflow_dbleed: [-1e5, 1e5],
+  dthrust_dextraction: [-10, 10],
+  dfuel_flow_dextraction: [-1e-3, 1e-3],
+  dairflow_dextraction: [-1e-2, 1e-2],
 };
+
+/** Whether a deck column is one of the sensitivity columns. */
+export function isSensitivityColumn(column: DeckColumn): column is SensitivityColumn {
+  return SENSITIVITY_FIELDS.some((f) => f.csv === column);
+}
+
+/** A problem with which sensitivity columns a deck carries (the parser locates it). */
+export interface SensitivityColumnIssue {
+  readonly column: SensitivityColumn;
+  readonly kind: 'missing' | 'without_airflow';
+  readonly message: string;
+}
+
+/**
+ * Checks the set of sensitivity columns present: none, or all six thrust
+ * and fuel-flow ones plus the three airflow ones exactly when the deck has
+ * an airflow column (docs/deck-format.md). `name` shows a column as the
+ * file spells it (CSV name or JSON name).
+ */
+export function sensitivityColumnIssues(
+  present: (column: SensitivityColumn) => boolean,
+  hasAirflow: boolean,
+  name: (column: SensitivityColumn) => string,
+): readonly SensitivityColumnIssue[] {
+  const all = SENSITIVITY_FIELDS.map((f) => f.csv);
+  const given = all.filter(present);
+  if (given.length === 0) return [];
+  const issues: SensitivityColumnIssue[] = [];
+  const required = new Set(requiredSensitivityFields(hasAirflow).map((f) => f.csv));
+  const list = [...required].map(name).join(', ');
+  for (const column of all) {
+    if (required.has(column) && !present(column)) {
+      issues.push({
+        column,
+        kind: 'missing',
+        message: `missing column "${name(column)}": a deck with installation sensitivities carries all of ${list}`,
+      });
+    } else if (!required.has(column) && present(column)) {
+      issues.push({
+        column,
+        kind: 'without_airflow',
+        message: `column "${name(column)}" needs an airflow column: airflow sensitivities describe the deck's airflow`,
+      });
+    }
+  }
+  return issues;
+}
 
 /** Where a row's cell is in its file, and how to show a value in the file's units. */
 export interface DeckRowLocator {
@@ -43,6 +107,8 @@ export interface DeckAssemblyInput {
   readonly policy: DeckPolicy;
   readonly hasAirflow: boolean;
   readonly hasIsaDev: boolean;
+  /** Every row carries `sensitivities` (the parser checked the columns). */
+  readonly hasSensitivities: boolean;
   readonly rows: readonly DeckGridPoint[];
   readonly locate: DeckRowLocator;
 }
@@ -195,6 +261,7 @@ export function assembleDeck(input: DeckAssemblyInput): Result<EngineDeck, reado
     ratings,
     hasAirflow: input.hasAirflow,
     hasIsaDev: input.hasIsaDev,
+    hasSensitivities: input.hasSensitivities,
     notes: input.notes,
     policy: input.policy,
     grid: buildDeckGrid(rows),

@@ -6,7 +6,14 @@
  */
 import { err, type Result } from '../core/result';
 import { toSi, type Dimension } from '../units/quantity';
-import { assembleDeck, DECK_VALUE_LIMITS, type DeckColumn } from './deckAssembly';
+import {
+  assembleDeck,
+  DECK_VALUE_LIMITS,
+  isSensitivityColumn,
+  sensitivityColumnIssues,
+  type DeckColumn,
+  type SensitivityColumn,
+} from './deckAssembly';
 import { deckFileError, type DeckFileError, type DeckFileErrorCode } from './deckFileError';
 import { deckGridPoints, type DeckGridPoint } from './deckGrid';
 import {
@@ -16,14 +23,32 @@ import {
   type ReferenceRecovery,
 } from './engineDeck';
 import { RATING_NAMES, type DeckAxis, type RatingName } from './propulsionModel';
+import { SENSITIVITY_FIELDS, type InstallationSensitivities, type SensitivityQuantity } from './installationSensitivities';
 
 interface ColumnSpec {
   readonly required: boolean;
   readonly dimensions: readonly Dimension[];
   readonly expected: string;
+  /** A derivative per watt: the unit is `<unit of dimensions>/<power unit>`, e.g. lbf/hp. */
+  readonly perPower?: boolean;
 }
 
+const SENSITIVITY_UNIT: Readonly<Record<SensitivityQuantity, { dimension: Dimension; perUnit: string; perPower: string }>> = {
+  thrust: { dimension: 'force', perUnit: 'a force unit (lbf, N, kN) per unit', perPower: 'a force per power unit (lbf/hp, N/kW, N/W)' },
+  fuelFlow: { dimension: 'massFlow', perUnit: 'a mass-flow unit (lb/h, kg/h, kg/s) per unit', perPower: 'a mass flow per power unit (lb/h/hp, kg/h/kW, kg/s/W)' },
+  airflow: { dimension: 'massFlow', perUnit: 'a mass-flow unit (lb/s, kg/s) per unit', perPower: 'a mass flow per power unit (lb/s/hp, kg/s/kW, kg/s/W)' },
+};
+
+const SENSITIVITY_COLUMNS = Object.fromEntries(
+  SENSITIVITY_FIELDS.map((f) => {
+    const u = SENSITIVITY_UNIT[f.quantity];
+    const perPower = f.variable === 'extraction';
+    return [f.csv, { required: false, dimensions: [u.dimension], expected: perPower ? u.perPower : u.perUnit, perPower }];
+  }),
+) as unknown as Record<SensitivityColumn, ColumnSpec>;
+
 const COLUMNS: Readonly<Record<DeckColumn, ColumnSpec>> = {
+  ...SENSITIVITY_COLUMNS,
   altitude: { required: true, dimensions: ['length'], expected: 'a length unit (ft, m, km)' },
   mach: { required: true, dimensions: ['dimensionless'], expected: 'no unit: mach[-]' },
   power: { required: true, dimensions: ['dimensionless'], expected: 'a plain-number unit: power[-] or power[%]' },
@@ -85,6 +110,7 @@ export function parseDeckCsv(text: string, sourceName: string): Result<EngineDec
   const units: Partial<Record<DeckColumn, ColumnUnit>> = {};
   const rows: DeckGridPoint[] = [];
   const rowLines: number[] = [];
+  let hasSensitivities = false;
 
   for (let i = 0; i < lines.length; i++) {
     const lineNo = i + 1;
@@ -130,6 +156,7 @@ export function parseDeckCsv(text: string, sourceName: string): Result<EngineDec
     policy,
     hasAirflow: units.airflow !== undefined,
     hasIsaDev: units.isa_dev !== undefined,
+    hasSensitivities,
     rows,
     locate: {
       line: (row) => rowLines[row] ?? null,
@@ -223,21 +250,25 @@ export function parseDeckCsv(text: string, sourceName: string): Result<EngineDec
         add('duplicate_column', lineNo, cell, cell, 'each column once', `column "${name}" appears twice`);
         return;
       }
-      const one = toSi(1, unit === '' ? '-' : unit);
-      const zero = toSi(0, unit === '' ? '-' : unit);
-      if (!one.ok || !zero.ok) {
+      const split = spec.perPower === true ? unit.lastIndexOf('/') : -1;
+      const numerator = split > 0 ? unit.slice(0, split).trim() : unit;
+      const one = toSi(1, numerator === '' ? '-' : numerator);
+      const zero = toSi(0, numerator === '' ? '-' : numerator);
+      const per = split > 0 ? toSi(1, unit.slice(split + 1).trim()) : null;
+      if (!one.ok || !zero.ok || (per !== null && !per.ok)) {
         add('unknown_unit', lineNo, cell, unit, spec.expected, `unknown unit "${unit}"; expected ${spec.expected}`);
         return;
       }
-      if (!spec.dimensions.includes(one.value.dimension)) {
+      if (!spec.dimensions.includes(one.value.dimension) || (spec.perPower === true && (per === null || !per.ok || per.value.dimension !== 'power'))) {
         add('wrong_unit_dimension', lineNo, cell, unit, spec.expected, `unit "${unit}" is not right for ${name}; expected ${spec.expected}`);
         return;
       }
-      const isDelta = name === 'isa_dev';
+      const perScale = per !== null && per.ok ? per.value.value_si : 1;
+      const isDelta = name === 'isa_dev' || isSensitivityColumn(name);
       units[name] = {
         header: cell,
         unit,
-        scale: one.value.value_si - zero.value.value_si,
+        scale: (one.value.value_si - zero.value.value_si) / perScale,
         offset: isDelta ? 0 : zero.value.value_si,
       };
       columns[j] = name;
@@ -248,6 +279,12 @@ export function parseDeckCsv(text: string, sourceName: string): Result<EngineDec
         add('missing_column', lineNo, name, null, `a ${name}[unit] column`, `missing column "${name}"; required columns are altitude, mach, power, thrust, fuel_flow`);
       }
     }
+    for (const issue of sensitivityColumnIssues((c) => units[c] !== undefined, units.airflow !== undefined, (c) => c)) {
+      const header = units[issue.column]?.header ?? issue.column;
+      add(issue.kind === 'missing' ? 'missing_column' : 'unknown_column', lineNo, header, null,
+        issue.kind === 'missing' ? `a ${issue.column}[unit] column` : 'an airflow column', issue.message);
+    }
+    hasSensitivities = SENSITIVITY_FIELDS.some((f) => units[f.csv] !== undefined);
   }
 
   function readRow(raw: string, lineNo: number): void {
@@ -305,9 +342,25 @@ export function parseDeckCsv(text: string, sourceName: string): Result<EngineDec
       thrust_N: v.thrust!,
       fuelFlow_kg_s: v.fuel_flow!,
       airflow_kg_s: v.airflow ?? null,
+      sensitivities: hasSensitivities ? sensitivitiesOf(v, units.airflow !== undefined) : null,
     });
     rowLines.push(lineNo);
   }
+}
+
+function sensitivitiesOf(v: Partial<Record<DeckColumn, number>>, hasAirflow: boolean): InstallationSensitivities {
+  const air = (c: SensitivityColumn): number | null => (hasAirflow ? v[c]! : null);
+  return {
+    dThrust_dRecovery_N: v.dthrust_drecovery!,
+    dFuelFlow_dRecovery_kg_s: v.dfuel_flow_drecovery!,
+    dAirflow_dRecovery_kg_s: air('dairflow_drecovery'),
+    dThrust_dBleed_N: v.dthrust_dbleed!,
+    dFuelFlow_dBleed_kg_s: v.dfuel_flow_dbleed!,
+    dAirflow_dBleed_kg_s: air('dairflow_dbleed'),
+    dThrust_dExtraction_N_W: v.dthrust_dextraction!,
+    dFuelFlow_dExtraction_kg_s_W: v.dfuel_flow_dextraction!,
+    dAirflow_dExtraction_kg_s_W: air('dairflow_dextraction'),
+  };
 }
 
 /** Units a deck is written in by `deckToCsv`. */
@@ -317,10 +370,12 @@ export interface DeckCsvUnits {
   readonly fuelFlow: string;
   readonly airflow: string;
   readonly isaDev: string;
+  /** The shaft-power unit of the per-watt extraction sensitivities (W, kW, hp). */
+  readonly shaftPower: string;
 }
 
-export const SI_DECK_UNITS: DeckCsvUnits = { altitude: 'm', thrust: 'N', fuelFlow: 'kg/s', airflow: 'kg/s', isaDev: 'K' };
-export const CUSTOMARY_DECK_UNITS: DeckCsvUnits = { altitude: 'ft', thrust: 'lbf', fuelFlow: 'lb/h', airflow: 'lb/s', isaDev: 'K' };
+export const SI_DECK_UNITS: DeckCsvUnits = { altitude: 'm', thrust: 'N', fuelFlow: 'kg/s', airflow: 'kg/s', isaDev: 'K', shaftPower: 'W' };
+export const CUSTOMARY_DECK_UNITS: DeckCsvUnits = { altitude: 'ft', thrust: 'lbf', fuelFlow: 'lb/h', airflow: 'lb/s', isaDev: 'K', shaftPower: 'hp' };
 
 /**
  * Writes a deck as CSV in the given units. `significantDigits` (default 17,
@@ -356,11 +411,26 @@ export function deckToCsv(deck: EngineDeck, units: DeckCsvUnits = SI_DECK_UNITS,
   const header = [`altitude[${units.altitude}]`, 'mach[-]', 'power[-]', `thrust[${units.thrust}]`, `fuel_flow[${units.fuelFlow}]`];
   if (deck.hasAirflow) header.push(`airflow[${units.airflow}]`);
   if (deck.hasIsaDev) header.push(`isa_dev[${units.isaDev}]`);
+  const quantityUnit: Readonly<Record<SensitivityQuantity, readonly [string, number]>> = {
+    thrust: [units.thrust, sThrust],
+    fuelFlow: [units.fuelFlow, sFuel],
+    airflow: [units.airflow, sAir],
+  };
+  const sShaft = scale(units.shaftPower);
+  const sensitivityColumns = deck.hasSensitivities
+    ? SENSITIVITY_FIELDS.filter((f) => deck.hasAirflow || f.quantity !== 'airflow').map((f) => {
+        const [unit, s] = quantityUnit[f.quantity];
+        const perPower = f.variable === 'extraction';
+        header.push(`${f.csv}[${perPower ? `${unit}/${units.shaftPower}` : unit}]`);
+        return { key: f.key, scale: perPower ? s / sShaft : s };
+      })
+    : [];
   out.push(header.join(','));
   for (const p of deckGridPoints(deck.grid)) {
     const cells = [fmt(p.altitude_m / sAlt), fmt(p.mach), fmt(p.power), fmt(p.thrust_N / sThrust), fmt(p.fuelFlow_kg_s / sFuel)];
     if (deck.hasAirflow) cells.push(fmt((p.airflow_kg_s ?? 0) / sAir));
     if (deck.hasIsaDev) cells.push(fmt(p.isaDev_K / sIsa));
+    for (const c of sensitivityColumns) cells.push(fmt((p.sensitivities?.[c.key] ?? 0) / c.scale));
     out.push(cells.join(','));
   }
   return `${out.join('\n')}\n`;

@@ -13,6 +13,12 @@
  */
 import type { DeckAxis } from './propulsionModel';
 import type { DeckPolicy, OutOfTablePolicy } from './engineDeck';
+import {
+  SENSITIVITY_STRIDE,
+  readSensitivities,
+  writeSensitivities,
+  type InstallationSensitivities,
+} from './installationSensitivities';
 
 /** One tabulated point (SI). `isaDev_K` is 0 for decks without an ISA-deviation column. */
 export interface DeckGridPoint {
@@ -23,6 +29,8 @@ export interface DeckGridPoint {
   readonly thrust_N: number;
   readonly fuelFlow_kg_s: number;
   readonly airflow_kg_s: number | null;
+  /** Installation sensitivities at this point (installationSensitivities.ts); absent or null when the deck has none. */
+  readonly sensitivities?: InstallationSensitivities | null;
 }
 
 export interface DeckGrid {
@@ -41,6 +49,12 @@ export interface DeckGrid {
   readonly fuelFlow_kg_s: Float64Array;
   /** Null when the deck has no airflow column. */
   readonly airflow_kg_s: Float64Array | null;
+  /**
+   * Installation sensitivities, SENSITIVITY_STRIDE values per point in the
+   * slot order of SENSITIVITY_FIELDS (airflow slots 0 without airflow);
+   * null when the deck has none.
+   */
+  readonly sensitivities: Float64Array | null;
 }
 
 /** Axis order used by the masks and per-axis arrays below. */
@@ -63,6 +77,7 @@ export function buildDeckGrid(points: readonly DeckGridPoint[]): DeckGrid {
   const sorted = [...points].sort(compareGridPoints);
   const n = sorted.length;
   const withAirflow = n > 0 && sorted.every((p) => p.airflow_kg_s !== null);
+  const withSensitivities = n > 0 && sorted.every((p) => p.sensitivities != null);
   const isaDevs: number[] = [];
   const altitudeStart: number[] = [];
   const altitudes: number[] = [];
@@ -73,6 +88,7 @@ export function buildDeckGrid(points: readonly DeckGridPoint[]): DeckGrid {
   const thrust = new Float64Array(n);
   const fuelFlow = new Float64Array(n);
   const airflow = withAirflow ? new Float64Array(n) : null;
+  const sensitivities = withSensitivities ? new Float64Array(n * SENSITIVITY_STRIDE) : null;
   for (let i = 0; i < n; i++) {
     const p = sorted[i]!;
     const prev = i > 0 ? sorted[i - 1]! : null;
@@ -95,6 +111,7 @@ export function buildDeckGrid(points: readonly DeckGridPoint[]): DeckGrid {
     thrust[i] = p.thrust_N;
     fuelFlow[i] = p.fuelFlow_kg_s;
     if (airflow) airflow[i] = p.airflow_kg_s ?? 0;
+    if (sensitivities) writeSensitivities(p.sensitivities!, sensitivities, i * SENSITIVITY_STRIDE);
   }
   altitudeStart.push(altitudes.length);
   machStart.push(machs.length);
@@ -110,6 +127,7 @@ export function buildDeckGrid(points: readonly DeckGridPoint[]): DeckGrid {
     thrust_N: thrust,
     fuelFlow_kg_s: fuelFlow,
     airflow_kg_s: airflow,
+    sensitivities,
   };
 }
 
@@ -128,6 +146,9 @@ export function deckGridPoints(grid: DeckGrid): DeckGridPoint[] {
             thrust_N: grid.thrust_N[q]!,
             fuelFlow_kg_s: grid.fuelFlow_kg_s[q]!,
             airflow_kg_s: grid.airflow_kg_s ? grid.airflow_kg_s[q]! : null,
+            sensitivities: grid.sensitivities
+              ? readSensitivities(grid.sensitivities, q * SENSITIVITY_STRIDE, grid.airflow_kg_s !== null)
+              : null,
           });
         }
       }
@@ -329,10 +350,15 @@ function effective(policy: OutOfTablePolicy, allowRefusal: boolean): OutOfTableP
   return policy === 'refuse' && !allowRefusal ? 'clamp' : policy;
 }
 
+/** Length of an output buffer for evaluateDeckNodesInto that also takes the sensitivities. */
+export const DECK_VALUES_WITH_SENSITIVITIES = 3 + SENSITIVITY_STRIDE;
+
 /**
  * Evaluates the nodes in `s` at power setting `power` and writes thrust (N),
  * fuel flow (kg/s) and airflow (kg/s; 0 without an airflow column) into
- * out[0..2]. Sets the power bit of s.outsideMask when a node's power range is
+ * out[0..2]; when the grid has sensitivities and `out` has room
+ * (DECK_VALUES_WITH_SENSITIVITIES), the sensitivities, interpolated by the
+ * same weights, into out[3..11]. Sets the power bit of s.outsideMask when a node's power range is
  * left; returns false when that happens under policy 'refuse'.
  */
 export function evaluateDeckNodesInto(
@@ -346,6 +372,8 @@ export function evaluateDeckNodesInto(
   let fuel = 0;
   let air = 0;
   const airflow = grid.airflow_kg_s;
+  const sens = out.length >= DECK_VALUES_WITH_SENSITIVITIES ? grid.sensitivities : null;
+  if (sens) out.fill(0, 3, DECK_VALUES_WITH_SENSITIVITIES);
   for (let k = 0; k < s.count; k++) {
     const node = s.node[k]!;
     const w = s.weight[k]!;
@@ -366,6 +394,11 @@ export function evaluateDeckNodesInto(
     thrust += w * (u * grid.thrust_N[i]! + t * grid.thrust_N[i + 1]!);
     fuel += w * (u * grid.fuelFlow_kg_s[i]! + t * grid.fuelFlow_kg_s[i + 1]!);
     if (airflow) air += w * (u * airflow[i]! + t * airflow[i + 1]!);
+    if (sens) {
+      const a = i * SENSITIVITY_STRIDE;
+      const b = a + SENSITIVITY_STRIDE;
+      for (let j = 0; j < SENSITIVITY_STRIDE; j++) out[3 + j] = out[3 + j]! + w * (u * sens[a + j]! + t * sens[b + j]!);
+    }
   }
   out[0] = thrust;
   out[1] = fuel;

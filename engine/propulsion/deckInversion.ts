@@ -12,6 +12,7 @@ import type { EngineDeck } from './engineDeck';
 import type { FlightCondition, ThrustLimit } from './propulsionModel';
 import {
   AXIS_POWER,
+  DECK_VALUES_WITH_SENSITIVITIES,
   createDeckNodeSet,
   evaluateDeckNodesInto,
   fillDeckNodes,
@@ -21,7 +22,7 @@ import {
 import { finishLookup, refusal, type DeckLookup, type DeckLookupError } from './deckLookup';
 
 const scratch = createDeckNodeSet();
-const values = new Float64Array(3);
+const values = new Float64Array(DECK_VALUES_WITH_SENSITIVITIES);
 const range = new Float64Array(2);
 
 /**

@@ -4,14 +4,32 @@
  */
 import { z } from 'zod';
 import { err, type Result } from '../core/result';
-import { assembleDeck, DECK_VALUE_LIMITS, type DeckColumn } from './deckAssembly';
+import { assembleDeck, DECK_VALUE_LIMITS, sensitivityColumnIssues, type DeckColumn, type SensitivityColumn } from './deckAssembly';
 import { deckFileError, type DeckFileError } from './deckFileError';
 import { deckGridPoints, type DeckGridPoint } from './deckGrid';
 import { DEFAULT_DECK_POLICY, type EngineDeck } from './engineDeck';
 import { RATING_NAMES, type RatingName } from './propulsionModel';
 import { parseJsonText } from '../project/jsonText';
+import { SENSITIVITY_FIELDS, type InstallationSensitivities } from './installationSensitivities';
 
-const JSON_COLUMNS = ['altitude_m', 'mach', 'power', 'thrust_N', 'fuelFlow_kg_s', 'airflow_kg_s', 'isaDev_K'] as const;
+const JSON_COLUMNS = [
+  'altitude_m',
+  'mach',
+  'power',
+  'thrust_N',
+  'fuelFlow_kg_s',
+  'airflow_kg_s',
+  'isaDev_K',
+  'dThrust_dRecovery_N',
+  'dFuelFlow_dRecovery_kg_s',
+  'dAirflow_dRecovery_kg_s',
+  'dThrust_dBleed_N',
+  'dFuelFlow_dBleed_kg_s',
+  'dAirflow_dBleed_kg_s',
+  'dThrust_dExtraction_N_W',
+  'dFuelFlow_dExtraction_kg_s_W',
+  'dAirflow_dExtraction_kg_s_W',
+] as const;
 type JsonColumn = (typeof JSON_COLUMNS)[number];
 const COLUMN_OF: Readonly<Record<JsonColumn, DeckColumn>> = {
   altitude_m: 'altitude',
@@ -21,7 +39,17 @@ const COLUMN_OF: Readonly<Record<JsonColumn, DeckColumn>> = {
   fuelFlow_kg_s: 'fuel_flow',
   airflow_kg_s: 'airflow',
   isaDev_K: 'isa_dev',
+  dThrust_dRecovery_N: 'dthrust_drecovery',
+  dFuelFlow_dRecovery_kg_s: 'dfuel_flow_drecovery',
+  dAirflow_dRecovery_kg_s: 'dairflow_drecovery',
+  dThrust_dBleed_N: 'dthrust_dbleed',
+  dFuelFlow_dBleed_kg_s: 'dfuel_flow_dbleed',
+  dAirflow_dBleed_kg_s: 'dairflow_dbleed',
+  dThrust_dExtraction_N_W: 'dthrust_dextraction',
+  dFuelFlow_dExtraction_kg_s_W: 'dfuel_flow_dextraction',
+  dAirflow_dExtraction_kg_s_W: 'dairflow_dextraction',
 };
+const JSON_NAME_OF = Object.fromEntries(SENSITIVITY_FIELDS.map((f) => [f.csv, f.key])) as unknown as Record<SensitivityColumn, JsonColumn>;
 const SI_SUFFIX: Readonly<Record<DeckColumn, string>> = {
   altitude: ' m',
   mach: '',
@@ -30,6 +58,15 @@ const SI_SUFFIX: Readonly<Record<DeckColumn, string>> = {
   fuel_flow: ' kg/s',
   airflow: ' kg/s',
   isa_dev: ' K',
+  dthrust_drecovery: ' N',
+  dfuel_flow_drecovery: ' kg/s',
+  dairflow_drecovery: ' kg/s',
+  dthrust_dbleed: ' N',
+  dfuel_flow_dbleed: ' kg/s',
+  dairflow_dbleed: ' kg/s',
+  dthrust_dextraction: ' N/W',
+  dfuel_flow_dextraction: ' kg/s/W',
+  dairflow_dextraction: ' kg/s/W',
 };
 const REQUIRED: readonly JsonColumn[] = ['altitude_m', 'mach', 'power', 'thrust_N', 'fuelFlow_kg_s'];
 
@@ -114,6 +151,12 @@ export function parseDeckJson(text: string, sourceName: string): Result<EngineDe
       errors.push(deckFileError(src, 'missing_column', null, 'columns', null, REQUIRED.join(', '), `missing column "${c}"; required columns are ${REQUIRED.join(', ')}`));
     }
   }
+  const hasAirflow = index.airflow_kg_s !== undefined;
+  for (const issue of sensitivityColumnIssues((c) => index[JSON_NAME_OF[c]] !== undefined, hasAirflow, (c) => JSON_NAME_OF[c])) {
+    errors.push(deckFileError(src, issue.kind === 'missing' ? 'missing_column' : 'unknown_column', null, 'columns', JSON_NAME_OF[issue.column],
+      issue.kind === 'missing' ? `a ${JSON_NAME_OF[issue.column]} column` : 'an airflow_kg_s column', issue.message));
+  }
+  const hasSensitivities = SENSITIVITY_FIELDS.some((f) => index[f.key] !== undefined);
   if (errors.length > 0) return err(errors);
   const rows: DeckGridPoint[] = [];
   const rowIndex: number[] = [];
@@ -146,6 +189,7 @@ export function parseDeckJson(text: string, sourceName: string): Result<EngineDe
       thrust_N: get('thrust_N')!,
       fuelFlow_kg_s: get('fuelFlow_kg_s')!,
       airflow_kg_s: get('airflow_kg_s') ?? null,
+      sensitivities: hasSensitivities ? sensitivitiesOf(get, hasAirflow) : null,
     });
     rowIndex.push(i);
   });
@@ -162,8 +206,9 @@ export function parseDeckJson(text: string, sourceName: string): Result<EngineDe
     ratings,
     notes: doc.notes,
     policy: { ...DEFAULT_DECK_POLICY, ...doc.policy },
-    hasAirflow: index.airflow_kg_s !== undefined,
+    hasAirflow,
     hasIsaDev: index.isaDev_K !== undefined,
+    hasSensitivities,
     rows,
     locate: {
       line: () => null,
@@ -176,11 +221,19 @@ export function parseDeckJson(text: string, sourceName: string): Result<EngineDe
   });
 }
 
+function sensitivitiesOf(get: (c: JsonColumn) => number | undefined, hasAirflow: boolean): InstallationSensitivities {
+  const out: Record<string, number | null> = {};
+  for (const f of SENSITIVITY_FIELDS) out[f.key] = f.quantity === 'airflow' && !hasAirflow ? null : get(f.key)!;
+  return out as unknown as InstallationSensitivities;
+}
+
 /** Writes a deck in the JSON form (SI, exact round trip), one point per line. */
 export function deckToJson(deck: EngineDeck): string {
   const columns: JsonColumn[] = ['altitude_m', 'mach', 'power', 'thrust_N', 'fuelFlow_kg_s'];
   if (deck.hasAirflow) columns.push('airflow_kg_s');
   if (deck.hasIsaDev) columns.push('isaDev_K');
+  const sensitivityFields = deck.hasSensitivities ? SENSITIVITY_FIELDS.filter((f) => deck.hasAirflow || f.quantity !== 'airflow') : [];
+  for (const f of sensitivityFields) columns.push(f.key);
   const head = JSON.stringify(
     {
       format: 'blockwise-deck',
@@ -200,6 +253,7 @@ export function deckToJson(deck: EngineDeck): string {
     const row = [p.altitude_m, p.mach, p.power, p.thrust_N, p.fuelFlow_kg_s];
     if (deck.hasAirflow) row.push(p.airflow_kg_s ?? 0);
     if (deck.hasIsaDev) row.push(p.isaDev_K);
+    for (const f of sensitivityFields) row.push(p.sensitivities?.[f.key] ?? 0);
     return `    ${JSON.stringify(row)}`;
   });
   return `${head.slice(0, head.lastIndexOf('}')).trimEnd()},\n  "points": [\n${points.join(',\n')}\n  ]\n}\n`;

@@ -14,6 +14,7 @@ import {
   AXIS_MACH,
   AXIS_POWER,
   DECK_AXES,
+  DECK_VALUES_WITH_SENSITIVITIES,
   createDeckNodeSet,
   evaluateDeckNodesInto,
   fillDeckNodes,
@@ -21,6 +22,7 @@ import {
   type DeckNodeSet,
 } from './deckGrid';
 import { temperatureApproximationCaution, temperatureFlowFactor } from './deckTemperature';
+import { readSensitivities, type InstallationSensitivities } from './installationSensitivities';
 
 export interface DeckLookup {
   /** Power setting asked for (-), on the deck's power axis. */
@@ -31,6 +33,8 @@ export interface DeckLookup {
   readonly fuelFlow_kg_s: number;
   /** Engine airflow per engine (kg/s); null when the deck has none. */
   readonly airflow_kg_s: number | null;
+  /** The deck's installation sensitivities at this point, interpolated like the rest; null when the deck has none. */
+  readonly sensitivities: InstallationSensitivities | null;
   /** Axes the lookup left (empty when inside the table). */
   readonly outside: readonly DeckAxis[];
   readonly cautions: readonly Caution[];
@@ -47,7 +51,7 @@ export interface DeckLookupError {
 
 const NOTHING: readonly never[] = Object.freeze([]);
 const scratch = createDeckNodeSet();
-const values = new Float64Array(3);
+const values = new Float64Array(DECK_VALUES_WITH_SENSITIVITIES);
 const range = new Float64Array(2);
 
 /**
@@ -75,7 +79,8 @@ export function lookupDeck(
 
 /**
  * Builds the lookup from evaluated node values (thrust, fuel flow, airflow in
- * v[0..2]) and the node set's outside flags. Shared with deckInversion.ts.
+ * v[0..2], sensitivities in v[3..11] when the deck has them) and the node
+ * set's outside flags. Shared with deckInversion.ts.
  */
 export function finishLookup(
   deck: EngineDeck,
@@ -87,14 +92,16 @@ export function finishLookup(
   let fuelFlow = v[1]!;
   let airflow: number | null = deck.hasAirflow ? v[2]! : null;
   const approximateTemperature = !deck.hasIsaDev && condition.isaDev_K !== 0;
+  let f = 1;
   if (approximateTemperature) {
-    const f = temperatureFlowFactor(condition.altitude_m, condition.isaDev_K);
+    f = temperatureFlowFactor(condition.altitude_m, condition.isaDev_K);
     fuelFlow *= f;
     if (airflow !== null) airflow /= f;
   }
+  const sensitivities = deck.hasSensitivities && v.length >= DECK_VALUES_WITH_SENSITIVITIES ? readSensitivities(v, 3, deck.hasAirflow, f) : null;
   if (s.outsideMask === 0) {
     const cautions = approximateTemperature ? temperatureCautionList(deck.title, condition.isaDev_K) : NOTHING;
-    return { power, thrust_N: v[0]!, fuelFlow_kg_s: fuelFlow, airflow_kg_s: airflow, outside: NOTHING, cautions };
+    return { power, thrust_N: v[0]!, fuelFlow_kg_s: fuelFlow, airflow_kg_s: airflow, sensitivities, outside: NOTHING, cautions };
   }
   const outside: DeckAxis[] = [];
   const cautions: Caution[] = [];
@@ -124,7 +131,7 @@ export function finishLookup(
       threshold: 0,
     });
   }
-  return { power, thrust_N: thrust, fuelFlow_kg_s: fuelFlow, airflow_kg_s: airflow, outside, cautions };
+  return { power, thrust_N: thrust, fuelFlow_kg_s: fuelFlow, airflow_kg_s: airflow, sensitivities, outside, cautions };
 }
 
 // The temperature caution is the same for every lookup of a deck at one ISA deviation (a mission

@@ -38,6 +38,12 @@ export interface EngineDeck {
   readonly ratings: Readonly<Partial<Record<RatingName, number>>>;
   readonly hasAirflow: boolean;
   readonly hasIsaDev: boolean;
+  /**
+   * The deck carries per-point installation sensitivities
+   * (installationSensitivities.ts); the installation then uses them instead
+   * of Raymer's rule.
+   */
+  readonly hasSensitivities: boolean;
   readonly notes: readonly string[];
   readonly policy: DeckPolicy;
   /** The tabulated points, ragged, in flat arrays (SI). */

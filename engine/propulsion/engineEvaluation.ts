@@ -22,6 +22,7 @@ import { referenceRecoveryAt, type ReferenceRecovery } from './engineDeck';
 import { geometryInletFlow, streamTubeArea, type FreeStream } from './inletFlow';
 import { tableRecovery, type PreparedInlet } from './inletRecovery';
 import { correctDeckPoint, type InstallationMethodId } from './installationMethod';
+import type { InstallationSensitivities } from './installationSensitivities';
 import type { InstallationSettings } from './installationCorrections';
 import { milE5008bRecovery } from './milE5008b';
 import type { DeckAxis, FlightCondition, InstalledPoint } from './propulsionModel';
@@ -39,6 +40,8 @@ export interface InstallationContext {
   readonly spillLip: number;
   readonly installation: InstallationSettings;
   readonly method: InstallationMethodId;
+  /** Added to the inlet's recovery (-), e.g. +0.01 for a trade factor; 0 normally. */
+  readonly recoveryOffset: number;
   readonly referenceRecovery: ReferenceRecovery;
   readonly cautionSettings: CautionSettings;
   readonly engineCount: number;
@@ -46,8 +49,18 @@ export interface InstallationContext {
 
 /** Scratch of one engine evaluation (SI, per engine). Mutated only by the `...Into` functions below. */
 export interface EngineScratch {
-  /** Uninstalled deck thrust (N), fuel flow (kg/s), and the physical airflow at the inlet's recovery (kg/s, null without an airflow column). */
-  readonly deck: { thrust_N: number; fuelFlow_kg_s: number; airflow_kg_s: number | null };
+  /**
+   * Uninstalled deck thrust (N), fuel flow (kg/s), the physical airflow at
+   * the inlet's recovery and the deck's own airflow (kg/s, null without an
+   * airflow column), and the deck's sensitivities (null without them).
+   */
+  readonly deck: {
+    thrust_N: number;
+    fuelFlow_kg_s: number;
+    airflow_kg_s: number | null;
+    deckAirflow_kg_s: number | null;
+    sensitivities: InstallationSensitivities | null;
+  };
   /** Inlet recovery pt2/pt0 (-) and the deck's reference recovery (-). */
   readonly inlet: { recovery: number; referenceRecovery: number };
   massFlowRatio: number | null;
@@ -60,6 +73,10 @@ export interface EngineScratch {
   correctedThrust_N: number;
   fuelFlow_kg_s: number;
   airflow_kg_s: number | null;
+  /** The method's thrust loss parts (N): recovery (negative: a gain), bleed, extraction. */
+  recoveryLoss_N: number;
+  bleedLoss_N: number;
+  extractionLoss_N: number;
   spillage_N: number;
   deckError: AccessError | null;
   outside: readonly DeckAxis[];
@@ -68,7 +85,7 @@ export interface EngineScratch {
 
 export function newEngineScratch(): EngineScratch {
   return {
-    deck: { thrust_N: 0, fuelFlow_kg_s: 0, airflow_kg_s: null },
+    deck: { thrust_N: 0, fuelFlow_kg_s: 0, airflow_kg_s: null, deckAirflow_kg_s: null, sensitivities: null },
     inlet: { recovery: 1, referenceRecovery: 1 },
     massFlowRatio: null,
     throatMach: null,
@@ -79,6 +96,9 @@ export function newEngineScratch(): EngineScratch {
     correctedThrust_N: 0,
     fuelFlow_kg_s: 0,
     airflow_kg_s: null,
+    recoveryLoss_N: 0,
+    bleedLoss_N: 0,
+    extractionLoss_N: 0,
     spillage_N: 0,
     deckError: null,
     outside: NO_AXES,
@@ -91,7 +111,9 @@ export function newEngineScratch(): EngineScratch {
  * the physical airflow scaled by eta/eta_ref), throat and fan-face Mach of
  * the recovery design; the correction step; spillage from the spillage
  * design's capture area at the corrected airflow (NACA Report 1187 additive
- * drag less lip suction). Thrust N, fuel kg/s, airflow kg/s (null: none).
+ * drag less lip suction). Thrust N, fuel kg/s, airflow kg/s (null: none);
+ * `sensitivities` are the deck's at the point (null: none), needed by the
+ * deckSensitivities method.
  */
 export function installDeckPointInto(
   s: EngineScratch,
@@ -100,6 +122,7 @@ export function installDeckPointInto(
   deckThrust_N: number,
   deckFuelFlow_kg_s: number,
   deckAirflow_kg_s: number | null,
+  sensitivities: InstallationSensitivities | null,
 ): void {
   const mach = free.mach;
   s.throatMach = null;
@@ -114,6 +137,8 @@ export function installDeckPointInto(
   inlet.referenceRecovery = referenceRecoveryAt(ctx.referenceRecovery, mach);
   deck.thrust_N = deckThrust_N;
   deck.fuelFlow_kg_s = deckFuelFlow_kg_s;
+  deck.deckAirflow_kg_s = deckAirflow_kg_s;
+  deck.sensitivities = sensitivities;
   const source = ctx.recoveryInlet.design.source;
   if (source.kind === 'geometry') {
     if (deckAirflow_kg_s !== null) {
@@ -135,10 +160,17 @@ export function installDeckPointInto(
     s.tableOutside = r.outside;
     deck.airflow_kg_s = deckAirflow_kg_s === null ? null : (deckAirflow_kg_s * r.recovery) / inlet.referenceRecovery;
   }
+  if (ctx.recoveryOffset !== 0) {
+    if (deck.airflow_kg_s !== null && inlet.recovery > 0) deck.airflow_kg_s *= (inlet.recovery + ctx.recoveryOffset) / inlet.recovery;
+    inlet.recovery += ctx.recoveryOffset;
+  }
   const corrected = correctDeckPoint(ctx.method, deck, inlet, ctx.installation);
   s.correctedThrust_N = corrected.thrust_N;
   s.fuelFlow_kg_s = corrected.fuelFlow_kg_s;
   s.airflow_kg_s = corrected.airflow_kg_s;
+  s.recoveryLoss_N = corrected.recoveryLoss_N;
+  s.bleedLoss_N = corrected.bleedLoss_N;
+  s.extractionLoss_N = corrected.extractionLoss_N;
   if (s.airflow_kg_s !== null) {
     const a0 = streamTubeArea(s.airflow_kg_s, free);
     s.massFlowRatio = Number.isFinite(a0) ? a0 / ctx.spillCapture_m2 : null;
@@ -163,10 +195,13 @@ export function evaluateEngineInto(
 ): void {
   const looked = access.lookup(condition, power);
   if (!looked.ok) {
-    installDeckPointInto(s, ctx, free, 0, 0, null);
+    installDeckPointInto(s, ctx, free, 0, 0, null, null);
     s.deckError = looked.error;
     s.correctedThrust_N = 0;
     s.fuelFlow_kg_s = 0;
+    s.recoveryLoss_N = 0;
+    s.bleedLoss_N = 0;
+    s.extractionLoss_N = 0;
     s.inlet.recovery = s.inlet.referenceRecovery;
     s.outside = NO_AXES;
     s.deckCautions = NO_CAUTIONS;
@@ -176,7 +211,7 @@ export function evaluateEngineInto(
   s.deckError = null;
   s.outside = d.outside;
   s.deckCautions = d.cautions;
-  installDeckPointInto(s, ctx, free, d.thrust_N, d.fuelFlow_kg_s, d.airflow_kg_s);
+  installDeckPointInto(s, ctx, free, d.thrust_N, d.fuelFlow_kg_s, d.airflow_kg_s, d.sensitivities);
 }
 
 /** Installed net propulsive force of one engine in `s` (N): corrected thrust less spillage. */
@@ -236,6 +271,10 @@ export function assembleInstalledPoint(
       massFlowRatio: s.massFlowRatio,
       throatMach: s.throatMach,
       fanFaceMach: s.fanFaceMach,
+      installationMethod: ctx.method,
+      recoveryLoss_N: s.recoveryLoss_N,
+      bleedLoss_N: s.bleedLoss_N,
+      extractionLoss_N: s.extractionLoss_N,
     },
     outsideTable: s.outside,
     cautions: engineCautions(s, ctx, extra),

@@ -8,8 +8,9 @@
  * must handle it.
  */
 import { applyInstallationCorrections, bleedFraction, type InstallationSettings } from './installationCorrections';
+import { applyDeckSensitivities, type InstallationSensitivities } from './installationSensitivities';
 
-export type InstallationMethodId = 'raymerCorrections';
+export type InstallationMethodId = 'raymerCorrections' | 'deckSensitivities';
 
 export interface InstallationMethodEntry {
   readonly id: InstallationMethodId;
@@ -21,10 +22,25 @@ export interface InstallationMethodEntry {
 export const INSTALLATION_METHODS: Readonly<Record<InstallationMethodId, InstallationMethodEntry>> = {
   raymerCorrections: {
     id: 'raymerCorrections',
-    title: 'Ram-recovery, bleed and power-extraction corrections of the deck point',
+    title: "Raymer's ram-recovery, bleed and power-extraction corrections of the deck point (thrust loss C_ram x recovery shortfall and C_bleed x bleed fraction, fuel flow held at the power setting)",
     source: 'Raymer, Aircraft Design: A Conceptual Approach, installed thrust methodology (coefficients from memory, docs/installation.md)',
   },
+  deckSensitivities: {
+    id: 'deckSensitivities',
+    title: "The deck's installation sensitivities (thrust, fuel flow and airflow linear in recovery, bleed fraction and extracted power at the power setting)",
+    source: 'First-order expansion about the deck point in its per-point sensitivity columns (docs/deck-format.md); a cycle-generated deck computes them through the cycle',
+  },
 };
+
+/** One line naming the method, for every installed result. */
+export function describeInstallationMethod(method: InstallationMethodId): string {
+  return INSTALLATION_METHODS[method].title;
+}
+
+/** The method a deck calls for: its sensitivities when it carries them, else Raymer's corrections. */
+export function defaultInstallationMethod(hasSensitivities: boolean): InstallationMethodId {
+  return hasSensitivities ? 'deckSensitivities' : 'raymerCorrections';
+}
 
 /** One engine's uninstalled deck numbers at the query (SI): the input of the step. */
 export interface DeckPointValues {
@@ -32,6 +48,10 @@ export interface DeckPointValues {
   readonly fuelFlow_kg_s: number;
   /** Physical airflow at the inlet's recovery (kg/s), null without an airflow column. */
   readonly airflow_kg_s: number | null;
+  /** Deck airflow at the reference recovery (kg/s), null without an airflow column: the base of the sensitivities' expansion. */
+  readonly deckAirflow_kg_s?: number | null;
+  /** The deck's installation sensitivities at the point; null (or absent) when it has none. */
+  readonly sensitivities?: InstallationSensitivities | null;
 }
 
 /** What the inlet delivers at the query: recovery pt2/pt0 (-) and the deck's reference recovery (-). */
@@ -46,13 +66,21 @@ export interface CorrectedDeckPoint {
   readonly fuelFlow_kg_s: number;
   readonly airflow_kg_s: number | null;
   readonly method: InstallationMethodId;
+  /** Thrust lost (N) to recovery below the reference (negative: a gain), to bleed and to extraction, by the method. */
+  readonly recoveryLoss_N: number;
+  readonly bleedLoss_N: number;
+  readonly extractionLoss_N: number;
 }
 
 /**
  * Installed thrust (N), fuel flow (kg/s) and airflow (kg/s) of one engine by
  * `method`. raymerCorrections: T = T_deck (1 - C_ram (eta_ref - eta) -
  * C_bleed f_bleed) - k_T P, W_f = W_f,deck (1 + k_b f_bleed) + k_f P
- * (installationCorrections.ts); airflow passes through.
+ * (installationCorrections.ts); airflow passes through. deckSensitivities:
+ * X = X_deck + dX/deta (eta - eta_ref) + dX/dbeta beta + dX/dP P for
+ * thrust, fuel flow and airflow (installationSensitivities.ts), the bleed
+ * fraction beta taken on the airflow at the inlet's recovery; needs
+ * `deck.sensitivities` (a caller bug without them: throws).
  */
 export function correctDeckPoint(
   method: InstallationMethodId,
@@ -70,7 +98,37 @@ export function correctDeckPoint(
         bleedFraction(installation.bleed, deck.airflow_kg_s),
         installation,
       );
-      return { thrust_N: corrected.thrust_N, fuelFlow_kg_s: corrected.fuelFlow_kg_s, airflow_kg_s: deck.airflow_kg_s, method };
+      return {
+        thrust_N: corrected.thrust_N,
+        fuelFlow_kg_s: corrected.fuelFlow_kg_s,
+        airflow_kg_s: deck.airflow_kg_s,
+        method,
+        recoveryLoss_N: deck.thrust_N * corrected.ramLoss,
+        bleedLoss_N: deck.thrust_N * corrected.bleedLoss,
+        extractionLoss_N: corrected.extractionThrust_N,
+      };
+    }
+    case 'deckSensitivities': {
+      const s = deck.sensitivities;
+      if (s == null) throw new Error('correctDeckPoint: method deckSensitivities needs the deck point\'s sensitivities');
+      const e = applyDeckSensitivities(
+        deck.thrust_N,
+        deck.fuelFlow_kg_s,
+        deck.deckAirflow_kg_s ?? deck.airflow_kg_s,
+        s,
+        inlet.recovery - inlet.referenceRecovery,
+        bleedFraction(installation.bleed, deck.airflow_kg_s),
+        installation.powerExtraction_W,
+      );
+      return {
+        thrust_N: e.thrust_N,
+        fuelFlow_kg_s: e.fuelFlow_kg_s,
+        airflow_kg_s: e.airflow_kg_s,
+        method,
+        recoveryLoss_N: e.recoveryLoss_N,
+        bleedLoss_N: e.bleedLoss_N,
+        extractionLoss_N: e.extractionLoss_N,
+      };
     }
   }
 }

@@ -1,14 +1,8 @@
 /**
  * Why installed thrust is below the deck's: one engine's loss split into
  * recovery, bleed, shaft power extraction and spillage, each in newtons,
- * from an EnginePoint and the installation settings that produced it.
+ * as the EnginePoint carries them.
  */
-import {
-  DEFAULT_C_BLEED,
-  DEFAULT_C_RAM,
-  bleedFraction,
-  type InstallationSettings,
-} from './installationCorrections';
 import type { EnginePoint } from './propulsionModel';
 
 export interface InstalledLossBreakdown {
@@ -25,17 +19,14 @@ export interface InstalledLossBreakdown {
 }
 
 /**
- * Splits one engine's installation loss (N) into its parts, using the same
- * Raymer corrections as installationCorrections.ts: recovery
- * T_deck C_ram (eta_ref - eta), bleed T_deck C_bleed f_bleed, extraction
- * k_T P, and the spillage drag. The parts add up to
- * uninstalledThrust_N - thrust_N.
+ * Splits one engine's installation loss (N) into its parts, as the
+ * installation computed them by its method (the deck's sensitivities, or
+ * Raymer's corrections: recovery T_deck C_ram (eta_ref - eta), bleed
+ * T_deck C_bleed f_bleed, extraction k_T P), and the spillage drag. The
+ * parts add up to uninstalledThrust_N - thrust_N.
  */
-export function installedLossBreakdown(engine: EnginePoint, installation: InstallationSettings): InstalledLossBreakdown {
-  const t = engine.uninstalledThrust_N;
-  const recoveryLoss_N = t * (installation.cRam ?? DEFAULT_C_RAM) * (engine.referenceRecovery - engine.recovery);
-  const bleedLoss_N = t * (installation.cBleed ?? DEFAULT_C_BLEED) * bleedFraction(installation.bleed, engine.airflow_kg_s);
-  const extractionLoss_N = installation.powerExtraction_W * (installation.powerExtractionThrust_N_W ?? 0);
+export function installedLossBreakdown(engine: EnginePoint): InstalledLossBreakdown {
+  const { recoveryLoss_N, bleedLoss_N, extractionLoss_N } = engine;
   const spillage_N = engine.spillageDrag_N;
   return {
     recoveryLoss_N,

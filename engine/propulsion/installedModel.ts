@@ -22,7 +22,7 @@ import {
 import type { InletDesign } from './inletDesign';
 import type { FreeStream } from './inletFlow';
 import { prepareInlet, type PreparedInlet } from './inletRecovery';
-import type { InstallationMethodId } from './installationMethod';
+import { defaultInstallationMethod, type InstallationMethodId } from './installationMethod';
 import { validateInstallation, type InstallationSettings } from './installationCorrections';
 import { newPartPowerSolve, solvePartPower } from './partPowerSolve';
 import type { FlightCondition, InstalledPoint, PartPowerPoint, PropulsionModel, RatingName, SlopeBreaks, ThrustLimit } from './propulsionModel';
@@ -39,8 +39,16 @@ export interface InstalledModelOptions {
   /** Design whose capture area and lip suction set the spillage drag; default `inlet`. */
   readonly spillageFrom?: InletDesign;
   readonly installation: InstallationSettings;
-  /** How the deck point is corrected to the installation; default raymerCorrections. */
+  /**
+   * How the deck point is corrected to the installation; default the deck's
+   * sensitivities when it carries them, else raymerCorrections.
+   */
   readonly method?: InstallationMethodId;
+  /**
+   * Added to the inlet's recovery (-), e.g. +0.01 for a trade factor; the
+   * installation method then carries it through (default 0).
+   */
+  readonly recoveryOffset?: number;
   readonly cautionSettings: CautionSettings;
 }
 
@@ -62,6 +70,14 @@ function installationContext(access: DeckAccess, options: InstalledModelOptions)
   if (installIssues.length > 0) {
     throw new Error(`installation settings are invalid: ${installIssues.map((i) => `${i.path}: ${i.message}`).join('; ')}`);
   }
+  const method = options.method ?? defaultInstallationMethod(access.hasSensitivities);
+  if (method === 'deckSensitivities' && !access.hasSensitivities) {
+    throw new Error(`installation method deckSensitivities needs a deck with sensitivity columns; deck "${access.title}" has none`);
+  }
+  const recoveryOffset = options.recoveryOffset ?? 0;
+  if (!Number.isFinite(recoveryOffset) || Math.abs(recoveryOffset) > 0.5) {
+    throw new Error(`recoveryOffset is ${recoveryOffset}, expected a finite number within +-0.5`);
+  }
   unwrapInlet(options.inlet, 'inlet');
   const recoveryInlet = unwrapInlet(options.recoveryFrom ?? options.inlet, 'recoveryFrom');
   const spillageInlet = unwrapInlet(options.spillageFrom ?? options.inlet, 'spillageFrom');
@@ -70,7 +86,8 @@ function installationContext(access: DeckAccess, options: InstalledModelOptions)
     spillCapture_m2: spillageInlet.design.source.captureArea_m2,
     spillLip: spillageInlet.design.lipSuctionFactor,
     installation: options.installation,
-    method: options.method ?? 'raymerCorrections',
+    method,
+    recoveryOffset,
     referenceRecovery: access.referenceRecovery,
     cautionSettings: options.cautionSettings,
     engineCount,
@@ -182,8 +199,10 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
     parametric: access.parametric,
     inletName: options.inlet.name,
     slopeBreaks: installedSlopeBreaks(access, ctx),
+    installationMethod: ctx.method,
     atRating,
     atPower,
     forThrust,
+    withRecoveryOffset: (delta) => makeInstalledModel(access, { ...options, recoveryOffset: ctx.recoveryOffset + delta }),
   };
 }

@@ -5,7 +5,7 @@
  */
 import { atmosphere } from '../aero/standardAtmosphere';
 import type { CautionSettings } from '../cautions/cautionSettings';
-import { createDeckNodeSet, evaluateDeckNodesInto, fillDeckNodes } from './deckGrid';
+import { createDeckNodeSet, DECK_VALUES_WITH_SENSITIVITIES, evaluateDeckNodesInto, fillDeckNodes } from './deckGrid';
 import { powerForThrust } from './deckInversion';
 import { lookupDeck, powerBounds, ratingPower } from './deckLookup';
 import { temperatureFlowFactor } from './deckTemperature';
@@ -13,6 +13,7 @@ import type { EngineDeck } from './engineDeck';
 import type { InletDesign } from './inletDesign';
 import type { InstallationSettings } from './installationCorrections';
 import type { DeckAccess } from './deckAccess';
+import { emptySensitivities, readSensitivitiesInto, writeSensitivities } from './installationSensitivities';
 import { makeInstalledModel } from './installedModel';
 import type { FlightCondition, PropulsionModel } from './propulsionModel';
 
@@ -49,6 +50,7 @@ export function deckAccess(deck: EngineDeck): DeckAccess {
     title: deck.title,
     parametric: deck.parametric,
     hasAirflow: deck.hasAirflow,
+    hasSensitivities: deck.hasSensitivities,
     referenceRecovery: deck.referenceRecovery,
     slopeBreaks: { altitudes_m: sortedUnique(deck.grid.altitudes_m), machs: sortedUnique(deck.grid.machs) },
     lookup: (condition, power) => lookupDeck(deck, condition, power),
@@ -80,8 +82,10 @@ export function deckAccess(deck: EngineDeck): DeckAccess {
  * The deck at one condition as a function of power: `prepare(condition)`
  * finds the grid nodes and weights once, then `evaluate(power, out)` writes
  * thrust (N) and airflow (kg/s, NaN without an airflow column) into
- * out[0..1] by the same weights and temperature approximation as lookupDeck
- * (deckGrid.ts, deckTemperature.ts), floored at zero like lookupDeck's extrapolations. `evaluate` returns false where
+ * out[0..1], and for a deck with sensitivities the nine of them into
+ * out[2..10] (CURVE_VALUES entries), by the same weights and temperature
+ * approximation as lookupDeck (deckGrid.ts, deckTemperature.ts), thrust and
+ * airflow floored at zero like lookupDeck's extrapolations. `evaluate` returns false where
  * lookupDeck would refuse. One prepared condition at a time (buffers reused).
  */
 export function deckCurve(deck: EngineDeck): {
@@ -89,7 +93,8 @@ export function deckCurve(deck: EngineDeck): {
   evaluate(power: number, out: Float64Array): boolean;
 } {
   const nodes = createDeckNodeSet();
-  const values = new Float64Array(3);
+  const values = new Float64Array(DECK_VALUES_WITH_SENSITIVITIES);
+  const sensitivities = emptySensitivities();
   let filled = false;
   let airflowFactor = 1;
   return {
@@ -102,6 +107,7 @@ export function deckCurve(deck: EngineDeck): {
       // Floored at zero as lookupDeck floors them (the point finally evaluated carries its caution).
       out[0] = Math.max(values[0]!, 0);
       out[1] = deck.hasAirflow ? Math.max(values[2]! * airflowFactor, 0) : Number.NaN;
+      if (deck.hasSensitivities) writeSensitivities(readSensitivitiesInto(values, 3, deck.hasAirflow, 1 / airflowFactor, sensitivities), out, 2);
       return true;
     },
   };

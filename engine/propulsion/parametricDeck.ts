@@ -198,6 +198,7 @@ export function buildParametricDeck(spec: ParametricDeckSpec): EngineDeck {
     ratings,
     hasAirflow: true,
     hasIsaDev: grid.isaDevs_K !== undefined,
+    hasSensitivities: false,
     notes: [
       `Parametric ${spec.kind} deck: thrust lapse and TSFC from Mattingly, Aircraft Engine Design, 2nd ed., section 2.3.2 (eqs. 2.54, 2.55), throttle ratio ${spec.throttleRatio}.`,
       'Invented engine; treated as UNINSTALLED at the MIL-E-5008B reference recovery with no bleed or power extraction; per engine.',

@@ -7,7 +7,8 @@
  * call (forThrust runs thousands of times per mission).
  */
 import { brent } from '../core/rootFind';
-import type { DeckAccess, DeckCurve } from './deckAccess';
+import { CURVE_VALUES, type DeckAccess, type DeckCurve } from './deckAccess';
+import { emptySensitivities, readSensitivitiesInto, type MutableSensitivities } from './installationSensitivities';
 import {
   evaluateEngineInto,
   installDeckPointInto,
@@ -29,6 +30,8 @@ export interface PartPowerSolve {
   readonly full: EngineScratch;
   readonly fast: EngineScratch;
   readonly curveOut: Float64Array;
+  /** The curve's sensitivities at the last power (reused). */
+  readonly curveSensitivities: MutableSensitivities;
   /** Installed thrust per engine at a power less `required_N` (N): made once per solve object. */
   readonly residual: (power: number) => number;
   condition: FlightCondition;
@@ -44,7 +47,8 @@ export function newPartPowerSolve(ctx: InstallationContext, access: DeckAccess, 
     access,
     full,
     fast: newEngineScratch(),
-    curveOut: new Float64Array(2),
+    curveOut: new Float64Array(CURVE_VALUES),
+    curveSensitivities: emptySensitivities(),
     residual: (power) => solveThrustAt(solve, power) - solve.required_N,
     condition: { altitude_m: 0, mach: 0, isaDev_K: 0 },
     free: { mach: 0, pressure_Pa: 0, temperature_K: 0 },
@@ -58,7 +62,9 @@ export function newPartPowerSolve(ctx: InstallationContext, access: DeckAccess, 
 export function solveThrustAt(solve: PartPowerSolve, power: number): number {
   if (solve.curve !== undefined && solve.curve(power, solve.curveOut)) {
     const air = solve.curveOut[1]!;
-    installDeckPointInto(solve.fast, solve.ctx, solve.free, solve.curveOut[0]!, 0, Number.isNaN(air) ? null : air);
+    const hasAir = !Number.isNaN(air);
+    const sens = solve.access.hasSensitivities ? readSensitivitiesInto(solve.curveOut, 2, hasAir, 1, solve.curveSensitivities) : null;
+    installDeckPointInto(solve.fast, solve.ctx, solve.free, solve.curveOut[0]!, 0, hasAir ? air : null, sens);
     return netThrustOf(solve.fast);
   }
   evaluateEngineInto(solve.full, solve.ctx, solve.access, solve.condition, solve.free, power);

@@ -11,6 +11,7 @@
  * `externalDragArea_m2` / dCD0) and is NOT in `thrust_N`.
  */
 import type { Caution } from '../cautions/caution';
+import type { InstallationMethodId } from './installationMethod';
 
 export type RatingName = 'takeoff' | 'maxClimb' | 'maxCruise' | 'maxContinuous' | 'flightIdle';
 
@@ -56,6 +57,16 @@ export interface EnginePoint {
   readonly massFlowRatio: number | null;
   readonly throatMach: number | null;
   readonly fanFaceMach: number | null;
+  /** How recovery, bleed and extraction were applied: the deck's sensitivities, or Raymer's rule. */
+  readonly installationMethod: InstallationMethodId;
+  /**
+   * Thrust lost (N) to recovery below the deck's reference (negative is a
+   * gain), to customer bleed and to shaft power extraction, by that method;
+   * uninstalledThrust_N - these three = correctedThrust_N.
+   */
+  readonly recoveryLoss_N: number;
+  readonly bleedLoss_N: number;
+  readonly extractionLoss_N: number;
 }
 
 /** Whole-aircraft installed numbers at a condition and power setting. */
@@ -103,6 +114,8 @@ export interface PropulsionModel {
    * and speed changes end their steps there. Absent for smooth models.
    */
   readonly slopeBreaks?: SlopeBreaks;
+  /** How the installation applies recovery, bleed and extraction (every point also says so). */
+  readonly installationMethod: InstallationMethodId;
   /** Installed numbers at a named rating. */
   atRating(condition: FlightCondition, rating: RatingName): InstalledPoint;
   /** Installed numbers at a power-axis value. */
@@ -118,4 +131,10 @@ export interface PropulsionModel {
     thrustRequired_N: number,
     ceilingRating?: RatingName,
   ): PartPowerPoint;
+  /**
+   * The same propulsion with the inlet recovery raised by `delta` (-),
+   * carried through the installation method (for trade factors); absent
+   * when the model cannot rebuild itself.
+   */
+  withRecoveryOffset?(delta: number): PropulsionModel;
 }

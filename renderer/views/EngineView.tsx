@@ -1,3 +1,4 @@
+import { describeInstallationMethod } from '../../engine/propulsion/installationMethod';
 import { useState } from 'react';
 import type { RatingName } from '../../engine/propulsion/propulsionModel';
 import { formatQuantity } from '../../engine/units/quantity';
@@ -87,6 +88,8 @@ export function EngineView(props: { readonly live: LiveStudy; readonly chartSize
           <dd>{snapshot.deck.referenceRecovery}</dd>
           <dt>Airflow column</dt>
           <dd>{snapshot.deck.hasAirflow ? 'yes' : 'no (spillage drag not computed)'}</dd>
+          <dt>Installation method</dt>
+          <dd data-testid="installation-method">{describeInstallationMethod(snapshot.deck.installationMethod)}</dd>
         </dl>
       ) : null}
       <div className="field-grid">

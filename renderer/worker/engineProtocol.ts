@@ -2,6 +2,7 @@
  * Messages between the renderer and the engine worker. Requests carry the
  * project (SI) and the deck file; replies carry plain data (structured clone).
  */
+import type { InstallationMethodId } from '../../engine/propulsion/installationMethod';
 import type { CrossoverResult } from '../../engine/analysis/crossover';
 import type { InletComparisonResult } from '../../engine/analysis/inletComparison';
 import type { PayloadRangeResult } from '../../engine/analysis/payloadRange';
@@ -85,6 +86,8 @@ export interface DeckSummary {
   readonly ratings: readonly { readonly name: string; readonly power: number }[];
   readonly referenceRecovery: string;
   readonly hasAirflow: boolean;
+  /** How the installation applies recovery, bleed and extraction: the deck's sensitivity columns, or Raymer's rule. */
+  readonly installationMethod: InstallationMethodId;
   readonly notes: readonly string[];
 }
 

@@ -1,4 +1,5 @@
 /** The curves the views plot, computed from a mission input (runs in the worker). */
+import { defaultInstallationMethod } from '../../engine/propulsion/installationMethod';
 import { polarCoefficients, type DragPolarModel } from '../../engine/aero/dragPolar';
 import type { MissionInput } from '../../engine/mission/missionTypes';
 import type { EngineDeck } from '../../engine/propulsion/engineDeck';
@@ -95,6 +96,7 @@ export function deckSummary(deck: EngineDeck): DeckSummary {
     ratings: Object.entries(deck.ratings).map(([name, power]) => ({ name, power: power ?? NaN })),
     referenceRecovery: describeReferenceRecovery(deck.referenceRecovery),
     hasAirflow: deck.hasAirflow,
+    installationMethod: defaultInstallationMethod(deck.hasSensitivities),
     notes: deck.notes,
   };
 }

@@ -51,6 +51,9 @@ describe('blockwise fly <demo> --json', () => {
     expect(Array.isArray(demo.legs)).toBe(true);
     expect(Array.isArray(demo.cautions)).toBe(true);
     expect(demo.notice).toBe(SAFETY_NOTICE);
+    // The method follows the deck: its sensitivity columns when it has them, else Raymer's rule.
+    const demoDeckText = readFileSync(join(repoRoot, 'fixtures/demo/demo-engine.deck.csv'), 'utf8');
+    expect(demo.installationMethod).toBe(/dthrust_drecovery\[/.test(demoDeckText) ? 'deckSensitivities' : 'raymerCorrections');
     const reserves = demo.reserves as Record<string, number>;
     for (const key of ['contingency_kg', 'alternate_kg', 'finalReserve_kg', 'extra_kg', 'total_kg']) {
       expect(Number.isFinite(reserves[key]), key).toBe(true);

@@ -8,6 +8,7 @@ import { expectOk } from '../../engine/core/result';
 import { parseDeckCsv } from '../../engine/propulsion/deckCsv';
 import { makeInstalledPropulsion } from '../../engine/propulsion/installedPropulsion';
 import { expectClose } from '../support/assertInDelta';
+import { syntheticDeckCsv } from '../engine/propulsion/sensitivityDeck';
 import { repoRoot, run } from './support/cliRun';
 
 const DEMO_DECK = 'fixtures/demo/demo-engine.deck.csv';
@@ -83,5 +84,37 @@ describe('blockwise inlet', () => {
     const badBleed = await run('inlet', DEMO_DECK, '--design', DEMO_PROJECT, '--altitude', '30000 ft', '--mach', '0.7', '--bleed', '0.9');
     expect(badBleed.code).toBe(2);
     expect(badBleed.err).toContain('--bleed');
+  });
+
+  it('inlet on a deck with sensitivity columns installs through them and names the method in text and JSON', async () => {
+    const deckFile = join(dir, 'synthetic.csv');
+    writeFileSync(deckFile, syntheticDeckCsv(true));
+    const design = join(dir, 'geometry-sens.json');
+    writeFileSync(design, JSON.stringify(GEOMETRY_INLET));
+    const args = [deckFile, '--design', design, '--altitude', '20000 ft', '--mach', '0.6', '--power', 'maxCruise', '--bleed', '0.01', '--extraction', '50 kW'];
+    const text = await run('inlet', ...args);
+    expect(text.code).toBe(0);
+    expect(text.out).toContain("installation method: The deck's installation sensitivities");
+    const r = await run('inlet', ...args, '--json');
+    const json = JSON.parse(r.out) as { installationMethod: string; designs: { point: { thrust_N: number; perEngine: { installationMethod: string } } }[] };
+    expect(json.installationMethod).toBe('deckSensitivities');
+    expect(json.designs[0]!.point.perEngine.installationMethod).toBe('deckSensitivities');
+    const deck = expectOk(parseDeckCsv(syntheticDeckCsv(true), 'synthetic.csv'), 'synthetic deck');
+    const model = makeInstalledPropulsion({
+      deck,
+      engineCount: 2,
+      inlet: {
+        name: 'geometry one',
+        description: '',
+        source: { kind: 'geometry', captureArea_m2: 0.56, throatArea_m2: 0.5, fanFaceArea_m2: 0.6, diffuserLossCoefficient: 0.04 },
+        lipSuctionFactor: 0.8,
+        externalDragArea_m2: 0.14,
+        weight_kg: 110,
+      },
+      installation: { bleed: { kind: 'coreFraction', fraction: 0.01 }, powerExtraction_W: 50e3 },
+      cautionSettings: DEFAULT_CAUTION_SETTINGS,
+    });
+    const p = model.atRating({ altitude_m: 20000 * FT, mach: 0.6, isaDev_K: 0 }, 'maxCruise');
+    expectClose(json.designs[0]!.point.thrust_N, p.thrust_N, { rel: 1e-12 }, 'same engine call');
   });
 });

@@ -228,3 +228,83 @@ describe('docs/deck-format.md examples', () => {
     expect(deck.notes).toEqual(['invented numbers']);
   });
 });
+
+describe('parseDeckCsv with installation-sensitivity columns', () => {
+  const HP_W = 550 * FT_M * LBF_N; // mechanical horsepower, 550 ft lbf/s (NIST SP 811 B.8)
+  const small = (header: string, cells: (r: number) => string): string =>
+    [
+      '# title: small sensitivity deck',
+      `altitude[ft],mach[-],power[-],thrust[lbf],fuel_flow[lb/h],airflow[lb/s],${header}`,
+      ...[0, 1, 2, 3, 4, 5, 6, 7].map((i) => {
+        const h = i < 4 ? 0 : 10000;
+        const m = i % 4 < 2 ? 0 : 0.5;
+        const p = i % 2 === 0 ? 0.5 : 1;
+        return `${h},${m},${p},${1000 * (1 + p)},${500 * p},${50 + 10 * p},${cells(i)}`;
+      }),
+      '',
+    ].join('\n');
+  const ALL =
+    'dthrust_drecovery[lbf],dfuel_flow_drecovery[lb/h],dairflow_drecovery[lb/s],' +
+    'dthrust_dbleed[lbf],dfuel_flow_dbleed[lb/h],dairflow_dbleed[lb/s],' +
+    'dthrust_dextraction[lbf/hp],dfuel_flow_dextraction[lb/h/hp],dairflow_dextraction[lb/s/hp]';
+
+  it('parseDeckCsv reads the nine sensitivity columns in customary units to SI (NIST SP 811 factors)', () => {
+    const deck = expectOk(parseDeckCsv(small(ALL, () => '1500,400,55,-2000,30,-3,-0.8,0.45,0.002'), 'sens.csv'), 'deck');
+    expect(deck.hasSensitivities).toBe(true);
+    const s = deckGridPoints(deck.grid)[0]!.sensitivities!;
+    expectClose(s.dThrust_dRecovery_N, 1500 * LBF_N, { rel: 1e-15 }, 'lbf');
+    expectClose(s.dFuelFlow_dRecovery_kg_s, (400 * LB_KG) / 3600, { rel: 1e-15 }, 'lb/h');
+    expectClose(s.dAirflow_dRecovery_kg_s!, 55 * LB_KG, { rel: 1e-15 }, 'lb/s');
+    expectClose(s.dThrust_dBleed_N, -2000 * LBF_N, { rel: 1e-15 }, 'lbf');
+    expectClose(s.dThrust_dExtraction_N_W, (-0.8 * LBF_N) / HP_W, { rel: 1e-15 }, 'lbf/hp');
+    expectClose(s.dFuelFlow_dExtraction_kg_s_W, (0.45 * LB_KG) / 3600 / HP_W, { rel: 1e-15 }, 'lb/h/hp');
+    expectClose(s.dAirflow_dExtraction_kg_s_W!, (0.002 * LB_KG) / HP_W, { rel: 1e-15 }, 'lb/s/hp');
+  });
+
+  it('parseDeckCsv names a missing sensitivity column and a per-watt column without a power unit', () => {
+    const missing = parseDeckCsv(small(ALL.split(',').slice(0, 8).join(','), () => '1500,400,55,-2000,30,-3,-0.8,0.45'), 'sens.csv');
+    expect(missing.ok).toBe(false);
+    if (!missing.ok) {
+      expect(missing.error.map((e) => e.code)).toEqual(['missing_column']);
+      expect(missing.error[0]!.message).toMatch(/sens\.csv line 2, column "dairflow_dextraction": missing column "dairflow_dextraction"/);
+    }
+    const wrong = parseDeckCsv(small(ALL.replace('dthrust_dextraction[lbf/hp]', 'dthrust_dextraction[lbf]'), () => '1,1,1,1,1,1,1,1,1'), 'sens.csv');
+    expect(wrong.ok).toBe(false);
+    if (!wrong.ok) {
+      expect(wrong.error[0]!.code).toBe('wrong_unit_dimension');
+      expect(wrong.error[0]!.message).toMatch(/column "dthrust_dextraction\[lbf\]": unit "lbf" is not right .* force per power unit/);
+    }
+    const kgPerHp = parseDeckCsv(small(ALL.replace('dthrust_dextraction[lbf/hp]', 'dthrust_dextraction[kg/hp]'), () => '1,1,1,1,1,1,1,1,1'), 'sens.csv');
+    expect(kgPerHp.ok ? '' : kgPerHp.error[0]!.code).toBe('wrong_unit_dimension');
+  });
+
+  it('parseDeckCsv refuses airflow sensitivities on a deck without airflow, and checks their values', () => {
+    const text = small(ALL, () => '1500,400,55,-2000,30,-3,-0.8,0.45,0.002').replace(',airflow[lb/s]', '').replace(/^(\d+,[\d.]+,[\d.]+,[\d.]+,[\d.]+),[\d.]+,/gm, '$1,');
+    const r = parseDeckCsv(text, 'sens.csv');
+    expect(r.ok).toBe(false);
+    if (!r.ok) {
+      expect(r.error.map((e) => e.code)).toEqual(['unknown_column', 'unknown_column', 'unknown_column']);
+      expect(r.error[0]!.message).toMatch(/column "dairflow_drecovery\[lb\/s\]": .*needs an airflow column/);
+    }
+    const bad = parseDeckCsv(small(ALL, (i) => (i === 3 ? 'nan,1,1,1,1,1,1,1,1' : '1,1,1,1,1,1,1,1,1e9')), 'sens.csv');
+    expect(bad.ok).toBe(false);
+    if (!bad.ok) {
+      expect(bad.error.some((e) => e.code === 'not_finite' && e.line === 6 && e.column === 'dthrust_drecovery[lbf]')).toBe(true);
+      expect(bad.error.some((e) => e.code === 'out_of_range' && e.column === 'dairflow_dextraction[lb/s/hp]')).toBe(true);
+    }
+  });
+
+  it('deckToCsv writes the sensitivity columns and reads back exactly in SI and to 15 digits in customary units', () => {
+    const deck = expectOk(parseDeckCsv(small(ALL, (i) => `${1500 + i},400,55,-2000,30,-3,-0.8,0.45,0.002`), 'sens.csv'), 'deck');
+    const si = expectOk(parseDeckCsv(deckToCsv(deck), 'si.csv'), 'SI round trip');
+    expect(deckGridPoints(si.grid)).toEqual(deckGridPoints(deck.grid));
+    const text = deckToCsv(deck, CUSTOMARY_DECK_UNITS);
+    expect(text).toMatch(/dthrust_dextraction\[lbf\/hp\],dfuel_flow_dextraction\[lb\/h\/hp\],dairflow_dextraction\[lb\/s\/hp\]/);
+    const back = deckGridPoints(expectOk(parseDeckCsv(text, 'c.csv'), 'customary round trip').grid);
+    deckGridPoints(deck.grid).forEach((p, i) => {
+      for (const [k, v] of Object.entries(p.sensitivities!)) {
+        expectClose((back[i]!.sensitivities as unknown as Record<string, number>)[k]!, v as number, { rel: 1e-15 }, `round trip ${k}`);
+      }
+    });
+  });
+});

@@ -6,6 +6,7 @@ import { deckToJson, parseDeckJson } from '../../../engine/propulsion/deckJson';
 import { buildParametricDeck } from '../../../engine/propulsion/parametricDeck';
 import { DEMO_ENGINE_SPEC } from '../../../engine/propulsion/deckDemoSpec';
 import { raggedDeck } from './deckTestDecks';
+import { syntheticDeck } from './sensitivityDeck';
 
 const SMALL = {
   format: 'blockwise-deck',
@@ -105,5 +106,25 @@ describe('deckToJson', () => {
     const back = expectOk(parseDeckJson(deckToJson(deck), 'ragged.json'), 'round trip');
     expect(deckGridPoints(back.grid)).toEqual(deckGridPoints(deck.grid));
     expect(back.policy.power).toBe('refuse');
+  });
+});
+
+describe('deckToJson with installation sensitivities', () => {
+  it('deckToJson round-trips a deck with sensitivity columns exactly, and parseDeckJson names a missing one', () => {
+    const deck = syntheticDeck(true);
+    const text = deckToJson(deck);
+    const back = expectOk(parseDeckJson(text, 's.json'), 'round trip');
+    expect(back.hasSensitivities).toBe(true);
+    expect(deckGridPoints(back.grid)).toEqual(deckGridPoints(deck.grid));
+    const doc = JSON.parse(text) as { columns: string[]; points: number[][] };
+    const j = doc.columns.indexOf('dFuelFlow_dBleed_kg_s');
+    doc.columns.splice(j, 1);
+    doc.points = doc.points.map((p) => p.filter((_, k) => k !== j));
+    const r = parseDeckJson(JSON.stringify(doc), 's.json');
+    expect(r.ok).toBe(false);
+    if (!r.ok) {
+      expect(r.error[0]!.code).toBe('missing_column');
+      expect(r.error[0]!.message).toMatch(/s\.json.*columns.*missing column "dFuelFlow_dBleed_kg_s"/);
+    }
   });
 });

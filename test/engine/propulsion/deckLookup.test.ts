@@ -6,6 +6,7 @@ import type { EngineDeck } from '../../../engine/propulsion/engineDeck';
 import type { FlightCondition } from '../../../engine/propulsion/propulsionModel';
 import { expectClose } from '../../support/assertInDelta';
 import { loadInterpReference, raggedDeck, referenceDeck } from './deckTestDecks';
+import { syntheticAt, syntheticDeck } from './sensitivityDeck';
 
 // Expected values below are hand calculations of linear interpolation /
 // extrapolation on the tabulated numbers of RAGGED_CSV (deckTestDecks.ts).
@@ -232,5 +233,26 @@ describe('deckLookup floors', () => {
     const v = expectOk(lookupDeck(deck, at(500, 0.2), 1), 'lookup');
     expectClose(v.thrust_N, 2000, { abs: 1e-9 }, '10,000 - 2 x 4,000 N (hand calculation)');
     expect(v.cautions.map((c) => c.id)).not.toContain('deck_output_floored');
+  });
+});
+
+describe('lookupDeck with installation sensitivities', () => {
+  it('lookupDeck interpolates the sensitivity columns like the rest: exact on an affine deck (closed form)', () => {
+    const deck = syntheticDeck(true);
+    for (const [h, m, p] of [
+      [4321, 0.63, 0.77],
+      [0, 0, 0.2],
+      [11000, 0.85, 1],
+      [8000, 0.1, 0.45],
+    ] as const) {
+      const got = expectOk(lookupDeck(deck, { altitude_m: h, mach: m, isaDev_K: 0 }, p), 'lookup');
+      const want = syntheticAt(h, m, p);
+      for (const [k, v] of Object.entries(want.sensitivities)) {
+        expectClose((got.sensitivities as unknown as Record<string, number>)[k]!, v as number, { rel: 1e-12, abs: 1e-18 }, `affine ${k}`);
+      }
+      expectClose(got.thrust_N, want.thrust_N, { rel: 1e-13 }, 'affine thrust');
+    }
+    const none = expectOk(lookupDeck(syntheticDeck(false), { altitude_m: 100, mach: 0.3, isaDev_K: 0 }, 0.5), 'no airflow');
+    expect(none.sensitivities!.dAirflow_dRecovery_kg_s).toBeNull();
   });
 });

@@ -22,7 +22,7 @@ describe('installedLossBreakdown', () => {
       const m = makeInstalledPropulsion({ deck, engineCount: 2, inlet, installation, cautionSettings: DEFAULT_CAUTION_SETTINGS });
       for (const rating of ['maxCruise', 'maxClimb', 'flightIdle'] as const) {
         const e = m.atRating(cruise, rating).perEngine;
-        const b = installedLossBreakdown(e, installation);
+        const b = installedLossBreakdown(e);
         expectClose(b.total_N, e.uninstalledThrust_N - e.thrust_N, { rel: 1e-12, abs: 1e-9 }, 'bookkeeping identity');
         expect(b.spillage_N).toBe(e.spillageDrag_N);
         expect(b.extractionLoss_N).toBeCloseTo(40, 12);
@@ -36,7 +36,6 @@ describe('installedLossBreakdown', () => {
     const at = (inlet: typeof LONG_PITOT) =>
       installedLossBreakdown(
         makeInstalledPropulsion({ deck, engineCount: 2, inlet, installation, cautionSettings: DEFAULT_CAUTION_SETTINGS }).atRating(cruise, 'maxCruise').perEngine,
-        installation,
       );
     const long = at(LONG_PITOT);
     const short = at(SHORT_INLET);

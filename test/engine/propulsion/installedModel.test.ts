@@ -41,11 +41,12 @@ function linearAccess(d: LinearDeck): DeckAccess {
     title: 'Linear test deck (invented)',
     parametric: true,
     hasAirflow: d.airflow_kg_s !== null,
+    hasSensitivities: false,
     referenceRecovery: d.referenceRecovery ?? { kind: 'constant', value: 1 },
     lookup: (_c, power) =>
       d.refuseAbove !== undefined && power > d.refuseAbove
         ? err({ code: 'outside_deck', message: `power ${power} beyond the table` })
-        : ok({ power, thrust_N: T0 * power, fuelFlow_kg_s: F0 * power, airflow_kg_s: d.airflow_kg_s, outside: [], cautions: d.cautions ?? [] }),
+        : ok({ power, thrust_N: T0 * power, fuelFlow_kg_s: F0 * power, airflow_kg_s: d.airflow_kg_s, sensitivities: null, outside: [], cautions: d.cautions ?? [] }),
     ratingPower: (r) => ratings[r] ?? null,
     powerBounds: () => ({ idle: 0.1, max: 1 }),
     powerForThrust: (_c, thrust_N) => thrust_N / T0,
