@@ -12,6 +12,7 @@ export * from './core/table1d';
 export * from './core/table2d';
 export * from './units/dimension';
 export * from './units/displayUnits';
+export * from './units/messageParts';
 export * from './units/quantity';
 export * from './units/unitTable';
 export * from './aero/aeroModel';

@@ -118,7 +118,7 @@ function Shell(props: AppProps) {
           ) : null}
           <RecoveryBanner offer={recovery.offer} onRestore={recovery.restore} onDiscard={recovery.discard} />
           {recovery.problem ? <p className="app-message">{recovery.problem}</p> : null}
-          <IssueList issues={state.openIssues} testId="open-issues" title="That project could not be opened" />
+          <IssueList issues={state.openIssues} testId="open-issues" title="That project could not be opened" showFilePath />
           <main className="view" data-testid={`view-${view}`}>
             {project === null ? <p>Opening…</p> : <CurrentView view={view} live={live} onCommand={(c) => void commands.run(c)} {...(props.chartSize ? { chartSize: props.chartSize } : {})} />}
           </main>

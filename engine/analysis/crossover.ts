@@ -7,11 +7,12 @@
  */
 import type { Caution } from '../cautions/caution';
 import { err, ok, type Result } from '../core/result';
-import type { RatingName } from '../propulsion/propulsionModel';
+import { RATING_LABEL, type RatingName } from '../propulsion/propulsionModel';
 import type { AnalysisError, PerformanceModels } from './analysisTypes';
 import { liftLimitMachs } from './liftLimitMach';
 import { airAt, levelPoint } from './pointState';
 import { maximizeOnGrid, minimizeOnGrid, rootsOnPoints, uniformGrid } from './scalarSearch';
+import { messageText, msg, q, withParts, type MessageParts } from '../units/messageParts';
 
 export interface CrossoverQuery {
   /** Pressure altitude (m). */
@@ -40,6 +41,8 @@ export interface CrossoverResult {
   readonly status: CrossoverStatus;
   /** One readable sentence on the result (above the ceiling: says so for this mass). */
   readonly message: string;
+  /** The message with its numbers as quantities (messageText(parts, units)). */
+  readonly parts: MessageParts;
   readonly altitude_m: number;
   readonly mass_kg: number;
   readonly rating: RatingName;
@@ -138,7 +141,7 @@ export function thrustDragCrossover(
     return ok({
       ...base,
       status: 'above_ceiling',
-      message: `At ${query.altitude_m.toFixed(0)} m and ${query.mass_kg.toFixed(0)} kg the wing cannot lift the aircraft below Mach ${scanHi} (CLmax): above the ceiling for this mass.`,
+      ...withParts(msg`At ${q(query.altitude_m, 'altitude')} and ${q(query.mass_kg, 'mass')} the wing cannot lift the aircraft below Mach ${q(scanHi, 'mach')} (CLmax): above the ceiling for this mass.`),
       stallMach: null,
       machRange: [scanLo, scanHi],
       lowMach: null,
@@ -187,14 +190,18 @@ export function thrustDragCrossover(
   const lookups = [lo, hi, ...crossings].map(
     (m) => models.propulsion.atRating({ altitude_m: query.altitude_m, mach: m, isaDev_K: query.isaDev_K }, query.rating).cautions,
   );
-  const fmt = (m: number | null) => (m === null ? 'none' : `M ${m.toFixed(3)}`);
-  const message = aboveCeiling
-    ? `Thrust available at ${query.rating} stays below drag at every Mach from ${lo.toFixed(3)} to ${hi.toFixed(3)}: ${query.altitude_m.toFixed(0)} m is above the ceiling for ${query.mass_kg.toFixed(0)} kg (largest shortfall margin ${(-maxExcess.fx).toFixed(0)} N at M ${maxExcess.x.toFixed(3)}).`
-    : `Level flight at ${query.rating} from ${lowMach === null ? `M ${lo.toFixed(3)} (${stallMach !== null && lo === stallMach ? 'stall' : 'scan start'})` : fmt(lowMach)} to ${highMach === null ? `M ${hi.toFixed(3)} (scan end)` : fmt(highMach)}.`;
+  const rating = RATING_LABEL[query.rating];
+  const lowText = lowMach === null ? msg`M ${q(lo, 'mach')} (${stallMach !== null && lo === stallMach ? 'stall' : 'scan start'})` : msg`M ${q(lowMach, 'mach')}`;
+  const highText = highMach === null ? msg`M ${q(hi, 'mach')} (scan end)` : msg`M ${q(highMach, 'mach')}`;
+  const parts = aboveCeiling
+    ? msg`Thrust available at ${rating} stays below drag at every Mach from ${q(lo, 'mach')} to ${q(hi, 'mach')}: ${q(query.altitude_m, 'altitude')} is above the ceiling for ${q(query.mass_kg, 'mass')} (largest shortfall ${q(-maxExcess.fx, 'force')} at M ${q(maxExcess.x, 'mach')}).`
+    : msg`Level flight at ${rating} from ${lowText} to ${highText}.`;
+  const message = messageText(parts, 'both');
   return ok({
     ...base,
     status: aboveCeiling ? 'above_ceiling' : 'ok',
     message,
+    parts,
     stallMach,
     machRange: [lo, hi],
     lowMach: aboveCeiling ? null : lowMach,

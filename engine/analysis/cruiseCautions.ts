@@ -6,6 +6,7 @@
 import type { AeroModel } from '../aero/aeroModel';
 import type { Caution } from '../cautions/caution';
 import type { CautionSettings } from '../cautions/cautionSettings';
+import { msg, q, withParts } from '../units/messageParts';
 
 /**
  * Buffet-margin and MMO cautions at an altitude (m), Mach and mass (kg);
@@ -26,7 +27,7 @@ export function cruisePointCautions(
     cautions.push({
       id: 'buffet_margin_low',
       severity: 'caution',
-      message: `At ${where} (${point.altitude_m.toFixed(0)} m, M ${point.mach.toFixed(3)}) the load factor to buffet onset is ${d.buffetLoadFactor.toFixed(2)} g, below the ${minN.toFixed(2)} g margin.`,
+      ...withParts(msg`At ${where} (${q(point.altitude_m, 'altitude')}, M ${q(point.mach, 'mach')}) the load factor to buffet onset is ${q(d.buffetLoadFactor, 'loadFactor')}, below the ${q(minN, 'loadFactor')} margin.`),
       value: d.buffetLoadFactor,
       threshold: minN,
     });
@@ -36,7 +37,7 @@ export function cruisePointCautions(
     cautions.push({
       id: 'mmo_exceeded',
       severity: 'warning',
-      message: `${where[0]!.toUpperCase()}${where.slice(1)} M ${point.mach.toFixed(3)} exceeds MMO ${mmo.toFixed(3)} less its margin (${limit.toFixed(3)}).`,
+      ...withParts(msg`${where[0]!.toUpperCase()}${where.slice(1)} M ${q(point.mach, 'mach')} exceeds MMO ${q(mmo, 'mach')} less its margin (${q(limit, 'mach')}).`),
       value: point.mach,
       threshold: limit,
     });

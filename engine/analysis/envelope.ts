@@ -14,6 +14,7 @@ import type { AnalysisError, PerformanceModels } from './analysisTypes';
 import { thrustDragCrossover, type CrossoverResult } from './crossover';
 import { liftLimitMachs } from './liftLimitMach';
 import { airAt } from './pointState';
+import { msg, q, withParts, type MessageParts } from '../units/messageParts';
 
 export interface ResidualClimbRate {
   /** Name shown beside the ceiling, e.g. "service". */
@@ -75,6 +76,8 @@ export interface Ceiling {
   readonly bestClimbMach: number | null;
   readonly climbRateAtCeiling_m_s: number | null;
   readonly message: string;
+  /** The message with its numbers as quantities. */
+  readonly parts?: MessageParts;
 }
 
 export interface EnvelopeResult {
@@ -169,15 +172,15 @@ export function flightEnvelope(
   const ceilingFor = (name: string, rate: number): Ceiling => {
     const margin = (i: number) => (rows[i]!.maxClimbRate_m_s ?? -Infinity) - rate;
     if (margin(0) < 0) {
-      return { name, climbRate_m_s: rate, altitude_m: null, bestClimbMach: null, climbRateAtCeiling_m_s: null, message: `The ${name} ceiling lies below ${hLo} m: the climb rate there is under ${rate.toFixed(3)} m/s.` };
+      return { name, climbRate_m_s: rate, altitude_m: null, bestClimbMach: null, climbRateAtCeiling_m_s: null, ...withParts(msg`The ${name} ceiling lies below ${q(hLo, 'altitude')}: the climb rate there is under ${q(rate, 'climbRate')}.`) };
     }
     const i = rows.findIndex((_, k) => margin(k) < 0);
     if (i < 0) {
-      return { name, climbRate_m_s: rate, altitude_m: null, bestClimbMach: null, climbRateAtCeiling_m_s: null, message: `The ${name} ceiling lies above ${hHi} m, the top of the altitude range.` };
+      return { name, climbRate_m_s: rate, altitude_m: null, bestClimbMach: null, climbRateAtCeiling_m_s: null, ...withParts(msg`The ${name} ceiling lies above ${q(hHi, 'altitude')}, the top of the altitude range.`) };
     }
     const root = brent((h) => maxPsAt(h) - rate, rows[i - 1]!.altitude_m, rows[i]!.altitude_m, { xTol: CEILING_ALTITUDE_TOL_M });
     if (!root.ok) {
-      return { name, climbRate_m_s: rate, altitude_m: null, bestClimbMach: null, climbRateAtCeiling_m_s: null, message: `The ${name} ceiling could not be refined between ${rows[i - 1]!.altitude_m} m and ${rows[i]!.altitude_m} m: ${root.error.message}` };
+      return { name, climbRate_m_s: rate, altitude_m: null, bestClimbMach: null, climbRateAtCeiling_m_s: null, ...withParts(msg`The ${name} ceiling could not be refined between ${q(rows[i - 1]!.altitude_m, 'altitude')} and ${q(rows[i]!.altitude_m, 'altitude')}: ${root.error.message}`) };
     }
     const c = crossAt(root.value.x);
     const at = c.ok ? c.value : null;
@@ -187,7 +190,7 @@ export function flightEnvelope(
       altitude_m: root.value.x,
       bestClimbMach: at?.bestClimbMach ?? null,
       climbRateAtCeiling_m_s: at?.maxSpecificExcessPower_m_s ?? null,
-      message: `${name} ceiling ${root.value.x.toFixed(0)} m (greatest steady climb rate ${rate.toFixed(3)} m/s at M ${at?.bestClimbMach?.toFixed(3) ?? '?'}).`,
+      ...withParts(msg`${name} ceiling ${q(root.value.x, 'altitude')} (greatest steady climb rate ${q(rate, 'climbRate')} at M ${at?.bestClimbMach == null ? '?' : q(at.bestClimbMach, 'mach')}).`),
     };
   };
   const ceilings = [ceilingFor('absolute', 0), ...rates.map((r) => ceilingFor(r.name, r.climbRate_m_s))];

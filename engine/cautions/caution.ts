@@ -3,6 +3,8 @@
  * message, and where and when it fired. Thresholds live in CautionSettings
  * (engine/cautions/cautionSettings.ts) and are edited by the user.
  */
+import type { MessageParts } from '../units/messageParts';
+
 export type CautionSeverity = 'info' | 'caution' | 'warning';
 
 export interface Caution {
@@ -11,6 +13,8 @@ export interface Caution {
   readonly severity: CautionSeverity;
   /** One readable sentence that says what happened, where and by how much. */
   readonly message: string;
+  /** The message with its numbers as quantities, for display in the reader's units (messageIn). */
+  readonly parts?: MessageParts;
   /** Leg index in the mission, when raised during a mission. */
   readonly legIndex?: number;
   /** Leg name, when raised during a mission. */

@@ -154,7 +154,7 @@ export const CAUTION_CATALOGUE: Readonly<Record<MissionCautionId, CautionEntry>>
     severity: 'caution',
     defaultThreshold: null,
     unit: '-',
-    source: "The polar's out-of-range policy (engine/aero): clamped at the table edge; raised first time per leg",
+    source: "The drag polar's out-of-range policy: clamped at the table edge; raised first time per leg",
   },
   thrust_below_drag: {
     id: 'thrust_below_drag',

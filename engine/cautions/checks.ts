@@ -4,34 +4,33 @@
  * where and when. A check fires strictly beyond its threshold: a value equal
  * to the threshold passes.
  */
+import { messageText, msg, q, type MessageParts } from '../units/messageParts';
 import type { Caution } from './caution';
 import { CAUTION_CATALOGUE, type MissionCautionId } from './cautionCatalogue';
 
 export type CautionDraft = Caution & { readonly id: MissionCautionId };
 
-function draft(id: MissionCautionId, message: string, value: number, threshold: number): CautionDraft {
-  return { id, severity: CAUTION_CATALOGUE[id].severity, message, value, threshold };
+function draft(id: MissionCautionId, parts: MessageParts, value: number, threshold: number): CautionDraft {
+  return { id, severity: CAUTION_CATALOGUE[id].severity, message: messageText(parts, 'both'), parts, value, threshold };
 }
-
-const KT = 1852 / 3600;
 
 /** CAS (m/s) above VMO less margin (m/s). */
 export function checkVmo(cas_m_s: number, vmo_m_s: number, margin_m_s: number): CautionDraft | null {
   const limit = vmo_m_s - margin_m_s;
   return cas_m_s > limit
-    ? draft('vmo_exceeded', `CAS ${(cas_m_s / KT).toFixed(1)} kt is above VMO less margin ${(limit / KT).toFixed(1)} kt.`, cas_m_s, limit)
+    ? draft('vmo_exceeded', msg`CAS ${q(cas_m_s, 'speed')} is above VMO less margin ${q(limit, 'speed')}.`, cas_m_s, limit)
     : null;
 }
 
 /** Mach (-) above MMO less margin (-). */
 export function checkMmo(mach: number, mmo: number, margin: number): CautionDraft | null {
   const limit = mmo - margin;
-  return mach > limit ? draft('mmo_exceeded', `Mach ${mach.toFixed(3)} is above MMO less margin ${limit.toFixed(3)}.`, mach, limit) : null;
+  return mach > limit ? draft('mmo_exceeded', msg`Mach ${q(mach, 'mach')} is above MMO less margin ${q(limit, 'mach')}.`, mach, limit) : null;
 }
 
 /** CL (-) above CLmax (-). */
 export function checkClMax(cl: number, clMax: number): CautionDraft | null {
-  return cl > clMax ? draft('cl_above_clmax', `CL ${cl.toFixed(3)} is above CLmax ${clMax.toFixed(3)}.`, cl, clMax) : null;
+  return cl > clMax ? draft('cl_above_clmax', msg`CL ${q(cl, 'coefficient')} is above CLmax ${q(clMax, 'coefficient')}.`, cl, clMax) : null;
 }
 
 /** Load factor to buffet onset (-) below the minimum (-). */
@@ -39,7 +38,7 @@ export function checkBuffetMargin(buffetLoadFactor: number, minLoadFactor: numbe
   return buffetLoadFactor < minLoadFactor
     ? draft(
         'buffet_margin_low',
-        `Load factor to buffet onset ${buffetLoadFactor.toFixed(3)} g is below the minimum ${minLoadFactor.toFixed(3)} g.`,
+        msg`Load factor to buffet onset ${q(buffetLoadFactor, 'loadFactor')} is below the minimum ${q(minLoadFactor, 'loadFactor')}.`,
         buffetLoadFactor,
         minLoadFactor,
       )
@@ -48,11 +47,10 @@ export function checkBuffetMargin(buffetLoadFactor: number, minLoadFactor: numbe
 
 /** Residual climb rate at top of climb (m/s) below the minimum (m/s). */
 export function checkResidualClimb(climbRate_m_s: number, min_m_s: number): CautionDraft | null {
-  const fpm = (v: number) => ((v / 0.3048) * 60).toFixed(0);
   return climbRate_m_s < min_m_s
     ? draft(
         'residual_climb_low',
-        `Residual climb rate at top of climb ${fpm(climbRate_m_s)} ft/min is below the minimum ${fpm(min_m_s)} ft/min.`,
+        msg`Residual climb rate at top of climb ${q(climbRate_m_s, 'climbRate')} is below the minimum ${q(min_m_s, 'climbRate')}.`,
         climbRate_m_s,
         min_m_s,
       )
@@ -61,7 +59,7 @@ export function checkResidualClimb(climbRate_m_s: number, min_m_s: number): Caut
 
 function massCheck(id: MissionCautionId, what: string, mass_kg: number, limit_kg: number): CautionDraft | null {
   return mass_kg > limit_kg
-    ? draft(id, `${what} ${mass_kg.toFixed(1)} kg is above the limit ${limit_kg.toFixed(1)} kg by ${(mass_kg - limit_kg).toFixed(1)} kg.`, mass_kg, limit_kg)
+    ? draft(id, msg`${what} ${q(mass_kg, 'mass')} is above the limit ${q(limit_kg, 'mass')} by ${q(mass_kg - limit_kg, 'mass')}.`, mass_kg, limit_kg)
     : null;
 }
 
@@ -91,7 +89,7 @@ export function checkReserve(fuelAtLanding_kg: number, requiredReserve_kg: numbe
   return fuelAtLanding_kg < limit
     ? draft(
         'reserve_below_minimum',
-        `Fuel on board at landing ${fuelAtLanding_kg.toFixed(1)} kg is below the required reserve ${limit.toFixed(1)} kg.`,
+        msg`Fuel on board at landing ${q(fuelAtLanding_kg, 'mass')} is below the required reserve ${q(limit, 'mass')}.`,
         fuelAtLanding_kg,
         limit,
       )
@@ -101,7 +99,7 @@ export function checkReserve(fuelAtLanding_kg: number, requiredReserve_kg: numbe
 /** Inlet throat Mach (-) above the maximum (-); null throat Mach (not computed) passes. */
 export function checkThroatMach(throatMach: number | null, maxThroatMach: number): CautionDraft | null {
   return throatMach !== null && throatMach > maxThroatMach
-    ? draft('throat_mach_high', `Inlet throat Mach ${throatMach.toFixed(3)} is above ${maxThroatMach.toFixed(3)}.`, throatMach, maxThroatMach)
+    ? draft('throat_mach_high', msg`Inlet throat Mach ${q(throatMach, 'mach')} is above ${q(maxThroatMach, 'mach')}.`, throatMach, maxThroatMach)
     : null;
 }
 
@@ -110,7 +108,7 @@ export function checkThrustBelowDrag(thrustAvailable_N: number, thrustRequired_N
   return thrustAvailable_N < thrustRequired_N
     ? draft(
         'thrust_below_drag',
-        `Thrust at the rating ${thrustAvailable_N.toFixed(0)} N is below the ${thrustRequired_N.toFixed(0)} N required.`,
+        msg`Thrust at the rating ${q(thrustAvailable_N, 'force')} is below the ${q(thrustRequired_N, 'force')} required.`,
         thrustAvailable_N,
         thrustRequired_N,
       )
@@ -122,7 +120,7 @@ export function checkPolarClamped(outsideTables: readonly string[]): CautionDraf
   return outsideTables.length > 0
     ? draft(
         'polar_table_clamped',
-        `The drag polar was read outside its ${outsideTables.join(', ')} table${outsideTables.length > 1 ? 's' : ''} and clamped at the edge.`,
+        msg`The drag polar was read outside its ${outsideTables.join(', ')} table${outsideTables.length > 1 ? 's' : ''} and clamped at the edge.`,
         outsideTables.length,
         0,
       )
@@ -133,7 +131,7 @@ export function checkPolarClamped(outsideTables: readonly string[]): CautionDraf
 export function idleAboveDragCaution(drag_N: number, idleThrust_N: number): CautionDraft {
   return draft(
     'idle_thrust_above_drag',
-    `Drag ${drag_N.toFixed(0)} N is below idle thrust ${idleThrust_N.toFixed(0)} N in level flight; idle fuel flow used (drag devices assumed).`,
+    msg`Drag ${q(drag_N, 'force')} is below idle thrust ${q(idleThrust_N, 'force')} in level flight; idle fuel flow used (drag devices assumed).`,
     drag_N,
     idleThrust_N,
   );

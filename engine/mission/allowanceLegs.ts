@@ -19,6 +19,7 @@ import { MASS_FLOOR_FRACTION } from './flySegment';
 import type { LegTarget, MissionContext } from './missionContext';
 import { S_ALT, S_MASS, S_TIME, type FlightSample, type StateVector } from './missionState';
 import { appendSample } from './timeHistoryBuilder';
+import { msg, q } from '../units/messageParts';
 
 /** Mach (-) at which the approach allowance takes the flightIdle fuel flow. */
 export const APPROACH_MACH = 0.2;
@@ -101,7 +102,7 @@ export function flyAllowance(ctx: MissionContext, target: LegTarget, start: Stat
     return legFailed(
       state,
       'fuel_exhausted',
-      `Fuel exhausted during ${target.legName} after ${minutes.toFixed(1)} of its ${(time_s / 60).toFixed(1)} min: it needs ${fuel_kg.toFixed(1)} kg, ${available_kg.toFixed(1)} kg was left.`,
+      msg`Fuel exhausted during ${target.legName} after ${minutes.toFixed(1)} of its ${(time_s / 60).toFixed(1)} min: it needs ${q(fuel_kg, 'mass')}, ${q(available_kg, 'mass')} was left.`,
       sample,
     );
   }

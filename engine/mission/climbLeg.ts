@@ -17,6 +17,7 @@ import { BASE_MONOTONE_STEP, BASE_STEP_S, type LegTarget, type MissionContext } 
 import { machOfCas, missionAir } from './missionAtmosphere';
 import { S_ALT, S_MASS, S_TAS, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
 import { schedulePhases } from './speedSchedule';
+import { msg, q } from '../units/messageParts';
 
 /** Climb rate (m/s) below which a climb counts as stalled: 100 ft/min, the service-ceiling rate (common practice). */
 export const CLIMB_STALL_RATE_M_S = (100 * 0.3048) / 60;
@@ -96,7 +97,7 @@ export function flyClimb(
       return legFailed(
         state,
         'climb_not_reached',
-        `The climb on ${target.legName} stalled at ${state[S_ALT].toFixed(0)} m, below its ${toAltitude_m.toFixed(0)} m target.`,
+        msg`The climb on ${target.legName} stalled at ${q(state[S_ALT], 'altitude')}, below its ${q(toAltitude_m, 'altitude')} target.`,
         last,
       );
     }

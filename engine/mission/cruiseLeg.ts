@@ -27,6 +27,7 @@ import type { CruiseProfile, CruiseSpeed, MissionInput } from './missionTypes';
 import { S_AIR, S_ALT, S_GROUND, S_MASS, S_TAS, type FlightSample, type SegmentEvent, type StateVector } from './missionState';
 import { appendCaution } from './timeHistoryBuilder';
 import { CAUTION_CATALOGUE } from '../cautions/cautionCatalogue';
+import { msg, q, withParts } from '../units/messageParts';
 
 export interface CruiseSpec {
   readonly altitude_m: number;
@@ -104,7 +105,7 @@ function failed(ctx: MissionContext, target: LegTarget, state: StateVector, run:
       {
         id: 'thrust_below_drag',
         severity: CAUTION_CATALOGUE.thrust_below_drag.severity,
-        message: `On ${target.legName} the drag ${last.drag_N.toFixed(0)} N exceeds the maxCruise thrust ${last.thrustAvailable_N.toFixed(0)} N at Mach ${last.mach.toFixed(3)}, ${last.altitude_m.toFixed(0)} m.`,
+        ...withParts(msg`On ${target.legName} the drag ${q(last.drag_N, 'force')} exceeds the maximum-cruise thrust ${q(last.thrustAvailable_N, 'force')} at Mach ${q(last.mach, 'mach')}, ${q(last.altitude_m, 'altitude')}.`),
         value: last.thrustAvailable_N,
         threshold: last.drag_N,
       },
@@ -183,7 +184,7 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
         {
           id: 'profile_altitude_limited',
           severity: CAUTION_CATALOGUE.profile_altitude_limited.severity,
-          message: `The cruise-climb on ${target.legName} reached its maximum altitude ${ceiling.toFixed(0)} m.`,
+          ...withParts(msg`The cruise-climb on ${target.legName} reached its maximum altitude ${q(ceiling, 'altitude')}.`),
           value: run.endSample.altitude_m,
           threshold: ceiling,
         },
@@ -263,7 +264,7 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
     if (climb.stop !== 'altitude_reached') {
       return climb.stop !== 'climb_stalled'
         ? failed(ctx, target, state, climb, last)
-        : legFailed(state, 'climb_not_reached', `The step climb on ${target.legName} stalled at ${state[S_ALT].toFixed(0)} m.`, last);
+        : legFailed(state, 'climb_not_reached', msg`The step climb on ${target.legName} stalled at ${q(state[S_ALT], 'altitude')}.`, last);
     }
     state[S_ALT] = up;
     if (state[k] >= endAt(state[S_MASS])) return legOk(state, last);

@@ -19,6 +19,7 @@ import { S_ALT, S_MASS, S_TAS, type Evaluation, type FlightSample, type Segment,
 import { schedulePhases } from './speedSchedule';
 import { appendCaution } from './timeHistoryBuilder';
 import { CAUTION_CATALOGUE } from '../cautions/cautionCatalogue';
+import { msg, q, withParts } from '../units/messageParts';
 
 export type DescentMode = { readonly kind: 'idle' } | { readonly kind: 'rate'; readonly rate_m_s: number };
 
@@ -125,7 +126,7 @@ export function flyDescent(
       continue;
     }
     if (run.stop === 'descent_stalled') {
-      return legFailed(state, 'infeasible', `Idle thrust exceeds drag: the descent on ${target.legName} cannot continue below ${state[S_ALT].toFixed(0)} m.`, last);
+      return legFailed(state, 'infeasible', msg`Idle thrust exceeds drag: the descent on ${target.legName} cannot continue below ${q(state[S_ALT], 'altitude')}.`, last);
     }
     return segmentStopFailure(state, run, `the descent on ${target.legName}`, missionDomain(ctx, target), last);
   }
@@ -137,7 +138,7 @@ export function flyDescent(
       {
         id: 'descent_thrust_below_idle',
         severity: CAUTION_CATALOGUE.descent_thrust_below_idle.severity,
-        message: `The set descent rate on ${target.legName} needs ${found.required.toFixed(0)} N, below idle thrust ${found.idle.toFixed(0)} N; idle fuel flow used.`,
+        ...withParts(msg`The set descent rate on ${target.legName} needs ${q(found.required, 'force')}, below idle thrust ${q(found.idle, 'force')}; idle fuel flow used.`),
         value: found.required,
         threshold: found.idle,
       },

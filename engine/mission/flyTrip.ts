@@ -16,10 +16,12 @@ import { S_AIR, S_ALT, S_GROUND, S_MASS, S_TIME, STATE_SIZE, type StateVector } 
 import { appendCaution } from './timeHistoryBuilder';
 import { checkResidualClimb } from '../cautions/checks';
 import { CAUTION_CATALOGUE } from '../cautions/cautionCatalogue';
+import { msg, q, withParts, type MessageParts } from '../units/messageParts';
 
 export interface TripOutcome {
   readonly status: MissionStatus;
   readonly message: string;
+  readonly parts?: MessageParts;
   readonly rows: readonly LegRow[];
   readonly end: StateVector;
   /** State at the start of the first airborne-side leg (after taxi out) and at landing (before taxi in). */
@@ -71,7 +73,7 @@ function noteAltitudeJump(ctx: MissionContext, target: LegTarget, state: StateVe
     {
       id: 'altitude_jump',
       severity: CAUTION_CATALOGUE.altitude_jump.severity,
-      message: `${target.legName} starts at ${altitude_m.toFixed(0)} m but the previous leg ended at ${state[S_ALT].toFixed(0)} m; the change is not flown.`,
+      ...withParts(msg`${target.legName} starts at ${q(altitude_m, 'altitude')} but the previous leg ended at ${q(state[S_ALT], 'altitude')}; the change is not flown.`),
       value: altitude_m,
       threshold: state[S_ALT],
     },
@@ -106,6 +108,7 @@ function flyLeg(ctx: MissionContext, index: number, state: StateVector, solved: 
             id: 'climb_not_reached',
             severity: CAUTION_CATALOGUE.climb_not_reached.severity,
             message: out.message,
+            ...(out.parts ? { parts: out.parts } : {}),
             value: out.state[S_ALT],
             threshold: leg.toAltitude_m,
           },
@@ -184,7 +187,7 @@ export function flyTrip(ctx: MissionContext, rampMass_kg: number, solvedDistance
     }
     if (i === last) landing = Float64Array.from(state);
     if (out.status !== 'ok') {
-      return { status: out.status, message: out.message, rows, end: state, takeoff, landing: state, solvableDistance_m, afterSolvable_m: 0, solvableEndMass_kg, solvableFuel_kg };
+      return { status: out.status, message: out.message, ...(out.parts ? { parts: out.parts } : {}), rows, end: state, takeoff, landing: state, solvableDistance_m, afterSolvable_m: 0, solvableEndMass_kg, solvableFuel_kg };
     }
   }
   if (last < first) landing = Float64Array.from(state);

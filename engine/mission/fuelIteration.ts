@@ -21,6 +21,7 @@ import { flyTrip, solvableLegIndex, type SolvedDistance, type TripOutcome } from
 import { distanceIndex, legEnvironment, type MissionContext } from './missionContext';
 import { S_AIR, S_MASS, S_TIME } from './missionState';
 import { createFlightLog, type FlightLog } from './timeHistoryBuilder';
+import { msg, q, type MessageParts } from '../units/messageParts';
 
 /** Fuel residual tolerance (kg): the mission lands with the reserve plus 0 to this much (never less). */
 export const FUEL_TOLERANCE_KG = 0.1;
@@ -73,14 +74,14 @@ interface IterationPoint {
 export type IterationOutcome =
   | (IterationPoint & { readonly kind: 'converged'; readonly pass: MissionEvaluation })
   | (IterationPoint & { readonly kind: 'flightFailed'; readonly failure: MissionEvaluation })
-  | (IterationPoint & { readonly kind: 'infeasible'; readonly message: string })
-  | (IterationPoint & { readonly kind: 'notConverged'; readonly message: string });
+  | (IterationPoint & { readonly kind: 'infeasible'; readonly message: MessageParts })
+  | (IterationPoint & { readonly kind: 'notConverged'; readonly message: MessageParts });
 
 function notConverged(what: string, point: IterationPoint): IterationOutcome {
   return {
     kind: 'notConverged',
     ...point,
-    message: `${what} iteration did not converge after ${point.iterations} passes; residual ${point.residual_kg.toFixed(2)} kg.`,
+    message: msg`${what} iteration did not converge after ${point.iterations} passes; residual ${q(point.residual_kg, 'mass')}.`,
   };
 }
 
@@ -149,7 +150,7 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
         distance_m: 0,
         iterations: k,
         residual_kg: e1.residual_kg,
-        message: `The range ${(range_m / 1000).toFixed(1)} km is shorter than the other legs' ${(e1.trip.end[basis] / 1000).toFixed(1)} km ${basis === S_AIR ? 'of still air' : 'over the ground'}.`,
+        message: msg`The range ${q(range_m, 'distance')} is shorter than the other legs' ${q(e1.trip.end[basis], 'distance')} ${basis === S_AIR ? 'of still air' : 'over the ground'}.`,
       };
     }
     remember(e1);
@@ -186,7 +187,7 @@ export function iterateDistance(ctx: MissionContext, rampMass_kg: number): Itera
       distance_m: 0,
       iterations: 1,
       residual_kg: e0.residual_kg,
-      message: `The reserve cannot be carried even with the solvable cruise leg at zero length: short by ${(-e0.residual_kg).toFixed(1)} kg.`,
+      message: msg`The reserve cannot be carried even with the solvable cruise leg at zero length: short by ${q(-e0.residual_kg, 'mass')}.`,
     };
   }
   if (fuelConverged(e0.residual_kg)) {

@@ -2,12 +2,15 @@
 import type { MissionStatus } from './missionTypes';
 import type { DomainExit, StateDomain } from './integrator';
 import { S_ALT, type FlightSample, type SegmentStop, type StateVector } from './missionState';
+import { messageText, msg, q, type MessageParts } from '../units/messageParts';
 
 export interface LegOutcome {
   readonly state: StateVector;
   /** 'ok' or the failure that ends the mission. */
   readonly status: MissionStatus;
   readonly message: string;
+  /** The message with its numbers as quantities (display in the reader's units). */
+  readonly parts?: MessageParts;
   /** Last recorded sample of the leg (null for allowance legs). */
   readonly lastSample: FlightSample | null;
 }
@@ -18,13 +21,14 @@ export function legOk(state: StateVector, lastSample: FlightSample | null): LegO
 }
 
 /** A leg that ended the mission, with the status and a readable reason. */
-export function legFailed(state: StateVector, status: MissionStatus, message: string, lastSample: FlightSample | null): LegOutcome {
-  return { state, status, message, lastSample };
+export function legFailed(state: StateVector, status: MissionStatus, message: string | MessageParts, lastSample: FlightSample | null): LegOutcome {
+  if (typeof message === 'string') return { state, status, message, lastSample };
+  return { state, status, message: messageText(message, 'both'), parts: message, lastSample };
 }
 
-/** Pressure-altitude words for the domain's bounds (m). */
-function metres(value_m: number): string {
-  return `${Math.round(value_m).toLocaleString('en-US')} m`;
+/** A pressure altitude as a message quantity (m). */
+function metres(value_m: number) {
+  return q(value_m, 'altitude');
 }
 
 /**
@@ -41,33 +45,33 @@ export function segmentStopFailure(
   lastSample: FlightSample | null,
 ): LegOutcome {
   const What = what.charAt(0).toUpperCase() + what.slice(1);
-  const at = `at ${metres(state[S_ALT])} pressure altitude`;
+  const at = msg`at ${metres(state[S_ALT])} pressure altitude`;
   switch (run.stop) {
     case 'fuel_exhausted':
-      return legFailed(state, 'fuel_exhausted', `Fuel exhausted in ${what} ${at}.`, lastSample);
+      return legFailed(state, 'fuel_exhausted', msg`Fuel exhausted in ${what} ${at}.`, lastSample);
     case 'no_ground_progress': {
       const wind = domain.wind_m_s ?? 0;
       const tas = lastSample?.tas_m_s ?? 0;
       const why =
         wind < 0 && -wind >= 0.5 * tas
-          ? `the headwind ${(-wind).toFixed(1)} m/s is at least the horizontal airspeed (true airspeed ${tas.toFixed(1)} m/s)`
-          : `the climb or descent rate ${Math.abs(lastSample?.climbRate_m_s ?? 0).toFixed(1)} m/s leaves no horizontal speed at a true airspeed of ${tas.toFixed(1)} m/s (wind ${wind.toFixed(1)} m/s)`;
-      return legFailed(state, 'no_ground_progress', `${What} makes no progress over the ground ${at}: ${why}; ground speed <= 0, so the destination cannot be reached.`, lastSample);
+          ? msg`the headwind ${q(-wind, 'speed')} is at least the horizontal airspeed (true airspeed ${q(tas, 'speed')})`
+          : msg`the climb or descent rate ${q(Math.abs(lastSample?.climbRate_m_s ?? 0), 'climbRate')} leaves no horizontal speed at a true airspeed of ${q(tas, 'speed')} (wind ${q(wind, 'speed')})`;
+      return legFailed(state, 'no_ground_progress', msg`${What} makes no progress over the ground ${at}: ${why}; ground speed <= 0, so the destination cannot be reached.`, lastSample);
     }
     case 'left_domain':
       switch (run.domainExit) {
         case 'mass_low':
-          return legFailed(state, 'fuel_exhausted', `Fuel exhausted in ${what} ${at}: the fuel needed is far above the fuel on board.`, lastSample);
+          return legFailed(state, 'fuel_exhausted', msg`Fuel exhausted in ${what} ${at}: the fuel needed is far above the fuel on board.`, lastSample);
         case 'altitude_high':
-          return legFailed(state, 'outside_model_range', `${What} would rise above ${metres(domain.maxAltitude_m)}, the highest pressure altitude the mission models cover (from ${metres(state[S_ALT])}).`, lastSample);
+          return legFailed(state, 'outside_model_range', msg`${What} would rise above ${metres(domain.maxAltitude_m)}, the highest pressure altitude the mission models cover (from ${metres(state[S_ALT])}).`, lastSample);
         case 'altitude_low':
-          return legFailed(state, 'outside_model_range', `${What} would sink below ${metres(domain.minAltitude_m)}, the lowest pressure altitude the mission models cover (from ${metres(state[S_ALT])}).`, lastSample);
+          return legFailed(state, 'outside_model_range', msg`${What} would sink below ${metres(domain.minAltitude_m)}, the lowest pressure altitude the mission models cover (from ${metres(state[S_ALT])}).`, lastSample);
         case 'tas_out_of_range':
-          return legFailed(state, 'outside_model_range', `${What} would leave the speeds the models cover (true airspeed 0 to ${metres(domain.maxTas_m_s).replace(' m', ' m/s')}) ${at}.`, lastSample);
+          return legFailed(state, 'outside_model_range', msg`${What} would leave the speeds the models cover (true airspeed 0 to ${q(domain.maxTas_m_s, 'speed')}) ${at}.`, lastSample);
         default:
-          return legFailed(state, 'outside_model_range', `${What} reached a state the models cannot evaluate (a number is not finite) ${at}.`, lastSample);
+          return legFailed(state, 'outside_model_range', msg`${What} reached a state the models cannot evaluate (a number is not finite) ${at}.`, lastSample);
       }
     default:
-      return legFailed(state, 'infeasible', `${What} stopped ${at} (${run.stop.replace(/_/g, ' ')}).`, lastSample);
+      return legFailed(state, 'infeasible', msg`${What} stopped ${at} (${run.stop.replace(/_/g, ' ')}).`, lastSample);
   }
 }

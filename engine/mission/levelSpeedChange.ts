@@ -12,6 +12,7 @@ import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutc
 import { BASE_MONOTONE_STEP, BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
 import { missionAir } from './missionAtmosphere';
 import { S_ALT, S_MASS, S_TAS, STATE_SIZE, type Segment, type SegmentEvent, type StateVector } from './missionState';
+import { msg, q } from '../units/messageParts';
 
 /** Least acceleration (m/s^2) for stepping a speed change in TAS; a slower change goes to the time integrator. */
 const MONOTONE_SPEED_CHANGE_M_S2 = 0.05;
@@ -72,7 +73,7 @@ export function flyLevelSpeedChange(
     return legFailed(
       run.end,
       direction > 0 ? 'climb_not_reached' : 'infeasible',
-      `${direction > 0 ? 'Thrust' : 'Idle drag'} cannot change the speed to Mach ${toMach.toFixed(3)} at ${altitude_m.toFixed(0)} m on ${target.legName}.`,
+      msg`${direction > 0 ? 'Thrust' : 'Idle drag'} cannot change the speed to Mach ${q(toMach, 'mach')} at ${q(altitude_m, 'altitude')} on ${target.legName}.`,
       run.endSample,
     );
   }

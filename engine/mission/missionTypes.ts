@@ -8,6 +8,7 @@ import type { AeroModel } from '../aero/aeroModel';
 import type { Caution } from '../cautions/caution';
 import type { CautionSettings } from '../cautions/cautionSettings';
 import type { PropulsionModel, RatingName } from '../propulsion/propulsionModel';
+import type { MessageParts } from '../units/messageParts';
 
 export interface Airframe {
   /** Operating empty mass including the active inlet's weight (kg). */
@@ -236,8 +237,10 @@ export type MissionStatus =
 
 export interface MissionResult {
   readonly status: MissionStatus;
-  /** Human-readable reason when status is not 'ok'. */
+  /** Human-readable reason when status is not 'ok' (SI text; statusParts for display). */
   readonly statusMessage: string;
+  /** The reason with its numbers as quantities (messageText(parts, units)); empty when ok. */
+  readonly statusParts?: MessageParts;
   readonly blockFuel_kg: number;
   readonly blockTime_s: number;
   readonly tripFuel_kg: number;

@@ -41,6 +41,7 @@ import { S_AIR, S_ALT, S_GROUND, S_MASS, S_TIME, type StateVector } from './miss
 import { appendCaution, createFlightLog } from './timeHistoryBuilder';
 import { CAUTION_CATALOGUE } from '../cautions/cautionCatalogue';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
+import { messageText, msg, partsOf, q, withParts, type MessageParts } from '../units/messageParts';
 
 /** 1,500 ft above the aerodrome (m): ICAO Annex 6 Part I 4.3.6.3 (450 m) and 14 CFR 121.645(b)(4). */
 export const HOLD_HEIGHT_M = 1500 * FOOT_M;
@@ -54,6 +55,7 @@ const DEFAULT_CLIMB: Omit<SpeedSchedule, 'mach'> = {
 export interface ReserveFlight {
   readonly status: MissionStatus;
   readonly message: string;
+  readonly parts?: MessageParts;
   readonly breakdown: ReserveBreakdown;
   readonly rows: readonly LegRow[];
 }
@@ -119,7 +121,7 @@ function flyAlternate(ctx: MissionContext, target: LegTarget, start: StateVector
       {
         id: 'alternate_too_short',
         severity: CAUTION_CATALOGUE.alternate_too_short.severity,
-        message: `The alternate's ${alt.distance_m.toFixed(0)} m is shorter than its climb and descent; flown ${(alt.distance_m - cruiseDistance).toFixed(0)} m.`,
+        ...withParts(msg`The alternate's ${q(alt.distance_m, 'distance')} is shorter than its climb and descent; flown ${q(alt.distance_m - cruiseDistance, 'distance')}.`),
         value: alt.distance_m,
         threshold: alt.distance_m - cruiseDistance,
       },
@@ -198,6 +200,7 @@ export function flyReserves(ctx: MissionContext, trip: TripSummary): ReserveFlig
   let finalFuel = 0;
   let status: MissionStatus = 'ok';
   let message = '';
+  let parts: MessageParts = [];
 
   const run = (name: string, env: typeof missionEnv, fly: (t: LegTarget, s: StateVector) => LegOutcome): Flown | null => {
     const target: LegTarget = { legIndex: input.legs.length + rows.length, legName: name, env, recordHistory: false };
@@ -221,7 +224,8 @@ export function flyReserves(ctx: MissionContext, trip: TripSummary): ReserveFlig
     });
     if (out.status !== 'ok') {
       status = out.status;
-      message = `Reserve ${name}: ${out.message}`;
+      parts = [`Reserve ${name}: `, ...partsOf(out)];
+      message = messageText(parts, 'both');
       return null;
     }
     state = out.state;
@@ -285,6 +289,7 @@ export function flyReserves(ctx: MissionContext, trip: TripSummary): ReserveFlig
     return {
       status,
       message,
+      parts,
       rows,
       breakdown: {
         contingency_kg: contingency,

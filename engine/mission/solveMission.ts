@@ -33,6 +33,7 @@ import { missionInputProblem } from './missionInputCheck';
 import { S_AIR, S_GROUND, S_MASS, S_TIME } from './missionState';
 import type { MissionInput, MissionResult, MissionStatus, ReserveBreakdown } from './missionTypes';
 import { appendCaution, buildTimeHistory, createFlightLog } from './timeHistoryBuilder';
+import { messageText, msg, partsOf, q, withParts, type MessageParts } from '../units/messageParts';
 
 const NO_RESERVES: ReserveBreakdown = { contingency_kg: 0, alternate_kg: 0, finalReserve_kg: 0, extra_kg: 0, total_kg: 0 };
 
@@ -41,7 +42,7 @@ function stillAirCaution(input: MissionInput): Caution {
   return {
     id: 'still_air_distances',
     severity: CAUTION_CATALOGUE.still_air_distances.severity,
-    message: `Still-air distances (design-range study): the range, set cruise distances and the alternate are flown in still air; the wind (mission ${input.wind_m_s.toFixed(1)} m/s) changes only the ground distance, not the fuel or the time.`,
+    ...withParts(msg`Still-air distances (design-range study): the range, set cruise distances and the alternate are flown in still air; the wind (mission ${q(input.wind_m_s, 'speed')}) changes only the ground distance, not the fuel or the time.`),
     value: input.wind_m_s,
   };
 }
@@ -56,12 +57,15 @@ export function taxiOutFuel(input: MissionInput): number {
   return fuel;
 }
 
-function emptyResult(input: MissionInput, status: MissionStatus, message: string): MissionResult {
+function emptyResult(input: MissionInput, status: MissionStatus, reason: string | MessageParts): MissionResult {
+  const message = typeof reason === 'string' ? reason : messageText(reason, 'both');
+  const statusParts = typeof reason === 'string' ? [reason] : reason;
   const zfw = Number.isFinite(input.airframe?.oew_kg + input.solve?.payload_kg) ? input.airframe.oew_kg + input.solve.payload_kg : 0;
   const log = createFlightLog(input.airframe, input.cautionSettings);
   return {
     status,
     statusMessage: message,
+    statusParts,
     blockFuel_kg: 0,
     blockTime_s: 0,
     tripFuel_kg: 0,
@@ -111,27 +115,27 @@ function breguetRampGuess(input: MissionInput, zfw_kg: number, taxi_kg: number, 
  * the final flight's trip and reserves; a converged or single flight that
  * flew is ok.
  */
-function missionStatus(outcome: IterationOutcome | null, final: MissionEvaluation): { readonly status: MissionStatus; readonly message: string } {
+function missionStatus(outcome: IterationOutcome | null, final: MissionEvaluation): { readonly status: MissionStatus; readonly parts: MessageParts } {
   if (outcome !== null) {
     switch (outcome.kind) {
       case 'notConverged':
-        return { status: 'did_not_converge', message: outcome.message };
+        return { status: 'did_not_converge', parts: outcome.message };
       case 'infeasible':
-        return { status: 'infeasible', message: outcome.message };
+        return { status: 'infeasible', parts: outcome.message };
       case 'converged':
       case 'flightFailed':
         break;
     }
   }
-  if (final.trip.status !== 'ok') return { status: final.trip.status, message: final.trip.message };
-  if (final.reserves.status !== 'ok') return { status: final.reserves.status, message: final.reserves.message };
+  if (final.trip.status !== 'ok') return { status: final.trip.status, parts: partsOf(final.trip) };
+  if (final.reserves.status !== 'ok') return { status: final.reserves.status, parts: partsOf(final.reserves) };
   if (outcome?.kind === 'flightFailed') {
     return {
       status: 'did_not_converge',
-      message: `The iteration stopped on a failed flight after ${outcome.iterations} passes; residual ${outcome.residual_kg.toFixed(2)} kg.`,
+      parts: msg`The iteration stopped on a failed flight after ${outcome.iterations} passes; residual ${q(outcome.residual_kg, 'mass')}.`,
     };
   }
-  return { status: 'ok', message: '' };
+  return { status: 'ok', parts: [] };
 }
 
 /** Relative excess (-) over a hard limit that still counts as at the limit (rounding of a flight flown to it). */
@@ -147,18 +151,18 @@ function hardLimitBroken(
   takeoffMass_kg: number,
   rampFuel_kg: number,
   landingMass_kg: number,
-): { readonly status: MissionStatus; readonly message: string } | null {
+): { readonly status: MissionStatus; readonly parts: MessageParts } | null {
   const a = input.airframe;
   const above = (value: number, limit: number) => value > limit * (1 + HARD_LIMIT_TOLERANCE);
-  const kg = (v: number) => `${v.toFixed(0)} kg`;
+  const kg = (v: number) => q(v, 'mass');
   if (above(takeoffMass_kg, a.mtow_kg)) {
-    return { status: 'above_mtow', message: `The take-off mass ${kg(takeoffMass_kg)} is above the maximum take-off mass ${kg(a.mtow_kg)} by ${kg(takeoffMass_kg - a.mtow_kg)}.` };
+    return { status: 'above_mtow', parts: msg`The take-off mass ${kg(takeoffMass_kg)} is above the maximum take-off mass ${kg(a.mtow_kg)} by ${kg(takeoffMass_kg - a.mtow_kg)}.` };
   }
   if (above(rampFuel_kg, a.maxFuel_kg)) {
-    return { status: 'fuel_above_capacity', message: `The fuel at block-out ${kg(rampFuel_kg)} is above the tanks' capacity ${kg(a.maxFuel_kg)} by ${kg(rampFuel_kg - a.maxFuel_kg)}.` };
+    return { status: 'fuel_above_capacity', parts: msg`The fuel at block-out ${kg(rampFuel_kg)} is above the tanks' capacity ${kg(a.maxFuel_kg)} by ${kg(rampFuel_kg - a.maxFuel_kg)}.` };
   }
   if (above(landingMass_kg, a.mlw_kg)) {
-    return { status: 'landing_above_mlw', message: `The landing mass ${kg(landingMass_kg)} is above the maximum landing mass ${kg(a.mlw_kg)} by ${kg(landingMass_kg - a.mlw_kg)}.` };
+    return { status: 'landing_above_mlw', parts: msg`The landing mass ${kg(landingMass_kg)} is above the maximum landing mass ${kg(a.mlw_kg)} by ${kg(landingMass_kg - a.mlw_kg)}.` };
   }
   return null;
 }
@@ -214,7 +218,7 @@ function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult
         ? solve.takeoffMass_kg + taxi
         : Math.min(input.airframe.mtow_kg + taxi, zfw + input.airframe.maxFuel_kg);
     if (rampMass <= zfw) {
-      return emptyResult(input, 'infeasible', `No fuel can be carried: ramp mass ${rampMass.toFixed(1)} kg is not above zero-fuel mass ${zfw.toFixed(1)} kg.`);
+      return emptyResult(input, 'infeasible', msg`No fuel can be carried: ramp mass ${q(rampMass, 'mass')} is not above zero-fuel mass ${q(zfw, 'mass')}.`);
     }
     if (hasSolvable) {
       outcome = iterateDistance(base, rampMass);
@@ -234,7 +238,7 @@ function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult
   const ctx = { log: final.log };
   const { trip, reserves } = final;
   if (solve.kind === 'takeoffWeight' && !hasSolvable) residual = final.residual_kg;
-  let { status, message } = missionStatus(outcome, final);
+  let { status, parts: statusParts } = missionStatus(outcome, final);
 
   const { first, last } = tripBounds(input);
   const at = (index: number, name: string): LegTarget => ({
@@ -249,7 +253,7 @@ function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult
   const landingFuel = landingMass - zfw;
   if (status === 'ok') {
     const broken = hardLimitBroken(input, takeoffMass, rampMass - zfw, landingMass);
-    if (broken !== null) ({ status, message } = broken);
+    if (broken !== null) ({ status, parts: statusParts } = broken);
   }
   appendCaution(ctx.log, at(first, legName(first)), checkMtow(takeoffMass, input.airframe.mtow_kg), trip.takeoff[S_TIME]);
   appendCaution(ctx.log, at(0, legName(0)), checkMzfw(zfw, input.airframe.mzfw_kg), 0);
@@ -270,7 +274,8 @@ function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult
   const cautions: Caution[] = [...ctx.log.cautions.values()].sort((a, b) => (a.time_s ?? 0) - (b.time_s ?? 0));
   return {
     status,
-    statusMessage: message,
+    statusMessage: messageText(statusParts, 'both'),
+    statusParts,
     blockFuel_kg: rampMass - trip.end[S_MASS],
     blockTime_s: trip.end[S_TIME],
     tripFuel_kg: takeoffMass - landingMass,

@@ -6,6 +6,7 @@
  */
 import { validatePolarSpec } from '../aero/polarSpec';
 import { validateInletDesign } from '../propulsion/inletDesign';
+import { formatMessageQuantity, msg, q, type MessageQuantity } from '../units/messageParts';
 import { makeIssue, showValue, valueAtPath, type ProjectIssue } from './projectIssue';
 import type { Project } from './projectSchema';
 import { inletDesignOf, inletIssuePath, polarIssuePath, polarSpecOf } from './projectSpecs';
@@ -14,11 +15,15 @@ import { checkUncertainty } from './uncertaintyChecks';
 /** Altitude agreement accepted between a cruise leg and the legs before it (m). */
 const ALTITUDE_MATCH_TOLERANCE_M = 1;
 
-function kg(value: number): string {
-  return `${Math.round(value * 10) / 10} kg`;
+/** Masses and altitudes as quantity parts (messages) and as text in both unit systems (the `expected` field). */
+function kg(value: number) {
+  return q(value, 'mass');
 }
-function ft(value_m: number): string {
-  return `${Math.round(value_m / 0.3048)} ft`;
+function ft(value_m: number) {
+  return q(value_m, 'altitude');
+}
+function siText(part: MessageQuantity): string {
+  return formatMessageQuantity(part, 'both');
 }
 
 function pathFromDotted(path: string): (string | number)[] {
@@ -43,17 +48,17 @@ export function checkProject(project: Project, doc: unknown): ProjectIssue[] {
 
   if (w.maxZeroFuel > w.maxTakeoff) {
     const p = 'airframe.weights.maxZeroFuel';
-    issues.push(makeIssue(p, raw(p), `at most the maximum takeoff weight (${kg(w.maxTakeoff)})`, `${raw(p)} (${kg(w.maxZeroFuel)}) is above the maximum takeoff weight (${kg(w.maxTakeoff)})`));
+    issues.push(makeIssue(p, raw(p), `at most the maximum takeoff weight (${siText(kg(w.maxTakeoff))})`, msg`the maximum zero-fuel weight ${kg(w.maxZeroFuel)} is above the maximum takeoff weight ${kg(w.maxTakeoff)}`));
   }
   if (w.maxLanding > w.maxTakeoff) {
     const p = 'airframe.weights.maxLanding';
-    issues.push(makeIssue(p, raw(p), `at most the maximum takeoff weight (${kg(w.maxTakeoff)})`, `${raw(p)} (${kg(w.maxLanding)}) is above the maximum takeoff weight (${kg(w.maxTakeoff)})`));
+    issues.push(makeIssue(p, raw(p), `at most the maximum takeoff weight (${siText(kg(w.maxTakeoff))})`, msg`the maximum landing weight ${kg(w.maxLanding)} is above the maximum takeoff weight ${kg(w.maxTakeoff)}`));
   }
   const inletWeights = project.inlets.map((i) => i.weight * project.engine.count);
   const heaviest = Math.max(0, ...inletWeights);
   if (w.operatingEmpty + heaviest >= w.maxZeroFuel) {
     const p = 'airframe.weights.operatingEmpty';
-    issues.push(makeIssue(p, raw(p), `below the maximum zero-fuel weight (${kg(w.maxZeroFuel)}) with the inlets' weight`, `${raw(p)} plus the inlets (${kg(w.operatingEmpty + heaviest)}) is not below the maximum zero-fuel weight (${kg(w.maxZeroFuel)})`));
+    issues.push(makeIssue(p, raw(p), `below the maximum zero-fuel weight (${siText(kg(w.maxZeroFuel))}) with the inlets' weight`, msg`the operating empty weight ${kg(w.operatingEmpty)} plus the inlets (${kg(w.operatingEmpty + heaviest)}) is not below the maximum zero-fuel weight ${kg(w.maxZeroFuel)}`));
   }
 
   const names = new Set<string>();
@@ -91,7 +96,7 @@ export function checkProject(project: Project, doc: unknown): ProjectIssue[] {
   if (solved.length > 1) {
     for (const i of solved.slice(1)) {
       const p = `mission.legs[${i}].distance`;
-      issues.push(makeIssue(p, raw(p), 'a distance (only one cruise leg may be "solve")', `"solve" is already used by mission.legs[${solved[0]}]; only one cruise leg may have its distance solved`));
+      issues.push(makeIssue(p, raw(p), 'a distance (only one cruise leg may be "solve")', `"solve" is already used by leg ${solved[0]! + 1}; only one cruise leg may have its distance solved`));
     }
   }
   const mode = project.mission.solve.mode;
@@ -101,7 +106,7 @@ export function checkProject(project: Project, doc: unknown): ProjectIssue[] {
   const solve = project.mission.solve;
   if (solve.mode === 'takeoffWeight' && solve.takeoffWeight <= w.operatingEmpty + solve.payload) {
     const p = 'mission.solve.takeoffWeight';
-    issues.push(makeIssue(p, raw(p), 'more than the operating empty weight plus payload', `${raw(p)} leaves no fuel above the operating empty weight plus payload (${kg(w.operatingEmpty + solve.payload)})`));
+    issues.push(makeIssue(p, raw(p), 'more than the operating empty weight plus payload', msg`the take-off weight ${kg(solve.takeoffWeight)} leaves no fuel above the operating empty weight plus payload (${kg(w.operatingEmpty + solve.payload)})`));
   }
 
   let altitude_m = 0;
@@ -109,23 +114,23 @@ export function checkProject(project: Project, doc: unknown): ProjectIssue[] {
     if (leg.kind === 'climb') {
       if (leg.toAltitude <= altitude_m) {
         const p = `mission.legs[${i}].toAltitude`;
-        issues.push(makeIssue(p, raw(p), `above ${ft(altitude_m)} (the altitude reached by the legs before)`, `${raw(p)} is not above ${ft(altitude_m)}, the altitude reached by the legs before; a climb must go up`));
+        issues.push(makeIssue(p, raw(p), `above ${siText(ft(altitude_m))} (the altitude reached by the legs before)`, msg`the climb's target altitude ${ft(leg.toAltitude)} is not above ${ft(altitude_m)}, the altitude reached by the legs before; a climb must go up`));
       }
       altitude_m = leg.toAltitude;
     } else if (leg.kind === 'descent') {
       if (leg.toAltitude >= altitude_m) {
         const p = `mission.legs[${i}].toAltitude`;
-        issues.push(makeIssue(p, raw(p), `below ${ft(altitude_m)} (the altitude reached by the legs before)`, `${raw(p)} is not below ${ft(altitude_m)}, the altitude reached by the legs before; a descent must go down`));
+        issues.push(makeIssue(p, raw(p), `below ${siText(ft(altitude_m))} (the altitude reached by the legs before)`, msg`the descent's target altitude ${ft(leg.toAltitude)} is not below ${ft(altitude_m)}, the altitude reached by the legs before; a descent must go down`));
       }
       altitude_m = leg.toAltitude;
     } else if (leg.kind === 'cruise') {
       if (Math.abs(leg.altitude - altitude_m) > ALTITUDE_MATCH_TOLERANCE_M) {
         const p = `mission.legs[${i}].altitude`;
-        issues.push(makeIssue(p, raw(p), `${ft(altitude_m)} (the altitude reached by the legs before)`, `${raw(p)} differs from ${ft(altitude_m)}, the altitude reached by the legs before; add a climb or descent leg`));
+        issues.push(makeIssue(p, raw(p), `${siText(ft(altitude_m))} (the altitude reached by the legs before)`, msg`the cruise altitude ${ft(leg.altitude)} differs from ${ft(altitude_m)}, the altitude reached by the legs before; add a climb or descent leg`));
       }
       if (leg.profile.kind !== 'constantAltitude' && leg.profile.maxAltitude < leg.altitude) {
         const p = `mission.legs[${i}].profile.maxAltitude`;
-        issues.push(makeIssue(p, raw(p), 'at least the cruise altitude', `${raw(p)} is below the cruise altitude ${raw(`mission.legs[${i}].altitude`)}`));
+        issues.push(makeIssue(p, raw(p), 'at least the cruise altitude', msg`the highest altitude ${ft(leg.profile.maxAltitude)} is below the cruise altitude ${ft(leg.altitude)}`));
       }
       altitude_m = leg.altitude;
     }
@@ -133,7 +138,7 @@ export function checkProject(project: Project, doc: unknown): ProjectIssue[] {
   const elevation_m = project.mission.destinationElevation;
   if (elevation_m !== undefined && elevation_m > altitude_m + ALTITUDE_MATCH_TOLERANCE_M) {
     const p = 'mission.destinationElevation';
-    issues.push(makeIssue(p, raw(p), `at most ${ft(altitude_m)} (the altitude the legs end at)`, `${raw(p)} is above ${ft(altitude_m)}, the altitude the legs end at; the last descent should end above the destination (1,500 ft above it is common practice)`));
+    issues.push(makeIssue(p, raw(p), `at most ${siText(ft(altitude_m))} (the altitude the legs end at)`, msg`the destination elevation ${ft(elevation_m)} is above ${ft(altitude_m)}, the altitude the legs end at; the last descent should end above the destination (1,500 ft above it is common practice)`));
   }
   issues.push(...checkUncertainty(project, raw));
   return issues;

@@ -4,6 +4,7 @@
  */
 import type { z } from 'zod';
 import { escapeControls } from '../propulsion/deckFileError';
+import { messageText, type MessageParts } from '../units/messageParts';
 
 export interface ProjectIssue {
   /** JSON path such as `mission.legs[3].toAltitude`; `(file)` for the whole document. */
@@ -13,6 +14,8 @@ export interface ProjectIssue {
   readonly expected: string;
   /** One sentence naming the path, the value and what was expected. */
   readonly message: string;
+  /** The reason alone (no path) with its numbers as quantities, for display in the reader's units. */
+  readonly reasonParts?: MessageParts;
 }
 
 export type JsonPath = readonly PropertyKey[];
@@ -53,9 +56,14 @@ export function showValue(value: unknown): string {
   return text.length > 60 ? `${text.slice(0, 57)}...` : text;
 }
 
-/** Builds an issue whose message reads `path: reason` (control characters from the file escaped as \uXXXX). */
-export function makeIssue(path: string, value: string, expected: string, reason: string): ProjectIssue {
-  return { path, value, expected, message: escapeControls(`${path}: ${reason}`) };
+/**
+ * Builds an issue whose message reads `path: reason` (control characters from the file escaped as \uXXXX).
+ * A reason given as message parts keeps its quantities for display in other units.
+ */
+export function makeIssue(path: string, value: string, expected: string, reason: string | MessageParts): ProjectIssue {
+  if (typeof reason === 'string') return { path, value, expected, message: escapeControls(`${path}: ${reason}`) };
+  const reasonParts = reason.map((p) => (typeof p === 'string' ? escapeControls(p) : p));
+  return { path, value, expected, message: `${escapeControls(path)}: ${messageText(reasonParts, 'both')}`, reasonParts };
 }
 
 const TYPE_NAMES: Readonly<Record<string, string>> = {
@@ -95,7 +103,10 @@ export function fromZodIssues(issues: readonly z.core.$ZodIssue[], doc: unknown)
     switch (issue.code) {
       case 'custom': {
         const expected = expectedFromParams(issue) ?? issue.message;
-        out.push(makeIssue(path, value, expected, issue.message));
+        const parts = (issue as { params?: { parts?: MessageParts } }).params?.parts;
+        // The file's own text stays in the message; the parts let a screen show the value in its units.
+        const made = makeIssue(path, value, expected, issue.message);
+        out.push(parts === undefined ? made : { ...made, reasonParts: parts });
         break;
       }
       case 'invalid_type': {

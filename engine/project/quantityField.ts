@@ -6,6 +6,8 @@
  */
 import { z } from 'zod';
 import { DIMENSION_EXAMPLES, DIMENSION_PHRASE, SI_UNIT } from '../units/dimension';
+import type { DisplayKind } from '../units/displayUnits';
+import { msg, q, type MessageKind, type MessageParts } from '../units/messageParts';
 import { parseQuantity, type Dimension } from '../units/quantity';
 import { showValue } from './projectIssue';
 
@@ -26,6 +28,36 @@ export interface QuantityBounds {
   readonly min?: number;
   readonly max?: number;
   readonly what: string;
+}
+
+/** How a bounded value of a dimension is shown in a message (lengths as altitudes, the usual bounded length). */
+const MESSAGE_KIND: Partial<Readonly<Record<Dimension, DisplayKind>>> = {
+  length: 'altitude',
+  speed: 'speed',
+  mass: 'mass',
+  force: 'force',
+  massFlow: 'fuelFlow',
+  temperature: 'temperature',
+  temperatureDelta: 'temperatureDelta',
+  pressure: 'pressure',
+  time: 'time',
+  area: 'area',
+  power: 'power',
+  tsfc: 'tsfc',
+};
+
+/** "x is out of range: expected from a to b" with the numbers as quantities. */
+function outOfRangeParts(value: number, dimension: Dimension, bounds: QuantityBounds): MessageParts {
+  const kind: MessageKind = MESSAGE_KIND[dimension] ?? 'ratio';
+  const range =
+    bounds.min !== undefined && bounds.max !== undefined
+      ? msg`from ${q(bounds.min, kind)} to ${q(bounds.max, kind)}`
+      : bounds.min !== undefined
+        ? msg`at least ${q(bounds.min, kind)}`
+        : msg`at most ${q(bounds.max ?? Number.NaN, kind)}`;
+  // `what` reads "a Mach number from 0.05 to 0.99": its noun stays, its numbers are shown as quantities.
+  const noun = bounds.what.split(/ (?:from|in|at least|at most|>|>=|<|<=) /)[0]!;
+  return msg`${q(value, kind)} is out of range: expected ${noun} ${range}`;
 }
 
 /**
@@ -63,7 +95,7 @@ export function quantity(dimension: Dimension, bounds?: QuantityBounds) {
         return z.NEVER;
       }
       if (bounds && ((bounds.min !== undefined && value < bounds.min) || (bounds.max !== undefined && value > bounds.max))) {
-        ctx.issues.push({ code: 'custom', input, message: `${shown(input)} is out of range: expected ${bounds.what}`, params: { expected } });
+        ctx.issues.push({ code: 'custom', input, message: `${shown(input)} is out of range: expected ${bounds.what}`, params: { expected, parts: outOfRangeParts(value, dimension, bounds) } });
         return z.NEVER;
       }
       return value;

@@ -6,6 +6,7 @@
  */
 import type { Caution } from '../cautions/caution';
 import { err, ok, type Result } from '../core/result';
+import { messageText, msg, q, withParts, type MessageParts } from '../units/messageParts';
 import type { EngineDeck, OutOfTablePolicy } from './engineDeck';
 import type { DeckAxis, FlightCondition, RatingName } from './propulsionModel';
 import {
@@ -113,20 +114,21 @@ export function finishLookup(
   if (approximateTemperature) cautions.push(temperatureCaution(deck.title, condition.isaDev_K));
   // Off the table, a linear extrapolation can fall below zero: no engine gives negative fuel flow or airflow,
   // and the installed model needs thrust >= 0; each is floored at zero with a caution naming the value.
-  const floored: string[] = [];
-  const floor = (name: string, value: number, unit: string): number => {
+  const floored: MessageParts[] = [];
+  const floor = (name: string, value: number, kind: 'force' | 'fuelFlow' | 'airflow'): number => {
     if (value >= 0) return value;
-    floored.push(`${name} ${round(value)} ${unit}`);
+    floored.push(msg`${name} ${q(value, kind)}`);
     return 0;
   };
-  const thrust = floor('thrust', v[0]!, 'N');
-  fuelFlow = floor('fuel flow', fuelFlow, 'kg/s');
-  if (airflow !== null) airflow = floor('airflow', airflow, 'kg/s');
+  const thrust = floor('thrust', v[0]!, 'force');
+  fuelFlow = floor('fuel flow', fuelFlow, 'fuelFlow');
+  if (airflow !== null) airflow = floor('airflow', airflow, 'airflow');
   if (floored.length > 0) {
+    const list = floored.flatMap((f, k) => (k === 0 ? f : [', ', ...f]));
     cautions.push({
       id: 'deck_output_floored',
       severity: 'warning',
-      message: `Deck "${deck.title}": the extrapolation off the table gave ${floored.join(', ')}; read as 0 (${outside.join(', ')} outside the table).`,
+      ...withParts(msg`Deck "${deck.title}": the extrapolation off the table gave ${list}; read as 0 (${outside.join(', ')} outside the table).`),
       value: v[0]!,
       threshold: 0,
     });
@@ -168,9 +170,10 @@ export function refusal(deck: EngineDeck, s: DeckNodeSet): DeckLookupError {
     value,
     min,
     max,
-    message:
-      `Deck "${deck.title}": ${describeValue(axis, value)} is outside the table ` +
-      `(${describeRange(axis, min, max, s)}) and the ${DECK_AXES[axis]} policy is 'refuse'.`,
+    message: messageText(
+      msg`Deck "${deck.title}": ${describeValue(axis, value)} is outside the table (${describeRange(axis, min, max, s)}) and the ${DECK_AXES[axis]!} policy is 'refuse'.`,
+      'both',
+    ),
   };
 }
 
@@ -185,47 +188,42 @@ function outsideCaution(deck: EngineDeck, axis: number, s: DeckNodeSet): Caution
     policy === 'clamp'
       ? `read at the ${above ? 'highest' : 'lowest'} tabulated value`
       : 'extrapolated linearly from the last two tabulated values';
+  const parts = msg`Deck "${deck.title}": ${describeValue(axis, value)} is ${above ? 'above' : 'below'} the table (${describeRange(axis, min, max, s)}); ${what}.`;
   return {
     id: policy === 'clamp' ? 'deck_clamped' : 'deck_extrapolation',
     severity: 'caution',
-    message:
-      `Deck "${deck.title}": ${describeValue(axis, value)} is ${above ? 'above' : 'below'} the table ` +
-      `(${describeRange(axis, min, max, s)}); ${what}.`,
+    message: messageText(parts, 'both'),
+    parts,
     value,
     threshold: bound,
   };
 }
 
-function describeValue(axis: number, value: number): string {
+function describeValue(axis: number, value: number): MessageParts {
   switch (axis) {
     case AXIS_ALTITUDE:
-      return `altitude ${round(value)} m (${round(value / 0.3048)} ft)`;
+      return msg`altitude ${q(value, 'altitude')}`;
     case AXIS_MACH:
-      return `Mach ${round(value)}`;
+      return msg`Mach ${q(value, 'mach')}`;
     case AXIS_POWER:
-      return `power ${round(value)}`;
+      return msg`power ${q(value, 'ratio')}`;
     case AXIS_ISA_DEV:
-      return `ISA deviation ${round(value)} K`;
+      return msg`ISA deviation ${q(value, 'temperatureDelta')}`;
     default:
       throw new RangeError(`unknown deck axis ${axis}`);
   }
 }
 
-function describeRange(axis: number, min: number, max: number, s: DeckNodeSet): string {
-  const unit = axis === AXIS_ALTITUDE ? ' m' : axis === AXIS_ISA_DEV ? ' K' : '';
-  const alt = s.outsideAtAltitude_m[axis]!;
-  const altText = `${round(alt)} m (${round(alt / 0.3048)} ft)`;
+function describeRange(axis: number, min: number, max: number, s: DeckNodeSet): MessageParts {
+  const kind = axis === AXIS_ALTITUDE ? 'altitude' : axis === AXIS_ISA_DEV ? 'temperatureDelta' : axis === AXIS_MACH ? 'mach' : 'ratio';
+  const alt = q(s.outsideAtAltitude_m[axis]!, 'altitude');
   const where =
     axis === AXIS_MACH
-      ? ` at the tabulated altitude ${altText}`
+      ? msg` at the tabulated altitude ${alt}`
       : axis === AXIS_POWER
-        ? ` at the tabulated node ${altText}, Mach ${round(s.outsideAtMach[axis]!)}`
-        : '';
-  return `${round(min)} to ${round(max)}${unit}${where}`;
-}
-
-function round(x: number): number {
-  return Number(x.toPrecision(6));
+        ? msg` at the tabulated node ${alt}, Mach ${q(s.outsideAtMach[axis]!, 'mach')}`
+        : [];
+  return [q(min, kind), ' to ', q(max, kind), ...where];
 }
 
 function assertFiniteInputs(condition: FlightCondition, power: number): void {

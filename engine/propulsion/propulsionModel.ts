@@ -23,6 +23,15 @@ export const RATING_NAMES: readonly RatingName[] = [
   'flightIdle',
 ];
 
+/** Each rating as a reader names it (messages, screens, reports). */
+export const RATING_LABEL: Readonly<Record<RatingName, string>> = {
+  takeoff: 'take-off',
+  maxClimb: 'maximum climb',
+  maxCruise: 'maximum cruise',
+  maxContinuous: 'maximum continuous',
+  flightIdle: 'flight idle',
+};
+
 /** The deck axis a lookup left, if any. */
 export type DeckAxis = 'altitude' | 'mach' | 'power' | 'isaDev';
 

@@ -1,5 +1,6 @@
 import type { Caution } from '../../engine/cautions/caution';
 import { formatQuantity, type UnitSystem } from '../../engine/units/quantity';
+import { cautionText, severityLabel } from '../state/displayText';
 import type { Highlight } from '../state/studyState';
 
 /** Every caution a result raised; clicking one highlights its leg and time. */
@@ -17,7 +18,7 @@ export function CautionList(props: {
         const where = [c.legName, c.time_s === undefined ? undefined : `at ${formatQuantity(c.time_s, 'time', props.units)}`].filter(Boolean).join(' ');
         const body = (
           <>
-            <span className={`severity severity-${c.severity}`}>{c.severity}</span> {c.message}
+            <span className={`severity severity-${c.severity}`}>{severityLabel(c.severity)}</span> {cautionText(c, props.units)}
             {where ? <span className="caution-where"> ({where})</span> : null}
           </>
         );

@@ -1,8 +1,18 @@
 import type { EngineFailure } from '../worker/engineProtocol';
 import type { ProjectIssue } from '../../engine/project/projectIssue';
+import { issueReason, pathLabel } from '../state/displayText';
+import { StudyContext } from '../state/studyContext';
+import { useContext } from 'react';
 
-/** Project issues: path and message each. */
-export function IssueList(props: { readonly issues: readonly ProjectIssue[]; readonly testId: string; readonly title: string }) {
+/** Project issues: where (as a reader names it, legs from 1) and why, in the chosen units. */
+export function IssueList(props: {
+  readonly issues: readonly ProjectIssue[];
+  readonly testId: string;
+  readonly title: string;
+  /** Also show each issue's place in the file (a file that failed to open is fixed in a text editor). */
+  readonly showFilePath?: boolean;
+}) {
+  const units = useContext(StudyContext)?.state.units ?? 'customary';
   if (props.issues.length === 0) return null;
   return (
     <section className="issues" data-testid={props.testId} role="alert">
@@ -10,7 +20,8 @@ export function IssueList(props: { readonly issues: readonly ProjectIssue[]; rea
       <ul>
         {props.issues.map((i, k) => (
           <li key={`${i.path}-${k}`}>
-            <code>{i.path}</code> {i.message}
+            <strong className="issue-where">{pathLabel(i.path)}:</strong> {issueReason(i, units)}
+            {props.showFilePath && i.path !== '(file)' ? <span className="small"> (in the file at {i.path})</span> : null}
           </li>
         ))}
       </ul>
@@ -39,7 +50,7 @@ export function FailureNotice(props: { readonly failure: EngineFailure | null; r
     <section className="issues" data-testid={props.testId} role="alert">
       <h3>The analysis stopped</h3>
       <p>
-        {f.message} <span className="code">({f.code})</span>
+        {f.message}
       </p>
     </section>
   );

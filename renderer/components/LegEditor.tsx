@@ -1,6 +1,7 @@
 import type { ProjectLeg } from '../../engine/project/projectSchema';
 import { RATING_NAMES } from '../../engine/propulsion/propulsionModel';
 import { LEG_KIND_LABEL, LEG_KINDS, newLeg, type LegKindName } from '../state/legTemplates';
+import { ratingLabel } from '../state/displayText';
 import { useStudy } from '../state/studyContext';
 import { ChoiceField } from './ChoiceField';
 import { QuantityField } from './QuantityField';
@@ -57,7 +58,7 @@ export function LegFields(props: { readonly leg: ProjectLeg; readonly n: number 
         <>
           <QuantityField label="To altitude" path={[...p, 'toAltitude']} unit="altitude" testId={id('to-altitude')} />
           <Schedule n={n} />
-          <ChoiceField label="Rating" testId={id('rating')} value={leg.rating} choices={RATING_NAMES.map((r) => ({ value: r, label: r }))} onChoose={(r) => set(['rating'], r, 'rating')} />
+          <ChoiceField label="Rating" testId={id('rating')} value={leg.rating} choices={RATING_NAMES.map((r) => ({ value: r, label: ratingLabel(r) }))} onChoose={(r) => set(['rating'], r, 'rating')} />
         </>
       );
     case 'cruise':

@@ -1,6 +1,7 @@
 import { Bar, BarChart, CartesianGrid, Cell, ReferenceLine, Tooltip, XAxis, YAxis } from 'recharts';
 import type { WaterfallRow } from '../charts/compareSeries';
 import { tickText } from '../charts/seriesKeys';
+import { groupDigits } from '../../engine/units/displayUnits';
 import { DEFAULT_CHART_SIZE, type ChartSize } from './LineChartPanel';
 
 /** Block-fuel breakdown as a waterfall: an invisible base bar stacked under the visible step. */
@@ -14,7 +15,7 @@ export function WaterfallChart(props: { readonly rows: readonly WaterfallRow[]; 
         {/* Every factor keeps its label (recharts would skip some): angled so long names fit. */}
         <XAxis dataKey="name" interval={0} angle={-20} textAnchor="end" height={56} tick={{ fontSize: 11 }} />
         <YAxis label={{ value: props.unit, angle: -90, position: 'insideLeft' }} tickFormatter={tickText} width={64} />
-        <Tooltip formatter={(_v, _n, item) => [(item.payload as WaterfallRow).value.toFixed(1), 'B - A']} />
+        <Tooltip formatter={(_v, _n, item) => [`${groupDigits((item.payload as WaterfallRow).value, 1)} ${props.unit}`, 'B - A']} />
         <ReferenceLine y={0} stroke="#000" />
         <Bar dataKey="base" stackId="w" fill="transparent" isAnimationActive={false} />
         <Bar dataKey="height" stackId="w" isAnimationActive={false}>

@@ -10,6 +10,7 @@ import { LegsTable } from '../components/LegsTable';
 import { ThrustLapseChart } from '../components/LapseCharts';
 import { LineChartPanel } from '../components/LineChartPanel';
 import { deckTitleText } from '../state/deckTitle';
+import { missionStatusText, ratingLabel, solveModeLabel, statusLabel } from '../state/displayText';
 import { LEG_KIND_LABEL } from '../state/legTemplates';
 import { RESERVE_PRESET_LABEL } from '../state/reservePresets';
 import type { StudySnapshot } from '../worker/engineProtocol';
@@ -70,20 +71,20 @@ export function StudyReport(props: { readonly project: Project; readonly snapsho
           <tr>
             <td>Solve</td>
             <td>
-              {p.mission.solve.mode}, payload {formatQuantity(p.mission.solve.payload, 'mass', u)}
+              {solveModeLabel(p.mission.solve.mode)}, payload {formatQuantity(p.mission.solve.payload, 'mass', u)}
             </td>
           </tr>
         </tbody>
       </table>
       <h2>Results</h2>
-      <p>Mission status: {m.status}{m.statusMessage ? ` — ${m.statusMessage}` : ''}</p>
+      <p>Mission status: {statusLabel(m.status)}{m.status !== 'ok' ? ` — ${missionStatusText(m, u)}` : ''}</p>
       <HeadlineFigures result={m} units={u} idPrefix="report-headline" />
       <LineChartPanel title="Altitude against distance" testId="report-chart-altitude" data={rows} xKey="distance" xLabel={`distance (${displayUnit('distance', u)})`} yLabel={`altitude (${displayUnit('altitude', u)})`} series={[{ key: 'altitude', name: 'pressure altitude' }]} size={REPORT_CHART} />
       <LineChartPanel title="Mass against distance" testId="report-chart-mass" data={rows} xKey="distance" xLabel={`distance (${displayUnit('distance', u)})`} yLabel={`mass (${displayUnit('mass', u)})`} series={[{ key: 'mass', name: 'aircraft mass' }]} size={REPORT_CHART} />
       {polar ? <LineChartPanel title={`Drag polar with ${s.inletName}'s external drag`} testId="report-chart-polar" data={polar.rows} xKey="cl" xLabel="CL" yLabel="CD" series={polar.series} size={REPORT_CHART} /> : null}
       {lapse ? (
         <ThrustLapseChart
-          title={`Thrust at ${s.lapse[0]!.rating}, all engines: uninstalled (dashed) and installed`}
+          title={`Thrust at ${ratingLabel(s.lapse[0]!.rating)}, all engines: uninstalled (dashed) and installed`}
           testId="report-chart-lapse"
           lapse={lapse}
           size={REPORT_CHART}

@@ -20,7 +20,7 @@ export interface CautionLimit {
 
 const D = DEFAULT_CAUTION_SETTINGS;
 const C = CAUTION_CATALOGUE;
-const FAN_FACE_SOURCE = 'Fan-face Mach band of about 0.4 to 0.6, common practice (engine/cautions/cautionSettings.ts)';
+const FAN_FACE_SOURCE = 'Fan-face Mach band of about 0.4 to 0.6, common practice';
 
 export const CAUTION_LIMITS: readonly CautionLimit[] = [
   { key: 'minResidualClimbRate', label: 'Least residual climb rate at top of climb', unit: 'climbRate', default_si: D.minResidualClimbRate_m_s, source: C.residual_climb_low.source, catalogueId: 'residual_climb_low' },

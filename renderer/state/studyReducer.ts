@@ -7,6 +7,7 @@
  */
 import type { Draft } from 'immer';
 import type { Project } from '../../engine/project/projectSchema';
+import { issueReason } from './displayText';
 import { parseField } from './fieldUnits';
 import { newLeg } from './legTemplates';
 import { pathText, readAt, writeAtMutating } from './projectPath';
@@ -44,7 +45,7 @@ function fieldEdited(state: StudyState, action: Extract<StudyAction, { type: 'fi
   const issues = trial === state.doc ? state.issues : projectIssues(trial.present);
   const atField = issues.find((i) => i.path === key);
   if (atField) {
-    return { ...state, drafts: { ...state.drafts, [key]: { text: action.text, message: atField.message } } };
+    return { ...state, drafts: { ...state.drafts, [key]: { text: action.text, message: issueReason(atField, state.units) } } };
   }
   return { ...state, doc: trial, issues, drafts: withoutDraft(state.drafts, key) };
 }

@@ -7,12 +7,10 @@ import { JobProgress } from '../components/JobProgress';
 import { LineChartPanel, type ChartSize } from '../components/LineChartPanel';
 import { UncertaintyBand } from '../components/UncertaintyBand';
 import { WaterfallChart } from '../components/WaterfallChart';
+import { machText as mach, ratingLabel } from '../state/displayText';
 import { useStudy } from '../state/studyContext';
 import { useEngineJob, type LiveStudy } from '../worker/useEngine';
 
-function mach(m: number | null): string {
-  return m === null ? '—' : m.toFixed(3);
-}
 
 /** Inlet A against B on block fuel, side by side, with the breakdown of the difference. */
 function InletComparisonPanel(props: { readonly chartSize?: ChartSize }) {
@@ -108,7 +106,7 @@ function InletComparisonPanel(props: { readonly chartSize?: ChartSize }) {
           </table>
           <p className="small">
             Crossover compared at {formatQuantity(c.value.crossoverCondition.altitude_m, 'altitude', u)}, {formatQuantity(c.value.crossoverCondition.mass_kg, 'mass', u)},{' '}
-            {c.value.crossoverCondition.rating}.
+            {ratingLabel(c.value.crossoverCondition.rating)}.
             {c.value.designs.some((d) => d.crossover.lowMach === null || d.crossover.highMach === null)
               ? ' A crossover shown as — does not exist there: thrust exceeds drag down to the stall or the lowest Mach examined (low), or up to the highest (high).'
               : ''}

@@ -5,7 +5,10 @@ import { ChoiceField } from '../components/ChoiceField';
 import { FailureNotice } from '../components/IssueList';
 import { LineChartPanel, type ChartSize } from '../components/LineChartPanel';
 import { LocalQuantityField } from '../components/LocalQuantityField';
+import { machText, ratingLabel } from '../state/displayText';
 import { useStudy } from '../state/studyContext';
+import { messageIn } from '../../engine/units/messageParts';
+import { groupDigits } from '../../engine/units/displayUnits';
 import type { CrossoverRequestQuery } from '../worker/engineProtocol';
 import { useEngineJob, type LiveStudy } from '../worker/useEngine';
 
@@ -36,7 +39,7 @@ export function CrossoverView(props: { readonly live: LiveStudy; readonly chartS
       <div className="field-grid">
         <LocalQuantityField label="Pressure altitude" value_si={altitude_m} unit="altitude" units={u} testId="field-crossover-altitude" onValue={setAltitude} />
         <LocalQuantityField label="Aircraft mass" value_si={mass_kg} unit="mass" units={u} testId="field-crossover-mass" onValue={setMass} />
-        <ChoiceField label="Rating" testId="crossover-rating" value={rating} choices={RATING_NAMES.map((r) => ({ value: r, label: r }))} onChoose={setRating} />
+        <ChoiceField label="Rating" testId="crossover-rating" value={rating} choices={RATING_NAMES.map((r) => ({ value: r, label: ratingLabel(r) }))} onChoose={setRating} />
         <label className="toggle">
           <input type="checkbox" data-testid="crossover-all-inlets" checked={allInlets} onChange={(e) => setAllInlets(e.target.checked)} /> Every inlet design
         </label>
@@ -47,7 +50,7 @@ export function CrossoverView(props: { readonly live: LiveStudy; readonly chartS
         <>
           {shown.curves.map(({ inletName, result }) => (
             <p key={inletName} data-testid="crossover-message">
-              {inletName}: {result.message}
+              {inletName}: {messageIn(result, u)}
             </p>
           ))}
           <LineChartPanel
@@ -77,8 +80,8 @@ export function CrossoverView(props: { readonly live: LiveStudy; readonly chartS
                 <tr key={`${m.inletName}-${m.what}`}>
                   <td>{m.inletName}</td>
                   <td>{m.what}</td>
-                  <td>{m.mach.toFixed(3)}</td>
-                  <td>{m.thrust === null ? '—' : m.thrust.toFixed(2)}</td>
+                  <td>{machText(m.mach)}</td>
+                  <td>{m.thrust === null ? '—' : groupDigits(m.thrust, u === 'si' ? 2 : 0)}</td>
                 </tr>
               ))}
             </tbody>

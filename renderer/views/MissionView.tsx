@@ -4,6 +4,7 @@ import { IssueList } from '../components/IssueList';
 import { LegEditor } from '../components/LegEditor';
 import { QuantityField } from '../components/QuantityField';
 import { formatField } from '../state/fieldUnits';
+import { solveModeLabel } from '../state/displayText';
 import { LEG_KIND_LABEL, LEG_KINDS, type LegKindName } from '../state/legTemplates';
 import { RESERVE_PRESET_LABEL, reservesForPreset, type ReservePreset } from '../state/reservePresets';
 import { selectIssuesUnder } from '../state/selectors';
@@ -25,7 +26,7 @@ function Reserves() {
         testId="reserves-preset"
         value={r.preset}
         choices={(Object.keys(RESERVE_PRESET_LABEL) as ReservePreset[]).map((k) => ({ value: k, label: RESERVE_PRESET_LABEL[k] }))}
-        onChoose={(preset) => dispatch({ type: 'valueSet', path: p, value: reservesForPreset(preset, r.alternate), label: `Reserves: ${preset}` })}
+        onChoose={(preset) => dispatch({ type: 'valueSet', path: p, value: reservesForPreset(preset, r.alternate), label: `Reserves: ${RESERVE_PRESET_LABEL[preset]}` })}
       />
       {r.preset === 'icaoAnnex6' || r.preset === 'custom' ? <QuantityField label="Contingency fraction of trip fuel" path={[...p, 'contingencyFraction']} unit="percent" testId="field-contingency" /> : null}
       {r.preset === 'icaoAnnex6' ? <QuantityField label="Least contingency (time at holding)" path={[...p, 'minContingencyTime']} unit="duration" testId="field-min-contingency" /> : null}
@@ -82,7 +83,7 @@ function Solve() {
           dispatch({
             type: 'valueSet',
             path: p,
-            label: `Solve for ${mode}`,
+            label: `Solve for ${solveModeLabel(mode)}`,
             value:
               mode === 'payloadRange'
                 ? { mode, payload, range: 1500 * NMI }

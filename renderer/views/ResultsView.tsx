@@ -1,4 +1,4 @@
-import { displayUnit, toDisplay } from '../../engine/units/quantity';
+import { displayUnit, formatQuantity } from '../../engine/units/quantity';
 import { profileSeries } from '../charts/profileSeries';
 import { CautionList } from '../components/CautionList';
 import { HeadlineFigures } from '../components/HeadlineFigures';
@@ -9,6 +9,7 @@ import { StaleMark } from '../components/StaleMark';
 import { UncertaintyBand } from '../components/UncertaintyBand';
 import { useStudy } from '../state/studyContext';
 import { deckTitleText } from '../state/deckTitle';
+import { missionStatusText, statusLabel } from '../state/displayText';
 import type { LiveStudy } from '../worker/useEngine';
 
 function distanceAtTime(rows: ReturnType<typeof profileSeries>, time_s: number): number | null {
@@ -42,8 +43,8 @@ export function ResultsView(props: { readonly live: LiveStudy; readonly chartSiz
       <StaleMark stale={stale} running={running} />
       <FailureNotice failure={failure} testId="results-failure" />
       <p data-testid="mission-status" className={m.status === 'ok' ? 'status-ok' : 'status-bad'}>
-        Mission status: {m.status}
-        {m.statusMessage ? ` — ${m.statusMessage}` : ''} (inlet {snapshot.inletName}; deck {deckTitleText(snapshot.deck.title, snapshot.deck.parametric)})
+        Mission status: {statusLabel(m.status)}
+        {m.status !== 'ok' ? ` — ${missionStatusText(m, u)}` : ''} (inlet {snapshot.inletName}; deck {deckTitleText(snapshot.deck.title, snapshot.deck.parametric)})
       </p>
       <HeadlineFigures result={m} units={u} />
       <UncertaintyBand designs={[snapshot.inletName]} testId="results-uncertainty" {...(props.chartSize ? { chartSize: props.chartSize } : {})} />
@@ -84,7 +85,7 @@ export function ResultsView(props: { readonly live: LiveStudy; readonly chartSiz
           </button>
         </p>
       ) : null}
-      <p className="small">Reserve fuel {toDisplay(m.reserves.total_kg, 'mass', u).toFixed(0)} {displayUnit('mass', u)}: contingency, alternate, final reserve and extra as the reserve preset sets them.</p>
+      <p className="small">Reserve fuel {formatQuantity(m.reserves.total_kg, 'mass', u)}: contingency, alternate, final reserve and extra as the reserve preset sets them.</p>
     </section>
   );
 }

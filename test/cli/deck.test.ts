@@ -155,7 +155,7 @@ describe('blockwise deck at', () => {
       expect(j.error).toMatchObject({ code: 'outside_deck', axis: 'mach', value: 0.9, min: 0.2, max: 0.8 });
       const t = await run('deck', 'at', file, '--altitude', '3000 m', '--mach', '0.9', '--power', '1');
       expect(t.code).toBe(1);
-      expect(t.err).toContain("Mach 0.9 is outside the table");
+      expect(t.err).toContain("Mach 0.900 is outside the table");
     } finally {
       rmSync(dir, { recursive: true, force: true });
     }

@@ -71,7 +71,7 @@ describe('flightEnvelope', () => {
   it('flightEnvelope reports a ceiling above the altitude range as null with a message, and rejects bad rates', () => {
     const low = expectOk(flightEnvelope(models, { ...query, altitudeRange: [0, 4000] }), 'envelope');
     expect(low.ceilings[0]!.altitude_m).toBeNull();
-    expect(low.ceilings[0]!.message).toMatch(/above 4000 m/);
+    expect(low.ceilings[0]!.message).toMatch(/above 13,123 ft \(4,000 m\)/);
     const bad = flightEnvelope(models, { ...query, residualClimbRates: [{ name: 'odd', climbRate_m_s: -1 }] });
     expect(bad.ok ? '' : bad.error.message).toMatch(/"odd" -1 m\/s/);
   });

@@ -39,7 +39,7 @@ describe('missionStatus', () => {
     // Mach 0.3 at 3,000 m: TAS = 0.3 x 328.6 m/s = 98.6 m/s (ISA speed of sound, U.S. Standard Atmosphere 1976).
     const r = fly(cruiseAt(3000, 0.3, 200_000), 70000, { wind_m_s: -120 });
     expect(r.status).toBe('no_ground_progress');
-    expect(r.statusMessage).toMatch(/headwind 120\.0 m\/s/);
+    expect(r.statusMessage).toMatch(/headwind [\d,]+ kt \(120\.0 m\/s\)/);
     expect(r.groundDistance_m).toBeLessThanOrEqual(0);
     expect(missionStatusClass(r.status)).toBe('cannot_reach');
     // A lighter headwind flies: ground = air + wind x time (definition of an along-track wind).
@@ -51,15 +51,15 @@ describe('missionStatus', () => {
   it('a take-off above MTOW is above_mtow with both masses in the sentence', () => {
     const r = fly(cruiseAt(11000, 0.78, 500_000), 82000, { airframe: { ...TEST_AIRFRAME, maxFuel_kg: 40000 } });
     expect(r.status).toBe('above_mtow');
-    expect(r.statusMessage).toContain('82000 kg');
-    expect(r.statusMessage).toContain('80000 kg');
+    expect(r.statusMessage).toContain('82,000 kg');
+    expect(r.statusMessage).toContain('80,000 kg');
     expect(r.cautions.map((c) => c.id)).toContain('mtow_exceeded');
   });
 
   it('fuel above the tanks is fuel_above_capacity; a landing above MLW is landing_above_mlw', () => {
     const tank = fly(cruiseAt(11000, 0.78, 500_000), 78000);
     expect(tank.status).toBe('fuel_above_capacity');
-    expect(tank.statusMessage).toContain('28000 kg');
+    expect(tank.statusMessage).toContain('28,000 kg');
     const landing = fly(cruiseAt(11000, 0.78, 100_000), 74000, { airframe: { ...TEST_AIRFRAME, maxFuel_kg: 30000 } });
     expect(landing.status).toBe('landing_above_mlw');
     expect(landing.landingMass_kg).toBeGreaterThan(TEST_AIRFRAME.mlw_kg);

@@ -82,7 +82,7 @@ describe('checkProject (through parseProject)', () => {
       d.mission.destinationElevation = '5000 ft';
     });
     expect(paths(issues)).toEqual(['mission.destinationElevation']);
-    expect(issues[0]!.message).toContain('1500 ft');
+    expect(issues[0]!.message).toContain('1,500 ft (457 m)');
   });
 
   it('checkProject accepts a destination elevation at or below the altitude the last descent ends at', () => {

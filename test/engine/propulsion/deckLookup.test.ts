@@ -41,7 +41,7 @@ describe('lookupDeck', () => {
       expectClose(r.thrust_N, 2800, { rel: 1e-12 }, 'hand calculation');
       expect(r.outside).toEqual(['altitude']);
       expect(r.cautions.map((c) => c.id)).toEqual(['deck_extrapolation']);
-      expect(r.cautions[0]!.message).toContain('altitude 4000 m');
+      expect(r.cautions[0]!.message).toContain('altitude 13,123 ft (4,000 m)');
       expect(r.cautions[0]!.threshold).toBe(3000);
     });
 
@@ -68,7 +68,7 @@ describe('lookupDeck', () => {
       // 15000 + 1.5 * (14500 - 15000) = 14250 N (hand calculation)
       expectClose(r.thrust_N, 14250, { rel: 1e-12 }, 'hand calculation');
       expect(r.outside).toEqual(['mach']);
-      expect(r.cautions[0]!.message).toContain('Mach 0.9 is above the table (0.2 to 0.8 at the tabulated altitude 3000 m');
+      expect(r.cautions[0]!.message).toContain('Mach 0.900 is above the table (0.200 to 0.800 at the tabulated altitude 9,843 ft (3,000 m)');
     });
 
     it('extrapolates below the altitude\'s Mach range by default', () => {
@@ -97,7 +97,7 @@ describe('lookupDeck', () => {
       expect(r.outside).toEqual(['power']);
       expect(r.cautions.map((c) => c.id)).toEqual(['deck_clamped']);
       expect(r.power).toBe(1.2);
-      expect(r.cautions[0]!.message).toContain('power 1.2 is above the table (0.2 to 1 at the tabulated node 0 m (0 ft), Mach 0)');
+      expect(r.cautions[0]!.message).toContain('power 1.2 is above the table (0.2 to 1 at the tabulated node 0 ft (0 m), Mach 0.000)');
       expect(thrust(raggedDeck(), at(0, 0), 0.1)).toBe(4000);
     });
 
@@ -224,9 +224,9 @@ describe('deckLookup floors', () => {
     expect(v.airflow_kg_s).toBe(0);
     const floored = v.cautions.find((c) => c.id === 'deck_output_floored');
     expect(floored?.severity).toBe('warning');
-    expect(floored?.message).toContain('thrust -38000 N');
-    expect(floored?.message).toContain('fuel flow -0.1 kg/s');
-    expect(floored?.message).toContain('airflow -20 kg/s');
+    expect(floored?.message).toContain('thrust -8,543 lbf (-38.00 kN)');
+    expect(floored?.message).toContain('fuel flow -794 lb/h (-360 kg/h)');
+    expect(floored?.message).toContain('airflow -44.1 lb/s (-20.00 kg/s)');
   });
 
   it('lookupDeck keeps a positive extrapolation as it is, with no floor warning', () => {

@@ -27,5 +27,5 @@ describe('StudyReport', () => {
     expect(report.querySelectorAll('.report-notice')).toHaveLength(2);
     for (const line of SAFETY_NOTICE_LINES) expect(screen.getAllByTestId('report-notice')[0]!.textContent).toContain(line);
     expect(screen.queryByTestId('report-cautions') ?? screen.queryByTestId('report-cautions-empty')).not.toBeNull();
-  });
+  }, 30000);
 });

@@ -195,7 +195,7 @@ describe('the App with the demo study', () => {
     // below the demo's MZFW of 21,500 lb: the rule is at maxZeroFuel, so the edit is taken and the project listed as broken
     fireEvent.change(mtow, { target: { value: '21000' } });
     fireEvent.keyDown(mtow, { key: 'Enter' });
-    expect(screen.getByTestId('project-issues').textContent).toContain('airframe.weights.maxZeroFuel');
+    expect(screen.getByTestId('project-issues').textContent).toContain('maximum zero-fuel weight');
     fireEvent.click(screen.getByTestId('view-tab-results'));
     await screen.findByTestId('results-stale', {}, { timeout: 15000 });
     expect(screen.getByTestId('results-failure').textContent).toContain('is above the maximum takeoff weight');

@@ -13,7 +13,7 @@ describe('ResultsView in the App', () => {
     const blockFuel = await screen.findByTestId('headline-block-fuel', {}, { timeout: 10000 });
     expect(blockFuel.textContent).toMatch(/^[\d,]+ lb$/);
     expect(screen.getByTestId('legs-table')).toBeInTheDocument();
-    expect(screen.getByTestId('mission-status').textContent).toContain('ok');
+    expect(screen.getByTestId('mission-status').textContent).toContain('Mission status: flown');
     for (const line of SAFETY_NOTICE_LINES) expect(screen.getByTestId('safety-notice').textContent).toContain(line);
     await waitFor(() => expect(screen.getByTestId('chart-altitude').querySelector('svg')).not.toBeNull(), { timeout: 15000 });
   }, 30000);
