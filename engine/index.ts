@@ -119,3 +119,4 @@ export * from './uncertainty/sampleStatistics';
 export * from './uncertainty/seededRandom';
 export * from './uncertainty/uncertainInputs';
 export * from './uncertainty/uncertaintyRun';
+export * from './cycle/index';

@@ -1,12 +1,14 @@
 // Writes engine/index.ts: one `export *` line per engine module, in folder
 // order. Run after adding a module: `node scripts/writeEngineIndex.mjs`.
+// A folder with its own hand-written index.ts (its curated public surface,
+// e.g. engine/cycle) is exported through that index only.
 // test/engine/engineIndex.test.ts checks the committed file is current.
 import { readdirSync, writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import process from 'node:process';
 import { URL } from 'node:url';
 
-const FOLDERS = ['core', 'units', 'aero', 'propulsion', 'cautions', 'project', 'mission', 'analysis', 'uncertainty'];
+const FOLDERS = ['core', 'units', 'aero', 'propulsion', 'cautions', 'project', 'mission', 'analysis', 'uncertainty', 'cycle'];
 const engineDir = fileURLToPath(new URL('../engine/', import.meta.url));
 
 export function engineIndexText() {
@@ -21,6 +23,10 @@ export function engineIndexText() {
     const files = readdirSync(engineDir + folder)
       .filter((f) => f.endsWith('.ts') && !f.endsWith('.d.ts'))
       .sort();
+    if (files.includes('index.ts')) {
+      lines.push(`export * from './${folder}/index';`);
+      continue;
+    }
     for (const f of files) lines.push(`export * from './${folder}/${f.slice(0, -3)}';`);
   }
   return `${lines.join('\n')}\n`;

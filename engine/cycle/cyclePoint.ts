@@ -54,6 +54,8 @@ export interface CyclePointResult {
   /** Largest scaled residual of the match (null when no match was tried). */
   readonly residual: number | null;
   readonly iterations: number;
+  /** Residual evaluations the point cost, all attempts and limits included (the cost measure for callers). */
+  readonly evaluations: number;
   readonly thrust_N: number | null;
   readonly fuelFlow_kg_s: number | null;
   /** Total engine airflow, core plus bypass (kg/s). */
@@ -109,12 +111,13 @@ function cautionsOf(s: CycleState): CycleCaution[] {
   return out;
 }
 
-function failed(status: CyclePointStatus, message: string, inst: Installation, residual: number | null = null, iterations = 0): CyclePointResult {
+function failed(status: CyclePointStatus, message: string, inst: Installation, residual: number | null = null, iterations = 0, evaluations = 0): CyclePointResult {
   return {
     status,
     message,
     residual,
     iterations,
+    evaluations,
     thrust_N: null,
     fuelFlow_kg_s: null,
     airflow_kg_s: null,
@@ -154,6 +157,7 @@ function converged(engine: CycleEngine, o: ThrottleOutcome, quantity: LimitName,
     message,
     residual: o.residual,
     iterations: o.iterations,
+    evaluations: o.evaluations,
     thrust_N: s.thrust_N,
     fuelFlow_kg_s: s.fuelFlow_kg_s,
     airflow_kg_s: s.totalFlow_kg_s,
@@ -185,9 +189,10 @@ function unmatched(o: ThrottleOutcome, throttle: ThrottleEquation, inst: Install
       inst,
       o.residual,
       o.iterations,
+      o.evaluations,
     );
   }
-  return failed('not_converged', `the engine did not match at ${throttle.quantity} ${throttle.value} ${LIMIT_UNITS[throttle.quantity]}: ${o.reason} (residual ${o.residual.toExponential(2)})`, inst, Number.isFinite(o.residual) ? o.residual : null, o.iterations);
+  return failed('not_converged', `the engine did not match at ${throttle.quantity} ${throttle.value} ${LIMIT_UNITS[throttle.quantity]}: ${o.reason} (residual ${o.residual.toExponential(2)})`, inst, Number.isFinite(o.residual) ? o.residual : null, o.iterations, o.evaluations);
 }
 
 function fixedSetting(engine: CycleEngine, free: FreeStream, inst: Installation, throttle: ThrottleEquation, start: CycleWarmStart | undefined, label: string): CyclePointResult {
@@ -198,14 +203,18 @@ function fixedSetting(engine: CycleEngine, free: FreeStream, inst: Installation,
 
 /** The highest throttle within the limits: match at a limit; if another is exceeded, match at the worst one; repeat. */
 function limitedRating(engine: CycleEngine, free: FreeStream, inst: Installation, limits: readonly ActiveLimit[], rating: string, start: CycleWarmStart | undefined): CyclePointResult {
-  const first = limits.find((l) => l.name === 'turbineInletTemperature') ?? limits[0]!;
+  // A warm start names the limit that held the neighbouring point: try it first.
+  const first = limits.find((l) => l.name === start?.quantity) ?? limits.find((l) => l.name === 'turbineInletTemperature') ?? limits[0]!;
   let candidate: ActiveLimit = first;
   const tried = new Set<LimitName>();
   let lastFailure: CyclePointResult | null = null;
+  let spent = 0;
   for (let round = 0; round <= limits.length; round++) {
     tried.add(candidate.name);
     const throttle = { quantity: candidate.name, value: candidate.max };
-    const o = solveThrottle(engine, free, inst, throttle, start?.quantity === candidate.name ? start.unknowns : undefined);
+    const solved = solveThrottle(engine, free, inst, throttle, start?.quantity === candidate.name ? start.unknowns : undefined);
+    spent += solved.evaluations;
+    const o = { ...solved, evaluations: spent };
     let worst: ActiveLimit | null = null;
     let worstRatio = 1 + LIMIT_TOLERANCE;
     if (o.converged && o.state !== null) {
@@ -224,7 +233,7 @@ function limitedRating(engine: CycleEngine, free: FreeStream, inst: Installation
     if (worst === null || tried.has(worst.name)) break;
     candidate = worst;
   }
-  return lastFailure ?? failed('not_converged', `${rating}: no throttle satisfies every limit at once`, inst);
+  return lastFailure ?? failed('not_converged', `${rating}: no throttle satisfies every limit at once`, inst, null, 0, spent);
 }
 
 function checkRequest(engine: CycleEngine, r: CyclePointRequest, inst: Installation): string | null {

@@ -20,7 +20,8 @@ export type { CycleEngine, CycleSizes, CycleDesignSummary } from './cycleEngine'
 export type { CycleState, CycleVariables } from './cycleState';
 export { MAX_CYCLE_TT4_K } from './cycleState';
 export type { NozzleState } from './nozzleExit';
-export type { FreeStream } from './freeStream';
+export type { FreeStream as CycleFreeStream } from './freeStream';
+export { parseCycleFile, parseCycleData, cycleFileSchema, CYCLE_FORMAT, CYCLE_VERSION, type CycleFileIssue } from './cycleFile';
 export { designEngine, type CycleError, type CycleErrorCode } from './designPoint';
 export { runCyclePoint, type CyclePointRequest, type CyclePointResult, type CyclePointStatus, type CycleThrottle, type CycleWarmStart, type CycleCaution, type CycleCautionCode, MIN_CHOKED_LPT_EXPANSION } from './cyclePoint';
 export { spoolSpeeds, type SpoolSpeeds } from './spoolSpeeds';

@@ -1,8 +1,9 @@
 /**
- * Damped Newton iteration for a small square system r(x) = 0 with a
- * forward-difference Jacobian, a step bound and a backtracking line search
- * on the sum of squared residuals (converged on the largest one) (Dennis & Schnabel, Numerical Methods for
- * Unconstrained Optimization and Nonlinear Equations, chapter 6). The
+ * Damped Newton iteration for a small square system r(x) = 0: a
+ * forward-difference Jacobian kept current by Broyden updates, a step bound
+ * and a backtracking line search on the sum of squared residuals, converged
+ * on the largest one (Dennis & Schnabel, Numerical Methods for Unconstrained
+ * Optimization and Nonlinear Equations, chapters 6 and 8). The
  * residual function may refuse a trial point (return false) where its
  * relations do not hold; the line search then shortens the step.
  */
@@ -21,6 +22,8 @@ export interface NewtonOutcome {
   /** Largest |r_i| at x (Infinity when x was refused). */
   readonly residual: number;
   readonly iterations: number;
+  /** Residual evaluations spent (the cost measure). */
+  readonly evaluations: number;
   /** Why it stopped when not converged. */
   readonly reason: string;
 }
@@ -78,43 +81,94 @@ export function solveLinearInPlace(a: Float64Array, b: Float64Array, n: number):
   return true;
 }
 
-/** Solves r(x) = 0 from x0; never throws, reports the residual it reached. */
-export function newtonSolve(residual: ResidualFunction, x0: ArrayLike<number>, options: NewtonOptions = DEFAULT_NEWTON): NewtonOutcome {
+/** Forward-difference Jacobian of r at x into jac (row-major); false when r refuses both sides of a step. */
+function differenceJacobian(residual: ResidualFunction, x: Float64Array, r: Float64Array, jac: Float64Array, xTrial: Float64Array, rTrial: Float64Array): boolean {
+  const n = x.length;
+  for (let j = 0; j < n; j++) {
+    const h = 1e-7 * Math.max(1, Math.abs(x[j]!));
+    xTrial.set(x);
+    let hj = h;
+    xTrial[j] = x[j]! + hj;
+    if (!residual(xTrial, rTrial)) {
+      hj = -h;
+      xTrial[j] = x[j]! + hj;
+      if (!residual(xTrial, rTrial)) return false;
+    }
+    for (let i = 0; i < n; i++) jac[i * n + j] = (rTrial[i]! - r[i]!) / hj;
+  }
+  return true;
+}
+
+/** Broyden's rank-one update of jac after a step dx that changed r by dr: J += (dr - J dx) dx^T / (dx^T dx). */
+function broydenUpdate(jac: Float64Array, dx: Float64Array, dr: Float64Array, n: number): void {
+  let dd = 0;
+  for (let j = 0; j < n; j++) dd += dx[j]! * dx[j]!;
+  if (!(dd > 0)) return;
+  for (let i = 0; i < n; i++) {
+    let jdx = 0;
+    for (let j = 0; j < n; j++) jdx += jac[i * n + j]! * dx[j]!;
+    const c = (dr[i]! - jdx) / dd;
+    for (let j = 0; j < n; j++) jac[i * n + j] = jac[i * n + j]! + c * dx[j]!;
+  }
+}
+
+/**
+ * Solves r(x) = 0 from x0; never throws, reports the residual it reached.
+ * The Jacobian is formed by differences at the start and again whenever a
+ * full step is not accepted; in between it follows Broyden's update
+ * (Dennis & Schnabel, chapter 8), which saves most residual evaluations.
+ */
+export function newtonSolve(counted: ResidualFunction, x0: ArrayLike<number>, options: NewtonOptions = DEFAULT_NEWTON): NewtonOutcome {
+  let evaluations = 0;
+  const residual: ResidualFunction = (xs, out) => {
+    evaluations++;
+    return counted(xs, out);
+  };
   const n = x0.length;
   const x = Float64Array.from(x0);
   const r = new Float64Array(n);
   const rTrial = new Float64Array(n);
   const xTrial = new Float64Array(n);
   const jac = new Float64Array(n * n);
+  const work = new Float64Array(n * n);
   const step = new Float64Array(n);
-  if (!residual(x, r)) return { converged: false, x, residual: Infinity, iterations: 0, reason: 'the starting point is outside the cycle relations' };
+  const dx = new Float64Array(n);
+  const dr = new Float64Array(n);
+  if (!residual(x, r)) return { converged: false, x, residual: Infinity, iterations: 0, evaluations, reason: 'the starting point is outside the cycle relations' };
   let norm = maxAbs(r);
   let sq = sumSquares(r);
+  let fresh = false;
+  let haveJacobian = false;
   for (let it = 0; it < options.maxIterations; it++) {
-    if (norm <= options.tolerance) return { converged: true, x, residual: norm, iterations: it, reason: '' };
-    for (let j = 0; j < n; j++) {
-      const h = 1e-7 * Math.max(1, Math.abs(x[j]!));
-      xTrial.set(x);
-      let hj = h;
-      xTrial[j] = x[j]! + hj;
-      if (!residual(xTrial, rTrial)) {
-        hj = -h;
-        xTrial[j] = x[j]! + hj;
-        if (!residual(xTrial, rTrial)) return { converged: false, x, residual: norm, iterations: it, reason: 'the Jacobian could not be formed at the edge of the cycle relations' };
-      }
-      for (let i = 0; i < n; i++) jac[i * n + j] = (rTrial[i]! - r[i]!) / hj;
+    if (norm <= options.tolerance) return { converged: true, x, residual: norm, iterations: it, evaluations, reason: '' };
+    if (!haveJacobian) {
+      if (!differenceJacobian(residual, x, r, jac, xTrial, rTrial)) return { converged: false, x, residual: norm, iterations: it, evaluations, reason: 'the Jacobian could not be formed at the edge of the cycle relations' };
+      haveJacobian = true;
+      fresh = true;
     }
+    work.set(jac);
     for (let i = 0; i < n; i++) step[i] = -r[i]!;
-    if (!solveLinearInPlace(jac, step, n)) return { converged: false, x, residual: norm, iterations: it, reason: 'the Jacobian is singular' };
+    if (!solveLinearInPlace(work, step, n)) {
+      if (!fresh) {
+        haveJacobian = false;
+        continue;
+      }
+      return { converged: false, x, residual: norm, iterations: it, evaluations, reason: 'the Jacobian is singular' };
+    }
     const biggest = maxAbs(step);
-    let lambda = biggest > options.maxStep ? options.maxStep / biggest : 1;
+    const lambda0 = biggest > options.maxStep ? options.maxStep / biggest : 1;
+    let lambda = lambda0;
     let accepted = false;
-    for (let tries = 0; tries < 40; tries++) {
+    for (let tries = 0; tries < (fresh ? 40 : 4); tries++) {
       for (let i = 0; i < n; i++) xTrial[i] = x[i]! + lambda * step[i]!;
       if (residual(xTrial, rTrial)) {
         const trialNorm = maxAbs(rTrial);
         const trialSq = sumSquares(rTrial);
         if (trialSq < (1 - 1e-4 * lambda) * sq || trialNorm <= options.tolerance) {
+          for (let i = 0; i < n; i++) {
+            dx[i] = xTrial[i]! - x[i]!;
+            dr[i] = rTrial[i]! - r[i]!;
+          }
           x.set(xTrial);
           r.set(rTrial);
           norm = trialNorm;
@@ -126,9 +180,18 @@ export function newtonSolve(residual: ResidualFunction, x0: ArrayLike<number>, o
       lambda *= 0.5;
     }
     if (!accepted) {
-      return { converged: norm <= options.tolerance, x, residual: norm, iterations: it + 1, reason: 'no step along the Newton direction lowers the residual' };
+      if (!fresh) {
+        haveJacobian = false;
+        continue;
+      }
+      return { converged: norm <= options.tolerance, x, residual: norm, iterations: it + 1, evaluations, reason: 'no step along the Newton direction lowers the residual' };
+    }
+    if (lambda < lambda0) haveJacobian = false;
+    else {
+      broydenUpdate(jac, dx, dr, n);
+      fresh = false;
     }
   }
   const converged = norm <= options.tolerance;
-  return { converged, x, residual: norm, iterations: options.maxIterations, reason: converged ? '' : `not converged in ${options.maxIterations} iterations` };
+  return { converged, x, residual: norm, iterations: options.maxIterations, evaluations, reason: converged ? '' : `not converged in ${options.maxIterations} iterations` };
 }

@@ -48,6 +48,8 @@ export interface MatchOutcome {
   readonly unknowns: Float64Array;
   readonly residual: number;
   readonly iterations: number;
+  /** Residual evaluations spent. */
+  readonly evaluations: number;
   readonly reason: string;
 }
 
@@ -138,6 +140,7 @@ export function matchEngine(
     unknowns: outcome.x,
     residual: outcome.residual,
     iterations: outcome.iterations,
+    evaluations: outcome.evaluations + 1,
     reason: outcome.reason,
   };
 }

@@ -20,15 +20,17 @@ function walk(engine: CycleEngine, free: FreeStream, inst: Installation, throttl
   let x = reshape(engine, from.unknowns, from.state!.variables.tt4_K, throttle);
   let last: MatchOutcome = from;
   let reached = startValue;
+  let spent = 0;
   for (let i = 1; i <= steps; i++) {
     const value = startValue + ((throttle.value - startValue) * i) / steps;
     const step = matchEngine(engine, free, inst, { quantity: throttle.quantity, value }, x);
-    if (!step.converged) return { ...last, converged: false, reached, reason: step.reason };
+    spent += step.evaluations;
+    if (!step.converged) return { ...last, converged: false, reached, reason: step.reason, evaluations: spent };
     last = step;
     reached = value;
     x = step.unknowns;
   }
-  return { ...last, reached: null };
+  return { ...last, reached: null, evaluations: spent };
 }
 
 /** Unknowns for `throttle` from a converged vector that may or may not carry Tt4. */
@@ -50,20 +52,25 @@ export function solveThrottle(
   start?: ArrayLike<number>,
 ): ThrottleOutcome {
   const n = unknownCount(engine, throttle);
+  let spent = 0;
   if (start && start.length === n) {
     const warm = matchEngine(engine, free, inst, throttle, start);
-    if (warm.converged) return { ...warm, reached: null };
+    spent += warm.evaluations;
+    if (warm.converged) return { ...warm, reached: null, evaluations: spent };
   }
   const direct = matchEngine(engine, free, inst, throttle, similarStart(engine, throttle, free, inst));
-  if (direct.converged) return { ...direct, reached: null };
+  spent += direct.evaluations;
+  if (direct.converged) return { ...direct, reached: null, evaluations: spent };
   const similarTt4 = { quantity: 'turbineInletTemperature' as const, value: (engine.design.variables.tt4_K * free.tt0_K) / engine.design.tt2_K };
   const anchor = matchEngine(engine, free, inst, similarTt4, similarStart(engine, similarTt4, free, inst));
-  if (!anchor.converged) return { ...direct, reached: null };
-  let best: ThrottleOutcome = { ...direct, reached: null };
+  spent += anchor.evaluations;
+  if (!anchor.converged) return { ...direct, reached: null, evaluations: spent };
+  let best: ThrottleOutcome = { ...direct, reached: null, evaluations: spent };
   for (const steps of [6, 24]) {
     const walked = walk(engine, free, inst, throttle, anchor, steps);
-    if (walked.converged) return walked;
-    best = walked;
+    spent += walked.evaluations;
+    if (walked.converged) return { ...walked, evaluations: spent };
+    best = { ...walked, evaluations: spent };
   }
   return best;
 }

@@ -65,6 +65,7 @@ function jsonOf(file: string, title: string, request: CyclePointRequest, p: Cycl
     message: p.message,
     residual: p.residual,
     iterations: p.iterations,
+    evaluations: p.evaluations,
     thrust_N: p.thrust_N,
     fuelFlow_kg_s: p.fuelFlow_kg_s,
     airflow_kg_s: p.airflow_kg_s,

@@ -93,5 +93,8 @@ describe('runCyclePoint at the demo design point (sea-level static ISA, takeoff)
     const warm = runCyclePoint(engine, { altitude_m: ft(30000), mach: 0.75, isaDeviation_K: 0, throttle: { kind: 'rating', rating: 'maxClimb' }, start: a.start! });
     expect(warm.status).toBe('converged');
     expectClose(warm.thrust_N!, b.thrust_N!, { rel: 1e-9 }, 'same point from a cold start');
+    // the cost measure: a warm start spends fewer residual evaluations than a cold one
+    expect(warm.evaluations).toBeGreaterThan(0);
+    expect(warm.evaluations).toBeLessThan(b.evaluations);
   });
 });
