@@ -1,28 +1,32 @@
 /**
- * Reading a project file and the deck it names from disk (the engine reads
- * no files). Shared by every verb that takes a project. Relative deck paths
- * resolve from the project file's folder.
+ * The CLI's door to a study: reads the project file and the deck file it
+ * names from disk (the engine reads no files) and hands the texts to
+ * engine/study, which parses the deck (by content), builds it once and the
+ * mission input of each inlet. Relative deck paths resolve from the project
+ * file's folder.
  */
 import { readFile } from 'node:fs/promises';
-import { dirname, extname, resolve } from 'node:path';
+import { dirname, resolve } from 'node:path';
 import { err, ok, type Result } from '../engine/core/result';
 import type { MissionInput } from '../engine/mission/missionTypes';
-import { buildMissionInput, type BuildOptions } from '../engine/project/buildMissionInput';
+import type { BuildOptions } from '../engine/project/buildMissionInput';
 import { deckReference } from '../engine/project/projectDeck';
 import { makeIssue, type ProjectIssue } from '../engine/project/projectIssue';
 import type { Project } from '../engine/project/projectSchema';
 import { parseProject } from '../engine/project/parseProject';
-import { parseDeckCsv } from '../engine/propulsion/deckCsv';
-import { parseDeckJson } from '../engine/propulsion/deckJson';
 import type { EngineDeck } from '../engine/propulsion/engineDeck';
+import { cannotReadMessage, prepareStudy, readFailureReason, type DeckFileText, type Study } from '../engine/study';
 
 export interface LoadedProject {
   /** Absolute path of the project file. */
   readonly projectPath: string;
   readonly project: Project;
-  /** The deck as read from disk, when the project names a deck file. */
-  readonly deck: EngineDeck | undefined;
+  /** The project's deck (file, embedded or parametric), built once. */
+  readonly deck: EngineDeck;
+  /** Absolute path of the deck file, when the project names one. */
   readonly deckPath: string | undefined;
+  /** The study: the mission input of any inlet, built once per inlet. */
+  readonly study: Study;
   /** The mission input for the chosen inlet (default the active one). */
   readonly input: MissionInput;
 }
@@ -33,25 +37,12 @@ export interface LoadFailure {
   readonly issues: readonly ProjectIssue[];
 }
 
-function describeFsError(e: unknown): string {
-  const code = (e as { code?: string }).code;
-  if (code === 'ENOENT') return 'no such file';
-  if (code === 'EISDIR') return 'it is a folder, not a file';
-  if (code === 'EACCES' || code === 'EPERM') return 'permission denied';
-  return e instanceof Error ? e.message : String(e);
-}
-
 async function readText(path: string): Promise<Result<string, string>> {
   try {
     return ok(await readFile(path, 'utf8'));
   } catch (e) {
-    return err(describeFsError(e));
+    return err(readFailureReason((e as NodeJS.ErrnoException).code, e instanceof Error ? e.message : String(e)));
   }
-}
-
-/** Parses a deck file by its extension: `.json` in the JSON deck form, anything else as deck CSV. */
-export function parseDeckFile(text: string, sourceName: string): ReturnType<typeof parseDeckCsv> {
-  return extname(sourceName).toLowerCase() === '.json' ? parseDeckJson(text, sourceName) : parseDeckCsv(text, sourceName);
 }
 
 /** Reads and parses a project file only (no deck). */
@@ -59,36 +50,26 @@ export async function readProjectFile(path: string): Promise<Result<{ projectPat
   const projectPath = resolve(path);
   const text = await readText(projectPath);
   if (!text.ok) {
-    return err({ file: projectPath, issues: [makeIssue('(file)', '', 'a readable project file', `cannot read ${projectPath}: ${text.error}`)] });
+    return err({ file: projectPath, issues: [makeIssue('(file)', '', 'a readable project file', cannotReadMessage(projectPath, text.error))] });
   }
   const parsed = parseProject(text.value, path);
   if (!parsed.ok) return err({ file: projectPath, issues: parsed.error });
   return ok({ projectPath, project: parsed.value });
 }
 
-/** Reads the deck file a project names, resolved from the project's folder; undefined when the deck is not a file. */
-export async function readProjectDeck(
-  projectPath: string,
-  project: Project,
-): Promise<Result<{ deck: EngineDeck | undefined; deckPath: string | undefined }, LoadFailure>> {
+/** Reads the text of the deck file a project names, resolved from the project's folder; null when the deck is not a file. */
+async function readProjectDeckText(projectPath: string, project: Project): Promise<Result<{ file: DeckFileText; deckPath: string } | null, LoadFailure>> {
   const ref = deckReference(project);
-  if (ref.kind !== 'file') return ok({ deck: undefined, deckPath: undefined });
+  if (ref.kind !== 'file') return ok(null);
   const deckPath = resolve(dirname(projectPath), ref.path);
   const text = await readText(deckPath);
   if (!text.ok) {
     return err({
       file: projectPath,
-      issues: [makeIssue('engine.deck.path', JSON.stringify(ref.path), 'a readable deck file', `deck file ${JSON.stringify(ref.path)} (${deckPath}) cannot be read: ${text.error}`)],
+      issues: [makeIssue('engine.deck.path', JSON.stringify(ref.path), 'a readable deck file', `deck file ${cannotReadMessage(deckPath, text.error)}`)],
     });
   }
-  const deck = parseDeckFile(text.value, ref.path);
-  if (!deck.ok) {
-    return err({
-      file: deckPath,
-      issues: deck.error.map((e) => makeIssue('engine.deck.path', e.value ?? '', e.expected, e.message)),
-    });
-  }
-  return ok({ deck: deck.value, deckPath });
+  return ok({ file: { name: ref.path, text: text.value }, deckPath });
 }
 
 /** Reads a project and its deck from disk and builds the mission input (inlet per `options`). */
@@ -98,13 +79,20 @@ export async function loadProjectFromDisk(path: string, options: BuildOptions = 
   return buildFromProject(read.value.projectPath, read.value.project, options);
 }
 
-/** For a project already read from `projectPath`: reads the deck it names and builds the mission input (inlet per `options`). */
+/** For a project already read from `projectPath`: reads the deck it names and prepares the study (inlet per `options`). */
 export async function buildFromProject(projectPath: string, project: Project, options: BuildOptions = {}): Promise<Result<LoadedProject, LoadFailure>> {
-  const deck = await readProjectDeck(projectPath, project);
-  if (!deck.ok) return deck;
-  const input = buildMissionInput(project, deck.value.deck === undefined ? {} : { deck: deck.value.deck }, options);
-  if (!input.ok) return err({ file: projectPath, issues: input.error });
-  return ok({ projectPath, project, deck: deck.value.deck, deckPath: deck.value.deckPath, input: input.value });
+  const deckText = await readProjectDeckText(projectPath, project);
+  if (!deckText.ok) return deckText;
+  const deckPath = deckText.value?.deckPath;
+  const study = prepareStudy(project, deckText.value?.file ?? null, options.overrides === undefined ? {} : { overrides: options.overrides });
+  if (!study.ok) {
+    const failure = study.error;
+    if (failure.kind === 'project') return err({ file: projectPath, issues: failure.issues });
+    return err({ file: deckPath ?? projectPath, issues: failure.errors.map((e) => makeIssue('engine.deck.path', e.value ?? '', e.expected, e.message)) });
+  }
+  const input = study.value.inputFor(options.inletName);
+  if (!input.ok) return err({ file: projectPath, issues: input.error.issues });
+  return ok({ projectPath, project, deck: study.value.deck, deckPath, study: study.value, input: input.value });
 }
 
 /** The failure as lines for stderr: the file, then one line per issue (path and reason). */

@@ -1,4 +1,5 @@
 import { readFile, stat } from 'node:fs/promises';
+import { cannotReadMessage, readFailureReason } from '../engine/study';
 import type { HostReply } from './hostApi';
 import { hostError, hostOk } from './ipcValidation';
 
@@ -21,7 +22,7 @@ export async function readTextFile(path: string, maxBytes: number = MAX_FILE_BYT
     return hostOk(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
   } catch (e) {
     if (e instanceof TypeError) return hostError('read_failed', `${path} is not UTF-8 text`);
-    return hostError('read_failed', `could not read ${path}: ${(e as Error).message}`);
+    return hostError('read_failed', cannotReadMessage(path, readFailureReason((e as NodeJS.ErrnoException).code, (e as Error).message)));
   }
 }
 

@@ -8,7 +8,7 @@ import { resolve } from 'node:path';
 import type { Result } from '../../engine/core/result';
 import type { DeckFileError } from '../../engine/propulsion/deckFileError';
 import type { EngineDeck } from '../../engine/propulsion/engineDeck';
-import { parseDeckFile } from '../projectFiles';
+import { cannotReadMessage, parseDeckText, readFailureReason } from '../../engine/study';
 import type { CliIo } from '../verb';
 
 /** The file's text, or null after printing "blockwise <verb>: cannot read ..." on stderr. */
@@ -16,16 +16,15 @@ export function readTextFile(file: string, verb: string, io: CliIo): string | nu
   try {
     return readFileSync(resolve(io.cwd, file), 'utf8');
   } catch (e) {
-    const code = (e as NodeJS.ErrnoException).code;
-    io.err(`blockwise ${verb}: cannot read "${file}"${code ? ` (${code})` : ''}\n`);
+    io.err(`blockwise ${verb}: ${cannotReadMessage(file, readFailureReason((e as NodeJS.ErrnoException).code, e instanceof Error ? e.message : String(e)))}\n`);
     return null;
   }
 }
 
-/** A deck file read and parsed (JSON by extension, else CSV); null after printing why it could not be read. */
+/** A deck file read and parsed (the form by its content, engine/study); null after printing why it could not be read. */
 export function readDeckFile(file: string, verb: string, io: CliIo): Result<EngineDeck, readonly DeckFileError[]> | null {
   const text = readTextFile(file, verb, io);
-  return text === null ? null : parseDeckFile(text, file);
+  return text === null ? null : parseDeckText(text, file);
 }
 
 /** The deck file's errors, one per line, and a closing line "<file>: deck not loaded". */

@@ -1,9 +1,6 @@
 import { describeInstallationMethod } from '../../engine/propulsion/installationMethod';
 import { compareInlets } from '../../engine/analysis/inletComparison';
 import { inletFactorBuilder } from '../../engine/analysis/inletFactorBuilder';
-import { buildMissionInput, projectInlet } from '../../engine/project/buildMissionInput';
-import { projectDeck } from '../../engine/project/projectDeck';
-import { cautionSettingsOf, installationOf } from '../../engine/project/projectSpecs';
 import { formatQuantity } from '../../engine/units/displayUnits';
 import { checkInletName, loadVerbProject, projectArgument } from '../common/projectArgs';
 import { analysisFailed, printJsonReport, printReport } from '../common/report';
@@ -69,36 +66,18 @@ analysis failed.
     }
     const loadedA = await loadVerbProject(file, names?.[0], io, '--inlets');
     if (typeof loadedA === 'number') return loadedA;
-    const { project, projectPath, deck } = loadedA;
+    const { project, projectPath, study } = loadedA;
     if (names === null) {
       if (project.inlets.length < 2) throw new UsageError(`${file} has ${project.inlets.length} inlet design; compare needs two (add one, or give --inlets)`);
       names = [project.inlets[0]!.name, project.inlets[1]!.name];
     }
     checkInletName(project, names[1], '--inlets', file);
-    const resources = deck === undefined ? {} : { deck };
-    const inputA = names[0] === loadedA.input.propulsion.inletName ? loadedA.input : null;
-    const builtA = inputA === null ? buildMissionInput(project, resources, { inletName: names[0] }) : null;
-    const builtB = buildMissionInput(project, resources, { inletName: names[1] });
-    const deckValue = projectDeck(project, resources);
-    const inletA = projectInlet(project, names[0]);
-    const inletB = projectInlet(project, names[1]);
-    for (const r of [builtA, builtB, deckValue, inletA, inletB]) {
-      if (r !== null && !r.ok) {
-        io.err(formatLoadFailure({ file: projectPath, issues: r.error }));
-        return 1;
-      }
+    const pair = study.inletPair(names[0], names[1]);
+    if (!pair.ok) {
+      io.err(formatLoadFailure({ file: projectPath, issues: pair.error.issues }));
+      return 1;
     }
-    if (!builtB.ok || !deckValue.ok || !inletA.ok || !inletB.ok || (builtA !== null && !builtA.ok)) return 1;
-    const build = inletFactorBuilder({
-      inputA: inputA ?? (builtA !== null && builtA.ok ? builtA.value : loadedA.input),
-      inputB: builtB.value,
-      inletA: inletA.value,
-      inletB: inletB.value,
-      deck: deckValue.value,
-      engineCount: project.engine.count,
-      installation: installationOf(project),
-      cautionSettings: cautionSettingsOf(project),
-    });
+    const build = inletFactorBuilder(pair.value);
     const r = compareInlets(build, { nameA: names[0], nameB: names[1] });
     if (!r.ok) return analysisFailed(io, 'compare', r.error.message);
     const v = r.value;

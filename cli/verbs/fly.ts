@@ -2,7 +2,7 @@ import { writeFile } from 'node:fs/promises';
 import { resolve } from 'node:path';
 import { solveMission } from '../../engine/mission/solveMission';
 import { loadVerbProject, projectArgument } from '../common/projectArgs';
-import { historyToCsv } from '../format/historyCsv';
+import { historyCsv } from '../../engine/study';
 import { missionJson } from '../format/missionJson';
 import { missionSummaryText } from '../format/missionSummaryText';
 import { optionalString, printJson, UsageError, type CliIo, type Verb } from '../verb';
@@ -21,7 +21,7 @@ Usage: blockwise fly <project.blockwise.json> [--inlet <name>] [--json] [--csv <
 Options:
   --inlet   fly with this inlet design instead of the project's active one
   --json    print the result as JSON (SI values; each key names its unit)
-  --csv     also write the time history to <file> (one column per field, units in the header)
+  --csv     also write the time history to <file> (docs/results-csv.md: name[unit] columns, SI)
 
 The deck file a project names is read relative to the project file's folder.
 The project format is described in docs/project-format.md.
@@ -54,7 +54,7 @@ error. The result is printed whatever the status.
     if (csvOption !== undefined) {
       const csvPath = resolve(io.cwd, csvOption);
       try {
-        await writeFile(csvPath, historyToCsv(result.history), 'utf8');
+        await writeFile(csvPath, historyCsv(result.history), 'utf8');
       } catch (e) {
         io.err(`blockwise fly: cannot write the time history to ${csvPath}: ${e instanceof Error ? e.message : String(e)}\n`);
         return 1;

@@ -178,10 +178,15 @@ export function buildMissionInput(
   resources: ProjectResources,
   options: BuildOptions = {},
 ): Result<MissionInput, readonly ProjectIssue[]> {
-  const inlet = projectInlet(project, options.inletName);
-  if (!inlet.ok) return inlet;
   const deck = projectDeck(project, resources);
   if (!deck.ok) return deck;
+  return missionInputOnDeck(project, deck.value, options);
+}
+
+/** As buildMissionInput, on the project's deck already built (engine/study builds it once for every inlet). */
+export function missionInputOnDeck(project: Project, engineDeck: EngineDeck, options: BuildOptions = {}): Result<MissionInput, readonly ProjectIssue[]> {
+  const inlet = projectInlet(project, options.inletName);
+  if (!inlet.ok) return inlet;
 
   const wingArea_m2 = project.airframe.wingArea;
   const engineCount = project.engine.count;
@@ -190,7 +195,7 @@ export function buildMissionInput(
     return err(polar.error.map((i) => makeIssue(polarIssuePath(i.path), '', 'a valid drag polar', `${i.path} ${i.message}`)));
   }
   const installation = installationOf(project);
-  const installationIssues = validateInstallation(installation, deck.value.hasAirflow);
+  const installationIssues = validateInstallation(installation, engineDeck.hasAirflow);
   if (installationIssues.length > 0) {
     return err(
       installationIssues.map((i) => makeIssue(installationIssuePath(i.path), '', 'valid installation settings', i.message)),
@@ -211,7 +216,7 @@ export function buildMissionInput(
       mmo: project.airframe.mmo,
     },
     aero: polar.value.withIncrement(inletDragIncrementCd0(inlet.value, engineCount, wingArea_m2)),
-    propulsion: makeInstalledPropulsion({ deck: deck.value, engineCount, inlet: inlet.value, installation, cautionSettings }),
+    propulsion: makeInstalledPropulsion({ deck: engineDeck, engineCount, inlet: inlet.value, installation, cautionSettings }),
     legs: project.mission.legs.map(legOf),
     reserves: overrides.reserves ?? reservesOf(project.mission.reserves),
     solve: overrides.solve ?? solveModeOf(project.mission.solve),

@@ -7,7 +7,7 @@ import { useCallback, useEffect, useRef, useState } from 'react';
 import { projectToJson } from '../../engine/project/projectToJson';
 import type { Bridge, MenuCommand } from '../bridge/bridge';
 import type { ToolbarCommand } from '../components/Toolbar';
-import { fileStem, historyCsv, legsCsv } from '../report/resultsCsv';
+import { fileStem, historyCsv, legsCsv } from '../../engine/study';
 import { openProjectAction } from './documentActions';
 import type { StudyStore } from './studyContext';
 import { undoKeyCommand } from './undoKeys';
@@ -82,7 +82,7 @@ export function useAppCommands(bridge: Bridge, store: StudyStore, snapshot: Stud
           case 'exportLegs': {
             if (snap === null) return;
             const history = command === 'exportHistory';
-            const saved = await bridge.exportText(history ? historyCsv(snap.mission) : legsCsv(snap.mission), `${stem}-${history ? 'time-history' : 'legs'}.csv`, 'text/csv');
+            const saved = await bridge.exportText(history ? historyCsv(snap.mission.history) : legsCsv(snap.mission), `${stem}-${history ? 'time-history' : 'legs'}.csv`, 'text/csv');
             if (saved) setMessage(`Exported ${saved.path ?? saved.name}.`);
             return;
           }

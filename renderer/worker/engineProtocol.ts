@@ -9,11 +9,10 @@ import type { PayloadRangeResult } from '../../engine/analysis/payloadRange';
 import type { TradeFactorsResult } from '../../engine/analysis/tradeFactors';
 import type { UncertaintyResult } from '../../engine/uncertainty/uncertaintyRun';
 import type { MissionResult } from '../../engine/mission/missionTypes';
-import type { ProjectIssue } from '../../engine/project/projectIssue';
 import type { Project } from '../../engine/project/projectSchema';
-import type { DeckFileError } from '../../engine/propulsion/deckFileError';
 import type { RatingName } from '../../engine/propulsion/propulsionModel';
 import type { Result } from '../../engine/core/result';
+import type { StudyFailure } from '../../engine/study';
 import type { DeckFile } from '../state/studyState';
 
 export interface StudyInputs {
@@ -115,10 +114,7 @@ export interface EngineReplies {
 }
 
 /** Why a request produced no result: the project's issues, the deck file's errors, or an analysis error. */
-export type EngineFailure =
-  | { readonly kind: 'project'; readonly issues: readonly ProjectIssue[] }
-  | { readonly kind: 'deck'; readonly errors: readonly DeckFileError[] }
-  | { readonly kind: 'analysis'; readonly code: string; readonly message: string };
+export type EngineFailure = StudyFailure | { readonly kind: 'analysis'; readonly code: string; readonly message: string };
 
 /** A request's reply in the engine's one Result shape (engine/core/result.ts): the value, or why there is none. */
 export type EngineOutcome<K extends EngineRequestKind> = Result<EngineReplies[K], EngineFailure>;

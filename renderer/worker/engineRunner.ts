@@ -11,12 +11,8 @@ import { tradeFactors } from '../../engine/analysis/tradeFactors';
 import { err, ok, type Result } from '../../engine/core/result';
 import type { MissionInput } from '../../engine/mission/missionTypes';
 import { solveMission } from '../../engine/mission/solveMission';
-import { buildMissionInput } from '../../engine/project/buildMissionInput';
-import { projectDeck } from '../../engine/project/projectDeck';
 import { makeIssue } from '../../engine/project/projectIssue';
-import { cautionSettingsOf, inletDesignOf, installationOf } from '../../engine/project/projectSpecs';
-import { parseDeckCsv } from '../../engine/propulsion/deckCsv';
-import type { EngineDeck } from '../../engine/propulsion/engineDeck';
+import { createDeckTextMemo, prepareStudy, type DeckTextMemo, type Study } from '../../engine/study';
 import type { AnalysisError } from '../../engine/analysis/analysisTypes';
 import { runUncertainty } from '../../engine/uncertainty/uncertaintyRun';
 import type { EngineFailure, EngineOutcome, EngineReplies, EngineRequest, EngineRequestKind, StudyInputs } from './engineProtocol';
@@ -27,48 +23,23 @@ export interface RunHooks {
   readonly shouldCancel?: () => boolean;
 }
 
-/** Remembers the last parsed deck file so that edits do not re-parse it. */
-export interface DeckCache {
-  text: string | null;
-  result: ReturnType<typeof parseDeckCsv> | null;
-}
+/** Remembers the last parsed deck file so that edits do not re-parse it (engine/study's memo). */
+export type DeckCache = DeckTextMemo;
 
 export function createDeckCache(): DeckCache {
-  return { text: null, result: null };
+  return createDeckTextMemo();
 }
 
-interface Prepared {
-  readonly deck: EngineDeck;
-  readonly input: MissionInput;
-}
-
-function deckOf(inputs: StudyInputs, cache: DeckCache): Result<EngineDeck | undefined, EngineFailure> {
-  if (inputs.project.engine.deck.kind !== 'file') return ok(undefined);
-  const file = inputs.deckFile;
-  if (file === null) {
-    const path = inputs.project.engine.deck.path;
+/** The request's study (engine/study): the deck built once, each inlet's mission input built once. */
+function prepare(inputs: StudyInputs, cache: DeckCache): Result<Study, EngineFailure> {
+  const deck = inputs.project.engine.deck;
+  if (deck.kind === 'file' && inputs.deckFile === null) {
     return err({
       kind: 'project',
-      issues: [makeIssue('engine.deck.path', JSON.stringify(path), 'an imported deck file', `the project uses the deck file ${JSON.stringify(path)}: import it (Engine deck view)`)],
+      issues: [makeIssue('engine.deck.path', JSON.stringify(deck.path), 'an imported deck file', `the project uses the deck file ${JSON.stringify(deck.path)}: import it (Engine deck view)`)],
     });
   }
-  if (cache.text !== file.text || cache.result === null) {
-    cache.text = file.text;
-    cache.result = parseDeckCsv(file.text, file.name);
-  }
-  const parsed = cache.result;
-  return parsed.ok ? ok(parsed.value) : err({ kind: 'deck', errors: parsed.error });
-}
-
-function prepare(inputs: StudyInputs, cache: DeckCache, inletName?: string): Result<Prepared, EngineFailure> {
-  const file = deckOf(inputs, cache);
-  if (!file.ok) return file;
-  const resources = file.value === undefined ? {} : { deck: file.value };
-  const deck = projectDeck(inputs.project, resources);
-  if (!deck.ok) return err({ kind: 'project', issues: deck.error });
-  const input = buildMissionInput(inputs.project, resources, inletName === undefined ? {} : { inletName });
-  if (!input.ok) return err({ kind: 'project', issues: input.error });
-  return ok({ deck: deck.value, input: input.value });
+  return prepareStudy(inputs.project, inputs.deckFile, { deckMemo: cache });
 }
 
 function analysisFailure(e: AnalysisError): EngineFailure {
@@ -81,15 +52,17 @@ function firstCruiseAltitude(input: MissionInput): number {
 }
 
 function runStudy(inputs: StudyInputs, cache: DeckCache): Result<EngineReplies['study'], EngineFailure> {
-  const base = prepare(inputs, cache);
+  const study = prepare(inputs, cache);
+  if (!study.ok) return study;
+  const base = study.value.inputFor();
   if (!base.ok) return base;
-  const { input, deck } = base.value;
+  const input = base.value;
+  const deck = study.value.deck;
   const altitude_m = firstCruiseAltitude(input);
   const inlets = [];
   for (const inlet of inputs.project.inlets) {
-    const active = inlet.name === input.propulsion.inletName;
-    const other = active ? base : prepare(inputs, cache, inlet.name);
-    if (other.ok) inlets.push(inletCurves(other.value.input.propulsion, active, altitude_m));
+    const other = study.value.inputFor(inlet.name);
+    if (other.ok) inlets.push(inletCurves(other.value.propulsion, inlet.name === input.propulsion.inletName, altitude_m));
   }
   return ok({
     mission: solveMission(input),
@@ -102,14 +75,16 @@ function runStudy(inputs: StudyInputs, cache: DeckCache): Result<EngineReplies['
 }
 
 function runCrossover(request: Extract<EngineRequest, { kind: 'crossover' }>, cache: DeckCache): Result<EngineReplies['crossover'], EngineFailure> {
-  const active = prepare(request, cache);
+  const study = prepare(request, cache);
+  if (!study.ok) return study;
+  const active = study.value.inputFor();
   if (!active.ok) return active;
-  const names = request.query.allInlets ? request.project.inlets.map((i) => i.name) : [active.value.input.propulsion.inletName];
+  const names = request.query.allInlets ? request.project.inlets.map((i) => i.name) : [active.value.propulsion.inletName];
   const curves = [];
   for (const name of names) {
-    const prepared = name === active.value.input.propulsion.inletName ? active : prepare(request, cache, name);
+    const prepared = study.value.inputFor(name);
     if (!prepared.ok) return prepared;
-    const { aero, propulsion } = prepared.value.input;
+    const { aero, propulsion } = prepared.value;
     const q = request.query;
     const r = thrustDragCrossover({ aero, propulsion }, { altitude_m: q.altitude_m, mass_kg: q.mass_kg, rating: q.rating, isaDev_K: q.isaDev_K });
     if (!r.ok) return err(analysisFailure(r.error));
@@ -119,24 +94,11 @@ function runCrossover(request: Extract<EngineRequest, { kind: 'crossover' }>, ca
 }
 
 function runCompare(request: Extract<EngineRequest, { kind: 'compare' }>, cache: DeckCache, hooks: RunHooks): Result<EngineReplies['compare'], EngineFailure> {
-  const a = prepare(request, cache, request.nameA);
-  if (!a.ok) return a;
-  const b = prepare(request, cache, request.nameB);
-  if (!b.ok) return b;
-  const p = request.project;
-  const inletA = p.inlets.find((i) => i.name === request.nameA)!;
-  const inletB = p.inlets.find((i) => i.name === request.nameB)!;
-  const build = inletFactorBuilder({
-    inputA: a.value.input,
-    inputB: b.value.input,
-    inletA: inletDesignOf(inletA),
-    inletB: inletDesignOf(inletB),
-    deck: a.value.deck,
-    engineCount: p.engine.count,
-    installation: installationOf(p),
-    cautionSettings: cautionSettingsOf(p),
-  });
-  const r = compareInlets(build, { nameA: request.nameA, nameB: request.nameB, ...hooks });
+  const study = prepare(request, cache);
+  if (!study.ok) return study;
+  const pair = study.value.inletPair(request.nameA, request.nameB);
+  if (!pair.ok) return pair;
+  const r = compareInlets(inletFactorBuilder(pair.value), { nameA: request.nameA, nameB: request.nameB, ...hooks });
   return r.ok ? r : err(analysisFailure(r.error));
 }
 
@@ -147,16 +109,18 @@ function dispatch(request: EngineRequest, cache: DeckCache, hooks: RunHooks): Re
     case 'crossover':
       return runCrossover(request, cache);
     case 'payloadRange': {
-      const base = prepare(request, cache);
+      const study = prepare(request, cache);
+      const base = study.ok ? study.value.inputFor() : study;
       if (!base.ok) return base;
-      const r = payloadRangeDiagram(base.value.input, { ...hooks });
+      const r = payloadRangeDiagram(base.value, { ...hooks });
       return r.ok ? r : err(analysisFailure(r.error));
     }
     case 'tradeFactors': {
-      const base = prepare(request, cache);
+      const study = prepare(request, cache);
+      const base = study.ok ? study.value.inputFor() : study;
       if (!base.ok) return base;
       const cRam = request.project.engine.installation.ramRecoveryFactor;
-      const r = tradeFactors(base.value.input, { ...hooks, ...(cRam === undefined ? {} : { cRam }) });
+      const r = tradeFactors(base.value, { ...hooks, ...(cRam === undefined ? {} : { cRam }) });
       return r.ok ? r : err(analysisFailure(r.error));
     }
     case 'compare':

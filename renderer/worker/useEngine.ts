@@ -11,11 +11,6 @@ import type { EngineFailure, EngineReplies, EngineRequest, EngineRequestKind, St
 export const EngineContext = createContext<EngineClient | null>(null);
 
 /** The engine client of the app (provided by App): run(request, onProgress) -> { outcome, cancel }. */
-export function useEngine(): EngineClient {
-  return useEngineClient();
-}
-
-/** Same as useEngine. */
 export function useEngineClient(): EngineClient {
   const client = useContext(EngineContext);
   if (client === null) throw new Error('useEngineClient outside an EngineContext provider');

@@ -5,6 +5,7 @@ import { join } from 'node:path';
 import { promisify } from 'node:util';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../engine/core/notice';
+import { HISTORY_COLUMNS } from '../../engine/study';
 import { expectClose } from '../support/assertInDelta';
 import { DEMO_PROJECT, repoRoot, run, type Json } from './support/cliRun';
 
@@ -122,7 +123,9 @@ describe('blockwise fly options', () => {
     expect(all.slice(0, SAFETY_NOTICE_LINES.length)).toEqual(SAFETY_NOTICE_LINES.map((l) => `# ${l}`));
     const lines = all.slice(SAFETY_NOTICE_LINES.length);
     const header = lines[0]!.split(',');
-    for (const h of ['time[s]', 'distance[m]', 'altitude[m]', 'mach[-]', 'mass[kg]', 'fuelFlow[kg/s]', 'legIndex[-]']) expect(header).toContain(h);
+    // The one results CSV of the CLI and the app (engine/study/resultsCsv.ts, docs/results-csv.md).
+    expect(header).toEqual(HISTORY_COLUMNS.map(([head]) => head));
+    for (const h of ['time[s]', 'distance[m]', 'altitude[m]', 'mach[-]', 'mass[kg]', 'fuel_flow[kg/s]', 'leg[-]']) expect(header).toContain(h);
     expect(lines.length).toBeGreaterThan(20);
     for (const line of lines.slice(1)) {
       const cells = line.split(',');

@@ -1,12 +1,16 @@
 /**
- * Results as CSV text for export: the time history (one row per integrator
- * step) and the legs table. SI columns with the unit in each header, as the
- * deck and project files name units; "." decimal point, "," separator.
+ * Mission results as CSV text, the one writer behind the CLI's `fly --csv`
+ * and the app's export: the time history (one row per integrator step) and
+ * the legs table. The safety notice as "#" lines, then one header row of
+ * `name[unit]` columns in SI (the deck CSV convention), "." decimal point,
+ * "," separator, full precision, a non-finite value as an empty cell. The
+ * columns are documented in docs/results-csv.md.
  */
-import { noticeCsvComment } from '../../engine/core/notice';
-import type { MissionResult } from '../../engine/mission/missionTypes';
+import { noticeCsvComment } from '../core/notice';
+import type { MissionResult, TimeHistory } from '../mission/missionTypes';
 
-const HISTORY_COLUMNS = [
+/** Header and history field of each time-history column, in file order. */
+export const HISTORY_COLUMNS = [
   ['time[s]', 'time_s'],
   ['distance[m]', 'distance_m'],
   ['altitude[m]', 'altitude_m'],
@@ -22,7 +26,7 @@ const HISTORY_COLUMNS = [
   ['lift_to_drag[-]', 'liftToDrag'],
   ['climb_rate[m/s]', 'climbRate_m_s'],
   ['leg[-]', 'legIndex'],
-] as const;
+] as const satisfies readonly (readonly [string, keyof TimeHistory])[];
 
 function csvText(value: string): string {
   return /[",\n\r]/.test(value) ? `"${value.replace(/"/g, '""')}"` : value;
@@ -33,8 +37,7 @@ function num(value: number): string {
 }
 
 /** The time history as CSV; a non-finite value is an empty cell. */
-export function historyCsv(result: MissionResult): string {
-  const h = result.history;
+export function historyCsv(h: TimeHistory): string {
   const lines = [HISTORY_COLUMNS.map(([head]) => head).join(',')];
   for (let i = 0; i < h.time_s.length; i++) {
     lines.push(HISTORY_COLUMNS.map(([, key]) => num(h[key][i]!)).join(','));
@@ -67,7 +70,7 @@ export function legsCsv(result: MissionResult): string {
   return `${noticeCsvComment()}${lines.join('\n')}\n`;
 }
 
-/** File name stem from a project file name: "demo.blockwise.json" -> "demo". */
+/** File name stem of exports from a project file name: "demo.blockwise.json" -> "demo". */
 export function fileStem(name: string): string {
   const base = name.replace(/\.blockwise\.json$/i, '').replace(/\.json$/i, '').trim();
   return base === '' ? 'blockwise' : base;

@@ -1,7 +1,7 @@
 import { SAFETY_NOTICE_LINES } from '../../../engine/core/notice';
 import { describe, expect, it } from 'vitest';
 import type { LegRow, MissionResult, TimeHistory } from '../../../engine/mission/missionTypes';
-import { fileStem, historyCsv, legsCsv } from '../../../renderer/report/resultsCsv';
+import { fileStem, historyCsv, legsCsv } from '../../../engine/study/resultsCsv';
 
 /** RFC 4180 field splitter (quoted fields with doubled quotes), written here independently of the writer. */
 function splitCsvLine(line: string): string[] {
@@ -67,7 +67,7 @@ function result(): MissionResult {
 
 describe('historyCsv', () => {
   it('writes one row per sample with units in the headers; a non-finite value is an empty cell', () => {
-    const all = historyCsv(result()).trimEnd().split('\n');
+    const all = historyCsv(result().history).trimEnd().split('\n');
     // The safety notice heads the file as # comment lines (DESIGN.md §7).
     expect(all.filter((l) => l.startsWith('# '))).toEqual(SAFETY_NOTICE_LINES.map((l) => `# ${l}`));
     const lines = all.filter((l) => !l.startsWith('#'));
