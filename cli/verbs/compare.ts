@@ -66,7 +66,7 @@ analysis failed.
     }
     const loadedA = await loadVerbProject(file, names?.[0], io, '--inlets');
     if (typeof loadedA === 'number') return loadedA;
-    const { project, projectPath, study } = loadedA;
+    const { project, projectPath, study, deck } = loadedA;
     if (names === null) {
       if (project.inlets.length < 2) throw new UsageError(`${file} has ${project.inlets.length} inlet design; compare needs two (add one, or give --inlets)`);
       names = [project.inlets[0]!.name, project.inlets[1]!.name];
@@ -81,10 +81,10 @@ analysis failed.
     const r = compareInlets(build, { nameA: names[0], nameB: names[1] });
     if (!r.ok) return analysisFailed(io, 'compare', r.error.message);
     const v = r.value;
-    const study = { project, resources, designs: names, ...size };
+    const uncertain = { project, resources: { deck }, designs: names, ...size };
     if (values.json === true) {
-      if (withUncertainty) return printUncertainty(io, 'compare', study, true, [], { installationMethod: builtB.value.propulsion.installationMethod, ...v });
-      printJsonReport(io, { installationMethod: builtB.value.propulsion.installationMethod, ...v });
+      if (withUncertainty) return printUncertainty(io, 'compare', uncertain, true, [], { installationMethod: pair.value.inputB.propulsion.installationMethod, ...v });
+      printJsonReport(io, { installationMethod: pair.value.inputB.propulsion.installationMethod, ...v });
       return 0;
     }
     const [a, b] = v.designs;
@@ -98,7 +98,7 @@ analysis failed.
     const cond = v.crossoverCondition;
     const lines = [
       `Inlet comparison — "${a.name}" (A) vs "${b.name}" (B), project "${project.name}"`,
-      `  installation method: ${describeInstallationMethod(builtB.value.propulsion.installationMethod)}`,
+      `  installation method: ${describeInstallationMethod(pair.value.inputB.propulsion.installationMethod)}`,
       '',
       formatTable(
         [
@@ -130,7 +130,7 @@ analysis failed.
       ),
       `  ${v.breakdown.description}`,
     ];
-    if (withUncertainty) return printUncertainty(io, 'compare', study, false, [...lines, '']);
+    if (withUncertainty) return printUncertainty(io, 'compare', uncertain, false, [...lines, '']);
     printReport(io, lines);
     return 0;
   },

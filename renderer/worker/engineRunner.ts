@@ -126,10 +126,10 @@ function dispatch(request: EngineRequest, cache: DeckCache, hooks: RunHooks): Re
     case 'compare':
       return runCompare(request, cache, hooks);
     case 'uncertainty': {
-      const file = deckOf(request, cache);
-      if (!file.ok) return file;
+      const study = prepare(request, cache);
+      if (!study.ok) return study;
       const size = { ...(request.samples === undefined ? {} : { samples: request.samples }), ...(request.seed === undefined ? {} : { seed: request.seed }) };
-      const r = runUncertainty({ project: request.project, resources: file.value === undefined ? {} : { deck: file.value }, designs: request.designs, ...size }, hooks);
+      const r = runUncertainty({ project: request.project, resources: { deck: study.value.deck }, designs: request.designs, ...size }, hooks);
       return r.ok ? r : err(analysisFailure(r.error));
     }
   }
