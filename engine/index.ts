@@ -91,6 +91,7 @@ export * from './mission/missionState';
 export * from './mission/missionStatus';
 export * from './mission/missionTypes';
 export * from './mission/monotoneStepper';
+export * from './mission/reserveRules';
 export * from './mission/reserves';
 export * from './mission/solveMission';
 export * from './mission/speedSchedule';

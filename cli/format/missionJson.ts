@@ -35,6 +35,8 @@ export function missionJson(result: MissionResult, context: MissionJsonContext) 
     reserves: {
       contingency_kg: finite(r.reserves.contingency_kg),
       alternate_kg: finite(r.reserves.alternate_kg),
+      missedApproach_kg: finite(r.reserves.missedApproach_kg),
+      alternateApproach_kg: finite(r.reserves.alternateApproach_kg),
       finalReserve_kg: finite(r.reserves.finalReserve_kg),
       extra_kg: finite(r.reserves.extra_kg),
       total_kg: finite(r.reserves.total_kg),

@@ -78,6 +78,8 @@ export function missionSummaryText(result: MissionResult, context: MissionSummar
     ['Reserve fuel', ...both(r.reserveFuel_kg, 'mass')],
     ['  contingency', ...both(r.reserves.contingency_kg, 'mass')],
     ['  alternate', ...both(r.reserves.alternate_kg, 'mass')],
+    ['    missed approach', ...both(r.reserves.missedApproach_kg, 'mass')],
+    ['    approach and landing', ...both(r.reserves.alternateApproach_kg, 'mass')],
     ['  final reserve', ...both(r.reserves.finalReserve_kg, 'mass')],
     ['  extra', ...both(r.reserves.extra_kg, 'mass')],
     ['Ramp weight', ...both(r.rampMass_kg, 'mass')],

@@ -24,7 +24,7 @@ import { msg, q } from '../units/messageParts';
 /** Mach (-) at which the approach allowance takes the flightIdle fuel flow. */
 export const APPROACH_MACH = 0.2;
 
-type AllowanceLeg = Extract<Leg, { kind: 'taxiOut' | 'takeoff' | 'approach' | 'taxiIn' }>;
+export type AllowanceLeg = Extract<Leg, { kind: 'taxiOut' | 'takeoff' | 'approach' | 'taxiIn' }>;
 
 /** Fuel (kg) and time (s) of an allowance leg at pressure altitude (m) with ISA deviation (K). */
 export function allowanceFuel(
@@ -74,15 +74,21 @@ export function destinationElevation(input: MissionInput): number {
 }
 
 /**
- * Flies an allowance leg: mass and time advance, distance does not; approach and taxi in end at the destination
- * elevation. The allowance stops where the fuel runs out (at zero-fuel mass, the time cut in proportion): always
+ * Flies an allowance leg: mass and time advance, distance does not; approach and taxi in end at the arrival
+ * elevation `arrivalElevation_m` (m; by default the destination's, the reserves pass the alternate's). The allowance stops where the fuel runs out (at zero-fuel mass, the time cut in proportion): always
  * when fuel exhaustion is enforced, and during the fuel iteration at the mission domain's mass floor
  * (flySegment.ts MASS_FLOOR_FRACTION), so no leg ever starts from a mass the models cannot fly.
  */
-export function flyAllowance(ctx: MissionContext, target: LegTarget, start: StateVector, leg: AllowanceLeg): LegOutcome {
+export function flyAllowance(
+  ctx: MissionContext,
+  target: LegTarget,
+  start: StateVector,
+  leg: AllowanceLeg,
+  arrivalElevation_m: number = destinationElevation(ctx.input),
+): LegOutcome {
   const arriving = leg.kind === 'approach' || leg.kind === 'taxiIn';
-  const startAltitude_m = leg.kind === 'taxiIn' ? destinationElevation(ctx.input) : start[S_ALT];
-  const endAltitude_m = arriving ? destinationElevation(ctx.input) : start[S_ALT];
+  const startAltitude_m = leg.kind === 'taxiIn' ? arrivalElevation_m : start[S_ALT];
+  const endAltitude_m = arriving ? arrivalElevation_m : start[S_ALT];
   const { fuel_kg, time_s, point } = allowanceFuel(ctx.input, leg, 0.5 * (startAltitude_m + endAltitude_m), target.env.isaDev_K);
   const flow = time_s > 0 ? fuel_kg / time_s : 0;
   const state = Float64Array.from(start);

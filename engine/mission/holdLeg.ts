@@ -4,8 +4,10 @@
  * section 5.14), or at a set CAS. The minimum-drag Mach is searched at the
  * start mass and then flown at constant lift coefficient, Mach proportional
  * to sqrt(mass), which keeps it at minimum drag for a parabolic polar without
- * compressibility (CL_md = sqrt(CD0/K) independent of mass). Thrust = drag at
- * part power with a maxContinuous ceiling.
+ * compressibility (CL_md = sqrt(CD0/K) independent of mass). A speed factor
+ * flies that many times the minimum-drag speed (same scaling with mass) and a
+ * minimum CAS is a floor under it. Thrust = drag at part power with a
+ * maxContinuous ceiling.
  */
 import { minimumDragMach } from './bestSpeeds';
 import { flySegment, missionDomain } from './flySegment';
@@ -13,11 +15,12 @@ import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutc
 import { makeLevelSegment } from './levelFlight';
 import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
 import { machOfCas, missionAir } from './missionAtmosphere';
+import type { HoldSpeed } from './missionTypes';
 import { S_ALT, S_MASS, S_TAS, S_TIME, type StateVector } from './missionState';
 import { appendCaution } from './timeHistoryBuilder';
 import { checkThrustBelowDrag } from '../cautions/checks';
 
-export type HoldSpeed = { readonly kind: 'bestEndurance' } | { readonly kind: 'cas'; readonly cas_m_s: number };
+export type { HoldSpeed } from './missionTypes';
 
 /** Flies a hold of `time_s` (s) at pressure altitude `altitude_m` (m) from `start`. */
 export function flyHold(
@@ -34,17 +37,18 @@ export function flyHold(
   state[S_ALT] = altitude_m;
   if (!(time_s > 0)) return legOk(state, null);
   const mass0 = state[S_MASS];
-  const fixedMach =
-    speed.kind === 'cas'
-      ? machOfCas(speed.cas_m_s, missionAir(altitude_m, 0).pressure_Pa)
-      : minimumDragMach(input, altitude_m, mass0, dev);
+  const pressure_Pa = missionAir(altitude_m, 0).pressure_Pa;
+  const factor = speed.kind === 'bestEndurance' && speed.speedFactor !== undefined && speed.speedFactor > 0 ? speed.speedFactor : 1;
+  const fixedMach = speed.kind === 'cas' ? machOfCas(speed.cas_m_s, pressure_Pa) : factor * minimumDragMach(input, altitude_m, mass0, dev);
+  // Best endurance never below the set minimum CAS (the Mach of that CAS at the hold's pressure altitude).
+  const floorMach = speed.kind === 'bestEndurance' && speed.minCas_m_s !== undefined && speed.minCas_m_s > 0 ? machOfCas(speed.minCas_m_s, pressure_Pa) : 0;
   const run = flySegment(
     ctx,
     target,
     makeLevelSegment(ctx, target, {
       altitudeOf: () => altitude_m,
       algebraicAltitude: false,
-      machOf: (_h, m) => (speed.kind === 'cas' || !(m > 0) ? fixedMach : fixedMach * Math.sqrt(m / mass0)),
+      machOf: (_h, m) => (speed.kind === 'cas' || !(m > 0) ? fixedMach : Math.max(fixedMach * Math.sqrt(m / mass0), floorMach)),
       ceiling: 'maxContinuous',
       step_s: BASE_STEP_S.hold * ctx.options.stepScale,
       endDistance_m: null,

@@ -4,7 +4,7 @@
  * naming the field, or null. (engine/project validates files; this guards
  * the solver's own entry point so no NaN travels.)
  */
-import type { MissionInput } from './missionTypes';
+import type { HoldSpeed, MissionInput } from './missionTypes';
 
 function badNumber(path: string, value: unknown, rule: 'finite' | 'positive' | 'nonNegative'): string | null {
   if (typeof value !== 'number' || !Number.isFinite(value)) return `${path} must be a finite number, got ${String(value)}.`;
@@ -36,6 +36,15 @@ function badMach(path: string, value: number): string | null {
 function first(...problems: (string | null)[]): string | null {
   for (const p of problems) if (p !== null) return p;
   return null;
+}
+
+/** A problem with a holding speed, or null. */
+function holdSpeedProblem(path: string, speed: HoldSpeed): string | null {
+  if (speed.kind === 'cas') return badNumber(`${path}.cas_m_s`, speed.cas_m_s, 'positive');
+  return first(
+    speed.minCas_m_s === undefined ? null : badNumber(`${path}.minCas_m_s`, speed.minCas_m_s, 'nonNegative'),
+    speed.speedFactor === undefined ? null : badNumber(`${path}.speedFactor`, speed.speedFactor, 'positive'),
+  );
 }
 
 /** The first problem with `input`, or null when it can be flown. */
@@ -109,7 +118,7 @@ export function missionInputProblem(input: MissionInput): string | null {
         problem = first(
           badAltitude(`${p}.altitude_m`, leg.altitude_m),
           badNumber(`${p}.time_s`, leg.time_s, 'nonNegative'),
-          leg.speed.kind === 'cas' ? badNumber(`${p}.speed.cas_m_s`, leg.speed.cas_m_s, 'positive') : null,
+          holdSpeedProblem(`${p}.speed`, leg.speed),
         );
         break;
     }
@@ -137,5 +146,10 @@ export function missionInputProblem(input: MissionInput): string | null {
     alt === null ? null : badMach('reserves.alternate.cruiseMach', alt.cruiseMach),
     alt === null ? null : badAltitude('reserves.alternate.elevation_m', alt.elevation_m),
     alt === null || alt.wind_m_s === undefined ? null : badNumber('reserves.alternate.wind_m_s', alt.wind_m_s, 'finite'),
+    r.arrival === undefined ? null : badNumber('reserves.arrival.missedApproach.time_s', r.arrival.missedApproach.time_s, 'nonNegative'),
+    r.arrival?.missedApproach.fuel_kg == null ? null : badNumber('reserves.arrival.missedApproach.fuel_kg', r.arrival.missedApproach.fuel_kg, 'nonNegative'),
+    r.arrival === undefined ? null : badNumber('reserves.arrival.alternateApproach.time_s', r.arrival.alternateApproach.time_s, 'nonNegative'),
+    r.arrival?.alternateApproach.fuel_kg == null ? null : badNumber('reserves.arrival.alternateApproach.fuel_kg', r.arrival.alternateApproach.fuel_kg, 'nonNegative'),
+    r.holdSpeed === undefined ? null : holdSpeedProblem('reserves.holdSpeed', r.holdSpeed),
   );
 }

@@ -47,6 +47,40 @@ export type CruiseSpeed =
   | { readonly kind: 'bestRange' }
   | { readonly kind: 'longRange' };
 
+/**
+ * Holding speed: best endurance (minimum drag for a jet), optionally flown at `speedFactor` times the
+ * minimum-drag speed (same lift coefficient scaling, so the factor holds as the mass falls) and never below
+ * `minCas_m_s`; or a set CAS.
+ */
+export type HoldSpeed =
+  | { readonly kind: 'bestEndurance'; readonly minCas_m_s?: number; readonly speedFactor?: number }
+  | { readonly kind: 'cas'; readonly cas_m_s: number };
+
+/** An allowance flown in the reserves: a set fuel (kg), or the time (s) at the allowance's rating. */
+export interface ReserveAllowance {
+  readonly time_s: number;
+  readonly fuel_kg: number | null;
+}
+
+/**
+ * The arrival allowances of the alternate fuel (ICAO Annex 6 Part I: "perform a missed approach at the
+ * destination ... conduct the approach and landing at the destination alternate", from memory).
+ */
+export interface ReserveArrival {
+  /** Missed approach at the destination before the alternate: set fuel, or time at the takeoff rating, Mach 0. */
+  readonly missedApproach: ReserveAllowance;
+  /** Approach and landing at the alternate: set fuel, or time at the flightIdle fuel flow at Mach 0.2. */
+  readonly alternateApproach: ReserveAllowance;
+}
+
+/** Settings every reserve preset shares; absent = the defaults of engine/mission/reserveRules.ts. */
+export interface ReserveCommon {
+  /** Arrival allowances of the alternate; absent = the mission's take-off and approach allowances (common practice). */
+  readonly arrival?: ReserveArrival;
+  /** Speed of the contingency and final-reserve holds; absent = best endurance at 1.1 x the minimum-drag speed (common practice). */
+  readonly holdSpeed?: HoldSpeed;
+}
+
 export type CruiseProfile =
   | { readonly kind: 'constantAltitude' }
   | { readonly kind: 'stepClimb'; readonly step_m: number; readonly maxAltitude_m: number }
@@ -79,7 +113,7 @@ export type Leg = LegEnvironment & { readonly name: string } & (
         readonly kind: 'hold';
         readonly altitude_m: number;
         readonly time_s: number;
-        readonly speed: { readonly kind: 'bestEndurance' } | { readonly kind: 'cas'; readonly cas_m_s: number };
+        readonly speed: HoldSpeed;
       }
     | { readonly kind: 'approach'; readonly time_s: number; readonly fuel_kg: number | null }
     | { readonly kind: 'taxiIn'; readonly time_s: number; readonly fuelFlow_kg_s: number | 'idle' }
@@ -108,7 +142,8 @@ export interface AlternateSpec {
   readonly wind_m_s?: number;
 }
 
-export type ReservePolicy =
+export type ReservePolicy = ReserveCommon &
+  (
   | {
       /** ICAO Annex 6 Part I, 4.3.6.3 style: contingency, alternate, final reserve. */
       readonly preset: 'icaoAnnex6';
@@ -136,7 +171,8 @@ export type ReservePolicy =
       readonly alternate: AlternateSpec | null;
       readonly finalReserve_s: number;
       readonly extraFuel_kg: number;
-    };
+    }
+  );
 
 export type SolveMode =
   | { readonly kind: 'takeoffWeight'; readonly takeoffMass_kg: number; readonly payload_kg: number }
@@ -206,7 +242,11 @@ export interface TimeHistory {
 
 export interface ReserveBreakdown {
   readonly contingency_kg: number;
+  /** Alternate fuel: missed approach at the destination + climb, cruise, descent + approach and landing at the alternate. */
   readonly alternate_kg: number;
+  /** The two arrival allowances inside alternate_kg. */
+  readonly missedApproach_kg: number;
+  readonly alternateApproach_kg: number;
   readonly finalReserve_kg: number;
   readonly extra_kg: number;
   readonly total_kg: number;

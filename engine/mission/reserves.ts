@@ -1,33 +1,34 @@
 /**
  * Reserve fuel flown with the same engine and airframe, as the published
- * rules word it (paraphrased), starting from the landing mass at the
- * destination. Items are flown in the rule's order, each from the mass the
- * previous one leaves. Holds the rules place "in standard conditions" are
- * flown at ISA and in still air; the alternate in the mission's ISA deviation
- * and wind.
+ * rules word it (the texts, paragraphs and interpretations are in
+ * reserveRules.ts), starting from the landing mass at the destination. Items
+ * are flown in the rule's order, each from the mass the previous one leaves,
+ * the final reserve last. Holds the rules place "in standard conditions" are
+ * flown at ISA and in still air at the reserve hold speed; the alternate in the
+ * mission's ISA deviation and the alternate's wind, its fuel being the missed
+ * approach at the destination, the climb-cruise-descent and the approach and
+ * landing at the alternate (ICAO Annex 6 "alternate fuel").
  *
- * - ICAO Annex 6 Part I, 4.3.6.3 (turbine aeroplanes): contingency fuel = the
+ * - ICAO Annex 6 Part I, 4.3.6.3 (turbine aeroplanes): contingency = the
  *   larger of a fraction (5 %) of the planned trip fuel and the fuel to fly
  *   5 minutes at holding speed at 450 m (1,500 ft) above the destination in
- *   standard conditions; destination alternate fuel (climb, cruise, descent
- *   to the alternate); final reserve fuel = 30 minutes at holding speed at
- *   450 m (1,500 ft) above the alternate aerodrome (the destination when there
- *   is none) in standard conditions.
- * - 14 CFR 121.639 (domestic): enough fuel to fly to the destination, then to
- *   fly to and land at the most distant alternate, then to fly 45 minutes at
- *   normal cruising fuel consumption (flown here at the mission's first cruise
- *   altitude and speed rule).
- * - 14 CFR 121.645(b) (flag, turbine): to fly to and land at the destination;
- *   then to fly 10 % of the total time to the destination at normal cruising
- *   fuel consumption; then to fly to and land at the most distant alternate;
- *   then to fly 30 minutes at holding speed at 1,500 ft above the alternate in
- *   standard temperature conditions.
+ *   standard conditions; alternate fuel; final reserve = 30 minutes at
+ *   holding speed at 450 m above the alternate (the destination when there is
+ *   none) in standard conditions.
+ * - 14 CFR 121.639 (domestic): fly to the destination, then to and land at the
+ *   most distant alternate, then 45 minutes at normal cruising fuel
+ *   consumption (flown at the mission's first cruise altitude and speed rule).
+ * - 14 CFR 121.645(b) (flag, turbine): 10 % of the total time to the
+ *   destination (flown at normal cruise: an interpretation), the alternate,
+ *   30 minutes at holding speed at 1,500 ft above the alternate in standard
+ *   temperature conditions.
  * - custom: contingency fraction of trip fuel, alternate, final-reserve hold
  *   at 1,500 ft above the alternate, and a fixed extra fuel.
  */
 import type { AlternateSpec, LegRow, MissionInput, MissionStatus, ReserveBreakdown, SpeedSchedule } from './missionTypes';
 import type { RatingName } from '../propulsion/propulsionModel';
-import { destinationElevation } from './allowanceLegs';
+import { destinationElevation, flyAllowance } from './allowanceLegs';
+import { reserveArrival, reserveHoldSpeed, reserveItemName } from './reserveRules';
 import { flyClimb } from './climbLeg';
 import { basisSpecificRange, specificRangeAt } from './bestSpeeds';
 import { cruiseMachOfMass, flyCruise } from './cruiseLeg';
@@ -197,7 +198,10 @@ export function flyReserves(ctx: MissionContext, trip: TripSummary): ReserveFlig
   state[S_GROUND] = 0;
   let contingency = 0;
   let alternateFuel = 0;
+  let missedApproach = 0;
+  let alternateApproach = 0;
   let finalFuel = 0;
+  const holdSpeed = reserveHoldSpeed(policy);
   let status: MissionStatus = 'ok';
   let message = '';
   let parts: MessageParts = [];
@@ -237,21 +241,21 @@ export function flyReserves(ctx: MissionContext, trip: TripSummary): ReserveFlig
     const fraction = policy.contingencyFraction * trip.tripFuel_kg;
     const holdTarget: LegTarget = { legIndex: -1, legName: 'contingency minimum', env: standardEnv, recordHistory: false };
     const scratch: MissionContext = { ...ctx, log: createFlightLog(input.airframe, input.cautionSettings, true) };
-    const hold = flyHold(scratch, holdTarget, state, destination + HOLD_HEIGHT_M, policy.minContingency_s, { kind: 'bestEndurance' });
+    const hold = flyHold(scratch, holdTarget, state, destination + HOLD_HEIGHT_M, policy.minContingency_s, holdSpeed);
     const holdFuel = state[S_MASS] - hold.state[S_MASS];
     contingency = Math.max(fraction, hold.status === 'ok' ? holdFuel : 0);
     const start = state;
     state = Float64Array.from(state);
     state[S_MASS] -= contingency;
-    rows.push(reserveRow(input.legs.length + rows.length, 'reserve: contingency (ICAO Annex 6 4.3.6.3 c)', start, state));
+    rows.push(reserveRow(input.legs.length + rows.length, reserveItemName(policy.preset, 'contingency'), start, state));
   } else if (policy.preset === 'custom') {
     contingency = policy.contingencyFraction * trip.tripFuel_kg;
     const start = state;
     state = Float64Array.from(state);
     state[S_MASS] -= contingency;
-    rows.push(reserveRow(input.legs.length + rows.length, 'reserve: contingency (custom)', start, state));
+    rows.push(reserveRow(input.legs.length + rows.length, reserveItemName(policy.preset, 'contingency'), start, state));
   } else if (policy.preset === 'cfr121_645') {
-    const flown = run('reserve: 10 % en-route time (14 CFR 121.645(b)(2))', missionEnv, (t, s) =>
+    const flown = run(reserveItemName(policy.preset, 'enRouteTime'), missionEnv, (t, s) =>
       flyNormalCruiseTime(ctx, t, s, policy.enRouteFraction * trip.tripTime_s),
     );
     if (flown === null) return finish();
@@ -260,24 +264,42 @@ export function flyReserves(ctx: MissionContext, trip: TripSummary): ReserveFlig
 
   if (policy.alternate !== null) {
     const alternate = policy.alternate;
-    const flown = run('reserve: alternate', alternateEnv, (t, s) => flyAlternate(ctx, t, s, alternate));
+    const arrival = reserveArrival(input);
+    // ICAO Annex 6 "alternate fuel": a missed approach at the destination, the flight, the approach and landing at the alternate.
+    const missed = run(reserveItemName(policy.preset, 'missedApproach'), alternateEnv, (t, s) =>
+      flyAllowance(ctx, t, s, { kind: 'takeoff', name: t.legName, time_s: arrival.missedApproach.time_s, fuel_kg: arrival.missedApproach.fuel_kg }),
+    );
+    if (missed === null) return finish();
+    missedApproach = missed.fuel_kg;
+    const flown = run(reserveItemName(policy.preset, 'alternate'), alternateEnv, (t, s) => flyAlternate(ctx, t, s, alternate));
     if (flown === null) return finish();
-    alternateFuel = flown.fuel_kg;
+    const landing = run(reserveItemName(policy.preset, 'alternateApproach'), alternateEnv, (t, s) =>
+      flyAllowance(
+        ctx,
+        t,
+        s,
+        { kind: 'approach', name: t.legName, time_s: arrival.alternateApproach.time_s, fuel_kg: arrival.alternateApproach.fuel_kg },
+        alternate.elevation_m,
+      ),
+    );
+    if (landing === null) return finish();
+    alternateApproach = landing.fuel_kg;
+    alternateFuel = missed.fuel_kg + flown.fuel_kg + landing.fuel_kg;
   } else {
     state = Float64Array.from(state);
     state[S_ALT] = destination + HOLD_HEIGHT_M;
   }
 
   if (policy.preset === 'cfr121_639') {
-    const flown = run('reserve: 45 min at normal cruise (14 CFR 121.639)', missionEnv, (t, s) =>
+    const flown = run(reserveItemName(policy.preset, 'finalReserve'), missionEnv, (t, s) =>
       flyNormalCruiseTime(ctx, t, s, policy.finalReserve_s),
     );
     if (flown === null) return finish();
     finalFuel = flown.fuel_kg;
   } else {
     const holdAltitude = (policy.alternate?.elevation_m ?? destination) + HOLD_HEIGHT_M;
-    const flown = run('reserve: final reserve hold', standardEnv, (t, s) =>
-      flyHold(ctx, t, s, holdAltitude, policy.finalReserve_s, { kind: 'bestEndurance' }),
+    const flown = run(reserveItemName(policy.preset, 'finalReserve'), standardEnv, (t, s) =>
+      flyHold(ctx, t, s, holdAltitude, policy.finalReserve_s, holdSpeed),
     );
     if (flown === null) return finish();
     finalFuel = flown.fuel_kg;
@@ -294,6 +316,8 @@ export function flyReserves(ctx: MissionContext, trip: TripSummary): ReserveFlig
       breakdown: {
         contingency_kg: contingency,
         alternate_kg: alternateFuel,
+        missedApproach_kg: missedApproach,
+        alternateApproach_kg: alternateApproach,
         finalReserve_kg: finalFuel,
         extra_kg: extra,
         total_kg: contingency + alternateFuel + finalFuel + extra,

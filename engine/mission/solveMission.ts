@@ -35,7 +35,7 @@ import type { MissionInput, MissionResult, MissionStatus, ReserveBreakdown } fro
 import { appendCaution, buildTimeHistory, createFlightLog } from './timeHistoryBuilder';
 import { messageText, msg, partsOf, q, withParts, type MessageParts } from '../units/messageParts';
 
-const NO_RESERVES: ReserveBreakdown = { contingency_kg: 0, alternate_kg: 0, finalReserve_kg: 0, extra_kg: 0, total_kg: 0 };
+const NO_RESERVES: ReserveBreakdown = { contingency_kg: 0, alternate_kg: 0, missedApproach_kg: 0, alternateApproach_kg: 0, finalReserve_kg: 0, extra_kg: 0, total_kg: 0 };
 
 /** The info caution every still-air (design-range) result carries. */
 function stillAirCaution(input: MissionInput): Caution {

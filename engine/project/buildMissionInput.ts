@@ -6,7 +6,7 @@
  */
 import { makeAeroModel } from '../aero/dragPolar';
 import { err, ok, type Result } from '../core/result';
-import type { AlternateSpec, DistanceBasis, Leg, MissionInput, ReservePolicy, SolveMode } from '../mission/missionTypes';
+import type { AlternateSpec, DistanceBasis, HoldSpeed, Leg, ReserveCommon, MissionInput, ReservePolicy, SolveMode } from '../mission/missionTypes';
 import type { EngineDeck } from '../propulsion/engineDeck';
 import { inletDragIncrementCd0, inletWeight, type InletDesign } from '../propulsion/inletDesign';
 import { validateInstallation } from '../propulsion/installationCorrections';
@@ -106,7 +106,7 @@ function legOf(leg: ProjectLeg, index: number): Leg {
         kind: 'hold',
         altitude_m: leg.altitude,
         time_s: leg.time,
-        speed: leg.speed.kind === 'cas' ? { kind: 'cas', cas_m_s: leg.speed.cas } : { kind: 'bestEndurance' },
+        speed: holdSpeedOf(leg.speed),
       };
   }
 }
@@ -128,8 +128,34 @@ function alternateOf(a: ProjectReserves['alternate']): AlternateSpec | null {
   };
 }
 
+/** A holding speed in SI. */
+function holdSpeedOf(s: ProjectLegHoldSpeed): HoldSpeed {
+  if (s.kind === 'cas') return { kind: 'cas', cas_m_s: s.cas };
+  return {
+    kind: 'bestEndurance',
+    ...(s.minCas === undefined ? {} : { minCas_m_s: s.minCas }),
+    ...(s.speedFactor === undefined ? {} : { speedFactor: s.speedFactor }),
+  };
+}
+type ProjectLegHoldSpeed = Extract<ProjectLeg, { kind: 'hold' }>['speed'];
+
+/** The reserve settings all presets share, in SI (absent fields stay absent: the defaults of reserveRules.ts). */
+function reserveCommonOf(r: ProjectReserves): ReserveCommon {
+  const allowance = (a: { time: number; fuel: number | null }) => ({ time_s: a.time, fuel_kg: a.fuel });
+  return {
+    ...(r.arrival === undefined
+      ? {}
+      : { arrival: { missedApproach: allowance(r.arrival.missedApproach), alternateApproach: allowance(r.arrival.alternateApproach) } }),
+    ...(r.holdSpeed === undefined ? {} : { holdSpeed: holdSpeedOf(r.holdSpeed) }),
+  };
+}
+
 /** The project's reserve policy in SI. */
 export function reservesOf(r: ProjectReserves): ReservePolicy {
+  return { ...reserveCommonOf(r), ...presetOf(r) };
+}
+
+function presetOf(r: ProjectReserves): ReservePolicy {
   switch (r.preset) {
     case 'icaoAnnex6':
       return { preset: 'icaoAnnex6', contingencyFraction: r.contingencyFraction, minContingency_s: r.minContingencyTime, alternate: alternateOf(r.alternate), finalReserve_s: r.finalReserveTime };

@@ -9,7 +9,8 @@
  * Version 2: `airframe.weights`, `inlets` list and `activeInlet`; the range, set
  *   cruise distances and the alternate's distance were still-air distances.
  * Version 3 (current): `mission.distanceBasis` ("ground" by default, the wind
- *   changes fuel and time); the alternate's own `wind` (optional).
+ *   changes fuel and time); the alternate's own `wind`; the reserves' `arrival`
+ *   allowances and `holdSpeed` (optional, with defaults).
  */
 import { err, ok, type Result } from '../core/result';
 import { makeIssue, showValue, type ProjectIssue } from './projectIssue';

@@ -209,6 +209,16 @@ export const speedScheduleSchema = z.strictObject({
 
 const allowanceFuelFlow = z.union([z.literal('idle'), nonNegativeQuantity('massFlow', 'a mass flow >= 0')]);
 
+/** Holding speed: best endurance (optionally a factor on the minimum-drag speed, never below a minimum CAS) or a set CAS. */
+export const holdSpeedSchema = z.discriminatedUnion('kind', [
+  z.strictObject({
+    kind: z.literal('bestEndurance'),
+    minCas: nonNegativeQuantity('speed', 'a speed >= 0').optional(),
+    speedFactor: quantity('dimensionless', { min: 1, max: 2, what: 'a factor from 1 to 2 on the minimum-drag speed' }).optional(),
+  }),
+  z.strictObject({ kind: z.literal('cas'), cas: positiveQuantity('speed', 'a speed > 0') }),
+]);
+
 export const legSchema = z.discriminatedUnion('kind', [
   z.strictObject({ kind: z.literal('taxiOut'), ...environment, time: nonNegativeQuantity('time', 'a time >= 0'), fuelFlow: allowanceFuelFlow }),
   z.strictObject({
@@ -261,12 +271,7 @@ export const legSchema = z.discriminatedUnion('kind', [
     ...environment,
     altitude: altitude(),
     time: nonNegativeQuantity('time', 'a time >= 0'),
-    speed: z
-      .discriminatedUnion('kind', [
-        z.strictObject({ kind: z.literal('bestEndurance') }),
-        z.strictObject({ kind: z.literal('cas'), cas: positiveQuantity('speed', 'a speed > 0') }),
-      ])
-      .default({ kind: 'bestEndurance' }),
+    speed: holdSpeedSchema.default({ kind: 'bestEndurance' }),
   }),
   z.strictObject({
     kind: z.literal('approach'),
@@ -286,9 +291,24 @@ export const alternateSchema = z.strictObject({
   wind: quantity('speed', { min: -150, max: 150, what: 'a wind from -150 m/s to +150 m/s' }).optional(),
 });
 
+/** An allowance in the reserves: a time, and a set fuel or null for the time at the allowance's rating. */
+const reserveAllowanceSchema = z.strictObject({
+  time: nonNegativeQuantity('time', 'a time >= 0'),
+  fuel: nonNegativeQuantity('mass', 'a mass >= 0').nullable().default(null),
+});
+
+/** Settings all presets share (optional; absent = the defaults in engine/mission/reserveRules.ts). */
+const reserveCommon = {
+  /** Missed approach at the destination and approach and landing at the alternate. */
+  arrival: z.strictObject({ missedApproach: reserveAllowanceSchema, alternateApproach: reserveAllowanceSchema }).optional(),
+  /** Speed of the contingency and final-reserve holds. */
+  holdSpeed: holdSpeedSchema.optional(),
+};
+
 export const reservesSchema = z.discriminatedUnion('preset', [
   z.strictObject({
     preset: z.literal('icaoAnnex6'),
+    ...reserveCommon,
     contingencyFraction: fraction('a fraction from 0 to 1').default(0.05),
     minContingencyTime: nonNegativeQuantity('time', 'a time >= 0').default(300),
     alternate: alternateSchema.nullable(),
@@ -296,17 +316,20 @@ export const reservesSchema = z.discriminatedUnion('preset', [
   }),
   z.strictObject({
     preset: z.literal('cfr121_639'),
+    ...reserveCommon,
     alternate: alternateSchema.nullable(),
     finalReserveTime: nonNegativeQuantity('time', 'a time >= 0').default(2700),
   }),
   z.strictObject({
     preset: z.literal('cfr121_645'),
+    ...reserveCommon,
     enRouteFraction: fraction('a fraction from 0 to 1').default(0.1),
     alternate: alternateSchema.nullable(),
     finalReserveTime: nonNegativeQuantity('time', 'a time >= 0').default(1800),
   }),
   z.strictObject({
     preset: z.literal('custom'),
+    ...reserveCommon,
     contingencyFraction: fraction('a fraction from 0 to 1'),
     alternate: alternateSchema.nullable(),
     finalReserveTime: nonNegativeQuantity('time', 'a time >= 0'),

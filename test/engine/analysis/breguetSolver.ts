@@ -75,7 +75,7 @@ export function makeBreguetSolver(counter?: BreguetCounter): (input: MissionInpu
       tripFuel_kg: trip,
       tripTime_s: f.range / (BREGUET_MACH * A_10KM),
       reserveFuel_kg: reserve,
-      reserves: { contingency_kg: CONTINGENCY * trip, alternate_kg: 0, finalReserve_kg: FINAL_RESERVE_KG, extra_kg: 0, total_kg: reserve },
+      reserves: { contingency_kg: CONTINGENCY * trip, alternate_kg: 0, missedApproach_kg: 0, alternateApproach_kg: 0, finalReserve_kg: FINAL_RESERVE_KG, extra_kg: 0, total_kg: reserve },
       takeoffMass_kg: f.w0,
       rampMass_kg: f.w0 + TAXI_FUEL_KG,
       landingMass_kg: f.w1,

@@ -9,6 +9,7 @@ import { initialState } from '../../../engine/mission/flyTrip';
 import { flyHold } from '../../../engine/mission/holdLeg';
 import { S_ALT, S_MASS } from '../../../engine/mission/missionState';
 import { HOLD_HEIGHT_M } from '../../../engine/mission/reserves';
+import { RESERVE_RULES } from '../../../engine/mission/reserveRules';
 import { createFlightLog } from '../../../engine/mission/timeHistoryBuilder';
 
 // With constant L/D and constant TSFC every reserve item has a closed form:
@@ -29,6 +30,10 @@ const legs: Leg[] = [
 ];
 // The alternate starts and ends at the cruise level (elevation = H - 1,500 ft) so it is a pure cruise.
 const alternate = { distance_m: 400_000, cruiseAltitude_m: H, cruiseMach: 0.8, elevation_m: H - HOLD_FT };
+// Set arrival allowances so each is a known fuel: missed approach at the destination, approach and landing at the alternate.
+const MISSED_KG = 120;
+const LANDING_KG = 80;
+const arrival = { missedApproach: { time_s: 60, fuel_kg: MISSED_KG }, alternateApproach: { time_s: 300, fuel_kg: LANDING_KG } };
 
 // The destination is placed at the cruise level so the alternate departs level (its holds, 1,500 ft higher, burn
 // the same with constant L/D and TSFC).
@@ -51,19 +56,25 @@ const tripFuel = TOW - mLanding;
 
 describe('reserves', () => {
   it('reserves per ICAO Annex 6 Part I 4.3.6.3: 5 % contingency, alternate, 30 min final reserve', () => {
-    const r = fly({ preset: 'icaoAnnex6', contingencyFraction: 0.05, minContingency_s: 300, alternate, finalReserve_s: 1800 });
+    const r = fly({ preset: 'icaoAnnex6', contingencyFraction: 0.05, minContingency_s: 300, alternate, finalReserve_s: 1800, arrival });
     expect(r.status).toBe('ok');
     // 5 % of trip fuel exceeds 5 min holding here (about 3,000 kg x 5 % vs about 50 kg).
     expectClose(r.reserves.contingency_kg, 0.05 * tripFuel, { rel: 1e-6 }, 'ICAO 4.3.6.3 c) 5 % of trip fuel');
     const afterContingency = mLanding - r.reserves.contingency_kg;
-    const alt = rangeBurn(afterContingency, alternate.distance_m);
-    expectClose(r.reserves.alternate_kg, alt, { rel: 1e-5 }, 'ICAO 4.3.6.3 d) alternate, Breguet range');
+    // ICAO 4.3.6.3 d): alternate fuel = missed approach at the destination + the flight + approach and landing.
+    const flight = rangeBurn(afterContingency - MISSED_KG, alternate.distance_m);
+    const alt = MISSED_KG + flight + LANDING_KG;
+    expectClose(r.reserves.alternate_kg, alt, { rel: 1e-5 }, 'ICAO 4.3.6.3 d) alternate fuel, Breguet range for the flight');
+    expect(r.reserves.missedApproach_kg).toBe(MISSED_KG);
+    expect(r.reserves.alternateApproach_kg).toBe(LANDING_KG);
     expectClose(r.reserves.finalReserve_kg, timeBurn(afterContingency - alt, 1800), { rel: 1e-6 }, 'ICAO 4.3.6.3 e) 30 min hold');
     expectClose(r.reserves.total_kg, r.reserves.contingency_kg + alt + r.reserves.finalReserve_kg, { rel: 1e-9 }, 'sum');
     expect(r.legs.filter((l) => l.kind === 'reserve').map((l) => l.name)).toEqual([
-      'reserve: contingency (ICAO Annex 6 4.3.6.3 c)',
-      'reserve: alternate',
-      'reserve: final reserve hold',
+      'reserve: contingency (ICAO Annex 6 Part I 4.3.6.3 c))',
+      'reserve: missed approach at the destination (ICAO Annex 6 Part I 4.3.6.3 d))',
+      'reserve: alternate (ICAO Annex 6 Part I 4.3.6.3 d))',
+      'reserve: approach and landing at the alternate (ICAO Annex 6 Part I 4.3.6.3 d))',
+      'reserve: final reserve hold (ICAO Annex 6 Part I 4.3.6.3 e); interpretation)',
     ]);
   });
 
@@ -75,22 +86,33 @@ describe('reserves', () => {
   });
 
   it('reserves per 14 CFR 121.639: most distant alternate then 45 min at normal cruise consumption', () => {
-    const r = fly({ preset: 'cfr121_639', alternate, finalReserve_s: 2700 });
+    const r = fly({ preset: 'cfr121_639', alternate, finalReserve_s: 2700, arrival });
     expect(r.status).toBe('ok');
     expect(r.reserves.contingency_kg).toBe(0);
-    const alt = rangeBurn(mLanding, alternate.distance_m);
+    // 121.639(b) "to fly to and land at the most distant alternate": missed approach (interpretation), flight, landing.
+    const alt = MISSED_KG + rangeBurn(mLanding - MISSED_KG, alternate.distance_m) + LANDING_KG;
     expectClose(r.reserves.alternate_kg, alt, { rel: 1e-5 }, '121.639(b) alternate');
+    expect(r.legs.filter((l) => l.kind === 'reserve').map((l) => l.name)).toEqual([
+      'reserve: missed approach at the destination (14 CFR 121.639(b); interpretation)',
+      'reserve: alternate (14 CFR 121.639(b))',
+      'reserve: approach and landing at the alternate (14 CFR 121.639(b))',
+      'reserve: final reserve at normal cruise (14 CFR 121.639(c); interpretation)',
+    ]);
     expectClose(r.reserves.finalReserve_kg, timeBurn(mLanding - alt, 2700), { rel: 1e-6 }, '121.639(c) 45 min at normal cruise');
   });
 
   it('reserves per 14 CFR 121.645(b): 10 % of en-route time, alternate, 30 min holding at 1,500 ft', () => {
-    const r = fly({ preset: 'cfr121_645', enRouteFraction: 0.1, alternate, finalReserve_s: 1800 });
+    const r = fly({ preset: 'cfr121_645', enRouteFraction: 0.1, alternate, finalReserve_s: 1800, arrival });
     expect(r.status).toBe('ok');
     expectClose(r.tripTime_s, TRIP / V, { rel: 1e-9 }, 'en-route time = R / V');
     const enRoute = timeBurn(mLanding, 0.1 * (TRIP / V));
     expectClose(r.reserves.contingency_kg, enRoute, { rel: 1e-6 }, '121.645(b)(2) 10 % of the total time');
-    const alt = rangeBurn(mLanding - enRoute, alternate.distance_m);
-    expectClose(r.reserves.alternate_kg, alt, { rel: 1e-5 }, '121.645(b)(3) alternate');
+    const alt = MISSED_KG + rangeBurn(mLanding - enRoute - MISSED_KG, alternate.distance_m) + LANDING_KG;
+    expectClose(r.reserves.alternate_kg, alt, { rel: 1e-5 }, '121.645(b)(3) to fly to and land at the alternate');
+    const names = r.legs.filter((l) => l.kind === 'reserve').map((l) => l.name);
+    // 121.645(b)(2) says only "to fly for a period of 10 percent of the total time": the row says it is interpreted.
+    expect(names[0]).toBe('reserve: 10 % en-route time (14 CFR 121.645(b)(2); interpretation)');
+    expect(names).toHaveLength(5);
     expectClose(r.reserves.finalReserve_kg, timeBurn(mLanding - enRoute - alt, 1800), { rel: 1e-6 }, '121.645(b)(4) 30 min hold');
   });
 
@@ -122,7 +144,7 @@ describe('reserves', () => {
       }),
     );
     expect(r.status).toBe('ok');
-    const row = r.legs.find((l) => l.name === 'reserve: alternate')!;
+    const row = r.legs.find((l) => l.name.startsWith('reserve: alternate ('))!;
     expectClose(row.endDistance_m - row.startDistance_m, distance_m, { rel: 1e-3 }, 'AlternateSpec.distance_m');
     expectClose(row.endAltitude_m, HOLD_FT, { abs: 1e-6 }, 'descends to 1,500 ft above the alternate');
   });
@@ -151,10 +173,12 @@ describe('reserves', () => {
     expectClose(byKind('taxiIn')[0].startAltitude_m, elevation, { abs: 1e-9 }, 'taxi in at the destination');
     expectClose(byKind('taxiIn')[0].endAltitude_m, elevation, { abs: 1e-9 }, 'taxi in at the destination');
     const reserveRows = byKind('reserve');
-    const alternateRow = reserveRows.find((l) => l.name === 'reserve: alternate')!;
+    const alternateRow = reserveRows.find((l) => l.name.startsWith('reserve: alternate ('))!;
+    const missedRow = reserveRows.find((l) => l.name.startsWith('reserve: missed approach'))!;
+    expectClose(missedRow.startAltitude_m, elevation, { abs: 1e-9 }, 'the missed approach is flown at the destination');
     expectClose(alternateRow.startAltitude_m, elevation, { abs: 1e-9 }, 'the alternate departs from the destination');
     expectClose(alternateRow.endAltitude_m, HOLD_FT, { abs: 1e-6 }, 'descends to 1,500 ft above the alternate');
-    const finalRow = reserveRows.find((l) => l.name === 'reserve: final reserve hold')!;
+    const finalRow = reserveRows.find((l) => l.name.startsWith('reserve: final reserve hold'))!;
     expectClose(finalRow.endAltitude_m, HOLD_FT, { abs: 1e-9 }, 'ICAO 4.3.6.3 e) 1,500 ft above the alternate');
     // The contingency equals a 5 min best-endurance hold at elevation + 1,500 ft from the landing mass, ISA, still air.
     const holdFuel = (altitude_m: number) => {
@@ -162,11 +186,46 @@ describe('reserves', () => {
       const start = initialState(r.landingMass_kg);
       start[S_ALT] = altitude_m;
       const target = { legIndex: -1, legName: 'check', env: { isaDev_K: 0, wind_m_s: 0 }, recordHistory: false };
-      return r.landingMass_kg - flyHold(ctx, target, start, altitude_m, 300, { kind: 'bestEndurance' }).state[S_MASS];
+      // The reserves' default hold speed: best endurance at 1.1 x the minimum-drag speed (reserveRules.ts).
+      return r.landingMass_kg - flyHold(ctx, target, start, altitude_m, 300, { kind: 'bestEndurance', speedFactor: 1.1 }).state[S_MASS];
     };
     expectClose(HOLD_HEIGHT_M, HOLD_FT, { abs: 1e-12 }, '1,500 ft = 457.2 m');
     expectClose(r.reserves.contingency_kg, holdFuel(elevation + HOLD_HEIGHT_M), { rel: 1e-9 }, 'ICAO 4.3.6.3 c) 5 min at 1,500 ft above the destination');
     // Not the hold 1,500 ft above sea level: a jet burns visibly more lower down (common practice).
     expect(holdFuel(HOLD_HEIGHT_M) - r.reserves.contingency_kg).toBeGreaterThan(0.5);
+  });
+
+  it('RESERVE_RULES quote each rule and mark where the flying interprets it', () => {
+    // Rule texts (from memory): 14 CFR 121.645(b)(2) "to fly for a period of 10 percent of the total time required to
+    // fly from the airport of departure to, and land at, the airport to which it was released" - no fuel-consumption
+    // words, so flying it at normal cruise must be labelled an interpretation; 121.639(c) does say "normal cruising
+    // fuel consumption"; ICAO Annex 6 alternate fuel names the missed approach and the approach and landing.
+    const b2 = RESERVE_RULES.cfr121_645.items.find((i) => i.item === 'enRouteTime')!;
+    expect(RESERVE_RULES.cfr121_645.quotation).toContain('10 percent of the total time');
+    expect(RESERVE_RULES.cfr121_645.quotation).not.toMatch(/10 percent[^;]*normal cruising/);
+    expect(b2.paragraph).toBe('14 CFR 121.645(b)(2)');
+    expect(b2.interpretation).toMatch(/interpretation/);
+    expect(RESERVE_RULES.cfr121_639.quotation).toContain('45 minutes at normal cruising fuel consumption');
+    expect(RESERVE_RULES.icaoAnnex6.quotation).toContain('missed approach at the destination aerodrome');
+    expect(RESERVE_RULES.icaoAnnex6.quotation).toContain('approach and landing at the destination alternate aerodrome');
+    for (const rule of Object.values(RESERVE_RULES)) {
+      expect(rule.items.map((i) => i.item)).toContain('finalReserve');
+      if (rule.preset !== 'custom') expect(rule.quotation).toMatch(/from memory/);
+    }
+  });
+
+  it('reserves default the arrival allowances to the mission\'s take-off and approach allowances (common practice)', () => {
+    const demo = demoMissionInput();
+    const r = solveMission(demo);
+    expect(r.status).toBe('ok');
+    const takeoff = r.legs.find((l) => l.kind === 'takeoff')!;
+    const approach = r.legs.find((l) => l.kind === 'approach')!;
+    const missed = r.legs.find((l) => l.name.startsWith('reserve: missed approach'))!;
+    const landing = r.legs.find((l) => l.name.startsWith('reserve: approach and landing'))!;
+    // The demo sets 150 lb for each (fixtures/demo/demo.blockwise.json).
+    expectClose(missed.fuel_kg, takeoff.fuel_kg, { rel: 1e-12 }, 'missed approach = take-off allowance');
+    expectClose(landing.fuel_kg, approach.fuel_kg, { rel: 1e-12 }, 'approach and landing = the approach allowance');
+    expectClose(r.reserves.alternate_kg, r.legs.filter((l) => l.kind === 'reserve' && /missed approach|alternate/.test(l.name)).reduce((t, l) => t + l.fuel_kg, 0), { rel: 1e-12 }, 'alternate fuel = its three rows');
+    expectClose(landing.endAltitude_m, demo.reserves.alternate!.elevation_m, { abs: 1e-9 }, 'lands at the alternate elevation');
   });
 });
