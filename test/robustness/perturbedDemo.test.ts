@@ -164,6 +164,9 @@ type EngineVariant = typeof engineVariant extends fc.Arbitrary<infer T> ? T : ne
 /** The demo project with another engine (parametric deck), a geometry inlet and other installation settings. */
 function engineProject(v: EngineVariant): string {
   const doc = JSON.parse(demoText) as Json;
+  // The demo's declared uncertainties include a recovery-table offset on the first inlet, which this
+  // variant turns into a geometry inlet; the engine variants are not about uncertainty, so drop them.
+  delete doc.uncertainty;
   doc.engine.count = v.count;
   if (v.deck.kind === 'parametric') {
     doc.engine.deck = {
