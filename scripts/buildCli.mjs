@@ -16,7 +16,7 @@ const repo = resolve(dirname(fileURLToPath(import.meta.url)), '..');
 const outDir = resolve(repo, 'dist-cli');
 
 /** The bundle's entry points: the command line, and the thread a sweep runs its cases on. */
-export const CLI_ENTRIES = { blockwise: 'cli/run.ts' };
+export const CLI_ENTRIES = { blockwise: 'cli/run.ts', sweepWorker: 'cli/sweep/sweepWorker.ts' };
 
 /** Builds the bundle into `into` (default dist-cli/); returns the folder and the number of source files in it. */
 export async function buildCli(into = outDir) {

@@ -17,6 +17,7 @@ export const VERB_CATALOGUE = [
   { name: 'payload-range', summary: 'payload-range diagram: corner points and the curve, each a mission with reserves' },
   { name: 'compare', summary: 'inlet A vs inlet B on the same mission, with the block-fuel difference broken down' },
   { name: 'trade', summary: 'trade factors: block fuel per 1 % recovery, per drag count, per 1 % TSFC, per 100 kg OEW' },
+  { name: 'sweep', summary: 'fly every combination of varied project fields over all cores, one row per case (CSV or JSON lines)' },
   { name: 'uncertainty', summary: 'block fuel with its uncertainty band: a seeded Monte Carlo of the declared uncertain inputs' },
   { name: 'cycle point', summary: 'run an engine cycle file at one flight condition and throttle' },
 ] as const satisfies readonly { readonly name: string; readonly summary: string }[];

@@ -9,6 +9,7 @@ import { flyVerb } from './fly';
 import { inletVerb } from './inlet';
 import { payloadRangeVerb } from './payloadRange';
 import { rangeSpeedsVerb } from './rangeSpeeds';
+import { sweepVerb } from './sweep';
 import { tradeVerb } from './trade';
 import { uncertaintyVerb } from './uncertainty';
 
@@ -28,6 +29,7 @@ export const verbs: readonly Verb[] = [
   payloadRangeVerb,
   compareVerb,
   tradeVerb,
+  sweepVerb,
   uncertaintyVerb,
   ...cycleVerbs,
 ];

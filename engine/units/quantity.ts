@@ -25,6 +25,14 @@ export interface QuantityError {
 const NUMBER_AND_UNIT =
   /^([+-]?(?:\d{1,3}(?:,\d{3})+(?:\.\d*)?|\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?)\s*(.*)$/;
 
+/** A quantity text split into its number and its unit text ("" when bare), or null when it does not start with a number. */
+export function splitQuantity(text: string): { readonly value: number; readonly unit: string } | null {
+  const m = NUMBER_AND_UNIT.exec(text.trim().replace(/^\u2212/, '-'));
+  if (m === null) return null;
+  const value = Number(m[1]!.replace(/,/g, ''));
+  return Number.isFinite(value) ? { value, unit: m[2]!.trim() } : null;
+}
+
 function examples(expected: Dimension): string {
   const [a, b] = DIMENSION_EXAMPLES[expected];
   return `(e.g. "${a}", "${b}")`;

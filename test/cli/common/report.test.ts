@@ -81,6 +81,7 @@ const ARGUMENTS: Readonly<Record<string, (project: string) => string[]>> = {
   compare: (p) => ['compare', p],
   trade: (p) => ['trade', p],
   uncertainty: (p) => ['uncertainty', p, '--samples', '3'],
+  sweep: (p) => ['sweep', p, '--vary', 'polar.cdIncrement=0:0.0001:0.0001', '--workers', '1', '--out', join(dir, 'sweep.csv')],
   'cycle point': () => ['cycle', 'point', 'fixtures/cycle/demo-turbofan.cycle.json', '--altitude', '35000 ft', '--mach', '0.78', '--rating', 'maxCruise'],
 };
 

@@ -1,0 +1,25 @@
+/** What the sweep verb and its worker threads say to each other (structured-cloned). */
+import type { SweepRow } from '../../engine/project/sweepCase';
+import type { SweepAxis } from '../../engine/project/sweepGrid';
+import type { EngineDeck } from '../../engine/propulsion/engineDeck';
+
+/** Given to each worker at its start. */
+export interface SweepWorkerData {
+  /** The project file's parsed JSON (before the schema). */
+  readonly doc: unknown;
+  readonly axes: readonly SweepAxis[];
+  /** The deck file, parsed once by the main thread (plain data and typed arrays: it clones), when the project names one. */
+  readonly deck: EngineDeck | undefined;
+  readonly inletName: string | undefined;
+}
+
+/** Main -> worker: fly cases [start, end) of the grid. */
+export interface SweepChunk {
+  readonly start: number;
+  readonly end: number;
+}
+
+/** Worker -> main: rows flown (in case order within a chunk); `chunkDone` on the chunk's last batch; `error` when the worker cannot start. */
+export type SweepReply =
+  | { readonly kind: 'rows'; readonly rows: readonly SweepRow[]; readonly chunkDone: boolean }
+  | { readonly kind: 'error'; readonly message: string };

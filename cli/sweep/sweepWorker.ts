@@ -1,0 +1,30 @@
+/**
+ * A worker thread of `blockwise sweep`: flies the chunks of cases the main thread sends, replying with rows in small batches
+ * so the main thread can write them as they come.
+ */
+import { parentPort, workerData } from 'node:worker_threads';
+import { flySweepCase, type SweepRow } from '../../engine/project/sweepCase';
+import type { ProjectResources } from '../../engine/project/buildMissionInput';
+import type { SweepChunk, SweepReply, SweepWorkerData } from './sweepProtocol';
+
+/** Rows per reply: few enough messages, rows still written within about a tenth of a second. */
+const BATCH = 16;
+
+const data = workerData as SweepWorkerData;
+const port = parentPort;
+if (port === null) throw new Error('sweepWorker.ts runs as a worker thread only');
+
+const resources: ProjectResources = data.deck === undefined ? {} : { deck: data.deck };
+
+port.on('message', (chunk: SweepChunk) => {
+  const post = (reply: SweepReply) => port.postMessage(reply);
+  let rows: SweepRow[] = [];
+  for (let k = chunk.start; k < chunk.end; k++) {
+    rows.push(flySweepCase(data.doc, data.axes, k, resources, data.inletName));
+    if (rows.length >= BATCH && k + 1 < chunk.end) {
+      post({ kind: 'rows', rows, chunkDone: false });
+      rows = [];
+    }
+  }
+  post({ kind: 'rows', rows, chunkDone: true });
+});

@@ -1,0 +1,100 @@
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { parseJsonText } from '../../engine/project/jsonText';
+import { parseVary } from '../../engine/project/sweepGrid';
+import type { SweepRow } from '../../engine/project/sweepCase';
+import { runSweepPool } from '../../cli/sweep/sweepPool';
+import { SAFETY_NOTICE_LINES } from '../../engine/core/notice';
+import { run, writeShortDemo, type Json } from './support/cliRun';
+
+let dir = '';
+let project = '';
+beforeAll(() => {
+  dir = mkdtempSync(join(tmpdir(), 'blockwise-sweep-'));
+  project = writeShortDemo(dir, '600 nmi');
+});
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+/** The data rows of a sweep CSV (after the # notice lines and the header), by case number. */
+function csvRows(text: string): Map<number, string[]> {
+  const lines = text.trim().split('\n').filter((l) => !l.startsWith('#'));
+  const rows = new Map<number, string[]>();
+  for (const line of lines.slice(1)) {
+    const cells = line.split(',');
+    rows.set(Number(cells[0]), cells);
+  }
+  return rows;
+}
+
+describe('blockwise sweep', () => {
+  it('blockwise sweep writes one row per case whose block fuel is the single fly run of that case', async () => {
+    const out = join(dir, 'ranges.csv');
+    const r = await run('sweep', project, '--vary', 'mission.solve.range=600nmi:700nmi:100nmi', '--workers', '2', '--out', out);
+    expect(r.err).toBe('');
+    expect(r.code).toBe(0);
+    expect(r.out).toMatch(/^2 of 2 cases flown in .* on 2 threads; status: ok 2; rows in /);
+    const text = readFileSync(out, 'utf8');
+    // The notice as # lines, as every exported CSV (engine/core/notice.ts).
+    expect(text.startsWith(SAFETY_NOTICE_LINES.map((l) => `# ${l}\n`).join(''))).toBe(true);
+    expect(text).toContain('case,mission.solve.range,status,blockFuel[kg],blockTime[s],tripFuel[kg],takeoffMass[kg],cautions,message\n');
+    const rows = csvRows(text);
+    expect([...rows.keys()].sort()).toEqual([0, 1]);
+    for (const [k, range] of [[0, '600 nmi'], [1, '700 nmi']] as const) {
+      const single = await run('fly', writeShortDemo(mkdtempSync(join(dir, 'one-')), range), '--json');
+      const doc = JSON.parse(single.out) as Json & { blockFuel_kg: number; blockTime_s: number; takeoffMass_kg: number };
+      const row = rows.get(k)!;
+      expect(row[1]).toBe(range);
+      expect(row[2]).toBe('ok');
+      expect(Number(row[3])).toBe(doc.blockFuel_kg);
+      expect(Number(row[4])).toBe(doc.blockTime_s);
+    }
+  }, 120_000);
+
+  it('blockwise sweep --shard i/n flies disjoint blocks that together are the whole grid', async () => {
+    const seen: number[] = [];
+    for (const shard of ['1/3', '2/3', '3/3']) {
+      const r = await run('sweep', project, '--vary', 'polar.cdIncrement=0:0.0004:0.0001', '--workers', '1', '--shard', shard, '--json');
+      expect(r.code).toBe(0);
+      const lines = r.out.trim().split('\n').map((l) => JSON.parse(l) as Json);
+      expect(lines[0]!.cases).toBe(5);
+      for (const row of lines.slice(1)) seen.push(row.case as number);
+    }
+    expect(seen.sort()).toEqual([0, 1, 2, 3, 4]);
+  }, 120_000);
+
+  it('blockwise sweep names the bad part of a --vary on one line with exit code 2', async () => {
+    const r = await run('sweep', project, '--vary', 'mission.solve.rnage=1:2:1');
+    expect(r.code).toBe(2);
+    expect(r.out).toBe('');
+    expect(r.err).toMatch(/^blockwise sweep: --vary mission.solve.rnage=1:2:1: mission.solve has no field "rnage"; it has .*range.*\n$/);
+    const none = await run('sweep', project);
+    expect(none.code).toBe(2);
+    expect(none.err).toMatch(/give at least one --vary/);
+    const shard = await run('sweep', project, '--vary', 'polar.cdIncrement=0:0.001:0.001', '--shard', '4/3');
+    expect(shard.err).toMatch(/--shard 4\/3: i must be from 1 to 3/);
+  });
+
+  it('runSweepPool stopped early keeps the rows received and says it was stopped', async () => {
+    const doc = parseJsonText(readFileSync(project, 'utf8'));
+    if (!doc.ok) throw new Error('short demo does not parse');
+    const axis = parseVary(doc.value, 'polar.cdIncrement=0:0.01:0.0001');
+    if (!axis.ok) throw new Error(axis.error.message);
+    const rows: SweepRow[] = [];
+    const { readProjectFile, readProjectDeck } = await import('../../cli/projectFiles');
+    const read = await readProjectFile(project);
+    if (!read.ok) throw new Error('short demo does not read');
+    const deck = await readProjectDeck(read.value.projectPath, read.value.project);
+    if (!deck.ok) throw new Error('deck');
+    const pool = runSweepPool({ doc: doc.value, axes: [axis.value], deck: deck.value.deck, inletName: undefined }, { start: 0, end: 101 }, 1, (r) => {
+      rows.push(...r);
+      if (rows.length >= 3) pool.stop();
+    });
+    const result = await pool.finished;
+    expect(result.stopped).toBe(true);
+    expect(result.completed).toBe(rows.length);
+    expect(rows.length).toBeGreaterThanOrEqual(3);
+    expect(rows.length).toBeLessThan(101);
+  }, 120_000);
+});
