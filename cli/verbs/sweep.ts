@@ -7,7 +7,7 @@ import { gridSize, parseShard, parseVary, shardRange, type SweepAxis } from '../
 import { printJsonReport, reportText } from '../common/report';
 import { readTextFile } from '../common/textFile';
 import { checkInletName, projectArgument } from '../common/projectArgs';
-import { formatLoadFailure, readProjectDeck, readProjectFile } from '../projectFiles';
+import { buildFromProject, formatLoadFailure, readProjectFile } from '../projectFiles';
 import { runSweepPool } from '../sweep/sweepPool';
 import { optionalString, UsageError, type CliIo, type Verb } from '../verb';
 import { INLET_OPTION, JSON_OPTION } from './analysisArgs';
@@ -118,11 +118,13 @@ Exit codes: 0 every case flown; 1 the project (or its deck) cannot be read; 2 ba
     const doc = text === null ? null : parseJsonText(text);
     if (doc === null || !doc.ok) return 1;
     const axes = varyAxes(doc.value, specs);
-    const deck = await readProjectDeck(read.value.projectPath, read.value.project);
-    if (!deck.ok) {
-      io.err(formatLoadFailure(deck.error));
+    // The base case must build (its deck read and parsed once here; the workers get the parsed deck).
+    const loaded = await buildFromProject(read.value.projectPath, read.value.project, inletName === undefined ? {} : { inletName });
+    if (!loaded.ok) {
+      io.err(formatLoadFailure(loaded.error));
       return 1;
     }
+    const fileDeck = read.value.project.engine.deck.kind === 'file' ? loaded.value.deck : undefined;
 
     const total = gridSize(axes);
     const range = shardRange(total, theShard);
@@ -157,7 +159,7 @@ Exit codes: 0 every case flown; 1 the project (or its deck) cannot be read; 2 ba
         io.err(`\rblockwise sweep: ${written} of ${count} cases (${((100 * written) / Math.max(count, 1)).toFixed(0)} %), ${rate.toFixed(0)} cases/s, about ${left.toFixed(0)} s left   `);
       }
     };
-    const pool = runSweepPool({ doc: doc.value, axes, deck: deck.value.deck, inletName }, range, workers, onRows);
+    const pool = runSweepPool({ doc: doc.value, axes, deck: fileDeck, inletName }, range, workers, onRows);
     const onInterrupt = () => pool.stop();
     process.once('SIGINT', onInterrupt);
     const result = await pool.finished;

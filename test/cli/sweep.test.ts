@@ -82,12 +82,10 @@ describe('blockwise sweep', () => {
     const axis = parseVary(doc.value, 'polar.cdIncrement=0:0.01:0.0001');
     if (!axis.ok) throw new Error(axis.error.message);
     const rows: SweepRow[] = [];
-    const { readProjectFile, readProjectDeck } = await import('../../cli/projectFiles');
-    const read = await readProjectFile(project);
-    if (!read.ok) throw new Error('short demo does not read');
-    const deck = await readProjectDeck(read.value.projectPath, read.value.project);
-    if (!deck.ok) throw new Error('deck');
-    const pool = runSweepPool({ doc: doc.value, axes: [axis.value], deck: deck.value.deck, inletName: undefined }, { start: 0, end: 101 }, 1, (r) => {
+    const { loadProjectFromDisk } = await import('../../cli/projectFiles');
+    const loaded = await loadProjectFromDisk(project);
+    if (!loaded.ok) throw new Error('short demo does not load');
+    const pool = runSweepPool({ doc: doc.value, axes: [axis.value], deck: loaded.value.deck, inletName: undefined }, { start: 0, end: 101 }, 1, (r) => {
       rows.push(...r);
       if (rows.length >= 3) pool.stop();
     });
