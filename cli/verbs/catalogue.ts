@@ -20,6 +20,7 @@ export const VERB_CATALOGUE = [
   { name: 'sweep', summary: 'fly every combination of varied project fields over all cores, one row per case (CSV or JSON lines)' },
   { name: 'uncertainty', summary: 'block fuel with its uncertainty band: a seeded Monte Carlo of the declared uncertain inputs' },
   { name: 'cycle point', summary: 'run an engine cycle file at one flight condition and throttle' },
+  { name: 'cycle deck', summary: 'write the deck of a cycle file, with airflow and installation-sensitivity columns' },
 ] as const satisfies readonly { readonly name: string; readonly summary: string }[];
 
 export type VerbName = (typeof VERB_CATALOGUE)[number]['name'];

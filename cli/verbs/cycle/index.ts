@@ -4,6 +4,7 @@
  * added to this list; cli/verbs/index.ts registers the whole list.
  */
 import type { Verb } from '../../verb';
+import { cycleDeckVerb } from './deck';
 import { cyclePointVerb } from './point';
 
-export const cycleVerbs: readonly Verb[] = [cyclePointVerb];
+export const cycleVerbs: readonly Verb[] = [cyclePointVerb, cycleDeckVerb];
