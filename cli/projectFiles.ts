@@ -57,16 +57,20 @@ export async function readProjectFile(path: string): Promise<Result<{ projectPat
   return ok({ projectPath, project: parsed.value });
 }
 
-/** Reads the text of the deck file a project names, resolved from the project's folder; null when the deck is not a file. */
+/**
+ * Reads the text of the deck file (or engine cycle file) a project names,
+ * resolved from the project's folder; null when the deck is neither.
+ */
 async function readProjectDeckText(projectPath: string, project: Project): Promise<Result<{ file: DeckFileText; deckPath: string } | null, LoadFailure>> {
   const ref = deckReference(project);
-  if (ref.kind !== 'file') return ok(null);
+  if (ref.kind !== 'file' && ref.kind !== 'cycle') return ok(null);
   const deckPath = resolve(dirname(projectPath), ref.path);
+  const what = ref.kind === 'cycle' ? 'cycle file' : 'deck file';
   const text = await readText(deckPath);
   if (!text.ok) {
     return err({
       file: projectPath,
-      issues: [makeIssue('engine.deck.path', JSON.stringify(ref.path), 'a readable deck file', `deck file ${cannotReadMessage(deckPath, text.error)}`)],
+      issues: [makeIssue('engine.deck.path', JSON.stringify(ref.path), `a readable ${what}`, `${what} ${JSON.stringify(ref.path)}: ${cannotReadMessage(deckPath, text.error)}`)],
     });
   }
   return ok({ file: { name: ref.path, text: text.value }, deckPath });

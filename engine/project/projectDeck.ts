@@ -1,18 +1,24 @@
 /**
  * The engine deck a project names: a file (read and parsed by the caller,
- * passed in `resources.deck`), a deck embedded in the JSON deck format, or a
- * parametric deck built from Mattingly's published thrust-lapse and TSFC
- * models (engine/propulsion/parametricDeck.ts).
+ * passed in `resources.deck`), an engine cycle file (its text read by the
+ * caller and passed in `resources.cycleText`, or its deck already made and
+ * passed in `resources.deck`; generated with installation sensitivities by
+ * engine/cycle/cycleDeck.ts, once per text), a deck embedded in the JSON
+ * deck format, or a parametric deck built from Mattingly's published
+ * thrust-lapse and TSFC models (engine/propulsion/parametricDeck.ts).
  */
 import { err, ok, type Result } from '../core/result';
 import { parseDeckJson } from '../propulsion/deckJson';
 import type { EngineDeck } from '../propulsion/engineDeck';
 import { buildParametricDeck, type ParametricDeckGrid, type ParametricDeckSpec } from '../propulsion/parametricDeck';
+import { cycleDeckFromText } from '../cycle/cycleDeckCache';
+import { DEFAULT_CYCLE_DECK_GRID, type CycleDeckGrid } from '../cycle/cycleDeck';
 import { makeIssue, type ProjectIssue } from './projectIssue';
 import type { Project } from './projectSchema';
 
 export type DeckReference =
   | { readonly kind: 'file'; readonly path: string }
+  | { readonly kind: 'cycle'; readonly path: string }
   | { readonly kind: 'embedded' }
   | { readonly kind: 'parametric' };
 
@@ -23,7 +29,7 @@ export type DeckReference =
  */
 export function deckReference(project: Project): DeckReference {
   const d = project.engine.deck;
-  return d.kind === 'file' ? { kind: 'file', path: d.path } : { kind: d.kind };
+  return d.kind === 'file' || d.kind === 'cycle' ? { kind: d.kind, path: d.path } : { kind: d.kind };
 }
 
 const FT_M = 0.3048;
@@ -52,9 +58,44 @@ export function parametricSpecOf(d: ParametricSource): ParametricDeckSpec {
   };
 }
 
-/** The project's deck: from `resources` for a file reference, else embedded (JSON deck format) or parametric. */
-export function projectDeck(project: Project, resources: { readonly deck?: EngineDeck }): Result<EngineDeck, ProjectIssue[]> {
+type CycleSource = Extract<Project['engine']['deck'], { kind: 'cycle' }>;
+
+/** The grid of a project's cycle deck (SI). */
+export function cycleGridOf(d: CycleSource): CycleDeckGrid {
+  if (d.grid === undefined) return DEFAULT_CYCLE_DECK_GRID;
+  return {
+    altitudes_m: d.grid.altitudes,
+    machs: d.grid.machs,
+    ...(d.grid.isaDeviations === undefined ? {} : { isaDevs_K: d.grid.isaDeviations }),
+  };
+}
+
+/** The deck of a project's cycle file from the file's text (cached per text and grid); issues at engine.deck.path. */
+export function projectCycleDeck(project: Project, cycleText: string): Result<EngineDeck, ProjectIssue[]> {
   const d = project.engine.deck;
+  if (d.kind !== 'cycle') return err([makeIssue('engine.deck.kind', JSON.stringify(d.kind), '"cycle"', 'the project does not name a cycle file')]);
+  const made = cycleDeckFromText(cycleText, d.path, cycleGridOf(d));
+  if (!made.ok) {
+    const issues = made.error.issues.length > 0 ? made.error.issues.map((i) => i.message) : [made.error.message];
+    return err(issues.map((m) => makeIssue('engine.deck.path', JSON.stringify(d.path), 'a cycle file that designs and tabulates', m)));
+  }
+  return ok(made.value.deck);
+}
+
+/** What the caller reads for the project's deck: a parsed deck file, or a cycle file's text. */
+export interface DeckResources {
+  readonly deck?: EngineDeck;
+  readonly cycleText?: string;
+}
+
+/** The project's deck: from `resources` for a file or cycle reference, else embedded (JSON deck format) or parametric. */
+export function projectDeck(project: Project, resources: DeckResources): Result<EngineDeck, ProjectIssue[]> {
+  const d = project.engine.deck;
+  if (d.kind === 'cycle') {
+    if (resources.deck !== undefined) return ok(resources.deck);
+    if (resources.cycleText !== undefined) return projectCycleDeck(project, resources.cycleText);
+    return err([makeIssue('engine.deck.path', JSON.stringify(d.path), 'a cycle file read by the caller', `the cycle file ${JSON.stringify(d.path)} was not loaded`)]);
+  }
   if (d.kind === 'file') {
     if (resources.deck === undefined) {
       return err([makeIssue('engine.deck.path', JSON.stringify(d.path), 'a deck file read by the caller', `the deck file ${JSON.stringify(d.path)} was not loaded`)]);

@@ -130,9 +130,25 @@ export const parametricDeckSchema = z.strictObject({
     .optional(),
 });
 
+/** An engine cycle file (docs/cycle-format.md): the deck is generated from it, with installation sensitivities. */
+export const cycleDeckSchema = z.strictObject({
+  kind: z.literal('cycle'),
+  /** The *.cycle.json file, relative to the project file's folder. */
+  path: label(),
+  /** Tabulation grid of the generated deck; the built-in grid (0 to 51,000 ft, Mach 0 to 0.9, ISA) when absent. */
+  grid: z
+    .strictObject({
+      altitudes: z.array(altitude()).min(2),
+      machs: z.array(mach()).min(2),
+      isaDeviations: z.array(quantity('temperatureDelta', { min: -80, max: 80, what: 'an ISA deviation from -80 K to +80 K' })).min(2).optional(),
+    })
+    .optional(),
+});
+
 export const deckSourceSchema = z.discriminatedUnion('kind', [
   /** A deck file (CSV or JSON by extension), relative to the project file's folder. */
   z.strictObject({ kind: z.literal('file'), path: label() }),
+  cycleDeckSchema,
   /** A deck in the JSON deck format (docs/deck-format.md), inline. */
   z.strictObject({ kind: z.literal('embedded'), deck: z.record(z.string(), z.unknown()) }),
   parametricDeckSchema,

@@ -44,9 +44,10 @@ export interface StudyOptions {
 
 /**
  * The study of `project` with `deckFile` (the text of the deck file the
- * project names, read by the door; ignored for embedded and parametric
- * decks). A file deck without its text is a project issue at
- * engine.deck.path.
+ * project names, or of its engine cycle file, read by the door; ignored for
+ * embedded and parametric decks). A cycle file's deck is generated from it
+ * with installation sensitivities, once per text (engine/cycle/cycleDeckCache.ts).
+ * A file or cycle deck without its text is a project issue at engine.deck.path.
  */
 export function prepareStudy(project: Project, deckFile: DeckFileText | null, options: StudyOptions = {}): Result<Study, StudyFailure> {
   let fileDeck: EngineDeck | undefined;
@@ -55,7 +56,8 @@ export function prepareStudy(project: Project, deckFile: DeckFileText | null, op
     if (!parsed.ok) return err({ kind: 'deck', errors: parsed.error });
     fileDeck = parsed.value;
   }
-  const builtDeck = projectDeck(project, fileDeck === undefined ? {} : { deck: fileDeck });
+  const cycleText = project.engine.deck.kind === 'cycle' && deckFile !== null ? deckFile.text : undefined;
+  const builtDeck = projectDeck(project, fileDeck !== undefined ? { deck: fileDeck } : cycleText !== undefined ? { cycleText } : {});
   if (!builtDeck.ok) return err({ kind: 'project', issues: builtDeck.error });
   const deck = builtDeck.value;
   const built = new Map<string, Result<MissionInput, ProjectFailure>>();

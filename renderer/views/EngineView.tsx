@@ -31,7 +31,7 @@ export function EngineView(props: { readonly live: LiveStudy; readonly chartSize
     <section>
       <h2>Engine deck and installation</h2>
       <p>
-        Deck source: {deckSource.kind === 'file' ? `file ${deckSource.path}` : deckSource.kind === 'parametric' ? `parametric (${deckSource.title})` : 'embedded in the project'}
+        Deck source: {deckSource.kind === 'file' ? `file ${deckSource.path}` : deckSource.kind === 'cycle' ? `generated from the cycle file ${deckSource.path}` : deckSource.kind === 'parametric' ? `parametric (${deckSource.title})` : 'embedded in the project'}
         {state.deckFile ? ` — loaded ${state.deckFile.name}` : ''}{' '}
         <button type="button" data-testid="engine-import-deck" onClick={() => props.onCommand?.('importDeck')}>
           Import deck file…

@@ -33,10 +33,11 @@ export function createDeckCache(): DeckCache {
 /** The request's study (engine/study): the deck built once, each inlet's mission input built once. */
 function prepare(inputs: StudyInputs, cache: DeckCache): Result<Study, EngineFailure> {
   const deck = inputs.project.engine.deck;
-  if (deck.kind === 'file' && inputs.deckFile === null) {
+  if ((deck.kind === 'file' || deck.kind === 'cycle') && inputs.deckFile === null) {
+    const what = deck.kind === 'cycle' ? 'cycle file' : 'deck file';
     return err({
       kind: 'project',
-      issues: [makeIssue('engine.deck.path', JSON.stringify(deck.path), 'an imported deck file', `the project uses the deck file ${JSON.stringify(deck.path)}: import it (Engine deck view)`)],
+      issues: [makeIssue('engine.deck.path', JSON.stringify(deck.path), `an imported ${what}`, `the project uses the ${what} ${JSON.stringify(deck.path)}: import it (Engine deck view)`)],
     });
   }
   return prepareStudy(inputs.project, inputs.deckFile, { deckMemo: cache });
