@@ -56,6 +56,8 @@ const TABLE: readonly (readonly [string, readonly string[], number, RegExp])[] =
   ['trade', [], EXIT_USAGE, /missing the project file/],
   ['cycle point', [CYCLE, '--altitude', '35000 ft', '--mach', '1e308', '--rating', 'maxCruise'], EXIT_USAGE, /--mach: "1e308" is 1\.00e\+308/],
   ['cycle point', [CYCLE, '--altitude', '35000 ft', '--mach', '0.8'], EXIT_USAGE, /give one of --rating NAME or --fan-speed FRACTION/],
+  ['cycle deck', [CYCLE], EXIT_USAGE, /missing --out/],
+  ['cycle deck', [CYCLE, '--out', 'x.csv', '--machs', '0.8, 0.2'], EXIT_USAGE, /--machs: the values must rise/],
 ];
 
 describe('bad command lines', () => {
