@@ -70,6 +70,6 @@ describe('blockwise cycle deck', () => {
     writeFileSync(broken, JSON.stringify(project));
     const bad = await run('fly', broken);
     expect(bad.code).not.toBe(0);
-    expect(bad.err).toMatch(/engine\.deck\.path.*cycle file "no-such\.cycle\.json".*cannot be read/);
+    expect(bad.err).toMatch(/engine\.deck\.path: cycle file "no-such\.cycle\.json": cannot read/);
   });
 });
