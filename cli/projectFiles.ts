@@ -5,9 +5,9 @@
  * mission input of each inlet. Relative deck paths resolve from the project
  * file's folder.
  */
-import { readFile } from 'node:fs/promises';
 import { dirname, resolve } from 'node:path';
 import { err, ok, type Result } from '../engine/core/result';
+import { readTextFile } from '../hostio/textFile';
 import type { MissionInput } from '../engine/mission/missionTypes';
 import type { BuildOptions } from '../engine/project/buildMissionInput';
 import { deckReference } from '../engine/project/projectDeck';
@@ -15,7 +15,7 @@ import { makeIssue, type ProjectIssue } from '../engine/project/projectIssue';
 import type { Project } from '../engine/project/projectSchema';
 import { parseProject } from '../engine/project/parseProject';
 import type { EngineDeck } from '../engine/propulsion/engineDeck';
-import { cannotReadMessage, prepareStudy, readFailureReason, type DeckFileText, type Study } from '../engine/study';
+import { cannotReadMessage, prepareStudy, type DeckFileText, type Study } from '../engine/study';
 
 export interface LoadedProject {
   /** Absolute path of the project file. */
@@ -37,12 +37,10 @@ export interface LoadFailure {
   readonly issues: readonly ProjectIssue[];
 }
 
+/** The file's text through the one safe reader (hostio/textFile.ts), or the reason it cannot be read. */
 async function readText(path: string): Promise<Result<string, string>> {
-  try {
-    return ok(await readFile(path, 'utf8'));
-  } catch (e) {
-    return err(readFailureReason((e as NodeJS.ErrnoException).code, e instanceof Error ? e.message : String(e)));
-  }
+  const read = await readTextFile(path);
+  return read.ok ? ok(read.value.text) : err(read.error.reason);
 }
 
 /** Reads and parses a project file only (no deck). */

@@ -1,29 +1,27 @@
-import { readFile, stat } from 'node:fs/promises';
-import { cannotReadMessage, readFailureReason } from '../engine/study';
+import { cannotReadMessage } from '../engine/study';
+import { MAX_TEXT_FILE_BYTES, readTextFile as readSafely } from '../hostio/textFile';
 import type { HostReply } from './hostApi';
 import { hostError, hostOk } from './ipcValidation';
 
-/** Largest project or deck file the shell reads (bytes). */
-export const MAX_FILE_BYTES = 32 * 1024 * 1024;
+/** Largest project or deck file the shell reads (bytes): the one safe reader's cap (hostio/textFile.ts). */
+export const MAX_FILE_BYTES = MAX_TEXT_FILE_BYTES;
 
 /**
- * Reads a UTF-8 text file for the page. Refuses files larger than
- * `maxBytes` and files that are not valid UTF-8, naming the file.
+ * Reads a text file for the page through the one safe reader shared with the
+ * command line (hostio/textFile.ts): regular files only, at most `maxBytes`,
+ * valid UTF-8 without NUL bytes, the byte-order mark dropped. Every refusal
+ * names the file; `realPath` is the file with its symlinks resolved.
  */
+export async function readTextFileAt(path: string, maxBytes: number = MAX_FILE_BYTES): Promise<HostReply<{ readonly text: string; readonly realPath: string }>> {
+  const read = await readSafely(path, { maxBytes });
+  if (read.ok) return hostOk(read.value);
+  return hostError(read.error.code === 'too_large' ? 'too_large' : 'read_failed', cannotReadMessage(path, read.error.reason));
+}
+
+/** readTextFileAt's text only. */
 export async function readTextFile(path: string, maxBytes: number = MAX_FILE_BYTES): Promise<HostReply<string>> {
-  try {
-    const info = await stat(path);
-    if (!info.isFile()) return hostError('read_failed', `${path} is not a file`);
-    if (info.size > maxBytes) {
-      return hostError('too_large', `${path} is ${info.size} bytes; files up to ${maxBytes} bytes are accepted`);
-    }
-    const bytes = await readFile(path);
-    const text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
-    return hostOk(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
-  } catch (e) {
-    if (e instanceof TypeError) return hostError('read_failed', `${path} is not UTF-8 text`);
-    return hostError('read_failed', cannotReadMessage(path, readFailureReason((e as NodeJS.ErrnoException).code, (e as Error).message)));
-  }
+  const read = await readTextFileAt(path, maxBytes);
+  return read.ok ? hostOk(read.value.text) : read;
 }
 
 /** `name` with `extension` appended unless it already ends with it (case-insensitive). */

@@ -1,7 +1,8 @@
 import { basename, dirname, join, resolve, sep } from 'node:path';
-import { atomicWriteFile } from './atomicWrite';
+import { atomicWriteFile, removeStaleTemporaries } from './atomicWrite';
 import { discardRecovery, readRecoveryOffer, writeRecovery } from './autosave';
-import { readTextFile, withExtension } from './fileText';
+import { isInsideFolder, realFolder } from '../hostio/textFile';
+import { readTextFile, readTextFileAt, withExtension } from './fileText';
 import type { DocumentState, HostReply, HostSaved, RecentFile } from './hostApi';
 import { hostError, hostOk, type HostHandlers, type InvokeEventLike } from './ipcValidation';
 import { saveRecentFiles, withRecentFile, withoutRecentFile } from './recentFiles';
@@ -59,12 +60,15 @@ export function createHostHandlers<E extends InvokeEventLike>(deps: HostDeps<E>,
   }
 
   async function openPath(path: string): Promise<HostReply<{ name: string; path: string; text: string }>> {
-    const read = await readTextFile(path);
+    const read = await readTextFileAt(path);
     if (!read.ok) return read;
-    const isTemplate = deps.templateFolders.some((folder) => path.startsWith(resolve(folder) + sep));
+    // Real paths on both sides: a link to a template is a template.
+    const templates = await Promise.all(deps.templateFolders.map((folder) => realFolder(resolve(folder))));
+    const isTemplate = templates.some((folder) => isInsideFolder(folder, read.value.realPath, sep));
     session.projectPath = isTemplate ? null : path;
     await remember(path);
-    return hostOk({ name: basename(path), path, text: read.value });
+    if (!isTemplate) await removeStaleTemporaries(read.value.realPath).catch((e: Error) => deps.warn(e.message));
+    return hostOk({ name: basename(path), path, text: read.value.text });
   }
 
   async function writeChosen(path: string, data: string | Uint8Array): Promise<HostReply<HostSaved>> {
@@ -79,6 +83,7 @@ export function createHostHandlers<E extends InvokeEventLike>(deps: HostDeps<E>,
   async function saveProjectTo(path: string, text: string): Promise<HostReply<HostSaved>> {
     const saved = await writeChosen(path, text);
     if (!saved.ok) return saved;
+    await removeStaleTemporaries(path).catch((e: Error) => deps.warn(e.message));
     session.projectPath = path;
     await remember(path);
     await discardRecovery(deps.userDataFolder).catch((e: Error) => deps.warn(e.message));
@@ -125,13 +130,18 @@ export function createHostHandlers<E extends InvokeEventLike>(deps: HostDeps<E>,
     },
     readBesideProject: async (_event, relativePath) => {
       if (session.projectPath === null) return hostOk(null);
-      const folder = dirname(session.projectPath);
+      // Containment is checked on real paths: a symlink inside the folder that leads out is outside.
+      const folder = await realFolder(dirname(session.projectPath));
       const path = resolve(folder, relativePath);
-      if (!path.startsWith(folder + sep)) {
+      if (!isInsideFolder(folder, path, sep) || path === folder) {
         return hostError('outside_project', `"${relativePath}" leads outside the project folder ${folder}`);
       }
-      const read = await readTextFile(path);
-      return read.ok ? hostOk({ name: basename(path), text: read.value }) : read;
+      const read = await readTextFileAt(path);
+      if (!read.ok) return read;
+      if (!isInsideFolder(folder, read.value.realPath, sep)) {
+        return hostError('outside_project', `"${relativePath}" is a link to ${read.value.realPath}, outside the project folder ${folder}`);
+      }
+      return hostOk({ name: basename(path), text: read.value.text });
     },
     exportResultsCsv: async (_event, text, suggestedName) => {
       const defaultPath = join(deps.documentsFolder, withExtension(suggestedName, '.csv'));

@@ -1,24 +1,25 @@
 /**
  * Reading the files a verb names on its command line (decks, inlet design
  * files), relative to the working folder; a file that cannot be read is
- * reported on stderr with the verb and the system's error code.
+ * reported on stderr with the verb and the reason.
  */
-import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import type { Result } from '../../engine/core/result';
 import type { DeckFileError } from '../../engine/propulsion/deckFileError';
 import type { EngineDeck } from '../../engine/propulsion/engineDeck';
-import { cannotReadMessage, parseDeckText, readFailureReason } from '../../engine/study';
+import { cannotReadMessage, parseDeckText } from '../../engine/study';
+import { readTextFileSync } from '../../hostio/textFile';
 import type { CliIo } from '../verb';
 
-/** The file's text, or null after printing "blockwise <verb>: cannot read ..." on stderr. */
+/**
+ * The file's text through the one safe reader (hostio/textFile.ts: regular files only, 32 MiB, UTF-8, BOM
+ * stripped), or null after printing "blockwise <verb>: cannot read "<file>": <reason>" on stderr.
+ */
 export function readTextFile(file: string, verb: string, io: CliIo): string | null {
-  try {
-    return readFileSync(resolve(io.cwd, file), 'utf8');
-  } catch (e) {
-    io.err(`blockwise ${verb}: ${cannotReadMessage(file, readFailureReason((e as NodeJS.ErrnoException).code, e instanceof Error ? e.message : String(e)))}\n`);
-    return null;
-  }
+  const read = readTextFileSync(resolve(io.cwd, file));
+  if (read.ok) return read.value.text;
+  io.err(`blockwise ${verb}: ${cannotReadMessage(file, read.error.reason)}\n`);
+  return null;
 }
 
 /** A deck file read and parsed (the form by its content, engine/study); null after printing why it could not be read. */

@@ -64,7 +64,12 @@ export function printable(text: string): string {
   return escaped.length > 60 ? `${escaped.slice(0, 57)}...` : escaped;
 }
 
-/** One deck file error whose message is `<where>: <what>` (see deckFileWhere). */
+/** Every quoted text of `message` longer than 60 characters shortened to 57 and "..." (a cell can hold a whole pasted file). */
+export function shortenQuoted(message: string): string {
+  return message.replace(/"([^"]{61,})"/g, (_m, inner: string) => `"${inner.slice(0, 57)}..."`);
+}
+
+/** One deck file error whose message is `<where>: <what>` (see deckFileWhere); quoted cells and the value cut to 60 characters. */
 export function deckFileError(
   source: string,
   code: DeckFileErrorCode,
@@ -74,5 +79,6 @@ export function deckFileError(
   expected: string,
   what: string,
 ): DeckFileError {
-  return { code, line, column, value, expected, message: `${deckFileWhere(source, line, column)}: ${escapeControls(what)}` };
+  const shownValue = value === null ? null : value.length > 60 ? `${value.slice(0, 57)}...` : value;
+  return { code, line, column, value: shownValue, expected, message: `${deckFileWhere(source, line, column)}: ${shortenQuoted(escapeControls(what))}` };
 }

@@ -1,9 +1,9 @@
 import { spawn } from 'node:child_process';
-import { mkdtemp, readFile, readdir, rm, writeFile } from 'node:fs/promises';
+import { chmod, lstat, mkdtemp, readFile, readdir, rm, symlink, utimes, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { atomicWriteFile, nodeAtomicWriteOps, tempPathFor, type AtomicWriteOps } from '../../electron/atomicWrite';
+import { atomicWriteFile, nodeAtomicWriteOps, removeStaleTemporaries, STALE_TEMPORARY_AGE_MS, tempPathFor, type AtomicWriteOps } from '../../electron/atomicWrite';
 
 // Safe-save contract (POSIX rename(2): replacing a name is atomic within one
 // file system; write-temp-fsync-rename is common practice): a failure at any
@@ -103,4 +103,44 @@ describe('atomicWriteFile', () => {
     await new Promise((r) => child.once('exit', r));
     expect(await readFile(target, 'utf8')).toBe('survives a crash');
   }, 30_000);
+});
+
+describe('atomicWriteFile on links, read-only files and stale temporaries', () => {
+  it('atomicWriteFile through a symlink writes the file it points at and keeps the link', async () => {
+    const real = join(folder, 'real.blockwise.json');
+    const link = join(folder, 'link.blockwise.json');
+    await writeFile(real, 'old');
+    await symlink(real, link);
+    await atomicWriteFile(link, 'new');
+    expect(await readFile(real, 'utf8')).toBe('new');
+    expect((await lstat(link)).isSymbolicLink()).toBe(true);
+    expect(await readFile(link, 'utf8')).toBe('new');
+    expect((await readdir(folder)).sort()).toEqual(['link.blockwise.json', 'real.blockwise.json']);
+  });
+
+  it('atomicWriteFile refuses a read-only file with a message and leaves it as it was', async () => {
+    const target = join(folder, 'locked.blockwise.json');
+    await writeFile(target, 'keep me');
+    await chmod(target, 0o444);
+    await expect(atomicWriteFile(target, 'overwrite')).rejects.toThrow(`could not save ${target}: the file is read-only; make it writable or save under another name (the file is unchanged)`);
+    expect(await readFile(target, 'utf8')).toBe('keep me');
+    expect(await readdir(folder)).toEqual(['locked.blockwise.json']);
+  });
+
+  it('removeStaleTemporaries removes this program\'s temporaries of dead writers and old ones, nothing else', async () => {
+    const target = join(folder, 'jet.blockwise.json');
+    await writeFile(target, 'project');
+    // A pid that no process has: above the kernel's pid_max (4,194,304 at most on Linux; proc(5)).
+    const dead = tempPathFor(target, '4999999-0123abcd');
+    const ownLive = tempPathFor(target, `${process.pid}-89abcdef`);
+    const otherLiveFresh = tempPathFor(target, '1-00000000');
+    const otherLiveOld = tempPathFor(target, '1-11111111');
+    const unrelated = join(folder, '.jet.blockwise.json.backup.tmp');
+    for (const p of [dead, ownLive, otherLiveFresh, otherLiveOld, unrelated]) await writeFile(p, 'partial');
+    const old = (Date.now() - STALE_TEMPORARY_AGE_MS - 60_000) / 1000;
+    await utimes(otherLiveOld, old, old);
+    const removed = await removeStaleTemporaries(target);
+    expect(removed.sort()).toEqual(['.jet.blockwise.json.1-11111111.tmp', '.jet.blockwise.json.4999999-0123abcd.tmp']);
+    expect((await readdir(folder)).sort()).toEqual(['.jet.blockwise.json.1-00000000.tmp', `.jet.blockwise.json.${process.pid}-89abcdef.tmp`, '.jet.blockwise.json.backup.tmp', 'jet.blockwise.json']);
+  });
 });

@@ -1,4 +1,4 @@
-import { mkdtemp, readFile, readdir, rm, writeFile } from 'node:fs/promises';
+import { mkdtemp, readFile, readdir, rm, symlink, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
@@ -74,7 +74,7 @@ describe('createHostHandlers', () => {
     deps.openAnswers.push(path);
     const r = await createHostHandlers(deps, session).openProject(event);
     expect(r).toMatchObject({ ok: false, error: { code: 'read_failed' } });
-    if (!r.ok) expect(r.error.message).toContain('binary.json is not UTF-8 text');
+    if (!r.ok) expect(r.error.message).toMatch(/binary\.json: it (is not UTF-8 text|holds NUL bytes)/);
   });
 
   it('saveProject asks where for a new project, adds the extension and clears the recovery copy', async () => {
@@ -172,6 +172,29 @@ describe('createHostHandlers', () => {
     const r = await createHostHandlers(deps, session).readBesideProject(event, '../secret.txt');
     expect(r).toMatchObject({ ok: false, error: { code: 'outside_project' } });
     if (!r.ok) expect(r.error.message).toContain('"../secret.txt" leads outside the project folder');
+  });
+
+  it('readBesideProject refuses a symlink inside the project folder that leads outside it', async () => {
+    await import('node:fs/promises').then((f) => f.mkdir(join(folder, 'docs')));
+    session.projectPath = join(folder, 'docs', 'jet.blockwise.json');
+    await writeFile(join(folder, 'secret.txt'), 'not for the page');
+    await symlink(join(folder, 'secret.txt'), join(folder, 'docs', 'engine.deck.csv'));
+    const r = await createHostHandlers(deps, session).readBesideProject(event, 'engine.deck.csv');
+    expect(r).toMatchObject({ ok: false, error: { code: 'outside_project' } });
+    if (!r.ok) expect(r.error.message).toMatch(/"engine\.deck\.csv" is a link to .*secret\.txt, outside the project folder/);
+  });
+
+  it('openProject and saveProject remove a killed save\'s temporary file beside the project', async () => {
+    const path = join(folder, 'jet.blockwise.json');
+    await writeFile(path, '{"format":1}');
+    await writeFile(join(folder, '.jet.blockwise.json.4999999-deadbeef.tmp'), 'half a save');
+    deps.openAnswers.push(path);
+    const h = createHostHandlers(deps, session);
+    expect(await h.openProject(event)).toMatchObject({ ok: true });
+    expect(await readdir(folder)).not.toContain('.jet.blockwise.json.4999999-deadbeef.tmp');
+    await writeFile(join(folder, '.jet.blockwise.json.4999998-deadbeef.tmp'), 'another');
+    expect(await h.saveProject(event, '{"format":1,"edited":true}', 'jet')).toMatchObject({ ok: true });
+    expect((await readdir(folder)).filter((f) => f.endsWith('.tmp'))).toEqual([]);
   });
 
   it('exportResultsCsv writes the text where the user chose', async () => {

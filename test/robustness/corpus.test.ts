@@ -20,6 +20,8 @@ interface Expectation {
   readonly stage: 'parse' | 'load' | 'accept';
   readonly where: string;
   readonly fragment: string;
+  /** When the command line's file reader refuses the file before any parser sees it (hostio/textFile.ts): what it says. */
+  readonly reader?: string;
 }
 
 const repoRoot = fileURLToPath(new URL('../..', import.meta.url));
@@ -135,6 +137,10 @@ describe('corpus through the CLI', () => {
         expect(r.code).toBe(1);
         expect(r.out).toBe('');
         const first = r.err.split('\n')[0]!;
+        if (e.reader !== undefined) {
+          expect(first).toBe(`blockwise deck: cannot read ${JSON.stringify(path)}: ${e.reader}`);
+          return;
+        }
         expect(first.startsWith(path)).toBe(true);
         expect(first).toContain(e.where);
         expect(first).toContain(e.fragment);
@@ -149,6 +155,10 @@ describe('corpus through the CLI', () => {
         const [head, ...rest] = r.err.split('\n');
         expect(head).toContain(e.stage === 'load' ? 'fixtures/corpus/' : file);
         const body = rest.join('\n');
+        if (e.reader !== undefined) {
+          expect(body).toContain(`(file): cannot read ${repoRoot}${path}: ${e.reader}`);
+          return;
+        }
         // A JSON syntax issue's path "(line L, column C)" reads "line L, column C" in the message.
         // Control characters in a path read as \uXXXX escapes in the message.
         expect(body).toContain(escapeControls(e.where.replace(/^\((.*)\)$/, '$1')));
