@@ -3,7 +3,7 @@
  * was expected, and a readable sentence that says all three.
  */
 import type { z } from 'zod';
-import { escapeControls, shortenQuoted } from '../propulsion/deckFileError';
+import { escapeControls } from '../propulsion/deckFileError';
 import { messageText, type MessageParts } from '../units/messageParts';
 
 export interface ProjectIssue {
@@ -57,12 +57,13 @@ export function showValue(value: unknown): string {
 }
 
 /**
- * Builds an issue whose message reads `path: reason` (control characters from the file escaped as \uXXXX, quoted
- * text over 60 characters shortened). A reason given as message parts keeps its quantities for display in other units.
+ * Builds an issue whose message reads `path: reason` (control characters from the file escaped as \uXXXX; values
+ * from the file come shortened to 60 characters by showValue). A reason given as message parts keeps its quantities
+ * for display in other units.
  */
 export function makeIssue(path: string, value: string, expected: string, reason: string | MessageParts): ProjectIssue {
-  if (typeof reason === 'string') return { path, value, expected, message: shortenQuoted(escapeControls(`${path}: ${reason}`)) };
-  const reasonParts = reason.map((p) => (typeof p === 'string' ? shortenQuoted(escapeControls(p)) : p));
+  if (typeof reason === 'string') return { path, value, expected, message: escapeControls(`${path}: ${reason}`) };
+  const reasonParts = reason.map((p) => (typeof p === 'string' ? escapeControls(p) : p));
   return { path, value, expected, message: `${escapeControls(path)}: ${messageText(reasonParts, 'both')}`, reasonParts };
 }
 

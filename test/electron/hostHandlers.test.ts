@@ -74,7 +74,7 @@ describe('createHostHandlers', () => {
     deps.openAnswers.push(path);
     const r = await createHostHandlers(deps, session).openProject(event);
     expect(r).toMatchObject({ ok: false, error: { code: 'read_failed' } });
-    if (!r.ok) expect(r.error.message).toMatch(/binary\.json: it (is not UTF-8 text|holds NUL bytes)/);
+    if (!r.ok) expect(r.error.message).toMatch(/binary\.json": it (is not UTF-8 text|holds NUL bytes)/);
   });
 
   it('saveProject asks where for a new project, adds the extension and clears the recovery copy', async () => {

@@ -156,7 +156,7 @@ describe('corpus through the CLI', () => {
         expect(head).toContain(e.stage === 'load' ? 'fixtures/corpus/' : file);
         const body = rest.join('\n');
         if (e.reader !== undefined) {
-          expect(body).toContain(`(file): cannot read ${repoRoot}${path}: ${e.reader}`);
+          expect(body).toContain(`(file): cannot read ${JSON.stringify(`${repoRoot}${path}`)}: ${e.reader}`);
           return;
         }
         // A JSON syntax issue's path "(line L, column C)" reads "line L, column C" in the message.
