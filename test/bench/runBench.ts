@@ -1,7 +1,11 @@
 /**
  * `npm run bench`: loads every section in test/bench/sections/*.ts, times
- * each case (warm-up, then about 0.5 s) and prints one table. Optional
- * arguments filter sections by a substring of their file name or title.
+ * each case (warm-up, then about 0.5 s) and prints one table; then the side
+ * by side with the Python peer (sideBySide.ts), the peer at equal accuracy
+ * (equalAccuracy.ts) and the command line's start-up and sweep throughput
+ * (cliTiming.ts). Arguments: substrings of section file names or titles to
+ * run only those (the comparisons then run only if named: "peer", "cli");
+ * `--json` prints every figure as one JSON document instead of the text.
  * Speed is measured here, never in unit tests.
  */
 import { readdirSync } from 'node:fs';
@@ -10,11 +14,19 @@ import { dirname, join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { formatTable, runCase } from './benchRunner';
 import type { BenchResult, BenchSection } from './benchTypes';
-import { formatSideBySide, runSideBySide } from './sideBySide';
+import { formatCliTiming, runCliTiming, type CliTiming } from './cliTiming';
+import { formatEqualAccuracy, runEqualAccuracy, type EqualAccuracy } from './equalAccuracy';
+import { formatSideBySide, runSideBySide, type SideBySide } from './sideBySide';
 
 const here = dirname(fileURLToPath(import.meta.url));
 const sectionDir = join(here, 'sections');
-const filters = process.argv.slice(2).map((f) => f.toLowerCase());
+const args = process.argv.slice(2);
+const json = args.includes('--json');
+const filters = args.filter((a) => a !== '--json').map((f) => f.toLowerCase());
+const wanted = (name: string) => filters.length === 0 || filters.some((f) => name.includes(f));
+const say = (text: string) => {
+  if (!json) process.stdout.write(text);
+};
 
 const files = readdirSync(sectionDir)
   .filter((f) => f.endsWith('.ts'))
@@ -35,9 +47,33 @@ for (const file of files) {
   }
 }
 
-process.stdout.write(`Node ${process.version}, ${cpus().length} cores, ${results.length} cases\n\n${formatTable(results)}\n`);
+const cores = cpus().length;
+say(`Node ${process.version}, ${cores} cores, ${new Date().toISOString()}, ${results.length} cases\n\n${formatTable(results)}\n`);
 
-// Printed last: Blockwise against the scripted Python peer (test/bench/sideBySide.ts).
-if (filters.length === 0 || filters.some((f) => 'side by side python peer'.includes(f))) {
-  process.stdout.write(`\n${formatSideBySide(runSideBySide())}\n`);
+// Blockwise against the scripted Python peer: agreement at the peer's default tolerance, then both at equal accuracy.
+let sideBySide: SideBySide | null = null;
+let equal: EqualAccuracy | null = null;
+if (wanted('side by side python peer equal accuracy')) {
+  sideBySide = runSideBySide(15, 1);
+  say(`\n${formatSideBySide(sideBySide)}\n`);
+  equal = runEqualAccuracy();
+  say(`\n${formatEqualAccuracy(equal)}\n`);
+}
+let cli: CliTiming | null = null;
+if (wanted('cli command line start-up sweep')) {
+  cli = runCliTiming();
+  say(`\n${formatCliTiming(cli)}\n`);
+}
+
+if (json) {
+  const doc = {
+    node: process.version,
+    cores,
+    date: new Date().toISOString(),
+    cases: results.map((r) => ({ section: r.section, name: r.name, medianCall_s: r.medianCall_s, callsPerSecond: r.opsPerSecond, calls: r.calls })),
+    sideBySide,
+    equalAccuracy: equal,
+    cli,
+  };
+  process.stdout.write(`${JSON.stringify(doc, null, 2)}\n`);
 }

@@ -1,0 +1,44 @@
+import { describe, expect, it } from 'vitest';
+import { formatCliTiming } from './cliTiming';
+import { EQUAL_ACCURACY, formatEqualAccuracy, PEER_RTOLS } from './equalAccuracy';
+
+// Formatting only: the bench measures, tests never time anything.
+describe('equal-accuracy comparison and CLI timing text (no timing assertions)', () => {
+  it('the tolerances are tried from tight to loose and equal accuracy is 0.01 %', () => {
+    expect(EQUAL_ACCURACY).toBe(1e-4);
+    expect([...PEER_RTOLS].sort((a, b) => a - b)).toEqual(PEER_RTOLS);
+  });
+
+  it('formatEqualAccuracy prints the peer tolerance chosen, its time and difference, and the ratio', () => {
+    const text = formatEqualAccuracy({
+      tolerance: 1e-4,
+      blockwise: { medianMission_s: 0.002, blockFuel_kg: 5000.1, tightBlockFuel_kg: 5000, relativeDifference: 2e-5 },
+      peer: {
+        tightBlockFuel_kg: 5001,
+        tries: [
+          { rtol: 1e-4, blockFuel_kg: 5001.2, relativeDifference: 4e-5, mission_s: 0.8 },
+          { rtol: 1e-3, blockFuel_kg: 5003, relativeDifference: 4e-4, mission_s: 0.5 },
+        ],
+        rtol: 1e-4,
+        medianMission_s: 0.8,
+        blockFuel_kg: 5001.2,
+        relativeDifference: 4e-5,
+        repeat: 3,
+      },
+      ratio: 400,
+    });
+    expect(text).toContain('within 0.01 %');
+    expect(text).toContain('rtol 1e-3: block fuel 5003.000 kg, +0.0400 %, 500.00 ms  (outside)');
+    expect(text).toContain('Python peer at rtol 1e-4 (median of 3): 800.00 ms');
+    expect(text).toContain('peer / Blockwise: 400 x');
+  });
+
+  it('formatEqualAccuracy and formatCliTiming say why a part did not run', () => {
+    const b = { medianMission_s: 0.002, blockFuel_kg: 1, tightBlockFuel_kg: 1, relativeDifference: 0 };
+    expect(formatEqualAccuracy({ tolerance: 1e-4, blockwise: b, peer: { error: 'python3 could not be started: ENOENT' }, ratio: null })).toContain('not run (python3 could not be started');
+    const t = formatCliTiming({ bundle: 'is not built', runs: 3, help_s: 0.1, fly_s: 0.2, nodeBare_s: 0.05, sweep: { error: 'boom' } });
+    expect(t).toContain('NOT bundled: the bundle is not built');
+    expect(t).toContain('blockwise --help 100 ms; blockwise fly <demo> 200 ms');
+    expect(t).toContain('sweep: not run (boom)');
+  });
+});

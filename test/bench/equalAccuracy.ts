@@ -1,0 +1,117 @@
+/**
+ * The peer at equal accuracy: the scripted Python mission
+ * (peer/demoMission.py) first at a tight tolerance (its own reference), then
+ * with the tolerance loosened a decade at a time until its block fuel leaves
+ * EQUAL_ACCURACY of that reference; the loosest tolerance still within it is
+ * the peer's fair setting, timed with a few repetitions. Blockwise is checked
+ * the same way against its own fine-step answer (stepScale 1/8).
+ */
+import { spawnSync } from 'node:child_process';
+import { performance } from 'node:perf_hooks';
+import { solveMission } from '../../engine/mission/solveMission';
+import { DEMO_PROJECT_PATH, loadDemoInput, PEER_SCRIPT_PATH } from './peer/demoInput';
+import { median, parsePeerOutput, type PeerReport } from './sideBySide';
+
+/** Largest relative block-fuel difference to the tight answer that counts as equal accuracy (0.01 %). */
+export const EQUAL_ACCURACY = 1e-4;
+/** The peer's tight tolerance (its reference) and the tolerances tried, tightest first. */
+export const PEER_TIGHT_RTOL = 1e-10;
+export const PEER_RTOLS: readonly number[] = [1e-7, 1e-6, 1e-5, 1e-4, 1e-3, 1e-2];
+
+export interface PeerTry {
+  readonly rtol: number;
+  readonly blockFuel_kg: number;
+  readonly relativeDifference: number;
+  readonly mission_s: number;
+}
+
+export interface EqualAccuracy {
+  readonly tolerance: number;
+  readonly blockwise: { readonly medianMission_s: number; readonly blockFuel_kg: number; readonly tightBlockFuel_kg: number; readonly relativeDifference: number };
+  readonly peer:
+    | { readonly tightBlockFuel_kg: number; readonly tries: readonly PeerTry[]; readonly rtol: number; readonly medianMission_s: number; readonly blockFuel_kg: number; readonly relativeDifference: number; readonly repeat: number }
+    | { readonly error: string };
+  /** Peer time / Blockwise time at equal accuracy. */
+  readonly ratio: number | null;
+}
+
+function runPeer(rtol: number, repeat: number): PeerReport | string {
+  const child = spawnSync('python3', [PEER_SCRIPT_PATH, DEMO_PROJECT_PATH, '--repeat', String(repeat), '--rtol', String(rtol)], { encoding: 'utf8', timeout: 1_800_000 });
+  if (child.error) return `python3 could not be started: ${child.error.message}`;
+  if (child.status !== 0) return `the peer exited with ${child.status}: ${child.stderr.trim().split('\n').at(-1) ?? ''}`;
+  return parsePeerOutput(child.stdout);
+}
+
+/** Runs both sides at equal accuracy; `blockwiseRuns` timed in-process solves, `peerRepeat` repetitions of the chosen peer setting. */
+export function runEqualAccuracy(blockwiseRuns = 31, peerRepeat = 3): EqualAccuracy {
+  const { input } = loadDemoInput();
+  const tight = solveMission(input, { stepScale: 0.125 });
+  solveMission(input);
+  const times: number[] = [];
+  let last = solveMission(input);
+  for (let i = 0; i < blockwiseRuns; i++) {
+    const t0 = performance.now();
+    last = solveMission(input);
+    times.push((performance.now() - t0) / 1000);
+  }
+  const blockwise = {
+    medianMission_s: median(times),
+    blockFuel_kg: last.blockFuel_kg,
+    tightBlockFuel_kg: tight.blockFuel_kg,
+    relativeDifference: (last.blockFuel_kg - tight.blockFuel_kg) / tight.blockFuel_kg,
+  };
+  const reference = runPeer(PEER_TIGHT_RTOL, 1);
+  if (typeof reference === 'string') return { tolerance: EQUAL_ACCURACY, blockwise, peer: { error: reference }, ratio: null };
+  const tries: PeerTry[] = [];
+  let chosen: PeerTry | null = null;
+  for (const rtol of PEER_RTOLS) {
+    const r = runPeer(rtol, 1);
+    if (typeof r === 'string') return { tolerance: EQUAL_ACCURACY, blockwise, peer: { error: r }, ratio: null };
+    const t: PeerTry = { rtol, blockFuel_kg: r.blockFuel_kg, relativeDifference: (r.blockFuel_kg - reference.blockFuel_kg) / reference.blockFuel_kg, mission_s: r.medianMission_s };
+    tries.push(t);
+    if (Math.abs(t.relativeDifference) > EQUAL_ACCURACY) break;
+    chosen = t;
+  }
+  if (chosen === null) return { tolerance: EQUAL_ACCURACY, blockwise, peer: { error: `no tolerance from ${PEER_RTOLS[0]} up kept the peer within ${EQUAL_ACCURACY * 100} %` }, ratio: null };
+  const timed = runPeer(chosen.rtol, peerRepeat);
+  if (typeof timed === 'string') return { tolerance: EQUAL_ACCURACY, blockwise, peer: { error: timed }, ratio: null };
+  const peer = {
+    tightBlockFuel_kg: reference.blockFuel_kg,
+    tries,
+    rtol: chosen.rtol,
+    medianMission_s: timed.medianMission_s,
+    blockFuel_kg: timed.blockFuel_kg,
+    relativeDifference: (timed.blockFuel_kg - reference.blockFuel_kg) / reference.blockFuel_kg,
+    repeat: peerRepeat,
+  };
+  return { tolerance: EQUAL_ACCURACY, blockwise, peer, ratio: peer.medianMission_s / blockwise.medianMission_s };
+}
+
+function ms(t_s: number): string {
+  return t_s >= 1 ? `${t_s.toFixed(2)} s` : t_s >= 1e-3 ? `${(t_s * 1000).toFixed(2)} ms` : `${(t_s * 1e6).toFixed(0)} us`;
+}
+
+function pct(x: number): string {
+  return `${x >= 0 ? '+' : ''}${(100 * x).toFixed(4)} %`;
+}
+
+/** The equal-accuracy comparison as text lines. */
+export function formatEqualAccuracy(r: EqualAccuracy): string {
+  const b = r.blockwise;
+  const lines = [
+    `At equal accuracy (block fuel within ${(100 * r.tolerance).toFixed(2)} % of each program's own tight answer):`,
+    `  Blockwise (production steps, median of the timed runs) ${ms(b.medianMission_s)}, block fuel ${b.blockFuel_kg.toFixed(3)} kg, ${pct(b.relativeDifference)} from its fine-step answer ${b.tightBlockFuel_kg.toFixed(3)} kg`,
+  ];
+  const p = r.peer;
+  if ('error' in p) {
+    lines.push(`  Python peer: not run (${p.error})`);
+    return lines.join('\n');
+  }
+  lines.push(`  Python peer tight (rtol ${PEER_TIGHT_RTOL}): block fuel ${p.tightBlockFuel_kg.toFixed(3)} kg`);
+  for (const t of p.tries) lines.push(`    rtol ${t.rtol.toExponential(0)}: block fuel ${t.blockFuel_kg.toFixed(3)} kg, ${pct(t.relativeDifference)}, ${ms(t.mission_s)}${Math.abs(t.relativeDifference) > r.tolerance ? '  (outside)' : ''}`);
+  lines.push(
+    `  Python peer at rtol ${p.rtol.toExponential(0)} (median of ${p.repeat}): ${ms(p.medianMission_s)}, block fuel ${p.blockFuel_kg.toFixed(3)} kg, ${pct(p.relativeDifference)} from its tight answer`,
+    `  Ratio at equal accuracy, peer / Blockwise: ${r.ratio === null ? 'n/a' : `${r.ratio.toFixed(0)} x`}`,
+  );
+  return lines.join('\n');
+}
