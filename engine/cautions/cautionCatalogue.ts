@@ -28,7 +28,8 @@ export type MissionCautionId =
   | 'alternate_too_short'
   | 'altitude_jump'
   | 'profile_altitude_limited'
-  | 'still_air_distances';
+  | 'still_air_distances'
+  | 'cruise_climb_start_limited';
 
 export interface CautionEntry {
   readonly id: MissionCautionId;
@@ -219,5 +220,13 @@ export const CAUTION_CATALOGUE: Readonly<Record<MissionCautionId, CautionEntry>>
     defaultThreshold: null,
     unit: 'm/s',
     source: 'Mission input distanceBasis "stillAir": the range, set cruise distances and the alternate are still-air distances; the wind changes only the ground distance, not the fuel or the time',
+  },
+  cruise_climb_start_limited: {
+    id: 'cruise_climb_start_limited',
+    title: 'Cruise-climb starts below its optimum, held by a cruise limit',
+    severity: 'info',
+    defaultThreshold: null,
+    unit: 'm',
+    source: 'Caution settings: the residual climb rate (default 300 ft/min, common practice) and the buffet margin (default 1.3 g, common practice) at the start level',
   },
 };

@@ -7,10 +7,11 @@
  * better specific range at the current mass AND the climb rate at maxClimb
  * there (held Mach, energy share factor) is at least the residual climb rate
  * set in the caution settings; the step is flown as a held-Mach climb at
- * maxClimb. Cruise-climb: starts at the optimum altitude (maximum specific
- * range at the leg's speed rule) between the leg altitude and the maximum,
- * then holds that Mach and lift coefficient, so the altitude rises as mass
- * falls (pressure proportional to mass).
+ * maxClimb. Cruise-climb: climbs (maxClimb, held Mach) from the leg altitude
+ * to the best specific range among the levels within the cruise limits
+ * (residual climb rate, buffet margin) up to the maximum, then holds that Mach
+ * and lift coefficient, so the altitude rises as mass falls (pressure
+ * proportional to mass). Step climbs keep the same limits at the higher level.
  */
 import { goldenMaximum } from '../core/scalarMaximum';
 import { bestRangeMach, longRangeMach, specificRangeAt } from './bestSpeeds';
@@ -116,6 +117,57 @@ function failed(ctx: MissionContext, target: LegTarget, state: StateVector, run:
   return segmentStopFailure(state, run, `the cruise on ${target.legName}`, missionDomain(ctx, target), last);
 }
 
+/** Why a level lies outside the cruise limits: null when within them. */
+function cruiseLimitBroken(input: MissionInput, altitude_m: number, mach: number, mass_kg: number, isaDev_K: number): 'climb-rate limit' | 'buffet margin' | null {
+  const minRate = Math.max(input.cautionSettings.minResidualClimbRate_m_s, 1e-3);
+  if (!(heldMachClimbRate(input, altitude_m, mach, mass_kg, isaDev_K) >= minRate)) return 'climb-rate limit';
+  const at = airPoint(input, altitude_m, mach, mass_kg, isaDev_K);
+  return at.drag.buffetLoadFactor >= input.cautionSettings.minBuffetLoadFactor ? null : 'buffet margin';
+}
+
+/**
+ * Start level (m) of a cruise-climb at mass (kg): the best specific range between `floor_m` and `ceiling_m` among
+ * the levels within the cruise limits (maxClimb climb rate at the held Mach at least the residual climb rate of
+ * the caution settings, buffet load factor at least their minimum). The highest level within the limits is
+ * found by bisection to 1 m, the best SR below it by golden section; `limitedBy` names the limit that held the
+ * start below the unconstrained optimum (null when none did).
+ */
+export function cruiseClimbStart(
+  input: MissionInput,
+  speed: CruiseSpeed,
+  floor_m: number,
+  ceiling_m: number,
+  mass_kg: number,
+  isaDev_K: number,
+): { readonly altitude_m: number; readonly limitedBy: 'climb-rate limit' | 'buffet margin' | null } {
+  const broken = (h: number) => cruiseLimitBroken(input, h, cruiseMach(input, speed, h, mass_kg, isaDev_K), mass_kg, isaDev_K);
+  const sr = (h: number) => specificRangeAt(input, h, cruiseMach(input, speed, h, mass_kg, isaDev_K), mass_kg, isaDev_K);
+  if (ceiling_m - floor_m < 1) return { altitude_m: floor_m, limitedBy: null };
+  const atTop = broken(ceiling_m);
+  let top = ceiling_m;
+  let limit: 'climb-rate limit' | 'buffet margin' | null = null;
+  if (atTop !== null) {
+    const atFloor = broken(floor_m);
+    if (atFloor !== null) return { altitude_m: floor_m, limitedBy: atFloor };
+    let lo = floor_m;
+    let hi = ceiling_m;
+    limit = atTop;
+    for (let i = 0; i < 60 && hi - lo > 1; i++) {
+      const mid = 0.5 * (lo + hi);
+      const why = broken(mid);
+      if (why === null) lo = mid;
+      else {
+        hi = mid;
+        limit = why;
+      }
+    }
+    top = lo;
+  }
+  const best = goldenMaximum(sr, floor_m, top, 1);
+  const unconstrained = top < ceiling_m ? goldenMaximum(sr, floor_m, ceiling_m, 1) : best;
+  return { altitude_m: best, limitedBy: limit !== null && unconstrained > top + 1 ? limit : null };
+}
+
 /**
  * Sets the distance in basis `k` to its exact end value and moves the other distance by the same amount (both
  * to the value when they are equal, as in still air, so a windless flight is the same whichever the basis).
@@ -142,17 +194,50 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
   const profile = spec.profile;
 
   if (profile.kind === 'cruiseClimb') {
-    // Optimum altitude and Mach at the start mass, then constant Mach and constant CL: p(h) = p(h0) m / m0,
-    // the classic cruise-climb that stays at the optimum while specific range depends on W/delta only
-    // (common practice; Anderson, Aircraft Performance and Design, section 5.13).
-    const floor = spec.altitude_m;
+    // Start at the best specific range among the levels within the cruise limits (maxClimb climb rate at the
+    // residual rate, buffet margin) between the leg altitude and the cap, climbing there at maxClimb and the
+    // held Mach; then constant Mach and constant CL: p(h) = p(h0) m / m0, the classic cruise-climb that stays at
+    // the optimum while specific range depends on W/delta only (common practice; Anderson, Aircraft Performance
+    // and Design, section 5.13).
+    const floor = Math.max(spec.altitude_m, Math.min(start[S_ALT], profile.maxAltitude_m));
     const ceiling = Math.max(profile.maxAltitude_m, floor);
+    const begin = cruiseClimbStart(input, spec.speed, floor, ceiling, state[S_MASS], dev);
+    const h0 = begin.altitude_m;
+    const mach = cruiseMach(input, spec.speed, h0, state[S_MASS], dev);
+    state[S_ALT] = floor;
+    if (h0 > state[S_ALT] + 1) {
+      const climbSegment = makeClimbSegment(ctx, target, 'mach', mach, h0, 'maxClimb');
+      const legEnd: SegmentEvent = { stop: 'distance_reached', stateOnly: true, g: (y) => y[k] - endAt(y[S_MASS]) };
+      const climb = flySegment(ctx, target, { ...climbSegment, events: [...climbSegment.events, legEnd] }, state);
+      state = climb.end;
+      last = climb.endSample;
+      state[S_TAS] = last.tas_m_s;
+      if (climb.stop === 'distance_reached') {
+        setEndDistance(state, k, endAt(state[S_MASS]));
+        return legOk(state, last);
+      }
+      if (climb.stop !== 'altitude_reached') {
+        return climb.stop !== 'climb_stalled'
+          ? failed(ctx, target, state, climb, last)
+          : legFailed(state, 'climb_not_reached', msg`The climb to the cruise-climb start on ${target.legName} stalled at ${q(state[S_ALT], 'altitude')}.`, last);
+      }
+    }
+    state[S_ALT] = h0;
+    if (begin.limitedBy !== null) {
+      appendCaution(
+        ctx.log,
+        target,
+        {
+          id: 'cruise_climb_start_limited',
+          severity: CAUTION_CATALOGUE.cruise_climb_start_limited.severity,
+          ...withParts(msg`The cruise-climb on ${target.legName} starts at ${q(h0, 'altitude')}, held below its optimum by the ${begin.limitedBy}.`),
+          value: h0,
+          threshold: ceiling,
+        },
+        state[0],
+      );
+    }
     const m0 = state[S_MASS];
-    const h0 =
-      ceiling - floor < 1
-        ? floor
-        : goldenMaximum((h) => specificRangeAt(input, h, cruiseMach(input, spec.speed, h, m0, dev), m0, dev), floor, ceiling, 1);
-    const mach = cruiseMach(input, spec.speed, h0, m0, dev);
     const p0 = missionAir(h0, 0).pressure_Pa;
     const pCeiling = missionAir(ceiling, 0).pressure_Pa;
     const pFloor = missionAir(floor, 0).pressure_Pa;
@@ -207,6 +292,7 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
       const up = h + profile.step_m;
       const machUpOf = cruiseMachOfMass(input, spec.speed, up, state[S_MASS], dev);
       const minRate = Math.max(ctx.input.cautionSettings.minResidualClimbRate_m_s, 1e-3);
+      const minBuffet = Math.max(ctx.input.cautionSettings.minBuffetLoadFactor, 1);
       extra.push({
         stop: 'step_climb_due',
         // When to step is a decision, not a state to hit: located to a second, not to 1e-7 s (STEP_DECISION_S).
@@ -220,7 +306,10 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
           const srUp = specificRangeAt(input, up, machUp, m, dev);
           const gain = srNow > 0 ? (srUp - srNow) / srNow : srUp > 0 ? 1 : -1;
           const rateMargin = (heldMachClimbRate(input, up, machUp, m, dev) - minRate) / minRate;
-          return Math.min(gain, rateMargin);
+          // The higher level must keep the buffet margin too (the cruise limits of cruiseLimitBroken).
+          const buffet = airPoint(input, up, machUp, m, dev).drag.buffetLoadFactor;
+          const buffetMargin = (buffet - minBuffet) / minBuffet;
+          return Math.min(gain, rateMargin, buffetMargin);
         },
       });
     }

@@ -16,7 +16,7 @@ import { S_AIR, S_ALT, S_GROUND, S_MASS, S_TIME, STATE_SIZE, type StateVector } 
 import { appendCaution } from './timeHistoryBuilder';
 import { checkResidualClimb } from '../cautions/checks';
 import { CAUTION_CATALOGUE } from '../cautions/cautionCatalogue';
-import { msg, q, withParts, type MessageParts } from '../units/messageParts';
+import { msg, partsOf, q, withParts, type MessageParts } from '../units/messageParts';
 
 export interface TripOutcome {
   readonly status: MissionStatus;
@@ -187,7 +187,10 @@ export function flyTrip(ctx: MissionContext, rampMass_kg: number, solvedDistance
     }
     if (i === last) landing = Float64Array.from(state);
     if (out.status !== 'ok') {
-      return { status: out.status, message: out.message, ...(out.parts ? { parts: out.parts } : {}), rows, end: state, takeoff, landing: state, solvableDistance_m, afterSolvable_m: 0, solvableEndMass_kg, solvableFuel_kg };
+      // A failed mission always names the leg, the time and the cause.
+      const where = msg` (leg ${i + 1} "${ctx.input.legs[i].name}", ${q(state[S_TIME], 'time')} after block-out)`;
+      const told = withParts([...partsOf(out), ...where]);
+      return { status: out.status, ...told, rows, end: state, takeoff, landing: state, solvableDistance_m, afterSolvable_m: 0, solvableEndMass_kg, solvableFuel_kg };
     }
   }
   if (last < first) landing = Float64Array.from(state);

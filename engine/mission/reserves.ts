@@ -228,7 +228,7 @@ export function flyReserves(ctx: MissionContext, trip: TripSummary): ReserveFlig
     });
     if (out.status !== 'ok') {
       status = out.status;
-      parts = [`Reserve ${name}: `, ...partsOf(out)];
+      parts = [`Reserve ${name}: `, ...partsOf(out), ...msg` (${q(out.state[S_TIME] - start[S_TIME], 'time')} into the item)`];
       message = messageText(parts, 'both');
       return null;
     }

@@ -132,10 +132,16 @@ function missionStatus(outcome: IterationOutcome | null, final: MissionEvaluatio
   if (outcome?.kind === 'flightFailed') {
     return {
       status: 'did_not_converge',
-      parts: msg`The iteration stopped on a failed flight after ${outcome.iterations} passes; residual ${q(outcome.residual_kg, 'mass')}.`,
+      parts: msg`The fuel iteration stopped on pass ${outcome.iterations}, whose flight failed (ramp mass ${q(outcome.rampMass_kg, 'mass')}): ${failedPassCause(outcome.failure)}`,
     };
   }
   return { status: 'ok', parts: [] };
+}
+
+/** Why a pass of the iteration failed: its trip's or its reserves' message (naming the leg, the time and the cause). */
+function failedPassCause(failure: MissionEvaluation): MessageParts {
+  if (failure.trip.status !== 'ok') return [`${failure.trip.status}: `, ...partsOf(failure.trip)];
+  return [`${failure.reserves.status}: `, ...partsOf(failure.reserves)];
 }
 
 /** Relative excess (-) over a hard limit that still counts as at the limit (rounding of a flight flown to it). */
