@@ -14,6 +14,7 @@ export interface MissionJsonContext {
   readonly parametricDeck: boolean;
   /** How recovery, bleed and extraction were applied to the deck. */
   readonly installationMethod: InstallationMethodId;
+  readonly assumptions?: readonly string[];
 }
 
 /** A plain object ready for JSON.stringify (no typed arrays, no NaN: non-finite numbers become null). */
@@ -23,6 +24,7 @@ export function missionJson(result: MissionResult, context: MissionJsonContext) 
   return {
     project: context.projectName,
     inlet: context.inletName,
+    ...(context.assumptions === undefined ? {} : { assumptions: context.assumptions }),
     deck: { title: context.deckTitle, parametric: context.parametricDeck },
     installationMethod: context.installationMethod,
     status: r.status,

@@ -15,6 +15,8 @@ export interface MissionSummaryContext {
   readonly inletName: string;
   readonly deckTitle: string;
   readonly installationMethod: InstallationMethodId;
+  /** The installation assumptions the figures rest on (engine/project/installationAssumptions.ts), one line each. */
+  readonly assumptions?: readonly string[];
 }
 
 function both(value_si: number, kind: DisplayKind, customaryDigits?: number, siDigits?: number): [string, string] {
@@ -60,6 +62,11 @@ export function distanceBasisText(basis: MissionResult['distanceBasis']): string
   return basis === 'ground'
     ? 'over the ground: the range and set distances are ground distances; the wind changes the air distance, fuel and time'
     : 'still air (design-range study): the range and set distances are still-air distances; the wind changes only the ground distance';
+}
+
+/** A blank line, "Installation assumptions:" and one indented line each; nothing when there are none. */
+export function assumptionLines(assumptions: readonly string[]): string[] {
+  return assumptions.length === 0 ? [] : ['', 'Installation assumptions:', ...assumptions.map((a) => `  ${a}`)];
 }
 
 /** The whole text report of `blockwise fly`. */
@@ -120,5 +127,6 @@ export function missionSummaryText(result: MissionResult, context: MissionSummar
     '',
     `Cautions (${r.cautions.length}):`,
     ...cautions,
+    ...assumptionLines(context.assumptions ?? []),
   ]);
 }

@@ -5,6 +5,8 @@ import { formatQuantity } from '../../engine/units/displayUnits';
 import { checkInletName, loadVerbProject, projectArgument } from '../common/projectArgs';
 import { analysisFailed, printJsonReport, printReport } from '../common/report';
 import { formatTable } from '../format/textTable';
+import { assumptionLines } from '../format/missionSummaryText';
+import { installationAssumptions } from '../../engine/project/installationAssumptions';
 import { formatLoadFailure } from '../projectFiles';
 import { optionalString, UsageError, type CliIo, type Verb } from '../verb';
 import { bothUnits, JSON_OPTION, machText } from './analysisArgs';
@@ -82,9 +84,10 @@ analysis failed.
     if (!r.ok) return analysisFailed(io, 'compare', r.error.message);
     const v = r.value;
     const uncertain = { project, resources: { deck }, designs: names, ...size };
+    const assumptions = installationAssumptions(project).map((a) => a.text);
     if (values.json === true) {
-      if (withUncertainty) return printUncertainty(io, 'compare', uncertain, true, [], { installationMethod: pair.value.inputB.propulsion.installationMethod, ...v });
-      printJsonReport(io, { installationMethod: pair.value.inputB.propulsion.installationMethod, ...v });
+      if (withUncertainty) return printUncertainty(io, 'compare', uncertain, true, [], { installationMethod: pair.value.inputB.propulsion.installationMethod, ...v, assumptions });
+      printJsonReport(io, { installationMethod: pair.value.inputB.propulsion.installationMethod, ...v, assumptions });
       return 0;
     }
     const [a, b] = v.designs;
@@ -129,6 +132,7 @@ analysis failed.
         [...v.breakdown.parts.map((p) => [p.factor, signed(p.blockFuel_kg, 2)]), ['sum of parts', signed(v.breakdown.sumOfParts_kg, 2)]],
       ),
       `  ${v.breakdown.description}`,
+      ...assumptionLines(assumptions),
     ];
     if (withUncertainty) return printUncertainty(io, 'compare', uncertain, false, [...lines, '']);
     printReport(io, lines);

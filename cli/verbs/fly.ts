@@ -1,3 +1,4 @@
+import { installationAssumptions } from '../../engine/project/installationAssumptions';
 import { writeFile } from 'node:fs/promises';
 import { resolve } from 'node:path';
 import { solveMission } from '../../engine/mission/solveMission';
@@ -49,6 +50,7 @@ error. The result is printed whatever the status.
       deckTitle: input.propulsion.label,
       parametricDeck: input.propulsion.parametric,
       installationMethod: input.propulsion.installationMethod,
+      assumptions: installationAssumptions(project).map((a) => a.text),
     };
 
     if (csvOption !== undefined) {

@@ -2,6 +2,8 @@ import { tradeFactors } from '../../engine/analysis/tradeFactors';
 import { installationOf } from '../../engine/project/projectSpecs';
 import { analysisFailed, printJsonReport, printReport } from '../common/report';
 import { formatTable } from '../format/textTable';
+import { assumptionLines } from '../format/missionSummaryText';
+import { installationAssumptions } from '../../engine/project/installationAssumptions';
 import type { CliIo, Verb } from '../verb';
 import { INLET_OPTION, JSON_OPTION, openAnalysisProject } from './analysisArgs';
 import { verbSummary } from './catalogue';
@@ -35,7 +37,7 @@ unreadable; 2 bad command line; 3 the design mission failed.
     if (!r.ok) return analysisFailed(io, 'trade', r.error.message);
     const v = r.value;
     if (values.json === true) {
-      printJsonReport(io, { inlet: input.propulsion.inletName, installationMethod: input.propulsion.installationMethod, ...v });
+      printJsonReport(io, { inlet: input.propulsion.inletName, installationMethod: input.propulsion.installationMethod, ...v, assumptions: installationAssumptions(project).map((a) => a.text) });
       return 0;
     }
     const kg = (x: number | null) => (x === null ? '-' : `${x >= 0 ? '+' : ''}${x.toFixed(2)}`);
@@ -54,6 +56,7 @@ unreadable; 2 bad command line; 3 the design mission failed.
       ...v.factors.filter((f) => f.note !== null).map((f) => `  ${f.name}: ${f.note}`),
       `  Steps agree when |d(1) - d(1/2)| <= ${v.tolerance.rel * 100} % of d(1/2) + ${v.tolerance.abs_kg} kg. ${v.missions} missions flown.`,
       `  ${v.recoveryMethod}`,
+      ...assumptionLines(installationAssumptions(project).map((a) => a.text)),
     ]);
     return 0;
   },

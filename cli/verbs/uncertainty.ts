@@ -3,6 +3,8 @@ import { MAX_UNCERTAINTY_SAMPLES } from '../../engine/project/uncertaintySchema'
 import { checkInletName, loadVerbProject, projectArgument } from '../common/projectArgs';
 import { analysisFailed, printJsonReport, printReport } from '../common/report';
 import { uncertaintyLines } from '../format/uncertaintyText';
+import { assumptionLines } from '../format/missionSummaryText';
+import { installationAssumptions } from '../../engine/project/installationAssumptions';
 import { optionalString, UsageError, type CliIo, type Verb } from '../verb';
 import { JSON_OPTION } from './analysisArgs';
 import { verbSummary } from './catalogue';
@@ -35,6 +37,7 @@ export function printUncertainty(
   asJson: boolean,
   extraLines: readonly string[] = [],
   extraJson: Readonly<Record<string, unknown>> = {},
+  trailingLines: readonly string[] = [],
 ): number {
   const start = performance.now();
   const r = runUncertainty(study);
@@ -44,7 +47,7 @@ export function printUncertainty(
     printJsonReport(io, { ...extraJson, uncertainty: { ...r.value, elapsed_s } });
     return 0;
   }
-  printReport(io, [...extraLines, ...uncertaintyLines(r.value, elapsed_s)]);
+  printReport(io, [...extraLines, ...uncertaintyLines(r.value, elapsed_s), ...trailingLines]);
   return 0;
 }
 
@@ -95,6 +98,7 @@ command line; 3 the project's own mission failed or too few samples flew.
     const { project, deck } = loaded;
     if (names === null) names = project.inlets.slice(0, 2).map((i) => i.name);
     for (const n of names.slice(1)) checkInletName(project, n, '--inlets', file);
-    return printUncertainty(io, 'uncertainty', { project, resources: { deck }, designs: names, ...size }, values.json === true);
+    const assumptions = installationAssumptions(project).map((a) => a.text);
+    return printUncertainty(io, 'uncertainty', { project, resources: { deck }, designs: names, ...size }, values.json === true, [], { assumptions }, assumptionLines(assumptions));
   },
 };

@@ -20,6 +20,8 @@ export interface CautionSettings {
   /** Fan-face Mach band (-); about 0.4 to 0.6 common practice. */
   readonly minFanFaceMach: number;
   readonly maxFanFaceMach: number;
+  /** Largest spillage drag as a share of the engine's thrust (-); 5 % by default. */
+  readonly maxSpillageShare: number;
 }
 
 export const DEFAULT_CAUTION_SETTINGS: CautionSettings = {
@@ -32,6 +34,7 @@ export const DEFAULT_CAUTION_SETTINGS: CautionSettings = {
   maxThroatMach: 0.8,
   minFanFaceMach: 0.4,
   maxFanFaceMach: 0.6,
+  maxSpillageShare: 0.05,
 };
 
 /**

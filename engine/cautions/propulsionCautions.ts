@@ -13,7 +13,9 @@ export type PropulsionCautionId =
   | 'inlet_recovery_table_range'
   | 'inlet_throat_choked'
   | 'fan_face_mach_range'
-  | 'rating_not_in_deck';
+  | 'rating_not_in_deck'
+  | 'lip_suction_table_range'
+  | 'spillage_share_high';
 
 export type PropulsionCaution = Caution & { readonly id: PropulsionCautionId };
 
@@ -66,6 +68,32 @@ export function checkFanFaceMach(fanFaceMach: number | null, min: number, max: n
     message: `Fan-face Mach ${fixed(fanFaceMach, 3)} is outside the band ${fixed(min, 3)} to ${fixed(max, 3)}${fanFaceChoked ? ' (fan face choked)' : ''}.`,
     value: fanFaceMach,
     threshold: fanFaceMach < min ? min : max,
+  };
+}
+
+/** The lip-suction table was left (Mach or mass-flow ratio beyond its axes); its edge value (-) is held. */
+export function lipSuctionTableRangeCaution(heldFactor: number, massFlowRatio: number): PropulsionCaution {
+  return {
+    id: 'lip_suction_table_range',
+    severity: 'info',
+    message: `Flight Mach or mass-flow ratio ${fixed(massFlowRatio, 3)} is outside the lip-suction table; its edge value ${fixed(heldFactor, 3)} is held.`,
+    value: heldFactor,
+  };
+}
+
+/**
+ * Spillage drag above `maxShare` of the engine's corrected thrust (both N,
+ * per engine), where the engine makes positive net thrust; null otherwise.
+ */
+export function checkSpillageShare(spillage_N: number, correctedThrust_N: number, maxShare: number): PropulsionCaution | null {
+  if (!(correctedThrust_N > 0) || !(spillage_N > maxShare * correctedThrust_N) || !(correctedThrust_N - spillage_N > 0)) return null;
+  const share = spillage_N / correctedThrust_N;
+  return {
+    id: 'spillage_share_high',
+    severity: 'caution',
+    message: `Inlet spillage drag is ${fixed(100 * share, 1)} % of the engine's thrust, above ${fixed(100 * maxShare, 1)} %: the inlet is oversized for this airflow, or the lip-suction assumption carries the answer.`,
+    value: share,
+    threshold: maxShare,
   };
 }
 

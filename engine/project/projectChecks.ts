@@ -63,6 +63,10 @@ export function checkProject(project: Project, doc: unknown): ProjectIssue[] {
 
   const names = new Set<string>();
   project.inlets.forEach((inlet, i) => {
+    if (inlet.lipSuction !== undefined && inlet.lipSuctionFactor !== undefined) {
+      const p = `inlets[${i}].lipSuctionFactor`;
+      issues.push(makeIssue(p, raw(p), 'either lipSuctionFactor or lipSuction, not both', `${raw(p)}: the inlet also gives lipSuction; keep one (a constant factor, or the table)`));
+    }
     if (names.has(inlet.name)) {
       const p = `inlets[${i}].name`;
       issues.push(makeIssue(p, raw(p), 'a name no other inlet design has', `${raw(p)} is used by an earlier inlet design; names must be unique`));

@@ -155,6 +155,10 @@ export const deckSourceSchema = z.discriminatedUnion('kind', [
 ]);
 
 export const installationSchema = z.strictObject({
+  /** Fuel flow under Raymer's ram-recovery correction: held at the power setting (default) or scaled with recovery (corrected-flow engine). */
+  ramFuelFlow: z.enum(['heldAtPower', 'scaledWithRecovery']).optional(),
+  /** Raymer's supersonic form of C_ram above Mach 1 (C_ram - 0.15 (M - 1)); default true. */
+  ramSupersonicForm: z.boolean().optional(),
   /** Customer bleed per engine: a fraction of core flow, or a mass flow with the core's share of deck airflow. */
   bleed: z
     .discriminatedUnion('kind', [
@@ -177,6 +181,12 @@ export const installationSchema = z.strictObject({
 export const engineSchema = z.strictObject({
   count: z.number().int({ message: 'expected a whole number of engines' }).min(1).max(8),
   deck: deckSourceSchema,
+  /**
+   * What the deck is interpolated in: corrected parameters (F/delta,
+   * Wf/(delta sqrt(theta)), W sqrt(theta)/delta over pressure altitude and
+   * Mach; default) or the raw tabulated values (docs/deck-format.md).
+   */
+  deckInterpolation: z.enum(['corrected', 'raw']).optional(),
   installation: installationSchema.default({ bleed: { kind: 'coreFraction', fraction: 0 }, powerExtraction: 0 }),
 });
 
@@ -200,7 +210,21 @@ export const inletSchema = z.strictObject({
       diffuserLossCoefficient: nonNegativeQuantity('dimensionless', 'a number >= 0'),
     }),
   ]),
-  lipSuctionFactor: fraction('a fraction from 0 to 1').default(0),
+  /** One lip-suction fraction at every Mach and mass-flow ratio; give this or `lipSuction`, or neither for the rounded-pitot default. */
+  lipSuctionFactor: fraction('a fraction from 0 to 1').optional(),
+  /** Lip suction over flight Mach and mass-flow ratio (engine/propulsion/lipSuction.ts); absent with no factor: the rounded subsonic pitot lip. */
+  lipSuction: z
+    .discriminatedUnion('kind', [
+      z.strictObject({ kind: z.literal('roundedPitot') }),
+      z.strictObject({
+        kind: z.literal('table'),
+        mach: z.array(mach()).min(1),
+        massFlowRatio: z.array(quantity('dimensionless', { min: 0, max: 1.5, what: 'a mass-flow ratio from 0 to 1.5' })).min(1),
+        /** factor[i][j] at mach[i], massFlowRatio[j]. */
+        factor: z.array(z.array(fraction('a fraction from 0 to 1')).min(1)).min(1),
+      }),
+    ])
+    .optional(),
   /** External (nacelle/inlet) drag area D/q per engine. */
   externalDragArea: nonNegativeQuantity('area', 'an area >= 0'),
   /** Weight per engine, added to the operating empty weight. */
@@ -395,6 +419,8 @@ export const cautionsSchema = z.strictObject({
   maxThroatMach: fraction('a Mach number from 0 to 1').optional(),
   minFanFaceMach: fraction('a Mach number from 0 to 1').optional(),
   maxFanFaceMach: fraction('a Mach number from 0 to 1').optional(),
+  /** Largest spillage drag as a share of the engine's thrust before the caution spillage_share_high (default 5 %). */
+  maxSpillageShare: fraction('a share from 0 to 1').optional(),
 });
 
 // ---------------------------------------------------------------- project

@@ -7,6 +7,7 @@ import type { PolarSpec } from '../aero/polarSpec';
 import { DEFAULT_CAUTION_SETTINGS, type CautionSettings } from '../cautions/cautionSettings';
 import type { InletDesign } from '../propulsion/inletDesign';
 import type { InstallationSettings } from '../propulsion/installationCorrections';
+import { ROUNDED_PITOT_LIP_SUCTION, type LipSuction } from '../propulsion/lipSuction';
 import type { Project, ProjectInlet } from './projectSchema';
 
 /** The project's drag polar as a PolarSpec (SI). */
@@ -32,6 +33,17 @@ export function polarSpecOf(project: Project): PolarSpec {
   };
 }
 
+/**
+ * The inlet's lip suction: its table, its constant factor, or (neither given)
+ * the rounded subsonic pitot lip default (engine/propulsion/lipSuction.ts).
+ */
+export function lipSuctionOf(inlet: ProjectInlet): { readonly lipSuction?: LipSuction } {
+  const ls = inlet.lipSuction;
+  if (ls?.kind === 'table') return { lipSuction: { kind: 'table', mach: ls.mach, massFlowRatio: ls.massFlowRatio, factor: ls.factor } };
+  if (ls?.kind === 'roundedPitot' || inlet.lipSuctionFactor === undefined) return { lipSuction: ROUNDED_PITOT_LIP_SUCTION };
+  return {};
+}
+
 /** A project inlet as an InletDesign (SI). */
 export function inletDesignOf(inlet: ProjectInlet): InletDesign {
   const s = inlet.source;
@@ -48,7 +60,8 @@ export function inletDesignOf(inlet: ProjectInlet): InletDesign {
             fanFaceArea_m2: s.fanFaceArea,
             diffuserLossCoefficient: s.diffuserLossCoefficient,
           },
-    lipSuctionFactor: inlet.lipSuctionFactor,
+    lipSuctionFactor: inlet.lipSuctionFactor ?? 0,
+    ...lipSuctionOf(inlet),
     externalDragArea_m2: inlet.externalDragArea,
     weight_kg: inlet.weight,
   };
@@ -65,6 +78,9 @@ export function installationOf(project: Project): InstallationSettings {
     powerExtraction_W: i.powerExtraction,
     ...(i.ramRecoveryFactor === undefined ? {} : { cRam: i.ramRecoveryFactor }),
     ...(i.bleedFactor === undefined ? {} : { cBleed: i.bleedFactor }),
+    ...(i.ramFuelFlow === undefined ? {} : { ramFuelFlow: i.ramFuelFlow }),
+    ...(i.ramSupersonicForm === undefined ? {} : { cRamSupersonicForm: i.ramSupersonicForm }),
+    deckInterpolation: project.engine.deckInterpolation ?? 'corrected',
   };
 }
 
@@ -83,6 +99,7 @@ export function cautionSettingsOf(project: Project): CautionSettings {
     maxThroatMach: c.maxThroatMach ?? d.maxThroatMach,
     minFanFaceMach: c.minFanFaceMach ?? d.minFanFaceMach,
     maxFanFaceMach: c.maxFanFaceMach ?? d.maxFanFaceMach,
+    maxSpillageShare: c.maxSpillageShare ?? d.maxSpillageShare,
   };
 }
 

@@ -19,7 +19,10 @@ import {
   nextPowerBreakpoint,
   nodesPowerRangeInto,
 } from './deckGrid';
+import { queryCorrectionInto } from './deckCorrection';
 import { finishLookup, refusal, type DeckLookup, type DeckLookupError } from './deckLookup';
+
+const correction = new Float64Array(3);
 
 const scratch = createDeckNodeSet();
 const values = new Float64Array(DECK_VALUES_WITH_SENSITIVITIES);
@@ -37,9 +40,15 @@ const range = new Float64Array(2);
 export function powerForThrust(
   deck: EngineDeck,
   condition: FlightCondition,
-  thrust_N: number,
+  wantedThrust_N: number,
   ceilingPower?: number,
 ): Result<{ readonly limit: ThrustLimit; readonly lookup: DeckLookup }, DeckLookupError> {
+  // A corrected deck's grid holds F/delta: invert on the wanted thrust in the same terms.
+  let thrust_N = wantedThrust_N;
+  if (deck.interpolation === 'corrected' && Number.isFinite(wantedThrust_N) && Number.isFinite(condition.altitude_m) && Number.isFinite(condition.mach)) {
+    queryCorrectionInto(deck, condition.altitude_m, condition.mach, condition.isaDev_K, correction);
+    thrust_N = wantedThrust_N / correction[0]!;
+  }
   if (!Number.isFinite(thrust_N) || (ceilingPower !== undefined && !Number.isFinite(ceilingPower))) {
     throw new RangeError(`powerForThrust: non-finite thrust ${thrust_N} N or ceiling ${ceilingPower}`);
   }

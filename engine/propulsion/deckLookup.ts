@@ -22,6 +22,7 @@ import {
   nodesPowerRangeInto,
   type DeckNodeSet,
 } from './deckGrid';
+import { queryCorrectionInto } from './deckCorrection';
 import { temperatureApproximationCaution, temperatureFlowFactor } from './deckTemperature';
 import { readSensitivities, type InstallationSensitivities } from './installationSensitivities';
 
@@ -54,6 +55,7 @@ const NOTHING: readonly never[] = Object.freeze([]);
 const scratch = createDeckNodeSet();
 const values = new Float64Array(DECK_VALUES_WITH_SENSITIVITIES);
 const range = new Float64Array(2);
+const factors = new Float64Array(3);
 
 /**
  * Uninstalled thrust (N), fuel flow (kg/s) and airflow (kg/s) per engine at
@@ -90,6 +92,12 @@ export function finishLookup(
   s: DeckNodeSet,
   v: Float64Array,
 ): DeckLookup {
+  if (deck.interpolation === 'corrected') {
+    queryCorrectionInto(deck, condition.altitude_m, condition.mach, condition.isaDev_K, factors);
+    v[0] = v[0]! * factors[0]!;
+    v[1] = v[1]! * factors[1]!;
+    v[2] = v[2]! * factors[2]!;
+  }
   let fuelFlow = v[1]!;
   let airflow: number | null = deck.hasAirflow ? v[2]! : null;
   const approximateTemperature = !deck.hasIsaDev && condition.isaDev_K !== 0;

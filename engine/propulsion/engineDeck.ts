@@ -46,8 +46,10 @@ export interface EngineDeck {
   readonly hasSensitivities: boolean;
   readonly notes: readonly string[];
   readonly policy: DeckPolicy;
-  /** The tabulated points, ragged, in flat arrays (SI). */
+  /** The tabulated points, ragged, in flat arrays (SI); corrected parameters when `interpolation` is 'corrected' (deckCorrection.ts). */
   readonly grid: DeckGrid;
+  /** What `grid` holds and is interpolated in; absent = 'raw' (the file's values). */
+  readonly interpolation?: 'raw' | 'corrected';
 }
 
 /**

@@ -12,6 +12,8 @@ import { checkThroatMach } from '../cautions/checks';
 import { propulsionCautionShown, type CautionSettings } from '../cautions/cautionSettings';
 import {
   checkFanFaceMach,
+  checkSpillageShare,
+  lipSuctionTableRangeCaution,
   deckLookupFailedCaution,
   noAirflowCaution,
   recoveryTableRangeCaution,
@@ -21,6 +23,7 @@ import type { AccessError, DeckAccess } from './deckAccess';
 import { referenceRecoveryAt, type ReferenceRecovery } from './engineDeck';
 import { geometryInletFlow, streamTubeArea, type FreeStream } from './inletFlow';
 import { tableRecovery, type PreparedInlet } from './inletRecovery';
+import type { PreparedLipSuction } from './lipSuction';
 import { correctDeckPoint, type InstallationMethodId } from './installationMethod';
 import type { InstallationSensitivities } from './installationSensitivities';
 import type { InstallationSettings } from './installationCorrections';
@@ -38,6 +41,8 @@ export interface InstallationContext {
   /** Capture area (m^2) and lip-suction factor (-) of the design that sets spillage. */
   readonly spillCapture_m2: number;
   readonly spillLip: number;
+  /** The spillage design's lip suction over Mach and mass-flow ratio; null = the constant `spillLip`. */
+  readonly spillLipTable: PreparedLipSuction | null;
   readonly installation: InstallationSettings;
   readonly method: InstallationMethodId;
   /** Added to the inlet's recovery (-), e.g. +0.01 for a trade factor; 0 normally. */
@@ -45,6 +50,8 @@ export interface InstallationContext {
   readonly referenceRecovery: ReferenceRecovery;
   readonly cautionSettings: CautionSettings;
   readonly engineCount: number;
+  /** The deck's flight-idle power (-), null when it names none: no spillage-share caution at or below it. */
+  readonly idlePower: number | null;
 }
 
 /** Scratch of one engine evaluation (SI, per engine). Mutated only by the `...Into` functions below. */
@@ -62,7 +69,7 @@ export interface EngineScratch {
     sensitivities: InstallationSensitivities | null;
   };
   /** Inlet recovery pt2/pt0 (-) and the deck's reference recovery (-). */
-  readonly inlet: { recovery: number; referenceRecovery: number };
+  readonly inlet: { recovery: number; referenceRecovery: number; mach: number };
   massFlowRatio: number | null;
   throatMach: number | null;
   fanFaceMach: number | null;
@@ -78,6 +85,9 @@ export interface EngineScratch {
   bleedLoss_N: number;
   extractionLoss_N: number;
   spillage_N: number;
+  /** Lip suction used (-) and whether its table was left (edge held). */
+  lipSuction: number;
+  lipTableOutside: boolean;
   deckError: AccessError | null;
   outside: readonly DeckAxis[];
   deckCautions: readonly Caution[];
@@ -86,7 +96,7 @@ export interface EngineScratch {
 export function newEngineScratch(): EngineScratch {
   return {
     deck: { thrust_N: 0, fuelFlow_kg_s: 0, airflow_kg_s: null, deckAirflow_kg_s: null, sensitivities: null },
-    inlet: { recovery: 1, referenceRecovery: 1 },
+    inlet: { recovery: 1, referenceRecovery: 1, mach: 0 },
     massFlowRatio: null,
     throatMach: null,
     fanFaceMach: null,
@@ -100,6 +110,8 @@ export function newEngineScratch(): EngineScratch {
     bleedLoss_N: 0,
     extractionLoss_N: 0,
     spillage_N: 0,
+    lipSuction: 0,
+    lipTableOutside: false,
     deckError: null,
     outside: NO_AXES,
     deckCautions: NO_CAUTIONS,
@@ -132,9 +144,12 @@ export function installDeckPointInto(
   s.fanFaceChoked = false;
   s.tableOutside = null;
   s.spillage_N = 0;
+  s.lipSuction = ctx.spillLip;
+  s.lipTableOutside = false;
   const inlet = s.inlet;
   const deck = s.deck;
   inlet.referenceRecovery = referenceRecoveryAt(ctx.referenceRecovery, mach);
+  inlet.mach = mach;
   deck.thrust_N = deckThrust_N;
   deck.fuelFlow_kg_s = deckFuelFlow_kg_s;
   deck.deckAirflow_kg_s = deckAirflow_kg_s;
@@ -175,7 +190,13 @@ export function installDeckPointInto(
     const a0 = streamTubeArea(s.airflow_kg_s, free);
     s.massFlowRatio = Number.isFinite(a0) ? a0 / ctx.spillCapture_m2 : null;
     if (s.massFlowRatio !== null) {
-      s.spillage_N = spillageDrag(additiveDrag(mach, free.pressure_Pa, s.massFlowRatio, ctx.spillCapture_m2).drag_N, ctx.spillLip);
+      const add_N = additiveDrag(mach, free.pressure_Pa, s.massFlowRatio, ctx.spillCapture_m2).drag_N;
+      if (ctx.spillLipTable !== null && add_N > 0) {
+        const lip = ctx.spillLipTable.at(mach, s.massFlowRatio);
+        s.lipSuction = lip.factor;
+        s.lipTableOutside = lip.outside;
+      }
+      s.spillage_N = spillageDrag(add_N, s.lipSuction);
     }
   }
 }
@@ -236,6 +257,7 @@ export function engineCautions(s: EngineScratch, ctx: InstallationContext, extra
   if (s.throatChoked) (list ??= []).push(throatChokedCaution(design.name));
   const fanFace = checkFanFaceMach(s.fanFaceMach, settings.minFanFaceMach, settings.maxFanFaceMach, s.fanFaceChoked);
   if (fanFace !== null) (list ??= []).push(fanFace);
+  if (s.lipTableOutside) (list ??= []).push(lipSuctionTableRangeCaution(s.lipSuction, s.massFlowRatio ?? 0));
   return list ?? extra;
 }
 
@@ -245,10 +267,14 @@ export function assembleInstalledPoint(
   ctx: InstallationContext,
   condition: FlightCondition,
   power: number,
-  extra: readonly Caution[],
+  extraCautions: readonly Caution[],
 ): InstalledPoint {
+  let extra = extraCautions;
   const perEngineThrust_N = netThrustOf(s);
   const thrust_N = perEngineThrust_N * ctx.engineCount;
+  // Spillage share: only where thrust is asked for (above flight idle), not in idle descents where the idling engine spills most of its stream tube.
+  const spill = ctx.idlePower !== null && power <= ctx.idlePower ? null : checkSpillageShare(s.spillage_N, s.correctedThrust_N, ctx.cautionSettings.maxSpillageShare);
+  if (spill !== null) extra = extra.length === 0 ? [spill] : [...extra, spill];
   const fuelFlow_kg_s = s.fuelFlow_kg_s * ctx.engineCount;
   return {
     altitude_m: condition.altitude_m,

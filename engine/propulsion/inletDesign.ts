@@ -5,6 +5,8 @@
  * increments it brings (external drag area, weight). See docs/installation.md.
  */
 
+import { prepareLipSuction, type LipSuction } from './lipSuction';
+
 /** Recovery tabulated against flight Mach (linear interpolation, end values held with a caution). */
 export interface RecoveryTableSource {
   readonly kind: 'recoveryTable';
@@ -35,8 +37,10 @@ export interface InletDesign {
   readonly name: string;
   readonly description: string;
   readonly source: InletSource;
-  /** Fraction of the additive drag recovered by lip suction (-), 0..1. */
+  /** Fraction of the additive drag recovered by lip suction (-), 0..1; used when `lipSuction` is absent. */
   readonly lipSuctionFactor: number;
+  /** Lip suction over flight Mach and mass-flow ratio (lipSuction.ts); when present it replaces `lipSuctionFactor`. */
+  readonly lipSuction?: LipSuction;
   /** Nacelle/inlet external drag as D/q per engine (m^2); an airframe increment. */
   readonly externalDragArea_m2: number;
   /** Inlet/nacelle weight per engine (kg), added to the operating empty mass. */
@@ -83,6 +87,10 @@ export function validateInletDesign(design: InletDesign): readonly InletDesignIs
     if (design.lipSuctionFactor < 0 || design.lipSuctionFactor > 1) {
       issues.push({ path: 'lipSuctionFactor', message: `lipSuctionFactor is ${design.lipSuctionFactor}, expected a fraction 0..1` });
     }
+  }
+  if (design.lipSuction !== undefined) {
+    const lip = prepareLipSuction(design.lipSuction);
+    if (!lip.ok) for (const i of lip.error) issues.push({ path: `lipSuction.${i.path}`, message: i.message });
   }
   nonNegative(issues, 'externalDragArea_m2', design.externalDragArea_m2, 'm^2');
   nonNegative(issues, 'weight_kg', design.weight_kg, 'kg');

@@ -19,6 +19,18 @@ export interface InstallationSettings {
   readonly powerExtraction_W: number;
   /** Ram-recovery correction coefficient C_ram (-); 1.35 subsonic (Raymer). */
   readonly cRam?: number;
+  /** Above Mach 1, C_ram falls as Raymer's supersonic form C_ram - 0.15 (M - 1) (default true); false holds C_ram. */
+  readonly cRamSupersonicForm?: boolean;
+  /**
+   * Fuel flow under the ram-recovery correction: 'heldAtPower' (the deck's
+   * fuel flow at the power setting, Raymer's bookkeeping; default) or
+   * 'scaledWithRecovery' (x eta/eta_ref, as an engine holding corrected fuel
+   * flow Wf/(delta2 sqrt(theta2)) at the setting would: delta2 scales with
+   * recovery).
+   */
+  readonly ramFuelFlow?: RamFuelFlowConvention;
+  /** What the deck is interpolated in (deckCorrection.ts); absent = 'raw' here (a project's default is 'corrected'). */
+  readonly deckInterpolation?: 'raw' | 'corrected';
   /** Bleed correction coefficient C_bleed (-); 2.0 (Raymer). */
   readonly cBleed?: number;
   /** Fuel-flow increase per unit bleed fraction (-); 0 = fuel flow held at the power setting. */
@@ -28,6 +40,8 @@ export interface InstallationSettings {
   /** Fuel flow added per watt extracted (kg/s/W); default 1/(0.35 x 43 MJ/kg). */
   readonly powerExtractionFuel_kg_s_W?: number;
 }
+
+export type RamFuelFlowConvention = 'heldAtPower' | 'scaledWithRecovery';
 
 /** C_ram default (-): Raymer's subsonic value (from memory). */
 export const DEFAULT_C_RAM = 1.35;
@@ -48,6 +62,17 @@ export const DEFAULT_POWER_EXTRACTION_FUEL_kg_s_W = 1 / (0.35 * 43e6);
  */
 export function ramRecoveryThrustLoss(referenceRecovery: number, recovery: number, cRam: number = DEFAULT_C_RAM): number {
   return cRam * (referenceRecovery - recovery);
+}
+
+/**
+ * C_ram (-) at flight Mach `mach`: the subsonic value `cRam` up to Mach 1,
+ * and above it Raymer's supersonic form cRam - 0.15 (M - 1) (Raymer,
+ * Aircraft Design: A Conceptual Approach, installed thrust; from memory),
+ * not below 0; `supersonicForm` false holds cRam at every Mach.
+ */
+export function ramRecoveryCoefficient(cRam: number, mach: number, supersonicForm = true): number {
+  if (!supersonicForm || !(mach > 1)) return cRam;
+  return Math.max(0, cRam - 0.15 * (mach - 1));
 }
 
 /**
@@ -80,9 +105,11 @@ export interface CorrectedEngine {
 /**
  * Applies the corrections to one engine's deck point: thrust
  * T = T_deck (1 - ramLoss - bleedLoss) - k_T P, fuel flow
- * W_f = W_f,deck (1 + k_b f_bleed) + k_f P (losses added as Raymer adds
- * the percentages; at a fixed power setting the deck fuel flow is kept, so
- * TSFC rises by the thrust loss). Inputs in N, kg/s, W; recoveries (-).
+ * W_f = W_f,deck (1 + k_b f_bleed) [x eta/eta_ref] + k_f P (losses added as
+ * Raymer adds the percentages; at a fixed power setting the deck fuel flow is
+ * kept, so TSFC rises by the thrust loss; with ramFuelFlow
+ * 'scaledWithRecovery' it scales with recovery). C_ram at flight Mach `mach`
+ * (ramRecoveryCoefficient). Inputs in N, kg/s, W; recoveries (-).
  */
 export function applyInstallationCorrections(
   deckThrust_N: number,
@@ -91,15 +118,19 @@ export function applyInstallationCorrections(
   recovery: number,
   bleedFractionOfCore: number,
   settings: InstallationSettings,
+  mach = 0,
 ): CorrectedEngine {
-  const ramLoss = ramRecoveryThrustLoss(referenceRecovery, recovery, settings.cRam ?? DEFAULT_C_RAM);
+  const cRam = ramRecoveryCoefficient(settings.cRam ?? DEFAULT_C_RAM, mach, settings.cRamSupersonicForm ?? true);
+  const ramLoss = ramRecoveryThrustLoss(referenceRecovery, recovery, cRam);
   const bleedLoss = bleedThrustLoss(bleedFractionOfCore, settings.cBleed ?? DEFAULT_C_BLEED);
   const power = settings.powerExtraction_W;
   const extractionThrust_N = power * (settings.powerExtractionThrust_N_W ?? 0);
   const extractionFuel_kg_s = power * (settings.powerExtractionFuel_kg_s_W ?? DEFAULT_POWER_EXTRACTION_FUEL_kg_s_W);
   return {
     thrust_N: deckThrust_N * (1 - ramLoss - bleedLoss) - extractionThrust_N,
-    fuelFlow_kg_s: deckFuelFlow_kg_s * (1 + (settings.bleedFuelFlowFactor ?? 0) * bleedFractionOfCore) + extractionFuel_kg_s,
+    fuelFlow_kg_s:
+      deckFuelFlow_kg_s * (1 + (settings.bleedFuelFlowFactor ?? 0) * bleedFractionOfCore) * (settings.ramFuelFlow === 'scaledWithRecovery' ? recovery / referenceRecovery : 1) +
+      extractionFuel_kg_s,
     ramLoss,
     bleedLoss,
     extractionThrust_N,

@@ -58,6 +58,8 @@ export interface DeckPointValues {
 export interface InletRecoveryValues {
   readonly recovery: number;
   readonly referenceRecovery: number;
+  /** Flight Mach (-), for Raymer's supersonic C_ram; 0 when absent. */
+  readonly mach?: number;
 }
 
 /** One engine after the step, before spillage drag. */
@@ -97,6 +99,7 @@ export function correctDeckPoint(
         inlet.recovery,
         bleedFraction(installation.bleed, deck.airflow_kg_s),
         installation,
+        inlet.mach ?? 0,
       );
       return {
         thrust_N: corrected.thrust_N,

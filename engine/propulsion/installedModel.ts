@@ -19,6 +19,8 @@ import {
   NO_CAUTIONS,
   type InstallationContext,
 } from './engineEvaluation';
+import { expectOk } from '../core/result';
+import { prepareLipSuction } from './lipSuction';
 import type { InletDesign } from './inletDesign';
 import type { FreeStream } from './inletFlow';
 import { prepareInlet, type PreparedInlet } from './inletRecovery';
@@ -85,12 +87,14 @@ function installationContext(access: DeckAccess, options: InstalledModelOptions)
     recoveryInlet,
     spillCapture_m2: spillageInlet.design.source.captureArea_m2,
     spillLip: spillageInlet.design.lipSuctionFactor,
+    spillLipTable: spillageInlet.design.lipSuction === undefined ? null : expectOk(prepareLipSuction(spillageInlet.design.lipSuction), 'lip suction (validated with the design)'),
     installation: options.installation,
     method,
     recoveryOffset,
     referenceRecovery: access.referenceRecovery,
     cautionSettings: options.cautionSettings,
     engineCount,
+    idlePower: access.ratingPower('flightIdle'),
   };
 }
 

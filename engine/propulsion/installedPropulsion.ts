@@ -8,6 +8,7 @@ import type { CautionSettings } from '../cautions/cautionSettings';
 import { createDeckNodeSet, DECK_VALUES_WITH_SENSITIVITIES, evaluateDeckNodesInto, fillDeckNodes } from './deckGrid';
 import { powerForThrust } from './deckInversion';
 import { lookupDeck, powerBounds, ratingPower } from './deckLookup';
+import { deckForInterpolation, queryCorrectionInto } from './deckCorrection';
 import { temperatureFlowFactor } from './deckTemperature';
 import type { EngineDeck } from './engineDeck';
 import type { InletDesign } from './inletDesign';
@@ -97,15 +98,23 @@ export function deckCurve(deck: EngineDeck): {
   const sensitivities = emptySensitivities();
   let filled = false;
   let airflowFactor = 1;
+  let thrustFactor = 1;
+  const factors = new Float64Array(3);
   return {
     prepare(condition) {
       filled = fillDeckNodes(deck.grid, deck.policy, condition.isaDev_K, condition.altitude_m, condition.mach, nodes);
       airflowFactor = !deck.hasIsaDev && condition.isaDev_K !== 0 ? 1 / temperatureFlowFactor(condition.altitude_m, condition.isaDev_K) : 1;
+      thrustFactor = 1;
+      if (deck.interpolation === 'corrected') {
+        queryCorrectionInto(deck, condition.altitude_m, condition.mach, condition.isaDev_K, factors);
+        thrustFactor = factors[0]!;
+        airflowFactor *= factors[2]!;
+      }
     },
     evaluate(power, out) {
       if (!filled || !evaluateDeckNodesInto(deck.grid, nodes, power, deck.policy.power, values)) return false;
       // Floored at zero as lookupDeck floors them (the point finally evaluated carries its caution).
-      out[0] = Math.max(values[0]!, 0);
+      out[0] = Math.max(values[0]! * thrustFactor, 0);
       out[1] = deck.hasAirflow ? Math.max(values[2]! * airflowFactor, 0) : Number.NaN;
       if (deck.hasSensitivities) writeSensitivities(readSensitivitiesInto(values, 3, deck.hasAirflow, 1 / airflowFactor, sensitivities), out, 2);
       return true;
@@ -123,5 +132,5 @@ export function deckCurve(deck: EngineDeck): {
  * spillage). Invalid designs or settings throw (validate them first).
  */
 export function makeInstalledPropulsion(options: InstalledPropulsionOptions): PropulsionModel {
-  return makeInstalledModel(deckAccess(options.deck), options);
+  return makeInstalledModel(deckAccess(deckForInterpolation(options.deck, options.installation.deckInterpolation ?? 'raw')), options);
 }

@@ -7,6 +7,7 @@
  */
 import { DEFAULT_C_BLEED, DEFAULT_C_RAM } from '../propulsion/installationCorrections';
 import type { Project, ProjectInlet } from '../project/projectSchema';
+import { lipSuctionOf } from '../project/projectSpecs';
 import { describeDistribution, type InputDistribution } from './inputDistribution';
 
 export type UncertainInputKind = 'cd0' | 'k' | 'tsfc' | 'oew' | 'cRam' | 'cBleed' | 'recovery' | 'lipSuction';
@@ -97,7 +98,8 @@ function appliesTo(input: UncertainInput, inlet: ProjectInlet): boolean {
  *   cd0: polar.cdIncrement + value x 1e-4;   k: K x (1 + value) (Oswald e / (1 + value), or every K row);
  *   tsfc: fuel flow x (1 + value) at a given thrust (returned as fuelFlowScale);
  *   oew: operatingEmpty + value;   cRam, cBleed: coefficient + value (default when absent);
- *   recovery: every recovery-table row + value, held at 1;   lipSuction: factor + value, held in 0..1.
+ *   recovery: every recovery-table row + value, held at 1;
+ *   lipSuction: the constant factor, or every value of the lip-suction table (the rounded-pitot default made explicit), + value, held in 0..1.
  * Inputs whose value is exactly 0 change nothing.
  */
 export function applySample(project: Project, inputs: readonly UncertainInput[], values: ArrayLike<number>): AppliedSample {
@@ -165,9 +167,16 @@ export function applySample(project: Project, inputs: readonly UncertainInput[],
           ...p,
           inlets: p.inlets.map((inlet) => {
             if (!appliesTo(input, inlet)) return inlet;
-            const f = inlet.lipSuctionFactor + v;
-            if (f < 0 || f > 1) held.push(`lip suction of "${inlet.name}" ${f.toFixed(3)} held at ${f < 0 ? 0 : 1}`);
-            return { ...inlet, lipSuctionFactor: Math.min(1, Math.max(0, f)) };
+            const shift = (f: number): number => {
+              const g = f + v;
+              if (g < 0 || g > 1) held.push(`lip suction of "${inlet.name}" ${g.toFixed(3)} held at ${g < 0 ? 0 : 1}`);
+              return Math.min(1, Math.max(0, g));
+            };
+            if (inlet.lipSuction === undefined && inlet.lipSuctionFactor !== undefined) return { ...inlet, lipSuctionFactor: shift(inlet.lipSuctionFactor) };
+            // A table, or the rounded-pitot default (made explicit): every value shifted.
+            const table = lipSuctionOf(inlet).lipSuction;
+            if (table === undefined || table.kind !== 'table') return inlet;
+            return { ...inlet, lipSuction: { kind: 'table' as const, mach: [...table.mach], massFlowRatio: [...table.massFlowRatio], factor: table.factor.map((row) => row.map(shift)) } };
           }),
         };
         return;

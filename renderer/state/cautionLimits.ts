@@ -20,6 +20,7 @@ export interface CautionLimit {
 
 const D = DEFAULT_CAUTION_SETTINGS;
 const C = CAUTION_CATALOGUE;
+const SPILLAGE_SOURCE = 'Spillage drag above about 5 % of thrust means the inlet is oversized for the airflow or the lip-suction assumption carries the answer; 5 % is our default, edit it to your practice';
 const FAN_FACE_SOURCE = 'Fan-face Mach band of about 0.4 to 0.6, common practice';
 
 export const CAUTION_LIMITS: readonly CautionLimit[] = [
@@ -31,6 +32,7 @@ export const CAUTION_LIMITS: readonly CautionLimit[] = [
   { key: 'maxThroatMach', label: 'Highest inlet throat Mach', unit: 'dimensionless', default_si: D.maxThroatMach, source: C.throat_mach_high.source, catalogueId: 'throat_mach_high' },
   { key: 'minFanFaceMach', label: 'Lowest fan-face Mach', unit: 'dimensionless', default_si: D.minFanFaceMach, source: FAN_FACE_SOURCE, catalogueId: null },
   { key: 'maxFanFaceMach', label: 'Highest fan-face Mach', unit: 'dimensionless', default_si: D.maxFanFaceMach, source: FAN_FACE_SOURCE, catalogueId: null },
+  { key: 'maxSpillageShare', label: 'Largest spillage drag, share of thrust', unit: 'percent', default_si: D.maxSpillageShare, source: SPILLAGE_SOURCE, catalogueId: null },
 ];
 
 /** Catalogue entries whose limit is an input elsewhere (MTOW, CLmax ...) rather than a threshold here. */

@@ -131,8 +131,10 @@ describe('makeInstalledModel point evaluation', () => {
       expectClose(e.fanFaceMach!, row.fanFaceMach, { rel: 1e-7 }, 'scipy fan-face Mach');
       expectClose(e.airflow_kg_s!, row.airflow_kg_s, { rel: 1e-9 }, 'scipy airflow');
       expectClose(e.massFlowRatio!, row.streamTubeArea_m2 / 10, { rel: 1e-9 }, 'scipy A0 / capture area');
-      // Raymer ram-recovery correction on the recovery found (from memory, C_ram 1.35).
-      expectClose(e.correctedThrust_N, T0 * 0.5 * (1 - 1.35 * (row.referenceRecovery - row.recovery)), { rel: 1e-9 }, 'Raymer closed form');
+      // Raymer ram-recovery correction on the recovery found (from memory): C_ram 1.35 subsonic, 1.35 - 0.15 (M - 1) above Mach 1
+      // (Raymer's supersonic form, on by default since the installation assumptions were made explicit).
+      const cRam = row.mach > 1 ? 1.35 - 0.15 * (row.mach - 1) : 1.35;
+      expectClose(e.correctedThrust_N, T0 * 0.5 * (1 - cRam * (row.referenceRecovery - row.recovery)), { rel: 1e-9 }, 'Raymer closed form');
     },
   );
 
