@@ -20,6 +20,8 @@ export const PEER_RTOLS: readonly number[] = [1e-7, 1e-6, 1e-5, 1e-4, 1e-3, 1e-2
 
 export interface PeerTry {
   readonly rtol: number;
+  /** Set when the peer failed at this tolerance (e.g. its root finder lost the bracket): counts as outside. */
+  readonly error?: string;
   readonly blockFuel_kg: number;
   readonly relativeDifference: number;
   readonly mission_s: number;
@@ -66,7 +68,10 @@ export function runEqualAccuracy(blockwiseRuns = 31, peerRepeat = 3): EqualAccur
   let chosen: PeerTry | null = null;
   for (const rtol of PEER_RTOLS) {
     const r = runPeer(rtol, 1);
-    if (typeof r === 'string') return { tolerance: EQUAL_ACCURACY, blockwise, peer: { error: r }, ratio: null };
+    if (typeof r === 'string') {
+      tries.push({ rtol, blockFuel_kg: Number.NaN, relativeDifference: Number.NaN, mission_s: Number.NaN, error: r });
+      break;
+    }
     const t: PeerTry = { rtol, blockFuel_kg: r.blockFuel_kg, relativeDifference: (r.blockFuel_kg - reference.blockFuel_kg) / reference.blockFuel_kg, mission_s: r.medianMission_s };
     tries.push(t);
     if (Math.abs(t.relativeDifference) > EQUAL_ACCURACY) break;
@@ -92,7 +97,8 @@ function ms(t_s: number): string {
 }
 
 function pct(x: number): string {
-  return `${x >= 0 ? '+' : ''}${(100 * x).toFixed(4)} %`;
+  const p = 100 * x;
+  return `${p >= 0 ? '+' : ''}${Math.abs(p) < 1e-3 && p !== 0 ? p.toExponential(1) : p.toFixed(4)} %`;
 }
 
 /** The equal-accuracy comparison as text lines. */
@@ -108,7 +114,10 @@ export function formatEqualAccuracy(r: EqualAccuracy): string {
     return lines.join('\n');
   }
   lines.push(`  Python peer tight (rtol ${PEER_TIGHT_RTOL}): block fuel ${p.tightBlockFuel_kg.toFixed(3)} kg`);
-  for (const t of p.tries) lines.push(`    rtol ${t.rtol.toExponential(0)}: block fuel ${t.blockFuel_kg.toFixed(3)} kg, ${pct(t.relativeDifference)}, ${ms(t.mission_s)}${Math.abs(t.relativeDifference) > r.tolerance ? '  (outside)' : ''}`);
+  for (const t of p.tries) {
+    if (t.error !== undefined) lines.push(`    rtol ${t.rtol.toExponential(0)}: the peer failed (${t.error}); counted as outside`);
+    else lines.push(`    rtol ${t.rtol.toExponential(0)}: block fuel ${t.blockFuel_kg.toFixed(3)} kg, ${pct(t.relativeDifference)}, ${ms(t.mission_s)}${Math.abs(t.relativeDifference) > r.tolerance ? '  (outside)' : ''}`);
+  }
   lines.push(
     `  Python peer at rtol ${p.rtol.toExponential(0)} (median of ${p.repeat}): ${ms(p.medianMission_s)}, block fuel ${p.blockFuel_kg.toFixed(3)} kg, ${pct(p.relativeDifference)} from its tight answer`,
     `  Ratio at equal accuracy, peer / Blockwise: ${r.ratio === null ? 'n/a' : `${r.ratio.toFixed(0)} x`}`,
