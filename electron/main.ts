@@ -105,7 +105,7 @@ async function start(): Promise<void> {
   registerHostHandlers(ipcMain, () => appUrl, handlers);
   installMenu(session.recent);
 
-  const win = new BrowserWindow(buildWindowOptions(join(__dirname, 'preload.cjs')));
+  const win = new BrowserWindow(buildWindowOptions(join(__dirname, 'preload.cjs'), devServerUrl !== undefined));
   mainWindow = win;
   win.on('page-title-updated', (event) => event.preventDefault());
   win.setTitle(formatWindowTitle(session.document.name, false));

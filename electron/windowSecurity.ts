@@ -23,7 +23,7 @@ export const CONTENT_SECURITY_POLICY = [
  * The options of the one application window: the page is sandboxed, isolated
  * from the preload's world and has no Node (Electron security checklist).
  */
-export function buildWindowOptions(preloadPath: string): BrowserWindowConstructorOptions {
+export function buildWindowOptions(preloadPath: string, development = false): BrowserWindowConstructorOptions {
   return {
     width: 1360,
     height: 880,
@@ -43,7 +43,8 @@ export function buildWindowOptions(preloadPath: string): BrowserWindowConstructo
       allowRunningInsecureContent: false,
       webviewTag: false,
       spellcheck: false,
-      devTools: true,
+      // The developer tools open a console with the page's full power: only against the development server.
+      devTools: development,
     },
   };
 }

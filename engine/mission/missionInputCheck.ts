@@ -4,10 +4,12 @@
  * naming the field, or null. (engine/project validates files; this guards
  * the solver's own entry point so no NaN travels.)
  */
+import { MAX_PHYSICAL_MAGNITUDE } from '../units/quantity';
 import type { HoldSpeed, MissionInput } from './missionTypes';
 
 function badNumber(path: string, value: unknown, rule: 'finite' | 'positive' | 'nonNegative'): string | null {
   if (typeof value !== 'number' || !Number.isFinite(value)) return `${path} must be a finite number, got ${String(value)}.`;
+  if (Math.abs(value) > MAX_PHYSICAL_MAGNITUDE) return `${path} is ${value}, beyond any physical value (at most ${MAX_PHYSICAL_MAGNITUDE} in SI units).`;
   if (rule === 'positive' && !(value > 0)) return `${path} must be positive, got ${value}.`;
   if (rule === 'nonNegative' && value < 0) return `${path} must not be negative, got ${value}.`;
   return null;

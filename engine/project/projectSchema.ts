@@ -31,6 +31,21 @@ function positiveQuantity(dimension: Parameters<typeof quantity>[0], what: strin
 function nonNegativeQuantity(dimension: Parameters<typeof quantity>[0], what: string) {
   return quantity(dimension, { min: 0, what });
 }
+/** An aircraft mass (OEW, MTOW, take-off weight...): above 0 and at most 1,000 t (several times the heaviest aircraft flown). */
+function aircraftMass() {
+  return quantity('mass', { min: Number.MIN_VALUE, max: 1e6, what: 'a mass above 0 and at most 1,000,000 kg' });
+}
+function payload() {
+  return quantity('mass', { min: 0, max: 1e6, what: 'a mass from 0 to 1,000,000 kg' });
+}
+/** A calibrated airspeed of a schedule, a hold or VMO: above 0 and at most 400 m/s (778 kt). */
+function airspeed() {
+  return quantity('speed', { min: Number.MIN_VALUE, max: 400, what: 'a calibrated airspeed above 0 and at most 400 m/s (778 kt)' });
+}
+/** A leg's or a reserve's time: 0 to 48 h (far beyond any jet's endurance; the fuel runs out first). */
+function duration() {
+  return quantity('time', { min: 0, max: 48 * 3600, what: 'a time from 0 to 48 h' });
+}
 function subsonicMach() {
   return quantity('dimensionless', { min: 0.05, max: 0.99, what: 'a Mach number from 0.05 to 0.99' });
 }
@@ -47,11 +62,11 @@ function label() {
 // ---------------------------------------------------------------- airframe
 
 export const weightsSchema = z.strictObject({
-  operatingEmpty: positiveQuantity('mass', 'a mass > 0'),
-  maxZeroFuel: positiveQuantity('mass', 'a mass > 0'),
-  maxTakeoff: positiveQuantity('mass', 'a mass > 0'),
-  maxLanding: positiveQuantity('mass', 'a mass > 0'),
-  maxFuel: positiveQuantity('mass', 'a mass > 0'),
+  operatingEmpty: aircraftMass(),
+  maxZeroFuel: aircraftMass(),
+  maxTakeoff: aircraftMass(),
+  maxLanding: aircraftMass(),
+  maxFuel: aircraftMass(),
 });
 
 export const airframeSchema = z.strictObject({
@@ -59,7 +74,7 @@ export const airframeSchema = z.strictObject({
   weights: weightsSchema,
   wingArea: positiveQuantity('area', 'an area > 0'),
   /** Maximum operating speed, CAS. */
-  vmo: positiveQuantity('speed', 'a speed > 0'),
+  vmo: airspeed(),
   mmo: quantity('dimensionless', { min: 0.1, max: 5, what: 'a Mach number from 0.1 to 5' }),
 });
 
@@ -241,9 +256,9 @@ const environment = {
 };
 
 export const speedScheduleSchema = z.strictObject({
-  lowCas: positiveQuantity('speed', 'a speed > 0'),
+  lowCas: airspeed(),
   lowAltitudeLimit: altitude(),
-  cas: positiveQuantity('speed', 'a speed > 0'),
+  cas: airspeed(),
   mach: subsonicMach(),
 });
 
@@ -256,15 +271,15 @@ export const holdSpeedSchema = z.discriminatedUnion('kind', [
     minCas: nonNegativeQuantity('speed', 'a speed >= 0').optional(),
     speedFactor: quantity('dimensionless', { min: 1, max: 2, what: 'a factor from 1 to 2 on the minimum-drag speed' }).optional(),
   }),
-  z.strictObject({ kind: z.literal('cas'), cas: positiveQuantity('speed', 'a speed > 0') }),
+  z.strictObject({ kind: z.literal('cas'), cas: airspeed() }),
 ]);
 
 export const legSchema = z.discriminatedUnion('kind', [
-  z.strictObject({ kind: z.literal('taxiOut'), ...environment, time: nonNegativeQuantity('time', 'a time >= 0'), fuelFlow: allowanceFuelFlow }),
+  z.strictObject({ kind: z.literal('taxiOut'), ...environment, time: duration(), fuelFlow: allowanceFuelFlow }),
   z.strictObject({
     kind: z.literal('takeoff'),
     ...environment,
-    time: nonNegativeQuantity('time', 'a time >= 0'),
+    time: duration(),
     /** A fuel allowance, or null/absent for time at the takeoff rating. */
     fuel: nonNegativeQuantity('mass', 'a mass >= 0').nullable().default(null),
   }),
@@ -302,7 +317,7 @@ export const legSchema = z.discriminatedUnion('kind', [
     mode: z
       .discriminatedUnion('kind', [
         z.strictObject({ kind: z.literal('idle') }),
-        z.strictObject({ kind: z.literal('rate'), rate: positiveQuantity('speed', 'a descent rate > 0') }),
+        z.strictObject({ kind: z.literal('rate'), rate: quantity('speed', { min: Number.MIN_VALUE, max: 100, what: 'a descent rate above 0 and at most 100 m/s (19,685 ft/min)' }) }),
       ])
       .default({ kind: 'idle' }),
   }),
@@ -310,16 +325,16 @@ export const legSchema = z.discriminatedUnion('kind', [
     kind: z.literal('hold'),
     ...environment,
     altitude: altitude(),
-    time: nonNegativeQuantity('time', 'a time >= 0'),
+    time: duration(),
     speed: holdSpeedSchema.default({ kind: 'bestEndurance' }),
   }),
   z.strictObject({
     kind: z.literal('approach'),
     ...environment,
-    time: nonNegativeQuantity('time', 'a time >= 0'),
+    time: duration(),
     fuel: nonNegativeQuantity('mass', 'a mass >= 0').nullable().default(null),
   }),
-  z.strictObject({ kind: z.literal('taxiIn'), ...environment, time: nonNegativeQuantity('time', 'a time >= 0'), fuelFlow: allowanceFuelFlow }),
+  z.strictObject({ kind: z.literal('taxiIn'), ...environment, time: duration(), fuelFlow: allowanceFuelFlow }),
 ]);
 
 export const alternateSchema = z.strictObject({
@@ -333,7 +348,7 @@ export const alternateSchema = z.strictObject({
 
 /** An allowance in the reserves: a time, and a set fuel or null for the time at the allowance's rating. */
 const reserveAllowanceSchema = z.strictObject({
-  time: nonNegativeQuantity('time', 'a time >= 0'),
+  time: duration(),
   fuel: nonNegativeQuantity('mass', 'a mass >= 0').nullable().default(null),
 });
 
@@ -350,29 +365,29 @@ export const reservesSchema = z.discriminatedUnion('preset', [
     preset: z.literal('icaoAnnex6'),
     ...reserveCommon,
     contingencyFraction: fraction('a fraction from 0 to 1').default(0.05),
-    minContingencyTime: nonNegativeQuantity('time', 'a time >= 0').default(300),
+    minContingencyTime: duration().default(300),
     alternate: alternateSchema.nullable(),
-    finalReserveTime: nonNegativeQuantity('time', 'a time >= 0').default(1800),
+    finalReserveTime: duration().default(1800),
   }),
   z.strictObject({
     preset: z.literal('cfr121_639'),
     ...reserveCommon,
     alternate: alternateSchema.nullable(),
-    finalReserveTime: nonNegativeQuantity('time', 'a time >= 0').default(2700),
+    finalReserveTime: duration().default(2700),
   }),
   z.strictObject({
     preset: z.literal('cfr121_645'),
     ...reserveCommon,
     enRouteFraction: fraction('a fraction from 0 to 1').default(0.1),
     alternate: alternateSchema.nullable(),
-    finalReserveTime: nonNegativeQuantity('time', 'a time >= 0').default(1800),
+    finalReserveTime: duration().default(1800),
   }),
   z.strictObject({
     preset: z.literal('custom'),
     ...reserveCommon,
     contingencyFraction: fraction('a fraction from 0 to 1'),
     alternate: alternateSchema.nullable(),
-    finalReserveTime: nonNegativeQuantity('time', 'a time >= 0'),
+    finalReserveTime: duration(),
     extraFuel: nonNegativeQuantity('mass', 'a mass >= 0').default(0),
   }),
 ]);
@@ -380,15 +395,15 @@ export const reservesSchema = z.discriminatedUnion('preset', [
 export const solveSchema = z.discriminatedUnion('mode', [
   z.strictObject({
     mode: z.literal('takeoffWeight'),
-    takeoffWeight: positiveQuantity('mass', 'a mass > 0'),
-    payload: nonNegativeQuantity('mass', 'a mass >= 0'),
+    takeoffWeight: aircraftMass(),
+    payload: payload(),
   }),
   z.strictObject({
     mode: z.literal('payloadRange'),
-    payload: nonNegativeQuantity('mass', 'a mass >= 0'),
-    range: positiveQuantity('length', 'a length > 0'),
+    payload: payload(),
+    range: quantity('length', { min: Number.MIN_VALUE, max: 4.0075e7, what: 'a range above 0 and at most 40,075 km' }),
   }),
-  z.strictObject({ mode: z.literal('maxRange'), payload: nonNegativeQuantity('mass', 'a mass >= 0') }),
+  z.strictObject({ mode: z.literal('maxRange'), payload: payload() }),
 ]);
 
 export const missionSchema = z.strictObject({
@@ -410,11 +425,11 @@ export const missionSchema = z.strictObject({
 
 /** Threshold overrides; absent fields take DEFAULT_CAUTION_SETTINGS. */
 export const cautionsSchema = z.strictObject({
-  minResidualClimbRate: nonNegativeQuantity('speed', 'a climb rate >= 0').optional(),
+  minResidualClimbRate: quantity('speed', { min: 0, max: 50, what: 'a climb rate from 0 to 50 m/s (9,843 ft/min)' }).optional(),
   minBuffetLoadFactor: quantity('dimensionless', { min: 1, max: 3, what: 'a load factor from 1 to 3' }).optional(),
-  vmoMargin: nonNegativeQuantity('speed', 'a speed >= 0').optional(),
+  vmoMargin: quantity('speed', { min: 0, max: 100, what: 'a speed margin from 0 to 100 m/s' }).optional(),
   mmoMargin: fraction('a Mach margin from 0 to 1').optional(),
-  minReserveFraction: nonNegativeQuantity('dimensionless', 'a fraction >= 0').optional(),
+  minReserveFraction: quantity('dimensionless', { min: 0, max: 10, what: 'a fraction of the reserve from 0 to 10' }).optional(),
   cautionOnDeckExtrapolation: z.boolean().optional(),
   maxThroatMach: fraction('a Mach number from 0 to 1').optional(),
   minFanFaceMach: fraction('a Mach number from 0 to 1').optional(),

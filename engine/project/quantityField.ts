@@ -23,6 +23,29 @@ export interface ExpectedParams {
   readonly expected: string;
 }
 
+/**
+ * Largest magnitude (SI) a field of each dimension accepts when it states no narrower range: far beyond any jet
+ * and its missions (a field's own bounds, e.g. altitudes, are narrower), so a slip of a thousand is still caught.
+ */
+export const PHYSICAL_MAGNITUDE: Readonly<Record<Dimension, { readonly max: number; readonly what: string }>> = {
+  length: { max: 4.0075e7, what: '40,075 km (once round the Earth)' },
+  speed: { max: 1500, what: '1,500 m/s' },
+  mass: { max: 1e6, what: '1,000,000 kg' },
+  force: { max: 1e7, what: '10 MN' },
+  massFlow: { max: 1e4, what: '10,000 kg/s' },
+  temperature: { max: 1e4, what: '10,000 K' },
+  temperatureDelta: { max: 200, what: '200 K' },
+  pressure: { max: 1e7, what: '10 MPa' },
+  time: { max: 48 * 3600, what: '48 h' },
+  area: { max: 1e4, what: '10,000 m2' },
+  power: { max: 1e9, what: '1 GW' },
+  angle: { max: 2 * Math.PI, what: '360 deg' },
+  tsfc: { max: 1e-3, what: '1e-3 kg/(N s) (35 lb/(lbf h))' },
+  specificHeat: { max: 1e5, what: '100,000 J/(kg K)' },
+  specificEnergy: { max: 1e9, what: '1e9 J/kg' },
+  dimensionless: { max: 1e6, what: '1e6' },
+};
+
 /** Inclusive SI bounds for a quantity field; `what` says the range in words for messages. */
 export interface QuantityBounds {
   readonly min?: number;
@@ -64,7 +87,8 @@ function outOfRangeParts(value: number, dimension: Dimension, bounds: QuantityBo
  * A project-file field of the given dimension. Accepts a finite number (SI)
  * or a string with a unit; outputs the SI value. Units per engine/units
  * (NIST SP 811 conversion factors). With bounds, values outside [min, max]
- * are issues (never clamped).
+ * are issues (never clamped); without them, or beyond them, a magnitude above the dimension's
+ * PHYSICAL_MAGNITUDE is an issue too.
  */
 export function quantity(dimension: Dimension, bounds?: QuantityBounds) {
   const expected = bounds ? `${expectedText(dimension)}, ${bounds.what}` : expectedText(dimension);

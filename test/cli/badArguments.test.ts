@@ -56,6 +56,8 @@ const TABLE: readonly (readonly [string, readonly string[], number, RegExp])[] =
   ['trade', [], EXIT_USAGE, /missing the project file/],
   ['uncertainty', [P, '--samples', '1e308'], EXIT_USAGE, /--samples: "1e308" is not a whole number/],
   ['uncertainty', [], EXIT_USAGE, /missing the project file/],
+  ['sweep', [], EXIT_USAGE, /missing the project file/],
+  ['sweep', [P], EXIT_USAGE, /give at least one --vary <field>=<from>:<to>:<step>/],
   ['cycle point', [CYCLE, '--altitude', '35000 ft', '--mach', '1e308', '--rating', 'maxCruise'], EXIT_USAGE, /--mach: "1e308" is 1\.00e\+308/],
   ['cycle point', [CYCLE, '--altitude', '35000 ft', '--mach', '0.8'], EXIT_USAGE, /give one of --rating NAME or --fan-speed FRACTION/],
   ['cycle deck', [CYCLE], EXIT_USAGE, /missing --out/],

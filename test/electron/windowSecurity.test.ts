@@ -19,7 +19,13 @@ describe('buildWindowOptions', () => {
       webSecurity: true,
       allowRunningInsecureContent: false,
       webviewTag: false,
+      devTools: false,
     });
+  });
+
+  it('buildWindowOptions allows the developer tools only in development (the development server)', () => {
+    expect(buildWindowOptions('/p.cjs').webPreferences?.devTools).toBe(false);
+    expect(buildWindowOptions('/p.cjs', true).webPreferences?.devTools).toBe(true);
   });
 });
 
