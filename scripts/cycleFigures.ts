@@ -41,6 +41,16 @@ function idealAgreement(): void {
   for (const [name, a, b] of pairs) console.log(`  ${name.padEnd(22)} cycle ${a.toPrecision(12).padEnd(16)} closed form ${b.toPrecision(12).padEnd(16)} rel. diff ${rel(a, b).toExponential(1)}`);
 }
 
+function idealOffDesign(): void {
+  const ref = JSON.parse(readFileSync(new URL('test/reference/cycleIdealOffDesignReference.json', root), 'utf8')) as { points: Record<string, number>[] };
+  let worst = 0;
+  for (const r of ref.points) {
+    const p = runCyclePoint(ideal, { altitude_m: r.altitude_ft! * FT, mach: r.mach!, isaDeviation_K: 0, throttle: { kind: 'turbineInletTemperature', value_K: r.tt4_K! } });
+    for (const [a, b] of [[p.thrust_N!, r.thrust_N!], [p.fuelFlow_kg_s!, r.fuelFlow_kg_s!], [p.airflow_kg_s!, r.airflow_kg_s!], [p.bypassRatio!, r.bypassRatio!], [p.fanPressureRatio!, r.fanPressureRatio!], [p.fanSpeed!, r.fanSpeed!]] as const) worst = Math.max(worst, rel(a, b));
+  }
+  console.log(`\nIdeal engine off design against the independent scipy match (test/reference/cycleIdealOffDesignReference.json, ${ref.points.length} points, thrust, fuel flow, airflow, bypass ratio, fan pressure ratio, N1): worst rel. diff ${worst.toExponential(1)}`);
+}
+
 function closure(): void {
   console.log('\nDesign-point closure (off-design solve at the design condition and throttle):');
   const i = runCyclePoint(ideal, { altitude_m: 35000 * FT, mach: 0.8, isaDeviation_K: 0, throttle: { kind: 'turbineInletTemperature', value_K: 1600 } });
@@ -140,6 +150,7 @@ function envelope(): void {
 }
 
 idealAgreement();
+idealOffDesign();
 closure();
 thrustMach();
 recovery();
