@@ -93,6 +93,20 @@ function thrustMach(): void {
   }
 }
 
+function ratingsAlongMach(): void {
+  console.log('\nDemo net thrust (kN) and TSFC (mg/(N s)) against Mach at the ratings (ISA):');
+  for (const alt of [0, 15000, 35000]) {
+    for (const rating of ['takeoff', 'maxClimb', 'maxCruise', 'flightIdle'] as const) {
+      const cells: string[] = [];
+      for (const mach of [0, 0.2, 0.4, 0.6, 0.8, 0.9]) {
+        const p = runCyclePoint(demo, { altitude_m: alt * FT, mach, isaDeviation_K: 0, throttle: { kind: 'rating', rating } });
+        cells.push(p.status === 'converged' ? `M${mach} ${(p.thrust_N! / 1000).toFixed(2)}/${(p.tsfc_kg_N_s! * 1e6).toFixed(1)}` : `M${mach} ${p.status}`);
+      }
+      console.log(`  ${String(alt).padStart(5)} ft ${rating.padEnd(10)} ${cells.join('  ')}`);
+    }
+  }
+}
+
 function perPercent(e: CycleEngine, alt: number, mach: number, throttle: CycleThrottle, isa = 0): { dF: number; dWf: number; limit: string; grossOverNet: number } | null {
   const a = runCyclePoint(e, { altitude_m: alt * FT, mach, isaDeviation_K: isa, throttle, recovery: 1 });
   const b = runCyclePoint(e, { altitude_m: alt * FT, mach, isaDeviation_K: isa, throttle, recovery: 0.99 });
@@ -153,5 +167,6 @@ idealAgreement();
 idealOffDesign();
 closure();
 thrustMach();
+ratingsAlongMach();
 recovery();
 envelope();
