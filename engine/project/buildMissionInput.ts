@@ -227,6 +227,11 @@ export function missionInputOnDeck(project: Project, engineDeck: EngineDeck, opt
       installationIssues.map((i) => makeIssue(installationIssuePath(i.path), '', 'valid installation settings', i.message)),
     );
   }
+  if (installation.method === 'deckSensitivities' && !engineDeck.hasSensitivities) {
+    return err([
+      makeIssue('engine.installation.recoveryMethod', '"deckSensitivities"', '"raymer", or a deck with sensitivity columns', `the deck "${engineDeck.title}" has no installation-sensitivity columns; use "raymer" or a deck that carries them (a cycle deck does)`),
+    ]);
+  }
   const cautionSettings = cautionSettingsOf(project);
   const w = project.airframe.weights;
   const overrides = options.overrides ?? {};

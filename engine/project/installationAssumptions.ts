@@ -17,19 +17,24 @@ export interface InstallationAssumption {
 }
 
 /** The assumptions, one line each (lip suction one line per inlet). */
-export function installationAssumptions(project: Project): InstallationAssumption[] {
+export function installationAssumptions(project: Project, deckHasSensitivities?: boolean): InstallationAssumption[] {
   const i = project.engine.installation;
+  const bySensitivities = i.recoveryMethod === 'deckSensitivities' || (i.recoveryMethod === undefined && deckHasSensitivities === true);
   const cRam = i.ramRecoveryFactor ?? DEFAULT_C_RAM;
   const supersonic = i.ramSupersonicForm ?? true;
   const fuel = i.ramFuelFlow ?? 'heldAtPower';
+  const raymer = `Raymer's rule: thrust loss C_ram (eta_ref - eta), C_ram ${cRam}`;
   const out: InstallationAssumption[] = [
-    {
+    bySensitivities
+      ? { id: 'recoveryMethod', text: "Recovery, bleed and extraction by the deck's own sensitivity columns (first order about each deck point; a cycle deck's are computed through the cycle)." }
+      : {
       id: 'recoveryMethod',
       text:
-        `Recovery effect by Raymer's rule: thrust loss C_ram (eta_ref - eta), C_ram ${cRam}${i.ramRecoveryFactor === undefined ? " (Raymer's subsonic value)" : ''}` +
+        `Recovery effect by ${raymer}${i.ramRecoveryFactor === undefined ? " (Raymer's subsonic value)" : ''}` +
         `${supersonic ? `, falling as ${cRam} - 0.15 (M - 1) above Mach 1 (Raymer's supersonic form)` : ', held above Mach 1'}; ` +
-        (fuel === 'heldAtPower' ? 'fuel flow held at the power setting.' : 'fuel flow scaled with recovery eta/eta_ref (a corrected-flow engine).'),
-    },
+        (fuel === 'heldAtPower' ? 'fuel flow held at the power setting' : 'fuel flow scaled with recovery eta/eta_ref (a corrected-flow engine)') +
+        (i.recoveryMethod === undefined && deckHasSensitivities === undefined ? " (a deck with sensitivity columns uses those instead)." : '.'),
+      },
   ];
   for (const inlet of project.inlets) {
     const ls = inlet.lipSuction;

@@ -170,6 +170,13 @@ export const deckSourceSchema = z.discriminatedUnion('kind', [
 ]);
 
 export const installationSchema = z.strictObject({
+  /**
+   * How the inlet's recovery (and bleed and extraction) act on the deck:
+   * Raymer's rule with C_ram, or the deck's own sensitivity columns (a
+   * cycle-generated deck carries them from the cycle); absent = the deck's
+   * sensitivities when it has them, else Raymer's rule.
+   */
+  recoveryMethod: z.enum(['raymer', 'deckSensitivities']).optional(),
   /** Fuel flow under Raymer's ram-recovery correction: held at the power setting (default) or scaled with recovery (corrected-flow engine). */
   ramFuelFlow: z.enum(['heldAtPower', 'scaledWithRecovery']).optional(),
   /** Raymer's supersonic form of C_ram above Mach 1 (C_ram - 0.15 (M - 1)); default true. */

@@ -81,6 +81,7 @@ export function installationOf(project: Project): InstallationSettings {
     ...(i.ramFuelFlow === undefined ? {} : { ramFuelFlow: i.ramFuelFlow }),
     ...(i.ramSupersonicForm === undefined ? {} : { cRamSupersonicForm: i.ramSupersonicForm }),
     deckInterpolation: project.engine.deckInterpolation ?? 'corrected',
+    ...(i.recoveryMethod === undefined ? {} : { method: i.recoveryMethod === 'raymer' ? 'raymerCorrections' : 'deckSensitivities' }),
   };
 }
 

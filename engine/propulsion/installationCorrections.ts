@@ -29,6 +29,12 @@ export interface InstallationSettings {
    * recovery).
    */
   readonly ramFuelFlow?: RamFuelFlowConvention;
+  /**
+   * How recovery, bleed and extraction are applied (installationMethod.ts):
+   * 'raymerCorrections' or 'deckSensitivities'; absent = the deck's
+   * sensitivities when it has them, else Raymer's corrections.
+   */
+  readonly method?: 'raymerCorrections' | 'deckSensitivities';
   /** What the deck is interpolated in (deckCorrection.ts); absent = 'raw' here (a project's default is 'corrected'). */
   readonly deckInterpolation?: 'raw' | 'corrected';
   /** Bleed correction coefficient C_bleed (-); 2.0 (Raymer). */

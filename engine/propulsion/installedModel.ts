@@ -72,7 +72,7 @@ function installationContext(access: DeckAccess, options: InstalledModelOptions)
   if (installIssues.length > 0) {
     throw new Error(`installation settings are invalid: ${installIssues.map((i) => `${i.path}: ${i.message}`).join('; ')}`);
   }
-  const method = options.method ?? defaultInstallationMethod(access.hasSensitivities);
+  const method = options.method ?? options.installation.method ?? defaultInstallationMethod(access.hasSensitivities);
   if (method === 'deckSensitivities' && !access.hasSensitivities) {
     throw new Error(`installation method deckSensitivities needs a deck with sensitivity columns; deck "${access.title}" has none`);
   }

@@ -207,6 +207,49 @@ function TradeFactorsPanel() {
           </p>
         </>
       ) : null}
+      <RecoveryByMethodPanel />
+    </>
+  );
+}
+
+/** +1 % recovery by every recovery method side by side: the check of Raymer's rule against the deck's sensitivities and the cycle. */
+function RecoveryByMethodPanel() {
+  const { state } = useStudy();
+  const project = state.doc!.present;
+  const job = useEngineJob<'recoveryByMethod'>();
+  const u = state.units;
+  const j = job.state;
+  return (
+    <>
+      <h3>+1 % recovery by each method</h3>
+      <button type="button" data-testid="recovery-methods-run" disabled={j.status === 'running'} onClick={() => job.start({ kind: 'recoveryByMethod', project, deckFile: state.deckFile })}>
+        Check Raymer&apos;s rule against the deck and the cycle
+      </button>
+      <JobProgress state={j} onCancel={job.cancel} testId="recovery-methods-progress" />
+      {j.status === 'failed' ? <FailureNotice failure={j.failure} testId="recovery-methods-failure" /> : null}
+      {j.status === 'done' ? (
+        <>
+          <table data-testid="recovery-methods-table">
+            <thead>
+              <tr>
+                <th>Method</th>
+                <th>Block fuel per +1 % recovery</th>
+                <th>Against the first</th>
+              </tr>
+            </thead>
+            <tbody>
+              {j.value.rows.map((row, i) => (
+                <tr key={row.id}>
+                  <td>{row.label}</td>
+                  <td>{row.blockFuelPerPercent_kg === null ? '—' : formatQuantity(row.blockFuelPerPercent_kg, 'mass', u, 1)}</td>
+                  <td>{row.blockFuelPerPercent_kg === null ? row.note : j.value.relativeToFirst[i] == null ? '—' : `${(100 * j.value.relativeToFirst[i]!).toFixed(0)} %`}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+          <p className="small">{j.value.description}</p>
+        </>
+      ) : null}
     </>
   );
 }

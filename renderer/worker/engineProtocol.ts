@@ -7,6 +7,7 @@ import type { CrossoverResult } from '../../engine/analysis/crossover';
 import type { InletComparisonResult } from '../../engine/analysis/inletComparison';
 import type { PayloadRangeResult } from '../../engine/analysis/payloadRange';
 import type { TradeFactorsResult } from '../../engine/analysis/tradeFactors';
+import type { RecoveryTradeByMethod } from '../../engine/analysis/recoveryTradeByMethod';
 import type { UncertaintyResult } from '../../engine/uncertainty/uncertaintyRun';
 import type { MissionResult } from '../../engine/mission/missionTypes';
 import type { Project } from '../../engine/project/projectSchema';
@@ -34,6 +35,8 @@ export type EngineRequest =
   | ({ readonly kind: 'crossover'; readonly query: CrossoverRequestQuery } & StudyInputs)
   | ({ readonly kind: 'payloadRange' } & StudyInputs)
   | ({ readonly kind: 'tradeFactors' } & StudyInputs)
+  /** The +1 % recovery trade factor by every recovery method (Raymer held/scaled, deck sensitivities, cycle). */
+  | ({ readonly kind: 'recoveryByMethod' } & StudyInputs)
   | ({ readonly kind: 'compare'; readonly nameA: string; readonly nameB: string } & StudyInputs)
   /** The declared uncertainties' Monte Carlo over one design (its band) or two (A, B: the band of B - A). */
   | ({ readonly kind: 'uncertainty'; readonly designs: readonly string[]; readonly samples?: number; readonly seed?: number } & StudyInputs);
@@ -109,6 +112,7 @@ export interface EngineReplies {
   readonly crossover: CrossoverSet;
   readonly payloadRange: PayloadRangeResult;
   readonly tradeFactors: TradeFactorsResult;
+  readonly recoveryByMethod: RecoveryTradeByMethod;
   readonly compare: InletComparisonResult;
   readonly uncertainty: UncertaintyResult;
 }

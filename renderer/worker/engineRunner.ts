@@ -8,6 +8,8 @@ import { compareInlets } from '../../engine/analysis/inletComparison';
 import { inletFactorBuilder } from '../../engine/analysis/inletFactorBuilder';
 import { payloadRangeDiagram } from '../../engine/analysis/payloadRange';
 import { tradeFactors } from '../../engine/analysis/tradeFactors';
+import { recoveryTradeByMethod } from '../../engine/analysis/recoveryTradeByMethod';
+import { recoveryMethodVariants } from '../../engine/project/recoveryMethodVariants';
 import { err, ok, type Result } from '../../engine/core/result';
 import type { MissionInput } from '../../engine/mission/missionTypes';
 import { solveMission } from '../../engine/mission/solveMission';
@@ -126,6 +128,12 @@ function dispatch(request: EngineRequest, cache: DeckCache, hooks: RunHooks): Re
     }
     case 'compare':
       return runCompare(request, cache, hooks);
+    case 'recoveryByMethod': {
+      const study = prepare(request, cache);
+      if (!study.ok) return study;
+      const r = recoveryTradeByMethod(recoveryMethodVariants(request.project, study.value.deck), hooks);
+      return r.ok ? r : err(analysisFailure(r.error));
+    }
     case 'uncertainty': {
       const study = prepare(request, cache);
       if (!study.ok) return study;
