@@ -34,6 +34,7 @@ export * from './propulsion/deckInversion';
 export * from './propulsion/deckIsa';
 export * from './propulsion/deckJson';
 export * from './propulsion/deckLookup';
+export * from './propulsion/deckPlausibility';
 export * from './propulsion/deckTemperature';
 export * from './propulsion/engineDeck';
 export * from './propulsion/engineEvaluation';

@@ -101,7 +101,10 @@ Usage: blockwise deck check <file> [--json]
   --json   print the summary (or the errors) as JSON
 
 Exit status: 0 when the deck is valid; 1 with one line per error (line and
-column) when it is not; 2 for a bad command line.
+column) when it is not; 2 for a bad command line. A valid deck with values no
+turbofan or turbojet gives (TSFC, thrust per airflow, fuel-air ratio at full
+power) is still valid: each check prints one warning on stderr with the line,
+and names a likely unit slip (e.g. fuel_flow in kg/min where lb/h was meant).
 `,
   options: { json: { type: 'boolean' } },
   allowPositionals: true,
@@ -115,8 +118,13 @@ column) when it is not; 2 for a bad command line.
       return 1;
     }
     const summary = summarize(result.value);
-    if (values.json === true) printJsonReport(io, { ok: true, file, ...summary });
-    else io.out(summaryText(file, summary));
+    const warnings = result.value.warnings ?? [];
+    if (values.json === true) printJsonReport(io, { ok: true, file, ...summary, warnings });
+    else {
+      io.out(summaryText(file, summary));
+      // Implausible values are warnings (the deck loads), on stderr so they are seen, each with its line.
+      for (const w of warnings) io.err(`blockwise deck check: warning: ${file} ${w.message}\n`);
+    }
     return 0;
   },
 };

@@ -4,6 +4,7 @@
  * axes, thrust rising with power, ratings inside the power range), then the
  * ragged grid.
  */
+import { deckPlausibility } from './deckPlausibility';
 import { err, ok, type Result } from '../core/result';
 import { buildDeckGrid, type DeckGridPoint } from './deckGrid';
 import { deckFileError, type DeckFileError } from './deckFileError';
@@ -265,5 +266,6 @@ export function assembleDeck(input: DeckAssemblyInput): Result<EngineDeck, reado
     notes: input.notes,
     policy: input.policy,
     grid: buildDeckGrid(rows),
+    warnings: deckPlausibility(rows, locate.line),
   });
 }

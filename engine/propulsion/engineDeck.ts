@@ -3,6 +3,7 @@
  * values are PER ENGINE and UNINSTALLED, i.e. at the deck's reference inlet
  * recovery (`referenceRecovery`). SI inside.
  */
+import type { DeckWarning } from './deckPlausibility';
 import type { DeckAxis, RatingName } from './propulsionModel';
 import type { DeckGrid } from './deckGrid';
 import { milE5008bRecovery } from './milE5008b';
@@ -48,6 +49,8 @@ export interface EngineDeck {
   readonly policy: DeckPolicy;
   /** The tabulated points, ragged, in flat arrays (SI); corrected parameters when `interpolation` is 'corrected' (deckCorrection.ts). */
   readonly grid: DeckGrid;
+  /** Implausible values found when the deck was read (deckPlausibility.ts): warnings with the line; the deck still loads. */
+  readonly warnings?: readonly DeckWarning[];
   /** What `grid` holds and is interpolated in; absent = 'raw' (the file's values). */
   readonly interpolation?: 'raw' | 'corrected';
 }
