@@ -9,7 +9,7 @@
 import { spawnSync } from 'node:child_process';
 import { performance } from 'node:perf_hooks';
 import { solveMission } from '../../engine/mission/solveMission';
-import { DEMO_PROJECT_PATH, loadDemoInput, PEER_SCRIPT_PATH } from './peer/demoInput';
+import { PEER_PROJECT_PATH, loadDemoInput, PEER_SCRIPT_PATH } from './peer/demoInput';
 import { median, parsePeerOutput, type PeerReport } from './sideBySide';
 
 /** Largest relative block-fuel difference to the tight answer that counts as equal accuracy (0.01 %). */
@@ -38,7 +38,7 @@ export interface EqualAccuracy {
 }
 
 function runPeer(rtol: number, repeat: number): PeerReport | string {
-  const child = spawnSync('python3', [PEER_SCRIPT_PATH, DEMO_PROJECT_PATH, '--repeat', String(repeat), '--rtol', String(rtol)], { encoding: 'utf8', timeout: 1_800_000 });
+  const child = spawnSync('python3', [PEER_SCRIPT_PATH, PEER_PROJECT_PATH, '--repeat', String(repeat), '--rtol', String(rtol)], { encoding: 'utf8', timeout: 1_800_000 });
   if (child.error) return `python3 could not be started: ${child.error.message}`;
   if (child.status !== 0) return `the peer exited with ${child.status}: ${child.stderr.trim().split('\n').at(-1) ?? ''}`;
   return parsePeerOutput(child.stdout);
@@ -46,7 +46,7 @@ function runPeer(rtol: number, repeat: number): PeerReport | string {
 
 /** Runs both sides at equal accuracy; `blockwiseRuns` timed in-process solves, `peerRepeat` repetitions of the chosen peer setting. */
 export function runEqualAccuracy(blockwiseRuns = 31, peerRepeat = 3): EqualAccuracy {
-  const { input } = loadDemoInput();
+  const { input } = loadDemoInput(undefined, PEER_PROJECT_PATH);
   const tight = solveMission(input, { stepScale: 0.125 });
   solveMission(input);
   const times: number[] = [];

@@ -10,7 +10,7 @@ import { spawnSync } from 'node:child_process';
 import { cpus } from 'node:os';
 import { performance } from 'node:perf_hooks';
 import { solveMission } from '../../engine/mission/solveMission';
-import { loadDemoInput, PEER_SCRIPT_PATH, DEMO_PROJECT_PATH } from './peer/demoInput';
+import { loadDemoInput, PEER_SCRIPT_PATH, PEER_PROJECT_PATH } from './peer/demoInput';
 
 export interface PeerReport {
   readonly blockFuel_kg: number;
@@ -53,7 +53,7 @@ export function parsePeerOutput(stdout: string): PeerReport | string {
 
 /** Runs both sides: Blockwise `runs` times in-process, the peer once with `repeat` repetitions. */
 export function runSideBySide(runs = 15, repeat = 3): SideBySide {
-  const { input } = loadDemoInput();
+  const { input } = loadDemoInput(undefined, PEER_PROJECT_PATH);
   solveMission(input); // warm-up (JIT)
   const times: number[] = [];
   let last = solveMission(input);
@@ -64,7 +64,7 @@ export function runSideBySide(runs = 15, repeat = 3): SideBySide {
   }
   const blockwise = { runs, medianMission_s: median(times), blockFuel_kg: last.blockFuel_kg, tripFuel_kg: last.tripFuel_kg, blockTime_s: last.blockTime_s };
   const t0 = performance.now();
-  const child = spawnSync('python3', [PEER_SCRIPT_PATH, DEMO_PROJECT_PATH, '--repeat', String(repeat)], { encoding: 'utf8', timeout: 900_000 });
+  const child = spawnSync('python3', [PEER_SCRIPT_PATH, PEER_PROJECT_PATH, '--repeat', String(repeat)], { encoding: 'utf8', timeout: 900_000 });
   const process_s = (performance.now() - t0) / 1000;
   const cores = cpus().length;
   if (child.error) return { cores, blockwise, peer: { error: `python3 could not be started: ${child.error.message}` } };
