@@ -1,4 +1,4 @@
-import { thrustDragCrossover } from '../../engine/analysis/crossover';
+import { SPEED_LIMIT_SOURCE_TEXT, thrustDragCrossover } from '../../engine/analysis/crossover';
 import { analysisFailed, cautionBlock, isaText, printJsonReport, printReport } from '../common/report';
 import { formatTable } from '../format/textTable';
 import type { CliIo, Verb } from '../verb';
@@ -54,7 +54,8 @@ says so. Exit codes: 0 done; 1 project unreadable; 2 bad command line;
     if (typeof loaded === 'number') return loaded;
     const { input } = loaded;
     const isaDev_K = isaDevOption(values, input.isaDev_K);
-    const r = thrustDragCrossover({ aero: input.aero, propulsion: input.propulsion }, { altitude_m, mass_kg, rating, isaDev_K });
+    const speedLimits = { vmo_m_s: input.airframe.vmo_m_s, mmo: input.airframe.mmo };
+    const r = thrustDragCrossover({ aero: input.aero, propulsion: input.propulsion }, { altitude_m, mass_kg, rating, isaDev_K, speedLimits });
     if (!r.ok) return analysisFailed(io, 'crossover', r.error.message);
     const v = r.value;
     if (values.json === true) {
@@ -77,6 +78,10 @@ says so. Exit codes: 0 done; 1 project unreadable; 2 bad command line;
       '',
       `  status                 ${v.status}`,
       `  ${v.message}`,
+      `  low-speed limit        ${v.lowSpeedLimit === null ? '- (no level flight inside the limits)' : `M ${machText(v.lowSpeedLimit.mach)} (${SPEED_LIMIT_SOURCE_TEXT[v.lowSpeedLimit.source]}; the highest of stall, buffet onset and the low crossover)`}`,
+      `  high-speed limit       ${v.highSpeedLimit === null ? '-' : `M ${machText(v.highSpeedLimit.mach)} (${SPEED_LIMIT_SOURCE_TEXT[v.highSpeedLimit.source]}; the lowest of the high crossover, MMO and VMO)`}`,
+      `  buffet onset (1 g)     ${machText(v.buffetOnsetMach)}`,
+      `  MMO / VMO Mach         ${machText(v.speedLimitMach)}`,
       `  low crossover Mach     ${machText(v.lowMach)}`,
       `  high crossover Mach    ${machText(v.highMach)}`,
       `  least-thrust Mach      ${machText(v.minThrustMach)}`,

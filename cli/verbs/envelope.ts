@@ -1,3 +1,4 @@
+import type { HighSpeedLimitSource, LowSpeedLimitSource } from '../../engine/analysis/crossover';
 import { DEFAULT_RESIDUAL_CLIMB_RATES, flightEnvelope } from '../../engine/analysis/envelope';
 import { analysisFailed, isaText, printJsonReport, printReport } from '../common/report';
 import { OPTION_RANGES, quantityOption } from '../common/quantityOptions';
@@ -8,6 +9,16 @@ import { formatTable } from '../format/textTable';
 import { UsageError, type CliIo, type Verb } from '../verb';
 import { bothUnits, INLET_OPTION, ISA_DEV_OPTION, isaDevOption, JSON_OPTION, machText, openAnalysisProject, ratingOption } from './analysisArgs';
 import { verbSummary } from './catalogue';
+
+const LIMIT_TAG: Readonly<Record<LowSpeedLimitSource | HighSpeedLimitSource, string>> = {
+  stall: 's',
+  buffetOnset: 'b',
+  crossover: 'x',
+  scanStart: '<',
+  scanEnd: '>',
+  mmo: 'm',
+  vmo: 'v',
+};
 
 export const envelopeVerb: Verb = {
   name: 'envelope',
@@ -87,6 +98,8 @@ TAS (no acceleration factor). Exit codes: 0 done; 1 project unreadable;
     }
     const rows = v.rows.map((row) => [
       (row.altitude_m / 0.3048).toFixed(0),
+      row.lowSpeedLimit === null ? '-' : `${machText(row.lowSpeedLimit.mach)} ${LIMIT_TAG[row.lowSpeedLimit.source]}`,
+      row.highSpeedLimit === null ? '-' : `${machText(row.highSpeedLimit.mach)} ${LIMIT_TAG[row.highSpeedLimit.source]}`,
       machText(row.lowMach),
       machText(row.highMach),
       machText(row.stallMach),
@@ -102,11 +115,14 @@ TAS (no acceleration factor). Exit codes: 0 done; 1 project unreadable;
       ...v.ceilings.map((c) => `  ${c.name.padEnd(9)} ${c.altitude_m === null ? c.message : `${bothUnits(c.altitude_m, 'altitude')} at M ${machText(c.bestClimbMach)} (residual climb ${bothUnits(c.climbRate_m_s, 'climbRate')})`}`),
       `  ${v.climbRateDefinition}`,
       '',
+      'Level flight from M (the highest of stall s, buffet onset b, low crossover x) to M (the lowest of high crossover x, MMO m, VMO v):',
       formatTable(
         [
           { header: 'alt ft', align: 'right' },
-          { header: 'low M', align: 'right' },
-          { header: 'high M', align: 'right' },
+          { header: 'from M', align: 'right' },
+          { header: 'to M', align: 'right' },
+          { header: 'low cross M', align: 'right' },
+          { header: 'high cross M', align: 'right' },
           { header: 'stall M', align: 'right' },
           { header: 'buffet 1g', align: 'right' },
           { header: `buffet ${v.buffetLoadFactor.toFixed(2)}g`, align: 'right' },

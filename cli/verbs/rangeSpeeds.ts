@@ -1,4 +1,10 @@
-import { optimumAltitude } from '../../engine/analysis/optimumAltitude';
+import { optimumAltitude, type OptimumAltitudeResult } from '../../engine/analysis/optimumAltitude';
+
+const OPTIMUM_BINDING_TEXT: Readonly<Record<OptimumAltitudeResult['binding'], string>> = {
+  specificRange: 'the best specific range (no limit binds)',
+  cruiseCeiling: 'the cruise ceiling (residual climb rate)',
+  buffetMargin: 'the buffet margin',
+};
 import { specificRange } from '../../engine/analysis/specificRange';
 import { analysisFailed, cautionBlock, isaText, printJsonReport, printReport } from '../common/report';
 import { formatTable } from '../format/textTable';
@@ -26,8 +32,10 @@ Options:
 Specific range = TAS / fuel flow, with fuel flow at the part power where
 installed thrust equals drag (at most maxCruise). The long-range Mach is the
 faster Mach at 99 % of the best specific range (common practice). The
-optimum altitude maximises the best specific range at this weight; buffet
-margin and MMO cautions are raised there. Exit codes: 0 done; 1 project
+optimum altitude maximises the best specific range at this weight among the
+altitudes meeting the cruise-ceiling climb rate and the buffet margin of the
+project's caution settings (both shown, with the one that binds); an MMO
+caution is raised there. Exit codes: 0 done; 1 project
 unreadable; 2 bad command line; 3 analysis failed.
 `,
   options: { ...POINT_OPTIONS, ...INLET_OPTION, ...ISA_DEV_OPTION, ...JSON_OPTION },
@@ -65,7 +73,14 @@ unreadable; 2 bad command line; 3 analysis failed.
       `  level-flight band       M ${machText(v.feasibleMachRange[0])} to ${machText(v.feasibleMachRange[1])}`,
       o === null
         ? `  optimum altitude        - (${opt.ok ? '' : opt.error.message})`
-        : `  optimum altitude        ${bothUnits(o.altitude_m, 'altitude')} at M ${machText(o.maxRangeMach)} (${perKg(o.specificRange_m_kg)} nmi per 1000 kg; ${o.buffetLoadFactor.toFixed(2)} g to buffet)`,
+        : `  optimum altitude        ${bothUnits(o.altitude_m, 'altitude')} at M ${machText(o.maxRangeMach)} (${perKg(o.specificRange_m_kg)} nmi per 1000 kg; ${o.buffetLoadFactor.toFixed(2)} g to buffet; climb ${bothUnits(o.climbRate_m_s, 'climbRate')}), set by ${OPTIMUM_BINDING_TEXT[o.binding]}`,
+      ...(o === null
+        ? []
+        : [
+            `  best SR, no limits      ${bothUnits(o.unconstrainedAltitude_m, 'altitude')}`,
+            `  cruise ceiling          ${o.cruiseCeilingAltitude_m === null ? 'above the scan' : bothUnits(o.cruiseCeilingAltitude_m, 'altitude')} (climb ${bothUnits(o.limits.minClimbRate_m_s, 'climbRate')} at maxClimb, best-range Mach)`,
+            `  buffet-margin limit     ${o.buffetLimitAltitude_m === null ? 'above the scan' : bothUnits(o.buffetLimitAltitude_m, 'altitude')} (${o.limits.minBuffetLoadFactor.toFixed(2)} g to buffet onset)`,
+          ]),
       '',
       formatTable(
         [

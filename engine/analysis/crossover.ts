@@ -1,7 +1,9 @@
 /**
  * Thrust-drag crossover at one altitude, mass and rating: the curves of
  * thrust available and drag over Mach, the low and high Machs where they
- * cross (the level-flight speed band), the Mach of least thrust available
+ * cross, the level-flight band inside every limit (low: the highest of stall,
+ * buffet onset and the low crossover; high: the lowest of the high crossover
+ * and MMO / VMO; each says which binds), the Mach of least thrust available
  * (where ram recovery starts to win back the lapse), and the Machs of
  * greatest excess thrust and greatest specific excess power.
  */
@@ -9,6 +11,7 @@ import type { Caution } from '../cautions/caution';
 import { err, ok, type Result } from '../core/result';
 import { RATING_LABEL, type RatingName } from '../propulsion/propulsionModel';
 import type { AnalysisError, PerformanceModels } from './analysisTypes';
+import { machFromCas } from '../aero/airspeeds';
 import { liftLimitMachs } from './liftLimitMach';
 import { airAt, levelPoint } from './pointState';
 import { maximizeOnGrid, minimizeOnGrid, rootsOnPoints, uniformGrid } from './scalarSearch';
@@ -25,7 +28,34 @@ export interface CrossoverQuery {
   readonly machRange?: readonly [number, number];
   /** Curve points; default 81, at least 5. */
   readonly samples?: number;
+  /** VMO (CAS, m/s) and MMO (-) for the high-speed limit; omitted = the limit is the crossover (or the scan end). */
+  readonly speedLimits?: { readonly vmo_m_s: number; readonly mmo: number };
 }
+
+/** What sets a level-flight speed limit. */
+export type LowSpeedLimitSource = 'stall' | 'buffetOnset' | 'crossover' | 'scanStart';
+export type HighSpeedLimitSource = 'crossover' | 'mmo' | 'vmo' | 'scanEnd';
+
+/**
+ * A level-flight speed limit at the altitude and mass: the low-speed limit is the highest of the stall Mach
+ * (CLmax at 1 g), the buffet-onset Mach (buffet CL at 1 g) and the low crossover; the high-speed limit the lowest
+ * of the high crossover and MMO / the Mach of VMO. `source` says which binds.
+ */
+export interface SpeedLimit<S> {
+  readonly mach: number;
+  readonly source: S;
+}
+
+/** Words for each limit source (messages and the CLI). */
+export const SPEED_LIMIT_SOURCE_TEXT: Readonly<Record<LowSpeedLimitSource | HighSpeedLimitSource, string>> = {
+  stall: 'stall, CLmax at 1 g',
+  buffetOnset: 'buffet onset at 1 g',
+  crossover: 'thrust-drag crossover',
+  scanStart: 'scan start',
+  scanEnd: 'scan end',
+  mmo: 'MMO',
+  vmo: 'VMO',
+};
 
 export interface CrossoverCurves {
   readonly mach: readonly number[];
@@ -49,6 +79,13 @@ export interface CrossoverResult {
   readonly isaDev_K: number;
   /** Mach at which CL at 1 g reaches CLmax; null when below the scan start. */
   readonly stallMach: number | null;
+  /** Low-speed buffet onset at 1 g (buffet CL of the polar); null when below the scan start or never reached. */
+  readonly buffetOnsetMach: number | null;
+  /** The lower of MMO and the Mach of VMO at this altitude (null without speed limits). */
+  readonly speedLimitMach: number | null;
+  /** The level-flight band inside every limit; null when above the ceiling or when the limits leave no band. */
+  readonly lowSpeedLimit: SpeedLimit<LowSpeedLimitSource> | null;
+  readonly highSpeedLimit: SpeedLimit<HighSpeedLimitSource> | null;
   /** Mach range actually considered: [max(scan start, stall Mach), scan end]. */
   readonly machRange: readonly [number, number];
   /** Low-speed crossover (T = D, excess thrust rising); null when thrust exceeds drag at the low end of the range. */
@@ -143,6 +180,10 @@ export function thrustDragCrossover(
       status: 'above_ceiling',
       ...withParts(msg`At ${q(query.altitude_m, 'altitude')} and ${q(query.mass_kg, 'mass')} the wing cannot lift the aircraft below Mach ${q(scanHi, 'mach')} (CLmax): above the ceiling for this mass.`),
       stallMach: null,
+      buffetOnsetMach: null,
+      speedLimitMach: null,
+      lowSpeedLimit: null,
+      highSpeedLimit: null,
       machRange: [scanLo, scanHi],
       lowMach: null,
       highMach: null,
@@ -191,11 +232,29 @@ export function thrustDragCrossover(
     (m) => models.propulsion.atRating({ altitude_m: query.altitude_m, mach: m, isaDev_K: query.isaDev_K }, query.rating).cautions,
   );
   const rating = RATING_LABEL[query.rating];
-  const lowText = lowMach === null ? msg`M ${q(lo, 'mach')} (${stallMach !== null && lo === stallMach ? 'stall' : 'scan start'})` : msg`M ${q(lowMach, 'mach')}`;
-  const highText = highMach === null ? msg`M ${q(hi, 'mach')} (scan end)` : msg`M ${q(highMach, 'mach')}`;
+  // The band inside every limit (the envelope's definitions too): low = max(stall, buffet onset, low crossover),
+  // high = min(high crossover, MMO, Mach of VMO).
+  const buffet = liftLimitMachs(models.aero, { altitude_m: query.altitude_m, mass_kg: query.mass_kg, loadFactor: 1 }, 'buffetCl', Math.min(0.02, scanLo), scanHi);
+  const buffetOnsetMach = buffet.exceededEverywhere ? null : buffet.lowMach;
+  const vmoMach = query.speedLimits ? machFromCas(query.speedLimits.vmo_m_s, air.value.pressure_Pa) : null;
+  const speedLimitMach = query.speedLimits && vmoMach !== null ? Math.min(vmoMach, query.speedLimits.mmo) : null;
+  const lowCandidates: SpeedLimit<LowSpeedLimitSource>[] = [{ mach: lo, source: stallMach !== null && lo === stallMach ? 'stall' : 'scanStart' }];
+  if (buffet.exceededEverywhere) lowCandidates.push({ mach: hi, source: 'buffetOnset' });
+  else if (buffetOnsetMach !== null) lowCandidates.push({ mach: buffetOnsetMach, source: 'buffetOnset' });
+  if (lowMach !== null) lowCandidates.push({ mach: lowMach, source: 'crossover' });
+  const highCandidates: SpeedLimit<HighSpeedLimitSource>[] = [{ mach: highMach ?? hi, source: highMach === null ? 'scanEnd' : 'crossover' }];
+  if (query.speedLimits && vmoMach !== null) highCandidates.push({ mach: query.speedLimits.mmo, source: 'mmo' }, { mach: vmoMach, source: 'vmo' });
+  const lowLimit = lowCandidates.reduce((a, b) => (b.mach > a.mach ? b : a));
+  const highLimit = highCandidates.reduce((a, b) => (b.mach < a.mach ? b : a));
+  const band = !aboveCeiling && highLimit.mach > lowLimit.mach;
+  const src = SPEED_LIMIT_SOURCE_TEXT;
+  const fmtMach = (m: number | null) => (m === null ? msg`none` : msg`M ${q(m, 'mach')}`);
+  const crossText = msg`thrust-drag crossovers: low ${fmtMach(lowMach)}, high ${fmtMach(highMach)}`;
   const parts = aboveCeiling
     ? msg`Thrust available at ${rating} stays below drag at every Mach from ${q(lo, 'mach')} to ${q(hi, 'mach')}: ${q(query.altitude_m, 'altitude')} is above the ceiling for ${q(query.mass_kg, 'mass')} (largest shortfall ${q(-maxExcess.fx, 'force')} at M ${q(maxExcess.x, 'mach')}).`
-    : msg`Level flight at ${rating} from ${lowText} to ${highText}.`;
+    : band
+      ? msg`Level flight at ${rating} from M ${q(lowLimit.mach, 'mach')} (${src[lowLimit.source]}) to M ${q(highLimit.mach, 'mach')} (${src[highLimit.source]}); ${crossText}.`
+      : msg`No level flight inside the limits at ${rating}: the low-speed limit M ${q(lowLimit.mach, 'mach')} (${src[lowLimit.source]}) is not below the high-speed limit M ${q(highLimit.mach, 'mach')} (${src[highLimit.source]}); ${crossText}.`;
   const message = messageText(parts, 'both');
   return ok({
     ...base,
@@ -203,6 +262,10 @@ export function thrustDragCrossover(
     message,
     parts,
     stallMach,
+    buffetOnsetMach,
+    speedLimitMach,
+    lowSpeedLimit: band ? lowLimit : null,
+    highSpeedLimit: band ? highLimit : null,
     machRange: [lo, hi],
     lowMach: aboveCeiling ? null : lowMach,
     highMach: aboveCeiling ? null : highMach,

@@ -61,6 +61,9 @@ export interface EnvelopeRow {
   readonly buffetMarginHighMach: number | null;
   /** min(Mach at VMO, MMO); null without speed limits. */
   readonly speedLimitMach: number | null;
+  /** The band inside every limit, as the crossover defines it (low: max of stall, buffet onset, low crossover; high: min of high crossover, MMO/VMO), with the binding limit; null where there is none. */
+  readonly lowSpeedLimit: CrossoverResult['lowSpeedLimit'];
+  readonly highSpeedLimit: CrossoverResult['highSpeedLimit'];
   readonly bestClimbMach: number | null;
   /** Greatest steady climb rate Ps over Mach (m/s); null where the wing cannot lift the mass. */
   readonly maxClimbRate_m_s: number | null;
@@ -130,7 +133,14 @@ export function flightEnvelope(
     }
   }
   const crossAt = (h: number) =>
-    thrustDragCrossover(models, { altitude_m: h, mass_kg: query.mass_kg, rating: query.rating, isaDev_K: query.isaDev_K, machRange });
+    thrustDragCrossover(models, {
+      altitude_m: h,
+      mass_kg: query.mass_kg,
+      rating: query.rating,
+      isaDev_K: query.isaDev_K,
+      machRange,
+      ...(query.speedLimits ? { speedLimits: query.speedLimits } : {}),
+    });
 
   const altitudes: number[] = [];
   for (let h = hLo; h < hHi - 1e-9; h += step) altitudes.push(h);
@@ -160,6 +170,8 @@ export function flightEnvelope(
       buffetMarginLowMach: bn.exceededEverywhere ? null : bn.lowMach,
       buffetMarginHighMach: bn.highMach,
       speedLimitMach,
+      lowSpeedLimit: v.lowSpeedLimit,
+      highSpeedLimit: v.highSpeedLimit,
       bestClimbMach: v.bestClimbMach,
       maxClimbRate_m_s: v.maxSpecificExcessPower_m_s,
     });

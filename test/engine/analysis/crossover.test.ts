@@ -152,4 +152,43 @@ describe('thrustDragCrossover on the demo deck', () => {
     }
     expect(bands[2]!.lowMach).not.toBeNull();
   });
+
+  it('thrustDragCrossover bounds level flight by the highest of stall, buffet onset and the low crossover, and the lowest of the high crossover and MMO/VMO', () => {
+    // Lift limits at 1 g: CL = W / (0.7 p M^2 S) (NACA Report 1135 form of q); stall at CLmax, buffet onset at the
+    // polar's buffet CL 0.9 - 0.3 M (TEST_POLAR), solved here by bisection independently of the engine.
+    const h = 10000;
+    const m = 45000;
+    const W = m * G0;
+    const p = isaPressure_Pa(h);
+    const { clMax, wingArea_m2: S } = TEST_POLAR;
+    const clNeeded = (M: number) => W / (0.7 * p * M * M * S);
+    const stall = Math.sqrt(W / (0.7 * p * S * clMax));
+    let lo = 0.05;
+    let hi = 0.95;
+    for (let i = 0; i < 100; i++) {
+      const mid = 0.5 * (lo + hi);
+      if (clNeeded(mid) > 0.9 - 0.3 * mid) lo = mid;
+      else hi = mid;
+    }
+    const buffet = 0.5 * (lo + hi);
+    const vmo_m_s = 400; // CAS well above, so MMO binds (its Mach at 10 km is far beyond 0.7)
+    const r = expectOk(
+      thrustDragCrossover(lapsed, { altitude_m: h, mass_kg: m, rating: 'maxCruise', isaDev_K: 0, speedLimits: { vmo_m_s, mmo: 0.7 } }),
+      'crossover',
+    );
+    expect(r.status).toBe('ok');
+    expectClose(r.stallMach!, stall, { rel: 1e-6 }, 'stall Mach, CL = CLmax');
+    expectClose(r.buffetOnsetMach!, buffet, { rel: 1e-6 }, 'buffet onset at 1 g');
+    const low = Math.max(stall, buffet, r.lowMach ?? 0);
+    expectClose(r.lowSpeedLimit!.mach, low, { rel: 1e-9 }, 'low-speed limit = highest of stall, buffet onset, low crossover');
+    expect(r.lowSpeedLimit!.source).toBe(low === buffet ? 'buffetOnset' : low === stall ? 'stall' : 'crossover');
+    expect(r.highSpeedLimit!.mach).toBeLessThanOrEqual(Math.min(r.highMach ?? 1, 0.7));
+    expect(r.highSpeedLimit!.source).toBe((r.highMach ?? 1) < 0.7 ? 'crossover' : 'mmo');
+    expect(r.message).toMatch(/buffet onset|stall|crossover/);
+    // Without speed limits the high-speed limit is the high crossover itself.
+    const free = expectOk(thrustDragCrossover(lapsed, { altitude_m: h, mass_kg: m, rating: 'maxCruise', isaDev_K: 0 }), 'crossover');
+    if (free.highMach !== null) {
+      expect(free.highSpeedLimit).toEqual({ mach: free.highMach, source: 'crossover' });
+    }
+  });
 });
