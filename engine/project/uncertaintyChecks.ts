@@ -22,6 +22,7 @@ export function checkUncertainty(project: Project, raw: (path: string) => string
         issues.push(makeIssue(`${base}.inlet`, raw(`${base}.inlet`), 'an inlet with a recovery table', `a recovery offset applies to recovery-table inlets; "${inlet.name}" is a geometry inlet (make its diffuser loss coefficient the uncertain input instead)`));
       }
     }
+    if (input.input === 'recoveryMethod') return;
     const d = input.distribution;
     const p = `${base}.distribution`;
     if (d.kind === 'uniform' && d.min > d.max) {

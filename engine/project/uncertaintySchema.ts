@@ -49,6 +49,19 @@ export const uncertainInputSchema = z.discriminatedUnion('input', [
   z.strictObject({ input: z.literal('recovery'), inlet: inletName.optional(), distribution: distribution('dimensionless'), reason }),
   /** Added to an inlet's lip-suction fraction (absent inlet = every inlet, one draw). */
   z.strictObject({ input: z.literal('lipSuction'), inlet: inletName.optional(), distribution: distribution('dimensionless'), reason }),
+  /** The recovery method as a discrete alternative: each sample flies one, with these weights. */
+  z.strictObject({
+    input: z.literal('recoveryMethod'),
+    alternatives: z
+      .array(
+        z.strictObject({
+          method: z.enum(['raymerHeld', 'raymerScaled', 'deckSensitivities']),
+          weight: z.number().positive({ message: 'expected a weight > 0' }).finite(),
+        }),
+      )
+      .min(1, { message: 'expected at least one alternative' }),
+    reason,
+  }),
 ]);
 
 export const uncertaintySchema = z.strictObject({

@@ -10,7 +10,16 @@ import type { Project, ProjectInlet } from '../project/projectSchema';
 import { lipSuctionOf } from '../project/projectSpecs';
 import { describeDistribution, type InputDistribution } from './inputDistribution';
 
-export type UncertainInputKind = 'cd0' | 'k' | 'tsfc' | 'oew' | 'cRam' | 'cBleed' | 'recovery' | 'lipSuction';
+export type UncertainInputKind = 'cd0' | 'k' | 'tsfc' | 'oew' | 'cRam' | 'cBleed' | 'recovery' | 'lipSuction' | 'recoveryMethod';
+
+/** A recovery method a sample can fly (uncertainty `recoveryMethod` alternatives). */
+export type RecoveryMethodChoice = 'raymerHeld' | 'raymerScaled' | 'deckSensitivities';
+
+export const RECOVERY_METHOD_CHOICE_TEXT: Readonly<Record<RecoveryMethodChoice, string>> = {
+  raymerHeld: "Raymer's rule, fuel held",
+  raymerScaled: "Raymer's rule, fuel scaled with recovery",
+  deckSensitivities: "the deck's sensitivities",
+};
 
 export interface UncertainInput {
   /** Unique id, e.g. "cd0", "recovery:short" (an inlet-specific input carries the inlet name). */
@@ -26,6 +35,8 @@ export interface UncertainInput {
   readonly distribution: InputDistribution;
   readonly description: string;
   readonly reason: string;
+  /** For `recoveryMethod`: the alternative of each index of the discrete distribution. */
+  readonly alternatives?: readonly RecoveryMethodChoice[];
 }
 
 const LABEL: Readonly<Record<UncertainInputKind, string>> = {
@@ -37,13 +48,14 @@ const LABEL: Readonly<Record<UncertainInputKind, string>> = {
   cBleed: 'C_bleed (Raymer)',
   recovery: 'inlet recovery',
   lipSuction: 'lip suction',
+  recoveryMethod: 'recovery method',
 };
 
-const UNIT: Readonly<Record<UncertainInputKind, string>> = { cd0: 'counts', k: '%', tsfc: '%', oew: 'kg', cRam: '', cBleed: '', recovery: '', lipSuction: '' };
+const UNIT: Readonly<Record<UncertainInputKind, string>> = { cd0: 'counts', k: '%', tsfc: '%', oew: 'kg', cRam: '', cBleed: '', recovery: '', lipSuction: '', recoveryMethod: '' };
 
 type DeclaredInput = NonNullable<Project['uncertainty']>['inputs'][number];
 
-function distributionOf(d: DeclaredInput['distribution']): InputDistribution {
+function distributionOf(d: Extract<DeclaredInput, { distribution: unknown }>['distribution']): InputDistribution {
   return d.kind === 'normal'
     ? { kind: 'normal', mean: d.mean, sd: d.sd, ...(d.min === undefined ? {} : { min: d.min }), ...(d.max === undefined ? {} : { max: d.max }) }
     : { kind: 'uniform', min: d.min, max: d.max };
@@ -63,7 +75,22 @@ function displayDistribution(kind: UncertainInputKind, d: InputDistribution): In
 /** The project's declared uncertain inputs (empty when it declares none). */
 export function uncertainInputsOf(project: Project): UncertainInput[] {
   const declared = project.uncertainty?.inputs ?? [];
-  return declared.map((d) => {
+  return declared.map((d): UncertainInput => {
+    if (d.input === 'recoveryMethod') {
+      const alternatives = d.alternatives.map((a) => a.method);
+      const distribution: InputDistribution = { kind: 'discrete', weights: d.alternatives.map((a) => a.weight) };
+      return {
+        id: 'recoveryMethod',
+        kind: 'recoveryMethod',
+        inlet: null,
+        label: LABEL.recoveryMethod,
+        unit: '',
+        distribution,
+        description: describeDistribution(distribution, '', alternatives.map((a) => RECOVERY_METHOD_CHOICE_TEXT[a])),
+        reason: d.reason,
+        alternatives,
+      };
+    }
     const inlet = 'inlet' in d && d.inlet !== undefined ? d.inlet : null;
     const distribution = distributionOf(d.distribution);
     const where = inlet === null ? (d.input === 'recovery' || d.input === 'lipSuction' ? ' (every inlet)' : '') : ` (${inlet})`;
@@ -108,6 +135,17 @@ export function applySample(project: Project, inputs: readonly UncertainInput[],
   const held: string[] = [];
   inputs.forEach((input, i) => {
     const v = values[i]!;
+    if (input.kind === 'recoveryMethod') {
+      // A discrete draw: v is the alternative's index (0 is an alternative too).
+      const choice = input.alternatives?.[v] ?? 'raymerHeld';
+      const inst = p.engine.installation;
+      const installation =
+        choice === 'deckSensitivities'
+          ? { ...inst, recoveryMethod: 'deckSensitivities' as const }
+          : { ...inst, recoveryMethod: 'raymer' as const, ramFuelFlow: choice === 'raymerHeld' ? ('heldAtPower' as const) : ('scaledWithRecovery' as const) };
+      p = { ...p, engine: { ...p.engine, installation } };
+      return;
+    }
     if (v === 0) return;
     switch (input.kind) {
       case 'cd0':

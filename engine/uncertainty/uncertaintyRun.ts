@@ -136,6 +136,10 @@ export function* uncertaintySteps(study: UncertaintyStudy): Generator<Uncertaint
   const deck = projectDeck(study.project, study.resources);
   if (!deck.ok) return err({ code: 'invalid_input', message: `uncertainty: ${deck.error.map((e) => e.message).join('; ')}` });
   const resources = { deck: deck.value };
+  const needsSensitivities = inputs.some((i) => i.alternatives?.includes('deckSensitivities'));
+  if (needsSensitivities && !deck.value.hasSensitivities) {
+    return err({ code: 'invalid_input', message: `uncertainty: the recovery-method alternative "deckSensitivities" needs a deck with sensitivity columns; deck "${deck.value.title}" has none` });
+  }
   const withDeck = (p: Project): Project => ({ ...p, engine: { ...p.engine, deck: { kind: 'file', path: '(resolved deck)' } } });
 
   const designs = study.designs;

@@ -5,9 +5,12 @@ import type { FieldUnit } from '../state/fieldUnits';
 import { useStudy } from '../state/studyContext';
 import { QuantityField } from './QuantityField';
 
-type Declared = NonNullable<Project['uncertainty']>['inputs'][number];
+type AnyDeclared = NonNullable<Project['uncertainty']>['inputs'][number];
+/** Inputs with a continuous distribution (the recovery-method alternatives are edited in the file). */
+type Declared = Exclude<AnyDeclared, { input: 'recoveryMethod' }>;
+type ContinuousKind = Exclude<UncertainInputKind, 'recoveryMethod'>;
 
-const WHAT: Readonly<Record<UncertainInputKind, { readonly label: string; readonly unit: FieldUnit; readonly unitText: string; readonly sd: number }>> = {
+const WHAT: Readonly<Record<ContinuousKind, { readonly label: string; readonly unit: FieldUnit; readonly unitText: string; readonly sd: number }>> = {
   cd0: { label: 'CD0', unit: 'dimensionless', unitText: 'drag counts', sd: 3 },
   k: { label: 'K', unit: 'percent', unitText: '', sd: 0.03 },
   tsfc: { label: 'TSFC', unit: 'percent', unitText: '', sd: 0.01 },
@@ -18,8 +21,8 @@ const WHAT: Readonly<Record<UncertainInputKind, { readonly label: string; readon
   lipSuction: { label: 'lip suction', unit: 'dimensionless', unitText: 'offset', sd: 0.1 },
 };
 
-function matches(d: Declared, kinds: readonly UncertainInputKind[], inlet: string | undefined): boolean {
-  if (!kinds.includes(d.input)) return false;
+function matches(d: AnyDeclared, kinds: readonly ContinuousKind[], inlet: string | undefined): d is Declared {
+  if (d.input === 'recoveryMethod' || !kinds.includes(d.input)) return false;
   if (inlet === undefined) return true;
   return 'inlet' in d && d.inlet === inlet;
 }
@@ -30,15 +33,15 @@ function matches(d: Declared, kinds: readonly UncertainInputKind[], inlet: strin
  * the reason, remove; and an "uncertain" button for each input not yet
  * declared. Writes the project's `uncertainty` block (undoable like any edit).
  */
-export function UncertaintyRows(props: { readonly kinds: readonly UncertainInputKind[]; readonly inlet?: string; readonly testId: string }) {
+export function UncertaintyRows(props: { readonly kinds: readonly ContinuousKind[]; readonly inlet?: string; readonly testId: string }) {
   const { state, dispatch } = useStudy();
   const project = state.doc!.present;
   const inputs = project.uncertainty?.inputs ?? [];
-  const setInputs = (next: readonly Declared[], label: string) => {
+  const setInputs = (next: readonly AnyDeclared[], label: string) => {
     if (project.uncertainty === undefined) dispatch({ type: 'valueSet', path: ['uncertainty'], value: { samples: 200, seed: 1, inputs: next }, label });
     else dispatch({ type: 'valueSet', path: ['uncertainty', 'inputs'], value: next, label });
   };
-  const rows = inputs.map((d, i) => ({ d, i })).filter(({ d }) => matches(d, props.kinds, props.inlet));
+  const rows = inputs.flatMap((d, i) => (matches(d, props.kinds, props.inlet) ? [{ d, i }] : []));
   const missing = props.kinds.filter((k) => !rows.some(({ d }) => d.input === k));
   return (
     <div className="uncertainty-rows" data-testid={props.testId}>

@@ -36,7 +36,7 @@ describe('blockwise uncertainty', () => {
       expect(band.p05 <= band.p50 && band.p50 <= band.p95).toBe(true);
     }
     expect(typeof doc.probabilityBBetter).toBe('number');
-    expect(doc.drivers.length).toBe(9);
+    expect(doc.drivers.length).toBe(10); // the demo declares ten uncertain inputs
     const b = await run('uncertainty', shortProject, '--samples', '6', '--seed', '7', '--json');
     const again = (JSON.parse(b.out) as { uncertainty: Json }).uncertainty;
     expect({ ...again, elapsed_s: 0 }).toEqual({ ...doc, elapsed_s: 0 });

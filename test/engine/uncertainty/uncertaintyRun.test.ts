@@ -79,6 +79,27 @@ describe('uncertainty Monte Carlo on the demo', () => {
   });
 });
 
+describe('the recovery method as a discrete alternative', () => {
+  it('flies each alternative in the share of samples its weight gives (exactly, by the Latin hypercube strata) and applies it', () => {
+    const project = withInputs(demo, [{ input: 'recoveryMethod', alternatives: [{ method: 'raymerHeld', weight: 3 }, { method: 'raymerScaled', weight: 1 }], reason: '' }]);
+    const seen: string[] = [];
+    const solve = (m: MissionInput) => {
+      // Raymer's rule with fuel scaled with recovery burns less at the same power than with fuel held (recovery below the reference).
+      seen.push(m.propulsion.atPower({ altitude_m: 11000, mach: 0.78, isaDev_K: 0 }, 0.8).fuelFlow_kg_s.toFixed(6));
+      return { status: 'ok', statusMessage: '', blockFuel_kg: 1 } as unknown as MissionResult;
+    };
+    const r = expectOk(runUncertainty({ project, resources: { deck }, designs: [designs[0]!], samples: 8, seed: 4, solve }), 'discrete');
+    const draws = r.values.inputs.map((row) => row[0]);
+    expect(draws.filter((d) => d === 0)).toHaveLength(6);
+    expect(draws.filter((d) => d === 1)).toHaveLength(2);
+    // Two different fuel flows among the samples (the deterministic mission first), matching the draws.
+    const bySample = seen.slice(1);
+    draws.forEach((d, i) => expect(bySample[i]).toBe(bySample[draws.indexOf(d)]));
+    expect(new Set(bySample).size).toBe(2);
+    expect(r.inputs[0]!.distribution).toBe("one of Raymer's rule, fuel held (75 %), Raymer's rule, fuel scaled with recovery (25 %)");
+  });
+});
+
 describe('a known linear response', () => {
   // A stand-in solver whose block fuel is linear in two inputs it can read back from the mission input:
   // y = 5000 + 2 (OEW - OEW0) + 10000 (fuel-flow scale - 1). OEW ~ normal(0, 100 kg) truncated at +/-3 sd, TSFC ~ uniform(-2 %, +2 %).

@@ -62,6 +62,6 @@ describe('declared uncertainties beside the inputs', () => {
     fireEvent.change(sd, { target: { value: '0.005' } });
     fireEvent.keyDown(sd, { key: 'Enter' });
     const last = probe.current.doc!.present.uncertainty!.inputs.at(-1)!;
-    expect(last.distribution).toEqual({ kind: 'normal', mean: 0, sd: 0.005 });
+    expect(last).toMatchObject({ input: 'recovery', distribution: { kind: 'normal', mean: 0, sd: 0.005 } });
   });
 });
