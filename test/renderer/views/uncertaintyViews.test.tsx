@@ -11,6 +11,7 @@ import type { MissionResult } from '../../../engine/mission/missionTypes';
 import { parseDeckCsv } from '../../../engine/propulsion/deckCsv';
 import { runUncertainty } from '../../../engine/uncertainty/uncertaintyRun';
 import { UncertaintyBand } from '../../../renderer/components/UncertaintyBand';
+import { CompareView } from '../../../renderer/views/CompareView';
 import { InletsView } from '../../../renderer/views/InletsView';
 import type { LiveStudy } from '../../../renderer/worker/useEngine';
 import { demoFiles } from '../support/fakeBridge';
@@ -44,6 +45,28 @@ describe('UncertaintyBand', () => {
     expect(screen.getByTestId('u-p-b-better').textContent).toMatch(/B burns less block fuel than A in 100 % of 40 samples/);
     expect(screen.getByTestId('u-histogram').querySelector('svg')).not.toBeNull();
     expect(screen.getByTestId('u-drivers').textContent).toMatch(/Spearman/);
+  });
+});
+
+describe('+1 % recovery by method in the trade panel', () => {
+  it('lists each method with its trade factor, or why it does not apply', async () => {
+    const value = {
+      rows: [
+        { id: 'raymerHeld', label: "Raymer's rule, fuel flow held at the power setting", blockFuelPerPercent_kg: -65, halfStep_kg: -65, converged: true, baselineBlockFuel_kg: 4761, note: null },
+        { id: 'cycle', label: 'the cycle', blockFuelPerPercent_kg: null, halfStep_kg: null, converged: false, baselineBlockFuel_kg: null, note: 'the engine is a deck, not a cycle' },
+      ],
+      relativeToFirst: [0, null],
+      missions: 5,
+      description: 'by each method',
+    };
+    const requests: string[] = [];
+    renderWithStudy(<CompareView live={live()} chartSize={TEST_CHART} />, demoState(), cannedClient(value, requests));
+    fireEvent.click(screen.getByTestId('recovery-methods-run'));
+    const table = await screen.findByTestId('recovery-methods-table');
+    expect(requests).toEqual(['recoveryByMethod']);
+    expect(within(table).getByText('the engine is a deck, not a cycle')).toBeInTheDocument();
+    // -65 kg = -143.3 lb (NIST SP 811: 1 lb = 0.45359237 kg), in the demo's customary units.
+    expect(within(table).getByText(/-143\.3 lb/)).toBeInTheDocument();
   });
 });
 
