@@ -42,7 +42,13 @@
  *   report:    report-notice, report-headline-<id>, report-chart-<altitude|mass|polar|lapse>,
  *              report-legs-table, report-cautions
  */
-import { useMemo, useState } from 'react';
+import { useCallback, useEffect, useMemo, useState } from 'react';
+import { flushSync } from 'react-dom';
+import { ConfirmDialog } from './components/ConfirmDialog';
+import { SummaryStrip } from './components/SummaryStrip';
+import { resultHealth } from './state/resultHealth';
+import { useConfirm } from './state/useConfirm';
+import { afterLayout } from './state/useAppCommands';
 import type { Bridge } from './bridge/bridge';
 import { IssueList } from './components/IssueList';
 import { RecoveryBanner } from './components/RecoveryBanner';
@@ -61,6 +67,7 @@ import { CurrentView } from './views/CurrentView';
 import type { EngineClient } from './worker/engineClient';
 import type { StudyInputs } from './worker/engineProtocol';
 import { EngineContext, useLiveStudy } from './worker/useEngine';
+import { JobStoreProvider } from './worker/jobStore';
 
 export interface AppProps {
   readonly bridge: Bridge;
@@ -84,13 +91,37 @@ function Shell(props: AppProps) {
   const [view, setView] = useState<ViewId>(props.initialView ?? 'results');
   const project = state.doc?.present ?? null;
   const inputs = useMemo<StudyInputs | null>(() => (project === null ? null : { project, deckFile: state.deckFile }), [project, state.deckFile]);
-  const live = useLiveStudy(inputs, state.issues);
-  const commands = useAppCommands(props.bridge, store, live.snapshot);
+  const live = useLiveStudy(inputs, state.issues, state.documentKey);
+  const confirm = useConfirm();
+  // The printable report (four charts) is mounted only while printing, so edits never re-render it.
+  const [printing, setPrinting] = useState(false);
+  const mountReport = useCallback(async () => {
+    setPrinting(true);
+    await afterLayout();
+  }, []);
+  const unmountReport = useCallback(() => setPrinting(false), []);
+  // Printing from the browser's or the desktop's own menu mounts the report too, before the page is laid out for print.
+  useEffect(() => {
+    const before = () => flushSync(() => setPrinting(true));
+    const after = () => setPrinting(false);
+    window.addEventListener('beforeprint', before);
+    window.addEventListener('afterprint', after);
+    return () => {
+      window.removeEventListener('beforeprint', before);
+      window.removeEventListener('afterprint', after);
+    };
+  }, []);
+  const health = resultHealth(live);
+  const commands = useAppCommands(props.bridge, store, live.snapshot, { health, ask: confirm.ask, mountReport, unmountReport });
   const recovery = useRecovery(props.bridge, store);
   return (
     <StudyContext.Provider value={store}>
+      <JobStoreProvider documentKey={state.documentKey}>
       <div className="app">
         <div className="app-screen">
+          <a className="skip-link" href="#view-panel" data-testid="skip-link">
+            Skip to the view
+          </a>
           <header className="app-header">
             <h1>Blockwise</h1>
             <span className="document-name" data-testid="document-name">
@@ -106,6 +137,7 @@ function Shell(props: AppProps) {
               onCommand={(c) => void commands.run(c)}
               onUnits={(units) => dispatch({ type: 'unitsChosen', units })}
             />
+            <SummaryStrip live={live} units={state.units} />
             <ViewTabs current={view} onSelect={setView} />
           </header>
           {commands.message ? (
@@ -119,13 +151,15 @@ function Shell(props: AppProps) {
           <RecoveryBanner offer={recovery.offer} onRestore={recovery.restore} onDiscard={recovery.discard} />
           {recovery.problem ? <p className="app-message">{recovery.problem}</p> : null}
           <IssueList issues={state.openIssues} testId="open-issues" title="That project could not be opened" showFilePath />
-          <main className="view" data-testid={`view-${view}`}>
+          <main className="view" data-testid={`view-${view}`} id="view-panel" role="tabpanel" aria-labelledby={`tab-${view}`} tabIndex={-1}>
             {project === null ? <p>Opening…</p> : <CurrentView view={view} live={live} onCommand={(c) => void commands.run(c)} {...(props.chartSize ? { chartSize: props.chartSize } : {})} />}
           </main>
         </div>
-        {project !== null && live.snapshot !== null ? <StudyReport project={project} snapshot={live.snapshot} units={state.units} stale={live.stale} /> : null}
+        {printing && project !== null && live.snapshot !== null ? <StudyReport project={project} snapshot={live.snapshot} units={state.units} stale={live.stale} /> : null}
+        <ConfirmDialog question={confirm.pending} onAnswer={confirm.answer} />
         <SafetyNotice />
       </div>
+      </JobStoreProvider>
     </StudyContext.Provider>
   );
 }

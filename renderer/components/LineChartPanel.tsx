@@ -75,7 +75,7 @@ export function LineChartPanel(props: LineChartPanelProps) {
   return (
     <figure className="chart" data-testid={props.testId}>
       <figcaption>{props.title}</figcaption>
-      <LineChart width={size.width} height={size.height} data={props.data as object[]} margin={{ top: 8, right: 24, bottom: 8, left: 16 }}>
+      <LineChart accessibilityLayer={false} role="img" aria-label={props.title} width={size.width} height={size.height} data={props.data as object[]} margin={{ top: 8, right: 24, bottom: 8, left: 16 }}>
         <CartesianGrid strokeDasharray="3 3" />
         <XAxis dataKey={props.xKey} type="number" {...axisTicks(xAxis)} interval={0} tickFormatter={tickText} label={{ value: props.xLabel, position: 'insideBottom', offset: -12 }} />
         <YAxis yAxisId="left" label={{ value: props.yLabel, angle: -90, position: 'insideLeft' }} {...axisTicks(leftAxis)} interval={0} tickFormatter={tickText} width={64} />

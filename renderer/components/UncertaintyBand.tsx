@@ -101,7 +101,7 @@ function BandResult(props: { readonly value: import('../../engine/uncertainty/un
         <figcaption>
           {r.values.difference_kg ? `B - A over the samples (${unit}); green: B burns less` : `Block fuel over the samples (${unit})`}
         </figcaption>
-        <BarChart width={props.width} height={200} data={bins} margin={{ top: 8, right: 24, bottom: 8, left: 16 }}>
+        <BarChart accessibilityLayer={false} role="img" aria-label="Histogram of block fuel B - A" width={props.width} height={200} data={bins} margin={{ top: 8, right: 24, bottom: 8, left: 16 }}>
           <CartesianGrid strokeDasharray="3 3" />
           <XAxis dataKey="label" interval={3} tick={{ fontSize: 11 }} />
           <YAxis allowDecimals={false} width={40} tickFormatter={tickText} label={{ value: 'samples', angle: -90, position: 'insideLeft' }} />

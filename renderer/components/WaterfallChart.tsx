@@ -10,7 +10,7 @@ export function WaterfallChart(props: { readonly rows: readonly WaterfallRow[]; 
   return (
     <figure className="chart" data-testid="chart-breakdown">
       <figcaption>Block fuel B - A by factor ({props.unit}); positive costs fuel</figcaption>
-      <BarChart width={size.width} height={size.height} data={props.rows as WaterfallRow[]} margin={{ top: 8, right: 24, bottom: 8, left: 16 }}>
+      <BarChart accessibilityLayer={false} role="img" aria-label="Block fuel B - A by factor" width={size.width} height={size.height} data={props.rows as WaterfallRow[]} margin={{ top: 8, right: 24, bottom: 8, left: 16 }}>
         <CartesianGrid strokeDasharray="3 3" />
         {/* Every factor keeps its label (recharts would skip some): angled so long names fit. */}
         <XAxis dataKey="name" interval={0} angle={-20} textAnchor="end" height={56} tick={{ fontSize: 11 }} />

@@ -58,6 +58,7 @@ export function studyReducer(state: StudyState, action: StudyAction): StudyState
         ...state,
         doc: startHistory(action.project),
         documentName: action.name,
+        documentKey: state.documentKey + 1,
         deckFile: action.deckFile,
         drafts: {},
         issues: projectIssues(action.project),

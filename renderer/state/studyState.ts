@@ -30,6 +30,8 @@ export interface StudyState {
   /** Null until a project is opened. */
   readonly doc: Undoable<Project> | null;
   readonly documentName: string;
+  /** Counts the documents opened: a new value means the figures on screen belong to another project. */
+  readonly documentKey: number;
   readonly deckFile: DeckFile | null;
   readonly units: UnitSystem;
   /** Rejected field texts by JSON path text (`airframe.weights.maxTakeoff`). */
@@ -47,6 +49,7 @@ export function emptyStudy(): StudyState {
   return {
     doc: null,
     documentName: '',
+    documentKey: 0,
     deckFile: null,
     units: 'customary',
     drafts: {},

@@ -12,6 +12,21 @@ import { openProjectAction } from './documentActions';
 import type { StudyStore } from './studyContext';
 import { undoKeyCommand } from './undoKeys';
 import type { StudySnapshot } from '../worker/engineProtocol';
+import { exportQuestion, type ResultHealth } from './resultHealth';
+
+/** What the commands need to know beyond the store: the figures' health, how to ask, how to mount the report. */
+export interface CommandContext {
+  readonly health: ResultHealth;
+  readonly ask: (text: string, confirmLabel: string) => Promise<boolean>;
+  /** Mounts the printable report, resolves once it has rendered; `done` unmounts it. */
+  readonly mountReport: () => Promise<void>;
+  readonly unmountReport: () => void;
+}
+
+/** Two animation frames: the report mounted by a state change has been laid out. */
+export function afterLayout(): Promise<void> {
+  return new Promise((resolve) => requestAnimationFrame(() => requestAnimationFrame(() => resolve())));
+}
 
 function describe(e: unknown): string {
   return e instanceof Error ? e.message : String(e);
@@ -32,11 +47,25 @@ const MENU_TO_TOOLBAR: Partial<Record<MenuCommand, ToolbarCommand>> = {
   redo: 'redo',
 };
 
-export function useAppCommands(bridge: Bridge, store: StudyStore, snapshot: StudySnapshot | null) {
+export function useAppCommands(bridge: Bridge, store: StudyStore, snapshot: StudySnapshot | null, context: CommandContext) {
   const { state, dispatch } = store;
   const [message, setMessage] = useState<string | null>(null);
-  const latest = useRef({ state, snapshot });
-  latest.current = { state, snapshot };
+  const latest = useRef({ state, snapshot, context });
+  latest.current = { state, snapshot, context };
+
+  /** True when there are no unsaved edits or the user agrees to lose them. */
+  const mayDiscard = useCallback(async (what: string) => {
+    const { state: s, context: c } = latest.current;
+    const dirty = s.doc !== null && s.savedAtStep !== s.doc.past.length;
+    return !dirty || c.ask(`${s.documentName} has unsaved edits. ${what} discards them.`, 'Discard the edits');
+  }, []);
+
+  /** True when the figures are good and current, or the user agrees to export them as they are. */
+  const mayExport = useCallback(async () => {
+    const { state: s, snapshot: snap, context: c } = latest.current;
+    const question = exportQuestion(c.health, snap?.mission ?? null, s.units);
+    return question === null || c.ask(question, 'Export anyway');
+  }, []);
 
   const openDemo = useCallback(async () => {
     const demo = await bridge.loadDemo();
@@ -55,11 +84,13 @@ export function useAppCommands(bridge: Bridge, store: StudyStore, snapshot: Stud
             dispatch({ type: command });
             return;
           case 'open': {
+            if (!(await mayDiscard('Opening another project'))) return;
             const opened = await bridge.openProject();
             if (opened) dispatch(openProjectAction(opened.name, opened.text, s.deckFile));
             return;
           }
           case 'openDemo':
+            if (!(await mayDiscard('Opening the demo study'))) return;
             await openDemo();
             return;
           case 'save':
@@ -80,15 +111,22 @@ export function useAppCommands(bridge: Bridge, store: StudyStore, snapshot: Stud
           }
           case 'exportHistory':
           case 'exportLegs': {
-            if (snap === null) return;
+            if (snap === null || !(await mayExport())) return;
             const history = command === 'exportHistory';
             const saved = await bridge.exportText(history ? historyCsv(snap.mission.history) : legsCsv(snap.mission), `${stem}-${history ? 'time-history' : 'legs'}.csv`, 'text/csv');
             if (saved) setMessage(`Exported ${saved.path ?? saved.name}.`);
             return;
           }
           case 'print': {
-            const saved = await bridge.printReport(`${stem}-report.pdf`);
-            if (saved) setMessage(`Report written to ${saved.path ?? saved.name}.`);
+            if (snap === null || !(await mayExport())) return;
+            const c = latest.current.context;
+            await c.mountReport();
+            try {
+              const saved = await bridge.printReport(`${stem}-report.pdf`);
+              if (saved) setMessage(`Report written to ${saved.path ?? saved.name}.`);
+            } finally {
+              c.unmountReport();
+            }
             return;
           }
         }
@@ -96,7 +134,7 @@ export function useAppCommands(bridge: Bridge, store: StudyStore, snapshot: Stud
         setMessage(describe(e));
       }
     },
-    [bridge, dispatch, openDemo],
+    [bridge, dispatch, openDemo, mayDiscard, mayExport],
   );
 
   // First document: the one the app was started with, else the demo.

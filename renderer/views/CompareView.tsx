@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { usePersistentValue } from '../worker/jobStore';
 import { displayUnit, formatQuantity } from '../../engine/units/quantity';
 import { breakdownWaterfall, FACTOR_LABEL, payloadRangeRows } from '../charts/compareSeries';
 import { ChoiceField } from '../components/ChoiceField';
@@ -9,7 +9,8 @@ import { UncertaintyBand } from '../components/UncertaintyBand';
 import { WaterfallChart } from '../components/WaterfallChart';
 import { machText as mach, ratingLabel } from '../state/displayText';
 import { useStudy } from '../state/studyContext';
-import { useEngineJob, type LiveStudy } from '../worker/useEngine';
+import { useEngineJob, useLiveRerun, type LiveStudy } from '../worker/useEngine';
+import { StaleMark } from '../components/StaleMark';
 
 
 /** Inlet A against B on block fuel, side by side, with the breakdown of the difference. */
@@ -17,10 +18,14 @@ function InletComparisonPanel(props: { readonly chartSize?: ChartSize }) {
   const { state } = useStudy();
   const project = state.doc!.present;
   const names = project.inlets.map((i) => i.name);
-  const [nameA, setA] = useState(names[0] ?? '');
-  const [nameB, setB] = useState(names[1] ?? names[0] ?? '');
-  const compare = useEngineJob<'compare'>();
+  const [chosenA, setA] = usePersistentValue('compare.nameA', names[0] ?? '');
+  const [chosenB, setB] = usePersistentValue('compare.nameB', names[1] ?? names[0] ?? '');
+  // A renamed or removed design falls back to the first ones.
+  const nameA = names.includes(chosenA) ? chosenA : (names[0] ?? '');
+  const nameB = names.includes(chosenB) ? chosenB : (names[1] ?? names[0] ?? '');
+  const compare = useEngineJob<'compare'>({ persistKey: 'compare' });
   const inputs = { project, deckFile: state.deckFile };
+  const outdated = useLiveRerun(compare, { kind: 'compare', ...inputs, nameA: compare.request?.nameA ?? nameA, nameB: compare.request?.nameB ?? nameB });
   const u = state.units;
   const size = props.chartSize ? { size: props.chartSize } : {};
   const c = compare.state;
@@ -37,6 +42,7 @@ function InletComparisonPanel(props: { readonly chartSize?: ChartSize }) {
       </div>
       {nameA === nameB ? <p>Choose two different designs.</p> : null}
       <JobProgress state={c} onCancel={compare.cancel} testId="compare-progress" />
+      <StaleMark stale={outdated} running={c.status === 'running'} />
       {c.status === 'failed' ? <FailureNotice failure={c.failure} testId="compare-failure" /> : null}
       {c.status === 'done' ? (
         <>
@@ -132,8 +138,9 @@ function InletComparisonPanel(props: { readonly chartSize?: ChartSize }) {
 function PayloadRangePanel(props: { readonly chartSize?: ChartSize }) {
   const { state } = useStudy();
   const project = state.doc!.present;
-  const payloadRange = useEngineJob<'payloadRange'>();
+  const payloadRange = useEngineJob<'payloadRange'>({ persistKey: 'payloadRange' });
   const inputs = { project, deckFile: state.deckFile };
+  const outdated = useLiveRerun(payloadRange, { kind: 'payloadRange', ...inputs });
   const u = state.units;
   const size = props.chartSize ? { size: props.chartSize } : {};
   const pr = payloadRange.state;
@@ -144,6 +151,7 @@ function PayloadRangePanel(props: { readonly chartSize?: ChartSize }) {
         Fly the payload-range diagram
       </button>
       <JobProgress state={pr} onCancel={payloadRange.cancel} testId="payload-range-progress" />
+      <StaleMark stale={outdated} running={pr.status === 'running'} />
       {pr.status === 'failed' ? <FailureNotice failure={pr.failure} testId="payload-range-failure" /> : null}
       {pr.status === 'done' ? (
         <>
@@ -169,8 +177,9 @@ function PayloadRangePanel(props: { readonly chartSize?: ChartSize }) {
 function TradeFactorsPanel() {
   const { state } = useStudy();
   const project = state.doc!.present;
-  const trade = useEngineJob<'tradeFactors'>();
+  const trade = useEngineJob<'tradeFactors'>({ persistKey: 'tradeFactors' });
   const inputs = { project, deckFile: state.deckFile };
+  const outdated = useLiveRerun(trade, { kind: 'tradeFactors', ...inputs });
   const u = state.units;
   const t = trade.state;
   return (
@@ -180,6 +189,7 @@ function TradeFactorsPanel() {
         Compute trade factors
       </button>
       <JobProgress state={t} onCancel={trade.cancel} testId="trade-progress" />
+      <StaleMark stale={outdated} running={t.status === 'running'} />
       {t.status === 'failed' ? <FailureNotice failure={t.failure} testId="trade-failure" /> : null}
       {t.status === 'done' ? (
         <>

@@ -1,4 +1,5 @@
-import { useEffect, useMemo, useState } from 'react';
+import { useEffect, useMemo } from 'react';
+import { usePersistentValue } from '../worker/jobStore';
 import { RATING_NAMES, type RatingName } from '../../engine/propulsion/propulsionModel';
 import { crossoverSeries } from '../charts/crossoverSeries';
 import { ChoiceField } from '../components/ChoiceField';
@@ -19,11 +20,11 @@ export function CrossoverView(props: { readonly live: LiveStudy; readonly chartS
   const { state } = useStudy();
   const project = state.doc!.present;
   const firstCruise = project.mission.legs.find((l) => l.kind === 'cruise');
-  const [altitude_m, setAltitude] = useState(firstCruise?.kind === 'cruise' ? firstCruise.altitude : 35000 * FT);
-  const [mass_kg, setMass] = useState(0.9 * project.airframe.weights.maxTakeoff);
-  const [rating, setRating] = useState<RatingName>('maxCruise');
-  const [allInlets, setAllInlets] = useState(false);
-  const job = useEngineJob<'crossover'>({ cancelOnRestart: false });
+  const [altitude_m, setAltitude] = usePersistentValue('crossover.altitude_m', firstCruise?.kind === 'cruise' ? firstCruise.altitude : 35000 * FT);
+  const [mass_kg, setMass] = usePersistentValue('crossover.mass_kg', 0.9 * project.airframe.weights.maxTakeoff);
+  const [rating, setRating] = usePersistentValue<RatingName>('crossover.rating', 'maxCruise');
+  const [allInlets, setAllInlets] = usePersistentValue('crossover.allInlets', false);
+  const job = useEngineJob<'crossover'>({ cancelOnRestart: false, persistKey: 'crossover' });
   const query = useMemo<CrossoverRequestQuery>(() => ({ altitude_m, mass_kg, rating, isaDev_K: project.mission.isaDeviation, allInlets }), [altitude_m, mass_kg, rating, allInlets, project.mission.isaDeviation]);
   const { start } = job;
   useEffect(() => {

@@ -1,3 +1,5 @@
+import { useMemo } from 'react';
+import { healthClass, resultHealth } from '../state/resultHealth';
 import { displayUnit, formatQuantity } from '../../engine/units/quantity';
 import { profileSeries } from '../charts/profileSeries';
 import { CautionList } from '../components/CautionList';
@@ -23,6 +25,8 @@ export function ResultsView(props: { readonly live: LiveStudy; readonly chartSiz
   const { state, dispatch } = useStudy();
   const { snapshot, failure, stale, running } = props.live;
   const u = state.units;
+  // Chart rows are derived once per result and unit system, not on every render.
+  const rows = useMemo(() => (snapshot === null ? [] : profileSeries(snapshot.mission.history, u)), [snapshot, u]);
   if (snapshot === null) {
     return (
       <section>
@@ -33,7 +37,6 @@ export function ResultsView(props: { readonly live: LiveStudy; readonly chartSiz
     );
   }
   const m = snapshot.mission;
-  const rows = profileSeries(m.history, u);
   const h = state.highlight;
   const highlightX = h?.time_s != null ? distanceAtTime(rows, h.time_s) : null;
   const marks = highlightX === null ? [] : [{ x: highlightX, label: 'caution' }];
@@ -46,7 +49,8 @@ export function ResultsView(props: { readonly live: LiveStudy; readonly chartSiz
         Mission status: {statusLabel(m.status)}
         {m.status !== 'ok' ? ` — ${missionStatusText(m, u)}` : ''} (inlet {snapshot.inletName}; deck {deckTitleText(snapshot.deck.title, snapshot.deck.parametric)})
       </p>
-      <HeadlineFigures result={m} units={u} />
+      <HeadlineFigures result={m} units={u} stale={stale} />
+      <div className={`results-body ${healthClass(resultHealth(props.live))}`} data-testid="results-body">
       <UncertaintyBand designs={[snapshot.inletName]} testId="results-uncertainty" {...(props.chartSize ? { chartSize: props.chartSize } : {})} />
       <div className="chart-row">
         <LineChartPanel
@@ -86,6 +90,7 @@ export function ResultsView(props: { readonly live: LiveStudy; readonly chartSiz
         </p>
       ) : null}
       <p className="small">Reserve fuel {formatQuantity(m.reserves.total_kg, 'mass', u)}: contingency, alternate, final reserve and extra as the reserve preset sets them.</p>
+      </div>
     </section>
   );
 }

@@ -1,11 +1,12 @@
 /**
- * React hooks over the engine client: the live study (re-flown on every edit,
- * debounced, latest wins, tagged with a revision) and long jobs with
+ * React hooks over the engine client: the live study (re-flown on every
+ * committed edit, latest wins, tagged with a revision) and long jobs with
  * progress and cancel.
  */
 import { createContext, useCallback, useContext, useEffect, useRef, useState } from 'react';
 import type { ProjectIssue } from '../../engine/project/projectIssue';
 import type { EngineClient, EngineRun } from './engineClient';
+import { useJobStore, type JobStore } from './jobStore';
 import type { EngineFailure, EngineReplies, EngineRequest, EngineRequestKind, StudyInputs, StudySnapshot } from './engineProtocol';
 
 export const EngineContext = createContext<EngineClient | null>(null);
@@ -19,11 +20,8 @@ export function useEngineClient(): EngineClient {
 
 const NO_ISSUES: readonly ProjectIssue[] = [];
 
-/** Wait after an edit before re-flying (ms). */
-export const REFLY_DELAY_MS = 120;
-
 export interface LiveStudy {
-  /** The last good snapshot and the revision it was computed for. */
+  /** The last good snapshot of the open document and the revision it was computed for. */
   readonly snapshot: StudySnapshot | null;
   readonly snapshotRevision: number;
   /** Revision of the inputs on screen now. */
@@ -35,21 +33,30 @@ export interface LiveStudy {
   readonly failure: EngineFailure | null;
 }
 
+interface LiveState {
+  readonly snapshot: StudySnapshot | null;
+  readonly snapshotRevision: number;
+  readonly failure: EngineFailure | null;
+  readonly running: boolean;
+  readonly documentKey: number;
+}
+
 /**
- * Re-flies the study whenever `inputs` changes (by identity). With
- * `blockingIssues` (rules the project breaks), nothing is flown: the issues
- * become the failure and the last result stays, marked stale.
+ * Re-flies the study whenever `inputs` changes (by identity), at once: edits
+ * are committed (a field on blur or Enter), and the client runs only the
+ * newest study request. With `blockingIssues` (rules the project breaks),
+ * nothing is flown: the issues become the failure and the last result stays,
+ * marked stale. A new `documentKey` (another project opened) drops the last
+ * result, so no figure of the previous project is shown.
  */
-export function useLiveStudy(inputs: StudyInputs | null, blockingIssues: readonly ProjectIssue[] = NO_ISSUES): LiveStudy {
+export function useLiveStudy(inputs: StudyInputs | null, blockingIssues: readonly ProjectIssue[] = NO_ISSUES, documentKey = 0): LiveStudy {
   const client = useEngineClient();
   const revisionRef = useRef(0);
   const [revision, setRevision] = useState(0);
-  const [state, setState] = useState<{ snapshot: StudySnapshot | null; snapshotRevision: number; failure: EngineFailure | null; running: boolean }>({
-    snapshot: null,
-    snapshotRevision: -1,
-    failure: null,
-    running: false,
-  });
+  const [state, setState] = useState<LiveState>({ snapshot: null, snapshotRevision: -1, failure: null, running: false, documentKey });
+  // Another document: its predecessor's figures go at once (render-time reset, no stale frame).
+  const current = state.documentKey === documentKey ? state : { snapshot: null, snapshotRevision: -1, failure: null, running: inputs !== null, documentKey };
+  if (current !== state) setState(current);
 
   useEffect(() => {
     if (inputs === null) return undefined;
@@ -60,25 +67,27 @@ export function useLiveStudy(inputs: StudyInputs | null, blockingIssues: readonl
       return undefined;
     }
     setState((s) => ({ ...s, running: true }));
-    let run: EngineRun<'study'> | null = null;
-    const timer = setTimeout(() => {
-      run = client.run({ kind: 'study', ...inputs });
-      void run.outcome.then((outcome) => {
-        if (outcome === 'cancelled' || rev !== revisionRef.current) return;
-        setState((s) =>
-          outcome.ok
-            ? { snapshot: outcome.value, snapshotRevision: rev, failure: null, running: false }
+    const run: EngineRun<'study'> = client.run({ kind: 'study', ...inputs });
+    void run.outcome.then((outcome) => {
+      if (outcome === 'cancelled' || rev !== revisionRef.current) return;
+      setState((s) =>
+        s.documentKey !== documentKey
+          ? s
+          : outcome.ok
+            ? { ...s, snapshot: outcome.value, snapshotRevision: rev, failure: null, running: false }
             : { ...s, failure: outcome.error, running: false },
-        );
-      });
-    }, REFLY_DELAY_MS);
-    return () => clearTimeout(timer);
-  }, [client, inputs, blockingIssues]);
+      );
+    });
+    return undefined;
+  }, [client, inputs, blockingIssues, documentKey]);
 
   return {
-    ...state,
+    snapshot: current.snapshot,
+    snapshotRevision: current.snapshotRevision,
+    failure: current.failure,
+    running: current.running,
     revision,
-    stale: state.snapshot !== null && state.snapshotRevision !== revision,
+    stale: current.snapshot !== null && current.snapshotRevision !== revision,
   };
 }
 
@@ -93,6 +102,8 @@ export interface EngineJob<K extends EngineRequestKind> {
   readonly state: JobState<K>;
   /** The value of the last run that finished, kept while a newer one runs. */
   readonly lastValue: EngineReplies[K] | null;
+  /** The request of the last start (kept in the job store; null for a view-local job). */
+  readonly request: Extract<EngineRequest, { kind: K }> | null;
   start(request: Extract<EngineRequest, { kind: K }>): void;
   cancel(): void;
 }
@@ -102,7 +113,64 @@ export interface EngineJob<K extends EngineRequestKind> {
  * compare, crossover). A new start cancels the run before it, or with
  * `cancelOnRestart: false` leaves it to the client to drop (live kinds).
  */
-export function useEngineJob<K extends EngineRequestKind>(options: { readonly cancelOnRestart?: boolean } = {}): EngineJob<K> {
+export function useEngineJob<K extends EngineRequestKind>(options: { readonly cancelOnRestart?: boolean; readonly persistKey?: string } = {}): EngineJob<K> {
+  const store = useJobStore();
+  const local = useLocalEngineJob<K>(options);
+  const persisted = useStoredEngineJob<K>(options, store, options.persistKey);
+  return persisted ?? local;
+}
+
+/**
+ * The job kept in the app's job store under `key`: it survives the view's
+ * unmounting (a tab switch) and is not cancelled by it.
+ */
+function useStoredEngineJob<K extends EngineRequestKind>(options: { readonly cancelOnRestart?: boolean }, store: JobStore | null, key: string | undefined): EngineJob<K> | null {
+  const cancelOnRestart = options.cancelOnRestart ?? true;
+  const client = useEngineClient();
+  const cancel = useCallback(() => {
+    if (store === null || key === undefined) return;
+    const s = store.slot(key);
+    s.run?.cancel();
+    s.run = null;
+  }, [store, key]);
+  const start = useCallback(
+    (request: Extract<EngineRequest, { kind: K }>) => {
+      if (store === null || key === undefined) return;
+      const s = store.slot(key);
+      if (cancelOnRestart) s.run?.cancel();
+      s.state = { status: 'running', done: 0, total: 0 };
+      s.request = request;
+      const run = client.run<K>(request, (done, total) => {
+        if (s.run === run) {
+          s.state = { status: 'running', done, total };
+          store.changed();
+        }
+      });
+      s.run = run as EngineRun<EngineRequestKind>;
+      store.changed();
+      void run.outcome.then((outcome) => {
+        if (outcome === 'cancelled') {
+          if (s.run === null || s.run === run) {
+            s.state = { status: 'cancelled' };
+            store.changed();
+          }
+          return;
+        }
+        if (s.run !== run) return;
+        s.run = null;
+        if (outcome.ok) s.lastValue = outcome.value;
+        s.state = outcome.ok ? { status: 'done', value: outcome.value } : { status: 'failed', failure: outcome.error };
+        store.changed();
+      });
+    },
+    [client, cancelOnRestart, store, key],
+  );
+  if (store === null || key === undefined) return null;
+  const s = store.slot(key);
+  return { state: s.state as JobState<K>, lastValue: s.lastValue as EngineReplies[K] | null, request: s.request as Extract<EngineRequest, { kind: K }> | null, start, cancel };
+}
+
+function useLocalEngineJob<K extends EngineRequestKind>(options: { readonly cancelOnRestart?: boolean }): EngineJob<K> {
   const cancelOnRestart = options.cancelOnRestart ?? true;
   const client = useEngineClient();
   const [state, setState] = useState<JobState<K>>({ status: 'idle' });
@@ -137,5 +205,22 @@ export function useEngineJob<K extends EngineRequestKind>(options: { readonly ca
   );
 
   useEffect(() => () => runRef.current?.cancel(), []);
-  return { state, lastValue, start, cancel };
+  return { state, lastValue, request: null, start, cancel };
+}
+
+/**
+ * Keeps an analysis live: once it has been run, every edit of the project (or
+ * deck) re-runs it with the newest inputs, with its progress shown; until the
+ * new result arrives the last one is shown marked out of date. Returns true
+ * while the shown value belongs to older inputs.
+ */
+export function useLiveRerun<K extends EngineRequestKind>(job: EngineJob<K>, request: Extract<EngineRequest, { kind: K }>): boolean {
+  const previous = job.request;
+  const outdated = previous !== null && (previous.project !== request.project || previous.deckFile !== request.deckFile);
+  const { start } = job;
+  useEffect(() => {
+    if (outdated) start(request);
+    // Only a changed project or deck starts a run (the request object itself is rebuilt every render).
+  }, [outdated, request.project, request.deckFile, start]);
+  return outdated || (job.state.status === 'running' && job.lastValue !== null);
 }

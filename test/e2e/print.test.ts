@@ -32,7 +32,19 @@ describe('printing', () => {
     });
     expect(printRules).toBeGreaterThan(0);
     const report = page.getByTestId('print-report');
-    expect(await report.isVisible()).toBe(false);
+    // The report is mounted only to print: absent on screen, present while the print command prints.
+    expect(await report.count()).toBe(0);
+    await page.evaluate(() => {
+      const w = window as unknown as { printedWithReport: boolean[] };
+      w.printedWithReport = [];
+      window.print = () => void w.printedWithReport.push(document.querySelector('[data-testid="print-report"]') !== null);
+    });
+    await page.getByTestId('command-print').click();
+    await page.waitForFunction(() => (window as unknown as { printedWithReport: boolean[] }).printedWithReport.length === 1);
+    expect(await page.evaluate(() => (window as unknown as { printedWithReport: boolean[] }).printedWithReport)).toEqual([true]);
+    await report.waitFor({ state: 'detached' });
+    // Printing from the browser's own menu (beforeprint) mounts it too.
+    await page.evaluate(() => window.dispatchEvent(new Event('beforeprint')));
     await page.emulateMedia({ media: 'print' });
     expect(await report.isVisible()).toBe(true);
     const notice = report.getByTestId('report-notice');

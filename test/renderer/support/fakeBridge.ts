@@ -22,6 +22,8 @@ export interface FakeBridge extends Bridge {
   readonly exports: { text: string; name: string; mime: string }[];
   readonly saves: { text: string; name: string }[];
   readonly prints: string[];
+  /** The printable report's text when printReport was called (null: not mounted). */
+  printedReportText: string | null;
   nextDeck: OpenedDeck | null;
   nextProject: OpenedProject | null;
   recovery: RecoveryOffer | null;
@@ -42,6 +44,7 @@ export function createFakeBridge(): FakeBridge {
     exports: [],
     saves: [],
     prints: [],
+    printedReportText: null,
     nextDeck: null,
     nextProject: null,
     recovery: null,
@@ -66,6 +69,8 @@ export function createFakeBridge(): FakeBridge {
     },
     printReport: async (name) => {
       bridge.prints.push(name);
+      // What was on the page when it printed (the report is mounted only to print).
+      bridge.printedReportText = document.querySelector('[data-testid="print-report"]')?.textContent ?? null;
       return { name };
     },
     recentFiles: async () => [],

@@ -3,7 +3,10 @@ import type { ReactNode } from 'react';
 import { describe, expect, it } from 'vitest';
 import type { EngineClient, EngineRun } from '../../../renderer/worker/engineClient';
 import type { EngineOutcome, EngineRequest, EngineRequestKind, StudyInputs, StudySnapshot } from '../../../renderer/worker/engineProtocol';
-import { EngineContext, REFLY_DELAY_MS, useEngineJob, useLiveStudy } from '../../../renderer/worker/useEngine';
+import { EngineContext, useEngineJob, useLiveStudy } from '../../../renderer/worker/useEngine';
+
+/** Long enough for an effect and a microtask to run (the study is flown at once, with no delay). */
+const SETTLE_MS = 50;
 import { demoState } from '../support/studyHarness';
 
 interface Pending {
@@ -49,17 +52,15 @@ function inputs(): StudyInputs {
 }
 
 describe('useLiveStudy', () => {
-  it('waits a little after an edit, flies once for a burst of edits, and tags the result with its revision', async () => {
+  it('flies at once on every committed edit (no delay; the client keeps only the newest) and tags the result with its revision', async () => {
     const client = manualClient();
     const first = inputs();
     const { result, rerender } = renderHook(({ i }) => useLiveStudy(i), { wrapper: wrapper(client), initialProps: { i: first } });
-    expect(client.runs).toHaveLength(0);
+    expect(client.runs).toHaveLength(1);
     rerender({ i: { ...first } });
-    rerender({ i: { ...first } });
-    await waitFor(() => expect(client.runs).toHaveLength(1), { timeout: 15000 });
-    expect(REFLY_DELAY_MS).toBeGreaterThan(0);
+    expect(client.runs).toHaveLength(2);
     expect(result.current.running).toBe(true);
-    await act(async () => client.runs[0]!.resolve({ ok: true, value: snapshot(1) }));
+    await act(async () => client.runs[1]!.resolve({ ok: true, value: snapshot(1) }));
     expect(result.current.snapshot).toEqual(snapshot(1));
     expect(result.current.snapshotRevision).toBe(result.current.revision);
     expect(result.current.stale).toBe(false);
@@ -96,7 +97,7 @@ describe('useLiveStudy', () => {
     await waitFor(() => expect(client.runs).toHaveLength(1), { timeout: 15000 });
     await act(async () => client.runs[0]!.resolve({ ok: true, value: snapshot(1) }));
     rerender({ i: { ...first }, b: issues });
-    await new Promise((r) => setTimeout(r, REFLY_DELAY_MS * 2));
+    await new Promise((r) => setTimeout(r, SETTLE_MS));
     expect(client.runs).toHaveLength(1);
     expect(result.current.failure).toEqual({ kind: 'project', issues });
     expect(result.current.stale).toBe(true);
@@ -106,9 +107,24 @@ describe('useLiveStudy', () => {
   it('does nothing without a project', async () => {
     const client = manualClient();
     const { result } = renderHook(() => useLiveStudy(null), { wrapper: wrapper(client) });
-    await new Promise((r) => setTimeout(r, REFLY_DELAY_MS * 2));
+    await new Promise((r) => setTimeout(r, SETTLE_MS));
     expect(client.runs).toHaveLength(0);
     expect(result.current.snapshot).toBeNull();
+  });
+
+  it('drops the figures of the previous document as soon as another one is opened', async () => {
+    const client = manualClient();
+    const first = inputs();
+    const { result, rerender } = renderHook(({ i, k }) => useLiveStudy(i, [], k), { wrapper: wrapper(client), initialProps: { i: first, k: 1 } });
+    await act(async () => client.runs[0]!.resolve({ ok: true, value: snapshot(1) }));
+    expect(result.current.snapshot).toEqual(snapshot(1));
+    rerender({ i: { ...first }, k: 2 });
+    expect(result.current.snapshot).toBeNull();
+    // a late reply for the old document is dropped
+    await act(async () => client.runs[0]!.resolve({ ok: true, value: snapshot(9) }));
+    expect(result.current.snapshot).toBeNull();
+    await act(async () => client.runs[client.runs.length - 1]!.resolve({ ok: true, value: snapshot(2) }));
+    expect(result.current.snapshot).toEqual(snapshot(2));
   });
 });
 
