@@ -53,6 +53,25 @@ describe('blockwise crossover', () => {
     for (const line of SAFETY_NOTICE_LINES) expect(r.out).toContain(line);
   }, LONG);
 
+  it('crossover text and JSON give the level-flight band inside the limits and say which binds', async () => {
+    // Low limit = highest of stall, buffet onset (1 g) and the low crossover; high = lowest of the high crossover,
+    // MMO and the Mach of VMO (docs/analyses.md).
+    const json = await run('crossover', DEMO, '--altitude', '37000 ft', '--weight', '32850 lb', '--json');
+    expect(json.code).toBe(0);
+    const v = JSON.parse(json.out) as Json;
+    const low = v.lowSpeedLimit as { mach: number; source: string };
+    const high = v.highSpeedLimit as { mach: number; source: string };
+    const candidatesLow = [v.stallMach, v.buffetOnsetMach, v.lowMach].filter((m): m is number => typeof m === 'number');
+    expectClose(low.mach, Math.max(...candidatesLow), { abs: 1e-12 }, 'highest of stall, buffet onset, low crossover');
+    const candidatesHigh = [v.highMach, v.speedLimitMach].filter((m): m is number => typeof m === 'number');
+    expectClose(high.mach, Math.min(...candidatesHigh), { abs: 1e-12 }, 'lowest of high crossover and MMO/VMO');
+    expect(['stall', 'buffetOnset', 'crossover']).toContain(low.source);
+    expect(['crossover', 'mmo', 'vmo']).toContain(high.source);
+    const text = await run('crossover', DEMO, '--altitude', '37000 ft', '--weight', '32850 lb');
+    expect(text.out).toMatch(/low-speed limit +M \S+ \((stall|buffet onset|thrust-drag crossover)/);
+    expect(text.out).toMatch(/high-speed limit +M \S+ \((thrust-drag crossover|MMO|VMO)/);
+  });
+
   it('crossover refuses bad arguments with exit 2 and a message naming the option', async () => {
     const missing = await run('crossover', DEMO, '--weight', '31000 lb');
     expect(missing.code).toBe(2);
@@ -83,6 +102,19 @@ describe('blockwise envelope and range-speeds', () => {
     // 100 ft/min service, 300 ft/min cruise ceilings: common practice
     expectClose(j.ceilings[2]!.climbRate_m_s, (300 * FT) / 60, { rel: 1e-12 }, '300 ft/min, common practice');
     for (const c of j.ceilings) expectClose(c.climbRateAtCeiling_m_s, c.climbRate_m_s, { abs: 1e-3 }, 'ceiling definition');
+  }, LONG);
+
+  it('range-speeds gives the optimum altitude with its limits and the one that binds', async () => {
+    const r = await run('range-speeds', DEMO, '--altitude', '37000 ft', '--weight', '13000 kg', '--json');
+    expect(r.code).toBe(0);
+    const o = (JSON.parse(r.out) as Json).optimumAltitude as Json;
+    const limits = [o.unconstrainedAltitude_m, o.cruiseCeilingAltitude_m, o.buffetLimitAltitude_m].filter((h): h is number => typeof h === 'number');
+    expectClose(o.altitude_m as number, Math.min(...limits), { abs: 1e-9 }, 'optimum = lowest of the best SR and the two limit altitudes');
+    expect(['specificRange', 'cruiseCeiling', 'buffetMargin']).toContain(o.binding);
+    const text = await run('range-speeds', DEMO, '--altitude', '37000 ft', '--weight', '13000 kg');
+    expect(text.out).toMatch(/optimum altitude .* set by the/);
+    expect(text.out).toMatch(/cruise ceiling /);
+    expect(text.out).toMatch(/buffet-margin limit /);
   }, LONG);
 
   it('range-speeds --json puts the long-range Mach above the maximum-range Mach', async () => {

@@ -92,6 +92,24 @@ describe('blockwise fly <demo> --json', () => {
     const legFuel = legs.filter((l) => l.kind !== 'reserve').reduce((s, l) => s + l.fuel_kg, 0);
     expectClose(legFuel, demo.blockFuel_kg as number, { rel: 1e-9 }, 'block fuel is the sum of the mission legs');
   });
+
+  it('fly --json says what the distances measure and shows every reserve allowance as a leg', () => {
+    // The demo flies over the ground (fixtures/demo/demo.blockwise.json distanceBasis "ground").
+    expect(demo.distanceBasis).toBe('ground');
+    expect(demo.distanceBasisNote).toMatch(/over the ground/);
+    expectClose(demo.groundDistance_m as number, 3000 * NMI, { abs: 1 }, 'the range is a ground distance');
+    // ICAO Annex 6 alternate fuel: missed approach at the destination, the flight, approach and landing (reserveRules.ts).
+    const names = (demo.legs as { kind: string; name: string; fuel_kg: number }[]).filter((l) => l.kind === 'reserve');
+    expect(names.map((l) => l.name.replace(/ \(.*$/, ''))).toEqual([
+      'reserve: contingency',
+      'reserve: missed approach at the destination',
+      'reserve: alternate',
+      'reserve: approach and landing at the alternate',
+      'reserve: final reserve hold',
+    ]);
+    const r = demo.reserves as Record<string, number>;
+    expectClose(r.alternate_kg!, names.slice(1, 4).reduce((t, l) => t + l.fuel_kg, 0), { rel: 1e-12 }, 'alternate fuel = its three legs');
+  });
 });
 
 describe('blockwise fly text output', () => {
@@ -102,6 +120,8 @@ describe('blockwise fly text output', () => {
       expect(r.out, text).toContain(text);
     }
     for (const line of SAFETY_NOTICE_LINES) expect(r.out).toContain(line);
+    expect(r.out).toContain('Distances: over the ground');
+    expect(r.out).toContain('missed approach');
   });
 });
 
