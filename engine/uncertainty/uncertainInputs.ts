@@ -205,16 +205,16 @@ export function applySample(project: Project, inputs: readonly UncertainInput[],
           ...p,
           inlets: p.inlets.map((inlet) => {
             if (!appliesTo(input, inlet)) return inlet;
-            const shift = (f: number): number => {
+            const shift = (what: string) => (f: number): number => {
               const g = f + v;
-              if (g < 0 || g > 1) held.push(`lip suction of "${inlet.name}" ${g.toFixed(3)} held at ${g < 0 ? 0 : 1}`);
+              if (g < 0 || g > 1) held.push(`${what} "${inlet.name}" ${g.toFixed(3)} held at ${g < 0 ? 0 : 1}`);
               return Math.min(1, Math.max(0, g));
             };
-            if (inlet.lipSuction === undefined && inlet.lipSuctionFactor !== undefined) return { ...inlet, lipSuctionFactor: shift(inlet.lipSuctionFactor) };
+            if (inlet.lipSuction === undefined && inlet.lipSuctionFactor !== undefined) return { ...inlet, lipSuctionFactor: shift('lip suction of')(inlet.lipSuctionFactor) };
             // A table, or the rounded-pitot default (made explicit): every value shifted.
             const table = lipSuctionOf(inlet).lipSuction;
             if (table === undefined || table.kind !== 'table') return inlet;
-            return { ...inlet, lipSuction: { kind: 'table' as const, mach: [...table.mach], massFlowRatio: [...table.massFlowRatio], factor: table.factor.map((row) => row.map(shift)) } };
+            return { ...inlet, lipSuction: { kind: 'table' as const, mach: [...table.mach], massFlowRatio: [...table.massFlowRatio], factor: table.factor.map((row) => row.map(shift('some cells of the lip-suction table of'))) } };
           }),
         };
         return;

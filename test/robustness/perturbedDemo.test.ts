@@ -186,6 +186,8 @@ function engineProject(v: EngineVariant): string {
     fanFaceArea: `${v.inlet.fanFace_m2} m2`,
     diffuserLossCoefficient: v.inlet.diffuserLoss,
   };
+  // A constant lip suction replaces the demo's table form (an inlet gives one or the other).
+  delete doc.inlets[0].lipSuction;
   doc.inlets[0].lipSuctionFactor = v.inlet.lip;
   doc.engine.installation = {
     bleed: v.bleed.kind === 'coreFraction' ? { kind: 'coreFraction', fraction: `${v.bleed.pct} %` } : { kind: 'massFlow', massFlow: `${v.bleed.kg_s} kg/s`, coreFlowFraction: v.bleed.core },
