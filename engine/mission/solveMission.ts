@@ -277,6 +277,9 @@ function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult
 
   if (distanceBasis(input) === 'stillAir') appendCaution(ctx.log, at(0, legName(0)), stillAirCaution(input), 0);
 
+  // The reserves are flown from the landing state; when the mission did not succeed and that flight would pass below
+  // zero-fuel mass, its rows are left out (the breakdown still says what the reserve needs): no row shows negative fuel.
+  const reservesShown = status === 'ok' || reserves.rows.every((row) => row.endMass_kg >= zfw);
   const cautions: Caution[] = [...ctx.log.cautions.values()].sort((a, b) => (a.time_s ?? 0) - (b.time_s ?? 0));
   return {
     status,
@@ -296,7 +299,7 @@ function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult
     airDistance_m: trip.end[S_AIR],
     groundDistance_m: trip.end[S_GROUND],
     distanceBasis: distanceBasis(input),
-    legs: [...trip.rows, ...reserves.rows],
+    legs: [...trip.rows, ...(reservesShown ? reserves.rows : [])],
     history: buildTimeHistory(ctx.log),
     cautions,
     iterations,
