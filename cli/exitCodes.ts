@@ -5,8 +5,7 @@
  * of the program itself (70 is EX_SOFTWARE of BSD's sysexits.h, common
  * practice for an internal error).
  */
-import { missionStatusClass, type MissionStatusClass } from '../engine/mission/missionStatus';
-import type { MissionStatus } from '../engine/mission/missionTypes';
+import { type MissionStatus, missionStatusClass, type MissionStatusClass } from '../engine/mission';
 
 export const EXIT_OK = 0;
 /** A file cannot be read or is not valid (project, deck, design file); each problem on stderr. */

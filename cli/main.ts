@@ -1,4 +1,4 @@
-import { SAFETY_NOTICE } from '../engine/core/notice';
+import { SAFETY_NOTICE } from '../engine/core';
 import { escapeControlCharacters } from '../hostio/terminalText';
 import { EXIT_INTERNAL, EXIT_OK, EXIT_USAGE } from './exitCodes';
 import { parseVerbArgs, UsageError, type CliIo, type Verb } from './verb';

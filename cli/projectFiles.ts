@@ -6,15 +6,11 @@
  * file's folder.
  */
 import { dirname, resolve } from 'node:path';
-import { err, ok, type Result } from '../engine/core/result';
+import { err, ok, type Result } from '../engine/core';
 import { readTextFile } from '../hostio/textFile';
-import type { MissionInput } from '../engine/mission/missionTypes';
-import type { BuildOptions } from '../engine/project/buildMissionInput';
-import { deckReference } from '../engine/project/projectDeck';
-import { makeIssue, type ProjectIssue } from '../engine/project/projectIssue';
-import type { Project } from '../engine/project/projectSchema';
-import { parseProject } from '../engine/project/parseProject';
-import type { EngineDeck } from '../engine/propulsion/engineDeck';
+import type { MissionInput } from '../engine/mission';
+import { type BuildOptions, deckReference, makeIssue, parseProject, type Project, type ProjectIssue } from '../engine/project';
+import type { EngineDeck } from '../engine/propulsion';
 import { cannotReadMessage, prepareStudy, type DeckFileText, type Study } from '../engine/study';
 
 export interface LoadedProject {

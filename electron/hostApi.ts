@@ -3,7 +3,7 @@
  * The renderer imports these types only (eslint enforces it); everything the
  * page may ask of the desktop shell is listed here.
  */
-import type { Result } from '../engine/core/result';
+import type { Result } from '../engine/core';
 
 /** Commands the application menu sends to the page. */
 export const MENU_COMMANDS = [

@@ -1,6 +1,6 @@
 import { IPC_CHANNELS } from './ipcChannels';
 import { IPC_PAYLOADS, describePayloadIssues, type InvokeChannelKey, type IpcPayload } from './ipcSchemas';
-import { ok, type Err, type Result } from '../engine/core/result';
+import { type Err, ok, type Result } from '../engine/core';
 import type { HostError, HostErrorCode, HostReply } from './hostApi';
 import { isAppUrl } from './windowSecurity';
 

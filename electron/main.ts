@@ -2,7 +2,7 @@ import { BrowserWindow, Menu, app, dialog, ipcMain, session as electronSession, 
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { pathToFileURL } from 'node:url';
-import { SAFETY_NOTICE } from '../engine/core/notice';
+import { SAFETY_NOTICE } from '../engine/core';
 import { CLOSE_PROMPT_BUTTONS, closePromptMessage, mayClose } from './closeGuard';
 import { createHostHandlers, type HostSession } from './hostHandlers';
 import { IPC_CHANNELS } from './ipcChannels';

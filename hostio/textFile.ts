@@ -10,7 +10,7 @@
  */
 import { closeSync, constants, fstatSync, openSync, readSync, realpathSync } from 'node:fs';
 import { open, realpath } from 'node:fs/promises';
-import { err, ok, type Result } from '../engine/core/result';
+import { err, ok, type Result } from '../engine/core';
 
 /** Largest text file read (bytes): 32 MiB, far above any deck or project. */
 export const MAX_TEXT_FILE_BYTES = 32 * 1024 * 1024;

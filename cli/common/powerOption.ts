@@ -1,6 +1,6 @@
 /** The `--power` option of the deck verbs: a number on the deck's power axis, or a rating name. */
-import { RATING_NAMES, type RatingName } from '../../engine/propulsion/propulsionModel';
-import { parseQuantity } from '../../engine/units/quantity';
+import { RATING_NAMES, type RatingName } from '../../engine/propulsion';
+import { parseQuantity } from '../../engine/units';
 import { UsageError } from '../verb';
 
 export type PowerChoice = { readonly kind: 'rating'; readonly rating: RatingName } | { readonly kind: 'power'; readonly power: number };

@@ -5,7 +5,7 @@
  * command line is a UsageError (exit 2).
  */
 import { resolve } from 'node:path';
-import type { Project } from '../../engine/project/projectSchema';
+import type { Project } from '../../engine/project';
 import { buildFromProject, formatLoadFailure, readProjectFile, type LoadedProject } from '../projectFiles';
 import { UsageError, type CliIo } from '../verb';
 

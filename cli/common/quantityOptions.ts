@@ -4,9 +4,9 @@
  * physical range, and a UsageError naming the option and the problem when
  * they cannot be used.
  */
-import { MAX_ALTITUDE_M, MIN_ALTITUDE_M } from '../../engine/mission/missionInputCheck';
-import { MAX_PRESSURE_ALTITUDE_M, MIN_PRESSURE_ALTITUDE_M } from '../../engine/aero/standardAtmosphere';
-import { parseQuantity, type Dimension } from '../../engine/units/quantity';
+import { MAX_ALTITUDE_M, MIN_ALTITUDE_M } from '../../engine/mission';
+import { MAX_PRESSURE_ALTITUDE_M, MIN_PRESSURE_ALTITUDE_M } from '../../engine/aero';
+import { type Dimension, parseQuantity } from '../../engine/units';
 import { optionalString, requireString, UsageError } from '../verb';
 
 /** Inclusive SI range of an option; `what` says it in words for the message. */

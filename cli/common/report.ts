@@ -3,8 +3,8 @@
  * (DESIGN.md §7), JSON documents carry it under `notice`, and an analysis
  * that ran but failed says so on stderr with its own exit code.
  */
-import type { Caution } from '../../engine/cautions/caution';
-import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../engine/core/notice';
+import type { Caution } from '../../engine/cautions';
+import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../engine/core';
 import { EXIT_NOT_SOLVED } from '../exitCodes';
 import { printJson, type CliIo } from '../verb';
 

@@ -4,9 +4,8 @@
  * reported on stderr with the verb and the reason.
  */
 import { resolve } from 'node:path';
-import type { Result } from '../../engine/core/result';
-import type { DeckFileError } from '../../engine/propulsion/deckFileError';
-import type { EngineDeck } from '../../engine/propulsion/engineDeck';
+import type { Result } from '../../engine/core';
+import type { DeckFileError, EngineDeck } from '../../engine/propulsion';
 import { cannotReadMessage, parseDeckText } from '../../engine/study';
 import { readTextFileSync } from '../../hostio/textFile';
 import type { CliIo } from '../verb';

@@ -2,10 +2,10 @@
  * The JSON form of a flown mission for `blockwise fly --json` and other
  * verbs: SI values, the unit in each key, the cautions and the notice.
  */
-import { SAFETY_NOTICE } from '../../engine/core/notice';
-import type { MissionResult } from '../../engine/mission/missionTypes';
+import { SAFETY_NOTICE } from '../../engine/core';
+import type { MissionResult } from '../../engine/mission';
 import { distanceBasisText } from './missionSummaryText';
-import type { InstallationMethodId } from '../../engine/propulsion/installationMethod';
+import type { InstallationMethodId } from '../../engine/propulsion';
 
 export interface MissionJsonContext {
   readonly projectName: string;

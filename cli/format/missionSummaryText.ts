@@ -3,10 +3,10 @@
  * units, reserves by part, weights, distance, the legs table, the cautions
  * with their leg and time, and the safety notice.
  */
-import type { Caution } from '../../engine/cautions/caution';
-import type { LegRow, MissionResult } from '../../engine/mission/missionTypes';
-import { formatQuantity, type DisplayKind } from '../../engine/units/quantity';
-import { describeInstallationMethod, type InstallationMethodId } from '../../engine/propulsion/installationMethod';
+import type { Caution } from '../../engine/cautions';
+import type { LegRow, MissionResult } from '../../engine/mission';
+import { type DisplayKind, formatQuantity } from '../../engine/units';
+import { describeInstallationMethod, type InstallationMethodId } from '../../engine/propulsion';
 import { formatPairs, formatTable } from './textTable';
 import { reportText } from '../common/report';
 

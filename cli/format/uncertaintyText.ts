@@ -3,7 +3,7 @@
  * `compare --uncertainty`): the inputs and why, the block-fuel band of each
  * design and of B - A, P(B burns less), the drivers, and how long it took.
  */
-import type { UncertaintyResult } from '../../engine/uncertainty/uncertaintyRun';
+import type { UncertaintyResult } from '../../engine/uncertainty';
 import { formatTable } from './textTable';
 
 function kg(x: number): string {

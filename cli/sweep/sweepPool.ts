@@ -5,7 +5,7 @@
  * terminated and what was received stays written.
  */
 import { Worker } from 'node:worker_threads';
-import type { SweepRow } from '../../engine/project/sweepCase';
+import type { SweepRow } from '../../engine/project';
 import type { SweepChunk, SweepReply, SweepWorkerData } from './sweepProtocol';
 
 export interface SweepPoolRun {

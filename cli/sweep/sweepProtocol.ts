@@ -1,7 +1,6 @@
 /** What the sweep verb and its worker threads say to each other (structured-cloned). */
-import type { SweepRow } from '../../engine/project/sweepCase';
-import type { SweepAxis } from '../../engine/project/sweepGrid';
-import type { EngineDeck } from '../../engine/propulsion/engineDeck';
+import type { SweepAxis, SweepRow } from '../../engine/project';
+import type { EngineDeck } from '../../engine/propulsion';
 
 /** Given to each worker at its start. */
 export interface SweepWorkerData {

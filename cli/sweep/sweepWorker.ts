@@ -3,8 +3,7 @@
  * so the main thread can write them as they come.
  */
 import { parentPort, workerData } from 'node:worker_threads';
-import { flySweepCase, type SweepRow } from '../../engine/project/sweepCase';
-import type { ProjectResources } from '../../engine/project/buildMissionInput';
+import { flySweepCase, type ProjectResources, type SweepRow } from '../../engine/project';
 import type { SweepChunk, SweepReply, SweepWorkerData } from './sweepProtocol';
 
 /** Rows per reply: few enough messages, rows still written within about a tenth of a second. */

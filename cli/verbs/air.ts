@@ -1,8 +1,5 @@
-import { airspeedsAt, type Airspeeds, type SpeedInput } from '../../engine/aero/airspeeds';
-import { atmosphere, type AtmosphereState } from '../../engine/aero/standardAtmosphere';
-import { formatQuantity, fromSi, type DisplayKind } from '../../engine/units/quantity';
-import { groupDigits } from '../../engine/units/displayUnits';
-import { FOOT_M, POUND_KG } from '../../engine/units/unitTable';
+import { type Airspeeds, airspeedsAt, atmosphere, type AtmosphereState, type SpeedInput } from '../../engine/aero';
+import { type DisplayKind, FOOT_M, formatQuantity, fromSi, groupDigits, POUND_KG } from '../../engine/units';
 import { OPTION_RANGES, optionalQuantityOption, quantityOption } from '../common/quantityOptions';
 
 /** The standard atmosphere's own ISA-deviation range (engine/aero/standardAtmosphere.ts). */

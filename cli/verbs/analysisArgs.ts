@@ -5,8 +5,8 @@
  * formatting numbers that may be missing.
  */
 import type { ParseArgsConfig } from 'node:util';
-import { formatQuantity, type DisplayKind } from '../../engine/units/displayUnits';
-import { RATING_NAMES, type RatingName } from '../../engine/propulsion/propulsionModel';
+import { type DisplayKind, formatQuantity } from '../../engine/units';
+import { RATING_NAMES, type RatingName } from '../../engine/propulsion';
 import type { LoadedProject } from '../projectFiles';
 import { loadVerbProject, projectArgument } from '../common/projectArgs';
 import { OPTION_RANGES, quantityOption } from '../common/quantityOptions';

@@ -1,12 +1,11 @@
-import { describeInstallationMethod } from '../../engine/propulsion/installationMethod';
-import { compareInlets } from '../../engine/analysis/inletComparison';
-import { inletFactorBuilder } from '../../engine/analysis/inletFactorBuilder';
-import { formatQuantity } from '../../engine/units/displayUnits';
+import { describeInstallationMethod } from '../../engine/propulsion';
+import { compareInlets, inletFactorBuilder } from '../../engine/analysis';
+import { formatQuantity } from '../../engine/units';
 import { checkInletName, loadVerbProject, projectArgument } from '../common/projectArgs';
 import { analysisFailed, printJsonReport, printReport } from '../common/report';
 import { formatTable } from '../format/textTable';
 import { assumptionLines } from '../format/missionSummaryText';
-import { installationAssumptions } from '../../engine/project/installationAssumptions';
+import { installationAssumptions } from '../../engine/project';
 import { formatLoadFailure } from '../projectFiles';
 import { optionalString, UsageError, type CliIo, type Verb } from '../verb';
 import { bothUnits, JSON_OPTION, machText } from './analysisArgs';

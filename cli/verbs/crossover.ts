@@ -1,4 +1,4 @@
-import { SPEED_LIMIT_SOURCE_TEXT, thrustDragCrossover } from '../../engine/analysis/crossover';
+import { SPEED_LIMIT_SOURCE_TEXT, thrustDragCrossover } from '../../engine/analysis';
 import { analysisFailed, cautionBlock, isaText, printJsonReport, printReport } from '../common/report';
 import { formatTable } from '../format/textTable';
 import type { CliIo, Verb } from '../verb';

@@ -1,8 +1,5 @@
-import { deckGridPoints } from '../../engine/propulsion/deckGrid';
-import { lookupDeck, ratingPower } from '../../engine/propulsion/deckLookup';
-import { describeReferenceRecovery, type EngineDeck } from '../../engine/propulsion/engineDeck';
-import { RATING_NAMES, type RatingName } from '../../engine/propulsion/propulsionModel';
-import { FOOT_M, POUND_FORCE_N, POUND_KG } from '../../engine/units/unitTable';
+import { deckGridPoints, describeReferenceRecovery, type EngineDeck, lookupDeck, RATING_NAMES, type RatingName, ratingPower } from '../../engine/propulsion';
+import { FOOT_M, POUND_FORCE_N, POUND_KG } from '../../engine/units';
 import { significant } from '../common/numberText';
 import { powerOrRating } from '../common/powerOption';
 import { OPTION_RANGES, optionalQuantityOption, quantityOption } from '../common/quantityOptions';

@@ -1,5 +1,4 @@
-import type { HighSpeedLimitSource, LowSpeedLimitSource } from '../../engine/analysis/crossover';
-import { DEFAULT_RESIDUAL_CLIMB_RATES, flightEnvelope } from '../../engine/analysis/envelope';
+import { DEFAULT_RESIDUAL_CLIMB_RATES, flightEnvelope, type HighSpeedLimitSource, type LowSpeedLimitSource } from '../../engine/analysis';
 import { analysisFailed, isaText, printJsonReport, printReport } from '../common/report';
 import { OPTION_RANGES, quantityOption } from '../common/quantityOptions';
 

@@ -1,7 +1,7 @@
-import { installationAssumptions } from '../../engine/project/installationAssumptions';
+import { installationAssumptions } from '../../engine/project';
 import { writeFile } from 'node:fs/promises';
 import { resolve } from 'node:path';
-import { solveMission } from '../../engine/mission/solveMission';
+import { solveMission } from '../../engine/mission';
 import { loadVerbProject, projectArgument } from '../common/projectArgs';
 import { historyCsv } from '../../engine/study';
 import { missionJson } from '../format/missionJson';

@@ -1,4 +1,4 @@
-import { payloadRangeDiagram } from '../../engine/analysis/payloadRange';
+import { payloadRangeDiagram } from '../../engine/analysis';
 import { analysisFailed, printJsonReport, printReport } from '../common/report';
 import { formatTable } from '../format/textTable';
 import { optionalString, UsageError, type CliIo, type Verb } from '../verb';

@@ -1,11 +1,10 @@
-import { optimumAltitude, type OptimumAltitudeResult } from '../../engine/analysis/optimumAltitude';
+import { optimumAltitude, type OptimumAltitudeResult, specificRange } from '../../engine/analysis';
 
 const OPTIMUM_BINDING_TEXT: Readonly<Record<OptimumAltitudeResult['binding'], string>> = {
   specificRange: 'the best specific range (no limit binds)',
   cruiseCeiling: 'the cruise ceiling (residual climb rate)',
   buffetMargin: 'the buffet margin',
 };
-import { specificRange } from '../../engine/analysis/specificRange';
 import { analysisFailed, cautionBlock, isaText, printJsonReport, printReport } from '../common/report';
 import { formatTable } from '../format/textTable';
 import type { CliIo, Verb } from '../verb';

@@ -1,9 +1,7 @@
 import { closeSync, openSync, writeSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { resolve } from 'node:path';
-import { parseJsonText } from '../../engine/project/jsonText';
-import { sweepCsvHead, sweepCsvLine, sweepJsonlHead, sweepJsonLine, type SweepRow } from '../../engine/project/sweepCase';
-import { gridSize, parseShard, parseVary, shardRange, type SweepAxis } from '../../engine/project/sweepGrid';
+import { gridSize, parseJsonText, parseShard, parseVary, shardRange, type SweepAxis, sweepCsvHead, sweepCsvLine, sweepJsonlHead, sweepJsonLine, type SweepRow } from '../../engine/project';
 import { printJsonReport, reportText } from '../common/report';
 import { readTextFile } from '../common/textFile';
 import { checkInletName, projectArgument } from '../common/projectArgs';

@@ -1,13 +1,13 @@
-import { tradeFactors } from '../../engine/analysis/tradeFactors';
-import { installationOf } from '../../engine/project/projectSpecs';
+import { tradeFactors } from '../../engine/analysis';
+import { installationOf } from '../../engine/project';
 import { analysisFailed, printJsonReport, printReport } from '../common/report';
 import { formatTable } from '../format/textTable';
 import { assumptionLines } from '../format/missionSummaryText';
-import { installationAssumptions } from '../../engine/project/installationAssumptions';
+import { installationAssumptions } from '../../engine/project';
 import type { CliIo, Verb } from '../verb';
 import { INLET_OPTION, JSON_OPTION, openAnalysisProject } from './analysisArgs';
-import { recoveryTradeByMethod } from '../../engine/analysis/recoveryTradeByMethod';
-import { recoveryMethodVariants } from '../../engine/project/recoveryMethodVariants';
+import { recoveryTradeByMethod } from '../../engine/analysis';
+import { recoveryMethodVariants } from '../../engine/project';
 import { verbSummary } from './catalogue';
 
 export const tradeVerb: Verb = {

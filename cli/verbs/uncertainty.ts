@@ -1,10 +1,10 @@
-import { runUncertainty } from '../../engine/uncertainty/uncertaintyRun';
-import { MAX_UNCERTAINTY_SAMPLES } from '../../engine/project/uncertaintySchema';
+import { runUncertainty } from '../../engine/uncertainty';
+import { MAX_UNCERTAINTY_SAMPLES } from '../../engine/project';
 import { checkInletName, loadVerbProject, projectArgument } from '../common/projectArgs';
 import { analysisFailed, printJsonReport, printReport } from '../common/report';
 import { uncertaintyLines } from '../format/uncertaintyText';
 import { assumptionLines } from '../format/missionSummaryText';
-import { installationAssumptions } from '../../engine/project/installationAssumptions';
+import { installationAssumptions } from '../../engine/project';
 import { optionalString, UsageError, type CliIo, type Verb } from '../verb';
 import { JSON_OPTION } from './analysisArgs';
 import { verbSummary } from './catalogue';

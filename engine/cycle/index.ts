@@ -27,3 +27,4 @@ export { runCyclePoint, type CyclePointRequest, type CyclePointResult, type Cycl
 export { spoolSpeeds, type SpoolSpeeds } from './spoolSpeeds';
 export { limitAt, LIMIT_UNITS } from './limitSchedule';
 export { stationTable, type StationRow } from './stationTable';
+export { cycleDeck, cycleDeckPowers, DEFAULT_CYCLE_DECK_GRID, POWER_LEVER, SENSITIVITY_STEPS, type CycleDeckGrid, type CycleDeckResult } from './cycleDeck';

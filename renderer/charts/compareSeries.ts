@@ -1,7 +1,6 @@
 /** Inlet comparison and payload-range results -> chart rows. */
-import type { InletComparisonResult, InletFactor } from '../../engine/analysis/inletComparison';
-import type { PayloadRangeResult } from '../../engine/analysis/payloadRange';
-import { toDisplay, type UnitSystem } from '../../engine/units/quantity';
+import type { InletComparisonResult, InletFactor, PayloadRangeResult } from '../../engine/analysis';
+import { toDisplay, type UnitSystem } from '../../engine/units';
 
 export const FACTOR_LABEL: Readonly<Record<InletFactor, string>> = {
   recovery: 'Pressure recovery',

@@ -1,5 +1,5 @@
 /** Crossover curves -> rows of Mach with thrust available and drag per inlet design, and the marked Machs. */
-import { displayUnit, toDisplay, type UnitSystem } from '../../engine/units/quantity';
+import { displayUnit, toDisplay, type UnitSystem } from '../../engine/units';
 import type { CrossoverSet } from '../worker/engineProtocol';
 import type { SeriesDef } from './polarSeries';
 import { seriesKey } from './seriesKeys';

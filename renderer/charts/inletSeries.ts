@@ -1,5 +1,5 @@
 /** Inlet curves -> rows of Mach with recovery, spillage, throat and fan-face Mach per design. */
-import { displayUnit, toDisplay, type UnitSystem } from '../../engine/units/quantity';
+import { displayUnit, toDisplay, type UnitSystem } from '../../engine/units';
 import type { InletCurves } from '../worker/engineProtocol';
 import type { SeriesDef } from './polarSeries';
 import { seriesKey } from './seriesKeys';

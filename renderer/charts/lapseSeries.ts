@@ -1,5 +1,5 @@
 /** Thrust-lapse and TSFC curves -> rows of Mach with uninstalled and installed columns per altitude. */
-import { displayUnit, formatQuantity, toDisplay, type UnitSystem } from '../../engine/units/quantity';
+import { displayUnit, formatQuantity, toDisplay, type UnitSystem } from '../../engine/units';
 import type { LapseCurves } from '../worker/engineProtocol';
 import type { SeriesDef } from './polarSeries';
 import { seriesKey } from './seriesKeys';

@@ -1,6 +1,6 @@
 /** Mission time history -> altitude and mass against distance, in display units. */
-import type { TimeHistory } from '../../engine/mission/missionTypes';
-import { toDisplay, type UnitSystem } from '../../engine/units/quantity';
+import type { TimeHistory } from '../../engine/mission';
+import { toDisplay, type UnitSystem } from '../../engine/units';
 import { sampleIndices } from './seriesKeys';
 
 export interface ProfileRow {

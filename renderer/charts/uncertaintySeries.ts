@@ -3,8 +3,8 @@
  * chosen units, and a histogram of per-sample values with each bin's side of
  * zero (for B - A: bins below zero are samples where B burns less).
  */
-import type { UncertaintyResult } from '../../engine/uncertainty/uncertaintyRun';
-import { toDisplay, type UnitSystem } from '../../engine/units/quantity';
+import type { UncertaintyResult } from '../../engine/uncertainty';
+import { toDisplay, type UnitSystem } from '../../engine/units';
 
 export interface BandRow {
   readonly name: string;

@@ -1,5 +1,5 @@
-import type { Caution } from '../../engine/cautions/caution';
-import { formatQuantity, type UnitSystem } from '../../engine/units/quantity';
+import type { Caution } from '../../engine/cautions';
+import { formatQuantity, type UnitSystem } from '../../engine/units';
 import { cautionText, severityLabel } from '../state/displayText';
 import type { Highlight } from '../state/studyState';
 

@@ -1,5 +1,5 @@
-import type { MissionResult } from '../../engine/mission/missionTypes';
-import type { UnitSystem } from '../../engine/units/quantity';
+import type { MissionResult } from '../../engine/mission';
+import type { UnitSystem } from '../../engine/units';
 import { healthClass, missionHealth } from '../state/resultHealth';
 import { selectHeadline } from '../state/selectors';
 

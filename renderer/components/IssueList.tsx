@@ -1,5 +1,5 @@
 import type { EngineFailure } from '../worker/engineProtocol';
-import type { ProjectIssue } from '../../engine/project/projectIssue';
+import type { ProjectIssue } from '../../engine/project';
 import { issueReason, pathLabel } from '../state/displayText';
 import { StudyContext } from '../state/studyContext';
 import { useContext } from 'react';

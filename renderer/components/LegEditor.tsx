@@ -1,5 +1,5 @@
-import type { ProjectLeg } from '../../engine/project/projectSchema';
-import { RATING_NAMES } from '../../engine/propulsion/propulsionModel';
+import type { ProjectLeg } from '../../engine/project';
+import { RATING_NAMES } from '../../engine/propulsion';
 import { LEG_KIND_LABEL, LEG_KINDS, newLeg, type LegKindName } from '../state/legTemplates';
 import { ratingLabel } from '../state/displayText';
 import { useStudy } from '../state/studyContext';

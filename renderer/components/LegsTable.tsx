@@ -1,5 +1,5 @@
-import type { LegRow } from '../../engine/mission/missionTypes';
-import { formatQuantity, type UnitSystem } from '../../engine/units/quantity';
+import type { LegRow } from '../../engine/mission';
+import { formatQuantity, type UnitSystem } from '../../engine/units';
 
 /** The flown legs: times, distances, altitudes, masses and fuel; the highlighted leg is marked. */
 export function LegsTable(props: { readonly legs: readonly LegRow[]; readonly units: UnitSystem; readonly highlightLeg: number | null; readonly testId?: string }) {

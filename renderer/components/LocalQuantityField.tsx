@@ -1,5 +1,5 @@
 import { useEffect, useId, useState } from 'react';
-import type { UnitSystem } from '../../engine/units/quantity';
+import type { UnitSystem } from '../../engine/units';
 import { fieldUnitLabel, formatField, parseField, type FieldUnit } from '../state/fieldUnits';
 
 /** A quantity input for a view's own setting (not the project): same reading rules and inline errors as QuantityField. */

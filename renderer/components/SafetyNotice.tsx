@@ -1,4 +1,4 @@
-import { SAFETY_NOTICE_LINES } from '../../engine/core/notice';
+import { SAFETY_NOTICE_LINES } from '../../engine/core';
 
 /** The notice every screen carries (DESIGN.md §7); always in the footer. */
 export function SafetyNotice() {

@@ -1,4 +1,4 @@
-import { formatQuantity, type UnitSystem } from '../../engine/units/quantity';
+import { formatQuantity, type UnitSystem } from '../../engine/units';
 import { statusLabel } from '../state/displayText';
 import { healthClass, resultHealth } from '../state/resultHealth';
 import type { LiveStudy } from '../worker/useEngine';

@@ -1,4 +1,4 @@
-import type { UnitSystem } from '../../engine/units/quantity';
+import type { UnitSystem } from '../../engine/units';
 
 export interface ToolbarProps {
   readonly units: UnitSystem;

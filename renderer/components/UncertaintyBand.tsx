@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Bar, BarChart, CartesianGrid, Cell, Tooltip, XAxis, YAxis } from 'recharts';
-import { displayUnit, formatQuantity, toDisplay } from '../../engine/units/quantity';
+import { displayUnit, formatQuantity, toDisplay } from '../../engine/units';
 import { bandRows, histogram } from '../charts/uncertaintySeries';
 import { tickText } from '../charts/seriesKeys';
 import { useStudy } from '../state/studyContext';

@@ -1,6 +1,6 @@
 import { useEffect, useState } from 'react';
-import type { Project } from '../../engine/project/projectSchema';
-import type { UncertainInputKind } from '../../engine/uncertainty/uncertainInputs';
+import type { Project } from '../../engine/project';
+import type { UncertainInputKind } from '../../engine/uncertainty';
 import type { FieldUnit } from '../state/fieldUnits';
 import { useStudy } from '../state/studyContext';
 import { QuantityField } from './QuantityField';

@@ -1,7 +1,7 @@
 import { Bar, BarChart, CartesianGrid, Cell, ReferenceLine, Tooltip, XAxis, YAxis } from 'recharts';
 import type { WaterfallRow } from '../charts/compareSeries';
 import { tickText } from '../charts/seriesKeys';
-import { groupDigits } from '../../engine/units/displayUnits';
+import { groupDigits } from '../../engine/units';
 import { DEFAULT_CHART_SIZE, type ChartSize } from './LineChartPanel';
 
 /** Block-fuel breakdown as a waterfall: an invisible base bar stacked under the visible step. */

@@ -1,6 +1,6 @@
-import { SAFETY_NOTICE_LINES } from '../../engine/core/notice';
-import type { Project } from '../../engine/project/projectSchema';
-import { displayUnit, formatQuantity, type UnitSystem } from '../../engine/units/quantity';
+import { SAFETY_NOTICE_LINES } from '../../engine/core';
+import type { Project } from '../../engine/project';
+import { displayUnit, formatQuantity, type UnitSystem } from '../../engine/units';
 import { lapseSeries } from '../charts/lapseSeries';
 import { polarSeries } from '../charts/polarSeries';
 import { profileSeries } from '../charts/profileSeries';

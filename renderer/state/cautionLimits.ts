@@ -2,9 +2,8 @@
  * The user-editable caution limits: project field, its default, unit and
  * where the default comes from (engine/cautions/cautionCatalogue.ts).
  */
-import { CAUTION_CATALOGUE, type MissionCautionId } from '../../engine/cautions/cautionCatalogue';
-import { DEFAULT_CAUTION_SETTINGS } from '../../engine/cautions/cautionSettings';
-import type { Project } from '../../engine/project/projectSchema';
+import { CAUTION_CATALOGUE, DEFAULT_CAUTION_SETTINGS, type MissionCautionId } from '../../engine/cautions';
+import type { Project } from '../../engine/project';
 import type { FieldUnit } from './fieldUnits';
 
 export type CautionLimitKey = Exclude<keyof Project['cautions'], 'cautionOnDeckExtrapolation'>;

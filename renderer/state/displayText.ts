@@ -4,14 +4,11 @@
  * ratings, solve modes and severities, and project paths as a reader names
  * them (legs numbered from 1 as the list shows them). Pure; one place.
  */
-import type { Caution } from '../../engine/cautions/caution';
-import { MISSION_STATUSES, missionStatusTitle } from '../../engine/mission/missionStatus';
-import type { MissionResult, MissionStatus } from '../../engine/mission/missionTypes';
-import type { ProjectIssue } from '../../engine/project/projectIssue';
-import { RATING_LABEL, type RatingName } from '../../engine/propulsion/propulsionModel';
-import { groupDigits } from '../../engine/units/displayUnits';
-import { messageIn, messageText } from '../../engine/units/messageParts';
-import type { UnitSystem } from '../../engine/units/quantity';
+import type { Caution } from '../../engine/cautions';
+import { MISSION_STATUSES, type MissionResult, type MissionStatus, missionStatusTitle } from '../../engine/mission';
+import type { ProjectIssue } from '../../engine/project';
+import { RATING_LABEL, type RatingName } from '../../engine/propulsion';
+import { groupDigits, messageIn, messageText, type UnitSystem } from '../../engine/units';
 
 /** Statuses of analyses (the mission's come from engine/mission/missionStatus.ts). */
 const OTHER_STATUS_LABEL: Readonly<Record<string, string>> = {

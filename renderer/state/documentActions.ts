@@ -2,7 +2,7 @@
  * Turning files into actions: a project's text into `projectOpened` (or
  * `projectOpenFailed` with every issue), the bundled demo, a deck file.
  */
-import { parseProject } from '../../engine/project/parseProject';
+import { parseProject } from '../../engine/project';
 import type { StudyAction } from './studyActions';
 import type { DeckFile } from './studyState';
 

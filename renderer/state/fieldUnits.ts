@@ -3,9 +3,8 @@
  * quantity in the chosen unit system. A bare number typed into a field is read
  * in the unit the field shows (not SI), so "35000" in a feet field is 35,000 ft.
  */
-import { err, ok, type Result } from '../../engine/core/result';
-import { groupDigits } from '../../engine/units/displayUnits';
-import { displayUnit, fromSi, parseQuantity, toDisplay, type DisplayKind, type Dimension, type UnitSystem } from '../../engine/units/quantity';
+import { err, ok, type Result } from '../../engine/core';
+import { type Dimension, type DisplayKind, displayUnit, fromSi, groupDigits, parseQuantity, toDisplay, type UnitSystem } from '../../engine/units';
 
 /** A display kind, or a unit that is the same in both systems. */
 /** `duration` is a time shown in minutes in both systems (leg and reserve times). */

@@ -1,5 +1,5 @@
 /** Default legs the mission editor adds (SI; a starting point the user edits). */
-import type { ProjectLeg } from '../../engine/project/projectSchema';
+import type { ProjectLeg } from '../../engine/project';
 
 const FT = 0.3048;
 const KT = 1852 / 3600;

@@ -1,5 +1,5 @@
 /** Paths into the project document (JSON paths as arrays) and their text form. */
-import { formatJsonPath } from '../../engine/project/projectIssue';
+import { formatJsonPath } from '../../engine/project';
 
 export type DocPath = readonly (string | number)[];
 

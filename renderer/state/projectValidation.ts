@@ -1,8 +1,5 @@
 /** Validates an edited project exactly as a saved file would be read back. */
-import { parseProjectData } from '../../engine/project/parseProject';
-import type { ProjectIssue } from '../../engine/project/projectIssue';
-import type { Project } from '../../engine/project/projectSchema';
-import { projectToJson } from '../../engine/project/projectToJson';
+import { parseProjectData, type Project, type ProjectIssue, projectToJson } from '../../engine/project';
 
 /** Every issue the project would have if saved and reopened (empty when valid). */
 export function projectIssues(project: Project): readonly ProjectIssue[] {

@@ -1,5 +1,5 @@
 /** Reserve presets with their default values, named after the rules they implement. */
-import type { Project } from '../../engine/project/projectSchema';
+import type { Project } from '../../engine/project';
 
 type Reserves = Project['mission']['reserves'];
 export type ReservePreset = Reserves['preset'];

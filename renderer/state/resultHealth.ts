@@ -5,9 +5,8 @@
  * could not be flown). One selector, read by the headline, the summary
  * strip, the result views and the export and print commands.
  */
-import { missionStatusClass } from '../../engine/mission/missionStatus';
-import type { MissionResult } from '../../engine/mission/missionTypes';
-import type { UnitSystem } from '../../engine/units/quantity';
+import { type MissionResult, missionStatusClass } from '../../engine/mission';
+import type { UnitSystem } from '../../engine/units';
 import { missionStatusText, statusLabel } from './displayText';
 
 export type MissionHealth = 'good' | 'limit' | 'failed';

@@ -1,8 +1,7 @@
 /** Read-only views of the study state for components (pure). */
-import type { MissionResult } from '../../engine/mission/missionTypes';
-import type { ProjectIssue } from '../../engine/project/projectIssue';
-import type { Project } from '../../engine/project/projectSchema';
-import { formatQuantity, type UnitSystem } from '../../engine/units/quantity';
+import type { MissionResult } from '../../engine/mission';
+import type { Project, ProjectIssue } from '../../engine/project';
+import { formatQuantity, type UnitSystem } from '../../engine/units';
 import { formatField, type FieldUnit } from './fieldUnits';
 import { pathText, readAt, type DocPath } from './projectPath';
 import type { StudyState } from './studyState';

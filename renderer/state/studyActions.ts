@@ -1,7 +1,6 @@
 /** Every change to the study is one of these named actions (see studyReducer.ts). */
-import type { Project, ProjectLeg } from '../../engine/project/projectSchema';
-import type { ProjectIssue } from '../../engine/project/projectIssue';
-import type { UnitSystem } from '../../engine/units/quantity';
+import type { Project, ProjectIssue, ProjectLeg } from '../../engine/project';
+import type { UnitSystem } from '../../engine/units';
 import type { FieldUnit } from './fieldUnits';
 import type { LegKindName } from './legTemplates';
 import type { DocPath } from './projectPath';

@@ -6,7 +6,7 @@
  * never reaches the document.
  */
 import type { Draft } from 'immer';
-import type { Project } from '../../engine/project/projectSchema';
+import type { Project } from '../../engine/project';
 import { issueReason } from './displayText';
 import { parseField } from './fieldUnits';
 import { newLeg } from './legTemplates';

@@ -3,9 +3,8 @@
  * deck file it uses, the unit system (display only), field drafts that did
  * not parse, and what the results view highlights.
  */
-import type { ProjectIssue } from '../../engine/project/projectIssue';
-import type { Project } from '../../engine/project/projectSchema';
-import type { UnitSystem } from '../../engine/units/quantity';
+import type { Project, ProjectIssue } from '../../engine/project';
+import type { UnitSystem } from '../../engine/units';
 import type { Undoable } from './undoHistory';
 
 /** A deck file as read (the worker parses it). */

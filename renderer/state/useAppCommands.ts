@@ -4,7 +4,7 @@
  * message for the status line, never an exception.
  */
 import { useCallback, useEffect, useRef, useState } from 'react';
-import { projectToJson } from '../../engine/project/projectToJson';
+import { projectToJson } from '../../engine/project';
 import type { Bridge, MenuCommand } from '../bridge/bridge';
 import type { ToolbarCommand } from '../components/Toolbar';
 import { fileStem, historyCsv, legsCsv } from '../../engine/study';

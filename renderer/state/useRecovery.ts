@@ -4,7 +4,7 @@
  * and an earlier session's unsaved work is offered back at start.
  */
 import { useCallback, useEffect, useRef, useState } from 'react';
-import { projectToJson } from '../../engine/project/projectToJson';
+import { projectToJson } from '../../engine/project';
 import { startAutosave } from '../bridge/autosaveTimer';
 import type { Bridge, RecoveryOffer } from '../bridge/bridge';
 import { openProjectAction } from './documentActions';

@@ -1,5 +1,5 @@
 import { usePersistentValue } from '../worker/jobStore';
-import { displayUnit, formatQuantity } from '../../engine/units/quantity';
+import { displayUnit, formatQuantity } from '../../engine/units';
 import { breakdownWaterfall, FACTOR_LABEL, payloadRangeRows } from '../charts/compareSeries';
 import { ChoiceField } from '../components/ChoiceField';
 import { FailureNotice } from '../components/IssueList';

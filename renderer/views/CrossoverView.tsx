@@ -1,6 +1,6 @@
 import { useEffect, useMemo } from 'react';
 import { usePersistentValue } from '../worker/jobStore';
-import { RATING_NAMES, type RatingName } from '../../engine/propulsion/propulsionModel';
+import { RATING_NAMES, type RatingName } from '../../engine/propulsion';
 import { crossoverSeries } from '../charts/crossoverSeries';
 import { ChoiceField } from '../components/ChoiceField';
 import { FailureNotice } from '../components/IssueList';
@@ -8,8 +8,7 @@ import { LineChartPanel, type ChartSize } from '../components/LineChartPanel';
 import { LocalQuantityField } from '../components/LocalQuantityField';
 import { machText, ratingLabel } from '../state/displayText';
 import { useStudy } from '../state/studyContext';
-import { messageIn } from '../../engine/units/messageParts';
-import { groupDigits } from '../../engine/units/displayUnits';
+import { groupDigits, messageIn } from '../../engine/units';
 import type { CrossoverRequestQuery } from '../worker/engineProtocol';
 import { useEngineJob, type LiveStudy } from '../worker/useEngine';
 

@@ -1,7 +1,6 @@
-import { describeInstallationMethod } from '../../engine/propulsion/installationMethod';
+import { describeInstallationMethod, type RatingName } from '../../engine/propulsion';
 import { useState } from 'react';
-import type { RatingName } from '../../engine/propulsion/propulsionModel';
-import { formatQuantity } from '../../engine/units/quantity';
+import { formatQuantity } from '../../engine/units';
 import { ChoiceField } from '../components/ChoiceField';
 import { lapseSeries } from '../charts/lapseSeries';
 import { FailureNotice } from '../components/IssueList';

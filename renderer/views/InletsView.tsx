@@ -1,4 +1,4 @@
-import { formatQuantity } from '../../engine/units/quantity';
+import { formatQuantity } from '../../engine/units';
 import { inletSeries } from '../charts/inletSeries';
 import { ChoiceField } from '../components/ChoiceField';
 import { IssueList } from '../components/IssueList';

@@ -1,6 +1,6 @@
 import { useMemo } from 'react';
 import { healthClass, resultHealth } from '../state/resultHealth';
-import { displayUnit, formatQuantity } from '../../engine/units/quantity';
+import { displayUnit, formatQuantity } from '../../engine/units';
 import { profileSeries } from '../charts/profileSeries';
 import { CautionList } from '../components/CautionList';
 import { HeadlineFigures } from '../components/HeadlineFigures';

@@ -2,17 +2,12 @@
  * Messages between the renderer and the engine worker. Requests carry the
  * project (SI) and the deck file; replies carry plain data (structured clone).
  */
-import type { InstallationMethodId } from '../../engine/propulsion/installationMethod';
-import type { CrossoverResult } from '../../engine/analysis/crossover';
-import type { InletComparisonResult } from '../../engine/analysis/inletComparison';
-import type { PayloadRangeResult } from '../../engine/analysis/payloadRange';
-import type { TradeFactorsResult } from '../../engine/analysis/tradeFactors';
-import type { RecoveryTradeByMethod } from '../../engine/analysis/recoveryTradeByMethod';
-import type { UncertaintyResult } from '../../engine/uncertainty/uncertaintyRun';
-import type { MissionResult } from '../../engine/mission/missionTypes';
-import type { Project } from '../../engine/project/projectSchema';
-import type { RatingName } from '../../engine/propulsion/propulsionModel';
-import type { Result } from '../../engine/core/result';
+import type { InstallationMethodId, RatingName } from '../../engine/propulsion';
+import type { CrossoverResult, InletComparisonResult, PayloadRangeResult, RecoveryTradeByMethod, TradeFactorsResult } from '../../engine/analysis';
+import type { UncertaintyResult } from '../../engine/uncertainty';
+import type { MissionResult } from '../../engine/mission';
+import type { Project } from '../../engine/project';
+import type { Result } from '../../engine/core';
 import type { StudyFailure } from '../../engine/study';
 import type { DeckFile } from '../state/studyState';
 

@@ -3,20 +3,12 @@
  * Worker (engineWorker.ts) and in-thread in component tests. Long analyses
  * report progress and poll `shouldCancel` between missions.
  */
-import { thrustDragCrossover } from '../../engine/analysis/crossover';
-import { compareInlets } from '../../engine/analysis/inletComparison';
-import { inletFactorBuilder } from '../../engine/analysis/inletFactorBuilder';
-import { payloadRangeDiagram } from '../../engine/analysis/payloadRange';
-import { tradeFactors } from '../../engine/analysis/tradeFactors';
-import { recoveryTradeByMethod } from '../../engine/analysis/recoveryTradeByMethod';
-import { recoveryMethodVariants } from '../../engine/project/recoveryMethodVariants';
-import { err, ok, type Result } from '../../engine/core/result';
-import type { MissionInput } from '../../engine/mission/missionTypes';
-import { solveMission } from '../../engine/mission/solveMission';
-import { makeIssue } from '../../engine/project/projectIssue';
+import { type AnalysisError, compareInlets, inletFactorBuilder, payloadRangeDiagram, recoveryTradeByMethod, thrustDragCrossover, tradeFactors } from '../../engine/analysis';
+import { makeIssue, recoveryMethodVariants } from '../../engine/project';
+import { err, ok, type Result } from '../../engine/core';
+import { type MissionInput, solveMission } from '../../engine/mission';
 import { createDeckTextMemo, prepareStudy, type DeckTextMemo, type Study } from '../../engine/study';
-import type { AnalysisError } from '../../engine/analysis/analysisTypes';
-import { runUncertainty } from '../../engine/uncertainty/uncertaintyRun';
+import { runUncertainty } from '../../engine/uncertainty';
 import type { EngineFailure, EngineOutcome, EngineReplies, EngineRequest, EngineRequestKind, StudyInputs } from './engineProtocol';
 import { deckSummary, inletCurves, LAPSE_RATINGS, lapseCurves, polarCurves } from './studyCurves';
 

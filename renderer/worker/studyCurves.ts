@@ -1,10 +1,7 @@
 /** The curves the views plot, computed from a mission input (runs in the worker). */
-import { defaultInstallationMethod } from '../../engine/propulsion/installationMethod';
-import { polarCoefficients, type DragPolarModel } from '../../engine/aero/dragPolar';
-import type { MissionInput } from '../../engine/mission/missionTypes';
-import type { EngineDeck } from '../../engine/propulsion/engineDeck';
-import { describeReferenceRecovery } from '../../engine/propulsion/engineDeck';
-import type { PropulsionModel, RatingName } from '../../engine/propulsion/propulsionModel';
+import { defaultInstallationMethod, describeReferenceRecovery, type EngineDeck, type PropulsionModel, type RatingName } from '../../engine/propulsion';
+import { type DragPolarModel, polarCoefficients } from '../../engine/aero';
+import type { MissionInput } from '../../engine/mission';
 import type { DeckSummary, InletCurves, LapseCurves, PolarCurves } from './engineProtocol';
 
 const FT = 0.3048;

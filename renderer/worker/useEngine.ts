@@ -4,7 +4,7 @@
  * progress and cancel.
  */
 import { createContext, useCallback, useContext, useEffect, useRef, useState } from 'react';
-import type { ProjectIssue } from '../../engine/project/projectIssue';
+import type { ProjectIssue } from '../../engine/project';
 import type { EngineClient, EngineRun } from './engineClient';
 import { useJobStore, type JobStore } from './jobStore';
 import type { EngineFailure, EngineReplies, EngineRequest, EngineRequestKind, StudyInputs, StudySnapshot } from './engineProtocol';

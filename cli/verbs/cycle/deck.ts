@@ -1,20 +1,10 @@
 /** `blockwise cycle deck`: write the deck of a cycle file (airflow and installation-sensitivity columns). */
 import { renameSync, writeFileSync } from 'node:fs';
 import { resolve } from 'node:path';
-import { SAFETY_NOTICE_LINES } from '../../../engine/core/notice';
-import {
-  cycleDeck,
-  cycleDeckPowers,
-  DEFAULT_CYCLE_DECK_GRID,
-  POWER_LEVER,
-  SENSITIVITY_STEPS,
-  type CycleDeckGrid,
-  type CycleDeckResult,
-} from '../../../engine/cycle/cycleDeck';
-import { CUSTOMARY_DECK_UNITS, deckToCsv, SI_DECK_UNITS } from '../../../engine/propulsion/deckCsv';
-import { deckToJson } from '../../../engine/propulsion/deckJson';
-import { parseQuantity, type Dimension } from '../../../engine/units/quantity';
-import { FOOT_M } from '../../../engine/units/unitTable';
+import { SAFETY_NOTICE_LINES } from '../../../engine/core';
+import { cycleDeck, type CycleDeckGrid, cycleDeckPowers, type CycleDeckResult, DEFAULT_CYCLE_DECK_GRID, POWER_LEVER, SENSITIVITY_STEPS } from '../../../engine/cycle';
+import { CUSTOMARY_DECK_UNITS, deckToCsv, deckToJson, SI_DECK_UNITS } from '../../../engine/propulsion';
+import { type Dimension, FOOT_M, parseQuantity } from '../../../engine/units';
 import { printJsonReport, reportText } from '../../common/report';
 import { optionalString, UsageError, type CliIo, type Verb } from '../../verb';
 import { verbSummary } from '../catalogue';

@@ -1,8 +1,7 @@
 /** `blockwise cycle point`: the matched cycle at one flight condition, throttle and installation. */
 import type { CyclePointResult, CyclePointRequest, CycleThrottle, StationRow } from '../../../engine/cycle/index';
-import { RATING_NAMES, type RatingName } from '../../../engine/propulsion/propulsionModel';
-import { parseQuantity } from '../../../engine/units/quantity';
-import { FOOT_M, POUND_FORCE_N, POUND_KG } from '../../../engine/units/unitTable';
+import { RATING_NAMES, type RatingName } from '../../../engine/propulsion';
+import { FOOT_M, parseQuantity, POUND_FORCE_N, POUND_KG } from '../../../engine/units';
 import { significant } from '../../common/numberText';
 import { OPTION_RANGES, optionalQuantityOption, quantityOption } from '../../common/quantityOptions';
 import { analysisFailed, isaText, printJsonReport, reportText } from '../../common/report';

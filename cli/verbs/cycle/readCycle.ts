@@ -3,7 +3,7 @@
  * command line, parse it and design the engine; on failure print the
  * located issues (or the design error) on stderr and return null.
  */
-import { parseCycleFile } from '../../../engine/cycle/cycleFile';
+import { parseCycleFile } from '../../../engine/cycle';
 import { designEngine, type CycleEngine } from '../../../engine/cycle/index';
 import { readTextFile } from '../../common/textFile';
 import { UsageError, type CliIo } from '../../verb';

@@ -1,0 +1,18 @@
+/**
+ * engine/analysis's public surface (hand-written; STYLE rule 5): each
+ * analysis as one function returning a Result with a literal error code.
+ */
+export type { AnalysisError } from './analysisTypes';
+export { thrustDragCrossover, type CrossoverResult } from './crossover';
+export { DEFAULT_RESIDUAL_CLIMB_RATES, flightEnvelope } from './envelope';
+export { specificRange } from './specificRange';
+export { optimumAltitude } from './optimumAltitude';
+export { payloadRangeDiagram, type PayloadRangeResult } from './payloadRange';
+export { compareInlets, type InletComparisonResult, type InletFactor } from './inletComparison';
+export { inletFactorBuilder, type InletPair } from './inletFactorBuilder';
+export { tradeFactors, type TradeFactorsResult } from './tradeFactors';
+export { RECOVERY_TRADE_DESCRIPTION, recoveryTradeByMethod, type RecoveryMethodCase, type RecoveryTradeByMethod, type RecoveryTradeRow } from './recoveryTradeByMethod';
+export type { HighSpeedLimitSource } from './crossover';
+export type { LowSpeedLimitSource } from './crossover';
+export { SPEED_LIMIT_SOURCE_TEXT } from './crossover';
+export type { OptimumAltitudeResult } from './optimumAltitude';

@@ -1,0 +1,8 @@
+/**
+ * engine/cautions's public surface (hand-written; STYLE rule 5): the caution
+ * record, the user's thresholds and the catalogue of ids with their sources.
+ */
+export type { Caution, CautionSeverity } from './caution';
+export { CAUTION_CATALOGUE, type CautionEntry, type MissionCautionId } from './cautionCatalogue';
+export { DEFAULT_CAUTION_SETTINGS, type CautionSettings } from './cautionSettings';
+export type { PropulsionCautionId } from './propulsionCautions';

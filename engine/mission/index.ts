@@ -1,0 +1,9 @@
+/**
+ * engine/mission's public surface (hand-written; STYLE rule 5): the one
+ * solver entry point, its input and result types, the statuses and the
+ * altitude range a mission may fly.
+ */
+export { solveMission, type SolveOptions } from './solveMission';
+export type { LegRow, MissionInput, MissionResult, MissionStatus, TimeHistory } from './missionTypes';
+export { MISSION_STATUSES, missionStatusClass, missionStatusTitle, type MissionStatusClass } from './missionStatus';
+export { MAX_ALTITUDE_M, MIN_ALTITUDE_M } from './missionInputCheck';

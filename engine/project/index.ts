@@ -1,0 +1,18 @@
+/**
+ * engine/project's public surface (hand-written; STYLE rule 5): the project
+ * file (schema, parsing with located issues, writing), the specs built from
+ * it, and the deck it names. Building a study from it: engine/study.
+ */
+export type { BuildOptions, ProjectResources } from './buildMissionInput';
+export { parseJsonText } from './jsonText';
+export { parseProject, parseProjectData } from './parseProject';
+export { deckReference, type DeckReference } from './projectDeck';
+export { formatJsonPath, fromZodIssues, makeIssue, type ProjectIssue } from './projectIssue';
+export { inletSchema, type Project, type ProjectLeg } from './projectSchema';
+export { inletDesignOf, installationOf } from './projectSpecs';
+export { projectToJson } from './projectToJson';
+export { MAX_UNCERTAINTY_SAMPLES } from './uncertaintySchema';
+export { gridSize, parseShard, parseVary, shardRange, type SweepAxis } from './sweepGrid';
+export { flySweepCase, sweepCsvHead, sweepCsvLine, sweepJsonLine, sweepJsonlHead, type SweepRow } from './sweepCase';
+export { installationAssumptions } from './installationAssumptions';
+export { recoveryMethodVariants } from './recoveryMethodVariants';

@@ -1,0 +1,6 @@
+/**
+ * engine/uncertainty's public surface (hand-written; STYLE rule 5): the
+ * seeded Monte Carlo run over a project's declared uncertain inputs.
+ */
+export type { UncertainInputKind } from './uncertainInputs';
+export { runUncertainty, type UncertaintyResult } from './uncertaintyRun';
