@@ -17,7 +17,10 @@ import { expectClose } from '../support/assertInDelta';
 
 interface Expectation {
   readonly kind: 'deckCsv' | 'deckJson' | 'project';
-  readonly stage: 'parse' | 'load' | 'accept';
+  /** 'warn': a deck that loads with a plausibility warning; 'fly': a project that flies to `status` with exit code `exit`. */
+  readonly stage: 'parse' | 'load' | 'accept' | 'warn' | 'fly';
+  readonly exit?: number;
+  readonly status?: string;
   readonly where: string;
   readonly fragment: string;
   /** When the command line's file reader refuses the file before any parser sees it (hostio/textFile.ts): what it says. */
@@ -127,8 +130,18 @@ describe('corpus through the CLI', () => {
   for (const [file, e] of Object.entries(expected)) {
     const path = `fixtures/corpus/${file}`;
     if (e.kind !== 'project') {
-      it(`blockwise deck check ${path} ${e.stage === 'accept' ? 'exits 0' : 'exits 1 naming the place'}`, async () => {
+      it(`blockwise deck check ${path} ${e.stage === 'accept' || e.stage === 'warn' ? 'exits 0' : 'exits 1 naming the place'}`, async () => {
         const r = await run('deck', 'check', path);
+        if (e.stage === 'warn') {
+          // Valid but implausible: the summary on stdout, one warning line per check on stderr, with the line.
+          expect(r.code).toBe(0);
+          expect(r.out).toContain('valid');
+          const warning = r.err.split('\n').find((l) => l.includes(e.fragment));
+          expect(warning, r.err).toBeDefined();
+          expect(warning!.startsWith(`blockwise deck check: warning: ${path} ${e.where}: `)).toBe(true);
+          expect(hasControl(r.err)).toBe(false);
+          return;
+        }
         if (e.stage === 'accept') {
           expect(r.code).toBe(0);
           expect(r.err).toBe('');
@@ -146,6 +159,18 @@ describe('corpus through the CLI', () => {
         expect(first).toContain(e.fragment);
         expect(hasControl(r.err)).toBe(false);
       });
+    } else if (e.stage === 'fly') {
+      it(`blockwise fly ${path} ends with status ${e.status} and exit ${e.exit}`, async () => {
+        const json = await run('fly', path, '--json');
+        expect(json.code).toBe(e.exit);
+        const result = JSON.parse(json.out) as { status: string; statusMessage: string };
+        expect(result.status).toBe(e.status);
+        const text = await run('fly', path);
+        expect(text.code).toBe(e.exit);
+        expect(e.status === 'ok' ? text.out : result.statusMessage).toContain(e.fragment);
+        expect(hasControl(text.out + text.err)).toBe(false);
+        expect(text.err).not.toMatch(/\n\s+at /);
+      }, 60_000);
     } else {
       it(`blockwise fly ${path} exits 1 naming ${e.where}`, async () => {
         const r = await run('fly', path);
