@@ -14,7 +14,8 @@ const models = {
   propulsion: analyticPropulsion({ thrust_N: 160e3, lapse: 'mattingly', tsfc_kg_N_s: 1.6e-5 }),
 };
 
-describe('optimumAltitude', () => {
+// Each optimum flies about a hundred specific-range searches: generous limits on a shared machine, not speed checks.
+describe('optimumAltitude', { timeout: 60_000 }, () => {
   it('optimumAltitude matches the scipy reference for the Mattingly-lapse model', () => {
     const r = expectOk(
       optimumAltitude(models, { mass_kg: 60000, isaDev_K: 0, altitudeRange: [3000, 12000], cautionSettings: NO_LIMITS }),
