@@ -203,7 +203,7 @@ export const CAUTION_CATALOGUE: Readonly<Record<MissionCautionId, CautionEntry>>
     severity: 'info',
     defaultThreshold: 1,
     unit: 'm',
-    source: 'Leg input: cruise and hold legs fly at their own altitude; the change is not flown (more than 1 m)',
+    source: 'Leg input: cruise and hold legs fly at their own altitude; the change is not flown (beyond a small tolerance)',
   },
   profile_altitude_limited: {
     id: 'profile_altitude_limited',

@@ -113,6 +113,17 @@ export function checkProject(project: Project, doc: unknown): ProjectIssue[] {
     issues.push(makeIssue(p, raw(p), 'more than the operating empty weight plus payload', msg`the take-off weight ${kg(solve.takeoffWeight)} leaves no fuel above the operating empty weight plus payload (${kg(w.operatingEmpty + solve.payload)})`));
   }
 
+  // After taxi in the aircraft is parked: a flying leg there would add distance and fuel to a finished trip.
+  const taxiIn = legs.findIndex((l) => l.kind === 'taxiIn');
+  if (taxiIn >= 0) {
+    legs.forEach((leg, i) => {
+      if (i > taxiIn && leg.kind !== 'taxiIn') {
+        const p = `mission.legs[${i}].kind`;
+        issues.push(makeIssue(p, raw(p), 'no flight leg after taxi in', `a ${leg.kind} leg cannot follow the taxi in (leg ${taxiIn + 1}): the aircraft is parked; move it before the taxi in or remove it`));
+      }
+    });
+  }
+
   let altitude_m = 0;
   legs.forEach((leg, i) => {
     if (leg.kind === 'climb') {

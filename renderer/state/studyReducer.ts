@@ -9,7 +9,7 @@ import type { Draft } from 'immer';
 import type { Project } from '../../engine/project';
 import { issueReason } from './displayText';
 import { parseField } from './fieldUnits';
-import { newLeg } from './legTemplates';
+import { LEG_KIND_LABEL, newLeg } from './legTemplates';
 import { pathText, readAt, writeAtMutating } from './projectPath';
 import { projectIssues } from './projectValidation';
 import type { StudyAction } from './studyActions';
@@ -94,7 +94,9 @@ export function studyReducer(state: StudyState, action: StudyAction): StudyState
       });
     case 'legAdded':
       return edited(state, `Add ${action.kind} leg`, (d) => {
-        d.mission.legs.push(newLeg(action.kind));
+        // New legs are named ("Cruise 2"), so messages and the legs table can say which one.
+        const count = d.mission.legs.filter((l) => l.kind === action.kind).length + 1;
+        d.mission.legs.push({ ...newLeg(action.kind), name: `${LEG_KIND_LABEL[action.kind]} ${count}` });
       });
     case 'legRemoved':
       return edited(state, `Remove leg ${action.index + 1}`, (d) => {
@@ -103,7 +105,12 @@ export function studyReducer(state: StudyState, action: StudyAction): StudyState
     case 'legDuplicated':
       return edited(state, `Duplicate leg ${action.index + 1}`, (d) => {
         const leg = d.mission.legs[action.index];
-        if (leg) d.mission.legs.splice(action.index + 1, 0, cloneRow(leg) as typeof leg);
+        if (!leg) return;
+        const copy = cloneRow(leg) as typeof leg;
+        copy.name = `${leg.name ?? LEG_KIND_LABEL[leg.kind]} (copy)`;
+        // Only one cruise may have its distance solved: the copy of that cruise flies a set distance, so the project stays flyable.
+        if (copy.kind === 'cruise' && copy.distance === 'solve') copy.distance = 500 * 1852;
+        d.mission.legs.splice(action.index + 1, 0, copy);
       });
     case 'legMoved':
       return edited(state, `Move leg ${action.index + 1}`, (d) => {

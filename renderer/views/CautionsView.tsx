@@ -47,6 +47,7 @@ export function CautionsView() {
               <input
                 type="checkbox"
                 data-testid="field-caution-cautionOnDeckExtrapolation"
+                aria-label="Caution on deck lookups outside the table"
                 checked={cautions.cautionOnDeckExtrapolation ?? true}
                 onChange={(e) => dispatch({ type: 'valueSet', path: ['cautions', 'cautionOnDeckExtrapolation'], value: e.target.checked, label: 'Deck extrapolation caution' })}
               />

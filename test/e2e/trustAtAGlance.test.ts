@@ -77,10 +77,13 @@ describe('trust at a glance', () => {
     expect(await page.evaluate(() => document.activeElement?.getAttribute('data-testid'))).toBe('view-tab-airframe');
     // One Tab stop for the whole tab list.
     expect(await page.locator('[role="tab"][tabindex="0"]').count()).toBe(1);
-    // The skip link is the first Tab stop and moves focus to the view.
-    await page.evaluate(() => (document.activeElement as HTMLElement | null)?.blur());
-    await page.keyboard.press('Tab');
-    expect(await page.evaluate(() => document.activeElement?.getAttribute('data-testid'))).toBe('skip-link');
+    // The skip link is the first Tab stop in the page (document order) and moves focus to the view.
+    const firstStop = await page.evaluate(
+      () => document.querySelector<HTMLElement>('a[href], button:not([disabled]), input, select, textarea, [tabindex]:not([tabindex="-1"])')?.getAttribute('data-testid') ?? null,
+    );
+    expect(firstStop).toBe('skip-link');
+    await page.getByTestId('skip-link').focus();
+    expect(await page.getByTestId('skip-link').isVisible()).toBe(true);
     await page.keyboard.press('Enter');
     expect(await page.evaluate(() => document.activeElement?.id)).toBe('view-panel');
     await showView(page, 'results');

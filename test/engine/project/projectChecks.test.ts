@@ -109,3 +109,16 @@ describe('checkProject (through parseProject)', () => {
     expect(paths(issues)).toEqual(['cautions.minFanFaceMach']);
   });
 });
+
+describe('checkProject: no flight after taxi in', () => {
+  it('checkProject refuses a hold placed after the taxi in, naming both legs as the list numbers them', () => {
+    const demo = JSON.parse(demoText) as { mission: { legs: unknown[] } };
+    const n = demo.mission.legs.length;
+    demo.mission.legs.push({ kind: 'hold', altitude: '1500 ft', time: '30 min', speed: { kind: 'bestEndurance' } });
+    const r = parseProjectData(demo);
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    const issue = r.error.find((i) => i.path === `mission.legs[${n}].kind`);
+    expect(issue?.message).toContain(`cannot follow the taxi in (leg ${n})`);
+  });
+});

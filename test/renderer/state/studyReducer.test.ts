@@ -163,7 +163,8 @@ describe('studyReducer', () => {
     const removed = run(s0, { type: 'legRemoved', index: 0 });
     expect(removed.doc!.present.mission.legs.map((l) => l.kind)).toEqual(kinds.slice(1));
     const dup = run(s0, { type: 'legDuplicated', index: 1 });
-    expect(dup.doc!.present.mission.legs[2]).toEqual(legs[1]);
+    // The copy is the leg under a name of its own.
+    expect(dup.doc!.present.mission.legs[2]).toEqual({ ...legs[1], name: `${legs[1]!.name ?? 'Takeoff'} (copy)` });
     expect(dup.doc!.present.mission.legs).toHaveLength(legs.length + 1);
     const moved = run(s0, { type: 'legMoved', index: 1, by: 1 });
     expect(moved.doc!.present.mission.legs[1]).toEqual(legs[2]);
