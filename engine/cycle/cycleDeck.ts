@@ -150,6 +150,79 @@ function threePoint(f0: number, f1: number, f2: number, h: number): number {
   return (-3 * f0 + 4 * f1 - f2) / (2 * h);
 }
 
+/** A matched point at a fixed N1 and its installation sensitivities, or why not. */
+export type SensitivePoint =
+  | {
+      readonly ok: true;
+      /** Thrust (N), fuel flow (kg/s), total airflow (kg/s) at the reference. */
+      readonly values: readonly [number, number, number];
+      readonly sensitivities: InstallationSensitivities;
+      readonly start: CycleWarmStart | undefined;
+      readonly runs: number;
+    }
+  | { readonly ok: false; readonly reason: string; readonly runs: number };
+
+/**
+ * The cycle matched at mechanical fan speed `n1` (fraction of design) at a
+ * condition, at recovery `recovery`, no bleed, no extraction, and its
+ * sensitivities by the three-point one-sided differences of the module
+ * comment (seven cycle points).
+ */
+export function cycleSensitivitiesAt(
+  engine: CycleEngine,
+  condition: { readonly altitude_m: number; readonly mach: number; readonly isaDeviation_K: number },
+  n1: number,
+  recovery: number,
+  start?: CycleWarmStart,
+): SensitivePoint {
+  let runs = 0;
+  const run = (extra: { recovery?: number; bleedFraction?: number; powerExtraction_W?: number }, warm?: CycleWarmStart): CyclePointResult => {
+    runs++;
+    return runCyclePoint(engine, {
+      ...condition,
+      throttle: { kind: 'fanSpeed', fraction: n1 },
+      recovery: extra.recovery ?? recovery,
+      bleedFraction: extra.bleedFraction ?? 0,
+      powerExtraction_W: extra.powerExtraction_W ?? 0,
+      ...(warm ? { start: warm } : {}),
+    });
+  };
+  const base = run({}, start);
+  const b = triple(base);
+  if (b === null) return { ok: false, reason: `not matched at N1 ${n1.toFixed(4)} (${base.status}: ${base.message})`, runs };
+  const w = base.start ?? undefined;
+  const hR = SENSITIVITY_STEPS.recovery;
+  const hB = SENSITIVITY_STEPS.bleedFraction;
+  const hP = SENSITIVITY_STEPS.powerExtraction_W;
+  const r1 = triple(run({ recovery: recovery + hR }, w));
+  const r2 = triple(run({ recovery: recovery + 2 * hR }, w));
+  const b1 = triple(run({ bleedFraction: hB }, w));
+  const b2 = triple(run({ bleedFraction: 2 * hB }, w));
+  const e1 = triple(run({ powerExtraction_W: hP }, w));
+  const e2 = triple(run({ powerExtraction_W: 2 * hP }, w));
+  if (r1 === null || r2 === null || b1 === null || b2 === null || e1 === null || e2 === null) {
+    return { ok: false, reason: `a sensitivity step did not match at N1 ${n1.toFixed(4)}`, runs };
+  }
+  const d = (k: 0 | 1 | 2, f1: readonly number[], f2: readonly number[], h: number): number => threePoint(b[k], f1[k]!, f2[k]!, h);
+  return {
+    ok: true,
+    values: b,
+    start: w,
+    runs,
+    sensitivities: {
+      dThrust_dRecovery_N: d(0, r1, r2, hR),
+      dFuelFlow_dRecovery_kg_s: d(1, r1, r2, hR),
+      dAirflow_dRecovery_kg_s: d(2, r1, r2, hR),
+      dThrust_dBleed_N: d(0, b1, b2, hB),
+      dFuelFlow_dBleed_kg_s: d(1, b1, b2, hB),
+      dAirflow_dBleed_kg_s: d(2, b1, b2, hB),
+      dThrust_dExtraction_N_W: d(0, e1, e2, hP),
+      dFuelFlow_dExtraction_kg_s_W: d(1, e1, e2, hP),
+      dAirflow_dExtraction_kg_s_W: d(2, e1, e2, hP),
+    },
+  };
+}
+
 /**
  * Generates the deck of `engine` over `grid` (default DEFAULT_CYCLE_DECK_GRID)
  * with airflow and sensitivity columns, per engine, uninstalled at the
@@ -210,39 +283,15 @@ export function cycleDeck(engine: CycleEngine, grid: CycleDeckGrid = DEFAULT_CYC
             gap(power, `fan speed ${n1.toFixed(6)} does not rise above the point below (${lastN1.toFixed(6)}): the ratings coincide here`);
             continue;
           }
-          const base = run(altitude_m, mach, isaDev_K, n1, null, {}, start);
-          const b = triple(base);
-          if (b === null) {
-            gap(power, `not matched at N1 ${n1.toFixed(4)} (${base.status}: ${base.message})`);
+          const at = cycleSensitivitiesAt(engine, { altitude_m, mach, isaDeviation_K: isaDev_K }, n1, ref.recovery, start);
+          runs += at.runs;
+          if (!at.ok) {
+            gap(power, at.reason);
             continue;
           }
-          start = base.start ?? undefined;
-          const w = base.start ?? undefined;
-          const hR = SENSITIVITY_STEPS.recovery;
-          const hB = SENSITIVITY_STEPS.bleedFraction;
-          const hP = SENSITIVITY_STEPS.powerExtraction_W;
-          const r1 = triple(run(altitude_m, mach, isaDev_K, n1, null, { recovery: ref.recovery + hR }, w));
-          const r2 = triple(run(altitude_m, mach, isaDev_K, n1, null, { recovery: ref.recovery + 2 * hR }, w));
-          const b1 = triple(run(altitude_m, mach, isaDev_K, n1, null, { bleedFraction: hB }, w));
-          const b2 = triple(run(altitude_m, mach, isaDev_K, n1, null, { bleedFraction: 2 * hB }, w));
-          const e1 = triple(run(altitude_m, mach, isaDev_K, n1, null, { powerExtraction_W: hP }, w));
-          const e2 = triple(run(altitude_m, mach, isaDev_K, n1, null, { powerExtraction_W: 2 * hP }, w));
-          if (r1 === null || r2 === null || b1 === null || b2 === null || e1 === null || e2 === null) {
-            gap(power, `a sensitivity step did not match at N1 ${n1.toFixed(4)}`);
-            continue;
-          }
-          const d = (k: 0 | 1 | 2, f1: readonly number[], f2: readonly number[], h: number): number => threePoint(b[k], f1[k]!, f2[k]!, h);
-          const sensitivities: InstallationSensitivities = {
-            dThrust_dRecovery_N: d(0, r1, r2, hR),
-            dFuelFlow_dRecovery_kg_s: d(1, r1, r2, hR),
-            dAirflow_dRecovery_kg_s: d(2, r1, r2, hR),
-            dThrust_dBleed_N: d(0, b1, b2, hB),
-            dFuelFlow_dBleed_kg_s: d(1, b1, b2, hB),
-            dAirflow_dBleed_kg_s: d(2, b1, b2, hB),
-            dThrust_dExtraction_N_W: d(0, e1, e2, hP),
-            dFuelFlow_dExtraction_kg_s_W: d(1, e1, e2, hP),
-            dAirflow_dExtraction_kg_s_W: d(2, e1, e2, hP),
-          };
+          start = at.start;
+          const b = at.values;
+          const sensitivities = at.sensitivities;
           lastN1 = n1;
           rows.push({ isaDev_K, altitude_m, mach, power, thrust_N: b[0], fuelFlow_kg_s: b[1], airflow_kg_s: b[2], sensitivities });
         }
