@@ -4,6 +4,7 @@
  * a ProjectIssue naming the JSON path, the value and what was expected.
  */
 import { err, ok, type Result } from '../core/result';
+import { msg } from '../units/messageParts';
 import { parseJsonText } from './jsonText';
 import { checkProject } from './projectChecks';
 import { fromZodIssues, makeIssue, type ProjectIssue } from './projectIssue';
@@ -42,5 +43,8 @@ export function parseProjectData(data: unknown): Result<Project, readonly Projec
 }
 
 function noteMigration(issue: ProjectIssue, fromVersion: number): ProjectIssue {
-  return makeIssue(issue.path, issue.value, issue.expected, `${issue.message.slice(issue.path.length + 2)} (path as in the current layout; the file is version ${fromVersion})`);
+  const note = ` (path as in the current layout; the file is version ${fromVersion})`;
+  const noted = makeIssue(issue.path, issue.value, issue.expected, `${issue.message.slice(issue.path.length + 2)}${note}`);
+  // A reason carried as message parts keeps its quantities, so a screen still shows them in its own units.
+  return issue.reasonParts === undefined ? noted : { ...noted, reasonParts: msg`${issue.reasonParts}${note}` };
 }

@@ -69,18 +69,23 @@ const MESSAGE_KIND: Partial<Readonly<Record<Dimension, DisplayKind>>> = {
   tsfc: 'tsfc',
 };
 
-/** "x is out of range: expected from a to b" with the numbers as quantities. */
-function outOfRangeParts(value: number, dimension: Dimension, bounds: QuantityBounds): MessageParts {
+/** The range of `bounds` with its numbers as quantities: "from a to b", "at least a" or "at most b". */
+function rangeParts(dimension: Dimension, bounds: QuantityBounds): MessageParts {
   const kind: MessageKind = MESSAGE_KIND[dimension] ?? 'ratio';
+  // `what` reads "a Mach number from 0.05 to 0.99": its noun stays, its numbers are shown as quantities.
+  const noun = bounds.what.split(/ (?:from|in|above|below|at least|at most|>|>=|<|<=) /)[0]!;
   const range =
     bounds.min !== undefined && bounds.max !== undefined
       ? msg`from ${q(bounds.min, kind)} to ${q(bounds.max, kind)}`
       : bounds.min !== undefined
         ? msg`at least ${q(bounds.min, kind)}`
         : msg`at most ${q(bounds.max ?? Number.NaN, kind)}`;
-  // `what` reads "a Mach number from 0.05 to 0.99": its noun stays, its numbers are shown as quantities.
-  const noun = bounds.what.split(/ (?:from|in|at least|at most|>|>=|<|<=) /)[0]!;
-  return msg`${q(value, kind)} is out of range: expected ${noun} ${range}`;
+  return msg`${noun} ${range}`;
+}
+
+/** "x is out of range: expected from a to b" with the numbers as quantities. */
+function outOfRangeParts(value: number, dimension: Dimension, bounds: QuantityBounds): MessageParts {
+  return msg`${q(value, MESSAGE_KIND[dimension] ?? 'ratio')} is out of range: expected ${rangeParts(dimension, bounds)}`;
 }
 
 /**
@@ -92,20 +97,23 @@ function outOfRangeParts(value: number, dimension: Dimension, bounds: QuantityBo
  */
 export function quantity(dimension: Dimension, bounds?: QuantityBounds) {
   const expected = bounds ? `${expectedText(dimension)}, ${bounds.what}` : expectedText(dimension);
+  // The same expectation with the bounds as quantities, so each reader shows them in its own units.
+  const expectedParts = (lead: string): MessageParts | undefined =>
+    bounds ? msg`${lead}; expected ${expectedText(dimension)}, ${rangeParts(dimension, bounds)}` : undefined;
   const shown = (input: unknown): string => (typeof input === 'string' ? `"${input}"` : String(input));
   const schema = z
     .custom<number | string>(() => true)
     .transform((input, ctx): number => {
       if (input === undefined || input === null) {
-        ctx.issues.push({ code: 'custom', input, message: `missing; expected ${expected}`, params: { expected } });
+        ctx.issues.push({ code: 'custom', input, message: `missing; expected ${expected}`, params: { expected, parts: expectedParts('missing') } });
         return z.NEVER;
       }
       if (typeof input !== 'number' && typeof input !== 'string') {
-        ctx.issues.push({ code: 'custom', input, message: `${showValue(input)} is not a number or a quantity string; expected ${expected}`, params: { expected } });
+        ctx.issues.push({ code: 'custom', input, message: `${showValue(input)} is not a number or a quantity string; expected ${expected}`, params: { expected, parts: expectedParts(`${showValue(input)} is not a number or a quantity string`) } });
         return z.NEVER;
       }
       if (typeof input === 'number' && !Number.isFinite(input)) {
-        ctx.issues.push({ code: 'custom', input, message: `${input} is not a finite number; expected ${expected}`, params: { expected } });
+        ctx.issues.push({ code: 'custom', input, message: `${input} is not a finite number; expected ${expected}`, params: { expected, parts: expectedParts(`${input} is not a finite number`) } });
         return z.NEVER;
       }
       const parsed = parseQuantity(input, dimension);
