@@ -10,7 +10,7 @@ With numpy/scipy, written apart from the TypeScript code:
     (n = 32, d = 4, scramble=True, no optimisation) and of plain uniform random
     samples of the same size: the property our own Latin hypercube must meet;
   - the first outputs of xoshiro128** seeded by SplitMix32, from a plain Python
-    transcription of the published algorithms (Blackman & Vigna; prng.di.unimi.it).
+    port of the published algorithms (Blackman & Vigna; prng.di.unimi.it).
 Run:  python3 test/reference/uncertaintyReference.py > test/reference/uncertaintyReference.json
 """
 import json

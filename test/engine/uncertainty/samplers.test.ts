@@ -1,6 +1,6 @@
 /**
  * The Monte-Carlo building blocks against outside references: the seeded
- * generator against a Python transcription of the published xoshiro128** and
+ * generator against a Python port of the published xoshiro128** and
  * SplitMix32; the normal CDF, quantile and truncated-normal draws against
  * scipy.stats; percentiles against numpy.percentile; Spearman's rho against
  * scipy.stats.spearmanr; the Latin hypercube against the defining property
@@ -19,7 +19,7 @@ import { expectClose } from '../../support/assertInDelta';
 import { ref } from './uncertaintyReference';
 
 describe('seededRandom (xoshiro128** seeded by SplitMix32)', () => {
-  it('draws the published algorithm\'s integers (Python transcription, uncertaintyReference.py)', () => {
+  it('draws the published algorithm\'s integers (Python port, uncertaintyReference.py)', () => {
     const r = seededRandom(ref.xoshiro128ss.seed);
     expect(ref.xoshiro128ss.first.map(() => r.nextUint32())).toEqual(ref.xoshiro128ss.first);
     const r2 = seededRandom(ref.xoshiro128ss.seed2);
