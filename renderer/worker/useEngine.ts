@@ -49,8 +49,10 @@ interface LiveState {
  * marked stale. A new `documentKey` (another project opened) drops the last
  * result, so no figure of the previous project is shown.
  */
-export function useLiveStudy(inputs: StudyInputs | null, blockingIssues: readonly ProjectIssue[] = NO_ISSUES, documentKey = 0): LiveStudy {
+export function useLiveStudy(inputs: StudyInputs | null, givenIssues: readonly ProjectIssue[] = NO_ISSUES, documentKey = 0): LiveStudy {
   const client = useEngineClient();
+  // An empty list is one identity whoever built it, so a caller's fresh `[]` per render does not re-fly forever.
+  const blockingIssues = givenIssues.length === 0 ? NO_ISSUES : givenIssues;
   const revisionRef = useRef(0);
   const [revision, setRevision] = useState(0);
   const [state, setState] = useState<LiveState>({ snapshot: null, snapshotRevision: -1, failure: null, running: false, documentKey });

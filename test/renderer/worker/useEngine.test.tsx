@@ -120,6 +120,8 @@ describe('useLiveStudy', () => {
     expect(result.current.snapshot).toEqual(snapshot(1));
     rerender({ i: { ...first }, k: 2 });
     expect(result.current.snapshot).toBeNull();
+    // a fresh `[]` on every render is the same "no issues": one run per input change, not one per render
+    expect(client.runs).toHaveLength(2);
     // a late reply for the old document is dropped
     await act(async () => client.runs[0]!.resolve({ ok: true, value: snapshot(9) }));
     expect(result.current.snapshot).toBeNull();
