@@ -129,32 +129,36 @@ export function useEngineJob<K extends EngineRequestKind>(options: { readonly ca
 function useStoredEngineJob<K extends EngineRequestKind>(options: { readonly cancelOnRestart?: boolean }, store: JobStore | null, key: string | undefined): EngineJob<K> | null {
   const cancelOnRestart = options.cancelOnRestart ?? true;
   const client = useEngineClient();
+  // The store object changes on every store change; its slot and changed functions do not. The callbacks
+  // depend on those only, so a view effect that depends on `start` does not re-run (and re-start) on each change.
+  const slot = store?.slot ?? null;
+  const changed = store?.changed ?? null;
   const cancel = useCallback(() => {
-    if (store === null || key === undefined) return;
-    const s = store.slot(key);
+    if (slot === null || changed === null || key === undefined) return;
+    const s = slot(key);
     s.run?.cancel();
     s.run = null;
-  }, [store, key]);
+  }, [slot, changed, key]);
   const start = useCallback(
     (request: Extract<EngineRequest, { kind: K }>) => {
-      if (store === null || key === undefined) return;
-      const s = store.slot(key);
+      if (slot === null || changed === null || key === undefined) return;
+      const s = slot(key);
       if (cancelOnRestart) s.run?.cancel();
       s.state = { status: 'running', done: 0, total: 0 };
       s.request = request;
       const run = client.run<K>(request, (done, total) => {
         if (s.run === run) {
           s.state = { status: 'running', done, total };
-          store.changed();
+          changed();
         }
       });
       s.run = run as EngineRun<EngineRequestKind>;
-      store.changed();
+      changed();
       void run.outcome.then((outcome) => {
         if (outcome === 'cancelled') {
           if (s.run === null || s.run === run) {
             s.state = { status: 'cancelled' };
-            store.changed();
+            changed();
           }
           return;
         }
@@ -162,10 +166,10 @@ function useStoredEngineJob<K extends EngineRequestKind>(options: { readonly can
         s.run = null;
         if (outcome.ok) s.lastValue = outcome.value;
         s.state = outcome.ok ? { status: 'done', value: outcome.value } : { status: 'failed', failure: outcome.error };
-        store.changed();
+        changed();
       });
     },
-    [client, cancelOnRestart, store, key],
+    [client, cancelOnRestart, slot, changed, key],
   );
   if (store === null || key === undefined) return null;
   const s = store.slot(key);

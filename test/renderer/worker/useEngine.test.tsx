@@ -3,7 +3,9 @@ import type { ReactNode } from 'react';
 import { describe, expect, it } from 'vitest';
 import type { EngineClient, EngineRun } from '../../../renderer/worker/engineClient';
 import type { EngineOutcome, EngineRequest, EngineRequestKind, StudyInputs, StudySnapshot } from '../../../renderer/worker/engineProtocol';
+import { JobStoreProvider } from '../../../renderer/worker/jobStore';
 import { EngineContext, useEngineJob, useLiveStudy } from '../../../renderer/worker/useEngine';
+import { useEffect } from 'react';
 
 /** Long enough for an effect and a microtask to run (the study is flown at once, with no delay). */
 const SETTLE_MS = 50;
@@ -182,5 +184,28 @@ describe('useEngineJob', () => {
     const newest = { curves: [2] } as never;
     await act(async () => client.runs[2]!.resolve({ ok: true, value: newest }));
     expect(result.current.lastValue).toBe(newest);
+  });
+
+  it('a stored job keeps one start function while the store changes, so a view effect on it starts once per input', async () => {
+    const client = manualClient();
+    const request = { kind: 'crossover' as const, ...inputs(), query: { altitude_m: 10000, mass_kg: 15000, rating: 'maxCruise' as const, isaDev_K: 0, allInlets: false } };
+    const storeWrapper = ({ children }: { children: ReactNode }) => (
+      <EngineContext.Provider value={client}>
+        <JobStoreProvider documentKey={1}>{children}</JobStoreProvider>
+      </EngineContext.Provider>
+    );
+    const { result } = renderHook(
+      () => {
+        const job = useEngineJob<'crossover'>({ cancelOnRestart: false, persistKey: 'crossover' });
+        const { start } = job;
+        useEffect(() => start(request), [start]);
+        return job;
+      },
+      { wrapper: storeWrapper },
+    );
+    // starting changes the store (running, then done); before the fix each change re-ran the effect without end
+    await act(async () => client.runs[0]!.resolve({ ok: true, value: { curves: [] } }));
+    expect(client.runs).toHaveLength(1);
+    expect(result.current.state.status).toBe('done');
   });
 });
