@@ -47,7 +47,7 @@ export function ResultsView(props: { readonly live: LiveStudy; readonly chartSiz
       <FailureNotice failure={failure} testId="results-failure" />
       <p data-testid="mission-status" className={m.status === 'ok' ? 'status-ok' : 'status-bad'}>
         Mission status: {statusLabel(m.status)}
-        {m.status !== 'ok' ? ` — ${missionStatusText(m, u)}` : ''} (inlet {snapshot.inletName}; deck {deckTitleText(snapshot.deck.title, snapshot.deck.parametric)})
+        {m.status !== 'ok' ? ` — ${missionStatusText(m, u)}` : ''} (inlet <span data-user-text>{snapshot.inletName}</span>; deck <span data-user-text>{deckTitleText(snapshot.deck.title, snapshot.deck.parametric)}</span>)
       </p>
       <HeadlineFigures result={m} units={u} stale={stale} />
       <div className={`results-body ${healthClass(resultHealth(props.live))}`} data-testid="results-body">

@@ -53,7 +53,15 @@ describe('trust at a glance', () => {
       for (const v of VIEWS) {
         await showView(page, v.id);
         await page.waitForTimeout(300);
-        const text = (await page.getByTestId(`view-${v.id}`).innerText()) ?? '';
+        // Names the user wrote (inlet and deck titles, marked data-user-text) may hold any unit ("a 36 kN class deck").
+        const text = await page.getByTestId(`view-${v.id}`).evaluate((el) => {
+          const names = [...el.querySelectorAll('[data-user-text]')];
+          const saved = names.map((n) => n.textContent);
+          for (const n of names) n.textContent = '(name)';
+          const shown = (el as HTMLElement).innerText;
+          names.forEach((n, i) => (n.textContent = saved[i] ?? ''));
+          return shown;
+        });
         // The engine view lists the deck file's own header units as written; every other view is in display units.
         if (v.id !== 'engine') expect(text, `${v.id}: ${text.match(SI_UNIT_AFTER_NUMBER)?.[0]}`).not.toMatch(SI_UNIT_AFTER_NUMBER);
         expect(await page.getByTestId('summary-strip').textContent()).toMatch(/Block fuel [\d,]+ lb/);
