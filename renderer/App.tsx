@@ -155,7 +155,7 @@ function Shell(props: AppProps) {
             {project === null ? <p>Opening…</p> : <CurrentView view={view} live={live} onCommand={(c) => void commands.run(c)} {...(props.chartSize ? { chartSize: props.chartSize } : {})} />}
           </main>
         </div>
-        {printing && project !== null && live.snapshot !== null ? <StudyReport project={project} snapshot={live.snapshot} units={state.units} stale={live.stale} /> : null}
+        {printing && project !== null && live.snapshot !== null ? <StudyReport project={project} snapshot={live.snapshot} units={state.units} stale={live.stale} documentName={state.documentName} printedAt={new Date()} /> : null}
         <ConfirmDialog question={confirm.pending} onAnswer={confirm.answer} />
         <SafetyNotice />
       </div>

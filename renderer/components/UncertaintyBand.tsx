@@ -20,7 +20,8 @@ const SAMPLE_CHOICES = ['50', '100', '200', '500'] as const;
 export function UncertaintyBand(props: { readonly designs: readonly string[]; readonly testId: string; readonly chartSize?: ChartSize }) {
   const { state } = useStudy();
   const project = state.doc!.present;
-  const job = useEngineJob<'uncertainty'>();
+  // Kept in the job store (under its test id) so a tab switch keeps it and the printed report can include it.
+  const job = useEngineJob<'uncertainty'>({ persistKey: `uncertainty.${props.testId}` });
   const declared = project.uncertainty?.inputs.length ?? 0;
   const [samples, setSamples] = useState<(typeof SAMPLE_CHOICES)[number]>(String(project.uncertainty?.samples ?? 100) as (typeof SAMPLE_CHOICES)[number]);
   const u = state.units;

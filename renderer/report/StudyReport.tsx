@@ -14,11 +14,30 @@ import { missionStatusText, ratingLabel, solveModeLabel, statusLabel } from '../
 import { LEG_KIND_LABEL } from '../state/legTemplates';
 import { RESERVE_PRESET_LABEL } from '../state/reservePresets';
 import type { StudySnapshot } from '../worker/engineProtocol';
+import { ReportAnalyses } from './ReportAnalyses';
 
 const REPORT_CHART = { width: 680, height: 240 };
 
-/** The whole study on one printable page (hidden on screen; print.css shows it). */
-export function StudyReport(props: { readonly project: Project; readonly snapshot: StudySnapshot; readonly units: UnitSystem; readonly stale: boolean }) {
+/** When the report was printed, in the reader's local time: 2026-12-02 14:05. */
+export function reportDateText(d: Date): string {
+  const two = (n: number) => String(n).padStart(2, '0');
+  return `${d.getFullYear()}-${two(d.getMonth() + 1)}-${two(d.getDate())} ${two(d.getHours())}:${two(d.getMinutes())}`;
+}
+
+/**
+ * The whole study as a printable report (mounted only to print; print.css
+ * lays it out, with page numbers in the page margin): the project file and the
+ * date, inputs, results with plots, the analyses run in this session, legs,
+ * cautions and the notice at both ends.
+ */
+export function StudyReport(props: {
+  readonly project: Project;
+  readonly snapshot: StudySnapshot;
+  readonly units: UnitSystem;
+  readonly stale: boolean;
+  readonly documentName: string;
+  readonly printedAt: Date;
+}) {
   const { project: p, snapshot: s, units: u } = props;
   const m = s.mission;
   const rows = profileSeries(m.history, u, 200);
@@ -28,6 +47,9 @@ export function StudyReport(props: { readonly project: Project; readonly snapsho
   return (
     <article className="print-report" data-testid="print-report" aria-hidden="true">
       <h1>{p.name}</h1>
+      <p className="report-meta" data-testid="report-meta">
+        Project file <span data-user-text>{props.documentName}</span>; printed {reportDateText(props.printedAt)}; units {u === 'si' ? 'SI' : 'customary (ft, kt, lb)'}.
+      </p>
       <p className="report-notice" data-testid="report-notice">
         {SAFETY_NOTICE_LINES.join(' ')}
       </p>
@@ -90,11 +112,12 @@ export function StudyReport(props: { readonly project: Project; readonly snapsho
           size={REPORT_CHART}
         />
       ) : null}
+      <ReportAnalyses project={p} units={u} />
       <h2>Legs</h2>
       <LegsTable legs={m.legs} units={u} highlightLeg={null} testId="report-legs" />
       <h2>Cautions</h2>
       <CautionList cautions={m.cautions} units={u} testId="report-cautions" />
-      <p className="report-notice">{SAFETY_NOTICE_LINES.join(' ')}</p>
+      <p className="report-notice report-notice-end">{SAFETY_NOTICE_LINES.join(' ')}</p>
     </article>
   );
 }

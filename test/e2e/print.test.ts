@@ -54,4 +54,34 @@ describe('printing', () => {
     const pdf = await page.pdf({ format: 'A4' });
     expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
   });
+
+  it('the printed report is dated and names its file, no table cell wraps at A4 width, and it fits a few A4 pages with the closing notice kept with the content', async () => {
+    const { page } = await openApp(browser, inject('baseUrl'));
+    await openDemo(page);
+    await page.evaluate(() => window.dispatchEvent(new Event('beforeprint')));
+    await page.emulateMedia({ media: 'print' });
+    // A4 less the 15 mm side margins of print.css at 96 px per inch: 180 mm = 680 px
+    await page.setViewportSize({ width: 680, height: 1000 });
+    const report = page.getByTestId('print-report');
+    await report.waitFor({ state: 'visible' });
+    const meta = (await page.getByTestId('report-meta').textContent()) ?? '';
+    expect(meta).toContain('demo.blockwise.json');
+    expect(meta).toMatch(/printed \d{4}-\d{2}-\d{2} \d{2}:\d{2}/);
+    const layout = await page.evaluate(() => {
+      const cells = [...document.querySelectorAll('[data-testid="print-report"] td, [data-testid="print-report"] th')].filter((c) => !c.closest('.report-inputs') || c !== c.parentElement?.lastElementChild);
+      const wrapped = cells.filter((c) => {
+        const lineHeight = parseFloat(getComputedStyle(c).lineHeight) || 14;
+        return (c as HTMLElement).getBoundingClientRect().height > 1.8 * lineHeight;
+      }).map((c) => c.textContent);
+      const end = document.querySelector('.report-notice-end')!;
+      return { cells: cells.length, wrapped, endBreak: getComputedStyle(end).breakBefore };
+    });
+    expect(layout.cells).toBeGreaterThan(10);
+    expect(layout.wrapped).toEqual([]);
+    expect(layout.endBreak).toBe('avoid');
+    const pdf = (await page.pdf({ format: 'A4' })).toString('latin1');
+    const pages = pdf.match(/\/Type\s*\/Page(?!s)/g)?.length ?? 0;
+    expect(pages).toBeGreaterThanOrEqual(1);
+    expect(pages).toBeLessThanOrEqual(4);
+  });
 });
