@@ -28,3 +28,22 @@ export { spoolSpeeds, type SpoolSpeeds } from './spoolSpeeds';
 export { limitAt, LIMIT_UNITS } from './limitSchedule';
 export { stationTable, type StationRow } from './stationTable';
 export { cycleDeck, cycleDeckPowers, DEFAULT_CYCLE_DECK_GRID, POWER_LEVER, SENSITIVITY_STEPS, type CycleDeckGrid, type CycleDeckResult } from './cycleDeck';
+export {
+  matchCycleToDeck,
+  deckWithCycleSensitivities,
+  applyMatchParameters,
+  matchDefaultBounds,
+  MATCH_PARAMETERS,
+  DEFAULT_MATCH_FREE,
+  DEFAULT_MATCH_RATINGS,
+  DEFAULT_MATCH_NODES,
+  type MatchParameter,
+  type CycleMatchOptions,
+  type CycleMatchResult,
+  type CycleMatchError,
+  type MatchPointResult,
+  type MatchParameterValue,
+  type DeckCopyResult,
+  type DeckCopyCaution,
+} from './cycleMatch';
+export { cycleFileOf } from './cycleFileWrite';
