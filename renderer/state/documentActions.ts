@@ -1,8 +1,10 @@
 /**
  * Turning files into actions: a project's text into `projectOpened` (or
- * `projectOpenFailed` with every issue), the bundled demo, a deck file.
+ * `projectOpenFailed` with every issue), the bundled demo, a deck file
+ * into `deckImported` (or a refusal saying where and what).
  */
 import { parseProject } from '../../engine/project';
+import { parseDeckText } from '../../engine/study';
 import type { StudyAction } from './studyActions';
 import type { DeckFile } from './studyState';
 
@@ -18,4 +20,23 @@ export function openProjectAction(name: string, text: string, deckFile: DeckFile
   const deck = project.engine.deck;
   const keep = deck.kind === 'file' && deckFile !== null && deck.path === deckFile.name;
   return { type: 'projectOpened', project, name, deckFile: keep ? deckFile : null };
+}
+
+/** Most deck errors listed in the message line; the rest are counted. */
+const DECK_ERRORS_SHOWN = 5;
+
+/**
+ * A picked deck file to `deckImported`, or the reason it is refused. The
+ * deck is parsed here by engine/study's parseDeckText (the parser the CLI
+ * and the worker use, CSV or JSON by content), before anything changes: a
+ * refused deck never reaches the store, so the working deck, the project,
+ * its results and its undo history stay as they were.
+ */
+export function deckImportAction(deckFile: DeckFile): { readonly ok: true; readonly action: StudyAction } | { readonly ok: false; readonly message: string } {
+  const parsed = parseDeckText(deckFile.text, deckFile.name);
+  if (parsed.ok) return { ok: true, action: { type: 'deckImported', deckFile } };
+  const lines = parsed.error.slice(0, DECK_ERRORS_SHOWN).map((e) => e.message);
+  const more = parsed.error.length - lines.length;
+  const tail = more > 0 ? ` (and ${more} more)` : '';
+  return { ok: false, message: `Deck ${deckFile.name} not imported, nothing changed: ${lines.join('; ')}${tail}.` };
 }

@@ -8,7 +8,7 @@ import { projectToJson } from '../../engine/project';
 import type { Bridge, MenuCommand } from '../bridge/bridge';
 import type { ToolbarCommand } from '../components/Toolbar';
 import { fileStem, historyCsv, legsCsv } from '../../engine/study';
-import { openProjectAction } from './documentActions';
+import { deckImportAction, openProjectAction } from './documentActions';
 import type { StudyStore } from './studyContext';
 import { undoKeyCommand } from './undoKeys';
 import type { StudySnapshot } from '../worker/engineProtocol';
@@ -106,7 +106,12 @@ export function useAppCommands(bridge: Bridge, store: StudyStore, snapshot: Stud
           }
           case 'importDeck': {
             const deck = await bridge.importDeck();
-            if (deck) dispatch({ type: 'deckImported', deckFile: { name: deck.name, text: deck.text } });
+            if (!deck) return;
+            const imported = deckImportAction({ name: deck.name, text: deck.text });
+            if (imported.ok) {
+              dispatch(imported.action);
+              setMessage(`Imported deck ${deck.name}.`);
+            } else setMessage(imported.message);
             return;
           }
           case 'exportHistory':

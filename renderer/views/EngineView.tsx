@@ -29,7 +29,7 @@ export function EngineView(props: { readonly live: LiveStudy; readonly chartSize
   return (
     <section>
       <h2>Engine deck and installation</h2>
-      <p>
+      <p data-testid="engine-deck-source">
         Deck source: {deckSource.kind === 'file' ? `file ${deckSource.path}` : deckSource.kind === 'cycle' ? `generated from the cycle file ${deckSource.path}` : deckSource.kind === 'parametric' ? `parametric (${deckSource.title})` : 'embedded in the project'}
         {state.deckFile ? ` — loaded ${state.deckFile.name}` : ''}{' '}
         <button type="button" data-testid="engine-import-deck" onClick={() => props.onCommand?.('importDeck')}>

@@ -21,14 +21,15 @@ afterAll(async () => {
 });
 
 describe('importing a deck', () => {
-  it('a deck with a non-numeric cell shows its line and column', async () => {
+  it('a deck with a non-numeric cell is refused with its line and column in the message line', async () => {
     const { page } = await openApp(browser, inject('baseUrl'));
     await openDemo(page);
     await showView(page, 'engine');
     const chooser = page.waitForEvent('filechooser');
     await page.getByTestId('command-importDeck').click();
     await (await chooser).setFiles(resolve(badDecks, 'non-numeric-cell.csv'));
-    const errors = page.getByTestId('deck-errors');
+    // A refused deck changes nothing; the message line says where and what.
+    const errors = page.getByTestId('app-message');
     await errors.waitFor({ state: 'visible' });
     const message = expected['non-numeric-cell.csv'];
     expect(message).toMatch(/line 6, column "thrust\[lbf\]"/);

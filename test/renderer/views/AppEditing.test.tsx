@@ -3,6 +3,8 @@ import { act, fireEvent, render, screen, waitFor } from '@testing-library/react'
 import { describe, expect, it } from 'vitest';
 import { SAFETY_NOTICE_LINES } from '../../../engine/core/notice';
 import { App } from '../../../renderer/App';
+import { deckToJson } from '../../../engine/propulsion';
+import { parseDeckText } from '../../../engine/study';
 import { createInThreadClient } from '../../../renderer/worker/engineClient';
 import { expectClose } from '../../support/assertInDelta';
 import { createFakeBridge, fixtureText, demoFiles, type FakeBridge } from '../support/fakeBridge';
@@ -88,18 +90,41 @@ describe('the App with the demo study', () => {
     expect(screen.queryByTestId('results-stale')).toBeNull();
   }, 60000);
 
-  it('imports a bad deck through the bridge and lists its errors with line and column', async () => {
+  it('refuses a bad deck on import: the message says line and column, and the deck, results and history stay', async () => {
     const bridge = renderApp();
-    await blockFuel();
-    bridge.nextDeck = { name: 'non-numeric-cell.csv', text: fixtureText('fixtures/bad-decks/non-numeric-cell.csv') };
+    const before = await blockFuel();
     fireEvent.click(screen.getByTestId('view-tab-engine'));
+    const deckLine = screen.getByTestId('engine-deck-source').textContent;
+    bridge.nextDeck = { name: 'non-numeric-cell.csv', text: fixtureText('fixtures/bad-decks/non-numeric-cell.csv') };
     fireEvent.click(screen.getByTestId('command-importDeck'));
-    const errors = await screen.findByTestId('deck-errors', {}, { timeout: 15000 });
+    // The located message is the deck parser's own (fixtures/bad-decks/expected.json, docs/deck-format.md "Errors").
     const expected = (JSON.parse(fixtureText('fixtures/bad-decks/expected.json')) as Record<string, string>)['non-numeric-cell.csv']!;
-    expect(errors.textContent).toContain(expected);
-    expect(screen.getByTestId('deck-error-0').textContent).toMatch(/^6thrust\[lbf\]/);
+    await waitFor(() => expect(screen.getByTestId('app-message').textContent).toContain(expected), { timeout: 15000 });
+    expect(screen.getByTestId('app-message').textContent).toMatch(/nothing changed/);
+    expect(screen.getByTestId('engine-deck-source').textContent).toBe(deckLine);
+    expect(screen.queryByTestId('deck-errors')).toBeNull();
     fireEvent.click(screen.getByTestId('view-tab-results'));
-    expect(screen.getByTestId('results-stale')).toBeInTheDocument();
+    expect(screen.queryByTestId('results-stale')).toBeNull();
+    expect(await blockFuel()).toBe(before);
+    // No undo step was recorded: the document is still unedited.
+    expect(bridge.documentStates.at(-1)).toEqual({ name: 'demo.blockwise.json', dirty: false });
+  }, 60000);
+
+  it('imports the JSON form of the deck in use and flies it to the same block fuel', async () => {
+    const bridge = renderApp();
+    const before = await blockFuel();
+    // docs/deck-format.md "JSON form": deckToJson writes the JSON form with exact round trip, so the same deck as JSON flies the same mission.
+    const csv = parseDeckText(demoFiles().deckText, 'demo-engine.deck.csv');
+    if (!csv.ok) throw new Error('demo deck does not parse');
+    bridge.nextDeck = { name: 'same-engine.deck.json', text: deckToJson(csv.value) };
+    fireEvent.click(screen.getByTestId('command-importDeck'));
+    await waitFor(() => expect(screen.getByTestId('app-message').textContent).toMatch(/^Imported deck same-engine\.deck\.json\./), { timeout: 15000 });
+    fireEvent.click(screen.getByTestId('view-tab-engine'));
+    expect(screen.getByTestId('engine-deck-source').textContent).toContain('same-engine.deck.json');
+    fireEvent.click(screen.getByTestId('view-tab-results'));
+    await waitFor(() => expect(screen.queryByTestId('results-stale')).toBeNull(), { timeout: 15000 });
+    expect(await blockFuel()).toBe(before);
+    await waitFor(() => expect(bridge.documentStates.at(-1)).toEqual({ name: 'demo.blockwise.json', dirty: true }));
   }, 60000);
 
   it('exports the time history and legs as CSV and prints the report through the bridge', async () => {
