@@ -69,10 +69,13 @@ export function studyReducer(state: StudyState, action: StudyAction): StudyState
     case 'projectOpenFailed':
       return { ...state, openIssues: action.issues };
     case 'deckImported': {
-      const next = edited({ ...state, deckFile: action.deckFile }, `Import deck ${action.deckFile.name}`, (d) => {
+      // One step for the deck text and the project's reference together: undo restores both.
+      if (state.doc === null) return state;
+      const companion = { deckBefore: state.deckFile, deckAfter: action.deckFile };
+      const doc = applyEdit(state.doc, `Import deck ${action.deckFile.name}`, (d) => {
         d.engine.deck = { kind: 'file', path: action.deckFile.name };
-      });
-      return next;
+      }, companion);
+      return { ...state, doc, deckFile: action.deckFile, issues: projectIssues(doc.present) };
     }
     case 'fieldEdited':
       return fieldEdited(state, action);
@@ -129,9 +132,12 @@ export function studyReducer(state: StudyState, action: StudyAction): StudyState
     case 'undo':
     case 'redo': {
       if (state.doc === null) return state;
+      const step = action.type === 'undo' ? state.doc.past.at(-1) : state.doc.future.at(-1);
       const doc = action.type === 'undo' ? undo(state.doc) : redo(state.doc);
       if (doc === state.doc) return state;
-      return { ...state, doc, drafts: {}, issues: projectIssues(doc.present) };
+      const companion = step?.companion;
+      const deckFile = companion === undefined ? state.deckFile : action.type === 'undo' ? companion.deckBefore : companion.deckAfter;
+      return { ...state, doc, deckFile, drafts: {}, issues: projectIssues(doc.present) };
     }
     case 'unitsChosen':
       return { ...state, units: action.units, drafts: {} };

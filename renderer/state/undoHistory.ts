@@ -1,12 +1,24 @@
 import { applyPatches, enablePatches, produceWithPatches, type Draft, type Patch } from 'immer';
+import type { DeckFile } from './studyState';
 
 enablePatches();
+
+/**
+ * What a step changed beside the document: the deck file in use (a deck
+ * import swaps the file text and the project's reference together, so undo
+ * and redo swap both).
+ */
+export interface StepCompanion {
+  readonly deckBefore: DeckFile | null;
+  readonly deckAfter: DeckFile | null;
+}
 
 /** One undoable step: the patches that made it and the ones that revert it. */
 export interface HistoryStep {
   readonly label: string;
   readonly patches: readonly Patch[];
   readonly inversePatches: readonly Patch[];
+  readonly companion?: StepCompanion;
 }
 
 /** A document with its undo and redo stacks (newest last). */
@@ -25,16 +37,19 @@ export function startHistory<T>(present: T): Undoable<T> {
 
 /**
  * Applies an edit through immer and records its patches. An edit that changes
- * nothing leaves the history untouched.
+ * nothing leaves the history untouched, unless it has a companion (a new deck
+ * file under the same name is still a step).
  */
 export function applyEdit<T>(
   state: Undoable<T>,
   label: string,
   recipe: (draft: Draft<T>) => void,
+  companion?: StepCompanion,
 ): Undoable<T> {
   const [next, patches, inversePatches] = produceWithPatches(state.present, recipe);
-  if (patches.length === 0) return state;
-  const past = [...state.past, { label, patches, inversePatches }];
+  if (patches.length === 0 && companion === undefined) return state;
+  const step: HistoryStep = companion === undefined ? { label, patches, inversePatches } : { label, patches, inversePatches, companion };
+  const past = [...state.past, step];
   return {
     present: next,
     past: past.length > HISTORY_LIMIT ? past.slice(past.length - HISTORY_LIMIT) : past,

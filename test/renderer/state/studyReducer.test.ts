@@ -177,12 +177,33 @@ describe('studyReducer', () => {
     for (const s of [added, removed, dup, moved, replaced]) expect(run(s, { type: 'undo' }).doc!.present.mission.legs).toEqual(legs);
   });
 
-  it('deckImported stores the file and points the project at it (undoable)', () => {
+  it('deckImported is one undo step of deck file and project reference together; redo re-applies both', () => {
+    const s0 = run(demoState(), { type: 'saved' });
+    const other = { name: 'other.deck.json', text: '{}' };
+    const s = run(s0, { type: 'deckImported', deckFile: other });
+    expect(s.deckFile).toEqual(other);
+    expect(s.doc!.present.engine.deck).toEqual({ kind: 'file', path: 'other.deck.json' });
+    expect(s.doc!.past).toHaveLength(1);
+    expect(s.savedAtStep).not.toBe(s.doc!.past.length); // edited
+    const undone = run(s, { type: 'undo' });
+    expect(undone.deckFile).toBe(s0.deckFile);
+    expect(undone.doc!.present).toEqual(s0.doc!.present);
+    expect(undone.savedAtStep).toBe(undone.doc!.past.length); // back to the saved state: unedited
+    const redone = run(undone, { type: 'redo' });
+    expect(redone.deckFile).toEqual(other);
+    expect(redone.doc!.present.engine.deck).toEqual({ kind: 'file', path: 'other.deck.json' });
+    // An edit after the import and its undo leave the imported deck in place.
+    const edited = run(s, { type: 'valueSet', path: ['name'], value: 'renamed', label: 'Rename' }, { type: 'undo' });
+    expect(edited.deckFile).toEqual(other);
+  });
+
+  it('a new deck text under the same file name is still its own undo step', () => {
     const s0 = demoState();
-    const s = run(s0, { type: 'deckImported', deckFile: { name: 'other.csv', text: 'x' } });
-    expect(s.deckFile).toEqual({ name: 'other.csv', text: 'x' });
-    expect(s.doc!.present.engine.deck).toEqual({ kind: 'file', path: 'other.csv' });
-    expect(run(s, { type: 'undo' }).doc!.present.engine.deck).toEqual(s0.doc!.present.engine.deck);
+    const same = { name: s0.deckFile!.name, text: `${s0.deckFile!.text}\n` };
+    const s = run(s0, { type: 'deckImported', deckFile: same });
+    expect(s.doc!.past).toHaveLength(1);
+    expect(s.doc!.present).toEqual(s0.doc!.present);
+    expect(run(s, { type: 'undo' }).deckFile).toBe(s0.deckFile);
   });
 
   it('unitsChosen changes display only: the project is the same object', () => {

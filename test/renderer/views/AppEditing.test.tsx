@@ -127,6 +127,37 @@ describe('the App with the demo study', () => {
     await waitFor(() => expect(bridge.documentStates.at(-1)).toEqual({ name: 'demo.blockwise.json', dirty: true }));
   }, 60000);
 
+  it('undo after a deck import re-flies the old deck and marks the project unedited; redo flies the import again', async () => {
+    const bridge = renderApp();
+    const before = await blockFuel();
+    const csv = parseDeckText(demoFiles().deckText, 'demo-engine.deck.csv');
+    if (!csv.ok) throw new Error('demo deck does not parse');
+    // The same deck burning 10 % more fuel at every point: by Breguet's range equation (fuel burn grows with
+    // specific fuel consumption) the mission must take more fuel; only the direction is checked.
+    const json = JSON.parse(deckToJson(csv.value)) as { columns: string[]; points: number[][] };
+    const ff = json.columns.indexOf('fuelFlow_kg_s');
+    expect(ff).toBeGreaterThanOrEqual(0);
+    for (const p of json.points) p[ff] = p[ff]! * 1.1;
+    bridge.nextDeck = { name: 'thirsty.deck.json', text: JSON.stringify(json) };
+    fireEvent.click(screen.getByTestId('command-importDeck'));
+    const thirsty = await waitForChange(before);
+    expect(thirsty).toBeGreaterThan(before);
+    await waitFor(() => expect(bridge.documentStates.at(-1)).toEqual({ name: 'demo.blockwise.json', dirty: true }));
+
+    fireEvent.click(screen.getByTestId('command-undo'));
+    expect(await waitForChange(thirsty)).toBe(before);
+    fireEvent.click(screen.getByTestId('view-tab-engine'));
+    expect(screen.getByTestId('engine-deck-source').textContent).toContain('demo-engine.deck.csv');
+    expect(screen.getByTestId('engine-deck-source').textContent).not.toContain('thirsty');
+    await waitFor(() => expect(bridge.documentStates.at(-1)).toEqual({ name: 'demo.blockwise.json', dirty: false }));
+
+    fireEvent.click(screen.getByTestId('command-redo'));
+    expect(screen.getByTestId('engine-deck-source').textContent).toContain('thirsty.deck.json');
+    fireEvent.click(screen.getByTestId('view-tab-results'));
+    expect(await waitForChange(before)).toBe(thirsty);
+    await waitFor(() => expect(bridge.documentStates.at(-1)).toEqual({ name: 'demo.blockwise.json', dirty: true }));
+  }, 60000);
+
   it('exports the time history and legs as CSV and prints the report through the bridge', async () => {
     const bridge = renderApp();
     await blockFuel();
