@@ -21,6 +21,7 @@ export const VERB_CATALOGUE = [
   { name: 'uncertainty', summary: 'block fuel with its uncertainty band: a seeded Monte Carlo of the declared uncertain inputs' },
   { name: 'cycle point', summary: 'run an engine cycle file at one flight condition and throttle' },
   { name: 'cycle deck', summary: 'write the deck of a cycle file, with airflow and installation-sensitivity columns' },
+  { name: 'cycle match', summary: 'fit a cycle file to a tabulated deck\'s thrust and fuel flow at its ratings and print the residuals' },
 ] as const satisfies readonly { readonly name: string; readonly summary: string }[];
 
 export type VerbName = (typeof VERB_CATALOGUE)[number]['name'];

@@ -62,6 +62,10 @@ const TABLE: readonly (readonly [string, readonly string[], number, RegExp])[] =
   ['cycle point', [CYCLE, '--altitude', '35000 ft', '--mach', '0.8'], EXIT_USAGE, /give one of --rating NAME or --fan-speed FRACTION/],
   ['cycle deck', [CYCLE], EXIT_USAGE, /missing --out/],
   ['cycle deck', [CYCLE, '--out', 'x.csv', '--machs', '0.8, 0.2'], EXIT_USAGE, /--machs: the values must rise/],
+  ['cycle match', ['fixtures/parametric/demo-parametric.deck.csv', '--out', 'x.cycle.json'], EXIT_USAGE, /missing --start/],
+  ['cycle match', ['fixtures/parametric/demo-parametric.deck.csv', '--start', CYCLE, '--out', 'x.cycle.json', '--deck-out', 'fixtures/parametric/demo-parametric.deck.csv'], EXIT_USAGE, /--deck-out: .* is the deck file itself/],
+  ['cycle match', ['fixtures/parametric/demo-parametric.deck.csv', '--start', CYCLE, '--out', 'x.cycle.json', '--free', 'bypassRatio,span'], EXIT_USAGE, /--free: "span" is not one of/],
+  ['cycle match', [MISSING, '--start', CYCLE, '--out', 'x.cycle.json'], EXIT_FILE, /no-such-file\.blockwise\.json.*no such file/],
 ];
 
 describe('bad command lines', () => {

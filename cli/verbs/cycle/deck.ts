@@ -30,7 +30,7 @@ function listOption(values: Readonly<Record<string, unknown>>, name: string, dim
 }
 
 /** Writes `text` to `path` through a temporary file and a rename, so a failed write leaves no half file. */
-function writeAtomically(path: string, text: string): void {
+export function writeAtomically(path: string, text: string): void {
   const tmp = `${path}.${process.pid}.tmp`;
   writeFileSync(tmp, text, 'utf8');
   renameSync(tmp, path);

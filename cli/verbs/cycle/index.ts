@@ -5,6 +5,7 @@
  */
 import type { Verb } from '../../verb';
 import { cycleDeckVerb } from './deck';
+import { cycleMatchVerb } from './match';
 import { cyclePointVerb } from './point';
 
-export const cycleVerbs: readonly Verb[] = [cyclePointVerb, cycleDeckVerb];
+export const cycleVerbs: readonly Verb[] = [cyclePointVerb, cycleDeckVerb, cycleMatchVerb];

@@ -84,6 +84,7 @@ const ARGUMENTS: Readonly<Record<string, (project: string) => string[]>> = {
   sweep: (p) => ['sweep', p, '--vary', 'polar.cdIncrement=0:0.0001:0.0001', '--workers', '1', '--out', join(dir, 'sweep.csv')],
   'cycle point': () => ['cycle', 'point', 'fixtures/cycle/demo-turbofan.cycle.json', '--altitude', '35000 ft', '--mach', '0.78', '--rating', 'maxCruise'],
   'cycle deck': () => ['cycle', 'deck', 'fixtures/cycle/demo-turbofan.cycle.json', '--out', join(tmpdir(), `blockwise-report-cycle-${process.pid}.csv`), '--altitudes', '0, 35000 ft', '--machs', '0, 0.8'],
+  'cycle match': () => ['cycle', 'match', 'fixtures/parametric/demo-parametric.deck.csv', '--start', 'fixtures/cycle/demo-turbofan.cycle.json', '--out', join(dir, 'match.cycle.json'), '--free', 'airflow', '--nodes', '2'],
 };
 
 describe('every verb ends with the safety notice', () => {
