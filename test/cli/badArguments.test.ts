@@ -65,6 +65,8 @@ const TABLE: readonly (readonly [string, readonly string[], number, RegExp])[] =
   ['cycle match', ['fixtures/parametric/demo-parametric.deck.csv', '--out', 'x.cycle.json'], EXIT_USAGE, /missing --start/],
   ['cycle match', ['fixtures/parametric/demo-parametric.deck.csv', '--start', CYCLE, '--out', 'x.cycle.json', '--deck-out', 'fixtures/parametric/demo-parametric.deck.csv'], EXIT_USAGE, /--deck-out: .* is the deck file itself/],
   ['cycle match', ['fixtures/parametric/demo-parametric.deck.csv', '--start', CYCLE, '--out', 'x.cycle.json', '--free', 'bypassRatio,span'], EXIT_USAGE, /--free: "span" is not one of/],
+  ['cycle match', ['fixtures/parametric/demo-parametric.deck.csv', '--start', CYCLE, '--out', 'x.cycle.json', '--bounds', 'airflow=200:100'], EXIT_USAGE, /--bounds: airflow: expected two finite numbers, lower below upper/],
+  ['cycle match', ['fixtures/parametric/demo-parametric.deck.csv', '--start', CYCLE, '--out', 'x.cycle.json', '--bounds', 'turbineInletTemperature=1600:1900'], EXIT_USAGE, /starting turbineInletTemperature 1560 lies outside its bounds 1600 to 1900/],
   ['cycle match', [MISSING, '--start', CYCLE, '--out', 'x.cycle.json'], EXIT_FILE, /no-such-file\.blockwise\.json.*no such file/],
 ];
 

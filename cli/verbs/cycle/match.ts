@@ -59,6 +59,24 @@ function weightsOf(values: Readonly<Record<string, unknown>>): { thrust: number;
   return { thrust: w[0]!, fuelFlow: w[1]! };
 }
 
+/** "--bounds name=LO:HI,name=LO:HI" in SI (K, kg/s), e.g. "turbineInletTemperature=1100:1900". */
+function boundsOf(values: Readonly<Record<string, unknown>>): Partial<Record<MatchParameter, readonly [number, number]>> | undefined {
+  const text = optionalString(values, 'bounds');
+  if (text === undefined) return undefined;
+  const out: Partial<Record<MatchParameter, readonly [number, number]>> = {};
+  for (const cell of text.split(',').map((c) => c.trim()).filter((c) => c !== '')) {
+    const m = /^([A-Za-z]+)=([^:]+):(.+)$/.exec(cell);
+    if (m === null) throw new UsageError(`--bounds: "${cell}" is not NAME=LOWER:UPPER`);
+    const name = MATCH_PARAMETERS.find((p) => p === m[1]);
+    if (name === undefined) throw new UsageError(`--bounds: "${m[1]}" is not one of ${MATCH_PARAMETERS.join(', ')}`);
+    const lo = Number(m[2]);
+    const hi = Number(m[3]);
+    if (!(Number.isFinite(lo) && Number.isFinite(hi) && lo < hi)) throw new UsageError(`--bounds: ${name}: expected two finite numbers, lower below upper (got "${m[2]}:${m[3]}")`);
+    out[name] = [lo, hi];
+  }
+  return out;
+}
+
 /** The real path of `path` when it exists, else the resolved path (so a symbolic link to the deck is caught too). */
 function canonical(path: string): string {
   try {
@@ -113,7 +131,8 @@ export const cycleMatchVerb: Verb = {
 Usage: blockwise cycle match <deck-file> --start <cycle-file> --out <cycle-file>
                              [--deck-out <deck.csv|deck.json>] [--free LIST]
                              [--ratings LIST] [--nodes N] [--weights THRUST,FUEL]
-                             [--iterations N] [--units customary|si] [--digits N] [--json]
+                             [--bounds NAME=LO:HI,...] [--iterations N]
+                             [--units customary|si] [--digits N] [--json]
 
   <deck-file>    the deck to fit (CSV or JSON, docs/deck-format.md)
   --start        the starting cycle file (docs/cycle-format.md); its components,
@@ -129,6 +148,9 @@ Usage: blockwise cycle match <deck-file> --start <cycle-file> --out <cycle-file>
   --nodes        most (altitude, Mach) nodes to use, taken evenly through the
                  deck's nodes (default ${DEFAULT_MATCH_NODES})
   --weights      weights of the relative thrust and fuel-flow residuals (default 1,1)
+  --bounds       bounds of free parameters in SI (K, kg/s), e.g.
+                 "turbineInletTemperature=1100:1900,airflow=80:160" (default: about
+                 the start, docs/cycle.md); the start must lie inside
   --iterations   iteration limit of the least-squares fit (default 40)
   --units, --digits  units and significant digits of a CSV --deck-out (default customary, 7)
   --json         print the result as JSON (status, rms, worst, parameters, points, ...)
@@ -148,6 +170,7 @@ written; 2 bad command line. Method: docs/cycle.md, "Matching a cycle to a deck"
     ratings: { type: 'string' },
     nodes: { type: 'string' },
     weights: { type: 'string' },
+    bounds: { type: 'string' },
     iterations: { type: 'string' },
     units: { type: 'string' },
     digits: { type: 'string' },
@@ -175,6 +198,7 @@ written; 2 bad command line. Method: docs/cycle.md, "Matching a cycle to a deck"
     const maxNodes = wholeNumber(values, 'nodes', 1, 10000);
     const maxIterations = wholeNumber(values, 'iterations', 1, 1000);
     const weights = weightsOf(values);
+    const bounds = boundsOf(values);
     const units = optionalString(values, 'units') ?? 'customary';
     if (units !== 'customary' && units !== 'si') throw new UsageError(`--units: "${units}" is not customary or si`);
     const digits = wholeNumber(values, 'digits', 4, 17) ?? 7;
@@ -193,8 +217,10 @@ written; 2 bad command line. Method: docs/cycle.md, "Matching a cycle to a deck"
       ...(maxNodes !== undefined ? { maxNodes } : {}),
       ...(maxIterations !== undefined ? { maxIterations } : {}),
       ...(weights ? { weights } : {}),
+      ...(bounds ? { bounds } : {}),
     });
     if (!fit.ok) {
+      if (fit.error.code === 'invalid_options') throw new UsageError(fit.error.message);
       io.err(`blockwise ${VERB}: ${deckFile}: ${fit.error.message}\n`);
       return EXIT_FILE;
     }
