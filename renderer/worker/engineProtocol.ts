@@ -10,6 +10,7 @@ import type { Project } from '../../engine/project';
 import type { Result } from '../../engine/core';
 import type { StudyFailure } from '../../engine/study';
 import type { DeckFile } from '../state/studyState';
+import type { CycleDesignSummary, CyclePointResult, CycleSpec, CycleThrottle } from '../../engine/cycle';
 
 export interface StudyInputs {
   readonly project: Project;
@@ -25,7 +26,28 @@ export interface CrossoverRequestQuery {
   readonly allInlets: boolean;
 }
 
+/** The engine view's cycle point (ISA deviation in K) and the throttles of its Mach curves. */
+export interface CycleViewQuery {
+  readonly point: { readonly altitude_m: number; readonly mach: number; readonly isaDev_K: number; readonly throttle: CycleThrottle };
+  readonly curveRating: RatingName;
+  /** Mechanical fan speed of the fixed-speed curves, fraction of design. */
+  readonly curveFanSpeed: number;
+}
+
+/**
+ * A cycle file's engine view: `deckFile` is the cycle text; `project` the
+ * project that names it as its engine (its active inlet and installation give
+ * the installed curves), or null for a cycle opened on its own.
+ */
+export interface CycleViewRequest {
+  readonly kind: 'cycleView';
+  readonly project: Project | null;
+  readonly deckFile: DeckFile;
+  readonly query: CycleViewQuery;
+}
+
 export type EngineRequest =
+  | CycleViewRequest
   | ({ readonly kind: 'study' } & StudyInputs)
   | ({ readonly kind: 'crossover'; readonly query: CrossoverRequestQuery } & StudyInputs)
   | ({ readonly kind: 'payloadRange' } & StudyInputs)
@@ -102,7 +124,36 @@ export interface CrossoverSet {
   readonly curves: readonly { readonly inletName: string; readonly result: CrossoverResult }[];
 }
 
+/** A cycle point as the view shows it: the point result without its solver state and warm start. */
+export type CyclePointView = Omit<CyclePointResult, 'state' | 'start'>;
+
+/** Per-engine net thrust and TSFC of one throttle against Mach, [altitude][mach]; null where no point matched. */
+export interface CycleCurveSet {
+  readonly label: string;
+  readonly mach: readonly number[];
+  readonly altitudes_m: readonly number[];
+  readonly uninstalledThrust_N: readonly (readonly (number | null)[])[];
+  readonly uninstalledTsfc_kg_N_s: readonly (readonly (number | null)[])[];
+  /** null when there is no installation (a cycle opened without a project). */
+  readonly installedThrust_N: readonly (readonly (number | null)[])[] | null;
+  readonly installedTsfc_kg_N_s: readonly (readonly (number | null)[])[] | null;
+  /** Each uninstalled point's status. */
+  readonly statuses: readonly (readonly string[])[];
+}
+
+export interface CycleViewReply {
+  readonly title: string;
+  readonly spec: CycleSpec;
+  readonly design: CycleDesignSummary;
+  readonly point: CyclePointView;
+  /** The active inlet of the installed curves (null: uninstalled only). */
+  readonly inletName: string | null;
+  readonly ratingCurves: CycleCurveSet;
+  readonly fanSpeedCurves: CycleCurveSet;
+}
+
 export interface EngineReplies {
+  readonly cycleView: CycleViewReply;
   readonly study: StudySnapshot;
   readonly crossover: CrossoverSet;
   readonly payloadRange: PayloadRangeResult;

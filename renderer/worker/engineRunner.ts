@@ -10,6 +10,7 @@ import { type MissionInput, solveMission } from '../../engine/mission';
 import { createDeckTextMemo, prepareStudy, type DeckTextMemo, type Study } from '../../engine/study';
 import { runUncertainty } from '../../engine/uncertainty';
 import type { EngineFailure, EngineOutcome, EngineReplies, EngineRequest, EngineRequestKind, StudyInputs } from './engineProtocol';
+import { cycleEngineOf, cycleViewReply, projectInstallation, type InstallationAt } from './cycleView';
 import { deckSummary, inletCurves, LAPSE_RATINGS, lapseCurves, polarCurves } from './studyCurves';
 
 export interface RunHooks {
@@ -97,8 +98,26 @@ function runCompare(request: Extract<EngineRequest, { kind: 'compare' }>, cache:
   return r.ok ? r : err(analysisFailure(r.error));
 }
 
+function runCycleView(request: Extract<EngineRequest, { kind: 'cycleView' }>, cache: DeckCache, hooks: RunHooks): Result<EngineReplies['cycleView'], EngineFailure> {
+  const engine = cycleEngineOf(request.deckFile.text, request.deckFile.name);
+  if (!engine.ok) return engine;
+  let installationAt: InstallationAt | null = null;
+  let inletName: string | null = null;
+  const project = request.project;
+  if (project !== null && project.engine.deck.kind === 'cycle') {
+    const study = prepare({ project, deckFile: request.deckFile }, cache);
+    const base = study.ok ? study.value.inputFor() : study;
+    if (!base.ok) return base;
+    installationAt = projectInstallation(project, base.value.propulsion, engine.value);
+    inletName = base.value.propulsion.inletName;
+  }
+  return cycleViewReply(engine.value, request.query, installationAt, inletName, hooks);
+}
+
 function dispatch(request: EngineRequest, cache: DeckCache, hooks: RunHooks): Result<EngineReplies[EngineRequestKind], EngineFailure> {
   switch (request.kind) {
+    case 'cycleView':
+      return runCycleView(request, cache, hooks);
     case 'study':
       return runStudy(request, cache);
     case 'crossover':
