@@ -434,7 +434,7 @@ export function deckWithCycleSensitivities(deck: EngineDeck, engine: CycleEngine
       };
       if (p.thrust_N <= tLo) {
         n1 = lo;
-        caution(`deck thrust ${p.thrust_N.toFixed(0)} N is at or below the cycle's flight idle thrust ${tLo.toFixed(0)} N here: sensitivities taken at flight idle`);
+        if (p.thrust_N < tLo * (1 - 1e-6)) caution(`deck thrust ${p.thrust_N.toFixed(0)} N is below the cycle's flight idle thrust ${tLo.toFixed(0)} N here: sensitivities taken at flight idle`);
       } else if (p.thrust_N >= tHi) {
         n1 = hi;
         if (p.thrust_N > tHi * (1 + 1e-6)) caution(`deck thrust ${p.thrust_N.toFixed(0)} N is above the cycle's takeoff thrust ${tHi.toFixed(0)} N here: sensitivities taken at takeoff`);

@@ -46,6 +46,8 @@ describe('blockwise cycle match', () => {
     expect(j.rms as number).toBeLessThan(1e-5);
     expect(['thrust', 'fuelFlow']).toContain(j.worst.quantity);
     expect(j.notice).toBe(SAFETY_NOTICE);
+    // Every deck point of a cycle's own deck lies within its idle-to-takeoff thrust (idle and takeoff are tabulated), so no end sensitivities.
+    expect(j.deckOutCautions).toEqual([]);
     // Truth: the generating cycle file (bypass ratio 4.5, overall pressure ratio 25); the start is sized by thrust, so its
     // airflow differs from the truth's and is freed too.
     const truth = expectOk(parseCycleFile(readFileSync(join(repoRoot, CYCLE), 'utf8'), CYCLE), 'truth');

@@ -11,6 +11,7 @@ import {
   MATCH_PARAMETERS,
   matchCycleToDeck,
   type CycleMatchResult,
+  type DeckCopyCaution,
   type MatchParameter,
   type MatchPointResult,
 } from '../../../engine/cycle/index';
@@ -90,7 +91,7 @@ const pct = (r: number): string => `${significant(r * 100, 4)} %`;
 const where = (p: MatchPointResult): string => `${Math.round(p.altitude_m / FOOT_M).toLocaleString('en-US')} ft, Mach ${p.mach}${p.isaDev_K !== 0 ? `, ISA${p.isaDev_K > 0 ? '+' : ''}${p.isaDev_K} K` : ''}, ${p.rating} (power ${p.power})`;
 const QUANTITY = { thrust: 'thrust', fuelFlow: 'fuel flow' } as const;
 
-function jsonOf(deckFile: string, startFile: string, out: string, deckOut: string | null, r: CycleMatchResult): Record<string, unknown> {
+function jsonOf(deckFile: string, startFile: string, out: string, deckOut: string | null, r: CycleMatchResult, deckOutCautions: readonly DeckCopyCaution[]): Record<string, unknown> {
   return {
     deck: deckFile,
     start: startFile,
@@ -111,6 +112,7 @@ function jsonOf(deckFile: string, startFile: string, out: string, deckOut: strin
     evaluations: r.evaluations,
     unmatched: r.unmatched,
     points: r.points,
+    deckOutCautions,
   };
 }
 
@@ -237,7 +239,7 @@ written; 2 bad command line. Method: docs/cycle.md, "Matching a cycle to a deck"
       io.err(`blockwise ${VERB}: cannot write ${outPath}: ${e instanceof Error ? e.message : String(e)}\n`);
       return EXIT_FILE;
     }
-    let copyCautions = 0;
+    let copyCautions: readonly DeckCopyCaution[] = [];
     if (deckOutPath !== null) {
       const engine = designEngine(r.spec);
       const copy = engine.ok ? deckWithCycleSensitivities(deck.value, engine.value) : null;
@@ -245,7 +247,7 @@ written; 2 bad command line. Method: docs/cycle.md, "Matching a cycle to a deck"
         io.err(`blockwise ${VERB}: no deck copy written: ${copy === null ? 'the fitted cycle cannot be designed' : copy.error.message}\n`);
         return EXIT_FILE;
       }
-      copyCautions = copy.value.cautions.length;
+      copyCautions = copy.value.cautions;
       const head = [
         `## Copy of ${deckFile} with installation-sensitivity columns from the cycle fitted by blockwise cycle match (${out}); thrust, fuel flow and airflow are the deck's own.`,
         ...SAFETY_NOTICE_LINES.map((l) => `## ${l}`),
@@ -261,7 +263,7 @@ written; 2 bad command line. Method: docs/cycle.md, "Matching a cycle to a deck"
     const code = r.status === 'converged' ? EXIT_OK : EXIT_NOT_SOLVED;
     if (code !== EXIT_OK) io.err(`blockwise ${VERB}: ${r.message}\n`);
     if (values.json === true) {
-      printJsonReport(io, jsonOf(deckFile, startFile, outPath, deckOutPath, r));
+      printJsonReport(io, jsonOf(deckFile, startFile, outPath, deckOutPath, r, copyCautions));
       return code;
     }
     const lines = [
@@ -275,7 +277,7 @@ written; 2 bad command line. Method: docs/cycle.md, "Matching a cycle to a deck"
         const v = r.parameters[p];
         return `    ${PARAMETER_TEXT[p](v.fitted)}   (start ${significant(v.start, 6)}${v.atBound ? `; CAUTION: on its bound ${significant(v.lower, 6)} to ${significant(v.upper, 6)}` : ''})`;
       }),
-      `  written     ${outPath}${deckOutPath !== null ? `; deck copy with sensitivities ${deckOutPath}${copyCautions > 0 ? ` (${copyCautions} point(s) outside the cycle's idle-to-takeoff thrust took the end's sensitivities)` : ''}` : ''}`,
+      `  written     ${outPath}${deckOutPath !== null ? `; deck copy with sensitivities ${deckOutPath}${copyCautions.length > 0 ? ` (${copyCautions.length} point(s) outside the cycle's idle-to-takeoff thrust took the end's sensitivities)` : ''}` : ''}`,
     ];
     io.out(reportText(lines));
     return code;
