@@ -34,6 +34,8 @@
  *   cautions:  caution-limit-<key>, field-caution-<key>, caution-limit-<key>-reset, caution-fixed
  *   crossover: field-crossover-altitude, field-crossover-mass, crossover-rating, crossover-all-inlets,
  *              crossover-message, chart-crossover, crossover-markers, crossover-failure
+ *   envelope:  field-envelope-mass, envelope-rating, field-envelope-isa, chart-envelope,
+ *              envelope-ceilings, envelope-failure
  *   compare:   compare-inlet-a, compare-inlet-b, compare-run, compare-progress(-cancel|-cancelled),
  *              compare-failure, compare-table, compare-design-name-<0|1>, compare-diff-block-fuel,
  *              chart-breakdown, compare-breakdown, payload-range-run, payload-range-progress(...),

@@ -28,6 +28,14 @@ export interface LineChartPanelProps {
   readonly points?: readonly { readonly x: number; readonly y: number; readonly label: string }[];
   readonly secondAxisKeys?: readonly string[];
   readonly secondAxisLabel?: string;
+  /** Horizontal marks on the left axis (e.g. ceilings), labelled. */
+  readonly horizontalMarks?: readonly { readonly y: number; readonly label: string }[];
+  /**
+   * Each series is drawn through its own points in data order, across rows
+   * where it is null (boundaries of a y against x plot, which need not be
+   * single-valued in x); straight segments.
+   */
+  readonly pathsInDataOrder?: boolean;
 }
 
 /** recharts props for an axis with round ticks (Heckbert's nice numbers), or its automatic axis when there is no data. */
@@ -66,7 +74,8 @@ export function LineChartPanel(props: LineChartPanelProps) {
   const leftKeys = props.series.filter((s) => !second.has(s.key)).map((s) => s.key);
   const rightKeys = props.series.filter((s) => second.has(s.key)).map((s) => s.key);
   const xAxis = niceTicks(...numericExtent(props.data, [props.xKey], [...marks.map((m) => m.x), ...points.map((p) => p.x)]));
-  const leftAxis = niceTicks(...numericExtent(props.data, leftKeys, points.map((p) => p.y)));
+  const hMarks = props.horizontalMarks ?? [];
+  const leftAxis = niceTicks(...numericExtent(props.data, leftKeys, [...points.map((p) => p.y), ...hMarks.map((m) => m.y)]));
   const rightAxis = niceTicks(...numericExtent(props.data, rightKeys));
   const markKey = markKeys(marks);
   // Same-label marks closer than 3 % of the axis share one label.
@@ -86,18 +95,21 @@ export function LineChartPanel(props: LineChartPanelProps) {
           <Line
             key={s.key}
             yAxisId={second.has(s.key) ? 'right' : 'left'}
-            type="monotone"
+            type={props.pathsInDataOrder ? 'linear' : 'monotone'}
             dataKey={s.key}
             name={s.name}
             stroke={PALETTE[(s.colorIndex ?? i) % PALETTE.length]}
             strokeDasharray={props.dashed?.(s.key) ? '5 4' : undefined}
             dot={false}
             isAnimationActive={false}
-            connectNulls={false}
+            connectNulls={props.pathsInDataOrder === true}
           />
         ))}
         {marks.map((m, i) => (
           <ReferenceLine key={markKey[i]} yAxisId="left" x={m.x} stroke="#888" strokeDasharray="2 2" label={labelShown[i] ? { value: m.label, position: 'insideTopLeft', fontSize: 10, angle: -90, dx: 4, dy: 70 } : undefined} />
+        ))}
+        {hMarks.map((m, i) => (
+          <ReferenceLine key={`h-${m.label}-${m.y}-${i}`} yAxisId="left" y={m.y} stroke="#555" strokeDasharray="4 2" label={{ value: m.label, position: 'insideTopRight', fontSize: 10 }} />
         ))}
         {points.map((p, i) => (
           <ReferenceDot key={pointKey[i]} yAxisId="left" x={p.x} y={p.y} r={4} fill="#c00" stroke="none" />

@@ -7,6 +7,7 @@ export const VIEWS = [
   { id: 'cautions', label: 'Caution limits' },
   { id: 'results', label: 'Flight results' },
   { id: 'crossover', label: 'Thrust vs drag' },
+  { id: 'envelope', label: 'Flight envelope' },
   { id: 'compare', label: 'Inlet A/B' },
 ] as const;
 

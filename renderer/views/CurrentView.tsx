@@ -7,6 +7,7 @@ import { CautionsView } from './CautionsView';
 import { CompareView } from './CompareView';
 import { CrossoverView } from './CrossoverView';
 import { EngineView } from './EngineView';
+import { EnvelopeView } from './EnvelopeView';
 import { InletsView } from './InletsView';
 import { MissionView } from './MissionView';
 import { ResultsView } from './ResultsView';
@@ -29,6 +30,8 @@ export function CurrentView(props: { readonly view: ViewId; readonly live: LiveS
       return <ResultsView {...common} />;
     case 'crossover':
       return <CrossoverView {...common} />;
+    case 'envelope':
+      return <EnvelopeView {...common} />;
     case 'compare':
       return <CompareView {...common} />;
   }

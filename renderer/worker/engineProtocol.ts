@@ -3,7 +3,7 @@
  * project (SI) and the deck file; replies carry plain data (structured clone).
  */
 import type { InstallationMethodId, RatingName } from '../../engine/propulsion';
-import type { CrossoverResult, InletComparisonResult, PayloadRangeResult, RecoveryTradeByMethod, TradeFactorsResult } from '../../engine/analysis';
+import type { CrossoverResult, EnvelopeResult, InletComparisonResult, PayloadRangeResult, RecoveryTradeByMethod, TradeFactorsResult } from '../../engine/analysis';
 import type { UncertaintyResult } from '../../engine/uncertainty';
 import type { MissionResult } from '../../engine/mission';
 import type { Project } from '../../engine/project';
@@ -46,10 +46,22 @@ export interface CycleViewRequest {
   readonly query: CycleViewQuery;
 }
 
+/** The level-flight envelope's condition (the CLI's `envelope` verb with the same defaults). */
+export interface EnvelopeRequestQuery {
+  readonly mass_kg: number;
+  readonly rating: RatingName;
+  readonly isaDev_K: number;
+  /** Highest altitude of the rows and the ceiling search (m). */
+  readonly top_m: number;
+  /** Altitude step of the rows (m). */
+  readonly step_m: number;
+}
+
 export type EngineRequest =
   | CycleViewRequest
   | ({ readonly kind: 'study' } & StudyInputs)
   | ({ readonly kind: 'crossover'; readonly query: CrossoverRequestQuery } & StudyInputs)
+  | ({ readonly kind: 'envelope'; readonly query: EnvelopeRequestQuery } & StudyInputs)
   | ({ readonly kind: 'payloadRange' } & StudyInputs)
   | ({ readonly kind: 'tradeFactors' } & StudyInputs)
   /** The +1 % recovery trade factor by every recovery method (Raymer held/scaled, deck sensitivities, cycle). */
@@ -156,6 +168,7 @@ export interface EngineReplies {
   readonly cycleView: CycleViewReply;
   readonly study: StudySnapshot;
   readonly crossover: CrossoverSet;
+  readonly envelope: EnvelopeResult;
   readonly payloadRange: PayloadRangeResult;
   readonly tradeFactors: TradeFactorsResult;
   readonly recoveryByMethod: RecoveryTradeByMethod;

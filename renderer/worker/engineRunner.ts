@@ -3,13 +3,14 @@
  * Worker (engineWorker.ts) and in-thread in component tests. Long analyses
  * report progress and poll `shouldCancel` between missions.
  */
-import { type AnalysisError, compareInlets, inletFactorBuilder, payloadRangeDiagram, recoveryTradeByMethod, thrustDragCrossover, tradeFactors } from '../../engine/analysis';
+import { type AnalysisError, compareInlets, DEFAULT_RESIDUAL_CLIMB_RATES, type EnvelopeQuery, flightEnvelope, inletFactorBuilder, payloadRangeDiagram, recoveryTradeByMethod, thrustDragCrossover, tradeFactors } from '../../engine/analysis';
 import { makeIssue, recoveryMethodVariants } from '../../engine/project';
 import { err, ok, type Result } from '../../engine/core';
 import { type MissionInput, solveMission } from '../../engine/mission';
 import { createDeckTextMemo, prepareStudy, type DeckTextMemo, type Study } from '../../engine/study';
 import { runUncertainty } from '../../engine/uncertainty';
-import type { EngineFailure, EngineOutcome, EngineReplies, EngineRequest, EngineRequestKind, StudyInputs } from './engineProtocol';
+import type { EngineFailure, EngineOutcome, EngineReplies, EngineRequest, EngineRequestKind, EnvelopeRequestQuery, StudyInputs } from './engineProtocol';
+import { formatQuantity } from '../../engine/units';
 import { cycleEngineOf, cycleViewReply, projectInstallation, type InstallationAt } from './cycleView';
 import { deckSummary, inletCurves, LAPSE_RATINGS, lapseCurves, polarCurves } from './studyCurves';
 
@@ -89,6 +90,43 @@ function runCrossover(request: Extract<EngineRequest, { kind: 'crossover' }>, ca
   return ok({ curves });
 }
 
+const bothMass = (kg: number) => (Number.isFinite(kg) ? `${formatQuantity(kg, 'mass', 'customary')} (${formatQuantity(kg, 'mass', 'si')})` : 'not a number');
+
+/** A mass outside (0, MTOW] is refused with where and what, before any analysis runs. */
+function massFailure(where: string, mass_kg: number, mtow_kg: number): EngineFailure | null {
+  if (Number.isFinite(mass_kg) && mass_kg > 0 && mass_kg <= mtow_kg) return null;
+  return { kind: 'analysis', code: 'invalid_input', message: `${where}: aircraft mass ${bothMass(mass_kg)} must be above zero and at most the MTOW ${bothMass(mtow_kg)}` };
+}
+
+/**
+ * The envelope query the CLI's `envelope` verb builds (cli/verbs/envelope.ts):
+ * the project's buffet-margin load factor, VMO/MMO and the default residual
+ * climb rates, rows from 0 to the top.
+ */
+export function envelopeQueryFor(input: MissionInput, q: EnvelopeRequestQuery): EnvelopeQuery {
+  return {
+    mass_kg: q.mass_kg,
+    rating: q.rating,
+    isaDev_K: q.isaDev_K,
+    altitudeRange: [0, q.top_m],
+    altitudeStep_m: q.step_m,
+    buffetLoadFactor: input.cautionSettings.minBuffetLoadFactor,
+    residualClimbRates: DEFAULT_RESIDUAL_CLIMB_RATES,
+    speedLimits: { vmo_m_s: input.airframe.vmo_m_s, mmo: input.airframe.mmo },
+  };
+}
+
+function runEnvelope(request: Extract<EngineRequest, { kind: 'envelope' }>, cache: DeckCache): Result<EngineReplies['envelope'], EngineFailure> {
+  const study = prepare(request, cache);
+  const base = study.ok ? study.value.inputFor() : study;
+  if (!base.ok) return base;
+  const input = base.value;
+  const bad = massFailure('envelope', request.query.mass_kg, input.airframe.mtow_kg);
+  if (bad) return err(bad);
+  const r = flightEnvelope({ aero: input.aero, propulsion: input.propulsion }, envelopeQueryFor(input, request.query));
+  return r.ok ? r : err(analysisFailure(r.error));
+}
+
 function runCompare(request: Extract<EngineRequest, { kind: 'compare' }>, cache: DeckCache, hooks: RunHooks): Result<EngineReplies['compare'], EngineFailure> {
   const study = prepare(request, cache);
   if (!study.ok) return study;
@@ -122,6 +160,8 @@ function dispatch(request: EngineRequest, cache: DeckCache, hooks: RunHooks): Re
       return runStudy(request, cache);
     case 'crossover':
       return runCrossover(request, cache);
+    case 'envelope':
+      return runEnvelope(request, cache);
     case 'payloadRange': {
       const study = prepare(request, cache);
       const base = study.ok ? study.value.inputFor() : study;

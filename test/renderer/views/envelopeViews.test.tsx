@@ -1,0 +1,48 @@
+import { fireEvent, screen, waitFor } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import { formatQuantity } from '../../../engine/units';
+import { EnvelopeView } from '../../../renderer/views/EnvelopeView';
+import type { LiveStudy } from '../../../renderer/worker/useEngine';
+import { demoState, renderWithStudy, TEST_CHART } from '../support/studyHarness';
+
+const live: LiveStudy = { snapshot: null, snapshotRevision: 0, revision: 0, stale: false, running: false, failure: null };
+/** SI unit symbols that must not appear on a customary screen (NIST SP 811 symbols). */
+const SI_TEXT = /\b(kg|km|kN|m\/s|hPa|Pa)\b|\d\s?m\b/;
+
+describe('EnvelopeView', () => {
+  it('draws the envelope with its limit lines and lists the ceilings in customary units', async () => {
+    const initial = { ...demoState(), units: 'customary' as const };
+    renderWithStudy(<EnvelopeView live={live} chartSize={TEST_CHART} />, initial);
+    const chart = await screen.findByTestId('chart-envelope', {}, { timeout: 20000 });
+    expect(chart.querySelector('[role="img"]')?.getAttribute('aria-label')).toMatch(/altitude against Mach/);
+    const table = screen.getByTestId('envelope-ceilings');
+    const text = table.textContent ?? '';
+    expect(text).toMatch(/absolute/);
+    expect(text).toMatch(/service/);
+    expect(text).toMatch(/ft\/min/);
+    expect(text).toMatch(/ ft/);
+    // 100 ft/min for the service ceiling, shown through the one formatter (common practice definition).
+    expect(text).toContain(formatQuantity((100 * 0.3048) / 60, 'climbRate', 'customary'));
+    const all = screen.getByRole('heading', { name: 'Level-flight envelope' }).parentElement!.textContent ?? '';
+    expect(all).not.toMatch(SI_TEXT);
+    expect(all).not.toMatch(/NaN/);
+    // Legend names the limit lines.
+    expect(chart.textContent).toMatch(/stall/);
+    expect(chart.textContent).toMatch(/buffet onset/);
+    expect(chart.textContent).toMatch(/VMO\/MMO/);
+  }, 30000);
+
+  it('shows why there is no envelope for a mass above MTOW, without NaN', async () => {
+    const initial = { ...demoState(), units: 'customary' as const };
+    renderWithStudy(<EnvelopeView live={live} chartSize={TEST_CHART} />, initial);
+    await screen.findByTestId('chart-envelope', {}, { timeout: 20000 });
+    const field = screen.getByTestId('field-envelope-mass');
+    const mtow_lb = initial.doc!.present.airframe.weights.maxTakeoff / 0.45359237;
+    fireEvent.change(field, { target: { value: `${Math.round(mtow_lb * 1.5)} lb` } });
+    fireEvent.blur(field);
+    const failure = await screen.findByTestId('envelope-failure', {}, { timeout: 20000 });
+    expect(failure.textContent).toMatch(/at most the MTOW/);
+    expect(failure.textContent).not.toMatch(/NaN/);
+    await waitFor(() => expect(screen.queryByTestId('chart-envelope')).toBeNull());
+  }, 30000);
+});
