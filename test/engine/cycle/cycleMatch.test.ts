@@ -74,6 +74,10 @@ describe('matchCycleToDeck: round trip on a deck generated from a known cycle (s
     expect(!r3.ok && r3.error.message).toMatch(/no deck node at altitude 1234 m/);
     const r4 = matchCycleToDeck(generated, start, { weights: { thrust: 0, fuelFlow: 0 } });
     expect(!r4.ok && r4.error.code).toBe('invalid_options');
+    const r5 = matchCycleToDeck(generated, start, { ratings: [] });
+    expect(!r5.ok && r5.error.code).toBe('no_points');
+    const r6 = matchCycleToDeck(generated, start, { free: ['span' as never] });
+    expect(!r6.ok && r6.error.message).toMatch(/"span" is not a parameter that can be fitted/);
   });
 });
 
