@@ -1,7 +1,10 @@
 /**
- * Writes fixtures/demo/demo-engine.deck.csv: the invented demo engine
- * (engine/propulsion/deckDemoSpec.ts) as a parametric deck in customary
- * units (ft, -, -, lbf, lb/h, lb/s). Run: npx tsx scripts/writeDemoDeck.ts
+ * Writes fixtures/parametric/demo-parametric.deck.csv: the invented demo
+ * engine of the first round (engine/propulsion/deckDemoSpec.ts) as a
+ * parametric deck in customary units (ft, -, -, lbf, lb/h, lb/s), kept for
+ * cycle match and the Raymer fallback. The demo project itself now flies on
+ * a deck generated from its cycle (scripts/writeDemoCycleDeck.ts).
+ * Run: npx tsx scripts/writeDemoDeck.ts
  * A test checks the committed file equals demoDeckCsv().
  */
 import { writeFileSync } from 'node:fs';
@@ -10,9 +13,9 @@ import { CUSTOMARY_DECK_UNITS, deckToCsv } from '../engine/propulsion/deckCsv';
 import { DEMO_ENGINE_SPEC } from '../engine/propulsion/deckDemoSpec';
 import { buildParametricDeck } from '../engine/propulsion/parametricDeck';
 
-export const DEMO_DECK_PATH = 'fixtures/demo/demo-engine.deck.csv';
+export const PARAMETRIC_DECK_PATH = 'fixtures/parametric/demo-parametric.deck.csv';
 
-/** The demo deck CSV text, 7 significant digits. */
+/** The parametric deck CSV text (its header names this script, as the committed file does), 7 significant digits. */
 export function demoDeckCsv(): string {
   const deck = buildParametricDeck(DEMO_ENGINE_SPEC);
   const header = [
@@ -23,6 +26,6 @@ export function demoDeckCsv(): string {
 }
 
 if (process.argv[1] !== undefined && fileURLToPath(import.meta.url) === process.argv[1]) {
-  writeFileSync(DEMO_DECK_PATH, demoDeckCsv());
-  process.stdout.write(`wrote ${DEMO_DECK_PATH}\n`);
+  writeFileSync(PARAMETRIC_DECK_PATH, demoDeckCsv());
+  process.stdout.write(`wrote ${PARAMETRIC_DECK_PATH}\n`);
 }

@@ -12,14 +12,16 @@ import { repoRoot, run } from './support/cliRun';
 import { RAGGED_CSV } from '../engine/propulsion/deckTestDecks';
 
 const DEMO = 'fixtures/demo/demo-engine.deck.csv';
+// The first round's parametric demo deck (Mattingly lapse, MIL-E-5008B reference, no sensitivity columns).
+const PARAMETRIC = 'fixtures/parametric/demo-parametric.deck.csv';
 const expected = JSON.parse(readFileSync(`${repoRoot}fixtures/bad-decks/expected.json`, 'utf8')) as Record<string, string>;
 // NIST SP 811 (2008) B.8: 1 ft = 0.3048 m exactly.
 const FT = 0.3048;
 
 
 describe('blockwise deck check', () => {
-  it('deck check on the demo deck exits 0 with a summary and the safety notice', async () => {
-    const r = await run('deck', 'check', DEMO);
+  it('deck check on the parametric deck exits 0 with a summary and the safety notice', async () => {
+    const r = await run('deck', 'check', PARAMETRIC);
     expect(r.code).toBe(0);
     expect(r.err).toBe('');
     expect(r.out).toContain('parametric');
@@ -30,7 +32,7 @@ describe('blockwise deck check', () => {
   });
 
   it('deck check --json gives the axes ranges, points and ratings', async () => {
-    const r = await run('deck', 'check', DEMO, '--json');
+    const r = await run('deck', 'check', PARAMETRIC, '--json');
     expect(r.code).toBe(0);
     const j = JSON.parse(r.out);
     expect(j.ok).toBe(true);
@@ -100,8 +102,10 @@ describe('blockwise deck at', () => {
     const r = await run('deck', 'at', DEMO, '--altitude', '35000 ft', '--mach', '0.8', '--power', 'maxCruise', '--json');
     expect(r.code).toBe(0);
     const j = JSON.parse(r.out);
-    const e = expectOk(lookupDeck(deck, { altitude_m: 35000 * FT, mach: 0.8, isaDev_K: 0 }, 0.88), 'engine');
-    expect(j.power).toBe(0.88);
+    // The power of the rating is the deck's own ("# rating maxCruise:" line), read from the parsed file.
+    const cruise = deck.ratings.maxCruise!;
+    const e = expectOk(lookupDeck(deck, { altitude_m: 35000 * FT, mach: 0.8, isaDev_K: 0 }, cruise), 'engine');
+    expect(j.power).toBe(cruise);
     expect(j.rating).toBe('maxCruise');
     expectClose(j.thrust_N, e.thrust_N, { rel: 1e-15 }, 'engine lookup');
     expectClose(j.fuelFlow_kg_s, e.fuelFlow_kg_s, { rel: 1e-15 }, 'engine lookup');

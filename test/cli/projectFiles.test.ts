@@ -24,7 +24,9 @@ describe('loadProjectFromDisk', () => {
     expect(r.ok).toBe(true);
     if (!r.ok) return;
     expect(r.value.deckPath).toBe(join(repoRoot, 'fixtures/demo/demo-engine.deck.csv'));
-    expect(r.value.deck?.parametric).toBe(true);
+    // The demo deck is generated from the demo cycle (fixtures/demo/NOTE.md): not parametric, with sensitivity columns.
+    expect(r.value.deck?.parametric).toBe(false);
+    expect(r.value.deck?.hasSensitivities).toBe(true);
     expect(r.value.input.propulsion.inletName).toBe('long pitot');
   });
 

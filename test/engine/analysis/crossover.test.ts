@@ -138,11 +138,11 @@ describe('thrustDragCrossover on the demo deck', () => {
     const at = (altitude_m: number, mass_kg: number) =>
       expectOk(thrustDragCrossover(models, { altitude_m, mass_kg, rating: 'maxCruise', isaDev_K: 0 }), 'crossover');
     const width = (r: ReturnType<typeof at>) => (r.highMach ?? r.machRange[1]) - (r.lowMach ?? r.machRange[0]);
-    const bands = [10000, 11000, 12000].map((h) => at(h, 14000));
+    const bands = [12000, 12500, 13000].map((h) => at(h, 14000));
     for (const b of bands) expect(b.status).toBe('ok');
     expect(width(bands[1]!)).toBeLessThan(width(bands[0]!));
     expect(width(bands[2]!)).toBeLessThan(width(bands[1]!));
-    expect(width(at(11000, 15500))).toBeLessThan(width(bands[1]!));
+    expect(width(at(12500, 15500))).toBeLessThan(width(bands[1]!));
     for (const b of bands) {
       for (const m of [b.lowMach, b.highMach].filter((x): x is number => x !== null)) {
         const t = models.propulsion.atRating({ altitude_m: b.altitude_m, mach: m, isaDev_K: 0 }, 'maxCruise').thrust_N;

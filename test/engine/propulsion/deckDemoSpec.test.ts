@@ -7,15 +7,15 @@ import { lookupDeck } from '../../../engine/propulsion/deckLookup';
 import { demoDeckCsv } from '../../../scripts/writeDemoDeck';
 import { expectClose } from '../../support/assertInDelta';
 
-const file = fileURLToPath(new URL('../../../fixtures/demo/demo-engine.deck.csv', import.meta.url));
+const file = fileURLToPath(new URL('../../../fixtures/parametric/demo-parametric.deck.csv', import.meta.url));
 
-describe('demo engine deck', () => {
-  it('the committed fixtures/demo/demo-engine.deck.csv equals what scripts/writeDemoDeck.ts writes now', () => {
+describe('the parametric demo engine deck', () => {
+  it('the committed fixtures/parametric/demo-parametric.deck.csv (the first round demo deck) equals what scripts/writeDemoDeck.ts writes now', () => {
     expect(readFileSync(file, 'utf8')).toBe(demoDeckCsv());
   });
 
-  it('the demo deck parses, is labelled parametric and has the five ratings', () => {
-    const deck = expectOk(parseDeckCsv(readFileSync(file, 'utf8'), 'demo-engine.deck.csv'), 'demo');
+  it('the parametric deck parses, is labelled parametric and has the five ratings', () => {
+    const deck = expectOk(parseDeckCsv(readFileSync(file, 'utf8'), 'demo-parametric.deck.csv'), 'demo');
     expect(deck.parametric).toBe(true);
     expect(deck.title).toMatch(/parametric/);
     expect(deck.title).toMatch(/invented/);

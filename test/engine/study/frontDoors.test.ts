@@ -50,11 +50,11 @@ describe('parseDeckText chooses the form by content', () => {
   ] as const)('%s', (_what, text, name, form) => {
     expect(deckTextFormat(text, name)).toBe(form);
     const deck = expectOk(parseDeckText(text, name), name);
-    // The deck file's row "0,0,0.3,2427.937,1287.616,175.136" (ft, -, -, lbf, lb/h, lb/s), NIST SP 811 factors.
+    // The deck file's row "0,0,0.3,2106.743,794.9112,118.6171,..." (ft, -, -, lbf, lb/h, lb/s; the cycle-generated demo deck), NIST SP 811 factors.
     const p = expectOk(lookupDeck(deck, { altitude_m: 0, mach: 0, isaDev_K: 0 }, 0.3), 'node');
-    expectClose(p.thrust_N, 2427.937 * LBF_N, { rel: 1e-12 }, 'deck row, lbf to N');
-    expectClose(p.fuelFlow_kg_s, (1287.616 * LB_KG) / 3600, { rel: 1e-12 }, 'deck row, lb/h to kg/s');
-    expectClose(p.airflow_kg_s!, 175.136 * LB_KG, { rel: 1e-12 }, 'deck row, lb/s to kg/s');
+    expectClose(p.thrust_N, 2106.743 * LBF_N, { rel: 1e-12 }, 'deck row, lbf to N');
+    expectClose(p.fuelFlow_kg_s, (794.9112 * LB_KG) / 3600, { rel: 1e-12 }, 'deck row, lb/h to kg/s');
+    expectClose(p.airflow_kg_s!, 118.6171 * LB_KG, { rel: 1e-12 }, 'deck row, lb/s to kg/s');
   });
 
   it('a blank file takes its form from the extension and says what is missing', () => {
