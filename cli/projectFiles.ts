@@ -9,7 +9,7 @@ import { dirname, resolve } from 'node:path';
 import { err, ok, type Result } from '../engine/core';
 import { readTextFile } from '../hostio/textFile';
 import type { MissionInput } from '../engine/mission';
-import { type BuildOptions, deckReference, makeIssue, parseProject, type Project, type ProjectIssue } from '../engine/project';
+import { type BuildOptions, deckReference, embeddedDeckFile, makeIssue, parseProject, type Project, type ProjectIssue } from '../engine/project';
 import type { EngineDeck } from '../engine/propulsion';
 import { cannotReadMessage, prepareStudy, type DeckFileText, type Study } from '../engine/study';
 
@@ -58,6 +58,9 @@ export async function readProjectFile(path: string): Promise<Result<{ projectPat
 async function readProjectDeckText(projectPath: string, project: Project): Promise<Result<{ file: DeckFileText; deckPath: string } | null, LoadFailure>> {
   const ref = deckReference(project);
   if (ref.kind !== 'file' && ref.kind !== 'cycle') return ok(null);
+  // A deck saved inside the project is used as saved; the file beside it is not read.
+  const embedded = embeddedDeckFile(project);
+  if (embedded !== null) return ok({ file: embedded, deckPath: projectPath });
   const deckPath = resolve(dirname(projectPath), ref.path);
   const what = ref.kind === 'cycle' ? 'cycle file' : 'deck file';
   const text = await readText(deckPath);

@@ -19,7 +19,7 @@
  *              field-cd-increment, compressibility-kind, field-sweep, field-thickness,
  *              field-korn-factor, chart-polar; tables cd0 | k | buffet | clmax: <t>-table,
  *              field-<t>-mach-<n>, field-<t>-<n>, <t>-add-row, <t>-remove-<n>
- *   engine:    engine-import-deck, deck-errors, deck-error-<n>, engine-failure, deck-summary,
+ *   engine:    engine-import-deck, engine-deck-source, engine-embed-deck (save the deck inside the project), deck-errors, deck-error-<n>, engine-failure, deck-summary,
  *              field-engine-count, field-bleed, field-power-extraction, field-c-ram, field-sls-*,
  *              field-throttle-ratio, lapse-rating, chart-thrust-lapse, chart-tsfc
  *   inlets:    active-inlet, inlet-<n>, field-inlet-<n>-<capture|throat|fan-face|diffuser-loss|
@@ -154,7 +154,7 @@ function Shell(props: AppProps) {
           {recovery.problem ? <p className="app-message">{recovery.problem}</p> : null}
           <IssueList issues={state.openIssues} testId="open-issues" title="That project could not be opened" showFilePath />
           <main className="view" data-testid={`view-${view}`} id="view-panel" role="tabpanel" aria-labelledby={`tab-${view}`} tabIndex={-1}>
-            {project === null ? <p>Opening…</p> : <CurrentView view={view} live={live} onCommand={(c) => void commands.run(c)} {...(props.chartSize ? { chartSize: props.chartSize } : {})} />}
+            {project === null ? <p>Opening…</p> : <CurrentView view={view} live={live} hostKind={props.bridge.kind} onCommand={(c) => void commands.run(c)} {...(props.chartSize ? { chartSize: props.chartSize } : {})} />}
           </main>
         </div>
         {printing && project !== null && live.snapshot !== null ? <StudyReport project={project} snapshot={live.snapshot} units={state.units} stale={live.stale} documentName={state.documentName} printedAt={new Date()} /> : null}

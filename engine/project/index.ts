@@ -6,7 +6,7 @@
 export type { BuildOptions, ProjectResources } from './buildMissionInput';
 export { parseJsonText } from './jsonText';
 export { parseProject, parseProjectData } from './parseProject';
-export { deckReference, type DeckReference } from './projectDeck';
+export { deckReference, embeddedDeckFile, withEmbeddedDeckText, withoutEmbeddedDeckText, type DeckReference } from './projectDeck';
 export { formatJsonPath, fromZodIssues, makeIssue, type ProjectIssue } from './projectIssue';
 export { inletSchema, type Project, type ProjectLeg } from './projectSchema';
 export { inletDesignOf, installationOf } from './projectSpecs';

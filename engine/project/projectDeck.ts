@@ -32,6 +32,26 @@ export function deckReference(project: Project): DeckReference {
   return d.kind === 'file' || d.kind === 'cycle' ? { kind: d.kind, path: d.path } : { kind: d.kind };
 }
 
+/** The deck file saved inside the project (`engine.deck.text`), as the file it stands for; null when there is none. */
+export function embeddedDeckFile(project: Project): { readonly name: string; readonly text: string } | null {
+  const d = project.engine.deck;
+  return d.kind === 'file' && d.text !== undefined ? { name: d.path, text: d.text } : null;
+}
+
+/** The project with the deck file's text saved inside it, when the project names that file (`file.name` is its path); else unchanged. */
+export function withEmbeddedDeckText(project: Project, file: { readonly name: string; readonly text: string } | null): Project {
+  const d = project.engine.deck;
+  if (d.kind !== 'file' || file === null || file.name !== d.path || file.text.length === 0) return project;
+  return { ...project, engine: { ...project.engine, deck: { kind: 'file', path: d.path, text: file.text } } };
+}
+
+/** The project without a saved deck text (the file reference only); the same object when there is none. */
+export function withoutEmbeddedDeckText(project: Project): Project {
+  const d = project.engine.deck;
+  if (d.kind !== 'file' || d.text === undefined) return project;
+  return { ...project, engine: { ...project.engine, deck: { kind: 'file', path: d.path } } };
+}
+
 const FT_M = 0.3048;
 
 /** Grid of a parametric deck when the project gives none: 0 to 51,000 ft every 3,000 ft, Mach 0 to 0.9, idle to full power. */

@@ -161,8 +161,12 @@ export const cycleDeckSchema = z.strictObject({
 });
 
 export const deckSourceSchema = z.discriminatedUnion('kind', [
-  /** A deck file (CSV or JSON by extension), relative to the project file's folder. */
-  z.strictObject({ kind: z.literal('file'), path: label() }),
+  /**
+   * A deck file (CSV or JSON, told apart by content), relative to the project
+   * file's folder; `text`, when present, is that file's text saved inside the
+   * project, read instead of the file (docs/project-format.md).
+   */
+  z.strictObject({ kind: z.literal('file'), path: label(), text: z.string().min(1, { message: 'expected the deck file\'s text' }).optional() }),
   cycleDeckSchema,
   /** A deck in the JSON deck format (docs/deck-format.md), inline. */
   z.strictObject({ kind: z.literal('embedded'), deck: z.record(z.string(), z.unknown()) }),

@@ -11,7 +11,7 @@ import { err, ok, type Result } from '../core/result';
 import type { MissionInput } from '../mission/missionTypes';
 import { missionInputOnDeck, projectInlet, type MissionOverrides } from '../project/buildMissionInput';
 import { cautionSettingsOf, installationOf } from '../project/projectSpecs';
-import { projectDeck } from '../project/projectDeck';
+import { embeddedDeckFile, projectDeck } from '../project/projectDeck';
 import type { ProjectIssue } from '../project/projectIssue';
 import type { Project } from '../project/projectSchema';
 import type { DeckFileError } from '../propulsion/deckFileError';
@@ -45,11 +45,14 @@ export interface StudyOptions {
 /**
  * The study of `project` with `deckFile` (the text of the deck file the
  * project names, or of its engine cycle file, read by the door; ignored for
- * embedded and parametric decks). A cycle file's deck is generated from it
+ * embedded and parametric decks; when null, a file deck's text saved in
+ * the project, `engine.deck.text`, is used). A cycle file's deck is generated from it
  * with installation sensitivities, once per text (engine/cycle/cycleDeckCache.ts).
  * A file or cycle deck without its text is a project issue at engine.deck.path.
  */
-export function prepareStudy(project: Project, deckFile: DeckFileText | null, options: StudyOptions = {}): Result<Study, StudyFailure> {
+export function prepareStudy(project: Project, given: DeckFileText | null, options: StudyOptions = {}): Result<Study, StudyFailure> {
+  // A deck file saved inside the project stands in for the file when the door read none.
+  const deckFile = given ?? embeddedDeckFile(project);
   let fileDeck: EngineDeck | undefined;
   if (project.engine.deck.kind === 'file' && deckFile !== null) {
     const parsed = options.deckMemo ? parseDeckTextMemoized(options.deckMemo, deckFile) : parseDeckText(deckFile.text, deckFile.name);

@@ -3,19 +3,23 @@
  * `projectOpenFailed` with every issue), the bundled demo, a deck file
  * into `deckImported` (or a refusal saying where and what).
  */
-import { parseProject } from '../../engine/project';
+import { embeddedDeckFile, parseProject, withoutEmbeddedDeckText } from '../../engine/project';
 import { parseDeckText } from '../../engine/study';
 import type { StudyAction } from './studyActions';
 import type { DeckFile } from './studyState';
 
 /**
- * Parses project text. `deckFile` is a deck already at hand (the demo's, or
- * the one in use); it is kept only when the project names a deck file of
- * that name.
+ * Parses project text. A deck saved inside the project (`engine.deck.text`)
+ * becomes the deck in use and leaves the document (which keeps the file
+ * reference only; saving puts the text back, renderer/state/saveText.ts).
+ * Otherwise `deckFile` is a deck already at hand (the demo's, or the one in
+ * use); it is kept only when the project names a deck file of that name.
  */
 export function openProjectAction(name: string, text: string, deckFile: DeckFile | null): StudyAction {
   const parsed = parseProject(text, name);
   if (!parsed.ok) return { type: 'projectOpenFailed', name, issues: parsed.error };
+  const embedded = embeddedDeckFile(parsed.value);
+  if (embedded !== null) return { type: 'projectOpened', project: withoutEmbeddedDeckText(parsed.value), name, deckFile: embedded, embedDeck: true };
   const project = parsed.value;
   const deck = project.engine.deck;
   const keep = deck.kind === 'file' && deckFile !== null && deck.path === deckFile.name;

@@ -8,7 +8,8 @@ import type { DeckFile, Highlight } from './studyState';
 
 export type StudyAction =
   /** `unsaved`: the text is not what is on disk (recovered work), so the document starts edited. */
-  | { readonly type: 'projectOpened'; readonly project: Project; readonly name: string; readonly deckFile: DeckFile | null; readonly unsaved?: boolean }
+  /** `embedDeck`: the file had its deck inside (saving keeps it there). */
+  | { readonly type: 'projectOpened'; readonly project: Project; readonly name: string; readonly deckFile: DeckFile | null; readonly unsaved?: boolean; readonly embedDeck?: boolean }
   | { readonly type: 'projectOpenFailed'; readonly name: string; readonly issues: readonly ProjectIssue[] }
   | { readonly type: 'deckImported'; readonly deckFile: DeckFile }
   /** Text typed into a quantity field; accepted only when it parses and passes the project's rules. */
@@ -27,4 +28,6 @@ export type StudyAction =
   | { readonly type: 'redo' }
   | { readonly type: 'unitsChosen'; readonly units: UnitSystem }
   | { readonly type: 'highlighted'; readonly highlight: Highlight | null }
-  | { readonly type: 'saved' };
+  | { readonly type: 'saved' }
+  /** The save option: write the deck inside the project or not (not a document edit). */
+  | { readonly type: 'embedDeckChosen'; readonly embed: boolean };

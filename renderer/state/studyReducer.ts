@@ -65,6 +65,7 @@ export function studyReducer(state: StudyState, action: StudyAction): StudyState
         openIssues: [],
         savedAtStep: action.unsaved === true ? null : 0,
         highlight: null,
+        embedDeck: action.embedDeck === true ? true : null,
       };
     case 'projectOpenFailed':
       return { ...state, openIssues: action.issues };
@@ -143,6 +144,8 @@ export function studyReducer(state: StudyState, action: StudyAction): StudyState
       return { ...state, units: action.units, drafts: {} };
     case 'highlighted':
       return { ...state, highlight: action.highlight };
+    case 'embedDeckChosen':
+      return { ...state, embedDeck: action.embed };
     case 'saved':
       return state.doc === null ? state : { ...state, savedAtStep: state.doc.past.length };
   }

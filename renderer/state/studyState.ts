@@ -42,6 +42,13 @@ export interface StudyState {
   /** Number of undo steps at the last save (null: never saved). */
   readonly savedAtStep: number | null;
   readonly highlight: Highlight | null;
+  /**
+   * Whether saving writes the deck file's text inside the project
+   * (`engine.deck.text`): null follows the host (the browser build embeds, the
+   * desktop writes the reference only); a project opened with its deck inside keeps
+   * it. Chosen per document: opening another project starts again from the host's way.
+   */
+  readonly embedDeck: boolean | null;
 }
 
 export function emptyStudy(): StudyState {
@@ -56,5 +63,6 @@ export function emptyStudy(): StudyState {
     openIssues: [],
     savedAtStep: null,
     highlight: null,
+    embedDeck: null,
   };
 }

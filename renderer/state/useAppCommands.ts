@@ -4,11 +4,11 @@
  * message for the status line, never an exception.
  */
 import { useCallback, useEffect, useRef, useState } from 'react';
-import { projectToJson } from '../../engine/project';
 import type { Bridge, MenuCommand } from '../bridge/bridge';
 import type { ToolbarCommand } from '../components/Toolbar';
 import { fileStem, historyCsv, legsCsv } from '../../engine/study';
 import { deckImportAction, openProjectAction } from './documentActions';
+import { projectSaveText } from './saveText';
 import type { StudyStore } from './studyContext';
 import { undoKeyCommand } from './undoKeys';
 import type { StudySnapshot } from '../worker/engineProtocol';
@@ -75,7 +75,6 @@ export function useAppCommands(bridge: Bridge, store: StudyStore, snapshot: Stud
   const run = useCallback(
     async (command: ToolbarCommand) => {
       const { state: s, snapshot: snap } = latest.current;
-      const project = s.doc?.present ?? null;
       const stem = fileStem(s.documentName);
       try {
         switch (command) {
@@ -95,8 +94,8 @@ export function useAppCommands(bridge: Bridge, store: StudyStore, snapshot: Stud
             return;
           case 'save':
           case 'saveAs': {
-            if (project === null) return;
-            const text = projectToJson(project);
+            const text = projectSaveText(s, bridge.kind);
+            if (text === null) return;
             const saved = command === 'save' ? await bridge.saveProject(text, saveName(s.documentName)) : await bridge.saveProjectAs(text, saveName(s.documentName));
             if (saved) {
               dispatch({ type: 'saved' });

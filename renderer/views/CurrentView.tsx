@@ -13,13 +13,13 @@ import { MissionView } from './MissionView';
 import { ResultsView } from './ResultsView';
 
 /** The view for a tab. */
-export function CurrentView(props: { readonly view: ViewId; readonly live: LiveStudy; readonly chartSize?: ChartSize; readonly onCommand: (command: ToolbarCommand) => void }) {
+export function CurrentView(props: { readonly view: ViewId; readonly live: LiveStudy; readonly chartSize?: ChartSize; readonly onCommand: (command: ToolbarCommand) => void; readonly hostKind?: 'desktop' | 'browser' }) {
   const common = { live: props.live, ...(props.chartSize ? { chartSize: props.chartSize } : {}) };
   switch (props.view) {
     case 'airframe':
       return <AirframeView {...common} />;
     case 'engine':
-      return <EngineView {...common} onCommand={props.onCommand} />;
+      return <EngineView {...common} onCommand={props.onCommand} hostKind={props.hostKind ?? 'browser'} />;
     case 'inlets':
       return <InletsView {...common} />;
     case 'mission':

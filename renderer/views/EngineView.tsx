@@ -12,11 +12,12 @@ import { StaleMark } from '../components/StaleMark';
 import type { ToolbarCommand } from '../components/Toolbar';
 import { useStudy } from '../state/studyContext';
 import { deckTitleText } from '../state/deckTitle';
+import { savesDeckInside } from '../state/saveText';
 import type { LiveStudy } from '../worker/useEngine';
 
 /** The deck (import, errors by line and column, grid summary), the installation, and thrust lapse and TSFC plots. */
-export function EngineView(props: { readonly live: LiveStudy; readonly chartSize?: ChartSize; readonly onCommand?: (command: ToolbarCommand) => void }) {
-  const { state } = useStudy();
+export function EngineView(props: { readonly live: LiveStudy; readonly chartSize?: ChartSize; readonly onCommand?: (command: ToolbarCommand) => void; readonly hostKind?: 'desktop' | 'browser' }) {
+  const { state, dispatch } = useStudy();
   const project = state.doc!.present;
   const deckSource = project.engine.deck;
   const { snapshot, failure } = props.live;
@@ -36,6 +37,19 @@ export function EngineView(props: { readonly live: LiveStudy; readonly chartSize
           Import deck file…
         </button>
       </p>
+      {deckSource.kind === 'file' ? (
+        <p>
+          <label>
+            <input
+              type="checkbox"
+              data-testid="engine-embed-deck"
+              checked={savesDeckInside(state, props.hostKind ?? 'browser')}
+              onChange={(e) => dispatch({ type: 'embedDeckChosen', embed: e.currentTarget.checked })}
+            />{' '}
+            Save the deck file inside the project
+          </label>
+        </p>
+      ) : null}
       {deckErrors.length > 0 ? (
         <section className="issues" data-testid="deck-errors" role="alert">
           <h3>The deck file has {deckErrors.length} error{deckErrors.length === 1 ? '' : 's'}</h3>

@@ -29,7 +29,7 @@ export function createDeckCache(): DeckCache {
 /** The request's study (engine/study): the deck built once, each inlet's mission input built once. */
 function prepare(inputs: StudyInputs, cache: DeckCache): Result<Study, EngineFailure> {
   const deck = inputs.project.engine.deck;
-  if ((deck.kind === 'file' || deck.kind === 'cycle') && inputs.deckFile === null) {
+  if ((deck.kind === 'cycle' || (deck.kind === 'file' && deck.text === undefined)) && inputs.deckFile === null) {
     const what = deck.kind === 'cycle' ? 'cycle file' : 'deck file';
     return err({
       kind: 'project',

@@ -191,6 +191,37 @@ describe('the App with the demo study', () => {
     expect(screen.getByTestId('document-name').textContent).toBe('demo.blockwise.json');
   }, 60000);
 
+  it('the browser build saves the deck inside the project: reopening it later flies that deck again', async () => {
+    const bridge = renderApp();
+    const before = await blockFuel();
+    const csv = parseDeckText(demoFiles().deckText, 'demo-engine.deck.csv');
+    if (!csv.ok) throw new Error('demo deck does not parse');
+    // A deck burning 20 % more fuel everywhere needs more block fuel (Breguet's range equation; direction only).
+    const json = JSON.parse(deckToJson(csv.value)) as { columns: string[]; points: number[][] };
+    const ff = json.columns.indexOf('fuelFlow_kg_s');
+    for (const p of json.points) p[ff] = p[ff]! * 1.2;
+    const thirstyText = JSON.stringify(json);
+    bridge.nextDeck = { name: 'thirsty.deck.json', text: thirstyText };
+    fireEvent.click(screen.getByTestId('command-importDeck'));
+    const thirsty = await waitForChange(before);
+    fireEvent.click(screen.getByTestId('view-tab-engine'));
+    expect((screen.getByTestId('engine-embed-deck') as HTMLInputElement).checked).toBe(true);
+    fireEvent.click(screen.getByTestId('command-save'));
+    await waitFor(() => expect(bridge.saves).toHaveLength(1), { timeout: 15000 });
+    const saved = JSON.parse(bridge.saves[0]!.text) as { engine: { deck: unknown } };
+    expect(saved.engine.deck).toEqual({ kind: 'file', path: 'thirsty.deck.json', text: thirstyText });
+
+    fireEvent.click(screen.getByTestId('command-openDemo'));
+    fireEvent.click(screen.getByTestId('view-tab-results'));
+    expect(await waitForChange(thirsty)).toBe(before);
+    bridge.nextProject = { name: 'saved.blockwise.json', text: bridge.saves[0]!.text };
+    fireEvent.click(screen.getByTestId('command-open'));
+    await waitFor(() => expect(screen.getByTestId('document-name').textContent).toBe('saved.blockwise.json'), { timeout: 15000 });
+    expect(await waitForChange(before)).toBe(thirsty);
+    fireEvent.click(screen.getByTestId('view-tab-engine'));
+    expect(screen.getByTestId('engine-deck-source').textContent).toContain('loaded thirsty.deck.json');
+  }, 60000);
+
   it('offers unsaved work from an earlier session and restores it with the deck in use', async () => {
     const edited = demoFiles().projectText.replace('"payload": "1600 lb"', '"payload": "1800 lb"');
     expect(edited).not.toBe(demoFiles().projectText);
