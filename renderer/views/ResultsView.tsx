@@ -5,6 +5,7 @@ import { profileSeries } from '../charts/profileSeries';
 import { CautionList } from '../components/CautionList';
 import { HeadlineFigures } from '../components/HeadlineFigures';
 import { FailureNotice } from '../components/IssueList';
+import { LegDetailPlots } from '../components/LegDetailPlots';
 import { LegsTable } from '../components/LegsTable';
 import { LineChartPanel, type ChartSize } from '../components/LineChartPanel';
 import { StaleMark } from '../components/StaleMark';
@@ -78,6 +79,7 @@ export function ResultsView(props: { readonly live: LiveStudy; readonly chartSiz
       </div>
       <h3>Legs</h3>
       <LegsTable legs={m.legs} units={u} highlightLeg={h?.legIndex ?? null} />
+      <LegDetailPlots mission={m} units={u} {...(props.chartSize ? { chartSize: props.chartSize } : {})} />
       <h3>Cautions</h3>
       <CautionList cautions={m.cautions} units={u} onPick={(highlight) => dispatch({ type: 'highlighted', highlight })} />
       {h !== null ? (
