@@ -72,6 +72,21 @@ describe('loadProjectFromDisk', () => {
     expect(r.error.issues[0]!.message).toContain('no such file');
   });
 
+  it('loadProjectFromDisk uses a deck text saved in the project (engine.deck.text) and reads no file beside it', async () => {
+    const fromFile = await loadProjectFromDisk(demoPath);
+    if (!fromFile.ok || fromFile.value.deck === undefined) throw new Error('demo did not load');
+    const doc = JSON.parse(demoText) as { engine: { deck: Record<string, unknown> } };
+    doc.engine.deck.path = 'not-beside-the-project.deck.json';
+    doc.engine.deck.text = deckToJson(fromFile.value.deck);
+    const path = join(dir, 'with-deck-inside.blockwise.json');
+    writeFileSync(path, JSON.stringify(doc));
+    const r = await loadProjectFromDisk(path);
+    if (!r.ok) throw new Error(formatLoadFailure(r.error));
+    // docs/deck-format.md: deckToJson round-trips exactly, so the saved text is the same deck as the file.
+    expect(r.value.deck).toEqual(fromFile.value.deck);
+    expect(r.value.deckPath).toBe(path);
+  });
+
   it('readProjectFile reports a folder given as a project', async () => {
     const r = await readProjectFile(dir);
     expect(r.ok).toBe(false);
