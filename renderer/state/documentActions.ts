@@ -3,6 +3,7 @@
  * `projectOpenFailed` with every issue), the bundled demo, a deck file
  * into `deckImported` (or a refusal saying where and what).
  */
+import { parseCycleFile } from '../../engine/cycle';
 import { embeddedDeckFile, parseProject, withoutEmbeddedDeckText } from '../../engine/project';
 import { parseDeckText } from '../../engine/study';
 import type { StudyAction } from './studyActions';
@@ -22,7 +23,7 @@ export function openProjectAction(name: string, text: string, deckFile: DeckFile
   if (embedded !== null) return { type: 'projectOpened', project: withoutEmbeddedDeckText(parsed.value), name, deckFile: embedded, embedDeck: true };
   const project = parsed.value;
   const deck = project.engine.deck;
-  const keep = deck.kind === 'file' && deckFile !== null && deck.path === deckFile.name;
+  const keep = (deck.kind === 'file' || deck.kind === 'cycle') && deckFile !== null && deck.path === deckFile.name;
   return { type: 'projectOpened', project, name, deckFile: keep ? deckFile : null };
 }
 
@@ -37,10 +38,23 @@ const DECK_ERRORS_SHOWN = 5;
  * its results and its undo history stay as they were.
  */
 export function deckImportAction(deckFile: DeckFile): { readonly ok: true; readonly action: StudyAction } | { readonly ok: false; readonly message: string } {
+  if (isCycleFileName(deckFile.name)) {
+    // An engine cycle file (docs/cycle-format.md): the project's engine becomes that cycle, its deck generated from it.
+    const cycle = parseCycleFile(deckFile.text, deckFile.name);
+    if (cycle.ok) return { ok: true, action: { type: 'deckImported', deckFile } };
+    const shown = cycle.error.slice(0, DECK_ERRORS_SHOWN).map((e) => e.message);
+    const rest = cycle.error.length - shown.length;
+    return { ok: false, message: `Cycle file ${deckFile.name} not imported, nothing changed: ${shown.join('; ')}${rest > 0 ? ` (and ${rest} more)` : ''}.` };
+  }
   const parsed = parseDeckText(deckFile.text, deckFile.name);
   if (parsed.ok) return { ok: true, action: { type: 'deckImported', deckFile } };
   const lines = parsed.error.slice(0, DECK_ERRORS_SHOWN).map((e) => e.message);
   const more = parsed.error.length - lines.length;
   const tail = more > 0 ? ` (and ${more} more)` : '';
   return { ok: false, message: `Deck ${deckFile.name} not imported, nothing changed: ${lines.join('; ')}${tail}.` };
+}
+
+/** A file named *.cycle.json is an engine cycle file, not a deck. */
+export function isCycleFileName(name: string): boolean {
+  return name.toLowerCase().endsWith('.cycle.json');
 }

@@ -7,6 +7,7 @@
  */
 import type { Draft } from 'immer';
 import type { Project } from '../../engine/project';
+import { isCycleFileName } from './documentActions';
 import { issueReason } from './displayText';
 import { parseField } from './fieldUnits';
 import { LEG_KIND_LABEL, newLeg } from './legTemplates';
@@ -74,7 +75,11 @@ export function studyReducer(state: StudyState, action: StudyAction): StudyState
       if (state.doc === null) return state;
       const companion = { deckBefore: state.deckFile, deckAfter: action.deckFile };
       const doc = applyEdit(state.doc, `Import deck ${action.deckFile.name}`, (d) => {
-        d.engine.deck = { kind: 'file', path: action.deckFile.name };
+        if (isCycleFileName(action.deckFile.name)) {
+          // A cycle file: the engine is that cycle; a grid already set for a cycle engine is kept.
+          const grid = d.engine.deck.kind === 'cycle' ? d.engine.deck.grid : undefined;
+          d.engine.deck = { kind: 'cycle', path: action.deckFile.name, ...(grid === undefined ? {} : { grid }) };
+        } else d.engine.deck = { kind: 'file', path: action.deckFile.name };
       }, companion);
       return { ...state, doc, deckFile: action.deckFile, issues: projectIssues(doc.present) };
     }

@@ -14,6 +14,7 @@ import { useStudy } from '../state/studyContext';
 import { deckTitleText } from '../state/deckTitle';
 import { savesDeckInside } from '../state/saveText';
 import type { LiveStudy } from '../worker/useEngine';
+import { CycleEnginePanel } from './CycleEnginePanel';
 
 /** The deck (import, errors by line and column, grid summary), the installation, and thrust lapse and TSFC plots. */
 export function EngineView(props: { readonly live: LiveStudy; readonly chartSize?: ChartSize; readonly onCommand?: (command: ToolbarCommand) => void; readonly hostKind?: 'desktop' | 'browser' }) {
@@ -128,6 +129,7 @@ export function EngineView(props: { readonly live: LiveStudy; readonly chartSize
           </fieldset>
         ) : null}
       </div>
+      {deckSource.kind === 'cycle' && state.deckFile ? <CycleEnginePanel project={project} cycleFile={state.deckFile} units={u} {...(props.chartSize ? { chartSize: props.chartSize } : {})} /> : null}
       <StaleMark stale={props.live.stale} running={props.live.running} />
       {snapshot && snapshot.lapse.length > 0 ? (
         <ChoiceField label="Rating plotted" testId="lapse-rating" value={curves?.rating ?? rating} choices={snapshot.lapse.map((l) => ({ value: l.rating, label: l.rating }))} onChoose={setRating} />
