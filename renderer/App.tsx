@@ -36,6 +36,7 @@
  *              crossover-message, chart-crossover, crossover-markers, crossover-failure
  *   envelope:  field-envelope-mass, envelope-rating, field-envelope-isa, chart-envelope,
  *              envelope-ceilings, envelope-failure
+ *   specific range: field-sr-mass, sr-progress, sr-failure, sr-optimum, chart-specific-range, sr-table
  *   compare:   compare-inlet-a, compare-inlet-b, compare-run, compare-progress(-cancel|-cancelled),
  *              compare-failure, compare-table, compare-design-name-<0|1>, compare-diff-block-fuel,
  *              chart-breakdown, compare-breakdown, payload-range-run, payload-range-progress(...),

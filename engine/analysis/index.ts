@@ -5,7 +5,7 @@
 export type { AnalysisError } from './analysisTypes';
 export { thrustDragCrossover, type CrossoverResult } from './crossover';
 export { DEFAULT_RESIDUAL_CLIMB_RATES, flightEnvelope, type Ceiling, type EnvelopeQuery, type EnvelopeResult, type EnvelopeRow } from './envelope';
-export { specificRange } from './specificRange';
+export { specificRange, type SpecificRangeResult } from './specificRange';
 export { optimumAltitude } from './optimumAltitude';
 export { payloadRangeDiagram, type PayloadRangeResult } from './payloadRange';
 export { compareInlets, type InletComparisonResult, type InletFactor } from './inletComparison';

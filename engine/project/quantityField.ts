@@ -43,6 +43,7 @@ export const PHYSICAL_MAGNITUDE: Readonly<Record<Dimension, { readonly max: numb
   tsfc: { max: 1e-3, what: '1e-3 kg/(N s) (35 lb/(lbf h))' },
   specificHeat: { max: 1e5, what: '100,000 J/(kg K)' },
   specificEnergy: { max: 1e9, what: '1e9 J/kg' },
+  specificRange: { max: 1e5, what: '100 km/kg' },
   dimensionless: { max: 1e6, what: '1e6' },
 };
 

@@ -15,6 +15,8 @@ export type Dimension =
   | 'tsfc'
   | 'specificHeat'
   | 'specificEnergy'
+  /** Specific range: distance flown per unit mass of fuel. */
+  | 'specificRange'
   | 'dimensionless';
 
 export type UnitSystem = 'si' | 'customary';
@@ -36,6 +38,7 @@ export const SI_UNIT: Readonly<Record<Dimension, string>> = {
   tsfc: 'kg/(N s)',
   specificHeat: 'J/(kg K)',
   specificEnergy: 'J/kg',
+  specificRange: 'm/kg',
   dimensionless: '-',
 };
 
@@ -56,6 +59,7 @@ export const DIMENSION_PHRASE: Readonly<Record<Dimension, string>> = {
   tsfc: 'a thrust-specific fuel consumption',
   specificHeat: 'a specific heat',
   specificEnergy: 'a specific energy',
+  specificRange: 'a specific range',
   dimensionless: 'a plain number',
 };
 
@@ -76,5 +80,6 @@ export const DIMENSION_EXAMPLES: Readonly<Record<Dimension, readonly [string, st
   tsfc: ['0.6 lb/(lbf h)', '17 mg/(N s)'],
   specificHeat: ['1004.5 J/(kg K)', '0.24 Btu/(lb degR)'],
   specificEnergy: ['42.8 MJ/kg', '18400 Btu/lb'],
+  specificRange: ['75 nmi/(1000 lb)', '0.3 km/kg'],
   dimensionless: ['0.78', '2 %'],
 };

@@ -20,7 +20,8 @@ export type DisplayKind =
   | 'time'
   | 'area'
   | 'power'
-  | 'tsfc';
+  | 'tsfc'
+  | 'specificRange';
 
 interface DisplaySpec {
   readonly unit: string;
@@ -43,6 +44,7 @@ const DISPLAY: Readonly<Record<DisplayKind, Readonly<Record<UnitSystem, DisplayS
   area: { si: { unit: 'm2', digits: 2 }, customary: { unit: 'ft2', digits: 1 } },
   power: { si: { unit: 'kW', digits: 1 }, customary: { unit: 'hp', digits: 0 } },
   tsfc: { si: { unit: 'mg/(N s)', digits: 2 }, customary: { unit: 'lb/(lbf h)', digits: 4 } },
+  specificRange: { si: { unit: 'km/kg', digits: 4 }, customary: { unit: 'nmi/(1000 lb)', digits: 2 } },
 };
 
 /** The unit a kind of quantity is shown in, e.g. ('altitude', 'customary') -> "ft". */

@@ -116,6 +116,13 @@ export const UNIT_TABLE: Readonly<Record<string, UnitDef>> = {
   inHg: u('pressure', INCH_HG_PA),
   mmHg: u('pressure', MM_HG_PA),
   atm: u('pressure', ATMOSPHERE_PA),
+  // specific range (distance per fuel mass); 1000 lb is a count of pounds, exact as the pound is
+  'm/kg': u('specificRange', 1),
+  'km/kg': u('specificRange', 1000),
+  'nmi/kg': u('specificRange', NAUTICAL_MILE_M),
+  'nmi/lb': u('specificRange', NAUTICAL_MILE_M / POUND_KG),
+  'nmi/(1000 lb)': u('specificRange', NAUTICAL_MILE_M / (1000 * POUND_KG)),
+  'NM/(1000 lb)': u('specificRange', NAUTICAL_MILE_M / (1000 * POUND_KG)),
   // time
   s: u('time', 1),
   min: u('time', 60),

@@ -26,6 +26,7 @@ const DIMENSION_OF: Readonly<Record<FieldUnit, Dimension>> = {
   area: 'area',
   power: 'power',
   tsfc: 'tsfc',
+  specificRange: 'specificRange',
   angle: 'angle',
   dimensionless: 'dimensionless',
   percent: 'dimensionless',

@@ -8,6 +8,7 @@ export const VIEWS = [
   { id: 'results', label: 'Flight results' },
   { id: 'crossover', label: 'Thrust vs drag' },
   { id: 'envelope', label: 'Flight envelope' },
+  { id: 'specificRange', label: 'Specific range' },
   { id: 'compare', label: 'Inlet A/B' },
 ] as const;
 

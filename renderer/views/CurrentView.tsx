@@ -11,6 +11,7 @@ import { EnvelopeView } from './EnvelopeView';
 import { InletsView } from './InletsView';
 import { MissionView } from './MissionView';
 import { ResultsView } from './ResultsView';
+import { SpecificRangeView } from './SpecificRangeView';
 
 /** The view for a tab. */
 export function CurrentView(props: { readonly view: ViewId; readonly live: LiveStudy; readonly chartSize?: ChartSize; readonly onCommand: (command: ToolbarCommand) => void; readonly hostKind?: 'desktop' | 'browser' }) {
@@ -32,6 +33,8 @@ export function CurrentView(props: { readonly view: ViewId; readonly live: LiveS
       return <CrossoverView {...common} />;
     case 'envelope':
       return <EnvelopeView {...common} />;
+    case 'specificRange':
+      return <SpecificRangeView {...common} />;
     case 'compare':
       return <CompareView {...common} />;
   }

@@ -56,7 +56,7 @@ interface Slot {
 }
 
 /** Kinds where only the newest request matters: one runs, the newest waits, older waiting ones are dropped. */
-export const COALESCED_KINDS: ReadonlySet<EngineRequestKind> = new Set<EngineRequestKind>(['study', 'crossover', 'envelope']);
+export const COALESCED_KINDS: ReadonlySet<EngineRequestKind> = new Set<EngineRequestKind>(['study', 'crossover', 'envelope', 'specificRange']);
 
 /**
  * A client over Web Workers. Each request kind gets its own worker, so a

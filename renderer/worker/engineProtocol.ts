@@ -3,7 +3,7 @@
  * project (SI) and the deck file; replies carry plain data (structured clone).
  */
 import type { InstallationMethodId, RatingName } from '../../engine/propulsion';
-import type { CrossoverResult, EnvelopeResult, InletComparisonResult, PayloadRangeResult, RecoveryTradeByMethod, TradeFactorsResult } from '../../engine/analysis';
+import type { CrossoverResult, EnvelopeResult, InletComparisonResult, OptimumAltitudeResult, SpecificRangeResult, PayloadRangeResult, RecoveryTradeByMethod, TradeFactorsResult } from '../../engine/analysis';
 import type { UncertaintyResult } from '../../engine/uncertainty';
 import type { MissionResult } from '../../engine/mission';
 import type { Project } from '../../engine/project';
@@ -57,11 +57,32 @@ export interface EnvelopeRequestQuery {
   readonly step_m: number;
 }
 
+/** Specific range at several altitudes and the optimum altitude, at one mass (the CLI's `range-speeds`). */
+export interface SpecificRangeRequestQuery {
+  readonly mass_kg: number;
+  readonly isaDev_K: number;
+  readonly altitudes_m: readonly number[];
+}
+
+/** One altitude's specific range, or why there is none there (e.g. above the ceiling). */
+export type SpecificRangeAtAltitude =
+  | { readonly altitude_m: number; readonly ok: true; readonly result: SpecificRangeResult }
+  | { readonly altitude_m: number; readonly ok: false; readonly code: string; readonly message: string };
+
+export interface SpecificRangeSet {
+  readonly mass_kg: number;
+  readonly curves: readonly SpecificRangeAtAltitude[];
+  readonly optimum: OptimumAltitudeResult | null;
+  /** Why there is no optimum altitude (null when there is one). */
+  readonly optimumError: string | null;
+}
+
 export type EngineRequest =
   | CycleViewRequest
   | ({ readonly kind: 'study' } & StudyInputs)
   | ({ readonly kind: 'crossover'; readonly query: CrossoverRequestQuery } & StudyInputs)
   | ({ readonly kind: 'envelope'; readonly query: EnvelopeRequestQuery } & StudyInputs)
+  | ({ readonly kind: 'specificRange'; readonly query: SpecificRangeRequestQuery } & StudyInputs)
   | ({ readonly kind: 'payloadRange' } & StudyInputs)
   | ({ readonly kind: 'tradeFactors' } & StudyInputs)
   /** The +1 % recovery trade factor by every recovery method (Raymer held/scaled, deck sensitivities, cycle). */
@@ -169,6 +190,7 @@ export interface EngineReplies {
   readonly study: StudySnapshot;
   readonly crossover: CrossoverSet;
   readonly envelope: EnvelopeResult;
+  readonly specificRange: SpecificRangeSet;
   readonly payloadRange: PayloadRangeResult;
   readonly tradeFactors: TradeFactorsResult;
   readonly recoveryByMethod: RecoveryTradeByMethod;

@@ -3,13 +3,13 @@
  * Worker (engineWorker.ts) and in-thread in component tests. Long analyses
  * report progress and poll `shouldCancel` between missions.
  */
-import { type AnalysisError, compareInlets, DEFAULT_RESIDUAL_CLIMB_RATES, type EnvelopeQuery, flightEnvelope, inletFactorBuilder, payloadRangeDiagram, recoveryTradeByMethod, thrustDragCrossover, tradeFactors } from '../../engine/analysis';
+import { type AnalysisError, compareInlets, DEFAULT_RESIDUAL_CLIMB_RATES, type EnvelopeQuery, flightEnvelope, optimumAltitude, specificRange, inletFactorBuilder, payloadRangeDiagram, recoveryTradeByMethod, thrustDragCrossover, tradeFactors } from '../../engine/analysis';
 import { makeIssue, recoveryMethodVariants } from '../../engine/project';
 import { err, ok, type Result } from '../../engine/core';
 import { type MissionInput, solveMission } from '../../engine/mission';
 import { createDeckTextMemo, prepareStudy, type DeckTextMemo, type Study } from '../../engine/study';
 import { runUncertainty } from '../../engine/uncertainty';
-import type { EngineFailure, EngineOutcome, EngineReplies, EngineRequest, EngineRequestKind, EnvelopeRequestQuery, StudyInputs } from './engineProtocol';
+import type { EngineFailure, EngineOutcome, EngineReplies, EngineRequest, EngineRequestKind, EnvelopeRequestQuery, SpecificRangeAtAltitude, StudyInputs } from './engineProtocol';
 import { formatQuantity } from '../../engine/units';
 import { cycleEngineOf, cycleViewReply, projectInstallation, type InstallationAt } from './cycleView';
 import { deckSummary, inletCurves, LAPSE_RATINGS, lapseCurves, polarCurves } from './studyCurves';
@@ -127,6 +127,33 @@ function runEnvelope(request: Extract<EngineRequest, { kind: 'envelope' }>, cach
   return r.ok ? r : err(analysisFailure(r.error));
 }
 
+/**
+ * Specific range at each altitude and the optimum altitude, with the queries
+ * the CLI's `range-speeds` verb builds (cli/verbs/rangeSpeeds.ts): the
+ * project's caution settings and MMO.
+ */
+function runSpecificRange(request: Extract<EngineRequest, { kind: 'specificRange' }>, cache: DeckCache, hooks: RunHooks): Result<EngineReplies['specificRange'], EngineFailure> {
+  const study = prepare(request, cache);
+  const base = study.ok ? study.value.inputFor() : study;
+  if (!base.ok) return base;
+  const input = base.value;
+  const { mass_kg, isaDev_K, altitudes_m } = request.query;
+  const bad = massFailure('specific range', mass_kg, input.airframe.mtow_kg);
+  if (bad) return err(bad);
+  const models = { aero: input.aero, propulsion: input.propulsion };
+  const total = altitudes_m.length + 1;
+  const curves: SpecificRangeAtAltitude[] = [];
+  for (const [i, altitude_m] of altitudes_m.entries()) {
+    if (hooks.shouldCancel?.()) return err({ kind: 'analysis', code: 'cancelled', message: 'specific range: cancelled' });
+    const r = specificRange(models, { altitude_m, mass_kg, isaDev_K, cautionSettings: input.cautionSettings, mmo: input.airframe.mmo });
+    curves.push(r.ok ? { altitude_m, ok: true, result: r.value } : { altitude_m, ok: false, code: r.error.code, message: r.error.message });
+    hooks.onProgress?.(i + 1, total);
+  }
+  const opt = optimumAltitude(models, { mass_kg, isaDev_K, mmo: input.airframe.mmo, cautionSettings: input.cautionSettings });
+  hooks.onProgress?.(total, total);
+  return ok({ mass_kg, curves, optimum: opt.ok ? opt.value : null, optimumError: opt.ok ? null : opt.error.message });
+}
+
 function runCompare(request: Extract<EngineRequest, { kind: 'compare' }>, cache: DeckCache, hooks: RunHooks): Result<EngineReplies['compare'], EngineFailure> {
   const study = prepare(request, cache);
   if (!study.ok) return study;
@@ -162,6 +189,8 @@ function dispatch(request: EngineRequest, cache: DeckCache, hooks: RunHooks): Re
       return runCrossover(request, cache);
     case 'envelope':
       return runEnvelope(request, cache);
+    case 'specificRange':
+      return runSpecificRange(request, cache, hooks);
     case 'payloadRange': {
       const study = prepare(request, cache);
       const base = study.ok ? study.value.inputFor() : study;

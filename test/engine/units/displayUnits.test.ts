@@ -5,13 +5,13 @@ import { expectClose } from '../../support/assertInDelta';
 
 const KINDS: readonly DisplayKind[] = [
   'altitude', 'distance', 'speed', 'climbRate', 'mass', 'force', 'fuelFlow',
-  'temperature', 'temperatureDelta', 'pressure', 'time', 'area', 'power', 'tsfc',
+  'temperature', 'temperatureDelta', 'pressure', 'time', 'area', 'power', 'tsfc', 'specificRange',
 ];
 
 const DIMENSION_OF: Readonly<Record<DisplayKind, Parameters<typeof parseQuantity>[1]>> = {
   altitude: 'length', distance: 'length', speed: 'speed', climbRate: 'speed', mass: 'mass', force: 'force',
   fuelFlow: 'massFlow', temperature: 'temperature', temperatureDelta: 'temperatureDelta', pressure: 'pressure',
-  time: 'time', area: 'area', power: 'power', tsfc: 'tsfc',
+  time: 'time', area: 'area', power: 'power', tsfc: 'tsfc', specificRange: 'specificRange',
 };
 
 describe('displayUnit', () => {
@@ -26,6 +26,14 @@ describe('displayUnit', () => {
     expect(displayUnit('distance', 'si')).toBe('km');
     expect(displayUnit('force', 'si')).toBe('kN');
     expect(displayUnit('tsfc', 'si')).toBe('mg/(N s)');
+    expect(displayUnit('specificRange', 'customary')).toBe('nmi/(1000 lb)');
+    expect(displayUnit('specificRange', 'si')).toBe('km/kg');
+  });
+
+  it('converts specific range with the NIST SP 811 nautical mile and pound', () => {
+    // 1 nmi per 1000 lb = 1852 m / 453.59237 kg (NIST SP 811, B.8, exact factors).
+    expectClose(toDisplay(1852 / 453.59237, 'specificRange', 'customary'), 1, { rel: 1e-12 }, 'NIST SP 811 nmi, lb');
+    expectClose(toDisplay(1000, 'specificRange', 'si'), 1, { rel: 1e-12 }, '1 km/kg = 1000 m/kg');
   });
 });
 

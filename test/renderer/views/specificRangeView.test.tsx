@@ -1,0 +1,39 @@
+import { fireEvent, screen, waitFor } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import { SpecificRangeView } from '../../../renderer/views/SpecificRangeView';
+import type { LiveStudy } from '../../../renderer/worker/useEngine';
+import { demoState, renderWithStudy, TEST_CHART } from '../support/studyHarness';
+
+const live: LiveStudy = { snapshot: null, snapshotRevision: 0, revision: 0, stale: false, running: false, failure: null };
+/** SI unit symbols that must not appear on a customary screen (NIST SP 811 symbols). */
+const SI_TEXT = /\b(kg|km|kN|m\/s|hPa|Pa)\b|\d\s?m\b/;
+
+describe('SpecificRangeView', () => {
+  it('draws specific range against Mach per altitude in nmi per 1000 lb, with the optimum altitude', async () => {
+    const initial = { ...demoState(), units: 'customary' as const };
+    renderWithStudy(<SpecificRangeView live={live} chartSize={TEST_CHART} />, initial);
+    const chart = await screen.findByTestId('chart-specific-range', {}, { timeout: 30000 });
+    expect(chart.querySelector('[role="img"]')?.getAttribute('aria-label')).toMatch(/Specific range against Mach/);
+    expect(chart.textContent).toMatch(/nmi\/\(1000 lb\)/);
+    expect(screen.getByTestId('sr-optimum').textContent).toMatch(/Optimum altitude [\d,]+ ft|No optimum altitude/);
+    const table = screen.getByTestId('sr-table').textContent ?? '';
+    expect(table).toMatch(/ ft/);
+    const all = screen.getByRole('heading', { name: 'Specific range' }).parentElement!.textContent ?? '';
+    expect(all).not.toMatch(SI_TEXT);
+    expect(all).not.toMatch(/NaN/);
+  }, 40000);
+
+  it('shows why there is no result for a mass above MTOW, without NaN', async () => {
+    const initial = { ...demoState(), units: 'customary' as const };
+    renderWithStudy(<SpecificRangeView live={live} chartSize={TEST_CHART} />, initial);
+    await screen.findByTestId('chart-specific-range', {}, { timeout: 30000 });
+    const field = screen.getByTestId('field-sr-mass');
+    const mtow_lb = initial.doc!.present.airframe.weights.maxTakeoff / 0.45359237;
+    fireEvent.change(field, { target: { value: `${Math.round(mtow_lb * 1.5)} lb` } });
+    fireEvent.blur(field);
+    const failure = await screen.findByTestId('sr-failure', {}, { timeout: 30000 });
+    expect(failure.textContent).toMatch(/at most the MTOW/);
+    expect(failure.textContent).not.toMatch(/NaN/);
+    await waitFor(() => expect(screen.queryByTestId('chart-specific-range')).toBeNull());
+  }, 40000);
+});
