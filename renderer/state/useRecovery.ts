@@ -4,10 +4,10 @@
  * and an earlier session's unsaved work is offered back at start.
  */
 import { useCallback, useEffect, useRef, useState } from 'react';
-import { projectToJson } from '../../engine/project';
 import { startAutosave } from '../bridge/autosaveTimer';
 import type { Bridge, RecoveryOffer } from '../bridge/bridge';
 import { openProjectAction } from './documentActions';
+import { projectSaveText } from './saveText';
 import type { StudyStore } from './studyContext';
 
 export function useRecovery(bridge: Bridge, store: StudyStore) {
@@ -34,8 +34,10 @@ export function useRecovery(bridge: Bridge, store: StudyStore) {
         bridge,
         () => {
           const s = latest.current;
-          if (s.doc === null) return null;
-          return { name: s.documentName, text: projectToJson(s.doc.present), dirty: s.savedAtStep !== s.doc.past.length };
+          // The recovery copy is what a save would write, so in the browser build it carries the deck too.
+          const text = projectSaveText(s, bridge.kind);
+          if (s.doc === null || text === null) return null;
+          return { name: s.documentName, text, dirty: s.savedAtStep !== s.doc.past.length };
         },
         (e) => setProblem(`Could not keep a recovery copy: ${e instanceof Error ? e.message : String(e)}`),
       ),

@@ -21,6 +21,8 @@ export function fixtureText(path: string): string {
 export interface FakeBridge extends Bridge {
   readonly exports: { text: string; name: string; mime: string }[];
   readonly saves: { text: string; name: string }[];
+  /** Recovery copies sent by the autosave timer. */
+  readonly autosaves: { name: string; text: string }[];
   readonly prints: string[];
   /** The printable report's text when printReport was called (null: not mounted). */
   printedReportText: string | null;
@@ -75,7 +77,10 @@ export function createFakeBridge(): FakeBridge {
     },
     recentFiles: async () => [],
     loadDemo: async () => demoFiles(),
-    autosave: async () => undefined,
+    autosaves: [],
+    autosave: async (name, text) => {
+      bridge.autosaves.push({ name, text });
+    },
     recoveryOffer: async () => bridge.recovery,
     discardRecovery: async () => {
       bridge.discarded += 1;

@@ -1,6 +1,7 @@
 import { CURRENT_VERSION } from '../../../engine/project/projectSchema';
 import { act, fireEvent, render, screen, waitFor } from '@testing-library/react';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
+import { AUTOSAVE_EVERY_MS } from '../../../renderer/bridge/autosaveTimer';
 import { SAFETY_NOTICE_LINES } from '../../../engine/core/notice';
 import { App } from '../../../renderer/App';
 import { deckToJson } from '../../../engine/propulsion';
@@ -220,6 +221,26 @@ describe('the App with the demo study', () => {
     expect(await waitForChange(before)).toBe(thirsty);
     fireEvent.click(screen.getByTestId('view-tab-engine'));
     expect(screen.getByTestId('engine-deck-source').textContent).toContain('loaded thirsty.deck.json');
+  }, 60000);
+
+  it('the recovery copy in the browser build carries the imported deck, so recovering restores it', async () => {
+    vi.useFakeTimers({ toFake: ['setInterval', 'clearInterval'] });
+    try {
+      const bridge = renderApp();
+      await blockFuel();
+      const text = demoFiles().deckText.replace(/\r?\n$/, '') + '\n';
+      bridge.nextDeck = { name: 'copy.deck.csv', text };
+      fireEvent.click(screen.getByTestId('command-importDeck'));
+      await waitFor(() => expect(bridge.documentStates.at(-1)?.dirty).toBe(true), { timeout: 15000 });
+      await act(async () => {
+        vi.advanceTimersByTime(AUTOSAVE_EVERY_MS);
+      });
+      await waitFor(() => expect(bridge.autosaves.length).toBeGreaterThan(0));
+      const copy = JSON.parse(bridge.autosaves.at(-1)!.text) as { engine: { deck: unknown } };
+      expect(copy.engine.deck).toEqual({ kind: 'file', path: 'copy.deck.csv', text });
+    } finally {
+      vi.useRealTimers();
+    }
   }, 60000);
 
   it('offers unsaved work from an earlier session and restores it with the deck in use', async () => {
