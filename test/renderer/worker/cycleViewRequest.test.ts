@@ -92,4 +92,19 @@ describe('cycleView request', () => {
     expect(r.ok).toBe(false);
     if (!r.ok) expect(JSON.stringify(r.error)).toMatch(/x\.cycle\.json/);
   });
+
+  it('reports progress by Mach line and stops when cancelled', () => {
+    const seen: [number, number][] = [];
+    const request: CycleViewRequest = { kind: 'cycleView', project: null, deckFile: { name: CYCLE_NAME, text: cycleText }, query };
+    const whole = runEngineRequest(request, createDeckCache(), { onProgress: (d, t) => seen.push([d, t]) });
+    expect(whole.ok).toBe(true);
+    // two throttles x four altitudes, counted one line at a time
+    expect(seen.map(([d]) => d)).toEqual([1, 2, 3, 4, 5, 6, 7, 8]);
+    expect(seen.every(([, t]) => t === 8)).toBe(true);
+    let lines = 0;
+    const stopped = runEngineRequest(request, createDeckCache(), { onProgress: () => (lines += 1), shouldCancel: () => lines >= 2 });
+    expect(stopped.ok).toBe(false);
+    if (!stopped.ok) expect(stopped.error).toMatchObject({ kind: 'analysis', code: 'cancelled' });
+    expect(lines).toBe(2);
+  });
 });
