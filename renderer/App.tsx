@@ -33,7 +33,7 @@
  *              leg-add-kind, leg-add
  *   cautions:  caution-limit-<key>, field-caution-<key>, caution-limit-<key>-reset, caution-fixed
  *   crossover: field-crossover-altitude, field-crossover-mass, crossover-rating, crossover-all-inlets,
- *              crossover-message, chart-crossover, crossover-markers, crossover-failure
+ *              crossover-message, chart-crossover, crossover-markers, crossover-limits, crossover-failure
  *   envelope:  field-envelope-mass, envelope-rating, field-envelope-isa, chart-envelope,
  *              envelope-ceilings, envelope-failure
  *   specific range: field-sr-mass, sr-progress, sr-failure, sr-optimum, chart-specific-range, sr-table

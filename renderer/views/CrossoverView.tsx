@@ -62,7 +62,7 @@ export function CrossoverView(props: { readonly live: LiveStudy; readonly chartS
             yLabel={`force (${plot.unit})`}
             series={plot.series}
             dashed={(k) => k.startsWith('d')}
-            verticalMarks={plot.markers.map((m) => ({ x: m.mach, label: m.what }))}
+            verticalMarks={[...plot.markers.map((m) => ({ x: m.mach, label: m.beyond ? `${m.what} (${m.beyond})` : m.what })), ...plot.limits.map((l) => ({ x: l.mach, label: `limit: ${l.what}` }))]}
             points={plot.markers.flatMap((m) => (m.thrust === null ? [] : [{ x: m.mach, y: m.thrust, label: `${m.inletName} ${m.what}` }]))}
             {...(props.chartSize ? { size: props.chartSize } : {})}
           />
@@ -79,9 +79,28 @@ export function CrossoverView(props: { readonly live: LiveStudy; readonly chartS
               {plot.markers.map((m) => (
                 <tr key={`${m.inletName}-${m.what}`}>
                   <td>{m.inletName}</td>
-                  <td>{m.what}</td>
+                  <td>{m.beyond ? `${m.what}, ${m.beyond}: not level flight inside the limits` : m.what}</td>
                   <td>{machText(m.mach)}</td>
                   <td>{m.thrust === null ? '—' : groupDigits(m.thrust, u === 'si' ? 2 : 0)}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+          <table data-testid="crossover-limits">
+            <caption>Limits of level flight (stall at CLmax, buffet onset at 1 g, VMO/MMO)</caption>
+            <thead>
+              <tr>
+                <th>Inlet</th>
+                <th>Limit</th>
+                <th>Mach</th>
+              </tr>
+            </thead>
+            <tbody>
+              {plot.limits.map((l) => (
+                <tr key={`${l.inletName}-${l.what}`}>
+                  <td>{l.inletName}</td>
+                  <td>{l.what}</td>
+                  <td>{machText(l.mach)}</td>
                 </tr>
               ))}
             </tbody>

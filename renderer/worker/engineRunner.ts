@@ -81,9 +81,11 @@ function runCrossover(request: Extract<EngineRequest, { kind: 'crossover' }>, ca
   for (const name of names) {
     const prepared = study.value.inputFor(name);
     if (!prepared.ok) return prepared;
-    const { aero, propulsion } = prepared.value;
+    const { aero, propulsion, airframe } = prepared.value;
     const q = request.query;
-    const r = thrustDragCrossover({ aero, propulsion }, { altitude_m: q.altitude_m, mass_kg: q.mass_kg, rating: q.rating, isaDev_K: q.isaDev_K });
+    // VMO/MMO as the CLI's crossover verb passes them, so the band and the limit lines include them.
+    const speedLimits = { vmo_m_s: airframe.vmo_m_s, mmo: airframe.mmo };
+    const r = thrustDragCrossover({ aero, propulsion }, { altitude_m: q.altitude_m, mass_kg: q.mass_kg, rating: q.rating, isaDev_K: q.isaDev_K, speedLimits });
     if (!r.ok) return err(analysisFailure(r.error));
     curves.push({ inletName: name, result: r.value });
   }
