@@ -83,7 +83,7 @@ analysis failed.
     if (!r.ok) return analysisFailed(io, 'compare', r.error.message);
     const v = r.value;
     const uncertain = { project, resources: { deck }, designs: names, ...size };
-    const assumptions = installationAssumptions(project).map((a) => a.text);
+    const assumptions = installationAssumptions(project, deck.hasSensitivities).map((a) => a.text);
     if (values.json === true) {
       if (withUncertainty) return printUncertainty(io, 'compare', uncertain, true, [], { installationMethod: pair.value.inputB.propulsion.installationMethod, ...v, assumptions });
       printJsonReport(io, { installationMethod: pair.value.inputB.propulsion.installationMethod, ...v, assumptions });

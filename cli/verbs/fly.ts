@@ -42,7 +42,7 @@ error. The result is printed whatever the status.
     if (csvOption !== undefined && csvOption.trim() === '') throw new UsageError('--csv: give a file name');
     const loaded = await loadVerbProject(file, optionalString(values, 'inlet'), io);
     if (typeof loaded === 'number') return loaded;
-    const { project, input } = loaded;
+    const { project, input, deck } = loaded;
     const result = solveMission(input);
     const context = {
       projectName: project.name,
@@ -50,7 +50,7 @@ error. The result is printed whatever the status.
       deckTitle: input.propulsion.label,
       parametricDeck: input.propulsion.parametric,
       installationMethod: input.propulsion.installationMethod,
-      assumptions: installationAssumptions(project).map((a) => a.text),
+      assumptions: installationAssumptions(project, deck.hasSensitivities).map((a) => a.text),
     };
 
     if (csvOption !== undefined) {

@@ -98,7 +98,7 @@ command line; 3 the project's own mission failed or too few samples flew.
     const { project, deck } = loaded;
     if (names === null) names = project.inlets.slice(0, 2).map((i) => i.name);
     for (const n of names.slice(1)) checkInletName(project, n, '--inlets', file);
-    const assumptions = installationAssumptions(project).map((a) => a.text);
+    const assumptions = installationAssumptions(project, deck.hasSensitivities).map((a) => a.text);
     return printUncertainty(io, 'uncertainty', { project, resources: { deck }, designs: names, ...size }, values.json === true, [], { assumptions }, assumptionLines(assumptions));
   },
 };

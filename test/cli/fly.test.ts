@@ -133,6 +133,26 @@ describe('blockwise fly text output', () => {
     expect(r.out).toContain('Distances: over the ground');
     expect(r.out).toContain('missed approach');
   });
+
+  it("fly's installation assumptions name the method the result used: the demo's cycle deck by its sensitivity columns, a deck without them by Raymer's rule", async () => {
+    const demo = await run('fly', DEMO, '--json');
+    const j = JSON.parse(demo.out) as Json & { assumptions: string[]; installationMethod: string };
+    expect(j.assumptions[0]).toContain("deck's own sensitivity columns");
+    expect(j.assumptions[0]).not.toContain('Raymer');
+    const dir = mkdtempSync(join(tmpdir(), 'blockwise-fly-method-'));
+    try {
+      const project = JSON.parse(readFileSync(join(repoRoot, DEMO), 'utf8')) as Json & { engine: { deck: Json } };
+      project.engine.deck = { kind: 'file', path: join(repoRoot, 'fixtures/parametric/demo-parametric.deck.csv') };
+      const file = join(dir, 'parametric.blockwise.json');
+      writeFileSync(file, JSON.stringify(project));
+      const r = await run('fly', file, '--json');
+      const k = JSON.parse(r.out) as Json & { assumptions: string[] };
+      expect(k.assumptions[0]).toContain("Raymer's rule");
+      expect(k.assumptions[0]).not.toContain('uses those instead');
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  });
 });
 
 describe('blockwise fly options', () => {
