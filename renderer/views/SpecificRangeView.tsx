@@ -92,7 +92,7 @@ export function SpecificRangeView(props: { readonly live: LiveStudy; readonly ch
                       <td>{c.result.longRangeSpecificRange_m_kg === null ? '— (beyond the level-flight band)' : formatQuantity(c.result.longRangeSpecificRange_m_kg, 'specificRange', u)}</td>
                     </>
                   ) : (
-                    <td colSpan={4}>no level flight: {c.code.replace(/_/g, ' ')}</td>
+                    <td colSpan={4}>{c.code === 'no_solution' ? 'No level flight at this mass and altitude: above the ceiling, or thrust cannot equal drag inside the limits.' : 'Not computed: the analysis stopped at this altitude.'}</td>
                   )}
                 </tr>
               ))}
