@@ -1,6 +1,8 @@
+import { useMemo } from 'react';
 import { usePersistentValue } from '../worker/jobStore';
 import { displayUnit, formatQuantity } from '../../engine/units';
 import { breakdownWaterfall, FACTOR_LABEL, payloadRangeRows } from '../charts/compareSeries';
+import { profileCompareRows, profileCompareSeries, type ProfileQuantity } from '../charts/profileCompareSeries';
 import { ChoiceField } from '../components/ChoiceField';
 import { FailureNotice } from '../components/IssueList';
 import { JobProgress } from '../components/JobProgress';
@@ -128,8 +130,73 @@ function InletComparisonPanel(props: { readonly chartSize?: ChartSize }) {
           <p className="small">{c.value.breakdown.description}</p>
         </>
       ) : null}
+      <ProfileOverlayPanel nameA={nameA} nameB={nameB} {...(props.chartSize ? { chartSize: props.chartSize } : {})} />
       <UncertaintyBand designs={[nameA, nameB]} testId="compare-uncertainty" {...(props.chartSize ? { chartSize: props.chartSize } : {})} />
 
+    </>
+  );
+}
+
+const PROFILE_PLOTS: readonly { readonly quantity: ProfileQuantity; readonly title: string; readonly kind: 'altitude' | 'mass'; readonly what: string }[] = [
+  { quantity: 'altitude', title: 'Altitude against distance', kind: 'altitude', what: 'altitude' },
+  { quantity: 'mass', title: 'Mass against distance', kind: 'mass', what: 'mass' },
+  { quantity: 'fuel', title: 'Fuel burned against distance (from take-off)', kind: 'mass', what: 'fuel burned' },
+];
+
+/** The two designs' flown missions overlaid: altitude, mass and fuel burned against distance. */
+function ProfileOverlayPanel(props: { readonly nameA: string; readonly nameB: string; readonly chartSize?: ChartSize }) {
+  const { state } = useStudy();
+  const project = state.doc!.present;
+  const job = useEngineJob<'profiles'>({ persistKey: 'compare.profiles' });
+  const inputs = { project, deckFile: state.deckFile };
+  const designs = job.request?.designs ?? [props.nameA, props.nameB];
+  const outdated = useLiveRerun(job, { kind: 'profiles', ...inputs, designs });
+  const u = state.units;
+  const size = props.chartSize ? { size: props.chartSize } : {};
+  const j = job.state;
+  const rows = useMemo(() => (j.status === 'done' ? profileCompareRows(j.value.designs, u) : []), [j, u]);
+  const same = props.nameA === props.nameB;
+  return (
+    <>
+      <h3>Mission profiles of the two designs</h3>
+      <button
+        type="button"
+        data-testid="profiles-run"
+        disabled={same || j.status === 'running'}
+        onClick={() => job.start({ kind: 'profiles', ...inputs, designs: [props.nameA, props.nameB] })}
+      >
+        Fly both missions
+      </button>
+      <JobProgress state={j} onCancel={job.cancel} testId="profiles-progress" />
+      <StaleMark stale={outdated} running={j.status === 'running'} />
+      {j.status === 'failed' ? <FailureNotice failure={j.failure} testId="profiles-failure" /> : null}
+      {j.status === 'done' ? (
+        <>
+          {PROFILE_PLOTS.map((plot) => (
+            <LineChartPanel
+              key={plot.quantity}
+              title={plot.title}
+              testId={`chart-profiles-${plot.quantity}`}
+              data={rows}
+              xKey="distance"
+              xLabel={`air distance (${displayUnit('distance', u)})`}
+              yLabel={`${plot.what} (${displayUnit(plot.kind, u)})`}
+              series={profileCompareSeries(j.value.designs, plot.quantity)}
+              pathsInDataOrder
+              {...size}
+            />
+          ))}
+          <ul data-testid="profiles-summary">
+            {j.value.designs.map((d) => (
+              <li key={d.name}>
+                {d.name}: {formatQuantity(d.mission.airDistance_m, 'distance', u)} in the air, trip fuel {formatQuantity(d.mission.tripFuel_kg, 'mass', u)}, block fuel{' '}
+                {formatQuantity(d.mission.blockFuel_kg, 'mass', u)}
+                {d.mission.status === 'ok' ? '' : ` (${d.mission.status}: the profile stops where the mission did)`}
+              </li>
+            ))}
+          </ul>
+        </>
+      ) : null}
     </>
   );
 }

@@ -88,6 +88,8 @@ export type EngineRequest =
   /** The +1 % recovery trade factor by every recovery method (Raymer held/scaled, deck sensitivities, cycle). */
   | ({ readonly kind: 'recoveryByMethod' } & StudyInputs)
   | ({ readonly kind: 'compare'; readonly nameA: string; readonly nameB: string } & StudyInputs)
+  /** Each named inlet design's flown mission (its study input), for the overlaid profiles of the compare view. */
+  | ({ readonly kind: 'profiles'; readonly designs: readonly string[] } & StudyInputs)
   /** The declared uncertainties' Monte Carlo over one design (its band) or two (A, B: the band of B - A). */
   | ({ readonly kind: 'uncertainty'; readonly designs: readonly string[]; readonly samples?: number; readonly seed?: number } & StudyInputs);
 
@@ -185,6 +187,18 @@ export interface CycleViewReply {
   readonly fanSpeedCurves: CycleCurveSet;
 }
 
+/** One inlet design's flown mission and the legs of its trip (after taxi out, before taxi in). */
+export interface DesignProfile {
+  readonly name: string;
+  readonly mission: MissionResult;
+  /** Indices of the first and last trip leg (the history's legIndex): the trip runs from take-off mass to landing mass. */
+  readonly tripLegs: readonly [number, number];
+}
+
+export interface ProfilesReply {
+  readonly designs: readonly DesignProfile[];
+}
+
 export interface EngineReplies {
   readonly cycleView: CycleViewReply;
   readonly study: StudySnapshot;
@@ -195,6 +209,7 @@ export interface EngineReplies {
   readonly tradeFactors: TradeFactorsResult;
   readonly recoveryByMethod: RecoveryTradeByMethod;
   readonly compare: InletComparisonResult;
+  readonly profiles: ProfilesReply;
   readonly uncertainty: UncertaintyResult;
 }
 

@@ -165,6 +165,30 @@ function runCompare(request: Extract<EngineRequest, { kind: 'compare' }>, cache:
   return r.ok ? r : err(analysisFailure(r.error));
 }
 
+/** Trip legs of a mission input: the first leg that is not taxi out to the last that is not taxi in. */
+function tripLegsOf(input: MissionInput): readonly [number, number] {
+  let first = 0;
+  while (first < input.legs.length && input.legs[first]!.kind === 'taxiOut') first++;
+  let last = input.legs.length - 1;
+  while (last >= 0 && input.legs[last]!.kind === 'taxiIn') last--;
+  return [first, last];
+}
+
+/** Each named design flown from the study's own input for it (the same input the study request flies). */
+function runProfiles(request: Extract<EngineRequest, { kind: 'profiles' }>, cache: DeckCache, hooks: RunHooks): Result<EngineReplies['profiles'], EngineFailure> {
+  const study = prepare(request, cache);
+  if (!study.ok) return study;
+  const designs = [];
+  for (const [k, name] of request.designs.entries()) {
+    if (hooks.shouldCancel?.()) return err({ kind: 'analysis', code: 'cancelled', message: 'profiles: cancelled' });
+    const input = study.value.inputFor(name);
+    if (!input.ok) return input;
+    designs.push({ name, mission: solveMission(input.value), tripLegs: tripLegsOf(input.value) });
+    hooks.onProgress?.(k + 1, request.designs.length);
+  }
+  return ok({ designs });
+}
+
 function runCycleView(request: Extract<EngineRequest, { kind: 'cycleView' }>, cache: DeckCache, hooks: RunHooks): Result<EngineReplies['cycleView'], EngineFailure> {
   const engine = cycleEngineOf(request.deckFile.text, request.deckFile.name);
   if (!engine.ok) return engine;
@@ -210,6 +234,8 @@ function dispatch(request: EngineRequest, cache: DeckCache, hooks: RunHooks): Re
     }
     case 'compare':
       return runCompare(request, cache, hooks);
+    case 'profiles':
+      return runProfiles(request, cache, hooks);
     case 'recoveryByMethod': {
       const study = prepare(request, cache);
       if (!study.ok) return study;
