@@ -39,13 +39,23 @@ export interface ReserveItemRule {
   readonly interpretation?: string;
 }
 
-export interface ReserveRule {
-  readonly preset: ReservePreset;
+export interface ReserveRule<P extends ReservePreset = ReservePreset> {
+  readonly preset: P;
   readonly title: string;
   /** The rule's words (from memory), with the paragraph numbers. */
   readonly quotation: string;
   /** Items in the order they are flown (an alternate's items only when there is one). */
   readonly items: readonly ReserveItemRule[];
+  /** The preset's default settings (SI: fractions, seconds, kg), as the rule words them; the project schema's defaults agree (test). */
+  readonly defaults: ReserveDefaults[P];
+}
+
+/** Each preset's default settings (SI). */
+export interface ReserveDefaults {
+  readonly icaoAnnex6: { readonly contingencyFraction: number; readonly minContingencyTime_s: number; readonly finalReserveTime_s: number };
+  readonly cfr121_639: { readonly finalReserveTime_s: number };
+  readonly cfr121_645: { readonly enRouteFraction: number; readonly finalReserveTime_s: number };
+  readonly custom: { readonly contingencyFraction: number; readonly finalReserveTime_s: number; readonly extraFuel_kg: number };
 }
 
 const MISSED_APPROACH: ReserveItemRule = {
@@ -62,10 +72,11 @@ const ALTERNATE_FLIGHT = 'climb (the mission\'s first climb schedule), cruise at
 const HOLD = 'hold at the reserve hold speed (default best endurance at 1.1 x the minimum-drag speed) in standard conditions (ISA, no wind)';
 
 /** The four presets' rules. */
-export const RESERVE_RULES: Readonly<Record<ReservePreset, ReserveRule>> = {
+export const RESERVE_RULES: { readonly [P in ReservePreset]: ReserveRule<P> } = {
   icaoAnnex6: {
     preset: 'icaoAnnex6',
     title: 'ICAO Annex 6 Part I (turbine aeroplanes)',
+    defaults: { contingencyFraction: 0.05, minContingencyTime_s: 300, finalReserveTime_s: 1800 },
     quotation:
       'Contingency fuel: "5 per cent of the planned trip fuel ... but in any case not lower than the amount required to fly for five minutes at holding speed at 450 m (1 500 ft) above the destination aerodrome in standard conditions"; destination alternate fuel: the fuel "to perform a missed approach at the destination aerodrome; climb to the expected cruising altitude; fly the expected routing; descend to the point where the expected approach is initiated; and conduct the approach and landing at the destination alternate aerodrome"; final reserve fuel: "to fly for 30 minutes at holding speed at 450 m (1 500 ft) above aerodrome elevation in standard conditions" (Annex 6 Part I, 4.3.6.3, quoted from memory).',
     items: [
@@ -88,6 +99,7 @@ export const RESERVE_RULES: Readonly<Record<ReservePreset, ReserveRule>> = {
   cfr121_639: {
     preset: 'cfr121_639',
     title: '14 CFR 121.639 (domestic operations)',
+    defaults: { finalReserveTime_s: 2700 },
     quotation:
       '"No person may dispatch or take off an airplane unless it has enough fuel (a) to fly to the airport to which it is dispatched; (b) thereafter, to fly to and land at the most distant alternate airport (where required) for the airport to which dispatched; and (c) thereafter, to fly for 45 minutes at normal cruising fuel consumption" (14 CFR 121.639, quoted from memory).',
     items: [
@@ -109,6 +121,7 @@ export const RESERVE_RULES: Readonly<Record<ReservePreset, ReserveRule>> = {
   cfr121_645: {
     preset: 'cfr121_645',
     title: '14 CFR 121.645(b) (flag and supplemental, turbine-engine airplanes)',
+    defaults: { enRouteFraction: 0.1, finalReserveTime_s: 1800 },
     quotation:
       '"(1) To fly to and land at the airport to which it is released; (2) After that, to fly for a period of 10 percent of the total time required to fly from the airport of departure to, and land at, the airport to which it was released; (3) After that, to fly to and land at the most distant alternate airport specified in the flight release, if an alternate is required; and (4) After that, to fly for 30 minutes at holding speed at 1,500 feet above the alternate airport (or the destination airport if no alternate is required) under standard temperature conditions" (14 CFR 121.645(b), quoted from memory).',
     items: [
@@ -136,6 +149,7 @@ export const RESERVE_RULES: Readonly<Record<ReservePreset, ReserveRule>> = {
   custom: {
     preset: 'custom',
     title: 'Custom reserves',
+    defaults: { contingencyFraction: 0.05, finalReserveTime_s: 1800, extraFuel_kg: 0 },
     quotation: 'No published rule: a contingency fraction of the trip fuel, an alternate, a final-reserve hold and a fixed extra fuel, as set.',
     items: [
       { item: 'contingency', paragraph: 'custom', flownAs: 'the contingency fraction of the trip fuel (carried, not flown)' },
