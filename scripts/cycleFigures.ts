@@ -9,8 +9,9 @@ import { expectOk } from '../engine/core/result';
 import { parseCycleFile } from '../engine/cycle/cycleFile';
 import { designEngine, runCyclePoint, type CycleEngine, type CycleSpec, type CycleThrottle } from '../engine/cycle/index';
 import { RATING_NAMES } from '../engine/propulsion/propulsionModel';
+import { FOOT_M } from '../engine/units';
 
-const FT = 0.3048;
+const FT = FOOT_M;
 const root = new URL('../', import.meta.url);
 function spec(path: string): CycleSpec {
   return expectOk(parseCycleFile(readFileSync(new URL(path, root), 'utf8'), path), path);

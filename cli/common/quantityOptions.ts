@@ -6,7 +6,7 @@
  */
 import { MAX_ALTITUDE_M, MIN_ALTITUDE_M } from '../../engine/mission';
 import { MAX_PRESSURE_ALTITUDE_M, MIN_PRESSURE_ALTITUDE_M } from '../../engine/aero';
-import { type Dimension, parseQuantity } from '../../engine/units';
+import { type Dimension, parseQuantity, FOOT_M } from '../../engine/units';
 import { optionalString, requireString, UsageError } from '../verb';
 
 /** Inclusive SI range of an option; `what` says it in words for the message. */
@@ -18,7 +18,7 @@ export interface OptionRange {
   readonly what: string;
 }
 
-const FT = 0.3048;
+const FT = FOOT_M;
 
 /** The ranges the options are checked against (SI). */
 export const OPTION_RANGES = {

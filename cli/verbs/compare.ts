@@ -1,6 +1,6 @@
 import { describeInstallationMethod } from '../../engine/propulsion';
 import { compareInlets, inletFactorBuilder } from '../../engine/analysis';
-import { formatQuantity } from '../../engine/units';
+import { formatQuantity, FOOT_M } from '../../engine/units';
 import { checkInletName, loadVerbProject, projectArgument } from '../common/projectArgs';
 import { analysisFailed, printJsonReport, printReport } from '../common/report';
 import { formatTable } from '../format/textTable';
@@ -94,8 +94,8 @@ analysis failed.
     const minutes = (s: number) => (s / 60).toFixed(1);
     const ceilingRows = a.ceilings.map((c, i) => {
       const cb = b.ceilings[i];
-      const ft = (m: number | null | undefined) => (m === null || m === undefined ? '-' : (m / 0.3048).toFixed(0));
-      return [`${c.name} ceiling ft`, ft(c.altitude_m), ft(cb?.altitude_m), d.ceilings[i]?.altitude_m == null ? '-' : signed(d.ceilings[i]!.altitude_m! / 0.3048, 0)];
+      const ft = (m: number | null | undefined) => (m === null || m === undefined ? '-' : (m / FOOT_M).toFixed(0));
+      return [`${c.name} ceiling ft`, ft(c.altitude_m), ft(cb?.altitude_m), d.ceilings[i]?.altitude_m == null ? '-' : signed(d.ceilings[i]!.altitude_m! / FOOT_M, 0)];
     });
     const cond = v.crossoverCondition;
     const lines = [

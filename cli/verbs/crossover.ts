@@ -15,6 +15,7 @@ import {
   ratingOption,
 } from './analysisArgs';
 import { verbSummary } from './catalogue';
+import { FOOT_M } from '../../engine/units';
 
 export const crossoverVerb: Verb = {
   name: 'crossover',
@@ -69,7 +70,7 @@ says so. Exit codes: 0 done; 1 project unreadable; 2 bad command line;
         (v.curves.thrustAvailable_N[i]! / 1000).toFixed(2),
         (v.curves.drag_N[i]! / 1000).toFixed(2),
         (v.curves.excessThrust_N[i]! / 1000).toFixed(2),
-        ((v.curves.specificExcessPower_m_s[i]! * 60) / 0.3048).toFixed(0),
+        ((v.curves.specificExcessPower_m_s[i]! * 60) / FOOT_M).toFixed(0),
       ])
       .filter((_, i) => i % step === 0 || i === v.curves.mach.length - 1);
     printReport(io, [

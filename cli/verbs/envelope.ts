@@ -8,6 +8,7 @@ import { formatTable } from '../format/textTable';
 import { UsageError, type CliIo, type Verb } from '../verb';
 import { bothUnits, INLET_OPTION, ISA_DEV_OPTION, isaDevOption, JSON_OPTION, machText, openAnalysisProject, ratingOption } from './analysisArgs';
 import { verbSummary } from './catalogue';
+import { FOOT_M } from '../../engine/units';
 
 const LIMIT_TAG: Readonly<Record<LowSpeedLimitSource | HighSpeedLimitSource, string>> = {
   stall: 's',
@@ -59,12 +60,12 @@ TAS (no acceleration factor). Exit codes: 0 done; 1 project unreadable;
   allowPositionals: true,
   async run(values, positionals, io: CliIo): Promise<number> {
     const rating = ratingOption(values, 'rating', 'maxClimb');
-    const top_m = quantityOption(values, 'top', 'length', TOP_RANGE, 50000 * 0.3048);
-    const step_m = quantityOption(values, 'step', 'length', OPTION_RANGES.altitudeStep, 2000 * 0.3048);
+    const top_m = quantityOption(values, 'top', 'length', TOP_RANGE, 50000 * FOOT_M);
+    const step_m = quantityOption(values, 'step', 'length', OPTION_RANGES.altitudeStep, 2000 * FOOT_M);
     if (top_m / step_m > 2000) {
       // Blame the option the user gave (both given: the step, which sets the row count).
       const blamed = values.step === undefined ? 'top' : 'step';
-      throw new UsageError(`--${blamed}: ${String(values[blamed])} gives ${Math.ceil(top_m / step_m)} rows from 0 to --top ${(top_m / 0.3048).toFixed(0)} ft in steps of ${(step_m / 0.3048).toFixed(0)} ft; at most 2000`);
+      throw new UsageError(`--${blamed}: ${String(values[blamed])} gives ${Math.ceil(top_m / step_m)} rows from 0 to --top ${(top_m / FOOT_M).toFixed(0)} ft in steps of ${(step_m / FOOT_M).toFixed(0)} ft; at most 2000`);
     }
     const serviceRate = quantityOption(values, 'service-rate', 'speed', OPTION_RANGES.climbRate, DEFAULT_RESIDUAL_CLIMB_RATES[0]!.climbRate_m_s);
     const cruiseRate = quantityOption(values, 'cruise-rate', 'speed', OPTION_RANGES.climbRate, DEFAULT_RESIDUAL_CLIMB_RATES[1]!.climbRate_m_s);
@@ -96,7 +97,7 @@ TAS (no acceleration factor). Exit codes: 0 done; 1 project unreadable;
       return 0;
     }
     const rows = v.rows.map((row) => [
-      (row.altitude_m / 0.3048).toFixed(0),
+      (row.altitude_m / FOOT_M).toFixed(0),
       row.lowSpeedLimit === null ? '-' : `${machText(row.lowSpeedLimit.mach)} ${LIMIT_TAG[row.lowSpeedLimit.source]}`,
       row.highSpeedLimit === null ? '-' : `${machText(row.highSpeedLimit.mach)} ${LIMIT_TAG[row.highSpeedLimit.source]}`,
       machText(row.lowMach),
@@ -105,7 +106,7 @@ TAS (no acceleration factor). Exit codes: 0 done; 1 project unreadable;
       `${machText(row.buffetLowMach)}/${machText(row.buffetHighMach)}`,
       `${machText(row.buffetMarginLowMach)}/${machText(row.buffetMarginHighMach)}`,
       machText(row.speedLimitMach),
-      row.maxClimbRate_m_s === null ? '-' : ((row.maxClimbRate_m_s * 60) / 0.3048).toFixed(0),
+      row.maxClimbRate_m_s === null ? '-' : ((row.maxClimbRate_m_s * 60) / FOOT_M).toFixed(0),
     ]);
     printReport(io, [
       `Level-flight envelope — inlet "${input.propulsion.inletName}", ${v.rating}, ${bothUnits(mass_kg, 'mass')}, ${isaText(isaDev_K)}`,

@@ -4,6 +4,7 @@ import { formatTable } from '../format/textTable';
 import { optionalString, UsageError, type CliIo, type Verb } from '../verb';
 import { bothUnits, INLET_OPTION, JSON_OPTION, openAnalysisProject } from './analysisArgs';
 import { verbSummary } from './catalogue';
+import { NAUTICAL_MILE_M } from '../../engine/units';
 
 export const payloadRangeVerb: Verb = {
   name: 'payload-range',
@@ -43,7 +44,7 @@ codes: 0 done; 1 project unreadable; 2 bad command line; 3 a mission failed.
     const label: Record<string, string> = { maxPayload: 'max payload', mtowFullFuel: 'MTOW, full tanks', ferry: 'ferry', between: '' };
     const rows = v.points.map((p) => [
       label[p.kind] ?? p.kind,
-      (p.range_m / 1852).toFixed(0),
+      (p.range_m / NAUTICAL_MILE_M).toFixed(0),
       p.payload_kg.toFixed(0),
       p.takeoffMass_kg.toFixed(0),
       p.fuelOnBoard_kg.toFixed(0),

@@ -10,8 +10,9 @@ import { formatTable } from '../format/textTable';
 import type { CliIo, Verb } from '../verb';
 import { bothUnits, INLET_OPTION, ISA_DEV_OPTION, isaDevOption, JSON_OPTION, machText, openAnalysisProject, pointCondition, POINT_OPTIONS } from './analysisArgs';
 import { verbSummary } from './catalogue';
+import { NAUTICAL_MILE_M } from '../../engine/units';
 
-const NMI_M = 1852;
+const NMI_M = NAUTICAL_MILE_M;
 
 export const rangeSpeedsVerb: Verb = {
   name: 'range-speeds',

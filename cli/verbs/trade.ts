@@ -9,6 +9,7 @@ import { INLET_OPTION, JSON_OPTION, openAnalysisProject } from './analysisArgs';
 import { recoveryTradeByMethod } from '../../engine/analysis';
 import { recoveryMethodVariants } from '../../engine/project';
 import { verbSummary } from './catalogue';
+import { NAUTICAL_MILE_M } from '../../engine/units';
 
 export const tradeVerb: Verb = {
   name: 'trade',
@@ -51,7 +52,7 @@ unreadable; 2 bad command line; 3 the design mission failed.
     const m = byMethod.value;
     const kg = (x: number | null) => (x === null ? '-' : `${x >= 0 ? '+' : ''}${x.toFixed(2)}`);
     printReport(io, [
-      `Trade factors — inlet "${input.propulsion.inletName}", design mission ${(v.designMission.range_m / 1852).toFixed(0)} nmi with ${v.designMission.payload_kg.toFixed(0)} kg payload; block fuel ${v.baselineBlockFuel_kg.toFixed(1)} kg`,
+      `Trade factors — inlet "${input.propulsion.inletName}", design mission ${(v.designMission.range_m / NAUTICAL_MILE_M).toFixed(0)} nmi with ${v.designMission.payload_kg.toFixed(0)} kg payload; block fuel ${v.baselineBlockFuel_kg.toFixed(1)} kg`,
       '',
       formatTable(
         [

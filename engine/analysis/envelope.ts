@@ -15,6 +15,7 @@ import { thrustDragCrossover, type CrossoverResult } from './crossover';
 import { liftLimitMachs } from './liftLimitMach';
 import { airAt } from './pointState';
 import { msg, q, withParts, type MessageParts } from '../units/messageParts';
+import { FOOT_M } from '../units/unitTable';
 
 export interface ResidualClimbRate {
   /** Name shown beside the ceiling, e.g. "service". */
@@ -22,7 +23,7 @@ export interface ResidualClimbRate {
   readonly climbRate_m_s: number;
 }
 
-const FT_PER_MIN = 0.3048 / 60;
+const FT_PER_MIN = FOOT_M / 60;
 
 /** 100 ft/min service and 300 ft/min cruise ceilings (common practice). */
 export const DEFAULT_RESIDUAL_CLIMB_RATES: readonly ResidualClimbRate[] = [

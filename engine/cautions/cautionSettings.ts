@@ -3,6 +3,7 @@
  * common practice or from a named source, stated in CAUTION_CATALOGUE
  * (engine/cautions/cautionCatalogue.ts, owned by engine/mission).
  */
+import { FOOT_M } from '../units/unitTable';
 export interface CautionSettings {
   /** Least residual climb rate at top of climb (m/s); 300 ft/min common practice. */
   readonly minResidualClimbRate_m_s: number;
@@ -25,7 +26,7 @@ export interface CautionSettings {
 }
 
 export const DEFAULT_CAUTION_SETTINGS: CautionSettings = {
-  minResidualClimbRate_m_s: 300 * 0.3048 / 60,
+  minResidualClimbRate_m_s: 300 * FOOT_M / 60,
   minBuffetLoadFactor: 1.3,
   vmoMargin_m_s: 0,
   mmoMargin: 0,

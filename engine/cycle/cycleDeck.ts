@@ -32,6 +32,7 @@ import type { InstallationSensitivities } from '../propulsion/installationSensit
 import type { RatingName } from '../propulsion/propulsionModel';
 import type { CycleEngine } from './cycleEngine';
 import { runCyclePoint, type CyclePointResult, type CycleWarmStart } from './cyclePoint';
+import { FOOT_M } from '../units/unitTable';
 
 /** The lever value of each rating: fixed across the deck (the deck's `rating` lines). */
 export const POWER_LEVER: Readonly<Record<RatingName, number>> = {
@@ -51,7 +52,7 @@ export const PART_POWER_LEVER: readonly number[] = [0.3, 0.4, 0.5, 0.6, 0.7, 0.8
 /** Finite-difference steps of the sensitivities (three-point one-sided formula, module comment). */
 export const SENSITIVITY_STEPS = { recovery: -0.005, bleedFraction: 0.005, powerExtraction_W: 10e3 } as const;
 
-const FT = 0.3048;
+const FT = FOOT_M;
 
 /** The default grid: the demo class's envelope, 0 to 51,000 ft and Mach 0 to 0.9. */
 export const DEFAULT_CYCLE_DECK_GRID: CycleDeckGrid = {

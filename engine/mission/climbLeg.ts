@@ -18,9 +18,10 @@ import { machOfCas, missionAir } from './missionAtmosphere';
 import { S_ALT, S_MASS, S_TAS, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
 import { schedulePhases } from './speedSchedule';
 import { msg, q } from '../units/messageParts';
+import { FOOT_M } from '../units/unitTable';
 
 /** Climb rate (m/s) below which a climb counts as stalled: 100 ft/min, the service-ceiling rate (common practice). */
-export const CLIMB_STALL_RATE_M_S = (100 * 0.3048) / 60;
+export const CLIMB_STALL_RATE_M_S = (100 * FOOT_M) / 60;
 
 /** A held-CAS or held-Mach climb segment at a rating to `toAltitude_m`. */
 export function makeClimbSegment(

@@ -37,7 +37,7 @@ import { flyHold } from './holdLeg';
 import { makeLevelSegment } from './levelFlight';
 import { flySegment, missionDomain } from './flySegment';
 import { BASE_STEP_S, distanceIndex, type LegTarget, type MissionContext } from './missionContext';
-import { FOOT_M } from '../units/unitTable';
+import { FOOT_M, NAUTICAL_MILE_M } from '../units/unitTable';
 import { S_AIR, S_ALT, S_GROUND, S_MASS, S_TIME, type StateVector } from './missionState';
 import { appendCaution, createFlightLog } from './timeHistoryBuilder';
 import { CAUTION_CATALOGUE } from '../cautions/cautionCatalogue';
@@ -48,9 +48,9 @@ import { messageText, msg, partsOf, q, withParts, type MessageParts } from '../u
 export const HOLD_HEIGHT_M = 1500 * FOOT_M;
 
 const DEFAULT_CLIMB: Omit<SpeedSchedule, 'mach'> = {
-  lowCas_m_s: (250 * 1852) / 3600,
+  lowCas_m_s: (250 * NAUTICAL_MILE_M) / 3600,
   lowAltitudeLimit_m: 10000 * FOOT_M,
-  cas_m_s: (280 * 1852) / 3600,
+  cas_m_s: (280 * NAUTICAL_MILE_M) / 3600,
 };
 
 export interface ReserveFlight {

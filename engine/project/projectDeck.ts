@@ -15,6 +15,7 @@ import { cycleDeckFromText } from '../cycle/cycleDeckCache';
 import { DEFAULT_CYCLE_DECK_GRID, type CycleDeckGrid } from '../cycle/cycleDeck';
 import { makeIssue, type ProjectIssue } from './projectIssue';
 import type { Project } from './projectSchema';
+import { FOOT_M } from '../units/unitTable';
 
 export type DeckReference =
   | { readonly kind: 'file'; readonly path: string }
@@ -52,7 +53,7 @@ export function withoutEmbeddedDeckText(project: Project): Project {
   return { ...project, engine: { ...project.engine, deck: { kind: 'file', path: d.path } } };
 }
 
-const FT_M = 0.3048;
+const FT_M = FOOT_M;
 
 /** Grid of a parametric deck when the project gives none: 0 to 51,000 ft every 3,000 ft, Mach 0 to 0.9, idle to full power. */
 export const DEFAULT_PARAMETRIC_GRID: ParametricDeckGrid = {

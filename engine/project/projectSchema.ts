@@ -8,11 +8,12 @@
 import { z } from 'zod';
 import { quantity, ratio } from './quantityField';
 import { uncertaintySchema } from './uncertaintySchema';
+import { FOOT_M } from '../units/unitTable';
 
 export const PROJECT_FORMAT = 'blockwise-project';
 export const CURRENT_VERSION = 3;
 
-const FT = 0.3048;
+const FT = FOOT_M;
 /**
  * Pressure-altitude range a project file accepts for its altitudes: -2,000 ft
  * to 65,000 ft (common practice for the class). Named apart from the mission

@@ -15,7 +15,7 @@
  * - the highest tabulated altitude at least 3 km (a jet's deck reaches its
  *   cruise altitudes; common practice).
  */
-import { POUND_FORCE_N, POUND_KG } from '../units/unitTable';
+import { POUND_FORCE_N, POUND_KG, INCH_M, FOOT_M } from '../units/unitTable';
 import type { DeckGridPoint } from './deckGrid';
 
 /** 1 lb/(lbf h) in kg/(N s) (NIST SP 811 lb and lbf). */
@@ -41,8 +41,7 @@ interface Slip {
 
 const FUEL_KG_MIN_FOR_LB_H = 1 / 60 / (POUND_KG / 3600);
 const THRUST_KN_FOR_LBF = 1000 / POUND_FORCE_N;
-const FT_M = 0.3048;
-const INCH_M = 0.0254;
+const FT_M = FOOT_M;
 
 /** Slips and their effect on TSFC = fuel flow / thrust. */
 const TSFC_SLIPS: readonly Slip[] = [

@@ -6,4 +6,4 @@
 export { displayUnit, formatQuantity, groupDigits, toDisplay, type DisplayKind } from './displayUnits';
 export { fromSi, parseQuantity, type Dimension, type UnitSystem } from './quantity';
 export { messageIn, messageText } from './messageParts';
-export { FOOT_M, POUND_FORCE_N, POUND_KG } from './unitTable';
+export { FOOT_M, INCH_M, NAUTICAL_MILE_M, POUND_FORCE_N, POUND_KG } from './unitTable';

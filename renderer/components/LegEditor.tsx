@@ -5,6 +5,7 @@ import { ratingLabel } from '../state/displayText';
 import { useStudy } from '../state/studyContext';
 import { ChoiceField } from './ChoiceField';
 import { QuantityField } from './QuantityField';
+import { FOOT_M, NAUTICAL_MILE_M } from '../../engine/units';
 
 function Schedule(props: { readonly n: number }) {
   const p = ['mission', 'legs', props.n, 'schedule'] as const;
@@ -89,14 +90,14 @@ export function LegFields(props: { readonly leg: ProjectLeg; readonly n: number 
             onChoose={(k) =>
               set(
                 ['profile'],
-                k === 'constantAltitude' ? { kind: k } : k === 'stepClimb' ? { kind: k, step: 4000 * 0.3048, maxAltitude: 41000 * 0.3048 } : { kind: k, maxAltitude: 41000 * 0.3048 },
+                k === 'constantAltitude' ? { kind: k } : k === 'stepClimb' ? { kind: k, step: 4000 * FOOT_M, maxAltitude: 41000 * FOOT_M } : { kind: k, maxAltitude: 41000 * FOOT_M },
                 'cruise profile',
               )
             }
           />
           {leg.profile.kind === 'stepClimb' ? <QuantityField label="Step" path={[...p, 'profile', 'step']} unit="altitude" testId={id('step')} /> : null}
           {leg.profile.kind !== 'constantAltitude' ? <QuantityField label="Highest altitude" path={[...p, 'profile', 'maxAltitude']} unit="altitude" testId={id('max-altitude')} /> : null}
-          <Toggle label="Distance solved to meet the mission range" testId={id('solve-distance')} checked={leg.distance === 'solve'} onChange={(c) => set(['distance'], c ? 'solve' : 500 * 1852, 'distance')} />
+          <Toggle label="Distance solved to meet the mission range" testId={id('solve-distance')} checked={leg.distance === 'solve'} onChange={(c) => set(['distance'], c ? 'solve' : 500 * NAUTICAL_MILE_M, 'distance')} />
           {leg.distance !== 'solve' ? <QuantityField label="Distance" path={[...p, 'distance']} unit="distance" testId={id('distance')} /> : null}
         </>
       );
@@ -105,7 +106,7 @@ export function LegFields(props: { readonly leg: ProjectLeg; readonly n: number 
         <>
           <QuantityField label="To altitude" path={[...p, 'toAltitude']} unit="altitude" testId={id('to-altitude')} />
           <Schedule n={n} />
-          <Toggle label="Idle descent" testId={id('idle')} checked={leg.mode.kind === 'idle'} onChange={(c) => set(['mode'], c ? { kind: 'idle' } : { kind: 'rate', rate: 1500 * 0.3048 / 60 }, 'descent mode')} />
+          <Toggle label="Idle descent" testId={id('idle')} checked={leg.mode.kind === 'idle'} onChange={(c) => set(['mode'], c ? { kind: 'idle' } : { kind: 'rate', rate: 1500 * FOOT_M / 60 }, 'descent mode')} />
           {leg.mode.kind === 'rate' ? <QuantityField label="Descent rate" path={[...p, 'mode', 'rate']} unit="climbRate" testId={id('rate')} /> : null}
         </>
       );
@@ -114,7 +115,7 @@ export function LegFields(props: { readonly leg: ProjectLeg; readonly n: number 
         <>
           <QuantityField label="Altitude" path={[...p, 'altitude']} unit="altitude" testId={id('altitude')} />
           <QuantityField label="Time" path={[...p, 'time']} unit="duration" testId={id('time')} />
-          <Toggle label="Best-endurance speed" testId={id('best-endurance')} checked={leg.speed.kind === 'bestEndurance'} onChange={(c) => set(['speed'], c ? { kind: 'bestEndurance' } : { kind: 'cas', cas: 210 * 1852 / 3600 }, 'hold speed')} />
+          <Toggle label="Best-endurance speed" testId={id('best-endurance')} checked={leg.speed.kind === 'bestEndurance'} onChange={(c) => set(['speed'], c ? { kind: 'bestEndurance' } : { kind: 'cas', cas: 210 * NAUTICAL_MILE_M / 3600 }, 'hold speed')} />
           {leg.speed.kind === 'cas' ? <QuantityField label="CAS" path={[...p, 'speed', 'cas']} unit="speed" testId={id('hold-cas')} /> : null}
         </>
       );

@@ -1,8 +1,9 @@
 /** Default legs the mission editor adds (SI; a starting point the user edits). */
 import type { ProjectLeg } from '../../engine/project';
+import { FOOT_M, NAUTICAL_MILE_M } from '../../engine/units';
 
-const FT = 0.3048;
-const KT = 1852 / 3600;
+const FT = FOOT_M;
+const KT = NAUTICAL_MILE_M / 3600;
 
 export const LEG_KINDS = ['taxiOut', 'takeoff', 'climb', 'cruise', 'descent', 'hold', 'approach', 'taxiIn'] as const;
 export type LegKindName = (typeof LEG_KINDS)[number];
@@ -32,7 +33,7 @@ export function newLeg(kind: LegKindName): ProjectLeg {
     case 'climb':
       return { kind, toAltitude: 35000 * FT, schedule: { ...SCHEDULE }, rating: 'maxClimb' };
     case 'cruise':
-      return { kind, altitude: 35000 * FT, speed: { kind: 'mach', mach: 0.76 }, profile: { kind: 'constantAltitude' }, distance: 500 * 1852 };
+      return { kind, altitude: 35000 * FT, speed: { kind: 'mach', mach: 0.76 }, profile: { kind: 'constantAltitude' }, distance: 500 * NAUTICAL_MILE_M };
     case 'descent':
       return { kind, toAltitude: 1500 * FT, schedule: { ...SCHEDULE }, mode: { kind: 'idle' } };
     case 'hold':

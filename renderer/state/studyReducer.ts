@@ -16,6 +16,7 @@ import { projectIssues } from './projectValidation';
 import type { StudyAction } from './studyActions';
 import type { StudyState } from './studyState';
 import { applyEdit, redo, startHistory, undo, type Undoable } from './undoHistory';
+import { NAUTICAL_MILE_M } from '../../engine/units';
 
 function withoutDraft(drafts: StudyState['drafts'], key: string): StudyState['drafts'] {
   if (!(key in drafts)) return drafts;
@@ -118,7 +119,7 @@ export function studyReducer(state: StudyState, action: StudyAction): StudyState
         const copy = cloneRow(leg) as typeof leg;
         copy.name = `${leg.name ?? LEG_KIND_LABEL[leg.kind]} (copy)`;
         // Only one cruise may have its distance solved: the copy of that cruise flies a set distance, so the project stays flyable.
-        if (copy.kind === 'cruise' && copy.distance === 'solve') copy.distance = 500 * 1852;
+        if (copy.kind === 'cruise' && copy.distance === 'solve') copy.distance = 500 * NAUTICAL_MILE_M;
         d.mission.legs.splice(action.index + 1, 0, copy);
       });
     case 'legMoved':

@@ -8,11 +8,11 @@ import { LineChartPanel, type ChartSize } from '../components/LineChartPanel';
 import { LocalQuantityField } from '../components/LocalQuantityField';
 import { machText, ratingLabel } from '../state/displayText';
 import { useStudy } from '../state/studyContext';
-import { groupDigits, messageIn } from '../../engine/units';
+import { groupDigits, messageIn, FOOT_M } from '../../engine/units';
 import type { CrossoverRequestQuery } from '../worker/engineProtocol';
 import { useEngineJob, type LiveStudy } from '../worker/useEngine';
 
-const FT = 0.3048;
+const FT = FOOT_M;
 
 /** Thrust available and drag against Mach at a chosen altitude, mass and rating, with the crossovers and thrust minimum marked. */
 export function CrossoverView(props: { readonly live: LiveStudy; readonly chartSize?: ChartSize }) {

@@ -9,9 +9,10 @@ import { LEG_KIND_LABEL, LEG_KINDS, type LegKindName } from '../state/legTemplat
 import { RESERVE_PRESET_LABEL, reservesForPreset, type ReservePreset } from '../state/reservePresets';
 import { selectIssuesUnder } from '../state/selectors';
 import { useStudy } from '../state/studyContext';
+import { FOOT_M, NAUTICAL_MILE_M } from '../../engine/units';
 
-const NMI = 1852;
-const FT = 0.3048;
+const NMI = NAUTICAL_MILE_M;
+const FT = FOOT_M;
 
 function Reserves() {
   const { state, dispatch } = useStudy();

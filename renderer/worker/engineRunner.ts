@@ -13,6 +13,7 @@ import type { EngineFailure, EngineOutcome, EngineReplies, EngineRequest, Engine
 import { formatQuantity } from '../../engine/units';
 import { cycleEngineOf, cycleViewReply, projectInstallation, type InstallationAt } from './cycleView';
 import { deckSummary, inletCurves, LAPSE_RATINGS, lapseCurves, polarCurves } from './studyCurves';
+import { FOOT_M } from '../../engine/units';
 
 export interface RunHooks {
   readonly onProgress?: (done: number, total: number) => void;
@@ -45,7 +46,7 @@ function analysisFailure(e: AnalysisError): EngineFailure {
 
 function firstCruiseAltitude(input: MissionInput): number {
   const cruise = input.legs.find((l) => l.kind === 'cruise');
-  return cruise?.kind === 'cruise' ? cruise.altitude_m : 35000 * 0.3048;
+  return cruise?.kind === 'cruise' ? cruise.altitude_m : 35000 * FOOT_M;
 }
 
 function runStudy(inputs: StudyInputs, cache: DeckCache): Result<EngineReplies['study'], EngineFailure> {

@@ -3,8 +3,9 @@ import { defaultInstallationMethod, describeReferenceRecovery, type EngineDeck, 
 import { type DragPolarModel, polarCoefficients } from '../../engine/aero';
 import type { MissionInput } from '../../engine/mission';
 import type { DeckSummary, InletCurves, LapseCurves, PolarCurves } from './engineProtocol';
+import { FOOT_M } from '../../engine/units';
 
-const FT = 0.3048;
+const FT = FOOT_M;
 export const PLOT_MACHS: readonly number[] = Array.from({ length: 18 }, (_, i) => 0.05 * (i + 1));
 export const POLAR_MACHS: readonly number[] = [0.4, 0.7, 0.78, 0.82, 0.85];
 export const POLAR_CLS: readonly number[] = Array.from({ length: 21 }, (_, i) => i * 0.05);
