@@ -2,7 +2,7 @@ import { useEffect, useMemo, useState } from 'react';
 import type { CycleSpec, CycleThrottle, LimitValue } from '../../engine/cycle';
 import { RATING_LABEL, RATING_NAMES, type RatingName } from '../../engine/propulsion';
 import type { Project } from '../../engine/project';
-import { formatQuantity, type UnitSystem } from '../../engine/units';
+import { formatQuantity, type UnitSystem, FOOT_M } from '../../engine/units';
 import { cycleSeries } from '../charts/cycleSeries';
 import { ChoiceField } from '../components/ChoiceField';
 import { FailureNotice } from '../components/IssueList';
@@ -15,7 +15,7 @@ import type { DeckFile } from '../state/studyState';
 import type { CycleViewQuery, CyclePointView } from '../worker/engineProtocol';
 import { useEngineJob } from '../worker/useEngine';
 
-const FT = 0.3048;
+const FT = FOOT_M;
 
 /** A value in the display units ("—" when there is none; never NaN). */
 function show(value: number | null | undefined, unit: FieldUnit, units: UnitSystem): string {

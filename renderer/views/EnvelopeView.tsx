@@ -7,12 +7,12 @@ import { LineChartPanel, type ChartSize } from '../components/LineChartPanel';
 import { LocalQuantityField } from '../components/LocalQuantityField';
 import { machText, ratingLabel } from '../state/displayText';
 import { useStudy } from '../state/studyContext';
-import { formatQuantity, messageIn } from '../../engine/units';
+import { formatQuantity, messageIn, FOOT_M } from '../../engine/units';
 import type { EnvelopeRequestQuery } from '../worker/engineProtocol';
 import { usePersistentValue } from '../worker/jobStore';
 import { useEngineJob, type LiveStudy } from '../worker/useEngine';
 
-const FT = 0.3048;
+const FT = FOOT_M;
 
 /** The level-flight envelope at a chosen mass, rating and ISA deviation: altitude against Mach with every limit line, and the ceilings. */
 export function EnvelopeView(props: { readonly live: LiveStudy; readonly chartSize?: ChartSize }) {

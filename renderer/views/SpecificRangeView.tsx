@@ -6,12 +6,12 @@ import { LineChartPanel, type ChartSize } from '../components/LineChartPanel';
 import { LocalQuantityField } from '../components/LocalQuantityField';
 import { machText } from '../state/displayText';
 import { useStudy } from '../state/studyContext';
-import { formatQuantity } from '../../engine/units';
+import { formatQuantity, FOOT_M } from '../../engine/units';
 import type { SpecificRangeRequestQuery } from '../worker/engineProtocol';
 import { usePersistentValue } from '../worker/jobStore';
 import { useEngineJob, type LiveStudy } from '../worker/useEngine';
 
-const FT = 0.3048;
+const FT = FOOT_M;
 /** The altitudes of the curves: 25,000 to 41,000 ft every 4,000 ft (flight levels of jet cruise, common practice). */
 const ALTITUDES_M = [25000, 29000, 33000, 37000, 41000].map((ft) => ft * FT);
 

@@ -18,8 +18,9 @@ import type { PropulsionModel, RatingName } from '../../engine/propulsion';
 import type { Project } from '../../engine/project';
 import type { CycleCurveSet, CycleViewQuery, CycleViewReply, CyclePointView, EngineFailure } from './engineProtocol';
 import { PLOT_MACHS } from './studyCurves';
+import { FOOT_M } from '../../engine/units';
 
-const FT = 0.3048;
+const FT = FOOT_M;
 /** Altitudes of the cycle's Mach curves: sea level, 15,000, 30,000 and 40,000 ft (ISA). */
 export const CYCLE_CURVE_ALTITUDES_M: readonly number[] = [0, 15000 * FT, 30000 * FT, 40000 * FT];
 
