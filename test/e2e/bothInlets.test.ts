@@ -49,7 +49,9 @@ describe('both inlet designs', () => {
     const inletsInTable = new Set((await rows.locator('td:first-child').allTextContents()).map((t) => t.trim()));
     expect(inletsInTable).toEqual(new Set(inletNames));
     expect(rowCount).toBeGreaterThanOrEqual(4);
-    expect(await page.getByTestId('chart-crossover').locator('.recharts-reference-line').count()).toBe(rowCount);
+    // one vertical line per marker and per level-flight limit (stall, buffet onset, VMO/MMO) of each inlet
+    const limits = await page.getByTestId('crossover-limits').locator('tbody tr').count();
+    expect(await page.getByTestId('chart-crossover').locator('.recharts-reference-line').count()).toBe(rowCount + limits);
     expect(await page.getByTestId('chart-crossover').locator('.recharts-reference-dot').count()).toBe(rowCount);
     // Mach ticks at round values: at most 3 decimals (renderer/charts/niceTicks.ts, Heckbert 1990).
     const ticks = await xTickLabels(page, 'chart-crossover');

@@ -68,11 +68,15 @@ describe('printing', () => {
     expect(meta).toContain('demo.blockwise.json');
     expect(meta).toMatch(/printed \d{4}-\d{2}-\d{2} \d{2}:\d{2}/);
     const layout = await page.evaluate(() => {
+      // The inputs' description column wraps by design; every other cell holds one line of text.
       const cells = [...document.querySelectorAll('[data-testid="print-report"] td, [data-testid="print-report"] th')].filter((c) => !c.closest('.report-inputs') || c !== c.parentElement?.lastElementChild);
-      const wrapped = cells.filter((c) => {
-        const lineHeight = parseFloat(getComputedStyle(c).lineHeight) || 14;
-        return (c as HTMLElement).getBoundingClientRect().height > 1.8 * lineHeight;
-      }).map((c) => c.textContent);
+      const wrapped = cells
+        .filter((c) => {
+          const range = document.createRange();
+          range.selectNodeContents(c);
+          return new Set([...range.getClientRects()].map((r) => Math.round(r.bottom))).size > 1;
+        })
+        .map((c) => c.textContent);
       const end = document.querySelector('.report-notice-end')!;
       return { cells: cells.length, wrapped, endBreak: getComputedStyle(end).breakBefore };
     });
