@@ -4,6 +4,7 @@
  * polar with the inlet's external-drag increment, the installed propulsion
  * model, legs, reserves and solve mode.
  */
+import { legKindLabel } from './legKinds';
 import { makeAeroModel } from '../aero/dragPolar';
 import { err, ok, type Result } from '../core/result';
 import type { AlternateSpec, DistanceBasis, HoldSpeed, Leg, ReserveCommon, MissionInput, ReservePolicy, SolveMode } from '../mission/missionTypes';
@@ -37,17 +38,6 @@ export interface BuildOptions {
   readonly overrides?: MissionOverrides;
 }
 
-const KIND_LABEL: Readonly<Record<ProjectLeg['kind'], string>> = {
-  taxiOut: 'Taxi out',
-  takeoff: 'Takeoff',
-  climb: 'Climb',
-  cruise: 'Cruise',
-  descent: 'Descent',
-  hold: 'Hold',
-  approach: 'Approach',
-  taxiIn: 'Taxi in',
-};
-
 /** The project's inlet design by name (default the active one), or an issue naming the choices. */
 export function projectInlet(project: Project, inletName?: string): Result<InletDesign, ProjectIssue[]> {
   const name = inletName ?? project.activeInlet;
@@ -62,7 +52,7 @@ export function projectInlet(project: Project, inletName?: string): Result<Inlet
 
 function legOf(leg: ProjectLeg, index: number): Leg {
   const env = {
-    name: leg.name ?? `${KIND_LABEL[leg.kind]} (leg ${index + 1})`,
+    name: leg.name ?? `${legKindLabel(leg.kind)} (leg ${index + 1})`,
     ...(leg.isaDeviation === undefined ? {} : { isaDev_K: leg.isaDeviation }),
     ...(leg.wind === undefined ? {} : { wind_m_s: leg.wind }),
   };

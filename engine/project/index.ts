@@ -5,6 +5,7 @@
  */
 export type { BuildOptions, ProjectResources } from './buildMissionInput';
 export { parseJsonText } from './jsonText';
+export { LEG_KIND_ORDER, LEG_KINDS, legKindLabel, type LegKindInfo, type ProjectLegKind } from './legKinds';
 export { parseProject, parseProjectData } from './parseProject';
 export { deckReference, embeddedDeckFile, withEmbeddedDeckText, withoutEmbeddedDeckText, type DeckReference } from './projectDeck';
 export { formatJsonPath, fromZodIssues, makeIssue, type ProjectIssue } from './projectIssue';

@@ -1,24 +1,16 @@
 /** Default legs the mission editor adds (SI; a starting point the user edits). */
-import type { ProjectLeg } from '../../engine/project';
+import { LEG_KIND_ORDER, legKindLabel, type ProjectLeg, type ProjectLegKind } from '../../engine/project';
 import { FOOT_M, NAUTICAL_MILE_M } from '../../engine/units';
 
 const FT = FOOT_M;
 const KT = NAUTICAL_MILE_M / 3600;
 
-export const LEG_KINDS = ['taxiOut', 'takeoff', 'climb', 'cruise', 'descent', 'hold', 'approach', 'taxiIn'] as const;
-export type LegKindName = (typeof LEG_KINDS)[number];
-
-/** Our labels for leg kinds. */
-export const LEG_KIND_LABEL: Readonly<Record<LegKindName, string>> = {
-  taxiOut: 'Taxi out',
-  takeoff: 'Takeoff',
-  climb: 'Climb',
-  cruise: 'Cruise',
-  descent: 'Descent',
-  hold: 'Hold',
-  approach: 'Approach',
-  taxiIn: 'Taxi in',
-};
+/** Leg kinds in flight order and their labels, from the engine's one table (engine/project/legKinds.ts). */
+export const LEG_KINDS = LEG_KIND_ORDER;
+export type LegKindName = ProjectLegKind;
+export const LEG_KIND_LABEL: Readonly<Record<LegKindName, string>> = Object.fromEntries(
+  LEG_KIND_ORDER.map((k) => [k, legKindLabel(k)]),
+) as Record<LegKindName, string>;
 
 const SCHEDULE = { lowCas: 250 * KT, lowAltitudeLimit: 10000 * FT, cas: 280 * KT, mach: 0.76 };
 
