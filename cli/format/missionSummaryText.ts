@@ -34,8 +34,9 @@ export function clockTime(time_s: number): string {
 }
 
 function legRows(legs: readonly LegRow[]): string[][] {
+  // Numbered from 1, as the app's legs table and every message number them (the JSON keeps the 0-based index).
   return legs.map((l) => [
-    String(l.index),
+    String(l.index + 1),
     l.name,
     l.kind,
     clockTime(l.startTime_s),
@@ -51,7 +52,7 @@ function legRows(legs: readonly LegRow[]): string[][] {
 /** One line per caution: severity, id, where and when, and its message. */
 export function cautionLines(cautions: readonly Caution[]): string[] {
   return cautions.map((c) => {
-    const where = c.legName !== undefined ? `leg "${c.legName}"` : c.legIndex !== undefined ? `leg ${c.legIndex}` : 'mission';
+    const where = c.legName !== undefined ? `leg "${c.legName}"` : c.legIndex !== undefined ? `leg ${c.legIndex + 1}` : 'mission';
     const when = c.time_s !== undefined ? ` at ${clockTime(c.time_s)}` : '';
     return `  [${c.severity}] ${c.id} (${where}${when}): ${c.message}`;
   });

@@ -132,6 +132,9 @@ describe('blockwise fly text output', () => {
     for (const line of SAFETY_NOTICE_LINES) expect(r.out).toContain(line);
     expect(r.out).toContain('Distances: over the ground');
     expect(r.out).toContain('missed approach');
+    // legs numbered from 1, as the app's table and the messages number them
+    expect(r.out).toMatch(/^\s+1\s+Taxi out\s/m);
+    expect(r.out).not.toMatch(/^\s+0\s+Taxi out\s/m);
   });
 
   it("fly's installation assumptions name the method the result used: the demo's cycle deck by its sensitivity columns, a deck without them by Raymer's rule", async () => {
