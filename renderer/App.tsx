@@ -155,7 +155,7 @@ function Shell(props: AppProps) {
           {recovery.problem ? <p className="app-message">{recovery.problem}</p> : null}
           <IssueList issues={state.openIssues} testId="open-issues" title="That project could not be opened" showFilePath />
           <main className="view" data-testid={`view-${view}`} id="view-panel" role="tabpanel" aria-labelledby={`tab-${view}`} tabIndex={-1}>
-            {project === null ? <p>Opening…</p> : <CurrentView view={view} live={live} hostKind={props.bridge.kind} onCommand={(c) => void commands.run(c)} {...(props.chartSize ? { chartSize: props.chartSize } : {})} />}
+            {project === null ? <p>Opening…</p> : <CurrentView view={view} live={live} hostKind={props.bridge.kind} onCommand={(c) => void commands.run(c)} onExportText={(text, name) => void commands.exportText(text, name)} {...(props.chartSize ? { chartSize: props.chartSize } : {})} />}
           </main>
         </div>
         {printing && project !== null && live.snapshot !== null ? <StudyReport project={project} snapshot={live.snapshot} units={state.units} stale={live.stale} documentName={state.documentName} printedAt={new Date()} /> : null}

@@ -196,5 +196,18 @@ export function useAppCommands(bridge: Bridge, store: StudyStore, snapshot: Stud
     bridge.setDocumentState({ name: state.documentName, dirty }).catch(() => undefined);
   }, [bridge, state.documentName, dirty, state.doc === null]);
 
-  return { run, message, clearMessage: () => setMessage(null) };
+  /** Exports a view's own CSV text (e.g. a parameter study's cases) through the bridge, the message saying where. */
+  const exportText = useCallback(
+    async (text: string, name: string) => {
+      try {
+        const saved = await bridge.exportText(text, name, 'text/csv');
+        if (saved) setMessage(`Exported ${saved.path ?? saved.name}.`);
+      } catch (e) {
+        setMessage(`Could not export ${name}: ${describe(e)}`);
+      }
+    },
+    [bridge],
+  );
+
+  return { run, exportText, message, clearMessage: () => setMessage(null) };
 }

@@ -10,6 +10,7 @@ export const VIEWS = [
   { id: 'envelope', label: 'Flight envelope' },
   { id: 'specificRange', label: 'Specific range' },
   { id: 'compare', label: 'Inlet A/B' },
+  { id: 'sweep', label: 'Parameter study' },
 ] as const;
 
 export type ViewId = (typeof VIEWS)[number]['id'];

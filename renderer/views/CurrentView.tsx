@@ -12,9 +12,10 @@ import { InletsView } from './InletsView';
 import { MissionView } from './MissionView';
 import { ResultsView } from './ResultsView';
 import { SpecificRangeView } from './SpecificRangeView';
+import { SweepView } from './SweepView';
 
 /** The view for a tab. */
-export function CurrentView(props: { readonly view: ViewId; readonly live: LiveStudy; readonly chartSize?: ChartSize; readonly onCommand: (command: ToolbarCommand) => void; readonly hostKind?: 'desktop' | 'browser' }) {
+export function CurrentView(props: { readonly view: ViewId; readonly live: LiveStudy; readonly chartSize?: ChartSize; readonly onCommand: (command: ToolbarCommand) => void; readonly hostKind?: 'desktop' | 'browser'; readonly onExportText?: (text: string, name: string) => void }) {
   const common = { live: props.live, ...(props.chartSize ? { chartSize: props.chartSize } : {}) };
   switch (props.view) {
     case 'airframe':
@@ -37,5 +38,7 @@ export function CurrentView(props: { readonly view: ViewId; readonly live: LiveS
       return <SpecificRangeView {...common} />;
     case 'compare':
       return <CompareView {...common} />;
+    case 'sweep':
+      return <SweepView {...common} {...(props.onExportText ? { onExportText: props.onExportText } : {})} />;
   }
 }

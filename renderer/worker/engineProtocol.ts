@@ -6,7 +6,7 @@ import type { InstallationMethodId, RatingName } from '../../engine/propulsion';
 import type { CrossoverResult, EnvelopeResult, InletComparisonResult, OptimumAltitudeResult, SpecificRangeResult, PayloadRangeResult, RecoveryTradeByMethod, TradeFactorsResult } from '../../engine/analysis';
 import type { UncertaintyResult } from '../../engine/uncertainty';
 import type { MissionResult } from '../../engine/mission';
-import type { Project } from '../../engine/project';
+import type { Project, SweepAxis, SweepRow } from '../../engine/project';
 import type { Result } from '../../engine/core';
 import type { StudyFailure } from '../../engine/study';
 import type { DeckFile } from '../state/studyState';
@@ -88,6 +88,8 @@ export type EngineRequest =
   /** The +1 % recovery trade factor by every recovery method (Raymer held/scaled, deck sensitivities, cycle). */
   | ({ readonly kind: 'recoveryByMethod' } & StudyInputs)
   | ({ readonly kind: 'compare'; readonly nameA: string; readonly nameB: string } & StudyInputs)
+  /** A parameter study of one project field over a range (`field=from:to:step`, the CLI's `sweep --vary`), the active inlet. */
+  | ({ readonly kind: 'sweep'; readonly vary: string } & StudyInputs)
   /** Each named inlet design's flown mission (its study input), for the overlaid profiles of the compare view. */
   | ({ readonly kind: 'profiles'; readonly designs: readonly string[] } & StudyInputs)
   /** The declared uncertainties' Monte Carlo over one design (its band) or two (A, B: the band of B - A). */
@@ -199,6 +201,13 @@ export interface ProfilesReply {
   readonly designs: readonly DesignProfile[];
 }
 
+/** A flown parameter study: the varied field, its values as written, and one row per case (engine/project's SweepRow). */
+export interface SweepReply {
+  readonly field: string;
+  readonly axes: readonly SweepAxis[];
+  readonly rows: readonly SweepRow[];
+}
+
 export interface EngineReplies {
   readonly cycleView: CycleViewReply;
   readonly study: StudySnapshot;
@@ -210,6 +219,7 @@ export interface EngineReplies {
   readonly recoveryByMethod: RecoveryTradeByMethod;
   readonly compare: InletComparisonResult;
   readonly profiles: ProfilesReply;
+  readonly sweep: SweepReply;
   readonly uncertainty: UncertaintyResult;
 }
 

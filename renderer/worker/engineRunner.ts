@@ -4,7 +4,7 @@
  * report progress and poll `shouldCancel` between missions.
  */
 import { type AnalysisError, compareInlets, DEFAULT_RESIDUAL_CLIMB_RATES, type EnvelopeQuery, flightEnvelope, optimumAltitude, specificRange, inletFactorBuilder, payloadRangeDiagram, recoveryTradeByMethod, thrustDragCrossover, tradeFactors } from '../../engine/analysis';
-import { makeIssue, recoveryMethodVariants } from '../../engine/project';
+import { flySweepCase, gridSize, makeIssue, parseVary, projectToJson, recoveryMethodVariants } from '../../engine/project';
 import { err, ok, type Result } from '../../engine/core';
 import { type MissionInput, solveMission } from '../../engine/mission';
 import { createDeckTextMemo, prepareStudy, type DeckTextMemo, type Study } from '../../engine/study';
@@ -190,6 +190,34 @@ function runProfiles(request: Extract<EngineRequest, { kind: 'profiles' }>, cach
   return ok({ designs });
 }
 
+/** Most cases the app's study view flies in one request (the CLI's sweep takes larger grids, in parallel). */
+export const MAX_VIEW_SWEEP_CASES = 500;
+
+/**
+ * A one-field parameter study on the CLI's code path (`blockwise sweep`):
+ * the project written as its file (projectToJson), the `--vary` text read by
+ * parseVary, each case flown by flySweepCase with the study's deck.
+ */
+function runSweep(request: Extract<EngineRequest, { kind: 'sweep' }>, cache: DeckCache, hooks: RunHooks): Result<EngineReplies['sweep'], EngineFailure> {
+  const study = prepare(request, cache);
+  if (!study.ok) return study;
+  const doc: unknown = JSON.parse(projectToJson(request.project));
+  const axis = parseVary(doc, request.vary);
+  if (!axis.ok) return err({ kind: 'analysis', code: 'invalid_input', message: `${axis.error.where}: ${axis.error.message}` });
+  const axes = [axis.value];
+  const total = gridSize(axes);
+  if (total > MAX_VIEW_SWEEP_CASES) {
+    return err({ kind: 'analysis', code: 'invalid_input', message: `${request.vary}: ${total} cases is more than ${MAX_VIEW_SWEEP_CASES} here; use a larger step, or blockwise sweep` });
+  }
+  const rows = [];
+  for (let k = 0; k < total; k++) {
+    if (hooks.shouldCancel?.()) return err({ kind: 'analysis', code: 'cancelled', message: `sweep cancelled after ${k} of ${total} cases` });
+    rows.push(flySweepCase(doc, axes, k, { deck: study.value.deck }));
+    hooks.onProgress?.(k + 1, total);
+  }
+  return ok({ field: axis.value.field, axes, rows });
+}
+
 function runCycleView(request: Extract<EngineRequest, { kind: 'cycleView' }>, cache: DeckCache, hooks: RunHooks): Result<EngineReplies['cycleView'], EngineFailure> {
   const engine = cycleEngineOf(request.deckFile.text, request.deckFile.name);
   if (!engine.ok) return engine;
@@ -237,6 +265,8 @@ function dispatch(request: EngineRequest, cache: DeckCache, hooks: RunHooks): Re
       return runCompare(request, cache, hooks);
     case 'profiles':
       return runProfiles(request, cache, hooks);
+    case 'sweep':
+      return runSweep(request, cache, hooks);
     case 'recoveryByMethod': {
       const study = prepare(request, cache);
       if (!study.ok) return study;
