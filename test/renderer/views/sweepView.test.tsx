@@ -64,6 +64,25 @@ describe("the 'sweep' request", () => {
     }
   });
 
+  it('reports progress per case and stops when cancelled', () => {
+    const s = demoState();
+    const progress: [number, number][] = [];
+    const r = runEngineRequest({ kind: 'sweep', project: s.doc!.present, deckFile: s.deckFile, vary: VARY }, createDeckCache(), {
+      onProgress: (done, total) => progress.push([done, total]),
+      shouldCancel: () => progress.length >= 1,
+    });
+    expect(progress).toEqual([[1, 3]]);
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.error).toMatchObject({ kind: 'analysis', code: 'cancelled' });
+  });
+
+  it('refuses more cases than the view flies, before flying any', () => {
+    const s = demoState();
+    const r = runEngineRequest({ kind: 'sweep', project: s.doc!.present, deckFile: s.deckFile, vary: 'mission.solve.range=1000nmi:3000nmi:1nmi' }, createDeckCache());
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(JSON.stringify(r.error)).toContain('2001 cases');
+  });
+
   it('writes the CSV with the notice as # lines first, then the header and one line per case', () => {
     const lines = sweepCsv(reply).trimEnd().split('\n');
     const comments = lines.filter((l) => l.startsWith('#'));
