@@ -1,7 +1,7 @@
 import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
 
-// The folders are the dependency graph (STYLE rule 1):
+// The folders are the dependency graph (docs/style.md §1):
 //   renderer -> engine; electron -> engine; cli -> engine;
 //   cli, electron -> hostio (Node-only file and terminal helpers) -> engine;
 //   renderer -> electron only for the bridge's *types*; engine -> nothing of ours.
@@ -9,7 +9,7 @@ import tseslint from 'typescript-eslint';
 const nodeBuiltins = ['node:*', 'fs', 'path', 'os', 'child_process', 'url', 'util', 'worker_threads'];
 
 // Other layers use an engine folder through its hand-written index.ts only
-// (STYLE rule 5, docs/style.md rule 5): `../../engine/mission`, never
+// (docs/style.md §5): `../../engine/mission`, never
 // `../../engine/mission/solveMission`. test/ and scripts/ may reach inside.
 const deepEngineImport = {
   group: ['**/engine/*/*', '!**/engine/*/index'],

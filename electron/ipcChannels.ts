@@ -1,6 +1,6 @@
 /**
  * Every IPC channel between the renderer and the main process, in one place
- * (STYLE rule 4). Invoke channels are renderer -> main and answer with a
+ * (docs/style.md §4). Invoke channels are renderer -> main and answer with a
  * HostReply; `menuCommand` is main -> renderer.
  */
 export const IPC_CHANNELS = {

@@ -26,7 +26,7 @@ const relativePath = z
 
 /**
  * The argument list each invoke channel accepts, parsed in the main process
- * before anything is done with it (STYLE rule 9). `strict` tuples: extra
+ * before anything is done with it (docs/style.md §9). `strict` tuples: extra
  * arguments are rejected.
  */
 export const IPC_PAYLOADS = {

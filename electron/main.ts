@@ -14,7 +14,7 @@ import { formatWindowTitle } from './windowTitle';
 import { buildWindowOptions, installNavigationGuards, installSessionGuards } from './windowSecurity';
 
 // The thin main process: one window, a menu, dialogs and file I/O behind a
-// validated IPC surface. No computation lives here (STYLE rule 4).
+// validated IPC surface. No computation lives here (docs/style.md §4).
 
 const devServerUrl = process.env.BLOCKWISE_DEV_URL;
 const webIndex = resolve(__dirname, '..', 'dist-web', 'index.html');

@@ -1,5 +1,5 @@
 /**
- * engine/aero's public surface (hand-written; STYLE rule 5): the 1976
+ * engine/aero's public surface (hand-written; docs/style.md §5): the 1976
  * standard atmosphere, the four airspeeds, and the drag polar's
  * coefficients. Other layers import this file, never the modules.
  */

@@ -1,5 +1,5 @@
 /**
- * engine/analysis's public surface (hand-written; STYLE rule 5): each
+ * engine/analysis's public surface (hand-written; docs/style.md §5): each
  * analysis as one function returning a Result with a literal error code.
  */
 export type { AnalysisError } from './analysisTypes';

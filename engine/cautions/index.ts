@@ -1,5 +1,5 @@
 /**
- * engine/cautions's public surface (hand-written; STYLE rule 5): the caution
+ * engine/cautions's public surface (hand-written; docs/style.md §5): the caution
  * record, the user's thresholds and the catalogue of ids with their sources.
  */
 export type { Caution, CautionSeverity } from './caution';

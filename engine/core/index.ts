@@ -1,5 +1,5 @@
 /**
- * engine/core's public surface (hand-written; STYLE rule 5): the Result
+ * engine/core's public surface (hand-written; docs/style.md §5): the Result
  * shape every layer returns and the safety notice every output carries.
  */
 export { err, expectOk, ok, type Err, type Ok, type Result } from './result';

@@ -1,5 +1,5 @@
 /**
- * Errors as values (STYLE rule 9). An engine function that can legitimately
+ * Errors as values (docs/style.md §9). An engine function that can legitimately
  * fail returns a Result whose error carries a literal `code`; it throws only
  * for bugs.
  */

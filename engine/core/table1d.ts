@@ -1,6 +1,6 @@
 /**
  * One-dimensional lookup tables y(x) with a stated out-of-range policy
- * (STYLE rule 9). Linear interpolation by default; monotone piecewise-cubic
+ * (docs/style.md §9). Linear interpolation by default; monotone piecewise-cubic
  * Hermite (Fritsch & Carlson, 1980, SIAM J. Numer. Anal. 17(2)) on request.
  *
  * Decisions pinned by test/engine/core/table1d.test.ts:

@@ -1,5 +1,5 @@
 /**
- * The engine cycle model's public surface (hand-written; STYLE rule 5).
+ * The engine cycle model's public surface (hand-written; docs/style.md §5).
  *
  *   designEngine(spec)            parametric (design-point) cycle analysis -> Result<CycleEngine, CycleError>
  *   runCyclePoint(engine, req)    matched off-design point -> CyclePointResult (status, never NaN, never throws)

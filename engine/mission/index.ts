@@ -1,5 +1,5 @@
 /**
- * engine/mission's public surface (hand-written; STYLE rule 5): the one
+ * engine/mission's public surface (hand-written; docs/style.md §5): the one
  * solver entry point, its input and result types, the statuses and the
  * altitude range a mission may fly.
  */

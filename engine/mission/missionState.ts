@@ -1,7 +1,7 @@
 /**
  * The integrator's state vector and what one evaluation of a flight segment
  * returns. The state is a small Float64Array mutated only inside the
- * integrator's hot loop (STYLE rule 7).
+ * integrator's hot loop (docs/style.md §7).
  */
 import type { Caution } from '../cautions/caution';
 

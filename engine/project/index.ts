@@ -1,5 +1,5 @@
 /**
- * engine/project's public surface (hand-written; STYLE rule 5): the project
+ * engine/project's public surface (hand-written; docs/style.md §5): the project
  * file (schema, parsing with located issues, writing), the specs built from
  * it, and the deck it names. Building a study from it: engine/study.
  */

@@ -1,5 +1,5 @@
 /**
- * Project-file migrations (STYLE rule 10): each step takes a document of
+ * Project-file migrations (docs/style.md §10): each step takes a document of
  * version n to version n + 1 as plain JSON data, pure and small, with its own
  * test and a sample in fixtures/old-versions/. Steps move and rename fields;
  * they do not validate (the current schema does that after the last step).

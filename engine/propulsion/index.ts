@@ -1,5 +1,5 @@
 /**
- * engine/propulsion's public surface (hand-written; STYLE rule 5): the deck
+ * engine/propulsion's public surface (hand-written; docs/style.md §5): the deck
  * (type, lookups, its file errors), inlet designs, installation settings and
  * methods, and the installed propulsion model with its loss breakdown.
  * Reading a deck file's text: engine/study (parseDeckText).

@@ -1,6 +1,6 @@
 /**
  * A seeded pseudo-random number generator for the engine's Monte-Carlo runs
- * (STYLE rule 3: the engine takes its seed as an argument, never a clock or
+ * (docs/style.md §3: the engine takes its seed as an argument, never a clock or
  * Math.random). xoshiro128** 1.0 (D. Blackman and S. Vigna, "Scrambled
  * linear pseudorandom number generators", ACM TOMS 47(4), 2021; reference
  * C code at prng.di.unimi.it), its 128-bit state filled from the seed by

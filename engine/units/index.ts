@@ -1,5 +1,5 @@
 /**
- * engine/units's public surface (hand-written; STYLE rule 5): parsing and
+ * engine/units's public surface (hand-written; docs/style.md §5): parsing and
  * formatting quantities in the user's unit system, and the few conversion
  * factors other layers need by name (every factor lives in unitTable.ts).
  */

@@ -1,6 +1,6 @@
 /**
  * Every unit Blockwise accepts and its exact conversion to SI. The ONE place
- * conversion factors live (STYLE rule 6). SI value = value * scale + offset.
+ * conversion factors live (docs/style.md §6). SI value = value * scale + offset.
  *
  * Factors are the exact definitions of NIST Special Publication 811 (2008),
  * Appendix B, unless noted: the international foot and pound (1959), the

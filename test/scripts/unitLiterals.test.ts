@@ -1,5 +1,5 @@
 /**
- * Convention held by a test (STYLE rule 6): unit-conversion factors are written
+ * Convention held by a test (docs/style.md §6): unit-conversion factors are written
  * once, in engine/units/unitTable.ts; every other source file imports them by
  * name (engine/units's index, or ../units/unitTable inside engine/). The test
  * fails when a factor's literal appears in any other source file.

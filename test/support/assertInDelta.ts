@@ -1,7 +1,7 @@
 import { expect } from 'vitest';
 
 /**
- * The one shared tolerance assertion (STYLE rule 11). Passes when
+ * The one shared tolerance assertion (docs/style.md §11). Passes when
  * |actual - expected| <= abs + rel * |expected|. `source` names where the
  * expected value comes from and is shown on failure.
  */
