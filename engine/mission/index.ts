@@ -7,4 +7,4 @@ export { solveMission, type SolveOptions } from './solveMission';
 export type { LegRow, MissionInput, MissionResult, MissionStatus, TimeHistory } from './missionTypes';
 export { MISSION_STATUSES, missionStatusClass, missionStatusTitle, type MissionStatusClass } from './missionStatus';
 export { MAX_ALTITUDE_M, MIN_ALTITUDE_M } from './missionInputCheck';
-export { RESERVE_RULES, type ReserveDefaults, type ReserveRule } from './reserveRules';
+export { DEFAULT_ALTERNATE_APPROACH, DEFAULT_MISSED_APPROACH, DEFAULT_RESERVE_HOLD_SPEED, RESERVE_RULES, type ReserveDefaults, type ReserveRule } from './reserveRules';

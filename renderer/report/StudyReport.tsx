@@ -1,3 +1,4 @@
+import { describeInstallationMethod } from '../../engine/propulsion';
 import { SAFETY_NOTICE_LINES } from '../../engine/core';
 import type { Project } from '../../engine/project';
 import { displayUnit, formatQuantity, type UnitSystem } from '../../engine/units';
@@ -75,6 +76,10 @@ export function StudyReport(props: {
             <td>
               {p.engine.count} x {deckTitleText(s.deck.title, s.deck.parametric)}; reference recovery {s.deck.referenceRecovery}
             </td>
+          </tr>
+          <tr>
+            <td>Installation method</td>
+            <td data-testid="report-installation-method">{describeInstallationMethod(s.deck.installationMethod)}</td>
           </tr>
           <tr>
             <td>Inlet flown</td>

@@ -1,3 +1,4 @@
+import { InstallationFields } from '../components/InstallationFields';
 import { describeInstallationMethod, type RatingName } from '../../engine/propulsion';
 import { useState } from 'react';
 import { formatQuantity } from '../../engine/units';
@@ -116,7 +117,7 @@ export function EngineView(props: { readonly live: LiveStudy; readonly chartSize
             <QuantityField label="Customer bleed" path={['engine', 'installation', 'bleed', 'massFlow']} unit="massFlow" testId="field-bleed" />
           )}
           <QuantityField label="Shaft power extraction per engine" path={['engine', 'installation', 'powerExtraction']} unit="power" testId="field-power-extraction" />
-          <QuantityField label="Ram-recovery factor C_ram (blank: default)" path={['engine', 'installation', 'ramRecoveryFactor']} unit="dimensionless" testId="field-c-ram" optional />
+          <InstallationFields hasSensitivities={snapshot?.deck.hasSensitivities} />
           <UncertaintyRows kinds={['tsfc', 'cRam', 'cBleed']} testId="uncertain-engine" />
         </fieldset>
         {deckSource.kind === 'parametric' ? (

@@ -1,4 +1,8 @@
+import { ROUNDED_PITOT_LIP_SOURCE } from '../../engine/propulsion';
+import type { Project } from '../../engine/project';
 import { formatQuantity } from '../../engine/units';
+import { DEFAULT_CAUTION_SETTINGS } from '../../engine/cautions';
+import { formatField } from '../state/fieldUnits';
 import { inletSeries } from '../charts/inletSeries';
 import { ChoiceField } from '../components/ChoiceField';
 import { IssueList } from '../components/IssueList';
@@ -10,6 +14,46 @@ import { StaleMark } from '../components/StaleMark';
 import { selectIssuesUnder } from '../state/selectors';
 import { useStudy } from '../state/studyContext';
 import type { LiveStudy } from '../worker/useEngine';
+
+type LipKind = 'roundedPitot' | 'constant' | 'table';
+
+/** The lip suction an inlet flies: the project's kind, as the engine reads it (engine/project/projectSpecs.ts lipSuctionOf). */
+export function lipSuctionKind(inlet: Project['inlets'][number]): LipKind {
+  if (inlet.lipSuction?.kind === 'table') return 'table';
+  if (inlet.lipSuction?.kind === 'roundedPitot' || inlet.lipSuctionFactor === undefined) return 'roundedPitot';
+  return 'constant';
+}
+
+/** Lip suction: the rounded-pitot table default (its source named), a constant, or the project's own table (not editable here). */
+function LipSuctionField(props: { readonly inlet: Project['inlets'][number]; readonly n: number }) {
+  const { dispatch } = useStudy();
+  const { inlet, n } = props;
+  const kind = lipSuctionKind(inlet);
+  const path = ['inlets', n] as const;
+  const choose = (k: LipKind) => {
+    const { lipSuction: _ls, lipSuctionFactor, ...rest } = inlet;
+    void _ls;
+    const value = k === 'constant' ? { ...rest, lipSuctionFactor: lipSuctionFactor ?? 0 } : { ...rest, lipSuction: { kind: 'roundedPitot' as const } };
+    dispatch({ type: 'valueSet', path, value, label: `Lip suction of ${inlet.name}: ${k === 'constant' ? 'constant' : 'rounded-pitot table'}` });
+  };
+  return (
+    <>
+      <ChoiceField<LipKind>
+        label="Lip suction"
+        testId={`field-inlet-${n}-lip-kind`}
+        value={kind}
+        choices={[
+          { value: 'roundedPitot', label: 'table over mass-flow ratio and Mach: rounded subsonic pitot lip (default)' },
+          { value: 'constant', label: 'a constant share of the additive drag' },
+          { value: 'table', label: "the project's own table", ...(kind === 'table' ? {} : { unavailable: 'give a table in the project file (inlets[].lipSuction, docs/installation.md); it is not typed in here' }) },
+        ]}
+        onChoose={choose}
+      />
+      {kind === 'roundedPitot' ? <p className="small" data-testid={`field-inlet-${n}-lip-source`}>Source: {ROUNDED_PITOT_LIP_SOURCE}</p> : null}
+      {kind === 'constant' ? <QuantityField label="Lip suction factor" path={[...path, 'lipSuctionFactor']} unit="dimensionless" testId={`field-inlet-${n}-lip-suction`} /> : null}
+    </>
+  );
+}
 
 /** The inlet designs' inputs, which one is flown, and recovery, spillage, throat and fan-face Mach against Mach. */
 export function InletsView(props: { readonly live: LiveStudy; readonly chartSize?: ChartSize }) {
@@ -29,6 +73,7 @@ export function InletsView(props: { readonly live: LiveStudy; readonly chartSize
         choices={project.inlets.map((i) => ({ value: i.name, label: i.name }))}
         onChoose={(name) => dispatch({ type: 'valueSet', path: ['activeInlet'], value: name, label: `Fly inlet ${name}` })}
       />
+      <QuantityField label="Spillage-share caution: spillage drag above this share of thrust" path={['cautions', 'maxSpillageShare']} unit="percent" testId="field-spillage-share" hint={`(blank: ${formatField(DEFAULT_CAUTION_SETTINGS.maxSpillageShare, 'percent', state.units)})`} optional />
       <div className="field-grid">
         {project.inlets.map((inlet, n) => {
           const base = ['inlets', n] as const;
@@ -58,7 +103,7 @@ export function InletsView(props: { readonly live: LiveStudy; readonly chartSize
                   ]}
                 />
               )}
-              <QuantityField label="Lip suction factor" path={[...base, 'lipSuctionFactor']} unit="dimensionless" testId={id('lip-suction')} />
+              <LipSuctionField inlet={inlet} n={n} />
               <QuantityField label="External drag area D/q per engine" path={[...base, 'externalDragArea']} unit="area" testId={id('external-drag')} />
               <QuantityField label="Weight per engine" path={[...base, 'weight']} unit="mass" testId={id('weight')} />
               <UncertaintyRows kinds={inlet.source.kind === 'recoveryTable' ? ['recovery', 'lipSuction'] : ['lipSuction']} inlet={inlet.name} testId={id('uncertain')} />

@@ -6,6 +6,7 @@ import { QuantityField } from '../components/QuantityField';
 import { formatField } from '../state/fieldUnits';
 import { solveModeLabel } from '../state/displayText';
 import { LEG_KIND_LABEL, LEG_KINDS, type LegKindName } from '../state/legTemplates';
+import { DEFAULT_ALTERNATE_APPROACH, DEFAULT_MISSED_APPROACH, DEFAULT_RESERVE_HOLD_SPEED } from '../../engine/mission';
 import { RESERVE_PRESET_LABEL, reservesForPreset, type ReservePreset } from '../state/reservePresets';
 import { selectIssuesUnder } from '../state/selectors';
 import { useStudy } from '../state/studyContext';
@@ -27,7 +28,7 @@ function Reserves() {
         testId="reserves-preset"
         value={r.preset}
         choices={(Object.keys(RESERVE_PRESET_LABEL) as ReservePreset[]).map((k) => ({ value: k, label: RESERVE_PRESET_LABEL[k] }))}
-        onChoose={(preset) => dispatch({ type: 'valueSet', path: p, value: reservesForPreset(preset, r.alternate), label: `Reserves: ${RESERVE_PRESET_LABEL[preset]}` })}
+        onChoose={(preset) => dispatch({ type: 'valueSet', path: p, value: { ...reservesForPreset(preset, r.alternate), ...(r.arrival ? { arrival: r.arrival } : {}), ...(r.holdSpeed ? { holdSpeed: r.holdSpeed } : {}) }, label: `Reserves: ${RESERVE_PRESET_LABEL[preset]}` })}
       />
       {r.preset === 'icaoAnnex6' || r.preset === 'custom' ? <QuantityField label="Contingency fraction of trip fuel" path={[...p, 'contingencyFraction']} unit="percent" testId="field-contingency" /> : null}
       {r.preset === 'icaoAnnex6' ? <QuantityField label="Least contingency (time at holding)" path={[...p, 'minContingencyTime']} unit="duration" testId="field-min-contingency" /> : null}
@@ -58,7 +59,84 @@ function Reserves() {
           <QuantityField label="Alternate elevation" path={[...p, 'alternate', 'elevation']} unit="altitude" testId="field-alternate-elevation" />
         </>
       ) : null}
+      <ReserveCommon />
     </fieldset>
+  );
+}
+
+const KT = 1852 / 3600;
+
+/** The settings every reserve preset shares: distance basis, arrival allowances, hold speed. */
+function ReserveCommon() {
+  const { state, dispatch } = useStudy();
+  const mission = state.doc!.present.mission;
+  const r = mission.reserves;
+  const p = ['mission', 'reserves'] as const;
+  const hold = r.holdSpeed;
+  return (
+    <>
+      <ChoiceField<'ground' | 'stillAir'>
+        label="Distances measured"
+        testId="field-distance-basis"
+        value={mission.distanceBasis}
+        choices={[
+          { value: 'ground', label: 'over the ground (the wind changes air distance, fuel and time)' },
+          { value: 'stillAir', label: 'in still air (a design-range study)' },
+        ]}
+        onChoose={(v) => dispatch({ type: 'valueSet', path: ['mission', 'distanceBasis'], value: v, label: 'Set distance basis' })}
+      />
+      <label className="toggle">
+        <input
+          type="checkbox"
+          data-testid="arrival-toggle"
+          checked={r.arrival !== undefined}
+          onChange={(e) =>
+            dispatch({
+              type: 'valueSet',
+              path: [...p, 'arrival'],
+              value: e.target.checked
+                ? { missedApproach: { time: DEFAULT_MISSED_APPROACH.time_s, fuel: null }, alternateApproach: { time: DEFAULT_ALTERNATE_APPROACH.time_s, fuel: null } }
+                : undefined,
+              label: e.target.checked ? 'Set arrival allowances' : "Arrival allowances from the mission's take-off and approach",
+            })
+          }
+        />{' '}
+        Own arrival allowances (else the mission's take-off and approach allowances)
+      </label>
+      {r.arrival !== undefined ? (
+        <>
+          <QuantityField label="Missed approach time" path={[...p, 'arrival', 'missedApproach', 'time']} unit="duration" testId="field-missed-approach-time" />
+          <QuantityField label="Missed approach fuel (blank: the time at the takeoff rating)" path={[...p, 'arrival', 'missedApproach', 'fuel']} unit="mass" testId="field-missed-approach-fuel" optional />
+          <QuantityField label="Approach and landing at the alternate, time" path={[...p, 'arrival', 'alternateApproach', 'time']} unit="duration" testId="field-alternate-approach-time" />
+          <QuantityField label="Approach and landing at the alternate, fuel (blank: the time at flight idle)" path={[...p, 'arrival', 'alternateApproach', 'fuel']} unit="mass" testId="field-alternate-approach-fuel" optional />
+        </>
+      ) : null}
+      <ChoiceField<'default' | 'bestEndurance' | 'cas'>
+        label="Reserve hold speed"
+        testId="field-hold-speed"
+        value={hold === undefined ? 'default' : hold.kind}
+        choices={[
+          { value: 'default', label: `default: best endurance at ${DEFAULT_RESERVE_HOLD_SPEED.kind === 'bestEndurance' ? (DEFAULT_RESERVE_HOLD_SPEED.speedFactor ?? 1) : 1} x the minimum-drag speed` },
+          { value: 'bestEndurance', label: 'best endurance, a factor on the minimum-drag speed' },
+          { value: 'cas', label: 'a set calibrated airspeed' },
+        ]}
+        onChoose={(v) =>
+          dispatch({
+            type: 'valueSet',
+            path: [...p, 'holdSpeed'],
+            value: v === 'default' ? undefined : v === 'cas' ? { kind: 'cas', cas: 200 * KT } : { kind: 'bestEndurance', speedFactor: DEFAULT_RESERVE_HOLD_SPEED.kind === 'bestEndurance' ? (DEFAULT_RESERVE_HOLD_SPEED.speedFactor ?? 1) : 1 },
+            label: 'Set reserve hold speed',
+          })
+        }
+      />
+      {hold?.kind === 'bestEndurance' ? (
+        <>
+          <QuantityField label="Hold speed factor on the minimum-drag speed" path={[...p, 'holdSpeed', 'speedFactor']} unit="dimensionless" testId="field-hold-factor" optional />
+          <QuantityField label="Least hold CAS (blank: none)" path={[...p, 'holdSpeed', 'minCas']} unit="speed" testId="field-hold-min-cas" optional />
+        </>
+      ) : null}
+      {hold?.kind === 'cas' ? <QuantityField label="Hold CAS" path={[...p, 'holdSpeed', 'cas']} unit="speed" testId="field-hold-cas" /> : null}
+    </>
   );
 }
 

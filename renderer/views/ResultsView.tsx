@@ -1,4 +1,5 @@
 import { useMemo } from 'react';
+import { describeInstallationMethod } from '../../engine/propulsion';
 import { healthClass, resultHealth } from '../state/resultHealth';
 import { displayUnit, formatQuantity } from '../../engine/units';
 import { profileSeries } from '../charts/profileSeries';
@@ -49,6 +50,9 @@ export function ResultsView(props: { readonly live: LiveStudy; readonly chartSiz
       <p data-testid="mission-status" className={m.status === 'ok' ? 'status-ok' : 'status-bad'}>
         Mission status: {statusLabel(m.status)}
         {m.status !== 'ok' ? ` — ${missionStatusText(m, u)}` : ''} (inlet <span data-user-text>{snapshot.inletName}</span>; deck <span data-user-text>{deckTitleText(snapshot.deck.title, snapshot.deck.parametric)}</span>)
+      </p>
+      <p className="small" data-testid="results-installation-method">
+        Installation method flown: {describeInstallationMethod(snapshot.deck.installationMethod)}.
       </p>
       <HeadlineFigures result={m} units={u} stale={stale} />
       <div className={`results-body ${healthClass(resultHealth(props.live))}`} data-testid="results-body">

@@ -142,7 +142,9 @@ export interface DeckSummary {
   readonly ratings: readonly { readonly name: string; readonly power: number }[];
   readonly referenceRecovery: string;
   readonly hasAirflow: boolean;
-  /** How the installation applies recovery, bleed and extraction: the deck's sensitivity columns, or Raymer's rule. */
+  /** Whether the deck carries installation-sensitivity columns (the "deck sensitivities" recovery method needs them). */
+  readonly hasSensitivities: boolean;
+  /** How the study's installation applies recovery, bleed and extraction (the project's recovery method, else the deck's default). */
   readonly installationMethod: InstallationMethodId;
   readonly notes: readonly string[];
 }

@@ -65,7 +65,7 @@ function runStudy(inputs: StudyInputs, cache: DeckCache): Result<EngineReplies['
   return ok({
     mission: solveMission(input),
     inletName: input.propulsion.inletName,
-    deck: deckSummary(deck),
+    deck: deckSummary(deck, input.propulsion.installationMethod),
     polar: polarCurves(input.aero),
     lapse: LAPSE_RATINGS.filter((r) => deck.ratings[r] !== undefined).map((r) => lapseCurves(input.propulsion, r)),
     inlets,

@@ -1,5 +1,5 @@
 /** The curves the views plot, computed from a mission input (runs in the worker). */
-import { defaultInstallationMethod, describeReferenceRecovery, type EngineDeck, type PropulsionModel, type RatingName } from '../../engine/propulsion';
+import { defaultInstallationMethod, describeReferenceRecovery, type EngineDeck, type InstallationMethodId, type PropulsionModel, type RatingName } from '../../engine/propulsion';
 import { type DragPolarModel, polarCoefficients } from '../../engine/aero';
 import type { MissionInput } from '../../engine/mission';
 import type { DeckSummary, InletCurves, LapseCurves, PolarCurves } from './engineProtocol';
@@ -81,7 +81,8 @@ function range(values: Float64Array): readonly [number, number] {
 }
 
 /** The deck's grid in a few figures. */
-export function deckSummary(deck: EngineDeck): DeckSummary {
+/** The deck's grid in a few figures, with the installation method the study flies (`method`; default: the deck's default). */
+export function deckSummary(deck: EngineDeck, method?: InstallationMethodId): DeckSummary {
   const g = deck.grid;
   return {
     title: deck.title,
@@ -94,7 +95,8 @@ export function deckSummary(deck: EngineDeck): DeckSummary {
     ratings: Object.entries(deck.ratings).map(([name, power]) => ({ name, power: power ?? NaN })),
     referenceRecovery: describeReferenceRecovery(deck.referenceRecovery),
     hasAirflow: deck.hasAirflow,
-    installationMethod: defaultInstallationMethod(deck.hasSensitivities),
+    hasSensitivities: deck.hasSensitivities,
+    installationMethod: method ?? defaultInstallationMethod(deck.hasSensitivities),
     notes: deck.notes,
   };
 }
