@@ -28,7 +28,7 @@ import type { CruiseProfile, CruiseSpeed, MissionInput } from './missionTypes';
 import { S_AIR, S_ALT, S_GROUND, S_MASS, S_TAS, type FlightSample, type SegmentEvent, type StateVector } from './missionState';
 import { appendCaution } from './timeHistoryBuilder';
 import { CAUTION_CATALOGUE } from '../cautions/cautionCatalogue';
-import { msg, q, withParts } from '../units/messageParts';
+import { msg, q, withParts, type MessageParts } from '../units/messageParts';
 
 export interface CruiseSpec {
   readonly altitude_m: number;
@@ -179,6 +179,39 @@ function setEndDistance(state: StateVector, k: typeof S_AIR | typeof S_GROUND, v
 }
 
 /** Flies a cruise leg from `start` for `spec.distance_m` (over the ground, or in still air in a still-air study). */
+/**
+ * Climbs at maxClimb and the held `mach` to `toAltitude_m` within a cruise leg (a cruise-climb start or a step),
+ * stopped also by the leg's end, so the distance flown stays a continuous function of the mass. Returns the
+ * run's end (true airspeed set from its last sample) and the leg's outcome when the climb ends the leg: the leg's
+ * end reached (ok), a stall (`stalled` words it at the altitude reached) or another failure; null to fly on.
+ */
+function climbWithinLeg(
+  ctx: MissionContext,
+  target: LegTarget,
+  start: StateVector,
+  mach: number,
+  toAltitude_m: number,
+  k: typeof S_AIR | typeof S_GROUND,
+  endAt: (mass_kg: number) => number,
+  stalled: (altitude_m: number) => MessageParts,
+): { readonly state: StateVector; readonly last: FlightSample; readonly outcome: LegOutcome | null } {
+  const climbSegment = makeClimbSegment(ctx, target, 'mach', mach, toAltitude_m, 'maxClimb');
+  const legEnd: SegmentEvent = { stop: 'distance_reached', stateOnly: true, g: (y) => y[k] - endAt(y[S_MASS]) };
+  const climb = flySegment(ctx, target, { ...climbSegment, events: [...climbSegment.events, legEnd] }, start);
+  const state = climb.end;
+  const last = climb.endSample;
+  state[S_TAS] = last.tas_m_s;
+  if (climb.stop === 'distance_reached') {
+    setEndDistance(state, k, endAt(state[S_MASS]));
+    return { state, last, outcome: legOk(state, last) };
+  }
+  if (climb.stop !== 'altitude_reached') {
+    const outcome = climb.stop !== 'climb_stalled' ? failed(ctx, target, state, climb, last) : legFailed(state, 'climb_not_reached', stalled(state[S_ALT]), last);
+    return { state, last, outcome };
+  }
+  return { state, last, outcome: null };
+}
+
 export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVector, spec: CruiseSpec): LegOutcome {
   const input = ctx.input;
   const dev = target.env.isaDev_K;
@@ -206,21 +239,10 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
     const mach = cruiseMach(input, spec.speed, h0, state[S_MASS], dev);
     state[S_ALT] = floor;
     if (h0 > state[S_ALT] + 1) {
-      const climbSegment = makeClimbSegment(ctx, target, 'mach', mach, h0, 'maxClimb');
-      const legEnd: SegmentEvent = { stop: 'distance_reached', stateOnly: true, g: (y) => y[k] - endAt(y[S_MASS]) };
-      const climb = flySegment(ctx, target, { ...climbSegment, events: [...climbSegment.events, legEnd] }, state);
-      state = climb.end;
-      last = climb.endSample;
-      state[S_TAS] = last.tas_m_s;
-      if (climb.stop === 'distance_reached') {
-        setEndDistance(state, k, endAt(state[S_MASS]));
-        return legOk(state, last);
-      }
-      if (climb.stop !== 'altitude_reached') {
-        return climb.stop !== 'climb_stalled'
-          ? failed(ctx, target, state, climb, last)
-          : legFailed(state, 'climb_not_reached', msg`The climb to the cruise-climb start on ${target.legName} stalled at ${q(state[S_ALT], 'altitude')}.`, last);
-      }
+      const climb = climbWithinLeg(ctx, target, state, mach, h0, k, endAt, (h) => msg`The climb to the cruise-climb start on ${target.legName} stalled at ${q(h, 'altitude')}.`);
+      state = climb.state;
+      last = climb.last;
+      if (climb.outcome !== null) return climb.outcome;
     }
     state[S_ALT] = h0;
     if (begin.limitedBy !== null) {
@@ -340,21 +362,10 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
     const climbMach = last.mach;
     // The leg's end stops a step climb too (top of descent reached while climbing), so the distance flown,
     // and with it the fuel-iteration residual, stays a continuous function of the mass.
-    const climbSegment = makeClimbSegment(ctx, target, 'mach', climbMach, up, 'maxClimb');
-    const legEnd: SegmentEvent = { stop: 'distance_reached', stateOnly: true, g: (y) => y[k] - endAt(y[S_MASS]) };
-    const climb = flySegment(ctx, target, { ...climbSegment, events: [...climbSegment.events, legEnd] }, state);
-    state = climb.end;
-    last = climb.endSample;
-    state[S_TAS] = last.tas_m_s;
-    if (climb.stop === 'distance_reached') {
-      setEndDistance(state, k, endAt(state[S_MASS]));
-      return legOk(state, last);
-    }
-    if (climb.stop !== 'altitude_reached') {
-      return climb.stop !== 'climb_stalled'
-        ? failed(ctx, target, state, climb, last)
-        : legFailed(state, 'climb_not_reached', msg`The step climb on ${target.legName} stalled at ${q(state[S_ALT], 'altitude')}.`, last);
-    }
+    const climb = climbWithinLeg(ctx, target, state, climbMach, up, k, endAt, (h) => msg`The step climb on ${target.legName} stalled at ${q(h, 'altitude')}.`);
+    state = climb.state;
+    last = climb.last;
+    if (climb.outcome !== null) return climb.outcome;
     state[S_ALT] = up;
     if (state[k] >= endAt(state[S_MASS])) return legOk(state, last);
   }
