@@ -8,7 +8,7 @@
  * (symlinks resolved) comes back with the text so callers check containment
  * on it, not on the path as written.
  */
-import { closeSync, constants, fstatSync, openSync, readSync, realpathSync } from 'node:fs';
+import { closeSync, constants, fstatSync, openSync, readSync, realpathSync, type Stats } from 'node:fs';
 import { open, realpath } from 'node:fs/promises';
 import { err, ok, type Result } from '../engine/core';
 
@@ -78,6 +78,34 @@ function tooLarge(path: string, size: number | null, maxBytes: number): TextFile
   return { code: 'too_large', path, reason: `it is ${size !== null ? sizeText(size) : `more than ${sizeText(maxBytes)}`}; text files up to ${sizeText(maxBytes)} are read` };
 }
 
+/** Why a file with this stat is refused before it is read (not a regular file, or too large), or null. */
+function refusalOf(path: string, stat: Stats, maxBytes: number): TextFileError | null {
+  if (!stat.isFile()) return { code: 'not_a_file', path, reason: kindOf(stat) };
+  if (stat.size > maxBytes) return tooLarge(path, stat.size, maxBytes);
+  return null;
+}
+
+/** The first read buffer: the stated size, at least 64 KiB, at most maxBytes + 1 (a file that grows, or reports 0). */
+function firstBuffer(size: number, maxBytes: number): Uint8Array {
+  return new Uint8Array(Math.min(Math.max(size, 64 * 1024), maxBytes + 1));
+}
+
+/** `chunk` when `length` bytes leave room in it; else a copy twice as long (at most maxBytes + 1); null when more than maxBytes are read. */
+function withRoom(chunk: Uint8Array, length: number, maxBytes: number): Uint8Array | null {
+  if (length < chunk.length) return chunk;
+  if (chunk.length > maxBytes) return null;
+  const grown = new Uint8Array(Math.min(chunk.length * 2, maxBytes + 1));
+  grown.set(chunk);
+  return grown;
+}
+
+/** The text of the `length` bytes read into `chunk`, or why it is not a text file. */
+function textRead(path: string, realPath: string, chunk: Uint8Array, length: number, maxBytes: number): Result<TextFile, TextFileError> {
+  if (length > maxBytes) return err(tooLarge(path, null, maxBytes));
+  const text = decode(path, chunk.subarray(0, length));
+  return text.ok ? ok({ text: text.value, realPath }) : text;
+}
+
 /** Reads a text file (see the file comment). Never throws. */
 export async function readTextFile(path: string, options: TextFileOptions = {}): Promise<Result<TextFile, TextFileError>> {
   const maxBytes = options.maxBytes ?? MAX_TEXT_FILE_BYTES;
@@ -86,26 +114,19 @@ export async function readTextFile(path: string, options: TextFileOptions = {}):
     const realPath = await realpath(path);
     handle = await open(realPath, OPEN_FLAGS);
     const stat = await handle.stat();
-    if (!stat.isFile()) return err({ code: 'not_a_file', path, reason: kindOf(stat) });
-    if (stat.size > maxBytes) return err(tooLarge(path, stat.size, maxBytes));
-    // Read at most maxBytes + 1 whatever the size says (a file that grows, or reports 0).
-    const buffer = new Uint8Array(Math.min(Math.max(stat.size, 64 * 1024), maxBytes + 1));
+    const refused = refusalOf(path, stat, maxBytes);
+    if (refused !== null) return err(refused);
+    let chunk = firstBuffer(stat.size, maxBytes);
     let length = 0;
-    let chunk = buffer;
     for (;;) {
-      if (length === chunk.length) {
-        if (chunk.length > maxBytes) return err(tooLarge(path, null, maxBytes));
-        const grown = new Uint8Array(Math.min(chunk.length * 2, maxBytes + 1));
-        grown.set(chunk);
-        chunk = grown;
-      }
+      const room = withRoom(chunk, length, maxBytes);
+      if (room === null) return err(tooLarge(path, null, maxBytes));
+      chunk = room;
       const { bytesRead } = await handle.read(chunk, length, chunk.length - length, null);
       if (bytesRead === 0) break;
       length += bytesRead;
     }
-    if (length > maxBytes) return err(tooLarge(path, null, maxBytes));
-    const text = decode(path, chunk.subarray(0, length));
-    return text.ok ? ok({ text: text.value, realPath }) : text;
+    return textRead(path, realPath, chunk, length, maxBytes);
   } catch (e) {
     return err(fromSystemError(path, e));
   } finally {
@@ -121,24 +142,19 @@ export function readTextFileSync(path: string, options: TextFileOptions = {}): R
     const realPath = realpathSync(path);
     fd = openSync(realPath, OPEN_FLAGS);
     const stat = fstatSync(fd);
-    if (!stat.isFile()) return err({ code: 'not_a_file', path, reason: kindOf(stat) });
-    if (stat.size > maxBytes) return err(tooLarge(path, stat.size, maxBytes));
-    let chunk = new Uint8Array(Math.min(Math.max(stat.size, 64 * 1024), maxBytes + 1));
+    const refused = refusalOf(path, stat, maxBytes);
+    if (refused !== null) return err(refused);
+    let chunk = firstBuffer(stat.size, maxBytes);
     let length = 0;
     for (;;) {
-      if (length === chunk.length) {
-        if (chunk.length > maxBytes) return err(tooLarge(path, null, maxBytes));
-        const grown = new Uint8Array(Math.min(chunk.length * 2, maxBytes + 1));
-        grown.set(chunk);
-        chunk = grown;
-      }
+      const room = withRoom(chunk, length, maxBytes);
+      if (room === null) return err(tooLarge(path, null, maxBytes));
+      chunk = room;
       const bytesRead = readSync(fd, chunk, length, chunk.length - length, null);
       if (bytesRead === 0) break;
       length += bytesRead;
     }
-    if (length > maxBytes) return err(tooLarge(path, null, maxBytes));
-    const text = decode(path, chunk.subarray(0, length));
-    return text.ok ? ok({ text: text.value, realPath }) : text;
+    return textRead(path, realPath, chunk, length, maxBytes);
   } catch (e) {
     return err(fromSystemError(path, e));
   } finally {
