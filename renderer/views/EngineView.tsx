@@ -1,3 +1,4 @@
+import { RecoveryMethodUncertainty } from '../components/RecoveryMethodUncertainty';
 import { InstallationFields } from '../components/InstallationFields';
 import { describeInstallationMethod, type RatingName } from '../../engine/propulsion';
 import { useState } from 'react';
@@ -119,6 +120,7 @@ export function EngineView(props: { readonly live: LiveStudy; readonly chartSize
           <QuantityField label="Shaft power extraction per engine" path={['engine', 'installation', 'powerExtraction']} unit="power" testId="field-power-extraction" />
           <InstallationFields hasSensitivities={snapshot?.deck.hasSensitivities} />
           <UncertaintyRows kinds={['tsfc', 'cRam', 'cBleed']} testId="uncertain-engine" />
+          <RecoveryMethodUncertainty hasSensitivities={snapshot?.deck.hasSensitivities} />
         </fieldset>
         {deckSource.kind === 'parametric' ? (
           <fieldset>

@@ -177,3 +177,31 @@ describe('results view names the installation method flown', () => {
     expect(screen.getByTestId('results-installation-method').textContent).toContain(describeInstallationMethod('raymerCorrections'));
   });
 });
+
+describe('recovery method declared uncertain (engine view)', () => {
+  it('declares it with two Raymer alternatives, edits a weight, undo restores it', () => {
+    const { probe } = renderWithStudy(<EngineView live={NO_RESULT} />);
+    // The demo may already declare it: make it certain first (a removal is itself an edit).
+    if (screen.queryByTestId('uncertain-recovery-method-remove')) fireEvent.click(screen.getByTestId('uncertain-recovery-method-remove'));
+    fireEvent.click(screen.getByTestId('uncertain-recovery-method-add'));
+    const decl = () => probe.current.doc!.present.uncertainty?.inputs.find((d) => d.input === 'recoveryMethod');
+    expect(decl()).toMatchObject({ alternatives: [{ method: 'raymerHeld', weight: 1 }, { method: 'raymerScaled', weight: 1 }] });
+    type('uncertain-recovery-method-raymerScaled-weight', '3');
+    const d = decl();
+    expect(d?.input === 'recoveryMethod' && d.alternatives[1]!.weight).toBe(3);
+    const back = undo(probe.current).doc!.present.uncertainty?.inputs.find((x) => x.input === 'recoveryMethod');
+    expect(back?.input === 'recoveryMethod' && back.alternatives[1]!.weight).toBe(1);
+  });
+
+  it('offers the sensitivity alternative disabled with the reason when the deck has no columns', async () => {
+    const { RecoveryMethodUncertainty } = await import('../../../renderer/components/RecoveryMethodUncertainty');
+    const s = studyReducer(demoState(), { type: 'valueSet', path: ['uncertainty'], value: { samples: 200, seed: 1, inputs: [{ input: 'recoveryMethod', alternatives: [{ method: 'raymerHeld', weight: 1 }], reason: '' }] }, label: 'x' });
+    render(
+      <StudyContext.Provider value={{ state: s, dispatch: () => undefined }}>
+        <RecoveryMethodUncertainty hasSensitivities={false} />
+      </StudyContext.Provider>,
+    );
+    expect((screen.getByTestId('uncertain-recovery-method-deckSensitivities') as HTMLInputElement).disabled).toBe(true);
+    expect(screen.getByTestId('uncertain-recovery-method-deckSensitivities-unavailable').textContent).toMatch(/no installation-sensitivity columns/);
+  });
+});
