@@ -9,8 +9,8 @@ import type { Project } from '../../engine/project';
 import { displayUnit, formatQuantity, type UnitSystem } from '../../engine/units';
 import type { UncertaintyResult } from '../../engine/uncertainty';
 import { FACTOR_LABEL, payloadRangeRows } from '../charts/compareSeries';
+import { ComparisonTable } from '../components/ComparisonTable';
 import { LineChartPanel } from '../components/LineChartPanel';
-import { machText } from '../state/displayText';
 import type { EngineReplies, EngineRequest, EngineRequestKind } from '../worker/engineProtocol';
 import { useJobStore } from '../worker/jobStore';
 
@@ -65,43 +65,7 @@ export function ReportAnalyses(props: { readonly project: Project; readonly unit
             Inlet comparison: {compare.value.designs[0]?.name} (A) against {compare.value.designs[1]?.name} (B)
           </h2>
           <Outdated ran={compare} />
-          <table>
-            <thead>
-              <tr>
-                <th />
-                <th>A</th>
-                <th>B</th>
-                <th>B - A</th>
-              </tr>
-            </thead>
-            <tbody>
-              <tr>
-                <td>Block fuel</td>
-                {compare.value.designs.map((d, k) => (
-                  <td key={k}>{formatQuantity(d.blockFuel_kg, 'mass', u)}</td>
-                ))}
-                <td>{formatQuantity(compare.value.difference.blockFuel_kg, 'mass', u)}</td>
-              </tr>
-              <tr>
-                <td>Block time</td>
-                {compare.value.designs.map((d, k) => (
-                  <td key={k}>{formatQuantity(d.blockTime_s, 'time', u)}</td>
-                ))}
-                <td>{formatQuantity(compare.value.difference.blockTime_s, 'time', u)}</td>
-              </tr>
-              <tr>
-                <td>Low / high crossover Mach</td>
-                {compare.value.designs.map((d, k) => (
-                  <td key={k}>
-                    {machText(d.crossover.lowMach)} / {machText(d.crossover.highMach)}
-                  </td>
-                ))}
-                <td>
-                  {machText(compare.value.difference.lowMach)} / {machText(compare.value.difference.highMach)}
-                </td>
-              </tr>
-            </tbody>
-          </table>
+          <ComparisonTable result={compare.value} units={u} idPrefix="report-compare" />
           <table data-testid="report-compare-breakdown">
             <thead>
               <tr>

@@ -4,12 +4,13 @@ import { displayUnit, formatQuantity } from '../../engine/units';
 import { breakdownWaterfall, FACTOR_LABEL, payloadRangeRows } from '../charts/compareSeries';
 import { profileCompareRows, profileCompareSeries, type ProfileQuantity } from '../charts/profileCompareSeries';
 import { ChoiceField } from '../components/ChoiceField';
+import { ComparisonTable } from '../components/ComparisonTable';
 import { FailureNotice } from '../components/IssueList';
 import { JobProgress } from '../components/JobProgress';
 import { LineChartPanel, type ChartSize } from '../components/LineChartPanel';
 import { UncertaintyBand } from '../components/UncertaintyBand';
 import { WaterfallChart } from '../components/WaterfallChart';
-import { machText as mach, ratingLabel } from '../state/displayText';
+import { ratingLabel } from '../state/displayText';
 import { useStudy } from '../state/studyContext';
 import { useEngineJob, useLiveRerun, type LiveStudy } from '../worker/useEngine';
 import { StaleMark } from '../components/StaleMark';
@@ -48,70 +49,7 @@ function InletComparisonPanel(props: { readonly chartSize?: ChartSize }) {
       {c.status === 'failed' ? <FailureNotice failure={c.failure} testId="compare-failure" /> : null}
       {c.status === 'done' ? (
         <>
-          <table data-testid="compare-table" className="compare-table">
-            <thead>
-              <tr>
-                <th />
-                {c.value.designs.map((d, k) => (
-                  <th key={k} data-testid={`compare-design-name-${k}`}>
-                    {k === 0 ? 'A: ' : 'B: '}
-                    {d.name}
-                  </th>
-                ))}
-                <th>B - A</th>
-              </tr>
-            </thead>
-            <tbody>
-              <tr>
-                <td>Block fuel</td>
-                {c.value.designs.map((d, k) => (
-                  <td key={k}>{formatQuantity(d.blockFuel_kg, 'mass', u)}</td>
-                ))}
-                <td data-testid="compare-diff-block-fuel">{formatQuantity(c.value.difference.blockFuel_kg, 'mass', u)}</td>
-              </tr>
-              <tr>
-                <td>Block time</td>
-                {c.value.designs.map((d, k) => (
-                  <td key={k}>{formatQuantity(d.blockTime_s, 'time', u)}</td>
-                ))}
-                <td>{formatQuantity(c.value.difference.blockTime_s, 'time', u)}</td>
-              </tr>
-              <tr>
-                <td>Trip fuel</td>
-                {c.value.designs.map((d, k) => (
-                  <td key={k}>{formatQuantity(d.tripFuel_kg, 'mass', u)}</td>
-                ))}
-                <td>{formatQuantity(c.value.difference.tripFuel_kg, 'mass', u)}</td>
-              </tr>
-              <tr>
-                <td>Take-off mass</td>
-                {c.value.designs.map((d, k) => (
-                  <td key={k}>{formatQuantity(d.takeoffMass_kg, 'mass', u)}</td>
-                ))}
-                <td>{formatQuantity(c.value.difference.takeoffMass_kg, 'mass', u)}</td>
-              </tr>
-              <tr>
-                <td>Low / high crossover Mach</td>
-                {c.value.designs.map((d, k) => (
-                  <td key={k}>
-                    {mach(d.crossover.lowMach)} / {mach(d.crossover.highMach)}
-                  </td>
-                ))}
-                <td>
-                  {mach(c.value.difference.lowMach)} / {mach(c.value.difference.highMach)}
-                </td>
-              </tr>
-              {c.value.difference.ceilings.map((ceiling, k) => (
-                <tr key={ceiling.name}>
-                  <td>Ceiling: {ceiling.name}</td>
-                  {c.value.designs.map((d, j) => (
-                    <td key={j}>{formatQuantity(d.ceilings[k]?.altitude_m ?? NaN, 'altitude', u)}</td>
-                  ))}
-                  <td>{ceiling.altitude_m === null ? '—' : formatQuantity(ceiling.altitude_m, 'altitude', u)}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
+          <ComparisonTable result={c.value} units={u} idPrefix="compare" />
           <p className="small">
             Crossover compared at {formatQuantity(c.value.crossoverCondition.altitude_m, 'altitude', u)}, {formatQuantity(c.value.crossoverCondition.mass_kg, 'mass', u)},{' '}
             {ratingLabel(c.value.crossoverCondition.rating)}.
