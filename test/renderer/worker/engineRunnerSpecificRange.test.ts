@@ -1,26 +1,16 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { optimumAltitude, specificRange } from '../../../engine/analysis';
-import { parseProject } from '../../../engine/project/parseProject';
-import { prepareStudy } from '../../../engine/study';
 import type { MissionInput } from '../../../engine/mission';
 import { createDeckCache, runEngineRequest } from '../../../renderer/worker/engineRunner';
 import type { EngineReplies, StudyInputs } from '../../../renderer/worker/engineProtocol';
-import { demoFiles } from '../support/fakeBridge';
+import { demoStudy } from '../support/demoStudy';
 
 const FT = 0.3048;
 
 let demo: StudyInputs;
 let input: MissionInput;
 beforeAll(() => {
-  const d = demoFiles();
-  const p = parseProject(d.projectText, d.projectName);
-  if (!p.ok) throw new Error(JSON.stringify(p.error));
-  demo = { project: p.value, deckFile: { name: d.deckName, text: d.deckText } };
-  const s = prepareStudy(demo.project, demo.deckFile);
-  if (!s.ok) throw new Error(JSON.stringify(s.error));
-  const i = s.value.inputFor();
-  if (!i.ok) throw new Error(JSON.stringify(i.error));
-  input = i.value;
+  ({ demo, input } = demoStudy());
 });
 
 function run(mass_kg: number, altitudes_m: readonly number[]) {
