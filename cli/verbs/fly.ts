@@ -3,7 +3,7 @@ import { writeFile } from 'node:fs/promises';
 import { resolve } from 'node:path';
 import { solveMission } from '../../engine/mission';
 import { loadVerbProject, projectArgument } from '../common/projectArgs';
-import { historyCsv } from '../../engine/study';
+import { historyCsv, type CsvUnits } from '../../engine/study';
 import { missionJson } from '../format/missionJson';
 import { missionSummaryText } from '../format/missionSummaryText';
 import { optionalString, printJson, UsageError, type CliIo, type Verb } from '../verb';
@@ -17,12 +17,15 @@ export const flyVerb: Verb = {
   summary: verbSummary('fly'),
   help: `blockwise fly — fly the mission of a project file
 
-Usage: blockwise fly <project.blockwise.json> [--inlet <name>] [--json] [--csv <file>]
+Usage: blockwise fly <project.blockwise.json> [--inlet <name>] [--json] [--csv <file> [--csv-units base|si|customary]]
 
 Options:
   --inlet   fly with this inlet design instead of the project's active one
   --json    print the result as JSON (SI values; each key names its unit)
-  --csv     also write the time history to <file> (docs/results-csv.md: name[unit] columns, SI)
+  --csv     also write the time history to <file> (docs/results-csv.md: name[unit] columns)
+  --csv-units  what its numbers are in: base (default: SI base units s, m, kg, N,
+            kg/s, for programs), si or customary (the display units the app's
+            screens and exports use: min, km, kg/h ... or h, nmi, kt, lb, lbf ...)
 
 The deck file a project names is read relative to the project file's folder.
 The project format is described in docs/project-format.md.
@@ -34,12 +37,16 @@ exhausted, climb or thrust short, no ground progress, outside the models'
 range); 5 a hard limit is broken (MTOW, fuel capacity, MLW); 70 internal
 error. The result is printed whatever the status.
 `,
-  options: { ...INLET_OPTION, ...JSON_OPTION, csv: { type: 'string' } },
+  options: { ...INLET_OPTION, ...JSON_OPTION, csv: { type: 'string' }, 'csv-units': { type: 'string' } },
   allowPositionals: true,
   async run(values, positionals, io: CliIo): Promise<number> {
     const file = projectArgument(positionals, 'fly');
     const csvOption = optionalString(values, 'csv');
     if (csvOption !== undefined && csvOption.trim() === '') throw new UsageError('--csv: give a file name');
+    const csvUnitsOption = optionalString(values, 'csv-units');
+    if (csvUnitsOption !== undefined && csvOption === undefined) throw new UsageError('--csv-units goes with --csv <file>');
+    if (csvUnitsOption !== undefined && !['base', 'si', 'customary'].includes(csvUnitsOption)) throw new UsageError(`--csv-units: "${csvUnitsOption}" is not base, si or customary`);
+    const csvUnits: CsvUnits = csvUnitsOption === 'si' || csvUnitsOption === 'customary' ? { display: csvUnitsOption } : {};
     const loaded = await loadVerbProject(file, optionalString(values, 'inlet'), io);
     if (typeof loaded === 'number') return loaded;
     const { project, input, deck } = loaded;
@@ -56,7 +63,7 @@ error. The result is printed whatever the status.
     if (csvOption !== undefined) {
       const csvPath = resolve(io.cwd, csvOption);
       try {
-        await writeFile(csvPath, historyCsv(result.history), 'utf8');
+        await writeFile(csvPath, historyCsv(result.history, csvUnits), 'utf8');
       } catch (e) {
         io.err(`blockwise fly: cannot write the time history to ${csvPath}: ${e instanceof Error ? e.message : String(e)}\n`);
         return 1;

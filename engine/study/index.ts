@@ -6,4 +6,4 @@
 export { deckTextFormat, parseDeckText, createDeckTextMemo, type DeckFileText, type DeckTextFormat, type DeckTextMemo } from './deckText';
 export { prepareStudy, studyFailureLines, type ProjectFailure, type Study, type StudyFailure, type StudyOptions } from './prepareStudy';
 export { cannotReadMessage, readFailureReason } from './readProblem';
-export { fileStem, HISTORY_COLUMNS, historyCsv, legsCsv } from './resultsCsv';
+export { fileStem, HISTORY_COLUMNS, historyCsv, legsCsv, type CsvUnits } from './resultsCsv';

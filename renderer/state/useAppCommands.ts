@@ -117,7 +117,7 @@ export function useAppCommands(bridge: Bridge, store: StudyStore, snapshot: Stud
           case 'exportLegs': {
             if (snap === null || !(await mayExport())) return;
             const history = command === 'exportHistory';
-            const saved = await bridge.exportText(history ? historyCsv(snap.mission.history) : legsCsv(snap.mission), `${stem}-${history ? 'time-history' : 'legs'}.csv`, 'text/csv');
+            const saved = await bridge.exportText(history ? historyCsv(snap.mission.history, { display: state.units }) : legsCsv(snap.mission, { display: state.units }), `${stem}-${history ? 'time-history' : 'legs'}.csv`, 'text/csv');
             if (saved) setMessage(`Exported ${saved.path ?? saved.name}.`);
             return;
           }

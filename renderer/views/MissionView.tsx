@@ -64,7 +64,8 @@ function Reserves() {
   );
 }
 
-const KT = 1852 / 3600;
+/** One knot (m/s): a nautical mile per hour. */
+const KT = NMI / 3600;
 
 /** The settings every reserve preset shares: distance basis, arrival allowances, hold speed. */
 function ReserveCommon() {

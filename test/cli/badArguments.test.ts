@@ -25,6 +25,8 @@ const TABLE: readonly (readonly [string, readonly string[], number, RegExp])[] =
   ['fly', [], EXIT_USAGE, /^blockwise fly: missing the project file/],
   ['fly', [P, P], EXIT_USAGE, /one project file at a time/],
   ['fly', [P, '--csv='], EXIT_USAGE, /--csv: give a file name/],
+  ['fly', [P, '--csv-units', 'customary'], EXIT_USAGE, /--csv-units goes with --csv <file>/],
+  ['fly', [P, '--csv', 'x.csv', '--csv-units', 'imperial'], EXIT_USAGE, /--csv-units: "imperial" is not base, si or customary/],
   ['fly', [P, '--inlet', 'scoop'], EXIT_USAGE, /"scoop" is not an inlet design/],
   ['fly', [P, '--speed'], EXIT_USAGE, /Unknown option '--speed'/],
   ['fly', [MISSING], EXIT_FILE, /no-such-file\.blockwise\.json.*no such file/],

@@ -102,6 +102,10 @@ describe('the CLI and the worker through engine/study', () => {
     // The export command writes historyCsv(snapshot.mission.history) (renderer/state/useAppCommands.ts).
     expect(historyCsv(app.mission.history)).toBe(cliCsv);
     expect(JSON.parse(r.out).blockFuel_kg).toBe(app.mission.blockFuel_kg);
+    // In display units (the app exports in the units the user chose): the same file from both doors.
+    const customaryFile = join(dir, 'history-customary.csv');
+    expect((await run('fly', DEMO_PROJECT, '--csv', customaryFile, '--csv-units', 'customary')).code).toBe(0);
+    expect(readFileSync(customaryFile, 'utf8')).toBe(historyCsv(app.mission.history, { display: 'customary' }));
   });
 
   it('a broken deck is refused by both doors with the same located messages', async () => {

@@ -101,4 +101,29 @@ describe('fileStem', () => {
     expect(fileStem('other.json')).toBe('other');
     expect(fileStem('')).toBe('blockwise');
   });
+
+  it('in display units: every dimensional column converted by the unit table and its header naming the unit; Mach, CL and the leg index as they are', () => {
+    const r = result();
+    const base = historyCsv(r.history).trimEnd().split('\n').filter((l) => !l.startsWith('#'));
+    const shown = historyCsv(r.history, { display: 'customary' }).trimEnd().split('\n').filter((l) => !l.startsWith('#'));
+    const head = shown[0]!.split(',');
+    expect(head).toEqual(['time[h]', 'distance[nmi]', 'altitude[ft]', 'mach[-]', 'cas[kt]', 'tas[kt]', 'mass[lb]', 'thrust_available[lbf]', 'thrust_used[lbf]', 'drag[lbf]', 'fuel_flow[lb/h]', 'cl[-]', 'lift_to_drag[-]', 'climb_rate[ft/min]', 'leg[-]']);
+    const b = base[2]!.split(',').map(Number);
+    const c = shown[2]!.split(',').map(Number);
+    // exact factors, NIST SP 811: ft 0.3048 m, nmi 1852 m, lb 0.45359237 kg, lbf 4.4482216152605 N, kt 1852/3600 m/s
+    expect(c[0]).toBeCloseTo(b[0]! / 3600, 12);
+    expect(c[1]).toBeCloseTo(b[1]! / 1852, 9);
+    expect(c[2]).toBeCloseTo(b[2]! / 0.3048, 9);
+    expect(c[3]).toBe(b[3]);
+    expect(c[4]).toBeCloseTo(b[4]! / (1852 / 3600), 9);
+    expect(c[6]).toBeCloseTo(b[6]! / 0.45359237, 9);
+    expect(c[9]).toBeCloseTo(b[9]! / 4.4482216152605, 9);
+    expect(c[10]).toBeCloseTo((b[10]! * 3600) / 0.45359237, 6);
+    expect(c[13]).toBeCloseTo((b[13]! * 60) / 0.3048, 9);
+    expect(c[14]).toBe(b[14]);
+    const legs = legsCsv(r, { display: 'customary' }).trimEnd().split('\n').filter((l) => !l.startsWith('#'));
+    expect(legs[0]).toBe('leg,name,kind,start_time[h],end_time[h],start_distance[nmi],end_distance[nmi],start_altitude[ft],end_altitude[ft],start_mass[lb],end_mass[lb],fuel[lb]');
+    const legsBase = legsCsv(r).trimEnd().split('\n').filter((l) => !l.startsWith('#'));
+    expect(legsBase[0]).toBe('leg,name,kind,start_time[s],end_time[s],start_distance[m],end_distance[m],start_altitude[m],end_altitude[m],start_mass[kg],end_mass[kg],fuel[kg]');
+  });
 });
