@@ -174,7 +174,10 @@ describe('the App with the demo study', () => {
     const exported = bridge.exports[0]!.text.split('\n');
     // The safety notice heads every export as # comment lines (DESIGN.md §7).
     expect(exported[0]).toBe(`# ${SAFETY_NOTICE_LINES[0]}`);
-    expect(exported.find((l) => !l.startsWith('#'))).toMatch(/^time\[s\],distance\[m\]/);
+    // In the display units on screen (customary here): each header names its unit (docs/results-csv.md).
+    expect(exported.find((l) => !l.startsWith('#'))).toMatch(/^time\[h\],distance\[nmi\],altitude\[ft\]/);
+    const legs = bridge.exports[1]!.text.split('\n').find((l) => !l.startsWith('#'));
+    expect(legs).toMatch(/fuel\[lb\]$/);
     await waitFor(() => expect(bridge.prints).toEqual(['demo-report.pdf']), { timeout: 15000 });
     // Mounted only to print: there while printing, gone after.
     expect(bridge.printedReportText).toContain(SAFETY_NOTICE_LINES[0]);
