@@ -7,12 +7,13 @@
  * writes the new headline figure. Target (issue 14): at most 50 ms.
  */
 import { resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { build } from 'vite';
 import { launchChromium, openApp } from '../e2e/support/chromium';
 import { serveFolder } from '../e2e/support/staticServer';
 
 const EDITS = Number(process.env.BENCH_UI_EDITS ?? 30);
-const repo = resolve(__dirname, '..', '..');
+const repo = resolve(fileURLToPath(new URL('.', import.meta.url)), '..', '..');
 
 function quantile(sorted: readonly number[], p: number): number {
   const i = (sorted.length - 1) * p;

@@ -1,6 +1,7 @@
 import { existsSync } from 'node:fs';
 import { mkdir } from 'node:fs/promises';
 import { join, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { chromium, type Browser, type Page } from 'playwright-core';
 
 /** Debian's Chromium; the e2e tests never download a browser. */
@@ -17,7 +18,8 @@ export const CHROMIUM_ARGS: readonly string[] = [
   '--disable-sync',
 ];
 
-export const SCREENSHOT_FOLDER = resolve(__dirname, '..', '..', '..', 'artifacts', 'screenshots');
+// import.meta.url, not __dirname: this module also runs as plain ESM under tsx (npm run bench:ui).
+export const SCREENSHOT_FOLDER = resolve(fileURLToPath(new URL('.', import.meta.url)), '..', '..', '..', 'artifacts', 'screenshots');
 
 /** Fails with the fix when Chromium is not installed (never skips silently). */
 export function requireChromium(path: string = CHROMIUM_PATH): void {
