@@ -53,6 +53,8 @@ describe('trust at a glance', () => {
       for (const v of VIEWS) {
         await showView(page, v.id);
         await page.waitForTimeout(300);
+        // A view that computes on showing (crossover, envelope, specific range) finishes, so its figures are checked and shown.
+        await expect.poll(() => page.getByTestId(`view-${v.id}`).getByText(/^Computing…/).count(), { timeout: 30_000 }).toBe(0);
         // Names the user wrote (inlet and deck titles, marked data-user-text) may hold any unit ("a 36 kN class deck").
         const text = await page.getByTestId(`view-${v.id}`).evaluate((el) => {
           const names = [...el.querySelectorAll('[data-user-text]')];
