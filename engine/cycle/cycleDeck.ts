@@ -24,7 +24,7 @@
  * extraction (SENSITIVITY_STEPS).
  */
 import { err, ok, type Result } from '../core/result';
-import { assembleDeck } from '../propulsion/deckAssembly';
+import { assembleDeck, type DeckRowLocator } from '../propulsion/deckAssembly';
 import type { DeckFileError } from '../propulsion/deckFileError';
 import type { DeckGridPoint } from '../propulsion/deckGrid';
 import { DEFAULT_DECK_POLICY, type EngineDeck } from '../propulsion/engineDeck';
@@ -320,14 +320,7 @@ export function cycleDeck(engine: CycleEngine, grid: CycleDeckGrid = DEFAULT_CYC
     hasIsaDev,
     hasSensitivities: true,
     rows,
-    locate: {
-      line: () => null,
-      column: (row, column) => {
-        const p = rows[row]!;
-        return `point (ISA${p.isaDev_K >= 0 ? '+' : ''}${p.isaDev_K} K, ${Number((p.altitude_m / FT).toFixed(1))} ft, Mach ${p.mach}, power ${p.power}) ${column}`;
-      },
-      show: (_column, v) => String(Number(v.toPrecision(8))),
-    },
+    locate: generatedDeckLocator(rows),
   });
   if (!assembled.ok) {
     return err({
@@ -337,4 +330,19 @@ export function cycleDeck(engine: CycleEngine, grid: CycleDeckGrid = DEFAULT_CYC
     });
   }
   return ok({ deck: assembled.value, gaps, cyclePoints: runs });
+}
+
+/**
+ * Where a problem sits in a deck made in memory (from a cycle, or a deck copy with the cycle's sensitivities): no
+ * file line, the grid point named instead.
+ */
+export function generatedDeckLocator(rows: readonly DeckGridPoint[]): DeckRowLocator {
+  return {
+    line: () => null,
+    column: (row, column) => {
+      const p = rows[row]!;
+      return `point (ISA${p.isaDev_K >= 0 ? '+' : ''}${p.isaDev_K} K, ${Number((p.altitude_m / FT).toFixed(1))} ft, Mach ${p.mach}, power ${p.power}) ${column}`;
+    },
+    show: (_column, v) => String(Number(v.toPrecision(8))),
+  };
 }

@@ -31,7 +31,7 @@ import { assembleDeck } from '../propulsion/deckAssembly';
 import { deckGridPoints, type DeckGridPoint } from '../propulsion/deckGrid';
 import { referenceRecoveryAt, type EngineDeck } from '../propulsion/engineDeck';
 import type { RatingName } from '../propulsion/propulsionModel';
-import { cycleSensitivitiesAt } from './cycleDeck';
+import { cycleSensitivitiesAt, generatedDeckLocator } from './cycleDeck';
 import type { CycleEngine } from './cycleEngine';
 import { runCyclePoint, type CycleWarmStart } from './cyclePoint';
 import type { CycleRating, CycleSpec, LimitValue } from './cycleSpec';
@@ -497,14 +497,7 @@ export function deckWithCycleSensitivities(deck: EngineDeck, engine: CycleEngine
     hasIsaDev: deck.hasIsaDev,
     hasSensitivities: true,
     rows,
-    locate: {
-      line: () => null,
-      column: (row, column) => {
-        const p = rows[row]!;
-        return `point (${p.altitude_m.toFixed(1)} m, Mach ${p.mach}, power ${p.power}) ${column}`;
-      },
-      show: (_column, v) => String(Number(v.toPrecision(8))),
-    },
+    locate: generatedDeckLocator(rows),
   });
   if (!assembled.ok) return err({ code: 'fit_failed', message: `the deck copy fails the deck checks: ${assembled.error[0]!.message}` });
   return ok({ deck: assembled.value, cautions, cyclePoints: runs });
