@@ -67,6 +67,8 @@ export function SpecificRangeView(props: { readonly live: LiveStudy; readonly ch
             xLabel="Mach"
             yLabel={`specific range (${plot.unit})`}
             series={plot.series}
+            // each altitude has its own Mach samples: rows are merged by Mach, so a curve joins across the others' rows
+            pathsInDataOrder
             points={plot.markers.map((m) => ({ x: m.mach, y: m.specificRange, label: `${m.what} ${m.altitude_m}` }))}
             {...(props.chartSize ? { size: props.chartSize } : {})}
           />
