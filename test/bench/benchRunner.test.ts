@@ -4,7 +4,7 @@ import { formatTable, lastSink, runCase } from './benchRunner';
 describe('runCase', () => {
   it('calls the case, counts every timed call and keeps the last result', () => {
     let n = 0;
-    const r = runCase('demo', { name: 'count', run: () => ++n }, { warmUp_s: 0.005, measure_s: 0.01 });
+    const r = runCase('demo', { name: 'count', run: () => ++n }, { warmUp_s: 0.005, measure_s: 0.01, minWarmUpCalls: 1, minBatches: 1 });
     expect(r.section).toBe('demo');
     expect(r.name).toBe('count');
     expect(r.calls).toBeGreaterThan(0);
@@ -13,6 +13,19 @@ describe('runCase', () => {
     expect(lastSink()).toBe(n);
     expect(Number.isFinite(r.opsPerSecond) && r.opsPerSecond > 0).toBe(true);
     expect(Number.isFinite(r.medianCall_s) && r.medianCall_s >= 0).toBe(true);
+  });
+
+  it('warms a slow case for at least minWarmUpCalls calls and measures at least minBatches batches', () => {
+    let n = 0;
+    const slow = () => {
+      const end = performance.now() + 2;
+      while (performance.now() < end);
+      return ++n;
+    };
+    // 2 ms per call: time alone would allow ~1 warm-up call and ~1 batch.
+    const r = runCase('demo', { name: 'slow', run: slow }, { warmUp_s: 0.001, measure_s: 0.001, minWarmUpCalls: 4, minBatches: 5 });
+    expect(r.calls).toBeGreaterThanOrEqual(5);
+    expect(n - r.calls).toBeGreaterThanOrEqual(4);
   });
 });
 

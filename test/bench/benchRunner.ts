@@ -6,9 +6,13 @@ export interface BenchTiming {
   readonly warmUp_s: number;
   /** Time spent measuring (s). */
   readonly measure_s: number;
+  /** Calls before measuring, at least (a slow case warms the JIT over several calls, not over 0.1 s). */
+  readonly minWarmUpCalls: number;
+  /** Batches measured, at least (so a slow case's median is a median). */
+  readonly minBatches: number;
 }
 
-export const DEFAULT_TIMING: BenchTiming = { warmUp_s: 0.1, measure_s: 0.5 };
+export const DEFAULT_TIMING: BenchTiming = { warmUp_s: 0.1, measure_s: 0.5, minWarmUpCalls: 10, minBatches: 15 };
 
 /** Keeps results reachable so the JIT cannot drop the calls. */
 let sink: unknown = null;
@@ -18,17 +22,20 @@ export function lastSink(): unknown {
 }
 
 /**
- * Times one case: calls it for `warmUp_s`, then in batches sized to about a
- * millisecond each for `measure_s`. Reports total calls per second and the
+ * Times one case: calls it for `warmUp_s` (and at least `minWarmUpCalls`
+ * times), then in batches sized to about a millisecond each for `measure_s`
+ * (and at least `minBatches` batches). Reports total calls per second and the
  * median per-call time over batches.
  */
 export function runCase(section: string, bench: BenchCase, timing: BenchTiming = DEFAULT_TIMING): BenchResult {
   let batch = 1;
   const warmEnd = performance.now() + timing.warmUp_s * 1000;
+  let warmCalls = 0;
   // Warm up and grow the batch until one batch takes about 1 ms.
-  while (performance.now() < warmEnd) {
+  while (performance.now() < warmEnd || warmCalls < timing.minWarmUpCalls) {
     const t0 = performance.now();
     for (let i = 0; i < batch; i++) sink = bench.run();
+    warmCalls += batch;
     if (performance.now() - t0 < 1 && batch < 1 << 24) batch *= 2;
   }
   const perCall: number[] = [];
@@ -41,7 +48,7 @@ export function runCase(section: string, bench: BenchCase, timing: BenchTiming =
     const t1 = performance.now();
     perCall.push((t1 - t0) / 1000 / batch);
     calls += batch;
-  } while (performance.now() < end);
+  } while (performance.now() < end || perCall.length < timing.minBatches);
   const elapsed_s = (performance.now() - start) / 1000;
   perCall.sort((a, b) => a - b);
   const mid = perCall.length >> 1;

@@ -1,5 +1,5 @@
 /**
- * `npm run bench`: loads every section in test/bench/sections/*.ts, times
+ * The bench (`npm run bench` runs it bundled, scripts/bench.mjs): every section of test/bench/sections/index.ts, times
  * each case (warm-up, then about 0.5 s) and prints one table; then the side
  * by side with the Python peer (sideBySide.ts), the peer at equal accuracy
  * (equalAccuracy.ts) and the command line's start-up and sweep throughput
@@ -8,18 +8,14 @@
  * `--json` prints every figure as one JSON document instead of the text.
  * Speed is measured here, never in unit tests.
  */
-import { readdirSync } from 'node:fs';
 import { cpus } from 'node:os';
-import { dirname, join } from 'node:path';
-import { fileURLToPath, pathToFileURL } from 'node:url';
 import { formatTable, runCase } from './benchRunner';
-import type { BenchResult, BenchSection } from './benchTypes';
+import type { BenchResult } from './benchTypes';
 import { formatCliTiming, runCliTiming, type CliTiming } from './cliTiming';
 import { formatEqualAccuracy, runEqualAccuracy, type EqualAccuracy } from './equalAccuracy';
+import { BENCH_SECTIONS } from './sections/index';
 import { formatSideBySide, runSideBySide, type SideBySide } from './sideBySide';
 
-const here = dirname(fileURLToPath(import.meta.url));
-const sectionDir = join(here, 'sections');
 const args = process.argv.slice(2);
 const json = args.includes('--json');
 const filters = args.filter((a) => a !== '--json').map((f) => f.toLowerCase());
@@ -28,19 +24,12 @@ const say = (text: string) => {
   if (!json) process.stdout.write(text);
 };
 
-const files = readdirSync(sectionDir)
-  .filter((f) => f.endsWith('.ts'))
-  .sort();
+// How the engine code runs: bundled by esbuild as the CLI ships it (scripts/bench.mjs), or from the TypeScript sources under tsx.
+const build = process.env.BLOCKWISE_BENCH_BUILD === 'bundle' ? 'bundled (esbuild, ES modules, as the CLI ships)' : 'TypeScript sources under tsx';
 
 const results: BenchResult[] = [];
-for (const file of files) {
-  const mod = (await import(pathToFileURL(join(sectionDir, file)).href)) as { section?: BenchSection };
-  const section = mod.section;
-  if (section === undefined) {
-    process.stderr.write(`bench: ${file} does not export "section"; skipped\n`);
-    continue;
-  }
-  const matches = filters.length === 0 || filters.some((f) => file.toLowerCase().includes(f) || section.title.toLowerCase().includes(f));
+for (const { file, section } of BENCH_SECTIONS) {
+  const matches = filters.length === 0 || filters.some((f) => file.includes(f) || section.title.toLowerCase().includes(f));
   if (!matches) continue;
   for (const bench of section.cases) {
     results.push(runCase(section.title, bench));
@@ -48,7 +37,7 @@ for (const file of files) {
 }
 
 const cores = cpus().length;
-say(`Node ${process.version}, ${cores} cores, ${new Date().toISOString()}, ${results.length} cases\n\n${formatTable(results)}\n`);
+say(`Node ${process.version}, ${cores} cores, ${new Date().toISOString()}, ${results.length} cases, ${build}\n\n${formatTable(results)}\n`);
 
 // Blockwise against the scripted Python peer: agreement at the peer's default tolerance, then both at equal accuracy.
 let sideBySide: SideBySide | null = null;
@@ -69,6 +58,7 @@ if (json) {
   const doc = {
     node: process.version,
     cores,
+    build,
     date: new Date().toISOString(),
     cases: results.map((r) => ({ section: r.section, name: r.name, medianCall_s: r.medianCall_s, callsPerSecond: r.opsPerSecond, calls: r.calls })),
     sideBySide,
