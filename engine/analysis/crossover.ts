@@ -13,7 +13,7 @@ import { RATING_LABEL, type RatingName } from '../propulsion/propulsionModel';
 import type { AnalysisError, PerformanceModels } from './analysisTypes';
 import { machFromCas } from '../aero/airspeeds';
 import { liftLimitMachs } from './liftLimitMach';
-import { airAt, levelPoint } from './pointState';
+import { airAt, levelPoint, type LevelPoint } from './pointState';
 import { maximizeOnGrid, minimizeOnGrid, rootsOnPoints, uniformGrid } from './scalarSearch';
 import { messageText, msg, q, withParts, type MessageParts } from '../units/messageParts';
 
@@ -144,6 +144,92 @@ function uniqueCautions(lists: readonly (readonly Caution[])[]): Caution[] {
 }
 
 /**
+ * What the crossover and the climb-peak search share at one altitude: the
+ * checked query, the air, the stall Mach, the Mach range considered and the
+ * level-flight point at a Mach, kept by Mach so the grid each search samples
+ * is computed once (the models are pure, so a kept point is the point).
+ */
+interface MachScan {
+  readonly air: { readonly speedOfSound_m_s: number; readonly pressure_Pa: number };
+  readonly scanLo: number;
+  readonly scanHi: number;
+  readonly samples: number;
+  readonly stallMach: number | null;
+  /** True when CL at 1 g exceeds CLmax over the whole scan (no level flight). */
+  readonly stalledEverywhere: boolean;
+  readonly lo: number;
+  readonly hi: number;
+  readonly point: (mach: number) => LevelPoint;
+}
+
+function machScan(models: PerformanceModels, query: CrossoverQuery): Result<MachScan, AnalysisError> {
+  const bad = validate(query);
+  if (bad !== null) return err({ code: 'invalid_input', message: `crossover: ${bad}` });
+  const air = airAt(query.altitude_m, query.isaDev_K);
+  if (!air.ok) return air;
+  const [scanLo, scanHi] = query.machRange ?? [0.1, 0.95];
+  const samples = query.samples ?? 81;
+  const conditions = { altitude_m: query.altitude_m, mass_kg: query.mass_kg, rating: query.rating, isaDev_K: query.isaDev_K };
+  const stall = liftLimitMachs(models.aero, { altitude_m: query.altitude_m, mass_kg: query.mass_kg, loadFactor: 1 }, 'clMax', Math.min(0.02, scanLo), scanHi);
+  const stallMach = stall.exceededEverywhere ? null : stall.lowMach;
+  const a = air.value.speedOfSound_m_s;
+  const kept = new Map<number, LevelPoint>();
+  const point = (mach: number): LevelPoint => {
+    let p = kept.get(mach);
+    if (p === undefined) {
+      p = levelPoint(models, conditions, a, mach);
+      kept.set(mach, p);
+    }
+    return p;
+  };
+  return ok({
+    air: air.value,
+    scanLo,
+    scanHi,
+    samples,
+    stallMach,
+    stalledEverywhere: stall.exceededEverywhere,
+    lo: Math.max(scanLo, stallMach ?? scanLo),
+    hi: scanHi,
+    point,
+  });
+}
+
+/** The greatest steady climb rate over Mach at one altitude, mass and rating, as thrustDragCrossover reports it. */
+export interface ClimbPeak {
+  /** Mach of greatest Ps and that Ps (m/s); null when CL at 1 g exceeds CLmax over the whole range. */
+  readonly bestClimbMach: number | null;
+  readonly maxSpecificExcessPower_m_s: number | null;
+}
+
+/** Greatest Ps on the scan's grid refined by golden sections; null when Ps is nowhere finite. */
+function peakOf(scan: MachScan): { readonly x: number; readonly fx: number } | null {
+  return maximizeOnGrid((mach) => scan.point(mach).specificExcessPower_m_s, scan.lo, scan.hi, scan.samples, CROSSOVER_MACH_TOL);
+}
+
+/** The no_solution error of a scan where thrust or drag is nowhere finite. */
+function notFinite(query: CrossoverQuery, scan: MachScan): Result<never, AnalysisError> {
+  return err({ code: 'no_solution', message: `crossover at ${query.altitude_m} m: thrust or drag is not finite anywhere in Mach [${scan.lo}, ${scan.hi}]` });
+}
+
+/**
+ * Only the climb peak of thrustDragCrossover (its bestClimbMach and
+ * maxSpecificExcessPower_m_s, the same search on the same grid, so the same
+ * numbers) and its errors, without the crossings, extremes of thrust and
+ * curves: what a ceiling search needs at each altitude it tries.
+ */
+export function climbPeak(models: PerformanceModels, query: CrossoverQuery): Result<ClimbPeak, AnalysisError> {
+  const s = machScan(models, query);
+  if (!s.ok) return s;
+  const scan = s.value;
+  if (scan.stalledEverywhere) return ok({ bestClimbMach: null, maxSpecificExcessPower_m_s: null });
+  const peak = peakOf(scan);
+  // thrustDragCrossover fails when Ps or thrust is nowhere finite on the grid (Ps is finite wherever thrust and drag are).
+  if (peak === null || !uniformGrid(scan.lo, scan.hi, scan.samples).some((m) => Number.isFinite(scan.point(m).thrustAvailable_N))) return notFinite(query, scan);
+  return ok({ bestClimbMach: peak.x, maxSpecificExcessPower_m_s: peak.fx });
+}
+
+/**
  * Level-flight thrust-drag crossover (thrust-required vs thrust-available
  * curves: Anderson, Aircraft Performance and Design, ch. 5). Crossings are
  * bracketed on the Mach grid (plus the Mach of greatest excess thrust, so a
@@ -155,14 +241,10 @@ export function thrustDragCrossover(
   models: PerformanceModels,
   query: CrossoverQuery,
 ): Result<CrossoverResult, AnalysisError> {
-  const bad = validate(query);
-  if (bad !== null) return err({ code: 'invalid_input', message: `crossover: ${bad}` });
-  const air = airAt(query.altitude_m, query.isaDev_K);
-  if (!air.ok) return air;
-  const a = air.value.speedOfSound_m_s;
-  const [scanLo, scanHi] = query.machRange ?? [0.1, 0.95];
-  const samples = query.samples ?? 81;
-  const conditions = { altitude_m: query.altitude_m, mass_kg: query.mass_kg, rating: query.rating, isaDev_K: query.isaDev_K };
+  const s = machScan(models, query);
+  if (!s.ok) return s;
+  const scan = s.value;
+  const { air, scanLo, scanHi, samples, stallMach } = scan;
   const base = {
     altitude_m: query.altitude_m,
     mass_kg: query.mass_kg,
@@ -170,11 +252,8 @@ export function thrustDragCrossover(
     isaDev_K: query.isaDev_K,
     tolerance: { mach: CROSSOVER_MACH_TOL, relativeThrust: CROSSOVER_RELATIVE_THRUST_TOL },
   };
-
-  const stall = liftLimitMachs(models.aero, { altitude_m: query.altitude_m, mass_kg: query.mass_kg, loadFactor: 1 }, 'clMax', Math.min(0.02, scanLo), scanHi);
-  const stallMach = stall.exceededEverywhere ? null : stall.lowMach;
   const emptyCurves: CrossoverCurves = { mach: [], thrustAvailable_N: [], drag_N: [], excessThrust_N: [], specificExcessPower_m_s: [] };
-  if (stall.exceededEverywhere) {
+  if (scan.stalledEverywhere) {
     return ok({
       ...base,
       status: 'above_ceiling',
@@ -197,12 +276,9 @@ export function thrustDragCrossover(
       cautions: [],
     });
   }
-  const lo = Math.max(scanLo, stallMach ?? scanLo);
-  const hi = scanHi;
-  const point = (mach: number) => levelPoint(models, conditions, a, mach);
+  const { lo, hi, point } = scan;
   const excess = (mach: number) => point(mach).excessThrust_N;
   const thrust = (mach: number) => point(mach).thrustAvailable_N;
-  const ps = (mach: number) => point(mach).specificExcessPower_m_s;
 
   const xs = uniformGrid(lo, hi, samples);
   const pts = xs.map(point);
@@ -214,11 +290,9 @@ export function thrustDragCrossover(
     specificExcessPower_m_s: pts.map((p) => p.specificExcessPower_m_s),
   };
   const maxExcess = maximizeOnGrid(excess, lo, hi, samples, CROSSOVER_MACH_TOL);
-  const maxPs = maximizeOnGrid(ps, lo, hi, samples, CROSSOVER_MACH_TOL);
+  const maxPs = peakOf(scan);
   const minThrust = minimizeOnGrid(thrust, lo, hi, samples, CROSSOVER_MACH_TOL);
-  if (maxExcess === null || maxPs === null || minThrust === null) {
-    return err({ code: 'no_solution', message: `crossover at ${query.altitude_m} m: thrust or drag is not finite anywhere in Mach [${lo}, ${hi}]` });
-  }
+  if (maxExcess === null || maxPs === null || minThrust === null) return notFinite(query, scan);
   const searchPoints = [...xs, maxExcess.x].sort((p, q) => p - q);
   const crossings = rootsOnPoints(excess, searchPoints, CROSSOVER_MACH_TOL);
   const dm = 1e-7;
@@ -236,7 +310,7 @@ export function thrustDragCrossover(
   // high = min(high crossover, MMO, Mach of VMO).
   const buffet = liftLimitMachs(models.aero, { altitude_m: query.altitude_m, mass_kg: query.mass_kg, loadFactor: 1 }, 'buffetCl', Math.min(0.02, scanLo), scanHi);
   const buffetOnsetMach = buffet.exceededEverywhere ? null : buffet.lowMach;
-  const vmoMach = query.speedLimits ? machFromCas(query.speedLimits.vmo_m_s, air.value.pressure_Pa) : null;
+  const vmoMach = query.speedLimits ? machFromCas(query.speedLimits.vmo_m_s, air.pressure_Pa) : null;
   const speedLimitMach = query.speedLimits && vmoMach !== null ? Math.min(vmoMach, query.speedLimits.mmo) : null;
   const lowCandidates: SpeedLimit<LowSpeedLimitSource>[] = [{ mach: lo, source: stallMach !== null && lo === stallMach ? 'stall' : 'scanStart' }];
   if (buffet.exceededEverywhere) lowCandidates.push({ mach: hi, source: 'buffetOnset' });

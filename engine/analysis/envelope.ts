@@ -11,7 +11,7 @@ import { brent } from '../core/rootFind';
 import { err, ok, type Result } from '../core/result';
 import type { RatingName } from '../propulsion/propulsionModel';
 import type { AnalysisError, PerformanceModels } from './analysisTypes';
-import { thrustDragCrossover, type CrossoverResult } from './crossover';
+import { climbPeak, thrustDragCrossover, type ClimbPeak, type CrossoverQuery, type CrossoverResult } from './crossover';
 import { liftLimitMachs } from './liftLimitMach';
 import { airAt } from './pointState';
 import { msg, q, withParts, type MessageParts } from '../units/messageParts';
@@ -103,17 +103,8 @@ export const CEILING_ALTITUDE_TOL_M = 0.01;
 export const CLIMB_RATE_DEFINITION =
   'Steady climb rate = Ps = (T - D) V / W at the best-climb Mach (greatest Ps over Mach), at constant TAS: no acceleration factor, load factor 1.';
 
-/**
- * Level-flight envelope and ceilings for a mass (kg), rating and ISA
- * deviation (K). Each ceiling is bracketed between envelope rows where the
- * greatest Ps crosses the residual rate and refined by Brent's method to
- * CEILING_ALTITUDE_TOL_M. Ps = (T - D) V / W (energy method, Anderson,
- * Aircraft Performance and Design, ch. 5 and 6); see CLIMB_RATE_DEFINITION.
- */
-export function flightEnvelope(
-  models: PerformanceModels,
-  query: EnvelopeQuery,
-): Result<EnvelopeResult, AnalysisError> {
+/** The checked altitude rows, Mach range and residual rates of a query, or what is wrong with it. */
+function envelopeSetup(query: EnvelopeQuery): Result<{ readonly altitudes: number[]; readonly machRange: readonly [number, number]; readonly rates: readonly ResidualClimbRate[] }, AnalysisError> {
   const [hLo, hHi] = query.altitudeRange ?? [0, 15000];
   const step = query.altitudeStep_m ?? 500;
   const nBuffet = query.buffetLoadFactor ?? 1.3;
@@ -133,22 +124,106 @@ export function flightEnvelope(
       return err({ code: 'invalid_input', message: `envelope: residual climb rate "${r.name}" ${r.climbRate_m_s} m/s must be positive` });
     }
   }
-  const crossAt = (h: number) =>
-    thrustDragCrossover(models, {
-      altitude_m: h,
-      mass_kg: query.mass_kg,
-      rating: query.rating,
-      isaDev_K: query.isaDev_K,
-      machRange,
-      ...(query.speedLimits ? { speedLimits: query.speedLimits } : {}),
-    });
-
   const altitudes: number[] = [];
   for (let h = hLo; h < hHi - 1e-9; h += step) altitudes.push(h);
   altitudes.push(hHi);
+  return ok({ altitudes, machRange, rates });
+}
+
+/** The climb-peak query of the envelope at altitude h (m). */
+function peakQuery(query: EnvelopeQuery, machRange: readonly [number, number], h: number): CrossoverQuery {
+  return {
+    altitude_m: h,
+    mass_kg: query.mass_kg,
+    rating: query.rating,
+    isaDev_K: query.isaDev_K,
+    machRange,
+    ...(query.speedLimits ? { speedLimits: query.speedLimits } : {}),
+  };
+}
+
+/** An envelope row's altitude (m) and climb peak, all the ceilings need of it. */
+interface PeakRow {
+  readonly altitude_m: number;
+  readonly bestClimbMach: number | null;
+  readonly maxClimbRate_m_s: number | null;
+}
+
+/**
+ * The absolute ceiling and one per residual rate from rows of (altitude,
+ * greatest Ps or null): each bracketed between the first row where the
+ * greatest Ps falls below the rate and the row before, then refined by
+ * Brent's method on the climb peak to CEILING_ALTITUDE_TOL_M.
+ */
+function ceilingsOf(
+  models: PerformanceModels,
+  query: EnvelopeQuery,
+  machRange: readonly [number, number],
+  rows: readonly PeakRow[],
+  rates: readonly ResidualClimbRate[],
+  hLo: number,
+  hHi: number,
+): Ceiling[] {
+  // Peaks by altitude, the rows' first: Brent starts at two rows and ends where it last looked.
+  const peaks = new Map<number, Result<ClimbPeak, AnalysisError>>();
+  for (const r of rows) peaks.set(r.altitude_m, ok({ bestClimbMach: r.bestClimbMach, maxSpecificExcessPower_m_s: r.maxClimbRate_m_s }));
+  const peakAt = (h: number) => {
+    let p = peaks.get(h);
+    if (p === undefined) {
+      p = climbPeak(models, peakQuery(query, machRange, h));
+      peaks.set(h, p);
+    }
+    return p;
+  };
+  const maxPsAt = (h: number): number => {
+    const c = peakAt(h);
+    return c.ok && c.value.maxSpecificExcessPower_m_s !== null ? c.value.maxSpecificExcessPower_m_s : Number.NaN;
+  };
+  const ceilingFor = (name: string, rate: number): Ceiling => {
+    const margin = (i: number) => (rows[i]!.maxClimbRate_m_s ?? -Infinity) - rate;
+    if (margin(0) < 0) {
+      return { name, climbRate_m_s: rate, altitude_m: null, bestClimbMach: null, climbRateAtCeiling_m_s: null, ...withParts(msg`The ${name} ceiling lies below ${q(hLo, 'altitude')}: the climb rate there is under ${q(rate, 'climbRate')}.`) };
+    }
+    const i = rows.findIndex((_, k) => margin(k) < 0);
+    if (i < 0) {
+      return { name, climbRate_m_s: rate, altitude_m: null, bestClimbMach: null, climbRateAtCeiling_m_s: null, ...withParts(msg`The ${name} ceiling lies above ${q(hHi, 'altitude')}, the top of the altitude range.`) };
+    }
+    const root = brent((h) => maxPsAt(h) - rate, rows[i - 1]!.altitude_m, rows[i]!.altitude_m, { xTol: CEILING_ALTITUDE_TOL_M });
+    if (!root.ok) {
+      return { name, climbRate_m_s: rate, altitude_m: null, bestClimbMach: null, climbRateAtCeiling_m_s: null, ...withParts(msg`The ${name} ceiling could not be refined between ${q(rows[i - 1]!.altitude_m, 'altitude')} and ${q(rows[i]!.altitude_m, 'altitude')}: ${root.error.message}`) };
+    }
+    const c = peakAt(root.value.x);
+    const at = c.ok ? c.value : null;
+    return {
+      name,
+      climbRate_m_s: rate,
+      altitude_m: root.value.x,
+      bestClimbMach: at?.bestClimbMach ?? null,
+      climbRateAtCeiling_m_s: at?.maxSpecificExcessPower_m_s ?? null,
+      ...withParts(msg`${name} ceiling ${q(root.value.x, 'altitude')} (greatest steady climb rate ${q(rate, 'climbRate')} at M ${at?.bestClimbMach == null ? '?' : q(at.bestClimbMach, 'mach')}).`),
+    };
+  };
+  return [ceilingFor('absolute', 0), ...rates.map((r) => ceilingFor(r.name, r.climbRate_m_s))];
+}
+
+/**
+ * Level-flight envelope and ceilings for a mass (kg), rating and ISA
+ * deviation (K). Each ceiling is bracketed between envelope rows where the
+ * greatest Ps crosses the residual rate and refined by Brent's method to
+ * CEILING_ALTITUDE_TOL_M. Ps = (T - D) V / W (energy method, Anderson,
+ * Aircraft Performance and Design, ch. 5 and 6); see CLIMB_RATE_DEFINITION.
+ */
+export function flightEnvelope(
+  models: PerformanceModels,
+  query: EnvelopeQuery,
+): Result<EnvelopeResult, AnalysisError> {
+  const setup = envelopeSetup(query);
+  if (!setup.ok) return setup;
+  const { altitudes, machRange, rates } = setup.value;
+  const nBuffet = query.buffetLoadFactor ?? 1.3;
   const rows: EnvelopeRow[] = [];
   for (const h of altitudes) {
-    const c = crossAt(h);
+    const c = thrustDragCrossover(models, peakQuery(query, machRange, h));
     if (!c.ok) return err({ ...c.error, message: `envelope at ${h} m: ${c.error.message}` });
     const lift = { altitude_m: h, mass_kg: query.mass_kg };
     const b1 = liftLimitMachs(models.aero, { ...lift, loadFactor: 1 }, 'buffetCl', machRange[0], machRange[1]);
@@ -177,44 +252,35 @@ export function flightEnvelope(
       maxClimbRate_m_s: v.maxSpecificExcessPower_m_s,
     });
   }
-
-  const maxPsAt = (h: number): number => {
-    const c = crossAt(h);
-    return c.ok && c.value.maxSpecificExcessPower_m_s !== null ? c.value.maxSpecificExcessPower_m_s : Number.NaN;
-  };
-  const ceilingFor = (name: string, rate: number): Ceiling => {
-    const margin = (i: number) => (rows[i]!.maxClimbRate_m_s ?? -Infinity) - rate;
-    if (margin(0) < 0) {
-      return { name, climbRate_m_s: rate, altitude_m: null, bestClimbMach: null, climbRateAtCeiling_m_s: null, ...withParts(msg`The ${name} ceiling lies below ${q(hLo, 'altitude')}: the climb rate there is under ${q(rate, 'climbRate')}.`) };
-    }
-    const i = rows.findIndex((_, k) => margin(k) < 0);
-    if (i < 0) {
-      return { name, climbRate_m_s: rate, altitude_m: null, bestClimbMach: null, climbRateAtCeiling_m_s: null, ...withParts(msg`The ${name} ceiling lies above ${q(hHi, 'altitude')}, the top of the altitude range.`) };
-    }
-    const root = brent((h) => maxPsAt(h) - rate, rows[i - 1]!.altitude_m, rows[i]!.altitude_m, { xTol: CEILING_ALTITUDE_TOL_M });
-    if (!root.ok) {
-      return { name, climbRate_m_s: rate, altitude_m: null, bestClimbMach: null, climbRateAtCeiling_m_s: null, ...withParts(msg`The ${name} ceiling could not be refined between ${q(rows[i - 1]!.altitude_m, 'altitude')} and ${q(rows[i]!.altitude_m, 'altitude')}: ${root.error.message}`) };
-    }
-    const c = crossAt(root.value.x);
-    const at = c.ok ? c.value : null;
-    return {
-      name,
-      climbRate_m_s: rate,
-      altitude_m: root.value.x,
-      bestClimbMach: at?.bestClimbMach ?? null,
-      climbRateAtCeiling_m_s: at?.maxSpecificExcessPower_m_s ?? null,
-      ...withParts(msg`${name} ceiling ${q(root.value.x, 'altitude')} (greatest steady climb rate ${q(rate, 'climbRate')} at M ${at?.bestClimbMach == null ? '?' : q(at.bestClimbMach, 'mach')}).`),
-    };
-  };
-  const ceilings = [ceilingFor('absolute', 0), ...rates.map((r) => ceilingFor(r.name, r.climbRate_m_s))];
   return ok({
     mass_kg: query.mass_kg,
     rating: query.rating,
     isaDev_K: query.isaDev_K,
     buffetLoadFactor: nBuffet,
     rows,
-    ceilings,
+    ceilings: ceilingsOf(models, query, machRange, rows, rates, altitudes[0]!, altitudes[altitudes.length - 1]!),
     climbRateDefinition: CLIMB_RATE_DEFINITION,
     altitudeTolerance_m: CEILING_ALTITUDE_TOL_M,
   });
+}
+
+/**
+ * The ceilings of flightEnvelope alone (the same rows, brackets and Brent
+ * refinement, so the same altitudes), with only the climb peak computed at
+ * each altitude: no crossings, buffet or speed-limit lines. For analyses
+ * that report ceilings only (the inlet comparison).
+ */
+export function flightCeilings(models: PerformanceModels, query: EnvelopeQuery): Result<readonly Ceiling[], AnalysisError> {
+  const setup = envelopeSetup(query);
+  if (!setup.ok) return setup;
+  const { altitudes, machRange, rates } = setup.value;
+  const rows: PeakRow[] = [];
+  for (const h of altitudes) {
+    const c = climbPeak(models, peakQuery(query, machRange, h));
+    if (!c.ok) return err({ ...c.error, message: `envelope at ${h} m: ${c.error.message}` });
+    rows.push({ altitude_m: h, bestClimbMach: c.value.bestClimbMach, maxClimbRate_m_s: c.value.maxSpecificExcessPower_m_s });
+    // Every ceiling is bracketed at or below the first row without a positive climb rate (the rates are >= 0): the rows above are not needed.
+    if (!((c.value.maxSpecificExcessPower_m_s ?? -Infinity) >= 0)) break;
+  }
+  return ok(ceilingsOf(models, query, machRange, rows, rates, altitudes[0]!, altitudes[altitudes.length - 1]!));
 }

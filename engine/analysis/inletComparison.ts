@@ -12,7 +12,7 @@ import type { RatingName } from '../propulsion/propulsionModel';
 import { solveMission } from '../mission/solveMission';
 import type { AnalysisError, MissionSolver } from './analysisTypes';
 import { thrustDragCrossover } from './crossover';
-import { flightEnvelope, type Ceiling } from './envelope';
+import { flightCeilings, type Ceiling } from './envelope';
 import { shapleyValues } from './shapleyAttribution';
 
 export type InletFactor = 'recovery' | 'spillage' | 'externalDrag' | 'weight';
@@ -143,14 +143,14 @@ export function compareInlets(
     const models = { aero: input.aero, propulsion: input.propulsion };
     const c = thrustDragCrossover(models, condition);
     if (!c.ok) return err({ ...c.error, message: `inlet comparison, ${name}: ${c.error.message}` });
-    const env = flightEnvelope(models, {
+    const ceilings = flightCeilings(models, {
       mass_kg,
       rating: 'maxClimb',
       isaDev_K: input.isaDev_K,
       altitudeRange: options.ceilingAltitudeRange ?? [0, 15000],
       altitudeStep_m: options.ceilingAltitudeStep_m ?? 1000,
     });
-    if (!env.ok) return err({ ...env.error, message: `inlet comparison, ${name}: ${env.error.message}` });
+    if (!ceilings.ok) return err({ ...ceilings.error, message: `inlet comparison, ${name}: ${ceilings.error.message}` });
     return ok({
       name,
       blockFuel_kg: r.blockFuel_kg,
@@ -158,7 +158,7 @@ export function compareInlets(
       tripFuel_kg: r.tripFuel_kg,
       takeoffMass_kg: r.takeoffMass_kg,
       crossover: { status: c.value.status, lowMach: c.value.lowMach, highMach: c.value.highMach, minThrustMach: c.value.minThrustMach },
-      ceilings: env.value.ceilings,
+      ceilings: ceilings.value,
       cautions: [...r.cautions, ...c.value.cautions],
     });
   };

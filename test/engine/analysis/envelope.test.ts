@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { thrustDragCrossover } from '../../../engine/analysis/crossover';
-import { flightEnvelope } from '../../../engine/analysis/envelope';
+import { climbPeak, thrustDragCrossover } from '../../../engine/analysis/crossover';
+import { flightCeilings, flightEnvelope } from '../../../engine/analysis/envelope';
 import { expectOk } from '../../../engine/core/result';
 import { expectClose } from '../../support/assertInDelta';
 import { G0, TEST_POLAR, analyticPropulsion, isaPressure_Pa, parabolicAero } from './analyticModels';
@@ -74,5 +74,28 @@ describe('flightEnvelope', () => {
     expect(low.ceilings[0]!.message).toMatch(/above 13,123 ft \(4,000 m\)/);
     const bad = flightEnvelope(models, { ...query, residualClimbRates: [{ name: 'odd', climbRate_m_s: -1 }] });
     expect(bad.ok ? '' : bad.error.message).toMatch(/"odd" -1 m\/s/);
+  });
+
+  it('flightCeilings (climb peaks only) gives the envelope\'s ceilings, on the scipy reference', () => {
+    const only = expectOk(flightCeilings(models, query), 'ceilings');
+    expect(only).toEqual(env.ceilings);
+    // test/reference/analysisReference.py: absolute ceiling 9956.560136 m
+    expectClose(only[0]!.altitude_m!, 9956.560136, { abs: 0.05 }, 'scipy reference');
+    const heavy = expectOk(flightCeilings(models, { ...query, mass_kg: 70000 }), 'ceilings');
+    expect(heavy).toEqual(expectOk(flightEnvelope(models, { ...query, mass_kg: 70000 }), 'envelope').ceilings);
+    const low = expectOk(flightCeilings(models, { ...query, altitudeRange: [0, 4000] }), 'ceilings');
+    expect(low[0]!.altitude_m).toBeNull();
+    const bad = flightCeilings(models, { ...query, residualClimbRates: [{ name: 'odd', climbRate_m_s: -1 }] });
+    expect(bad.ok ? '' : bad.error.message).toMatch(/"odd" -1 m\/s/);
+  });
+
+  it('climbPeak is the crossover\'s best climb (Mach and Ps), and null where the wing cannot lift the mass', () => {
+    for (const h of [0, 5000, 9000, 9900]) {
+      const full = expectOk(thrustDragCrossover(models, { altitude_m: h, mass_kg: 60000, rating: 'maxCruise', isaDev_K: 0 }), 'crossover');
+      const peak = expectOk(climbPeak(models, { altitude_m: h, mass_kg: 60000, rating: 'maxCruise', isaDev_K: 0 }), 'peak');
+      expect(peak).toEqual({ bestClimbMach: full.bestClimbMach, maxSpecificExcessPower_m_s: full.maxSpecificExcessPower_m_s });
+    }
+    const stalled = expectOk(climbPeak(models, { altitude_m: 30000, mass_kg: 60000, rating: 'maxCruise', isaDev_K: 0, machRange: [0.1, 0.5] }), 'stalled');
+    expect(stalled.maxSpecificExcessPower_m_s).toBeNull();
   });
 });
