@@ -99,11 +99,15 @@ export function deckCurve(deck: EngineDeck): {
   let filled = false;
   let airflowFactor = 1;
   let thrustFactor = 1;
+  // The temperature factor sqrt(T/T_ISA) alone: the sensitivities are tabulated raw in a corrected deck too, so
+  // they take it and not the corrected-parameter multiply-back (as in finishLookup).
+  let temperatureFactor = 1;
   const factors = new Float64Array(3);
   return {
     prepare(condition) {
       filled = fillDeckNodes(deck.grid, deck.policy, condition.isaDev_K, condition.altitude_m, condition.mach, nodes);
-      airflowFactor = !deck.hasIsaDev && condition.isaDev_K !== 0 ? 1 / temperatureFlowFactor(condition.altitude_m, condition.isaDev_K) : 1;
+      temperatureFactor = !deck.hasIsaDev && condition.isaDev_K !== 0 ? temperatureFlowFactor(condition.altitude_m, condition.isaDev_K) : 1;
+      airflowFactor = 1 / temperatureFactor;
       thrustFactor = 1;
       if (deck.interpolation === 'corrected') {
         queryCorrectionInto(deck, condition.altitude_m, condition.mach, condition.isaDev_K, factors);
@@ -116,7 +120,7 @@ export function deckCurve(deck: EngineDeck): {
       // Floored at zero as lookupDeck floors them (the point finally evaluated carries its caution).
       out[0] = Math.max(values[0]! * thrustFactor, 0);
       out[1] = deck.hasAirflow ? Math.max(values[2]! * airflowFactor, 0) : Number.NaN;
-      if (deck.hasSensitivities) writeSensitivities(readSensitivitiesInto(values, 3, deck.hasAirflow, 1 / airflowFactor, sensitivities), out, 2);
+      if (deck.hasSensitivities) writeSensitivities(readSensitivitiesInto(values, 3, deck.hasAirflow, temperatureFactor, sensitivities), out, 2);
       return true;
     },
   };

@@ -1,15 +1,17 @@
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_CAUTION_SETTINGS } from '../../../engine/cautions/cautionSettings';
 import { expectOk } from '../../../engine/core/result';
+import { CURVE_VALUES } from '../../../engine/propulsion/deckAccess';
+import { deckForInterpolation } from '../../../engine/propulsion/deckCorrection';
 import { lookupDeck } from '../../../engine/propulsion/deckLookup';
 import { temperatureFlowFactor } from '../../../engine/propulsion/deckTemperature';
 import type { InletDesign } from '../../../engine/propulsion/inletDesign';
 import type { InstallationSettings } from '../../../engine/propulsion/installationCorrections';
-import { applyDeckSensitivities } from '../../../engine/propulsion/installationSensitivities';
+import { applyDeckSensitivities, SENSITIVITY_FIELDS } from '../../../engine/propulsion/installationSensitivities';
 import { describeInstallationMethod } from '../../../engine/propulsion/installationMethod';
 import { installedLossBreakdown } from '../../../engine/propulsion/installedLossBreakdown';
-import { makeInstalledModel } from '../../../engine/propulsion/installedModel';
-import { deckAccess, makeInstalledPropulsion } from '../../../engine/propulsion/installedPropulsion';
+import { FOR_THRUST_TOLERANCE, makeInstalledModel } from '../../../engine/propulsion/installedModel';
+import { deckAccess, deckCurve, makeInstalledPropulsion } from '../../../engine/propulsion/installedPropulsion';
 import { spillageDrag, additiveDrag } from '../../../engine/propulsion/spillageDrag';
 import { streamTubeArea } from '../../../engine/propulsion/inletFlow';
 import { atmosphere } from '../../../engine/aero/standardAtmosphere';
@@ -149,6 +151,43 @@ describe('installation by deck sensitivities', () => {
     expectClose(warm.dThrust_dExtraction_N_W, cold.dThrust_dExtraction_N_W / f, { rel: 1e-14 }, 'F/delta per P/(delta sqrt theta)');
     expectClose(warm.dFuelFlow_dExtraction_kg_s_W, cold.dFuelFlow_dExtraction_kg_s_W, { rel: 1e-15 }, 'Wf per P, both delta sqrt(theta)');
     expectClose(warm.dAirflow_dExtraction_kg_s_W!, cold.dAirflow_dExtraction_kg_s_W! / (f * f), { rel: 1e-14 }, 'W per P');
+  });
+
+  it('forThrust meets the thrust asked for on a corrected-parameter deck with sensitivities', () => {
+    const m = makeInstalledPropulsion({ deck, engineCount: 2, inlet: INLET, installation: { ...INSTALL, deckInterpolation: 'corrected' }, cautionSettings: DEFAULT_CAUTION_SETTINGS });
+    for (const condition of [COND, { altitude_m: 9500, mach: 0.8, isaDev_K: 0 }, { altitude_m: 2000, mach: 0.4, isaDev_K: 12 }]) {
+      const required = 0.6 * m.atRating(condition, 'maxCruise').thrust_N;
+      const p = m.forThrust(condition, required);
+      expect(p.limit).toBe('within');
+      expectClose(p.thrust_N, required, { rel: FOR_THRUST_TOLERANCE }, 'forThrust tolerance');
+      expectClose(m.atPower(condition, p.power).thrust_N, p.thrust_N, { rel: 1e-15 }, 'the point is the atPower point');
+    }
+  });
+
+  it('in corrected-parameter interpolation the sensitivities stay raw, on the deck curve as in lookupDeck (closed form)', () => {
+    // The corrected grid holds F/delta, Wf/(delta sqrt theta), W sqrt(theta)/delta; the sensitivity columns are kept
+    // as tabulated, so an affine deck returns its own sensitivities at any point (and, without an ISA axis, the
+    // referred-group temperature factors of the test above on a hot day).
+    const corrected = deckForInterpolation(deck, 'corrected');
+    const curve = deckCurve(corrected);
+    const out = new Float64Array(CURVE_VALUES);
+    for (const condition of [COND, { ...COND, isaDev_K: 15 }, { altitude_m: 9500, mach: 0.8, isaDev_K: -8 }]) {
+      const f = condition.isaDev_K === 0 ? 1 : temperatureFlowFactor(condition.altitude_m, condition.isaDev_K);
+      curve.prepare(condition);
+      for (const power of [0.2, 0.45, POWER, 1]) {
+        const exact = syntheticAt(condition.altitude_m, condition.mach, power).sensitivities;
+        const looked = expectOk(lookupDeck(corrected, condition, power), 'corrected lookup');
+        expect(curve.evaluate(power, out)).toBe(true);
+        expectClose(looked.sensitivities!.dThrust_dRecovery_N, exact.dThrust_dRecovery_N, { rel: 1e-12 }, 'closed form dF/deta');
+        expectClose(looked.sensitivities!.dThrust_dExtraction_N_W, exact.dThrust_dExtraction_N_W / f, { rel: 1e-12 }, 'closed form dF/dP');
+        expectClose(looked.sensitivities!.dAirflow_dRecovery_kg_s!, exact.dAirflow_dRecovery_kg_s! / f, { rel: 1e-12 }, 'closed form dW/deta');
+        expect(out[0]).toBe(looked.thrust_N);
+        expectClose(out[1]!, looked.airflow_kg_s!, { rel: 1e-15 }, 'airflow (factors multiplied in another order)');
+        SENSITIVITY_FIELDS.forEach((field) => {
+          expect(out[2 + field.slot], `${field.key} at power ${power}`).toBe(looked.sensitivities![field.key] ?? 0);
+        });
+      }
+    }
   });
 
   it('a deck with sensitivities and no airflow installs thrust and fuel flow through them, without spillage', () => {
