@@ -35,6 +35,8 @@ export interface TripOutcome {
   readonly solvableFuel_kg: number;
   /** Mass at the end of the solvable cruise leg (kg), 0 when there is none. */
   readonly solvableEndMass_kg: number;
+  /** Fuel per metre (kg/m, mission's basis) at the end of the solvable cruise leg (its last sample), 0 when unknown. */
+  readonly solvableEndFuelPerMetre: number;
 }
 
 /** Index of the cruise leg whose distance is solved (distance_m null), or -1. */
@@ -134,6 +136,15 @@ function flyLeg(ctx: MissionContext, index: number, state: StateVector, solved: 
   }
 }
 
+/** Fuel per metre (kg/m) of the mission's distance basis at a leg's last sample (level flight: TAS, plus the wind over the ground); 0 when unknown. */
+function endFuelPerMetre(ctx: MissionContext, index: number, out: LegOutcome): number {
+  const sample = out.lastSample;
+  if (sample === null) return 0;
+  const speed = sample.tas_m_s + (distanceIndex(ctx.input) === S_GROUND ? legEnvironment(ctx.input, ctx.input.legs[index]).wind_m_s : 0);
+  const perMetre = sample.fuelFlow_kg_s / speed;
+  return speed > 0 && Number.isFinite(perMetre) && perMetre > 0 ? perMetre : 0;
+}
+
 /** flyLeg with a last-resort guard: a fault inside a leg (a bug) ends the trip with 'internal_error' naming the leg. */
 function flyLegGuarded(ctx: MissionContext, index: number, state: StateVector, solved: SolvedDistance, isSolvable: boolean): LegOutcome {
   try {
@@ -157,6 +168,7 @@ export function flyTrip(ctx: MissionContext, rampMass_kg: number, solvedDistance
   let solvableEnd_m = 0;
   let solvableEndMass_kg = 0;
   let solvableFuel_kg = 0;
+  let solvableEndFuelPerMetre = 0;
   const rows: LegRow[] = [];
   for (let i = 0; i < ctx.input.legs.length; i++) {
     if (i === first) takeoff = Float64Array.from(state);
@@ -184,16 +196,17 @@ export function flyTrip(ctx: MissionContext, rampMass_kg: number, solvedDistance
       solvableEnd_m = state[k];
       solvableEndMass_kg = state[S_MASS];
       solvableFuel_kg = start[S_MASS] - state[S_MASS];
+      solvableEndFuelPerMetre = endFuelPerMetre(ctx, i, out);
     }
     if (i === last) landing = Float64Array.from(state);
     if (out.status !== 'ok') {
       // A failed mission always names the leg, the time and the cause.
       const where = msg` (leg ${i + 1} "${ctx.input.legs[i].name}", ${q(state[S_TIME], 'time')} after block-out)`;
       const told = withParts([...partsOf(out), ...where]);
-      return { status: out.status, ...told, rows, end: state, takeoff, landing: state, solvableDistance_m, afterSolvable_m: 0, solvableEndMass_kg, solvableFuel_kg };
+      return { status: out.status, ...told, rows, end: state, takeoff, landing: state, solvableDistance_m, afterSolvable_m: 0, solvableEndMass_kg, solvableFuel_kg, solvableEndFuelPerMetre };
     }
   }
   if (last < first) landing = Float64Array.from(state);
   const afterSolvable_m = solvable >= 0 ? state[k] - solvableEnd_m : 0;
-  return { status: 'ok', message: '', rows, end: state, takeoff, landing, solvableDistance_m, afterSolvable_m, solvableEndMass_kg, solvableFuel_kg };
+  return { status: 'ok', message: '', rows, end: state, takeoff, landing, solvableDistance_m, afterSolvable_m, solvableEndMass_kg, solvableFuel_kg, solvableEndFuelPerMetre };
 }

@@ -21,16 +21,31 @@ import { flyTrip, solvableLegIndex, type SolvedDistance, type TripOutcome } from
 import { distanceIndex, legEnvironment, type MissionContext } from './missionContext';
 import { S_AIR, S_MASS, S_TIME } from './missionState';
 import { createFlightLog, type FlightLog } from './timeHistoryBuilder';
+import type { MissionStart } from './missionTypes';
 import { msg, q, type MessageParts } from '../units/messageParts';
 
-/** Fuel residual tolerance (kg): the mission lands with the reserve plus 0 to this much (never less). */
-export const FUEL_TOLERANCE_KG = 0.1;
-/** The iteration aims at the middle of the band [0, FUEL_TOLERANCE_KG] so the reserve is never undercut. */
-const AIM_KG = FUEL_TOLERANCE_KG / 2;
+/**
+ * Fuel residual tolerance (kg): the mission lands with the reserve plus 0 to this much (never less). At 0.02 kg the
+ * converged block fuel of the demo is within 1e-6 relative of the exactly converged one (its block fuel moves by
+ * about 0.15 kg per kg of residual; docs/mission.md, Solve modes).
+ */
+export const FUEL_TOLERANCE_KG = 0.02;
 
-/** True when a residual (kg) lies in [0, FUEL_TOLERANCE_KG]. */
-function fuelConverged(residual_kg: number): boolean {
-  return residual_kg >= 0 && residual_kg <= FUEL_TOLERANCE_KG;
+/** The fuel band a solve iterates into: [0, tolerance_kg], aimed at its middle so the reserve is never undercut. */
+interface FuelBand {
+  readonly tolerance_kg: number;
+  readonly aim_kg: number;
+}
+
+/** The band of a tolerance (kg): the default unless a positive finite one is given (convergence studies). */
+export function fuelBand(tolerance_kg: number | undefined): FuelBand {
+  const t = tolerance_kg !== undefined && Number.isFinite(tolerance_kg) && tolerance_kg > 0 ? tolerance_kg : FUEL_TOLERANCE_KG;
+  return { tolerance_kg: t, aim_kg: t / 2 };
+}
+
+/** True when a residual (kg) lies in [0, band's tolerance]. */
+function fuelConverged(residual_kg: number, band: FuelBand): boolean {
+  return residual_kg >= 0 && residual_kg <= band.tolerance_kg;
 }
 /** Range tolerance (m) of the payloadRange mode. */
 export const DISTANCE_TOLERANCE_M = 1;
@@ -72,7 +87,7 @@ interface IterationPoint {
  * did not converge within its passes or guard.
  */
 export type IterationOutcome =
-  | (IterationPoint & { readonly kind: 'converged'; readonly pass: MissionEvaluation })
+  | (IterationPoint & { readonly kind: 'converged'; readonly pass: MissionEvaluation; readonly warmStart: MissionStart })
   | (IterationPoint & { readonly kind: 'flightFailed'; readonly failure: MissionEvaluation })
   | (IterationPoint & { readonly kind: 'infeasible'; readonly message: MessageParts })
   | (IterationPoint & { readonly kind: 'notConverged'; readonly message: MessageParts });
@@ -98,39 +113,94 @@ function failedFlight(e: MissionEvaluation): boolean {
   return e.trip.status !== 'ok' || e.reserves.status !== 'ok';
 }
 
+/** A usable number: finite, and positive when `positive`. */
+function usable(v: number | undefined, positive = false): v is number {
+  return v !== undefined && Number.isFinite(v) && (!positive || v > 0);
+}
+
 /**
- * payloadRange: ramp mass (kg) so the residual vanishes while the trip's
- * distance (mission's basis) is `range_m`. The solvable leg ends at its top of
- * descent: where the distance flown plus the distance the legs after it will
- * take equals the range, the latter predicted as a linear function of the
- * mass there from the last two passes (within DISTANCE_TOLERANCE_M at
- * convergence).
+ * The distance after the solvable cruise leg (m) as a linear function of the mass at its end (kg): the top of
+ * descent the trip predicts. Each pass adds a point; the slope is the one through the last two points at least
+ * 1 kg apart (a warm start's slope until then; none, a constant, on a cold start).
  */
-export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess_kg: number): IterationOutcome {
-  const seen: { readonly mass_kg: number; readonly after_m: number }[] = [];
-  const afterOf = (mass_kg: number) => {
-    const n = seen.length;
-    if (n === 0) return 0;
-    const b = seen[n - 1];
-    if (n === 1 || Math.abs(b.mass_kg - seen[n - 2].mass_kg) < 1) return b.after_m;
-    const a = seen[n - 2];
-    return b.after_m + ((b.after_m - a.after_m) / (b.mass_kg - a.mass_kg)) * (mass_kg - b.mass_kg);
-  };
-  const distance = { endDistanceOf: (mass_kg: number) => range_m - afterOf(mass_kg) };
+class AfterSolvableModel {
+  private mass_kg = 0;
+  private distance_m = 0;
+  private perKg_m = 0;
+  private known = false;
+
+  constructor(prior: MissionStart['afterSolvable']) {
+    if (prior && usable(prior.mass_kg, true) && usable(prior.distance_m) && usable(prior.perKg_m)) {
+      this.mass_kg = prior.mass_kg;
+      this.distance_m = prior.distance_m;
+      this.perKg_m = prior.perKg_m;
+      this.known = true;
+    }
+  }
+
+  at(mass_kg: number): number {
+    return this.known ? this.distance_m + this.perKg_m * (mass_kg - this.mass_kg) : 0;
+  }
+
+  /** Adds a pass's end-of-leg mass (kg) and distance after the leg (m). */
+  add(mass_kg: number, distance_m: number): void {
+    if (!usable(mass_kg, true) || !usable(distance_m)) return;
+    if (this.known && Math.abs(mass_kg - this.mass_kg) >= 1) this.perKg_m = (distance_m - this.distance_m) / (mass_kg - this.mass_kg);
+    this.mass_kg = mass_kg;
+    this.distance_m = distance_m;
+    this.known = true;
+  }
+
+  model(): MissionStart['afterSolvable'] {
+    return this.known ? { mass_kg: this.mass_kg, distance_m: this.distance_m, perKg_m: this.perKg_m } : undefined;
+  }
+}
+
+/** The cold second-pass slope d(residual)/d(ramp mass) (-): the landing/ramp mass ratio of a pass (Breguet-like flight), 0.85 when implausible. */
+function ratioSlope(e: MissionEvaluation, rampMass_kg: number): number {
+  const ratio = e.trip.landing[S_MASS] / rampMass_kg;
+  return Number.isFinite(ratio) && ratio > 0.2 && ratio <= 1 ? ratio : 0.85;
+}
+
+/**
+ * payloadRange: ramp mass (kg) so the residual lies in the fuel band while the trip's distance (mission's basis)
+ * is `range_m`. The solvable leg ends at its top of descent: where the distance flown plus the distance the legs
+ * after it will take equals the range, the latter predicted as a linear function of the mass there
+ * (AfterSolvableModel; within DISTANCE_TOLERANCE_M at convergence). The first pass flies from the warm start's ramp
+ * mass, else `firstGuess_kg`; the second steps with the warm start's slope, else the landing/ramp mass ratio; then
+ * the secant method, all on each pass's residual corrected to exactly the range.
+ */
+export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess_kg: number, start: MissionStart = {}, band: FuelBand = fuelBand(undefined)): IterationOutcome {
+  const after = new AfterSolvableModel(start.afterSolvable);
+  const distance = { endDistanceOf: (mass_kg: number) => range_m - after.at(mass_kg) };
   const basis = distanceIndex(ctx.input);
   const remember = (e: MissionEvaluation) => {
-    if (e.trip.solvableDistance_m > 0) seen.push({ mass_kg: e.trip.solvableEndMass_kg, after_m: e.trip.afterSolvable_m });
+    if (e.trip.solvableDistance_m > 0) after.add(e.trip.solvableEndMass_kg, e.trip.afterSolvable_m);
   };
-  let x0 = firstGuess_kg;
+  let x0 = usable(start.rampMass_kg, true) && start.rampMass_kg > ctx.zeroFuelMass_kg ? start.rampMass_kg : firstGuess_kg;
   let e0 = evaluateMission(scratch(ctx), x0, distance);
   let d = e0.trip.solvableDistance_m;
   if (failedFlight(e0)) return { kind: 'flightFailed', rampMass_kg: x0, distance_m: d, iterations: 1, residual_kg: e0.residual_kg, failure: e0 };
+  const converged = (x: number, e: MissionEvaluation, k: number, slope: number): IterationOutcome => ({
+    kind: 'converged',
+    rampMass_kg: x,
+    distance_m: e.trip.solvableDistance_m,
+    iterations: k,
+    residual_kg: e.residual_kg,
+    pass: e,
+    warmStart: { rampMass_kg: x, slope, afterSolvable: after.model() },
+  });
+  // A warm start may land in the band at once.
+  if (fuelConverged(e0.residual_kg, band) && Math.abs(e0.trip.end[basis] - range_m) <= DISTANCE_TOLERANCE_M) {
+    remember(e0);
+    return converged(x0, e0, 1, usable(start.slope) ? start.slope : ratioSlope(e0, x0));
+  }
   remember(e0);
-  // The residual each pass would have had at exactly the range: the distance error costs the solvable leg's fuel per metre.
-  const atRange = (e: MissionEvaluation) => e.residual_kg - AIM_KG + (e.trip.end[basis] - range_m) * solvableFuelPerMetre(e);
-  // First slope: for a Breguet-like flight, d(landing fuel)/d(ramp mass) = landing mass / ramp mass.
-  const ratio = e0.trip.landing[S_MASS] / x0;
-  let x1 = x0 - atRange(e0) / (Number.isFinite(ratio) && ratio > 0.2 && ratio <= 1 ? ratio : 0.85);
+  // The residual each pass would have had at exactly the range: the distance error costs the solvable leg's fuel per metre at its end.
+  const atRange = (e: MissionEvaluation) => e.residual_kg - band.aim_kg + (e.trip.end[basis] - range_m) * solvableFuelPerMetre(e);
+  let slope = usable(start.slope) && Math.abs(start.slope) > 0.05 ? start.slope : ratioSlope(e0, x0);
+  let f0 = atRange(e0);
+  let x1 = x0 - f0 / slope;
   const guard = RAMP_MASS_GUARD * Math.max(ctx.input.airframe.mtow_kg, ctx.zeroFuelMass_kg + ctx.input.airframe.maxFuel_kg);
   for (let k = 2; k <= MAX_ITERATIONS; k++) {
     if (!Number.isFinite(x1) || x1 <= ctx.zeroFuelMass_kg * 0.5 || x1 > guard) {
@@ -140,8 +210,12 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
     d = e1.trip.solvableDistance_m;
     if (failedFlight(e1)) return { kind: 'flightFailed', rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, failure: e1 };
     const distanceError = e1.trip.end[basis] - range_m;
-    if (fuelConverged(e1.residual_kg) && Math.abs(distanceError) <= DISTANCE_TOLERANCE_M) {
-      return { kind: 'converged', rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, pass: e1 };
+    const f1 = atRange(e1);
+    const secant = (f1 - f0) / (x1 - x0);
+    if (Number.isFinite(secant) && Math.abs(secant) > 0.05) slope = secant;
+    if (fuelConverged(e1.residual_kg, band) && Math.abs(distanceError) <= DISTANCE_TOLERANCE_M) {
+      remember(e1);
+      return converged(x1, e1, k, slope);
     }
     if (d === 0 && distanceError > DISTANCE_TOLERANCE_M) {
       return {
@@ -154,68 +228,84 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
       };
     }
     remember(e1);
-    // Secant method on the residual at exactly the range.
-    const f0 = atRange(e0);
-    const f1 = atRange(e1);
-    const slope = (f1 - f0) / (x1 - x0);
-    const ratio1 = e1.trip.landing[S_MASS] / x1;
-    const fallback = Number.isFinite(ratio1) && ratio1 > 0.2 && ratio1 <= 1 ? ratio1 : 0.85;
-    const next = Number.isFinite(slope) && Math.abs(slope) > 0.05 ? x1 - f1 / slope : x1 - f1 / fallback;
+    // Secant method on the residual at exactly the range (the last usable slope when the secant is degenerate).
+    const next = Number.isFinite(secant) && Math.abs(secant) > 0.05 ? x1 - f1 / secant : x1 - f1 / ratioSlope(e1, x1);
     x0 = x1;
     e0 = e1;
+    f0 = f1;
     x1 = next;
   }
   return notConverged('Fuel', { rampMass_kg: x1, distance_m: d, iterations: MAX_ITERATIONS, residual_kg: e0.residual_kg });
 }
 
-/** Fuel burned per metre (of the mission's distance basis) on the solvable cruise leg of a pass (kg/m), 0 when unknown. */
+/** Fuel burned per metre (of the mission's distance basis) at the end of the solvable cruise leg of a pass (kg/m; the leg's mean when its last sample says nothing), 0 when unknown. */
 function solvableFuelPerMetre(e: MissionEvaluation): number {
+  if (e.trip.solvableEndFuelPerMetre > 0) return e.trip.solvableEndFuelPerMetre;
   const d = e.trip.solvableDistance_m;
   return d > 0 ? e.trip.solvableFuel_kg / d : 0;
 }
 
-/** Fixed ramp mass: the solvable leg's distance (m, mission's basis) so the residual vanishes. */
-export function iterateDistance(ctx: MissionContext, rampMass_kg: number): IterationOutcome {
+/**
+ * Fixed ramp mass: the solvable leg's distance (m, mission's basis) so the residual lies in the fuel band. A cold
+ * start flies the leg at zero length first (so a reserve that cannot be carried is named), then steps by the
+ * Breguet distance of the spare fuel at the leg's specific range; a warm start flies the given distance first
+ * and steps with the given slope. Then the secant method.
+ */
+export function iterateDistance(ctx: MissionContext, rampMass_kg: number, start: MissionStart = {}, band: FuelBand = fuelBand(undefined)): IterationOutcome {
   const input = ctx.input;
-  let d0 = 0;
+  const infeasible = (e: MissionEvaluation, k: number): IterationOutcome => ({
+    kind: 'infeasible',
+    rampMass_kg,
+    distance_m: 0,
+    iterations: k,
+    residual_kg: e.residual_kg,
+    message: msg`The reserve cannot be carried even with the solvable cruise leg at zero length: short by ${q(-e.residual_kg, 'mass')}.`,
+  });
+  const converged = (dist_m: number, e: MissionEvaluation, k: number, slope: number): IterationOutcome => ({
+    kind: 'converged',
+    rampMass_kg,
+    distance_m: dist_m,
+    iterations: k,
+    residual_kg: e.residual_kg,
+    pass: e,
+    warmStart: { distance_m: dist_m, slope },
+  });
+  let zeroFlown = !usable(start.distance_m, true);
+  let d0 = zeroFlown ? 0 : (start.distance_m as number);
   let e0 = evaluateMission(scratch(ctx), rampMass_kg, d0);
-  if (failedFlight(e0)) return { kind: 'flightFailed', rampMass_kg, distance_m: 0, iterations: 1, residual_kg: e0.residual_kg, failure: e0 };
-  if (e0.residual_kg < 0) {
-    return {
-      kind: 'infeasible',
-      rampMass_kg,
-      distance_m: 0,
-      iterations: 1,
-      residual_kg: e0.residual_kg,
-      message: msg`The reserve cannot be carried even with the solvable cruise leg at zero length: short by ${q(-e0.residual_kg, 'mass')}.`,
-    };
-  }
-  if (fuelConverged(e0.residual_kg)) {
-    return { kind: 'converged', rampMass_kg, distance_m: 0, iterations: 1, residual_kg: e0.residual_kg, pass: e0 };
-  }
+  if (failedFlight(e0)) return { kind: 'flightFailed', rampMass_kg, distance_m: d0, iterations: 1, residual_kg: e0.residual_kg, failure: e0 };
+  if (d0 === 0 && e0.residual_kg < 0) return infeasible(e0, 1);
+  // The cold slope (kg/m): minus the fuel per metre at the leg's specific range, at the mass the leg is expected to end with.
   const leg = input.legs[solvableLegIndex(input)];
   let sr = 0;
   if (leg && leg.kind === 'cruise') {
     const env = legEnvironment(input, leg);
-    const m = e0.trip.takeoff[S_MASS];
+    const m = e0.trip.takeoff[S_MASS] - Math.max(e0.residual_kg, 0) / 2;
     const mach = cruiseMach(input, leg.speed, leg.altitude_m, m, env.isaDev_K);
     sr = basisSpecificRange(input, specificRangeAt(input, leg.altitude_m, mach, m, env.isaDev_K), leg.altitude_m, mach, env);
   }
-  let d1 = (e0.residual_kg - AIM_KG) * (sr > 0 ? sr : 100);
+  const coldSlope = -1 / (sr > 0 ? sr : 100);
+  let slope = usable(start.slope) && start.slope < 0 ? start.slope : coldSlope;
+  if (fuelConverged(e0.residual_kg, band)) return converged(d0, e0, 1, slope);
+  let d1 = d0 - (e0.residual_kg - band.aim_kg) / slope;
   for (let k = 2; k <= MAX_ITERATIONS; k++) {
+    if (!Number.isFinite(d1)) break;
+    if (d1 <= 0) {
+      // Below zero length: fly the leg at zero length once (the infeasibility check), else halve towards it.
+      d1 = zeroFlown ? 0.5 * d0 : 0;
+      zeroFlown = true;
+    }
     const e1 = evaluateMission(scratch(ctx), rampMass_kg, d1);
     if (failedFlight(e1)) return { kind: 'flightFailed', rampMass_kg, distance_m: d1, iterations: k, residual_kg: e1.residual_kg, failure: e1 };
-    if (fuelConverged(e1.residual_kg)) {
-      return { kind: 'converged', rampMass_kg, distance_m: d1, iterations: k, residual_kg: e1.residual_kg, pass: e1 };
-    }
-    const slope = (e1.residual_kg - e0.residual_kg) / (d1 - d0);
-    const aimed = e1.residual_kg - AIM_KG;
-    let next = Number.isFinite(slope) && slope < 0 ? d1 - aimed / slope : d1 + aimed * (sr > 0 ? sr : 100);
-    if (next < 0) next = 0.5 * d1;
+    if (d1 === 0 && e1.residual_kg < 0) return infeasible(e1, k);
+    const secant = (e1.residual_kg - e0.residual_kg) / (d1 - d0);
+    if (Number.isFinite(secant) && secant < 0) slope = secant;
+    if (fuelConverged(e1.residual_kg, band)) return converged(d1, e1, k, slope);
+    const aimed = e1.residual_kg - band.aim_kg;
+    const next = Number.isFinite(secant) && secant < 0 ? d1 - aimed / secant : d1 - aimed / coldSlope;
     d0 = d1;
     e0 = e1;
     d1 = next;
-    if (!Number.isFinite(d1)) break;
   }
   return notConverged('Range', { rampMass_kg, distance_m: d1, iterations: MAX_ITERATIONS, residual_kg: e0.residual_kg });
 }

@@ -275,6 +275,29 @@ export type MissionStatus =
   /** A fault inside the solver (a bug): the leg and what was being done are in the message. */
   | 'internal_error';
 
+/**
+ * Where a fuel iteration starts (solveMission's `options.warmStart`): what a neighbouring mission's converged solve
+ * returned (`MissionResult.warmStart`), so an analysis or a sweep solving missions one after another starts each
+ * from the last. Every field is optional; an absent or invalid field falls back to the cold start.
+ */
+export interface MissionStart {
+  /** payloadRange: the first pass's ramp mass (kg), e.g. the neighbour's converged ramp mass. */
+  readonly rampMass_kg?: number;
+  /** Fixed ramp mass (maxRange, takeoffWeight with a solvable leg): the first pass's solvable-leg distance (m, mission's basis). */
+  readonly distance_m?: number;
+  /**
+   * The second pass's slope: d(residual)/d(ramp mass) (-) in payloadRange, d(residual)/d(distance) (kg/m) with a
+   * fixed ramp mass; the neighbour's last secant slope.
+   */
+  readonly slope?: number;
+  /**
+   * The distance after the solvable cruise leg (m, mission's basis: the descent and what follows) as a linear
+   * function of the mass at the leg's end (the predicted top of descent): at `mass_kg` it is `distance_m`, and it
+   * grows by `perKg_m` per kg.
+   */
+  readonly afterSolvable?: { readonly mass_kg: number; readonly distance_m: number; readonly perKg_m: number };
+}
+
 export interface MissionResult {
   readonly status: MissionStatus;
   /** Human-readable reason when status is not 'ok' (SI text; statusParts for display). */
@@ -303,4 +326,6 @@ export interface MissionResult {
   /** Fuel-iteration report (solve modes b and c). */
   readonly iterations: number;
   readonly residual_kg: number;
+  /** Where a neighbouring mission's fuel iteration can start (solveMission's options.warmStart); set when the iteration converged. */
+  readonly warmStart?: MissionStart;
 }
