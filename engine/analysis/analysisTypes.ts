@@ -5,6 +5,7 @@
 import type { AeroModel } from '../aero/aeroModel';
 import type { MissionInput, MissionResult } from '../mission/missionTypes';
 import type { PropulsionModel } from '../propulsion/propulsionModel';
+import type { NeighbourStart } from './warmStart';
 
 /** The two models every point-performance analysis needs. */
 export interface PerformanceModels {
@@ -12,8 +13,12 @@ export interface PerformanceModels {
   readonly propulsion: PropulsionModel;
 }
 
-/** Flies one mission; the analyses call engine/mission/solveMission through this. */
-export type MissionSolver = (input: MissionInput) => MissionResult;
+/**
+ * Flies one mission; the analyses call engine/mission/solveMission through
+ * this (warmStart.ts solveFrom). `start`, when given, is a converged
+ * neighbour to start the fuel iteration from; a solver may ignore it.
+ */
+export type MissionSolver = (input: MissionInput, start?: NeighbourStart) => MissionResult;
 
 export type AnalysisErrorCode =
   | 'invalid_input'

@@ -9,11 +9,11 @@ import type { Caution } from '../cautions/caution';
 import { err, ok, type Result } from '../core/result';
 import type { MissionInput, MissionResult } from '../mission/missionTypes';
 import type { RatingName } from '../propulsion/propulsionModel';
-import { solveMission } from '../mission/solveMission';
 import type { AnalysisError, MissionSolver } from './analysisTypes';
 import { thrustDragCrossover } from './crossover';
 import { flightCeilings, type Ceiling } from './envelope';
 import { shapleyValues } from './shapleyAttribution';
+import { solveFrom, subsetWeights, type NeighbourStart } from './warmStart';
 
 export type InletFactor = 'recovery' | 'spillage' | 'externalDrag' | 'weight';
 
@@ -114,13 +114,17 @@ export function compareInlets(
   build: InletFactorBuilder,
   options: InletComparisonOptions,
 ): Result<InletComparisonResult, AnalysisError> {
-  const solve: MissionSolver = options.solve ?? ((mission) => solveMission(mission));
+  const solve: MissionSolver = options.solve ?? solveFrom;
   const total = 1 << INLET_FACTORS.length;
   const results: MissionResult[] = [];
   for (let mask = 0; mask < total; mask++) {
     if (options.shouldCancel?.()) return err({ code: 'cancelled', message: `inlet comparison cancelled after ${mask} of ${total} missions` });
     const choice = choiceOf(mask);
-    const r = solve(build(choice));
+    // Each mix after all-A starts from the mix with its lowest factor back at A, its figures predicted from all its sub-mixes.
+    // A single factor has nothing to predict it but all-A, another aircraft: it starts cold.
+    const start: NeighbourStart | undefined =
+      (mask & (mask - 1)) === 0 ? undefined : { from: results[mask & (mask - 1)]!, blend: subsetWeights(mask).map((w) => ({ weight: w.weight, result: results[w.mask]! })) };
+    const r = solve(build(choice), start);
     if (r.status !== 'ok') {
       const mix = INLET_FACTORS.map((f) => `${f} ${choice[f]}`).join(', ');
       return err({ code: 'mission_failed', message: `inlet comparison: the mission with ${mix} failed: ${r.status}: ${r.statusMessage}` });

@@ -7,8 +7,8 @@
 import type { Caution } from '../cautions/caution';
 import { err, ok, type Result } from '../core/result';
 import type { MissionInput, MissionResult } from '../mission/missionTypes';
-import { solveMission } from '../mission/solveMission';
 import type { AnalysisError, MissionSolver } from './analysisTypes';
+import { lagrangeWeights, solveFrom, type NeighbourStart } from './warmStart';
 
 export type PayloadRangePointKind = 'maxPayload' | 'mtowFullFuel' | 'ferry' | 'between';
 
@@ -87,7 +87,7 @@ export function payloadRangeDiagram(
   base: MissionInput,
   options: PayloadRangeOptions,
 ): Result<PayloadRangeResult, AnalysisError> {
-  const solve: MissionSolver = options.solve ?? ((mission) => solveMission(mission));
+  const solve: MissionSolver = options.solve ?? solveFrom;
   const between = options.pointsBetween ?? 3;
   if (!Number.isInteger(between) || between < 0 || between > 50) {
     return err({ code: 'invalid_input', message: `payload-range: points between corners ${between} must be an integer 0..50` });
@@ -100,9 +100,25 @@ export function payloadRangeDiagram(
   // Missions to fly; one fewer once the MTOW-full-fuel corner turns out not to exist.
   let total = 3 + 2 * between;
   let done = 0;
+  // Missions flown so far by payload: each next one starts from the nearest and its solvable leg's distance is
+  // predicted by the line (or parabola) through the nearest two (three) on its side of the MTOW-full-fuel corner.
+  const flown: { readonly payload_kg: number; readonly result: MissionResult }[] = [];
+  let corner: number | null = null;
+  const startFor = (payload_kg: number): NeighbourStart | undefined => {
+    const side = (p: number) => (corner === null ? 0 : p > corner + 1e-9 ? 1 : p < corner - 1e-9 ? -1 : 0);
+    const s = side(payload_kg);
+    const near = flown
+      .filter((f) => s === 0 || side(f.payload_kg) === 0 || side(f.payload_kg) === s)
+      .sort((x, y) => Math.abs(x.payload_kg - payload_kg) - Math.abs(y.payload_kg - payload_kg))
+      .slice(0, 3);
+    if (near.length === 0) return undefined;
+    const weights = lagrangeWeights(near.map((f) => f.payload_kg), payload_kg);
+    return { from: near[0]!.result, blend: near.map((f, k) => ({ weight: weights[k]!, result: f.result })) };
+  };
   const fly = (payload_kg: number, what: string): Result<MissionResult, AnalysisError> => {
     if (options.shouldCancel?.()) return err({ code: 'cancelled', message: `payload-range cancelled after ${done} of ${total} missions` });
-    const r = solve({ ...base, solve: { kind: 'maxRange', payload_kg } });
+    const r = solve({ ...base, solve: { kind: 'maxRange', payload_kg } }, startFor(payload_kg));
+    if (r.status === 'ok') flown.push({ payload_kg, result: r });
     done++;
     options.onProgress?.(done, total);
     if (r.status !== 'ok') {
@@ -115,6 +131,7 @@ export function payloadRangeDiagram(
   const taxiOut_kg = a.value.rampMass_kg - a.value.takeoffMass_kg;
   const payloadB = af.mtow_kg + taxiOut_kg - af.oew_kg - af.maxFuel_kg;
   const hasB = payloadB > 0 && payloadB < maxPayload_kg;
+  if (hasB) corner = payloadB;
   let b: MissionResult | null = null;
   if (hasB) {
     const rb = fly(payloadB, 'MTOW-full-fuel');

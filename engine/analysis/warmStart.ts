@@ -1,0 +1,110 @@
+/**
+ * Warm starts for the missions of one analysis. The missions an analysis
+ * flies are neighbours (the Shapley corners differ by one inlet factor, the
+ * trade-factor missions by a small step, the payload-range points by
+ * payload), so each is started from a converged neighbour, with its figures
+ * (ramp mass, distances) predicted as a weighted sum of missions already
+ * flown, and its fuel iteration needs fewer passes. Answers stay the same to
+ * the fuel iteration's tolerance.
+ */
+import type { MissionInput, MissionResult, MissionStart } from '../mission/missionTypes';
+import { solveMission } from '../mission/solveMission';
+
+/** A mission already flown and its weight in a prediction. */
+export interface Blend {
+  readonly weight: number;
+  readonly result: MissionResult;
+}
+
+/**
+ * Where to start a mission from: a converged neighbour (its iteration's
+ * slope and top-of-descent model are reused) and a prediction of this
+ * mission's figures (ramp mass, solvable-leg distance, top of descent) as
+ * sum(weight x figure of result) over missions already flown; the weights
+ * add up to 1. Without `blend`, the neighbour's own figures.
+ */
+export interface NeighbourStart {
+  readonly from: MissionResult;
+  readonly blend?: readonly Blend[];
+}
+
+/**
+ * The warm start (engine/mission MissionStart) for a mission next to
+ * `start`: the neighbour's, with each figure the blend predicts in place of
+ * the neighbour's own; null when the neighbour or a blended mission carries
+ * none (it did not converge).
+ */
+export function warmStartFor(start: NeighbourStart): MissionStart | null {
+  const own = start.from.warmStart;
+  const blend = start.blend ?? [{ weight: 1, result: start.from }];
+  if (own === undefined || blend.some((b) => b.result.warmStart === undefined)) return null;
+  const mix = (figure: (w: MissionStart) => number | undefined): number | undefined => {
+    let sum = 0;
+    for (const b of blend) {
+      const v = figure(b.result.warmStart!);
+      if (v === undefined || !Number.isFinite(v)) return undefined;
+      sum += b.weight * v;
+    }
+    return sum;
+  };
+  const rampMass_kg = mix((w) => w.rampMass_kg);
+  const distance_m = mix((w) => w.distance_m);
+  const todMass_kg = mix((w) => w.afterSolvable?.mass_kg);
+  const after_m = mix((w) => w.afterSolvable?.distance_m);
+  return {
+    ...own,
+    ...(rampMass_kg === undefined ? {} : { rampMass_kg }),
+    ...(distance_m === undefined ? {} : { distance_m: Math.max(0, distance_m) }),
+    ...(own.afterSolvable === undefined || todMass_kg === undefined || after_m === undefined
+      ? {}
+      : { afterSolvable: { ...own.afterSolvable, mass_kg: todMass_kg, distance_m: after_m } }),
+  };
+}
+
+/**
+ * solveMission started next to `start` when given (warmStartFor). A
+ * warm-started mission that does not come out ok is flown again from the
+ * solver's own first guess, so a failure reads exactly as it always has.
+ */
+export function solveFrom(input: MissionInput, start?: NeighbourStart): MissionResult {
+  const warm = start === undefined ? null : warmStartFor(start);
+  if (warm === null) return solveMission(input);
+  const r = solveMission(input, { warmStart: warm });
+  return r.status === 'ok' ? r : solveMission(input);
+}
+
+/**
+ * Weights predicting v(S) for the subset `mask` (> 0) from all its proper
+ * subsets, taking its highest-order interaction as zero:
+ * v(S) ~ sum over T strictly inside S of (-1)^(|S| - |T| + 1) v(T)
+ * (Moebius inversion of a set function: Grabisch, Set Functions, Games and
+ * Capacities in Decision Making, 2016, ch. 2). One factor: v(none); two:
+ * v(i) + v(j) - v(none). The weights add up to 1.
+ */
+export function subsetWeights(mask: number): readonly { readonly mask: number; readonly weight: number }[] {
+  if (!(mask > 0)) return [];
+  const bits = popCount(mask);
+  const out: { mask: number; weight: number }[] = [];
+  // Every proper subset: sub = (sub - 1) & mask down to 0.
+  for (let sub = (mask - 1) & mask; ; sub = (sub - 1) & mask) {
+    out.push({ mask: sub, weight: (bits - popCount(sub)) % 2 === 1 ? 1 : -1 });
+    if (sub === 0) break;
+  }
+  return out;
+}
+
+function popCount(mask: number): number {
+  let n = 0;
+  for (let m = mask; m; m &= m - 1) n++;
+  return n;
+}
+
+/**
+ * Lagrange weights predicting the value at t from values at the nodes ts
+ * (distinct): sum_k w_k v(t_k) is the polynomial through the nodes at t
+ * (any numerical-analysis text, e.g. Burden & Faires, section 3.1).
+ */
+export function lagrangeWeights(ts: readonly number[], t: number): number[] {
+  return ts.map((tk, k) => ts.reduce((w, tj, j) => (j === k ? w : (w * (t - tj)) / (tk - tj)), 1));
+}
+

@@ -1,0 +1,134 @@
+import { readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { describe, expect, it } from 'vitest';
+import { compareInlets } from '../../../engine/analysis/inletComparison';
+import { inletFactorBuilder } from '../../../engine/analysis/inletFactorBuilder';
+import { payloadRangeDiagram } from '../../../engine/analysis/payloadRange';
+import { tradeFactors } from '../../../engine/analysis/tradeFactors';
+import { lagrangeWeights, solveFrom, subsetWeights, warmStartFor } from '../../../engine/analysis/warmStart';
+import { expectOk } from '../../../engine/core/result';
+import { FUEL_TOLERANCE_KG } from '../../../engine/mission/fuelIteration';
+import type { MissionInput, MissionResult } from '../../../engine/mission/missionTypes';
+import { solveMission } from '../../../engine/mission/solveMission';
+import { buildMissionInput, projectInlet } from '../../../engine/project/buildMissionInput';
+import { projectDeck } from '../../../engine/project/projectDeck';
+import { cautionSettingsOf, installationOf } from '../../../engine/project/projectSpecs';
+import { parseProject } from '../../../engine/project/parseProject';
+import { parseDeckCsv } from '../../../engine/propulsion/deckCsv';
+import { expectClose } from '../../support/assertInDelta';
+
+const root = fileURLToPath(new URL('../../../fixtures/demo/', import.meta.url));
+const project = expectOk(parseProject(readFileSync(`${root}demo.blockwise.json`, 'utf8'), 'demo'), 'demo');
+const deck = expectOk(parseDeckCsv(readFileSync(`${root}demo-engine.deck.csv`, 'utf8'), 'deck'), 'deck');
+const demo: MissionInput = expectOk(buildMissionInput(project, { deck }), 'demo input');
+const withOew = (dm: number): MissionInput => ({ ...demo, airframe: { ...demo.airframe, oew_kg: demo.airframe.oew_kg + dm } });
+
+/** Counts the passes of every mission an analysis flies, with or without its warm starts. */
+function counting(warm: boolean) {
+  const passes: number[] = [];
+  const solve = (input: MissionInput, start?: Parameters<typeof solveFrom>[1]): MissionResult => {
+    const r = warm ? solveFrom(input, start) : solveMission(input);
+    passes.push(r.iterations);
+    return r;
+  };
+  return { passes, solve, total: () => passes.reduce((a, b) => a + b, 0) };
+}
+
+describe('warm starts of an analysis', () => {
+  it('subsetWeights is the Moebius prediction: exact when the subset adds no interaction of its own order', () => {
+    // v(S) = 3 + sum of singles + sum of pair interactions (no order-3 or order-4 terms): Moebius inversion
+    // (Grabisch 2016, ch. 2) predicts every subset of 3 or 4 exactly and misses a pair by its own interaction.
+    const single = [1.5, -2, 0.25, 4];
+    const pair = (i: number, j: number) => 0.1 * (i + 1) * (j + 2);
+    const v = (mask: number) => {
+      let s = 3;
+      for (let i = 0; i < 4; i++) if (mask & (1 << i)) s += single[i]!;
+      for (let i = 0; i < 4; i++) for (let j = i + 1; j < 4; j++) if (mask & (1 << i) && mask & (1 << j)) s += pair(i, j);
+      return s;
+    };
+    const predict = (mask: number) => subsetWeights(mask).reduce((s, w) => s + w.weight * v(w.mask), 0);
+    for (const mask of [7, 11, 13, 14, 15]) expectClose(predict(mask), v(mask), { abs: 1e-12 }, 'Moebius inversion, no top-order term');
+    expectClose(v(5) - predict(5), pair(0, 2), { abs: 1e-12 }, 'Moebius coefficient of the pair');
+    expect(subsetWeights(1)).toEqual([{ mask: 0, weight: 1 }]);
+    for (const mask of [3, 6, 15]) expectClose(subsetWeights(mask).reduce((s, w) => s + w.weight, 0), 1, { abs: 0 });
+    expect(subsetWeights(0)).toEqual([]);
+  });
+
+  it('lagrangeWeights reproduce a quadratic exactly, inside and outside the nodes (Lagrange interpolation)', () => {
+    const p = (t: number) => 2 - 3 * t + 0.7 * t * t;
+    const nodes = [0, 0.5, -0.5];
+    for (const t of [1, -1, 0.25]) {
+      const w = lagrangeWeights(nodes, t);
+      expectClose(w.reduce((s, x, k) => s + x * p(nodes[k]!), 0), p(t), { abs: 1e-12 }, 'polynomial through three nodes');
+      expectClose(w.reduce((s, x) => s + x, 0), 1, { abs: 1e-12 });
+    }
+    expect(lagrangeWeights([0], 0.5)).toEqual([1]);
+  });
+
+  it('warmStartFor blends the neighbours\' ramp masses and top of descent, keeping the slope of the one it starts from', () => {
+    const a = solveMission(withOew(0));
+    const b = solveMission(withOew(100));
+    expect(a.warmStart).toBeDefined();
+    const w = warmStartFor({ from: b, blend: [{ weight: 2, result: b }, { weight: -1, result: a }] })!;
+    expectClose(w.rampMass_kg!, 2 * b.rampMass_kg - a.rampMass_kg, { abs: 1e-9 });
+    expectClose(w.afterSolvable!.mass_kg, 2 * b.warmStart!.afterSolvable!.mass_kg - a.warmStart!.afterSolvable!.mass_kg, { abs: 1e-9 });
+    expect(w.slope).toBe(b.warmStart!.slope);
+    const failed = { ...a, status: 'did_not_converge' as const, warmStart: undefined };
+    expect(warmStartFor({ from: failed })).toBeNull();
+  });
+
+  it('a mission started from its neighbours lands on the cold answer within the fuel band, in fewer passes', () => {
+    const base = solveMission(withOew(0));
+    const up = solveMission(withOew(100));
+    const cold = solveMission(withOew(200));
+    const warm = solveFrom(withOew(200), { from: up, blend: lagrangeWeights([0, 100], 200).map((weight, k) => ({ weight, result: [base, up][k]! })) });
+    expect(warm.status).toBe('ok');
+    // The fuel band (fuelIteration.ts): each answer lands 0 to FUEL_TOLERANCE_KG over the reserve.
+    expectClose(warm.blockFuel_kg, cold.blockFuel_kg, { abs: FUEL_TOLERANCE_KG }, 'same converged flight within the fuel band');
+    expect(warm.iterations).toBeLessThan(cold.iterations);
+  });
+
+  it('trade factors and the payload-range diagram give the cold answers within the fuel band in fewer passes', () => {
+    const coldT = counting(false);
+    const warmT = counting(true);
+    const c = expectOk(tradeFactors(demo, { solve: coldT.solve }), 'cold trade');
+    const w = expectOk(tradeFactors(demo, { solve: warmT.solve }), 'warm trade');
+    c.factors.forEach((f, i) => {
+      const g = w.factors[i]!;
+      // d = (v+ - v-) / 2h: each v within the band, so d within band / h (h = 1 and 1/2 unit).
+      expectClose(g.blockFuelPerUnit_kg!, f.blockFuelPerUnit_kg!, { abs: FUEL_TOLERANCE_KG }, `${f.name}, step 1`);
+      expectClose(g.blockFuelPerUnitHalfStep_kg!, f.blockFuelPerUnitHalfStep_kg!, { abs: 2 * FUEL_TOLERANCE_KG }, `${f.name}, step 1/2`);
+    });
+    expect(warmT.total()).toBeLessThan(coldT.total());
+    const coldP = counting(false);
+    const warmP = counting(true);
+    const cp = expectOk(payloadRangeDiagram(demo, { solve: coldP.solve }), 'cold payload-range');
+    const wp = expectOk(payloadRangeDiagram(demo, { solve: warmP.solve }), 'warm payload-range');
+    cp.points.forEach((p, i) => expectClose(wp.points[i]!.blockFuel_kg, p.blockFuel_kg, { abs: FUEL_TOLERANCE_KG }, `point ${i}`));
+    expect(warmP.total()).toBeLessThan(coldP.total());
+  });
+
+  it('the inlet comparison gives the cold breakdown within the fuel band in fewer passes, its parts still adding up', () => {
+    const [nameA, nameB] = [project.inlets[0]!.name, project.inlets[1]!.name];
+    const build = inletFactorBuilder({
+      inputA: expectOk(buildMissionInput(project, { deck }, { inletName: nameA }), 'A'),
+      inputB: expectOk(buildMissionInput(project, { deck }, { inletName: nameB }), 'B'),
+      inletA: expectOk(projectInlet(project, nameA), 'inlet A'),
+      inletB: expectOk(projectInlet(project, nameB), 'inlet B'),
+      deck: expectOk(projectDeck(project, { deck }), 'deck'),
+      engineCount: project.engine.count,
+      installation: installationOf(project),
+      cautionSettings: cautionSettingsOf(project),
+    });
+    const cold = counting(false);
+    const warm = counting(true);
+    const c = expectOk(compareInlets(build, { nameA, nameB, solve: cold.solve }), 'cold compare');
+    const w = expectOk(compareInlets(build, { nameA, nameB, solve: warm.solve }), 'warm compare');
+    // A Shapley share is a weighted mean (weights adding to 1) of differences v(S + i) - v(S), each block fuel
+    // within one band of the cold one: the share is within 2 bands of the cold share.
+    w.breakdown.parts.forEach((p, i) => expectClose(p.blockFuel_kg, c.breakdown.parts[i]!.blockFuel_kg, { abs: 2 * FUEL_TOLERANCE_KG }, p.factor));
+    expectClose(w.breakdown.sumOfParts_kg, w.breakdown.total_kg, { abs: 1e-9 }, 'Shapley efficiency (Shapley 1953)');
+    expect(w.designs[0].ceilings).toEqual(c.designs[0].ceilings);
+    expect(warm.total()).toBeLessThan(cold.total());
+  });
+});
