@@ -1,7 +1,8 @@
 /**
  * One-dimensional root finding shared by the whole engine: Brent's method
  * (R. P. Brent, "Algorithms for Minimization without Derivatives", 1973,
- * ch. 4, the `zero` procedure) and a bracket expander.
+ * ch. 4, the `zero` procedure), a bracketed secant for a bracket whose end
+ * values are already known, and a bracket expander.
  */
 import { err, ok, type Result } from './result';
 
@@ -148,6 +149,103 @@ export function brent(
     lo,
     hi,
     x: b,
+    iterations: maxIterations,
+  });
+}
+
+/**
+ * Finds x in the bracket [a, b] with |f(x)| <= fTol, given the values
+ * fa = f(a) and fb = f(b), of opposite signs and neither zero (the caller
+ * has them: no evaluation is repeated). The first step is the chord of the
+ * bracket (exact when f is linear on it), the next ones inverse quadratic
+ * interpolation through the three latest points (the secant through two
+ * where three do not give one), each kept strictly inside the bracket, which
+ * shrinks around the sign change after every evaluation; a step that would
+ * leave it, or a bracket that has not halved in three steps, is replaced by
+ * bisection. Near a simple root of a smooth f inverse quadratic
+ * interpolation converges with order about 1.84 and the secant with
+ * (1 + sqrt 5)/2 (Brent 1973, ch. 3-4); bisection bounds the worst case. Stops when |f| <= fTol, or when the bracket is narrower than
+ * 2 eps |x| + xTol (then x is the end with the smaller |f|). Errors as brent:
+ * `no_bracket`, `not_finite`, `did_not_converge`.
+ */
+export function bracketedSecant(
+  f: (x: number) => number,
+  a: number,
+  fa: number,
+  b: number,
+  fb: number,
+  options?: RootOptions,
+): Result<Root, RootError> {
+  const xTol = options?.xTol ?? 1e-12;
+  const fTol = options?.fTol ?? 0;
+  const maxIterations = options?.maxIterations ?? 200;
+  const lo0 = a;
+  const hi0 = b;
+  if (!Number.isFinite(a) || !Number.isFinite(b) || !Number.isFinite(fa) || !Number.isFinite(fb)) {
+    return err({ code: 'not_finite', message: `bracket [${a}, ${b}] or its values f = ${fa}, ${fb} not finite`, lo: a, hi: b, fLo: fa, fHi: fb });
+  }
+  if (!((fa < 0 && fb > 0) || (fa > 0 && fb < 0))) {
+    return err({ code: 'no_bracket', message: `no strict sign change on [${a}, ${b}]: f = ${fa}, ${fb}`, lo: a, hi: b, fLo: fa, fHi: fb });
+  }
+  const negativeAtA = fa < 0;
+  // The three latest points, newest last (xp: none yet).
+  let xp = Number.NaN;
+  let fp = Number.NaN;
+  let x0 = a;
+  let f0 = fa;
+  let x1 = b;
+  let f1 = fb;
+  let width = Math.abs(b - a);
+  let stale = 0;
+  for (let iter = 1; iter <= maxIterations; iter++) {
+    const lo = a < b ? a : b;
+    const hi = a < b ? b : a;
+    let x: number;
+    if (!Number.isNaN(xp) && fp !== f0 && fp !== f1 && f0 !== f1) {
+      // Inverse quadratic interpolation through the three latest points (Brent 1973, ch. 4).
+      x = (xp * f0 * f1) / ((fp - f0) * (fp - f1)) + (x0 * fp * f1) / ((f0 - fp) * (f0 - f1)) + (x1 * fp * f0) / ((f1 - fp) * (f1 - f0));
+    } else {
+      x = x1 - (f1 * (x1 - x0)) / (f1 - f0);
+    }
+    if (!(x > lo && x < hi) || stale >= 3) {
+      x = 0.5 * (a + b);
+      stale = 0;
+    }
+    const fx = f(x);
+    if (!Number.isFinite(fx)) {
+      return err({ code: 'not_finite', message: `function is not finite at x = ${x}: ${fx}`, lo: lo0, hi: hi0, x, iterations: iter });
+    }
+    if (Math.abs(fx) <= fTol || fx === 0) return ok({ x, fx, iterations: iter });
+    if (fx < 0 === negativeAtA) {
+      a = x;
+      fa = fx;
+    } else {
+      b = x;
+      fb = fx;
+    }
+    xp = x0;
+    fp = f0;
+    x0 = x1;
+    f0 = f1;
+    x1 = x;
+    f1 = fx;
+    const w = Math.abs(b - a);
+    if (w <= 2 * EPS * Math.abs(x) + xTol) {
+      return Math.abs(fa) <= Math.abs(fb) ? ok({ x: a, fx: fa, iterations: iter }) : ok({ x: b, fx: fb, iterations: iter });
+    }
+    if (w <= 0.5 * width) {
+      width = w;
+      stale = 0;
+    } else {
+      stale++;
+    }
+  }
+  return err({
+    code: 'did_not_converge',
+    message: `secant on [${lo0}, ${hi0}] did not converge in ${maxIterations} iterations (bracket [${a}, ${b}])`,
+    lo: lo0,
+    hi: hi0,
+    x: x1,
     iterations: maxIterations,
   });
 }

@@ -51,6 +51,14 @@ export interface DeckAccess {
    * evaluator may share buffers: it is valid until the next `curveAt` call.
    */
   curveAt?(condition: FlightCondition): DeckCurve;
+  /**
+   * With `curveAt`: the smallest power breakpoint of the curve last prepared
+   * strictly above `after` (-), Infinity when none. Between two breakpoints
+   * every value the curve writes is linear in power (the grid is linear in
+   * power between its tabulated powers); the part-power solve brackets its
+   * root on one such segment.
+   */
+  curveBreakAfter?(after: number): number;
   /** The deck's grid altitudes (m) and Machs (-), ascending: where its interpolated numbers have slope breaks. */
   readonly slopeBreaks?: SlopeBreaks;
   /** Free-stream static pressure (Pa) and temperature (K). */

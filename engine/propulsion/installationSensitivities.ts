@@ -89,8 +89,6 @@ export function writeSensitivities(s: InstallationSensitivities, out: Float64Arr
   for (const f of SENSITIVITY_FIELDS) out[offset + f.slot] = s[f.key] ?? 0;
 }
 
-/** Temperature exponent of each slot's factor (see readSensitivitiesInto): the factor is sqrt(theta ratio)^exponent. */
-const TEMPERATURE_EXPONENT = [0, 1, -1, 0, 1, -1, -1, 0, -2] as const;
 
 /** A writable InstallationSensitivities, for scratch use in hot loops. */
 export type MutableSensitivities = { -readonly [K in keyof InstallationSensitivities]: InstallationSensitivities[K] };
@@ -129,16 +127,45 @@ export function readSensitivitiesInto(
   fuelFactor: number,
   target: MutableSensitivities,
 ): InstallationSensitivities {
-  for (const f of SENSITIVITY_FIELDS) {
-    if (f.quantity === 'airflow' && !hasAirflow) {
-      target[f.key] = null as never;
-      continue;
-    }
-    const e = TEMPERATURE_EXPONENT[f.slot]!;
-    const factor = e === 0 ? 1 : e === 1 ? fuelFactor : e === -1 ? 1 / fuelFactor : 1 / (fuelFactor * fuelFactor);
-    target[f.key] = v[offset + f.slot]! * factor;
+  // Slot by slot, each times sqrt(theta ratio)^e with e = 0, 1, -1, 0, 1, -1, -1, 0, -2 in slot order; written out
+  // (no loop over the field table): this runs on every deck lookup.
+  const f = fuelFactor;
+  const inverse = 1 / f;
+  target.dThrust_dRecovery_N = v[offset]!;
+  target.dFuelFlow_dRecovery_kg_s = v[offset + 1]! * f;
+  target.dThrust_dBleed_N = v[offset + 3]!;
+  target.dFuelFlow_dBleed_kg_s = v[offset + 4]! * f;
+  target.dThrust_dExtraction_N_W = v[offset + 6]! * inverse;
+  target.dFuelFlow_dExtraction_kg_s_W = v[offset + 7]!;
+  if (hasAirflow) {
+    target.dAirflow_dRecovery_kg_s = v[offset + 2]! * inverse;
+    target.dAirflow_dBleed_kg_s = v[offset + 5]! * inverse;
+    target.dAirflow_dExtraction_kg_s_W = v[offset + 8]! * (1 / (f * f));
+  } else {
+    target.dAirflow_dRecovery_kg_s = null;
+    target.dAirflow_dBleed_kg_s = null;
+    target.dAirflow_dExtraction_kg_s_W = null;
   }
   return target;
+}
+
+/**
+ * As readSensitivitiesInto, into the packed slots `out[outOffset .. outOffset + 9)` (the airflow ones 0 without
+ * airflow, as writeSensitivities packs null): the same products, so reading them back with factor 1 gives the same
+ * numbers to the bit.
+ */
+export function scaleSensitivitiesInto(v: Float64Array, offset: number, hasAirflow: boolean, fuelFactor: number, out: Float64Array, outOffset: number): void {
+  const f = fuelFactor;
+  const inverse = 1 / f;
+  out[outOffset] = v[offset]!;
+  out[outOffset + 1] = v[offset + 1]! * f;
+  out[outOffset + 2] = hasAirflow ? v[offset + 2]! * inverse : 0;
+  out[outOffset + 3] = v[offset + 3]!;
+  out[outOffset + 4] = v[offset + 4]! * f;
+  out[outOffset + 5] = hasAirflow ? v[offset + 5]! * inverse : 0;
+  out[outOffset + 6] = v[offset + 6]! * inverse;
+  out[outOffset + 7] = v[offset + 7]!;
+  out[outOffset + 8] = hasAirflow ? v[offset + 8]! * (1 / (f * f)) : 0;
 }
 
 /** As readSensitivitiesInto, into a new object. */

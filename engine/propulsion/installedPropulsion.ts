@@ -5,7 +5,7 @@
  */
 import { atmosphere } from '../aero/standardAtmosphere';
 import type { CautionSettings } from '../cautions/cautionSettings';
-import { createDeckNodeSet, DECK_VALUES_WITH_SENSITIVITIES, evaluateDeckNodesInto, fillDeckNodes } from './deckGrid';
+import { createDeckNodeSet, DECK_VALUES_WITH_SENSITIVITIES, evaluateDeckNodesInto, fillDeckNodes, nextPowerBreakpoint } from './deckGrid';
 import { powerForThrust } from './deckInversion';
 import { lookupDeck, powerBounds, ratingPower } from './deckLookup';
 import { deckForInterpolation, queryCorrectionInto } from './deckCorrection';
@@ -14,7 +14,7 @@ import type { EngineDeck } from './engineDeck';
 import type { InletDesign } from './inletDesign';
 import type { InstallationSettings } from './installationCorrections';
 import type { DeckAccess } from './deckAccess';
-import { emptySensitivities, readSensitivitiesInto, writeSensitivities } from './installationSensitivities';
+import { scaleSensitivitiesInto } from './installationSensitivities';
 import { makeInstalledModel } from './installedModel';
 import type { FlightCondition, PropulsionModel } from './propulsionModel';
 
@@ -68,6 +68,7 @@ export function deckAccess(deck: EngineDeck): DeckAccess {
       curve.prepare(condition);
       return evaluate;
     },
+    curveBreakAfter: curve.breakAfter,
     ambient: (condition) => {
       if (ambientValue === null || condition.altitude_m !== ambientAltitude_m || condition.isaDev_K !== ambientIsaDev_K) {
         ambientValue = atmosphere(condition.altitude_m, condition.isaDev_K);
@@ -92,10 +93,11 @@ export function deckAccess(deck: EngineDeck): DeckAccess {
 export function deckCurve(deck: EngineDeck): {
   prepare(condition: FlightCondition): void;
   evaluate(power: number, out: Float64Array): boolean;
+  /** The prepared condition's next power breakpoint strictly above `after` (Infinity when none; deckGrid's nextPowerBreakpoint). */
+  breakAfter(after: number): number;
 } {
   const nodes = createDeckNodeSet();
   const values = new Float64Array(DECK_VALUES_WITH_SENSITIVITIES);
-  const sensitivities = emptySensitivities();
   let filled = false;
   let airflowFactor = 1;
   let thrustFactor = 1;
@@ -120,8 +122,11 @@ export function deckCurve(deck: EngineDeck): {
       // Floored at zero as lookupDeck floors them (the point finally evaluated carries its caution).
       out[0] = Math.max(values[0]! * thrustFactor, 0);
       out[1] = deck.hasAirflow ? Math.max(values[2]! * airflowFactor, 0) : Number.NaN;
-      if (deck.hasSensitivities) writeSensitivities(readSensitivitiesInto(values, 3, deck.hasAirflow, temperatureFactor, sensitivities), out, 2);
+      if (deck.hasSensitivities) scaleSensitivitiesInto(values, 3, deck.hasAirflow, temperatureFactor, out, 2);
       return true;
+    },
+    breakAfter(after) {
+      return filled ? nextPowerBreakpoint(deck.grid, nodes, after) : Infinity;
     },
   };
 }

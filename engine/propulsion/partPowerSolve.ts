@@ -1,12 +1,17 @@
 /**
  * The part-power solve: the power between flight idle and a ceiling rating
- * where one engine's installed thrust equals the thrust asked for, by
- * Brent's method (engine/core/rootFind.ts) on installed thrust. Its state
- * lives in one PartPowerSolve object per model (reused; a solve sets it at
- * its start), so the residual is one function made once, not a closure per
- * call (forThrust runs thousands of times per mission).
+ * where one engine's installed thrust equals the thrust asked for. With the
+ * deck's fixed-condition curve, the root is first bracketed on one of the
+ * deck's power segments (between two tabulated powers every deck column is
+ * linear in power, so the installed thrust before spillage is too), then
+ * refined on it by a bracketed secant (engine/core/rootFind.ts) whose first
+ * step is the exact linear inversion on the segment and whose later steps
+ * take out the spillage drag's curvature. Its state lives in one
+ * PartPowerSolve object per model (reused; a solve sets it at its start), so
+ * the residual is one function made once, not a closure per call (forThrust
+ * runs thousands of times per mission).
  */
-import { brent } from '../core/rootFind';
+import { bracketedSecant } from '../core/rootFind';
 import { CURVE_VALUES, type DeckAccess, type DeckCurve } from './deckAccess';
 import { emptySensitivities, readSensitivitiesInto, type MutableSensitivities } from './installationSensitivities';
 import {
@@ -20,8 +25,12 @@ import {
 import type { FreeStream } from './inletFlow';
 import type { FlightCondition, ThrustLimit } from './propulsionModel';
 
-/** Relative thrust tolerance of `forThrust` (-): |installed - required| <= this x required (or 1e-6 N). */
-export const FOR_THRUST_TOLERANCE = 1e-7;
+/**
+ * Relative thrust tolerance of `forThrust` (-): |installed - required| <=
+ * this x required (at least this x 10 N per engine), on either side (the
+ * secant's last step lands on whichever side it lands: no bias).
+ */
+export const FOR_THRUST_TOLERANCE = 1e-12;
 
 export interface PartPowerSolve {
   readonly ctx: InstallationContext;
@@ -106,20 +115,53 @@ export function solvePartPower(
     return { ok: true, power: idlePower, limit: loThrust === perEngineRequired_N ? 'within' : 'below_idle' };
   }
   let lo = idlePower;
+  let fLo = loThrust - perEngineRequired_N;
   let hi = ceilingPower;
-  if (!curve) {
+  let fHi = hiThrust - perEngineRequired_N;
+  const fTol = FOR_THRUST_TOLERANCE * Math.max(Math.abs(perEngineRequired_N), 10);
+  const breakAfter = curve ? solve.access.curveBreakAfter : undefined;
+  if (breakAfter !== undefined) {
+    // Narrow the bracket to one deck power segment: evaluate the breakpoint inside it nearest the chord's root
+    // until none is left inside (usually two evaluations, fewer when idle or the ceiling bounds the segment).
+    for (;;) {
+      let below = Number.NaN;
+      let q = breakAfter(lo);
+      if (!(q < hi)) break;
+      const chord = lo - (fLo * (hi - lo)) / (fHi - fLo);
+      while (q < hi && q <= chord) {
+        below = q;
+        q = breakAfter(q);
+      }
+      const above = q < hi ? q : Number.NaN;
+      const at = Number.isNaN(below) ? above : Number.isNaN(above) || chord - below <= above - chord ? below : above;
+      const f = solve.residual(at);
+      if (Math.abs(f) <= fTol) return { ok: true, power: at, limit: 'within' };
+      if (f < 0) {
+        lo = at;
+        fLo = f;
+      } else {
+        hi = at;
+        fHi = f;
+      }
+    }
+  } else if (!curve) {
     const ratio = hiThrust > 0 ? hiDeck / hiThrust : 1;
     const guess = solve.access.powerForThrust(condition, perEngineRequired_N * ratio, ceilingPower);
     if (guess !== null && guess > lo && guess < hi) {
       const g = solve.residual(guess);
-      if (g === 0) return { ok: true, power: guess, limit: 'within' };
-      if (g > 0) hi = guess;
-      else lo = guess;
+      if (Math.abs(g) <= fTol) return { ok: true, power: guess, limit: 'within' };
+      if (g > 0) {
+        hi = guess;
+        fHi = g;
+      } else {
+        lo = guess;
+        fLo = g;
+      }
     }
   }
-  const root = brent(solve.residual, lo, hi, {
-    fTol: FOR_THRUST_TOLERANCE * Math.max(Math.abs(perEngineRequired_N), 10),
-    xTol: 1e-12 * Math.max(1, Math.abs(ceilingPower - idlePower)),
+  const root = bracketedSecant(solve.residual, lo, fLo, hi, fHi, {
+    fTol,
+    xTol: 0,
     maxIterations: 100,
   });
   if (!root.ok) return { ok: false, error: { code: 'did_not_converge', message: root.error.message } };

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { brent, expandBracket } from '../../../engine/core/rootFind';
+import { bracketedSecant, brent, expandBracket } from '../../../engine/core/rootFind';
 import { expectOk } from '../../../engine/core/result';
 import { expectClose } from '../../support/assertInDelta';
 
@@ -99,5 +99,41 @@ describe('expandBracket', () => {
   it('reports not_finite for an empty interval', () => {
     const r = expandBracket((x) => x, 1, 1);
     expect(r.ok ? 'ok' : r.error.code).toBe('not_finite');
+  });
+});
+
+describe('bracketedSecant', () => {
+  it('solves a linear function exactly in one step (the chord of the bracket)', () => {
+    const f = (x: number) => 3 * x - 1.2;
+    const r = expectOk(bracketedSecant(f, 0, f(0), 1, f(1), { fTol: 1e-12 }), 'line');
+    expect(r.iterations).toBe(1);
+    expectClose(r.x, 0.4, { abs: 1e-15 }, 'closed form 1.2 / 3');
+  });
+  it('finds sqrt(2) and the Dottie number to the f tolerance, on either orientation', () => {
+    const g = (x: number) => x * x - 2;
+    const r = expectOk(bracketedSecant(g, 2, g(2), 0, g(0), { fTol: 1e-14 }), 'sqrt2');
+    expectClose(r.x, Math.SQRT2, { abs: 1e-14 }, 'sqrt(2)');
+    // The root of cos(x) - x (common practice; scipy.optimize.brentq gives 0.7390851332151607).
+    const h = (x: number) => Math.cos(x) - x;
+    expectClose(expectOk(bracketedSecant(h, 0, h(0), 1, h(1), { fTol: 1e-15 }), 'dottie').x, 0.7390851332151607, { abs: 1e-15 }, 'Dottie number');
+  });
+  it('converges superlinearly on a smooth function (bisection would need about 50 halvings)', () => {
+    const f = (x: number) => Math.exp(x) - 3;
+    const r = expectOk(bracketedSecant(f, 0, f(0), 2, f(2), { fTol: 1e-14 }), 'ln3');
+    expectClose(r.x, Math.log(3), { abs: 1e-14 }, 'ln 3');
+    expect(r.iterations).toBeLessThan(12);
+  });
+  it('locates a jump within xTol by its bisection safeguard', () => {
+    const f = (x: number) => (x < 0.3 ? -1 : 1);
+    const r = expectOk(bracketedSecant(f, 0, -1, 1, 1, { xTol: 1e-10 }), 'step');
+    expectClose(r.x, 0.3, { abs: 2e-10 }, 'jump');
+  });
+  it('refuses a bracket without a strict sign change or with non-finite values', () => {
+    const f = (x: number) => x;
+    const same = bracketedSecant(f, 1, 1, 2, 2);
+    expect(same.ok).toBe(false);
+    if (!same.ok) expect(same.error.code).toBe('no_bracket');
+    const bad = bracketedSecant(f, 0, Number.NaN, 1, 1);
+    expect(!bad.ok && bad.error.code).toBe('not_finite');
   });
 });
