@@ -153,6 +153,19 @@ function installedSlopeBreaks(access: DeckAccess, ctx: InstallationContext): Slo
   return { altitudes_m: deck?.altitudes_m ?? [], machs };
 }
 
+interface RatingMemo {
+  readonly altitude_m: number;
+  readonly mach: number;
+  readonly isaDev_K: number;
+  readonly point: InstalledPoint;
+}
+
+/** The point and its per-engine part frozen (a memoised point is shared by every identical query). */
+function freezePoint(point: InstalledPoint): InstalledPoint {
+  Object.freeze(point.perEngine);
+  return Object.freeze(point);
+}
+
 export function makeInstalledModel(access: DeckAccess, options: InstalledModelOptions): PropulsionModel {
   const ctx = installationContext(access, options);
   const scratch = newEngineScratch();
@@ -170,10 +183,26 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
     return pointAt(condition, freeStreamOf(access, condition), power, NO_CAUTIONS);
   }
 
+  // One-entry memo per rating, keyed by the condition's three numbers (Object.is: -0 and 0 stay apart) and nothing
+  // else: the model's answer at a rating is a pure function of them, so a repeated query (a mission asks the same
+  // rating at the same condition in a row, ~40 % of its atRating calls) returns the same frozen point.
+  const ratingMemo = new Map<RatingName, RatingMemo>();
+
   function atRating(condition: FlightCondition, rating: RatingName): InstalledPoint {
     checkCondition(condition);
+    const memo = ratingMemo.get(rating);
+    if (
+      memo !== undefined &&
+      Object.is(memo.altitude_m, condition.altitude_m) &&
+      Object.is(memo.mach, condition.mach) &&
+      Object.is(memo.isaDev_K, condition.isaDev_K)
+    ) {
+      return memo.point;
+    }
     const { power, caution } = resolveRating(access, named, condition, rating);
-    return pointAt(condition, freeStreamOf(access, condition), power, caution ? [caution] : NO_CAUTIONS);
+    const point = freezePoint(pointAt(condition, freeStreamOf(access, condition), power, caution ? [caution] : NO_CAUTIONS));
+    ratingMemo.set(rating, { altitude_m: condition.altitude_m, mach: condition.mach, isaDev_K: condition.isaDev_K, point });
+    return point;
   }
 
   function forThrust(condition: FlightCondition, thrustRequired_N: number, ceilingRating: RatingName = 'maxCruise'): PartPowerPoint {

@@ -271,6 +271,29 @@ describe('cautions', () => {
   });
 });
 
+describe('atRating memo', () => {
+  it('atRating answers depend only on the query: the same as a fresh model after any history, frozen, -0 kept apart from 0', () => {
+    const m = model(TABLE_INLET);
+    const asked: [FlightCondition, 'maxClimb' | 'flightIdle' | 'maxCruise'][] = [
+      [CRUISE, 'maxClimb'],
+      [CRUISE, 'maxClimb'],
+      [CRUISE, 'flightIdle'],
+      [{ ...CRUISE, mach: 0.78 }, 'maxClimb'],
+      [CRUISE, 'maxClimb'],
+      [{ altitude_m: 0, mach: 0.3, isaDev_K: 0 }, 'maxCruise'],
+      [{ altitude_m: -0, mach: 0.3, isaDev_K: 0 }, 'maxCruise'],
+    ];
+    for (const [condition, rating] of asked) {
+      m.forThrust(condition, 0.5 * m.atRating(condition, 'maxCruise').thrust_N);
+      const p = m.atRating(condition, rating);
+      expect(p).toEqual(model(TABLE_INLET).atRating(condition, rating));
+      expect(Object.is(p.altitude_m, condition.altitude_m)).toBe(true);
+      expect(Object.isFrozen(p) && Object.isFrozen(p.perEngine)).toBe(true);
+    }
+    expect(m.atRating(CRUISE, 'maxClimb')).toBe(m.atRating({ ...CRUISE }, 'maxClimb'));
+  });
+});
+
 describe('deckCurve', () => {
   it('deckCurve evaluates exactly what lookupDeck returns, incl. off-table and ISA deviation', () => {
     const curve = deckCurve(deck);
