@@ -5,6 +5,7 @@
 import type { DistanceBasis, Leg, MissionInput } from './missionTypes';
 import { S_AIR, S_GROUND } from './missionState';
 import type { FlightLog } from './timeHistoryBuilder';
+import type { PassMemo } from './passMemo';
 
 export interface LegEnvironmentResolved {
   readonly isaDev_K: number;
@@ -23,6 +24,8 @@ export interface MissionContext {
   readonly options: FlightOptions;
   readonly zeroFuelMass_kg: number;
   readonly log: FlightLog;
+  /** What earlier passes of the same solve flew (passMemo.ts); read only while fuel may pass below zero-fuel mass (the iteration's passes). */
+  readonly memo?: PassMemo;
 }
 
 /** Where a leg's samples and cautions go. */

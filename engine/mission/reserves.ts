@@ -86,6 +86,12 @@ function descentSettings(input: MissionInput, alternate: AlternateSpec): { sched
   return { schedule: climbSettings(input, alternate).schedule, mode: { kind: 'idle' } };
 }
 
+/** How far (factor) the contingency fraction must exceed the minimum's hold fuel, predicted from an earlier pass, for the hold not to be flown again. */
+const CONTINGENCY_SKIP_MARGIN = 1.25;
+
+/** Widest bracket (kg of mass at the top of descent) the alternate's descent table interpolates across. */
+const ALTERNATE_TABLE_SPAN_KG = 600;
+
 /** Flies to the alternate: climb, cruise, descent to 1,500 ft above it. */
 function flyAlternate(ctx: MissionContext, target: LegTarget, start: StateVector, alt: AlternateSpec): LegOutcome {
   const input = ctx.input;
@@ -98,21 +104,30 @@ function flyAlternate(ctx: MissionContext, target: LegTarget, start: StateVector
   const climb = flyClimb(ctx, target, start, top, climbSpec.schedule, climbSpec.rating);
   if (climb.status !== 'ok') return climb;
   // Descent distance from a trial descent at the estimated top-of-descent mass (cruise fuel from the
-  // specific range at the top of climb), so the alternate's still-air distance is met closely.
+  // specific range at the top of climb), so the alternate's still-air distance is met closely. The descent
+  // distance depends only on the mass at its top (same altitude, air and wind): the passes of one solve share the
+  // ones flown (PassMemo.alternateDescent), read where the table brackets the mass (parabola through the three
+  // nearest) or, for the first estimate only, lies within 100 kg of it.
   const scratch: MissionContext = { ...ctx, log: createFlightLog(input.airframe, input.cautionSettings, true) };
+  const table = ctx.options.allowNegativeFuel ? ctx.memo?.alternateDescent : undefined;
   const climbed = climb.state[k] - startAir;
-  const trialDescent = (mass_kg: number) => {
+  const trialDescent = (mass_kg: number, maxExtrapolation_kg: number): { readonly failure: LegOutcome | null; readonly distance_m: number } => {
+    const known = table?.at(mass_kg, ALTERNATE_TABLE_SPAN_KG, maxExtrapolation_kg) ?? null;
+    if (known !== null) return { failure: null, distance_m: known };
     const from = Float64Array.from(climb.state);
     from[S_MASS] = mass_kg;
     const trial = flyDescent(scratch, target, from, holdAltitude, descentSpec.schedule, descentSpec.mode);
-    return { trial, distance_m: trial.state[k] - from[k] };
+    const distance_m = trial.state[k] - from[k];
+    if (trial.status !== 'ok') return { failure: trial, distance_m };
+    table?.add(mass_kg, distance_m);
+    return { failure: null, distance_m };
   };
-  const first = trialDescent(climb.state[S_MASS]);
-  if (first.trial.status !== 'ok') return first.trial;
+  const first = trialDescent(climb.state[S_MASS], 100);
+  if (first.failure !== null) return first.failure;
   const sr = basisSpecificRange(input, specificRangeAt(input, top, alt.cruiseMach, climb.state[S_MASS], target.env.isaDev_K), top, alt.cruiseMach, target.env);
   const cruiseEstimate = Math.max(alt.distance_m - climbed - first.distance_m, 0);
-  const second = sr > 0 ? trialDescent(climb.state[S_MASS] - cruiseEstimate / sr) : first;
-  const descentDistance = second.trial.status === 'ok' ? second.distance_m : first.distance_m;
+  const second = sr > 0 ? trialDescent(climb.state[S_MASS] - cruiseEstimate / sr, 0) : first;
+  const descentDistance = second.failure === null ? second.distance_m : first.distance_m;
   const cruiseDistance = alt.distance_m - climbed - descentDistance;
   let state = climb.state;
   if (cruiseDistance < 0) {
@@ -138,7 +153,9 @@ function flyAlternate(ctx: MissionContext, target: LegTarget, start: StateVector
     if (cruise.status !== 'ok') return cruise;
     state = cruise.state;
   }
-  return flyDescent(ctx, target, state, holdAltitude, descentSpec.schedule, descentSpec.mode);
+  const descent = flyDescent(ctx, target, state, holdAltitude, descentSpec.schedule, descentSpec.mode);
+  if (descent.status === 'ok') table?.add(state[S_MASS], descent.state[k] - state[k]);
+  return descent;
 }
 
 /** Flies `time_s` at the mission's normal cruise (first cruise leg's altitude and speed rule) from `start`. */
@@ -240,10 +257,20 @@ export function flyReserves(ctx: MissionContext, trip: TripSummary): ReserveFlig
   if (policy.preset === 'icaoAnnex6') {
     const fraction = policy.contingencyFraction * trip.tripFuel_kg;
     const holdTarget: LegTarget = { legIndex: -1, legName: 'contingency minimum', env: standardEnv, recordHistory: false };
-    const scratch: MissionContext = { ...ctx, log: createFlightLog(input.airframe, input.cautionSettings, true) };
-    const hold = flyHold(scratch, holdTarget, state, destination + HOLD_HEIGHT_M, policy.minContingency_s, holdSpeed);
-    const holdFuel = state[S_MASS] - hold.state[S_MASS];
-    contingency = Math.max(fraction, hold.status === 'ok' ? holdFuel : 0);
+    // The minimum's hold is flown unless an earlier pass of the same solve flew it and, scaled in proportion to the
+    // mass (fuel flow ~ weight at the hold's constant lift coefficient), it stays below the fraction by a quarter.
+    const table = ctx.options.allowNegativeFuel ? ctx.memo?.contingencyHold : undefined;
+    const flown = table?.nearest(state[S_MASS]) ?? null;
+    const predicted = flown !== null && flown.mass_kg > 0 ? (flown.value * state[S_MASS]) / flown.mass_kg : Infinity;
+    if (fraction >= CONTINGENCY_SKIP_MARGIN * predicted) {
+      contingency = fraction;
+    } else {
+      const scratch: MissionContext = { ...ctx, log: createFlightLog(input.airframe, input.cautionSettings, true) };
+      const hold = flyHold(scratch, holdTarget, state, destination + HOLD_HEIGHT_M, policy.minContingency_s, holdSpeed);
+      const holdFuel = state[S_MASS] - hold.state[S_MASS];
+      if (hold.status === 'ok') table?.add(state[S_MASS], holdFuel);
+      contingency = Math.max(fraction, hold.status === 'ok' ? holdFuel : 0);
+    }
     const start = state;
     state = Float64Array.from(state);
     state[S_MASS] -= contingency;

@@ -30,6 +30,7 @@ import { evaluateMission, fuelBand, iterateDistance, iterateRampMass, type Itera
 import { solvableLegIndex, tripBounds } from './flyTrip';
 import { distanceBasis, legEnvironment, type FlightOptions, type LegTarget, type MissionContext } from './missionContext';
 import { missionInputProblem } from './missionInputCheck';
+import { createPassMemo } from './passMemo';
 import { S_AIR, S_GROUND, S_MASS, S_TIME } from './missionState';
 import type { MissionInput, MissionResult, MissionStart, MissionStatus, ReserveBreakdown } from './missionTypes';
 import { appendCaution, buildTimeHistory, createFlightLog } from './timeHistoryBuilder';
@@ -216,7 +217,7 @@ function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult
   const zfw = input.airframe.oew_kg + payload;
   const taxi = taxiOutFuel(input);
   const flightOptions: FlightOptions = { stepScale, allowNegativeFuel: false };
-  const base: MissionContext = { input, options: flightOptions, zeroFuelMass_kg: zfw, log: createFlightLog(input.airframe, input.cautionSettings) };
+  const base: MissionContext = { input, options: flightOptions, zeroFuelMass_kg: zfw, log: createFlightLog(input.airframe, input.cautionSettings), memo: createPassMemo() };
   const solve = input.solve;
   const band = fuelBand(options.fuelTolerance_kg);
   const hasSolvable = solvableLegIndex(input) >= 0;
