@@ -6,7 +6,8 @@ import { assumptionLines } from '../format/missionSummaryText';
 import { installationAssumptions } from '../../engine/project';
 import type { CliIo, Verb } from '../verb';
 import { INLET_OPTION, JSON_OPTION, openAnalysisProject } from './analysisArgs';
-import { recoveryTradeByMethod } from '../../engine/analysis';
+import { recoveryTradeByMethod, type KnownRecoveryTrade } from '../../engine/analysis';
+import type { MissionInput } from '../../engine/mission';
 import { recoveryMethodVariants } from '../../engine/project';
 import { verbSummary } from './catalogue';
 import { NAUTICAL_MILE_M } from '../../engine/units';
@@ -42,7 +43,15 @@ unreadable; 2 bad command line; 3 the design mission failed.
     const r = tradeFactors(input, cRam === undefined ? {} : { cRam });
     if (!r.ok) return analysisFailed(io, 'trade', r.error.message);
     const v = r.value;
-    const byMethod = recoveryTradeByMethod(recoveryMethodVariants(project, deck, input.propulsion.inletName));
+    // The project's own recovery method is the trade factors' recovery factor on the same input: taken, not flown again.
+    const recovery = v.factors.find((f) => f.name === 'recovery');
+    const own: KnownRecoveryTrade | undefined =
+      input.solve.kind === 'payloadRange' && input.propulsion.withRecoveryOffset !== undefined && recovery?.blockFuelPerUnit_kg != null && recovery.blockFuelPerUnitHalfStep_kg != null
+        ? { baselineBlockFuel_kg: v.baselineBlockFuel_kg, blockFuelPerPercent_kg: recovery.blockFuelPerUnit_kg, halfStep_kg: recovery.blockFuelPerUnitHalfStep_kg }
+        : undefined;
+    const byMethod = recoveryTradeByMethod(recoveryMethodVariants(project, deck, input.propulsion.inletName), {
+      reuse: (c) => (own !== undefined && !('unavailable' in c.input) && sameFlight(c.input, input) ? own : undefined),
+    });
     if (!byMethod.ok) return analysisFailed(io, 'trade', byMethod.error.message);
     const assumptions = installationAssumptions(project, deck.hasSensitivities).map((a) => a.text);
     if (values.json === true) {
@@ -85,9 +94,42 @@ unreadable; 2 bad command line; 3 the design mission failed.
         ]),
       ),
       ...m.rows.filter((row) => row.note !== null).map((row) => `  ${row.label}: ${row.note}`),
-      `  ${m.description} ${m.missions} missions.`,
+      `  ${m.description} ${m.missions} missions${m.reused.length === 0 ? '' : `; ${m.rows.filter((row) => m.reused.includes(row.id)).map((row) => `"${row.label}"`).join(', ')} is the project's own method, its row the recovery factor above`}.`,
       ...assumptionLines(assumptions),
     ]);
     return 0;
   },
 };
+
+/**
+ * True when two mission inputs built from the same project and deck fly the
+ * same aircraft: equal data (airframe, legs, reserves, solve mode, settings)
+ * and models that answer a few probes identically (drag, thrust and fuel
+ * flow at two ratings, part power, recovery raised by 0.01, the installation
+ * method), so one's computed trade is the other's.
+ */
+function sameFlight(a: MissionInput, b: MissionInput): boolean {
+  const data = (m: MissionInput) => JSON.stringify({ ...m, aero: null, propulsion: null });
+  if (data(a) !== data(b)) return false;
+  const pa = a.propulsion;
+  const pb = b.propulsion;
+  if (pa.installationMethod !== pb.installationMethod || pa.inletName !== pb.inletName || pa.engineCount !== pb.engineCount) return false;
+  const points = [
+    { altitude_m: 0, mach: 0.25, isaDev_K: 0 },
+    { altitude_m: 11000, mach: 0.78, isaDev_K: 10 },
+  ];
+  const same = (x: { thrust_N: number; fuelFlow_kg_s: number }, y: { thrust_N: number; fuelFlow_kg_s: number }) => x.thrust_N === y.thrust_N && x.fuelFlow_kg_s === y.fuelFlow_kg_s;
+  const ra = pa.withRecoveryOffset?.(0.01);
+  const rb = pb.withRecoveryOffset?.(0.01);
+  for (const c of points) {
+    for (const rating of ['maxClimb', 'flightIdle'] as const) {
+      if (!same(pa.atRating(c, rating), pb.atRating(c, rating))) return false;
+      if (ra !== undefined && rb !== undefined && !same(ra.atRating(c, rating), rb.atRating(c, rating))) return false;
+    }
+    const half = 0.5 * pa.atRating(c, 'maxCruise').thrust_N;
+    if (!same(pa.forThrust(c, half), pb.forThrust(c, half))) return false;
+    const q = { altitude_m: c.altitude_m, mach: c.mach, mass_kg: a.airframe.oew_kg, loadFactor: 1 };
+    if (a.aero.drag(q).drag_N !== b.aero.drag(q).drag_N) return false;
+  }
+  return (ra === undefined) === (rb === undefined);
+}

@@ -11,7 +11,7 @@ export { payloadRangeDiagram, type PayloadRangeResult } from './payloadRange';
 export { compareInlets, type InletComparisonResult, type InletFactor } from './inletComparison';
 export { inletFactorBuilder, type InletPair } from './inletFactorBuilder';
 export { tradeFactors, type TradeFactorsResult } from './tradeFactors';
-export { RECOVERY_TRADE_DESCRIPTION, recoveryTradeByMethod, type RecoveryMethodCase, type RecoveryTradeByMethod, type RecoveryTradeRow } from './recoveryTradeByMethod';
+export { RECOVERY_TRADE_DESCRIPTION, recoveryTradeByMethod, type KnownRecoveryTrade, type RecoveryMethodCase, type RecoveryTradeByMethod, type RecoveryTradeRow } from './recoveryTradeByMethod';
 export type { HighSpeedLimitSource } from './crossover';
 export type { LowSpeedLimitSource } from './crossover';
 export { SPEED_LIMIT_SOURCE_TEXT } from './crossover';

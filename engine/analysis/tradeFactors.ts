@@ -9,7 +9,7 @@ import type { PropulsionModel } from '../propulsion/propulsionModel';
 import { adjustPropulsion } from './adjustedPropulsion';
 import { describeInstallationMethod } from '../propulsion/installationMethod';
 import type { AnalysisError, MissionSolver } from './analysisTypes';
-import { lagrangeWeights, solveFrom, type NeighbourStart } from './warmStart';
+import { solveFrom, STEP_ORDER, stepStart, type NeighbourStart, type StepMission } from './warmStart';
 
 export type TradeFactorName = 'recovery' | 'dragCount' | 'tsfc' | 'oew';
 
@@ -104,15 +104,11 @@ export function tradeFactors(input: MissionInput, options: TradeFactorOptions): 
   };
   const factors: TradeFactor[] = [];
   for (const name of ['recovery', 'dragCount', 'tsfc', 'oew'] as const) {
-    // Flown +1/2, -1/2, +1, -1 unit, each started from the missions of this factor flown so far (the baseline at 0):
-    // its figures predicted by the polynomial through them (Lagrange weights), so each converges in fewer passes.
-    const flown: { readonly u: number; readonly result: MissionResult }[] = [{ u: 0, result: base.value }];
+    // Flown +1/2, -1/2, +1, -1 unit, each started from the missions of this factor flown so far (warmStart.ts stepStart).
+    const flown: StepMission[] = [{ u: 0, result: base.value }];
     const byStep = new Map<number, Result<MissionResult, AnalysisError>>();
-    for (const u of [0.5, -0.5, 1, -1]) {
-      const weights = lagrangeWeights(flown.map((f) => f.u), u);
-      const start: NeighbourStart = { from: flown[flown.length - 1]!.result, blend: flown.map((f, k) => ({ weight: weights[k]!, result: f.result })) };
-      // The first step has only the baseline, another aircraft, to go by: it starts cold.
-      const r = fly(perturb[name].apply(u), `${name} ${u > 0 ? '+' : ''}${u} unit`, flown.length > 1 ? start : undefined);
+    for (const u of STEP_ORDER) {
+      const r = fly(perturb[name].apply(u), `${name} ${u > 0 ? '+' : ''}${u} unit`, stepStart(flown, u));
       if (!r.ok && r.error.code === 'cancelled') return r;
       if (r.ok) flown.push({ u, result: r.value });
       byStep.set(u, r);

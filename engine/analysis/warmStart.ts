@@ -108,3 +108,24 @@ export function lagrangeWeights(ts: readonly number[], t: number): number[] {
   return ts.map((tk, k) => ts.reduce((w, tj, j) => (j === k ? w : (w * (t - tj)) / (tk - tj)), 1));
 }
 
+
+/** A mission of a central-difference trade flown at step u (units of the factor; the baseline at 0). */
+export interface StepMission {
+  readonly u: number;
+  readonly result: MissionResult;
+}
+
+/** The order the steps of a trade are flown in: each is predicted from those before, the nearest first. */
+export const STEP_ORDER: readonly number[] = [0.5, -0.5, 1, -1];
+
+/**
+ * Start for the mission at step u: the polynomial through the missions flown
+ * so far at their steps (Lagrange weights), from the last one flown. None
+ * while only the baseline is known: a perturbed aircraft has nothing to
+ * predict its figures but another aircraft, and starts cold.
+ */
+export function stepStart(flown: readonly StepMission[], u: number): NeighbourStart | undefined {
+  if (flown.length < 2) return undefined;
+  const weights = lagrangeWeights(flown.map((f) => f.u), u);
+  return { from: flown[flown.length - 1]!.result, blend: flown.map((f, k) => ({ weight: weights[k]!, result: f.result })) };
+}

@@ -180,5 +180,13 @@ describe('blockwise payload-range, compare and trade', () => {
     expect(Math.abs(rec.blockFuelPerUnit_kg! - rec.blockFuelPerUnitHalfStep_kg!)).toBeLessThan(0.1 * Math.abs(rec.blockFuelPerUnitHalfStep_kg!));
     const text = await run('trade', shortProject);
     for (const line of SAFETY_NOTICE_LINES) expect(text.out).toContain(line);
+    // The project's own recovery method (the demo deck's sensitivity columns) is the recovery factor above, taken
+    // rather than flown again: its row carries the same figures and baseline.
+    const own = (j as unknown as { recoveryByMethod: { rows: { id: string; blockFuelPerPercent_kg: number | null; halfStep_kg: number | null; baselineBlockFuel_kg: number | null }[]; reused: string[] } }).recoveryByMethod;
+    expect(own.reused).toEqual(['deckSensitivities']);
+    const row = own.rows.find((x) => x.id === 'deckSensitivities')!;
+    expect(row.blockFuelPerPercent_kg).toBe(rec.blockFuelPerUnit_kg);
+    expect(row.halfStep_kg).toBe(rec.blockFuelPerUnitHalfStep_kg);
+    expect(text.out).toMatch(/"the deck's sensitivity columns" is the project's own method/);
   }, LONG);
 });

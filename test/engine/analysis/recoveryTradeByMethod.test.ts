@@ -34,6 +34,29 @@ describe('recoveryTradeByMethod', () => {
     expect(r.relativeToFirst).toEqual([0, null]);
   });
 
+  it('takes a case computed elsewhere on the same input instead of flying it, and says so', () => {
+    const input = { solve: { kind: 'payloadRange', payload_kg: 500, range_m: 1e6 }, propulsion: offsetModel(0) } as unknown as MissionInput;
+    let flown = 0;
+    const solve = (m: MissionInput) => {
+      flown++;
+      return { status: 'ok', statusMessage: '', blockFuel_kg: 5000 - 6000 * (m.propulsion as unknown as { offset: number }).offset } as unknown as MissionResult;
+    };
+    const progress: [number, number][] = [];
+    const known = { baselineBlockFuel_kg: 4000, blockFuelPerPercent_kg: -40, halfStep_kg: -30 };
+    const r = expectOk(
+      recoveryTradeByMethod([{ id: 'a', label: 'a', input }, { id: 'own', label: 'own', input }], { solve, reuse: (c) => (c.id === 'own' ? known : undefined), onProgress: (d, t) => progress.push([d, t]) }),
+      'trade',
+    );
+    // One case flown (the design mission and four steps), the other taken as given.
+    expect(flown).toBe(5);
+    expect(r.missions).toBe(5);
+    expect(r.reused).toEqual(['own']);
+    expect(progress.at(-1)).toEqual([5, 5]);
+    // -40 against -30 kg: |d(1) - d(1/2)| = 10 > 5 % x 30 + 0.01, so the steps disagree (the stated tolerance).
+    expect(r.rows[1]).toMatchObject({ blockFuelPerPercent_kg: -40, halfStep_kg: -30, baselineBlockFuel_kg: 4000, converged: false });
+    expect(r.rows[1]!.note).toMatch(/disagree/);
+  });
+
   it('on the demo: both Raymer conventions and the deck\'s sensitivity columns save fuel, fuel held more than fuel scaled; the cycle row says why it is absent', () => {
     const { project, deck } = demoProject();
     const short = { ...project, mission: { ...project.mission, solve: { mode: 'payloadRange' as const, payload: 700, range: 800 * 1852 } } };
