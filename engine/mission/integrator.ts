@@ -152,6 +152,12 @@ function hermite(y0: StateVector, f0: Float64Array, y1: StateVector, f1: Float64
 }
 
 /**
+ * The RK4 steps tried from one step's start while its events are located, by length: the step to the event found
+ * is then taken from here instead of being integrated again.
+ */
+type TrialSteps = Map<number, StateVector>;
+
+/**
  * Step length tau in (0, h] where event `index` first reaches zero, by the
  * Illinois method: on the step's Hermite interpolant for state-only events
  * (no extra evaluations), else on RK4 steps of length tau from the step start.
@@ -165,17 +171,23 @@ function locateEvent(
   index: number,
   gStart: number,
   end: Evaluation & { readonly state: StateVector },
+  trials: TrialSteps,
 ): number {
   const event = segment.events[index];
   // A trial step that leaves the domain reads as NaN: the root finders then keep the bracket they have.
-  const onStep = (tau: number) => {
+  const trialStep = (tau: number) => {
     const yt = rk4Step(segment, domain, y, k1, tau);
+    if (typeof yt !== 'string') trials.set(tau, yt);
+    return yt;
+  };
+  const onStep = (tau: number) => {
+    const yt = trialStep(tau);
     return typeof yt === 'string' ? Number.NaN : event.g(yt, segment.evaluate(yt).sample);
   };
   if (event.stateOnly) {
     // A state-only event ignores the sample: no evaluation at the trial point (a quarter of each trial's cost).
     const onStepState = (tau: number) => {
-      const yt = rk4Step(segment, domain, y, k1, tau);
+      const yt = trialStep(tau);
       return typeof yt === 'string' ? Number.NaN : event.g(yt, end.sample);
     };
     const guess = illinois((tau) => event.g(hermite(y, k1, end.state, end.derivative, h, tau / h), end.sample), gStart, h, 0);
@@ -287,10 +299,17 @@ export function integrateSegment(segment: Segment, start: StateVector, sink: Sam
     }
     let firstTau = Infinity;
     let firstIndex = -1;
+    let trials: TrialSteps | null = null;
     for (let i = 0; i < segment.events.length; i++) {
-      const g = segment.events[i].g(next, nextEv.sample);
+      const event = segment.events[i];
+      const g = event.g(next, nextEv.sample);
       if (g >= 0 || !Number.isFinite(g)) {
-        const tau = locateEvent(segment, domain, current, ev.derivative, h, i, gNow[i], { ...nextEv, state: next });
+        // A state-only event exactly met at the step's end (a hold's time on a whole step) needs no search.
+        let tau = h;
+        if (!(g === 0 && event.stateOnly)) {
+          trials ??= new Map();
+          tau = locateEvent(segment, domain, current, ev.derivative, h, i, gNow[i], { ...nextEv, state: next }, trials);
+        }
         if (tau < firstTau) {
           firstTau = tau;
           firstIndex = i;
@@ -301,7 +320,7 @@ export function integrateSegment(segment: Segment, start: StateVector, sink: Sam
     }
     if (firstIndex >= 0) {
       if (firstTau < h) {
-        const located = rk4Step(segment, domain, current, ev.derivative, firstTau);
+        const located = trials?.get(firstTau) ?? rk4Step(segment, domain, current, ev.derivative, firstTau);
         if (typeof located === 'string') return { end: current, endSample: ev.sample, stop: 'left_domain', domainExit: located };
         next = located;
         nextEv = accept(segment, next);
