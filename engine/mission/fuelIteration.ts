@@ -21,7 +21,8 @@ import { flyTrip, solvableLegIndex, type SolvedDistance, type TripOutcome } from
 import { distanceIndex, legEnvironment, type MissionContext } from './missionContext';
 import { S_AIR, S_MASS, S_TIME } from './missionState';
 import { createFlightLog, type FlightLog } from './timeHistoryBuilder';
-import type { MissionStart } from './missionTypes';
+import type { Leg, MissionInput, MissionStart } from './missionTypes';
+import { FOOT_M } from '../units/unitTable';
 import { msg, q, type MessageParts } from '../units/messageParts';
 
 /**
@@ -245,6 +246,43 @@ function solvableFuelPerMetre(e: MissionEvaluation): number {
   return d > 0 ? e.trip.solvableFuel_kg / d : 0;
 }
 
+/** The share of trip fuel the reserve policy adds as contingency (ICAO Annex 6 and custom presets), 0 otherwise. */
+function contingencyShare(input: MissionInput): number {
+  const p = input.reserves;
+  return (p.preset === 'icaoAnnex6' || p.preset === 'custom') && p.contingencyFraction > 0 ? p.contingencyFraction : 0;
+}
+
+/**
+ * Distance (m, mission's basis) a cruise leg flies on `fuel_kg` from `startMass_kg`: the integral of the specific
+ * range over the mass, by Simpson's rule on four intervals (Burden & Faires, Numerical Analysis, 4.3), at each mass
+ * the best specific range among the leg's levels (its altitude, its steps up to the maximum, or for a cruise-climb
+ * every 1,000 ft up to the maximum); NaN when a specific range is not positive.
+ */
+function spareFuelDistance(input: MissionInput, leg: Extract<Leg, { kind: 'cruise' }>, env: { readonly isaDev_K: number; readonly wind_m_s: number }, startMass_kg: number, fuel_kg: number): number {
+  if (!(fuel_kg > 0) || !(startMass_kg - fuel_kg > 0)) return Number.NaN;
+  const levels = [leg.altitude_m];
+  const p = leg.profile;
+  const spacing = p.kind === 'stepClimb' ? p.step_m : p.kind === 'cruiseClimb' ? 1000 * FOOT_M : 0;
+  if (p.kind !== 'constantAltitude' && spacing > 0) for (let h = leg.altitude_m + spacing; h <= p.maxAltitude_m + 1e-6 && levels.length < 40; h += spacing) levels.push(h);
+  const srAt = (m: number) => {
+    let best = 0;
+    for (const h of levels) {
+      const mach = cruiseMach(input, leg.speed, h, m, env.isaDev_K);
+      best = Math.max(best, basisSpecificRange(input, specificRangeAt(input, h, mach, m, env.isaDev_K), h, mach, env));
+    }
+    return best;
+  };
+  const n = 4;
+  const dm = fuel_kg / n;
+  let sum = 0;
+  for (let i = 0; i <= n; i++) {
+    const v = srAt(startMass_kg - i * dm);
+    if (!(v > 0)) return Number.NaN;
+    sum += (i === 0 || i === n ? 1 : i % 2 === 1 ? 4 : 2) * v;
+  }
+  return (sum * dm) / 3;
+}
+
 /**
  * Fixed ramp mass: the solvable leg's distance (m, mission's basis) so the residual lies in the fuel band. A cold
  * start flies the leg at zero length first (so a reserve that cannot be carried is named), then steps by the
@@ -276,18 +314,24 @@ export function iterateDistance(ctx: MissionContext, rampMass_kg: number, start:
   if (failedFlight(e0)) return { kind: 'flightFailed', rampMass_kg, distance_m: d0, iterations: 1, residual_kg: e0.residual_kg, failure: e0 };
   if (d0 === 0 && e0.residual_kg < 0) return infeasible(e0, 1);
   // The cold slope (kg/m): minus the fuel per metre at the leg's specific range, at the mass the leg is expected to end with.
-  const leg = input.legs[solvableLegIndex(input)];
+  const index = solvableLegIndex(input);
+  const leg = input.legs[index];
   let sr = 0;
+  let estimate = Number.NaN;
   if (leg && leg.kind === 'cruise') {
     const env = legEnvironment(input, leg);
     const m = e0.trip.takeoff[S_MASS] - Math.max(e0.residual_kg, 0) / 2;
     const mach = cruiseMach(input, leg.speed, leg.altitude_m, m, env.isaDev_K);
     sr = basisSpecificRange(input, specificRangeAt(input, leg.altitude_m, mach, m, env.isaDev_K), leg.altitude_m, mach, env);
+    // A cold start's second pass: the distance the spare fuel flies on the leg (Simpson's rule on the specific range
+    // at the best of the leg's levels), the spare fuel less the contingency that grows with it.
+    const row = e0.trip.rows.find((r) => r.index === index);
+    if (zeroFlown && row !== undefined) estimate = spareFuelDistance(input, leg, env, row.startMass_kg, (e0.residual_kg - band.aim_kg) / (1 + contingencyShare(input)));
   }
   const coldSlope = -1 / (sr > 0 ? sr : 100);
   let slope = usable(start.slope) && start.slope < 0 ? start.slope : coldSlope;
   if (fuelConverged(e0.residual_kg, band)) return converged(d0, e0, 1, slope);
-  let d1 = d0 - (e0.residual_kg - band.aim_kg) / slope;
+  let d1 = usable(estimate, true) ? estimate : d0 - (e0.residual_kg - band.aim_kg) / slope;
   for (let k = 2; k <= MAX_ITERATIONS; k++) {
     if (!Number.isFinite(d1)) break;
     if (d1 <= 0) {
@@ -302,7 +346,15 @@ export function iterateDistance(ctx: MissionContext, rampMass_kg: number, start:
     if (Number.isFinite(secant) && secant < 0) slope = secant;
     if (fuelConverged(e1.residual_kg, band)) return converged(d1, e1, k, slope);
     const aimed = e1.residual_kg - band.aim_kg;
-    const next = Number.isFinite(secant) && secant < 0 ? d1 - aimed / secant : d1 - aimed / coldSlope;
+    // Newton's method with the marginal slope at the leg's end (its fuel per metre there, plus the contingency that
+    // grows with it) while the secant still spans the zero-length pass; the secant method after.
+    const marginal = e1.trip.solvableEndFuelPerMetre > 0 ? -e1.trip.solvableEndFuelPerMetre * (1 + contingencyShare(input)) : Number.NaN;
+    const next =
+      d0 === 0 && Number.isFinite(marginal)
+        ? d1 - aimed / marginal
+        : Number.isFinite(secant) && secant < 0
+          ? d1 - aimed / secant
+          : d1 - aimed / coldSlope;
     d0 = d1;
     e0 = e1;
     d1 = next;
