@@ -22,8 +22,9 @@ export interface AccessError {
  * Evaluator of the deck at one prepared condition: thrust (N) and airflow
  * (kg/s, NaN without airflow) into out[0], out[1], and for a deck with
  * sensitivities the nine of them (slot order of SENSITIVITY_FIELDS,
- * installationSensitivities.ts) into out[2..10]; `out` has CURVE_VALUES
- * entries. False where the deck refuses.
+ * installationSensitivities.ts) into out[2..10], the three fuel-flow ones
+ * as 0 (the part-power solve needs installed thrust only); `out` has
+ * CURVE_VALUES entries. False where the deck refuses.
  */
 export type DeckCurve = (power: number, out: Float64Array) => boolean;
 

@@ -358,7 +358,9 @@ export const DECK_VALUES_WITH_SENSITIVITIES = 3 + SENSITIVITY_STRIDE;
  * fuel flow (kg/s) and airflow (kg/s; 0 without an airflow column) into
  * out[0..2]; when the grid has sensitivities and `out` has room
  * (DECK_VALUES_WITH_SENSITIVITIES), the sensitivities, interpolated by the
- * same weights, into out[3..11]. Sets the power bit of s.outsideMask when a node's power range is
+ * same weights, into out[3..11]. With `withFuelFlow` false the fuel flow and
+ * its three sensitivities are skipped and written as 0 (for callers that need
+ * thrust and airflow only). Sets the power bit of s.outsideMask when a node's power range is
  * left; returns false when that happens under policy 'refuse'.
  */
 export function evaluateDeckNodesInto(
@@ -367,13 +369,25 @@ export function evaluateDeckNodesInto(
   power: number,
   powerPolicy: OutOfTablePolicy,
   out: Float64Array,
+  withFuelFlow = true,
 ): boolean {
+  // Sums in locals (each starts at 0, so the result is the same as summing into `out`), written out at the end.
   let thrust = 0;
   let fuel = 0;
   let air = 0;
+  let s0 = 0;
+  let s1 = 0;
+  let s2 = 0;
+  let s3 = 0;
+  let s4 = 0;
+  let s5 = 0;
+  let s6 = 0;
+  let s7 = 0;
+  let s8 = 0;
+  const thrustColumn = grid.thrust_N;
+  const fuelColumn = grid.fuelFlow_kg_s;
   const airflow = grid.airflow_kg_s;
   const sens = out.length >= DECK_VALUES_WITH_SENSITIVITIES ? grid.sensitivities : null;
-  if (sens) out.fill(0, 3, DECK_VALUES_WITH_SENSITIVITIES);
   for (let k = 0; k < s.count; k++) {
     const node = s.node[k]!;
     const w = s.weight[k]!;
@@ -391,18 +405,39 @@ export function evaluateDeckNodesInto(
       }
     }
     const u = 1 - t;
-    thrust += w * (u * grid.thrust_N[i]! + t * grid.thrust_N[i + 1]!);
-    fuel += w * (u * grid.fuelFlow_kg_s[i]! + t * grid.fuelFlow_kg_s[i + 1]!);
+    thrust += w * (u * thrustColumn[i]! + t * thrustColumn[i + 1]!);
+    if (withFuelFlow) fuel += w * (u * fuelColumn[i]! + t * fuelColumn[i + 1]!);
     if (airflow) air += w * (u * airflow[i]! + t * airflow[i + 1]!);
     if (sens) {
       const a = i * SENSITIVITY_STRIDE;
       const b = a + SENSITIVITY_STRIDE;
-      for (let j = 0; j < SENSITIVITY_STRIDE; j++) out[3 + j] = out[3 + j]! + w * (u * sens[a + j]! + t * sens[b + j]!);
+      s0 += w * (u * sens[a]! + t * sens[b]!);
+      s2 += w * (u * sens[a + 2]! + t * sens[b + 2]!);
+      s3 += w * (u * sens[a + 3]! + t * sens[b + 3]!);
+      s5 += w * (u * sens[a + 5]! + t * sens[b + 5]!);
+      s6 += w * (u * sens[a + 6]! + t * sens[b + 6]!);
+      s8 += w * (u * sens[a + 8]! + t * sens[b + 8]!);
+      if (withFuelFlow) {
+        s1 += w * (u * sens[a + 1]! + t * sens[b + 1]!);
+        s4 += w * (u * sens[a + 4]! + t * sens[b + 4]!);
+        s7 += w * (u * sens[a + 7]! + t * sens[b + 7]!);
+      }
     }
   }
   out[0] = thrust;
   out[1] = fuel;
   out[2] = air;
+  if (sens) {
+    out[3] = s0;
+    out[4] = s1;
+    out[5] = s2;
+    out[6] = s3;
+    out[7] = s4;
+    out[8] = s5;
+    out[9] = s6;
+    out[10] = s7;
+    out[11] = s8;
+  }
   return true;
 }
 

@@ -24,12 +24,12 @@ import { referenceRecoveryAt, type ReferenceRecovery } from './engineDeck';
 import { geometryInletFlow, streamTubeArea, type FreeStream } from './inletFlow';
 import { tableRecovery, type PreparedInlet } from './inletRecovery';
 import type { PreparedLipSuction } from './lipSuction';
-import { correctDeckPoint, type InstallationMethodId } from './installationMethod';
+import { correctDeckPointInto, type InstallationMethodId, type MutableCorrectedDeckPoint } from './installationMethod';
 import type { InstallationSensitivities } from './installationSensitivities';
 import type { InstallationSettings } from './installationCorrections';
 import { milE5008bRecovery } from './milE5008b';
 import type { DeckAxis, FlightCondition, InstalledPoint } from './propulsionModel';
-import { additiveDrag, spillageDrag } from './spillageDrag';
+import { additiveDrag_N, spillageDrag } from './spillageDrag';
 
 export const NO_CAUTIONS: readonly Caution[] = Object.freeze([]);
 const NO_AXES: readonly DeckAxis[] = Object.freeze([]);
@@ -91,6 +91,12 @@ export interface EngineScratch {
   deckError: AccessError | null;
   outside: readonly DeckAxis[];
   deckCautions: readonly Caution[];
+  /** The correction step's result (reused). */
+  readonly corrected: MutableCorrectedDeckPoint;
+  /** One-entry memo of a recovery table's value at a flight Mach (a pure function of it): Mach, recovery, outside. */
+  memoMach: number;
+  memoRecovery: number;
+  memoOutside: 'below' | 'above' | null;
 }
 
 export function newEngineScratch(): EngineScratch {
@@ -115,6 +121,10 @@ export function newEngineScratch(): EngineScratch {
     deckError: null,
     outside: NO_AXES,
     deckCautions: NO_CAUTIONS,
+    corrected: { thrust_N: 0, fuelFlow_kg_s: 0, airflow_kg_s: null, method: 'raymerCorrections', recoveryLoss_N: 0, bleedLoss_N: 0, extractionLoss_N: 0 },
+    memoMach: Number.NaN,
+    memoRecovery: 1,
+    memoOutside: null,
   };
 }
 
@@ -170,16 +180,21 @@ export function installDeckPointInto(
       deck.airflow_kg_s = null;
     }
   } else {
-    const r = tableRecovery(ctx.recoveryInlet.table!, mach);
-    inlet.recovery = r.recovery;
-    s.tableOutside = r.outside;
-    deck.airflow_kg_s = deckAirflow_kg_s === null ? null : (deckAirflow_kg_s * r.recovery) / inlet.referenceRecovery;
+    if (!Object.is(s.memoMach, mach)) {
+      const r = tableRecovery(ctx.recoveryInlet.table!, mach);
+      s.memoMach = mach;
+      s.memoRecovery = r.recovery;
+      s.memoOutside = r.outside;
+    }
+    inlet.recovery = s.memoRecovery;
+    s.tableOutside = s.memoOutside;
+    deck.airflow_kg_s = deckAirflow_kg_s === null ? null : (deckAirflow_kg_s * s.memoRecovery) / inlet.referenceRecovery;
   }
   if (ctx.recoveryOffset !== 0) {
     if (deck.airflow_kg_s !== null && inlet.recovery > 0) deck.airflow_kg_s *= (inlet.recovery + ctx.recoveryOffset) / inlet.recovery;
     inlet.recovery += ctx.recoveryOffset;
   }
-  const corrected = correctDeckPoint(ctx.method, deck, inlet, ctx.installation);
+  const corrected = correctDeckPointInto(s.corrected, ctx.method, deck, inlet, ctx.installation);
   s.correctedThrust_N = corrected.thrust_N;
   s.fuelFlow_kg_s = corrected.fuelFlow_kg_s;
   s.airflow_kg_s = corrected.airflow_kg_s;
@@ -190,7 +205,7 @@ export function installDeckPointInto(
     const a0 = streamTubeArea(s.airflow_kg_s, free);
     s.massFlowRatio = Number.isFinite(a0) ? a0 / ctx.spillCapture_m2 : null;
     if (s.massFlowRatio !== null) {
-      const add_N = additiveDrag(mach, free.pressure_Pa, s.massFlowRatio, ctx.spillCapture_m2).drag_N;
+      const add_N = additiveDrag_N(mach, free.pressure_Pa, s.massFlowRatio, ctx.spillCapture_m2);
       if (ctx.spillLipTable !== null && add_N > 0) {
         const lip = ctx.spillLipTable.at(mach, s.massFlowRatio);
         s.lipSuction = lip.factor;

@@ -8,7 +8,7 @@
  * must handle it.
  */
 import { applyInstallationCorrections, bleedFraction, type InstallationSettings } from './installationCorrections';
-import { applyDeckSensitivities, type InstallationSensitivities } from './installationSensitivities';
+import { applyDeckSensitivitiesInto, type InstallationSensitivities, type MutableSensitivityInstalledEngine } from './installationSensitivities';
 
 export type InstallationMethodId = 'raymerCorrections' | 'deckSensitivities';
 
@@ -90,6 +90,33 @@ export function correctDeckPoint(
   inlet: InletRecoveryValues,
   installation: InstallationSettings,
 ): CorrectedDeckPoint {
+  const out: MutableCorrectedDeckPoint = { thrust_N: 0, fuelFlow_kg_s: 0, airflow_kg_s: null, method, recoveryLoss_N: 0, bleedLoss_N: 0, extractionLoss_N: 0 };
+  return correctDeckPointInto(out, method, deck, inlet, installation);
+}
+
+/** A writable CorrectedDeckPoint, for scratch use in hot loops. */
+export type MutableCorrectedDeckPoint = { -readonly [K in keyof CorrectedDeckPoint]: CorrectedDeckPoint[K] };
+
+// Scratch of the sensitivities case (never escapes correctDeckPointInto).
+const sensitivityScratch: MutableSensitivityInstalledEngine = {
+  thrust_N: 0,
+  fuelFlow_kg_s: 0,
+  airflow_kg_s: null,
+  recoveryLoss_N: 0,
+  bleedLoss_N: 0,
+  extractionLoss_N: 0,
+  extractionFuel_kg_s: 0,
+};
+
+/** As correctDeckPoint, into `out` (returned): no allocation for the deck-sensitivities method. */
+export function correctDeckPointInto(
+  out: MutableCorrectedDeckPoint,
+  method: InstallationMethodId,
+  deck: DeckPointValues,
+  inlet: InletRecoveryValues,
+  installation: InstallationSettings,
+): CorrectedDeckPoint {
+  out.method = method;
   switch (method) {
     case 'raymerCorrections': {
       const corrected = applyInstallationCorrections(
@@ -101,20 +128,19 @@ export function correctDeckPoint(
         installation,
         inlet.mach ?? 0,
       );
-      return {
-        thrust_N: corrected.thrust_N,
-        fuelFlow_kg_s: corrected.fuelFlow_kg_s,
-        airflow_kg_s: deck.airflow_kg_s,
-        method,
-        recoveryLoss_N: deck.thrust_N * corrected.ramLoss,
-        bleedLoss_N: deck.thrust_N * corrected.bleedLoss,
-        extractionLoss_N: corrected.extractionThrust_N,
-      };
+      out.thrust_N = corrected.thrust_N;
+      out.fuelFlow_kg_s = corrected.fuelFlow_kg_s;
+      out.airflow_kg_s = deck.airflow_kg_s;
+      out.recoveryLoss_N = deck.thrust_N * corrected.ramLoss;
+      out.bleedLoss_N = deck.thrust_N * corrected.bleedLoss;
+      out.extractionLoss_N = corrected.extractionThrust_N;
+      return out;
     }
     case 'deckSensitivities': {
       const s = deck.sensitivities;
       if (s == null) throw new Error('correctDeckPoint: method deckSensitivities needs the deck point\'s sensitivities');
-      const e = applyDeckSensitivities(
+      const e = applyDeckSensitivitiesInto(
+        sensitivityScratch,
         deck.thrust_N,
         deck.fuelFlow_kg_s,
         deck.deckAirflow_kg_s ?? deck.airflow_kg_s,
@@ -123,15 +149,13 @@ export function correctDeckPoint(
         bleedFraction(installation.bleed, deck.airflow_kg_s),
         installation.powerExtraction_W,
       );
-      return {
-        thrust_N: e.thrust_N,
-        fuelFlow_kg_s: e.fuelFlow_kg_s,
-        airflow_kg_s: e.airflow_kg_s,
-        method,
-        recoveryLoss_N: e.recoveryLoss_N,
-        bleedLoss_N: e.bleedLoss_N,
-        extractionLoss_N: e.extractionLoss_N,
-      };
+      out.thrust_N = e.thrust_N;
+      out.fuelFlow_kg_s = e.fuelFlow_kg_s;
+      out.airflow_kg_s = e.airflow_kg_s;
+      out.recoveryLoss_N = e.recoveryLoss_N;
+      out.bleedLoss_N = e.bleedLoss_N;
+      out.extractionLoss_N = e.extractionLoss_N;
+      return out;
     }
   }
 }

@@ -202,24 +202,41 @@ export function applyDeckSensitivities(
   bleedFractionOfCore: number,
   powerExtraction_W: number,
 ): SensitivityInstalledEngine {
+  const out = { thrust_N: 0, fuelFlow_kg_s: 0, airflow_kg_s: null, recoveryLoss_N: 0, bleedLoss_N: 0, extractionLoss_N: 0, extractionFuel_kg_s: 0 };
+  return applyDeckSensitivitiesInto(out, deckThrust_N, deckFuelFlow_kg_s, deckAirflow_kg_s, s, recoveryDifference, bleedFractionOfCore, powerExtraction_W);
+}
+
+/** A writable SensitivityInstalledEngine, for scratch use in hot loops. */
+export type MutableSensitivityInstalledEngine = { -readonly [K in keyof SensitivityInstalledEngine]: SensitivityInstalledEngine[K] };
+
+/** As applyDeckSensitivities, into `out` (returned). */
+export function applyDeckSensitivitiesInto(
+  out: MutableSensitivityInstalledEngine,
+  deckThrust_N: number,
+  deckFuelFlow_kg_s: number,
+  deckAirflow_kg_s: number | null,
+  s: InstallationSensitivities,
+  recoveryDifference: number,
+  bleedFractionOfCore: number,
+  powerExtraction_W: number,
+): SensitivityInstalledEngine {
   const recoveryLoss_N = -s.dThrust_dRecovery_N * recoveryDifference;
   const bleedLoss_N = -s.dThrust_dBleed_N * bleedFractionOfCore;
   const extractionLoss_N = -s.dThrust_dExtraction_N_W * powerExtraction_W;
   const extractionFuel_kg_s = s.dFuelFlow_dExtraction_kg_s_W * powerExtraction_W;
-  return {
-    thrust_N: deckThrust_N - recoveryLoss_N - bleedLoss_N - extractionLoss_N,
-    fuelFlow_kg_s:
-      deckFuelFlow_kg_s + s.dFuelFlow_dRecovery_kg_s * recoveryDifference + s.dFuelFlow_dBleed_kg_s * bleedFractionOfCore + extractionFuel_kg_s,
-    airflow_kg_s:
-      deckAirflow_kg_s === null
-        ? null
-        : deckAirflow_kg_s +
-          (s.dAirflow_dRecovery_kg_s ?? 0) * recoveryDifference +
-          (s.dAirflow_dBleed_kg_s ?? 0) * bleedFractionOfCore +
-          (s.dAirflow_dExtraction_kg_s_W ?? 0) * powerExtraction_W,
-    recoveryLoss_N,
-    bleedLoss_N,
-    extractionLoss_N,
-    extractionFuel_kg_s,
-  };
+  out.thrust_N = deckThrust_N - recoveryLoss_N - bleedLoss_N - extractionLoss_N;
+  out.fuelFlow_kg_s =
+    deckFuelFlow_kg_s + s.dFuelFlow_dRecovery_kg_s * recoveryDifference + s.dFuelFlow_dBleed_kg_s * bleedFractionOfCore + extractionFuel_kg_s;
+  out.airflow_kg_s =
+    deckAirflow_kg_s === null
+      ? null
+      : deckAirflow_kg_s +
+        (s.dAirflow_dRecovery_kg_s ?? 0) * recoveryDifference +
+        (s.dAirflow_dBleed_kg_s ?? 0) * bleedFractionOfCore +
+        (s.dAirflow_dExtraction_kg_s_W ?? 0) * powerExtraction_W;
+  out.recoveryLoss_N = recoveryLoss_N;
+  out.bleedLoss_N = bleedLoss_N;
+  out.extractionLoss_N = extractionLoss_N;
+  out.extractionFuel_kg_s = extractionFuel_kg_s;
+  return out;
 }

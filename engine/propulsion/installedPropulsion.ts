@@ -85,7 +85,8 @@ export function deckAccess(deck: EngineDeck): DeckAccess {
  * finds the grid nodes and weights once, then `evaluate(power, out)` writes
  * thrust (N) and airflow (kg/s, NaN without an airflow column) into
  * out[0..1], and for a deck with sensitivities the nine of them into
- * out[2..10] (CURVE_VALUES entries), by the same weights and temperature
+ * out[2..10] (CURVE_VALUES entries; the fuel-flow ones 0: fuel flow is not
+ * interpolated here), by the same weights and temperature
  * approximation as lookupDeck (deckGrid.ts, deckTemperature.ts), thrust and
  * airflow floored at zero like lookupDeck's extrapolations. `evaluate` returns false where
  * lookupDeck would refuse. One prepared condition at a time (buffers reused).
@@ -118,7 +119,7 @@ export function deckCurve(deck: EngineDeck): {
       }
     },
     evaluate(power, out) {
-      if (!filled || !evaluateDeckNodesInto(deck.grid, nodes, power, deck.policy.power, values)) return false;
+      if (!filled || !evaluateDeckNodesInto(deck.grid, nodes, power, deck.policy.power, values, false)) return false;
       // Floored at zero as lookupDeck floors them (the point finally evaluated carries its caution).
       out[0] = Math.max(values[0]! * thrustFactor, 0);
       out[1] = deck.hasAirflow ? Math.max(values[2]! * airflowFactor, 0) : Number.NaN;

@@ -48,6 +48,20 @@ export function additiveDrag(
   captureArea_m2: number,
 ): AdditiveDrag {
   if (!(mach > 0) || !(massFlowRatio < 1)) return NO_SPILL;
+  const drag_N = additiveDrag_N(mach, staticPressure_Pa, massFlowRatio, captureArea_m2);
+  const m0sq = mach * mach;
+  const q0OverP0 = 0.5 * GAMMA_AIR * m0sq;
+  return { drag_N, coefficient: lastPerP0A1 / q0OverP0, captureMach: lastCaptureMach, capturePressureRatio: lastCapturePressureRatio };
+}
+
+// The capture-plane state of the last additiveDrag_N call that spilled (additiveDrag reads it back; no allocation).
+let lastPerP0A1 = 0;
+let lastCaptureMach = Number.NaN;
+let lastCapturePressureRatio = 1;
+
+/** The additive drag (N) of additiveDrag alone, without building its record (the installed model's hot path). */
+export function additiveDrag_N(mach: number, staticPressure_Pa: number, massFlowRatio: number, captureArea_m2: number): number {
+  if (!(mach > 0) || !(massFlowRatio < 1)) return 0;
   const m0sq = mach * mach;
   // Total-pressure ratio from station 0 to 1: 1 subsonic, normal shock supersonic.
   const pt1OverPt0 = mach > 1 ? normalShockTotalPressureRatio(mach) : 1;
@@ -58,9 +72,10 @@ export function additiveDrag(
   const perP0A1 =
     p1OverP0 * (1 + GAMMA_AIR * m1 * m1) - massFlowRatio * (1 + GAMMA_AIR * m0sq) - (1 - massFlowRatio);
   // perP0A1 > 0 for A0/Ac < 1; max() only guards round-off.
-  const drag_N = Math.max(0, perP0A1) * staticPressure_Pa * captureArea_m2;
-  const q0OverP0 = 0.5 * GAMMA_AIR * m0sq;
-  return { drag_N, coefficient: Math.max(0, perP0A1) / q0OverP0, captureMach: m1, capturePressureRatio: p1OverP0 };
+  lastPerP0A1 = Math.max(0, perP0A1);
+  lastCaptureMach = m1;
+  lastCapturePressureRatio = p1OverP0;
+  return lastPerP0A1 * staticPressure_Pa * captureArea_m2;
 }
 
 /**
