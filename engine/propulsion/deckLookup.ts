@@ -71,9 +71,29 @@ export function lookupDeck(
 ): Result<DeckLookup, DeckLookupError> {
   assertFiniteInputs(condition, power);
   const s = scratch;
-  if (!fillDeckNodes(deck.grid, deck.policy, condition.isaDev_K, condition.altitude_m, condition.mach, s)) {
-    return err(refusal(deck, s));
-  }
+  const filled = fillDeckNodes(deck.grid, deck.policy, condition.isaDev_K, condition.altitude_m, condition.mach, s);
+  return lookupFilledDeck(deck, condition, power, s, filled, s.outsideMask);
+}
+
+/**
+ * lookupDeck on a node set already filled at `condition` by fillDeckNodes
+ * (`filled` its return value, `conditionMask` the outside mask it left): for
+ * callers that keep the nodes of one condition for several powers. The same
+ * answer as lookupDeck to the bit.
+ */
+export function lookupFilledDeck(
+  deck: EngineDeck,
+  condition: FlightCondition,
+  power: number,
+  s: DeckNodeSet,
+  filled: boolean,
+  conditionMask: number,
+): Result<DeckLookup, DeckLookupError> {
+  assertFiniteInputs(condition, power);
+  if (!filled) return err(refusal(deck, s));
+  // A previous power may have left the power axis: start from the condition's own mask.
+  s.outsideMask = conditionMask;
+  s.refusedAxis = -1;
   if (!evaluateDeckNodesInto(deck.grid, s, power, deck.policy.power, values)) {
     return err(refusal(deck, s));
   }

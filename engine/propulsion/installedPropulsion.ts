@@ -7,7 +7,7 @@ import { atmosphere } from '../aero/standardAtmosphere';
 import type { CautionSettings } from '../cautions/cautionSettings';
 import { createDeckNodeSet, DECK_VALUES_WITH_SENSITIVITIES, evaluateDeckNodesInto, fillDeckNodes, nextPowerBreakpoint } from './deckGrid';
 import { powerForThrust } from './deckInversion';
-import { lookupDeck, powerBounds, ratingPower } from './deckLookup';
+import { lookupDeck, lookupFilledDeck, powerBounds, ratingPower } from './deckLookup';
 import { deckForInterpolation, queryCorrectionInto } from './deckCorrection';
 import { temperatureFlowFactor } from './deckTemperature';
 import type { EngineDeck } from './engineDeck';
@@ -54,7 +54,7 @@ export function deckAccess(deck: EngineDeck): DeckAccess {
     hasSensitivities: deck.hasSensitivities,
     referenceRecovery: deck.referenceRecovery,
     slopeBreaks: { altitudes_m: sortedUnique(deck.grid.altitudes_m), machs: sortedUnique(deck.grid.machs) },
-    lookup: (condition, power) => lookupDeck(deck, condition, power),
+    lookup: curve.lookup,
     ratingPower: (rating) => {
       const r = ratingPower(deck, rating);
       return r.ok ? r.value : null;
@@ -96,9 +96,18 @@ export function deckCurve(deck: EngineDeck): {
   evaluate(power: number, out: Float64Array): boolean;
   /** The prepared condition's next power breakpoint strictly above `after` (Infinity when none; deckGrid's nextPowerBreakpoint). */
   breakAfter(after: number): number;
+  /** lookupDeck at `condition` and `power` (the same answer to the bit), preparing the condition first. */
+  lookup(condition: FlightCondition, power: number): ReturnType<typeof lookupDeck>;
 } {
   const nodes = createDeckNodeSet();
   const values = new Float64Array(DECK_VALUES_WITH_SENSITIVITIES);
+  // One prepared condition, keyed by its three numbers (Object.is) alone: the nodes, weights and factors are a
+  // pure function of them, so preparing again at the same condition is skipped without changing any answer.
+  let prepared = false;
+  let preparedAltitude_m = 0;
+  let preparedMach = 0;
+  let preparedIsaDev_K = 0;
+  let conditionMask = 0;
   let filled = false;
   let airflowFactor = 1;
   let thrustFactor = 1;
@@ -106,18 +115,32 @@ export function deckCurve(deck: EngineDeck): {
   // they take it and not the corrected-parameter multiply-back (as in finishLookup).
   let temperatureFactor = 1;
   const factors = new Float64Array(3);
+  function prepare(condition: FlightCondition): void {
+    if (
+      prepared &&
+      Object.is(preparedAltitude_m, condition.altitude_m) &&
+      Object.is(preparedMach, condition.mach) &&
+      Object.is(preparedIsaDev_K, condition.isaDev_K)
+    ) {
+      return;
+    }
+    filled = fillDeckNodes(deck.grid, deck.policy, condition.isaDev_K, condition.altitude_m, condition.mach, nodes);
+    conditionMask = nodes.outsideMask;
+    temperatureFactor = !deck.hasIsaDev && condition.isaDev_K !== 0 ? temperatureFlowFactor(condition.altitude_m, condition.isaDev_K) : 1;
+    airflowFactor = 1 / temperatureFactor;
+    thrustFactor = 1;
+    if (deck.interpolation === 'corrected') {
+      queryCorrectionInto(deck, condition.altitude_m, condition.mach, condition.isaDev_K, factors);
+      thrustFactor = factors[0]!;
+      airflowFactor *= factors[2]!;
+    }
+    prepared = true;
+    preparedAltitude_m = condition.altitude_m;
+    preparedMach = condition.mach;
+    preparedIsaDev_K = condition.isaDev_K;
+  }
   return {
-    prepare(condition) {
-      filled = fillDeckNodes(deck.grid, deck.policy, condition.isaDev_K, condition.altitude_m, condition.mach, nodes);
-      temperatureFactor = !deck.hasIsaDev && condition.isaDev_K !== 0 ? temperatureFlowFactor(condition.altitude_m, condition.isaDev_K) : 1;
-      airflowFactor = 1 / temperatureFactor;
-      thrustFactor = 1;
-      if (deck.interpolation === 'corrected') {
-        queryCorrectionInto(deck, condition.altitude_m, condition.mach, condition.isaDev_K, factors);
-        thrustFactor = factors[0]!;
-        airflowFactor *= factors[2]!;
-      }
-    },
+    prepare,
     evaluate(power, out) {
       if (!filled || !evaluateDeckNodesInto(deck.grid, nodes, power, deck.policy.power, values, false)) return false;
       // Floored at zero as lookupDeck floors them (the point finally evaluated carries its caution).
@@ -128,6 +151,13 @@ export function deckCurve(deck: EngineDeck): {
     },
     breakAfter(after) {
       return filled ? nextPowerBreakpoint(deck.grid, nodes, after) : Infinity;
+    },
+    lookup(condition, power) {
+      if (!Number.isFinite(condition.altitude_m) || !Number.isFinite(condition.mach) || !Number.isFinite(condition.isaDev_K)) {
+        return lookupDeck(deck, condition, power); // throws with the deck lookup's message
+      }
+      prepare(condition);
+      return lookupFilledDeck(deck, condition, power, nodes, filled, conditionMask);
     },
   };
 }

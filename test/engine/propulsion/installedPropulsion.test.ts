@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_CAUTION_SETTINGS, type CautionSettings } from '../../../engine/cautions/cautionSettings';
 import { expectOk } from '../../../engine/core/result';
+import { CURVE_VALUES } from '../../../engine/propulsion/deckAccess';
 import { lookupDeck } from '../../../engine/propulsion/deckLookup';
 import { DEMO_ENGINE_SPEC } from '../../../engine/propulsion/deckDemoSpec';
 import type { EngineDeck } from '../../../engine/propulsion/engineDeck';
@@ -306,6 +307,26 @@ describe('deckCurve', () => {
         expectClose(out[0]!, d.thrust_N, { rel: 1e-15 }, 'lookupDeck thrust');
         expectClose(out[1]!, d.airflow_kg_s!, { rel: 1e-15 }, 'lookupDeck airflow');
       }
+    }
+  });
+
+  it('the deck access keeps one prepared condition: its lookups equal lookupDeck whatever was asked before', () => {
+    const access = deckAccess(deck);
+    const high = { ...CRUISE, mach: 0.95 };
+    const sequence: [FlightCondition, number][] = [
+      [CRUISE, 0.5],
+      [CRUISE, 1.2],
+      [CRUISE, 0.5],
+      [high, 0.88],
+      [high, 0.01],
+      [high, 0.88],
+      [{ altitude_m: 1500, mach: 0.25, isaDev_K: 15 }, 0.2],
+      [CRUISE, 0.88],
+    ];
+    for (const [condition, power] of sequence) {
+      access.curveAt!(high)(0.3, new Float64Array(CURVE_VALUES));
+      expect(access.lookup(condition, power)).toEqual(lookupDeck(deck, condition, power));
+      expect(access.lookup(condition, power)).toEqual(lookupDeck(deck, condition, power));
     }
   });
 
