@@ -14,7 +14,7 @@ import type { AnalysisError, PerformanceModels } from './analysisTypes';
 import { machFromCas } from '../aero/airspeeds';
 import { liftLimitMachs } from './liftLimitMach';
 import { airAt, levelPoint, type LevelPoint } from './pointState';
-import { maximizeOnGrid, minimizeOnGrid, rootsOnPoints, uniformGrid } from './scalarSearch';
+import { maximizeOnGrid, minimizeOnGrid, refineMaximum, rootsOnPoints, uniformGrid } from './scalarSearch';
 import { messageText, msg, q, withParts, type MessageParts } from '../units/messageParts';
 
 export interface CrossoverQuery {
@@ -207,6 +207,38 @@ function peakOf(scan: MachScan): { readonly x: number; readonly fx: number } | n
   return maximizeOnGrid((mach) => scan.point(mach).specificExcessPower_m_s, scan.lo, scan.hi, scan.samples, CROSSOVER_MACH_TOL);
 }
 
+/** Mach margin (-) around the expected best-climb Machs of a local peak search, and its grid. */
+const LOCAL_MARGIN = 0.03;
+const LOCAL_SAMPLES = 9;
+
+/**
+ * The climb peak searched only near the Machs [m1, m2] where it is expected
+ * (the best-climb Machs of the altitudes either side): a grid of
+ * LOCAL_SAMPLES over [m1 - LOCAL_MARGIN, m2 + LOCAL_MARGIN] within the scan,
+ * then golden sections. Null (search the whole scan) when the best sample
+ * is not inside the window or Ps is not finite on it: the peak may lie
+ * elsewhere.
+ */
+function localPeak(scan: MachScan, near: readonly [number, number]): { readonly x: number; readonly fx: number } | null {
+  const a = Math.max(scan.lo, Math.min(near[0], near[1]) - LOCAL_MARGIN);
+  const b = Math.min(scan.hi, Math.max(near[0], near[1]) + LOCAL_MARGIN);
+  if (!(b > a) || !Number.isFinite(a) || !Number.isFinite(b)) return null;
+  const ps = (mach: number) => scan.point(mach).specificExcessPower_m_s;
+  const xs = uniformGrid(a, b, LOCAL_SAMPLES);
+  let best = -1;
+  let bestF = -Infinity;
+  xs.forEach((x, i) => {
+    const v = ps(x);
+    if (Number.isFinite(v) && v > bestF) {
+      bestF = v;
+      best = i;
+    }
+  });
+  // The best sample on the window's edge (not the scan's): the hump may continue outside it.
+  if (best < 0 || (best === 0 && a > scan.lo) || (best === xs.length - 1 && b < scan.hi)) return null;
+  return refineMaximum(ps, xs[Math.max(0, best - 1)]!, xs[Math.min(xs.length - 1, best + 1)]!, xs[best]!, bestF, CROSSOVER_MACH_TOL);
+}
+
 /** The no_solution error of a scan where thrust or drag is nowhere finite. */
 function notFinite(query: CrossoverQuery, scan: MachScan): Result<never, AnalysisError> {
   return err({ code: 'no_solution', message: `crossover at ${query.altitude_m} m: thrust or drag is not finite anywhere in Mach [${scan.lo}, ${scan.hi}]` });
@@ -218,11 +250,15 @@ function notFinite(query: CrossoverQuery, scan: MachScan): Result<never, Analysi
  * numbers) and its errors, without the crossings, extremes of thrust and
  * curves: what a ceiling search needs at each altitude it tries.
  */
-export function climbPeak(models: PerformanceModels, query: CrossoverQuery): Result<ClimbPeak, AnalysisError> {
+export function climbPeak(models: PerformanceModels, query: CrossoverQuery, near?: readonly [number, number]): Result<ClimbPeak, AnalysisError> {
   const s = machScan(models, query);
   if (!s.ok) return s;
   const scan = s.value;
   if (scan.stalledEverywhere) return ok({ bestClimbMach: null, maxSpecificExcessPower_m_s: null });
+  if (near !== undefined) {
+    const local = localPeak(scan, near);
+    if (local !== null) return ok({ bestClimbMach: local.x, maxSpecificExcessPower_m_s: local.fx });
+  }
   const peak = peakOf(scan);
   // thrustDragCrossover fails when Ps or thrust is nowhere finite on the grid (Ps is finite wherever thrust and drag are).
   if (peak === null || !uniformGrid(scan.lo, scan.hi, scan.samples).some((m) => Number.isFinite(scan.point(m).thrustAvailable_N))) return notFinite(query, scan);

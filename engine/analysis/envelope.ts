@@ -167,10 +167,12 @@ function ceilingsOf(
   // Peaks by altitude, the rows' first: Brent starts at two rows and ends where it last looked.
   const peaks = new Map<number, Result<ClimbPeak, AnalysisError>>();
   for (const r of rows) peaks.set(r.altitude_m, ok({ bestClimbMach: r.bestClimbMach, maxSpecificExcessPower_m_s: r.maxClimbRate_m_s }));
+  // Between two rows the peak is searched near their best-climb Machs (climbPeak's local search).
+  let near: readonly [number, number] | undefined;
   const peakAt = (h: number) => {
     let p = peaks.get(h);
     if (p === undefined) {
-      p = climbPeak(models, peakQuery(query, machRange, h));
+      p = climbPeak(models, peakQuery(query, machRange, h), near);
       peaks.set(h, p);
     }
     return p;
@@ -188,6 +190,8 @@ function ceilingsOf(
     if (i < 0) {
       return { name, climbRate_m_s: rate, altitude_m: null, bestClimbMach: null, climbRateAtCeiling_m_s: null, ...withParts(msg`The ${name} ceiling lies above ${q(hHi, 'altitude')}, the top of the altitude range.`) };
     }
+    const [m1, m2] = [rows[i - 1]!.bestClimbMach, rows[i]!.bestClimbMach];
+    near = m1 !== null && m2 !== null ? [m1, m2] : undefined;
     const root = brent((h) => maxPsAt(h) - rate, rows[i - 1]!.altitude_m, rows[i]!.altitude_m, { xTol: CEILING_ALTITUDE_TOL_M });
     if (!root.ok) {
       return { name, climbRate_m_s: rate, altitude_m: null, bestClimbMach: null, climbRateAtCeiling_m_s: null, ...withParts(msg`The ${name} ceiling could not be refined between ${q(rows[i - 1]!.altitude_m, 'altitude')} and ${q(rows[i]!.altitude_m, 'altitude')}: ${root.error.message}`) };

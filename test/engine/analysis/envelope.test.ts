@@ -98,4 +98,16 @@ describe('flightEnvelope', () => {
     const stalled = expectOk(climbPeak(models, { altitude_m: 30000, mass_kg: 60000, rating: 'maxCruise', isaDev_K: 0, machRange: [0.1, 0.5] }), 'stalled');
     expect(stalled.maxSpecificExcessPower_m_s).toBeNull();
   });
+
+  it('climbPeak searched near given Machs finds the same peak, and searches the whole scan when the peak is not there', () => {
+    const q = { altitude_m: 9000, mass_kg: 60000, rating: 'maxCruise' as const, isaDev_K: 0 };
+    const full = expectOk(climbPeak(models, q), 'full');
+    const m = full.bestClimbMach!;
+    const local = expectOk(climbPeak(models, q, [m - 0.01, m + 0.02]), 'local');
+    // A flat maximum is located to about sqrt(machine epsilon) in Mach (docs/analyses.md); its value far better.
+    expectClose(local.bestClimbMach!, m, { abs: 1e-7 }, 'same maximum');
+    expectClose(local.maxSpecificExcessPower_m_s!, full.maxSpecificExcessPower_m_s!, { rel: 1e-12 }, 'same maximum');
+    // A window far below the peak: its best sample is on the window's edge, so the whole scan is searched.
+    expect(expectOk(climbPeak(models, q, [0.15, 0.15]), 'elsewhere')).toEqual(full);
+  });
 });
