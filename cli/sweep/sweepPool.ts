@@ -1,8 +1,12 @@
 /**
  * Runs the cases [start, end) of a sweep over worker threads: each worker
- * pulls chunks of cases, rows come back as they are flown and go to
- * `onRows` at once. `stop()` ends the run early (Ctrl-C): the workers are
- * terminated and what was received stays written.
+ * flies a contiguous lane of the grid (so neighbouring cases follow each
+ * other in it and each starts from its neighbour's solve,
+ * engine/study/prepareSweep.ts), sent in chunks, two at a time so it never
+ * waits for the next; a worker whose lane is done takes the back half of the
+ * longest lane left. Rows come back as they are flown and go to `onRows` at
+ * once. `stop()` ends the run early (Ctrl-C): the workers are terminated and
+ * what was received stays written.
  */
 import { Worker } from 'node:worker_threads';
 import type { SweepRow } from '../../engine/project';
@@ -29,7 +33,11 @@ export function runSweepPool(
   const threads = Math.max(1, Math.min(workerCount, total));
   // Chunks small enough to balance the load and stop quickly, large enough to keep messages few.
   const chunk = Math.max(1, Math.min(64, Math.ceil(total / (threads * 16))));
-  let next = range.start;
+  const lanes = Array.from({ length: threads }, (_, i) => ({
+    next: range.start + Math.floor((i * total) / threads),
+    end: range.start + Math.floor(((i + 1) * total) / threads),
+  }));
+  const inFlight = new Array<number>(threads).fill(0);
   let completed = 0;
   let stopped = false;
   let error: string | null = null;
@@ -43,14 +51,35 @@ export function runSweepPool(
     for (const w of workers) void w.terminate();
     finish({ completed, stopped, error });
   };
-  const feed = (w: Worker): boolean => {
-    if (stopped || error !== null || next >= range.end) return false;
-    const c: SweepChunk = { start: next, end: Math.min(next + chunk, range.end) };
-    next = c.end;
-    w.postMessage(c);
-    return true;
+  /** The next chunk of lane `i`, after taking the back half of the longest lane when `i` is done; null when none is left. */
+  const nextChunk = (i: number): SweepChunk | null => {
+    const lane = lanes[i]!;
+    if (lane.next >= lane.end) {
+      let longest = -1;
+      let most = 0;
+      for (let j = 0; j < threads; j++) {
+        const left = lanes[j]!.end - lanes[j]!.next;
+        if (left > most) [longest, most] = [j, left];
+      }
+      if (longest < 0) return null;
+      const other = lanes[longest]!;
+      const mid = other.end - Math.max(1, Math.floor((other.end - other.next) / 2));
+      lane.next = mid;
+      lane.end = other.end;
+      other.end = mid;
+    }
+    const c: SweepChunk = { start: lane.next, end: Math.min(lane.next + chunk, lane.end) };
+    lane.next = c.end;
+    return c;
   };
-  let busy = 0;
+  const feed = (i: number): void => {
+    while (!stopped && error === null && inFlight[i]! < 2) {
+      const c = nextChunk(i);
+      if (c === null) return;
+      inFlight[i]!++;
+      workers[i]!.postMessage(c);
+    }
+  };
   if (total <= 0) {
     end();
     return { finished, stop: () => {} };
@@ -68,17 +97,17 @@ export function runSweepPool(
       completed += reply.rows.length;
       onRows(reply.rows);
       if (reply.chunkDone) {
-        busy--;
-        if (feed(w)) busy++;
-        if (busy === 0) end();
+        inFlight[i]!--;
+        feed(i);
+        if (inFlight.every((n) => n === 0)) end();
       }
     });
     w.on('error', (e) => {
       error = e instanceof Error ? e.message : String(e);
       end();
     });
-    if (feed(w)) busy++;
   }
+  for (let i = 0; i < threads; i++) feed(i);
   return {
     finished,
     stop: () => {

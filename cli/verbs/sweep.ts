@@ -78,6 +78,8 @@ One row per case: the case number, the values varied, the mission status, block 
 time [s], trip fuel [kg], take-off mass [kg], the cautions and warnings raised, the status message.
 Rows are written as they are flown (not in case order; sort on "case"), so Ctrl-C keeps every row
 flown so far (exit code 130). A case whose project does not build has status invalid_input.
+Each worker flies a contiguous block of the grid, every case's fuel iteration started from its
+neighbour's: a case's block fuel is the one it has flown alone, within the fuel iteration's band.
 
 Exit codes: 0 every case flown; 1 the project (or its deck) cannot be read; 2 bad command line;
 130 interrupted.

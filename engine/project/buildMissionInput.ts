@@ -5,6 +5,7 @@
  * model, legs, reserves and solve mode.
  */
 import { legKindLabel } from './legKinds';
+import type { AeroModel } from '../aero/aeroModel';
 import { makeAeroModel } from '../aero/dragPolar';
 import { err, ok, type Result } from '../core/result';
 import type { AlternateSpec, DistanceBasis, HoldSpeed, Leg, ReserveCommon, MissionInput, ReservePolicy, SolveMode } from '../mission/missionTypes';
@@ -12,6 +13,7 @@ import type { EngineDeck } from '../propulsion/engineDeck';
 import { inletDragIncrementCd0, inletWeight, type InletDesign } from '../propulsion/inletDesign';
 import { validateInstallation } from '../propulsion/installationCorrections';
 import { makeInstalledPropulsion } from '../propulsion/installedPropulsion';
+import type { PropulsionModel } from '../propulsion/propulsionModel';
 import { makeIssue, type ProjectIssue } from './projectIssue';
 import type { Project, ProjectLeg } from './projectSchema';
 import { cautionSettingsOf, inletDesignOf, installationOf, polarIssuePath, polarSpecOf } from './projectSpecs';
@@ -199,30 +201,70 @@ export function buildMissionInput(
   return missionInputOnDeck(project, deck.value, options);
 }
 
+/**
+ * The polar and the installed propulsion built for a project, kept so that a
+ * neighbouring project (a sweep's next case) whose fields they are built from
+ * are the same objects reuses them instead of building them again: the aero
+ * model from `polar`, `airframe.wingArea`, the inlet and `engine.count`; the
+ * propulsion (and its checks) from the deck, `engine`, the inlet and
+ * `cautions`. The propulsion model's caches are exact (a reused model answers
+ * as a fresh one), so the mission input is the same either way.
+ */
+export interface MissionInputMemo {
+  aero?: { readonly key: readonly unknown[]; readonly value: Result<AeroModel, readonly ProjectIssue[]> };
+  propulsion?: { readonly key: readonly unknown[]; readonly value: Result<PropulsionModel, readonly ProjectIssue[]> };
+}
+
+function sameKey(a: readonly unknown[], b: readonly unknown[]): boolean {
+  return a.length === b.length && a.every((v, i) => Object.is(v, b[i]));
+}
+
+function remembered<T>(memo: MissionInputMemo | undefined, slot: 'aero' | 'propulsion', key: readonly unknown[], build: () => T): T {
+  const kept = memo?.[slot];
+  if (kept !== undefined && sameKey(kept.key, key)) return kept.value as T;
+  const value = build();
+  if (memo !== undefined) memo[slot] = { key, value } as never;
+  return value;
+}
+
 /** As buildMissionInput, on the project's deck already built (engine/study builds it once for every inlet). */
-export function missionInputOnDeck(project: Project, engineDeck: EngineDeck, options: BuildOptions = {}): Result<MissionInput, readonly ProjectIssue[]> {
+export function missionInputOnDeck(
+  project: Project,
+  engineDeck: EngineDeck,
+  options: BuildOptions = {},
+  memo?: MissionInputMemo,
+): Result<MissionInput, readonly ProjectIssue[]> {
   const inlet = projectInlet(project, options.inletName);
   if (!inlet.ok) return inlet;
 
   const wingArea_m2 = project.airframe.wingArea;
   const engineCount = project.engine.count;
-  const polar = makeAeroModel(polarSpecOf(project), wingArea_m2);
-  if (!polar.ok) {
-    return err(polar.error.map((i) => makeIssue(polarIssuePath(i.path), '', 'a valid drag polar', `${i.path} ${i.message}`)));
-  }
-  const installation = installationOf(project);
-  const installationIssues = validateInstallation(installation, engineDeck.hasAirflow);
-  if (installationIssues.length > 0) {
-    return err(
-      installationIssues.map((i) => makeIssue(installationIssuePath(i.path), '', 'valid installation settings', i.message)),
-    );
-  }
-  if (installation.method === 'deckSensitivities' && !engineDeck.hasSensitivities) {
-    return err([
-      makeIssue('engine.installation.recoveryMethod', '"deckSensitivities"', '"raymer", or a deck with sensitivity columns', `the deck "${engineDeck.title}" has no installation-sensitivity columns; use "raymer" or a deck that carries them (a cycle deck does)`),
-    ]);
-  }
+  const inletName = inlet.value.name;
+  const aero = remembered(memo, 'aero', [project.polar, wingArea_m2, project.inlets, inletName, engineCount], (): Result<AeroModel, readonly ProjectIssue[]> => {
+    const polar = makeAeroModel(polarSpecOf(project), wingArea_m2);
+    if (!polar.ok) {
+      return err(polar.error.map((i) => makeIssue(polarIssuePath(i.path), '', 'a valid drag polar', `${i.path} ${i.message}`)));
+    }
+    return ok(polar.value.withIncrement(inletDragIncrementCd0(inlet.value, engineCount, wingArea_m2)));
+  });
+  if (!aero.ok) return aero;
   const cautionSettings = cautionSettingsOf(project);
+  const propulsion = remembered(memo, 'propulsion', [engineDeck, project.engine, project.inlets, inletName, project.cautions], (): Result<PropulsionModel, readonly ProjectIssue[]> => {
+    const installation = installationOf(project);
+    const installationIssues = validateInstallation(installation, engineDeck.hasAirflow);
+    if (installationIssues.length > 0) {
+      return err(
+        installationIssues.map((i) => makeIssue(installationIssuePath(i.path), '', 'valid installation settings', i.message)),
+      );
+    }
+    if (installation.method === 'deckSensitivities' && !engineDeck.hasSensitivities) {
+      return err([
+        makeIssue('engine.installation.recoveryMethod', '"deckSensitivities"', '"raymer", or a deck with sensitivity columns', `the deck "${engineDeck.title}" has no installation-sensitivity columns; use "raymer" or a deck that carries them (a cycle deck does)`),
+      ]);
+    }
+    return ok(makeInstalledPropulsion({ deck: engineDeck, engineCount, inlet: inlet.value, installation, cautionSettings }));
+  });
+  if (!propulsion.ok) return propulsion;
   const w = project.airframe.weights;
   const overrides = options.overrides ?? {};
   return ok({
@@ -236,8 +278,8 @@ export function missionInputOnDeck(project: Project, engineDeck: EngineDeck, opt
       vmo_m_s: project.airframe.vmo,
       mmo: project.airframe.mmo,
     },
-    aero: polar.value.withIncrement(inletDragIncrementCd0(inlet.value, engineCount, wingArea_m2)),
-    propulsion: makeInstalledPropulsion({ deck: engineDeck, engineCount, inlet: inlet.value, installation, cautionSettings }),
+    aero: aero.value,
+    propulsion: propulsion.value,
     legs: project.mission.legs.map(legOf),
     reserves: overrides.reserves ?? reservesOf(project.mission.reserves),
     solve: overrides.solve ?? solveModeOf(project.mission.solve),

@@ -4,9 +4,11 @@
  * app's study view) goes through here, so a row means the same everywhere.
  */
 import { noticeCsvComment, SAFETY_NOTICE } from '../core/notice';
+import type { MissionResult } from '../mission/missionTypes';
 import { solveMission } from '../mission/solveMission';
 import { buildMissionInput, type ProjectResources } from './buildMissionInput';
 import { parseProjectData } from './parseProject';
+import type { ProjectIssue } from './projectIssue';
 import { caseDocument, gridCase, type SweepAxis } from './sweepGrid';
 
 /** One flown case. Masses in kg, times in s. */
@@ -35,12 +37,30 @@ export function flySweepCase(
   inletName?: string,
 ): SweepRow {
   const inputs = gridCase(axes, k);
-  const blank = { case: k, inputs, blockFuel_kg: 0, blockTime_s: 0, tripFuel_kg: 0, takeoffMass_kg: 0, cautions: [] };
   const project = parseProjectData(caseDocument(doc, axes, inputs));
-  if (!project.ok) return { ...blank, status: 'invalid_input', message: project.error.map((i) => i.message).join('; ') };
+  if (!project.ok) return invalidSweepRow(k, inputs, project.error);
   const input = buildMissionInput(project.value, resources, inletName === undefined ? {} : { inletName });
-  if (!input.ok) return { ...blank, status: 'invalid_input', message: input.error.map((i) => i.message).join('; ') };
-  const r = solveMission(input.value);
+  if (!input.ok) return invalidSweepRow(k, inputs, input.error);
+  return sweepRowOf(k, inputs, solveMission(input.value));
+}
+
+/** The row of case `k` whose project does not build: status invalid_input, the issues' messages. */
+export function invalidSweepRow(k: number, inputs: readonly (number | string)[], issues: readonly ProjectIssue[]): SweepRow {
+  return {
+    case: k,
+    inputs,
+    status: 'invalid_input',
+    message: issues.map((i) => i.message).join('; '),
+    blockFuel_kg: 0,
+    blockTime_s: 0,
+    tripFuel_kg: 0,
+    takeoffMass_kg: 0,
+    cautions: [],
+  };
+}
+
+/** The row of case `k` flown to the mission result `r`. */
+export function sweepRowOf(k: number, inputs: readonly (number | string)[], r: MissionResult): SweepRow {
   return {
     case: k,
     inputs,

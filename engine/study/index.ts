@@ -7,3 +7,4 @@ export { deckTextFormat, parseDeckText, createDeckTextMemo, type DeckFileText, t
 export { prepareStudy, studyFailureLines, type ProjectFailure, type Study, type StudyFailure, type StudyOptions } from './prepareStudy';
 export { cannotReadMessage, readFailureReason } from './readProblem';
 export { fileStem, HISTORY_COLUMNS, historyCsv, legsCsv, type CsvUnits } from './resultsCsv';
+export { prepareSweep, type SweepStudy, type SweepStudyOptions } from './prepareSweep';
