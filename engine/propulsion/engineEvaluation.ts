@@ -23,7 +23,7 @@ import type { AccessError, DeckAccess } from './deckAccess';
 import { referenceRecoveryAt, type ReferenceRecovery } from './engineDeck';
 import { geometryInletFlow, streamTubeArea, type FreeStream } from './inletFlow';
 import { tableRecovery, type PreparedInlet } from './inletRecovery';
-import type { PreparedLipSuction } from './lipSuction';
+import type { LipSuctionValue, PreparedLipSuction } from './lipSuction';
 import { correctDeckPointInto, type InstallationMethodId, type MutableCorrectedDeckPoint } from './installationMethod';
 import type { InstallationSensitivities } from './installationSensitivities';
 import type { InstallationSettings } from './installationCorrections';
@@ -91,8 +91,9 @@ export interface EngineScratch {
   deckError: AccessError | null;
   outside: readonly DeckAxis[];
   deckCautions: readonly Caution[];
-  /** The correction step's result (reused). */
+  /** The correction step's result and the lip-suction answer (reused). */
   readonly corrected: MutableCorrectedDeckPoint;
+  readonly lip: LipSuctionValue;
   /** One-entry memo of a recovery table's value at a flight Mach (a pure function of it): Mach, recovery, outside. */
   memoMach: number;
   memoRecovery: number;
@@ -122,6 +123,7 @@ export function newEngineScratch(): EngineScratch {
     outside: NO_AXES,
     deckCautions: NO_CAUTIONS,
     corrected: { thrust_N: 0, fuelFlow_kg_s: 0, airflow_kg_s: null, method: 'raymerCorrections', recoveryLoss_N: 0, bleedLoss_N: 0, extractionLoss_N: 0 },
+    lip: { factor: 0, outside: false },
     memoMach: Number.NaN,
     memoRecovery: 1,
     memoOutside: null,
@@ -207,7 +209,8 @@ export function installDeckPointInto(
     if (s.massFlowRatio !== null) {
       const add_N = additiveDrag_N(mach, free.pressure_Pa, s.massFlowRatio, ctx.spillCapture_m2);
       if (ctx.spillLipTable !== null && add_N > 0) {
-        const lip = ctx.spillLipTable.at(mach, s.massFlowRatio);
+        const lip = s.lip;
+        ctx.spillLipTable.atInto(mach, s.massFlowRatio, lip);
         s.lipSuction = lip.factor;
         s.lipTableOutside = lip.outside;
       }

@@ -11,7 +11,8 @@
  * held at its edges with the caution `lip_suction_table_range`).
  */
 import { err, ok, type Result } from '../core/result';
-import { interp2d, makeTable2d, type Table2d } from '../core/table2d';
+import { lerp } from '../core/table1d';
+import { makeTable2d, type Table2d } from '../core/table2d';
 
 export type LipSuction =
   /** One recovered fraction (-), 0..1, at every Mach and mass-flow ratio. */
@@ -51,6 +52,14 @@ export interface PreparedLipSuction {
   readonly spec: LipSuction;
   /** Recovered fraction (-) at flight Mach and mass-flow ratio; `outside` true when the table was left (edge held). */
   at(mach: number, massFlowRatio: number): { readonly factor: number; readonly outside: boolean };
+  /** As `at`, into `out` (no allocation: the installed model's hot path). */
+  atInto(mach: number, massFlowRatio: number, out: LipSuctionValue): void;
+}
+
+/** A writable lip-suction answer (scratch). */
+export interface LipSuctionValue {
+  factor: number;
+  outside: boolean;
 }
 
 /** One problem with a lip-suction spec: a path below the inlet's `lipSuction` and a message. */
@@ -64,7 +73,14 @@ export function prepareLipSuction(spec: LipSuction): Result<PreparedLipSuction, 
   if (spec.kind === 'constant') {
     if (!(spec.factor >= 0 && spec.factor <= 1)) return err([{ path: 'factor', message: `lip suction ${spec.factor} is not a fraction 0..1` }]);
     const value = { factor: spec.factor, outside: false };
-    return ok({ spec, at: () => value });
+    return ok({
+      spec,
+      at: () => value,
+      atInto: (_mach, _massFlowRatio, out) => {
+        out.factor = spec.factor;
+        out.outside = false;
+      },
+    });
   }
   const issues: LipSuctionIssue[] = [];
   spec.factor.forEach((row, i) =>
@@ -82,9 +98,78 @@ export function prepareLipSuction(spec: LipSuction): Result<PreparedLipSuction, 
   return ok({
     spec,
     at(mach, massFlowRatio) {
-      const r = interp2d(table, mach, massFlowRatio, 'clamp');
-      if (!r.ok) return { factor: 0, outside: true };
-      return { factor: r.value.value, outside: r.value.outsideX !== null || r.value.outsideY !== null };
+      const out = { factor: 0, outside: false };
+      bilinearClampInto(table, mach, massFlowRatio, out);
+      return out;
     },
+    atInto: (mach, massFlowRatio, out) => bilinearClampInto(table, mach, massFlowRatio, out),
   });
+}
+
+// Position along one axis of the last axisPosition call (module-level: no allocation).
+let positionIndex = 0;
+let positionT = 0;
+let positionOutside = false;
+
+/** interp2d's axis weight under 'clamp' (core/table2d.ts), into the position above. */
+function axisPosition(axis: readonly number[], q: number): void {
+  const n = axis.length;
+  positionOutside = false;
+  if (n === 1) {
+    positionIndex = 0;
+    positionT = 0;
+    return;
+  }
+  if (q < axis[0]!) {
+    positionIndex = 0;
+    positionT = 0;
+    positionOutside = true;
+    return;
+  }
+  if (q > axis[n - 1]!) {
+    positionIndex = n - 2;
+    positionT = 1;
+    positionOutside = true;
+    return;
+  }
+  let lo = 0;
+  let hi = n - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (axis[mid]! <= q) lo = mid;
+    else hi = mid;
+  }
+  positionIndex = lo;
+  positionT = (q - axis[lo]!) / (axis[lo + 1]! - axis[lo]!);
+}
+
+/**
+ * interp2d(table, x, y, 'clamp') written out without its records: the same
+ * bilinear value (lerp of lerps, core/table1d.ts) and the same answer for a
+ * query it refuses (a non-finite coordinate or value: factor 0, outside).
+ */
+function bilinearClampInto(table: Table2d, x: number, y: number, out: LipSuctionValue): void {
+  if (!Number.isFinite(x) || !Number.isFinite(y)) {
+    out.factor = 0;
+    out.outside = true;
+    return;
+  }
+  axisPosition(table.x, x);
+  const i = positionIndex;
+  const tx = positionT;
+  const outsideX = positionOutside;
+  axisPosition(table.y, y);
+  const j = positionIndex;
+  const ty = positionT;
+  const i1 = table.x.length === 1 ? 0 : i + 1;
+  const j1 = table.y.length === 1 ? 0 : j + 1;
+  const z = table.z;
+  const value = lerp(lerp(z[i]![j]!, z[i]![j1]!, ty), lerp(z[i1]![j]!, z[i1]![j1]!, ty), tx);
+  if (!Number.isFinite(value)) {
+    out.factor = 0;
+    out.outside = true;
+    return;
+  }
+  out.factor = value;
+  out.outside = outsideX || positionOutside;
 }

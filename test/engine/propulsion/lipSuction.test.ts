@@ -16,7 +16,8 @@ import { describe, expect, it } from 'vitest';
 import { checkSpillageShare } from '../../../engine/cautions/propulsionCautions';
 import { expectOk } from '../../../engine/core/result';
 import { applyInstallationCorrections, ramRecoveryCoefficient } from '../../../engine/propulsion/installationCorrections';
-import { prepareLipSuction, ROUNDED_PITOT_LIP_SUCTION } from '../../../engine/propulsion/lipSuction';
+import { interp2d, makeTable2d } from '../../../engine/core/table2d';
+import { prepareLipSuction, ROUNDED_PITOT_LIP_SUCTION, type LipSuction } from '../../../engine/propulsion/lipSuction';
 import { expectClose } from '../../support/assertInDelta';
 
 describe('lip suction', () => {
@@ -38,6 +39,22 @@ describe('lip suction', () => {
     expectClose(t.at(0.25, 0.6).factor, 0.46, { abs: 1e-15 }, 'bilinear closed form');
     expect(t.at(0.25, 0.6).outside).toBe(false);
     expect(t.at(1.4, 0.6)).toEqual({ factor: t.at(1, 0.6).factor, outside: true });
+  });
+
+  it('at and atInto give the 2-D table interpolation (interp2d, clamp) to the bit, inside, on the nodes and off the table', () => {
+    const lip = expectOk(prepareLipSuction(ROUNDED_PITOT_LIP_SUCTION), 'default');
+    const spec = ROUNDED_PITOT_LIP_SUCTION as Extract<LipSuction, { kind: 'table' }>;
+    const table = expectOk(makeTable2d(spec.mach, spec.massFlowRatio, spec.factor, 'lip suction'), 'table');
+    const out = { factor: -1, outside: true };
+    for (const mach of [-0.1, 0, 0.25, 0.6, 0.77, 0.9, 1, 1.3]) {
+      for (const ratio of [0.1, 0.3, 0.42, 0.85, 0.999, 1, 1.2]) {
+        const want = expectOk(interp2d(table, mach, ratio, 'clamp'), 'interp2d');
+        const got = lip.at(mach, ratio);
+        lip.atInto(mach, ratio, out);
+        expect(got).toEqual({ factor: want.value, outside: want.outsideX !== null || want.outsideY !== null });
+        expect(out).toEqual(got);
+      }
+    }
   });
 
   it('refuses fractions outside 0..1 with the cell named', () => {
