@@ -26,21 +26,27 @@ import { FOOT_M } from '../units/unitTable';
 import { msg, q, type MessageParts } from '../units/messageParts';
 
 /**
- * Fuel residual tolerance (kg): the mission lands with the reserve plus 0 to this much (never less). At 0.02 kg the
- * converged block fuel of the demo is within 1e-6 relative of the exactly converged one (its block fuel moves by
- * about 0.15 kg per kg of residual; docs/mission.md, Solve modes).
+ * Fuel residual tolerance (kg) of payloadRange: the mission lands with the reserve plus 0 to this much (never
+ * less). Block fuel moves by about 0.15 kg per kg of residual there (the ramp mass carries most of it back), so at
+ * 0.02 kg the demo's block fuel is within 7e-7 relative of the exactly converged one (docs/mission.md, Solve modes).
  */
 export const FUEL_TOLERANCE_KG = 0.02;
+/**
+ * Fuel residual tolerance (kg) with a fixed ramp mass (maxRange, takeoffWeight with a solvable leg): the residual
+ * is fuel not burned, so block fuel moves kilogram for kilogram with it and the range by the leg's specific range;
+ * at 0.004 kg the demo's block fuel and range are within 1e-6 relative of the exactly converged ones.
+ */
+export const FIXED_MASS_FUEL_TOLERANCE_KG = 0.004;
 
 /** The fuel band a solve iterates into: [0, tolerance_kg], aimed at its middle so the reserve is never undercut. */
-interface FuelBand {
+export interface FuelBand {
   readonly tolerance_kg: number;
   readonly aim_kg: number;
 }
 
-/** The band of a tolerance (kg): the default unless a positive finite one is given (convergence studies). */
-export function fuelBand(tolerance_kg: number | undefined): FuelBand {
-  const t = tolerance_kg !== undefined && Number.isFinite(tolerance_kg) && tolerance_kg > 0 ? tolerance_kg : FUEL_TOLERANCE_KG;
+/** The band of a tolerance (kg): the mode's default (`fallback_kg`) unless a positive finite one is given (convergence studies). */
+export function fuelBand(tolerance_kg: number | undefined, fallback_kg = FUEL_TOLERANCE_KG): FuelBand {
+  const t = tolerance_kg !== undefined && Number.isFinite(tolerance_kg) && tolerance_kg > 0 ? tolerance_kg : fallback_kg;
   return { tolerance_kg: t, aim_kg: t / 2 };
 }
 
@@ -289,7 +295,7 @@ function spareFuelDistance(input: MissionInput, leg: Extract<Leg, { kind: 'cruis
  * Breguet distance of the spare fuel at the leg's specific range; a warm start flies the given distance first
  * and steps with the given slope. Then the secant method.
  */
-export function iterateDistance(ctx: MissionContext, rampMass_kg: number, start: MissionStart = {}, band: FuelBand = fuelBand(undefined)): IterationOutcome {
+export function iterateDistance(ctx: MissionContext, rampMass_kg: number, start: MissionStart = {}, band: FuelBand = fuelBand(undefined, FIXED_MASS_FUEL_TOLERANCE_KG)): IterationOutcome {
   const input = ctx.input;
   const infeasible = (e: MissionEvaluation, k: number): IterationOutcome => ({
     kind: 'infeasible',
@@ -346,9 +352,14 @@ export function iterateDistance(ctx: MissionContext, rampMass_kg: number, start:
     if (Number.isFinite(secant) && secant < 0) slope = secant;
     if (fuelConverged(e1.residual_kg, band)) return converged(d1, e1, k, slope);
     const aimed = e1.residual_kg - band.aim_kg;
-    // Newton's method with the marginal slope at the leg's end (its fuel per metre there, plus the contingency that
-    // grows with it) while the secant still spans the zero-length pass; the secant method after.
-    const marginal = e1.trip.solvableEndFuelPerMetre > 0 ? -e1.trip.solvableEndFuelPerMetre * (1 + contingencyShare(input)) : Number.NaN;
+    // Newton's method with the marginal slope at the leg's end while the secant still spans the zero-length pass
+    // (the secant method after): the fuel per metre there, times 1 - dR/dm_L, the reserve's change with the landing
+    // mass (its flown items and the contingency that grows with the trip fuel) taken between the two passes, which
+    // share the ramp mass; the contingency share alone when that is not usable.
+    const dLanding = e1.trip.landing[S_MASS] - e0.trip.landing[S_MASS];
+    const reserveSlope = (e1.reserves.breakdown.total_kg - e0.reserves.breakdown.total_kg) / dLanding;
+    const factor = Number.isFinite(reserveSlope) && Math.abs(dLanding) >= 1 && Math.abs(reserveSlope) < 0.5 ? 1 - reserveSlope : 1 + contingencyShare(input);
+    const marginal = e1.trip.solvableEndFuelPerMetre > 0 ? -e1.trip.solvableEndFuelPerMetre * factor : Number.NaN;
     const next =
       d0 === 0 && Number.isFinite(marginal)
         ? d1 - aimed / marginal

@@ -26,7 +26,7 @@ import { checkFuelCapacity, checkMlw, checkMtow, checkMzfw, checkReserve } from 
 import { allowanceFuel } from './allowanceLegs';
 import { basisSpecificRange, specificRangeAt } from './bestSpeeds';
 import { cruiseMach } from './cruiseLeg';
-import { evaluateMission, fuelBand, iterateDistance, iterateRampMass, type IterationOutcome, type MissionEvaluation } from './fuelIteration';
+import { evaluateMission, FIXED_MASS_FUEL_TOLERANCE_KG, fuelBand, iterateDistance, iterateRampMass, type IterationOutcome, type MissionEvaluation } from './fuelIteration';
 import { solvableLegIndex, tripBounds } from './flyTrip';
 import { distanceBasis, legEnvironment, type FlightOptions, type LegTarget, type MissionContext } from './missionContext';
 import { missionInputProblem } from './missionInputCheck';
@@ -186,7 +186,10 @@ export interface SolveOptions {
    * or without it, and an unusable field is ignored.
    */
   readonly warmStart?: MissionStart;
-  /** The fuel band's width (kg; default FUEL_TOLERANCE_KG, 0.02 kg): narrower for a tightly converged reference. */
+  /**
+   * The fuel band's width (kg; default FUEL_TOLERANCE_KG, 0.02 kg, in payloadRange and FIXED_MASS_FUEL_TOLERANCE_KG,
+   * 0.004 kg, with a fixed ramp mass): narrower for a tightly converged reference.
+   */
   readonly fuelTolerance_kg?: number;
 }
 
@@ -219,7 +222,6 @@ function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult
   const flightOptions: FlightOptions = { stepScale, allowNegativeFuel: false };
   const base: MissionContext = { input, options: flightOptions, zeroFuelMass_kg: zfw, log: createFlightLog(input.airframe, input.cautionSettings), memo: createPassMemo() };
   const solve = input.solve;
-  const band = fuelBand(options.fuelTolerance_kg);
   const hasSolvable = solvableLegIndex(input) >= 0;
 
   let rampMass = 0;
@@ -230,7 +232,7 @@ function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult
   let outcome: IterationOutcome | null = null;
   if (solve.kind === 'payloadRange') {
     const guess = breguetRampGuess(input, zfw, taxi, solve.range_m);
-    outcome = iterateRampMass(base, solve.range_m, guess, options.warmStart, band);
+    outcome = iterateRampMass(base, solve.range_m, guess, options.warmStart, fuelBand(options.fuelTolerance_kg));
     ({ rampMass_kg: rampMass, distance_m: distance, iterations, residual_kg: residual } = outcome);
     if (outcome.kind === 'infeasible') {
       return { ...emptyResult(input, 'infeasible', outcome.message), iterations, residual_kg: residual };
@@ -244,7 +246,7 @@ function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult
       return emptyResult(input, 'infeasible', msg`No fuel can be carried: ramp mass ${q(rampMass, 'mass')} is not above zero-fuel mass ${q(zfw, 'mass')}.`);
     }
     if (hasSolvable) {
-      outcome = iterateDistance(base, rampMass, options.warmStart, band);
+      outcome = iterateDistance(base, rampMass, options.warmStart, fuelBand(options.fuelTolerance_kg, FIXED_MASS_FUEL_TOLERANCE_KG));
       ({ distance_m: distance, iterations, residual_kg: residual } = outcome);
     }
   }
