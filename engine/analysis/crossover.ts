@@ -207,17 +207,25 @@ function peakOf(scan: MachScan): { readonly x: number; readonly fx: number } | n
   return maximizeOnGrid((mach) => scan.point(mach).specificExcessPower_m_s, scan.lo, scan.hi, scan.samples, CROSSOVER_MACH_TOL);
 }
 
-/** Mach margin (-) around the expected best-climb Machs of a local peak search, and its grid. */
+/** Mach margin (-) around the expected best-climb Machs of a local peak search, its grid and the check grid over the scan. */
 const LOCAL_MARGIN = 0.03;
 const LOCAL_SAMPLES = 9;
+const CHECK_SAMPLES = 11;
+/**
+ * Golden-section width (-) of a local peak search: the peak's Ps is then
+ * within about Ps'' x 1e-12 of the true one (flat maximum), far inside any
+ * ceiling tolerance; its Mach is good to 1e-6.
+ */
+export const LOCAL_PEAK_MACH_TOL = 1e-6;
 
 /**
  * The climb peak searched only near the Machs [m1, m2] where it is expected
- * (the best-climb Machs of the altitudes either side): a grid of
- * LOCAL_SAMPLES over [m1 - LOCAL_MARGIN, m2 + LOCAL_MARGIN] within the scan,
- * then golden sections. Null (search the whole scan) when the best sample
- * is not inside the window or Ps is not finite on it: the peak may lie
- * elsewhere.
+ * (the best-climb Machs of neighbouring altitudes): a grid of LOCAL_SAMPLES
+ * over [m1 - LOCAL_MARGIN, m2 + LOCAL_MARGIN] within the scan, then golden
+ * sections to LOCAL_PEAK_MACH_TOL. Null (search the whole scan) when the
+ * best sample lies on the window's edge (the hump may continue outside it),
+ * when a coarse check grid of CHECK_SAMPLES over the whole scan finds a
+ * higher Ps elsewhere (another hump), or when Ps is not finite there.
  */
 function localPeak(scan: MachScan, near: readonly [number, number]): { readonly x: number; readonly fx: number } | null {
   const a = Math.max(scan.lo, Math.min(near[0], near[1]) - LOCAL_MARGIN);
@@ -234,9 +242,9 @@ function localPeak(scan: MachScan, near: readonly [number, number]): { readonly 
       best = i;
     }
   });
-  // The best sample on the window's edge (not the scan's): the hump may continue outside it.
   if (best < 0 || (best === 0 && a > scan.lo) || (best === xs.length - 1 && b < scan.hi)) return null;
-  return refineMaximum(ps, xs[Math.max(0, best - 1)]!, xs[Math.min(xs.length - 1, best + 1)]!, xs[best]!, bestF, CROSSOVER_MACH_TOL);
+  if (uniformGrid(scan.lo, scan.hi, CHECK_SAMPLES).some((x) => ps(x) > bestF)) return null;
+  return refineMaximum(ps, xs[Math.max(0, best - 1)]!, xs[Math.min(xs.length - 1, best + 1)]!, xs[best]!, bestF, LOCAL_PEAK_MACH_TOL);
 }
 
 /** The no_solution error of a scan where thrust or drag is nowhere finite. */

@@ -280,7 +280,9 @@ export function flightCeilings(models: PerformanceModels, query: EnvelopeQuery):
   const { altitudes, machRange, rates } = setup.value;
   const rows: PeakRow[] = [];
   for (const h of altitudes) {
-    const c = climbPeak(models, peakQuery(query, machRange, h));
+    // Each row after the first searches near the row below's best-climb Mach (climbPeak's local search).
+    const below = rows.length > 0 ? rows[rows.length - 1]!.bestClimbMach : null;
+    const c = climbPeak(models, peakQuery(query, machRange, h), below === null ? undefined : [below, below]);
     if (!c.ok) return err({ ...c.error, message: `envelope at ${h} m: ${c.error.message}` });
     rows.push({ altitude_m: h, bestClimbMach: c.value.bestClimbMach, maxClimbRate_m_s: c.value.maxSpecificExcessPower_m_s });
     // Every ceiling is bracketed at or below the first row without a positive climb rate (the rates are >= 0): the rows above are not needed.
