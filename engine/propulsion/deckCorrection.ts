@@ -34,11 +34,19 @@ export const DECK_INTERPOLATION_TEXT: Readonly<Record<DeckInterpolation, string>
  * condition must be inside the standard atmosphere (throws otherwise: a bug).
  */
 export function correctionFactorsInto(altitude_m: number, mach: number, isaDev_K: number, out: Float64Array): void {
-  const a = atmosphere(altitude_m, isaDev_K);
-  if (!a.ok) throw new RangeError(`deck correction: ${a.error.message}`);
+  correctionFactorsOfAir(atmosphere(altitude_m, isaDev_K), mach, out);
+}
+
+/**
+ * correctionFactorsInto from the standard atmosphere already evaluated at the
+ * pressure altitude and ISA deviation (`air` = atmosphere(altitude_m,
+ * isaDev_K); throws on its error, a bug): for callers that hold it.
+ */
+export function correctionFactorsOfAir(air: ReturnType<typeof atmosphere>, mach: number, out: Float64Array): void {
+  if (!air.ok) throw new RangeError(`deck correction: ${air.error.message}`);
   const ram = 1 + 0.2 * mach * mach;
-  const delta = a.value.delta * ram * ram * ram * Math.sqrt(ram);
-  const rootTheta = Math.sqrt((a.value.temperature_K * ram) / T0);
+  const delta = air.value.delta * ram * ram * ram * Math.sqrt(ram);
+  const rootTheta = Math.sqrt((air.value.temperature_K * ram) / T0);
   out[0] = delta;
   out[1] = delta * rootTheta;
   out[2] = delta / rootTheta;

@@ -88,6 +88,7 @@ export function lookupFilledDeck(
   s: DeckNodeSet,
   filled: boolean,
   conditionMask: number,
+  correction?: Float64Array,
 ): Result<DeckLookup, DeckLookupError> {
   assertFiniteInputs(condition, power);
   if (!filled) return err(refusal(deck, s));
@@ -97,13 +98,14 @@ export function lookupFilledDeck(
   if (!evaluateDeckNodesInto(deck.grid, s, power, deck.policy.power, values)) {
     return err(refusal(deck, s));
   }
-  return ok(finishLookup(deck, condition, power, s, values));
+  return ok(finishLookup(deck, condition, power, s, values, correction));
 }
 
 /**
  * Builds the lookup from evaluated node values (thrust, fuel flow, airflow in
  * v[0..2], sensitivities in v[3..11] when the deck has them) and the node
- * set's outside flags. Shared with deckInversion.ts.
+ * set's outside flags. Shared with deckInversion.ts. `correction`, when given,
+ * holds the corrected-parameter factors at `condition` (queryCorrectionInto's).
  */
 export function finishLookup(
   deck: EngineDeck,
@@ -111,12 +113,15 @@ export function finishLookup(
   power: number,
   s: DeckNodeSet,
   v: Float64Array,
+  correction?: Float64Array,
 ): DeckLookup {
   if (deck.interpolation === 'corrected') {
-    queryCorrectionInto(deck, condition.altitude_m, condition.mach, condition.isaDev_K, factors);
-    v[0] = v[0]! * factors[0]!;
-    v[1] = v[1]! * factors[1]!;
-    v[2] = v[2]! * factors[2]!;
+    // `correction`: the query's factors (queryCorrectionInto) when the caller holds them.
+    const c = correction ?? factors;
+    if (correction === undefined) queryCorrectionInto(deck, condition.altitude_m, condition.mach, condition.isaDev_K, factors);
+    v[0] = v[0]! * c[0]!;
+    v[1] = v[1]! * c[1]!;
+    v[2] = v[2]! * c[2]!;
   }
   let fuelFlow = v[1]!;
   let airflow: number | null = deck.hasAirflow ? v[2]! : null;

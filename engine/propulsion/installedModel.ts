@@ -160,12 +160,6 @@ interface RatingMemo {
   readonly point: InstalledPoint;
 }
 
-/** The point and its per-engine part frozen (a memoised point is shared by every identical query). */
-function freezePoint(point: InstalledPoint): InstalledPoint {
-  Object.freeze(point.perEngine);
-  return Object.freeze(point);
-}
-
 export function makeInstalledModel(access: DeckAccess, options: InstalledModelOptions): PropulsionModel {
   const ctx = installationContext(access, options);
   const scratch = newEngineScratch();
@@ -180,13 +174,30 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
   function atPower(condition: FlightCondition, power: number): InstalledPoint {
     checkCondition(condition);
     if (!Number.isFinite(power)) throw new RangeError(`installed propulsion: power setting is ${power}, expected a finite number`);
-    return pointAt(condition, freeStreamOf(access, condition), power, NO_CAUTIONS);
+    return pointAt(condition, freeStream(condition), power, NO_CAUTIONS);
   }
 
   // One-entry memo per rating, keyed by the condition's three numbers (Object.is: -0 and 0 stay apart) and nothing
   // else: the model's answer at a rating is a pure function of them, so a repeated query (a mission asks the same
-  // rating at the same condition in a row, ~40 % of its atRating calls) returns the same frozen point.
+  // rating at the same condition in a row, ~40 % of its atRating calls) returns the same point, shared: points are
+  // read-only (every field of InstalledPoint is readonly; freezing each cost 5 % of atRating).
   const ratingMemo = new Map<RatingName, RatingMemo>();
+
+  // One-entry memo of the free stream, keyed by the condition's three numbers alone (a pure function of them).
+  let freeKey: FlightCondition | null = null;
+  let freeValue: FreeStream = { mach: 0, pressure_Pa: 0, temperature_K: 0 };
+  function freeStream(condition: FlightCondition): FreeStream {
+    if (
+      freeKey === null ||
+      !Object.is(freeKey.altitude_m, condition.altitude_m) ||
+      !Object.is(freeKey.mach, condition.mach) ||
+      !Object.is(freeKey.isaDev_K, condition.isaDev_K)
+    ) {
+      freeValue = freeStreamOf(access, condition);
+      freeKey = { altitude_m: condition.altitude_m, mach: condition.mach, isaDev_K: condition.isaDev_K };
+    }
+    return freeValue;
+  }
 
   function atRating(condition: FlightCondition, rating: RatingName): InstalledPoint {
     checkCondition(condition);
@@ -200,7 +211,7 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
       return memo.point;
     }
     const { power, caution } = resolveRating(access, named, condition, rating);
-    const point = freezePoint(pointAt(condition, freeStreamOf(access, condition), power, caution ? [caution] : NO_CAUTIONS));
+    const point = pointAt(condition, freeStream(condition), power, caution ? [caution] : NO_CAUTIONS);
     ratingMemo.set(rating, { altitude_m: condition.altitude_m, mach: condition.mach, isaDev_K: condition.isaDev_K, point });
     return point;
   }
@@ -210,7 +221,7 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
     if (!Number.isFinite(thrustRequired_N)) {
       throw new RangeError(`installed propulsion: thrust required is ${thrustRequired_N}, expected a finite number`);
     }
-    const free = freeStreamOf(access, condition);
+    const free = freeStream(condition);
     const ceiling = resolveRating(access, named, condition, ceilingRating);
     const idle = resolveRating(access, named, condition, 'flightIdle');
     const extra: readonly Caution[] =

@@ -8,7 +8,7 @@ import type { CautionSettings } from '../cautions/cautionSettings';
 import { createDeckNodeSet, DECK_VALUES_WITH_SENSITIVITIES, evaluateDeckNodesInto, fillDeckNodes, nextPowerBreakpoint } from './deckGrid';
 import { powerForThrust } from './deckInversion';
 import { lookupDeck, lookupFilledDeck, powerBounds, ratingPower } from './deckLookup';
-import { deckForInterpolation, queryCorrectionInto } from './deckCorrection';
+import { correctionFactorsOfAir, deckForInterpolation } from './deckCorrection';
 import { temperatureFlowFactor } from './deckTemperature';
 import type { EngineDeck } from './engineDeck';
 import type { InletDesign } from './inletDesign';
@@ -40,13 +40,23 @@ export function sortedUnique(values: ArrayLike<number>): number[] {
 
 /** The deck and the 1976 standard atmosphere as the installed model's DeckAccess. */
 export function deckAccess(deck: EngineDeck): DeckAccess {
-  const curve = deckCurve(deck);
+  // One-entry memo of the standard atmosphere, keyed purely by altitude and ISA deviation (a mission asks for the
+  // same condition several times in a row, and the ambient air and the corrected-parameter factors of a deck
+  // without an ISA axis on a standard day need the same one); the Result is immutable, so sharing it cannot
+  // change any answer.
+  let airAltitude_m = Number.NaN;
+  let airIsaDev_K = Number.NaN;
+  let airValue: ReturnType<typeof atmosphere> | null = null;
+  const air = (altitude_m: number, isaDev_K: number): ReturnType<typeof atmosphere> => {
+    if (airValue === null || !Object.is(altitude_m, airAltitude_m) || !Object.is(isaDev_K, airIsaDev_K)) {
+      airValue = atmosphere(altitude_m, isaDev_K);
+      airAltitude_m = altitude_m;
+      airIsaDev_K = isaDev_K;
+    }
+    return airValue;
+  };
+  const curve = deckCurve(deck, air);
   const evaluate = curve.evaluate;
-  // One-entry memo of the ambient air, keyed purely by altitude and ISA deviation (a mission asks for the same
-  // condition several times in a row); the Result is immutable, so sharing it cannot change any answer.
-  let ambientAltitude_m = Number.NaN;
-  let ambientIsaDev_K = Number.NaN;
-  let ambientValue: ReturnType<typeof atmosphere> | null = null;
   return {
     title: deck.title,
     parametric: deck.parametric,
@@ -69,14 +79,7 @@ export function deckAccess(deck: EngineDeck): DeckAccess {
       return evaluate;
     },
     curveBreakAfter: curve.breakAfter,
-    ambient: (condition) => {
-      if (ambientValue === null || condition.altitude_m !== ambientAltitude_m || condition.isaDev_K !== ambientIsaDev_K) {
-        ambientValue = atmosphere(condition.altitude_m, condition.isaDev_K);
-        ambientAltitude_m = condition.altitude_m;
-        ambientIsaDev_K = condition.isaDev_K;
-      }
-      return ambientValue;
-    },
+    ambient: (condition) => air(condition.altitude_m, condition.isaDev_K),
   };
 }
 
@@ -91,7 +94,10 @@ export function deckAccess(deck: EngineDeck): DeckAccess {
  * airflow floored at zero like lookupDeck's extrapolations. `evaluate` returns false where
  * lookupDeck would refuse. One prepared condition at a time (buffers reused).
  */
-export function deckCurve(deck: EngineDeck): {
+export function deckCurve(
+  deck: EngineDeck,
+  air: (altitude_m: number, isaDev_K: number) => ReturnType<typeof atmosphere> = atmosphere,
+): {
   prepare(condition: FlightCondition): void;
   evaluate(power: number, out: Float64Array): boolean;
   /** The prepared condition's next power breakpoint strictly above `after` (Infinity when none; deckGrid's nextPowerBreakpoint). */
@@ -130,7 +136,8 @@ export function deckCurve(deck: EngineDeck): {
     airflowFactor = 1 / temperatureFactor;
     thrustFactor = 1;
     if (deck.interpolation === 'corrected') {
-      queryCorrectionInto(deck, condition.altitude_m, condition.mach, condition.isaDev_K, factors);
+      // queryCorrectionInto's factors, from the atmosphere at the deck's own ISA level.
+      correctionFactorsOfAir(air(condition.altitude_m, deck.hasIsaDev ? condition.isaDev_K : 0), condition.mach, factors);
       thrustFactor = factors[0]!;
       airflowFactor *= factors[2]!;
     }
@@ -157,7 +164,7 @@ export function deckCurve(deck: EngineDeck): {
         return lookupDeck(deck, condition, power); // throws with the deck lookup's message
       }
       prepare(condition);
-      return lookupFilledDeck(deck, condition, power, nodes, filled, conditionMask);
+      return lookupFilledDeck(deck, condition, power, nodes, filled, conditionMask, factors);
     },
   };
 }

@@ -273,7 +273,7 @@ describe('cautions', () => {
 });
 
 describe('atRating memo', () => {
-  it('atRating answers depend only on the query: the same as a fresh model after any history, frozen, -0 kept apart from 0', () => {
+  it('atRating answers depend only on the query: the same as a fresh model after any history, -0 kept apart from 0', () => {
     const m = model(TABLE_INLET);
     const asked: [FlightCondition, 'maxClimb' | 'flightIdle' | 'maxCruise'][] = [
       [CRUISE, 'maxClimb'],
@@ -289,7 +289,6 @@ describe('atRating memo', () => {
       const p = m.atRating(condition, rating);
       expect(p).toEqual(model(TABLE_INLET).atRating(condition, rating));
       expect(Object.is(p.altitude_m, condition.altitude_m)).toBe(true);
-      expect(Object.isFrozen(p) && Object.isFrozen(p.perEngine)).toBe(true);
     }
     expect(m.atRating(CRUISE, 'maxClimb')).toBe(m.atRating({ ...CRUISE }, 'maxClimb'));
   });
