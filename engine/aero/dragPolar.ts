@@ -9,12 +9,12 @@
  */
 import { expectOk } from '../core/result';
 import type { Result } from '../core/result';
-import { interp1d, makeTable1d, type Table1d } from '../core/table1d';
+import { clampedValue, interp1d, makeTable1d, outsideAxis, type Table1d } from '../core/table1d';
 import { interp2d, makeTable2d, type Table2d } from '../core/table2d';
 import type { AeroModel, DragBreakdown, DragQuery } from './aeroModel';
 import { validatePolarSpec, type PolarIssue, type PolarSpec } from './polarSpec';
 import { g0, gamma } from './constants';
-import { atmosphere } from './standardAtmosphere';
+import { atmosphere, isaPressureAt } from './standardAtmosphere';
 import { kornWaveDrag, type KornWing } from './waveDrag';
 
 /** Names used in `outsideTables` when a query leaves a table and is clamped. */
@@ -142,38 +142,73 @@ export function clMaxAt(model: DragPolarModel, mach: number): number {
   return lookup(model.tables.clMax, mach, 'clMax', []);
 }
 
+/** The tables a lookup at `mach` (and `cl` for a wave-drag table) left, in polarCoefficients' order then buffet CL and CLmax; one shared empty list when none (the usual case). */
+function outsideTablesAt(t: PolarTables, mach: number, cl: number): readonly PolarTableName[] {
+  const cd0 = outsideAxis(t.cd0.x, mach);
+  const induced = typeof t.induced !== 'number' && outsideAxis(t.induced.x, mach);
+  const wave = t.wave.kind === 'table' && (outsideAxis(t.wave.table.x, mach) || outsideAxis(t.wave.table.y, cl));
+  const buffet = outsideAxis(t.buffetCl.x, mach);
+  const clMax = outsideAxis(t.clMax.x, mach);
+  if (!cd0 && !induced && !wave && !buffet && !clMax) return NONE_OUTSIDE;
+  const out: PolarTableName[] = [];
+  if (cd0) out.push('cd0');
+  if (induced) out.push('induced');
+  if (wave) out.push('compressibility');
+  if (buffet) out.push('buffetCl');
+  if (clMax) out.push('clMax');
+  return out;
+}
+const NONE_OUTSIDE: readonly PolarTableName[] = Object.freeze([]);
+
+/**
+ * One drag query: the same arithmetic as polarCoefficients plus the buffet
+ * and CLmax lookups, without intermediate result objects (the mission asks
+ * thousands per solve). Only the pressure of the standard atmosphere is
+ * needed (dynamic pressure 0.5 gamma p M^2).
+ */
 function dragAt(model: DragPolarModel, query: DragQuery): DragBreakdown {
   requireFinite(query.altitude_m, 'altitude_m');
   requireFinite(query.mass_kg, 'mass_kg');
   requireFinite(query.loadFactor, 'loadFactor');
   requireFinite(query.mach, 'Mach');
-  if (!(query.mach > 0)) throw new RangeError(`drag polar: Mach is ${query.mach}, expected > 0 for a lifting query`);
+  const mach = query.mach;
+  if (!(mach > 0)) throw new RangeError(`drag polar: Mach is ${mach}, expected > 0 for a lifting query`);
   if (!(query.mass_kg > 0)) throw new RangeError(`drag polar: mass_kg is ${query.mass_kg}, expected > 0`);
-  const atm = atmosphere(query.altitude_m);
-  if (!atm.ok) throw new RangeError(`drag polar: ${atm.error.message}`);
-  const q_Pa = 0.5 * gamma * atm.value.pressure_Pa * query.mach * query.mach;
+  const pressure_Pa = isaPressureAt(query.altitude_m);
+  if (Number.isNaN(pressure_Pa)) {
+    const atm = atmosphere(query.altitude_m);
+    throw new RangeError(`drag polar: ${atm.ok ? `no pressure at ${query.altitude_m} m` : atm.error.message}`);
+  }
+  const q_Pa = 0.5 * gamma * pressure_Pa * mach * mach;
   const qS = q_Pa * model.wingArea_m2;
   const weight_N = query.mass_kg * g0;
   const cl = (query.loadFactor * weight_N) / qS;
-  const c = polarCoefficients(model, query.mach, cl);
-  const outside = [...c.outsideTables];
-  const buffetCl = lookup(model.tables.buffetCl, query.mach, 'buffetCl', outside);
-  const clMax = lookup(model.tables.clMax, query.mach, 'clMax', outside);
+  const t = model.tables;
+  const cd0 = clampedValue(t.cd0, mach);
+  const k = typeof t.induced === 'number' ? t.induced : clampedValue(t.induced, mach);
+  const dcl = cl - model.spec.clMinDrag;
+  const cdInduced = k * dcl * dcl;
+  let cdWave = 0;
+  if (t.wave.kind === 'korn') cdWave = kornWaveDrag(t.wave.wing, mach, cl);
+  else if (t.wave.kind === 'table') cdWave = expectOk(interp2d(t.wave.table, mach, cl, 'clamp'), 'polar table compressibility').value;
+  const cdIncrement = model.spec.cdIncrement;
+  const cd = cd0 + cdIncrement + cdInduced + cdWave;
+  const buffetCl = clampedValue(t.buffetCl, mach);
   return {
     cl,
-    cd: c.cd,
-    cd0: c.cd0,
-    cdIncrement: c.cdIncrement,
-    cdInduced: c.cdInduced,
-    cdWave: c.cdWave,
+    cd,
+    cd0,
+    cdIncrement,
+    cdInduced,
+    cdWave,
     q_Pa,
-    drag_N: qS * c.cd,
-    liftToDrag: cl / c.cd,
+    drag_N: qS * cd,
+    liftToDrag: cl / cd,
     buffetCl,
     // Load factor at which this mass reaches buffet onset here: CLbuffet / CL(1 g).
     buffetLoadFactor: (buffetCl * qS) / weight_N,
-    clMax,
-    outsideTables: outside,
+    clMax: clampedValue(t.clMax, mach),
+    outsideTables: outsideTablesAt(t, mach, cl),
   };
 }
 

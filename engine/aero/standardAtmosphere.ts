@@ -127,6 +127,16 @@ export const MAX_PRESSURE_PA = isaPressure(MIN_PRESSURE_ALTITUDE_M, 0);
 export const MIN_PRESSURE_PA = isaPressure(MAX_PRESSURE_ALTITUDE_M, layerIndex(MAX_PRESSURE_ALTITUDE_M));
 
 /**
+ * Static pressure (Pa) of the standard atmosphere at a pressure altitude (m):
+ * `atmosphere(h).pressure_Pa` (the same arithmetic) without the state
+ * object, for hot paths; NaN where `atmosphere` would refuse the altitude.
+ */
+export function isaPressureAt(pressureAltitude_m: number): number {
+  if (!(pressureAltitude_m >= MIN_PRESSURE_ALTITUDE_M && pressureAltitude_m <= MAX_PRESSURE_ALTITUDE_M)) return Number.NaN;
+  return isaPressure(pressureAltitude_m, layerIndex(pressureAltitude_m));
+}
+
+/**
  * The atmosphere at a geopotential pressure altitude (m), -5,003.9 m to
  * 71,000 m, with an ISA temperature deviation (K, default 0; -100 K to
  * +100 K). The deviation

@@ -261,6 +261,39 @@ export function rangeCheck(
 }
 
 /**
+ * `interp1d(table, x, 'clamp')`'s value without the result object, for hot
+ * paths (the drag polar's lookups): the same arithmetic, so the same number.
+ * `x` must be finite (the caller checks); NaN comes out for NaN in.
+ */
+export function clampedValue(table: Table1d, x: number): number {
+  const xs = table.x;
+  const ys = table.y;
+  const n = xs.length;
+  if (n === 1 || x <= xs[0]!) return ys[0]!;
+  if (x >= xs[n - 1]!) return ys[n - 1]!;
+  // locate's bisection, without its result object.
+  let i = 0;
+  let hi = n - 1;
+  while (hi - i > 1) {
+    const mid = (i + hi) >> 1;
+    if (xs[mid]! <= x) i = mid;
+    else hi = mid;
+  }
+  const h = xs[i + 1]! - xs[i]!;
+  const t = (x - xs[i]!) / h;
+  if (t === 0) return ys[i]!;
+  if (table.method === 'linear') return lerp(ys[i]!, ys[i + 1]!, t);
+  const t2 = t * t;
+  const t3 = t2 * t;
+  return (2 * t3 - 3 * t2 + 1) * ys[i]! + (t3 - 2 * t2 + t) * h * table.slopes[i]! + (-2 * t3 + 3 * t2) * ys[i + 1]! + (t3 - t2) * h * table.slopes[i + 1]!;
+}
+
+/** True when `q` lies outside an increasing axis of two or more nodes (where a clamped lookup holds the end value, as locate says). */
+export function outsideAxis(axis: readonly number[], q: number): boolean {
+  return axis.length > 1 && (q < axis[0]! || q > axis[axis.length - 1]!);
+}
+
+/**
  * Interpolates `table` at `x`. 'refuse' returns an `outside_table` error
  * outside the axis; 'clamp' returns the end value; 'extrapolate' continues
  * linearly. Outside answers carry `outside: 'below' | 'above'`. A non-finite

@@ -304,3 +304,44 @@ describe('AeroModel.withIncrement', () => {
     expect(() => m.withIncrement(-0.02)).toThrow(/CD0 \+ dCD0 <= 0/);
   });
 });
+
+describe('drag query without intermediate objects', () => {
+  // The hot-path drag (isaPressureAt, clampedValue) must give the very numbers of the general path: the 1976
+  // standard atmosphere's pressure (U.S. Standard Atmosphere 1976, via atmosphere()) and polarCoefficients.
+  const tabled: PolarSpec = {
+    ...transonic,
+    cd0: { mach: [0.3, 0.6, 0.8], cd0: [0.021, 0.0205, 0.0212] },
+    induced: { kind: 'table', mach: [0.3, 0.85], k: [0.041, 0.046] },
+    compressibility: { kind: 'table', mach: [0.6, 0.8, 0.9], cl: [0.2, 0.6], cdWave: [[0, 0], [0.0004, 0.0012], [0.004, 0.009]] },
+  };
+  for (const [name, spec] of [['Korn wave drag', transonic], ['tabled', tabled]] as const) {
+    it(`${name}: drag, CL, CD parts, buffet and CLmax equal the general path exactly, inside and outside every table`, () => {
+      const m = model(spec);
+      for (const alt of [-4000, 0, 3048, 11000, 12500, 20100]) {
+        for (const mach of [0.1, 0.3, 0.45, 0.6, 0.78, 0.8, 0.86, 0.95]) {
+          for (const mass of [20000, 60000, 140000]) {
+            const d = m.drag({ altitude_m: alt, mach, mass_kg: mass, loadFactor: 1.1 });
+            const p = expectOk(atmosphere(alt), 'atmosphere').pressure_Pa;
+            const q = dynamicPressure_Pa(mach, p);
+            const cl = (1.1 * (mass * 9.80665)) / (q * 122); // the same association as the old general path
+            const c = polarCoefficients(m, mach, cl);
+            expect(d.q_Pa).toBe(q);
+            expect(d.cl).toBe(cl);
+            expect([d.cd, d.cd0, d.cdInduced, d.cdWave, d.cdIncrement]).toEqual([c.cd, c.cd0, c.cdInduced, c.cdWave, c.cdIncrement]);
+            expect(d.drag_N).toBe(q * 122 * c.cd);
+            expect(d.buffetCl).toBe(buffetClAt(m, mach));
+            expect(d.clMax).toBe(clMaxAt(m, mach));
+            const expectedOutside = [...c.outsideTables];
+            if (mach < spec.buffetCl.mach[0]! || mach > spec.buffetCl.mach.at(-1)!) expectedOutside.push('buffetCl');
+            if (mach < spec.clMax.mach[0]! || mach > spec.clMax.mach.at(-1)!) expectedOutside.push('clMax');
+            expect(d.outsideTables).toEqual(expectedOutside);
+          }
+        }
+      }
+    });
+  }
+
+  it('refuses an altitude outside the standard atmosphere with its message', () => {
+    expect(() => model(transonic).drag({ altitude_m: 80000, mach: 0.5, mass_kg: 50000, loadFactor: 1 })).toThrow(/outside the standard atmosphere's range/);
+  });
+});
