@@ -178,6 +178,8 @@ export interface DeckNodeSet {
   readonly outsideAtMach: Float64Array;
   /** The axis whose 'refuse' policy stopped the lookup, or -1. */
   refusedAxis: number;
+  /** Every node in the set tabulates the same power values (the grid is regular in power): one bracket serves all. */
+  sharedPower: boolean;
 }
 
 /** A fresh, empty node set (scratch buffers for up to 8 nodes: 2 ISA levels x 2 altitudes x 2 Machs). */
@@ -193,6 +195,7 @@ export function createDeckNodeSet(): DeckNodeSet {
     outsideAtAltitude_m: new Float64Array(4),
     outsideAtMach: new Float64Array(4),
     refusedAxis: -1,
+    sharedPower: false,
   };
 }
 
@@ -343,7 +346,26 @@ export function fillDeckNodes(
       pushNode(s, iMach + 1, wAlt * tMach);
     }
   }
+  s.sharedPower = powerAxisShared(grid);
   return true;
+}
+
+// Whether every (altitude, Mach) node of a grid tabulates the same power values, per grid (computed once).
+const sharedPowerAxes = new WeakMap<DeckGrid, boolean>();
+
+function powerAxisShared(grid: DeckGrid): boolean {
+  let shared = sharedPowerAxes.get(grid);
+  if (shared === undefined) {
+    shared = true;
+    const n = grid.pointStart[1]! - grid.pointStart[0]!;
+    for (let node = 1; shared && node < grid.pointStart.length - 1; node++) {
+      const start = grid.pointStart[node]!;
+      if (grid.pointStart[node + 1]! - start !== n) shared = false;
+      for (let q = 0; shared && q < n; q++) if (grid.power[start + q] !== grid.power[q]) shared = false;
+    }
+    sharedPowerAxes.set(grid, shared);
+  }
+  return shared;
 }
 
 function effective(policy: OutOfTablePolicy, allowRefusal: boolean): OutOfTablePolicy {
@@ -388,14 +410,36 @@ export function evaluateDeckNodesInto(
   const fuelColumn = grid.fuelFlow_kg_s;
   const airflow = grid.airflow_kg_s;
   const sens = out.length >= DECK_VALUES_WITH_SENSITIVITIES ? grid.sensitivities : null;
+  // With one power axis for every node, the first node's bracket (the same values, so the same index and weight)
+  // serves them all, offset to each node's points.
+  const shared = s.sharedPower && s.count > 0;
+  let sharedOffset = 0;
+  let sharedT = 0;
+  let sharedSide = 0;
+  if (shared) {
+    const first = grid.pointStart[s.node[0]!]!;
+    sharedOffset = bracket(grid.power, first, grid.pointStart[s.node[0]! + 1]!, power, powerPolicy) - first;
+    sharedT = bracketT;
+    sharedSide = bracketSide;
+  }
   for (let k = 0; k < s.count; k++) {
     const node = s.node[k]!;
     const w = s.weight[k]!;
     const p0 = grid.pointStart[node]!;
     const p1 = grid.pointStart[node + 1]!;
-    const i = bracket(grid.power, p0, p1, power, powerPolicy);
-    const t = bracketT;
-    if (bracketSide !== 0) {
+    let i: number;
+    let t: number;
+    let side: number;
+    if (shared) {
+      i = p0 + sharedOffset;
+      t = sharedT;
+      side = sharedSide;
+    } else {
+      i = bracket(grid.power, p0, p1, power, powerPolicy);
+      t = bracketT;
+      side = bracketSide;
+    }
+    if (side !== 0) {
       if ((s.outsideMask & (1 << AXIS_POWER)) === 0) {
         noteOutside(s, AXIS_POWER, power, grid.power[p0]!, grid.power[p1 - 1]!, nodeAltitude_m(grid, node), grid.machs[node]!);
       }
