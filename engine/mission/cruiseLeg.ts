@@ -15,13 +15,14 @@
  */
 import { goldenMaximum } from '../core/scalarMaximum';
 import { bestRangeMach, longRangeMach, specificRangeAt } from './bestSpeeds';
-import { makeClimbSegment } from './climbLeg';
+import { CLIMB_STALL_RATE_M_S, makeClimbSegment } from './climbLeg';
 import { energyShareFactor, pressureAltitudeRate } from './energyShareFactor';
 import { airPoint, ratingPoint } from './flightPoint';
-import { flySegment, missionDomain } from './flySegment';
+import { flyMonotoneSegment, flySegment, missionDomain } from './flySegment';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
 import { makeLevelSegment } from './levelFlight';
-import { BASE_STEP_S, distanceIndex, type LegTarget, type MissionContext } from './missionContext';
+import { BASE_MONOTONE_STEP, BASE_STEP_S, distanceIndex, type LegTarget, type MissionContext } from './missionContext';
+import { pathBreakAltitudes } from './stepBreaks';
 import type { SegmentRun } from './integrator';
 import { altitudeOfPressure, missionAir } from './missionAtmosphere';
 import type { CruiseProfile, CruiseSpeed, MissionInput } from './missionTypes';
@@ -197,7 +198,16 @@ function climbWithinLeg(
 ): { readonly state: StateVector; readonly last: FlightSample; readonly outcome: LegOutcome | null } {
   const climbSegment = makeClimbSegment(ctx, target, 'mach', mach, toAltitude_m, 'maxClimb');
   const legEnd: SegmentEvent = { stop: 'distance_reached', stateOnly: true, g: (y) => y[k] - endAt(y[S_MASS]) };
-  const climb = flySegment(ctx, target, { ...climbSegment, events: [...climbSegment.events, legEnd] }, start);
+  // Stepped by altitude with step ends on the models' slope breaks, as the climb legs are (monotoneStepper.ts); the
+  // leg's end, met within a step, hands that step to the time integrator, which locates it.
+  const climb = flyMonotoneSegment(ctx, target, { ...climbSegment, events: [...climbSegment.events, legEnd] }, start, {
+    component: S_ALT,
+    to: toAltitude_m,
+    breaks: pathBreakAltitudes(ctx.input, 'mach', mach, start[S_ALT], toAltitude_m),
+    maxStep: BASE_MONOTONE_STEP.altitude_m * ctx.options.stepScale,
+    minRate: CLIMB_STALL_RATE_M_S,
+    targetStop: 'altitude_reached',
+  });
   const state = climb.end;
   const last = climb.endSample;
   state[S_TAS] = last.tas_m_s;
