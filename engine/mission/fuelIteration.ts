@@ -163,6 +163,11 @@ class AfterSolvableModel {
   }
 }
 
+/** A warm start's d(residual)/d(ramp mass) (-) worth stepping with: a heavier start lands with more fuel, by less than it carries twice over. */
+function plausibleRampSlope(slope: number | undefined): slope is number {
+  return usable(slope) && slope > 0.05 && slope <= 2;
+}
+
 /** The cold second-pass slope d(residual)/d(ramp mass) (-): the landing/ramp mass ratio of a pass (Breguet-like flight), 0.85 when implausible. */
 function ratioSlope(e: MissionEvaluation, rampMass_kg: number): number {
   const ratio = e.trip.landing[S_MASS] / rampMass_kg;
@@ -200,12 +205,12 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
   // A warm start may land in the band at once.
   if (fuelConverged(e0.residual_kg, band) && Math.abs(e0.trip.end[basis] - range_m) <= DISTANCE_TOLERANCE_M) {
     remember(e0);
-    return converged(x0, e0, 1, usable(start.slope) ? start.slope : ratioSlope(e0, x0));
+    return converged(x0, e0, 1, plausibleRampSlope(start.slope) ? start.slope : ratioSlope(e0, x0));
   }
   remember(e0);
   // The residual each pass would have had at exactly the range: the distance error costs the solvable leg's fuel per metre at its end.
   const atRange = (e: MissionEvaluation) => e.residual_kg - band.aim_kg + (e.trip.end[basis] - range_m) * solvableFuelPerMetre(e);
-  let slope = usable(start.slope) && Math.abs(start.slope) > 0.05 ? start.slope : ratioSlope(e0, x0);
+  let slope = plausibleRampSlope(start.slope) ? start.slope : ratioSlope(e0, x0);
   let f0 = atRange(e0);
   let x1 = x0 - f0 / slope;
   const guard = RAMP_MASS_GUARD * Math.max(ctx.input.airframe.mtow_kg, ctx.zeroFuelMass_kg + ctx.input.airframe.maxFuel_kg);

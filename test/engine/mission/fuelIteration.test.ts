@@ -67,6 +67,9 @@ describe('fuel iteration', () => {
       { rampMass_kg: Number.NaN, slope: Number.NaN },
       { rampMass_kg: -5, slope: 0, afterSolvable: { mass_kg: Number.POSITIVE_INFINITY, distance_m: 1, perKg_m: 0 } },
       { rampMass_kg: 1 },
+      // A fixed-mass neighbour's slope (kg per metre of distance) or a wrong-signed one is not a ramp-mass slope.
+      { slope: -0.9 },
+      { slope: -6.7e-4, distance_m: 5e6 },
     ]) {
       const r = solveMission(demo, { warmStart });
       expect(r.status).toBe('ok');
