@@ -207,19 +207,21 @@ export function buildMissionInput(
  * are the same objects reuses them instead of building them again: the aero
  * model from `polar`, `airframe.wingArea`, the inlet and `engine.count`; the
  * propulsion (and its checks) from the deck, `engine`, the inlet and
- * `cautions`. The propulsion model's caches are exact (a reused model answers
- * as a fresh one), so the mission input is the same either way.
+ * `cautions`; the legs from `mission.legs`. The propulsion model's caches are
+ * exact (a reused model answers as a fresh one), so the mission input is the
+ * same either way.
  */
 export interface MissionInputMemo {
   aero?: { readonly key: readonly unknown[]; readonly value: Result<AeroModel, readonly ProjectIssue[]> };
   propulsion?: { readonly key: readonly unknown[]; readonly value: Result<PropulsionModel, readonly ProjectIssue[]> };
+  legs?: { readonly key: readonly unknown[]; readonly value: Leg[] };
 }
 
 function sameKey(a: readonly unknown[], b: readonly unknown[]): boolean {
   return a.length === b.length && a.every((v, i) => Object.is(v, b[i]));
 }
 
-function remembered<T>(memo: MissionInputMemo | undefined, slot: 'aero' | 'propulsion', key: readonly unknown[], build: () => T): T {
+function remembered<T>(memo: MissionInputMemo | undefined, slot: keyof MissionInputMemo, key: readonly unknown[], build: () => T): T {
   const kept = memo?.[slot];
   if (kept !== undefined && sameKey(kept.key, key)) return kept.value as T;
   const value = build();
@@ -280,7 +282,7 @@ export function missionInputOnDeck(
     },
     aero: aero.value,
     propulsion: propulsion.value,
-    legs: project.mission.legs.map(legOf),
+    legs: remembered(memo, 'legs', [project.mission.legs], () => project.mission.legs.map(legOf)),
     reserves: overrides.reserves ?? reservesOf(project.mission.reserves),
     solve: overrides.solve ?? solveModeOf(project.mission.solve),
     cautionSettings,

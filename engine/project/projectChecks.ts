@@ -40,8 +40,30 @@ function pathFromDotted(path: string): (string | number)[] {
   return out;
 }
 
+/**
+ * The polar's and each inlet design's own validation kept by the object checked, so that checking a neighbouring
+ * project that shares them (a sweep's next case) does not validate them again. The projects are never modified.
+ */
+export interface ProjectCheckMemo {
+  readonly polar: WeakMap<object, ReturnType<typeof validatePolarSpec>>;
+  readonly inlets: WeakMap<object, ReturnType<typeof validateInletDesign>>;
+}
+
+export function createProjectCheckMemo(): ProjectCheckMemo {
+  return { polar: new WeakMap(), inlets: new WeakMap() };
+}
+
+function kept<K extends object, V>(map: WeakMap<K, V> | undefined, key: K, make: () => V): V {
+  let v = map?.get(key);
+  if (v === undefined) {
+    v = make();
+    map?.set(key, v);
+  }
+  return v;
+}
+
 /** Every cross-field issue of a schema-valid project; `doc` is the migrated JSON for showing values. */
-export function checkProject(project: Project, doc: unknown): ProjectIssue[] {
+export function checkProject(project: Project, doc: unknown, memo?: ProjectCheckMemo): ProjectIssue[] {
   const issues: ProjectIssue[] = [];
   const raw = (path: string): string => showValue(valueAtPath(doc, pathFromDotted(path)));
   const w = project.airframe.weights;
@@ -72,7 +94,7 @@ export function checkProject(project: Project, doc: unknown): ProjectIssue[] {
       issues.push(makeIssue(p, raw(p), 'a name no other inlet design has', `${raw(p)} is used by an earlier inlet design; names must be unique`));
     }
     names.add(inlet.name);
-    for (const issue of validateInletDesign(inletDesignOf(inlet))) {
+    for (const issue of kept(memo?.inlets, inlet, () => validateInletDesign(inletDesignOf(inlet)))) {
       const p = inletIssuePath(i, issue.path);
       issues.push(makeIssue(p, raw(p), 'a consistent inlet design', issue.message));
     }
@@ -82,7 +104,7 @@ export function checkProject(project: Project, doc: unknown): ProjectIssue[] {
     issues.push(makeIssue('activeInlet', raw('activeInlet'), `one of ${list}`, `${raw('activeInlet')} is not the name of an inlet design; expected one of ${list}`));
   }
 
-  const polar = validatePolarSpec(polarSpecOf(project));
+  const polar = kept(memo?.polar, project.polar, () => validatePolarSpec(polarSpecOf(project)));
   if (!polar.ok) {
     for (const issue of polar.error) {
       const p = polarIssuePath(issue.path);

@@ -11,8 +11,10 @@
  *   every case of a field that cannot be read alone, is parsed from its whole
  *   document as flySweepCase does, so its status (invalid_input) and message
  *   are the same as there.
- * - The deck is built once per `engine` block, the polar and the installed
- *   propulsion once per set of fields they are built from (MissionInputMemo).
+ * - The deck is built once per `engine` block, the polar, the installed
+ *   propulsion and the legs once per set of fields they are built from
+ *   (MissionInputMemo); the polar's and inlets' own checks once per object
+ *   (ProjectCheckMemo).
  * - Warm start: each case starts from the converged solve of its neighbour
  *   along the fastest-varying axis flown in this thread (the previous case),
  *   or along the next axis at the start of a row, its ramp mass (or the
@@ -27,7 +29,7 @@ import type { MissionStart } from '../mission/missionTypes';
 import { solveMission } from '../mission/solveMission';
 import { missionInputOnDeck, type MissionInputMemo, type ProjectResources } from '../project/buildMissionInput';
 import { parseProjectData } from '../project/parseProject';
-import { checkProject } from '../project/projectChecks';
+import { checkProject, createProjectCheckMemo } from '../project/projectChecks';
 import { projectDeck } from '../project/projectDeck';
 import { fieldReaderAt } from '../project/projectFieldSchema';
 import { withFieldAt } from '../project/projectFieldPath';
@@ -91,6 +93,7 @@ export function prepareSweep(
   });
   const alone = base.ok && readers.every((r) => r !== null);
   const readings = axes.map((a) => new Array<Result<unknown, unknown> | undefined>(a.values.length));
+  const checks = createProjectCheckMemo();
 
   function caseProject(indices: readonly number[], inputs: readonly (number | string)[]): Result<Project, readonly ProjectIssue[]> {
     if (alone && base.ok) {
@@ -103,7 +106,7 @@ export function prepareSweep(
         else refused = true;
       }
       // A refused value or a cross-field issue: the whole document's parse says what and where.
-      if (!refused && checkProject(project as Project, doc).length === 0) return { ok: true, value: project as Project };
+      if (!refused && checkProject(project as Project, doc, checks).length === 0) return { ok: true, value: project as Project };
     }
     return parseProjectData(caseDocument(doc, axes, inputs));
   }

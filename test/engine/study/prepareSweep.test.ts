@@ -73,7 +73,7 @@ describe('prepareSweep', () => {
     const statuses = alone(grids[0]!).map((r) => r.status);
     expect(statuses).toContain('invalid_input');
     expect(statuses).toContain('ok');
-  });
+  }, 60_000);
 
   it('warm-started along the fast axis, each case has its alone block fuel within the fuel band, in fewer passes', () => {
     const grid = axes('mission.solve.payload=1000lb:1600lb:300lb', 'mission.solve.range=800nmi:1200nmi:50nmi');
