@@ -75,7 +75,7 @@ describe('prepareSweep', () => {
     expect(statuses).toContain('ok');
   }, 60_000);
 
-  it('warm-started along the fast axis, each case has its alone block fuel within the fuel band, in fewer passes', () => {
+  it('warm-started from its neighbours, each case has its alone block fuel within the fuel band, in under half the passes', () => {
     const grid = axes('mission.solve.payload=1000lb:1600lb:300lb', 'mission.solve.range=800nmi:1200nmi:50nmi');
     const ref = alone(grid);
     const cold = prepareSweep(doc, grid, { deck }, undefined, { warmStart: false });
@@ -90,7 +90,8 @@ describe('prepareSweep', () => {
       expect(Math.abs(row.blockFuel_kg - r.blockFuel_kg)).toBeLessThanOrEqual(FUEL_TOLERANCE_KG);
       expect(Math.abs(row.takeoffMass_kg - r.takeoffMass_kg)).toBeLessThanOrEqual(FUEL_TOLERANCE_KG);
     });
-    expect(warm.passes()).toBeLessThan(0.7 * cold.passes());
+    // Cold: 4 passes a case on the demo; started from the predicted root, most cases converge in the first.
+    expect(warm.passes()).toBeLessThan(0.5 * cold.passes());
   }, 60_000);
 
   it('the answer does not depend on the order the cases are flown in, beyond the fuel band', () => {
