@@ -1,4 +1,4 @@
-import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -95,6 +95,22 @@ describe('blockwise sweep', () => {
     const result = await pool.finished;
     expect(result).toEqual({ completed: 11, stopped: false, error: null });
     expect(seen.sort((a, b) => a - b)).toEqual([2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12]);
+  }, 120_000);
+
+  it('blockwise sweep interrupted (SIGINT) keeps the rows flown, says so and exits with 130', async () => {
+    const out = join(dir, 'interrupted.csv');
+    const running = run('sweep', project, '--vary', 'polar.cdIncrement=0:0.01:0.00005', '--workers', '1', '--out', out);
+    // Interrupted once some rows are on disk (the grid has 201 cases; the rows are written as they come).
+    for (let i = 0; i < 600 && !(existsSync(out) && csvRows(readFileSync(out, 'utf8')).size >= 3); i++) await new Promise((r) => setTimeout(r, 100));
+    process.emit('SIGINT');
+    const r = await running;
+    expect(r.code).toBe(130);
+    expect(r.out).toMatch(/^Interrupted: \d+ of 201 cases flown/);
+    const rows = csvRows(readFileSync(out, 'utf8'));
+    expect(rows.size).toBeGreaterThanOrEqual(3);
+    expect(rows.size).toBeLessThan(201);
+    expect(r.out).toContain(`Interrupted: ${rows.size} of 201 cases flown`);
+    for (const cells of rows.values()) expect(cells[2]).toBe('ok');
   }, 120_000);
 
   it('runSweepPool stopped early keeps the rows received and says it was stopped', async () => {
