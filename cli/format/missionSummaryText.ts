@@ -7,7 +7,7 @@ import type { Caution } from '../../engine/cautions';
 import type { LegRow, MissionResult } from '../../engine/mission';
 import { type DisplayKind, formatQuantity } from '../../engine/units';
 import { describeInstallationMethod, type InstallationMethodId } from '../../engine/propulsion';
-import { formatPairs, formatTable } from './textTable';
+import { formatPairs, formatTable, numberColumns, textColumns } from './textTable';
 import { reportText } from '../common/report';
 
 export interface MissionSummaryContext {
@@ -99,18 +99,7 @@ export function missionSummaryText(result: MissionResult, context: MissionSummar
     ['Distance (ground)', ...both(r.groundDistance_m, 'distance', 1, 1)],
   ]);
   const legs = formatTable(
-    [
-      { header: '#', align: 'right' },
-      { header: 'leg', align: 'left' },
-      { header: 'kind', align: 'left' },
-      { header: 'start', align: 'right' },
-      { header: 'duration', align: 'right' },
-      { header: 'air distance', align: 'right' },
-      { header: 'ground distance', align: 'right' },
-      { header: 'altitude', align: 'right' },
-      { header: 'fuel', align: 'right' },
-      { header: 'end weight', align: 'right' },
-    ],
+    [...numberColumns('#'), ...textColumns('leg', 'kind'), ...numberColumns('start', 'duration', 'air distance', 'ground distance', 'altitude', 'fuel', 'end weight')],
     legRows(r.legs),
   );
   const cautions = r.cautions.length === 0 ? ['  none'] : cautionLines(r.cautions);

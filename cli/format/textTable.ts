@@ -9,6 +9,16 @@ export interface TextColumn {
   readonly align: ColumnAlign;
 }
 
+/** Columns of words (labels, names), left-aligned. */
+export function textColumns(...headers: readonly string[]): TextColumn[] {
+  return headers.map((header) => ({ header, align: 'left' }));
+}
+
+/** Columns of figures, right-aligned so their digits line up. */
+export function numberColumns(...headers: readonly string[]): TextColumn[] {
+  return headers.map((header) => ({ header, align: 'right' }));
+}
+
 /** Rows under a header line and a rule, two spaces between columns, each line indented by `indent`. */
 export function formatTable(columns: readonly TextColumn[], rows: readonly (readonly string[])[], indent = '  '): string {
   const widths = columns.map((c, i) => Math.max(c.header.length, ...rows.map((r) => (r[i] ?? '').length)));

@@ -4,7 +4,7 @@
  * design and of B - A, P(B burns less), the drivers, and how long it took.
  */
 import type { UncertaintyResult } from '../../engine/uncertainty';
-import { formatTable } from './textTable';
+import { formatTable, numberColumns, textColumns } from './textTable';
 
 function kg(x: number): string {
   return x.toFixed(1);
@@ -34,15 +34,7 @@ export function uncertaintyLines(r: UncertaintyResult, elapsed_s: number | null)
     ...(r.inputs.length === 0 ? ['  (none: the project declares no uncertainty, so the band is the deterministic answer)'] : r.inputs.map((i) => `  ${i.label}: ${i.distribution}${i.reason ? ` — ${i.reason}` : ''}`)),
     '',
     formatTable(
-      [
-        { header: 'block fuel kg', align: 'left' },
-        { header: 'mean', align: 'right' },
-        { header: 'sd', align: 'right' },
-        { header: 'P5', align: 'right' },
-        { header: 'P50', align: 'right' },
-        { header: 'P95', align: 'right' },
-        { header: 'deterministic', align: 'right' },
-      ],
+      [...textColumns('block fuel kg'), ...numberColumns('mean', 'sd', 'P5', 'P50', 'P95', 'deterministic')],
       rows,
     ),
   ];
@@ -54,12 +46,7 @@ export function uncertaintyLines(r: UncertaintyResult, elapsed_s: number | null)
       '',
       `Drivers of ${two ? 'B - A' : 'block fuel'} (Spearman rank correlation; share = rho^2 over the sum of rho^2):`,
       formatTable(
-        [
-          { header: 'input', align: 'left' },
-          { header: two ? 'rho(B-A)' : 'rho', align: 'right' },
-          { header: 'share', align: 'right' },
-          ...r.designs.map((_, k) => ({ header: `rho(${k === 0 ? 'A' : 'B'})`, align: 'right' as const })),
-        ],
+        [...textColumns('input'), ...numberColumns(two ? 'rho(B-A)' : 'rho', 'share', ...r.designs.map((_, k) => `rho(${k === 0 ? 'A' : 'B'})`))],
         r.drivers.map((d) => [d.label, rho(two ? d.rhoDifference : d.rhoDesigns[0]!), d.share === null ? '-' : `${(100 * d.share).toFixed(0)} %`, ...d.rhoDesigns.map(rho)]),
       ),
     );

@@ -3,7 +3,7 @@ import { compareInlets, inletFactorBuilder } from '../../engine/analysis';
 import { formatQuantity, FOOT_M } from '../../engine/units';
 import { checkInletName, loadVerbProject, projectArgument } from '../common/projectArgs';
 import { analysisFailed, printJsonReport, printReport } from '../common/report';
-import { formatTable } from '../format/textTable';
+import { formatTable, numberColumns, textColumns } from '../format/textTable';
 import { assumptionLines } from '../format/missionSummaryText';
 import { installationAssumptions } from '../../engine/project';
 import { formatLoadFailure } from '../projectFiles';
@@ -103,12 +103,7 @@ analysis failed.
       `  installation method: ${describeInstallationMethod(pair.value.inputB.propulsion.installationMethod)}`,
       '',
       formatTable(
-        [
-          { header: '', align: 'left' },
-          { header: 'A', align: 'right' },
-          { header: 'B', align: 'right' },
-          { header: 'B - A', align: 'right' },
-        ],
+        [...textColumns(''), ...numberColumns('A', 'B', 'B - A')],
         [
           ['block fuel kg', a.blockFuel_kg.toFixed(1), b.blockFuel_kg.toFixed(1), signed(d.blockFuel_kg, 1)],
           ['block time min', minutes(a.blockTime_s), minutes(b.blockTime_s), signed(d.blockTime_s / 60, 2)],
@@ -124,10 +119,7 @@ analysis failed.
       '',
       `Block-fuel difference B - A = ${signed(v.breakdown.total_kg, 2)} kg, by factor (method: ${v.breakdown.method}):`,
       formatTable(
-        [
-          { header: 'factor', align: 'left' },
-          { header: 'kg', align: 'right' },
-        ],
+        [...textColumns('factor'), ...numberColumns('kg')],
         [...v.breakdown.parts.map((p) => [p.factor, signed(p.blockFuel_kg, 2)]), ['sum of parts', signed(v.breakdown.sumOfParts_kg, 2)]],
       ),
       `  ${v.breakdown.description}`,

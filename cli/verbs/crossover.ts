@@ -1,6 +1,6 @@
 import { SPEED_LIMIT_SOURCE_TEXT, thrustDragCrossover } from '../../engine/analysis';
 import { analysisFailed, cautionBlock, isaText, printJsonReport, printReport } from '../common/report';
-import { formatTable } from '../format/textTable';
+import { formatTable, numberColumns } from '../format/textTable';
 import type { CliIo, Verb } from '../verb';
 import {
   bothUnits,
@@ -92,13 +92,7 @@ says so. Exit codes: 0 done; 1 project unreadable; 2 bad command line;
       `  tolerance              Mach ${v.tolerance.mach}, |T - D|/D < ${v.tolerance.relativeThrust}`,
       '',
       formatTable(
-        [
-          { header: 'Mach', align: 'right' },
-          { header: 'thrust kN', align: 'right' },
-          { header: 'drag kN', align: 'right' },
-          { header: 'excess kN', align: 'right' },
-          { header: 'Ps ft/min', align: 'right' },
-        ],
+        numberColumns('Mach', 'thrust kN', 'drag kN', 'excess kN', 'Ps ft/min'),
         rows,
       ),
       ...cautionBlock(v.cautions),

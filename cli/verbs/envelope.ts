@@ -4,7 +4,7 @@ import { OPTION_RANGES, quantityOption } from '../common/quantityOptions';
 
 /** --top: above the ground, at most the highest altitude the mission models cover. */
 const TOP_RANGE = { ...OPTION_RANGES.flightAltitude, min: 0, minExclusive: true, what: `an altitude above 0 and at most ${OPTION_RANGES.flightAltitude.max} m (98,425 ft), the highest the mission models cover` };
-import { formatTable } from '../format/textTable';
+import { formatTable, numberColumns } from '../format/textTable';
 import { UsageError, type CliIo, type Verb } from '../verb';
 import { bothUnits, INLET_OPTION, ISA_DEV_OPTION, isaDevOption, JSON_OPTION, machText, openAnalysisProject, ratingOption } from './analysisArgs';
 import { verbSummary } from './catalogue';
@@ -117,18 +117,7 @@ TAS (no acceleration factor). Exit codes: 0 done; 1 project unreadable;
       '',
       'Level flight from M (the highest of stall s, buffet onset b, low crossover x) to M (the lowest of high crossover x, MMO m, VMO v):',
       formatTable(
-        [
-          { header: 'alt ft', align: 'right' },
-          { header: 'from M', align: 'right' },
-          { header: 'to M', align: 'right' },
-          { header: 'low cross M', align: 'right' },
-          { header: 'high cross M', align: 'right' },
-          { header: 'stall M', align: 'right' },
-          { header: 'buffet 1g', align: 'right' },
-          { header: `buffet ${v.buffetLoadFactor.toFixed(2)}g`, align: 'right' },
-          { header: 'VMO/MMO M', align: 'right' },
-          { header: 'climb ft/min', align: 'right' },
-        ],
+        numberColumns('alt ft', 'from M', 'to M', 'low cross M', 'high cross M', 'stall M', 'buffet 1g', `buffet ${v.buffetLoadFactor.toFixed(2)}g`, 'VMO/MMO M', 'climb ft/min'),
         rows,
       ),
     ]);

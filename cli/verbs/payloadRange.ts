@@ -1,6 +1,6 @@
 import { payloadRangeDiagram } from '../../engine/analysis';
 import { analysisFailed, printJsonReport, printReport } from '../common/report';
-import { formatTable } from '../format/textTable';
+import { formatTable, numberColumns, textColumns } from '../format/textTable';
 import { optionalString, UsageError, type CliIo, type Verb } from '../verb';
 import { bothUnits, INLET_OPTION, JSON_OPTION, openAnalysisProject } from './analysisArgs';
 import { verbSummary } from './catalogue';
@@ -56,15 +56,7 @@ codes: 0 done; 1 project unreadable; 2 bad command line; 3 a mission failed.
       `  ${v.note}`,
       '',
       formatTable(
-        [
-          { header: 'point', align: 'left' },
-          { header: 'range nmi', align: 'right' },
-          { header: 'payload kg', align: 'right' },
-          { header: 'TOW kg', align: 'right' },
-          { header: 'fuel on board kg', align: 'right' },
-          { header: 'block fuel kg', align: 'right' },
-          { header: 'reserve kg', align: 'right' },
-        ],
+        [...textColumns('point'), ...numberColumns('range nmi', 'payload kg', 'TOW kg', 'fuel on board kg', 'block fuel kg', 'reserve kg')],
         rows,
       ),
       '',

@@ -6,7 +6,7 @@ const OPTIMUM_BINDING_TEXT: Readonly<Record<OptimumAltitudeResult['binding'], st
   buffetMargin: 'the buffet margin',
 };
 import { analysisFailed, cautionBlock, isaText, printJsonReport, printReport } from '../common/report';
-import { formatTable } from '../format/textTable';
+import { formatTable, numberColumns } from '../format/textTable';
 import type { CliIo, Verb } from '../verb';
 import { bothUnits, INLET_OPTION, ISA_DEV_OPTION, isaDevOption, JSON_OPTION, machText, openAnalysisProject, pointCondition, POINT_OPTIONS } from './analysisArgs';
 import { verbSummary } from './catalogue';
@@ -83,12 +83,7 @@ unreadable; 2 bad command line; 3 analysis failed.
           ]),
       '',
       formatTable(
-        [
-          { header: 'Mach', align: 'right' },
-          { header: 'TAS kt', align: 'right' },
-          { header: 'fuel kg/h', align: 'right' },
-          { header: 'nmi/1000 kg', align: 'right' },
-        ],
+        numberColumns('Mach', 'TAS kt', 'fuel kg/h', 'nmi/1000 kg'),
         rows,
       ),
       ...cautionBlock([...v.cautions, ...(o?.cautions ?? [])]),

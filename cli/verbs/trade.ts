@@ -1,7 +1,7 @@
 import { tradeFactors } from '../../engine/analysis';
 import { installationOf } from '../../engine/project';
 import { analysisFailed, printJsonReport, printReport } from '../common/report';
-import { formatTable } from '../format/textTable';
+import { formatTable, numberColumns, textColumns } from '../format/textTable';
 import { assumptionLines } from '../format/missionSummaryText';
 import { installationAssumptions } from '../../engine/project';
 import type { CliIo, Verb } from '../verb';
@@ -64,12 +64,7 @@ unreadable; 2 bad command line; 3 the design mission failed.
       `Trade factors — inlet "${input.propulsion.inletName}", design mission ${(v.designMission.range_m / NAUTICAL_MILE_M).toFixed(0)} nmi with ${v.designMission.payload_kg.toFixed(0)} kg payload; block fuel ${v.baselineBlockFuel_kg.toFixed(1)} kg`,
       '',
       formatTable(
-        [
-          { header: 'change', align: 'left' },
-          { header: 'block fuel kg', align: 'right' },
-          { header: 'half step kg', align: 'right' },
-          { header: 'steps agree', align: 'left' },
-        ],
+        [...textColumns('change'), ...numberColumns('block fuel kg', 'half step kg'), ...textColumns('steps agree')],
         v.factors.map((f) => [f.unit, kg(f.blockFuelPerUnit_kg), kg(f.blockFuelPerUnitHalfStep_kg), f.converged ? 'yes' : 'NO']),
       ),
       ...v.factors.filter((f) => f.note !== null).map((f) => `  ${f.name}: ${f.note}`),
@@ -78,13 +73,7 @@ unreadable; 2 bad command line; 3 the design mission failed.
       '',
       "+1 % recovery by each method (the check of Raymer's rule against the deck's sensitivities and the cycle):",
       formatTable(
-        [
-          { header: 'method', align: 'left' },
-          { header: 'block fuel kg', align: 'right' },
-          { header: 'half step kg', align: 'right' },
-          { header: 'vs first', align: 'right' },
-          { header: 'baseline kg', align: 'right' },
-        ],
+        [...textColumns('method'), ...numberColumns('block fuel kg', 'half step kg', 'vs first', 'baseline kg')],
         m.rows.map((row, i) => [
           row.label,
           kg(row.blockFuelPerPercent_kg),
