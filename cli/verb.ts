@@ -24,6 +24,11 @@ export interface Verb {
   ): Promise<number> | number;
 }
 
+/** Options that each take a value (`--name <text>`), read and checked by the verb. */
+export function stringOptions(...names: readonly string[]): Record<string, { readonly type: 'string' }> {
+  return Object.fromEntries(names.map((name) => [name, { type: 'string' } as const]));
+}
+
 /** A bad command line: printed as one line on stderr, exit code 2. */
 export class UsageError extends Error {}
 

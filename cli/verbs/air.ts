@@ -5,7 +5,7 @@ import { OPTION_RANGES, optionalQuantityOption, quantityOption } from '../common
 /** The standard atmosphere's own ISA-deviation range (engine/aero/standardAtmosphere.ts). */
 const AIR_ISA_DEV = { min: -100, max: 100, what: 'an ISA deviation from -100 K to +100 K' };
 import { printJsonReport, reportText } from '../common/report';
-import { optionalString, UsageError, type CliIo, type Verb } from '../verb';
+import { optionalString, UsageError, type CliIo, type Verb, stringOptions } from '../verb';
 import { verbSummary } from './catalogue';
 
 const SPEED_OPTIONS = ['cas', 'eas', 'tas', 'mach'] as const;
@@ -88,12 +88,7 @@ Units are listed in docs/units.md. Give at most one speed. A value starting
 with a minus sign needs an equals sign: --isa-dev=-10K, --altitude=-1000ft.
 `,
   options: {
-    altitude: { type: 'string' },
-    'isa-dev': { type: 'string' },
-    cas: { type: 'string' },
-    eas: { type: 'string' },
-    tas: { type: 'string' },
-    mach: { type: 'string' },
+    ...stringOptions('altitude', 'isa-dev', 'cas', 'eas', 'tas', 'mach'),
     json: { type: 'boolean' },
   },
   run(values, _positionals, io: CliIo): number {

@@ -5,7 +5,7 @@ import { powerOrRating } from '../common/powerOption';
 import { OPTION_RANGES, optionalQuantityOption, quantityOption } from '../common/quantityOptions';
 import { printJsonReport, reportText } from '../common/report';
 import { deckErrorsText, readDeckFile } from '../common/textFile';
-import { requireString, UsageError, type Verb } from '../verb';
+import { requireString, UsageError, type Verb, stringOptions } from '../verb';
 import { verbSummary } from './catalogue';
 
 function onePositional(positionals: readonly string[]): string {
@@ -146,10 +146,7 @@ Off the table, each axis follows the deck's policy (extrapolate or clamp with a
 caution, or refuse: exit 1).
 `,
   options: {
-    altitude: { type: 'string' },
-    mach: { type: 'string' },
-    power: { type: 'string' },
-    'isa-dev': { type: 'string' },
+    ...stringOptions('altitude', 'mach', 'power', 'isa-dev'),
     json: { type: 'boolean' },
   },
   allowPositionals: true,

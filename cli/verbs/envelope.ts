@@ -5,7 +5,7 @@ import { OPTION_RANGES, quantityOption } from '../common/quantityOptions';
 /** --top: above the ground, at most the highest altitude the mission models cover. */
 const TOP_RANGE = { ...OPTION_RANGES.flightAltitude, min: 0, minExclusive: true, what: `an altitude above 0 and at most ${OPTION_RANGES.flightAltitude.max} m (98,425 ft), the highest the mission models cover` };
 import { formatTable, numberColumns } from '../format/textTable';
-import { UsageError, type CliIo, type Verb } from '../verb';
+import { UsageError, type CliIo, type Verb, stringOptions } from '../verb';
 import { bothUnits, INLET_OPTION, ISA_DEV_OPTION, isaDevOption, JSON_OPTION, machText, openAnalysisProject, ratingOption } from './analysisArgs';
 import { verbSummary } from './catalogue';
 import { FOOT_M } from '../../engine/units';
@@ -47,14 +47,9 @@ TAS (no acceleration factor). Exit codes: 0 done; 1 project unreadable;
 2 bad command line; 3 analysis failed.
 `,
   options: {
-    weight: { type: 'string' },
-    rating: { type: 'string' },
+    ...stringOptions('weight', 'rating', 'top', 'step', 'service-rate', 'cruise-rate'),
     ...INLET_OPTION,
     ...ISA_DEV_OPTION,
-    top: { type: 'string' },
-    step: { type: 'string' },
-    'service-rate': { type: 'string' },
-    'cruise-rate': { type: 'string' },
     ...JSON_OPTION,
   },
   allowPositionals: true,

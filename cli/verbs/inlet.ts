@@ -7,7 +7,7 @@ import { powerOrRating } from '../common/powerOption';
 import { OPTION_RANGES, optionalQuantityOption, quantityOption } from '../common/quantityOptions';
 import { printJsonReport, reportText } from '../common/report';
 import { deckErrorsText, readDeckFile, readTextFile } from '../common/textFile';
-import { optionalString, UsageError, type CliIo, type Verb } from '../verb';
+import { optionalString, UsageError, type CliIo, type Verb, stringOptions } from '../verb';
 import { verbSummary } from './catalogue';
 
 /**
@@ -162,13 +162,7 @@ against the first is split into its parts. Methods: docs/installation.md.
 `,
   options: {
     design: { type: 'string', multiple: true },
-    altitude: { type: 'string' },
-    mach: { type: 'string' },
-    power: { type: 'string' },
-    'isa-dev': { type: 'string' },
-    engines: { type: 'string' },
-    bleed: { type: 'string' },
-    extraction: { type: 'string' },
+    ...stringOptions('altitude', 'mach', 'power', 'isa-dev', 'engines', 'bleed', 'extraction'),
     json: { type: 'boolean' },
   },
   allowPositionals: true,

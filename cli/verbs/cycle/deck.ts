@@ -6,7 +6,7 @@ import { cycleDeck, type CycleDeckGrid, cycleDeckPowers, type CycleDeckResult, D
 import { CUSTOMARY_DECK_UNITS, deckToCsv, deckToJson, SI_DECK_UNITS } from '../../../engine/propulsion';
 import { type Dimension, FOOT_M, parseQuantity } from '../../../engine/units';
 import { printJsonReport, reportText } from '../../common/report';
-import { optionalString, UsageError, type CliIo, type Verb } from '../../verb';
+import { optionalString, UsageError, type CliIo, type Verb, stringOptions } from '../../verb';
 import { verbSummary } from '../catalogue';
 import { cycleFileArgument, readDesignedCycle } from './readCycle';
 
@@ -76,12 +76,7 @@ Exit status: 0 written; 1 cycle file unreadable or the deck could not be made
 or written; 2 bad command line. Methods: docs/cycle-deck.md.
 `,
   options: {
-    out: { type: 'string' },
-    altitudes: { type: 'string' },
-    machs: { type: 'string' },
-    'isa-devs': { type: 'string' },
-    units: { type: 'string' },
-    digits: { type: 'string' },
+    ...stringOptions('out', 'altitudes', 'machs', 'isa-devs', 'units', 'digits'),
     json: { type: 'boolean' },
   },
   allowPositionals: true,

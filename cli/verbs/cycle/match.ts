@@ -22,7 +22,7 @@ import { EXIT_FILE, EXIT_NOT_SOLVED, EXIT_OK } from '../../exitCodes';
 import { significant } from '../../common/numberText';
 import { printJsonReport, reportText } from '../../common/report';
 import { deckErrorsText, readDeckFile } from '../../common/textFile';
-import { optionalString, UsageError, type CliIo, type Verb } from '../../verb';
+import { optionalString, UsageError, type CliIo, type Verb, stringOptions } from '../../verb';
 import { verbSummary } from '../catalogue';
 import { writeAtomically } from './deck';
 import { readDesignedCycle } from './readCycle';
@@ -165,17 +165,7 @@ still written, with the reason on stderr); 1 a file cannot be read, fitted or
 written; 2 bad command line. Method: docs/cycle.md, "Matching a cycle to a deck".
 `,
   options: {
-    start: { type: 'string' },
-    out: { type: 'string' },
-    'deck-out': { type: 'string' },
-    free: { type: 'string' },
-    ratings: { type: 'string' },
-    nodes: { type: 'string' },
-    weights: { type: 'string' },
-    bounds: { type: 'string' },
-    iterations: { type: 'string' },
-    units: { type: 'string' },
-    digits: { type: 'string' },
+    ...stringOptions('start', 'out', 'deck-out', 'free', 'ratings', 'nodes', 'weights', 'bounds', 'iterations', 'units', 'digits'),
     json: { type: 'boolean' },
   },
   allowPositionals: true,

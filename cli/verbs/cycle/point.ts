@@ -5,7 +5,7 @@ import { FOOT_M, parseQuantity, POUND_FORCE_N, POUND_KG } from '../../../engine/
 import { significant } from '../../common/numberText';
 import { OPTION_RANGES, optionalQuantityOption, quantityOption } from '../../common/quantityOptions';
 import { analysisFailed, isaText, printJsonReport, reportText } from '../../common/report';
-import { optionalString, UsageError, type Verb } from '../../verb';
+import { optionalString, UsageError, type Verb, stringOptions } from '../../verb';
 import { runCyclePoint } from '../../../engine/cycle/index';
 import { cycleFileArgument, readDesignedCycle } from './readCycle';
 
@@ -148,14 +148,7 @@ on stderr, or in the JSON); 1 for a cycle file that cannot be read or designed;
 2 for a bad command line. Methods: docs/cycle.md.
 `,
   options: {
-    altitude: { type: 'string' },
-    mach: { type: 'string' },
-    rating: { type: 'string' },
-    'fan-speed': { type: 'string' },
-    'isa-dev': { type: 'string' },
-    recovery: { type: 'string' },
-    bleed: { type: 'string' },
-    'power-extraction': { type: 'string' },
+    ...stringOptions('altitude', 'mach', 'rating', 'fan-speed', 'isa-dev', 'recovery', 'bleed', 'power-extraction'),
     json: { type: 'boolean' },
   },
   allowPositionals: true,
