@@ -31,3 +31,12 @@ export function readDeckFile(file: string, verb: string, io: CliIo): Result<Engi
 export function deckErrorsText(file: string, errors: readonly DeckFileError[], closing = 'deck not loaded'): string {
   return `${errors.map((e) => e.message).join('\n')}\n${file}: ${closing}\n`;
 }
+
+/** A deck file read and parsed, or null after printing why not: the reader's line, or each deck error and "<file>: deck not loaded". */
+export function loadDeckFile(file: string, verb: string, io: CliIo): EngineDeck | null {
+  const read = readDeckFile(file, verb, io);
+  if (read === null) return null;
+  if (read.ok) return read.value;
+  io.err(deckErrorsText(file, read.error));
+  return null;
+}

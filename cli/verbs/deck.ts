@@ -4,7 +4,7 @@ import { significant } from '../common/numberText';
 import { powerOrRating } from '../common/powerOption';
 import { OPTION_RANGES, optionalQuantityOption, quantityOption } from '../common/quantityOptions';
 import { printJsonReport, reportText } from '../common/report';
-import { deckErrorsText, readDeckFile } from '../common/textFile';
+import { deckErrorsText, loadDeckFile, readDeckFile } from '../common/textFile';
 import { requireString, UsageError, type Verb, stringOptions } from '../verb';
 import { verbSummary } from './catalogue';
 
@@ -156,13 +156,8 @@ caution, or refuse: exit 1).
     const mach = quantityOption(values, 'mach', 'dimensionless', OPTION_RANGES.mach);
     const isaDev_K = optionalQuantityOption(values, 'isa-dev', 'temperatureDelta', OPTION_RANGES.isaDeviation) ?? 0;
     const choice = powerOrRating(requireString(values, 'power'));
-    const read = readDeckFile(file, 'deck', io);
-    if (read === null) return 1;
-    if (!read.ok) {
-      io.err(deckErrorsText(file, read.error));
-      return 1;
-    }
-    const deck = read.value;
+    const deck = loadDeckFile(file, 'deck', io);
+    if (deck === null) return 1;
     let power: number;
     let rating: RatingName | null = null;
     if (choice.kind === 'rating') {

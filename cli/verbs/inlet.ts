@@ -6,7 +6,7 @@ import { significant } from '../common/numberText';
 import { powerOrRating } from '../common/powerOption';
 import { OPTION_RANGES, optionalQuantityOption, quantityOption } from '../common/quantityOptions';
 import { printJsonReport, reportText } from '../common/report';
-import { deckErrorsText, readDeckFile, readTextFile } from '../common/textFile';
+import { loadDeckFile, readTextFile } from '../common/textFile';
 import { optionalString, UsageError, type CliIo, type Verb, stringOptions } from '../verb';
 import { verbSummary } from './catalogue';
 
@@ -183,13 +183,8 @@ against the first is split into its parts. Methods: docs/installation.md.
     const bleed = optionalQuantityOption(values, 'bleed', 'dimensionless', OPTION_RANGES.fraction) ?? 0;
     const extraction_W = optionalQuantityOption(values, 'extraction', 'power', OPTION_RANGES.shaftPower) ?? 0;
     const installation: InstallationSettings = { bleed: { kind: 'coreFraction', fraction: bleed }, powerExtraction_W: extraction_W };
-    const deckResult = readDeckFile(deckFile, 'inlet', io);
-    if (deckResult === null) return 1;
-    if (!deckResult.ok) {
-      io.err(deckErrorsText(deckFile, deckResult.error));
-      return 1;
-    }
-    const deck = deckResult.value;
+    const deck = loadDeckFile(deckFile, 'inlet', io);
+    if (deck === null) return 1;
     const installIssues = validateInstallation(installation, deck.hasAirflow);
     if (installIssues.length > 0) {
       const byOption: Record<string, string> = { 'bleed.fraction': '--bleed', powerExtraction_W: '--extraction' };

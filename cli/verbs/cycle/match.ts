@@ -21,7 +21,7 @@ import { FOOT_M, POUND_KG } from '../../../engine/units';
 import { EXIT_FILE, EXIT_NOT_SOLVED, EXIT_OK } from '../../exitCodes';
 import { significant } from '../../common/numberText';
 import { printJsonReport, reportText } from '../../common/report';
-import { deckErrorsText, readDeckFile } from '../../common/textFile';
+import { loadDeckFile } from '../../common/textFile';
 import { optionalString, UsageError, type CliIo, type Verb, stringOptions } from '../../verb';
 import { verbSummary } from '../catalogue';
 import { writeAtomically } from './deck';
@@ -195,15 +195,11 @@ written; 2 bad command line. Method: docs/cycle.md, "Matching a cycle to a deck"
     if (units !== 'customary' && units !== 'si') throw new UsageError(`--units: "${units}" is not customary or si`);
     const digits = wholeNumber(values, 'digits', 4, 17) ?? 7;
 
-    const deck = readDeckFile(deckFile, VERB, io);
+    const deck = loadDeckFile(deckFile, VERB, io);
     if (deck === null) return EXIT_FILE;
-    if (!deck.ok) {
-      io.err(deckErrorsText(deckFile, deck.error));
-      return EXIT_FILE;
-    }
     const startEngine = readDesignedCycle(startFile, VERB, io);
     if (startEngine === null) return EXIT_FILE;
-    const fit = matchCycleToDeck(deck.value, startEngine.spec, {
+    const fit = matchCycleToDeck(deck, startEngine.spec, {
       ...(free ? { free } : {}),
       ...(ratings ? { ratings } : {}),
       ...(maxNodes !== undefined ? { maxNodes } : {}),
@@ -222,7 +218,7 @@ written; 2 bad command line. Method: docs/cycle.md, "Matching a cycle to a deck"
       `Free: ${MATCH_PARAMETERS.filter((p) => r.parameters[p].free).join(', ')}. Sized by design airflow.`,
       ...SAFETY_NOTICE_LINES,
     ];
-    const spec = { ...r.spec, title: `${r.spec.title} (matched to ${deck.value.title})` };
+    const spec = { ...r.spec, title: `${r.spec.title} (matched to ${deck.title})` };
     try {
       writeAtomically(outPath, `${JSON.stringify(cycleFileOf(spec, notes), null, 2)}\n`);
     } catch (e) {
@@ -232,7 +228,7 @@ written; 2 bad command line. Method: docs/cycle.md, "Matching a cycle to a deck"
     let copyCautions: readonly DeckCopyCaution[] = [];
     if (deckOutPath !== null) {
       const engine = designEngine(r.spec);
-      const copy = engine.ok ? deckWithCycleSensitivities(deck.value, engine.value) : null;
+      const copy = engine.ok ? deckWithCycleSensitivities(deck, engine.value) : null;
       if (copy === null || !copy.ok) {
         io.err(`blockwise ${VERB}: no deck copy written: ${copy === null ? 'the fitted cycle cannot be designed' : copy.error.message}\n`);
         return EXIT_FILE;
@@ -257,7 +253,7 @@ written; 2 bad command line. Method: docs/cycle.md, "Matching a cycle to a deck"
       return code;
     }
     const lines = [
-      `Cycle matched to "${deck.value.title}": ${r.status} (${r.message}), ${r.iterations} iterations, ${r.evaluations} evaluations`,
+      `Cycle matched to "${deck.title}": ${r.status} (${r.message}), ${r.iterations} iterations, ${r.evaluations} evaluations`,
       `  points      ${r.points.length} at ${r.ratings.join(', ')} over ${r.nodesUsed} of ${r.nodesInDeck} nodes; weights thrust ${r.weights.thrust}, fuel flow ${r.weights.fuelFlow}`,
       `  residuals   RMS ${pct(r.rms)} (thrust ${pct(r.rmsThrust)}, fuel flow ${pct(r.rmsFuelFlow)}), relative (cycle - deck) / deck`,
       r.worst === null ? '  worst       none (no point matched)' : `  worst       ${QUANTITY[r.worst.quantity]} ${pct(r.worst.residual)} at ${where(r.worst.point)}`,
