@@ -1,7 +1,7 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { openDemo, showView } from './support/appPage';
-import { launchChromium, openApp, screenshot } from './support/chromium';
+import { screenshot } from './support/chromium';
+import { sharedChromium } from './support/sharedChromium';
 
 // The crossover view plots thrust available against drag and marks the low
 // and high crossover Mach (DESIGN.md §2.5: the low crossover lies below the
@@ -9,13 +9,7 @@ import { launchChromium, openApp, screenshot } from './support/chromium';
 // designs, which the compare view offers as A and B and compares on block
 // fuel. (Both inlets drawn together on the crossover: bothInlets.test.ts.)
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const app = sharedChromium();
 
 async function markerMach(page: import('playwright-core').Page, point: string): Promise<number> {
   const row = page.getByTestId('crossover-markers').locator('tr', { hasText: point });
@@ -29,7 +23,7 @@ async function markerThrust(page: import('playwright-core').Page, point: string)
 
 describe('analysis views', () => {
   it('the crossover view draws thrust and drag with ordered crossover marks', async () => {
-    const { page, problems } = await openApp(browser, inject('baseUrl'));
+    const { page, problems } = await app.open();
     await openDemo(page);
     await showView(page, 'crossover');
     await page.locator('[data-testid="chart-crossover"] svg').first().waitFor({ state: 'visible', timeout: 30_000 });
@@ -62,7 +56,7 @@ describe('analysis views', () => {
   });
 
   it('the compare view offers the two inlet designs as A and B', async () => {
-    const { page, problems } = await openApp(browser, inject('baseUrl'));
+    const { page, problems } = await app.open();
     await openDemo(page);
     await showView(page, 'compare');
     const optionsA = await page.getByTestId('compare-inlet-a').locator('option').allTextContents();
@@ -77,7 +71,7 @@ describe('analysis views', () => {
   });
 
   it('the compare view compares the two inlet designs on block fuel', async () => {
-    const { page, problems } = await openApp(browser, inject('baseUrl'));
+    const { page, problems } = await app.open();
     await openDemo(page);
     await showView(page, 'compare');
     await page.getByTestId('compare-run').click();

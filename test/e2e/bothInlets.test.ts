@@ -1,21 +1,16 @@
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { FACTOR_LABEL } from '../../renderer/charts/compareSeries';
 import { openDemo, showView } from './support/appPage';
-import { launchChromium, openApp, screenshot } from './support/chromium';
+import { screenshot } from './support/chromium';
+import { sharedChromium } from './support/sharedChromium';
 
 // The crossover view plots thrust available against drag for every inlet
 // design at once (DESIGN.md §2.5); the compare view flies the demo study with
 // inlet A and B and breaks the block-fuel difference down by factor
 // (recovery, spillage, external drag, weight; DESIGN.md §2.5).
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const app = sharedChromium();
 
 /** Tick labels of a chart's x axis as drawn by Chromium. */
 async function xTickLabels(page: Page, testId: string): Promise<string[]> {
@@ -34,7 +29,7 @@ async function expectNoticeBelow(page: Page, last: import('playwright-core').Loc
 
 describe('both inlet designs', () => {
   it('the crossover view draws thrust and drag for every inlet design, with round Mach ticks', async () => {
-    const { page, problems } = await openApp(browser, inject('baseUrl'));
+    const { page, problems } = await app.open();
     await openDemo(page);
     await showView(page, 'crossover');
     await page.locator('[data-testid="chart-crossover"] svg').first().waitFor({ state: 'visible', timeout: 30_000 });
@@ -64,7 +59,7 @@ describe('both inlet designs', () => {
   });
 
   it('the compare view on the demo study shows both inlets and the block-fuel breakdown with every factor labelled', async () => {
-    const { page, problems } = await openApp(browser, inject('baseUrl'));
+    const { page, problems } = await app.open();
     await openDemo(page);
     await showView(page, 'compare');
     await page.getByTestId('compare-run').click();

@@ -1,21 +1,15 @@
 import { readFile } from 'node:fs/promises';
-import type { Browser, Download } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import type { Download } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { STORAGE_KEYS } from '../../renderer/bridge/browserBridge';
 import { openDemo, showView } from './support/appPage';
-import { launchChromium, openApp } from './support/chromium';
+import { sharedChromium } from './support/sharedChromium';
 
 // The browser bridge end to end (docs/desktop.md): saving and exporting
 // become downloads, unsaved work is kept in localStorage and offered back
 // after a reload (the browser's stand-in for a crash).
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const app = sharedChromium();
 
 async function downloadedText(download: Download): Promise<string> {
   const path = await download.path();
@@ -24,7 +18,7 @@ async function downloadedText(download: Download): Promise<string> {
 
 describe('files in the browser build', () => {
   it('saving downloads the project as JSON and exporting downloads the legs as CSV', async () => {
-    const { page, problems } = await openApp(browser, inject('baseUrl'));
+    const { page, problems } = await app.open();
     await openDemo(page);
 
     const saving = page.waitForEvent('download');
@@ -50,7 +44,7 @@ describe('files in the browser build', () => {
   });
 
   it('unsaved work is autosaved and offered back after a reload', async () => {
-    const { page, problems } = await openApp(browser, inject('baseUrl'));
+    const { page, problems } = await app.open();
     await openDemo(page);
     await showView(page, 'airframe');
     const cd0 = page.getByTestId('field-cd0-0');

@@ -1,9 +1,9 @@
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { openDemo, showView } from './support/appPage';
-import { launchChromium, openApp, screenshot } from './support/chromium';
+import { screenshot } from './support/chromium';
+import { sharedChromium } from './support/sharedChromium';
 
 // The deck engineer's bad-deck fixtures carry the exact message each file
 // must produce (fixtures/bad-decks/expected.json); the engine view must show
@@ -12,17 +12,11 @@ import { launchChromium, openApp, screenshot } from './support/chromium';
 const badDecks = resolve(__dirname, '..', '..', 'fixtures', 'bad-decks');
 const expected = JSON.parse(readFileSync(resolve(badDecks, 'expected.json'), 'utf8')) as Record<string, string>;
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const app = sharedChromium();
 
 describe('importing a deck', () => {
   it('a deck with a non-numeric cell is refused with its line and column in the message line', async () => {
-    const { page } = await openApp(browser, inject('baseUrl'));
+    const { page } = await app.open();
     await openDemo(page);
     await showView(page, 'engine');
     const chooser = page.waitForEvent('filechooser');

@@ -1,7 +1,7 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { blockFuel, openDemo, readNumber, showView, waitForNumberChange } from './support/appPage';
-import { launchChromium, openApp, screenshot } from './support/chromium';
+import { screenshot } from './support/chromium';
+import { sharedChromium } from './support/sharedChromium';
 
 // Drag polar CD = CD0 + K(CL - CLmd)^2 (Raymer, ch. 12): a higher CD0 at the
 // cruise Mach (the table's Mach 0.8 row, where the demo cruises at M 0.78-0.8)
@@ -11,17 +11,11 @@ import { launchChromium, openApp, screenshot } from './support/chromium';
 // low-speed drag shortens the idle descent and saves fuel. Undo restores the
 // exact previous figure.
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const app = sharedChromium();
 
 describe('editing the demo project', () => {
   it('raising CD0 raises block fuel and undo brings it back', async () => {
-    const { page, problems } = await openApp(browser, inject('baseUrl'));
+    const { page, problems } = await app.open();
     await openDemo(page);
     const before = await readNumber(blockFuel(page));
     expect(before).toBeGreaterThan(0);

@@ -1,24 +1,17 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { SAFETY_NOTICE_LINES } from '../../engine/core/notice';
 import { openDemo } from './support/appPage';
-import { launchChromium, openApp } from './support/chromium';
+import { sharedChromium } from './support/sharedChromium';
 
 // The report prints through a print stylesheet (DESIGN.md §2.7: export a
 // report as PDF; §7: every report carries the safety notice). On screen the
 // report is hidden; in print only the report shows.
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const app = sharedChromium();
 
 describe('printing', () => {
   it('the page has print rules: the printed page is the report with the safety notice, without the screen', async () => {
-    const { page } = await openApp(browser, inject('baseUrl'));
+    const { page } = await app.open();
     await openDemo(page);
     const printRules = await page.evaluate(() => {
       let count = 0;
@@ -56,7 +49,7 @@ describe('printing', () => {
   });
 
   it('the printed report is dated and names its file, no table cell wraps at A4 width, and it fits a few A4 pages with the closing notice kept with the content', async () => {
-    const { page } = await openApp(browser, inject('baseUrl'));
+    const { page } = await app.open();
     await openDemo(page);
     await page.evaluate(() => window.dispatchEvent(new Event('beforeprint')));
     await page.emulateMedia({ media: 'print' });

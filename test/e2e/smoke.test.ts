@@ -1,22 +1,16 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { SAFETY_NOTICE_LINES } from '../../engine/core/notice';
-import { launchChromium, openApp, screenshot } from './support/chromium';
+import { screenshot } from './support/chromium';
+import { sharedChromium } from './support/sharedChromium';
 
 // DESIGN.md §7: every screen carries the safety notice. The page must load
 // under the strict CSP (electron/windowSecurity.ts) with no console errors.
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const app = sharedChromium();
 
 describe('the app in Chromium', () => {
   it('loads under its Content-Security-Policy and shows the safety notice', async () => {
-    const { page, problems } = await openApp(browser, inject('baseUrl'));
+    const { page, problems } = await app.open();
     const notice = page.getByTestId('safety-notice');
     await notice.waitFor({ state: 'visible' });
     for (const line of SAFETY_NOTICE_LINES) expect(await notice.textContent()).toContain(line);
@@ -28,7 +22,7 @@ describe('the app in Chromium', () => {
   });
 
   it('shows the safety notice on every view', async () => {
-    const { page, problems } = await openApp(browser, inject('baseUrl'));
+    const { page, problems } = await app.open();
     const tabs = page.locator('[data-testid^="view-tab-"]');
     await tabs.first().waitFor();
     const ids = await tabs.evaluateAll((els) => els.map((e) => e.getAttribute('data-testid')?.replace('view-tab-', '') ?? ''));
@@ -43,7 +37,7 @@ describe('the app in Chromium', () => {
   });
 
   it('refuses an inline script under its Content-Security-Policy', async () => {
-    const { page, problems } = await openApp(browser, inject('baseUrl'));
+    const { page, problems } = await app.open();
     await page.getByTestId('safety-notice').waitFor();
     const outcome = await page.evaluate(
       () =>

@@ -1,9 +1,10 @@
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { blockFuel, openDemo, readNumber, showView, waitForNumberChange } from './support/appPage';
-import { launchChromium, openApp, screenshot } from './support/chromium';
+import { screenshot } from './support/chromium';
+import { sharedChromium } from './support/sharedChromium';
 import { VIEWS } from '../../renderer/state/viewNames';
 
 // The app an engineer trusts at a glance: the display units everywhere, honest
@@ -13,13 +14,7 @@ import { VIEWS } from '../../renderer/state/viewNames';
 const require = createRequire(import.meta.url);
 const AXE_SOURCE = readFileSync(require.resolve('axe-core/axe.min.js'), 'utf8');
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const app = sharedChromium();
 
 /** Sets a field's text and commits it (blur), as a person typing would. */
 async function typeInto(page: Page, testId: string, text: string): Promise<void> {
@@ -42,7 +37,7 @@ const SI_UNIT_AFTER_NUMBER = /\d\s?(m|km|kg|N|kN|m\/s|Pa|hPa|kg\/h|kg\/s)(?![\w/
 
 describe('trust at a glance', () => {
   it('every view in customary units shows no SI unit after a number, carries the summary strip and the notice, and has no serious axe violation; screenshots at 1440x900 and 1280x720', async () => {
-    const { page, problems } = await openApp(browser, inject('baseUrl'));
+    const { page, problems } = await app.open();
     await openDemo(page);
     await page.getByTestId('unit-system-toggle').selectOption('customary');
     for (const size of [
@@ -76,7 +71,7 @@ describe('trust at a glance', () => {
   }, 240_000);
 
   it('tabs take arrow keys, the skip link reaches the view, and charts are not Tab stops', async () => {
-    const { page } = await openApp(browser, inject('baseUrl'));
+    const { page } = await app.open();
     await openDemo(page);
     await page.getByTestId('view-tab-results').focus();
     await page.keyboard.press('ArrowRight');
@@ -106,7 +101,7 @@ describe('trust at a glance', () => {
   });
 
   it('a failed mission reads "not valid" in the headline and the strip; stale figures are marked; export asks first', async () => {
-    const { page } = await openApp(browser, inject('baseUrl'));
+    const { page } = await app.open();
     await openDemo(page);
     await page.getByTestId('unit-system-toggle').selectOption('customary');
     const before = await readNumber(blockFuel(page));
@@ -135,7 +130,7 @@ describe('trust at a glance', () => {
   });
 
   it('opening another project with unsaved edits asks first, and the previous figures are gone at once', async () => {
-    const { page } = await openApp(browser, inject('baseUrl'));
+    const { page } = await app.open();
     await openDemo(page);
     await showView(page, 'airframe');
     await typeInto(page, 'field-oew', '21000 lb');

@@ -1,25 +1,18 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { expectClose } from '../support/assertInDelta';
 import { blockFuel, openDemo, readNumber, waitForNumberChange } from './support/appPage';
-import { launchChromium, openApp } from './support/chromium';
+import { sharedChromium } from './support/sharedChromium';
 
 // 1 lb = 0.45359237 kg exactly (NIST SP 811, appendix B). Switching units
 // changes the display only: the block fuel in kg is the figure in lb times
 // that factor, to the display rounding.
 const KG_PER_LB = 0.45359237;
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const app = sharedChromium();
 
 describe('switching units', () => {
   it('block fuel converts between lb and kg and back', async () => {
-    const { page, problems } = await openApp(browser, inject('baseUrl'));
+    const { page, problems } = await app.open();
     await openDemo(page);
     const headline = blockFuel(page);
     const first = await readNumber(blockFuel(page));
