@@ -1,40 +1,34 @@
 import { spawn } from 'node:child_process';
-import { chmod, lstat, mkdtemp, readFile, readdir, rm, symlink, utimes, writeFile } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
+import { chmod, lstat, readFile, readdir, symlink, utimes, writeFile } from 'node:fs/promises';
 import { join, resolve } from 'node:path';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { atomicWriteFile, nodeAtomicWriteOps, removeStaleTemporaries, STALE_TEMPORARY_AGE_MS, tempPathFor, type AtomicWriteOps } from '../../electron/atomicWrite';
+import { scratchFolderEachTest } from './support/scratchFolder';
 
 // Safe-save contract (POSIX rename(2): replacing a name is atomic within one
 // file system; write-temp-fsync-rename is common practice): a failure at any
 // step leaves the previous file byte-for-byte intact and no temporary file.
 
-let folder: string;
-beforeEach(async () => {
-  folder = await mkdtemp(join(tmpdir(), 'blockwise-atomic-'));
-});
-afterEach(async () => {
-  await rm(folder, { recursive: true, force: true });
-});
+const folder = scratchFolderEachTest('blockwise-atomic-');
 
 describe('atomicWriteFile', () => {
   it('atomicWriteFile creates a new file with the given text', async () => {
-    const target = join(folder, 'a.blockwise.json');
+    const target = join(folder(), 'a.blockwise.json');
     await atomicWriteFile(target, '{"format":1}');
     expect(await readFile(target, 'utf8')).toBe('{"format":1}');
-    expect(await readdir(folder)).toEqual(['a.blockwise.json']);
+    expect(await readdir(folder())).toEqual(['a.blockwise.json']);
   });
 
   it('atomicWriteFile replaces an existing file and leaves no temporary file', async () => {
-    const target = join(folder, 'a.blockwise.json');
+    const target = join(folder(), 'a.blockwise.json');
     await writeFile(target, 'old');
     await atomicWriteFile(target, new TextEncoder().encode('new contents'));
     expect(await readFile(target, 'utf8')).toBe('new contents');
-    expect(await readdir(folder)).toEqual(['a.blockwise.json']);
+    expect(await readdir(folder())).toEqual(['a.blockwise.json']);
   });
 
   it('atomicWriteFile keeps the old file when the write fails half way', async () => {
-    const target = join(folder, 'project.blockwise.json');
+    const target = join(folder(), 'project.blockwise.json');
     await writeFile(target, 'the previous project');
     const failing: AtomicWriteOps = {
       ...nodeAtomicWriteOps,
@@ -56,11 +50,11 @@ describe('atomicWriteFile', () => {
       /could not save .*project\.blockwise\.json: ENOSPC.*previous file.*unchanged/,
     );
     expect(await readFile(target, 'utf8')).toBe('the previous project');
-    expect(await readdir(folder)).toEqual(['project.blockwise.json']);
+    expect(await readdir(folder())).toEqual(['project.blockwise.json']);
   });
 
   it('atomicWriteFile keeps the old file when the rename fails', async () => {
-    const target = join(folder, 'p.json');
+    const target = join(folder(), 'p.json');
     await writeFile(target, 'old');
     const failing: AtomicWriteOps = {
       ...nodeAtomicWriteOps,
@@ -70,11 +64,11 @@ describe('atomicWriteFile', () => {
     };
     await expect(atomicWriteFile(target, 'new', failing)).rejects.toThrow(/EXDEV/);
     expect(await readFile(target, 'utf8')).toBe('old');
-    expect(await readdir(folder)).toEqual(['p.json']);
+    expect(await readdir(folder())).toEqual(['p.json']);
   });
 
   it('atomicWriteFile fails with the target named when the folder does not exist', async () => {
-    const target = join(folder, 'missing', 'p.json');
+    const target = join(folder(), 'missing', 'p.json');
     await expect(atomicWriteFile(target, 'x')).rejects.toThrow(/could not save .*missing.*p\.json/);
   });
 
@@ -83,7 +77,7 @@ describe('atomicWriteFile', () => {
   });
 
   it('atomicWriteFile keeps the old file when the writing process is killed mid-write', async () => {
-    const target = join(folder, 'killed.blockwise.json');
+    const target = join(folder(), 'killed.blockwise.json');
     await writeFile(target, 'survives a crash');
     const child = spawn(process.execPath, ['--import', 'tsx', resolve(__dirname, 'support/slowAtomicWriter.ts'), target], {
       stdio: ['ignore', 'pipe', 'pipe'],
@@ -97,7 +91,7 @@ describe('atomicWriteFile', () => {
       });
       child.on('exit', (code) => reject(new Error(`writer exited early (${code}): ${stderr}`)));
     });
-    const tempFiles = (await readdir(folder)).filter((f) => f.endsWith('.tmp'));
+    const tempFiles = (await readdir(folder())).filter((f) => f.endsWith('.tmp'));
     expect(tempFiles.length).toBe(1);
     child.kill('SIGKILL');
     await new Promise((r) => child.once('exit', r));
@@ -107,40 +101,40 @@ describe('atomicWriteFile', () => {
 
 describe('atomicWriteFile on links, read-only files and stale temporaries', () => {
   it('atomicWriteFile through a symlink writes the file it points at and keeps the link', async () => {
-    const real = join(folder, 'real.blockwise.json');
-    const link = join(folder, 'link.blockwise.json');
+    const real = join(folder(), 'real.blockwise.json');
+    const link = join(folder(), 'link.blockwise.json');
     await writeFile(real, 'old');
     await symlink(real, link);
     await atomicWriteFile(link, 'new');
     expect(await readFile(real, 'utf8')).toBe('new');
     expect((await lstat(link)).isSymbolicLink()).toBe(true);
     expect(await readFile(link, 'utf8')).toBe('new');
-    expect((await readdir(folder)).sort()).toEqual(['link.blockwise.json', 'real.blockwise.json']);
+    expect((await readdir(folder())).sort()).toEqual(['link.blockwise.json', 'real.blockwise.json']);
   });
 
   it('atomicWriteFile refuses a read-only file with a message and leaves it as it was', async () => {
-    const target = join(folder, 'locked.blockwise.json');
+    const target = join(folder(), 'locked.blockwise.json');
     await writeFile(target, 'keep me');
     await chmod(target, 0o444);
     await expect(atomicWriteFile(target, 'overwrite')).rejects.toThrow(`could not save ${target}: the file is read-only; make it writable or save under another name (the file is unchanged)`);
     expect(await readFile(target, 'utf8')).toBe('keep me');
-    expect(await readdir(folder)).toEqual(['locked.blockwise.json']);
+    expect(await readdir(folder())).toEqual(['locked.blockwise.json']);
   });
 
   it('removeStaleTemporaries removes this program\'s temporaries of dead writers and old ones, nothing else', async () => {
-    const target = join(folder, 'jet.blockwise.json');
+    const target = join(folder(), 'jet.blockwise.json');
     await writeFile(target, 'project');
     // A pid that no process has: above the kernel's pid_max (4,194,304 at most on Linux; proc(5)).
     const dead = tempPathFor(target, '4999999-0123abcd');
     const ownLive = tempPathFor(target, `${process.pid}-89abcdef`);
     const otherLiveFresh = tempPathFor(target, '1-00000000');
     const otherLiveOld = tempPathFor(target, '1-11111111');
-    const unrelated = join(folder, '.jet.blockwise.json.backup.tmp');
+    const unrelated = join(folder(), '.jet.blockwise.json.backup.tmp');
     for (const p of [dead, ownLive, otherLiveFresh, otherLiveOld, unrelated]) await writeFile(p, 'partial');
     const old = (Date.now() - STALE_TEMPORARY_AGE_MS - 60_000) / 1000;
     await utimes(otherLiveOld, old, old);
     const removed = await removeStaleTemporaries(target);
     expect(removed.sort()).toEqual(['.jet.blockwise.json.1-11111111.tmp', '.jet.blockwise.json.4999999-0123abcd.tmp']);
-    expect((await readdir(folder)).sort()).toEqual(['.jet.blockwise.json.1-00000000.tmp', `.jet.blockwise.json.${process.pid}-89abcdef.tmp`, '.jet.blockwise.json.backup.tmp', 'jet.blockwise.json']);
+    expect((await readdir(folder())).sort()).toEqual(['.jet.blockwise.json.1-00000000.tmp', `.jet.blockwise.json.${process.pid}-89abcdef.tmp`, '.jet.blockwise.json.backup.tmp', 'jet.blockwise.json']);
   });
 });

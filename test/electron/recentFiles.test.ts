@@ -1,19 +1,12 @@
-import { mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { readFile, writeFile } from 'node:fs/promises';
+import { describe, expect, it } from 'vitest';
 import { RECENT_LIMIT, loadRecentFiles, recentFilesPath, saveRecentFiles, withRecentFile, withoutRecentFile } from '../../electron/recentFiles';
+import { scratchFolderEachTest } from './support/scratchFolder';
 
 // Most-recently-used list behaviour (common practice): newest first, no
 // duplicates, bounded length, a damaged store reported and not trusted.
 
-let folder: string;
-beforeEach(async () => {
-  folder = await mkdtemp(join(tmpdir(), 'blockwise-recent-'));
-});
-afterEach(async () => {
-  await rm(folder, { recursive: true, force: true });
-});
+const folder = scratchFolderEachTest('blockwise-recent-');
 
 describe('withRecentFile', () => {
   it('withRecentFile puts the file first with its base name and time', () => {
@@ -46,31 +39,31 @@ describe('withRecentFile', () => {
 describe('loadRecentFiles and saveRecentFiles', () => {
   it('saveRecentFiles then loadRecentFiles round-trips the list', async () => {
     const list = withRecentFile(withRecentFile([], '/p/a.json', 10), '/p/b.json', 20);
-    await saveRecentFiles(folder, list);
-    expect(await loadRecentFiles(folder)).toEqual({ files: list, problem: null });
+    await saveRecentFiles(folder(), list);
+    expect(await loadRecentFiles(folder())).toEqual({ files: list, problem: null });
   });
 
   it('loadRecentFiles returns an empty list without a problem when there is no file', async () => {
-    expect(await loadRecentFiles(folder)).toEqual({ files: [], problem: null });
+    expect(await loadRecentFiles(folder())).toEqual({ files: [], problem: null });
   });
 
   it('loadRecentFiles reports a damaged file with its path and starts empty', async () => {
-    await writeFile(recentFilesPath(folder), '{"format":1,"files":[{"path":"/a"');
-    const r = await loadRecentFiles(folder);
+    await writeFile(recentFilesPath(folder()), '{"format":1,"files":[{"path":"/a"');
+    const r = await loadRecentFiles(folder());
     expect(r.files).toEqual([]);
     expect(r.problem).toMatch(/recent-projects\.json is not valid JSON/);
   });
 
   it('loadRecentFiles reports a wrong field with its JSON path', async () => {
-    await writeFile(recentFilesPath(folder), JSON.stringify({ format: 1, files: [{ path: '/a', name: 'a', openedAt_ms: -5 }] }));
-    const r = await loadRecentFiles(folder);
+    await writeFile(recentFilesPath(folder()), JSON.stringify({ format: 1, files: [{ path: '/a', name: 'a', openedAt_ms: -5 }] }));
+    const r = await loadRecentFiles(folder());
     expect(r.files).toEqual([]);
     expect(r.problem).toMatch(/at files\.0\.openedAt_ms/);
   });
 
   it('saveRecentFiles writes the documented format', async () => {
-    await saveRecentFiles(folder, withRecentFile([], '/p/a.json', 5));
-    expect(JSON.parse(await readFile(recentFilesPath(folder), 'utf8'))).toEqual({
+    await saveRecentFiles(folder(), withRecentFile([], '/p/a.json', 5));
+    expect(JSON.parse(await readFile(recentFilesPath(folder()), 'utf8'))).toEqual({
       format: 1,
       files: [{ path: '/p/a.json', name: 'a.json', openedAt_ms: 5 }],
     });
