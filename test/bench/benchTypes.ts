@@ -18,3 +18,12 @@ export interface BenchResult {
   readonly medianCall_s: number;
   readonly calls: number;
 }
+
+/** Returns 1, 2, ..., period - 1, 0, 1, ... on successive calls: a case varies its inputs by it, so no call repeats the one before. */
+export function callCounter(period = 64): () => number {
+  let k = 0;
+  return () => {
+    k = (k + 1) % period;
+    return k;
+  };
+}

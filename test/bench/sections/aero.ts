@@ -4,7 +4,7 @@ import { kornWaveDrag } from '../../../engine/aero/waveDrag';
 import { expectOk } from '../../../engine/core/result';
 import { interp1d, makeTable1d } from '../../../engine/core/table1d';
 import { interp2d, makeTable2d } from '../../../engine/core/table2d';
-import type { BenchSection } from '../benchTypes';
+import { callCounter, type BenchSection } from '../benchTypes';
 
 // An invented polar; queries cycle through a small table so each call differs.
 const spec: PolarSpec = {
@@ -25,11 +25,7 @@ const grid = expectOk(
   'bench grid',
 );
 
-let k = 0;
-function next(): number {
-  k = (k + 1) & 63;
-  return k;
-}
+const next = callCounter();
 
 export const section: BenchSection = {
   title: 'tables and drag polar',

@@ -13,7 +13,7 @@ import { parseProject } from '../../../engine/project/parseProject';
 import { projectDeck } from '../../../engine/project/projectDeck';
 import { cautionSettingsOf, installationOf } from '../../../engine/project/projectSpecs';
 import { parseDeckCsv } from '../../../engine/propulsion/deckCsv';
-import type { BenchSection } from '../benchTypes';
+import { callCounter, type BenchSection } from '../benchTypes';
 
 // The demo project (invented aircraft and engine); inputs cycle so each call differs.
 const root = fileURLToPath(new URL('../../../fixtures/demo/', import.meta.url));
@@ -33,11 +33,7 @@ const build = inletFactorBuilder({
   cautionSettings: cautionSettingsOf(project),
 });
 
-let k = 0;
-function next(): number {
-  k = (k + 1) & 7;
-  return k;
-}
+const next = callCounter(8);
 
 export const section: BenchSection = {
   title: 'analyses (demo project)',

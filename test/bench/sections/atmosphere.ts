@@ -2,16 +2,12 @@ import { airspeedsAt, casFromMach, machFromCas } from '../../../engine/aero/airs
 import { atmosphere, pressureAltitude } from '../../../engine/aero/standardAtmosphere';
 import { expectOk } from '../../../engine/core/result';
 import { parseQuantity } from '../../../engine/units/quantity';
-import type { BenchSection } from '../benchTypes';
+import { callCounter, type BenchSection } from '../benchTypes';
 
 // Altitudes and speeds cycle through a small table so each call differs.
 const ALTITUDES_M = Array.from({ length: 64 }, (_, i) => -1000 + i * 250);
 const state = expectOk(atmosphere(10668), 'bench atmosphere');
-let k = 0;
-function next(): number {
-  k = (k + 1) & 63;
-  return k;
-}
+const next = callCounter();
 
 export const section: BenchSection = {
   title: 'atmosphere and airspeeds',

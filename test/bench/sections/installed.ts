@@ -5,7 +5,7 @@ import { geometryInletFlow } from '../../../engine/propulsion/inletFlow';
 import { makeInstalledPropulsion } from '../../../engine/propulsion/installedPropulsion';
 import { buildParametricDeck } from '../../../engine/propulsion/parametricDeck';
 import { additiveDrag } from '../../../engine/propulsion/spillageDrag';
-import type { BenchSection } from '../benchTypes';
+import { callCounter, type BenchSection } from '../benchTypes';
 
 // Invented inlets on the invented demo deck; queries cycle so each call differs.
 const deck = buildParametricDeck(DEMO_ENGINE_SPEC);
@@ -33,11 +33,7 @@ const geometryModel = makeInstalledPropulsion({ ...options, inlet: geometry });
 const tableModel = makeInstalledPropulsion({ ...options, inlet: table });
 const top = geometryModel.atRating({ altitude_m: 10668, mach: 0.8, isaDev_K: 0 }, 'maxCruise').thrust_N;
 
-let k = 0;
-function next(): number {
-  k = (k + 1) & 63;
-  return k;
-}
+const next = callCounter();
 
 function condition() {
   const i = next();

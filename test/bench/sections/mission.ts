@@ -7,7 +7,7 @@ import { buildMissionInput } from '../../../engine/project/buildMissionInput';
 import { parseProject } from '../../../engine/project/parseProject';
 import { parseDeckCsv } from '../../../engine/propulsion/deckCsv';
 import { demoLegs, missionInput } from '../../engine/mission/support/missionFixtures';
-import type { BenchSection } from '../benchTypes';
+import { callCounter, type BenchSection } from '../benchTypes';
 
 // The demo project (invented aircraft and engine deck) and the analytic test models of the mission tests;
 // payloads cycle so each call differs.
@@ -16,11 +16,7 @@ const project = expectOk(parseProject(readFileSync(`${root}demo.blockwise.json`,
 const deck = expectOk(parseDeckCsv(readFileSync(`${root}demo-engine.deck.csv`, 'utf8'), 'demo-engine.deck.csv'), 'demo deck');
 const demo = expectOk(buildMissionInput(project, { deck }), 'demo input');
 
-let k = 0;
-function next(): number {
-  k = (k + 1) & 7;
-  return k;
-}
+const next = callCounter(8);
 
 function withPayload(input: MissionInput, delta_kg: number): MissionInput {
   return { ...input, solve: { ...input.solve, payload_kg: input.solve.payload_kg + delta_kg } };

@@ -4,7 +4,7 @@ import { DEMO_ENGINE_SPEC } from '../../../engine/propulsion/deckDemoSpec';
 import { lookupDeck } from '../../../engine/propulsion/deckLookup';
 import { buildParametricDeck } from '../../../engine/propulsion/parametricDeck';
 import { loadDemoInput } from '../peer/demoInput';
-import type { BenchSection } from '../benchTypes';
+import { callCounter, type BenchSection } from '../benchTypes';
 
 // What the owners' sections do not time: a regular-grid deck lookup beside the
 // ragged one in deck.ts, and one pass of the demo mission (no fuel iteration)
@@ -23,18 +23,17 @@ const onePass: MissionInput = {
 };
 const regular = buildParametricDeck({ ...DEMO_ENGINE_SPEC, grid: { ...DEMO_ENGINE_SPEC.grid, machRanges: undefined } });
 
-let k = 0;
-function next(): number {
-  k = (k + 1) & 63;
-  return k;
-}
+const next = callCounter();
 
 export const section: BenchSection = {
   title: 'demo one pass, regular deck',
   cases: [
     {
       name: 'lookupDeck inside (regular, 3 axes)',
-      run: () => lookupDeck(regular, { altitude_m: 9000 + 20 * next(), mach: 0.7 + 0.002 * k, isaDev_K: 0 }, 0.5 + 0.005 * k),
+      run: () => {
+        const k = next();
+        return lookupDeck(regular, { altitude_m: 9000 + 20 * k, mach: 0.7 + 0.002 * k, isaDev_K: 0 }, 0.5 + 0.005 * k);
+      },
     },
     { name: 'demo mission, one pass (given TOW, fixed cruise)', run: () => solveMission(onePass) },
   ],
