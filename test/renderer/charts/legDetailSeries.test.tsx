@@ -3,16 +3,14 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { toDisplay } from '../../../engine/units';
 import { legDetailSeries, legSampleIndices } from '../../../renderer/charts/legDetailSeries';
 import { LegDetailPlots } from '../../../renderer/components/LegDetailPlots';
-import { createDeckCache, runEngineRequest } from '../../../renderer/worker/engineRunner';
 import type { StudySnapshot } from '../../../renderer/worker/engineProtocol';
 import { demoState } from '../support/studyHarness';
+import { flyStudy } from '../support/demoStudy';
 
 let snapshot: StudySnapshot;
 beforeAll(() => {
   const s = demoState();
-  const r = runEngineRequest({ kind: 'study', project: s.doc!.present, deckFile: s.deckFile }, createDeckCache());
-  if (!r.ok) throw new Error(JSON.stringify(r.error));
-  snapshot = r.value as StudySnapshot;
+  snapshot = flyStudy({ project: s.doc!.present, deckFile: s.deckFile });
 });
 
 const tripLegs = () => snapshot.mission.legs.filter((l) => l.kind !== 'reserve');

@@ -10,14 +10,13 @@ import type { EngineRequest } from '../../../renderer/worker/engineProtocol';
 import { createDeckCache, runEngineRequest } from '../../../renderer/worker/engineRunner';
 import type { StudySnapshot } from '../../../renderer/worker/engineProtocol';
 import { demoState } from '../support/studyHarness';
+import { flyStudy } from '../support/demoStudy';
 
 describe('StudyReport', () => {
   it('prints the inputs, the results with plots, the legs, the cautions and the notice', () => {
     const s = demoState();
     const project = s.doc!.present;
-    const r = runEngineRequest({ kind: 'study', project, deckFile: s.deckFile }, createDeckCache());
-    if (!r.ok) throw new Error(JSON.stringify(r.error));
-    const snapshot = r.value as StudySnapshot;
+    const snapshot = flyStudy({ project, deckFile: s.deckFile });
     const printedAt = new Date(2026, 11, 2, 9, 5);
     render(<StudyReport project={project} snapshot={snapshot} units="si" stale={true} documentName="demo.blockwise.json" printedAt={printedAt} />);
     const report = screen.getByTestId('print-report');

@@ -6,19 +6,17 @@ import { CompareView } from '../../../renderer/views/CompareView';
 import { CrossoverView } from '../../../renderer/views/CrossoverView';
 import { EngineView } from '../../../renderer/views/EngineView';
 import { ResultsView } from '../../../renderer/views/ResultsView';
-import { createDeckCache, runEngineRequest } from '../../../renderer/worker/engineRunner';
 import type { StudySnapshot } from '../../../renderer/worker/engineProtocol';
 import type { EngineClient } from '../../../renderer/worker/engineClient';
 import type { InletComparisonResult } from '../../../engine/analysis/inletComparison';
 import type { LiveStudy } from '../../../renderer/worker/useEngine';
 import { cannedClient, demoState, renderWithStudy, TEST_CHART } from '../support/studyHarness';
+import { flyStudy } from '../support/demoStudy';
 
 let snapshot: StudySnapshot;
 beforeAll(() => {
   const s = demoState();
-  const r = runEngineRequest({ kind: 'study', project: s.doc!.present, deckFile: s.deckFile }, createDeckCache());
-  if (!r.ok) throw new Error(JSON.stringify(r.error));
-  snapshot = r.value as StudySnapshot;
+  snapshot = flyStudy({ project: s.doc!.present, deckFile: s.deckFile });
 });
 
 function live(over: Partial<LiveStudy> = {}): LiveStudy {

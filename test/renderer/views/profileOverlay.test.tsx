@@ -4,12 +4,13 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import type { MissionResult, TimeHistory } from '../../../engine/mission/missionTypes';
 import { toDisplay } from '../../../engine/units';
 import { profileCompareRows, profileKey } from '../../../renderer/charts/profileCompareSeries';
-import type { DesignProfile, ProfilesReply, StudySnapshot } from '../../../renderer/worker/engineProtocol';
+import type { DesignProfile, ProfilesReply } from '../../../renderer/worker/engineProtocol';
 import { createDeckCache, runEngineRequest } from '../../../renderer/worker/engineRunner';
 import type { LiveStudy } from '../../../renderer/worker/useEngine';
 import { CompareView } from '../../../renderer/views/CompareView';
 import { expectClose } from '../../support/assertInDelta';
 import { demoState, renderWithStudy, TEST_CHART } from '../support/studyHarness';
+import { flyStudy } from '../support/demoStudy';
 
 // Conversion factors, NIST SP 811 appendix B (exact): 1 nmi = 1852 m, 1 lb = 0.45359237 kg, 1 ft = 0.3048 m.
 const NMI = 1852;
@@ -38,10 +39,9 @@ describe("the 'profiles' request", () => {
     const s = demoState();
     for (const [k, name] of [names[0]!, names[1]!].entries()) {
       const project = { ...s.doc!.present, activeInlet: name };
-      const study = runEngineRequest({ kind: 'study', project, deckFile: s.deckFile }, createDeckCache());
-      if (!study.ok) throw new Error(JSON.stringify(study.error));
-      const mission = (study.value as StudySnapshot).mission;
-      expect((study.value as StudySnapshot).inletName).toBe(name);
+      const study = flyStudy({ project, deckFile: s.deckFile });
+      const mission = study.mission;
+      expect(study.inletName).toBe(name);
       expect(reply.designs[k]!.name).toBe(name);
       // The same input solved by the same function: equal to the last bit.
       expect(reply.designs[k]!.mission.blockFuel_kg).toBe(mission.blockFuel_kg);

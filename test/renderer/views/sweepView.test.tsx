@@ -5,12 +5,13 @@ import { flySweepCase, parseProjectData, parseVary } from '../../../engine/proje
 import { SAFETY_NOTICE_LINES } from '../../../engine/core';
 import { prepareStudy } from '../../../engine/study';
 import { sweepCsv, sweepRows } from '../../../renderer/charts/sweepSeries';
-import type { StudySnapshot, SweepReply } from '../../../renderer/worker/engineProtocol';
+import type { SweepReply } from '../../../renderer/worker/engineProtocol';
 import { createDeckCache, runEngineRequest } from '../../../renderer/worker/engineRunner';
 import type { LiveStudy } from '../../../renderer/worker/useEngine';
 import { SweepView } from '../../../renderer/views/SweepView';
 import { demoFiles } from '../support/fakeBridge';
 import { demoState, renderWithStudy, TEST_CHART } from '../support/studyHarness';
+import { flyStudy } from '../support/demoStudy';
 
 const VARY = 'mission.solve.range=2000nmi:3000nmi:500nmi';
 
@@ -43,9 +44,7 @@ describe("the 'sweep' request", () => {
 
   it("the case at the project's own range is the flight results' mission, and more range burns more fuel", () => {
     const s = demoState();
-    const r = runEngineRequest({ kind: 'study', project: s.doc!.present, deckFile: s.deckFile }, createDeckCache());
-    if (!r.ok) throw new Error(JSON.stringify(r.error));
-    const mission = (r.value as StudySnapshot).mission;
+    const mission = flyStudy({ project: s.doc!.present, deckFile: s.deckFile }).mission;
     // The demo's range is 3000 nmi (the file's mission.solve.range), the last case of 2000:3000:500.
     expect(String(reply.rows[2]!.inputs[0])).toMatch(/^3000\b/);
     expect(reply.rows[2]!.blockFuel_kg).toBe(mission.blockFuel_kg);
