@@ -1,4 +1,4 @@
-import { useEffect, useMemo } from 'react';
+import { useMemo } from 'react';
 import { usePersistentValue } from '../worker/jobStore';
 import { RATING_NAMES, type RatingName } from '../../engine/propulsion';
 import { crossoverSeries } from '../charts/crossoverSeries';
@@ -10,7 +10,7 @@ import { machText, ratingLabel } from '../state/displayText';
 import { useStudy } from '../state/studyContext';
 import { groupDigits, messageIn, FOOT_M } from '../../engine/units';
 import type { CrossoverRequestQuery } from '../worker/engineProtocol';
-import { useEngineJob, type LiveStudy } from '../worker/useEngine';
+import { useLiveAnalysis, type LiveStudy } from '../worker/useEngine';
 
 const FT = FOOT_M;
 
@@ -23,12 +23,8 @@ export function CrossoverView(props: { readonly live: LiveStudy; readonly chartS
   const [mass_kg, setMass] = usePersistentValue('crossover.mass_kg', 0.9 * project.airframe.weights.maxTakeoff);
   const [rating, setRating] = usePersistentValue<RatingName>('crossover.rating', 'maxCruise');
   const [allInlets, setAllInlets] = usePersistentValue('crossover.allInlets', false);
-  const job = useEngineJob<'crossover'>({ cancelOnRestart: false, persistKey: 'crossover' });
   const query = useMemo<CrossoverRequestQuery>(() => ({ altitude_m, mass_kg, rating, isaDev_K: project.mission.isaDeviation, allInlets }), [altitude_m, mass_kg, rating, allInlets, project.mission.isaDeviation]);
-  const { start } = job;
-  useEffect(() => {
-    start({ kind: 'crossover', project, deckFile: state.deckFile, query });
-  }, [start, project, state.deckFile, query]);
+  const job = useLiveAnalysis('crossover', { project, deckFile: state.deckFile }, query);
   const u = state.units;
   const s = job.state;
   const shown = job.lastValue;

@@ -1,4 +1,4 @@
-import { useEffect, useMemo } from 'react';
+import { useMemo } from 'react';
 import { RATING_NAMES, type RatingName } from '../../engine/propulsion';
 import { envelopeSeries, limitsAtCeiling } from '../charts/envelopeSeries';
 import { ChoiceField } from '../components/ChoiceField';
@@ -10,7 +10,7 @@ import { useStudy } from '../state/studyContext';
 import { formatQuantity, messageIn, FOOT_M } from '../../engine/units';
 import type { EnvelopeRequestQuery } from '../worker/engineProtocol';
 import { usePersistentValue } from '../worker/jobStore';
-import { useEngineJob, type LiveStudy } from '../worker/useEngine';
+import { useLiveAnalysis, type LiveStudy } from '../worker/useEngine';
 
 const FT = FOOT_M;
 
@@ -21,13 +21,9 @@ export function EnvelopeView(props: { readonly live: LiveStudy; readonly chartSi
   const [mass_kg, setMass] = usePersistentValue('envelope.mass_kg', project.airframe.weights.maxTakeoff);
   const [rating, setRating] = usePersistentValue<RatingName>('envelope.rating', 'maxClimb');
   const [isaDev_K, setIsaDev] = usePersistentValue('envelope.isaDev_K', project.mission.isaDeviation);
-  const job = useEngineJob<'envelope'>({ cancelOnRestart: false, persistKey: 'envelope' });
   // The CLI's defaults (cli/verbs/envelope.ts): rows to 50,000 ft in steps of 2,000 ft.
   const query = useMemo<EnvelopeRequestQuery>(() => ({ mass_kg, rating, isaDev_K, top_m: 50000 * FT, step_m: 2000 * FT }), [mass_kg, rating, isaDev_K]);
-  const { start } = job;
-  useEffect(() => {
-    start({ kind: 'envelope', project, deckFile: state.deckFile, query });
-  }, [start, project, state.deckFile, query]);
+  const job = useLiveAnalysis('envelope', { project, deckFile: state.deckFile }, query);
   const u = state.units;
   const s = job.state;
   const shown = s.status === 'failed' ? null : job.lastValue;

@@ -1,4 +1,4 @@
-import { useEffect, useMemo } from 'react';
+import { useMemo } from 'react';
 import type { OptimumAltitudeResult } from '../../engine/analysis';
 import { specificRangeSeries } from '../charts/specificRangeSeries';
 import { FailureNotice } from '../components/IssueList';
@@ -9,7 +9,7 @@ import { useStudy } from '../state/studyContext';
 import { formatQuantity, FOOT_M } from '../../engine/units';
 import type { SpecificRangeRequestQuery } from '../worker/engineProtocol';
 import { usePersistentValue } from '../worker/jobStore';
-import { useEngineJob, type LiveStudy } from '../worker/useEngine';
+import { useLiveAnalysis, type LiveStudy } from '../worker/useEngine';
 
 const FT = FOOT_M;
 /** The altitudes of the curves: 25,000 to 41,000 ft every 4,000 ft (flight levels of jet cruise, common practice). */
@@ -26,12 +26,8 @@ export function SpecificRangeView(props: { readonly live: LiveStudy; readonly ch
   const { state } = useStudy();
   const project = state.doc!.present;
   const [mass_kg, setMass] = usePersistentValue('specificRange.mass_kg', 0.9 * project.airframe.weights.maxTakeoff);
-  const job = useEngineJob<'specificRange'>({ cancelOnRestart: false, persistKey: 'specificRange' });
   const query = useMemo<SpecificRangeRequestQuery>(() => ({ mass_kg, isaDev_K: project.mission.isaDeviation, altitudes_m: ALTITUDES_M }), [mass_kg, project.mission.isaDeviation]);
-  const { start } = job;
-  useEffect(() => {
-    start({ kind: 'specificRange', project, deckFile: state.deckFile, query });
-  }, [start, project, state.deckFile, query]);
+  const job = useLiveAnalysis('specificRange', { project, deckFile: state.deckFile }, query);
   const u = state.units;
   const s = job.state;
   const shown = s.status === 'failed' ? null : job.lastValue;

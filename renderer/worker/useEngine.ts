@@ -9,6 +9,9 @@ import type { EngineClient, EngineRun } from './engineClient';
 import { useJobStore, type JobStore } from './jobStore';
 import type { EngineFailure, EngineReplies, EngineRequest, EngineRequestKind, StudyInputs, StudySnapshot } from './engineProtocol';
 
+/** The point analyses a view runs with a query of its own (its fields) over the open study. */
+type QueryKind = 'crossover' | 'envelope' | 'specificRange';
+
 export const EngineContext = createContext<EngineClient | null>(null);
 
 /** The engine client of the app (provided by App): run(request, onProgress) -> { outcome, cancel }. */
@@ -229,4 +232,20 @@ export function useLiveRerun<K extends EngineRequestKind>(job: EngineJob<K>, req
     // Only a changed project or deck starts a run (the request object itself is rebuilt every render).
   }, [outdated, request.project, request.deckFile, start]);
   return outdated || (job.state.status === 'running' && job.lastValue !== null);
+}
+
+/**
+ * A view's point analysis kept live: run at once, and again whenever the project, the deck or the view's query
+ * changes (latest wins: a newer run replaces the one waiting, none is cancelled), its job kept in the job store under
+ * the kind, so the last result survives a tab switch.
+ */
+export function useLiveAnalysis<K extends QueryKind>(kind: K, inputs: StudyInputs, query: Extract<EngineRequest, { kind: K }>['query']): EngineJob<K> {
+  const job = useEngineJob<K>({ cancelOnRestart: false, persistKey: kind });
+  const { start } = job;
+  const { project, deckFile } = inputs;
+  useEffect(() => {
+    // The request of kind K (TypeScript does not narrow the request union by a generic kind).
+    start({ kind, project, deckFile, query } as Extract<EngineRequest, { kind: K }>);
+  }, [start, kind, project, deckFile, query]);
+  return job;
 }
