@@ -3,11 +3,12 @@ import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { promisify } from 'node:util';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../engine/core/notice';
 import { HISTORY_COLUMNS } from '../../engine/study';
 import { expectClose } from '../support/assertInDelta';
 import { DEMO_PROJECT, repoRoot, run, type Json } from './support/cliRun';
+import { scratchFolderForSuite } from '../support/scratchFolder';
 
 const DEMO = DEMO_PROJECT;
 // Conversion factors: NIST SP 811 (nmi = 1852 m, lb = 0.45359237 kg).
@@ -159,16 +160,10 @@ describe('blockwise fly text output', () => {
 });
 
 describe('blockwise fly options', () => {
-  let dir = '';
-  beforeAll(() => {
-    dir = mkdtempSync(join(tmpdir(), 'blockwise-fly-'));
-  });
-  afterAll(() => {
-    rmSync(dir, { recursive: true, force: true });
-  });
+  const dir = scratchFolderForSuite('blockwise-fly-');
 
   it('fly --csv writes the time history with units in the header', async () => {
-    const file = join(dir, 'history.csv');
+    const file = join(dir(), 'history.csv');
     const r = await run('fly', DEMO, '--csv', file, '--json');
     expect(r.code).toBe(0);
     const all = readFileSync(file, 'utf8').trimEnd().split('\n');
@@ -211,7 +206,7 @@ describe('blockwise fly options', () => {
     doc.mission.legs[2].toAltitude = '49000 ft';
     doc.mission.legs[3].altitude = '49000 ft';
     doc.mission.legs[3].profile = { kind: 'constantAltitude' };
-    const file = join(dir, 'too-high.blockwise.json');
+    const file = join(dir(), 'too-high.blockwise.json');
     writeFileSync(file, JSON.stringify(doc));
     const r = await run('fly', file, '--json');
     const j = JSON.parse(r.out) as Json;

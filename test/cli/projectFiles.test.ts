@@ -1,23 +1,17 @@
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { formatLoadFailure, loadProjectFromDisk, readProjectFile } from '../../cli/projectFiles';
 import { deckToJson } from '../../engine/propulsion/deckJson';
+import { scratchFolderForSuite } from '../support/scratchFolder';
 
 const repoRoot = fileURLToPath(new URL('../..', import.meta.url));
 const demoPath = join(repoRoot, 'fixtures/demo/demo.blockwise.json');
 const demoText = readFileSync(demoPath, 'utf8');
 
 describe('loadProjectFromDisk', () => {
-  let dir = '';
-  beforeAll(() => {
-    dir = mkdtempSync(join(tmpdir(), 'blockwise-project-'));
-  });
-  afterAll(() => {
-    rmSync(dir, { recursive: true, force: true });
-  });
+  const dir = scratchFolderForSuite('blockwise-project-');
 
   it('loadProjectFromDisk reads the demo and its deck from the project folder', async () => {
     const r = await loadProjectFromDisk(demoPath);
@@ -38,11 +32,11 @@ describe('loadProjectFromDisk', () => {
   it('loadProjectFromDisk reads a deck in the JSON form by its extension', async () => {
     const csv = await loadProjectFromDisk(demoPath);
     if (!csv.ok || csv.value.deck === undefined) throw new Error('demo did not load');
-    writeFileSync(join(dir, 'engine.deck.json'), deckToJson(csv.value.deck));
+    writeFileSync(join(dir(), 'engine.deck.json'), deckToJson(csv.value.deck));
     const doc = JSON.parse(demoText) as { engine: { deck: unknown } };
     doc.engine.deck = { kind: 'file', path: 'engine.deck.json' };
-    writeFileSync(join(dir, 'json-deck.blockwise.json'), JSON.stringify(doc));
-    const r = await loadProjectFromDisk(join(dir, 'json-deck.blockwise.json'));
+    writeFileSync(join(dir(), 'json-deck.blockwise.json'), JSON.stringify(doc));
+    const r = await loadProjectFromDisk(join(dir(), 'json-deck.blockwise.json'));
     expect(r.ok).toBe(true);
     if (!r.ok) return;
     const condition = { altitude_m: 8000, mach: 0.6, isaDev_K: 0 };
@@ -50,14 +44,14 @@ describe('loadProjectFromDisk', () => {
   });
 
   it('loadProjectFromDisk names the deck file, line and column of a broken deck', async () => {
-    writeFileSync(join(dir, 'broken.deck.csv'), '# title: broken (invented)\naltitude[ft],mach[-],power[-],thrust[lbf],fuel_flow[lb/h]\n0,0,1,12x0,100\n');
+    writeFileSync(join(dir(), 'broken.deck.csv'), '# title: broken (invented)\naltitude[ft],mach[-],power[-],thrust[lbf],fuel_flow[lb/h]\n0,0,1,12x0,100\n');
     const doc = JSON.parse(demoText) as { engine: { deck: unknown } };
     doc.engine.deck = { kind: 'file', path: 'broken.deck.csv' };
-    writeFileSync(join(dir, 'broken-deck.blockwise.json'), JSON.stringify(doc));
-    const r = await loadProjectFromDisk(join(dir, 'broken-deck.blockwise.json'));
+    writeFileSync(join(dir(), 'broken-deck.blockwise.json'), JSON.stringify(doc));
+    const r = await loadProjectFromDisk(join(dir(), 'broken-deck.blockwise.json'));
     expect(r.ok).toBe(false);
     if (r.ok) return;
-    expect(r.error.file).toBe(join(dir, 'broken.deck.csv'));
+    expect(r.error.file).toBe(join(dir(), 'broken.deck.csv'));
     const text = formatLoadFailure(r.error);
     expect(text).toContain('line 3');
     expect(text).toContain('12x0');
@@ -78,7 +72,7 @@ describe('loadProjectFromDisk', () => {
     const doc = JSON.parse(demoText) as { engine: { deck: Record<string, unknown> } };
     doc.engine.deck.path = 'not-beside-the-project.deck.json';
     doc.engine.deck.text = deckToJson(fromFile.value.deck);
-    const path = join(dir, 'with-deck-inside.blockwise.json');
+    const path = join(dir(), 'with-deck-inside.blockwise.json');
     writeFileSync(path, JSON.stringify(doc));
     const r = await loadProjectFromDisk(path);
     if (!r.ok) throw new Error(formatLoadFailure(r.error));
@@ -88,7 +82,7 @@ describe('loadProjectFromDisk', () => {
   });
 
   it('readProjectFile reports a folder given as a project', async () => {
-    const r = await readProjectFile(dir);
+    const r = await readProjectFile(dir());
     expect(r.ok).toBe(false);
     if (!r.ok) expect(formatLoadFailure(r.error)).toContain('folder');
   });

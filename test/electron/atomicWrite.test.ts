@@ -3,7 +3,7 @@ import { chmod, lstat, readFile, readdir, symlink, utimes, writeFile } from 'nod
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { atomicWriteFile, nodeAtomicWriteOps, removeStaleTemporaries, STALE_TEMPORARY_AGE_MS, tempPathFor, type AtomicWriteOps } from '../../electron/atomicWrite';
-import { scratchFolderEachTest } from './support/scratchFolder';
+import { scratchFolderEachTest } from '../support/scratchFolder';
 
 // Safe-save contract (POSIX rename(2): replacing a name is atomic within one
 // file system; write-temp-fsync-rename is common practice): a failure at any

@@ -2,7 +2,7 @@ import { utimes, writeFile, mkdir } from 'node:fs/promises';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { discardRecovery, readRecoveryOffer, recoveryFilePath, shouldOfferRecovery, writeRecovery } from '../../electron/autosave';
-import { scratchFolderEachTest } from './support/scratchFolder';
+import { scratchFolderEachTest } from '../support/scratchFolder';
 
 // Recovery rule (common practice for editors with autosave): offer stored
 // unsaved work only when it is newer than the saved project, or the project

@@ -3,7 +3,7 @@ import { realpath, symlink, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { readTextFile, readTextFileAt, withExtension } from '../../electron/fileText';
-import { scratchFolderEachTest } from './support/scratchFolder';
+import { scratchFolderEachTest } from '../support/scratchFolder';
 
 // Reading user files: UTF-8 only (RFC 3629), a leading byte-order mark
 // dropped (common practice), size bounded, regular files only (no devices,

@@ -1,7 +1,7 @@
 import { readFile, writeFile } from 'node:fs/promises';
 import { describe, expect, it } from 'vitest';
 import { RECENT_LIMIT, loadRecentFiles, recentFilesPath, saveRecentFiles, withRecentFile, withoutRecentFile } from '../../electron/recentFiles';
-import { scratchFolderEachTest } from './support/scratchFolder';
+import { scratchFolderEachTest } from '../support/scratchFolder';
 
 // Most-recently-used list behaviour (common practice): newest first, no
 // duplicates, bounded length, a damaged store reported and not trusted.

@@ -6,10 +6,9 @@
  * engine/study. Reference values: the demo deck file's own rows converted
  * with the NIST SP 811 factors (lbf = 4.4482216152605 N, lb = 0.45359237 kg).
  */
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { loadProjectFromDisk } from '../../../cli/projectFiles';
 import { expectOk } from '../../../engine/core/result';
 import { parseProject } from '../../../engine/project/parseProject';
@@ -21,6 +20,7 @@ import type { EngineReplies } from '../../../renderer/worker/engineProtocol';
 import { createDeckCache, runEngineRequest } from '../../../renderer/worker/engineRunner';
 import { expectClose } from '../../support/assertInDelta';
 import { DEMO_DECK, DEMO_PROJECT, repoRoot, run } from '../../cli/support/cliRun';
+import { scratchFolderForSuite } from '../../support/scratchFolder';
 
 const LBF_N = 4.4482216152605; // NIST SP 811
 const LB_KG = 0.45359237; // NIST SP 811
@@ -67,21 +67,15 @@ describe('parseDeckText chooses the form by content', () => {
 });
 
 describe('the CLI and the worker through engine/study', () => {
-  let dir = '';
-  beforeAll(() => {
-    dir = mkdtempSync(join(tmpdir(), 'blockwise-doors-'));
-  });
-  afterAll(() => {
-    rmSync(dir, { recursive: true, force: true });
-  });
+  const dir = scratchFolderForSuite('blockwise-doors-');
 
   it('a JSON deck under a .csv name loads in both doors and flies the same block fuel as the CSV deck', async () => {
     const deck = expectOk(parseDeckText(deckCsvText, DEMO_DECK), 'demo deck');
-    writeFileSync(join(dir, 'engine.csv'), deckToJson(deck));
+    writeFileSync(join(dir(), 'engine.csv'), deckToJson(deck));
     const doc = JSON.parse(projectText) as { engine: { deck: unknown } };
     doc.engine.deck = { kind: 'file', path: 'engine.csv' };
-    writeFileSync(join(dir, 'json-as-csv.blockwise.json'), JSON.stringify(doc));
-    const cli = await loadProjectFromDisk(join(dir, 'json-as-csv.blockwise.json'));
+    writeFileSync(join(dir(), 'json-as-csv.blockwise.json'), JSON.stringify(doc));
+    const cli = await loadProjectFromDisk(join(dir(), 'json-as-csv.blockwise.json'));
     if (!cli.ok) throw new Error(JSON.stringify(cli.error));
     const app = workerStudy(demoProject('engine.csv'), { name: 'engine.csv', text: deckToJson(deck) });
     const fromCsv = workerStudy(demoProject('demo.csv'), { name: 'demo.csv', text: deckCsvText });
@@ -94,7 +88,7 @@ describe('the CLI and the worker through engine/study', () => {
   });
 
   it('fly --csv writes, byte for byte, the CSV the app exports for the same study', async () => {
-    const file = join(dir, 'history.csv');
+    const file = join(dir(), 'history.csv');
     const r = await run('fly', DEMO_PROJECT, '--csv', file, '--json');
     expect(r.code).toBe(0);
     const cliCsv = readFileSync(file, 'utf8');
@@ -103,7 +97,7 @@ describe('the CLI and the worker through engine/study', () => {
     expect(historyCsv(app.mission.history)).toBe(cliCsv);
     expect(JSON.parse(r.out).blockFuel_kg).toBe(app.mission.blockFuel_kg);
     // In display units (the app exports in the units the user chose): the same file from both doors.
-    const customaryFile = join(dir, 'history-customary.csv');
+    const customaryFile = join(dir(), 'history-customary.csv');
     expect((await run('fly', DEMO_PROJECT, '--csv', customaryFile, '--csv-units', 'customary')).code).toBe(0);
     expect(readFileSync(customaryFile, 'utf8')).toBe(historyCsv(app.mission.history, { display: 'customary' }));
   });
@@ -113,8 +107,8 @@ describe('the CLI and the worker through engine/study', () => {
     const text = readFileSync(join(repoRoot, name), 'utf8');
     const doc = JSON.parse(projectText) as { engine: { deck: unknown } };
     doc.engine.deck = { kind: 'file', path: join(repoRoot, name) };
-    writeFileSync(join(dir, 'bad.blockwise.json'), JSON.stringify(doc));
-    const cli = await loadProjectFromDisk(join(dir, 'bad.blockwise.json'));
+    writeFileSync(join(dir(), 'bad.blockwise.json'), JSON.stringify(doc));
+    const cli = await loadProjectFromDisk(join(dir(), 'bad.blockwise.json'));
     const app = runEngineRequest({ kind: 'study', project: demoProject(name), deckFile: { name: join(repoRoot, name), text } }, createDeckCache());
     if (cli.ok || app.ok || app.error.kind !== 'deck') throw new Error('expected both doors to refuse the deck');
     // The CLI lists each deck error under the project field that names the deck.
