@@ -1,12 +1,10 @@
-import { mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { loadProjectFromDisk } from '../../cli/projectFiles';
 import { SAFETY_NOTICE_LINES } from '../../engine/core/notice';
 import { solveMission } from '../../engine/mission/solveMission';
 import { expectClose } from '../support/assertInDelta';
-import { DEMO_PROJECT as DEMO, repoRoot, run, writeShortDemo, type Json } from './support/cliRun';
+import { DEMO_PROJECT as DEMO, repoRoot, run, type Json, shortDemoForSuite } from './support/cliRun';
 
 const FT = 0.3048; // NIST SP 811
 const LB = 0.45359237; // NIST SP 811
@@ -16,13 +14,7 @@ const LONG = 240_000;
 
 // A lighter copy of the demo mission (800 nmi at constant cruise altitude) so the 16-mission comparison
 // and the trade factors stay light, and block fuel is smooth in the perturbations (no step-climb decisions).
-let dir = '';
-let shortProject = '';
-beforeAll(() => {
-  dir = mkdtempSync(join(tmpdir(), 'blockwise-analysis-'));
-  shortProject = writeShortDemo(dir);
-});
-afterAll(() => rmSync(dir, { recursive: true, force: true }));
+const demo = shortDemoForSuite('blockwise-analysis-');
 
 describe('blockwise crossover', () => {
   it('crossover --json gives the crossover Machs with T = D there, within the stated tolerance', async () => {
@@ -130,11 +122,11 @@ describe('blockwise envelope and range-speeds', () => {
 
 describe('blockwise payload-range, compare and trade', () => {
   it('payload-range --json corners agree with missions flown directly', async () => {
-    const r = await run('payload-range', shortProject, '--between', '0', '--json');
+    const r = await run('payload-range', demo.project(), '--between', '0', '--json');
     expect(r.code).toBe(0);
     const j = JSON.parse(r.out) as { maxPayload: { payload_kg: number; range_m: number; blockFuel_kg: number }; ferry: { payload_kg: number } };
     expect(j.ferry.payload_kg).toBe(0);
-    const loaded = await loadProjectFromDisk(shortProject);
+    const loaded = await loadProjectFromDisk(demo.project());
     if (!loaded.ok) throw new Error('short project must load');
     // The corner flies full tanks to a residual in the fixed-mass fuel band (0 to 0.004 kg); payload-and-range mode
     // aims inside its own band (0 to 0.02 kg), so at exactly that range it may need a hair more than the tanks hold.
@@ -145,7 +137,7 @@ describe('blockwise payload-range, compare and trade', () => {
   }, LONG);
 
   it('compare --json breakdown adds up to the block-fuel difference and the designs match fly', async () => {
-    const r = await run('compare', shortProject, '--json');
+    const r = await run('compare', demo.project(), '--json');
     expect(r.code).toBe(0);
     const j = JSON.parse(r.out) as {
       designs: { name: string; blockFuel_kg: number }[];
@@ -156,15 +148,15 @@ describe('blockwise payload-range, compare and trade', () => {
     expect(j.breakdown.method).toBe('shapley');
     const sum = j.breakdown.parts.reduce((s, p) => s + p.blockFuel_kg, 0);
     expectClose(sum, j.difference.blockFuel_kg, { abs: 1e-9 }, 'Shapley efficiency (Shapley 1953)');
-    const flyA = await run('fly', shortProject, '--inlet', j.designs[0]!.name, '--json');
+    const flyA = await run('fly', demo.project(), '--inlet', j.designs[0]!.name, '--json');
     expectClose((JSON.parse(flyA.out) as { blockFuel_kg: number }).blockFuel_kg, j.designs[0]!.blockFuel_kg, { abs: 1e-9 }, 'blockwise fly');
-    const bad = await run('compare', shortProject, '--inlets', 'only-one');
+    const bad = await run('compare', demo.project(), '--inlets', 'only-one');
     expect(bad.code).toBe(2);
     expect(bad.err).toMatch(/--inlets: expected two names/);
   }, LONG);
 
   it('trade --json gives the four factors with both step sizes', async () => {
-    const r = await run('trade', shortProject, '--json');
+    const r = await run('trade', demo.project(), '--json');
     expect(r.code).toBe(0);
     const j = JSON.parse(r.out) as { factors: { name: string; blockFuelPerUnit_kg: number | null; blockFuelPerUnitHalfStep_kg: number | null; converged: boolean }[] };
     expect(j.factors.map((f) => f.name)).toEqual(['recovery', 'dragCount', 'tsfc', 'oew']);
@@ -181,7 +173,7 @@ describe('blockwise payload-range, compare and trade', () => {
     const rec = j.factors.find((f) => f.name === 'recovery')! as (typeof j.factors)[number] & { note: string | null };
     if (!rec.converged) expect(rec.note).toMatch(/disagree/);
     expect(Math.abs(rec.blockFuelPerUnit_kg! - rec.blockFuelPerUnitHalfStep_kg!)).toBeLessThan(0.1 * Math.abs(rec.blockFuelPerUnitHalfStep_kg!));
-    const text = await run('trade', shortProject);
+    const text = await run('trade', demo.project());
     for (const line of SAFETY_NOTICE_LINES) expect(text.out).toContain(line);
     // The project's own recovery method (the demo deck's sensitivity columns) is the recovery factor above, taken
     // rather than flown again: its row carries the same figures and baseline.

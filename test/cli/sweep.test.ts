@@ -1,22 +1,15 @@
-import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { existsSync, mkdtempSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { parseJsonText } from '../../engine/project/jsonText';
 import { parseVary } from '../../engine/project/sweepGrid';
 import type { SweepRow } from '../../engine/project/sweepCase';
 import { runSweepPool } from '../../cli/sweep/sweepPool';
 import { SAFETY_NOTICE_LINES } from '../../engine/core/notice';
 import { FUEL_TOLERANCE_KG } from '../../engine/mission/fuelIteration';
-import { run, writeShortDemo, type Json } from './support/cliRun';
+import { run, writeShortDemo, type Json, shortDemoForSuite } from './support/cliRun';
 
-let dir = '';
-let project = '';
-beforeAll(() => {
-  dir = mkdtempSync(join(tmpdir(), 'blockwise-sweep-'));
-  project = writeShortDemo(dir, '600 nmi');
-});
-afterAll(() => rmSync(dir, { recursive: true, force: true }));
+const demo = shortDemoForSuite('blockwise-sweep-', '600 nmi');
 
 /** The data rows of a sweep CSV (after the # notice lines and the header), by case number. */
 function csvRows(text: string): Map<number, string[]> {
@@ -31,9 +24,9 @@ function csvRows(text: string): Map<number, string[]> {
 
 describe('blockwise sweep', () => {
   it('blockwise sweep writes one row per case whose block fuel is the single fly run of that case, within the fuel band', async () => {
-    const out = join(dir, 'ranges.csv');
+    const out = join(demo.dir(), 'ranges.csv');
     // One worker: the second and third cases start from their neighbours' solves (engine/study/prepareSweep.ts).
-    const r = await run('sweep', project, '--vary', 'mission.solve.range=600nmi:700nmi:50nmi', '--workers', '1', '--out', out);
+    const r = await run('sweep', demo.project(), '--vary', 'mission.solve.range=600nmi:700nmi:50nmi', '--workers', '1', '--out', out);
     expect(r.err).toBe('');
     expect(r.code).toBe(0);
     expect(r.out).toMatch(/^3 of 3 cases flown in .* on 1 threads; status: ok 3; rows in /);
@@ -44,7 +37,7 @@ describe('blockwise sweep', () => {
     const rows = csvRows(text);
     expect([...rows.keys()].sort()).toEqual([0, 1, 2]);
     for (const [k, range] of [[0, '600 nmi'], [1, '650 nmi'], [2, '700 nmi']] as const) {
-      const single = await run('fly', writeShortDemo(mkdtempSync(join(dir, 'one-')), range), '--json');
+      const single = await run('fly', writeShortDemo(mkdtempSync(join(demo.dir(), 'one-')), range), '--json');
       const doc = JSON.parse(single.out) as Json & { blockFuel_kg: number; blockTime_s: number; takeoffWeight_kg: number };
       const row = rows.get(k)!;
       expect(row[1]).toBe(range);
@@ -59,7 +52,7 @@ describe('blockwise sweep', () => {
   it('blockwise sweep --shard i/n flies disjoint blocks that together are the whole grid', async () => {
     const seen: number[] = [];
     for (const shard of ['1/3', '2/3', '3/3']) {
-      const r = await run('sweep', project, '--vary', 'polar.cdIncrement=0:0.0004:0.0001', '--workers', '1', '--shard', shard, '--json');
+      const r = await run('sweep', demo.project(), '--vary', 'polar.cdIncrement=0:0.0004:0.0001', '--workers', '1', '--shard', shard, '--json');
       expect(r.code).toBe(0);
       const lines = r.out.trim().split('\n').map((l) => JSON.parse(l) as Json);
       expect(lines[0]!.cases).toBe(5);
@@ -69,24 +62,24 @@ describe('blockwise sweep', () => {
   }, 120_000);
 
   it('blockwise sweep names the bad part of a --vary on one line with exit code 2', async () => {
-    const r = await run('sweep', project, '--vary', 'mission.solve.rnage=1:2:1');
+    const r = await run('sweep', demo.project(), '--vary', 'mission.solve.rnage=1:2:1');
     expect(r.code).toBe(2);
     expect(r.out).toBe('');
     expect(r.err).toMatch(/^blockwise sweep: --vary mission.solve.rnage=1:2:1: mission.solve has no field "rnage"; it has .*range.*\n$/);
-    const none = await run('sweep', project);
+    const none = await run('sweep', demo.project());
     expect(none.code).toBe(2);
     expect(none.err).toMatch(/give at least one --vary/);
-    const shard = await run('sweep', project, '--vary', 'polar.cdIncrement=0:0.001:0.001', '--shard', '4/3');
+    const shard = await run('sweep', demo.project(), '--vary', 'polar.cdIncrement=0:0.001:0.001', '--shard', '4/3');
     expect(shard.err).toMatch(/--shard 4\/3: i must be from 1 to 3/);
   });
 
   it('runSweepPool over three lanes flies every case of its range exactly once, lanes taken over as they finish', async () => {
-    const doc = parseJsonText(readFileSync(project, 'utf8'));
+    const doc = parseJsonText(readFileSync(demo.project(), 'utf8'));
     if (!doc.ok) throw new Error('short demo does not parse');
     const axis = parseVary(doc.value, 'polar.cdIncrement=0:0.0012:0.0001');
     if (!axis.ok) throw new Error(axis.error.message);
     const { loadProjectFromDisk } = await import('../../cli/projectFiles');
-    const loaded = await loadProjectFromDisk(project);
+    const loaded = await loadProjectFromDisk(demo.project());
     if (!loaded.ok) throw new Error('short demo does not load');
     const seen: number[] = [];
     const pool = runSweepPool({ doc: doc.value, axes: [axis.value], deck: loaded.value.deck, inletName: undefined }, { start: 2, end: 13 }, 3, (r) => {
@@ -98,8 +91,8 @@ describe('blockwise sweep', () => {
   }, 120_000);
 
   it('blockwise sweep interrupted (SIGINT) keeps the rows flown, says so and exits with 130', async () => {
-    const out = join(dir, 'interrupted.csv');
-    const running = run('sweep', project, '--vary', 'polar.cdIncrement=0:0.01:0.00005', '--workers', '1', '--out', out);
+    const out = join(demo.dir(), 'interrupted.csv');
+    const running = run('sweep', demo.project(), '--vary', 'polar.cdIncrement=0:0.01:0.00005', '--workers', '1', '--out', out);
     // Interrupted once some rows are on disk (the grid has 201 cases; the rows are written as they come).
     for (let i = 0; i < 600 && !(existsSync(out) && csvRows(readFileSync(out, 'utf8')).size >= 3); i++) await new Promise((r) => setTimeout(r, 100));
     process.emit('SIGINT');
@@ -114,13 +107,13 @@ describe('blockwise sweep', () => {
   }, 120_000);
 
   it('runSweepPool stopped early keeps the rows received and says it was stopped', async () => {
-    const doc = parseJsonText(readFileSync(project, 'utf8'));
+    const doc = parseJsonText(readFileSync(demo.project(), 'utf8'));
     if (!doc.ok) throw new Error('short demo does not parse');
     const axis = parseVary(doc.value, 'polar.cdIncrement=0:0.01:0.0001');
     if (!axis.ok) throw new Error(axis.error.message);
     const rows: SweepRow[] = [];
     const { loadProjectFromDisk } = await import('../../cli/projectFiles');
-    const loaded = await loadProjectFromDisk(project);
+    const loaded = await loadProjectFromDisk(demo.project());
     if (!loaded.ok) throw new Error('short demo does not load');
     const pool = runSweepPool({ doc: doc.value, axes: [axis.value], deck: loaded.value.deck, inletName: undefined }, { start: 0, end: 101 }, 1, (r) => {
       rows.push(...r);

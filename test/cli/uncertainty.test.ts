@@ -5,26 +5,17 @@
  * seed giving the same numbers, and bad options as usage errors. The
  * statistics themselves are checked in test/engine/uncertainty.
  */
-import { mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { run, writeShortDemo, type Json } from './support/cliRun';
+import { describe, expect, it } from 'vitest';
+import { run, type Json, shortDemoForSuite } from './support/cliRun';
 
 const LONG = 240_000;
-let dir = '';
-let shortProject = '';
-beforeAll(() => {
-  dir = mkdtempSync(join(tmpdir(), 'blockwise-uncertainty-'));
-  shortProject = writeShortDemo(dir, '600 nmi');
-});
-afterAll(() => rmSync(dir, { recursive: true, force: true }));
+const demo = shortDemoForSuite('blockwise-uncertainty-', '600 nmi');
 
 type Band = { mean: number; sd: number; p05: number; p50: number; p95: number };
 
 describe('blockwise uncertainty', () => {
   it('--json keeps the contract, and the same seed gives the same numbers', async () => {
-    const a = await run('uncertainty', shortProject, '--samples', '6', '--seed', '7', '--json');
+    const a = await run('uncertainty', demo.project(), '--samples', '6', '--seed', '7', '--json');
     expect(a.err).toBe('');
     expect(a.code).toBe(0);
     const doc = (JSON.parse(a.out) as { uncertainty: Json & { designs: { name: string; blockFuel_kg: Band }[]; difference_kg: Band; drivers: Json[] } }).uncertainty;
@@ -37,13 +28,13 @@ describe('blockwise uncertainty', () => {
     }
     expect(typeof doc.probabilityBBetter).toBe('number');
     expect(doc.drivers.length).toBe(10); // the demo declares ten uncertain inputs
-    const b = await run('uncertainty', shortProject, '--samples', '6', '--seed', '7', '--json');
+    const b = await run('uncertainty', demo.project(), '--samples', '6', '--seed', '7', '--json');
     const again = (JSON.parse(b.out) as { uncertainty: Json }).uncertainty;
     expect({ ...again, elapsed_s: 0 }).toEqual({ ...doc, elapsed_s: 0 });
   }, LONG);
 
   it('prints the band, P(B better) and the drivers, ending with the notice', async () => {
-    const r = await run('uncertainty', shortProject, '--samples', '4');
+    const r = await run('uncertainty', demo.project(), '--samples', '4');
     expect(r.code).toBe(0);
     expect(r.out).toContain('B - A');
     expect(r.out).toMatch(/P\(B burns less block fuel than A\) = \d+\.\d %/);
@@ -53,7 +44,7 @@ describe('blockwise uncertainty', () => {
 
   it('refuses bad --samples and --seed with exit 2', async () => {
     for (const args of [['--samples', 'ten'], ['--samples', '1'], ['--seed', '-3'], ['--seed', '1.5']]) {
-      const r = await run('uncertainty', shortProject, ...args);
+      const r = await run('uncertainty', demo.project(), ...args);
       expect(r.code, args.join(' ')).toBe(2);
       expect(r.err).toMatch(/--(samples|seed)/);
     }
@@ -62,19 +53,19 @@ describe('blockwise uncertainty', () => {
 
 describe('blockwise compare --uncertainty', () => {
   it('adds the Monte Carlo to the comparison, text and JSON', async () => {
-    const j = await run('compare', shortProject, '--uncertainty', '--samples', '3', '--json');
+    const j = await run('compare', demo.project(), '--uncertainty', '--samples', '3', '--json');
     expect(j.code).toBe(0);
     const doc = JSON.parse(j.out) as { breakdown: Json; uncertainty: { difference_kg: Band; samples: number } };
     expect(doc.breakdown.method).toBe('shapley');
     expect(doc.uncertainty.samples).toBe(3);
     expect(Number.isFinite(doc.uncertainty.difference_kg.p95)).toBe(true);
-    const t = await run('compare', shortProject, '--uncertainty', '--samples', '3');
+    const t = await run('compare', demo.project(), '--uncertainty', '--samples', '3');
     expect(t.out).toContain('Block-fuel difference B - A');
     expect(t.out).toContain('Uncertainty — 3 of 3 samples');
   }, LONG);
 
   it('--samples without --uncertainty is a usage error', async () => {
-    const r = await run('compare', shortProject, '--samples', '3');
+    const r = await run('compare', demo.project(), '--samples', '3');
     expect(r.code).toBe(2);
   });
 });

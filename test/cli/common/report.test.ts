@@ -1,12 +1,11 @@
-import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { analysisFailed, cautionBlock, EXIT_ANALYSIS_FAILED, isaText, printJsonReport, reportText } from '../../../cli/common/report';
 import { verbs } from '../../../cli/verbs/index';
 import type { Caution } from '../../../engine/cautions/caution';
 import { SAFETY_NOTICE, SAFETY_NOTICE_LINES } from '../../../engine/core/notice';
-import { DEMO_DECK, DEMO_PROJECT, run, writeShortDemo, type Json } from '../support/cliRun';
+import { DEMO_DECK, DEMO_PROJECT, run, type Json, shortDemoForSuite } from '../support/cliRun';
 
 // The notice every summary carries is a product rule (DESIGN.md §7), not a computed value:
 // the checks below hold the command line to it.
@@ -60,13 +59,7 @@ describe('analysisFailed and isaText', () => {
 // Every registered verb, run on the demo files (the missions on a short copy of the demo so the
 // 16-mission comparison and the trade factors stay light). A verb added to cli/verbs/index.ts
 // without an entry here fails the first test.
-let dir = '';
-let shortProject = '';
-beforeAll(() => {
-  dir = mkdtempSync(join(tmpdir(), 'blockwise-notice-'));
-  shortProject = writeShortDemo(dir, '600 nmi');
-});
-afterAll(() => rmSync(dir, { recursive: true, force: true }));
+const demo = shortDemoForSuite('blockwise-notice-', '600 nmi');
 
 const ARGUMENTS: Readonly<Record<string, (project: string) => string[]>> = {
   fly: (p) => ['fly', p],
@@ -81,10 +74,10 @@ const ARGUMENTS: Readonly<Record<string, (project: string) => string[]>> = {
   compare: (p) => ['compare', p],
   trade: (p) => ['trade', p],
   uncertainty: (p) => ['uncertainty', p, '--samples', '3'],
-  sweep: (p) => ['sweep', p, '--vary', 'polar.cdIncrement=0:0.0001:0.0001', '--workers', '1', '--out', join(dir, 'sweep.csv')],
+  sweep: (p) => ['sweep', p, '--vary', 'polar.cdIncrement=0:0.0001:0.0001', '--workers', '1', '--out', join(demo.dir(), 'sweep.csv')],
   'cycle point': () => ['cycle', 'point', 'fixtures/cycle/demo-turbofan.cycle.json', '--altitude', '35000 ft', '--mach', '0.78', '--rating', 'maxCruise'],
   'cycle deck': () => ['cycle', 'deck', 'fixtures/cycle/demo-turbofan.cycle.json', '--out', join(tmpdir(), `blockwise-report-cycle-${process.pid}.csv`), '--altitudes', '0, 35000 ft', '--machs', '0, 0.8'],
-  'cycle match': () => ['cycle', 'match', 'fixtures/parametric/demo-parametric.deck.csv', '--start', 'fixtures/cycle/demo-turbofan.cycle.json', '--out', join(dir, 'match.cycle.json'), '--free', 'airflow', '--nodes', '2'],
+  'cycle match': () => ['cycle', 'match', 'fixtures/parametric/demo-parametric.deck.csv', '--start', 'fixtures/cycle/demo-turbofan.cycle.json', '--out', join(demo.dir(), 'match.cycle.json'), '--free', 'airflow', '--nodes', '2'],
 };
 
 describe('every verb ends with the safety notice', () => {
@@ -93,7 +86,7 @@ describe('every verb ends with the safety notice', () => {
   });
 
   it.each(verbs.map((v) => v.name))('blockwise %s prints text ending with the notice and JSON carrying it', async (name) => {
-    const argv = ARGUMENTS[name]!(shortProject);
+    const argv = ARGUMENTS[name]!(demo.project());
     const text = await run(...argv);
     expect(text.err, `${name} stderr`).toBe('');
     expect(text.code, `${name} exit code`).toBe(0);

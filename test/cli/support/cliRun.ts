@@ -5,7 +5,9 @@
 import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { beforeAll } from 'vitest';
 import { runCli } from '../../../cli/main';
+import { scratchFolderForSuite } from '../../support/scratchFolder';
 
 /** The repository root (the tests run the CLI with it as working folder). */
 export const repoRoot = fileURLToPath(new URL('../../..', import.meta.url));
@@ -44,4 +46,23 @@ export function writeShortDemo(dir: string, range = '800 nmi'): string {
   const path = join(dir, 'short.blockwise.json');
   writeFileSync(path, JSON.stringify(demo, null, 2));
   return path;
+}
+
+/**
+ * A scratch folder for the suite this is called in (a describe block, or the file at its top level) holding a short
+ * demo project (writeShortDemo, flown to `range`): `dir()` is the folder, `project()` the project file.
+ */
+export function shortDemoForSuite(prefix: string, range?: string): { readonly dir: () => string; readonly project: () => string } {
+  const dir = scratchFolderForSuite(prefix);
+  let project: string | undefined;
+  beforeAll(() => {
+    project = writeShortDemo(dir(), range);
+  });
+  return {
+    dir,
+    project: () => {
+      if (project === undefined) throw new Error('shortDemoForSuite: the project exists only while its tests run');
+      return project;
+    },
+  };
 }
