@@ -52,6 +52,18 @@ async function settledBlockFuel(isTheDocument: () => void): Promise<number> {
   return fuel;
 }
 
+/** The demo deck in its JSON form (docs/deck-format.md), with every point's fuel flow times `fuelFlowFactor`. */
+function demoDeckJson(fuelFlowFactor = 1): string {
+  const csv = parseDeckText(demoFiles().deckText, 'demo-engine.deck.csv');
+  if (!csv.ok) throw new Error('demo deck does not parse');
+  if (fuelFlowFactor === 1) return deckToJson(csv.value);
+  const json = JSON.parse(deckToJson(csv.value)) as { columns: string[]; points: number[][] };
+  const ff = json.columns.indexOf('fuelFlow_kg_s');
+  expect(ff).toBeGreaterThanOrEqual(0);
+  for (const p of json.points) p[ff] = p[ff]! * fuelFlowFactor;
+  return JSON.stringify(json);
+}
+
 function renderApp(setup: (bridge: FakeBridge) => void = () => undefined) {
   const bridge = createFakeBridge();
   setup(bridge);
@@ -136,9 +148,7 @@ describe('the App with the demo study', () => {
     const bridge = renderApp();
     const before = await blockFuel();
     // docs/deck-format.md "JSON form": deckToJson writes the JSON form with exact round trip, so the same deck as JSON flies the same mission.
-    const csv = parseDeckText(demoFiles().deckText, 'demo-engine.deck.csv');
-    if (!csv.ok) throw new Error('demo deck does not parse');
-    bridge.nextDeck = { name: 'same-engine.deck.json', text: deckToJson(csv.value) };
+    bridge.nextDeck = { name: 'same-engine.deck.json', text: demoDeckJson() };
     fireEvent.click(screen.getByTestId('command-importDeck'));
     await waitFor(() => expect(screen.getByTestId('app-message').textContent).toMatch(/^Imported deck same-engine\.deck\.json\./), { timeout: 15000 });
     fireEvent.click(screen.getByTestId('view-tab-engine'));
@@ -152,15 +162,9 @@ describe('the App with the demo study', () => {
   it('undo after a deck import re-flies the old deck and marks the project unedited; redo flies the import again', async () => {
     const bridge = renderApp();
     const before = await blockFuel();
-    const csv = parseDeckText(demoFiles().deckText, 'demo-engine.deck.csv');
-    if (!csv.ok) throw new Error('demo deck does not parse');
     // The same deck burning 10 % more fuel at every point: by Breguet's range equation (fuel burn grows with
     // specific fuel consumption) the mission must take more fuel; only the direction is checked.
-    const json = JSON.parse(deckToJson(csv.value)) as { columns: string[]; points: number[][] };
-    const ff = json.columns.indexOf('fuelFlow_kg_s');
-    expect(ff).toBeGreaterThanOrEqual(0);
-    for (const p of json.points) p[ff] = p[ff]! * 1.1;
-    bridge.nextDeck = { name: 'thirsty.deck.json', text: JSON.stringify(json) };
+    bridge.nextDeck = { name: 'thirsty.deck.json', text: demoDeckJson(1.1) };
     fireEvent.click(screen.getByTestId('command-importDeck'));
     const thirsty = await waitForChange(before);
     expect(thirsty).toBeGreaterThan(before);
@@ -216,13 +220,8 @@ describe('the App with the demo study', () => {
   it('the browser build saves the deck inside the project: reopening it later flies that deck again', async () => {
     const bridge = renderApp();
     const before = await blockFuel();
-    const csv = parseDeckText(demoFiles().deckText, 'demo-engine.deck.csv');
-    if (!csv.ok) throw new Error('demo deck does not parse');
     // A deck burning 20 % more fuel everywhere needs more block fuel (Breguet's range equation; direction only).
-    const json = JSON.parse(deckToJson(csv.value)) as { columns: string[]; points: number[][] };
-    const ff = json.columns.indexOf('fuelFlow_kg_s');
-    for (const p of json.points) p[ff] = p[ff]! * 1.2;
-    const thirstyText = JSON.stringify(json);
+    const thirstyText = demoDeckJson(1.2);
     bridge.nextDeck = { name: 'thirsty.deck.json', text: thirstyText };
     fireEvent.click(screen.getByTestId('command-importDeck'));
     const thirsty = await waitForChange(before);
