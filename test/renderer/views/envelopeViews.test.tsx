@@ -1,9 +1,10 @@
-import { fireEvent, screen, waitFor } from '@testing-library/react';
+import { screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { formatQuantity } from '../../../engine/units';
 import { EnvelopeView } from '../../../renderer/views/EnvelopeView';
 import type { LiveStudy } from '../../../renderer/worker/useEngine';
 import { demoState, renderWithStudy, TEST_CHART } from '../support/studyHarness';
+import { expectMassAboveMtowRefused } from '../support/massAboveMtow';
 
 const live: LiveStudy = { snapshot: null, snapshotRevision: 0, revision: 0, stale: false, running: false, failure: null };
 /** SI unit symbols that must not appear on a customary screen (NIST SP 811 symbols). */
@@ -33,16 +34,6 @@ describe('EnvelopeView', () => {
   }, 30000);
 
   it('shows why there is no envelope for a mass above MTOW, without NaN', async () => {
-    const initial = { ...demoState(), units: 'customary' as const };
-    renderWithStudy(<EnvelopeView live={live} chartSize={TEST_CHART} />, initial);
-    await screen.findByTestId('chart-envelope', {}, { timeout: 20000 });
-    const field = screen.getByTestId('field-envelope-mass');
-    const mtow_lb = initial.doc!.present.airframe.weights.maxTakeoff / 0.45359237;
-    fireEvent.change(field, { target: { value: `${Math.round(mtow_lb * 1.5)} lb` } });
-    fireEvent.blur(field);
-    const failure = await screen.findByTestId('envelope-failure', {}, { timeout: 20000 });
-    expect(failure.textContent).toMatch(/at most the MTOW/);
-    expect(failure.textContent).not.toMatch(/NaN/);
-    await waitFor(() => expect(screen.queryByTestId('chart-envelope')).toBeNull());
+    await expectMassAboveMtowRefused(<EnvelopeView live={live} chartSize={TEST_CHART} />, { chart: 'chart-envelope', massField: 'field-envelope-mass', failure: 'envelope-failure' }, 20000);
   }, 30000);
 });

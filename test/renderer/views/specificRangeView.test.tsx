@@ -1,8 +1,9 @@
-import { fireEvent, screen, waitFor } from '@testing-library/react';
+import { screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { SpecificRangeView } from '../../../renderer/views/SpecificRangeView';
 import type { LiveStudy } from '../../../renderer/worker/useEngine';
 import { demoState, renderWithStudy, TEST_CHART } from '../support/studyHarness';
+import { expectMassAboveMtowRefused } from '../support/massAboveMtow';
 
 const live: LiveStudy = { snapshot: null, snapshotRevision: 0, revision: 0, stale: false, running: false, failure: null };
 /** SI unit symbols that must not appear on a customary screen (NIST SP 811 symbols). */
@@ -24,16 +25,6 @@ describe('SpecificRangeView', () => {
   }, 40000);
 
   it('shows why there is no result for a mass above MTOW, without NaN', async () => {
-    const initial = { ...demoState(), units: 'customary' as const };
-    renderWithStudy(<SpecificRangeView live={live} chartSize={TEST_CHART} />, initial);
-    await screen.findByTestId('chart-specific-range', {}, { timeout: 30000 });
-    const field = screen.getByTestId('field-sr-mass');
-    const mtow_lb = initial.doc!.present.airframe.weights.maxTakeoff / 0.45359237;
-    fireEvent.change(field, { target: { value: `${Math.round(mtow_lb * 1.5)} lb` } });
-    fireEvent.blur(field);
-    const failure = await screen.findByTestId('sr-failure', {}, { timeout: 30000 });
-    expect(failure.textContent).toMatch(/at most the MTOW/);
-    expect(failure.textContent).not.toMatch(/NaN/);
-    await waitFor(() => expect(screen.queryByTestId('chart-specific-range')).toBeNull());
+    await expectMassAboveMtowRefused(<SpecificRangeView live={live} chartSize={TEST_CHART} />, { chart: 'chart-specific-range', massField: 'field-sr-mass', failure: 'sr-failure' }, 30000);
   }, 40000);
 });
