@@ -6,10 +6,16 @@ import { StudyContext } from '../../../renderer/state/studyContext';
 import { studyReducer } from '../../../renderer/state/studyReducer';
 import { emptyStudy, type StudyState } from '../../../renderer/state/studyState';
 import { createInThreadClient, type EngineClient } from '../../../renderer/worker/engineClient';
-import { EngineContext } from '../../../renderer/worker/useEngine';
+import { EngineContext, type LiveStudy } from '../../../renderer/worker/useEngine';
 import { demoFiles } from './fakeBridge';
 
 export const TEST_CHART = { width: 400, height: 200 };
+
+/** A live study with no result yet, for views that run their own analyses and only pass the live study on. */
+export const NO_LIVE_STUDY: LiveStudy = { snapshot: null, snapshotRevision: 0, revision: 0, stale: false, running: false, failure: null };
+
+/** SI unit symbols that must not appear on a customary screen (NIST SP 811 symbols). */
+export const SI_TEXT = /\b(kg|km|kN|m\/s|hPa|Pa)\b|\d\s?m\b/;
 
 /** The study right after opening the demo project with its deck. */
 export function demoState(): StudyState {

@@ -1,10 +1,9 @@
 import { screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { CrossoverView } from '../../../renderer/views/CrossoverView';
-import type { LiveStudy } from '../../../renderer/worker/useEngine';
-import { demoState, renderWithStudy, TEST_CHART } from '../support/studyHarness';
+import { demoState, renderWithStudy, TEST_CHART, NO_LIVE_STUDY } from '../support/studyHarness';
 
-const live: LiveStudy = { snapshot: null, snapshotRevision: 0, revision: 0, stale: false, running: false, failure: null };
+const live = NO_LIVE_STUDY;
 
 describe('CrossoverView limits', () => {
   it('lists and draws the stall, buffet-onset and VMO/MMO limits beside the crossovers', async () => {

@@ -1,13 +1,10 @@
 import { screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { SpecificRangeView } from '../../../renderer/views/SpecificRangeView';
-import type { LiveStudy } from '../../../renderer/worker/useEngine';
-import { demoState, renderWithStudy, TEST_CHART } from '../support/studyHarness';
+import { demoState, renderWithStudy, TEST_CHART, NO_LIVE_STUDY, SI_TEXT } from '../support/studyHarness';
 import { expectMassAboveMtowRefused } from '../support/massAboveMtow';
 
-const live: LiveStudy = { snapshot: null, snapshotRevision: 0, revision: 0, stale: false, running: false, failure: null };
-/** SI unit symbols that must not appear on a customary screen (NIST SP 811 symbols). */
-const SI_TEXT = /\b(kg|km|kN|m\/s|hPa|Pa)\b|\d\s?m\b/;
+const live = NO_LIVE_STUDY;
 
 describe('SpecificRangeView', () => {
   it('draws specific range against Mach per altitude in nmi per 1000 lb, with the optimum altitude', async () => {
