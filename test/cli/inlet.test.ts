@@ -27,6 +27,16 @@ const GEOMETRY_INLET = {
   weight: '110 kg',
 };
 
+/** GEOMETRY_INLET as the engine holds it once parsed (SI numbers, an empty description), for the direct engine calls. */
+const GEOMETRY_ONE_SI = {
+  name: 'geometry one',
+  description: '',
+  source: { kind: 'geometry', captureArea_m2: 0.56, throatArea_m2: 0.5, fanFaceArea_m2: 0.6, diffuserLossCoefficient: 0.04 },
+  lipSuctionFactor: 0.8,
+  externalDragArea_m2: 0.14,
+  weight_kg: 110,
+} as const;
+
 describe('blockwise inlet', () => {
   it('inlet on the demo project inlets prints both designs, the breakdown and the notice', async () => {
     const r = await run('inlet', DEMO_DECK, '--design', DEMO_PROJECT, '--altitude', '35000 ft', '--mach', '0.8');
@@ -49,14 +59,7 @@ describe('blockwise inlet', () => {
     const model = makeInstalledPropulsion({
       deck,
       engineCount: 2,
-      inlet: {
-        name: 'geometry one',
-        description: '',
-        source: { kind: 'geometry', captureArea_m2: 0.56, throatArea_m2: 0.5, fanFaceArea_m2: 0.6, diffuserLossCoefficient: 0.04 },
-        lipSuctionFactor: 0.8,
-        externalDragArea_m2: 0.14,
-        weight_kg: 110,
-      },
+      inlet: GEOMETRY_ONE_SI,
       installation: { bleed: { kind: 'coreFraction', fraction: 0 }, powerExtraction_W: 0 },
       cautionSettings: DEFAULT_CAUTION_SETTINGS,
     });
@@ -103,14 +106,7 @@ describe('blockwise inlet', () => {
     const model = makeInstalledPropulsion({
       deck,
       engineCount: 2,
-      inlet: {
-        name: 'geometry one',
-        description: '',
-        source: { kind: 'geometry', captureArea_m2: 0.56, throatArea_m2: 0.5, fanFaceArea_m2: 0.6, diffuserLossCoefficient: 0.04 },
-        lipSuctionFactor: 0.8,
-        externalDragArea_m2: 0.14,
-        weight_kg: 110,
-      },
+      inlet: GEOMETRY_ONE_SI,
       installation: { bleed: { kind: 'coreFraction', fraction: 0.01 }, powerExtraction_W: 50e3 },
       cautionSettings: DEFAULT_CAUTION_SETTINGS,
     });
