@@ -1,4 +1,5 @@
 import type { Locator, Page } from 'playwright-core';
+import { expect } from 'vitest';
 
 /** The results view's block fuel (the printable report repeats the same test id, hidden on screen). */
 export function blockFuel(page: Page): Locator {
@@ -53,4 +54,20 @@ export async function openDemo(page: Page): Promise<void> {
     undefined,
     { timeout: 30_000 },
   );
+}
+
+/**
+ * Runs the compare view on the open study and waits for its result (or its failure, whose text then fails the test);
+ * returns the two design names it shows, A first.
+ */
+export async function runCompare(page: Page): Promise<readonly [string | undefined, string | undefined]> {
+  await showView(page, 'compare');
+  await page.getByTestId('compare-run').click();
+  const first = page.getByTestId('compare-design-name-0');
+  const failure = page.getByTestId('compare-failure');
+  await first.or(failure).first().waitFor({ state: 'visible', timeout: 120_000 });
+  // the failure's text only when it is there (textContent on a missing element waits out the 30 s timeout)
+  const failed = await failure.isVisible();
+  expect(failed, failed ? ((await failure.textContent()) ?? '') : '').toBe(false);
+  return [(await first.textContent())?.trim(), (await page.getByTestId('compare-design-name-1').textContent())?.trim()];
 }
