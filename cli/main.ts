@@ -1,8 +1,9 @@
 import { SAFETY_NOTICE } from '../engine/core';
 import { escapeControlCharacters } from '../hostio/terminalText';
 import { EXIT_INTERNAL, EXIT_OK, EXIT_USAGE } from './exitCodes';
-import { parseVerbArgs, UsageError, type CliIo, type Verb } from './verb';
+import { parseVerbArgs, UsageError, type CliIo } from './verb';
 import { VERB_CATALOGUE } from './verbs/catalogue';
+import { isVerbName, VERB_LOADERS } from './verbs/loaders';
 
 function overview(): string {
   const width = Math.max(...VERB_CATALOGUE.map((v) => v.name.length));
@@ -54,16 +55,14 @@ export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<num
     return name === undefined ? EXIT_USAGE : EXIT_OK;
   }
   try {
-    // The verbs (and the engine behind them) load only when one runs, so the
-    // overview above prints at once.
-    const { verbs } = await import('./verbs/index');
-    // Verbs with sub-verbs (e.g. `deck check`) are registered as "deck check".
+    // Only the verb that runs is loaded (and the engine behind it), so the
+    // overview above prints at once and a verb starts without the others.
+    // Verbs with sub-verbs (e.g. `deck check`) are catalogued as "deck check".
     const sub = rest[0];
-    const verb: Verb | undefined =
-      (sub !== undefined && verbs.find((v) => v.name === `${name} ${sub}`)) ||
-      verbs.find((v) => v.name === name);
-    if (!verb) {
-      const subs = subVerbs(name, verbs);
+    const joined = sub === undefined ? '' : `${name} ${sub}`;
+    const known = isVerbName(joined) ? joined : isVerbName(name) ? name : null;
+    if (known === null) {
+      const subs = subVerbs(name, VERB_CATALOGUE);
       if (subs.length > 0) {
         if (sub === '--help' || sub === '-h') {
           io.out(`blockwise ${name} <sub-verb> ...: ${subs.join('; ')}\n`);
@@ -76,6 +75,7 @@ export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<num
       io.err(`blockwise: unknown verb ${JSON.stringify(name)}; run "blockwise --help" for the list\n`);
       return EXIT_USAGE;
     }
+    const verb = await VERB_LOADERS[known]();
     const verbArgv = verb.name.includes(' ') ? rest.slice(1) : rest;
     try {
       const parsed = parseVerbArgs(verb, verbArgv);

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { VERB_CATALOGUE } from '../../../cli/verbs/catalogue';
+import { VERB_CATALOGUE, type VerbName } from '../../../cli/verbs/catalogue';
+import { isVerbName, VERB_LOADERS } from '../../../cli/verbs/loaders';
 import { verbs } from '../../../cli/verbs/index';
 import { run } from '../support/cliRun';
 
@@ -17,5 +18,17 @@ describe('cli/verbs/catalogue.ts', () => {
     expect(help.code).toBe(0);
     for (const v of VERB_CATALOGUE) expect(help.out).toContain(`${v.name}`);
     for (const v of VERB_CATALOGUE) expect(help.out).toContain(v.summary);
+  });
+});
+
+describe('cli/verbs/loaders.ts', () => {
+  it('loads, for every catalogued verb, the very verb the full list registers under that name', async () => {
+    for (const v of verbs) {
+      const name = v.name as VerbName;
+      expect(isVerbName(name)).toBe(true);
+      expect(await VERB_LOADERS[name]()).toBe(v);
+    }
+    expect(Object.keys(VERB_LOADERS)).toHaveLength(verbs.length);
+    expect(isVerbName('fyl')).toBe(false);
   });
 });
