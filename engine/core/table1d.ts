@@ -207,6 +207,23 @@ export function makeTable1d(
 }
 
 /**
+ * The lower node index (0..n-2) of the segment of an increasing axis of two
+ * or more nodes holding `q`, for q within the axis (bisection; a query on a
+ * node gets the segment that starts there, the last node the last segment).
+ * No result object: hot paths call it.
+ */
+export function bisectAxis(axis: readonly number[], q: number): number {
+  let lo = 0;
+  let hi = axis.length - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (axis[mid]! <= q) lo = mid;
+    else hi = mid;
+  }
+  return lo;
+}
+
+/**
  * Locates `q` on an increasing axis: the lower node index of the bracketing
  * segment (0..n-2) and which side the query left. Axes of one point give 0.
  */
@@ -215,14 +232,7 @@ export function locate(axis: readonly number[], q: number): { readonly i: number
   if (n === 1) return { i: 0, outside: null };
   if (q < axis[0]!) return { i: 0, outside: 'below' };
   if (q > axis[n - 1]!) return { i: n - 2, outside: 'above' };
-  let lo = 0;
-  let hi = n - 1;
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    if (axis[mid]! <= q) lo = mid;
-    else hi = mid;
-  }
-  return { i: lo, outside: null };
+  return { i: bisectAxis(axis, q), outside: null };
 }
 
 /** The range error for a query, or null when the policy lets it through. */
@@ -271,14 +281,7 @@ export function clampedValue(table: Table1d, x: number): number {
   const n = xs.length;
   if (n === 1 || x <= xs[0]!) return ys[0]!;
   if (x >= xs[n - 1]!) return ys[n - 1]!;
-  // locate's bisection, without its result object.
-  let i = 0;
-  let hi = n - 1;
-  while (hi - i > 1) {
-    const mid = (i + hi) >> 1;
-    if (xs[mid]! <= x) i = mid;
-    else hi = mid;
-  }
+  const i = bisectAxis(xs, x);
   const h = xs[i + 1]! - xs[i]!;
   const t = (x - xs[i]!) / h;
   if (t === 0) return ys[i]!;

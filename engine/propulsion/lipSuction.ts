@@ -11,7 +11,7 @@
  * held at its edges with the caution `lip_suction_table_range`).
  */
 import { err, ok, type Result } from '../core/result';
-import { lerp } from '../core/table1d';
+import { bisectAxis, lerp } from '../core/table1d';
 import { makeTable2d, type Table2d } from '../core/table2d';
 
 export type LipSuction =
@@ -132,13 +132,7 @@ function axisPosition(axis: readonly number[], q: number): void {
     positionOutside = true;
     return;
   }
-  let lo = 0;
-  let hi = n - 1;
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    if (axis[mid]! <= q) lo = mid;
-    else hi = mid;
-  }
+  const lo = bisectAxis(axis, q);
   positionIndex = lo;
   positionT = (q - axis[lo]!) / (axis[lo + 1]! - axis[lo]!);
 }
