@@ -214,6 +214,25 @@ function checkResult(r: MissionResult): void {
   }
 }
 
+/**
+ * Parses, builds and flies one project text; true when it was flown (checked by checkResult). A project refused on the
+ * way (cross-field checks may refuse a combination) must have every issue name its path.
+ */
+function flyProjectText(text: string, name: string): boolean {
+  const parsed = parseProject(text, name);
+  if (!parsed.ok) {
+    for (const issue of parsed.error) expect(issue.path).toMatch(/\S/);
+    return false;
+  }
+  const built = buildMissionInput(parsed.value, { deck });
+  if (!built.ok) {
+    for (const issue of built.error) expect(issue.path).toMatch(/\S/);
+    return false;
+  }
+  checkResult(solveMission(built.value));
+  return true;
+}
+
 describe('perturbed demo projects, parsed, built and flown', () => {
   it('solveMission never returns a non-finite number and always ends with a status for projects the schema accepts', () => {
     let flown = 0;
@@ -221,19 +240,7 @@ describe('perturbed demo projects, parsed, built and flown', () => {
     fc.assert(
       fc.property(perturbation, (p) => {
         runs++;
-        const parsed = parseProject(perturbedProject(p), 'perturbed.blockwise.json');
-        if (!parsed.ok) {
-          // Cross-field checks may refuse a combination; then every issue names its path.
-          for (const issue of parsed.error) expect(issue.path).toMatch(/\S/);
-          return;
-        }
-        const built = buildMissionInput(parsed.value, { deck });
-        if (!built.ok) {
-          for (const issue of built.error) expect(issue.path).toMatch(/\S/);
-          return;
-        }
-        flown++;
-        checkResult(solveMission(built.value));
+        if (flyProjectText(perturbedProject(p), 'perturbed.blockwise.json')) flown++;
       }),
       { numRuns: 16, seed: 7_2026_12 },
     );
@@ -247,18 +254,7 @@ describe('perturbed demo projects, parsed, built and flown', () => {
     fc.assert(
       fc.property(engineVariant, (v) => {
         runs++;
-        const parsed = parseProject(engineProject(v), 'engine-variant.blockwise.json');
-        if (!parsed.ok) {
-          for (const issue of parsed.error) expect(issue.path).toMatch(/\S/);
-          return;
-        }
-        const built = buildMissionInput(parsed.value, { deck });
-        if (!built.ok) {
-          for (const issue of built.error) expect(issue.path).toMatch(/\S/);
-          return;
-        }
-        flown++;
-        checkResult(solveMission(built.value));
+        if (flyProjectText(engineProject(v), 'engine-variant.blockwise.json')) flown++;
       }),
       { numRuns: 12, seed: 8_2026_12 },
     );
