@@ -8,10 +8,9 @@ import { payloadRangeDiagram } from '../../../engine/analysis/payloadRange';
 import { specificRange } from '../../../engine/analysis/specificRange';
 import { tradeFactors } from '../../../engine/analysis/tradeFactors';
 import { expectOk } from '../../../engine/core/result';
-import { buildMissionInput, projectInlet } from '../../../engine/project/buildMissionInput';
+import { prepareStudy } from '../../../engine/study';
+import { buildMissionInput } from '../../../engine/project/buildMissionInput';
 import { parseProject } from '../../../engine/project/parseProject';
-import { projectDeck } from '../../../engine/project/projectDeck';
-import { cautionSettingsOf, installationOf } from '../../../engine/project/projectSpecs';
 import { parseDeckCsv } from '../../../engine/propulsion/deckCsv';
 import { callCounter, type BenchSection } from '../benchTypes';
 
@@ -22,16 +21,8 @@ const deck = expectOk(parseDeckCsv(readFileSync(`${root}demo-engine.deck.csv`, '
 const input = expectOk(buildMissionInput(project, { deck }), 'demo input');
 const models = { aero: input.aero, propulsion: input.propulsion };
 const [nameA, nameB] = [project.inlets[0]!.name, project.inlets[1]!.name];
-const build = inletFactorBuilder({
-  inputA: expectOk(buildMissionInput(project, { deck }, { inletName: nameA }), 'A'),
-  inputB: expectOk(buildMissionInput(project, { deck }, { inletName: nameB }), 'B'),
-  inletA: expectOk(projectInlet(project, nameA), 'inlet A'),
-  inletB: expectOk(projectInlet(project, nameB), 'inlet B'),
-  deck: expectOk(projectDeck(project, { deck }), 'deck'),
-  engineCount: project.engine.count,
-  installation: installationOf(project),
-  cautionSettings: cautionSettingsOf(project),
-});
+// The pair as the front doors build it (engine/study: the CLI's compare and the app's worker).
+const build = inletFactorBuilder(expectOk(expectOk(prepareStudy(project, { name: 'demo-engine.deck.csv', text: readFileSync(`${root}demo-engine.deck.csv`, 'utf8') }), 'demo study').inletPair(nameA, nameB), 'inlet pair'));
 
 const next = callCounter(8);
 

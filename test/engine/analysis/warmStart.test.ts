@@ -7,12 +7,11 @@ import { payloadRangeDiagram } from '../../../engine/analysis/payloadRange';
 import { tradeFactors } from '../../../engine/analysis/tradeFactors';
 import { lagrangeWeights, solveFrom, subsetWeights, warmStartFor } from '../../../engine/analysis/warmStart';
 import { expectOk } from '../../../engine/core/result';
+import { prepareStudy } from '../../../engine/study';
 import { FUEL_TOLERANCE_KG } from '../../../engine/mission/fuelIteration';
 import type { MissionInput, MissionResult } from '../../../engine/mission/missionTypes';
 import { solveMission } from '../../../engine/mission/solveMission';
-import { buildMissionInput, projectInlet } from '../../../engine/project/buildMissionInput';
-import { projectDeck } from '../../../engine/project/projectDeck';
-import { cautionSettingsOf, installationOf } from '../../../engine/project/projectSpecs';
+import { buildMissionInput } from '../../../engine/project/buildMissionInput';
 import { parseProject } from '../../../engine/project/parseProject';
 import { parseDeckCsv } from '../../../engine/propulsion/deckCsv';
 import { expectClose } from '../../support/assertInDelta';
@@ -110,16 +109,8 @@ describe('warm starts of an analysis', () => {
 
   it('the inlet comparison gives the cold breakdown within the fuel band in fewer passes, its parts still adding up', () => {
     const [nameA, nameB] = [project.inlets[0]!.name, project.inlets[1]!.name];
-    const build = inletFactorBuilder({
-      inputA: expectOk(buildMissionInput(project, { deck }, { inletName: nameA }), 'A'),
-      inputB: expectOk(buildMissionInput(project, { deck }, { inletName: nameB }), 'B'),
-      inletA: expectOk(projectInlet(project, nameA), 'inlet A'),
-      inletB: expectOk(projectInlet(project, nameB), 'inlet B'),
-      deck: expectOk(projectDeck(project, { deck }), 'deck'),
-      engineCount: project.engine.count,
-      installation: installationOf(project),
-      cautionSettings: cautionSettingsOf(project),
-    });
+    // The pair as the front doors build it (engine/study: the CLI's compare and the app's worker).
+    const build = inletFactorBuilder(expectOk(expectOk(prepareStudy(project, { name: 'demo-engine.deck.csv', text: readFileSync(`${root}demo-engine.deck.csv`, 'utf8') }), 'demo study').inletPair(nameA, nameB), 'inlet pair'));
     const cold = counting(false);
     const warm = counting(true);
     const c = expectOk(compareInlets(build, { nameA, nameB, solve: cold.solve }), 'cold compare');
