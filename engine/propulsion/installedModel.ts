@@ -27,7 +27,7 @@ import { prepareInlet, type PreparedInlet } from './inletRecovery';
 import { defaultInstallationMethod, type InstallationMethodId } from './installationMethod';
 import { validateInstallation, type InstallationSettings } from './installationCorrections';
 import { newPartPowerSolve, solvePartPower } from './partPowerSolve';
-import type { FlightCondition, InstalledPoint, PartPowerPoint, PropulsionModel, RatingName, SlopeBreaks, ThrustLimit } from './propulsionModel';
+import { conditionKey, sameFlightCondition, type FlightCondition, type InstalledPoint, type PartPowerPoint, type PropulsionModel, type RatingName, type SlopeBreaks, type ThrustLimit } from './propulsionModel';
 
 export type { AccessError, DeckAccess, DeckPoint } from './deckAccess';
 export { FOR_THRUST_TOLERANCE } from './partPowerSolve';
@@ -154,9 +154,7 @@ function installedSlopeBreaks(access: DeckAccess, ctx: InstallationContext): Slo
 }
 
 interface RatingMemo {
-  readonly altitude_m: number;
-  readonly mach: number;
-  readonly isaDev_K: number;
+  readonly condition: FlightCondition;
   readonly point: InstalledPoint;
 }
 
@@ -187,14 +185,9 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
   let freeKey: FlightCondition | null = null;
   let freeValue: FreeStream = { mach: 0, pressure_Pa: 0, temperature_K: 0 };
   function freeStream(condition: FlightCondition): FreeStream {
-    if (
-      freeKey === null ||
-      !Object.is(freeKey.altitude_m, condition.altitude_m) ||
-      !Object.is(freeKey.mach, condition.mach) ||
-      !Object.is(freeKey.isaDev_K, condition.isaDev_K)
-    ) {
+    if (freeKey === null || !sameFlightCondition(freeKey, condition)) {
       freeValue = freeStreamOf(access, condition);
-      freeKey = { altitude_m: condition.altitude_m, mach: condition.mach, isaDev_K: condition.isaDev_K };
+      freeKey = conditionKey(condition);
     }
     return freeValue;
   }
@@ -202,17 +195,10 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
   function atRating(condition: FlightCondition, rating: RatingName): InstalledPoint {
     checkCondition(condition);
     const memo = ratingMemo.get(rating);
-    if (
-      memo !== undefined &&
-      Object.is(memo.altitude_m, condition.altitude_m) &&
-      Object.is(memo.mach, condition.mach) &&
-      Object.is(memo.isaDev_K, condition.isaDev_K)
-    ) {
-      return memo.point;
-    }
+    if (memo !== undefined && sameFlightCondition(memo.condition, condition)) return memo.point;
     const { power, caution } = resolveRating(access, named, condition, rating);
     const point = pointAt(condition, freeStream(condition), power, caution ? [caution] : NO_CAUTIONS);
-    ratingMemo.set(rating, { altitude_m: condition.altitude_m, mach: condition.mach, isaDev_K: condition.isaDev_K, point });
+    ratingMemo.set(rating, { condition: conditionKey(condition), point });
     return point;
   }
 

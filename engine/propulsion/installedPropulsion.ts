@@ -16,7 +16,7 @@ import type { InstallationSettings } from './installationCorrections';
 import type { DeckAccess } from './deckAccess';
 import { scaleSensitivitiesInto } from './installationSensitivities';
 import { makeInstalledModel } from './installedModel';
-import type { FlightCondition, PropulsionModel } from './propulsionModel';
+import { conditionKey, sameFlightCondition, type FlightCondition, type PropulsionModel } from './propulsionModel';
 
 export { inletDragIncrementCd0, inletWeight } from './inletDesign';
 
@@ -109,10 +109,7 @@ export function deckCurve(
   const values = new Float64Array(DECK_VALUES_WITH_SENSITIVITIES);
   // One prepared condition, keyed by its three numbers (Object.is) alone: the nodes, weights and factors are a
   // pure function of them, so preparing again at the same condition is skipped without changing any answer.
-  let prepared = false;
-  let preparedAltitude_m = 0;
-  let preparedMach = 0;
-  let preparedIsaDev_K = 0;
+  let preparedAt: FlightCondition | null = null;
   let conditionMask = 0;
   let filled = false;
   let airflowFactor = 1;
@@ -122,14 +119,7 @@ export function deckCurve(
   let temperatureFactor = 1;
   const factors = new Float64Array(3);
   function prepare(condition: FlightCondition): void {
-    if (
-      prepared &&
-      Object.is(preparedAltitude_m, condition.altitude_m) &&
-      Object.is(preparedMach, condition.mach) &&
-      Object.is(preparedIsaDev_K, condition.isaDev_K)
-    ) {
-      return;
-    }
+    if (preparedAt !== null && sameFlightCondition(preparedAt, condition)) return;
     filled = fillDeckNodes(deck.grid, deck.policy, condition.isaDev_K, condition.altitude_m, condition.mach, nodes);
     conditionMask = nodes.outsideMask;
     temperatureFactor = !deck.hasIsaDev && condition.isaDev_K !== 0 ? temperatureFlowFactor(condition.altitude_m, condition.isaDev_K) : 1;
@@ -141,10 +131,7 @@ export function deckCurve(
       thrustFactor = factors[0]!;
       airflowFactor *= factors[2]!;
     }
-    prepared = true;
-    preparedAltitude_m = condition.altitude_m;
-    preparedMach = condition.mach;
-    preparedIsaDev_K = condition.isaDev_K;
+    preparedAt = conditionKey(condition);
   }
   return {
     prepare,

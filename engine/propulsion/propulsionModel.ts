@@ -43,6 +43,19 @@ export interface FlightCondition {
   readonly isaDev_K: number;
 }
 
+/**
+ * True when two flight conditions are the same three numbers (Object.is: -0 and 0 stay apart, NaN equals NaN), the
+ * key of the installed model's one-entry memos (a point is a pure function of its condition).
+ */
+export function sameFlightCondition(a: FlightCondition, b: FlightCondition): boolean {
+  return Object.is(a.altitude_m, b.altitude_m) && Object.is(a.mach, b.mach) && Object.is(a.isaDev_K, b.isaDev_K);
+}
+
+/** A copy of a condition's three numbers (a memo's key must not be the caller's object, which it may change). */
+export function conditionKey(c: FlightCondition): FlightCondition {
+  return { altitude_m: c.altitude_m, mach: c.mach, isaDev_K: c.isaDev_K };
+}
+
 /** One engine's numbers at a flight condition and power setting. */
 export interface EnginePoint {
   /** Deck (uninstalled) net thrust (N). */
