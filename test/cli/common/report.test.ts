@@ -1,4 +1,3 @@
-import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { analysisFailed, cautionBlock, EXIT_ANALYSIS_FAILED, isaText, printJsonReport, reportText } from '../../../cli/common/report';
@@ -76,7 +75,7 @@ const ARGUMENTS: Readonly<Record<string, (project: string) => string[]>> = {
   uncertainty: (p) => ['uncertainty', p, '--samples', '3'],
   sweep: (p) => ['sweep', p, '--vary', 'polar.cdIncrement=0:0.0001:0.0001', '--workers', '1', '--out', join(demo.dir(), 'sweep.csv')],
   'cycle point': () => ['cycle', 'point', 'fixtures/cycle/demo-turbofan.cycle.json', '--altitude', '35000 ft', '--mach', '0.78', '--rating', 'maxCruise'],
-  'cycle deck': () => ['cycle', 'deck', 'fixtures/cycle/demo-turbofan.cycle.json', '--out', join(tmpdir(), `blockwise-report-cycle-${process.pid}.csv`), '--altitudes', '0, 35000 ft', '--machs', '0, 0.8'],
+  'cycle deck': () => ['cycle', 'deck', 'fixtures/cycle/demo-turbofan.cycle.json', '--out', join(demo.dir(), 'cycle.deck.csv'), '--altitudes', '0, 35000 ft', '--machs', '0, 0.8'],
   'cycle match': () => ['cycle', 'match', 'fixtures/parametric/demo-parametric.deck.csv', '--start', 'fixtures/cycle/demo-turbofan.cycle.json', '--out', join(demo.dir(), 'match.cycle.json'), '--free', 'airflow', '--nodes', '2'],
 };
 
