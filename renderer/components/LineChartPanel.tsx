@@ -51,18 +51,45 @@ export function markKeys(marks: readonly { readonly x: number; readonly label: s
   return marks.map((m, i) => `${m.label}-${m.x}-${i}`);
 }
 
+/** Thickness (px) of a mark's label across its line (10 px text and its leading). */
+const MARK_LABEL_PX = 13;
+
 /**
- * Whether each mark's label is drawn: a label equal to one already drawn
- * within `near` (x units) is left off, so two inlets' crossovers a few
- * thousandths of Mach apart do not print their names over each other.
+ * The label drawn beside each mark, or null: marks whose lines lie closer than
+ * a label's thickness to the first line of their group share one label on
+ * that line, repeated labels said once ("absolute / service / cruise
+ * ceiling", "leg 5 / 6 / 7"), so marks a few pixels apart do not print over
+ * each other. `pxPerUnit` converts the axis unit to pixels (an underestimate
+ * only groups more); horizontal marks are grouped from the top down, vertical
+ * ones from the left.
  */
-export function markLabelShown(marks: readonly { readonly x: number; readonly label: string }[], near: number): boolean[] {
-  const drawn: { x: number; label: string }[] = [];
-  return marks.map((m) => {
-    const clash = drawn.some((d) => d.label === m.label && Math.abs(d.x - m.x) <= near);
-    if (!clash) drawn.push({ x: m.x, label: m.label });
-    return !clash;
-  });
+export function markLabels(marks: readonly { readonly at: number; readonly label: string }[], pxPerUnit: number, from: 'top' | 'left'): (string | null)[] {
+  const sign = from === 'top' ? -1 : 1;
+  const order = marks.map((_, i) => i).sort((a, b) => sign * (marks[a].at - marks[b].at));
+  const out: (string | null)[] = marks.map(() => null);
+  let i = 0;
+  while (i < order.length) {
+    const first = order[i];
+    const group = [first];
+    let j = i + 1;
+    while (j < order.length && Math.abs(marks[order[j]].at - marks[first].at) * pxPerUnit < MARK_LABEL_PX) group.push(order[j++]);
+    out[first] = sharedLabel([...new Set(group.map((k) => marks[k].label))]);
+    i = j;
+  }
+  return out;
+}
+
+/** Labels joined with " / ", a first or last word they all share said once ("leg 5", "leg 6" -> "leg 5 / 6"). */
+function sharedLabel(labels: readonly string[]): string {
+  if (labels.length === 1) return labels[0];
+  const words = labels.map((l) => l.split(' '));
+  if (words.every((w) => w.length > 1)) {
+    const last = words[0][words[0].length - 1];
+    if (words.every((w) => w[w.length - 1] === last)) return `${words.map((w) => w.slice(0, -1).join(' ')).join(' / ')} ${last}`;
+    const head = words[0][0];
+    if (words.every((w) => w[0] === head)) return `${head} ${words.map((w) => w.slice(1).join(' ')).join(' / ')}`;
+  }
+  return labels.join(' / ');
 }
 
 /** A titled line chart with fixed width and height (recharts needs a size without layout). */
@@ -78,17 +105,20 @@ export function LineChartPanel(props: LineChartPanelProps) {
   const leftAxis = niceTicks(...numericExtent(props.data, leftKeys, [...points.map((p) => p.y), ...hMarks.map((m) => m.y)]));
   const rightAxis = niceTicks(...numericExtent(props.data, rightKeys));
   const markKey = markKeys(marks);
-  // Same-label marks closer than 3 % of the axis share one label.
-  const labelShown = markLabelShown(marks, xAxis === null ? 0 : 0.03 * (xAxis.domain[1] - xAxis.domain[0]));
+  // The plot takes about four fifths of the panel's width and somewhat more than half its height (axes, legend and
+  // margins take the rest): marks closer than a label's thickness share one label.
+  const perUnit = (axis: NiceAxis | null, px: number) => (axis === null ? 0 : px / Math.max(axis.domain[1] - axis.domain[0], Number.MIN_VALUE));
+  const vLabels = markLabels(marks.map((m) => ({ at: m.x, label: m.label })), perUnit(xAxis, 0.8 * size.width), 'left');
   const pointKey = markKeys(points);
+  const hLabels = markLabels(hMarks.map((m) => ({ at: m.y, label: m.label })), perUnit(leftAxis, 0.55 * size.height), 'top');
   return (
     <figure className="chart" data-testid={props.testId}>
       <figcaption>{props.title}</figcaption>
       <LineChart accessibilityLayer={false} role="img" aria-label={props.title} width={size.width} height={size.height} data={props.data as object[]} margin={{ top: 8, right: 24, bottom: 8, left: 16 }}>
         <CartesianGrid strokeDasharray="3 3" />
         <XAxis dataKey={props.xKey} type="number" {...axisTicks(xAxis)} interval={0} tickFormatter={tickText} label={{ value: props.xLabel, position: 'insideBottom', offset: -12 }} />
-        <YAxis yAxisId="left" label={{ value: props.yLabel, angle: -90, position: 'insideLeft' }} {...axisTicks(leftAxis)} interval={0} tickFormatter={tickText} width={64} />
-        {second.size > 0 ? <YAxis yAxisId="right" orientation="right" label={{ value: props.secondAxisLabel ?? '', angle: 90, position: 'insideRight' }} {...axisTicks(rightAxis)} interval={0} tickFormatter={tickText} width={64} /> : null}
+        <YAxis yAxisId="left" label={{ value: props.yLabel, angle: -90, position: 'insideLeft', style: { textAnchor: 'middle' } }} {...axisTicks(leftAxis)} interval={0} tickFormatter={tickText} width={76} />
+        {second.size > 0 ? <YAxis yAxisId="right" orientation="right" label={{ value: props.secondAxisLabel ?? '', angle: 90, position: 'insideRight', style: { textAnchor: 'middle' } }} {...axisTicks(rightAxis)} interval={0} tickFormatter={tickText} width={76} /> : null}
         <Tooltip formatter={(v) => (typeof v === 'number' ? tickText(v) : String(v))} labelFormatter={(v) => (typeof v === 'number' ? tickText(v) : String(v))} />
         <Legend verticalAlign="bottom" wrapperStyle={{ paddingTop: 28, fontSize: 11 }} />
         {props.series.map((s, i) => (
@@ -106,10 +136,10 @@ export function LineChartPanel(props: LineChartPanelProps) {
           />
         ))}
         {marks.map((m, i) => (
-          <ReferenceLine key={markKey[i]} yAxisId="left" x={m.x} stroke="#888" strokeDasharray="2 2" label={labelShown[i] ? { value: m.label, position: 'insideTopLeft', fontSize: 10, angle: -90, dx: 4, dy: 70 } : undefined} />
+          <ReferenceLine key={markKey[i]} yAxisId="left" x={m.x} stroke="#888" strokeDasharray="2 2" label={vLabels[i] !== null ? { value: vLabels[i], position: 'insideTopLeft', fontSize: 10, angle: -90, dx: 4, dy: 70 } : undefined} />
         ))}
         {hMarks.map((m, i) => (
-          <ReferenceLine key={`h-${m.label}-${m.y}-${i}`} yAxisId="left" y={m.y} stroke="#555" strokeDasharray="4 2" label={{ value: m.label, position: 'insideTopRight', fontSize: 10 }} />
+          <ReferenceLine key={`h-${m.label}-${m.y}-${i}`} yAxisId="left" y={m.y} stroke="#555" strokeDasharray="4 2" label={hLabels[i] === null ? undefined : { value: hLabels[i], position: 'insideTopRight', fontSize: 10 }} />
         ))}
         {points.map((p, i) => (
           <ReferenceDot key={pointKey[i]} yAxisId="left" x={p.x} y={p.y} r={4} fill="#c00" stroke="none" />

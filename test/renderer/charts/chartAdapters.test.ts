@@ -206,12 +206,16 @@ describe('breakdownWaterfall and payloadRangeRows', () => {
 });
 
 describe('tickText', () => {
-  it('shows at most four significant digits without float noise', () => {
-    expect(tickText(2999.999990090659)).toBe('3000');
+  it('shows at most four significant digits without float noise, thousands grouped', () => {
+    expect(tickText(2999.999990090659)).toBe('3,000');
     expect(tickText(0.5248502732003647)).toBe('0.5249');
     expect(tickText(0)).toBe('0');
-    expect(tickText(-1050)).toBe('-1050');
-    expect(tickText(123456)).toBe('1.23e+5');
+    expect(tickText(-1050)).toBe('-1,050');
+    expect(tickText(45000)).toBe('45,000');
+    expect(tickText(1234.5678)).toBe('1,235');
+    expect(tickText(123456)).toBe('123,500');
+    expect(tickText(12345678)).toBe('1.23e+7');
+    expect(tickText(0.0004)).toBe('4.00e-4');
     expect(tickText(Number.NaN)).toBe('');
   });
 });

@@ -1,6 +1,6 @@
 import { render, waitFor } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { LineChartPanel, markKeys, markLabelShown } from '../../../renderer/components/LineChartPanel';
+import { LineChartPanel, markKeys, markLabels } from '../../../renderer/components/LineChartPanel';
 
 // Two inlet designs can share a marker at the same Mach (e.g. the thrust
 // minimum where both thrust curves bottom out on the same sample); React
@@ -58,15 +58,36 @@ describe('LineChartPanel', () => {
     expect(new Set(keys).size).toBe(MARKS.length);
   });
 
-  it('markLabelShown leaves off a label repeated nearby, keeps it far away and for other labels', () => {
+  it('markLabels says a label repeated nearby once, keeps it far away, and joins other labels nearby', () => {
     const marks = [
-      { x: 0.878, label: 'high crossover' },
-      { x: 0.882, label: 'high crossover' },
-      { x: 0.88, label: 'thrust minimum' },
-      { x: 0.95, label: 'high crossover' },
+      { at: 0.878, label: 'high crossover' },
+      { at: 0.882, label: 'high crossover' },
+      { at: 0.95, label: 'high crossover' },
     ];
-    expect(markLabelShown(marks, 0.018)).toEqual([true, false, true, true]);
-    expect(markLabelShown(marks, 0)).toEqual([true, true, true, true]);
+    // 500 px per Mach: 0.004 Mach = 2 px (shared), 0.072 Mach = 36 px (own label).
+    expect(markLabels(marks, 500, 'left')).toEqual(['high crossover', null, 'high crossover']);
+    expect(markLabels([...marks, { at: 0.88, label: 'thrust minimum' }], 500, 'left')).toEqual(['high crossover / thrust minimum', null, 'high crossover', null]);
+    // Legs starting within a label's thickness share one label (whole trip, 8 h on ~500 px: about 60 px/h).
+    const legs = [2, 3, 6.6, 6.98, 7.0].map((t, i) => ({ at: t, label: `leg ${i + 2}` }));
+    expect(markLabels(legs, 60, 'left')).toEqual(['leg 2', 'leg 3', 'leg 4', 'leg 5 / 6', null]);
+    expect(markLabels(legs, 5, 'left')).toEqual(['leg 2 / 3', null, 'leg 4 / 5 / 6', null, null]);
+  });
+
+  it('markLabels gives ceilings closer than a label thickness one shared label, far ones their own', () => {
+    const ceilings = [
+      { at: 40577, label: 'cruise ceiling' },
+      { at: 43452, label: 'absolute ceiling' },
+      { at: 42489, label: 'service ceiling' },
+    ];
+    // 0.0045 px/ft: the three lie within 13 px of the top one (2,875 ft = 12.9 px).
+    expect(markLabels(ceilings, 0.0045, 'top')).toEqual([null, 'absolute / service / cruise ceiling', null]);
+    // 0.012 px/ft: absolute and service 11.6 px apart share; cruise 2,875 ft below the top is 35 px down: its own.
+    expect(markLabels(ceilings, 0.012, 'top')).toEqual(['cruise ceiling', 'absolute / service ceiling', null]);
+    // Far apart: every mark its own label.
+    expect(markLabels(ceilings, 1, 'top')).toEqual(['cruise ceiling', 'absolute ceiling', 'service ceiling']);
+    // Labels without a shared first or last word are joined whole.
+    expect(markLabels([{ at: 1, label: 'FL 1' }, { at: 1.001, label: 'tropopause' }], 1, 'top')).toEqual([null, 'tropopause / FL 1']);
+    expect(markLabels([], 1, 'top')).toEqual([]);
   });
 
   it('LineChartPanel draws a repeated mark once labelled', async () => {
@@ -91,6 +112,6 @@ describe('LineChartPanel', () => {
     expect(xTicks).toEqual(['0.3', '0.4', '0.5', '0.6', '0.7', '0.8', '0.9']);
     const yTicks = tickTexts(chart, 'yAxis');
     expect(yTicks.length).toBeGreaterThanOrEqual(3);
-    for (const t of yTicks) expect(t).toMatch(/^\d+$/);
+    for (const t of yTicks) expect(t).toMatch(/^\d{1,3}(,\d{3})*$/);
   });
 });
