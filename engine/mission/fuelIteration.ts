@@ -20,7 +20,7 @@ import { flyReserves, type ReserveFlight } from './reserves';
 import { flyTrip, solvableLegIndex, type SolvedDistance, type TripOutcome } from './flyTrip';
 import { distanceIndex, legEnvironment, type MissionContext } from './missionContext';
 import { S_AIR, S_MASS, S_TIME } from './missionState';
-import { createFlightLog, type FlightLog } from './timeHistoryBuilder';
+import { freshFlightLog, type FlightLog } from './timeHistoryBuilder';
 import type { Leg, MissionInput, MissionStart } from './missionTypes';
 import { FOOT_M } from '../units/unitTable';
 import { msg, q, type MessageParts } from '../units/messageParts';
@@ -112,7 +112,7 @@ function scratch(ctx: MissionContext): MissionContext {
   return {
     ...ctx,
     options: { ...ctx.options, allowNegativeFuel: true },
-    log: createFlightLog(ctx.input.airframe, ctx.input.cautionSettings),
+    log: freshFlightLog(ctx.log),
   };
 }
 

@@ -33,7 +33,7 @@ import { missionInputProblem } from './missionInputCheck';
 import { createPassMemo } from './passMemo';
 import { S_AIR, S_GROUND, S_MASS, S_TIME } from './missionState';
 import type { MissionInput, MissionResult, MissionStart, MissionStatus, ReserveBreakdown } from './missionTypes';
-import { appendCaution, buildTimeHistory, createFlightLog } from './timeHistoryBuilder';
+import { appendCaution, buildTimeHistory, createFlightLog, freshFlightLog } from './timeHistoryBuilder';
 import { messageText, msg, partsOf, q, withParts, type MessageParts } from '../units/messageParts';
 
 const NO_RESERVES: ReserveBreakdown = { contingency_kg: 0, alternate_kg: 0, missedApproach_kg: 0, alternateApproach_kg: 0, finalReserve_kg: 0, extra_kg: 0, total_kg: 0 };
@@ -191,6 +191,12 @@ export interface SolveOptions {
    * 0.004 kg, with a fixed ramp mass): narrower for a tightly converged reference.
    */
   readonly fuelTolerance_kg?: number;
+  /**
+   * False: no time history is kept (MissionResult.history has no samples), for a caller that reads only the
+   * figures, legs, cautions and status (a sweep's rows). Every pass flies exactly as with it, so every other
+   * field of the result is bit-identical (test/engine/mission/solveOptions.test.ts). Default true.
+   */
+  readonly timeHistory?: boolean;
 }
 
 /**
@@ -220,7 +226,8 @@ function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult
   const zfw = input.airframe.oew_kg + payload;
   const taxi = taxiOutFuel(input);
   const flightOptions: FlightOptions = { stepScale, allowNegativeFuel: false };
-  const base: MissionContext = { input, options: flightOptions, zeroFuelMass_kg: zfw, log: createFlightLog(input.airframe, input.cautionSettings), memo: createPassMemo() };
+  const log = createFlightLog(input.airframe, input.cautionSettings, false, options.timeHistory !== false);
+  const base: MissionContext = { input, options: flightOptions, zeroFuelMass_kg: zfw, log, memo: createPassMemo() };
   const solve = input.solve;
   const hasSolvable = solvableLegIndex(input) >= 0;
 
@@ -231,7 +238,10 @@ function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult
   // null: one flight from a given mass, nothing iterated.
   let outcome: IterationOutcome | null = null;
   if (solve.kind === 'payloadRange') {
-    const guess = breguetRampGuess(input, zfw, taxi, solve.range_m);
+    // A warm start's ramp mass is where the iteration starts (fuelIteration.ts takes one above zero-fuel mass):
+    // the Breguet guess (a cruise point of the models) is only worked out when there is none.
+    const warmRamp = options.warmStart?.rampMass_kg;
+    const guess = warmRamp !== undefined && Number.isFinite(warmRamp) && warmRamp > zfw ? warmRamp : breguetRampGuess(input, zfw, taxi, solve.range_m);
     outcome = iterateRampMass(base, solve.range_m, guess, options.warmStart, fuelBand(options.fuelTolerance_kg));
     ({ rampMass_kg: rampMass, distance_m: distance, iterations, residual_kg: residual } = outcome);
     if (outcome.kind === 'infeasible') {
@@ -259,7 +269,7 @@ function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult
   const final: MissionEvaluation =
     reuse && convergedPass !== undefined
       ? convergedPass
-      : evaluateMission({ ...base, log: createFlightLog(input.airframe, input.cautionSettings) }, rampMass, distance);
+      : evaluateMission({ ...base, log: freshFlightLog(log) }, rampMass, distance);
   const ctx = { log: final.log };
   const { trip, reserves } = final;
   if (solve.kind === 'takeoffWeight' && !hasSolvable) residual = final.residual_kg;

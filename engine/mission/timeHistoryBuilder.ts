@@ -1,7 +1,9 @@
 /**
  * The flight log a mission writes while it is flown: time-history columns
  * and cautions (first occurrence per caution id and leg), built into the
- * MissionResult's typed arrays at the end.
+ * MissionResult's typed arrays at the end. A log without history (a sweep's
+ * solves, SolveOptions.timeHistory false) raises the same cautions and
+ * leaves the columns empty.
  */
 import type { Caution } from '../cautions/caution';
 import {
@@ -44,30 +46,45 @@ export interface FlightLog {
   readonly cautions: Map<string, Caution>;
   readonly airframe: Airframe;
   readonly settings: CautionSettings;
-  /** A quiet log (fuel-iteration passes) records neither history nor cautions. */
+  /** A quiet log (the reserves' trial flights) records neither history nor cautions. */
   readonly quiet: boolean;
+  /** False: the time-history columns stay empty (cautions are still raised, unless quiet). */
+  readonly history: boolean;
 }
 
-/** An empty flight log; a quiet one ignores samples and cautions. */
-export function createFlightLog(airframe: Airframe, settings: CautionSettings, quiet = false): FlightLog {
+/** An empty flight log; a quiet one ignores samples and cautions, one without `history` keeps no time history. */
+export function createFlightLog(airframe: Airframe, settings: CautionSettings, quiet = false, history = true): FlightLog {
   const columns = {} as Record<Column, number[]>;
   for (const c of COLUMNS) columns[c] = [];
-  return { columns, legIndex: [], cautions: new Map(), airframe, settings, quiet };
+  return { columns, legIndex: [], cautions: new Map(), airframe, settings, quiet, history };
+}
+
+/** A new empty log that records what `log` records (a fuel-iteration pass's own log). */
+export function freshFlightLog(log: FlightLog): FlightLog {
+  return createFlightLog(log.airframe, log.settings, log.quiet, log.history);
+}
+
+/** The key a caution is kept under: one per caution id and leg. */
+function cautionKey(id: string, target: LegTarget): string {
+  return `${id}|${target.legIndex}`;
 }
 
 /** Adds a caution unless one with the same id was already raised on the same leg. */
 export function appendCaution(log: FlightLog, target: LegTarget, drafted: CautionDraft | Caution | null, time_s: number): void {
   if (drafted === null || log.quiet) return;
-  const key = `${drafted.id}|${target.legIndex}`;
+  const key = cautionKey(drafted.id, target);
   if (log.cautions.has(key)) return;
   log.cautions.set(key, { ...drafted, legIndex: target.legIndex, legName: target.legName, time_s });
 }
+
+/** Id of the caution idleAboveDragCaution drafts (its message is only written when the leg has not raised it yet). */
+const IDLE_ABOVE_DRAG_ID = idleAboveDragCaution(0, 0).id;
 
 /** Records one accepted point: history row (trip legs) and the per-point caution checks. */
 export function appendSample(log: FlightLog, target: LegTarget, state: StateVector, sample: FlightSample): void {
   if (log.quiet) return;
   const t = state[S_TIME];
-  if (target.recordHistory) {
+  if (target.recordHistory && log.history) {
     const c = log.columns;
     const n = log.legIndex.length;
     const duplicate = n > 0 && log.legIndex[n - 1] === target.legIndex && c.time_s[n - 1] === t;
@@ -98,7 +115,10 @@ export function appendSample(log: FlightLog, target: LegTarget, state: StateVect
   }
   appendCaution(log, target, checkThroatMach(sample.throatMach, log.settings.maxThroatMach), t);
   appendCaution(log, target, checkPolarClamped(sample.polarOutside), t);
-  if (sample.idleAboveDrag) appendCaution(log, target, idleAboveDragCaution(sample.drag_N, sample.thrustUsed_N), t);
+  // The draft formats two forces into its message: written only for the leg's first such point (the one kept).
+  if (sample.idleAboveDrag && !log.cautions.has(cautionKey(IDLE_ABOVE_DRAG_ID, target))) {
+    appendCaution(log, target, idleAboveDragCaution(sample.drag_N, sample.thrustUsed_N), t);
+  }
   for (const c of sample.propulsionCautions) {
     if (propulsionCautionShown(c, log.settings)) appendCaution(log, target, c, t);
   }

@@ -29,7 +29,7 @@
 import type { Result } from '../core/result';
 import { FUEL_TOLERANCE_KG } from '../mission/fuelIteration';
 import type { MissionStart } from '../mission/missionTypes';
-import { solveMission } from '../mission/solveMission';
+import { solveMission, type SolveOptions } from '../mission/solveMission';
 import { missionInputOnDeck, type MissionInputMemo, type ProjectResources } from '../project/buildMissionInput';
 import { parseProjectData } from '../project/parseProject';
 import { checkProject, createProjectCheckMemo } from '../project/projectChecks';
@@ -54,6 +54,9 @@ export interface SweepStudy {
   /** Fuel passes flown so far, over every case (a cold retry's included). */
   passes(): number;
 }
+
+/** A sweep's solves: its rows read the figures, cautions and status, never the time history. */
+const LEAN: SolveOptions = { timeHistory: false };
 
 /** Most converged solves kept for warm starts (a row's worth, twice, on the usual grids). */
 const MAX_KEPT = 100_000;
@@ -213,12 +216,13 @@ export function prepareSweep(
       const input = missionInputOnDeck(project.value, deck.value, buildOptions, memo);
       if (!input.ok) return invalidSweepRow(k, inputs, input.error);
       const start = warm ? neighbourStart(k, indices) : undefined;
-      let r = solveMission(input.value, start === undefined ? {} : { warmStart: start });
+      // A row reads no time history: none is kept (every figure it reads is the same bit for bit without).
+      let r = solveMission(input.value, start === undefined ? LEAN : { ...LEAN, warmStart: start });
       passes += r.iterations;
       // A case that does not come out ok is flown again cold: its status and message (which name the failing pass's
       // figures) are then those of the case flown alone, and a start that led the iteration astray costs nothing else.
       if (start !== undefined && r.status !== 'ok') {
-        r = solveMission(input.value);
+        r = solveMission(input.value, LEAN);
         passes += r.iterations;
       }
       const kept = warm && r.status === 'ok' && r.warmStart !== undefined ? flownOf(r.warmStart, r.residual_kg) : null;
