@@ -1,19 +1,25 @@
 /**
- * Warm starts for the missions of one analysis. The missions an analysis
- * flies are neighbours (the Shapley corners differ by one inlet factor, the
- * trade-factor missions by a small step, the payload-range points by
- * payload), so each is started from a converged neighbour, with its figures
- * (ramp mass, distances) predicted as a weighted sum of missions already
+ * Warm starts for missions flown one after another: an analysis's (the
+ * Shapley corners differ by one inlet factor, the trade-factor missions by a
+ * small step, the payload-range points by payload) and a sweep's (each case
+ * next to the one before, engine/study/prepareSweep.ts). Each mission starts
+ * from a converged neighbour, with its figures (ramp mass or solvable-leg
+ * distance, top of descent) predicted as a weighted sum over missions already
  * flown, and its fuel iteration needs fewer passes. Answers stay the same to
- * the fuel iteration's tolerance.
+ * the fuel iteration's tolerance; a warm-started mission that does not come
+ * out ok is flown again cold (solveFrom).
  */
+import { FIXED_MASS_FUEL_TOLERANCE_KG, FUEL_TOLERANCE_KG } from '../mission/fuelIteration';
 import type { MissionInput, MissionResult, MissionStart } from '../mission/missionTypes';
-import { solveMission } from '../mission/solveMission';
+import { solveMission, type SolveOptions } from '../mission/solveMission';
+
+/** What a prediction reads of a mission flown: its converged start and the residual it converged to (a MissionResult is one). */
+export type FlownMission = Pick<MissionResult, 'warmStart' | 'residual_kg'>;
 
 /** A mission already flown and its weight in a prediction. */
 export interface Blend {
   readonly weight: number;
-  readonly result: MissionResult;
+  readonly result: FlownMission;
 }
 
 /**
@@ -24,33 +30,52 @@ export interface Blend {
  * add up to 1. Without `blend`, the neighbour's own figures.
  */
 export interface NeighbourStart {
-  readonly from: MissionResult;
+  readonly from: FlownMission;
   readonly blend?: readonly Blend[];
+}
+
+/**
+ * Where a converged mission's fuel iteration has its root: the converged ramp mass (payloadRange) or solvable-leg
+ * distance (fixed ramp mass) moved by the converged residual's offset from the middle of the mode's default band
+ * over the iteration's last slope (one secant step: Burden & Faires, Numerical Analysis, section 2.3). The converged
+ * values themselves scatter across the band's width (0 to FUEL_TOLERANCE_KG of residual, about 0.1 kg of ramp mass
+ * on the demo); the roots lie on a smooth curve of the mission's inputs, so a blend of them lands a first pass in
+ * the band. Undefined when the mission carries no start or its figure is not finite.
+ */
+export function iterationRoot(flown: FlownMission): number | undefined {
+  const w = flown.warmStart;
+  const x = w?.rampMass_kg ?? w?.distance_m;
+  if (w === undefined || x === undefined || !Number.isFinite(x)) return undefined;
+  const aim_kg = (w.rampMass_kg !== undefined ? FUEL_TOLERANCE_KG : FIXED_MASS_FUEL_TOLERANCE_KG) / 2;
+  const slope = w.slope;
+  const shift = slope !== undefined && Number.isFinite(slope) && Math.abs(slope) > 0 ? (flown.residual_kg - aim_kg) / slope : 0;
+  return Number.isFinite(shift) ? x - shift : x;
 }
 
 /**
  * The warm start (engine/mission MissionStart) for a mission next to
  * `start`: the neighbour's, with each figure the blend predicts in place of
- * the neighbour's own; null when the neighbour or a blended mission carries
- * none (it did not converge).
+ * the neighbour's own (the ramp mass or distance from the blended missions'
+ * iteration roots, iterationRoot); null when the neighbour or a blended
+ * mission carries none (it did not converge).
  */
 export function warmStartFor(start: NeighbourStart): MissionStart | null {
   const own = start.from.warmStart;
   const blend = start.blend ?? [{ weight: 1, result: start.from }];
   if (own === undefined || blend.some((b) => b.result.warmStart === undefined)) return null;
-  const mix = (figure: (w: MissionStart) => number | undefined): number | undefined => {
+  const mix = (figure: (b: FlownMission) => number | undefined): number | undefined => {
     let sum = 0;
     for (const b of blend) {
-      const v = figure(b.result.warmStart!);
+      const v = figure(b.result);
       if (v === undefined || !Number.isFinite(v)) return undefined;
       sum += b.weight * v;
     }
     return sum;
   };
-  const rampMass_kg = mix((w) => w.rampMass_kg);
-  const distance_m = mix((w) => w.distance_m);
-  const todMass_kg = mix((w) => w.afterSolvable?.mass_kg);
-  const after_m = mix((w) => w.afterSolvable?.distance_m);
+  const rampMass_kg = own.rampMass_kg === undefined ? undefined : mix((f) => (f.warmStart!.rampMass_kg === undefined ? undefined : iterationRoot(f)));
+  const distance_m = own.distance_m === undefined ? undefined : mix((f) => (f.warmStart!.distance_m === undefined ? undefined : iterationRoot(f)));
+  const todMass_kg = mix((f) => f.warmStart!.afterSolvable?.mass_kg);
+  const after_m = mix((f) => f.warmStart!.afterSolvable?.distance_m);
   return {
     ...own,
     ...(rampMass_kg === undefined ? {} : { rampMass_kg }),
@@ -61,16 +86,31 @@ export function warmStartFor(start: NeighbourStart): MissionStart | null {
   };
 }
 
+/** solveFrom's options: the solve's own (its start is the neighbour's) and who counts the passes flown. */
+export interface SolveFromOptions extends Omit<SolveOptions, 'warmStart'> {
+  /** Called with the passes of each solve flown: the warm one and, when it did not come out ok, the cold one. */
+  readonly onPasses?: (passes: number) => void;
+}
+
 /**
  * solveMission started next to `start` when given (warmStartFor). A
  * warm-started mission that does not come out ok is flown again from the
- * solver's own first guess, so a failure reads exactly as it always has.
+ * solver's own first guess, so a failure reads exactly as it always has
+ * (its status and message name the cold solve's figures) and a start that
+ * led the iteration astray costs nothing else.
  */
-export function solveFrom(input: MissionInput, start?: NeighbourStart): MissionResult {
+export function solveFrom(input: MissionInput, start?: NeighbourStart, options: SolveFromOptions = {}): MissionResult {
+  const { onPasses, ...solveOptions } = options;
   const warm = start === undefined ? null : warmStartFor(start);
-  if (warm === null) return solveMission(input);
-  const r = solveMission(input, { warmStart: warm });
-  return r.status === 'ok' ? r : solveMission(input);
+  const cold = (): MissionResult => {
+    const r = solveMission(input, solveOptions);
+    onPasses?.(r.iterations);
+    return r;
+  };
+  if (warm === null) return cold();
+  const r = solveMission(input, { ...solveOptions, warmStart: warm });
+  onPasses?.(r.iterations);
+  return r.status === 'ok' ? r : cold();
 }
 
 /**

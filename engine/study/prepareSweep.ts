@@ -19,17 +19,16 @@
  *   along the fastest-varying axis flown in this thread (the previous case),
  *   or along the next axis at the start of a row, its ramp mass (or the
  *   solvable leg's distance) and its top of descent predicted from the
- *   neighbours' (neighbourStart): the demo's grids then need 1.0 to 1.7
- *   fuel passes a case instead of 4 cold (2 from the neighbour's start
- *   alone). Only the start moves: each case's answer is its cold answer
- *   within the fuel iteration's band (FUEL_TOLERANCE_KG), whatever order the
- *   cases are flown in; a case that does not come out ok is flown again
- *   cold, so its row is the case's own.
+ *   neighbours' (neighbourStart) by the warm start the analyses use too
+ *   (engine/analysis/warmStart.ts, warmStartFor and solveFrom): the demo's
+ *   grids then need 1.0 to 1.7 fuel passes a case instead of 4 cold (2 from
+ *   the neighbour's start alone). Only the start moves: each case's answer
+ *   is its cold answer within the fuel iteration's band (FUEL_TOLERANCE_KG),
+ *   whatever order the cases are flown in; a case that does not come out ok
+ *   is flown again cold (solveFrom), so its row is the case's own.
  */
+import { iterationRoot, solveFrom, type Blend, type FlownMission, type NeighbourStart, type SolveFromOptions } from '../analysis/warmStart';
 import type { Result } from '../core/result';
-import { FUEL_TOLERANCE_KG } from '../mission/fuelIteration';
-import type { MissionStart } from '../mission/missionTypes';
-import { solveMission, type SolveOptions } from '../mission/solveMission';
 import { missionInputOnDeck, type MissionInputMemo, type ProjectResources } from '../project/buildMissionInput';
 import { parseProjectData } from '../project/parseProject';
 import { checkProject, createProjectCheckMemo } from '../project/projectChecks';
@@ -55,53 +54,8 @@ export interface SweepStudy {
   passes(): number;
 }
 
-/** A sweep's solves: its rows read the figures, cautions and status, never the time history. */
-const LEAN: SolveOptions = { timeHistory: false };
-
 /** Most converged solves kept for warm starts (a row's worth, twice, on the usual grids). */
 const MAX_KEPT = 100_000;
-
-/** A converged case kept for its neighbours' starts. */
-interface Flown {
-  readonly start: MissionStart;
-  /**
-   * Where the fuel iteration's root lies: the converged ramp mass (or solvable-leg distance) moved by the converged
-   * residual's offset from the middle of the band over the secant slope. The converged values themselves scatter
-   * across the band's width; these roots lie on a smooth curve, so extrapolating them lands a first pass in the band.
-   */
-  readonly root: number;
-}
-
-function flownOf(start: MissionStart, residual_kg: number): Flown | null {
-  const x = start.rampMass_kg ?? start.distance_m;
-  if (x === undefined || !Number.isFinite(x)) return null;
-  const slope = start.slope;
-  const shift = slope !== undefined && Number.isFinite(slope) && Math.abs(slope) > 0 ? (residual_kg - FUEL_TOLERANCE_KG / 2) / slope : 0;
-  return { start, root: Number.isFinite(shift) ? x - shift : x };
-}
-
-/**
- * The start of a case predicted from flown neighbours with weights (summing to 1; the first is the nearest): the
- * nearest one's start with the weighted sum of the roots as its ramp mass (or distance), and, as the top of descent
- * moves with the case too (another range, drag or cruise speed), the weighted sum of their tops of descent (the mass
- * at the solvable leg's end and the distance after it) as the point of its top-of-descent model.
- */
-function predictedStart(terms: readonly (readonly [Flown, number])[]): MissionStart {
-  const s = terms[0]![0].start;
-  let root = 0;
-  let mass_kg = 0;
-  let distance_m = 0;
-  for (const [f, w] of terms) {
-    root += w * f.root;
-    const after = f.start.afterSolvable;
-    mass_kg += w * (after?.mass_kg ?? Number.NaN);
-    distance_m += w * (after?.distance_m ?? Number.NaN);
-  }
-  const afterSolvable = s.afterSolvable !== undefined && Number.isFinite(mass_kg) && Number.isFinite(distance_m) ? { ...s.afterSolvable, mass_kg, distance_m } : s.afterSolvable;
-  if (s.rampMass_kg !== undefined) return { ...s, rampMass_kg: root, ...(afterSolvable === undefined ? {} : { afterSolvable }) };
-  if (s.distance_m !== undefined) return { ...s, distance_m: root };
-  return s;
-}
 
 /**
  * The study of the grid `axes` over the project document `doc` (the parsed
@@ -156,37 +110,40 @@ export function prepareSweep(
   const memo: MissionInputMemo = {};
   const buildOptions = inletName === undefined ? {} : { inletName };
 
-  const flown = new Map<number, Flown>();
+  const flown = new Map<number, FlownMission>();
   /**
    * The start of case `k`, from the cases flown in this thread: along the fastest axis with a neighbour flown, the
    * quadratic (or line, or constant) through the up to three cases before it, plus that polynomial's miss at the case
-   * one step back along the next axis (the row before) when those were flown too. On the demo's grids the first pass
-   * then lands within a few grams of the converged ramp mass and a metre or two of its top of descent.
+   * one step back along the next axis (the row before) when those were flown too; the blend is of the cases' iteration
+   * roots and tops of descent (engine/analysis/warmStart.ts warmStartFor), from the case just before. On the demo's
+   * grids the first pass then lands within a few grams of the converged ramp mass and a metre or two of its top of
+   * descent.
    */
-  function neighbourStart(k: number, indices: readonly number[]): MissionStart | undefined {
+  function neighbourStart(k: number, indices: readonly number[]): NeighbourStart | undefined {
     for (let f = axes.length - 1; f >= 0; f--) {
       if (indices[f]! < 1) continue;
       const sf = strides[f]!;
-      if (flown.get(k - sf) === undefined) continue;
+      const from = flown.get(k - sf);
+      if (from === undefined) continue;
       // The polynomial along axis f through the cases before k: offsets (in steps) and weights.
       const order = indices[f]! >= 3 && flown.has(k - 2 * sf) && flown.has(k - 3 * sf) ? 3 : indices[f]! >= 2 && flown.has(k - 2 * sf) ? 2 : 1;
       const poly: (readonly [number, number])[] = order === 3 ? [[1, 3], [2, -3], [3, 1]] : order === 2 ? [[1, 2], [2, -1]] : [[1, 1]];
-      const terms: [Flown, number][] = poly.map(([o, w]) => [flown.get(k - o * sf)!, w]);
+      const blend: Blend[] = poly.map(([o, weight]) => ({ weight, result: flown.get(k - o * sf)! }));
       // Plus the same polynomial's miss one step back along the next axis (the row before), when that row was flown here.
       for (let g = f - 1; g >= 0; g--) {
         if (indices[g]! < 1) continue;
         const sg = strides[g]!;
         if (flown.has(k - sg) && poly.every(([o]) => flown.has(k - sg - o * sf))) {
-          terms.push([flown.get(k - sg)!, 1]);
-          for (const [o, w] of poly) terms.push([flown.get(k - sg - o * sf)!, -w]);
+          blend.push({ weight: 1, result: flown.get(k - sg)! });
+          for (const [o, weight] of poly) blend.push({ weight: -weight, result: flown.get(k - sg - o * sf)! });
         }
         break;
       }
-      return predictedStart(terms);
+      return { from, blend };
     }
     return undefined;
   }
-  function keep(k: number, f: Flown): void {
+  function keep(k: number, f: FlownMission): void {
     flown.set(k, f);
     if (flown.size > 2 * reach + 64) {
       for (const key of flown.keys()) if (Math.abs(key - k) > reach) flown.delete(key);
@@ -194,6 +151,9 @@ export function prepareSweep(
   }
 
   let passes = 0;
+  // A row reads no time history, so none is kept (every figure it reads is the same bit for bit without one);
+  // the passes of every solve flown are counted, a cold retry's included.
+  const solveOptions: SolveFromOptions = { timeHistory: false, onPasses: (n) => (passes += n) };
   return {
     passes: () => passes,
     fly(k: number): SweepRow {
@@ -215,18 +175,9 @@ export function prepareSweep(
       if (!deck.ok) return invalidSweepRow(k, inputs, deck.error);
       const input = missionInputOnDeck(project.value, deck.value, buildOptions, memo);
       if (!input.ok) return invalidSweepRow(k, inputs, input.error);
-      const start = warm ? neighbourStart(k, indices) : undefined;
-      // A row reads no time history: none is kept (every figure it reads is the same bit for bit without).
-      let r = solveMission(input.value, start === undefined ? LEAN : { ...LEAN, warmStart: start });
-      passes += r.iterations;
-      // A case that does not come out ok is flown again cold: its status and message (which name the failing pass's
-      // figures) are then those of the case flown alone, and a start that led the iteration astray costs nothing else.
-      if (start !== undefined && r.status !== 'ok') {
-        r = solveMission(input.value, LEAN);
-        passes += r.iterations;
-      }
-      const kept = warm && r.status === 'ok' && r.warmStart !== undefined ? flownOf(r.warmStart, r.residual_kg) : null;
-      if (kept !== null) keep(k, kept);
+      const r = solveFrom(input.value, warm ? neighbourStart(k, indices) : undefined, solveOptions);
+      // Kept for its neighbours: its start and residual only (what a prediction reads), when it converged ok.
+      if (warm && r.status === 'ok' && r.warmStart !== undefined && iterationRoot(r) !== undefined) keep(k, { warmStart: r.warmStart, residual_kg: r.residual_kg });
       return sweepRowOf(k, inputs, r);
     },
   };

@@ -5,7 +5,7 @@ import { compareInlets } from '../../../engine/analysis/inletComparison';
 import { inletFactorBuilder } from '../../../engine/analysis/inletFactorBuilder';
 import { payloadRangeDiagram } from '../../../engine/analysis/payloadRange';
 import { tradeFactors } from '../../../engine/analysis/tradeFactors';
-import { lagrangeWeights, solveFrom, subsetWeights, warmStartFor } from '../../../engine/analysis/warmStart';
+import { iterationRoot, lagrangeWeights, solveFrom, subsetWeights, warmStartFor } from '../../../engine/analysis/warmStart';
 import { expectOk } from '../../../engine/core/result';
 import { prepareStudy } from '../../../engine/study';
 import { FUEL_TOLERANCE_KG } from '../../../engine/mission/fuelIteration';
@@ -64,16 +64,45 @@ describe('warm starts of an analysis', () => {
     expect(lagrangeWeights([0], 0.5)).toEqual([1]);
   });
 
-  it('warmStartFor blends the neighbours\' ramp masses and top of descent, keeping the slope of the one it starts from', () => {
+  it('iterationRoot is where the converged iteration\'s residual reaches the band\'s middle: the same root wherever in the band it stopped', () => {
+    // The same mission converged twice, cold and from a neighbour's start: the iterations stop at different points of
+    // the band, but one secant step from each (Burden & Faires, Numerical Analysis, 2.3; the residual is close to
+    // linear in the ramp mass over the band's width) lands on the same root, far closer than the two stops are.
+    const cold = solveMission(withOew(0));
+    const warm = solveMission(withOew(0), { warmStart: solveMission(withOew(100)).warmStart });
+    const stops = Math.abs(warm.rampMass_kg - cold.rampMass_kg);
+    expect(stops).toBeGreaterThan(1e-3);
+    const roots = Math.abs(iterationRoot(warm)! - iterationRoot(cold)!);
+    expect(roots).toBeLessThan(0.1 * stops);
+    expect(roots).toBeLessThan(1e-3);
+    expect(iterationRoot({ residual_kg: 0 })).toBeUndefined();
+  });
+
+  it('warmStartFor blends the neighbours\' iteration roots and top of descent, keeping the slope of the one it starts from', () => {
     const a = solveMission(withOew(0));
     const b = solveMission(withOew(100));
     expect(a.warmStart).toBeDefined();
     const w = warmStartFor({ from: b, blend: [{ weight: 2, result: b }, { weight: -1, result: a }] })!;
-    expectClose(w.rampMass_kg!, 2 * b.rampMass_kg - a.rampMass_kg, { abs: 1e-9 });
+    expectClose(w.rampMass_kg!, 2 * iterationRoot(b)! - iterationRoot(a)!, { abs: 1e-9 });
     expectClose(w.afterSolvable!.mass_kg, 2 * b.warmStart!.afterSolvable!.mass_kg - a.warmStart!.afterSolvable!.mass_kg, { abs: 1e-9 });
     expect(w.slope).toBe(b.warmStart!.slope);
     const failed = { ...a, status: 'did_not_converge' as const, warmStart: undefined };
     expect(warmStartFor({ from: failed })).toBeNull();
+  });
+
+  it('solveFrom flies a warm start that does not come out ok again cold, and counts both solves\' passes', () => {
+    // The demo's converged start on a mission that cannot be flown (9,000 NM, beyond the tanks): the warm solve does
+    // not come out ok, so it is flown again cold and the cold solve's status and message are the answer.
+    const far: MissionInput = { ...demo, solve: { ...demo.solve, range_m: 9000 * 1852 } as MissionInput['solve'] };
+    const cold = solveMission(far);
+    expect(cold.status).not.toBe('ok');
+    const passes: number[] = [];
+    const start = { from: solveMission(demo) };
+    const r = solveFrom(far, start, { onPasses: (n) => passes.push(n) });
+    expect(r.status).toBe(cold.status);
+    expect(r.statusMessage).toBe(cold.statusMessage);
+    expect(passes).toHaveLength(2);
+    expect(passes[1]).toBe(cold.iterations);
   });
 
   it('a mission started from its neighbours lands on the cold answer within the fuel band, in fewer passes', () => {
