@@ -6,7 +6,7 @@
  */
 import { MAX_ALTITUDE_M, MIN_ALTITUDE_M } from '../../engine/mission';
 import { MAX_PRESSURE_ALTITUDE_M, MIN_PRESSURE_ALTITUDE_M } from '../../engine/aero';
-import { type Dimension, parseQuantity, FOOT_M } from '../../engine/units';
+import { type Dimension, parseQuantity, FOOT_M, groupDigits } from '../../engine/units';
 import { optionalString, requireString, UsageError } from '../verb';
 
 /** Inclusive SI range of an option; `what` says it in words for the message. */
@@ -23,7 +23,7 @@ const FT = FOOT_M;
 /** The ranges the options are checked against (SI). */
 export const OPTION_RANGES = {
   /** Where the mission and the analyses fly (engine/mission/missionInputCheck.ts). */
-  flightAltitude: { min: MIN_ALTITUDE_M, max: MAX_ALTITUDE_M, what: `a pressure altitude from ${Math.round(MIN_ALTITUDE_M / FT)} ft to ${Math.round(MAX_ALTITUDE_M / FT).toLocaleString('en-US')} ft (${MIN_ALTITUDE_M / 1000} km to ${MAX_ALTITUDE_M / 1000} km)` },
+  flightAltitude: { min: MIN_ALTITUDE_M, max: MAX_ALTITUDE_M, what: `a pressure altitude from ${Math.round(MIN_ALTITUDE_M / FT)} ft to ${groupDigits(Math.round(MAX_ALTITUDE_M / FT), 0)} ft (${MIN_ALTITUDE_M / 1000} km to ${MAX_ALTITUDE_M / 1000} km)` },
   /** The standard atmosphere's own range (U.S. Standard Atmosphere 1976 as built here). */
   atmosphereAltitude: { min: MIN_PRESSURE_ALTITUDE_M, max: MAX_PRESSURE_ALTITUDE_M, what: `a pressure altitude from ${Math.round(MIN_PRESSURE_ALTITUDE_M)} m to ${MAX_PRESSURE_ALTITUDE_M} m` },
   mach: { min: 0, max: 5, what: 'a Mach number from 0 to 5' },

@@ -4,7 +4,7 @@ import { resolve } from 'node:path';
 import { SAFETY_NOTICE_LINES } from '../../../engine/core';
 import { cycleDeck, type CycleDeckGrid, cycleDeckPowers, type CycleDeckResult, DEFAULT_CYCLE_DECK_GRID, POWER_LEVER, SENSITIVITY_STEPS } from '../../../engine/cycle';
 import { CUSTOMARY_DECK_UNITS, deckToCsv, deckToJson, SI_DECK_UNITS } from '../../../engine/propulsion';
-import { type Dimension, FOOT_M, parseQuantity } from '../../../engine/units';
+import { type Dimension, FOOT_M, groupDigits, parseQuantity } from '../../../engine/units';
 import { printJsonReport, reportText } from '../../common/report';
 import { optionalString, UsageError, type CliIo, type Verb, stringOptions } from '../../verb';
 import { verbSummary } from '../catalogue';
@@ -127,7 +127,7 @@ or written; 2 bad command line. Methods: docs/cycle-deck.md.
       });
       return 0;
     }
-    const ft = (m: number) => Math.round(m / FOOT_M).toLocaleString('en-US');
+    const ft = (m: number) => groupDigits(Math.round(m / FOOT_M), 0);
     io.out(
       reportText([
         `Deck of "${engine.spec.title}" written to ${path}`,

@@ -17,7 +17,7 @@ import {
 } from '../../../engine/cycle/index';
 import { CUSTOMARY_DECK_UNITS, deckToCsv, deckToJson, RATING_NAMES, SI_DECK_UNITS, type RatingName } from '../../../engine/propulsion';
 import { SAFETY_NOTICE_LINES } from '../../../engine/core';
-import { FOOT_M, POUND_KG } from '../../../engine/units';
+import { FOOT_M, groupDigits, POUND_KG } from '../../../engine/units';
 import { EXIT_FILE, EXIT_NOT_SOLVED, EXIT_OK } from '../../exitCodes';
 import { significant } from '../../common/numberText';
 import { printJsonReport, reportText } from '../../common/report';
@@ -88,7 +88,7 @@ function canonical(path: string): string {
 }
 
 const pct = (r: number): string => `${significant(r * 100, 4)} %`;
-const where = (p: MatchPointResult): string => `${Math.round(p.altitude_m / FOOT_M).toLocaleString('en-US')} ft, Mach ${p.mach}${p.isaDev_K !== 0 ? `, ISA${p.isaDev_K > 0 ? '+' : ''}${p.isaDev_K} K` : ''}, ${p.rating} (power ${p.power})`;
+const where = (p: MatchPointResult): string => `${groupDigits(Math.round(p.altitude_m / FOOT_M), 0)} ft, Mach ${p.mach}${p.isaDev_K !== 0 ? `, ISA${p.isaDev_K > 0 ? '+' : ''}${p.isaDev_K} K` : ''}, ${p.rating} (power ${p.power})`;
 const QUANTITY = { thrust: 'thrust', fuelFlow: 'fuel flow' } as const;
 
 function jsonOf(deckFile: string, startFile: string, out: string, deckOut: string | null, r: CycleMatchResult, deckOutCautions: readonly DeckCopyCaution[]): Record<string, unknown> {
