@@ -162,7 +162,7 @@ export function cycleSpecOf(file: CycleFile): CycleSpec {
 
 /** Parses an already-read JSON value as a cycle file. */
 export function parseCycleData(doc: unknown): Result<CycleSpec, readonly CycleFileIssue[]> {
-  const parsed = cycleFileSchema.safeParse(doc);
+  const parsed = cycleFileSchema.safeParse(doc, { jitless: true }); // one-shot parse: see engine/project/parseProject.ts on jitless
   if (!parsed.success) {
     return err(fromZodIssues(parsed.error.issues, doc).map((i) => ({ ...i, message: i.message.replace('docs/project-format.md', 'docs/cycle-format.md') })));
   }

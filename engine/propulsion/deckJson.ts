@@ -129,7 +129,7 @@ export function parseDeckJson(text: string, sourceName: string): Result<EngineDe
     const what = located.ok ? 'the JSON parser refused it' : located.error.message;
     return err([deckFileError(src, 'bad_json', null, null, null, 'valid JSON', `not valid JSON: ${what}`)]);
   }
-  const parsed = deckJsonSchema.safeParse(raw);
+  const parsed = deckJsonSchema.safeParse(raw, { jitless: true }); // one-shot parse: see parseProject.ts on jitless
   if (!parsed.success) {
     return err(
       parsed.error.issues.slice(0, 100).map((issue) =>

@@ -2,6 +2,8 @@ import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { parseProject, parseProjectData } from '../../../engine/project/parseProject';
+import { migrateProject } from '../../../engine/project/projectMigrations';
+import { projectSchema } from '../../../engine/project/projectSchema';
 import { expectClose } from '../../support/assertInDelta';
 
 const fixture = (path: string): string => readFileSync(new URL(`../../../fixtures/${path}`, import.meta.url), 'utf8');
@@ -190,6 +192,55 @@ describe('parseProject robustness', () => {
         if (!r.ok) for (const i of r.error) expect(i.message).toMatch(/\S/);
       }),
       { numRuns: 300 },
+    );
+  });
+});
+
+// parseProjectData runs the schema jitless (a one-shot parse; see parseProject.ts). zod's compiled fast path is
+// the reference: on the demo, every bad-project fixture and perturbed demos, both give the same data or the same issues.
+describe('parseProject parses jitless with the same outcome as zod compiled', () => {
+  const outcome = (doc: unknown, jitless: boolean): unknown => {
+    const r = projectSchema.safeParse(doc, { jitless });
+    return r.success ? { data: r.data } : { issues: r.error.issues };
+  };
+  const migrated = (doc: unknown): unknown => {
+    const m = migrateProject(doc);
+    return m.ok ? m.value.doc : doc;
+  };
+
+  it('jitless and compiled agree on the demo and on every bad-project fixture', () => {
+    const docs = [JSON.parse(demoText) as unknown];
+    for (const file of Object.keys(expected)) {
+      try {
+        docs.push(JSON.parse(fixture(`bad-projects/${file}`)) as unknown);
+      } catch {
+        // not JSON: stops before the schema
+      }
+    }
+    expect(docs.length).toBeGreaterThan(5);
+    for (const doc of docs) expect(outcome(migrated(doc), true)).toEqual(outcome(migrated(doc), false));
+    expect(outcome(migrated(docs[0]), true)).toHaveProperty('data');
+  });
+
+  it('jitless and compiled agree when a demo field is replaced by an arbitrary JSON value', () => {
+    const paths: readonly (readonly (string | number)[])[] = [
+      ['airframe', 'weights', 'maxTakeoff'],
+      ['polar', 'induced'],
+      ['engine', 'deck'],
+      ['inlets', 0],
+      ['mission', 'legs', 2],
+      ['mission', 'reserves'],
+      ['mission', 'solve'],
+    ];
+    fc.assert(
+      fc.property(fc.constantFrom(...paths), fc.jsonValue(), (path, value) => {
+        const doc = migrated(JSON.parse(demoText)) as Record<string | number, unknown>;
+        let node = doc;
+        for (const key of path.slice(0, -1)) node = node[key] as Record<string | number, unknown>;
+        node[path[path.length - 1]!] = value;
+        expect(outcome(doc, true)).toEqual(outcome(doc, false));
+      }),
+      { numRuns: 200 },
     );
   });
 });
