@@ -126,15 +126,26 @@ function isaPressure(h: number, i: number): number {
 export const MAX_PRESSURE_PA = isaPressure(MIN_PRESSURE_ALTITUDE_M, 0);
 export const MIN_PRESSURE_PA = isaPressure(MAX_PRESSURE_ALTITUDE_M, layerIndex(MAX_PRESSURE_ALTITUDE_M));
 
+// One-entry memo of `atmosphere`'s answer in range, keyed by its two arguments alone (Object.is: -0 and 0 stay
+// apart): a mission point asks the same altitude of the mission's air data, the drag polar and the installed
+// engine in a row, and the state is a pure function of them, read-only, so sharing it cannot change any answer.
+let memoAltitude_m = Number.NaN;
+let memoIsaDev_K = Number.NaN;
+let memoState: AtmosphereState | null = null;
+let memoResult: Result<AtmosphereState, AtmosphereError> | null = null;
+
 /**
  * Static pressure (Pa) of the standard atmosphere at a pressure altitude (m):
  * `atmosphere(h).pressure_Pa` (the same arithmetic) without the state
- * object, for hot paths; NaN where `atmosphere` would refuse the altitude.
+ * object, for hot paths (the memo's pressure when `atmosphere` was last asked
+ * this altitude); NaN where `atmosphere` would refuse the altitude.
  */
 export function isaPressureAt(pressureAltitude_m: number): number {
+  if (memoState !== null && Object.is(pressureAltitude_m, memoAltitude_m)) return memoState.pressure_Pa;
   if (!(pressureAltitude_m >= MIN_PRESSURE_ALTITUDE_M && pressureAltitude_m <= MAX_PRESSURE_ALTITUDE_M)) return Number.NaN;
   return isaPressure(pressureAltitude_m, layerIndex(pressureAltitude_m));
 }
+
 
 /**
  * The atmosphere at a geopotential pressure altitude (m), -5,003.9 m to
@@ -168,12 +179,13 @@ export function atmosphere(pressureAltitude_m: number, isaDev_K = 0): Result<Atm
       message: `ISA deviation ${isaDev_K} K is outside ${MIN_ISA_DEV_K} K to +${MAX_ISA_DEV_K} K`,
     });
   }
+  if (memoResult !== null && Object.is(pressureAltitude_m, memoAltitude_m) && Object.is(isaDev_K, memoIsaDev_K)) return memoResult;
   const i = layerIndex(pressureAltitude_m);
   const isaTemperature_K = isaTemperature(pressureAltitude_m, i);
   const temperature_K = isaTemperature_K + isaDev_K;
   const pressure_Pa = isaPressure(pressureAltitude_m, i);
   const density_kg_m3 = pressure_Pa / (R_air * temperature_K);
-  return ok({
+  const state: AtmosphereState = {
     pressureAltitude_m,
     isaDev_K,
     temperature_K,
@@ -184,7 +196,12 @@ export function atmosphere(pressureAltitude_m: number, isaDev_K = 0): Result<Atm
     delta: pressure_Pa / p0,
     sigma: density_kg_m3 / rho0,
     isaTemperature_K,
-  });
+  };
+  memoAltitude_m = pressureAltitude_m;
+  memoIsaDev_K = isaDev_K;
+  memoState = state;
+  memoResult = ok(state);
+  return memoResult;
 }
 
 /**

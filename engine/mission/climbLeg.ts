@@ -5,16 +5,16 @@
  * the level speed change at the low-altitude limit. Lift = weight (n = 1),
  * common practice for the energy method.
  */
-import type { RatingName } from '../propulsion/propulsionModel';
+import type { InstalledPoint, RatingName } from '../propulsion/propulsionModel';
 import type { SpeedSchedule } from './missionTypes';
 import { energyShareFactor, pressureAltitudeRate } from './energyShareFactor';
-import { airPoint, fuelExhaustedEvents, makeSample, pathDerivative, ratingPoint } from './flightPoint';
+import { airPointIn, fuelExhaustedEvents, makeSample, pathDerivative } from './flightPoint';
 import { flyMonotoneSegment, missionDomain } from './flySegment';
 import { pathBreakAltitudes } from './stepBreaks';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
 import { flyLevelSpeedChange } from './levelSpeedChange';
 import { BASE_MONOTONE_STEP, BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
-import { machOfCas, missionAir } from './missionAtmosphere';
+import { heldCasMach, missionAir, type MissionAir } from './missionAtmosphere';
 import { S_ALT, S_MASS, S_TAS, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
 import { schedulePhases } from './speedSchedule';
 import { msg, q } from '../units/messageParts';
@@ -34,16 +34,30 @@ export function makeClimbSegment(
 ): Segment {
   const input = ctx.input;
   const dev = target.env.isaDev_K;
+  const machOf = held === 'mach' ? () => value : heldCasMach(value);
+  // What depends on the altitude alone (air data, Mach, rated thrust, energy share factor), kept for the last
+  // altitude asked: an RK4 step evaluates its two middle stages at one altitude and its last stage and accepted
+  // point at another (pure functions of it, so keeping them cannot change any answer).
+  let cached = false;
+  let cachedAltitude_m = 0;
+  let air: MissionAir | null = null;
+  let mach = 0;
+  let th: InstalledPoint | null = null;
+  let f = 1;
   const pointOf = (y: StateVector) => {
     const h = y[S_ALT];
-    const air = missionAir(h, dev);
-    const mach = held === 'mach' ? value : machOfCas(value, air.pressure_Pa);
-    const at = airPoint(input, h, mach, y[S_MASS], dev);
-    const th = ratingPoint(input, at, dev, rating);
-    const f = energyShareFactor(held, mach, air.lapse_K_m, air.temperature_K, air.isaTemperature_K);
-    const rate = pressureAltitudeRate(th.thrust_N, at.drag.drag_N, at.tas_m_s, y[S_MASS], f, air.temperature_K, air.isaTemperature_K);
-    const d = pathDerivative(rate, at.tas_m_s, air, target.env.wind_m_s, th.fuelFlow_kg_s);
-    return { d, at, th, rate };
+    if (!cached || !Object.is(h, cachedAltitude_m)) {
+      air = missionAir(h, dev);
+      mach = machOf(air.pressure_Pa);
+      th = input.propulsion.atRating({ altitude_m: h, mach, isaDev_K: dev }, rating);
+      f = energyShareFactor(held, mach, air.lapse_K_m, air.temperature_K, air.isaTemperature_K);
+      cachedAltitude_m = h;
+      cached = true;
+    }
+    const at = airPointIn(input, air!, h, mach, y[S_MASS]);
+    const rate = pressureAltitudeRate(th!.thrust_N, at.drag.drag_N, at.tas_m_s, y[S_MASS], f, air!.temperature_K, air!.isaTemperature_K);
+    const d = pathDerivative(rate, at.tas_m_s, air!, target.env.wind_m_s, th!.fuelFlow_kg_s);
+    return { d, at, th: th!, rate };
   };
   const evaluate: Segment['evaluate'] = (y) => {
     const { d, at, th, rate } = pointOf(y);

@@ -6,15 +6,16 @@
  * the low-altitude speed limit is flown at idle. Energy method as in
  * climbLeg.ts (BADA 3 User Manual total-energy model, from memory).
  */
+import type { InstalledPoint } from '../propulsion/propulsionModel';
 import type { SpeedSchedule } from './missionTypes';
 import { energyShareFactor, pressureAltitudeRate } from './energyShareFactor';
-import { airPoint, fuelExhaustedEvents, makeSample, pathDerivative, ratingPoint, thrustPoint } from './flightPoint';
+import { airPointIn, fuelExhaustedEvents, makeSample, pathDerivative, ratingPoint, thrustPoint } from './flightPoint';
 import { flyMonotoneSegment, missionDomain } from './flySegment';
 import { pathBreakAltitudes } from './stepBreaks';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
 import { flyLevelSpeedChange } from './levelSpeedChange';
 import { BASE_MONOTONE_STEP, BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
-import { G0_M_S2, machOfCas, missionAir } from './missionAtmosphere';
+import { G0_M_S2, heldCasMach, missionAir, type MissionAir } from './missionAtmosphere';
 import { S_ALT, S_MASS, S_TAS, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
 import { schedulePhases } from './speedSchedule';
 import { appendCaution } from './timeHistoryBuilder';
@@ -40,19 +41,36 @@ function makeDescentSegment(
 ): Segment {
   const input = ctx.input;
   const dev = target.env.isaDev_K;
+  const machOf = held === 'mach' ? () => value : heldCasMach(value);
+  // What depends on the altitude alone (air data, Mach, energy share factor, idle thrust), kept for the last
+  // altitude asked: an RK4 step evaluates its two middle stages at one altitude and its last stage and accepted
+  // point at another (pure functions of it, so keeping them cannot change any answer).
+  let cached = false;
+  let cachedAltitude_m = 0;
+  let cachedAir: MissionAir | null = null;
+  let cachedMach = 0;
+  let cachedFactor = 1;
+  let cachedIdle: InstalledPoint | null = null;
   const pointOf = (y: StateVector, withSample: boolean) => {
     const h = y[S_ALT];
     const m = y[S_MASS];
-    const air = missionAir(h, dev);
-    const mach = held === 'mach' ? value : machOfCas(value, air.pressure_Pa);
-    const at = airPoint(input, h, mach, m, dev);
-    const f = energyShareFactor(held, mach, air.lapse_K_m, air.temperature_K, air.isaTemperature_K);
+    if (!cached || !Object.is(h, cachedAltitude_m)) {
+      cachedAir = missionAir(h, dev);
+      cachedMach = machOf(cachedAir.pressure_Pa);
+      cachedFactor = energyShareFactor(held, cachedMach, cachedAir.lapse_K_m, cachedAir.temperature_K, cachedAir.isaTemperature_K);
+      cachedIdle = mode.kind === 'idle' ? input.propulsion.atRating({ altitude_m: h, mach: cachedMach, isaDev_K: dev }, 'flightIdle') : null;
+      cachedAltitude_m = h;
+      cached = true;
+    }
+    const air = cachedAir!;
+    const at = airPointIn(input, air, h, cachedMach, m);
+    const f = cachedFactor;
     let rate: number;
     let thrust: number;
     let engine;
     let thrustAvailable: number;
     if (mode.kind === 'idle') {
-      engine = ratingPoint(input, at, dev, 'flightIdle');
+      engine = cachedIdle!;
       thrust = engine.thrust_N;
       thrustAvailable = thrust;
       rate = pressureAltitudeRate(thrust, at.drag.drag_N, at.tas_m_s, m, f, air.temperature_K, air.isaTemperature_K);

@@ -14,20 +14,25 @@ export interface AirPoint {
   readonly air: MissionAir;
   readonly mach: number;
   readonly tas_m_s: number;
-  readonly cas_m_s: number;
   readonly drag: DragBreakdown;
 }
 
-/** Air data and 1 g drag at pressure altitude (m), Mach (-), mass (kg), ISA deviation (K). */
+/**
+ * Air data and 1 g drag at pressure altitude (m), Mach (-), mass (kg), ISA deviation (K). The CAS is left to
+ * makeSample: only a sample reads it, and the RK4 stages build none.
+ */
 export function airPoint(input: MissionInput, altitude_m: number, mach: number, mass_kg: number, isaDev_K: number): AirPoint {
-  const air = missionAir(altitude_m, isaDev_K);
+  return airPointIn(input, missionAir(altitude_m, isaDev_K), altitude_m, mach, mass_kg);
+}
+
+/** airPoint with the air data `air` already looked up at `altitude_m` (missionAir at the leg's ISA deviation). */
+export function airPointIn(input: MissionInput, air: MissionAir, altitude_m: number, mach: number, mass_kg: number): AirPoint {
   const drag = input.aero.drag({ altitude_m, mach, mass_kg, loadFactor: 1 });
   return {
     altitude_m,
     air,
     mach,
     tas_m_s: mach * air.speedOfSound_m_s,
-    cas_m_s: casOfMach(mach, air.pressure_Pa),
     drag,
   };
 }
@@ -60,7 +65,7 @@ export function makeSample(
   return {
     altitude_m: at.altitude_m,
     mach: at.mach,
-    cas_m_s: at.cas_m_s,
+    cas_m_s: casOfMach(at.mach, at.air.pressure_Pa),
     tas_m_s: at.tas_m_s,
     thrustAvailable_N,
     thrustUsed_N,

@@ -8,7 +8,7 @@
  * Sources: U.S. Standard Atmosphere 1976; NACA Report 1135 (pitot relation).
  */
 import { atmosphere, isaLapseRate_K_m, pressureAltitude } from '../aero/standardAtmosphere';
-import { casFromMach, casMachTransitionAltitude, machFromCas } from '../aero/airspeeds';
+import { casFromMach, casMachTransitionAltitude, impactPressureRatio, machFromCas, machFromImpactPressureRatio } from '../aero/airspeeds';
 import { a0, g0, p0, R_air, T0 } from '../aero/constants';
 
 export const G0_M_S2 = g0;
@@ -73,6 +73,20 @@ export function altitudeOfPressure(pressure_Pa: number): number {
 /** Mach (-) from CAS (m/s) at a static pressure (Pa); NACA Report 1135 (engine/aero/airspeeds.ts). */
 export function machOfCas(cas_m_s: number, pressure_Pa: number): number {
   return machFromCas(cas_m_s, pressure_Pa);
+}
+
+/**
+ * Mach (-) as a function of static pressure (Pa) along a held CAS (m/s): machOfCas(cas_m_s, p) to the bit, with the
+ * CAS's impact pressure (its part independent of the altitude) worked out once; NACA Report 1135 via
+ * engine/aero/airspeeds.ts. For the climbs and descents, which ask it at every right-hand side.
+ */
+export function heldCasMach(cas_m_s: number): (pressure_Pa: number) => number {
+  if (!(cas_m_s >= 0) || !Number.isFinite(cas_m_s)) return (pressure_Pa) => machOfCas(cas_m_s, pressure_Pa); // throws with machFromCas's message
+  const qc_Pa = SEA_LEVEL_PRESSURE_PA * impactPressureRatio(cas_m_s / SEA_LEVEL_SPEED_OF_SOUND_M_S);
+  return (pressure_Pa) => {
+    if (!(pressure_Pa > 0) || !Number.isFinite(pressure_Pa)) return machOfCas(cas_m_s, pressure_Pa); // throws likewise
+    return machFromImpactPressureRatio(qc_Pa / pressure_Pa);
+  };
 }
 
 /** CAS (m/s) from Mach (-) at a static pressure (Pa); NACA Report 1135 (engine/aero/airspeeds.ts). */

@@ -6,6 +6,7 @@ import {
   geometricFromGeopotential,
   geopotentialFromGeometric,
   isaLapseRate_K_m,
+  isaPressureAt,
   MAX_PRESSURE_ALTITUDE_M,
   MIN_PRESSURE_ALTITUDE_M,
   pressureAltitude,
@@ -106,6 +107,25 @@ describe('atmosphere against ICAO Doc 7488 (feet)', () => {
   it('has an isothermal layer from 36,089 ft (11,000 m) to 20,000 m', () => {
     expectClose(at(36089 * 0.3048).temperature_K, 216.65, { abs: 0.001 }, 'ICAO Doc 7488, tropopause');
     expect(at(15000).temperature_K).toBe(at(19999).temperature_K);
+  });
+});
+
+describe('atmosphere asked again (its one-entry memo)', () => {
+  it('gives the same ICAO Doc 7488 state at 35,000 ft whatever was asked before, and isaPressureAt agrees', () => {
+    // ICAO Doc 7488/3 Table 1 (from memory): 35,000 ft 218.808 K, 238.42 hPa; 10,000 ft 696.82 hPa.
+    const h = 35000 * 0.3048;
+    const first = at(h);
+    const warmer = at(h, 15);
+    expectClose(warmer.temperature_K, 218.808 + 15, { abs: 0.0005 }, 'ICAO Doc 7488 + 15 K');
+    expectClose(isaPressureAt(10000 * 0.3048) / 100, 696.82, { abs: 0.005 }, 'ICAO Doc 7488 at 10,000 ft, another altitude than the last asked');
+    expectClose(isaPressureAt(h) / 100, 238.42, { abs: 0.005 }, 'ICAO Doc 7488, pressure unaffected by the deviation');
+    const again = at(h);
+    expect(again).toEqual(first);
+    expectClose(again.temperature_K, 218.808, { abs: 0.0005 }, 'ICAO Doc 7488');
+    expect(isaPressureAt(h)).toBe(first.pressure_Pa);
+    expect(atmosphere(h, 150).ok).toBe(false);
+    expect(atmosphere(-0).ok && atmosphere(-0).value.pressureAltitude_m).toBe(-0);
+    expect(atmosphere(0).ok && atmosphere(0).value.pressureAltitude_m).toBe(0);
   });
 });
 

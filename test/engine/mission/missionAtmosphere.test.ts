@@ -1,5 +1,5 @@
-import { describe, it } from 'vitest';
-import { altitudeOfPressure, casOfMach, machOfCas, missionAir, transitionAltitude } from '../../../engine/mission/missionAtmosphere';
+import { describe, expect, it } from 'vitest';
+import { altitudeOfPressure, casOfMach, heldCasMach, machOfCas, missionAir, transitionAltitude } from '../../../engine/mission/missionAtmosphere';
 import { expectClose } from '../../support/assertInDelta';
 
 describe('missionAtmosphere', () => {
@@ -31,6 +31,19 @@ describe('missionAtmosphere', () => {
     // At sea level CAS = TAS by definition (NACA Report 1135).
     expectClose(machOfCas(170.1, 101325), 170.1 / 340.294, { rel: 1e-5 }, 'a0 = 340.294 m/s (USSA 1976)');
     expectClose(casOfMach(0.5, 101325), 0.5 * 340.294, { rel: 1e-5 }, 'CAS = TAS at sea level');
+  });
+
+  it('heldCasMach is machOfCas to the bit along a held CAS, and CAS = TAS at sea level', () => {
+    // At sea level CAS = TAS by definition (NACA Report 1135); elsewhere the held-CAS Mach is machOfCas's.
+    const cas = (280 * 1852) / 3600;
+    const machAt = heldCasMach(cas);
+    expectClose(machAt(101325), cas / 340.294, { rel: 1e-5 }, 'a0 = 340.294 m/s (USSA 1976)');
+    for (const h of [0, 3048, 7500, 11000, 12500]) {
+      const p = missionAir(h, 0).pressure_Pa;
+      expect(machAt(p)).toBe(machOfCas(cas, p));
+    }
+    expect(() => machAt(0)).toThrow(/pressure/);
+    expect(() => heldCasMach(-1)(101325)).toThrow(/CAS/);
   });
 
   it('transitionAltitude for 300 kt and Mach 0.78 is about 29,300 ft', () => {
