@@ -34,7 +34,7 @@ export function flyLevelSpeedChange(
   const a = missionAir(altitude_m, dev).speedOfSound_m_s;
   const vTarget = toMach * a;
   const direction = vTarget >= start[S_TAS] ? 1 : -1;
-  const evaluate: Segment['evaluate'] = (y) => {
+  const pointOf = (y: StateVector) => {
     const mach = Math.max(y[S_TAS], 0) / a;
     const at = airPoint(input, altitude_m, mach, y[S_MASS], dev);
     const th = ratingPoint(input, at, dev, rating);
@@ -44,8 +44,14 @@ export function flyLevelSpeedChange(
     d[2] = at.tas_m_s + target.env.wind_m_s;
     d[S_MASS] = -th.fuelFlow_kg_s;
     d[S_TAS] = y[S_MASS] > 0 ? (th.thrust_N - at.drag.drag_N) / y[S_MASS] : 0;
+    return { d, at, th };
+  };
+  const evaluate: Segment['evaluate'] = (y) => {
+    const { d, at, th } = pointOf(y);
     return { derivative: d, sample: makeSample(at, th.thrust_N, th.thrust_N, th.fuelFlow_kg_s, 0, th) };
   };
+  // RK4 stages need no sample.
+  const derivative = (y: StateVector): Float64Array => pointOf(y).d;
   const events: SegmentEvent[] = [
     { stop: 'speed_reached', stateOnly: true, g: (y) => direction * (y[S_TAS] - vTarget) },
     {
@@ -57,7 +63,7 @@ export function flyLevelSpeedChange(
   const startState = Float64Array.from(start);
   startState[S_TAS] = start[S_TAS] > 0 ? start[S_TAS] : vTarget;
   if (Math.abs(startState[S_TAS] - vTarget) < 1e-9) return legOk(startState, null);
-  const run = flyMonotoneSegment(ctx, target, { step_s: BASE_STEP_S.speedChange * ctx.options.stepScale, evaluate, events }, startState, {
+  const run = flyMonotoneSegment(ctx, target, { step_s: BASE_STEP_S.speedChange * ctx.options.stepScale, evaluate, derivative, events }, startState, {
     component: S_TAS,
     to: vTarget,
     breaks: speedBreaks(input, a, startState[S_TAS], vTarget),
