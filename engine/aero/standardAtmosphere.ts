@@ -72,6 +72,8 @@ export const MAX_ISA_DEV_K = 100;
 /** Layer base geopotential altitudes (m) and lapse rates (K/m), 1976 Table 4. */
 const BASE_H = [0, 11000, 20000, 32000, 47000, 51000, 71000] as const;
 const LAPSE = [-0.0065, 0, 0.001, 0.0028, 0, -0.0028, -0.002] as const;
+/** Pressure altitudes (m) where the 1976 lapse rate changes (the layer bases above sea level, Table 4), ascending. */
+export const ISA_LAPSE_BREAKS_M: readonly number[] = Object.freeze(BASE_H.slice(1, -1));
 /**
  * g0 M0 / R* (K/m): the hydrostatic constant of 1976 equations 33a/33b, with
  * the 1976 M0 so that layer-base pressures match Table 4 to its 7 digits.

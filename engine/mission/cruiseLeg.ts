@@ -24,7 +24,7 @@ import { makeLevelSegment } from './levelFlight';
 import { BASE_MONOTONE_STEP, BASE_STEP_S, distanceIndex, type LegTarget, type MissionContext } from './missionContext';
 import { pathBreakAltitudes } from './stepBreaks';
 import type { SegmentRun } from './integrator';
-import { altitudeOfPressure, missionAir } from './missionAtmosphere';
+import { altitudeOfPressure, LAPSE_JUMPS_M, missionAir } from './missionAtmosphere';
 import type { CruiseProfile, CruiseSpeed, MissionInput } from './missionTypes';
 import { S_AIR, S_ALT, S_GROUND, S_MASS, S_TAS, type FlightSample, type SegmentEvent, type StateVector } from './missionState';
 import { appendCaution } from './timeHistoryBuilder';
@@ -207,6 +207,7 @@ function climbWithinLeg(
     maxStep: BASE_MONOTONE_STEP.altitude_m * ctx.options.stepScale,
     minRate: CLIMB_STALL_RATE_M_S,
     targetStop: 'altitude_reached',
+    jumps: LAPSE_JUMPS_M,
   });
   const state = climb.end;
   const last = climb.endSample;

@@ -15,7 +15,7 @@ import { pathBreakAltitudes } from './stepBreaks';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
 import { flyLevelSpeedChange } from './levelSpeedChange';
 import { BASE_MONOTONE_STEP, BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
-import { G0_M_S2, heldCasMach, missionAir, type MissionAir } from './missionAtmosphere';
+import { G0_M_S2, heldCasMach, LAPSE_JUMPS_M, missionAir, type MissionAir } from './missionAtmosphere';
 import { S_ALT, S_MASS, S_TAS, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
 import { schedulePhases } from './speedSchedule';
 import { appendCaution } from './timeHistoryBuilder';
@@ -135,6 +135,7 @@ export function flyDescent(
       maxStep: BASE_MONOTONE_STEP.altitude_m * ctx.options.stepScale,
       minRate: MONOTONE_DESCENT_RATE_M_S,
       targetStop: 'altitude_reached',
+      jumps: LAPSE_JUMPS_M,
     });
     state = run.end;
     last = run.endSample;

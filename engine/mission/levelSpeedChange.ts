@@ -70,6 +70,8 @@ export function flyLevelSpeedChange(
     maxStep: BASE_MONOTONE_STEP.speed_m_s * ctx.options.stepScale,
     minRate: MONOTONE_SPEED_CHANGE_M_S2,
     targetStop: 'speed_reached',
+    // Nothing jumps along the speed at one altitude (the polar and deck are continuous in Mach).
+    jumps: [],
   });
   if (run.stop === 'speed_reached') {
     run.end[S_TAS] = vTarget;

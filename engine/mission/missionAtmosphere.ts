@@ -7,7 +7,7 @@
  *
  * Sources: U.S. Standard Atmosphere 1976; NACA Report 1135 (pitot relation).
  */
-import { atmosphere, isaLapseRate_K_m, pressureAltitude } from '../aero/standardAtmosphere';
+import { atmosphere, ISA_LAPSE_BREAKS_M, isaLapseRate_K_m, pressureAltitude } from '../aero/standardAtmosphere';
 import { casFromMach, casMachTransitionAltitude, impactPressureRatio, machFromCas, machFromImpactPressureRatio } from '../aero/airspeeds';
 import { a0, g0, p0, R_air, T0 } from '../aero/constants';
 
@@ -17,6 +17,11 @@ export const SEA_LEVEL_TEMPERATURE_K = T0;
 export const SEA_LEVEL_PRESSURE_PA = p0;
 export const SEA_LEVEL_SPEED_OF_SOUND_M_S = a0;
 export const TROPOPAUSE_M = 11000;
+/**
+ * Pressure altitudes (m) where the ISA lapse rate, and with it the energy share factor of a climb or descent,
+ * jumps (U.S. Standard Atmosphere 1976 layer bases): the right-hand side's value itself, not only its slope.
+ */
+export const LAPSE_JUMPS_M = ISA_LAPSE_BREAKS_M;
 
 export interface MissionAir {
   readonly temperature_K: number;

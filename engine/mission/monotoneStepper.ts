@@ -39,6 +39,12 @@ export interface MonotonePlan {
   readonly minRate: number;
   /** The stop reported on reaching `to`; the segment's event with this stop is not checked at step ends. */
   readonly targetStop: SegmentStop;
+  /**
+   * Values of the component where the right-hand side's value itself jumps (not only its slope), e.g. the lapse
+   * rate at the atmosphere's layer bases: a segment starting on one takes its first stage a hair inside (NUDGE),
+   * any other starts from the evaluation at its start. Absent: every segment nudges.
+   */
+  readonly jumps?: readonly number[];
 }
 
 /** Step ends from `from` to `to`: every break between them, each interval cut evenly into steps of at most `maxStep`. */
@@ -106,13 +112,17 @@ export function integrateMonotone(
   const k2 = new Float64Array(STATE_SIZE);
   const k3 = new Float64Array(STATE_SIZE);
   // The segment's own equations hold up to its ends, but the models there may already be those of the next
-  // segment (the tropopause: the lapse rate changes at 11 km), so the first and last stages are taken a hair
-  // inside, NUDGE of the step (one extra evaluation per segment).
-  const first = Float64Array.from(y) as StateVector;
-  const firstStep = (ends[0] ?? plan.to) - start[c];
-  first[c] = start[c] + NUDGE * firstStep;
-  if (domainExit(domain, first) !== null) return timeIntegrator(y, true);
-  let f1 = rhs(first);
+  // segment (the tropopause: the lapse rate changes at 11 km), so the last stage is taken a hair inside, NUDGE of
+  // the step, and so is the first where the start lies on one of the plan's jumps (one extra evaluation); elsewhere
+  // the right-hand side is continuous and the first stage is the start's own evaluation.
+  let f1: Float64Array = ev.derivative;
+  if (plan.jumps === undefined || plan.jumps.includes(start[c])) {
+    const first = Float64Array.from(y) as StateVector;
+    const firstStep = (ends[0] ?? plan.to) - start[c];
+    first[c] = start[c] + NUDGE * firstStep;
+    if (domainExit(domain, first) !== null) return timeIntegrator(y, true);
+    f1 = rhs(first);
+  }
   let s0 = start[c];
   for (let j = 0; j < ends.length; j++) {
     const s1 = ends[j]!;

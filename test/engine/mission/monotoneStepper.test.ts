@@ -93,4 +93,27 @@ describe('integrateMonotone', () => {
     // 100 kg at 0.3 kg/s: t = 333.3 s, so h = (a / b)(1 - exp(-b t)) (closed form).
     expectClose(run.end[S_ALT], (a / b) * (1 - Math.exp((-b * 100) / q)), { rel: 1e-6 }, 'closed form h(t)');
   });
+
+  it('integrateMonotone nudges the first stage only where the start lies on one of the plan jumps (piecewise-constant fuel flow)', () => {
+    // Fuel flow q below 0 m and 2q from 0 m up (a value jump at the start, as the lapse rate jumps at 11 km), on the
+    // linear-ceiling climb: over (0, 9000] the flow is 2q throughout, so m = m0 - 2 q t(h) (closed form).
+    const jumping = (): Segment => {
+      const base = linearCeilingClimb(a, b, q);
+      const f = (y: StateVector) => {
+        const d = base.derivative!(y);
+        d[S_MASS] = y[S_ALT] > 0 ? -2 * q : -q;
+        return d;
+      };
+      return { ...base, evaluate: (y) => ({ ...base.evaluate(y), derivative: f(y) }), derivative: f };
+    };
+    const exact = 10000 - 2 * q * exactTime;
+    const onJump = integrateMonotone(jumping(), start(10000), () => {}, { ...plan(600), jumps: [0, 4000] });
+    expectClose(onJump.end[S_MASS], exact, { rel: 1e-8 }, 'closed form m0 - 2 q t (first stage inside the segment)');
+    // Told nothing jumps at its start, the first stage takes the start's own flow q: the fuel of the first step is off.
+    const told = integrateMonotone(jumping(), start(10000), () => {}, { ...plan(600), jumps: [4000] });
+    expect(Math.abs(told.end[S_MASS] - exact)).toBeGreaterThan(1e-3);
+    // A continuous right-hand side gives the closed form either way.
+    const smooth = integrateMonotone(linearCeilingClimb(a, b, q), start(10000), () => {}, { ...plan(600), jumps: [] });
+    expectClose(smooth.end[S_MASS], 10000 - q * exactTime, { rel: 1e-8 }, 'closed form m0 - q t');
+  });
 });
