@@ -124,8 +124,8 @@ describe('atmosphere asked again (its one-entry memo)', () => {
     expectClose(again.temperature_K, 218.808, { abs: 0.0005 }, 'ICAO Doc 7488');
     expect(isaPressureAt(h)).toBe(first.pressure_Pa);
     expect(atmosphere(h, 150).ok).toBe(false);
-    expect(atmosphere(-0).ok && atmosphere(-0).value.pressureAltitude_m).toBe(-0);
-    expect(atmosphere(0).ok && atmosphere(0).value.pressureAltitude_m).toBe(0);
+    expect(at(-0).pressureAltitude_m).toBe(-0);
+    expect(at(0).pressureAltitude_m).toBe(0);
   });
 });
 

@@ -99,8 +99,8 @@ describe('integrateMonotone', () => {
     // linear-ceiling climb: over (0, 9000] the flow is 2q throughout, so m = m0 - 2 q t(h) (closed form).
     const jumping = (): Segment => {
       const base = linearCeilingClimb(a, b, q);
-      const f = (y: StateVector) => {
-        const d = base.derivative!(y);
+      const f = (y: StateVector): Float64Array<ArrayBuffer> => {
+        const d = Float64Array.from(base.derivative!(y));
         d[S_MASS] = y[S_ALT] > 0 ? -2 * q : -q;
         return d;
       };
