@@ -6,12 +6,15 @@
  * waits for the next; a worker whose lane is done takes the back half of the
  * longest lane left. Rows come back as they are flown and go to `onRows` at
  * once. `stop()` ends the run early (Ctrl-C): the workers are terminated and
- * what was received stays written.
+ * what was received stays written. The workers may be started ahead
+ * (startSweepCrew), while the main thread still reads the project: a
+ * worker's own start-up (the thread, the bundle compiled, the schemas
+ * built) is then done by the time its study comes.
  */
 import { setFlagsFromString } from 'node:v8';
 import { Worker } from 'node:worker_threads';
 import type { SweepRow } from '../../engine/project';
-import type { SweepChunk, SweepReply, SweepWorkerData } from './sweepProtocol';
+import type { SweepChunk, SweepReply, SweepRequest, SweepWorkerData } from './sweepProtocol';
 
 export interface SweepPoolRun {
   /** Resolves when every case is flown, the run was stopped, or a worker failed. */
@@ -42,11 +45,36 @@ export function sweepWorkerUrl(): URL {
   return import.meta.url.endsWith('.ts') ? new URL('./sourceWorker.mjs', import.meta.url) : new URL('./sweepWorker.mjs', import.meta.url);
 }
 
+/** Worker threads started before their study is known; the pool takes them, and `dispose` ends those not taken. */
+export interface SweepCrew {
+  /** Up to `n` of the started workers (fewer when fewer were started); the rest stay with the crew. */
+  take(n: number): Worker[];
+  /** Terminates the workers not taken (a sweep that ends before its pool starts: bad input, unreadable project). */
+  dispose(): void;
+}
+
+function startWorker(): Worker {
+  return new Worker(sweepWorkerUrl());
+}
+
+/** Starts `count` sweep workers now, each waiting for its study. */
+export function startSweepCrew(count: number): SweepCrew {
+  sizeWorkerHeaps();
+  const idle = Array.from({ length: Math.max(0, count) }, startWorker);
+  return {
+    take: (n) => idle.splice(0, Math.max(0, n)),
+    dispose: () => {
+      for (const w of idle.splice(0)) void w.terminate();
+    },
+  };
+}
+
 export function runSweepPool(
   data: SweepWorkerData,
   range: { readonly start: number; readonly end: number },
   workerCount: number,
   onRows: (rows: readonly SweepRow[]) => void,
+  crew?: SweepCrew,
 ): SweepPoolRun {
   const total = range.end - range.start;
   const threads = Math.max(1, Math.min(workerCount, total));
@@ -87,7 +115,7 @@ export function runSweepPool(
       lane.end = other.end;
       other.end = mid;
     }
-    const c: SweepChunk = { start: lane.next, end: Math.min(lane.next + chunk, lane.end) };
+    const c: SweepChunk = { kind: 'chunk', start: lane.next, end: Math.min(lane.next + chunk, lane.end) };
     lane.next = c.end;
     return c;
   };
@@ -96,17 +124,19 @@ export function runSweepPool(
       const c = nextChunk(i);
       if (c === null) return;
       inFlight[i]!++;
-      workers[i]!.postMessage(c);
+      workers[i]!.postMessage(c satisfies SweepRequest);
     }
   };
   if (total <= 0) {
     end();
     return { finished, stop: () => {} };
   }
-  sizeWorkerHeaps();
+  const ready = crew?.take(threads) ?? [];
+  if (ready.length < threads) sizeWorkerHeaps();
   for (let i = 0; i < threads; i++) {
-    const w = new Worker(sweepWorkerUrl(), { workerData: data });
+    const w = ready[i] ?? startWorker();
     workers.push(w);
+    w.postMessage({ kind: 'study', data } satisfies SweepRequest);
     w.on('message', (reply: SweepReply) => {
       if (ended) return;
       if (reply.kind === 'error') {

@@ -1,12 +1,12 @@
 import { closeSync, openSync, writeSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { resolve } from 'node:path';
-import { gridSize, parseJsonText, parseShard, parseVary, shardRange, type SweepAxis, sweepCsvHead, sweepCsvLine, sweepJsonlHead, sweepJsonLine, type SweepRow } from '../../engine/project';
+import { gridSize, parseJsonText, parseShard, parseVary, shardRange, type Shard, type SweepAxis, sweepCsvHead, sweepCsvLine, sweepJsonlHead, sweepJsonLine, type SweepRow } from '../../engine/project';
 import { printJsonReport, reportText } from '../common/report';
 import { readTextFile } from '../common/textFile';
 import { checkInletName, projectArgument } from '../common/projectArgs';
 import { buildFromProject, formatLoadFailure, readProjectFile } from '../projectFiles';
-import { runSweepPool } from '../sweep/sweepPool';
+import { runSweepPool, startSweepCrew, type SweepCrew } from '../sweep/sweepPool';
 import { optionalString, UsageError, type CliIo, type Verb } from '../verb';
 import { INLET_OPTION, JSON_OPTION } from './analysisArgs';
 import { verbSummary } from './catalogue';
@@ -94,101 +94,129 @@ Exit codes: 0 every case flown; 1 the project (or its deck) cannot be read; 2 ba
   },
   allowPositionals: true,
   async run(values, positionals, io: CliIo): Promise<number> {
-    const file = projectArgument(positionals, 'sweep');
-    const specs = (Array.isArray(values.vary) ? values.vary : []).map(String);
-    const inletName = optionalString(values, 'inlet');
-    const out = optionalString(values, 'out');
-    if (out !== undefined && out.trim() === '') throw new UsageError('--out: give a file name');
-    const json = values.json === true;
-    const format = formatOf(out, json);
-    const workers = workerCount(optionalString(values, 'workers'));
-    const shardText = optionalString(values, 'shard');
-    const parsedShard = shardText === undefined ? null : parseShard(shardText);
-    if (parsedShard !== null && !parsedShard.ok) throw new UsageError(`${parsedShard.error.where}: ${parsedShard.error.message}`);
-    const theShard = parsedShard === null ? { index: 1, count: 1 } : parsedShard.value;
-
-    // The project as a whole must read (exit 1 with its problems); its raw JSON is what the cases vary.
-    const read = await readProjectFile(resolve(io.cwd, file));
-    if (!read.ok) {
-      io.err(formatLoadFailure(read.error));
-      return 1;
-    }
-    if (inletName !== undefined) checkInletName(read.value.project, inletName, '--inlet', file);
-    const text = readTextFile(file, 'sweep', io);
-    const doc = text === null ? null : parseJsonText(text);
-    if (doc === null || !doc.ok) return 1;
-    const axes = varyAxes(doc.value, specs);
-    // The base case must build (its deck read and parsed once here; the workers get the parsed deck).
-    const loaded = await buildFromProject(read.value.projectPath, read.value.project, inletName === undefined ? {} : { inletName });
-    if (!loaded.ok) {
-      io.err(formatLoadFailure(loaded.error));
-      return 1;
-    }
-    const fileDeck = read.value.project.engine.deck.kind === 'file' ? loaded.value.deck : undefined;
-
-    const total = gridSize(axes);
-    const range = shardRange(total, theShard);
-    const count = range.end - range.start;
-    let sink: RowSink;
-    const target = out === undefined ? 'stdout' : resolve(io.cwd, out);
+    const args = sweepArgs(values, positionals);
+    // The workers start now, while the project is read and checked here (their own start-up, a few tenths of a
+    // second, overlaps that); the pool gives them the study. Any not used are ended whatever happens.
+    const crew = startSweepCrew(Math.min(args.workers, availableParallelism()));
     try {
-      sink = out === undefined ? { write: (t) => io.out(t), close: () => {} } : fileSink(target);
-    } catch (e) {
-      io.err(`blockwise sweep: cannot write ${target}: ${e instanceof Error ? e.message : String(e)}\n`);
-      return 1;
+      return await flySweep(args, crew, io);
+    } finally {
+      crew.dispose();
     }
-    sink.write(format === 'csv' ? sweepCsvHead(axes) : sweepJsonlHead(axes, total));
-    const statuses = new Map<string, number>();
-    let written = 0;
-    const progressToTty = process.stderr.isTTY === true && out !== undefined;
-    let lastProgress = 0;
-    const t0 = performance.now();
-    const onRows = (rows: readonly SweepRow[]) => {
-      let chunk = '';
-      for (const row of rows) {
-        chunk += format === 'csv' ? sweepCsvLine(row) : sweepJsonLine(axes, row);
-        statuses.set(row.status, (statuses.get(row.status) ?? 0) + 1);
-      }
-      sink.write(chunk);
-      written += rows.length;
-      const now = performance.now();
-      if (progressToTty && (now - lastProgress > 200 || written === count)) {
-        lastProgress = now;
-        const rate = written / Math.max((now - t0) / 1000, 1e-3);
-        const left = rate > 0 ? (count - written) / rate : 0;
-        io.err(`\rblockwise sweep: ${written} of ${count} cases (${((100 * written) / Math.max(count, 1)).toFixed(0)} %), ${rate.toFixed(0)} cases/s, about ${left.toFixed(0)} s left   `);
-      }
-    };
-    const pool = runSweepPool({ doc: doc.value, axes, deck: fileDeck, inletName }, range, workers, onRows);
-    const onInterrupt = () => pool.stop();
-    process.once('SIGINT', onInterrupt);
-    const result = await pool.finished;
-    process.removeListener('SIGINT', onInterrupt);
-    sink.close();
-    if (progressToTty) io.err('\n');
-    const elapsed_s = (performance.now() - t0) / 1000;
-    if (result.error !== null) {
-      io.err(`blockwise sweep: a worker failed: ${result.error}; ${written} rows written to ${target}\n`);
-      return 1;
-    }
-    const summary = {
-      project: file,
-      fields: axes.map((a) => a.field),
-      cases: total,
-      shard: `${theShard.index}/${theShard.count}`,
-      shardCases: count,
-      flown: written,
-      interrupted: result.stopped,
-      statuses: Object.fromEntries([...statuses].sort()),
-      workers: Math.max(1, Math.min(workers, count)),
-      elapsed_s,
-      out: target,
-    };
-    const statusText = [...statuses].sort().map(([s, n]) => `${s} ${n}`).join(', ') || 'none';
-    const line = `${result.stopped ? 'Interrupted: ' : ''}${written} of ${count} cases flown${theShard.count > 1 ? ` (shard ${theShard.index}/${theShard.count} of ${total})` : ''} in ${elapsed_s.toFixed(2)} s on ${summary.workers} threads; status: ${statusText}; rows in ${target}`;
-    if (out === undefined) io.err(`blockwise sweep: ${line}\n`);
-    else if (json) printJsonReport(io, summary);
-    else io.out(reportText([line]));
-    return result.stopped ? EXIT_INTERRUPTED : 0;
   },
 };
+
+/** The command line of a sweep, read (a bad option is a UsageError, before any worker starts). */
+interface SweepArgs {
+  readonly file: string;
+  readonly specs: readonly string[];
+  readonly inletName: string | undefined;
+  readonly out: string | undefined;
+  readonly json: boolean;
+  readonly format: 'csv' | 'jsonl';
+  readonly workers: number;
+  readonly theShard: Shard;
+}
+
+function sweepArgs(values: Parameters<Verb['run']>[0], positionals: readonly string[]): SweepArgs {
+  const file = projectArgument(positionals, 'sweep');
+  const specs = (Array.isArray(values.vary) ? values.vary : []).map(String);
+  const inletName = optionalString(values, 'inlet');
+  const out = optionalString(values, 'out');
+  if (out !== undefined && out.trim() === '') throw new UsageError('--out: give a file name');
+  const json = values.json === true;
+  const format = formatOf(out, json);
+  const workers = workerCount(optionalString(values, 'workers'));
+  const shardText = optionalString(values, 'shard');
+  const parsedShard = shardText === undefined ? null : parseShard(shardText);
+  if (parsedShard !== null && !parsedShard.ok) throw new UsageError(`${parsedShard.error.where}: ${parsedShard.error.message}`);
+  const theShard = parsedShard === null ? { index: 1, count: 1 } : parsedShard.value;
+  return { file, specs, inletName, out, json, format, workers, theShard };
+}
+
+async function flySweep(args: SweepArgs, crew: SweepCrew, io: CliIo): Promise<number> {
+  const { file, specs, inletName, out, json, format, workers, theShard } = args;
+  // The project as a whole must read (exit 1 with its problems); its raw JSON is what the cases vary.
+  const read = await readProjectFile(resolve(io.cwd, file));
+  if (!read.ok) {
+    io.err(formatLoadFailure(read.error));
+    return 1;
+  }
+  if (inletName !== undefined) checkInletName(read.value.project, inletName, '--inlet', file);
+  const text = readTextFile(file, 'sweep', io);
+  const doc = text === null ? null : parseJsonText(text);
+  if (doc === null || !doc.ok) return 1;
+  const axes = varyAxes(doc.value, specs);
+  // The base case must build (its deck read and parsed once here; the workers get the parsed deck).
+  const loaded = await buildFromProject(read.value.projectPath, read.value.project, inletName === undefined ? {} : { inletName });
+  if (!loaded.ok) {
+    io.err(formatLoadFailure(loaded.error));
+    return 1;
+  }
+  const fileDeck = read.value.project.engine.deck.kind === 'file' ? loaded.value.deck : undefined;
+
+  const total = gridSize(axes);
+  const range = shardRange(total, theShard);
+  const count = range.end - range.start;
+  let sink: RowSink;
+  const target = out === undefined ? 'stdout' : resolve(io.cwd, out);
+  try {
+    sink = out === undefined ? { write: (t) => io.out(t), close: () => {} } : fileSink(target);
+  } catch (e) {
+    io.err(`blockwise sweep: cannot write ${target}: ${e instanceof Error ? e.message : String(e)}\n`);
+    return 1;
+  }
+  sink.write(format === 'csv' ? sweepCsvHead(axes) : sweepJsonlHead(axes, total));
+  const statuses = new Map<string, number>();
+  let written = 0;
+  const progressToTty = process.stderr.isTTY === true && out !== undefined;
+  let lastProgress = 0;
+  const t0 = performance.now();
+  const onRows = (rows: readonly SweepRow[]) => {
+    let chunk = '';
+    for (const row of rows) {
+      chunk += format === 'csv' ? sweepCsvLine(row) : sweepJsonLine(axes, row);
+      statuses.set(row.status, (statuses.get(row.status) ?? 0) + 1);
+    }
+    sink.write(chunk);
+    written += rows.length;
+    const now = performance.now();
+    if (progressToTty && (now - lastProgress > 200 || written === count)) {
+      lastProgress = now;
+      const rate = written / Math.max((now - t0) / 1000, 1e-3);
+      const left = rate > 0 ? (count - written) / rate : 0;
+      io.err(`\rblockwise sweep: ${written} of ${count} cases (${((100 * written) / Math.max(count, 1)).toFixed(0)} %), ${rate.toFixed(0)} cases/s, about ${left.toFixed(0)} s left   `);
+    }
+  };
+  const pool = runSweepPool({ doc: doc.value, axes, deck: fileDeck, inletName }, range, workers, onRows, crew);
+  const onInterrupt = () => pool.stop();
+  process.once('SIGINT', onInterrupt);
+  const result = await pool.finished;
+  process.removeListener('SIGINT', onInterrupt);
+  sink.close();
+  if (progressToTty) io.err('\n');
+  const elapsed_s = (performance.now() - t0) / 1000;
+  if (result.error !== null) {
+    io.err(`blockwise sweep: a worker failed: ${result.error}; ${written} rows written to ${target}\n`);
+    return 1;
+  }
+  const summary = {
+    project: file,
+    fields: axes.map((a) => a.field),
+    cases: total,
+    shard: `${theShard.index}/${theShard.count}`,
+    shardCases: count,
+    flown: written,
+    interrupted: result.stopped,
+    statuses: Object.fromEntries([...statuses].sort()),
+    workers: Math.max(1, Math.min(workers, count)),
+    elapsed_s,
+    out: target,
+  };
+  const statusText = [...statuses].sort().map(([s, n]) => `${s} ${n}`).join(', ') || 'none';
+  const line = `${result.stopped ? 'Interrupted: ' : ''}${written} of ${count} cases flown${theShard.count > 1 ? ` (shard ${theShard.index}/${theShard.count} of ${total})` : ''} in ${elapsed_s.toFixed(2)} s on ${summary.workers} threads; status: ${statusText}; rows in ${target}`;
+  if (out === undefined) io.err(`blockwise sweep: ${line}\n`);
+  else if (json) printJsonReport(io, summary);
+  else io.out(reportText([line]));
+  return result.stopped ? EXIT_INTERRUPTED : 0;
+}

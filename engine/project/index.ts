@@ -13,7 +13,7 @@ export { inletSchema, type Project, type ProjectLeg } from './projectSchema';
 export { inletDesignOf, installationOf } from './projectSpecs';
 export { projectToJson } from './projectToJson';
 export { MAX_UNCERTAINTY_SAMPLES } from './uncertaintySchema';
-export { gridSize, parseShard, parseVary, shardRange, type SweepAxis } from './sweepGrid';
+export { gridSize, parseShard, parseVary, shardRange, type Shard, type SweepAxis } from './sweepGrid';
 export { flySweepCase, sweepCsvHead, sweepCsvLine, sweepJsonLine, sweepJsonlHead, type SweepRow } from './sweepCase';
 export { installationAssumptions } from './installationAssumptions';
 export { recoveryMethodVariants } from './recoveryMethodVariants';

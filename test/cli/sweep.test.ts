@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { parseJsonText } from '../../engine/project/jsonText';
 import { parseVary } from '../../engine/project/sweepGrid';
 import type { SweepRow } from '../../engine/project/sweepCase';
-import { runSweepPool } from '../../cli/sweep/sweepPool';
+import { runSweepPool, startSweepCrew } from '../../cli/sweep/sweepPool';
 import { SAFETY_NOTICE_LINES } from '../../engine/core/notice';
 import { FUEL_TOLERANCE_KG } from '../../engine/mission/fuelIteration';
 import { run, writeShortDemo, type Json, shortDemoForSuite } from './support/cliRun';
@@ -88,6 +88,32 @@ describe('blockwise sweep', () => {
     const result = await pool.finished;
     expect(result).toEqual({ completed: 11, stopped: false, error: null });
     expect(seen.sort((a, b) => a - b)).toEqual([2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12]);
+  }, 120_000);
+
+  it('runSweepPool flies on workers started ahead (startSweepCrew), starting more when the crew is short, and leaves the rest to the crew', async () => {
+    const doc = parseJsonText(readFileSync(demo.project(), 'utf8'));
+    if (!doc.ok) throw new Error('short demo does not parse');
+    const axis = parseVary(doc.value, 'polar.cdIncrement=0:0.0005:0.0001');
+    if (!axis.ok) throw new Error(axis.error.message);
+    const { loadProjectFromDisk } = await import('../../cli/projectFiles');
+    const loaded = await loadProjectFromDisk(demo.project());
+    if (!loaded.ok) throw new Error('short demo does not load');
+    const data = { doc: doc.value, axes: [axis.value], deck: loaded.value.deck, inletName: undefined };
+    // Three started, two used: one is left with the crew.
+    const crew = startSweepCrew(3);
+    const seen: number[] = [];
+    const result = await runSweepPool(data, { start: 0, end: 6 }, 2, (r) => seen.push(...r.map((row) => row.case)), crew).finished;
+    expect(result).toEqual({ completed: 6, stopped: false, error: null });
+    expect(seen.sort((a, b) => a - b)).toEqual([0, 1, 2, 3, 4, 5]);
+    const left = crew.take(5);
+    expect(left).toHaveLength(1);
+    await left[0]!.terminate();
+    // One started, two wanted: the pool starts the second itself; a disposed crew has none left.
+    const short = startSweepCrew(1);
+    const again = await runSweepPool(data, { start: 0, end: 6 }, 2, () => {}, short).finished;
+    expect(again.completed).toBe(6);
+    short.dispose();
+    expect(short.take(1)).toEqual([]);
   }, 120_000);
 
   it('blockwise sweep interrupted (SIGINT) keeps the rows flown, says so and exits with 130', async () => {
