@@ -3,7 +3,7 @@ import { readFileSync, statSync } from 'node:fs';
 import { URL } from 'node:url';
 
 /**
- * Why the bundle in `distUrl` (a folder URL holding blockwise.mjs and
+ * Why the bundle in `distUrl` (a folder URL holding blockwise.cjs, blockwise.mjs and
  * inputs.json, as scripts/buildCli.mjs writes them) cannot run, or null when
  * it is current: every source file listed in inputs.json (paths relative to
  * `rootUrl`) still has the modification time and size it had at the build.
@@ -13,6 +13,7 @@ export function bundleProblem(rootUrl, distUrl) {
   let inputs;
   try {
     inputs = JSON.parse(readFileSync(new URL('inputs.json', distUrl), 'utf8')).inputs;
+    statSync(new URL('blockwise.cjs', distUrl));
     statSync(new URL('blockwise.mjs', distUrl));
   } catch {
     return 'is not built';

@@ -15,9 +15,12 @@ process.on('uncaughtException', lastResort);
 process.on('unhandledRejection', lastResort);
 process.stdout.on('error', lastResort);
 
-const code = await runCli(process.argv.slice(2), {
+// No top-level await: the bundle of this entry is a classic script (scripts/buildCli.mjs), so that
+// bin/cliCodeCache.mjs can start it from V8's code cache.
+void runCli(process.argv.slice(2), {
   out: (t) => process.stdout.write(t),
   err: (t) => process.stderr.write(t),
   cwd: process.cwd(),
-});
-process.exitCode = code;
+}).then((code) => {
+  process.exitCode = code;
+}, lastResort);

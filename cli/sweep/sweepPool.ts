@@ -40,6 +40,16 @@ function sizeWorkerHeaps(): void {
   setFlagsFromString(`--max-semi-space-size=${WORKER_SEMI_SPACE_MB}`);
 }
 
+/**
+ * Puts the two flags back to V8's defaults once the workers are made and done. V8 refuses a code cache made under
+ * other flags, and bin/cliCodeCache.mjs takes the command line's cache at exit: with the flags left changed, the
+ * next start would refuse the sweep's cache every time.
+ */
+function restoreHeapFlags(): void {
+  setFlagsFromString('--min-semi-space-size=0');
+  setFlagsFromString('--max-semi-space-size=0');
+}
+
 /** The worker's entry: the bundled one beside the bundled CLI, or the TypeScript one through tsx. */
 export function sweepWorkerUrl(): URL {
   return import.meta.url.endsWith('.ts') ? new URL('./sourceWorker.mjs', import.meta.url) : new URL('./sweepWorker.mjs', import.meta.url);
@@ -96,6 +106,7 @@ export function runSweepPool(
     if (ended) return;
     ended = true;
     for (const w of workers) void w.terminate();
+    restoreHeapFlags();
     finish({ completed, stopped, error });
   };
   /** The next chunk of lane `i`, after taking the back half of the longest lane when `i` is done; null when none is left. */

@@ -178,7 +178,7 @@ export const UNIT_TABLE: Readonly<Record<string, UnitDef>> = {
  */
 export function normalizeUnit(unit: string): string {
   return unit
-    .replace(/[·*]/g, ' ')
+    .replace(/[\u00b7*]/g, ' ') // · (middle dot) or *, escaped so the CLI bundle stays ASCII (bin/cliCodeCache.mjs)
     .replace(/\s+/g, ' ')
     .trim()
     .replace(/\s*([/()^])\s*/g, '$1');

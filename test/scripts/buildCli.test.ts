@@ -19,7 +19,7 @@ const scratch = mkdtempSync(join(tmpdir(), 'blockwise-cli-bundle-'));
 afterAll(() => rmSync(scratch, { recursive: true, force: true }));
 
 describe('scripts/buildCli.mjs', () => {
-  it('buildCli bundles the CLI, which prints the same fly JSON and overview as the sources', async () => {
+  it('buildCli bundles the CLI, whose both builds print the same fly JSON and overview as the sources', async () => {
     const out = join(scratch, 'dist');
     const built = (await buildCli(out)) as { inputs: number };
     expect(built.inputs).toBeGreaterThan(50);
@@ -31,9 +31,17 @@ describe('scripts/buildCli.mjs', () => {
     expect(bundled.status).toBe(sources.code);
     expect(bundled.stdout).toBe(sources.out);
 
-    const help = spawnSync(process.execPath, [join(out, 'blockwise.mjs'), '--help'], { cwd: repoRoot, encoding: 'utf8', timeout: 60_000 });
-    expect(help.status).toBe(0);
-    expect(help.stdout).toBe((await run('--help')).out);
+    const script = spawnSync(process.execPath, [join(out, 'blockwise.cjs'), 'fly', DEMO_PROJECT, '--json'], { cwd: repoRoot, encoding: 'utf8', timeout: 60_000 });
+    expect(script.stderr).toBe('');
+    expect(script.status).toBe(sources.code);
+    expect(script.stdout).toBe(sources.out);
+
+    const overview = (await run('--help')).out;
+    for (const file of ['blockwise.mjs', 'blockwise.cjs']) {
+      const help = spawnSync(process.execPath, [join(out, file), '--help'], { cwd: repoRoot, encoding: 'utf8', timeout: 60_000 });
+      expect(help.status).toBe(0);
+      expect(help.stdout).toBe(overview);
+    }
   }, 120_000);
 });
 
@@ -46,6 +54,7 @@ describe('bin/cliBundle.mjs', () => {
     writeFileSync(source, 'export const a = 1;\n');
     utimesSync(source, mtime_s, mtime_s);
     writeFileSync(join(dist, 'blockwise.mjs'), '');
+    writeFileSync(join(dist, 'blockwise.cjs'), '');
     writeFileSync(join(dist, 'inputs.json'), JSON.stringify({ inputs: [['a.ts', mtime_s * 1000, 20]] }));
   }
   const check = () => bundleProblem(pathToFileURL(`${root}/`), pathToFileURL(`${dist}/`)) as string | null;
@@ -66,6 +75,9 @@ describe('bin/cliBundle.mjs', () => {
   it('bundleProblem says the bundle is not built when inputs.json or the bundle is missing', () => {
     writeBundle(1_700_000_000);
     rmSync(join(dist, 'blockwise.mjs'));
+    expect(check()).toBe('is not built');
+    writeBundle(1_700_000_000);
+    rmSync(join(dist, 'blockwise.cjs'));
     expect(check()).toBe('is not built');
     rmSync(dist, { recursive: true });
     expect(check()).toBe('is not built');
