@@ -30,7 +30,7 @@ import { evaluateMission, FIXED_MASS_FUEL_TOLERANCE_KG, fuelBand, iterateDistanc
 import { solvableLegIndex, tripBounds } from './flyTrip';
 import { distanceBasis, legEnvironment, type FlightOptions, type LegTarget, type MissionContext } from './missionContext';
 import { missionInputProblem } from './missionInputCheck';
-import { createPassMemo } from './passMemo';
+import { createPassMemo, type PassMemo } from './passMemo';
 import { S_AIR, S_GROUND, S_MASS, S_TIME } from './missionState';
 import type { MissionInput, MissionResult, MissionStart, MissionStatus, ReserveBreakdown } from './missionTypes';
 import { appendCaution, buildTimeHistory, createFlightLog, freshFlightLog } from './timeHistoryBuilder';
@@ -197,6 +197,15 @@ export interface SolveOptions {
    * field of the result is bit-identical (test/engine/mission/solveOptions.test.ts). Default true.
    */
   readonly timeHistory?: boolean;
+  /**
+   * What earlier solves flew that this one may read (passMemo.ts: the alternate's descent distance against its mass
+   * at the top of descent, the contingency minimum's hold fuel against its starting mass), instead of a fresh memo:
+   * a sweep passes one along cases whose inputs differ in `solve` alone (payload, range, take-off weight), where
+   * those flights depend on the mass alone. Only for such missions; the iteration's passes read it as they read
+   * their own solve's, so a figure moves by the memo's interpolation error (within 1e-9 relative on the demo,
+   * test/engine/mission/solveOptions.test.ts).
+   */
+  readonly passMemo?: PassMemo;
 }
 
 /**
@@ -227,7 +236,7 @@ function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult
   const taxi = taxiOutFuel(input);
   const flightOptions: FlightOptions = { stepScale, allowNegativeFuel: false };
   const log = createFlightLog(input.airframe, input.cautionSettings, false, options.timeHistory !== false);
-  const base: MissionContext = { input, options: flightOptions, zeroFuelMass_kg: zfw, log, memo: createPassMemo() };
+  const base: MissionContext = { input, options: flightOptions, zeroFuelMass_kg: zfw, log, memo: options.passMemo ?? createPassMemo() };
   const solve = input.solve;
   const hasSolvable = solvableLegIndex(input) >= 0;
 

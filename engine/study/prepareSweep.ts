@@ -26,9 +26,15 @@
  *   is its cold answer within the fuel iteration's band (FUEL_TOLERANCE_KG),
  *   whatever order the cases are flown in; a case that does not come out ok
  *   is flown again cold (solveFrom), so its row is the case's own.
+ * - A grid that varies mission.solve alone (payload, range, take-off
+ *   weight) shares one pass memo along its cases (SolveOptions.passMemo):
+ *   the alternate's trial descents are read from the descents of the cases
+ *   before (about a tenth of a demo case's time), each figure within 1e-9
+ *   relative of the case's own memo's.
  */
 import { iterationRoot, solveFrom, type Blend, type FlownMission, type NeighbourStart, type SolveFromOptions } from '../analysis/warmStart';
 import type { Result } from '../core/result';
+import { createPassMemo, type PassMemo } from '../mission/passMemo';
 import { missionInputOnDeck, type MissionInputMemo, type ProjectResources } from '../project/buildMissionInput';
 import { parseProjectData } from '../project/parseProject';
 import { checkProject, createProjectCheckMemo } from '../project/projectChecks';
@@ -53,6 +59,9 @@ export interface SweepStudy {
   /** Fuel passes flown so far, over every case (a cold retry's included). */
   passes(): number;
 }
+
+/** Most flights a shared pass memo holds before a fresh one is started (the demo adds one or two a case). */
+const MAX_SHARED_FLIGHTS = 64;
 
 /** Most converged solves kept for warm starts (a row's worth, twice, on the usual grids). */
 const MAX_KEPT = 100_000;
@@ -150,6 +159,18 @@ export function prepareSweep(
     }
   }
 
+  // Cases that differ in mission.solve alone (payload, range, take-off weight, mode) fly the same aircraft, legs,
+  // reserves and air: their alternate descent and contingency hold depend on the mass alone, so the cases share one
+  // pass memo (engine/mission/passMemo.ts) as the passes of one solve do, the trial descents read from the flights of
+  // the cases before. Started afresh once it holds MAX_SHARED_FLIGHTS flights (its look-ups scan it).
+  const shareFlights = warm && axes.every((a) => a.path[0] === 'mission' && a.path[1] === 'solve');
+  let shared: PassMemo | null = null;
+  const passMemo = (): PassMemo | undefined => {
+    if (!shareFlights) return undefined;
+    if (shared === null || shared.alternateDescent.size + shared.contingencyHold.size > MAX_SHARED_FLIGHTS) shared = createPassMemo();
+    return shared;
+  };
+
   let passes = 0;
   // A row reads no time history, so none is kept (every figure it reads is the same bit for bit without one);
   // the passes of every solve flown are counted, a cold retry's included.
@@ -175,7 +196,7 @@ export function prepareSweep(
       if (!deck.ok) return invalidSweepRow(k, inputs, deck.error);
       const input = missionInputOnDeck(project.value, deck.value, buildOptions, memo);
       if (!input.ok) return invalidSweepRow(k, inputs, input.error);
-      const r = solveFrom(input.value, warm ? neighbourStart(k, indices) : undefined, solveOptions);
+      const r = solveFrom(input.value, warm ? neighbourStart(k, indices) : undefined, { ...solveOptions, passMemo: passMemo() });
       // Kept for its neighbours: its start and residual only (what a prediction reads), when it converged ok.
       if (warm && r.status === 'ok' && r.warmStart !== undefined && iterationRoot(r) !== undefined) keep(k, { warmStart: r.warmStart, residual_kg: r.residual_kg });
       return sweepRowOf(k, inputs, r);

@@ -6,6 +6,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import type { MissionInput, MissionResult } from '../../../engine/mission/missionTypes';
+import { createPassMemo } from '../../../engine/mission/passMemo';
 import { solveMission, type SolveOptions } from '../../../engine/mission/solveMission';
 import { sweepRowOf } from '../../../engine/project/sweepCase';
 import { constantLiftToDragAero, constantTsfcPropulsion } from './support/analyticModels';
@@ -83,4 +84,26 @@ describe('solveMission with timeHistory false', () => {
     expectClose(raised[0]!.value ?? Number.NaN, (65000 * 9.80665) / 17, { rel: 1e-9 }, 'drag = m g / (L/D) at the first point');
     expectClose(raised[0]!.threshold ?? Number.NaN, 0.2 * 400000, { rel: 1e-12 }, 'idle thrust = 0.2 x 400 kN');
   });
+});
+
+describe('solveMission with a pass memo shared along missions that differ in solve alone', () => {
+  it('gives each mission its own-memo figures to 1e-9 relative, reading the flights of the missions before', () => {
+    // A row of a sweep: payload and range stepped, aircraft, legs and reserves the same. Converged into a 1e-6 kg band
+    // so the fuel band's own scatter (0.02 kg) does not hide the memo's interpolation error (a Lagrange parabola
+    // through flown points of a smooth function of the mass, Burden & Faires 3.1).
+    const memo = createPassMemo();
+    let worst = 0;
+    for (let i = 0; i < 12; i++) {
+      const input = demoWith({ kind: 'payloadRange', payload_kg: 300 + 9 * (i % 5), range_m: (1500 + 20 * i) * NM });
+      const own = solveMission(input, { fuelTolerance_kg: 1e-6 });
+      const shared = solveMission(input, { fuelTolerance_kg: 1e-6, passMemo: memo });
+      expect(shared.status).toBe('ok');
+      for (const figure of ['blockFuel_kg', 'tripFuel_kg', 'reserveFuel_kg', 'blockTime_s'] as const) {
+        worst = Math.max(worst, Math.abs(shared[figure] - own[figure]) / own[figure]);
+      }
+    }
+    expect(worst).toBeLessThan(1e-9);
+    // The memo holds the flights of every mission (each pass adds its alternate descent).
+    expect(memo.alternateDescent.size).toBeGreaterThan(12);
+  }, 60_000);
 });
