@@ -123,6 +123,63 @@ function blankSample(y: StateVector): FlightSample {
   };
 }
 
+/**
+ * A cut closer than this fraction of the step to either of its ends is not made: the straddle left is that short
+ * (a predicted step end that missed its break by a little), and its error that small against a straddle mid-step.
+ */
+const MIN_BREAK_FRACTION = 0.01;
+
+/** The break coordinate's slope against the mass (unit/kg) from evaluation `a` at state `ya` to `b` at `yb`, NaN when unknown. */
+function coordinateSlope(a: Evaluation, ya: StateVector, b: Evaluation, yb: StateVector): number {
+  const dm = yb[S_MASS] - ya[S_MASS];
+  return a.breakCoordinate !== undefined && b.breakCoordinate !== undefined && dm !== 0 ? (b.breakCoordinate - a.breakCoordinate) / dm : Number.NaN;
+}
+
+/**
+ * Time (s) from evaluation `ev` until its break coordinate reaches the first of the segment's `breakValues` it is
+ * moving towards, Infinity when none: the coordinate taken as moving with the mass at `slope` (unit/kg) and the
+ * mass at its present rate (the level segments' coordinate, the part-power setting, is a smooth function of the
+ * mass between breaks: altitude and Mach are).
+ */
+function timeToBreak(segment: Segment, ev: Evaluation, slope: number): number {
+  const values = segment.breakValues;
+  const c0 = ev.breakCoordinate;
+  const rate = slope * ev.derivative[S_MASS];
+  if (values === undefined || c0 === undefined || !Number.isFinite(c0) || !Number.isFinite(rate) || rate === 0) return Infinity;
+  let tau = Infinity;
+  for (const v of values) {
+    const t = (v - c0) / rate;
+    if (t > 0 && t < tau) tau = t;
+  }
+  return tau;
+}
+
+/** The segment's step (s), or less where the break coordinate will cross a break sooner (timeToBreak): the step then ends there. */
+function predictedStep(segment: Segment, ev: Evaluation, slope: number): number {
+  const h = segment.step_s;
+  const tau = timeToBreak(segment, ev, slope);
+  return tau > MIN_BREAK_FRACTION * h && tau < (1 - MIN_BREAK_FRACTION) * h ? tau : h;
+}
+
+/**
+ * Fraction in (0, 1) of the step of length `h` from evaluation `a` (state `ya`) to `b` (`yb`) at which the
+ * segment's break coordinate crosses one of its `breakValues` (timeToBreak with the step's own slope against the
+ * mass), or null when it crosses none, or one within MIN_BREAK_FRACTION of an end. Stepping across a slope break
+ * costs RK4 its order there (an error of the step length times the break's distance from the step's end, common
+ * practice for tables); the cut leaves only the prediction's miss.
+ */
+function breakFraction(segment: Segment, a: Evaluation, ya: StateVector, b: Evaluation, yb: StateVector, h: number): number | null {
+  const values = segment.breakValues;
+  const c0 = a.breakCoordinate;
+  const c1 = b.breakCoordinate;
+  if (values === undefined || c0 === undefined || c1 === undefined || !(c0 !== c1)) return null;
+  const lo = Math.min(c0, c1);
+  const hi = Math.max(c0, c1);
+  if (!values.some((v) => v > lo && v < hi)) return null;
+  const theta = timeToBreak(segment, a, coordinateSlope(a, ya, b, yb)) / h;
+  return theta > MIN_BREAK_FRACTION && theta < 1 - MIN_BREAK_FRACTION ? theta : null;
+}
+
 function noGroundProgress(domain: StateDomain, ev: Evaluation): boolean {
   return domain.requireGroundProgress === true && !(ev.derivative[S_GROUND] > 0);
 }
@@ -284,18 +341,34 @@ export function integrateSegment(segment: Segment, start: StateVector, sink: Sam
     if (gNow[i] >= 0) return { end: y, endSample: ev.sample, stop: segment.events[i].stop };
   }
   let current = y;
+  // The break coordinate's slope against the mass over the last step, to end the next step where it will cross a break.
+  let breakSlope = Number.NaN;
   for (let step = 0; step < MAX_STEPS; step++) {
-    const inside = stepInside(segment, domain, current, ev.derivative, segment.step_s);
+    const inside = stepInside(segment, domain, current, ev.derivative, predictedStep(segment, ev, breakSlope));
     if (typeof inside === 'string') {
       return inside === 'not_finite'
         ? { end: current, endSample: ev.sample, stop: 'numerical_failure' }
         : { end: current, endSample: ev.sample, stop: 'left_domain', domainExit: inside };
     }
-    const h = inside.h;
+    let h = inside.h;
     let next = inside.next;
     let nextEv = accept(segment, next);
     if (!finiteState(next) || !finiteState(nextEv.derivative)) {
       return { end: current, endSample: ev.sample, stop: 'numerical_failure' };
+    }
+    // A slope break of the right-hand side crossed well inside the step (none predicted, or the prediction missed):
+    // the step is taken again to end there.
+    const cut = breakFraction(segment, ev, current, nextEv, next, h);
+    if (cut !== null) {
+      const shorter = rk4Step(segment, domain, current, ev.derivative, cut * h);
+      if (typeof shorter !== 'string') {
+        const shorterEv = accept(segment, shorter);
+        if (finiteState(shorter) && finiteState(shorterEv.derivative)) {
+          h = cut * h;
+          next = shorter;
+          nextEv = shorterEv;
+        }
+      }
     }
     let firstTau = Infinity;
     let firstIndex = -1;
@@ -330,6 +403,7 @@ export function integrateSegment(segment: Segment, start: StateVector, sink: Sam
     }
     sink(next, nextEv.sample);
     if (noGroundProgress(domain, nextEv)) return { end: next, endSample: nextEv.sample, stop: 'no_ground_progress' };
+    breakSlope = coordinateSlope(ev, current, nextEv, next);
     current = next;
     ev = nextEv;
   }

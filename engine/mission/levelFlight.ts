@@ -50,7 +50,11 @@ export function makeLevelSegment(ctx: MissionContext, target: LegTarget, spec: L
   const evaluate: Segment['evaluate'] = (y) => {
     const { at, engine } = pointOf(y);
     const available = ratingPoint(input, at, dev, spec.ceiling).thrust_N;
-    return { derivative: derivativeOf(at, engine), sample: makeSample(at, available, engine.thrust_N, engine.fuelFlow_kg_s, 0, engine) };
+    return {
+      derivative: derivativeOf(at, engine),
+      sample: makeSample(at, available, engine.thrust_N, engine.fuelFlow_kg_s, 0, engine),
+      breakCoordinate: engine.power,
+    };
   };
   // RK4 stages need no sample, so no thrust-available query (a full rated-thrust lookup) and no sample object.
   const derivative = (y: StateVector): Evaluation['derivative'] => {
@@ -69,6 +73,9 @@ export function makeLevelSegment(ctx: MissionContext, target: LegTarget, spec: L
   }
   events.push(...fuelExhaustedEvents(ctx));
   events.push(...(spec.extraEvents ?? []));
-  return { step_s: spec.step_s, evaluate, derivative, events, algebraicAltitude: spec.algebraicAltitude };
+  // The deck's tabulated powers are slope breaks of the part-power fuel flow: the time steps end where the
+  // setting crosses one (integrator.ts), instead of straddling it at first order.
+  const powers = input.propulsion.slopeBreaks?.powers;
+  return { step_s: spec.step_s, evaluate, derivative, events, algebraicAltitude: spec.algebraicAltitude, ...(powers === undefined ? {} : { breakValues: powers }) };
 }
 

@@ -46,6 +46,8 @@ export interface Evaluation {
   /** d(state)/dt, STATE_SIZE entries. */
   readonly derivative: Float64Array<ArrayBuffer>;
   readonly sample: FlightSample;
+  /** The segment's slope-break coordinate at this point (Segment.breakValues), when it has one. */
+  readonly breakCoordinate?: number;
 }
 
 /** Why a segment stopped. */
@@ -92,4 +94,10 @@ export interface Segment {
   readonly events: readonly SegmentEvent[];
   /** When true the altitude is algebraic (cruise-climb): the state takes the sample's altitude after each step. */
   readonly algebraicAltitude?: boolean;
+  /**
+   * Values of the evaluations' `breakCoordinate` (e.g. the part-power setting, whose deck nodes are slope breaks of
+   * the fuel flow in level flight) where the right-hand side's slope breaks: a time step over which the coordinate
+   * crosses one is cut to end where it crosses (integrator.ts), so RK4 keeps its order on both sides.
+   */
+  readonly breakValues?: readonly number[];
 }

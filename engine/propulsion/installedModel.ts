@@ -144,13 +144,13 @@ function resolveRating(access: DeckAccess, named: Map<RatingName, ResolvedRating
  * (validate them first with validateInletDesign / validateInstallation)
  * and throw with every issue and its field path.
  */
-/** The deck's slope breaks with the recovery table's Machs added. */
+/** The deck's slope breaks (grid altitudes, Machs and powers) with the recovery table's Machs added. */
 function installedSlopeBreaks(access: DeckAccess, ctx: InstallationContext): SlopeBreaks | undefined {
   const deck = access.slopeBreaks;
   const recovery = ctx.recoveryInlet.table?.x ?? [];
   if (deck === undefined && recovery.length === 0) return undefined;
   const machs = [...new Set([...(deck?.machs ?? []), ...recovery])].sort((a, b) => a - b);
-  return { altitudes_m: deck?.altitudes_m ?? [], machs };
+  return deck?.powers === undefined ? { altitudes_m: deck?.altitudes_m ?? [], machs } : { altitudes_m: deck.altitudes_m, machs, powers: deck.powers };
 }
 
 interface RatingMemo {

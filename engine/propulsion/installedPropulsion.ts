@@ -63,7 +63,7 @@ export function deckAccess(deck: EngineDeck): DeckAccess {
     hasAirflow: deck.hasAirflow,
     hasSensitivities: deck.hasSensitivities,
     referenceRecovery: deck.referenceRecovery,
-    slopeBreaks: { altitudes_m: sortedUnique(deck.grid.altitudes_m), machs: sortedUnique(deck.grid.machs) },
+    slopeBreaks: { altitudes_m: sortedUnique(deck.grid.altitudes_m), machs: sortedUnique(deck.grid.machs), powers: sortedUnique(deck.grid.power) },
     lookup: curve.lookup,
     ratingPower: (rating) => {
       const r = ratingPower(deck, rating);

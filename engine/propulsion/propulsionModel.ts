@@ -121,6 +121,11 @@ export interface PartPowerPoint extends InstalledPoint {
 export interface SlopeBreaks {
   readonly altitudes_m: readonly number[];
   readonly machs: readonly number[];
+  /**
+   * Power settings (-) at which the numbers at one condition have slope breaks (the deck's tabulated powers), so
+   * where the fuel flow of a part-power point breaks as the thrust asked for changes; absent: none known.
+   */
+  readonly powers?: readonly number[];
 }
 
 export interface PropulsionModel {

@@ -125,3 +125,40 @@ describe('integrator domain', () => {
     expect(integrateSegment({ ...backwards, events: [{ stop: 'time_reached', g: (y) => y[0] - 10 }] }, start(100), () => {}, DOMAIN).stop).toBe('time_reached');
   });
 });
+
+describe('integrator slope breaks', () => {
+  // dm/dt = -q - k (m - m*) above m*, -q below (a slope break of the right-hand side at m*, as a deck power node is of
+  // the fuel flow). Closed form: m(t) = m* + (m0 - m* + q/k) exp(-k t) - q/k until m* at t* = ln((m0 - m* + q/k)/(q/k)) / k,
+  // then m* - q (t - t*) (linear ODE, then constant rate).
+  const q = 1;
+  const k = 1 / 500;
+  const mStar = 800;
+  const m0 = 1000;
+  const tStar = Math.log((m0 - mStar + q / k) / (q / k)) / k;
+  const T = 600;
+  const exact = mStar - q * (T - tStar);
+  const kinked = (breakValues?: readonly number[]): Segment => ({
+    step_s: 100,
+    evaluate: (y) => {
+      const d = new Float64Array(STATE_SIZE);
+      d[0] = 1;
+      d[S_MASS] = -q - (y[S_MASS] > mStar ? k * (y[S_MASS] - mStar) : 0);
+      return { derivative: d, sample: SAMPLE, breakCoordinate: y[S_MASS] };
+    },
+    events: [{ stop: 'time_reached', stateOnly: true, g: (y) => y[0] - T }],
+    ...(breakValues === undefined ? {} : { breakValues }),
+  });
+
+  it('integrateSegment ends a step where the break coordinate crosses a break value, keeping RK4 accurate across it (closed form)', () => {
+    const ends: number[] = [];
+    const run = integrateSegment(kinked([500, mStar, 1200]), start(m0), (y) => ends.push(y[0]));
+    expect(run.stop).toBe('time_reached');
+    // A step ends within a tenth of a second of t* (of a 100 s step), so the break is straddled by at most that.
+    expect(Math.min(...ends.map((t) => Math.abs(t - tStar)))).toBeLessThan(0.1);
+    const cutError = Math.abs(run.end[S_MASS] - exact);
+    expectClose(run.end[S_MASS], exact, { abs: 3e-3 }, 'closed form across the break');
+    // Straddling the break instead is a first-order error, far larger.
+    const straddled = integrateSegment(kinked(), start(m0), () => {});
+    expect(Math.abs(straddled.end[S_MASS] - exact)).toBeGreaterThan(10 * cutError);
+  });
+});
