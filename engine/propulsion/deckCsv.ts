@@ -108,6 +108,8 @@ export function parseDeckCsv(text: string, sourceName: string): Result<EngineDec
   let columns: (DeckColumn | null)[] = [];
   let headerCells: string[] = [];
   const units: Partial<Record<DeckColumn, ColumnUnit>> = {};
+  /** Each header column's conversion and plausible SI limits, by position (the usual cell's short way in readRow). */
+  let limits: { readonly scale: number; readonly offset: number; readonly lo: number; readonly hi: number }[] = [];
   const rows: DeckGridPoint[] = [];
   const rowLines: number[] = [];
   let hasSensitivities = false;
@@ -285,6 +287,11 @@ export function parseDeckCsv(text: string, sourceName: string): Result<EngineDec
         issue.kind === 'missing' ? `a ${issue.column}[unit] column` : 'an airflow column', issue.message);
     }
     hasSensitivities = SENSITIVITY_FIELDS.some((f) => units[f.csv] !== undefined);
+    limits = columns.map((name) => {
+      const u = units[name!]!;
+      const [lo, hi] = DECK_VALUE_LIMITS[name!];
+      return { scale: u.scale, offset: u.offset, lo, hi };
+    });
   }
 
   function readRow(raw: string, lineNo: number): void {
@@ -300,6 +307,15 @@ export function parseDeckCsv(text: string, sourceName: string): Result<EngineDec
     let good = true;
     cells.forEach((cell, j) => {
       const name = columns[j]!;
+      const c = limits[j]!;
+      if (NUMBER.test(cell)) {
+        const x = Number(cell) * c.scale + c.offset;
+        // NaN and the infinities fail the comparisons (the limits are finite) and are named below.
+        if (x >= c.lo && x <= c.hi) {
+          v[name] = x;
+          return;
+        }
+      }
       const u = units[name]!;
       if (cell === '') {
         add('empty_cell', lineNo, u.header, cell, 'a number', 'the cell is empty');

@@ -308,3 +308,45 @@ describe('parseDeckCsv with installation-sensitivity columns', () => {
     });
   });
 });
+
+// readRow takes a short way for a number inside its column's plausible range and names every other cell's problem
+// as before. Reference: the format's rules (docs/deck-format.md: a decimal number, e.g. 12, -0.5, 1.5e3; no hex,
+// no words; thrust within +/-1e7 N) and the NIST SP 811 lbf factor.
+describe('parseDeckCsv on one changed thrust cell', () => {
+  const lines = CUSTOMARY.split('\n');
+  const row = lines.findIndex((l) => l.startsWith('10000,0.5,100,3200'));
+  const withThrust = (cell: string): string => {
+    const changed = [...lines];
+    const cells = changed[row]!.split(',');
+    cells[3] = cell;
+    changed[row] = cells.join(',');
+    return changed.join('\n');
+  };
+  const DECIMAL = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+
+  it('a decimal within range is read as Number(cell) lbf, anything else is refused naming the thrust column', () => {
+    const cell = fc.oneof(
+      fc.double({ min: 501, max: 3e6, noNaN: true }).map(String),
+      fc.constantFrom('', '0x10', '0b1', 'Infinity', '-inf', 'nan', '1e', '.', '+.6e4', '5000.', ' 7e3 ', '1_000', '1e9', '-1e9', '3e400', '١٢'),
+      fc.string({ maxLength: 6 }).filter((t) => !/[,\r\n]/.test(t)), // a comma or a line break would change the row's shape, not the cell
+    );
+    fc.assert(
+      fc.property(cell, (c) => {
+        const r = parseDeckCsv(withThrust(c), 'x.csv');
+        const trimmed = c.trim();
+        const inRange = DECIMAL.test(trimmed) && Math.abs(Number(trimmed) * LBF_N) <= 1e7;
+        // (a thrust at or below the 20 % row's 500 lbf is refused by the deck's own rising-thrust check instead)
+        fc.pre(!inRange || Number(trimmed) > 500);
+        if (inRange) {
+          const deck = expectOk(r, c);
+          const p = deckGridPoints(deck.grid).find((q) => q.isaDev_K === 20 && q.altitude_m === 10000 * FT_M && q.mach === 0.5 && q.power === 1)!;
+          expect(p.thrust_N).toBe(Number(trimmed) * LBF_N);
+        } else {
+          expect(r.ok).toBe(false);
+          if (!r.ok) expect(r.error.some((e) => e.line === row + 1 && e.column === 'thrust[lbf]')).toBe(true);
+        }
+      }),
+      { numRuns: 300 },
+    );
+  });
+});
