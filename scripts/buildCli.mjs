@@ -14,9 +14,9 @@
 // Beside the bundle, dist-cli/inputs.json lists every source file that went
 // into it with its modification time and size; bin/blockwise.mjs compares them
 // before each start and runs the TypeScript sources instead when any differs,
-// so a stale bundle never runs old code. After the build, the code caches of
-// `fly` on the demo and of `--help` are made (warmCodeCache), so the first
-// run after `npm ci` starts as fast as the later ones.
+// so a stale bundle never runs old code. After the build, the code cache of
+// `fly` is made by flying the demo (warmCodeCache), so the first fly after
+// `npm ci` starts as fast as the later ones.
 import { spawnSync } from 'node:child_process';
 import { readFileSync, statSync, writeFileSync, rmSync } from 'node:fs';
 import { isAscii } from 'node:buffer';
@@ -79,15 +79,13 @@ export async function buildCli(into = outDir) {
 }
 
 /**
- * Runs the bundled command line once for each start whose code cache is worth making at install (the demo's
- * fly, and --help), so their caches exist before the first real run (bin/cliCodeCache.mjs). Output is dropped;
- * a failure only means the first real run makes the cache instead.
+ * Flies the demo once through the bundled command line, so the code cache of `fly` exists before the first real
+ * run (bin/cliCodeCache.mjs; the overview runs from the ES modules and has none). Output is dropped; a failure
+ * only means the first real run makes the cache instead.
  */
 export function warmCodeCache() {
   const bin = resolve(repo, 'bin', 'blockwise.mjs');
-  for (const args of [['fly', resolve(repo, 'fixtures', 'demo', 'demo.blockwise.json')], ['--help']]) {
-    spawnSync(process.execPath, [bin, ...args], { cwd: repo, stdio: 'ignore', timeout: 60_000 });
-  }
+  spawnSync(process.execPath, [bin, 'fly', resolve(repo, 'fixtures', 'demo', 'demo.blockwise.json')], { cwd: repo, stdio: 'ignore', timeout: 60_000 });
 }
 
 if (process.argv[1] && resolve(process.argv[1]) === fileURLToPath(import.meta.url)) {

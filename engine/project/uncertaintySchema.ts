@@ -14,7 +14,23 @@ import type { Dimension } from '../units/quantity';
 /** Largest Monte-Carlo sample a project may ask for. */
 export const MAX_UNCERTAINTY_SAMPLES = 100000;
 
+/**
+ * The distribution field of an input of `dimension`, made once per dimension and shared by the inputs (a zod
+ * schema holds no state of a parse): seven of the eight inputs are dimensionless, and each distribution is a dozen
+ * schemas that every start of the command line would build again.
+ */
 function distribution(dimension: Dimension) {
+  let made = DISTRIBUTIONS.get(dimension);
+  if (made === undefined) {
+    made = makeDistribution(dimension);
+    DISTRIBUTIONS.set(dimension, made);
+  }
+  return made;
+}
+
+const DISTRIBUTIONS = new Map<Dimension, ReturnType<typeof makeDistribution>>();
+
+function makeDistribution(dimension: Dimension) {
   const q = () => quantity(dimension);
   return z.discriminatedUnion('kind', [
     z.strictObject({
