@@ -23,7 +23,7 @@ import {
   type InstallationContext,
 } from './engineEvaluation';
 import type { FreeStream } from './inletFlow';
-import type { FlightCondition, ThrustLimit } from './propulsionModel';
+import { conditionKey, sameFlightCondition, type FlightCondition, type ThrustLimit } from './propulsionModel';
 
 /**
  * Relative thrust tolerance of `forThrust` (-): |installed - required| <=
@@ -48,7 +48,22 @@ export interface PartPowerSolve {
   curve: DeckCurve | undefined;
   /** Per-engine thrust asked for (N). */
   required_N: number;
+  /**
+   * The condition whose thrusts at the solve's fixed powers (idle, the ceiling, the deck's power nodes the bracket
+   * is narrowed on) are kept, by power, with the deck thrust of each (N per engine): a pure function of the
+   * condition and the power, so a level flight solving again at one condition finds them instead of evaluating.
+   */
+  memoCondition: FlightCondition | null;
+  readonly memoPower: Float64Array;
+  readonly memoThrust: Float64Array;
+  readonly memoDeck: Float64Array;
+  memoCount: number;
+  /** Deck thrust per engine (N) at the power of the last memoThrustAt. */
+  lastDeck_N: number;
 }
+
+/** Powers kept per condition: idle, the ceiling and the power nodes between them on any deck so far. */
+const MEMO_POWERS = 16;
 
 export function newPartPowerSolve(ctx: InstallationContext, access: DeckAccess, full: EngineScratch): PartPowerSolve {
   const solve: PartPowerSolve = {
@@ -63,8 +78,34 @@ export function newPartPowerSolve(ctx: InstallationContext, access: DeckAccess, 
     free: { mach: 0, pressure_Pa: 0, temperature_K: 0 },
     curve: undefined,
     required_N: 0,
+    memoCondition: null,
+    memoPower: new Float64Array(MEMO_POWERS),
+    memoThrust: new Float64Array(MEMO_POWERS),
+    memoDeck: new Float64Array(MEMO_POWERS),
+    memoCount: 0,
+    lastDeck_N: 0,
   };
   return solve;
+}
+
+/** solveThrustAt at one of the solve's fixed powers, kept per condition (PartPowerSolve.memoCondition); sets lastDeck_N. */
+function memoThrustAt(solve: PartPowerSolve, power: number): number {
+  for (let i = 0; i < solve.memoCount; i++) {
+    if (Object.is(solve.memoPower[i], power)) {
+      solve.lastDeck_N = solve.memoDeck[i]!;
+      return solve.memoThrust[i]!;
+    }
+  }
+  const thrust = solveThrustAt(solve, power);
+  const deck = solve.curve ? solve.fast.deck.thrust_N : solve.full.deck.thrust_N;
+  if (solve.memoCount < MEMO_POWERS) {
+    solve.memoPower[solve.memoCount] = power;
+    solve.memoThrust[solve.memoCount] = thrust;
+    solve.memoDeck[solve.memoCount] = deck;
+    solve.memoCount++;
+  }
+  solve.lastDeck_N = deck;
+  return thrust;
 }
 
 /** Installed thrust per engine (N) at `power` for the solve in progress: the deck's fixed-condition curve when it offers one, else full lookups. */
@@ -104,13 +145,17 @@ export function solvePartPower(
   solve.free = free;
   solve.curve = solve.access.curveAt?.(condition);
   solve.required_N = perEngineRequired_N;
+  if (solve.memoCondition === null || !sameFlightCondition(solve.memoCondition, condition)) {
+    solve.memoCondition = conditionKey(condition);
+    solve.memoCount = 0;
+  }
   const curve = solve.curve;
-  const hiThrust = solveThrustAt(solve, ceilingPower);
-  const hiDeck = curve ? solve.fast.deck.thrust_N : solve.full.deck.thrust_N;
+  const hiThrust = memoThrustAt(solve, ceilingPower);
+  const hiDeck = solve.lastDeck_N;
   if (hiThrust <= perEngineRequired_N) {
     return { ok: true, power: ceilingPower, limit: hiThrust === perEngineRequired_N ? 'within' : 'above_rating' };
   }
-  const loThrust = solveThrustAt(solve, idlePower);
+  const loThrust = memoThrustAt(solve, idlePower);
   if (loThrust >= perEngineRequired_N) {
     return { ok: true, power: idlePower, limit: loThrust === perEngineRequired_N ? 'within' : 'below_idle' };
   }
@@ -134,7 +179,7 @@ export function solvePartPower(
       }
       const above = q < hi ? q : Number.NaN;
       const at = Number.isNaN(below) ? above : Number.isNaN(above) || chord - below <= above - chord ? below : above;
-      const f = solve.residual(at);
+      const f = memoThrustAt(solve, at) - perEngineRequired_N;
       if (Math.abs(f) <= fTol) return { ok: true, power: at, limit: 'within' };
       if (f < 0) {
         lo = at;

@@ -164,6 +164,31 @@ describe('part-power solve', () => {
     expect(evaluations / solves).toBeLessThan(7);
   });
 
+  it('forThrust asked again at one condition (a level flight) gives a fresh model its point to the bit, evaluating less', () => {
+    // The thrusts at idle, the ceiling and the power nodes are a pure function of the condition and the power: kept
+    // per condition, they must change nothing; each point still meets the thrust asked for (the solve's definition).
+    let firstEvaluations = 0;
+    let againEvaluations = 0;
+    for (const c of CASES) {
+      const warm = modelOf(c);
+      for (const condition of c.conditions) {
+        const idle = warm.atRating(condition, 'flightIdle').thrust_N;
+        const top = warm.atRating(condition, 'maxCruise').thrust_N;
+        for (let k = 1; k <= 7; k++) {
+          const required = idle + ((top - idle) * k) / 8;
+          c.access.reset();
+          const p = warm.forThrust(condition, required, 'maxCruise');
+          if (k === 1) firstEvaluations += c.access.count();
+          else againEvaluations += c.access.count() / 6;
+          const fresh = modelOf(c).forThrust(condition, required, 'maxCruise');
+          expect([p.power, p.thrust_N, p.fuelFlow_kg_s, p.limit]).toEqual([fresh.power, fresh.thrust_N, fresh.fuelFlow_kg_s, fresh.limit]);
+          expectClose(p.thrust_N, required, { rel: FOR_THRUST_TOLERANCE }, `${c.name}, ${condition.altitude_m} m, ${k}/8`);
+        }
+      }
+    }
+    expect(againEvaluations).toBeLessThan(0.75 * firstEvaluations);
+  });
+
   it('the limits are unchanged: at or beyond the ceiling the ceiling, at or below idle flight idle', () => {
     for (const c of CASES) {
       const m = modelOf(c);
