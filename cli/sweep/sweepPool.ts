@@ -75,6 +75,8 @@ export function startSweepCrew(count: number): SweepCrew {
     take: (n) => idle.splice(0, Math.max(0, n)),
     dispose: () => {
       for (const w of idle.splice(0)) void w.terminate();
+      // A sweep that ended before its pool (bad input) leaves V8's flags as they were too (restoreHeapFlags).
+      restoreHeapFlags();
     },
   };
 }
