@@ -52,9 +52,21 @@ export function displayUnit(kind: DisplayKind, system: UnitSystem): string {
   return DISPLAY[kind][system].unit;
 }
 
+/**
+ * The display units' definitions, each looked up once (a lookup normalizes the spelling with four regular
+ * expressions: about 1 us, a quarter of a quantity's formatting, paid by every caution and status message). Keyed by the
+ * display table's own unit strings, so it holds at most one entry per display unit.
+ */
+const DISPLAY_UNIT_DEFS = new Map<string, ReturnType<typeof lookupUnit>>();
+
+function displayUnitDef(unit: string): ReturnType<typeof lookupUnit> {
+  if (!DISPLAY_UNIT_DEFS.has(unit)) DISPLAY_UNIT_DEFS.set(unit, lookupUnit(unit));
+  return DISPLAY_UNIT_DEFS.get(unit);
+}
+
 /** An SI value converted to the display unit of its kind (for tables and charts). */
 export function toDisplay(value_si: number, kind: DisplayKind, system: UnitSystem): number {
-  const def = lookupUnit(DISPLAY[kind][system].unit);
+  const def = displayUnitDef(DISPLAY[kind][system].unit);
   if (def === undefined) throw new Error(`display unit of ${kind} is not in the unit table`);
   const offset = kind === 'temperatureDelta' ? 0 : def.offset;
   return (value_si - offset) / def.scale;
