@@ -13,7 +13,7 @@ import type { AnalysisError, MissionSolver } from './analysisTypes';
 import { thrustDragCrossover } from './crossover';
 import { flightCeilings, type Ceiling } from './envelope';
 import { shapleyValues } from './shapleyAttribution';
-import { solveFrom, subsetWeights, type NeighbourStart } from './warmStart';
+import { analysisSolver, subsetWeights, type NeighbourStart } from './warmStart';
 
 export type InletFactor = 'recovery' | 'spillage' | 'externalDrag' | 'weight';
 
@@ -26,7 +26,7 @@ export type FactorChoice = Readonly<Record<InletFactor, 'A' | 'B'>>;
 export type InletFactorBuilder = (choice: FactorChoice) => MissionInput;
 
 export interface InletComparisonOptions {
-  /** Mission solver; default engine/mission/solveMission. */
+  /** Mission solver; default warmStart.ts analysisSolver (solveMission started from neighbours, no time history). */
   readonly solve?: MissionSolver;
   readonly nameA: string;
   readonly nameB: string;
@@ -114,7 +114,7 @@ export function compareInlets(
   build: InletFactorBuilder,
   options: InletComparisonOptions,
 ): Result<InletComparisonResult, AnalysisError> {
-  const solve: MissionSolver = options.solve ?? solveFrom;
+  const solve: MissionSolver = options.solve ?? analysisSolver();
   const total = 1 << INLET_FACTORS.length;
   const results: MissionResult[] = [];
   for (let mask = 0; mask < total; mask++) {

@@ -8,7 +8,8 @@ import type { Caution } from '../cautions/caution';
 import { err, ok, type Result } from '../core/result';
 import type { MissionInput, MissionResult } from '../mission/missionTypes';
 import type { AnalysisError, MissionSolver } from './analysisTypes';
-import { lagrangeWeights, solveFrom, type NeighbourStart } from './warmStart';
+import { createPassMemo } from '../mission/passMemo';
+import { analysisSolver, lagrangeWeights, type NeighbourStart } from './warmStart';
 
 export type PayloadRangePointKind = 'maxPayload' | 'mtowFullFuel' | 'ferry' | 'between';
 
@@ -44,7 +45,7 @@ export interface PayloadRangeResult {
 }
 
 export interface PayloadRangeOptions {
-  /** Mission solver; default engine/mission/solveMission. */
+  /** Mission solver; default warmStart.ts analysisSolver with one pass memo for all its missions (they differ in payload alone), no time history. */
   readonly solve?: MissionSolver;
   /** Points between corners on each segment; default 3. */
   readonly pointsBetween?: number;
@@ -87,7 +88,7 @@ export function payloadRangeDiagram(
   base: MissionInput,
   options: PayloadRangeOptions,
 ): Result<PayloadRangeResult, AnalysisError> {
-  const solve: MissionSolver = options.solve ?? solveFrom;
+  const solve: MissionSolver = options.solve ?? analysisSolver(createPassMemo());
   const between = options.pointsBetween ?? 3;
   if (!Number.isInteger(between) || between < 0 || between > 50) {
     return err({ code: 'invalid_input', message: `payload-range: points between corners ${between} must be an integer 0..50` });

@@ -11,7 +11,7 @@
 import { err, ok, type Result } from '../core/result';
 import type { MissionInput } from '../mission/missionTypes';
 import type { AnalysisError, MissionSolver } from './analysisTypes';
-import { solveFrom, STEP_ORDER, stepStart, type StepMission } from './warmStart';
+import { analysisSolver, STEP_ORDER, stepStart, type StepMission } from './warmStart';
 
 export interface RecoveryMethodCase {
   readonly id: string;
@@ -60,7 +60,7 @@ export interface KnownRecoveryTrade {
 }
 
 export interface RecoveryTradeOptions {
-  /** Mission solver; default warmStart.ts solveFrom. */
+  /** Mission solver; default warmStart.ts analysisSolver (solveMission started from neighbours, no time history). */
   readonly solve?: MissionSolver;
   /** A case already computed elsewhere on the same input (its row is taken, not flown again); undefined to fly it. */
   readonly reuse?: (c: RecoveryMethodCase) => KnownRecoveryTrade | undefined;
@@ -80,7 +80,7 @@ export function recoveryTradeByMethod(
   cases: readonly RecoveryMethodCase[],
   options: RecoveryTradeOptions = {},
 ): Result<RecoveryTradeByMethod, AnalysisError> {
-  const solve: MissionSolver = options.solve ?? solveFrom;
+  const solve: MissionSolver = options.solve ?? analysisSolver();
   const known = new Map<string, KnownRecoveryTrade>();
   for (const c of cases) {
     const k = 'unavailable' in c.input ? undefined : options.reuse?.(c);

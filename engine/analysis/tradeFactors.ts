@@ -9,7 +9,7 @@ import type { PropulsionModel } from '../propulsion/propulsionModel';
 import { adjustPropulsion } from './adjustedPropulsion';
 import { describeInstallationMethod } from '../propulsion/installationMethod';
 import type { AnalysisError, MissionSolver } from './analysisTypes';
-import { solveFrom, STEP_ORDER, stepStart, type NeighbourStart, type StepMission } from './warmStart';
+import { analysisSolver, STEP_ORDER, stepStart, type NeighbourStart, type StepMission } from './warmStart';
 
 export type TradeFactorName = 'recovery' | 'dragCount' | 'tsfc' | 'oew';
 
@@ -41,7 +41,7 @@ export interface TradeFactorsResult {
 }
 
 export interface TradeFactorOptions {
-  /** Mission solver; default engine/mission/solveMission. */
+  /** Mission solver; default warmStart.ts analysisSolver (solveMission started from neighbours, no time history). */
   readonly solve?: MissionSolver;
   /** C_ram of the installation for the recovery wrapper (-); default 1.35 (Raymer, subsonic). */
   readonly cRam?: number;
@@ -68,7 +68,7 @@ const WRAPPER_METHOD =
  * become the design mission. 1 (+1) + 16 missions.
  */
 export function tradeFactors(input: MissionInput, options: TradeFactorOptions): Result<TradeFactorsResult, AnalysisError> {
-  const solve: MissionSolver = options.solve ?? solveFrom;
+  const solve: MissionSolver = options.solve ?? analysisSolver();
   const tolerance = options.tolerance ?? { rel: 0.05, abs_kg: 0.01 };
   const cRam = options.cRam ?? 1.35;
   if (!(cRam >= 0) || !Number.isFinite(cRam)) return err({ code: 'invalid_input', message: `trade factors: C_ram ${cRam} must be a number >= 0` });

@@ -11,6 +11,7 @@
  */
 import { FIXED_MASS_FUEL_TOLERANCE_KG, FUEL_TOLERANCE_KG } from '../mission/fuelIteration';
 import type { MissionInput, MissionResult, MissionStart } from '../mission/missionTypes';
+import type { PassMemo } from '../mission/passMemo';
 import { solveMission, type SolveOptions } from '../mission/solveMission';
 
 /** What a prediction reads of a mission flown: its converged start and the residual it converged to (a MissionResult is one). */
@@ -111,6 +112,18 @@ export function solveFrom(input: MissionInput, start?: NeighbourStart, options: 
   const r = solveMission(input, { ...solveOptions, warmStart: warm });
   onPasses?.(r.iterations);
   return r.status === 'ok' ? r : cold();
+}
+
+/**
+ * The analyses' default mission solver: solveFrom keeping no time history (an analysis reads each mission's
+ * figures, legs, cautions and status, never its samples; every one of those is the same bit for bit without it,
+ * SolveOptions.timeHistory). Given a pass memo, every solve reads and adds to it (SolveOptions.passMemo): only for
+ * missions that differ in `solve` alone (the payload-range diagram's), whose alternate descents and contingency
+ * holds depend on the mass alone.
+ */
+export function analysisSolver(passMemo?: PassMemo): (input: MissionInput, start?: NeighbourStart) => MissionResult {
+  const options: SolveFromOptions = passMemo === undefined ? { timeHistory: false } : { timeHistory: false, passMemo };
+  return (input, start) => solveFrom(input, start, options);
 }
 
 /**

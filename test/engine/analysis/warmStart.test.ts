@@ -152,3 +152,32 @@ describe('warm starts of an analysis', () => {
     expect(warm.total()).toBeLessThan(cold.total());
   });
 });
+
+describe('analysisSolver, the analyses\' default solver', () => {
+  const withHistory = (input: MissionInput, start?: Parameters<typeof solveFrom>[1]) => solveFrom(input, start);
+
+  it('gives the trade factors and the inlet comparison bit for bit as solveFrom with a time history', () => {
+    // SolveOptions.timeHistory: every pass flies the same without the samples (test/engine/mission/solveOptions.test.ts).
+    expect(expectOk(tradeFactors(demo, {}), 'default trade')).toEqual(expectOk(tradeFactors(demo, { solve: withHistory }), 'trade with history'));
+    const [nameA, nameB] = [project.inlets[0]!.name, project.inlets[1]!.name];
+    const build = inletFactorBuilder(expectOk(expectOk(prepareStudy(project, { name: 'demo-engine.deck.csv', text: readFileSync(`${root}demo-engine.deck.csv`, 'utf8') }), 'demo study').inletPair(nameA, nameB), 'inlet pair'));
+    expect(expectOk(compareInlets(build, { nameA, nameB }), 'default compare')).toEqual(expectOk(compareInlets(build, { nameA, nameB, solve: withHistory }), 'compare with history'));
+  });
+
+  it('the payload-range diagram with one pass memo for its missions: every point within 1e-4 kg and 0.05 m of its own memo\'s', () => {
+    // The shared memo interpolates the alternate's descent and the contingency hold between flights of the same
+    // aircraft (engine/mission/passMemo.ts); the iteration then stops elsewhere in the same fuel band
+    // (FIXED_MASS_FUEL_TOLERANCE_KG, 0.004 kg; on the demo 6e-6 kg and 0.009 m apart at most).
+    const shared = expectOk(payloadRangeDiagram(demo, {}), 'shared memo');
+    const own = expectOk(payloadRangeDiagram(demo, { solve: withHistory }), 'own memo');
+    expect(shared.points.length).toBe(own.points.length);
+    own.points.forEach((p, i) => {
+      const q = shared.points[i]!;
+      expect(q.kind).toBe(p.kind);
+      expect(q.payload_kg).toBe(p.payload_kg);
+      expectClose(q.blockFuel_kg, p.blockFuel_kg, { abs: 1e-4 }, `point ${i} block fuel`);
+      expectClose(q.range_m, p.range_m, { abs: 0.05 }, `point ${i} range`);
+      expect(q.cautions.map((c) => c.id)).toEqual(p.cautions.map((c) => c.id));
+    });
+  });
+});
