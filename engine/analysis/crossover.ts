@@ -14,7 +14,8 @@ import type { AnalysisError, PerformanceModels } from './analysisTypes';
 import { machFromCas } from '../aero/airspeeds';
 import { liftLimitMachs } from './liftLimitMach';
 import { airAt, levelPoint, type LevelPoint } from './pointState';
-import { maximizeOnGrid, minimizeOnGrid, refineMaximum, rootsOnPoints, uniformGrid } from './scalarSearch';
+import { brentMaximum } from '../core/scalarMaximum';
+import { maximizeOnGrid, minimizeOnGrid, rootsOnPoints, uniformGrid } from './scalarSearch';
 import { messageText, msg, q, withParts, type MessageParts } from '../units/messageParts';
 
 export interface CrossoverQuery {
@@ -200,6 +201,11 @@ export interface ClimbPeak {
   /** Mach of greatest Ps and that Ps (m/s); null when CL at 1 g exceeds CLmax over the whole range. */
   readonly bestClimbMach: number | null;
   readonly maxSpecificExcessPower_m_s: number | null;
+  /**
+   * True when the peak was not searched because a sample of the local window already reached climbPeak's
+   * `clearAbove`: the Mach is that sample's and the Ps a lower bound of the greatest (at least clearAbove).
+   */
+  readonly lowerBound?: true;
 }
 
 /** Greatest Ps on the scan's grid refined by golden sections; null when Ps is nowhere finite. */
@@ -212,22 +218,25 @@ const LOCAL_MARGIN = 0.03;
 const LOCAL_SAMPLES = 9;
 const CHECK_SAMPLES = 11;
 /**
- * Golden-section width (-) of a local peak search: the peak's Ps is then
- * within about Ps'' x 1e-12 of the true one (flat maximum), far inside any
- * ceiling tolerance; its Mach is good to 1e-6.
+ * Final bracket width (-) of a local peak search (Brent's method): the
+ * peak's Ps is then within about Ps'' x 1e-12 of the true one (flat
+ * maximum), far inside any ceiling tolerance; its Mach is good to 1e-6.
  */
 export const LOCAL_PEAK_MACH_TOL = 1e-6;
 
 /**
  * The climb peak searched only near the Machs [m1, m2] where it is expected
  * (the best-climb Machs of neighbouring altitudes): a grid of LOCAL_SAMPLES
- * over [m1 - LOCAL_MARGIN, m2 + LOCAL_MARGIN] within the scan, then golden
- * sections to LOCAL_PEAK_MACH_TOL. Null (search the whole scan) when the
- * best sample lies on the window's edge (the hump may continue outside it),
- * when a coarse check grid of CHECK_SAMPLES over the whole scan finds a
- * higher Ps elsewhere (another hump), or when Ps is not finite there.
+ * over [m1 - LOCAL_MARGIN, m2 + LOCAL_MARGIN] within the scan, then Brent's
+ * method (parabolic steps safeguarded by golden sections,
+ * engine/core/scalarMaximum.ts) to LOCAL_PEAK_MACH_TOL. Null (search the
+ * whole scan) when the best sample lies on the window's edge (the hump may
+ * continue outside it), when a coarse check grid of CHECK_SAMPLES over the
+ * whole scan finds a higher Ps elsewhere (another hump), or when Ps is not
+ * finite there. With `clearAbove`, a best sample at least that high is
+ * returned as it is (`bound`: a lower bound of the greatest Ps).
  */
-function localPeak(scan: MachScan, near: readonly [number, number]): { readonly x: number; readonly fx: number } | null {
+function localPeak(scan: MachScan, near: readonly [number, number], clearAbove?: number): { readonly x: number; readonly fx: number; readonly bound: boolean } | null {
   const a = Math.max(scan.lo, Math.min(near[0], near[1]) - LOCAL_MARGIN);
   const b = Math.min(scan.hi, Math.max(near[0], near[1]) + LOCAL_MARGIN);
   if (!(b > a) || !Number.isFinite(a) || !Number.isFinite(b)) return null;
@@ -242,9 +251,12 @@ function localPeak(scan: MachScan, near: readonly [number, number]): { readonly 
       best = i;
     }
   });
+  // Any sample is a lower bound of the greatest Ps, whatever the shape of the curve.
+  if (best >= 0 && clearAbove !== undefined && bestF >= clearAbove) return { x: xs[best]!, fx: bestF, bound: true };
   if (best < 0 || (best === 0 && a > scan.lo) || (best === xs.length - 1 && b < scan.hi)) return null;
   if (uniformGrid(scan.lo, scan.hi, CHECK_SAMPLES).some((x) => ps(x) > bestF)) return null;
-  return refineMaximum(ps, xs[Math.max(0, best - 1)]!, xs[Math.min(xs.length - 1, best + 1)]!, xs[best]!, bestF, LOCAL_PEAK_MACH_TOL);
+  const peak = brentMaximum(ps, xs[Math.max(0, best - 1)]!, xs[Math.min(xs.length - 1, best + 1)]!, xs[best]!, bestF, LOCAL_PEAK_MACH_TOL);
+  return { ...peak, bound: false };
 }
 
 /** The no_solution error of a scan where thrust or drag is nowhere finite. */
@@ -256,16 +268,20 @@ function notFinite(query: CrossoverQuery, scan: MachScan): Result<never, Analysi
  * Only the climb peak of thrustDragCrossover (its bestClimbMach and
  * maxSpecificExcessPower_m_s, the same search on the same grid, so the same
  * numbers) and its errors, without the crossings, extremes of thrust and
- * curves: what a ceiling search needs at each altitude it tries.
+ * curves: what a ceiling search needs at each altitude it tries. With
+ * `near`, the peak is searched near those Machs first (localPeak); with
+ * `clearAbove` as well, a window sample whose Ps reaches it ends the search
+ * there (`lowerBound`: the greatest Ps is at least that much), for an
+ * altitude that only has to be known to climb at least that fast.
  */
-export function climbPeak(models: PerformanceModels, query: CrossoverQuery, near?: readonly [number, number]): Result<ClimbPeak, AnalysisError> {
+export function climbPeak(models: PerformanceModels, query: CrossoverQuery, near?: readonly [number, number], clearAbove?: number): Result<ClimbPeak, AnalysisError> {
   const s = machScan(models, query);
   if (!s.ok) return s;
   const scan = s.value;
   if (scan.stalledEverywhere) return ok({ bestClimbMach: null, maxSpecificExcessPower_m_s: null });
   if (near !== undefined) {
-    const local = localPeak(scan, near);
-    if (local !== null) return ok({ bestClimbMach: local.x, maxSpecificExcessPower_m_s: local.fx });
+    const local = localPeak(scan, near, clearAbove);
+    if (local !== null) return ok(local.bound ? { bestClimbMach: local.x, maxSpecificExcessPower_m_s: local.fx, lowerBound: true } : { bestClimbMach: local.x, maxSpecificExcessPower_m_s: local.fx });
   }
   const peak = peakOf(scan);
   // thrustDragCrossover fails when Ps or thrust is nowhere finite on the grid (Ps is finite wherever thrust and drag are).

@@ -147,6 +147,8 @@ interface PeakRow {
   readonly altitude_m: number;
   readonly bestClimbMach: number | null;
   readonly maxClimbRate_m_s: number | null;
+  /** True when maxClimbRate_m_s is only a lower bound, at least every residual rate (climbPeak's lowerBound), and bestClimbMach a sample near the peak. */
+  readonly lowerBound?: boolean;
 }
 
 /**
@@ -166,7 +168,8 @@ function ceilingsOf(
 ): Ceiling[] {
   // Peaks by altitude, the rows' first: Brent starts at two rows and ends where it last looked.
   const peaks = new Map<number, Result<ClimbPeak, AnalysisError>>();
-  for (const r of rows) peaks.set(r.altitude_m, ok({ bestClimbMach: r.bestClimbMach, maxSpecificExcessPower_m_s: r.maxClimbRate_m_s }));
+  // A row known by a lower bound only is searched when a bracket needs its value (its margin is positive for every rate).
+  for (const r of rows) if (r.lowerBound !== true) peaks.set(r.altitude_m, ok({ bestClimbMach: r.bestClimbMach, maxSpecificExcessPower_m_s: r.maxClimbRate_m_s }));
   // Between two rows the peak is searched near their best-climb Machs (climbPeak's local search).
   let near: readonly [number, number] | undefined;
   const peakAt = (h: number) => {
@@ -279,12 +282,14 @@ export function flightCeilings(models: PerformanceModels, query: EnvelopeQuery):
   if (!setup.ok) return setup;
   const { altitudes, machRange, rates } = setup.value;
   const rows: PeakRow[] = [];
+  // A row where a sample near the peak already climbs at every residual rate brackets no ceiling: it needs no peak.
+  const clearAbove = Math.max(0, ...rates.map((r) => r.climbRate_m_s));
   for (const h of altitudes) {
     // Each row after the first searches near the row below's best-climb Mach (climbPeak's local search).
     const below = rows.length > 0 ? rows[rows.length - 1]!.bestClimbMach : null;
-    const c = climbPeak(models, peakQuery(query, machRange, h), below === null ? undefined : [below, below]);
+    const c = climbPeak(models, peakQuery(query, machRange, h), below === null ? undefined : [below, below], clearAbove);
     if (!c.ok) return err({ ...c.error, message: `envelope at ${h} m: ${c.error.message}` });
-    rows.push({ altitude_m: h, bestClimbMach: c.value.bestClimbMach, maxClimbRate_m_s: c.value.maxSpecificExcessPower_m_s });
+    rows.push({ altitude_m: h, bestClimbMach: c.value.bestClimbMach, maxClimbRate_m_s: c.value.maxSpecificExcessPower_m_s, ...(c.value.lowerBound ? { lowerBound: true } : {}) });
     // Every ceiling is bracketed at or below the first row without a positive climb rate (the rates are >= 0): the rows above are not needed.
     if (!((c.value.maxSpecificExcessPower_m_s ?? -Infinity) >= 0)) break;
   }

@@ -118,4 +118,44 @@ describe('flightEnvelope', () => {
     // A window far below the peak: its best sample is on the window's edge, so the whole scan is searched.
     expect(expectOk(climbPeak(models, q, [0.15, 0.15]), 'elsewhere')).toEqual(full);
   });
+
+  it('climbPeak with clearAbove stops at a window sample that climbs that fast: a lower bound of the peak', () => {
+    const q = { altitude_m: 9000, mass_kg: 60000, rating: 'maxCruise' as const, isaDev_K: 0 };
+    const full = expectOk(climbPeak(models, q), 'full');
+    const m = full.bestClimbMach!;
+    const peak = full.maxSpecificExcessPower_m_s!;
+    const bound = expectOk(climbPeak(models, q, [m, m], 0.5 * peak), 'bound');
+    expect(bound.lowerBound).toBe(true);
+    expect(bound.maxSpecificExcessPower_m_s!).toBeGreaterThanOrEqual(0.5 * peak);
+    expect(bound.maxSpecificExcessPower_m_s!).toBeLessThanOrEqual(peak);
+    // Above the peak no sample reaches it: the peak is searched as without it.
+    expect(expectOk(climbPeak(models, q, [m, m], 2 * peak), 'searched')).toEqual(expectOk(climbPeak(models, q, [m, m]), 'local'));
+  });
+});
+
+describe('flightCeilings on the demo deck', () => {
+  it('gives the ceilings of a plain search: rows and Brent on the whole-scan crossover\'s greatest Ps, within 1e-6 m', async () => {
+    // The plain search: the crossover's own peak at every altitude (81 Machs and golden sections to 1e-10 over the
+    // whole scan), bracketed on the same rows and refined by Brent's method (engine/core/rootFind.ts) to 0.01 m.
+    const { readFileSync } = await import('node:fs');
+    const { fileURLToPath } = await import('node:url');
+    const { parseProject } = await import('../../../engine/project/parseProject');
+    const { parseDeckCsv } = await import('../../../engine/propulsion/deckCsv');
+    const { buildMissionInput } = await import('../../../engine/project/buildMissionInput');
+    const { brent } = await import('../../../engine/core/rootFind');
+    const root = fileURLToPath(new URL('../../../fixtures/demo/', import.meta.url));
+    const project = expectOk(parseProject(readFileSync(`${root}demo.blockwise.json`, 'utf8'), 'demo'), 'demo');
+    const deck = expectOk(parseDeckCsv(readFileSync(`${root}demo-engine.deck.csv`, 'utf8'), 'deck'), 'deck');
+    const input = expectOk(buildMissionInput(project, { deck }), 'demo input');
+    const demo = { aero: input.aero, propulsion: input.propulsion };
+    const q = { mass_kg: 13500, rating: 'maxClimb' as const, isaDev_K: 0, altitudeRange: [0, 15000] as const, altitudeStep_m: 1000 };
+    const ceilings = expectOk(flightCeilings(demo, q), 'ceilings');
+    const maxPs = (h: number) => expectOk(thrustDragCrossover(demo, { altitude_m: h, mass_kg: q.mass_kg, rating: 'maxClimb', isaDev_K: 0 }), 'crossover').maxSpecificExcessPower_m_s!;
+    for (const c of ceilings) {
+      const top = Math.ceil(c.altitude_m! / 1000) * 1000;
+      const plain = expectOk(brent((h) => maxPs(h) - c.climbRate_m_s, top - 1000, top, { xTol: 0.01 }), `${c.name} plain`).x;
+      expectClose(c.altitude_m!, plain, { abs: 1e-6 }, `${c.name} ceiling`);
+      expectClose(c.climbRateAtCeiling_m_s!, maxPs(c.altitude_m!), { abs: 1e-9 }, `${c.name} climb rate there`);
+    }
+  });
 });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { goldenMaximum, goldenSectionBracket } from '../../../engine/core/scalarMaximum';
+import { brentMaximum, goldenMaximum, goldenSectionBracket } from '../../../engine/core/scalarMaximum';
 import { expectClose } from '../../support/assertInDelta';
 
 describe('scalarMaximum', () => {
@@ -45,5 +45,33 @@ describe('scalarMaximum', () => {
     );
     expect(calls).toBe(2 + 5);
     expectClose(few.b - few.a, 2 * ((Math.sqrt(5) - 1) / 2) ** 5, { rel: 1e-12 });
+  });
+
+  it('brentMaximum finds x e^-x at x = 1 and ln(x)/x at x = e in fewer evaluations than golden sections', () => {
+    // The same closed-form maxima as above (calculus); Brent's method (Brent 1973, ch. 5) steps by parabolas on a smooth peak.
+    const counted = (f: (x: number) => number) => {
+      let n = 0;
+      return { f: (x: number) => (n++, f(x)), count: () => n };
+    };
+    const a = counted((x) => x * Math.exp(-x));
+    const r = brentMaximum(a.f, 0.5, 1.6, 0.8, 0.8 * Math.exp(-0.8), 1e-6);
+    expectClose(r.x, 1, { abs: 1e-6 }, 'x e^-x');
+    expectClose(r.fx, Math.exp(-1), { rel: 1e-12 }, 'its value');
+    const g = counted((x) => x * Math.exp(-x));
+    goldenSectionBracket(g.f, 0.5, 1.6, 1e-6);
+    expect(a.count()).toBeLessThan(g.count() / 2);
+    const b = brentMaximum((x) => Math.log(x) / x, 1, 10, 2, Math.log(2) / 2, 1e-7);
+    expectClose(b.x, Math.E, { abs: 1e-7 }, 'ln(x)/x');
+  });
+
+  it('brentMaximum meets its tolerance on a kink and on a parabola, and keeps the start when nothing is higher', () => {
+    // A tent peak at 0.3 (a kink, as a linearly interpolated table has): the parabolic steps fail and golden sections take over.
+    const tent = brentMaximum((x) => 1 - Math.abs(x - 0.3) - (x > 0.3 ? 2 * (x - 0.3) : 0), 0, 1, 0.5, 0.4, 1e-6);
+    expect(Math.abs(tent.x - 0.3)).toBeLessThanOrEqual(1e-6);
+    // f = -(x - 0.61803)^2, vertex at 0.61803 (by inspection).
+    const par = brentMaximum((v) => -((v - 0.61803) ** 2), 0, 1, 0.5, -(0.11803 ** 2), 1e-3);
+    expect(Math.abs(par.x - 0.61803)).toBeLessThanOrEqual(1e-3);
+    // NaN counts as lower than any value: the start is returned.
+    expect(brentMaximum(() => Number.NaN, 0, 1, 0.5, 2, 1e-6)).toEqual({ x: 0.5, fx: 2 });
   });
 });
