@@ -13,7 +13,8 @@ import type { AnalysisError, MissionSolver } from './analysisTypes';
 import { thrustDragCrossover } from './crossover';
 import { flightCeilings, type Ceiling } from './envelope';
 import { shapleyValues } from './shapleyAttribution';
-import { analysisSolver, subsetWeights, type NeighbourStart } from './warmStart';
+import { flySerially, type AnalysisSteps, type PlannedMission } from './missionPlan';
+import { subsetWeights } from './warmStart';
 
 export type InletFactor = 'recovery' | 'spillage' | 'externalDrag' | 'weight';
 
@@ -92,7 +93,8 @@ export interface InletComparisonResult {
 export const SHAPLEY_DESCRIPTION =
   'Shapley attribution: each factor\'s share is its effect on block fuel when switched from A to B, averaged over all 24 orders of switching the four factors (16 missions). The shares add up exactly to the total; interaction effects are shared between the factors involved, not left as a residual.';
 
-function choiceOf(mask: number): FactorChoice {
+/** The mix of bit mask `mask`: bit i set takes INLET_FACTORS[i] from design B. */
+export function choiceOf(mask: number): FactorChoice {
   const pick = (bit: number): 'A' | 'B' => ((mask >> bit) & 1 ? 'B' : 'A');
   return { recovery: pick(0), spillage: pick(1), externalDrag: pick(2), weight: pick(3) };
 }
@@ -109,29 +111,67 @@ function midCruiseMass(r: MissionResult): number {
  * values (Shapley 1953). The crossover compares both designs at one stated
  * condition: the cruise altitude and design A's mid-cruise mass (mean of the
  * cruise start and end masses). Ceilings use maxClimb at the same mass.
+ * On the calling thread (missionPlan.ts flySerially); a host with worker
+ * threads runs compareInletsSteps over them instead, with the same answer.
  */
 export function compareInlets(
   build: InletFactorBuilder,
   options: InletComparisonOptions,
 ): Result<InletComparisonResult, AnalysisError> {
-  const solve: MissionSolver = options.solve ?? analysisSolver();
   const total = 1 << INLET_FACTORS.length;
+  let done = 0;
+  return flySerially(compareInletsSteps(build, options), {
+    ...(options.solve ? { solve: options.solve } : {}),
+    ...(options.shouldCancel ? { shouldCancel: options.shouldCancel } : {}),
+    onMission: () => options.onProgress?.(++done, total),
+  });
+}
+
+/**
+ * compareInlets as one round of 16 planned missions (missionPlan.ts): all-A
+ * and the four single-factor mixes start cold; each mix of two or more
+ * factors from B starts from the mix with its lowest factor back at A, its
+ * figures predicted from all its sub-mixes (subsetWeights), so it is planned
+ * after them. Options' solve, onProgress and shouldCancel are the runner's.
+ */
+export function* compareInletsSteps(build: InletFactorBuilder, options: InletComparisonOptions): AnalysisSteps<Result<InletComparisonResult, AnalysisError>> {
+  const total = 1 << INLET_FACTORS.length;
+  const missions: PlannedMission[] = [];
+  for (let mask = 0; mask < total; mask++) {
+    // A single factor has nothing to predict it but all-A, another aircraft: it starts cold.
+    const single = (mask & (mask - 1)) === 0;
+    const weights = single ? [] : subsetWeights(mask);
+    missions.push({
+      job: { kind: 'compare', mask },
+      input: build(choiceOf(mask)),
+      after: weights.map((w) => w.mask),
+      lane: 0,
+      start: (results) => {
+        if (single) return undefined;
+        const from = results[mask & (mask - 1)];
+        if (from === undefined || weights.some((w) => results[w.mask] === undefined)) return undefined;
+        return { from, blend: weights.map((w) => ({ weight: w.weight, result: results[w.mask]! })) };
+      },
+    });
+  }
+  const flown = yield { missions, laneMemos: false, stopAtFailure: true };
   const results: MissionResult[] = [];
   for (let mask = 0; mask < total; mask++) {
-    if (options.shouldCancel?.()) return err({ code: 'cancelled', message: `inlet comparison cancelled after ${mask} of ${total} missions` });
-    const choice = choiceOf(mask);
-    // Each mix after all-A starts from the mix with its lowest factor back at A, its figures predicted from all its sub-mixes.
-    // A single factor has nothing to predict it but all-A, another aircraft: it starts cold.
-    const start: NeighbourStart | undefined =
-      (mask & (mask - 1)) === 0 ? undefined : { from: results[mask & (mask - 1)]!, blend: subsetWeights(mask).map((w) => ({ weight: w.weight, result: results[w.mask]! })) };
-    const r = solve(build(choice), start);
+    const r = flown.results[mask];
+    if (r === undefined) return err({ code: 'cancelled', message: `inlet comparison cancelled after ${mask} of ${total} missions` });
     if (r.status !== 'ok') {
+      const choice = choiceOf(mask);
       const mix = INLET_FACTORS.map((f) => `${f} ${choice[f]}`).join(', ');
       return err({ code: 'mission_failed', message: `inlet comparison: the mission with ${mix} failed: ${r.status}: ${r.statusMessage}` });
     }
     results.push(r);
-    options.onProgress?.(mask + 1, total);
   }
+  return inletComparisonOf(build, options, results);
+}
+
+/** The comparison from the 16 missions flown (by mask): crossovers, ceilings, differences and the Shapley breakdown. */
+function inletComparisonOf(build: InletFactorBuilder, options: InletComparisonOptions, results: readonly MissionResult[]): Result<InletComparisonResult, AnalysisError> {
+  const total = 1 << INLET_FACTORS.length;
   const attribution = shapleyValues(INLET_FACTORS.length, (mask) => results[mask]!.blockFuel_kg);
   const a = results[0]!;
   const b = results[total - 1]!;

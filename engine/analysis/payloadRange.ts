@@ -8,8 +8,8 @@ import type { Caution } from '../cautions/caution';
 import { err, ok, type Result } from '../core/result';
 import type { MissionInput, MissionResult } from '../mission/missionTypes';
 import type { AnalysisError, MissionSolver } from './analysisTypes';
-import { createPassMemo } from '../mission/passMemo';
-import { analysisSolver, lagrangeWeights, type NeighbourStart } from './warmStart';
+import { flySerially, type AnalysisSteps, type MissionRound, type PlannedMission, type RoundResults } from './missionPlan';
+import { lagrangeWeights, type NeighbourStart } from './warmStart';
 
 export type PayloadRangePointKind = 'maxPayload' | 'mtowFullFuel' | 'ferry' | 'between';
 
@@ -82,13 +82,42 @@ function pointOf(kind: PayloadRangePointKind, r: MissionResult): PayloadRangePoi
  * allow. Cost: 3 + 2 * pointsBetween missions, one fewer without an
  * MTOW-full-fuel corner; onProgress(done, total) is called once after each
  * mission flown and ends at (missions, missions) (total drops by one after
- * the first mission when that corner does not exist).
+ * the first mission when that corner does not exist). On the calling thread
+ * (missionPlan.ts flySerially); a host with worker threads runs
+ * payloadRangeSteps over them instead, with the same answer.
  */
 export function payloadRangeDiagram(
   base: MissionInput,
   options: PayloadRangeOptions,
 ): Result<PayloadRangeResult, AnalysisError> {
-  const solve: MissionSolver = options.solve ?? analysisSolver(createPassMemo());
+  let done = 0;
+  const count = { total: 3 + 2 * (options.pointsBetween ?? 3) };
+  return flySerially(payloadRangeSteps(base, options, count), {
+    ...(options.solve ? { solve: options.solve } : {}),
+    ...(options.shouldCancel ? { shouldCancel: options.shouldCancel } : {}),
+    onMission: () => options.onProgress?.(++done, count.total),
+  });
+}
+
+/** A point flown: its payload and result. */
+interface FlownPoint {
+  readonly payload_kg: number;
+  readonly result: MissionResult;
+}
+
+/**
+ * payloadRangeDiagram as rounds of planned missions (missionPlan.ts), each
+ * lane sharing one pass memo: the maximum-payload mission; the
+ * MTOW-full-fuel corner (when there is one) from it; then two lanes, the
+ * points below the first corner flown downwards from it, and the ferry
+ * point (from the corner before it) with the points above it flown upwards.
+ * Each point starts from the (up to three) nearest points on its side of
+ * the MTOW-full-fuel corner (the diagram has a kink there) among the
+ * corners flown before and its lane's points before it: the polynomial in
+ * payload through them (Lagrange weights). `count.total` is set to the
+ * missions to fly once known.
+ */
+export function* payloadRangeSteps(base: MissionInput, options: PayloadRangeOptions, count: { total: number } = { total: 0 }): AnalysisSteps<Result<PayloadRangeResult, AnalysisError>> {
   const between = options.pointsBetween ?? 3;
   if (!Number.isInteger(between) || between < 0 || between > 50) {
     return err({ code: 'invalid_input', message: `payload-range: points between corners ${between} must be an integer 0..50` });
@@ -98,68 +127,92 @@ export function payloadRangeDiagram(
   if (!(maxPayload_kg > 0)) {
     return err({ code: 'invalid_input', message: `payload-range: MZFW ${af.mzfw_kg} kg is not above OEW ${af.oew_kg} kg, so no payload can be carried` });
   }
-  // Missions to fly; one fewer once the MTOW-full-fuel corner turns out not to exist.
-  let total = 3 + 2 * between;
+  count.total = 3 + 2 * between;
   let done = 0;
-  // Missions flown so far by payload: each next one starts from the nearest and its solvable leg's distance is
-  // predicted by the line (or parabola) through the nearest two (three) on its side of the MTOW-full-fuel corner.
-  const flown: { readonly payload_kg: number; readonly result: MissionResult }[] = [];
   let corner: number | null = null;
-  const startFor = (payload_kg: number): NeighbourStart | undefined => {
-    const side = (p: number) => (corner === null ? 0 : p > corner + 1e-9 ? 1 : p < corner - 1e-9 ? -1 : 0);
+  const side = (p: number) => (corner === null ? 0 : p > corner + 1e-9 ? 1 : p < corner - 1e-9 ? -1 : 0);
+  // The nearest (up to three) points of `candidates` on the side of `payload_kg`, and the polynomial through them.
+  const startAmong = (payload_kg: number, candidates: readonly FlownPoint[]): NeighbourStart | undefined => {
     const s = side(payload_kg);
-    const near = flown
-      .filter((f) => s === 0 || side(f.payload_kg) === 0 || side(f.payload_kg) === s)
+    const near = candidates
+      .filter((f) => f.result.status === 'ok' && (s === 0 || side(f.payload_kg) === 0 || side(f.payload_kg) === s))
       .sort((x, y) => Math.abs(x.payload_kg - payload_kg) - Math.abs(y.payload_kg - payload_kg))
       .slice(0, 3);
     if (near.length === 0) return undefined;
     const weights = lagrangeWeights(near.map((f) => f.payload_kg), payload_kg);
     return { from: near[0]!.result, blend: near.map((f, k) => ({ weight: weights[k]!, result: f.result })) };
   };
-  const fly = (payload_kg: number, what: string): Result<MissionResult, AnalysisError> => {
-    if (options.shouldCancel?.()) return err({ code: 'cancelled', message: `payload-range cancelled after ${done} of ${total} missions` });
-    const r = solve({ ...base, solve: { kind: 'maxRange', payload_kg } }, startFor(payload_kg));
-    if (r.status === 'ok') flown.push({ payload_kg, result: r });
+  const corners: FlownPoint[] = [];
+  const planned = (payload_kg: number, lane: number, after: readonly number[], ahead: readonly number[]): PlannedMission => ({
+    job: { kind: 'payloadRange', payload_kg },
+    input: { ...base, solve: { kind: 'maxRange', payload_kg } },
+    after,
+    lane,
+    start: (results) => startAmong(payload_kg, [...corners, ...after.map((i) => ({ payload_kg: ahead[i]!, result: results[i]! })).filter((f) => f.result !== undefined)]),
+  });
+  const failure = (r: MissionResult | undefined, payload_kg: number, what: string): Result<never, AnalysisError> | null => {
+    if (r === undefined) return err({ code: 'cancelled', message: `payload-range cancelled after ${done} of ${count.total} missions` });
     done++;
-    options.onProgress?.(done, total);
-    if (r.status !== 'ok') {
-      return err({ code: 'mission_failed', message: `payload-range: the ${what} mission (payload ${payload_kg.toFixed(0)} kg) failed: ${r.status}: ${r.statusMessage}` });
-    }
-    return ok(r);
+    if (r.status === 'ok') return null;
+    return err({ code: 'mission_failed', message: `payload-range: the ${what} mission (payload ${payload_kg.toFixed(0)} kg) failed: ${r.status}: ${r.statusMessage}` });
   };
-  const a = fly(maxPayload_kg, 'maximum-payload');
+  // One mission alone in its round, in lane 0.
+  function* single(payload_kg: number, what: string): Generator<MissionRound, Result<MissionResult, AnalysisError>, RoundResults> {
+    const flown = yield { missions: [planned(payload_kg, 0, [], [payload_kg])], laneMemos: true, stopAtFailure: true };
+    const r = flown.results[0];
+    const bad = failure(r, payload_kg, what);
+    return bad ?? ok(r!);
+  }
+  const a = yield* single(maxPayload_kg, 'maximum-payload');
   if (!a.ok) return a;
+  corners.push({ payload_kg: maxPayload_kg, result: a.value });
   const taxiOut_kg = a.value.rampMass_kg - a.value.takeoffMass_kg;
   const payloadB = af.mtow_kg + taxiOut_kg - af.oew_kg - af.maxFuel_kg;
   const hasB = payloadB > 0 && payloadB < maxPayload_kg;
-  if (hasB) corner = payloadB;
   let b: MissionResult | null = null;
   if (hasB) {
-    const rb = fly(payloadB, 'MTOW-full-fuel');
+    corner = payloadB;
+    const rb = yield* single(payloadB, 'MTOW-full-fuel');
     if (!rb.ok) return rb;
     b = rb.value;
+    corners.push({ payload_kg: payloadB, result: b });
   } else {
     // No MTOW-full-fuel corner: no mission for it, so the count to fly drops by one.
-    total--;
+    count.total--;
   }
-  const c = fly(0, 'ferry');
-  if (!c.ok) return c;
+  // The points between: below the first corner (maximum payload) on the upper segment, above the ferry point on the lower.
   const segments: [number, number][] = hasB ? [[maxPayload_kg, payloadB], [payloadB, 0]] : [[maxPayload_kg, 0]];
-  const mids: PayloadRangePoint[][] = [];
-  for (const [hi, lo] of segments) {
-    const list: PayloadRangePoint[] = [];
+  const mids = segments.map(([hi, lo]) => {
     const n = hasB ? between : 2 * between;
-    for (let i = 1; i <= n; i++) {
-      const r = fly(hi + ((lo - hi) * i) / (n + 1), 'intermediate');
-      if (!r.ok) return r;
-      list.push(pointOf('between', r.value));
-    }
-    mids.push(list);
+    return Array.from({ length: n }, (_, i) => hi + ((lo - hi) * (i + 1)) / (n + 1));
+  });
+  // Lane 0 flies down from maximum payload; lane 1 flies the ferry point, then up from it.
+  const all = mids.flat();
+  const down = hasB ? mids[0]! : all.slice(0, Math.ceil(all.length / 2));
+  const up = (hasB ? mids[1]! : all.slice(down.length)).slice().reverse();
+  const payloads = [...down, 0, ...up];
+  const missions: PlannedMission[] = payloads.map((p, i) => {
+    const lane = i < down.length ? 0 : 1;
+    const first = lane === 0 ? 0 : down.length;
+    return planned(p, lane, Array.from({ length: i - first }, (_, k) => first + k), payloads);
+  });
+  const flown = yield { missions, laneMemos: true, stopAtFailure: true };
+  if (flown.cancelled) {
+    return err({ code: 'cancelled', message: `payload-range cancelled after ${done + flown.results.filter((r) => r !== undefined).length} of ${count.total} missions` });
   }
+  // The first failure in plan order (a serial run stops there; the missions before it fly the same on any thread).
+  const ferryAt = down.length;
+  for (const [i, r] of flown.results.entries()) {
+    if (r === undefined) continue;
+    const bad = failure(r, payloads[i]!, i === ferryAt ? 'ferry' : 'intermediate');
+    if (bad) return bad;
+  }
+  const c = flown.results[ferryAt];
+  const pointAt = (p: number) => pointOf('between', flown.results[payloads.indexOf(p)]!);
   const pa = pointOf('maxPayload', a.value);
   const pb = b === null ? null : pointOf('mtowFullFuel', b);
-  const pc = pointOf('ferry', c.value);
-  const points = pb === null ? [pa, ...mids[0]!, pc] : [pa, ...mids[0]!, pb, ...mids[1]!, pc];
+  const pc = pointOf('ferry', c!);
+  const points = pb === null ? [pa, ...mids[0]!.map(pointAt), pc] : [pa, ...mids[0]!.map(pointAt), pb, ...mids[1]!.map(pointAt), pc];
   const note =
     pb === null
       ? payloadB >= maxPayload_kg

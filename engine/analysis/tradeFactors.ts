@@ -9,7 +9,8 @@ import type { PropulsionModel } from '../propulsion/propulsionModel';
 import { adjustPropulsion } from './adjustedPropulsion';
 import { describeInstallationMethod } from '../propulsion/installationMethod';
 import type { AnalysisError, MissionSolver } from './analysisTypes';
-import { analysisSolver, STEP_ORDER, stepStart, type NeighbourStart, type StepMission } from './warmStart';
+import { flySerially, type AnalysisSteps, type PlannedMission } from './missionPlan';
+import { STEP_ORDER, stepStart, type StepMission } from './warmStart';
 
 export type TradeFactorName = 'recovery' | 'dragCount' | 'tsfc' | 'oew';
 
@@ -65,53 +66,120 @@ const WRAPPER_METHOD =
  * in payload-and-range mode). When the input's solve mode is not
  * payload-and-range, it is flown once and its payload and range (in the
  * mission's distance basis)
- * become the design mission. 1 (+1) + 16 missions.
+ * become the design mission. 1 (+1) + 16 missions, on the calling thread
+ * (missionPlan.ts flySerially); a host with worker threads runs
+ * tradeFactorsSteps over them instead, with the same answer.
  */
 export function tradeFactors(input: MissionInput, options: TradeFactorOptions): Result<TradeFactorsResult, AnalysisError> {
-  const solve: MissionSolver = options.solve ?? analysisSolver();
+  const total = 17 + (input.solve.kind === 'payloadRange' ? 0 : 1);
+  let done = 0;
+  return flySerially(tradeFactorsSteps(input, options), {
+    ...(options.solve ? { solve: options.solve } : {}),
+    ...(options.shouldCancel ? { shouldCancel: options.shouldCancel } : {}),
+    onMission: () => options.onProgress?.(++done, total),
+  });
+}
+
+const UNITS: Record<TradeFactorName, string> = {
+  recovery: '+1 % inlet recovery (+0.01)',
+  dragCount: '+1 drag count (CD0 + 0.0001)',
+  tsfc: '+1 % TSFC (fuel flow x 1.01)',
+  oew: '+100 kg OEW',
+};
+
+/**
+ * The design mission with one factor moved by `u` units (null: the design
+ * mission itself): recovery + 0.01 u through `recoveryModel`, else the
+ * propulsion's own withRecoveryOffset, else the C_ram wrapper; CD0 + 1e-4 u;
+ * fuel flow x (1 + 0.01 u); OEW + 100 u kg.
+ */
+export function tradeMissionInput(design: MissionInput, factor: TradeFactorName | null, u: number, cRam: number, recoveryModel?: (delta: number) => PropulsionModel): MissionInput {
+  switch (factor) {
+    case null:
+      return design;
+    case 'recovery': {
+      const own = design.propulsion.withRecoveryOffset?.bind(design.propulsion);
+      const model = recoveryModel ?? own ?? ((delta: number) => adjustPropulsion(design.propulsion, { recoveryDelta: delta, cRam, fuelFlowScale: 1 }));
+      return { ...design, propulsion: model(0.01 * u) };
+    }
+    case 'dragCount':
+      return { ...design, aero: design.aero.withIncrement(1e-4 * u) };
+    case 'tsfc':
+      return { ...design, propulsion: adjustPropulsion(design.propulsion, { recoveryDelta: 0, cRam, fuelFlowScale: 1 + 0.01 * u }) };
+    case 'oew':
+      return { ...design, airframe: { ...design.airframe, oew_kg: design.airframe.oew_kg + 100 * u } };
+  }
+}
+
+const FACTOR_NAMES: readonly TradeFactorName[] = ['recovery', 'dragCount', 'tsfc', 'oew'];
+
+/**
+ * tradeFactors as rounds of planned missions (missionPlan.ts): the project's
+ * own mission first when its mode is not payload-and-range; then the
+ * baseline and each factor's steps +1/2, -1/2, +1, -1 unit, each step
+ * started from the baseline and the factor's steps before it (stepStart;
+ * the first cold). Options' solve, onProgress and shouldCancel are the
+ * runner's.
+ */
+export function* tradeFactorsSteps(input: MissionInput, options: TradeFactorOptions): AnalysisSteps<Result<TradeFactorsResult, AnalysisError>> {
   const tolerance = options.tolerance ?? { rel: 0.05, abs_kg: 0.01 };
   const cRam = options.cRam ?? 1.35;
   if (!(cRam >= 0) || !Number.isFinite(cRam)) return err({ code: 'invalid_input', message: `trade factors: C_ram ${cRam} must be a number >= 0` });
   const total = 17 + (input.solve.kind === 'payloadRange' ? 0 : 1);
   let done = 0;
-  const fly = (mission: MissionInput, what: string, start?: NeighbourStart): Result<MissionResult, AnalysisError> => {
-    if (options.shouldCancel?.()) return err({ code: 'cancelled', message: `trade factors cancelled after ${done} of ${total} missions` });
-    const r = solve(mission, start);
-    done++;
-    options.onProgress?.(done, total);
-    if (r.status !== 'ok') return err({ code: 'mission_failed', message: `trade factors: the ${what} mission failed: ${r.status}: ${r.statusMessage}` });
-    return ok(r);
-  };
+  const failed = (r: MissionResult, what: string): AnalysisError => ({ code: 'mission_failed', message: `trade factors: the ${what} mission failed: ${r.status}: ${r.statusMessage}` });
+  const cancelled = (): Result<never, AnalysisError> => err({ code: 'cancelled', message: `trade factors cancelled after ${done} of ${total} missions` });
   let design = input;
   if (input.solve.kind !== 'payloadRange') {
-    const first = fly(input, 'project');
-    if (!first.ok) return first;
-    design = { ...input, solve: { kind: 'payloadRange', payload_kg: first.value.payload_kg, range_m: first.value.distanceBasis === 'ground' ? first.value.groundDistance_m : first.value.airDistance_m } };
+    const flown = yield {
+      missions: [{ job: { kind: 'trade', factor: null, u: 0, solve: input.solve }, input, after: [], lane: 0, start: () => undefined }],
+      laneMemos: false,
+      stopAtFailure: true,
+    };
+    const first = flown.results[0];
+    if (first === undefined) return cancelled();
+    done++;
+    if (first.status !== 'ok') return err(failed(first, 'project'));
+    design = { ...input, solve: { kind: 'payloadRange', payload_kg: first.payload_kg, range_m: first.distanceBasis === 'ground' ? first.groundDistance_m : first.airDistance_m } };
   }
-  const base = fly(design, 'baseline');
-  if (!base.ok) return base;
-  const own = design.propulsion.withRecoveryOffset?.bind(design.propulsion);
-  const recoveryModel =
-    options.recoveryModel ?? own ?? ((delta: number) => adjustPropulsion(design.propulsion, { recoveryDelta: delta, cRam, fuelFlowScale: 1 }));
-  const perturb: Record<TradeFactorName, { unit: string; apply: (units: number) => MissionInput }> = {
-    recovery: { unit: '+1 % inlet recovery (+0.01)', apply: (u) => ({ ...design, propulsion: recoveryModel(0.01 * u) }) },
-    dragCount: { unit: '+1 drag count (CD0 + 0.0001)', apply: (u) => ({ ...design, aero: design.aero.withIncrement(1e-4 * u) }) },
-    tsfc: {
-      unit: '+1 % TSFC (fuel flow x 1.01)',
-      apply: (u) => ({ ...design, propulsion: adjustPropulsion(design.propulsion, { recoveryDelta: 0, cRam, fuelFlowScale: 1 + 0.01 * u }) }),
-    },
-    oew: { unit: '+100 kg OEW', apply: (u) => ({ ...design, airframe: { ...design.airframe, oew_kg: design.airframe.oew_kg + 100 * u } }) },
-  };
+  // Index 0 the baseline; factor k's step j (STEP_ORDER[j]) at 1 + 4k + j, in its lane k + 1.
+  const at = (k: number, j: number) => 1 + STEP_ORDER.length * k + j;
+  const missions: PlannedMission[] = [{ job: { kind: 'trade', factor: null, u: 0, solve: design.solve }, input: design, after: [], lane: 0, start: () => undefined }];
+  FACTOR_NAMES.forEach((name, k) => {
+    STEP_ORDER.forEach((u, j) => {
+      const before = STEP_ORDER.slice(0, j).map((_, i) => at(k, i));
+      missions.push({
+        job: { kind: 'trade', factor: name, u, solve: design.solve },
+        input: tradeMissionInput(design, name, u, cRam, options.recoveryModel),
+        // The first step starts cold (stepStart with the baseline alone): it reads nothing.
+        after: j === 0 ? [] : [0, ...before],
+        lane: k + 1,
+        start: (results) => {
+          const flown: StepMission[] = [];
+          const base = results[0];
+          if (base !== undefined && base.status === 'ok') flown.push({ u: 0, result: base });
+          before.forEach((i, s) => {
+            const r = results[i];
+            if (r !== undefined && r.status === 'ok') flown.push({ u: STEP_ORDER[s]!, result: r });
+          });
+          return stepStart(flown, u);
+        },
+      });
+    });
+  });
+  const round = yield { missions, laneMemos: false, stopAtFailure: false };
+  const base = round.results[0];
+  if (base === undefined) return cancelled();
+  done++;
+  if (base.status !== 'ok') return err(failed(base, 'baseline'));
   const factors: TradeFactor[] = [];
-  for (const name of ['recovery', 'dragCount', 'tsfc', 'oew'] as const) {
-    // Flown +1/2, -1/2, +1, -1 unit, each started from the missions of this factor flown so far (warmStart.ts stepStart).
-    const flown: StepMission[] = [{ u: 0, result: base.value }];
+  for (const [k, name] of FACTOR_NAMES.entries()) {
     const byStep = new Map<number, Result<MissionResult, AnalysisError>>();
-    for (const u of STEP_ORDER) {
-      const r = fly(perturb[name].apply(u), `${name} ${u > 0 ? '+' : ''}${u} unit`, stepStart(flown, u));
-      if (!r.ok && r.error.code === 'cancelled') return r;
-      if (r.ok) flown.push({ u, result: r.value });
-      byStep.set(u, r);
+    for (const [j, u] of STEP_ORDER.entries()) {
+      const r = round.results[at(k, j)];
+      if (r === undefined) return cancelled();
+      done++;
+      byStep.set(u, r.status === 'ok' ? ok(r) : err(failed(r, `${name} ${u > 0 ? '+' : ''}${u} unit`)));
     }
     const steps = [1, -1, 0.5, -0.5].map((u) => byStep.get(u)!);
     const failures = steps.flatMap((r) => (r.ok ? [] : [r.error.message]));
@@ -122,7 +190,7 @@ export function tradeFactors(input: MissionInput, options: TradeFactorOptions): 
     const converged = gap !== null && half !== null && gap <= tolerance.rel * Math.abs(half) + tolerance.abs_kg;
     factors.push({
       name,
-      unit: perturb[name].unit,
+      unit: UNITS[name],
       blockFuelPerUnit_kg: full,
       blockFuelPerUnitHalfStep_kg: half,
       relativeDifference: gap === null || half === null || half === 0 ? null : gap / Math.abs(half),
@@ -138,13 +206,13 @@ export function tradeFactors(input: MissionInput, options: TradeFactorOptions): 
   const payloadRange = design.solve.kind === 'payloadRange' ? design.solve : null;
   return ok({
     designMission: { payload_kg: payloadRange!.payload_kg, range_m: payloadRange!.range_m },
-    baselineBlockFuel_kg: base.value.blockFuel_kg,
+    baselineBlockFuel_kg: base.blockFuel_kg,
     factors,
     tolerance,
     missions: done,
     recoveryMethod: options.recoveryModel
       ? "Recovery raised by the caller's propulsion model."
-      : own
+      : design.propulsion.withRecoveryOffset !== undefined
         ? `Recovery raised at the inlet and carried through the installation: ${describeInstallationMethod(design.propulsion.installationMethod)}; engine airflow, spillage and bleed fraction follow.`
         : WRAPPER_METHOD,
   });
