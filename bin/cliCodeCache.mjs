@@ -21,15 +21,19 @@
 // folder of the user's own in the system's temporary folder. A cache is
 // compiled code: only a folder owned by this user (or by the bundle's owner)
 // and writable by nobody else is read. BLOCKWISE_CODE_CACHE=0 turns it off.
-import { Buffer, isAscii } from 'node:buffer';
-import { existsSync, mkdirSync, readdirSync, readFileSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
+//
+// Node's built-ins come through require (see bin/cliBundle.mjs).
 import { createRequire } from 'node:module';
-import { tmpdir } from 'node:os';
-import { dirname, join } from 'node:path';
-import process from 'node:process';
-import { fileURLToPath } from 'node:url';
-import vm from 'node:vm';
-import zlib from 'node:zlib';
+
+const require = createRequire(import.meta.url);
+const { Buffer, isAscii } = require('node:buffer');
+const { existsSync, mkdirSync, readdirSync, readFileSync, renameSync, rmSync, statSync, writeFileSync } = require('node:fs');
+const { tmpdir } = require('node:os');
+const { dirname, join } = require('node:path');
+const process = require('node:process');
+const { fileURLToPath } = require('node:url');
+const vm = require('node:vm');
+const zlib = require('node:zlib');
 
 /** First bytes of a cache file, then the CRC-32 and the length (two unsigned 32-bit little-endian) of the V8 data that follows. */
 const MAGIC = Buffer.from('BWV8CC1\n', 'latin1');

@@ -6,15 +6,17 @@
 // Two builds of the same sources. A verb runs from one classic script,
 // dist-cli/blockwise.cjs (CommonJS, every verb in it, ASCII only), which
 // bin/cliCodeCache.mjs compiles with V8's code cache (a module graph cannot use
-// one on Node 20). The overview (`blockwise`, `--help`) runs from ES modules
-// split by verb (dist-cli/blockwise.mjs and its chunks), which load only the
-// little it needs: faster than the whole script even from its cache. The
-// sweep's worker thread, dist-cli/sweepWorker.mjs, shares those chunks.
+// one on Node 20). The ES modules split by verb (dist-cli/blockwise.mjs and
+// its chunks) run an argument that starts with "-" and is not -h or --help,
+// and the sweep's worker thread, dist-cli/sweepWorker.mjs, shares them.
 //
 // Beside the bundle, dist-cli/inputs.json lists every source file that went
 // into it with its modification time and size; bin/blockwise.mjs compares them
 // before each start and runs the TypeScript sources instead when any differs,
-// so a stale bundle never runs old code. After the build, the code cache of
+// so a stale bundle never runs old code. dist-cli/overview.txt is the
+// overview as the bundle prints it, which bin/blockwise.mjs prints for
+// `blockwise`, `--help`, `-h` and `help` without loading the command line.
+// After the build, the code cache of
 // `fly` is made by flying the demo (warmCodeCache), so the first fly after
 // `npm ci` starts as fast as the later ones.
 import { spawnSync } from 'node:child_process';
@@ -70,17 +72,51 @@ export async function buildCli(into = outDir) {
     process.stderr.write('blockwise: note: dist-cli/blockwise.cjs is not ASCII (a source holds a non-ASCII regular expression?); it still runs\n');
   }
   const files = new Set([...Object.keys(modules.metafile.inputs), ...Object.keys(script.metafile.inputs)]);
-  const inputs = [...files].map((file) => {
-    const s = statSync(resolve(repo, file));
-    return [relative(repo, resolve(repo, file)).split('\\').join('/'), s.mtimeMs, s.size];
-  });
-  writeFileSync(resolve(into, 'inputs.json'), `${JSON.stringify({ inputs })}\n`);
+  const listed = (names) =>
+    [...names].map((file) => {
+      const s = statSync(resolve(repo, file));
+      return [relative(repo, resolve(repo, file)).split('\\').join('/'), s.mtimeMs, s.size];
+    });
+  const inputs = listed(files);
+  writeOverview(into);
+  writeFileSync(resolve(into, 'inputs.json'), `${JSON.stringify({ inputs, overview: listed(overviewInputs(modules.metafile)) })}\n`);
   return { outDir: into, inputs: inputs.length };
 }
 
 /**
+ * Writes dist-cli/overview.txt, the overview (`blockwise`, `--help`, `-h`, `help`) exactly as the ES-module build
+ * prints it, so bin/blockwise.mjs prints it without loading any of the command line. A bundle that cannot print
+ * it is no bundle: the build fails.
+ */
+function writeOverview(into) {
+  const r = spawnSync(process.execPath, [resolve(into, 'blockwise.mjs'), '--help'], { cwd: repo, encoding: 'buffer', timeout: 60_000 });
+  if (r.status !== 0 || r.stdout.length === 0) throw new Error(`the bundle's --help exited with ${r.status}: ${String(r.stderr).trim().split('\n')[0] ?? ''}`);
+  writeFileSync(resolve(into, 'overview.txt'), r.stdout);
+}
+
+/**
+ * The source files of the ES-module build's entry chunk and the chunks it imports statically: all the code that
+ * runs to print the overview (the verbs are imported dynamically, and only when one runs), so overview.txt is
+ * current while these are (bin/cliBundle.mjs, part 'overview').
+ */
+function overviewInputs(metafile) {
+  const outputs = metafile.outputs;
+  const entry = Object.keys(outputs).find((o) => outputs[o].entryPoint === CLI_ENTRIES.blockwise);
+  if (entry === undefined) throw new Error(`no output chunk for ${CLI_ENTRIES.blockwise} in the build's metafile`);
+  const chunks = new Set();
+  const next = [entry];
+  while (next.length > 0) {
+    const chunk = next.pop();
+    if (chunks.has(chunk)) continue;
+    chunks.add(chunk);
+    for (const i of outputs[chunk].imports) if (i.kind === 'import-statement' && outputs[i.path] !== undefined) next.push(i.path);
+  }
+  return new Set([...chunks].flatMap((c) => Object.keys(outputs[c].inputs)));
+}
+
+/**
  * Flies the demo once through the bundled command line, so the code cache of `fly` exists before the first real
- * run (bin/cliCodeCache.mjs; the overview runs from the ES modules and has none). Output is dropped; a failure
+ * run (bin/cliCodeCache.mjs; the overview is printed from overview.txt and needs none). Output is dropped; a failure
  * only means the first real run makes the cache instead.
  */
 export function warmCodeCache() {
