@@ -16,3 +16,8 @@ export type { HighSpeedLimitSource } from './crossover';
 export type { LowSpeedLimitSource } from './crossover';
 export { SPEED_LIMIT_SOURCE_TEXT } from './crossover';
 export type { OptimumAltitudeResult } from './optimumAltitude';
+export { analysisJobInput, type AnalysisJob, type AnalysisJobBase } from './analysisJobs';
+export { flySerially, laneSolvers, plannedStart, type AnalysisSteps, type MissionRound, type PlannedMission, type RoundResults, type SerialHooks } from './missionPlan';
+export { compareInletsSteps, type InletComparisonOptions } from './inletComparison';
+export { tradeFactorsSteps, type TradeFactorOptions } from './tradeFactors';
+export { payloadRangeSteps, type PayloadRangeOptions } from './payloadRange';

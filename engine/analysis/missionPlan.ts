@@ -68,23 +68,31 @@ export function plannedStart(m: PlannedMission, results: readonly (MissionResult
   return m.start(seen);
 }
 
+/** The solvers of one analysis run: analysisSolver, with one pass memo per lane for rounds that share them (kept across rounds). */
+export function laneSolvers(): { solverFor(laneMemos: boolean, lane: number): MissionSolver } {
+  const memos = new Map<number, PassMemo>();
+  const plain = analysisSolver();
+  return {
+    solverFor(laneMemos, lane) {
+      if (!laneMemos) return plain;
+      let memo = memos.get(lane);
+      if (memo === undefined) {
+        memo = createPassMemo();
+        memos.set(lane, memo);
+      }
+      return analysisSolver(memo);
+    },
+  };
+}
+
 /**
  * Runs an analysis's rounds on the calling thread, each round's missions in
  * index order (every `after` comes first), with one pass memo per lane in a
  * round that shares them (kept across the analysis's rounds).
  */
 export function flySerially<R>(steps: AnalysisSteps<R>, hooks: SerialHooks = {}): R {
-  const memos = new Map<number, PassMemo>();
-  const solverFor = (round: MissionRound, lane: number): MissionSolver => {
-    if (hooks.solve !== undefined) return hooks.solve;
-    if (!round.laneMemos) return analysisSolver();
-    let memo = memos.get(lane);
-    if (memo === undefined) {
-      memo = createPassMemo();
-      memos.set(lane, memo);
-    }
-    return analysisSolver(memo);
-  };
+  const lanes = laneSolvers();
+  const solverFor = (round: MissionRound, lane: number): MissionSolver => hooks.solve ?? lanes.solverFor(round.laneMemos, lane);
   let next = steps.next();
   while (!next.done) {
     const round = next.value;

@@ -9,7 +9,7 @@
  * Speed is measured here, never in unit tests.
  */
 import { cpus } from 'node:os';
-import { formatTable, runCase } from './benchRunner';
+import { formatTable, runCase, runCaseAsync } from './benchRunner';
 import type { BenchResult } from './benchTypes';
 import { formatCliTiming, runCliTiming, type CliTiming } from './cliTiming';
 import { formatEqualAccuracy, runEqualAccuracy, type EqualAccuracy } from './equalAccuracy';
@@ -32,8 +32,9 @@ for (const { file, section } of BENCH_SECTIONS) {
   const matches = filters.length === 0 || filters.some((f) => file.includes(f) || section.title.toLowerCase().includes(f));
   if (!matches) continue;
   for (const bench of section.cases) {
-    results.push(runCase(section.title, bench));
+    results.push(bench.async ? await runCaseAsync(section.title, bench) : runCase(section.title, bench));
   }
+  await section.dispose?.();
 }
 
 const cores = cpus().length;
