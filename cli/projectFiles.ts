@@ -7,7 +7,7 @@
  */
 import { dirname, resolve } from 'node:path';
 import { err, ok, type Result } from '../engine/core';
-import { readTextFile } from '../hostio/textFile';
+import { readTextFileSync } from '../hostio/textFile';
 import type { MissionInput } from '../engine/mission';
 import { type BuildOptions, deckReference, embeddedDeckFile, makeIssue, parseProject, type Project, type ProjectIssue } from '../engine/project';
 import type { EngineDeck } from '../engine/propulsion';
@@ -33,16 +33,20 @@ export interface LoadFailure {
   readonly issues: readonly ProjectIssue[];
 }
 
-/** The file's text through the one safe reader (hostio/textFile.ts), or the reason it cannot be read. */
-async function readText(path: string): Promise<Result<string, string>> {
-  const read = await readTextFile(path);
+/**
+ * The file's text through the one safe reader (hostio/textFile.ts), or the reason it cannot be read. Read
+ * synchronously, as the other verbs' files are: a command line has nothing to do meanwhile, and the promise
+ * reader's six round trips to the thread pool per file (and its first FileHandle) cost a start several ms.
+ */
+function readText(path: string): Result<string, string> {
+  const read = readTextFileSync(path);
   return read.ok ? ok(read.value.text) : err(read.error.reason);
 }
 
 /** Reads and parses a project file only (no deck). */
 export async function readProjectFile(path: string): Promise<Result<{ projectPath: string; project: Project }, LoadFailure>> {
   const projectPath = resolve(path);
-  const text = await readText(projectPath);
+  const text = readText(projectPath);
   if (!text.ok) {
     return err({ file: projectPath, issues: [makeIssue('(file)', '', 'a readable project file', cannotReadMessage(projectPath, text.error))] });
   }
@@ -63,7 +67,7 @@ async function readProjectDeckText(projectPath: string, project: Project): Promi
   if (embedded !== null) return ok({ file: embedded, deckPath: projectPath });
   const deckPath = resolve(dirname(projectPath), ref.path);
   const what = ref.kind === 'cycle' ? 'cycle file' : 'deck file';
-  const text = await readText(deckPath);
+  const text = readText(deckPath);
   if (!text.ok) {
     return err({
       file: projectPath,
