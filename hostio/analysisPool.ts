@@ -12,7 +12,7 @@
  * again. Node only (worker_threads); the engine stays pure.
  */
 import { Worker } from 'node:worker_threads';
-import { flySerially, plannedStart, type AnalysisSteps, type MissionRound, type RoundResults } from '../engine/analysis';
+import { flySerially, plannedStart, type AnalysisSteps, type MissionRound, type PointOutput, type PointsResults, type PointsRound, type RoundResults } from '../engine/analysis';
 import type { MissionResult } from '../engine/mission';
 import type { AnalysisSpec } from '../engine/study';
 import type { PoolReply, PoolRequest, StartData, StudySource } from './analysisProtocol';
@@ -129,7 +129,7 @@ export function createAnalysisPool(options: { readonly workerUrl: URL; readonly 
         listeners.set(s.worker, (reply) => {
           s.busy = false;
           inFlight--;
-          if (reply.type === 'refused') {
+          if (reply.type !== 'flown') {
             refused = true;
             if (inFlight <= 0) finish();
             return;
@@ -142,6 +142,41 @@ export function createAnalysisPool(options: { readonly workerUrl: URL; readonly 
       }
       if (n === 0) finish();
       else dispatch();
+    });
+
+  /** Computes a points round's tasks over the workers, in task order; null when a worker refused or failed. */
+  const computePoints = (round: PointsRound, runId: number, study: number, source: StudySource, spec: AnalysisSpec): Promise<PointsResults | null> =>
+    new Promise((resolve) => {
+      const outputs: PointOutput[] = [];
+      let next = 0;
+      let left = round.tasks.length;
+      let refused = false;
+      const send = (s: Slot) => {
+        if (next >= round.tasks.length) return;
+        if (!s.studies.has(study)) {
+          s.worker.postMessage({ type: 'study', studyId: study, source, spec } satisfies PoolRequest);
+          s.studies.add(study);
+        }
+        s.busy = true;
+        s.worker.postMessage({ type: 'points', runId, studyId: study, index: next, job: round.tasks[next]!.job } satisfies PoolRequest);
+        next++;
+      };
+      const finish = () => {
+        for (const s of slots) listeners.delete(s.worker);
+        resolve(refused ? null : { outputs });
+      };
+      for (const s of slots) {
+        listeners.set(s.worker, (reply) => {
+          s.busy = false;
+          left--;
+          if (reply.type === 'computed') outputs[reply.index] = reply.output;
+          else refused = true;
+          if (left <= 0 || refused) finish();
+          else send(s);
+        });
+      }
+      if (left === 0) finish();
+      else for (const s of slots) send(s);
     });
 
   return {
@@ -157,7 +192,7 @@ export function createAnalysisPool(options: { readonly workerUrl: URL; readonly 
       try {
         let next = gen.next();
         while (!next.done) {
-          const round = await flyRound(next.value, runId, study, source, spec, hooks);
+          const round = 'tasks' in next.value ? await computePoints(next.value, runId, study, source, spec) : await flyRound(next.value, runId, study, source, spec, hooks);
           if (round === null) {
             broken = true;
             return serial();

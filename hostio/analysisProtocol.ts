@@ -4,7 +4,7 @@
  * mission input again from the study and the job (engine/study
  * analysisJobBase, engine/analysis analysisJobInput).
  */
-import type { AnalysisJob } from '../engine/analysis';
+import type { AnalysisJob, PointJob, PointOutput } from '../engine/analysis';
 import type { MissionResult } from '../engine/mission';
 import type { Project } from '../engine/project';
 import type { AnalysisSpec, DeckFileText } from '../engine/study';
@@ -35,9 +35,12 @@ export type PoolRequest =
       readonly lane: number;
       readonly laneMemos: boolean;
     }
+  /** One point task (the comparison's crossover and ceilings of a design). */
+  | { readonly type: 'points'; readonly runId: number; readonly studyId: number; readonly index: number; readonly job: PointJob }
   | { readonly type: 'endRun'; readonly runId: number };
 
 export type PoolReply =
   | { readonly type: 'flown'; readonly runId: number; readonly index: number; readonly result: MissionResult }
+  | { readonly type: 'computed'; readonly runId: number; readonly index: number; readonly output: PointOutput }
   /** The worker could not build the mission (its study or job did not give an input): the pool flies the analysis serially instead. */
   | { readonly type: 'refused'; readonly runId: number; readonly index: number; readonly message: string };

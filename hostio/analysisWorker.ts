@@ -3,10 +3,10 @@
  * study it is sent once (engine/study), builds each planned mission's input
  * from its job and flies it with the lane's solver (engine/analysis
  * laneSolvers: no time history, one pass memo per lane of a run that shares
- * them), and posts the result back.
+ * them), or computes a point task (pointJobOutput), and posts the result back.
  */
 import { parentPort } from 'node:worker_threads';
-import { analysisJobInput, laneSolvers, type AnalysisJobBase } from '../engine/analysis';
+import { analysisJobInput, laneSolvers, pointJobOutput, type AnalysisJobBase } from '../engine/analysis';
 import { analysisJobBase, createDeckTextMemo, prepareStudy } from '../engine/study';
 import type { PoolReply, PoolRequest } from './analysisProtocol';
 
@@ -41,6 +41,15 @@ port.on('message', (m: PoolRequest) => {
     return;
   }
   const base = baseOf(m.studyId);
+  if (m.type === 'points') {
+    const output = typeof base === 'string' ? null : pointJobOutput(base, m.job);
+    port.postMessage(
+      output === null
+        ? ({ type: 'refused', runId: m.runId, index: m.index, message: typeof base === 'string' ? base : `point task ${m.job.kind} does not belong to the study's analysis` } satisfies PoolReply)
+        : ({ type: 'computed', runId: m.runId, index: m.index, output } satisfies PoolReply),
+    );
+    return;
+  }
   const input = typeof base === 'string' ? null : analysisJobInput(base, m.job);
   if (input === null) {
     port.postMessage({ type: 'refused', runId: m.runId, index: m.index, message: typeof base === 'string' ? base : `job ${m.job.kind} does not belong to the study's analysis` } satisfies PoolReply);

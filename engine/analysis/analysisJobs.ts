@@ -3,7 +3,11 @@
  * and the mission input of each: a worker thread given the same study builds
  * the same input from the job as the calling thread did.
  */
+import type { Result } from '../core/result';
 import type { MissionInput } from '../mission/missionTypes';
+import type { AnalysisError } from './analysisTypes';
+import { thrustDragCrossover, type CrossoverQuery, type CrossoverResult } from './crossover';
+import { flightCeilings, type Ceiling, type EnvelopeQuery } from './envelope';
 import type { InletFactorBuilder } from './inletComparison';
 import { choiceOf } from './inletComparison';
 import { tradeMissionInput, type TradeFactorName } from './tradeFactors';
@@ -28,4 +32,29 @@ export function analysisJobInput(base: AnalysisJobBase, job: AnalysisJob): Missi
   if (base.kind === 'trade' && job.kind === 'trade') return tradeMissionInput({ ...base.input, solve: job.solve }, job.factor, job.u, base.cRam);
   if (base.kind === 'payloadRange' && job.kind === 'payloadRange') return { ...base.input, solve: { kind: 'maxRange', payload_kg: job.payload_kg } };
   return null;
+}
+
+/** A point task of an analysis (missionPlan.ts PointsRound): the crossover and the ceilings of the comparison's mix `mask` (0 all-A, 15 all-B). */
+export interface PointJob {
+  readonly kind: 'designFigures';
+  readonly mask: number;
+  readonly crossover: CrossoverQuery;
+  readonly ceilings: EnvelopeQuery;
+}
+
+export interface PointOutput {
+  readonly crossover: Result<CrossoverResult, AnalysisError>;
+  readonly ceilings: Result<readonly Ceiling[], AnalysisError>;
+}
+
+/** The output of a point task on its mix's models; null when the task is not of the base's analysis. */
+export function pointJobOutput(base: AnalysisJobBase, job: PointJob): PointOutput | null {
+  if (base.kind !== 'compare') return null;
+  const input = base.build(choiceOf(job.mask));
+  return designPoints({ aero: input.aero, propulsion: input.propulsion }, job);
+}
+
+/** The crossover and ceilings of a point task on given models. */
+export function designPoints(models: { readonly aero: MissionInput['aero']; readonly propulsion: MissionInput['propulsion'] }, job: PointJob): PointOutput {
+  return { crossover: thrustDragCrossover(models, job.crossover), ceilings: flightCeilings(models, job.ceilings) };
 }

@@ -10,10 +10,10 @@ import { err, ok, type Result } from '../core/result';
 import type { MissionInput, MissionResult } from '../mission/missionTypes';
 import type { RatingName } from '../propulsion/propulsionModel';
 import type { AnalysisError, MissionSolver } from './analysisTypes';
-import { thrustDragCrossover } from './crossover';
-import { flightCeilings, type Ceiling } from './envelope';
+import type { Ceiling } from './envelope';
 import { shapleyValues } from './shapleyAttribution';
-import { flySerially, type AnalysisSteps, type PlannedMission } from './missionPlan';
+import { designPoints, type PointJob, type PointOutput } from './analysisJobs';
+import { flySerially, missionResults, pointOutputs, type AnalysisSteps, type PlannedMission } from './missionPlan';
 import { subsetWeights } from './warmStart';
 
 export type InletFactor = 'recovery' | 'spillage' | 'externalDrag' | 'weight';
@@ -154,7 +154,7 @@ export function* compareInletsSteps(build: InletFactorBuilder, options: InletCom
       },
     });
   }
-  const flown = yield { missions, laneMemos: false, stopAtFailure: true };
+  const flown = missionResults(yield { missions, laneMemos: false, stopAtFailure: true });
   const results: MissionResult[] = [];
   for (let mask = 0; mask < total; mask++) {
     const r = flown.results[mask];
@@ -166,34 +166,47 @@ export function* compareInletsSteps(build: InletFactorBuilder, options: InletCom
     }
     results.push(r);
   }
-  return inletComparisonOf(build, options, results);
+  // The crossovers and ceilings of A and B, at design A's mid-cruise mass: one point task each.
+  const inputA = build(choiceOf(0));
+  const cruiseLeg = inputA.legs.find((l) => l.kind === 'cruise');
+  const altitude_m = options.crossoverAltitude_m ?? (cruiseLeg && cruiseLeg.kind === 'cruise' ? cruiseLeg.altitude_m : 10000);
+  const rating = options.crossoverRating ?? 'maxCruise';
+  const mass_kg = midCruiseMass(results[0]!);
+  const condition = { altitude_m, mass_kg, rating, isaDev_K: inputA.isaDev_K };
+  const tasks = [0, total - 1].map((mask) => {
+    const input = build(choiceOf(mask));
+    const job: PointJob = {
+      kind: 'designFigures',
+      mask,
+      crossover: condition,
+      ceilings: { mass_kg, rating: 'maxClimb', isaDev_K: input.isaDev_K, altitudeRange: options.ceilingAltitudeRange ?? [0, 15000], altitudeStep_m: options.ceilingAltitudeStep_m ?? 1000 },
+    };
+    return { job, run: () => designPoints({ aero: input.aero, propulsion: input.propulsion }, job) };
+  });
+  const points = pointOutputs(yield { tasks });
+  if (points.length !== 2) return err({ code: 'cancelled', message: `inlet comparison cancelled after ${total} of ${total} missions` });
+  return inletComparisonOf(build, options, results, condition, points);
 }
 
-/** The comparison from the 16 missions flown (by mask): crossovers, ceilings, differences and the Shapley breakdown. */
-function inletComparisonOf(build: InletFactorBuilder, options: InletComparisonOptions, results: readonly MissionResult[]): Result<InletComparisonResult, AnalysisError> {
+/** The comparison from the 16 missions flown (by mask) and the crossovers and ceilings of A and B: differences and the Shapley breakdown. */
+function inletComparisonOf(
+  build: InletFactorBuilder,
+  options: InletComparisonOptions,
+  results: readonly MissionResult[],
+  condition: InletComparisonResult['crossoverCondition'],
+  points: readonly PointOutput[],
+): Result<InletComparisonResult, AnalysisError> {
   const total = 1 << INLET_FACTORS.length;
   const attribution = shapleyValues(INLET_FACTORS.length, (mask) => results[mask]!.blockFuel_kg);
   const a = results[0]!;
   const b = results[total - 1]!;
   const inputA = build(choiceOf(0));
   const inputB = build(choiceOf(total - 1));
-  const cruiseLeg = inputA.legs.find((l) => l.kind === 'cruise');
-  const altitude_m = options.crossoverAltitude_m ?? (cruiseLeg && cruiseLeg.kind === 'cruise' ? cruiseLeg.altitude_m : 10000);
-  const rating = options.crossoverRating ?? 'maxCruise';
-  const mass_kg = midCruiseMass(a);
-  const condition = { altitude_m, mass_kg, rating, isaDev_K: inputA.isaDev_K };
 
-  const figures = (name: string, input: MissionInput, r: MissionResult): Result<DesignFigures, AnalysisError> => {
-    const models = { aero: input.aero, propulsion: input.propulsion };
-    const c = thrustDragCrossover(models, condition);
+  const figures = (name: string, input: MissionInput, r: MissionResult, p: PointOutput): Result<DesignFigures, AnalysisError> => {
+    const c = p.crossover;
     if (!c.ok) return err({ ...c.error, message: `inlet comparison, ${name}: ${c.error.message}` });
-    const ceilings = flightCeilings(models, {
-      mass_kg,
-      rating: 'maxClimb',
-      isaDev_K: input.isaDev_K,
-      altitudeRange: options.ceilingAltitudeRange ?? [0, 15000],
-      altitudeStep_m: options.ceilingAltitudeStep_m ?? 1000,
-    });
+    const ceilings = p.ceilings;
     if (!ceilings.ok) return err({ ...ceilings.error, message: `inlet comparison, ${name}: ${ceilings.error.message}` });
     return ok({
       name,
@@ -206,9 +219,9 @@ function inletComparisonOf(build: InletFactorBuilder, options: InletComparisonOp
       cautions: [...r.cautions, ...c.value.cautions],
     });
   };
-  const fa = figures(options.nameA, inputA, a);
+  const fa = figures(options.nameA, inputA, a, points[0]!);
   if (!fa.ok) return fa;
-  const fb = figures(options.nameB, inputB, b);
+  const fb = figures(options.nameB, inputB, b, points[1]!);
   if (!fb.ok) return fb;
   const diff = (x: number | null, y: number | null) => (x === null || y === null ? null : y - x);
   const parts = INLET_FACTORS.map((factor, i) => ({ factor, blockFuel_kg: attribution.shares[i]! }));

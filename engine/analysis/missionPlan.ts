@@ -19,7 +19,7 @@
 import { createPassMemo, type PassMemo } from '../mission/passMemo';
 import type { MissionInput, MissionResult } from '../mission/missionTypes';
 import type { MissionSolver } from './analysisTypes';
-import type { AnalysisJob } from './analysisJobs';
+import type { AnalysisJob, PointJob, PointOutput } from './analysisJobs';
 import { analysisSolver, type NeighbourStart } from './warmStart';
 
 export interface PlannedMission {
@@ -42,14 +42,41 @@ export interface MissionRound {
   readonly stopAtFailure: boolean;
 }
 
+/**
+ * Work of an analysis that is not a mission (the comparison's crossovers and
+ * ceilings): each task's output from its job alone, so a worker computes it
+ * as the calling thread would (analysisJobs.ts pointJobOutput); `run` is the
+ * calling thread's.
+ */
+export interface PointsRound {
+  readonly tasks: readonly { readonly job: PointJob; readonly run: () => PointOutput }[];
+}
+
+/** A points round's outputs, in task order. */
+export interface PointsResults {
+  readonly outputs: readonly PointOutput[];
+}
+
+export type AnalysisRound = MissionRound | PointsRound;
+
 /** What a round returns to its analysis: a result per mission; undefined for those not flown (cancelled, or after a failure that stops the round). */
 export interface RoundResults {
   readonly results: readonly (MissionResult | undefined)[];
   readonly cancelled: boolean;
 }
 
-/** An analysis as rounds of missions: yields each round, gets its results, returns the answer. */
-export type AnalysisSteps<R> = Generator<MissionRound, R, RoundResults>;
+/** An analysis as rounds of missions (and of point tasks): yields each round, gets its results, returns the answer. */
+export type AnalysisSteps<R> = Generator<AnalysisRound, R, RoundResults | PointsResults>;
+
+/** The results of a missions round (a points round's outputs when a runner mixed them up: none). */
+export function missionResults(got: RoundResults | PointsResults): RoundResults {
+  return 'results' in got ? got : { results: [], cancelled: true };
+}
+
+/** The outputs of a points round (none when a runner mixed them up). */
+export function pointOutputs(got: RoundResults | PointsResults): readonly PointOutput[] {
+  return 'outputs' in got ? got.outputs : [];
+}
 
 /** How flySerially flies each mission and reports. */
 export interface SerialHooks {
@@ -95,6 +122,10 @@ export function flySerially<R>(steps: AnalysisSteps<R>, hooks: SerialHooks = {})
   const solverFor = (round: MissionRound, lane: number): MissionSolver => hooks.solve ?? lanes.solverFor(round.laneMemos, lane);
   let next = steps.next();
   while (!next.done) {
+    if ('tasks' in next.value) {
+      next = steps.next({ outputs: next.value.tasks.map((t) => t.run()) });
+      continue;
+    }
     const round = next.value;
     const results: (MissionResult | undefined)[] = new Array<MissionResult | undefined>(round.missions.length).fill(undefined);
     let cancelled = false;

@@ -9,7 +9,7 @@ import type { PropulsionModel } from '../propulsion/propulsionModel';
 import { adjustPropulsion } from './adjustedPropulsion';
 import { describeInstallationMethod } from '../propulsion/installationMethod';
 import type { AnalysisError, MissionSolver } from './analysisTypes';
-import { flySerially, type AnalysisSteps, type PlannedMission } from './missionPlan';
+import { flySerially, missionResults, type AnalysisSteps, type PlannedMission } from './missionPlan';
 import { STEP_ORDER, stepStart, type StepMission } from './warmStart';
 
 export type TradeFactorName = 'recovery' | 'dragCount' | 'tsfc' | 'oew';
@@ -131,11 +131,11 @@ export function* tradeFactorsSteps(input: MissionInput, options: TradeFactorOpti
   const cancelled = (): Result<never, AnalysisError> => err({ code: 'cancelled', message: `trade factors cancelled after ${done} of ${total} missions` });
   let design = input;
   if (input.solve.kind !== 'payloadRange') {
-    const flown = yield {
+    const flown = missionResults(yield {
       missions: [{ job: { kind: 'trade', factor: null, u: 0, solve: input.solve }, input, after: [], lane: 0, start: () => undefined }],
       laneMemos: false,
       stopAtFailure: true,
-    };
+    });
     const first = flown.results[0];
     if (first === undefined) return cancelled();
     done++;
@@ -167,7 +167,7 @@ export function* tradeFactorsSteps(input: MissionInput, options: TradeFactorOpti
       });
     });
   });
-  const round = yield { missions, laneMemos: false, stopAtFailure: false };
+  const round = missionResults(yield { missions, laneMemos: false, stopAtFailure: false });
   const base = round.results[0];
   if (base === undefined) return cancelled();
   done++;

@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
-import { analysisJobInput } from '../../../engine/analysis/analysisJobs';
+import { analysisJobInput, pointJobOutput, type AnalysisJobBase, type PointOutput } from '../../../engine/analysis/analysisJobs';
 import { compareInlets, compareInletsSteps } from '../../../engine/analysis/inletComparison';
 import { inletFactorBuilder } from '../../../engine/analysis/inletFactorBuilder';
 import { flySerially, plannedStart, type AnalysisSteps, type MissionRound } from '../../../engine/analysis/missionPlan';
@@ -28,10 +28,18 @@ const build = inletFactorBuilder(expectOk(expectOk(prepareStudy(project, { name:
  * Flies each round as a pool might: always the ready mission of highest index first (a mission is ready when its
  * `after` and its lane's missions before it are flown), each input built again from its job, one memo per lane.
  */
-function flyOutOfOrder<R>(steps: AnalysisSteps<R>, rebuild: (m: MissionRound['missions'][number]) => MissionInput): R {
+function flyOutOfOrder<R>(steps: AnalysisSteps<R>, rebuild: (m: MissionRound['missions'][number]) => MissionInput, base: AnalysisJobBase): R {
   const memos = new Map<number, PassMemo>();
   let next = steps.next();
   while (!next.done) {
+    if ('tasks' in next.value) {
+      // Point tasks from their jobs alone, the last first.
+      const tasks = next.value.tasks;
+      const outputs = tasks.map(() => undefined as PointOutput | undefined);
+      for (let i = tasks.length - 1; i >= 0; i--) outputs[i] = pointJobOutput(base, tasks[i]!.job)!;
+      next = steps.next({ outputs: outputs as PointOutput[] });
+      continue;
+    }
     const round = next.value;
     const results: (MissionResult | undefined)[] = round.missions.map(() => undefined);
     const ready = (i: number) =>
@@ -54,12 +62,12 @@ describe('planned missions (missionPlan.ts)', () => {
     // The warm start of a mission reads only the results it names and the solver is deterministic: the property the
     // worker-thread pool relies on (its missions finish in any order, each input built again from its job).
     const compareBase = { kind: 'compare', build } as const;
-    expect(flyOutOfOrder(compareInletsSteps(build, { nameA, nameB }), (m) => analysisJobInput(compareBase, m.job)!)).toEqual(compareInlets(build, { nameA, nameB }));
+    expect(flyOutOfOrder(compareInletsSteps(build, { nameA, nameB }), (m) => analysisJobInput(compareBase, m.job)!, compareBase)).toEqual(compareInlets(build, { nameA, nameB }));
     const tradeBase = { kind: 'trade', input: demo, cRam: 1.35 } as const;
-    expect(flyOutOfOrder(tradeFactorsSteps(demo, {}), (m) => analysisJobInput(tradeBase, m.job)!)).toEqual(tradeFactors(demo, {}));
+    expect(flyOutOfOrder(tradeFactorsSteps(demo, {}), (m) => analysisJobInput(tradeBase, m.job)!, tradeBase)).toEqual(tradeFactors(demo, {}));
     const prBase = { kind: 'payloadRange', input: demo } as const;
     for (const pointsBetween of [3, 4]) {
-      expect(flyOutOfOrder(payloadRangeSteps(demo, { pointsBetween }), (m) => analysisJobInput(prBase, m.job)!)).toEqual(payloadRangeDiagram(demo, { pointsBetween }));
+      expect(flyOutOfOrder(payloadRangeSteps(demo, { pointsBetween }), (m) => analysisJobInput(prBase, m.job)!, prBase)).toEqual(payloadRangeDiagram(demo, { pointsBetween }));
     }
   }, 120_000);
 
