@@ -5,7 +5,7 @@
  * checks. Every problem names its JSON path, the value found and what was
  * expected; JSON syntax errors carry line and column.
  */
-import { z } from 'zod';
+import * as z from 'zod';
 import { err, ok, type Result } from '../core/result';
 import { parseJsonText } from '../project/jsonText';
 import { fromZodIssues, makeIssue, showValue, valueAtPath, type ProjectIssue } from '../project/projectIssue';

@@ -5,7 +5,7 @@
  * same field names (a field's unit is the SI unit of its dimension, see
  * docs/project-format.md). Cross-field rules live in projectChecks.ts.
  */
-import { z } from 'zod';
+import * as z from 'zod';
 import { quantity, ratio } from './quantityField';
 import { uncertaintySchema } from './uncertaintySchema';
 import { FOOT_M } from '../units/unitTable';

@@ -4,7 +4,7 @@
  * engine/units/quantity.ts. NaN and infinities are refused. A unit error
  * becomes a zod issue whose `params.expected` says what was wanted.
  */
-import { z } from 'zod';
+import * as z from 'zod';
 import { DIMENSION_EXAMPLES, DIMENSION_PHRASE, SI_UNIT } from '../units/dimension';
 import type { DisplayKind } from '../units/displayUnits';
 import { msg, q, type MessageKind, type MessageParts } from '../units/messageParts';

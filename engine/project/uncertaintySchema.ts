@@ -7,7 +7,7 @@
  * numbers. Cross-field rules (inlet names, bounds around the mean) are in
  * projectChecks.ts.
  */
-import { z } from 'zod';
+import * as z from 'zod';
 import { quantity } from './quantityField';
 import type { Dimension } from '../units/quantity';
 

@@ -2,7 +2,7 @@
  * The deck JSON form (docs/deck-format.md): SI column arrays with the same
  * metadata as the CSV form, validated with zod. Errors name the JSON path.
  */
-import { z } from 'zod';
+import * as z from 'zod';
 import { err, type Result } from '../core/result';
 import { assembleDeck, DECK_VALUE_LIMITS, sensitivityColumnIssues, type DeckColumn, type SensitivityColumn } from './deckAssembly';
 import { deckFileError, type DeckFileError } from './deckFileError';
