@@ -58,6 +58,13 @@ export function requiredMassFlowFunction(airflow_kg_s: number, area_m2: number, 
  * closed-form derivative d/dM = (1 - M^2)(1 + 0.2 M^2)^-4, falling back to
  * bisection; converges to 1e-13 in M. Returns NaN above the choked value
  * (the caller reports choking instead).
+ *
+ * Newton starts from a closed-form guess within 4.1e-5 of the root in M:
+ * 1 - M as a quintic in u = sqrt(1 - value / choked value), which is smooth
+ * in u at both ends (f = f* - k (1 - M)^2 + ... near Mach 1, so 1 - M is
+ * about u / sqrt(k)); coefficients a weighted least-squares fit to the
+ * exact inverse over Mach 0..1 (numpy, minimax by iterative reweighting).
+ * About 3 Newton evaluations instead of 8 to 10 from the low-Mach start.
  */
 export function subsonicMachFromMassFlowFunction(value: number): number {
   if (!(value >= 0)) return Number.NaN;
@@ -66,8 +73,8 @@ export function subsonicMachFromMassFlowFunction(value: number): number {
   if (value >= CHOKED_MASS_FLOW_FUNCTION) return 1;
   let lo = 0;
   let hi = 1;
-  // Low-Mach start: f ~ M (1 - 0.6 M^2).
-  let m = Math.min(0.9, value * (1 + 0.6 * value * value));
+  const u = Math.sqrt(1 - value / CHOKED_MASS_FLOW_FUNCTION);
+  let m = 1 - u * (1.09687 + u * (-0.349015 + u * (0.375937 + u * (-0.24638 + u * 0.12255))));
   for (let i = 0; i < 100; i++) {
     const t = 1 + 0.2 * m * m;
     const t3 = t * t * t;
@@ -75,8 +82,11 @@ export function subsonicMachFromMassFlowFunction(value: number): number {
     if (f > 0) hi = m;
     else lo = m;
     const df = (1 - m * m) / (t3 * t);
-    let next = df > 0 ? m - f / df : Number.NaN;
-    if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
+    let next = m - f / df;
+    // A converged Newton step is taken as it is: at the root it may round onto the bracket end it just set,
+    // which the bracket test below would send to a bisection step away from the root.
+    if (df > 0 && Math.abs(next - m) < 1e-13) return next;
+    if (!(df > 0 && next > lo && next < hi)) next = 0.5 * (lo + hi);
     if (Math.abs(next - m) < 1e-13) return next;
     m = next;
   }
