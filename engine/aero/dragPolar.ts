@@ -161,12 +161,32 @@ function outsideTablesAt(t: PolarTables, mach: number, cl: number): readonly Pol
 const NONE_OUTSIDE: readonly PolarTableName[] = Object.freeze([]);
 
 /**
+ * What a drag query reads from the Mach tables alone (CD0, K, buffet CL,
+ * CLmax, and the tables left when the wave drag is not a CL table): pure
+ * functions of the Mach, kept for the last Mach asked. A climb or descent
+ * step asks twice at each of its altitudes (two RK4 stages, or the last
+ * stage and the accepted point) and level flight at one Mach throughout.
+ */
+interface MachMemo {
+  mach: number;
+  cd0: number;
+  k: number;
+  buffetCl: number;
+  clMax: number;
+  outside: readonly PolarTableName[];
+}
+
+function newMachMemo(): MachMemo {
+  return { mach: Number.NaN, cd0: 0, k: 0, buffetCl: 0, clMax: 0, outside: NONE_OUTSIDE };
+}
+
+/**
  * One drag query: the same arithmetic as polarCoefficients plus the buffet
  * and CLmax lookups, without intermediate result objects (the mission asks
  * thousands per solve). Only the pressure of the standard atmosphere is
  * needed (dynamic pressure 0.5 gamma p M^2).
  */
-function dragAt(model: DragPolarModel, query: DragQuery): DragBreakdown {
+function dragAt(model: DragPolarModel, memo: MachMemo, query: DragQuery): DragBreakdown {
   requireFinite(query.altitude_m, 'altitude_m');
   requireFinite(query.mass_kg, 'mass_kg');
   requireFinite(query.loadFactor, 'loadFactor');
@@ -184,16 +204,23 @@ function dragAt(model: DragPolarModel, query: DragQuery): DragBreakdown {
   const weight_N = query.mass_kg * g0;
   const cl = (query.loadFactor * weight_N) / qS;
   const t = model.tables;
-  const cd0 = clampedValue(t.cd0, mach);
-  const k = typeof t.induced === 'number' ? t.induced : clampedValue(t.induced, mach);
+  if (mach !== memo.mach) {
+    memo.cd0 = clampedValue(t.cd0, mach);
+    memo.k = typeof t.induced === 'number' ? t.induced : clampedValue(t.induced, mach);
+    memo.buffetCl = clampedValue(t.buffetCl, mach);
+    memo.clMax = clampedValue(t.clMax, mach);
+    if (t.wave.kind !== 'table') memo.outside = outsideTablesAt(t, mach, cl);
+    memo.mach = mach;
+  }
+  const cd0 = memo.cd0;
   const dcl = cl - model.spec.clMinDrag;
-  const cdInduced = k * dcl * dcl;
+  const cdInduced = memo.k * dcl * dcl;
   let cdWave = 0;
   if (t.wave.kind === 'korn') cdWave = kornWaveDrag(t.wave.wing, mach, cl);
   else if (t.wave.kind === 'table') cdWave = expectOk(interp2d(t.wave.table, mach, cl, 'clamp'), 'polar table compressibility').value;
   const cdIncrement = model.spec.cdIncrement;
   const cd = cd0 + cdIncrement + cdInduced + cdWave;
-  const buffetCl = clampedValue(t.buffetCl, mach);
+  const buffetCl = memo.buffetCl;
   return {
     cl,
     cd,
@@ -207,8 +234,9 @@ function dragAt(model: DragPolarModel, query: DragQuery): DragBreakdown {
     buffetCl,
     // Load factor at which this mass reaches buffet onset here: CLbuffet / CL(1 g).
     buffetLoadFactor: (buffetCl * qS) / weight_N,
-    clMax: clampedValue(t.clMax, mach),
-    outsideTables: outsideTablesAt(t, mach, cl),
+    clMax: memo.clMax,
+    // With a CDwave(M, CL) table the tables left depend on CL too.
+    outsideTables: t.wave.kind === 'table' ? outsideTablesAt(t, mach, cl) : memo.outside,
   };
 }
 
@@ -221,12 +249,13 @@ function polarSlopeBreakMachs(tables: PolarTables): number[] {
 }
 
 function assemble(spec: PolarSpec, tables: PolarTables, wingArea_m2: number): DragPolarModel {
+  const memo = newMachMemo();
   const model: DragPolarModel = {
     spec,
     tables,
     wingArea_m2,
     slopeBreakMachs: polarSlopeBreakMachs(tables),
-    drag: (query) => dragAt(model, query),
+    drag: (query) => dragAt(model, memo, query),
     withIncrement: (deltaCd0) => {
       requireFinite(deltaCd0, 'deltaCd0');
       const cdIncrement = spec.cdIncrement + deltaCd0;

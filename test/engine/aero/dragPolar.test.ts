@@ -341,6 +341,20 @@ describe('drag query without intermediate objects', () => {
     });
   }
 
+  it('keeps the Mach tables of the last Mach only: a query at a Mach after another equals the query on a fresh model', () => {
+    // The drag keeps CD0, K, buffet CL, CLmax and the tables left for the last Mach asked (pure functions of it);
+    // the same queries in an order that changes the Mach at every call, and repeating it, must give the answers
+    // of a model that never saw another query (the general path's numbers, checked against polarCoefficients above).
+    for (const spec of [transonic, tabled]) {
+      const shared = model(spec);
+      const queries = [0.45, 0.45, 0.95, 0.1, 0.45, 0.8, 0.8, 0.3, 0.95].flatMap((mach, i) => [
+        { altitude_m: 11000, mach, mass_kg: 40000 + 1000 * i, loadFactor: 1 },
+        { altitude_m: 3048, mach, mass_kg: 90000, loadFactor: 1.2 },
+      ]);
+      for (const query of queries) expect(shared.drag(query)).toEqual(model(spec).drag(query));
+    }
+  });
+
   it('refuses an altitude outside the standard atmosphere with its message', () => {
     expect(() => model(transonic).drag({ altitude_m: 80000, mach: 0.5, mass_kg: 50000, loadFactor: 1 })).toThrow(/outside the standard atmosphere's range/);
   });
