@@ -72,14 +72,31 @@ export function toDisplay(value_si: number, kind: DisplayKind, system: UnitSyste
   return (value_si - offset) / def.scale;
 }
 
-/** Fixed-point text with comma thousands separators, independent of locale. */
+/** A run of decimal digits with a comma before each group of three from the right ("1234567" -> "1,234,567"). */
+function groupThousands(whole: string): string {
+  const n = whole.length;
+  if (n <= 3) return whole;
+  const head = n % 3 || 3;
+  let out = whole.slice(0, head);
+  for (let i = head; i < n; i += 3) out += `,${whole.slice(i, i + 3)}`;
+  return out;
+}
+
+/**
+ * Fixed-point text with comma thousands separators, independent of locale.
+ * The grouping is a loop over the whole part (a lookahead regular expression
+ * cost a few microseconds a call, and every pass of a mission writes the
+ * messages of its cautions); toFixed's exponent form above 1e21 keeps the
+ * expression's reading (no separators inside an exponent).
+ */
 export function groupDigits(value: number, digits: number): string {
   if (!Number.isFinite(value)) return String(value);
   const fixed = Math.abs(value).toFixed(digits);
-  const [whole, fraction] = fixed.split('.');
-  const grouped = whole!.replace(/\B(?=(\d{3})+(?!\d))/g, ',');
+  const dot = fixed.indexOf('.');
+  const whole = dot < 0 ? fixed : fixed.slice(0, dot);
+  const grouped = fixed.includes('e') ? whole.replace(/\B(?=(\d{3})+(?!\d))/g, ',') : groupThousands(whole);
   const negative = value < 0 && Number(fixed) !== 0;
-  return `${negative ? '-' : ''}${grouped}${fraction === undefined ? '' : `.${fraction}`}`;
+  return `${negative ? '-' : ''}${grouped}${dot < 0 ? '' : fixed.slice(dot)}`;
 }
 
 /**

@@ -77,4 +77,22 @@ describe('formatQuantity', () => {
     expect(formatQuantity(Number.NaN, 'speed', 'si')).toBe('—');
     expect(groupDigits(Infinity, 0)).toBe('Infinity');
   });
+  it('groups thousands as en-US number formatting does, for every digit count and sign', () => {
+    // Reference for the separators: ECMA-402 Intl.NumberFormat('en-US') on the whole part as a BigInt (exact, so
+    // only the grouping is compared; the rounding is toFixed's in both). Values from 0 to 1e20, negative ones,
+    // and ones that round to zero ("-0.00" must read "0.00").
+    const values = [0, 0.004, -0.004, 0.5, 999.5, 1000, 123456, -1234567.891, 9.99e5, 1e15 + 0.25, 123456789012345680000];
+    for (let k = 0; k < 400; k++) values.push((k % 2 === 0 ? 1 : -1) * Math.pow(10, (k * 0.05) % 20) * (1 + (k % 7) / 10));
+    const intl = new Intl.NumberFormat('en-US', { useGrouping: true });
+    for (const digits of [0, 1, 2, 3]) {
+      for (const v of values) {
+        const fixed = Math.abs(v).toFixed(digits);
+        const [whole, fraction] = fixed.split('.');
+        const zero = Number(fixed) === 0;
+        expect(groupDigits(v, digits)).toBe(`${v < 0 && !zero ? '-' : ''}${intl.format(BigInt(whole!))}${fraction === undefined ? '' : `.${fraction}`}`);
+      }
+    }
+    // Above 1e21 toFixed gives an exponent form, left without separators.
+    expect(groupDigits(1.5e22, 0)).toBe('1.5e+22');
+  });
 });
