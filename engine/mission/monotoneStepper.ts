@@ -47,15 +47,25 @@ export interface MonotonePlan {
   readonly jumps?: readonly number[];
 }
 
+const ascending = (a: number, b: number): number => a - b;
+const descending = (a: number, b: number): number => b - a;
+
 /** Step ends from `from` to `to`: every break between them, each interval cut evenly into steps of at most `maxStep`. */
 export function monotoneStepEnds(from: number, to: number, breaks: readonly number[], maxStep: number): number[] {
   const up = to > from;
-  const inside = breaks.filter((b) => (up ? b > from && b < to : b < from && b > to));
-  const points = [...new Set(inside)].sort((a, b) => (up ? a - b : b - a));
+  // The breaks strictly inside, in flight order, each once (equal values end up side by side); then the target.
+  const points: number[] = [];
+  for (let k = 0; k < breaks.length; k++) {
+    const b = breaks[k]!;
+    if (up ? b > from && b < to : b < from && b > to) points.push(b);
+  }
+  if (points.length > 1) points.sort(up ? ascending : descending);
   points.push(to);
   const ends: number[] = [];
   let a = from;
-  for (const b of points) {
+  for (let k = 0; k < points.length; k++) {
+    const b = points[k]!;
+    if (k > 0 && b === points[k - 1]) continue;
     const n = Math.max(1, Math.ceil(Math.abs(b - a) / maxStep - 1e-9));
     for (let i = 1; i < n; i++) ends.push(a + ((b - a) * i) / n);
     ends.push(b);
