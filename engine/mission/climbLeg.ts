@@ -44,8 +44,7 @@ export function makeClimbSegment(
   let mach = 0;
   let th: InstalledPoint | null = null;
   let f = 1;
-  const pointOf = (y: StateVector) => {
-    const h = y[S_ALT];
+  const prepare = (h: number): void => {
     if (!cached || !Object.is(h, cachedAltitude_m)) {
       air = missionAir(h, dev);
       mach = machOf(air.pressure_Pa);
@@ -54,17 +53,25 @@ export function makeClimbSegment(
       cachedAltitude_m = h;
       cached = true;
     }
+  };
+  const evaluate: Segment['evaluate'] = (y) => {
+    const h = y[S_ALT];
+    prepare(h);
     const at = airPointIn(input, air!, h, mach, y[S_MASS]);
     const rate = pressureAltitudeRate(th!.thrust_N, at.drag.drag_N, at.tas_m_s, y[S_MASS], f, air!.temperature_K, air!.isaTemperature_K);
     const d = pathDerivative(rate, at.tas_m_s, air!, target.env.wind_m_s, th!.fuelFlow_kg_s);
-    return { d, at, th: th!, rate };
+    return { derivative: d, sample: makeSample(at, th!.thrust_N, th!.thrust_N, th!.fuelFlow_kg_s, rate, th!) };
   };
-  const evaluate: Segment['evaluate'] = (y) => {
-    const { d, at, th, rate } = pointOf(y);
-    return { derivative: d, sample: makeSample(at, th.thrust_N, th.thrust_N, th.fuelFlow_kg_s, rate, th) };
+  // RK4 stages need no sample, so no air point object either: the same drag query and TAS (M a) as airPointIn.
+  const derivative = (y: StateVector): Evaluation['derivative'] => {
+    const h = y[S_ALT];
+    const m = y[S_MASS];
+    prepare(h);
+    const drag_N = input.aero.drag({ altitude_m: h, mach, mass_kg: m, loadFactor: 1 }).drag_N;
+    const tas_m_s = mach * air!.speedOfSound_m_s;
+    const rate = pressureAltitudeRate(th!.thrust_N, drag_N, tas_m_s, m, f, air!.temperature_K, air!.isaTemperature_K);
+    return pathDerivative(rate, tas_m_s, air!, target.env.wind_m_s, th!.fuelFlow_kg_s);
   };
-  // RK4 stages need no sample.
-  const derivative = (y: StateVector): Evaluation['derivative'] => pointOf(y).d;
   const events: SegmentEvent[] = [
     { stop: 'altitude_reached', stateOnly: true, g: (y) => y[S_ALT] - toAltitude_m },
     { stop: 'climb_stalled', g: (_y, s) => CLIMB_STALL_RATE_M_S - s.climbRate_m_s },

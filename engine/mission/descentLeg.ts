@@ -51,9 +51,7 @@ function makeDescentSegment(
   let cachedMach = 0;
   let cachedFactor = 1;
   let cachedIdle: InstalledPoint | null = null;
-  const pointOf = (y: StateVector, withSample: boolean) => {
-    const h = y[S_ALT];
-    const m = y[S_MASS];
+  const prepare = (h: number): void => {
     if (!cached || !Object.is(h, cachedAltitude_m)) {
       cachedAir = missionAir(h, dev);
       cachedMach = machOf(cachedAir.pressure_Pa);
@@ -62,6 +60,11 @@ function makeDescentSegment(
       cachedAltitude_m = h;
       cached = true;
     }
+  };
+  const pointOf = (y: StateVector, withSample: boolean) => {
+    const h = y[S_ALT];
+    const m = y[S_MASS];
+    prepare(h);
     const air = cachedAir!;
     const at = airPointIn(input, air, h, cachedMach, m);
     const f = cachedFactor;
@@ -92,8 +95,20 @@ function makeDescentSegment(
     const { derivative, sample } = pointOf(y, true);
     return { derivative, sample: sample! };
   };
+  // An idle RK4 stage (no sample): the same drag query, TAS (M a) and rate as pointOf, without its objects.
+  const idleStage = (y: StateVector): Evaluation['derivative'] => {
+    const h = y[S_ALT];
+    const m = y[S_MASS];
+    prepare(h);
+    const air = cachedAir!;
+    const drag_N = input.aero.drag({ altitude_m: h, mach: cachedMach, mass_kg: m, loadFactor: 1 }).drag_N;
+    const tas_m_s = cachedMach * air.speedOfSound_m_s;
+    const engine = cachedIdle!;
+    const rate = pressureAltitudeRate(engine.thrust_N, drag_N, tas_m_s, m, cachedFactor, air.temperature_K, air.isaTemperature_K);
+    return pathDerivative(rate, tas_m_s, air, target.env.wind_m_s, engine.fuelFlow_kg_s);
+  };
   // RK4 stages need no sample.
-  const derivative = (y: StateVector): Evaluation['derivative'] => pointOf(y, false).derivative;
+  const derivative = (y: StateVector): Evaluation['derivative'] => (mode.kind === 'idle' ? idleStage(y) : pointOf(y, false).derivative);
 
   const events: SegmentEvent[] = [
     { stop: 'altitude_reached', stateOnly: true, g: (y) => toAltitude_m - y[S_ALT] },
