@@ -37,6 +37,8 @@ export interface TripOutcome {
   readonly solvableEndMass_kg: number;
   /** Fuel per metre (kg/m, mission's basis) at the end of the solvable cruise leg (its last sample), 0 when unknown. */
   readonly solvableEndFuelPerMetre: number;
+  /** The state at the end of the solvable cruise leg (its top of descent), null when there is none or the trip failed before it. */
+  readonly solvableEnd: StateVector | null;
 }
 
 /** Index of the cruise leg whose distance is solved (distance_m null), or -1. */
@@ -169,6 +171,7 @@ export function flyTrip(ctx: MissionContext, rampMass_kg: number, solvedDistance
   let solvableEndMass_kg = 0;
   let solvableFuel_kg = 0;
   let solvableEndFuelPerMetre = 0;
+  let solvableEnd: StateVector | null = null;
   const rows: LegRow[] = [];
   for (let i = 0; i < ctx.input.legs.length; i++) {
     if (i === first) takeoff = Float64Array.from(state);
@@ -197,16 +200,48 @@ export function flyTrip(ctx: MissionContext, rampMass_kg: number, solvedDistance
       solvableEndMass_kg = state[S_MASS];
       solvableFuel_kg = start[S_MASS] - state[S_MASS];
       solvableEndFuelPerMetre = endFuelPerMetre(ctx, i, out);
+      solvableEnd = Float64Array.from(state);
     }
     if (i === last) landing = Float64Array.from(state);
     if (out.status !== 'ok') {
       // A failed mission always names the leg, the time and the cause.
       const where = msg` (leg ${i + 1} "${ctx.input.legs[i].name}", ${q(state[S_TIME], 'time')} after block-out)`;
       const told = withParts([...partsOf(out), ...where]);
-      return { status: out.status, ...told, rows, end: state, takeoff, landing: state, solvableDistance_m, afterSolvable_m: 0, solvableEndMass_kg, solvableFuel_kg, solvableEndFuelPerMetre };
+      return { status: out.status, ...told, rows, end: state, takeoff, landing: state, solvableDistance_m, afterSolvable_m: 0, solvableEndMass_kg, solvableFuel_kg, solvableEndFuelPerMetre, solvableEnd: null };
     }
   }
   if (last < first) landing = Float64Array.from(state);
   const afterSolvable_m = solvable >= 0 ? state[k] - solvableEnd_m : 0;
-  return { status: 'ok', message: '', rows, end: state, takeoff, landing, solvableDistance_m, afterSolvable_m, solvableEndMass_kg, solvableFuel_kg, solvableEndFuelPerMetre };
+  return { status: 'ok', message: '', rows, end: state, takeoff, landing, solvableDistance_m, afterSolvable_m, solvableEndMass_kg, solvableFuel_kg, solvableEndFuelPerMetre, solvableEnd };
+}
+
+/** What the legs after the solvable cruise leg take from one top of descent: distance (m, mission's basis) and fuel to landing (kg). */
+export interface AfterSolvableFlight {
+  readonly distance_m: number;
+  readonly fuelToLanding_kg: number;
+}
+
+/**
+ * Flies the legs after the solvable cruise leg (descent, approach, taxi in, and any other) from a top of descent:
+ * `top` with its mass replaced by `mass_kg`. A trial for the fuel iteration (its log records nothing the result
+ * shows); null when a leg fails or there is no solvable leg.
+ */
+export function flyAfterSolvable(ctx: MissionContext, top: StateVector, mass_kg: number): AfterSolvableFlight | null {
+  const solvable = solvableLegIndex(ctx.input);
+  if (solvable < 0) return null;
+  const { last } = tripBounds(ctx.input);
+  const k = distanceIndex(ctx.input);
+  let state = Float64Array.from(top);
+  state[S_MASS] = mass_kg;
+  let landing_kg = mass_kg;
+  for (let i = solvable + 1; i < ctx.input.legs.length; i++) {
+    const out = flyLegGuarded(ctx, i, state, 0, false);
+    if (out.status !== 'ok') return null;
+    state = out.state;
+    if (i === last) landing_kg = state[S_MASS];
+  }
+  if (last <= solvable) landing_kg = state[S_MASS];
+  const distance_m = state[k] - top[k];
+  const fuelToLanding_kg = mass_kg - landing_kg;
+  return Number.isFinite(distance_m) && Number.isFinite(fuelToLanding_kg) ? { distance_m, fuelToLanding_kg } : null;
 }

@@ -3,8 +3,10 @@
  * reserves (fuel may pass below zero-fuel mass while iterating) and returns
  * the residual = fuel on board at landing - reserve fuel required.
  *
- * - payloadRange: the ramp mass is found by the secant method so the residual
- *   is within FUEL_TOLERANCE_KG, while the solvable cruise leg's distance is
+ * - payloadRange: the ramp mass is found so the residual is within
+ *   FUEL_TOLERANCE_KG (a first pass from the closed forms of
+ *   rampMassGuess.ts, a second by Newton's method on its power-law slope,
+ *   the secant method after), while the solvable cruise leg's distance is
  *   reset each pass so the trip's total distance equals the range (within
  *   DISTANCE_TOLERANCE_M). Distances are in the mission's distance basis:
  *   over the ground (default) or in still air (missionContext.ts).
@@ -16,13 +18,13 @@
  */
 import { basisSpecificRange, specificRangeAt } from './bestSpeeds';
 import { cruiseMach } from './cruiseLeg';
+import { bestLevelSpecificRange, cruiseLevels } from './rampMassGuess';
 import { flyReserves, type ReserveFlight } from './reserves';
-import { flyTrip, solvableLegIndex, type SolvedDistance, type TripOutcome } from './flyTrip';
+import { flyAfterSolvable, flyTrip, solvableLegIndex, type SolvedDistance, type TripOutcome } from './flyTrip';
 import { distanceIndex, legEnvironment, type MissionContext } from './missionContext';
 import { S_AIR, S_MASS, S_TIME } from './missionState';
-import { freshFlightLog, type FlightLog } from './timeHistoryBuilder';
+import { createFlightLog, freshFlightLog, type FlightLog } from './timeHistoryBuilder';
 import type { Leg, MissionInput, MissionStart } from './missionTypes';
-import { FOOT_M } from '../units/unitTable';
 import { msg, q, type MessageParts } from '../units/messageParts';
 
 /**
@@ -125,41 +127,78 @@ function usable(v: number | undefined, positive = false): v is number {
   return v !== undefined && Number.isFinite(v) && (!positive || v > 0);
 }
 
+/** A top of descent the after-solvable model knows: its mass (kg), the distance after the leg (m), the fuel from there to landing (kg). */
+interface AfterPoint {
+  readonly mass_kg: number;
+  readonly distance_m: number;
+  readonly fuel_kg: number;
+}
+
 /**
- * The distance after the solvable cruise leg (m) as a linear function of the mass at its end (kg): the top of
- * descent the trip predicts. Each pass adds a point; the slope is the one through the last two points at least
- * 1 kg apart (a warm start's slope until then; none, a constant, on a cold start).
+ * The distance after the solvable cruise leg (m) and the fuel from its end to landing (kg) as functions of the
+ * mass at its end (kg): the top of descent the trip predicts. Each pass, and each trial of the legs after it
+ * (flyAfterSolvable), adds a point; a mass is read on the line through the two known points nearest to it at least
+ * 1 kg apart (a warm start's slope through the one point known until then, or the warm start's line before any;
+ * a constant on a cold start's first point).
  */
 class AfterSolvableModel {
-  private mass_kg = 0;
-  private distance_m = 0;
-  private perKg_m = 0;
-  private known = false;
+  private readonly points: AfterPoint[] = [];
+  private readonly prior: MissionStart['afterSolvable'];
 
   constructor(prior: MissionStart['afterSolvable']) {
-    if (prior && usable(prior.mass_kg, true) && usable(prior.distance_m) && usable(prior.perKg_m)) {
-      this.mass_kg = prior.mass_kg;
-      this.distance_m = prior.distance_m;
-      this.perKg_m = prior.perKg_m;
-      this.known = true;
-    }
+    this.prior = prior && usable(prior.mass_kg, true) && usable(prior.distance_m) && usable(prior.perKg_m) ? prior : undefined;
+  }
+
+  /** The two known points nearest to `mass_kg` at least 1 kg apart, the nearer first; null when there are none such. */
+  private pair(mass_kg: number): readonly [AfterPoint, AfterPoint] | null {
+    const byDistance = [...this.points].sort((a, b) => Math.abs(a.mass_kg - mass_kg) - Math.abs(b.mass_kg - mass_kg));
+    const first = byDistance[0];
+    const second = byDistance.find((p) => Math.abs(p.mass_kg - (first?.mass_kg ?? p.mass_kg)) >= 1);
+    return first !== undefined && second !== undefined ? [first, second] : null;
+  }
+
+  /** d(distance after the leg)/d(mass at its end) (m/kg) near `mass_kg`. */
+  perKg(mass_kg: number): number {
+    const pair = this.pair(mass_kg);
+    if (pair !== null) return (pair[1].distance_m - pair[0].distance_m) / (pair[1].mass_kg - pair[0].mass_kg);
+    return this.prior?.perKg_m ?? 0;
+  }
+
+  /** d(fuel from the leg's end to landing)/d(mass at its end) (-) near `mass_kg`; 0 until two points are known. */
+  fuelPerKg(mass_kg: number): number {
+    const pair = this.pair(mass_kg);
+    const slope = pair === null ? 0 : (pair[1].fuel_kg - pair[0].fuel_kg) / (pair[1].mass_kg - pair[0].mass_kg);
+    return Number.isFinite(slope) && Math.abs(slope) < 0.5 ? slope : 0;
   }
 
   at(mass_kg: number): number {
-    return this.known ? this.distance_m + this.perKg_m * (mass_kg - this.mass_kg) : 0;
+    const pair = this.pair(mass_kg);
+    const near = pair?.[0] ?? this.points[this.points.length - 1];
+    if (near !== undefined) return near.distance_m + this.perKg(mass_kg) * (mass_kg - near.mass_kg);
+    return this.prior ? this.prior.distance_m + this.prior.perKg_m * (mass_kg - this.prior.mass_kg) : 0;
   }
 
-  /** Adds a pass's end-of-leg mass (kg) and distance after the leg (m). */
-  add(mass_kg: number, distance_m: number): void {
+  /** Kilograms from `mass_kg` to the nearest known point (Infinity when none is known). */
+  gap(mass_kg: number): number {
+    let gap = Number.POSITIVE_INFINITY;
+    for (const p of this.points) gap = Math.min(gap, Math.abs(p.mass_kg - mass_kg));
+    return gap;
+  }
+
+  /** Adds a top of descent's mass (kg), distance after the leg (m) and fuel to landing (kg). */
+  add(mass_kg: number, distance_m: number, fuel_kg: number): void {
     if (!usable(mass_kg, true) || !usable(distance_m)) return;
-    if (this.known && Math.abs(mass_kg - this.mass_kg) >= 1) this.perKg_m = (distance_m - this.distance_m) / (mass_kg - this.mass_kg);
-    this.mass_kg = mass_kg;
-    this.distance_m = distance_m;
-    this.known = true;
+    const same = this.points.findIndex((p) => Math.abs(p.mass_kg - mass_kg) < 1e-9 * mass_kg);
+    const point = { mass_kg, distance_m, fuel_kg: Number.isFinite(fuel_kg) ? fuel_kg : Number.NaN };
+    if (same >= 0) this.points[same] = point;
+    else this.points.push(point);
   }
 
-  model(): MissionStart['afterSolvable'] {
-    return this.known ? { mass_kg: this.mass_kg, distance_m: this.distance_m, perKg_m: this.perKg_m } : undefined;
+  /** The model as a warm start carries it: the line at `mass_kg` (the converged top of descent). */
+  model(mass_kg: number): MissionStart['afterSolvable'] {
+    if (this.points.length === 0) return this.prior;
+    const distance_m = this.at(mass_kg);
+    return usable(distance_m) ? { mass_kg, distance_m, perKg_m: this.perKg(mass_kg) } : this.prior;
   }
 }
 
@@ -168,62 +207,197 @@ function plausibleRampSlope(slope: number | undefined): slope is number {
   return usable(slope) && slope > 0.05 && slope <= 2;
 }
 
-/** The cold second-pass slope d(residual)/d(ramp mass) (-): the landing/ramp mass ratio of a pass (Breguet-like flight), 0.85 when implausible. */
+/** A slope factor worth using: a measured slope within a quarter of the power-law slope. */
+function plausibleSlopeFactor(factor: number | undefined): factor is number {
+  return usable(factor) && factor > 0.75 && factor < 1.25;
+}
+
+/** The landing/ramp mass ratio of a pass (Breguet-like flight), 0.85 when implausible. */
 function ratioSlope(e: MissionEvaluation, rampMass_kg: number): number {
   const ratio = e.trip.landing[S_MASS] / rampMass_kg;
   return Number.isFinite(ratio) && ratio > 0.2 && ratio <= 1 ? ratio : 0.85;
 }
 
+/** A kilogram more at the ramp: the residual's change (-) and the landing mass's (-). */
+interface RampSensitivity {
+  readonly slope: number;
+  readonly landingPerKg: number;
+}
+
+/**
+ * The cold second pass's d(residual)/d(ramp mass) (-) from the first pass's own flight. With the specific range a
+ * power of the mass, SR ~ m^-alpha, a flight of fixed distance lands heavier by dm_L/dm_TO = (m_L/m_TO)^alpha (the
+ * integral of SR over the mass equals the distance either way: integral_mL^mTO SR dm = const gives
+ * SR(m_TO) dm_TO = SR(m_L) dm_L; alpha = 1 is the Breguet range equation, where the slope is the landing/take-off
+ * mass ratio). alpha is read off the solvable leg's best-level specific range 2 % either side of the pass's mean
+ * mass on it (the models' own figures); the residual's slope is dm_L/dm_TO less the contingency share of the trip
+ * fuel that follows (1 - dm_L/dm_TO of it). With `shift_kg`, the same for the pass's masses moved by that much at
+ * the ramp. The landing/ramp mass ratio when alpha is not usable.
+ */
+function powerLawSensitivity(ctx: MissionContext, e: MissionEvaluation, rampMass_kg: number, shift_kg = 0): RampSensitivity {
+  const input = ctx.input;
+  const index = solvableLegIndex(input);
+  const leg = input.legs[index];
+  const row = e.trip.rows.find((r) => r.index === index);
+  const ratio = ratioSlope(e, rampMass_kg);
+  const fallback = { slope: ratio, landingPerKg: ratio };
+  if (!leg || leg.kind !== 'cruise' || row === undefined) return fallback;
+  const env = legEnvironment(input, leg);
+  // The pass's masses moved by `shift_kg` at the ramp: the cruise's by about as much (alpha is flat in the mass),
+  // the landing mass by the sensitivity times it.
+  const m = 0.5 * (row.startMass_kg + row.endMass_kg) + shift_kg;
+  const levels = cruiseLevels(leg);
+  const up = bestLevelSpecificRange(input, leg.speed, levels, env, m * 1.02);
+  const down = bestLevelSpecificRange(input, leg.speed, levels, env, m / 1.02);
+  const alpha = -Math.log(up / down) / Math.log(1.02 * 1.02);
+  const massRatio = (e.trip.landing[S_MASS] + Math.pow(e.trip.landing[S_MASS] / e.trip.takeoff[S_MASS], alpha) * shift_kg) / (e.trip.takeoff[S_MASS] + shift_kg);
+  if (!(alpha >= 0 && alpha <= 2) || !(massRatio > 0.2 && massRatio <= 1)) return fallback;
+  const landingPerKg = Math.pow(massRatio, alpha);
+  const slope = landingPerKg - boundContingencyShare(input, e) * (1 - landingPerKg);
+  return plausibleRampSlope(slope) ? { slope, landingPerKg } : fallback;
+}
+
+/** Trials of the legs after the solvable leg are flown when the next top of descent lies this far (kg) from every one known. */
+const AFTER_TRIAL_GAP_KG = 10;
+
 /**
  * payloadRange: ramp mass (kg) so the residual lies in the fuel band while the trip's distance (mission's basis)
  * is `range_m`. The solvable leg ends at its top of descent: where the distance flown plus the distance the legs
- * after it will take equals the range, the latter predicted as a linear function of the mass there
- * (AfterSolvableModel; within DISTANCE_TOLERANCE_M at convergence). The first pass flies from the warm start's ramp
- * mass, else `firstGuess_kg`; the second steps with the warm start's slope, else the landing/ramp mass ratio; then
- * the secant method, all on each pass's residual corrected to exactly the range.
+ * after it will take equals the range, the latter predicted from the mass there (AfterSolvableModel; within
+ * DISTANCE_TOLERANCE_M at convergence). The first pass flies from the warm start's ramp mass, else
+ * `firstGuess_kg`; the second steps with the warm start's slope, else the first pass's power-law sensitivity
+ * (powerLawSensitivity); then the secant method, all on each pass's residual corrected to exactly the range
+ * (rangeCorrection). Before the next pass, when its predicted top of descent is more than AFTER_TRIAL_GAP_KG from
+ * every one known, the legs after the solvable leg are flown on trial from the last top of descent at that mass
+ * (flyAfterSolvable), so the next pass meets the range closely and the correction knows how the descent moves.
  */
 export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess_kg: number, start: MissionStart = {}, band: FuelBand = fuelBand(undefined)): IterationOutcome {
+  const input = ctx.input;
   const after = new AfterSolvableModel(start.afterSolvable);
   const distance = { endDistanceOf: (mass_kg: number) => range_m - after.at(mass_kg) };
-  const basis = distanceIndex(ctx.input);
+  const basis = distanceIndex(input);
   const remember = (e: MissionEvaluation) => {
-    if (e.trip.solvableDistance_m > 0) after.add(e.trip.solvableEndMass_kg, e.trip.afterSolvable_m);
+    if (e.trip.solvableDistance_m > 0) after.add(e.trip.solvableEndMass_kg, e.trip.afterSolvable_m, e.trip.solvableEndMass_kg - e.trip.landing[S_MASS]);
+  };
+  const trialCtx: MissionContext = { ...scratch(ctx), log: createFlightLog(input.airframe, input.cautionSettings, true, false) };
+  // How the reserve's flown items (all but a contingency share of the trip fuel) move with the landing mass (-),
+  // between the last two passes; 0 until two passes are known.
+  let itemsPerKg = 0;
+  const learnItems = (a: MissionEvaluation, b: MissionEvaluation) => {
+    const dLanding = b.trip.landing[S_MASS] - a.trip.landing[S_MASS];
+    const items = (e: MissionEvaluation) => e.reserves.breakdown.total_kg - boundContingencyShare(input, e) * (e.trip.takeoff[S_MASS] - e.trip.landing[S_MASS]);
+    const slope = (items(b) - items(a)) / dLanding;
+    if (Math.abs(dLanding) >= 1 && Number.isFinite(slope) && Math.abs(slope) < 0.5) itemsPerKg = slope;
+  };
+  const atRange = (e: MissionEvaluation) => e.residual_kg - band.aim_kg + rangeCorrection(e, e.trip.end[basis] - range_m);
+  // The residual's change (kg) were a pass `over` metres past the range to end exactly at it: its solvable leg
+  // ends earlier by delta = over / (1 - after' f) (f its fuel per metre there, after' how the distance after it grows
+  // with the mass), so its top of descent is heavier by delta f, its landing by (1 - the fuel to landing's growth)
+  // times that, and the residual by the landing's change times 1 + the contingency share - the items' growth.
+  const topShift = (e: MissionEvaluation, over: number) => {
+    const f = solvableFuelPerMetre(e);
+    const denominator = 1 - after.perKg(e.trip.solvableEndMass_kg) * f;
+    return (over * f) / (denominator > 0.5 ? denominator : 1);
+  };
+  const rangeCorrection = (e: MissionEvaluation, over: number) =>
+    topShift(e, over) * (1 - after.fuelPerKg(e.trip.solvableEndMass_kg)) * (1 + boundContingencyShare(input, e) - itemsPerKg);
+  // A trial of the legs after the solvable one at the top of descent predicted for a pass from `next_kg`, when it
+  // lies far from every one known; true when one was flown.
+  let landingPerKg = 0.85;
+  const trialFor = (e: MissionEvaluation, x: number, next_kg: number): boolean => {
+    const top = e.trip.solvableEnd;
+    if (top === null || !(e.trip.solvableDistance_m > 0) || !Number.isFinite(next_kg)) return false;
+    const predicted = e.trip.solvableEndMass_kg + topShift(e, e.trip.end[basis] - range_m) + landingPerKg * (next_kg - x);
+    if (!(predicted > 0) || after.gap(predicted) <= AFTER_TRIAL_GAP_KG) return false;
+    const trial = flyAfterSolvable(trialCtx, top, predicted);
+    if (trial === null) return false;
+    after.add(predicted, trial.distance_m, trial.fuelToLanding_kg);
+    return true;
   };
   let x0 = usable(start.rampMass_kg, true) && start.rampMass_kg > ctx.zeroFuelMass_kg ? start.rampMass_kg : firstGuess_kg;
   let e0 = evaluateMission(scratch(ctx), x0, distance);
   let d = e0.trip.solvableDistance_m;
   if (failedFlight(e0)) return { kind: 'flightFailed', rampMass_kg: x0, distance_m: d, iterations: 1, residual_kg: e0.residual_kg, failure: e0 };
-  const converged = (x: number, e: MissionEvaluation, k: number, slope: number): IterationOutcome => ({
-    kind: 'converged',
-    rampMass_kg: x,
-    distance_m: e.trip.solvableDistance_m,
-    iterations: k,
-    residual_kg: e.residual_kg,
-    pass: e,
-    warmStart: { rampMass_kg: x, slope, afterSolvable: after.model() },
-  });
+  // The passes flown (ramp mass, kg, and the pass) and how the residual bends: the warm start's, then the second
+  // divided difference of the last three passes' residuals at the range (Burden & Faires, 3.3) when they are spread.
+  const flown: { readonly x: number; readonly e: MissionEvaluation }[] = [];
+  const priorBend = usable(start.curvature_per_kg) && Math.abs(start.curvature_per_kg) < 1e-3 ? start.curvature_per_kg : undefined;
+  const bendOfPasses = (): number | undefined => {
+    const n = flown.length;
+    if (n < 3) return priorBend;
+    const [a, b, c] = [flown[n - 3], flown[n - 2], flown[n - 1]];
+    if (Math.min(Math.abs(b.x - a.x), Math.abs(c.x - b.x), Math.abs(c.x - a.x)) < 0.2) return priorBend;
+    const ab = (atRange(b.e) - atRange(a.e)) / (b.x - a.x);
+    const bc = (atRange(c.e) - atRange(b.e)) / (c.x - b.x);
+    const bend = (2 * (bc - ab)) / (c.x - a.x);
+    return Number.isFinite(bend) && Math.abs(bend) < 1e-3 ? bend : priorBend;
+  };
+  const bend = priorBend ?? 0;
+  const converged = (x: number, e: MissionEvaluation, k: number, slope: number): IterationOutcome => {
+    const curvature_per_kg = bendOfPasses();
+    const model = powerLawSensitivity(ctx, e, x).slope;
+    const slopeFactor = slope / model;
+    return {
+      kind: 'converged',
+      rampMass_kg: x,
+      distance_m: e.trip.solvableDistance_m,
+      iterations: k,
+      residual_kg: e.residual_kg,
+      pass: e,
+      warmStart: { rampMass_kg: x, slope, afterSolvable: after.model(e.trip.solvableEndMass_kg),
+        ...(curvature_per_kg === undefined ? {} : { curvature_per_kg }),
+        ...(plausibleSlopeFactor(slopeFactor) ? { slopeFactor } : {}),
+      },
+    };
+  };
+  const warmSlope = plausibleRampSlope(start.slope);
+  const cold = warmSlope ? null : powerLawSensitivity(ctx, e0, x0);
+  let slope = warmSlope ? (start.slope as number) : (cold as RampSensitivity).slope;
+  if (cold !== null) landingPerKg = cold.landingPerKg;
+  else if (warmSlope) landingPerKg = Math.min(Math.max(slope, 0.2), 1);
+  flown.push({ x: x0, e: e0 });
   // A warm start may land in the band at once.
   if (fuelConverged(e0.residual_kg, band) && Math.abs(e0.trip.end[basis] - range_m) <= DISTANCE_TOLERANCE_M) {
     remember(e0);
-    return converged(x0, e0, 1, plausibleRampSlope(start.slope) ? start.slope : ratioSlope(e0, x0));
+    return converged(x0, e0, 1, slope);
   }
   remember(e0);
-  // The residual each pass would have had at exactly the range: the distance error costs the solvable leg's fuel per metre at its end.
-  const atRange = (e: MissionEvaluation) => e.residual_kg - band.aim_kg + (e.trip.end[basis] - range_m) * solvableFuelPerMetre(e);
-  let slope = plausibleRampSlope(start.slope) ? start.slope : ratioSlope(e0, x0);
-  let f0 = atRange(e0);
-  let x1 = x0 - f0 / slope;
-  const guard = RAMP_MASS_GUARD * Math.max(ctx.input.airframe.mtow_kg, ctx.zeroFuelMass_kg + ctx.input.airframe.maxFuel_kg);
+  // Newton's method on the parabola the bend gives (the tangent without one): the step solves
+  // f + (slope + bend step / 2) step = 0, by fixed-point iteration from the tangent's step.
+  const parabolaStep = (f: number, s: number): number => {
+    let dx = -f / s;
+    for (let i = 0; i < 3 && bend !== 0; i++) dx = -f / (s + 0.5 * bend * dx);
+    return dx;
+  };
+  // A warm start's slope was the neighbour's at its root: carried here as its ratio to the power-law slope there,
+  // times the power-law slope of this pass midway to the step (how the mission and the mass moved it).
+  const factor = warmSlope && plausibleSlopeFactor(start.slopeFactor) ? start.slopeFactor : undefined;
+  const firstStep = (): number => {
+    const f = atRange(e0);
+    if (factor === undefined) return parabolaStep(f, slope);
+    let dx = -f / slope;
+    for (let i = 0; i < 2; i++) {
+      const s = factor * powerLawSensitivity(ctx, e0, x0, dx / 2).slope;
+      if (plausibleRampSlope(s)) dx = -f / s;
+    }
+    return dx;
+  };
+  let x1 = x0 + firstStep();
+  // The trial moves the correction (the descent's growth with the mass): step again with it.
+  if (trialFor(e0, x0, x1)) x1 = x0 + firstStep();
+  const guard = RAMP_MASS_GUARD * Math.max(input.airframe.mtow_kg, ctx.zeroFuelMass_kg + input.airframe.maxFuel_kg);
   for (let k = 2; k <= MAX_ITERATIONS; k++) {
     if (!Number.isFinite(x1) || x1 <= ctx.zeroFuelMass_kg * 0.5 || x1 > guard) {
       return notConverged('Fuel', { rampMass_kg: x0, distance_m: d, iterations: k - 1, residual_kg: e0.residual_kg });
     }
     const e1 = evaluateMission(scratch(ctx), x1, distance);
+    flown.push({ x: x1, e: e1 });
     d = e1.trip.solvableDistance_m;
     if (failedFlight(e1)) return { kind: 'flightFailed', rampMass_kg: x1, distance_m: d, iterations: k, residual_kg: e1.residual_kg, failure: e1 };
     const distanceError = e1.trip.end[basis] - range_m;
-    const f1 = atRange(e1);
-    const secant = (f1 - f0) / (x1 - x0);
+    learnItems(e0, e1);
+    const secantOf = () => (atRange(e1) - atRange(e0)) / (x1 - x0);
+    let secant = secantOf();
     if (Number.isFinite(secant) && Math.abs(secant) > 0.05) slope = secant;
     if (fuelConverged(e1.residual_kg, band) && Math.abs(distanceError) <= DISTANCE_TOLERANCE_M) {
       remember(e1);
@@ -240,11 +414,18 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
       };
     }
     remember(e1);
-    // Secant method on the residual at exactly the range (the last usable slope when the secant is degenerate).
-    const next = Number.isFinite(secant) && Math.abs(secant) > 0.05 ? x1 - f1 / secant : x1 - f1 / ratioSlope(e1, x1);
+    // Secant method on the residual at exactly the range (the last usable slope when the secant is degenerate),
+    // stepped again when a trial moved the correction.
+    // The secant is the slope midway between its passes: at the later one it is bend (x1 - x0) / 2 more.
+    const step = () => {
+      secant = secantOf();
+      const tangent = secant + 0.5 * bend * (x1 - x0);
+      return Number.isFinite(tangent) && Math.abs(tangent) > 0.05 ? x1 - atRange(e1) / tangent : x1 - atRange(e1) / slope;
+    };
+    let next = step();
+    if (trialFor(e1, x1, next)) next = step();
     x0 = x1;
     e0 = e1;
-    f0 = f1;
     x1 = next;
   }
   return notConverged('Fuel', { rampMass_kg: x1, distance_m: d, iterations: MAX_ITERATIONS, residual_kg: e0.residual_kg });
@@ -263,6 +444,14 @@ function contingencyShare(input: MissionInput): number {
   return (p.preset === 'icaoAnnex6' || p.preset === 'custom') && p.contingencyFraction > 0 ? p.contingencyFraction : 0;
 }
 
+/** The contingency share of a pass's trip fuel when it is what sets the contingency (a custom policy, or ICAO Annex 6 with the fraction above its hold minimum), 0 otherwise. */
+function boundContingencyShare(input: MissionInput, e: MissionEvaluation): number {
+  const share = contingencyShare(input);
+  if (share === 0) return 0;
+  const tripFuel_kg = e.trip.takeoff[S_MASS] - e.trip.landing[S_MASS];
+  return Math.abs(e.reserves.breakdown.contingency_kg - share * tripFuel_kg) <= 1e-9 * Math.max(tripFuel_kg, 1) ? share : 0;
+}
+
 /**
  * Distance (m, mission's basis) a cruise leg flies on `fuel_kg` from `startMass_kg`: the integral of the specific
  * range over the mass, by Simpson's rule on four intervals (Burden & Faires, Numerical Analysis, 4.3), at each mass
@@ -271,18 +460,8 @@ function contingencyShare(input: MissionInput): number {
  */
 function spareFuelDistance(input: MissionInput, leg: Extract<Leg, { kind: 'cruise' }>, env: { readonly isaDev_K: number; readonly wind_m_s: number }, startMass_kg: number, fuel_kg: number): number {
   if (!(fuel_kg > 0) || !(startMass_kg - fuel_kg > 0)) return Number.NaN;
-  const levels = [leg.altitude_m];
-  const p = leg.profile;
-  const spacing = p.kind === 'stepClimb' ? p.step_m : p.kind === 'cruiseClimb' ? 1000 * FOOT_M : 0;
-  if (p.kind !== 'constantAltitude' && spacing > 0) for (let h = leg.altitude_m + spacing; h <= p.maxAltitude_m + 1e-6 && levels.length < 40; h += spacing) levels.push(h);
-  const srAt = (m: number) => {
-    let best = 0;
-    for (const h of levels) {
-      const mach = cruiseMach(input, leg.speed, h, m, env.isaDev_K);
-      best = Math.max(best, basisSpecificRange(input, specificRangeAt(input, h, mach, m, env.isaDev_K), h, mach, env));
-    }
-    return best;
-  };
+  const levels = cruiseLevels(leg);
+  const srAt = (m: number) => bestLevelSpecificRange(input, leg.speed, levels, env, m);
   const n = 4;
   const dm = fuel_kg / n;
   let sum = 0;

@@ -291,6 +291,13 @@ export interface MissionStart {
    */
   readonly slope?: number;
   /**
+   * payloadRange: how the residual bends with the ramp mass, d2(residual)/d(ramp mass)2 (1/kg), from the neighbour's
+   * last three passes; the second pass steps on the parabola it gives instead of the tangent.
+   */
+  readonly curvature_per_kg?: number;
+  /** payloadRange: the neighbour's last secant slope over the power-law slope of its converged pass (fuelIteration.ts powerLawSensitivity). */
+  readonly slopeFactor?: number;
+  /**
    * The distance after the solvable cruise leg (m, mission's basis: the descent and what follows) as a linear
    * function of the mass at the leg's end (the predicted top of descent): at `mass_kg` it is `distance_m`, and it
    * grows by `perKg_m` per kg.

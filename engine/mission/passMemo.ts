@@ -35,9 +35,10 @@ export class MassTable {
   }
 
   /**
-   * The value at `mass_kg` by the parabola through the three flown points nearest to it, when two of them bracket it
-   * no more than `maxSpan_kg` apart; or by the line through the two nearest points when it lies within
-   * `maxExtrapolation_kg` outside them. Null when neither holds: the flight is to be flown.
+   * The value at `mass_kg` by the parabola through the two flown points that bracket it (no more than `maxSpan_kg`
+   * apart) and the nearer neighbour outside them that lies at least a tenth of their spacing beyond (the line through
+   * the two when there is none); or, when it lies within `maxExtrapolation_kg` outside them, by the parabola through
+   * the three outermost points on its side (the line through the two outermost when the third is as close). Null when neither holds: the flight is to be flown.
    */
   at(mass_kg: number, maxSpan_kg: number, maxExtrapolation_kg: number): number | null {
     const m = this.masses;
@@ -48,14 +49,24 @@ export class MassTable {
     if (hi > 0 && hi < n) {
       const lo = hi - 1;
       if (m[hi] - m[lo] > maxSpan_kg) return null;
-      if (n === 2) return this.line(lo, hi, mass_kg);
-      // The third point: the nearer neighbour outside the bracket.
-      const third = lo === 0 ? hi + 1 : hi === n - 1 ? lo - 1 : mass_kg - m[lo - 1] < m[hi + 1] - mass_kg ? lo - 1 : hi + 1;
-      return this.parabola(lo, hi, third, mass_kg);
+      // The third point: the nearer neighbour outside the bracket that lies at least a tenth of the bracket's width
+      // beyond it (one closer would make the parabola's curvature the difference of two nearly equal slopes, the
+      // flights' own rounding magnified); the line when there is none.
+      const clear = (i: number) => i >= 0 && i < n && Math.min(Math.abs(m[i] - m[lo]), Math.abs(m[i] - m[hi])) >= 0.1 * (m[hi] - m[lo]);
+      const below = lo - 1;
+      const above = hi + 1;
+      const order = below >= 0 && above < n && m[above] - mass_kg < mass_kg - m[below] ? [above, below] : [below, above];
+      const third = order.find(clear);
+      return third === undefined ? this.line(lo, hi, mass_kg) : this.parabola(lo, hi, third, mass_kg);
     }
     const [a, b] = hi === 0 ? [0, 1] : [n - 2, n - 1];
     const outside = hi === 0 ? m[0] - mass_kg : mass_kg - m[n - 1];
-    return outside <= maxExtrapolation_kg && m[b] - m[a] > 0 ? this.line(a, b, mass_kg) : null;
+    if (!(outside <= maxExtrapolation_kg && m[b] - m[a] > 0)) return null;
+    // Outside: the parabola through the two nearest and the next point in that lies a tenth of their spacing beyond
+    // (the line through the two when there is none).
+    const next = hi === 0 ? 2 : n - 3;
+    const clear = next >= 0 && next < n && Math.min(Math.abs(m[next] - m[a]), Math.abs(m[next] - m[b])) >= 0.1 * (m[b] - m[a]);
+    return clear ? this.parabola(a, b, next, mass_kg) : this.line(a, b, mass_kg);
   }
 
   private line(a: number, b: number, x: number): number {

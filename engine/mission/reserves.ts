@@ -74,13 +74,15 @@ interface Flown {
   readonly fuel_kg: number;
 }
 
-function climbSettings(input: MissionInput, alternate: AlternateSpec): { schedule: SpeedSchedule; rating: RatingName } {
+/** The alternate's climb: the mission's first climb leg's schedule and rating, else the default schedule at the alternate's cruise Mach and maxClimb. */
+export function climbSettings(input: MissionInput, alternate: AlternateSpec): { schedule: SpeedSchedule; rating: RatingName } {
   const climb = input.legs.find((l) => l.kind === 'climb');
   if (climb && climb.kind === 'climb') return { schedule: climb.schedule, rating: climb.rating };
   return { schedule: { ...DEFAULT_CLIMB, mach: alternate.cruiseMach }, rating: 'maxClimb' };
 }
 
-function descentSettings(input: MissionInput, alternate: AlternateSpec): { schedule: SpeedSchedule; mode: DescentMode } {
+/** The alternate's descent: the mission's first descent leg's schedule and mode, else the climb's schedule at idle. */
+export function descentSettings(input: MissionInput, alternate: AlternateSpec): { schedule: SpeedSchedule; mode: DescentMode } {
   const descent = input.legs.find((l) => l.kind === 'descent');
   if (descent && descent.kind === 'descent') return { schedule: descent.schedule, mode: descent.mode };
   return { schedule: climbSettings(input, alternate).schedule, mode: { kind: 'idle' } };
@@ -107,7 +109,8 @@ function flyAlternate(ctx: MissionContext, target: LegTarget, start: StateVector
   // specific range at the top of climb), so the alternate's still-air distance is met closely. The descent
   // distance depends only on the mass at its top (same altitude, air and wind): the passes of one solve share the
   // ones flown (PassMemo.alternateDescent), read where the table brackets the mass (parabola through the three
-  // nearest) or, for the first estimate only, lies within 100 kg of it.
+  // nearest) or, for the first estimate only, lies within 10 kg of them (farther out a read misses by centimetres,
+  // which move the second trial's mass and the alternate's fuel by 1e-4 kg).
   const scratch: MissionContext = { ...ctx, log: createFlightLog(input.airframe, input.cautionSettings, true) };
   const table = ctx.options.allowNegativeFuel ? ctx.memo?.alternateDescent : undefined;
   const climbed = climb.state[k] - startAir;
@@ -122,7 +125,7 @@ function flyAlternate(ctx: MissionContext, target: LegTarget, start: StateVector
     table?.add(mass_kg, distance_m);
     return { failure: null, distance_m };
   };
-  const first = trialDescent(climb.state[S_MASS], 100);
+  const first = trialDescent(climb.state[S_MASS], 10);
   if (first.failure !== null) return first.failure;
   const sr = basisSpecificRange(input, specificRangeAt(input, top, alt.cruiseMach, climb.state[S_MASS], target.env.isaDev_K), top, alt.cruiseMach, target.env);
   const cruiseEstimate = Math.max(alt.distance_m - climbed - first.distance_m, 0);

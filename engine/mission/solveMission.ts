@@ -30,6 +30,7 @@ import { evaluateMission, FIXED_MASS_FUEL_TOLERANCE_KG, fuelBand, iterateDistanc
 import { solvableLegIndex, tripBounds } from './flyTrip';
 import { distanceBasis, legEnvironment, type FlightOptions, type LegTarget, type MissionContext } from './missionContext';
 import { missionInputProblem } from './missionInputCheck';
+import { rampMassGuess } from './rampMassGuess';
 import { createPassMemo, type PassMemo } from './passMemo';
 import { S_AIR, S_GROUND, S_MASS, S_TIME } from './missionState';
 import type { MissionInput, MissionResult, MissionStart, MissionStatus, ReserveBreakdown } from './missionTypes';
@@ -108,6 +109,18 @@ function breguetRampGuess(input: MissionInput, zfw_kg: number, taxi_kg: number, 
   if (!(sr > 0)) return fallback;
   const exponent = Math.min(range_m / (sr * m), 2);
   return 1.05 * zfw_kg * Math.exp(exponent) + taxi_kg;
+}
+
+/**
+ * Where a cold payloadRange iteration starts: the closed forms of rampMassGuess.ts (the ramp mass, and the distance
+ * after the solvable leg at the top of descent they fly, so the first pass ends close to the range), or the Breguet
+ * guess alone when they have no usable figure or land outside (zero-fuel mass, 3 x the Breguet guess).
+ */
+function coldStart(input: MissionInput, zfw_kg: number, taxi_kg: number, range_m: number): { readonly rampMass_kg: number; readonly start: MissionStart } {
+  const breguet = breguetRampGuess(input, zfw_kg, taxi_kg, range_m);
+  const closed = rampMassGuess(input, zfw_kg, range_m, breguet);
+  if (closed === null || !(closed.rampMass_kg > zfw_kg && closed.rampMass_kg < 3 * breguet)) return { rampMass_kg: breguet, start: {} };
+  return { rampMass_kg: closed.rampMass_kg, start: { afterSolvable: { mass_kg: closed.top_kg, distance_m: closed.after_m, perKg_m: 0 } } };
 }
 
 /**
@@ -250,8 +263,10 @@ function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult
     // A warm start's ramp mass is where the iteration starts (fuelIteration.ts takes one above zero-fuel mass):
     // the Breguet guess (a cruise point of the models) is only worked out when there is none.
     const warmRamp = options.warmStart?.rampMass_kg;
-    const guess = warmRamp !== undefined && Number.isFinite(warmRamp) && warmRamp > zfw ? warmRamp : breguetRampGuess(input, zfw, taxi, solve.range_m);
-    outcome = iterateRampMass(base, solve.range_m, guess, options.warmStart, fuelBand(options.fuelTolerance_kg));
+    const warm = warmRamp !== undefined && Number.isFinite(warmRamp) && warmRamp > zfw;
+    const cold = warm ? null : coldStart(input, zfw, taxi, solve.range_m);
+    const start = cold === null ? options.warmStart : { ...cold.start, ...options.warmStart };
+    outcome = iterateRampMass(base, solve.range_m, cold?.rampMass_kg ?? (warmRamp as number), start, fuelBand(options.fuelTolerance_kg));
     ({ rampMass_kg: rampMass, distance_m: distance, iterations, residual_kg: residual } = outcome);
     if (outcome.kind === 'infeasible') {
       return { ...emptyResult(input, 'infeasible', outcome.message), iterations, residual_kg: residual };

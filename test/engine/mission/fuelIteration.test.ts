@@ -35,11 +35,11 @@ describe('fuel iteration', () => {
       expect(ref.residual_kg).toBeLessThanOrEqual(0.001);
       expect(r.landingMass_kg - r.zeroFuelMass_kg).toBeGreaterThanOrEqual(r.reserveFuel_kg);
       expect(Math.abs(r.blockFuel_kg - ref.blockFuel_kg) / ref.blockFuel_kg, `${nm} NM`).toBeLessThan(1e-6);
-      expect(r.iterations, `${nm} NM`).toBeLessThanOrEqual(4);
+      expect(r.iterations, `${nm} NM`).toBeLessThanOrEqual(3);
     }
   });
 
-  it('a warm start from a neighbouring converged mission gives the same answer in fewer passes', () => {
+  it('a warm start from a neighbouring converged mission gives the same answer in no more passes, in 2 from a near one', () => {
     // The warm start only moves where the secant iteration (Burden & Faires, Numerical Analysis, 2.3) starts: the
     // converged flight is the same within the fuel band, so block fuel agrees with the cold solve to 1e-6.
     const demo = withRange(demoMissionInput(), 3000);
@@ -50,14 +50,16 @@ describe('fuel iteration', () => {
       const cold = solveMission(next);
       const warm = solveMission(next, { warmStart: neighbour.warmStart });
       expect(warm.status).toBe('ok');
-      expect(warm.iterations).toBeLessThan(cold.iterations);
+      expect(warm.iterations).toBeLessThanOrEqual(cold.iterations);
       expect(warm.iterations).toBeLessThanOrEqual(3);
       expect(warm.residual_kg).toBeGreaterThanOrEqual(0);
       expect(warm.residual_kg).toBeLessThanOrEqual(FUEL_TOLERANCE_KG);
       expect(Math.abs(warm.blockFuel_kg - cold.blockFuel_kg) / cold.blockFuel_kg).toBeLessThan(1e-6);
     }
-    // Close enough, the second pass lands in the band.
+    // Close enough, the second pass lands in the band: 20 kg of payload or 50 NM away (the neighbour's slope carried
+    // as its ratio to the power-law slope, fuelIteration.ts).
     expect(solveMission(withPayload(demo, 20), { warmStart: neighbour.warmStart }).iterations).toBe(2);
+    expect(solveMission(withRange(demo, 3050), { warmStart: neighbour.warmStart }).iterations).toBe(2);
   });
 
   it('a warm start that is no use is ignored: same status and answer as the cold start', () => {

