@@ -37,6 +37,8 @@ export interface TripOutcome {
   readonly solvableEndMass_kg: number;
   /** Fuel per metre (kg/m, mission's basis) at the end of the solvable cruise leg (its last sample), 0 when unknown. */
   readonly solvableEndFuelPerMetre: number;
+  /** Fuel flow (kg/s) at the end of the solvable cruise leg (its last sample), 0 when unknown. */
+  readonly solvableEndFuelFlow_kg_s: number;
   /** The state at the end of the solvable cruise leg (its top of descent), null when there is none or the trip failed before it. */
   readonly solvableEnd: StateVector | null;
 }
@@ -172,6 +174,7 @@ export function flyTrip(ctx: MissionContext, rampMass_kg: number, solvedDistance
   let solvableFuel_kg = 0;
   let solvableEndFuelPerMetre = 0;
   let solvableEnd: StateVector | null = null;
+  let solvableEndFuelFlow_kg_s = 0;
   const rows: LegRow[] = [];
   for (let i = 0; i < ctx.input.legs.length; i++) {
     if (i === first) takeoff = Float64Array.from(state);
@@ -201,18 +204,19 @@ export function flyTrip(ctx: MissionContext, rampMass_kg: number, solvedDistance
       solvableFuel_kg = start[S_MASS] - state[S_MASS];
       solvableEndFuelPerMetre = endFuelPerMetre(ctx, i, out);
       solvableEnd = Float64Array.from(state);
+      solvableEndFuelFlow_kg_s = out.lastSample !== null && out.lastSample.fuelFlow_kg_s > 0 ? out.lastSample.fuelFlow_kg_s : 0;
     }
     if (i === last) landing = Float64Array.from(state);
     if (out.status !== 'ok') {
       // A failed mission always names the leg, the time and the cause.
       const where = msg` (leg ${i + 1} "${ctx.input.legs[i].name}", ${q(state[S_TIME], 'time')} after block-out)`;
       const told = withParts([...partsOf(out), ...where]);
-      return { status: out.status, ...told, rows, end: state, takeoff, landing: state, solvableDistance_m, afterSolvable_m: 0, solvableEndMass_kg, solvableFuel_kg, solvableEndFuelPerMetre, solvableEnd: null };
+      return { status: out.status, ...told, rows, end: state, takeoff, landing: state, solvableDistance_m, afterSolvable_m: 0, solvableEndMass_kg, solvableFuel_kg, solvableEndFuelPerMetre, solvableEndFuelFlow_kg_s, solvableEnd: null };
     }
   }
   if (last < first) landing = Float64Array.from(state);
   const afterSolvable_m = solvable >= 0 ? state[k] - solvableEnd_m : 0;
-  return { status: 'ok', message: '', rows, end: state, takeoff, landing, solvableDistance_m, afterSolvable_m, solvableEndMass_kg, solvableFuel_kg, solvableEndFuelPerMetre, solvableEnd };
+  return { status: 'ok', message: '', rows, end: state, takeoff, landing, solvableDistance_m, afterSolvable_m, solvableEndMass_kg, solvableFuel_kg, solvableEndFuelPerMetre, solvableEndFuelFlow_kg_s, solvableEnd };
 }
 
 /** What the legs after the solvable cruise leg take from one top of descent: distance (m, mission's basis) and fuel to landing (kg). */

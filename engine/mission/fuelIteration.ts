@@ -300,7 +300,7 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
     return (over * f) / (denominator > 0.5 ? denominator : 1);
   };
   const rangeCorrection = (e: MissionEvaluation, over: number) =>
-    topShift(e, over) * (1 - after.fuelPerKg(e.trip.solvableEndMass_kg)) * (1 + boundContingencyShare(input, e) - itemsPerKg);
+    topShift(e, over) * (1 - after.fuelPerKg(e.trip.solvableEndMass_kg)) * (1 + boundContingencyShare(input, e) + enRouteShare(input, e) - itemsPerKg);
   // A trial of the legs after the solvable one at the top of descent predicted for a pass from `next_kg`, when it
   // lies far from every one known; true when one was flown.
   let landingPerKg = 0.85;
@@ -442,6 +442,19 @@ function solvableFuelPerMetre(e: MissionEvaluation): number {
 function contingencyShare(input: MissionInput): number {
   const p = input.reserves;
   return (p.preset === 'icaoAnnex6' || p.preset === 'custom') && p.contingencyFraction > 0 ? p.contingencyFraction : 0;
+}
+
+/**
+ * 14 CFR 121.645(b)'s en-route time reserve per kg of trip fuel flown at the end of a pass's cruise (-): its
+ * fraction of that time at its own mean fuel flow (its fuel over its time), over the cruise's fuel flow there; the
+ * fraction alone when the latter is unknown, 0 for other policies.
+ */
+function enRouteShare(input: MissionInput, e: MissionEvaluation): number {
+  const p = input.reserves;
+  if (p.preset !== 'cfr121_645' || !(p.enRouteFraction > 0)) return 0;
+  const tripTime_s = e.trip.landing[S_TIME] - e.trip.takeoff[S_TIME];
+  const share = e.reserves.breakdown.contingency_kg / (tripTime_s * e.trip.solvableEndFuelFlow_kg_s);
+  return Number.isFinite(share) && share > 0 && share < 1 ? share : p.enRouteFraction;
 }
 
 /** The contingency share of a pass's trip fuel when it is what sets the contingency (a custom policy, or ICAO Annex 6 with the fraction above its hold minimum), 0 otherwise. */

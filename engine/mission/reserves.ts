@@ -112,7 +112,8 @@ function flyAlternate(ctx: MissionContext, target: LegTarget, start: StateVector
   // nearest) or, for the first estimate only, lies within 10 kg of them (farther out a read misses by centimetres,
   // which move the second trial's mass and the alternate's fuel by 1e-4 kg).
   const scratch: MissionContext = { ...ctx, log: createFlightLog(input.airframe, input.cautionSettings, true) };
-  const table = ctx.options.allowNegativeFuel ? ctx.memo?.alternateDescent : undefined;
+  // Only from the alternate's cruise level: its descents from another level are another function of the mass.
+  const table = ctx.options.allowNegativeFuel && Math.abs(climb.state[S_ALT] - top) <= 1 ? ctx.memo?.alternateDescent : undefined;
   const climbed = climb.state[k] - startAir;
   const trialDescent = (mass_kg: number, maxExtrapolation_kg: number): { readonly failure: LegOutcome | null; readonly distance_m: number } => {
     const known = table?.at(mass_kg, ALTERNATE_TABLE_SPAN_KG, maxExtrapolation_kg) ?? null;
@@ -290,6 +291,9 @@ export function flyReserves(ctx: MissionContext, trip: TripSummary): ReserveFlig
     );
     if (flown === null) return finish();
     contingency = flown.fuel_kg;
+    // The en-route time is fuel flown at the cruise level; the items after it start at the destination again.
+    state = Float64Array.from(state);
+    state[S_ALT] = destination;
   }
 
   if (policy.alternate !== null) {

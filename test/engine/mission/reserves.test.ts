@@ -116,6 +116,26 @@ describe('reserves', () => {
     expectClose(r.reserves.finalReserve_kg, timeBurn(mLanding - enRoute - alt, 1800), { rel: 1e-6 }, '121.645(b)(4) 30 min hold');
   });
 
+  it('121.645(b) on the demo: the alternate starts at the destination after the en-route time, and the fuel iteration closes', () => {
+    // 121.645(b)(3): fuel "to fly to and land at the most distant alternate airport" from the destination: the missed
+    // approach and the climb to the alternate's level start on the ground there, not at the cruise level where the
+    // en-route time was flown (which made the alternate a function of two descents and the iteration stall).
+    const demo = demoMissionInput();
+    const input = { ...demo, reserves: { preset: 'cfr121_645' as const, enRouteFraction: 0.1, alternate: demo.reserves.alternate, finalReserve_s: 1800 } };
+    const r = solveMission(input);
+    expect(r.status).toBe('ok');
+    const rows = r.legs.filter((l) => l.kind === 'reserve');
+    expectClose(rows[1]!.startAltitude_m, demo.destinationElevation_m ?? 0, { abs: 1e-9 }, 'missed approach at the destination');
+    expectClose(rows[2]!.startAltitude_m, demo.destinationElevation_m ?? 0, { abs: 1e-9 }, 'alternate from the destination');
+    expect(r.residual_kg).toBeGreaterThanOrEqual(0);
+    expect(r.residual_kg).toBeLessThanOrEqual(0.02);
+    // The same mission converged into a 1 g band lands on the same block fuel to 1e-6: the residual is a smooth
+    // function of the ramp mass (the two stopped 40 passes apart, 2 kg or more apart, before).
+    const ref = solveMission(input, { fuelTolerance_kg: 0.001 });
+    expect(Math.abs(r.blockFuel_kg - ref.blockFuel_kg) / ref.blockFuel_kg).toBeLessThan(1e-6);
+    expect(r.iterations).toBeLessThanOrEqual(5);
+  });
+
   it('reserves custom: contingency fraction, final hold and a fixed extra fuel', () => {
     const r = fly({ preset: 'custom', contingencyFraction: 0.03, alternate: null, finalReserve_s: 1200, extraFuel_kg: 500 });
     expectClose(r.reserves.contingency_kg, 0.03 * tripFuel, { rel: 1e-6 }, 'custom fraction');
