@@ -22,7 +22,7 @@ import { bestLevelSpecificRange, cruiseLevels } from './rampMassGuess';
 import { flyReserves, type ReserveFlight } from './reserves';
 import { flyAfterSolvable, flyTrip, solvableLegIndex, type SolvedDistance, type TripOutcome } from './flyTrip';
 import { distanceIndex, legEnvironment, type MissionContext } from './missionContext';
-import { S_AIR, S_MASS, S_TIME } from './missionState';
+import { S_AIR, S_ALT, S_MASS, S_TIME } from './missionState';
 import { createFlightLog, freshFlightLog, type FlightLog } from './timeHistoryBuilder';
 import type { Leg, MissionInput, MissionStart } from './missionTypes';
 import { msg, q, type MessageParts } from '../units/messageParts';
@@ -132,6 +132,8 @@ interface AfterPoint {
   readonly mass_kg: number;
   readonly distance_m: number;
   readonly fuel_kg: number;
+  /** The top of descent's pressure altitude (m). */
+  readonly altitude_m: number;
 }
 
 /**
@@ -149,12 +151,24 @@ class AfterSolvableModel {
     this.prior = prior && usable(prior.mass_kg, true) && usable(prior.distance_m) && usable(prior.perKg_m) ? prior : undefined;
   }
 
-  /** The two known points nearest to `mass_kg` at least 1 kg apart, the nearer first; null when there are none such. */
+  /**
+   * The two known points nearest to `mass_kg` at least 1 kg apart, the nearer first, the second at the first's
+   * altitude when one is (descents from two levels are two functions of the mass); null when there are none such.
+   */
   private pair(mass_kg: number): readonly [AfterPoint, AfterPoint] | null {
     const byDistance = [...this.points].sort((a, b) => Math.abs(a.mass_kg - mass_kg) - Math.abs(b.mass_kg - mass_kg));
     const first = byDistance[0];
-    const second = byDistance.find((p) => Math.abs(p.mass_kg - (first?.mass_kg ?? p.mass_kg)) >= 1);
-    return first !== undefined && second !== undefined ? [first, second] : null;
+    if (first === undefined) return null;
+    const apart = byDistance.filter((p) => Math.abs(p.mass_kg - first.mass_kg) >= 1);
+    const second = apart.find((p) => Math.abs(p.altitude_m - first.altitude_m) <= 1) ?? apart[0];
+    return second !== undefined ? [first, second] : null;
+  }
+
+  /** Forgets every point but the last pass's (a pass whose prediction left the solvable leg no length short of the range). */
+  keepOnly(mass_kg: number): void {
+    const kept = this.points.filter((p) => Math.abs(p.mass_kg - mass_kg) < 1e-9 * mass_kg);
+    this.points.length = 0;
+    this.points.push(...kept);
   }
 
   /** d(distance after the leg)/d(mass at its end) (m/kg) near `mass_kg`. */
@@ -185,11 +199,11 @@ class AfterSolvableModel {
     return gap;
   }
 
-  /** Adds a top of descent's mass (kg), distance after the leg (m) and fuel to landing (kg). */
-  add(mass_kg: number, distance_m: number, fuel_kg: number): void {
+  /** Adds a top of descent's mass (kg), distance after the leg (m), fuel to landing (kg) and altitude (m). */
+  add(mass_kg: number, distance_m: number, fuel_kg: number, altitude_m: number): void {
     if (!usable(mass_kg, true) || !usable(distance_m)) return;
     const same = this.points.findIndex((p) => Math.abs(p.mass_kg - mass_kg) < 1e-9 * mass_kg);
-    const point = { mass_kg, distance_m, fuel_kg: Number.isFinite(fuel_kg) ? fuel_kg : Number.NaN };
+    const point = { mass_kg, distance_m, fuel_kg: Number.isFinite(fuel_kg) ? fuel_kg : Number.NaN, altitude_m: Number.isFinite(altitude_m) ? altitude_m : 0 };
     if (same >= 0) this.points[same] = point;
     else this.points.push(point);
   }
@@ -230,11 +244,12 @@ interface RampSensitivity {
  * integral of SR over the mass equals the distance either way: integral_mL^mTO SR dm = const gives
  * SR(m_TO) dm_TO = SR(m_L) dm_L; alpha = 1 is the Breguet range equation, where the slope is the landing/take-off
  * mass ratio). alpha is read off the solvable leg's best-level specific range 2 % either side of the pass's mean
- * mass on it (the models' own figures); the residual's slope is dm_L/dm_TO less the contingency share of the trip
- * fuel that follows (1 - dm_L/dm_TO of it). With `shift_kg`, the same for the pass's masses moved by that much at
+ * mass on it (the models' own figures); the residual's slope is dm_L/dm_TO times 1 - `itemsPerKg` (the reserve's
+ * flown items' growth with the landing mass) less the contingency share of the trip fuel that follows
+ * (1 - dm_L/dm_TO of it). With `shift_kg`, the same for the pass's masses moved by that much at
  * the ramp. The landing/ramp mass ratio when alpha is not usable.
  */
-function powerLawSensitivity(ctx: MissionContext, e: MissionEvaluation, rampMass_kg: number, shift_kg = 0): RampSensitivity {
+function powerLawSensitivity(ctx: MissionContext, e: MissionEvaluation, rampMass_kg: number, shift_kg = 0, itemsPerKg = 0): RampSensitivity {
   const input = ctx.input;
   const index = solvableLegIndex(input);
   const leg = input.legs[index];
@@ -253,7 +268,7 @@ function powerLawSensitivity(ctx: MissionContext, e: MissionEvaluation, rampMass
   const massRatio = (e.trip.landing[S_MASS] + Math.pow(e.trip.landing[S_MASS] / e.trip.takeoff[S_MASS], alpha) * shift_kg) / (e.trip.takeoff[S_MASS] + shift_kg);
   if (!(alpha >= 0 && alpha <= 2) || !(massRatio > 0.2 && massRatio <= 1)) return fallback;
   const landingPerKg = Math.pow(massRatio, alpha);
-  const slope = landingPerKg - boundContingencyShare(input, e) * (1 - landingPerKg);
+  const slope = landingPerKg * (1 - itemsPerKg) - boundContingencyShare(input, e) * (1 - landingPerKg);
   return plausibleRampSlope(slope) ? { slope, landingPerKg } : fallback;
 }
 
@@ -271,18 +286,28 @@ const AFTER_TRIAL_GAP_KG = 10;
  * every one known, the legs after the solvable leg are flown on trial from the last top of descent at that mass
  * (flyAfterSolvable), so the next pass meets the range closely and the correction knows how the descent moves.
  */
-export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess_kg: number, start: MissionStart = {}, band: FuelBand = fuelBand(undefined)): IterationOutcome {
+export function iterateRampMass(
+  ctx: MissionContext,
+  range_m: number,
+  firstGuess_kg: number,
+  start: MissionStart = {},
+  band: FuelBand = fuelBand(undefined),
+  itemsPerKgGuess?: number,
+): IterationOutcome {
   const input = ctx.input;
   const after = new AfterSolvableModel(start.afterSolvable);
   const distance = { endDistanceOf: (mass_kg: number) => range_m - after.at(mass_kg) };
   const basis = distanceIndex(input);
   const remember = (e: MissionEvaluation) => {
-    if (e.trip.solvableDistance_m > 0) after.add(e.trip.solvableEndMass_kg, e.trip.afterSolvable_m, e.trip.solvableEndMass_kg - e.trip.landing[S_MASS]);
+    if (e.trip.solvableDistance_m > 0) after.add(e.trip.solvableEndMass_kg, e.trip.afterSolvable_m, e.trip.solvableEndMass_kg - e.trip.landing[S_MASS], e.trip.solvableEnd?.[S_ALT] ?? 0);
   };
+  // Trials fly from a pass's top of descent at its level: not for a cruise-climb, whose level moves with the mass.
+  const solvableLeg = input.legs[solvableLegIndex(input)];
+  const trials = solvableLeg !== undefined && solvableLeg.kind === 'cruise' && solvableLeg.profile.kind !== 'cruiseClimb';
   const trialCtx: MissionContext = { ...scratch(ctx), log: createFlightLog(input.airframe, input.cautionSettings, true, false) };
   // How the reserve's flown items (all but a contingency share of the trip fuel) move with the landing mass (-),
-  // between the last two passes; 0 until two passes are known.
-  let itemsPerKg = 0;
+  // between the last two passes; the closed forms' own until two passes are known (0 without them).
+  let itemsPerKg = usable(itemsPerKgGuess) && Math.abs(itemsPerKgGuess) < 0.5 ? itemsPerKgGuess : 0;
   const learnItems = (a: MissionEvaluation, b: MissionEvaluation) => {
     const dLanding = b.trip.landing[S_MASS] - a.trip.landing[S_MASS];
     const items = (e: MissionEvaluation) => e.reserves.breakdown.total_kg - boundContingencyShare(input, e) * (e.trip.takeoff[S_MASS] - e.trip.landing[S_MASS]);
@@ -306,12 +331,12 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
   let landingPerKg = 0.85;
   const trialFor = (e: MissionEvaluation, x: number, next_kg: number): boolean => {
     const top = e.trip.solvableEnd;
-    if (top === null || !(e.trip.solvableDistance_m > 0) || !Number.isFinite(next_kg)) return false;
+    if (!trials || top === null || !(e.trip.solvableDistance_m > 0) || !Number.isFinite(next_kg)) return false;
     const predicted = e.trip.solvableEndMass_kg + topShift(e, e.trip.end[basis] - range_m) + landingPerKg * (next_kg - x);
     if (!(predicted > 0) || after.gap(predicted) <= AFTER_TRIAL_GAP_KG) return false;
     const trial = flyAfterSolvable(trialCtx, top, predicted);
     if (trial === null) return false;
-    after.add(predicted, trial.distance_m, trial.fuelToLanding_kg);
+    after.add(predicted, trial.distance_m, trial.fuelToLanding_kg, top[S_ALT]);
     return true;
   };
   let x0 = usable(start.rampMass_kg, true) && start.rampMass_kg > ctx.zeroFuelMass_kg ? start.rampMass_kg : firstGuess_kg;
@@ -351,7 +376,7 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
     };
   };
   const warmSlope = plausibleRampSlope(start.slope);
-  const cold = warmSlope ? null : powerLawSensitivity(ctx, e0, x0);
+  const cold = warmSlope ? null : powerLawSensitivity(ctx, e0, x0, 0, itemsPerKg);
   let slope = warmSlope ? (start.slope as number) : (cold as RampSensitivity).slope;
   if (cold !== null) landingPerKg = cold.landingPerKg;
   else if (warmSlope) landingPerKg = Math.min(Math.max(slope, 0.2), 1);
@@ -414,6 +439,9 @@ export function iterateRampMass(ctx: MissionContext, range_m: number, firstGuess
       };
     }
     remember(e1);
+    // The prediction left the solvable leg no length though the trip falls short: start the model again from the
+    // last pass that flew the leg.
+    if (d === 0 && distanceError < -DISTANCE_TOLERANCE_M && e0.trip.solvableDistance_m > 0) after.keepOnly(e0.trip.solvableEndMass_kg);
     // Secant method on the residual at exactly the range (the last usable slope when the secant is degenerate),
     // stepped again when a trial moved the correction.
     // The secant is the slope midway between its passes: at the later one it is bend (x1 - x0) / 2 more.
@@ -487,12 +515,35 @@ function spareFuelDistance(input: MissionInput, leg: Extract<Leg, { kind: 'cruis
 }
 
 /**
+ * d2(residual)/d(distance)2 (kg/m2) at the end of pass `b` of a fixed ramp mass: the fuel per metre at the solvable
+ * leg's end as a power of the mass there, f ~ m^alpha (alpha from passes `a` and `b`), falls by alpha f^2 / m per
+ * metre flown; times `factor` (1 - the reserve's growth with the landing mass). 0 when not usable.
+ */
+function endBend(a: MissionEvaluation, b: MissionEvaluation, factor: number): number {
+  const fa = a.trip.solvableEndFuelPerMetre;
+  const fb = b.trip.solvableEndFuelPerMetre;
+  const ma = a.trip.solvableEndMass_kg;
+  const mb = b.trip.solvableEndMass_kg;
+  if (!(fa > 0 && fb > 0 && ma > 0 && mb > 0) || Math.abs(mb - ma) < 1) return 0;
+  const alpha = Math.log(fb / fa) / Math.log(mb / ma);
+  const bend = ((alpha * fb * fb) / mb) * factor;
+  return Number.isFinite(bend) && alpha >= 0 && alpha <= 2 ? bend : 0;
+}
+
+/**
  * Fixed ramp mass: the solvable leg's distance (m, mission's basis) so the residual lies in the fuel band. A cold
  * start flies the leg at zero length first (so a reserve that cannot be carried is named), then steps by the
  * Breguet distance of the spare fuel at the leg's specific range; a warm start flies the given distance first
  * and steps with the given slope. Then the secant method.
  */
-export function iterateDistance(ctx: MissionContext, rampMass_kg: number, start: MissionStart = {}, band: FuelBand = fuelBand(undefined, FIXED_MASS_FUEL_TOLERANCE_KG)): IterationOutcome {
+export function iterateDistance(
+  ctx: MissionContext,
+  rampMass_kg: number,
+  start: MissionStart = {},
+  band: FuelBand = fuelBand(undefined, FIXED_MASS_FUEL_TOLERANCE_KG),
+  firstGuess?: { readonly distance_m: number; readonly itemsPerKg: number },
+): IterationOutcome {
+  const firstGuess_m = firstGuess?.distance_m;
   const input = ctx.input;
   const infeasible = (e: MissionEvaluation, k: number): IterationOutcome => ({
     kind: 'infeasible',
@@ -509,10 +560,17 @@ export function iterateDistance(ctx: MissionContext, rampMass_kg: number, start:
     iterations: k,
     residual_kg: e.residual_kg,
     pass: e,
-    warmStart: { distance_m: dist_m, slope },
+    warmStart: {
+      distance_m: dist_m,
+      slope,
+      // The slope over the fuel per metre at the leg's end (its marginal slope), for a neighbour to carry its own.
+      ...(e.trip.solvableEndFuelPerMetre > 0 && plausibleSlopeFactor(slope / -e.trip.solvableEndFuelPerMetre) ? { slopeFactor: slope / -e.trip.solvableEndFuelPerMetre } : {}),
+    },
   });
-  let zeroFlown = !usable(start.distance_m, true);
-  let d0 = zeroFlown ? 0 : (start.distance_m as number);
+  const warm = usable(start.distance_m, true);
+  const guessed = !warm && usable(firstGuess_m, true);
+  let zeroFlown = !warm && !guessed;
+  let d0 = warm ? (start.distance_m as number) : guessed ? (firstGuess_m as number) : 0;
   let e0 = evaluateMission(scratch(ctx), rampMass_kg, d0);
   if (failedFlight(e0)) return { kind: 'flightFailed', rampMass_kg, distance_m: d0, iterations: 1, residual_kg: e0.residual_kg, failure: e0 };
   if (d0 === 0 && e0.residual_kg < 0) return infeasible(e0, 1);
@@ -532,9 +590,18 @@ export function iterateDistance(ctx: MissionContext, rampMass_kg: number, start:
     if (zeroFlown && row !== undefined) estimate = spareFuelDistance(input, leg, env, row.startMass_kg, (e0.residual_kg - band.aim_kg) / (1 + contingencyShare(input)));
   }
   const coldSlope = -1 / (sr > 0 ? sr : 100);
-  let slope = usable(start.slope) && start.slope < 0 ? start.slope : coldSlope;
+  // A warm start's slope carried as its ratio to the neighbour's marginal slope, times this pass's.
+  const carried = plausibleSlopeFactor(start.slopeFactor) && e0.trip.solvableEndFuelPerMetre > 0 ? -start.slopeFactor * e0.trip.solvableEndFuelPerMetre : Number.NaN;
+  let slope = usable(start.slope) && start.slope < 0 ? (Number.isFinite(carried) ? carried : start.slope) : coldSlope;
   if (fuelConverged(e0.residual_kg, band)) return converged(d0, e0, 1, slope);
-  let d1 = usable(estimate, true) ? estimate : d0 - (e0.residual_kg - band.aim_kg) / slope;
+  // From the closed-form guess: Newton's method with the marginal slope at the leg's end (the fuel per metre there
+  // times 1 + the contingency share that follows the trip fuel - the reserve items' growth with the landing mass,
+  // the closed forms' own).
+  const guessSlope =
+    guessed && e0.trip.solvableEndFuelPerMetre > 0
+      ? -e0.trip.solvableEndFuelPerMetre * (1 + boundContingencyShare(input, e0) + enRouteShare(input, e0) - (firstGuess?.itemsPerKg ?? 0))
+      : Number.NaN;
+  let d1 = usable(estimate, true) ? estimate : d0 - (e0.residual_kg - band.aim_kg) / (Number.isFinite(guessSlope) ? guessSlope : slope);
   for (let k = 2; k <= MAX_ITERATIONS; k++) {
     if (!Number.isFinite(d1)) break;
     if (d1 <= 0) {
@@ -557,12 +624,18 @@ export function iterateDistance(ctx: MissionContext, rampMass_kg: number, start:
     const reserveSlope = (e1.reserves.breakdown.total_kg - e0.reserves.breakdown.total_kg) / dLanding;
     const factor = Number.isFinite(reserveSlope) && Math.abs(dLanding) >= 1 && Math.abs(reserveSlope) < 0.5 ? 1 - reserveSlope : 1 + contingencyShare(input);
     const marginal = e1.trip.solvableEndFuelPerMetre > 0 ? -e1.trip.solvableEndFuelPerMetre * factor : Number.NaN;
+    // The secant is the slope midway between its passes; at the later one the fuel per metre at the leg's end has
+    // fallen with the mass there (f ~ m^alpha, alpha between the two passes' ends), so the slope is
+    // alpha f^2 / m (1 - dR/dm_L) (d1 - d0) / 2 less steep.
+    const tangent = Number.isFinite(secant) && secant < 0 ? secant + 0.5 * endBend(e0, e1, factor) * (d1 - d0) : Number.NaN;
     const next =
       d0 === 0 && Number.isFinite(marginal)
         ? d1 - aimed / marginal
-        : Number.isFinite(secant) && secant < 0
-          ? d1 - aimed / secant
-          : d1 - aimed / coldSlope;
+        : Number.isFinite(tangent) && tangent < 0
+          ? d1 - aimed / tangent
+          : Number.isFinite(secant) && secant < 0
+            ? d1 - aimed / secant
+            : d1 - aimed / coldSlope;
     d0 = d1;
     e0 = e1;
     d1 = next;

@@ -295,7 +295,10 @@ export interface MissionStart {
    * last three passes; the second pass steps on the parabola it gives instead of the tangent.
    */
   readonly curvature_per_kg?: number;
-  /** payloadRange: the neighbour's last secant slope over the power-law slope of its converged pass (fuelIteration.ts powerLawSensitivity). */
+  /**
+   * The neighbour's last secant slope over a model slope of its converged pass: in payloadRange the power-law slope
+   * (fuelIteration.ts powerLawSensitivity), with a fixed ramp mass minus the fuel per metre at the solvable leg's end.
+   */
   readonly slopeFactor?: number;
   /**
    * The distance after the solvable cruise leg (m, mission's basis: the descent and what follows) as a linear

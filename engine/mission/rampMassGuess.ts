@@ -82,11 +82,16 @@ export function bestLevelSpecificRange(input: MissionInput, speed: CruiseLeg['sp
   return best;
 }
 
-/** Fuel per metre law of a cruise at its best level. */
+/** Fuel per metre law of a cruise at its best level at `mass_kg` (the envelope of the levels has that level's slope there). */
 function cruiseDistanceLaw(input: MissionInput, leg: CruiseLeg, mass_kg: number): MassLaw | null {
   const env = legEnvironment(input, leg);
-  const levels = cruiseLevels(leg);
-  return massLaw((m) => 1 / bestLevelSpecificRange(input, leg.speed, levels, env, m), mass_kg);
+  let best = leg.altitude_m;
+  let bestSr = 0;
+  for (const h of cruiseLevels(leg)) {
+    const sr = bestLevelSpecificRange(input, leg.speed, [h], env, mass_kg);
+    if (sr > bestSr) [best, bestSr] = [h, sr];
+  }
+  return massLaw((m) => 1 / (m === mass_kg ? bestSr : bestLevelSpecificRange(input, leg.speed, [best], env, m)), mass_kg);
 }
 
 /** Fuel flow (kg/s) in level flight at a Mach: TAS over the specific air range; 0 when it cannot be flown. */
@@ -98,12 +103,12 @@ function levelFuelFlow(input: MissionInput, altitude_m: number, mach: number, ma
 /** Fuel flow law (kg/s) of a hold at an altitude as flyHold flies it (best endurance with its factor and floor, or a CAS), ISA and still air unless `isaDev_K`. */
 function holdLaw(input: MissionInput, altitude_m: number, speed: HoldSpeed, mass_kg: number, isaDev_K = 0): MassLaw | null {
   const pressure_Pa = missionAir(altitude_m, 0).pressure_Pa;
-  const machAt = (m: number) => {
-    if (speed.kind === 'cas') return machOfCas(speed.cas_m_s, pressure_Pa);
-    const factor = speed.speedFactor !== undefined && speed.speedFactor > 0 ? speed.speedFactor : 1;
-    const floor = speed.minCas_m_s !== undefined && speed.minCas_m_s > 0 ? machOfCas(speed.minCas_m_s, pressure_Pa) : 0;
-    return Math.max(factor * minimumDragMach(input, altitude_m, m, isaDev_K), floor);
-  };
+  // Best endurance as flyHold flies it: the minimum-drag Mach searched at one mass, then at constant lift
+  // coefficient (Mach proportional to sqrt(mass)).
+  const factor = speed.kind === 'bestEndurance' && speed.speedFactor !== undefined && speed.speedFactor > 0 ? speed.speedFactor : 1;
+  const floor = speed.kind === 'bestEndurance' && speed.minCas_m_s !== undefined && speed.minCas_m_s > 0 ? machOfCas(speed.minCas_m_s, pressure_Pa) : 0;
+  const minimumDrag = speed.kind === 'cas' ? 0 : factor * minimumDragMach(input, altitude_m, mass_kg, isaDev_K);
+  const machAt = (m: number) => (speed.kind === 'cas' ? machOfCas(speed.cas_m_s, pressure_Pa) : Math.max(minimumDrag * Math.sqrt(m / mass_kg), floor));
   return massLaw((m) => levelFuelFlow(input, altitude_m, machAt(m), m, isaDev_K), mass_kg);
 }
 
@@ -274,19 +279,29 @@ function reserveFigures(input: MissionInput, landing_kg: number): Figures['reser
   };
 }
 
+interface ClosedFlight {
+  readonly residual_kg: number;
+  readonly top_kg: number;
+  readonly after_m: number;
+  readonly landing_kg: number;
+  readonly tripFuel_kg: number;
+  readonly tripTime_s: number;
+}
+
 /** The closed forms' flight from a ramp mass (kg): the residual at the range (kg: landing mass - zero-fuel mass - reserve), the top of descent's mass (kg) and the distance after it (m). */
-function closedFlight(f: Figures, input: MissionInput, zfw_kg: number, ramp_kg: number, range_m: number): { residual_kg: number; top_kg: number; after_m: number } {
+function closedFlight(f: Figures, input: MissionInput, zfw_kg: number, ramp_kg: number, range_m: number): ClosedFlight {
   const solvable = solvableLegIndex(input);
   // The solvable leg's distance: the range less the others' (their distances do not depend on it).
   let others = 0;
+  for (let i = 0; i < f.legs.length; i++) if (i !== solvable) others += f.legs[i](ramp_kg, 0).distance_m;
+  return closedFlightAt(f, input, zfw_kg, ramp_kg, Math.max(range_m - others, 0));
+}
+
+/** The closed forms' flight from a ramp mass (kg) with the solvable leg `solvable_m` long (closedFlight). */
+function closedFlightAt(f: Figures, input: MissionInput, zfw_kg: number, ramp_kg: number, solvable_m: number): ClosedFlight {
+  const solvable = solvableLegIndex(input);
   let after = 0;
-  for (let i = 0; i < f.legs.length; i++) {
-    if (i === solvable) continue;
-    const d = f.legs[i](ramp_kg, 0).distance_m;
-    others += d;
-    if (i > solvable) after += d;
-  }
-  const solvable_m = Math.max(range_m - others, 0);
+  for (let i = solvable + 1; i < f.legs.length; i++) after += f.legs[i](ramp_kg, 0).distance_m;
   let m = ramp_kg;
   let takeoff = ramp_kg;
   let top = ramp_kg;
@@ -299,7 +314,7 @@ function closedFlight(f: Figures, input: MissionInput, zfw_kg: number, ramp_kg: 
     if (i === solvable) top = m;
     if (i >= first) time += leg.time_s;
   }
-  return { residual_kg: m - zfw_kg - f.reserve(m, takeoff - m, time), top_kg: top, after_m: after };
+  return { residual_kg: m - zfw_kg - f.reserve(m, takeoff - m, time), top_kg: top, after_m: after, landing_kg: m, tripFuel_kg: takeoff - m, tripTime_s: time };
 }
 
 /** A first guess: the ramp mass (kg), and the top of descent (its mass, kg, and the distance after it, m) the closed forms fly from it. */
@@ -307,6 +322,14 @@ export interface RampGuess {
   readonly rampMass_kg: number;
   readonly top_kg: number;
   readonly after_m: number;
+  /** How the reserve's flown items grow with the landing mass there (-), the trip fuel and time held: a kilogram either side. */
+  readonly itemsPerKg: number;
+}
+
+/** The closed forms' d(reserve)/d(landing mass) (-) at a landing mass (kg) with the trip fuel (kg) and time (s) held; 0 when not finite or implausible. */
+function itemsSlope(f: Figures, landing_kg: number, tripFuel_kg: number, tripTime_s: number): number {
+  const slope = (f.reserve(landing_kg + 1, tripFuel_kg, tripTime_s) - f.reserve(landing_kg - 1, tripFuel_kg, tripTime_s)) / 2;
+  return Number.isFinite(slope) && Math.abs(slope) < 0.5 ? slope : 0;
 }
 
 /**
@@ -325,12 +348,46 @@ export function rampMassGuess(input: MissionInput, zfw_kg: number, range_m: numb
     const flight = closedFlight(f, input, zfw_kg, x1, range_m);
     const r1 = flight.residual_kg;
     if (!Number.isFinite(r1)) return null;
-    if (Math.abs(r1) < 1e-3) return Number.isFinite(flight.top_kg) && Number.isFinite(flight.after_m) ? { rampMass_kg: x1, top_kg: flight.top_kg, after_m: flight.after_m } : null;
+    if (Math.abs(r1) < 1e-3) {
+      if (!Number.isFinite(flight.top_kg) || !Number.isFinite(flight.after_m)) return null;
+      return { rampMass_kg: x1, top_kg: flight.top_kg, after_m: flight.after_m, itemsPerKg: itemsSlope(f, flight.landing_kg, flight.tripFuel_kg, flight.tripTime_s) };
+    }
     const slope = (r1 - r0) / (x1 - x0);
     const next = x1 - r1 / (Number.isFinite(slope) && slope > 0.05 ? slope : 0.85);
     x0 = x1;
     r0 = r1;
     x1 = next;
+  }
+  return null;
+}
+
+/**
+ * First guess of the solvable leg's distance (m, mission's basis) with a fixed ramp mass (maxRange, takeoffWeight
+ * with a solvable leg): where the closed forms' residual vanishes (the secant method), with the reserve items'
+ * growth with the landing mass there; null when they have no usable
+ * figure, do not close, or the reserve cannot be carried at zero length by them.
+ */
+export function solvableDistanceGuess(input: MissionInput, zfw_kg: number, ramp_kg: number): { readonly distance_m: number; readonly itemsPerKg: number } | null {
+  const f = figures(input, ramp_kg, 1.1 * zfw_kg);
+  if (f === null) return null;
+  let d0 = 0;
+  let r0 = closedFlightAt(f, input, zfw_kg, ramp_kg, d0).residual_kg;
+  if (!(r0 > 0)) return null;
+  let d1 = 1e6;
+  for (let k = 0; k < 30; k++) {
+    const flight = closedFlightAt(f, input, zfw_kg, ramp_kg, d1);
+    const r1 = flight.residual_kg;
+    if (!Number.isFinite(r1)) {
+      // Past where the closed forms run out of fuel: halve back towards the last usable distance.
+      d1 = 0.5 * (d0 + d1);
+      continue;
+    }
+    if (Math.abs(r1) < 1e-3) return d1 > 0 ? { distance_m: d1, itemsPerKg: itemsSlope(f, flight.landing_kg, flight.tripFuel_kg, flight.tripTime_s) } : null;
+    const slope = (r1 - r0) / (d1 - d0);
+    if (!(slope < 0) || !Number.isFinite(slope)) return null;
+    d0 = d1;
+    r0 = r1;
+    d1 = Math.max(d1 - r1 / slope, 0.5 * d1);
   }
   return null;
 }

@@ -30,7 +30,7 @@ import { evaluateMission, FIXED_MASS_FUEL_TOLERANCE_KG, fuelBand, iterateDistanc
 import { solvableLegIndex, tripBounds } from './flyTrip';
 import { distanceBasis, legEnvironment, type FlightOptions, type LegTarget, type MissionContext } from './missionContext';
 import { missionInputProblem } from './missionInputCheck';
-import { rampMassGuess } from './rampMassGuess';
+import { rampMassGuess, solvableDistanceGuess } from './rampMassGuess';
 import { createPassMemo, type PassMemo } from './passMemo';
 import { S_AIR, S_GROUND, S_MASS, S_TIME } from './missionState';
 import type { MissionInput, MissionResult, MissionStart, MissionStatus, ReserveBreakdown } from './missionTypes';
@@ -116,11 +116,11 @@ function breguetRampGuess(input: MissionInput, zfw_kg: number, taxi_kg: number, 
  * after the solvable leg at the top of descent they fly, so the first pass ends close to the range), or the Breguet
  * guess alone when they have no usable figure or land outside (zero-fuel mass, 3 x the Breguet guess).
  */
-function coldStart(input: MissionInput, zfw_kg: number, taxi_kg: number, range_m: number): { readonly rampMass_kg: number; readonly start: MissionStart } {
+function coldStart(input: MissionInput, zfw_kg: number, taxi_kg: number, range_m: number): { readonly rampMass_kg: number; readonly itemsPerKg?: number; readonly start: MissionStart } {
   const breguet = breguetRampGuess(input, zfw_kg, taxi_kg, range_m);
   const closed = rampMassGuess(input, zfw_kg, range_m, breguet);
   if (closed === null || !(closed.rampMass_kg > zfw_kg && closed.rampMass_kg < 3 * breguet)) return { rampMass_kg: breguet, start: {} };
-  return { rampMass_kg: closed.rampMass_kg, start: { afterSolvable: { mass_kg: closed.top_kg, distance_m: closed.after_m, perKg_m: 0 } } };
+  return { rampMass_kg: closed.rampMass_kg, itemsPerKg: closed.itemsPerKg, start: { afterSolvable: { mass_kg: closed.top_kg, distance_m: closed.after_m, perKg_m: 0 } } };
 }
 
 /**
@@ -266,7 +266,7 @@ function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult
     const warm = warmRamp !== undefined && Number.isFinite(warmRamp) && warmRamp > zfw;
     const cold = warm ? null : coldStart(input, zfw, taxi, solve.range_m);
     const start = cold === null ? options.warmStart : { ...cold.start, ...options.warmStart };
-    outcome = iterateRampMass(base, solve.range_m, cold?.rampMass_kg ?? (warmRamp as number), start, fuelBand(options.fuelTolerance_kg));
+    outcome = iterateRampMass(base, solve.range_m, cold?.rampMass_kg ?? (warmRamp as number), start, fuelBand(options.fuelTolerance_kg), cold?.itemsPerKg);
     ({ rampMass_kg: rampMass, distance_m: distance, iterations, residual_kg: residual } = outcome);
     if (outcome.kind === 'infeasible') {
       return { ...emptyResult(input, 'infeasible', outcome.message), iterations, residual_kg: residual };
@@ -280,7 +280,8 @@ function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult
       return emptyResult(input, 'infeasible', msg`No fuel can be carried: ramp mass ${q(rampMass, 'mass')} is not above zero-fuel mass ${q(zfw, 'mass')}.`);
     }
     if (hasSolvable) {
-      outcome = iterateDistance(base, rampMass, options.warmStart, fuelBand(options.fuelTolerance_kg, FIXED_MASS_FUEL_TOLERANCE_KG));
+      const guess = options.warmStart?.distance_m === undefined ? solvableDistanceGuess(input, zfw, rampMass) : null;
+      outcome = iterateDistance(base, rampMass, options.warmStart, fuelBand(options.fuelTolerance_kg, FIXED_MASS_FUEL_TOLERANCE_KG), guess ?? undefined);
       ({ distance_m: distance, iterations, residual_kg: residual } = outcome);
     }
   }
