@@ -185,11 +185,32 @@ class AfterSolvableModel {
     return Number.isFinite(slope) && Math.abs(slope) < 0.5 ? slope : 0;
   }
 
-  at(mass_kg: number): number {
+  /** The line read near `mass_kg`: through the nearest known point with the slope there (the warm start's line before any point). */
+  private lineNear(mass_kg: number): { readonly mass_kg: number; readonly distance_m: number; readonly perKg_m: number } | null {
     const pair = this.pair(mass_kg);
     const near = pair?.[0] ?? this.points[this.points.length - 1];
-    if (near !== undefined) return near.distance_m + this.perKg(mass_kg) * (mass_kg - near.mass_kg);
-    return this.prior ? this.prior.distance_m + this.prior.perKg_m * (mass_kg - this.prior.mass_kg) : 0;
+    if (near !== undefined) return { mass_kg: near.mass_kg, distance_m: near.distance_m, perKg_m: this.perKg(mass_kg) };
+    return this.prior ?? null;
+  }
+
+  /** The line a pass flies with, chosen at its predicted top of descent (kg): its cruise reads it at every evaluation. */
+  private flown: { readonly mass_kg: number; readonly distance_m: number; readonly perKg_m: number } | null = null;
+
+  /** Chooses the line the next pass flies with, at its predicted top of descent (kg). */
+  aim(mass_kg: number): void {
+    this.flown = this.lineNear(mass_kg);
+  }
+
+  /** The distance after the leg (m) on the line chosen for the pass (aim), 0 when none. */
+  at(mass_kg: number): number {
+    const line = this.flown;
+    return line === null ? 0 : line.distance_m + line.perKg_m * (mass_kg - line.mass_kg);
+  }
+
+  /** The distance after the leg (m) read near `mass_kg`. */
+  near(mass_kg: number): number {
+    const line = this.lineNear(mass_kg);
+    return line === null ? 0 : line.distance_m + line.perKg_m * (mass_kg - line.mass_kg);
   }
 
   /** Kilograms from `mass_kg` to the nearest known point (Infinity when none is known). */
@@ -211,7 +232,7 @@ class AfterSolvableModel {
   /** The model as a warm start carries it: the line at `mass_kg` (the converged top of descent). */
   model(mass_kg: number): MissionStart['afterSolvable'] {
     if (this.points.length === 0) return this.prior;
-    const distance_m = this.at(mass_kg);
+    const distance_m = this.near(mass_kg);
     return usable(distance_m) ? { mass_kg, distance_m, perKg_m: this.perKg(mass_kg) } : this.prior;
   }
 }
@@ -272,6 +293,9 @@ function powerLawSensitivity(ctx: MissionContext, e: MissionEvaluation, rampMass
   return plausibleRampSlope(slope) ? { slope, landingPerKg } : fallback;
 }
 
+/** A pass this far (m) off the range after the first restarts the top-of-descent model from it. */
+const MODEL_MISS_M = 1000;
+
 /** Trials of the legs after the solvable leg are flown when the next top of descent lies this far (kg) from every one known. */
 const AFTER_TRIAL_GAP_KG = 10;
 
@@ -329,10 +353,12 @@ export function iterateRampMass(
   // A trial of the legs after the solvable one at the top of descent predicted for a pass from `next_kg`, when it
   // lies far from every one known; true when one was flown.
   let landingPerKg = 0.85;
+  // The top of descent (kg) a pass from `next_kg` will reach, from pass `e` flown from `x`.
+  const predictTop = (e: MissionEvaluation, x: number, next_kg: number) => e.trip.solvableEndMass_kg + topShift(e, e.trip.end[basis] - range_m) + landingPerKg * (next_kg - x);
   const trialFor = (e: MissionEvaluation, x: number, next_kg: number): boolean => {
     const top = e.trip.solvableEnd;
     if (!trials || top === null || !(e.trip.solvableDistance_m > 0) || !Number.isFinite(next_kg)) return false;
-    const predicted = e.trip.solvableEndMass_kg + topShift(e, e.trip.end[basis] - range_m) + landingPerKg * (next_kg - x);
+    const predicted = predictTop(e, x, next_kg);
     if (!(predicted > 0) || after.gap(predicted) <= AFTER_TRIAL_GAP_KG) return false;
     const trial = flyAfterSolvable(trialCtx, top, predicted);
     if (trial === null) return false;
@@ -340,6 +366,7 @@ export function iterateRampMass(
     return true;
   };
   let x0 = usable(start.rampMass_kg, true) && start.rampMass_kg > ctx.zeroFuelMass_kg ? start.rampMass_kg : firstGuess_kg;
+  after.aim(start.afterSolvable?.mass_kg ?? 0);
   let e0 = evaluateMission(scratch(ctx), x0, distance);
   let d = e0.trip.solvableDistance_m;
   if (failedFlight(e0)) return { kind: 'flightFailed', rampMass_kg: x0, distance_m: d, iterations: 1, residual_kg: e0.residual_kg, failure: e0 };
@@ -415,6 +442,8 @@ export function iterateRampMass(
     if (!Number.isFinite(x1) || x1 <= ctx.zeroFuelMass_kg * 0.5 || x1 > guard) {
       return notConverged('Fuel', { rampMass_kg: x0, distance_m: d, iterations: k - 1, residual_kg: e0.residual_kg });
     }
+    const top = predictTop(e0, x0, x1);
+    after.aim(Number.isFinite(top) && top > 0 ? top : e0.trip.solvableEndMass_kg);
     const e1 = evaluateMission(scratch(ctx), x1, distance);
     flown.push({ x: x1, e: e1 });
     d = e1.trip.solvableDistance_m;
@@ -442,6 +471,9 @@ export function iterateRampMass(
     // The prediction left the solvable leg no length though the trip falls short: start the model again from the
     // last pass that flew the leg.
     if (d === 0 && distanceError < -DISTANCE_TOLERANCE_M && e0.trip.solvableDistance_m > 0) after.keepOnly(e0.trip.solvableEndMass_kg);
+    // A pass the model sent more than a kilometre off the range (its top of descent on another level, or within a
+    // step climb): the model mixes levels; go on from this pass's top of descent alone.
+    else if (Math.abs(distanceError) > MODEL_MISS_M && d > 0) after.keepOnly(e1.trip.solvableEndMass_kg);
     // Secant method on the residual at exactly the range (the last usable slope when the secant is degenerate),
     // stepped again when a trial moved the correction.
     // The secant is the slope midway between its passes: at the later one it is bend (x1 - x0) / 2 more.

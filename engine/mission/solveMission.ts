@@ -116,11 +116,11 @@ function breguetRampGuess(input: MissionInput, zfw_kg: number, taxi_kg: number, 
  * after the solvable leg at the top of descent they fly, so the first pass ends close to the range), or the Breguet
  * guess alone when they have no usable figure or land outside (zero-fuel mass, 3 x the Breguet guess).
  */
-function coldStart(input: MissionInput, zfw_kg: number, taxi_kg: number, range_m: number): { readonly rampMass_kg: number; readonly itemsPerKg?: number; readonly start: MissionStart } {
+function coldStart(input: MissionInput, zfw_kg: number, taxi_kg: number, range_m: number): { readonly rampMass_kg: number; readonly closed: boolean; readonly itemsPerKg?: number; readonly start: MissionStart } {
   const breguet = breguetRampGuess(input, zfw_kg, taxi_kg, range_m);
   const closed = rampMassGuess(input, zfw_kg, range_m, breguet);
-  if (closed === null || !(closed.rampMass_kg > zfw_kg && closed.rampMass_kg < 3 * breguet)) return { rampMass_kg: breguet, start: {} };
-  return { rampMass_kg: closed.rampMass_kg, itemsPerKg: closed.itemsPerKg, start: { afterSolvable: { mass_kg: closed.top_kg, distance_m: closed.after_m, perKg_m: 0 } } };
+  if (closed === null || !(closed.rampMass_kg > zfw_kg && closed.rampMass_kg < 3 * breguet)) return { rampMass_kg: breguet, closed: false, start: {} };
+  return { rampMass_kg: closed.rampMass_kg, closed: true, itemsPerKg: closed.itemsPerKg, start: { afterSolvable: { mass_kg: closed.top_kg, distance_m: closed.after_m, perKg_m: 0 } } };
 }
 
 /**
@@ -267,6 +267,12 @@ function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult
     const cold = warm ? null : coldStart(input, zfw, taxi, solve.range_m);
     const start = cold === null ? options.warmStart : { ...cold.start, ...options.warmStart };
     outcome = iterateRampMass(base, solve.range_m, cold?.rampMass_kg ?? (warmRamp as number), start, fuelBand(options.fuelTolerance_kg), cold?.itemsPerKg);
+    // A first pass from the closed forms that cannot be flown (a heavier start than the Breguet guess may hit the
+    // cruise's thrust limit the answer does not): start again from the Breguet guess, as before them.
+    if (cold?.closed === true && outcome.kind === 'flightFailed' && outcome.iterations === 1) {
+      const again = iterateRampMass(base, solve.range_m, breguetRampGuess(input, zfw, taxi, solve.range_m), options.warmStart, fuelBand(options.fuelTolerance_kg));
+      outcome = { ...again, iterations: again.iterations + 1 };
+    }
     ({ rampMass_kg: rampMass, distance_m: distance, iterations, residual_kg: residual } = outcome);
     if (outcome.kind === 'infeasible') {
       return { ...emptyResult(input, 'infeasible', outcome.message), iterations, residual_kg: residual };
