@@ -21,6 +21,15 @@ export function lastSink(): unknown {
   return sink;
 }
 
+/** The result of `calls` calls measured from `start` (performance.now(), ms) in batches of per-call times `perCall` (s): calls per second and the median per-call time. */
+function resultOf(section: string, name: string, perCall: number[], calls: number, start: number): BenchResult {
+  const elapsed_s = (performance.now() - start) / 1000;
+  perCall.sort((a, b) => a - b);
+  const mid = perCall.length >> 1;
+  const medianCall_s = perCall.length % 2 === 1 ? perCall[mid]! : 0.5 * (perCall[mid - 1]! + perCall[mid]!);
+  return { section, name, opsPerSecond: calls / elapsed_s, medianCall_s, calls };
+}
+
 /**
  * Times one case: calls it for `warmUp_s` (and at least `minWarmUpCalls`
  * times), then in batches sized to about a millisecond each for `measure_s`
@@ -49,11 +58,7 @@ export function runCase(section: string, bench: BenchCase, timing: BenchTiming =
     perCall.push((t1 - t0) / 1000 / batch);
     calls += batch;
   } while (performance.now() < end || perCall.length < timing.minBatches);
-  const elapsed_s = (performance.now() - start) / 1000;
-  perCall.sort((a, b) => a - b);
-  const mid = perCall.length >> 1;
-  const medianCall_s = perCall.length % 2 === 1 ? perCall[mid]! : 0.5 * (perCall[mid - 1]! + perCall[mid]!);
-  return { section, name: bench.name, opsPerSecond: calls / elapsed_s, medianCall_s, calls };
+  return resultOf(section, bench.name, perCall, calls, start);
 }
 
 /** runCase for a case whose calls return promises: each call awaited before the next, in batches as runCase's. */
@@ -78,11 +83,7 @@ export async function runCaseAsync(section: string, bench: BenchCase, timing: Be
     perCall.push((t1 - t0) / 1000 / batch);
     calls += batch;
   } while (performance.now() < end || perCall.length < timing.minBatches);
-  const elapsed_s = (performance.now() - start) / 1000;
-  perCall.sort((a, b) => a - b);
-  const mid = perCall.length >> 1;
-  const medianCall_s = perCall.length % 2 === 1 ? perCall[mid]! : 0.5 * (perCall[mid - 1]! + perCall[mid]!);
-  return { section, name: bench.name, opsPerSecond: calls / elapsed_s, medianCall_s, calls };
+  return resultOf(section, bench.name, perCall, calls, start);
 }
 
 function formatTime(t_s: number): string {
