@@ -31,6 +31,8 @@ export interface InstalledPropulsionOptions {
   readonly spillageFrom?: InletDesign;
   readonly installation: InstallationSettings;
   readonly cautionSettings: CautionSettings;
+  /** Entries of the model's rating memo (installedModel.ts); default ratingMemo.ts RATING_MEMO_ENTRIES. */
+  readonly ratingMemoEntries?: number;
 }
 
 /** The distinct values of `values`, ascending. */
