@@ -44,10 +44,8 @@ if (fromSource) {
   const outfile = resolve(repo, 'node_modules/.cache/blockwise-bench/runBench.mjs');
   await build({
     absWorkingDir: repo,
-    // The analysis pool's worker thread (hostio/analysisWorker.ts) beside the bench, as test/bench/sections/analysis.ts expects it.
-    entryPoints: { runBench: resolve(repo, 'test/bench/runBench.ts'), analysisWorker: resolve(repo, 'hostio/analysisWorker.ts') },
-    outdir: dirname(outfile),
-    outExtension: { '.js': '.mjs' },
+    entryPoints: [resolve(repo, 'test/bench/runBench.ts')],
+    outfile,
     bundle: true,
     platform: 'node',
     format: 'esm',

@@ -12,8 +12,9 @@ import type { RatingName } from '../propulsion/propulsionModel';
 import type { AnalysisError, MissionSolver } from './analysisTypes';
 import type { Ceiling } from './envelope';
 import { shapleyValues } from './shapleyAttribution';
-import { designPoints, type PointJob, type PointOutput } from './analysisJobs';
-import { flySerially, missionResults, pointOutputs, type AnalysisSteps, type PlannedMission } from './missionPlan';
+import { thrustDragCrossover, type CrossoverResult } from './crossover';
+import { flightCeilings } from './envelope';
+import { flySerially, type AnalysisSteps, type PlannedMission } from './missionPlan';
 import { subsetWeights } from './warmStart';
 
 export type InletFactor = 'recovery' | 'spillage' | 'externalDrag' | 'weight';
@@ -99,6 +100,12 @@ export function choiceOf(mask: number): FactorChoice {
   return { recovery: pick(0), spillage: pick(1), externalDrag: pick(2), weight: pick(3) };
 }
 
+/** The crossover and the ceilings of one design. */
+interface PointOutput {
+  readonly crossover: Result<CrossoverResult, AnalysisError>;
+  readonly ceilings: Result<readonly Ceiling[], AnalysisError>;
+}
+
 function midCruiseMass(r: MissionResult): number {
   const cruise = r.legs.filter((l) => l.kind === 'cruise');
   if (cruise.length === 0) return 0.5 * (r.takeoffMass_kg + r.landingMass_kg);
@@ -111,8 +118,7 @@ function midCruiseMass(r: MissionResult): number {
  * values (Shapley 1953). The crossover compares both designs at one stated
  * condition: the cruise altitude and design A's mid-cruise mass (mean of the
  * cruise start and end masses). Ceilings use maxClimb at the same mass.
- * On the calling thread (missionPlan.ts flySerially); a host with worker
- * threads runs compareInletsSteps over them instead, with the same answer.
+ * On the calling thread (missionPlan.ts flySerially).
  */
 export function compareInlets(
   build: InletFactorBuilder,
@@ -142,7 +148,6 @@ export function* compareInletsSteps(build: InletFactorBuilder, options: InletCom
     const single = (mask & (mask - 1)) === 0;
     const weights = single ? [] : subsetWeights(mask);
     missions.push({
-      job: { kind: 'compare', mask },
       input: build(choiceOf(mask)),
       after: weights.map((w) => w.mask),
       lane: 0,
@@ -154,7 +159,7 @@ export function* compareInletsSteps(build: InletFactorBuilder, options: InletCom
       },
     });
   }
-  const flown = missionResults(yield { missions, laneMemos: false, stopAtFailure: true });
+  const flown = yield { missions, laneMemos: false, stopAtFailure: true };
   const results: MissionResult[] = [];
   for (let mask = 0; mask < total; mask++) {
     const r = flown.results[mask];
@@ -166,25 +171,19 @@ export function* compareInletsSteps(build: InletFactorBuilder, options: InletCom
     }
     results.push(r);
   }
-  // The crossovers and ceilings of A and B, at design A's mid-cruise mass: one point task each.
+  // The crossovers and ceilings of A and B, at design A's mid-cruise mass.
   const inputA = build(choiceOf(0));
   const cruiseLeg = inputA.legs.find((l) => l.kind === 'cruise');
   const altitude_m = options.crossoverAltitude_m ?? (cruiseLeg && cruiseLeg.kind === 'cruise' ? cruiseLeg.altitude_m : 10000);
   const rating = options.crossoverRating ?? 'maxCruise';
   const mass_kg = midCruiseMass(results[0]!);
   const condition = { altitude_m, mass_kg, rating, isaDev_K: inputA.isaDev_K };
-  const tasks = [0, total - 1].map((mask) => {
+  const points = [0, total - 1].map((mask): PointOutput => {
     const input = build(choiceOf(mask));
-    const job: PointJob = {
-      kind: 'designFigures',
-      mask,
-      crossover: condition,
-      ceilings: { mass_kg, rating: 'maxClimb', isaDev_K: input.isaDev_K, altitudeRange: options.ceilingAltitudeRange ?? [0, 15000], altitudeStep_m: options.ceilingAltitudeStep_m ?? 1000 },
-    };
-    return { job, run: () => designPoints({ aero: input.aero, propulsion: input.propulsion }, job) };
+    const models = { aero: input.aero, propulsion: input.propulsion };
+    const ceilings = { mass_kg, rating: 'maxClimb', isaDev_K: input.isaDev_K, altitudeRange: options.ceilingAltitudeRange ?? [0, 15000], altitudeStep_m: options.ceilingAltitudeStep_m ?? 1000 } as const;
+    return { crossover: thrustDragCrossover(models, condition), ceilings: flightCeilings(models, ceilings) };
   });
-  const points = pointOutputs(yield { tasks });
-  if (points.length !== 2) return err({ code: 'cancelled', message: `inlet comparison cancelled after ${total} of ${total} missions` });
   return inletComparisonOf(build, options, results, condition, points);
 }
 

@@ -8,7 +8,7 @@ import type { Caution } from '../cautions/caution';
 import { err, ok, type Result } from '../core/result';
 import type { MissionInput, MissionResult } from '../mission/missionTypes';
 import type { AnalysisError, MissionSolver } from './analysisTypes';
-import { flySerially, missionResults, type AnalysisRound, type AnalysisSteps, type PlannedMission, type PointsResults, type RoundResults } from './missionPlan';
+import { flySerially, type AnalysisSteps, type MissionRound, type PlannedMission, type RoundResults } from './missionPlan';
 import { lagrangeWeights, type NeighbourStart } from './warmStart';
 
 export type PayloadRangePointKind = 'maxPayload' | 'mtowFullFuel' | 'ferry' | 'between';
@@ -83,8 +83,7 @@ function pointOf(kind: PayloadRangePointKind, r: MissionResult): PayloadRangePoi
  * MTOW-full-fuel corner; onProgress(done, total) is called once after each
  * mission flown and ends at (missions, missions) (total drops by one after
  * the first mission when that corner does not exist). On the calling thread
- * (missionPlan.ts flySerially); a host with worker threads runs
- * payloadRangeSteps over them instead, with the same answer.
+ * (missionPlan.ts flySerially).
  */
 export function payloadRangeDiagram(
   base: MissionInput,
@@ -144,7 +143,6 @@ export function* payloadRangeSteps(base: MissionInput, options: PayloadRangeOpti
   };
   const corners: FlownPoint[] = [];
   const planned = (payload_kg: number, lane: number, after: readonly number[], ahead: readonly number[]): PlannedMission => ({
-    job: { kind: 'payloadRange', payload_kg },
     input: { ...base, solve: { kind: 'maxRange', payload_kg } },
     after,
     lane,
@@ -157,8 +155,8 @@ export function* payloadRangeSteps(base: MissionInput, options: PayloadRangeOpti
     return err({ code: 'mission_failed', message: `payload-range: the ${what} mission (payload ${payload_kg.toFixed(0)} kg) failed: ${r.status}: ${r.statusMessage}` });
   };
   // One mission alone in its round, in lane 0.
-  function* single(payload_kg: number, what: string): Generator<AnalysisRound, Result<MissionResult, AnalysisError>, RoundResults | PointsResults> {
-    const flown = missionResults(yield { missions: [planned(payload_kg, 0, [], [payload_kg])], laneMemos: true, stopAtFailure: true });
+  function* single(payload_kg: number, what: string): Generator<MissionRound, Result<MissionResult, AnalysisError>, RoundResults> {
+    const flown = yield { missions: [planned(payload_kg, 0, [], [payload_kg])], laneMemos: true, stopAtFailure: true };
     const r = flown.results[0];
     const bad = failure(r, payload_kg, what);
     return bad ?? ok(r!);
@@ -196,7 +194,7 @@ export function* payloadRangeSteps(base: MissionInput, options: PayloadRangeOpti
     const first = lane === 0 ? 0 : down.length;
     return planned(p, lane, Array.from({ length: i - first }, (_, k) => first + k), payloads);
   });
-  const flown = missionResults(yield { missions, laneMemos: true, stopAtFailure: true });
+  const flown = yield { missions, laneMemos: true, stopAtFailure: true };
   if (flown.cancelled) {
     return err({ code: 'cancelled', message: `payload-range cancelled after ${done + flown.results.filter((r) => r !== undefined).length} of ${count.total} missions` });
   }

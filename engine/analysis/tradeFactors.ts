@@ -9,7 +9,7 @@ import type { PropulsionModel } from '../propulsion/propulsionModel';
 import { adjustPropulsion } from './adjustedPropulsion';
 import { describeInstallationMethod } from '../propulsion/installationMethod';
 import type { AnalysisError, MissionSolver } from './analysisTypes';
-import { flySerially, missionResults, type AnalysisSteps, type PlannedMission } from './missionPlan';
+import { flySerially, type AnalysisSteps, type PlannedMission } from './missionPlan';
 import { STEP_ORDER, stepStart, type StepMission } from './warmStart';
 
 export type TradeFactorName = 'recovery' | 'dragCount' | 'tsfc' | 'oew';
@@ -67,8 +67,7 @@ const WRAPPER_METHOD =
  * payload-and-range, it is flown once and its payload and range (in the
  * mission's distance basis)
  * become the design mission. 1 (+1) + 16 missions, on the calling thread
- * (missionPlan.ts flySerially); a host with worker threads runs
- * tradeFactorsSteps over them instead, with the same answer.
+ * (missionPlan.ts flySerially).
  */
 export function tradeFactors(input: MissionInput, options: TradeFactorOptions): Result<TradeFactorsResult, AnalysisError> {
   const total = 17 + (input.solve.kind === 'payloadRange' ? 0 : 1);
@@ -131,11 +130,7 @@ export function* tradeFactorsSteps(input: MissionInput, options: TradeFactorOpti
   const cancelled = (): Result<never, AnalysisError> => err({ code: 'cancelled', message: `trade factors cancelled after ${done} of ${total} missions` });
   let design = input;
   if (input.solve.kind !== 'payloadRange') {
-    const flown = missionResults(yield {
-      missions: [{ job: { kind: 'trade', factor: null, u: 0, solve: input.solve }, input, after: [], lane: 0, start: () => undefined }],
-      laneMemos: false,
-      stopAtFailure: true,
-    });
+    const flown = yield { missions: [{ input, after: [], lane: 0, start: () => undefined }], laneMemos: false, stopAtFailure: true };
     const first = flown.results[0];
     if (first === undefined) return cancelled();
     done++;
@@ -144,12 +139,11 @@ export function* tradeFactorsSteps(input: MissionInput, options: TradeFactorOpti
   }
   // Index 0 the baseline; factor k's step j (STEP_ORDER[j]) at 1 + 4k + j, in its lane k + 1.
   const at = (k: number, j: number) => 1 + STEP_ORDER.length * k + j;
-  const missions: PlannedMission[] = [{ job: { kind: 'trade', factor: null, u: 0, solve: design.solve }, input: design, after: [], lane: 0, start: () => undefined }];
+  const missions: PlannedMission[] = [{ input: design, after: [], lane: 0, start: () => undefined }];
   FACTOR_NAMES.forEach((name, k) => {
     STEP_ORDER.forEach((u, j) => {
       const before = STEP_ORDER.slice(0, j).map((_, i) => at(k, i));
       missions.push({
-        job: { kind: 'trade', factor: name, u, solve: design.solve },
         input: tradeMissionInput(design, name, u, cRam, options.recoveryModel),
         // The first step starts cold (stepStart with the baseline alone): it reads nothing.
         after: j === 0 ? [] : [0, ...before],
@@ -167,7 +161,7 @@ export function* tradeFactorsSteps(input: MissionInput, options: TradeFactorOpti
       });
     });
   });
-  const round = missionResults(yield { missions, laneMemos: false, stopAtFailure: false });
+  const round = yield { missions, laneMemos: false, stopAtFailure: false };
   const base = round.results[0];
   if (base === undefined) return cancelled();
   done++;

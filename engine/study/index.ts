@@ -8,4 +8,3 @@ export { prepareStudy, studyFailureLines, type ProjectFailure, type Study, type 
 export { cannotReadMessage, readFailureReason } from './readProblem';
 export { fileStem, HISTORY_COLUMNS, historyCsv, legsCsv, type CsvUnits } from './resultsCsv';
 export { prepareSweep, type SweepStudy, type SweepStudyOptions } from './prepareSweep';
-export { analysisJobBase, type AnalysisSpec } from './analysisJobBase';

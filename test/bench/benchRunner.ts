@@ -61,31 +61,6 @@ export function runCase(section: string, bench: BenchCase, timing: BenchTiming =
   return resultOf(section, bench.name, perCall, calls, start);
 }
 
-/** runCase for a case whose calls return promises: each call awaited before the next, in batches as runCase's. */
-export async function runCaseAsync(section: string, bench: BenchCase, timing: BenchTiming = DEFAULT_TIMING): Promise<BenchResult> {
-  let batch = 1;
-  const warmEnd = performance.now() + timing.warmUp_s * 1000;
-  let warmCalls = 0;
-  while (performance.now() < warmEnd || warmCalls < timing.minWarmUpCalls) {
-    const t0 = performance.now();
-    for (let i = 0; i < batch; i++) sink = await bench.run();
-    warmCalls += batch;
-    if (performance.now() - t0 < 1 && batch < 1 << 24) batch *= 2;
-  }
-  const perCall: number[] = [];
-  let calls = 0;
-  const start = performance.now();
-  const end = start + timing.measure_s * 1000;
-  do {
-    const t0 = performance.now();
-    for (let i = 0; i < batch; i++) sink = await bench.run();
-    const t1 = performance.now();
-    perCall.push((t1 - t0) / 1000 / batch);
-    calls += batch;
-  } while (performance.now() < end || perCall.length < timing.minBatches);
-  return resultOf(section, bench.name, perCall, calls, start);
-}
-
 function formatTime(t_s: number): string {
   if (t_s >= 1) return `${t_s.toFixed(2)} s`;
   if (t_s >= 1e-3) return `${(t_s * 1e3).toFixed(2)} ms`;

@@ -2,16 +2,12 @@
 export interface BenchCase {
   readonly name: string;
   readonly run: () => unknown;
-  /** True when `run` returns a promise to wait for (work on other threads): timed by runCaseAsync, one call at a time. */
-  readonly async?: true;
 }
 
 /** A group of cases printed under one title; each file in test/bench/sections exports one as `section`. */
 export interface BenchSection {
   readonly title: string;
   readonly cases: readonly BenchCase[];
-  /** Ends what the cases started (worker threads), after the section is timed. */
-  readonly dispose?: () => Promise<void>;
 }
 
 export interface BenchResult {

@@ -1,5 +1,5 @@
 import { readFileSync } from 'node:fs';
-import { fileURLToPath, pathToFileURL } from 'node:url';
+import { fileURLToPath } from 'node:url';
 import { thrustDragCrossover } from '../../../engine/analysis/crossover';
 import { flightEnvelope } from '../../../engine/analysis/envelope';
 import { compareInlets } from '../../../engine/analysis/inletComparison';
@@ -12,8 +12,6 @@ import { prepareStudy } from '../../../engine/study';
 import { buildMissionInput } from '../../../engine/project/buildMissionInput';
 import { parseProject } from '../../../engine/project/parseProject';
 import { parseDeckCsv } from '../../../engine/propulsion/deckCsv';
-import { compareInletsSteps, payloadRangeSteps, tradeFactorsSteps } from '../../../engine/analysis';
-import { createAnalysisPool, type AnalysisPool, type StudySource } from '../../../hostio/analysisPool';
 import { callCounter, type BenchSection } from '../benchTypes';
 
 // The demo project (invented aircraft and engine); inputs cycle so each call differs.
@@ -28,21 +26,6 @@ const build = inletFactorBuilder(expectOk(expectOk(prepareStudy(project, { name:
 
 const next = callCounter(8);
 
-// The analyses over a persistent pool of two worker threads (hostio/analysisPool.ts), as a host keeps one: started at
-// the first call (its start-up falls in the warm-up), each call then costs its missions over the threads and the
-// messages. The worker is the bundle beside the bench's (scripts/bench.mjs), or the TypeScript source under tsx.
-const source: StudySource = { project, deckFile: { name: 'demo-engine.deck.csv', text: readFileSync(`${root}demo-engine.deck.csv`, 'utf8') } };
-const POOL_THREADS = 2;
-let pool: AnalysisPool | null = null;
-const poolOf = (): AnalysisPool => {
-  if (pool === null) {
-    const workerUrl =
-      process.env.BLOCKWISE_BENCH_BUILD === 'bundle' ? new URL('./analysisWorker.mjs', pathToFileURL(process.argv[1]!)) : new URL('../../../hostio/sourceAnalysisWorker.mjs', import.meta.url);
-    pool = createAnalysisPool({ workerUrl, threads: POOL_THREADS });
-  }
-  return pool;
-};
-
 export const section: BenchSection = {
   title: 'analyses (demo project)',
   cases: [
@@ -52,16 +35,5 @@ export const section: BenchSection = {
     { name: 'payloadRangeDiagram (8 missions on the demo: no MTOW-full-fuel corner)', run: () => payloadRangeDiagram(input, {}) },
     { name: 'tradeFactors (17 missions)', run: () => tradeFactors(input, {}) },
     { name: 'compareInlets (16 missions + crossovers, ceilings)', run: () => compareInlets(build, { nameA, nameB }) },
-    { name: `payloadRangeDiagram, ${POOL_THREADS} worker threads (persistent pool)`, async: true, run: () => poolOf().run(source, { kind: 'payloadRange' }, () => payloadRangeSteps(input, {})) },
-    { name: `tradeFactors, ${POOL_THREADS} worker threads (persistent pool)`, async: true, run: () => poolOf().run(source, { kind: 'trade', cRam: 1.35 }, () => tradeFactorsSteps(input, {})) },
-    {
-      name: `compareInlets, ${POOL_THREADS} worker threads (persistent pool)`,
-      async: true,
-      run: () => poolOf().run(source, { kind: 'compare', nameA, nameB }, () => compareInletsSteps(build, { nameA, nameB })),
-    },
   ],
-  dispose: async () => {
-    await pool?.close();
-    pool = null;
-  },
 };

@@ -136,7 +136,7 @@ describe('warm starts of an analysis', () => {
     const wp = expectOk(payloadRangeDiagram(demo, { solve: warmP.solve }), 'warm payload-range');
     cp.points.forEach((p, i) => expectClose(wp.points[i]!.blockFuel_kg, p.blockFuel_kg, { abs: FUEL_TOLERANCE_KG }, `point ${i}`));
     expect(warmP.total()).toBeLessThan(coldP.total());
-  });
+  }, 60_000);
 
   it('the inlet comparison gives the cold breakdown within the fuel band in fewer passes, its parts still adding up', () => {
     const [nameA, nameB] = [project.inlets[0]!.name, project.inlets[1]!.name];
@@ -152,7 +152,7 @@ describe('warm starts of an analysis', () => {
     expectClose(w.breakdown.sumOfParts_kg, w.breakdown.total_kg, { abs: 1e-9 }, 'Shapley efficiency (Shapley 1953)');
     expect(w.designs[0].ceilings).toEqual(c.designs[0].ceilings);
     expect(warm.total()).toBeLessThan(cold.total());
-  });
+  }, 60_000);
 });
 
 describe('analysisSolver, the analyses\' default solver', () => {
@@ -164,7 +164,7 @@ describe('analysisSolver, the analyses\' default solver', () => {
     const [nameA, nameB] = [project.inlets[0]!.name, project.inlets[1]!.name];
     const build = inletFactorBuilder(expectOk(expectOk(prepareStudy(project, { name: 'demo-engine.deck.csv', text: readFileSync(`${root}demo-engine.deck.csv`, 'utf8') }), 'demo study').inletPair(nameA, nameB), 'inlet pair'));
     expect(expectOk(compareInlets(build, { nameA, nameB }), 'default compare')).toEqual(expectOk(compareInlets(build, { nameA, nameB, solve: withHistory }), 'compare with history'));
-  });
+  }, 60_000);
 
   it('the payload-range diagram with one pass memo per lane: every point within the fuel band of its own memo\'s', () => {
     // The shared memo interpolates the alternate's descent and the contingency hold between flights of the same
