@@ -18,6 +18,19 @@ const demo = expectOk(buildMissionInput(project, { deck }), 'demo input');
 
 const next = callCounter(8);
 
+// The installed model keeps its rated points across solves (engine/propulsion/ratingMemo.ts), so a mission repeated
+// on one model is timed with a warm memo: three rows tell the memo's share apart. Fresh: a model built for every
+// call (buildMissionInput's propulsion alone, timed in its own row). Same: one model, the same mission every call.
+// Stepped: one model, payload and range stepped through a cycle of 15 missions (the live work of a sweep or an
+// analysis on one model).
+const demoPayload_kg = demo.solve.payload_kg;
+const demoRange_m = demo.solve.kind === 'payloadRange' ? demo.solve.range_m : 3000 * 1852;
+const freshModel = (): MissionInput['propulsion'] => expectOk(buildMissionInput(project, { deck }), 'demo input').propulsion;
+const stepped = callCounter(15);
+function steppedDemo(k: number): MissionInput {
+  return { ...demo, solve: { kind: 'payloadRange', payload_kg: demoPayload_kg + 100 * (k % 5), range_m: demoRange_m - 100 * 1852 * (k % 3) } };
+}
+
 function withPayload(input: MissionInput, delta_kg: number): MissionInput {
   return { ...input, solve: { ...input.solve, payload_kg: input.solve.payload_kg + delta_kg } };
 }
@@ -42,6 +55,10 @@ export const section: BenchSection = {
       name: 'demo project, payloadRange with fuel iteration',
       run: () => solveMission({ ...demo, solve: { kind: 'payloadRange', payload_kg: demo.solve.payload_kg + 10 * next(), range_m: 1500 * 1852 } }),
     },
+    { name: 'demo project, payloadRange, a model built fresh for each call (model build included)', run: () => solveMission({ ...demo, propulsion: freshModel() }) },
+    { name: 'demo project, building the installed model alone (buildMissionInput)', run: () => freshModel() },
+    { name: 'demo project, payloadRange, the same model and the same mission each call (warm memo)', run: () => solveMission(demo) },
+    { name: 'demo project, payloadRange, the same model, payload and range stepped through 15 missions', run: () => solveMission(steppedDemo(stepped())) },
     { name: 'analytic models, payloadRange + ICAO reserves', run: () => solveMission(withPayload(analytic, 10 * next())) },
     { name: 'analytic models, maxRange', run: () => solveMission({ ...analytic, solve: { kind: 'maxRange', payload_kg: 10000 + 10 * next() } }) },
   ],
