@@ -7,16 +7,17 @@
  */
 import type { InstalledPoint, RatingName } from '../propulsion/propulsionModel';
 import type { SpeedSchedule } from './missionTypes';
-import { energyShareFactor, pressureAltitudeRate } from './energyShareFactor';
+import { pressureAltitudeRate } from './energyShareFactor';
 import { airPointIn, fuelExhaustedEvents, makeSample, pathDerivative } from './flightPoint';
 import { flyMonotoneSegment, missionDomain } from './flySegment';
 import { pathBreakAltitudes } from './stepBreaks';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
 import { flyLevelSpeedChange } from './levelSpeedChange';
 import { BASE_MONOTONE_STEP, BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
-import { heldCasMach, LAPSE_JUMPS_M, missionAir, type MissionAir } from './missionAtmosphere';
+import { LAPSE_JUMPS_M, type MissionAir } from './missionAtmosphere';
 import { S_ALT, S_MASS, S_TAS, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
 import { schedulePhases } from './speedSchedule';
+import { stageTrack } from './stageMemo';
 import { msg, q } from '../units/messageParts';
 import { FOOT_M } from '../units/unitTable';
 
@@ -34,10 +35,10 @@ export function makeClimbSegment(
 ): Segment {
   const input = ctx.input;
   const dev = target.env.isaDev_K;
-  const machOf = held === 'mach' ? () => value : heldCasMach(value);
-  // What depends on the altitude alone (air data, Mach, rated thrust, energy share factor), kept for the last
-  // altitude asked: an RK4 step evaluates its two middle stages at one altitude and its last stage and accepted
-  // point at another (pure functions of it, so keeping them cannot change any answer).
+  // What depends on the altitude alone (air data, Mach, rated thrust, energy share factor): kept per altitude on the
+  // model (stageMemo.ts), and the last altitude's here, since an RK4 step evaluates its two middle stages at one
+  // altitude and its last stage and accepted point at another (pure functions of it: no answer can change).
+  const track = stageTrack(input.propulsion, held, value, dev, rating);
   let cached = false;
   let cachedAltitude_m = 0;
   let air: MissionAir | null = null;
@@ -46,10 +47,11 @@ export function makeClimbSegment(
   let f = 1;
   const prepare = (h: number): void => {
     if (!cached || !Object.is(h, cachedAltitude_m)) {
-      air = missionAir(h, dev);
-      mach = machOf(air.pressure_Pa);
-      th = input.propulsion.atRating({ altitude_m: h, mach, isaDev_K: dev }, rating);
-      f = energyShareFactor(held, mach, air.lapse_K_m, air.temperature_K, air.isaTemperature_K);
+      const stage = track.at(h);
+      air = stage.air;
+      mach = stage.mach;
+      th = stage.engine;
+      f = stage.factor;
       cachedAltitude_m = h;
       cached = true;
     }

@@ -8,16 +8,17 @@
  */
 import type { InstalledPoint } from '../propulsion/propulsionModel';
 import type { SpeedSchedule } from './missionTypes';
-import { energyShareFactor, pressureAltitudeRate } from './energyShareFactor';
+import { pressureAltitudeRate } from './energyShareFactor';
 import { airPointIn, fuelExhaustedEvents, makeSample, pathDerivative, ratingPoint, thrustPoint } from './flightPoint';
 import { flyMonotoneSegment, missionDomain } from './flySegment';
 import { pathBreakAltitudes } from './stepBreaks';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
 import { flyLevelSpeedChange } from './levelSpeedChange';
 import { BASE_MONOTONE_STEP, BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
-import { G0_M_S2, heldCasMach, LAPSE_JUMPS_M, missionAir, type MissionAir } from './missionAtmosphere';
+import { G0_M_S2, LAPSE_JUMPS_M, missionAir, type MissionAir } from './missionAtmosphere';
 import { S_ALT, S_MASS, S_TAS, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
 import { schedulePhases } from './speedSchedule';
+import { stageTrack } from './stageMemo';
 import { appendCaution } from './timeHistoryBuilder';
 import { CAUTION_CATALOGUE } from '../cautions/cautionCatalogue';
 import { msg, q, withParts } from '../units/messageParts';
@@ -41,10 +42,10 @@ function makeDescentSegment(
 ): Segment {
   const input = ctx.input;
   const dev = target.env.isaDev_K;
-  const machOf = held === 'mach' ? () => value : heldCasMach(value);
-  // What depends on the altitude alone (air data, Mach, energy share factor, idle thrust), kept for the last
-  // altitude asked: an RK4 step evaluates its two middle stages at one altitude and its last stage and accepted
-  // point at another (pure functions of it, so keeping them cannot change any answer).
+  // What depends on the altitude alone (air data, Mach, energy share factor, idle thrust): kept per altitude on the
+  // model (stageMemo.ts), and the last altitude's here, since an RK4 step evaluates its two middle stages at one
+  // altitude and its last stage and accepted point at another (pure functions of it: no answer can change).
+  const track = stageTrack(input.propulsion, held, value, dev, mode.kind === 'idle' ? 'flightIdle' : null);
   let cached = false;
   let cachedAltitude_m = 0;
   let cachedAir: MissionAir | null = null;
@@ -53,10 +54,11 @@ function makeDescentSegment(
   let cachedIdle: InstalledPoint | null = null;
   const prepare = (h: number): void => {
     if (!cached || !Object.is(h, cachedAltitude_m)) {
-      cachedAir = missionAir(h, dev);
-      cachedMach = machOf(cachedAir.pressure_Pa);
-      cachedFactor = energyShareFactor(held, cachedMach, cachedAir.lapse_K_m, cachedAir.temperature_K, cachedAir.isaTemperature_K);
-      cachedIdle = mode.kind === 'idle' ? input.propulsion.atRating({ altitude_m: h, mach: cachedMach, isaDev_K: dev }, 'flightIdle') : null;
+      const stage = track.at(h);
+      cachedAir = stage.air;
+      cachedMach = stage.mach;
+      cachedFactor = stage.factor;
+      cachedIdle = stage.engine;
       cachedAltitude_m = h;
       cached = true;
     }
