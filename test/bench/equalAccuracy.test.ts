@@ -1,12 +1,16 @@
 import { describe, expect, it } from 'vitest';
 import { formatCliTiming } from './cliTiming';
-import { EQUAL_ACCURACY, formatEqualAccuracy, PEER_RTOLS } from './equalAccuracy';
+import { solveMission } from '../../engine/mission/solveMission';
+import { BLOCKWISE_STEP_SCALES, EQUAL_ACCURACY, formatEqualAccuracy, loosenBlockwise, PEER_RTOLS } from './equalAccuracy';
+import { loadDemoInput, PEER_PROJECT_PATH } from './peer/demoInput';
 
 // Formatting only: the bench measures, tests never time anything.
 describe('equal-accuracy comparison and CLI timing text (no timing assertions)', () => {
   it('the tolerances are tried from tight to loose and equal accuracy is 0.01 %', () => {
     expect(EQUAL_ACCURACY).toBe(1e-4);
     expect([...PEER_RTOLS].sort((a, b) => a - b)).toEqual(PEER_RTOLS);
+    expect([...BLOCKWISE_STEP_SCALES].sort((a, b) => a - b)).toEqual(BLOCKWISE_STEP_SCALES);
+    expect(BLOCKWISE_STEP_SCALES[0]).toBeGreaterThan(1);
   });
 
   it('formatEqualAccuracy prints the peer tolerance chosen, its time and difference, and the ratio', () => {
@@ -31,6 +35,44 @@ describe('equal-accuracy comparison and CLI timing text (no timing assertions)',
     expect(text).toContain('rtol 1e-3: block fuel 5003.000 kg, +0.0400 %, 500.00 ms  (outside)');
     expect(text).toContain('Python peer at rtol 1e-4 (median of 3): 800.00 ms');
     expect(text).toContain('peer / Blockwise: 400 x');
+  });
+
+  it('formatEqualAccuracy prints Blockwise loosened: each step scale tried, the one chosen and the second ratio', () => {
+    const b = { medianMission_s: 0.002, blockFuel_kg: 5000.1, tightBlockFuel_kg: 5000, relativeDifference: 2e-5 };
+    const text = formatEqualAccuracy({
+      tolerance: 1e-4,
+      blockwise: b,
+      blockwiseLoosened: {
+        ...b,
+        medianMission_s: 0.001,
+        stepScale: 4,
+        tries: [
+          { stepScale: 2, status: 'ok', blockFuel_kg: 5000.2, relativeDifference: 4e-5 },
+          { stepScale: 4, status: 'ok', blockFuel_kg: 5000.3, relativeDifference: 6e-5 },
+          { stepScale: 8, status: 'ok', blockFuel_kg: 5001, relativeDifference: 2e-4 },
+        ],
+      },
+      peer: { tightBlockFuel_kg: 5001, tries: [], rtol: 1e-4, medianMission_s: 0.8, blockFuel_kg: 5001.2, relativeDifference: 4e-5, repeat: 3 },
+      ratio: 400,
+      ratioLoosened: 800,
+    });
+    expect(text).toContain('stepScale 8: block fuel 5001.000 kg, +0.0200 %  (outside)');
+    expect(text).toContain('Blockwise loosened (stepScale 4, the loosest within): 1.00 ms');
+    expect(text).toContain('peer / Blockwise: 400 x (Blockwise at production steps)');
+    expect(text).toContain('loosest setting within 0.01 %: 800 x');
+  });
+
+  it('loosenBlockwise keeps the loosest step scale whose solve is ok and within 0.01 % of the fine-step answer (frozen demo)', () => {
+    const { input } = loadDemoInput(undefined, PEER_PROJECT_PATH);
+    const tight = solveMission(input, { stepScale: 0.125 });
+    const { tries, chosen } = loosenBlockwise(input, tight.blockFuel_kg);
+    const within = (t: (typeof tries)[number]) => t.status === 'ok' && Math.abs(t.relativeDifference) <= EQUAL_ACCURACY;
+    // Tried in order, stopping at the first outside; the chosen one is the last inside (1, production, when none is).
+    expect(tries.map((t) => t.stepScale)).toEqual(BLOCKWISE_STEP_SCALES.slice(0, tries.length));
+    expect(tries.slice(0, -1).every(within)).toBe(true);
+    const inside = tries.filter(within);
+    expect(chosen).toBe(inside.length > 0 ? inside[inside.length - 1]!.stepScale : 1);
+    for (const t of tries) expect(t.relativeDifference).toBeCloseTo((t.blockFuel_kg - tight.blockFuel_kg) / tight.blockFuel_kg, 12);
   });
 
   it('formatEqualAccuracy and formatCliTiming say why a part did not run', () => {
