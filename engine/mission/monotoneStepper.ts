@@ -23,8 +23,8 @@
  * (from memory); step ends on slope breaks - common practice for
  * piecewise-linear tables.
  */
-import { domainExit, integrateSegment, UNBOUNDED_DOMAIN, type SampleSink, type SegmentRun, type StateDomain } from './integrator';
-import { S_GROUND, STATE_SIZE, type Segment, type SegmentStop, type StateVector } from './missionState';
+import { integrateSegment, UNBOUNDED_DOMAIN, type SampleSink, type SegmentRun, type StateDomain } from './integrator';
+import { S_ALT, S_GROUND, S_MASS, S_TAS, STATE_SIZE, type Segment, type SegmentStop, type StateVector } from './missionState';
 
 export interface MonotonePlan {
   /** State index stepped on (S_ALT or S_TAS). */
@@ -77,9 +77,20 @@ export function monotoneStepEnds(from: number, to: number, breaks: readonly numb
 /** Fraction of a step by which a segment's first and last stages are moved inside it. */
 const NUDGE = 1e-9;
 
-function finite(y: Float64Array): boolean {
-  for (let i = 0; i < STATE_SIZE; i++) if (!Number.isFinite(y[i])) return false;
-  return true;
+/**
+ * Whether any component of `y` is NaN or infinite: 0 x a finite value is (+/-)0 and their sum is (+/-)0, while
+ * 0 x NaN or 0 x Infinity is NaN (IEEE 754), so one sum replaces a Number.isFinite test per component.
+ */
+function notFinite(y: Float64Array): boolean {
+  return y[0]! * 0 + y[1]! * 0 + y[2]! * 0 + y[3]! * 0 + y[4]! * 0 + y[5]! * 0 !== 0;
+}
+
+/** Whether `y` is outside `domain`: the same test as integrator.ts `domainExit(domain, y) !== null`, without the reason. */
+function outside(domain: StateDomain, y: StateVector): boolean {
+  if (notFinite(y)) return true;
+  const h = y[S_ALT];
+  const tas = y[S_TAS];
+  return h < domain.minAltitude_m || h > domain.maxAltitude_m || !(y[S_MASS] > domain.minMass_kg) || tas < 0 || tas > domain.maxTas_m_s;
 }
 
 /**
@@ -96,9 +107,11 @@ export function integrateMonotone(
 ): SegmentRun {
   const c = plan.component;
   const direction = plan.to >= start[c] ? 1 : -1;
-  const rhs = (y: StateVector): Float64Array => (segment.derivative !== undefined ? segment.derivative(y) : segment.evaluate(y).derivative);
-  let y = Float64Array.from(start);
-  const groundProgress = (d: Float64Array) => domain.requireGroundProgress !== true || d[S_GROUND] > 0;
+  const minRate = plan.minRate;
+  const sampleFree = segment.derivative !== undefined;
+  const rhs = (y: StateVector): Float64Array => (sampleFree ? segment.derivative!(y) : segment.evaluate(y).derivative);
+  let y = start.slice();
+  const groundProgress = domain.requireGroundProgress === true;
   const timeIntegrator = (from: StateVector, skipFirst: boolean): SegmentRun => {
     let first = skipFirst;
     return integrateSegment(
@@ -111,69 +124,85 @@ export function integrateMonotone(
       domain,
     );
   };
-  if (domainExit(domain, y) !== null) return timeIntegrator(y, false);
+  if (outside(domain, y)) return timeIntegrator(y, false);
   let ev = segment.evaluate(y);
-  if (!finite(ev.derivative) || !(direction * ev.derivative[c] >= plan.minRate) || !groundProgress(ev.derivative)) return timeIntegrator(y, false);
+  let d = ev.derivative;
+  if (notFinite(d) || !(direction * d[c] >= minRate) || (groundProgress && !(d[S_GROUND] > 0))) return timeIntegrator(y, false);
   const others = segment.events.filter((e) => e.stop !== plan.targetStop);
-  for (const e of others) if (e.g(y, ev.sample) >= 0) return timeIntegrator(y, false);
+  const eventCount = others.length;
+  for (let e = 0; e < eventCount; e++) if (others[e]!.g(y, ev.sample) >= 0) return timeIntegrator(y, false);
   sink(y, ev.sample);
   const ends = monotoneStepEnds(start[c], plan.to, plan.breaks, plan.maxStep);
   const tmp = new Float64Array(STATE_SIZE) as StateVector;
+  const k1 = new Float64Array(STATE_SIZE);
   const k2 = new Float64Array(STATE_SIZE);
   const k3 = new Float64Array(STATE_SIZE);
   // The segment's own equations hold up to its ends, but the models there may already be those of the next
   // segment (the tropopause: the lapse rate changes at 11 km), so the last stage is taken a hair inside, NUDGE of
   // the step, and so is the first where the start lies on one of the plan's jumps (one extra evaluation); elsewhere
   // the right-hand side is continuous and the first stage is the start's own evaluation.
-  let f1: Float64Array = ev.derivative;
+  let f1: Float64Array = d;
   if (plan.jumps === undefined || plan.jumps.includes(start[c])) {
-    const first = Float64Array.from(y) as StateVector;
+    const first = start.slice();
     const firstStep = (ends[0] ?? plan.to) - start[c];
     first[c] = start[c] + NUDGE * firstStep;
-    if (domainExit(domain, first) !== null) return timeIntegrator(y, true);
+    if (outside(domain, first)) return timeIntegrator(y, true);
     f1 = rhs(first);
   }
   let s0 = start[c];
-  for (let j = 0; j < ends.length; j++) {
+  const stepCount = ends.length;
+  for (let j = 0; j < stepCount; j++) {
     const s1 = ends[j]!;
-    const last = j === ends.length - 1;
     const h = s1 - s0;
+    const half = 0.5 * h;
+    const mid = s0 + half;
     // Stage slopes dy/ds = f / f_c; a stage below the least rate hands the step to the time integrator.
-    if (j > 0) f1 = ev.derivative;
-    const r1 = f1[c];
-    if (!(direction * r1 >= plan.minRate)) return timeIntegrator(y, true);
-    for (let i = 0; i < STATE_SIZE; i++) tmp[i] = y[i] + (0.5 * h * f1[i]) / r1;
-    tmp[c] = s0 + 0.5 * h;
-    if (domainExit(domain, tmp) !== null) return timeIntegrator(y, true);
-    const f2 = rhs(tmp);
-    const r2 = f2[c];
-    if (!(direction * r2 >= plan.minRate)) return timeIntegrator(y, true);
-    for (let i = 0; i < STATE_SIZE; i++) k2[i] = f2[i] / r2;
-    for (let i = 0; i < STATE_SIZE; i++) tmp[i] = y[i] + 0.5 * h * k2[i];
-    tmp[c] = s0 + 0.5 * h;
-    if (domainExit(domain, tmp) !== null) return timeIntegrator(y, true);
-    const f3 = rhs(tmp);
-    const r3 = f3[c];
-    if (!(direction * r3 >= plan.minRate)) return timeIntegrator(y, true);
-    for (let i = 0; i < STATE_SIZE; i++) k3[i] = f3[i] / r3;
-    for (let i = 0; i < STATE_SIZE; i++) tmp[i] = y[i] + h * k3[i];
-    tmp[c] = last ? s1 - NUDGE * h : s1;
-    if (domainExit(domain, tmp) !== null) return timeIntegrator(y, true);
-    const f4 = rhs(tmp);
-    const r4 = f4[c];
-    if (!(direction * r4 >= plan.minRate)) return timeIntegrator(y, true);
-    const next = new Float64Array(STATE_SIZE) as StateVector;
-    for (let i = 0; i < STATE_SIZE; i++) next[i] = y[i] + (h / 6) * (f1[i] / r1 + 2 * k2[i] + 2 * k3[i] + f4[i] / r4);
-    next[c] = s1;
-    if (domainExit(domain, next) !== null) return timeIntegrator(y, true);
-    const nextEv = segment.evaluate(next);
-    if (!finite(nextEv.derivative) || !(direction * nextEv.derivative[c] >= plan.minRate) || !groundProgress(nextEv.derivative)) {
-      return timeIntegrator(y, true);
+    if (j > 0) f1 = d;
+    const r1 = f1[c]!;
+    if (!(direction * r1 >= minRate)) return timeIntegrator(y, true);
+    for (let i = 0; i < STATE_SIZE; i++) {
+      const f = f1[i]!;
+      k1[i] = f / r1;
+      tmp[i] = y[i] + (half * f) / r1;
     }
-    for (const e of others) if (e.g(next, nextEv.sample) >= 0) return timeIntegrator(y, true);
+    tmp[c] = mid;
+    if (outside(domain, tmp)) return timeIntegrator(y, true);
+    const f2 = rhs(tmp);
+    const r2 = f2[c]!;
+    if (!(direction * r2 >= minRate)) return timeIntegrator(y, true);
+    for (let i = 0; i < STATE_SIZE; i++) {
+      const k = f2[i]! / r2;
+      k2[i] = k;
+      tmp[i] = y[i] + half * k;
+    }
+    tmp[c] = mid;
+    if (outside(domain, tmp)) return timeIntegrator(y, true);
+    const f3 = rhs(tmp);
+    const r3 = f3[c]!;
+    if (!(direction * r3 >= minRate)) return timeIntegrator(y, true);
+    for (let i = 0; i < STATE_SIZE; i++) {
+      const k = f3[i]! / r3;
+      k3[i] = k;
+      tmp[i] = y[i] + h * k;
+    }
+    tmp[c] = j === stepCount - 1 ? s1 - NUDGE * h : s1;
+    if (outside(domain, tmp)) return timeIntegrator(y, true);
+    const f4 = rhs(tmp);
+    const r4 = f4[c]!;
+    if (!(direction * r4 >= minRate)) return timeIntegrator(y, true);
+    const next = new Float64Array(STATE_SIZE) as StateVector;
+    const sixth = h / 6;
+    for (let i = 0; i < STATE_SIZE; i++) next[i] = y[i] + sixth * (k1[i]! + 2 * k2[i]! + 2 * k3[i]! + f4[i]! / r4);
+    next[c] = s1;
+    if (outside(domain, next)) return timeIntegrator(y, true);
+    const nextEv = segment.evaluate(next);
+    const nd = nextEv.derivative;
+    if (notFinite(nd) || !(direction * nd[c] >= minRate) || (groundProgress && !(nd[S_GROUND] > 0))) return timeIntegrator(y, true);
+    for (let e = 0; e < eventCount; e++) if (others[e]!.g(next, nextEv.sample) >= 0) return timeIntegrator(y, true);
     sink(next, nextEv.sample);
     y = next;
     ev = nextEv;
+    d = nd;
     s0 = s1;
   }
   return { end: y, endSample: ev.sample, stop: plan.targetStop };

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
+import { integrateSegment, type StateDomain } from '../../../engine/mission/integrator';
 import { integrateMonotone, monotoneStepEnds } from '../../../engine/mission/monotoneStepper';
-import { S_ALT, S_MASS, S_TIME, STATE_SIZE, type FlightSample, type Segment, type StateVector } from '../../../engine/mission/missionState';
+import { S_ALT, S_GROUND, S_MASS, S_TAS, S_TIME, STATE_SIZE, type FlightSample, type Segment, type StateVector } from '../../../engine/mission/missionState';
 import { expectClose } from '../../support/assertInDelta';
 
 const SAMPLE: FlightSample = {
@@ -115,5 +116,31 @@ describe('integrateMonotone', () => {
     // A continuous right-hand side gives the closed form either way.
     const smooth = integrateMonotone(linearCeilingClimb(a, b, q), start(10000), () => {}, { ...plan(600), jumps: [] });
     expectClose(smooth.end[S_MASS], 10000 - q * exactTime, { rel: 1e-8 }, 'closed form m0 - q t');
+  });
+  it('integrateMonotone leaves a start outside the domain to the time integrator, which names the bound (NaN, altitude, mass, TAS)', () => {
+    const domain: StateDomain = { minAltitude_m: -100, maxAltitude_m: 20000, minMass_kg: 5000, maxTas_m_s: 400 };
+    const cases: [number, number][] = [
+      [S_GROUND, Number.NaN],
+      [S_TIME, Number.POSITIVE_INFINITY],
+      [S_ALT, -200],
+      [S_MASS, 5000],
+      [S_TAS, -1],
+      [S_TAS, 401],
+    ];
+    for (const [component, value] of cases) {
+      const y = start(10000);
+      y[component] = value;
+      const monotone = integrateMonotone(linearCeilingClimb(a, b, q), y, () => {}, plan(600), domain);
+      const timed = integrateSegment(linearCeilingClimb(a, b, q), y, () => {}, domain);
+      expect(monotone.stop).toBe('left_domain');
+      expect(monotone.domainExit).toBe(timed.domainExit);
+    }
+    // Inside it (negative components are finite: -0 from 0 x a negative value must not read as NaN), the stepper flies to the target.
+    const inside = start(10000);
+    inside[S_GROUND] = -5;
+    inside[S_TIME] = -1;
+    const run = integrateMonotone(linearCeilingClimb(a, b, q), inside, () => {}, plan(600), domain);
+    expect(run.stop).toBe('altitude_reached');
+    expectClose(run.end[S_TIME], exactTime - 1, { rel: 1e-6 }, 'closed form ln(a / (a - b h)) / b, within the RK4 truncation of 600 m steps');
   });
 });
