@@ -27,7 +27,7 @@ import { prepareInlet, type PreparedInlet } from './inletRecovery';
 import { createRatingMemo, RATING_MEMO_ENTRIES } from './ratingMemo';
 import { defaultInstallationMethod, type InstallationMethodId } from './installationMethod';
 import { validateInstallation, type InstallationSettings } from './installationCorrections';
-import { newPartPowerSolve, solvePartPower } from './partPowerSolve';
+import { newPartPowerSolve, PART_POWER_MEMO_CONDITIONS, solvePartPower } from './partPowerSolve';
 import { conditionKey, sameFlightCondition, type FlightCondition, type InstalledPoint, type PartPowerPoint, type PropulsionModel, type RatingName, type SlopeBreaks, type ThrustLimit } from './propulsionModel';
 
 export type { AccessError, DeckAccess, DeckPoint } from './deckAccess';
@@ -58,6 +58,11 @@ export interface InstalledModelOptions {
    * it, only how often a point is computed again.
    */
   readonly ratingMemoEntries?: number;
+  /**
+   * Conditions the part-power memo holds (partPowerSolve.ts; default PART_POWER_MEMO_CONDITIONS): its answers do not
+   * depend on it either.
+   */
+  readonly partPowerMemoConditions?: number;
 }
 
 function unwrapInlet(design: InletDesign, role: string): PreparedInlet {
@@ -162,7 +167,7 @@ function installedSlopeBreaks(access: DeckAccess, ctx: InstallationContext): Slo
 export function makeInstalledModel(access: DeckAccess, options: InstalledModelOptions): PropulsionModel {
   const ctx = installationContext(access, options);
   const scratch = newEngineScratch();
-  const solve = newPartPowerSolve(ctx, access, scratch);
+  const solve = newPartPowerSolve(ctx, access, scratch, options.partPowerMemoConditions ?? PART_POWER_MEMO_CONDITIONS);
   const named = new Map<RatingName, ResolvedRating | null>();
 
   function pointAt(condition: FlightCondition, free: FreeStream, power: number, extra: readonly Caution[]): InstalledPoint {

@@ -33,6 +33,8 @@ export interface InstalledPropulsionOptions {
   readonly cautionSettings: CautionSettings;
   /** Entries of the model's rating memo (installedModel.ts); default ratingMemo.ts RATING_MEMO_ENTRIES. */
   readonly ratingMemoEntries?: number;
+  /** Conditions of the model's part-power memo (installedModel.ts); default partPowerSolve.ts PART_POWER_MEMO_CONDITIONS. */
+  readonly partPowerMemoConditions?: number;
 }
 
 /** The distinct values of `values`, ascending. */

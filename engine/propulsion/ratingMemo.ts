@@ -39,8 +39,9 @@ function mixNumber(h: number, x: number): number {
   return h ^ (h >>> 15);
 }
 
-function hashOf(condition: FlightCondition, rating: number): number {
-  let h = Math.imul(rating + 1, 0xc2b2ae35);
+/** A 32-bit hash of a condition's three numbers' bits and a small whole number `tag` (the rating's index here). */
+export function hashFlightCondition(condition: FlightCondition, tag: number): number {
+  let h = Math.imul(tag + 1, 0xc2b2ae35);
   h = mixNumber(h, condition.altitude_m);
   h = mixNumber(h, condition.mach);
   h = mixNumber(h, condition.isaDev_K);
@@ -62,7 +63,7 @@ export function createRatingMemo(limit: number = RATING_MEMO_ENTRIES): RatingMem
   let size = 0;
 
   function slotOf(condition: FlightCondition, r: number): number {
-    let i = hashOf(condition, r) & mask;
+    let i = hashFlightCondition(condition, r) & mask;
     for (;;) {
       const u = used[i]!;
       if (u === 0) return i;

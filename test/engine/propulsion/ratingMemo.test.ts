@@ -1,5 +1,6 @@
 /**
- * The installed model's bounded rating memo (engine/propulsion/ratingMemo.ts). The memo must change no answer, so
+ * The installed model's bounded memos: the rating memo (engine/propulsion/ratingMemo.ts) and the part-power solve's
+ * per-condition memo (engine/propulsion/partPowerSolve.ts over conditionSlots.ts). A memo must change no answer, so
  * the references here are outside it: JavaScript's own Map keyed by the same three numbers and the rating (with
  * Object.is semantics, ECMAScript's SameValue for -0 and 0 is emulated by the key text), a model built fresh for
  * every query or every solve (nothing remembered), and bit-for-bit equality of whole results (toStrictEqual
@@ -30,8 +31,8 @@ const parametricDeck = expectOk(
 );
 const NM = 1852;
 
-/** The installed-model options buildMissionInput passes for the demo project on `deck` (projectSpecs.ts), memo bound aside. */
-function demoOptions(deck: EngineDeck, ratingMemoEntries?: number): InstalledPropulsionOptions {
+/** The installed-model options buildMissionInput passes for the demo project on `deck` (projectSpecs.ts), memo bounds aside. */
+function demoOptions(deck: EngineDeck, ratingMemoEntries?: number, partPowerMemoConditions?: number): InstalledPropulsionOptions {
   return {
     deck,
     engineCount: project.engine.count,
@@ -39,6 +40,7 @@ function demoOptions(deck: EngineDeck, ratingMemoEntries?: number): InstalledPro
     installation: installationOf(project),
     cautionSettings: cautionSettingsOf(project),
     ...(ratingMemoEntries === undefined ? {} : { ratingMemoEntries }),
+    ...(partPowerMemoConditions === undefined ? {} : { partPowerMemoConditions }),
   };
 }
 
@@ -141,6 +143,44 @@ describe('the installed model with its rating memo', () => {
   });
 });
 
+describe('the installed model with its part-power memo', () => {
+  it.each([
+    ['demo deck', demoDeck],
+    ['parametric deck', parametricDeck],
+  ])('gives for every thrust the point of a model built fresh for the query (%s), with a memo that evicts all the time', (_name, deck) => {
+    const reused = makeInstalledPropulsion(demoOptions(deck));
+    const one = makeInstalledPropulsion(demoOptions(deck, undefined, 1));
+    const two = makeInstalledPropulsion(demoOptions(deck, undefined, 2));
+    const next = lcg(23);
+    // Few conditions, so each recurs often, interleaved (the memo switches slot on nearly every query).
+    const conditions: FlightCondition[] = [
+      { altitude_m: 12496.8, mach: 0.78, isaDev_K: 0 },
+      { altitude_m: 7620, mach: 0.7, isaDev_K: 0 },
+      { altitude_m: 11277.6, mach: 0.78, isaDev_K: 20 },
+      { altitude_m: 536.4, mach: 0.2491, isaDev_K: 0 },
+      { altitude_m: 536.4, mach: 0.2491, isaDev_K: -0 },
+      { altitude_m: 0, mach: 0, isaDev_K: 0 },
+    ];
+    const ceilings: RatingName[] = ['maxCruise', 'maxClimb', 'maxContinuous'];
+    const limits = new Set<string>();
+    for (let k = 0; k < 150; k++) {
+      const c = conditions[Math.floor(next() * conditions.length)]!;
+      const ceiling = ceilings[Math.floor(next() * ceilings.length)]!;
+      const fresh = makeInstalledPropulsion(demoOptions(deck));
+      const top = fresh.atRating(c, ceiling).thrust_N;
+      // From below idle to above the ceiling, most of it in between.
+      const thrust_N = top * (1.05 * next() - 0.02);
+      const reference = makeInstalledPropulsion(demoOptions(deck)).forThrust(c, thrust_N, ceiling);
+      limits.add(reference.limit);
+      expect(reused.forThrust(c, thrust_N, ceiling)).toStrictEqual(reference);
+      expect(one.forThrust(c, thrust_N, ceiling)).toStrictEqual(reference);
+      expect(two.forThrust(c, thrust_N, ceiling)).toStrictEqual(reference);
+    }
+    // The cases ran through every branch of the solve: the ceiling, idle and a root in between.
+    expect([...limits].sort()).toStrictEqual(['above_rating', 'below_idle', 'within']);
+  });
+});
+
 /** Bit-identical results (every figure, leg row, caution, time-history column). */
 function expectSameResult(a: MissionResult, b: MissionResult): void {
   expect(a).toStrictEqual(b);
@@ -161,9 +201,16 @@ describe('solveMission with a model kept across solves', () => {
     for (const deck of [demoDeck, parametricDeck]) {
       const kept = inputOn(deck);
       // Nothing remembered at all: every rated point from a model built for that one query.
-      const unmemoised = { ...kept, propulsion: { ...kept.propulsion, atRating: (c: FlightCondition, r: RatingName) => makeInstalledPropulsion(demoOptions(deck)).atRating(c, r) } };
+      const unmemoised = {
+        ...kept,
+        propulsion: {
+          ...kept.propulsion,
+          atRating: (c: FlightCondition, r: RatingName) => makeInstalledPropulsion(demoOptions(deck)).atRating(c, r),
+          forThrust: (c: FlightCondition, t: number, r?: RatingName) => makeInstalledPropulsion(demoOptions(deck)).forThrust(c, t, r),
+        },
+      };
       expectSameResult(solveMission(kept), solveMission(unmemoised));
-      const small = { ...kept, propulsion: makeInstalledPropulsion(demoOptions(deck, 16)) };
+      const small = { ...kept, propulsion: makeInstalledPropulsion(demoOptions(deck, 16, 2)) };
       const cases = variations(kept);
       cases.forEach((c, i) => {
         const freshInput = { ...c, propulsion: inputOn(deck).propulsion };
