@@ -10,10 +10,10 @@ import type { SpeedSchedule } from './missionTypes';
 import { pressureAltitudeRate } from './energyShareFactor';
 import { airPointIn, fuelExhaustedEvents, makeSample, pathDerivative } from './flightPoint';
 import { flyMonotoneSegment, missionDomain } from './flySegment';
-import { pathBreakAltitudes } from './stepBreaks';
+import { BASE_ALTITUDE_STEP, pathBreakAltitudes } from './stepBreaks';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
 import { flyLevelSpeedChange } from './levelSpeedChange';
-import { BASE_MONOTONE_STEP, BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
+import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
 import { LAPSE_JUMPS_M, type MissionAir } from './missionAtmosphere';
 import { S_ALT, S_MASS, S_TAS, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
 import { schedulePhases } from './speedSchedule';
@@ -106,7 +106,8 @@ export function flyClimb(
       component: S_ALT,
       to: phase.to_m,
       breaks: pathBreakAltitudes(ctx.input, phase.held, phase.value, state[S_ALT], phase.to_m),
-      maxStep: BASE_MONOTONE_STEP.altitude_m * ctx.options.stepScale,
+      maxStep: BASE_ALTITUDE_STEP.altitude_m * ctx.options.stepScale,
+      maxStepTime_s: BASE_ALTITUDE_STEP.time_s * ctx.options.stepScale,
       minRate: CLIMB_STALL_RATE_M_S,
       targetStop: 'altitude_reached',
       jumps: LAPSE_JUMPS_M,

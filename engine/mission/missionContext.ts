@@ -55,10 +55,12 @@ export const BASE_STEP_S = {
 } as const;
 
 /**
- * Longest steps of the climbs and descents in pressure altitude (m) and of
- * the level speed changes in TAS (m/s), before `stepScale`, where those are
- * stepped along altitude or speed with step ends on the models' slope breaks
- * (monotoneStepper.ts); shown converged in test/engine/mission/solveMission.test.ts.
+ * Longest steps of the step climbs inside a cruise in pressure altitude (m)
+ * and of the level speed changes in TAS (m/s), before `stepScale`, where those
+ * are stepped along altitude or speed with step ends on the models' slope
+ * breaks (monotoneStepper.ts); the climbs and descents have theirs in
+ * stepBreaks.ts (`BASE_ALTITUDE_STEP`). Shown converged in
+ * test/engine/mission/solveMission.test.ts.
  */
 export const BASE_MONOTONE_STEP = {
   altitude_m: 1200,

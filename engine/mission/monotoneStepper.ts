@@ -8,7 +8,10 @@
  * slope break (the deck's grid altitudes, the Mach nodes of the deck, polar
  * and inlet tables, the tropopause). Between breakpoints the right-hand side
  * is smooth and the fourth-order error constant applies, which is what lets
- * the steps be long.
+ * the steps be long. Each interval between breaks is cut into equal steps, at
+ * most `maxStep` long and, with `maxStepTime_s`, at most that long in time at
+ * the rate met at the interval's start (the climbs' and descents' error of an
+ * interval goes as its duration to the fifth over its steps to the fourth).
  *
  * Wherever the rate f_c falls below `minRate` (a stall, or progress too slow
  * for the change of variable) at a stage, or another terminal event of the
@@ -35,6 +38,12 @@ export interface MonotonePlan {
   readonly breaks: readonly number[];
   /** Longest step in the component's unit. */
   readonly maxStep: number;
+  /**
+   * Longest step in time (s), judged at each break interval's start: an interval of length L entered at the rate r
+   * (the accepted point's |d component / dt|) gets at least ceil(L / (r maxStepTime_s)) even steps (at most
+   * MAX_INTERVAL_STEPS). Absent: the steps are bounded by `maxStep` alone.
+   */
+  readonly maxStepTime_s?: number;
   /** Least |d component / dt| (unit/s) for the change of variable; slower progress goes to the time integrator. */
   readonly minRate: number;
   /** The stop reported on reaching `to`; the segment's event with this stop is not checked at step ends. */
@@ -50,10 +59,9 @@ export interface MonotonePlan {
 const ascending = (a: number, b: number): number => a - b;
 const descending = (a: number, b: number): number => b - a;
 
-/** Step ends from `from` to `to`: every break between them, each interval cut evenly into steps of at most `maxStep`. */
-export function monotoneStepEnds(from: number, to: number, breaks: readonly number[], maxStep: number): number[] {
+/** The breaks strictly between `from` and `to` in flight order, each once, then `to`: the ends of the break intervals. */
+export function monotoneIntervalEnds(from: number, to: number, breaks: readonly number[]): number[] {
   const up = to > from;
-  // The breaks strictly inside, in flight order, each once (equal values end up side by side); then the target.
   const points: number[] = [];
   for (let k = 0; k < breaks.length; k++) {
     const b = breaks[k]!;
@@ -61,12 +69,30 @@ export function monotoneStepEnds(from: number, to: number, breaks: readonly numb
   }
   if (points.length > 1) points.sort(up ? ascending : descending);
   points.push(to);
+  const out: number[] = [];
+  for (let k = 0; k < points.length; k++) if (k === 0 || points[k] !== points[k - 1]) out.push(points[k]!);
+  return out;
+}
+
+/** Most steps one break interval is cut into (a bound on the time rule where the rate is near the least rate). */
+export const MAX_INTERVAL_STEPS = 64;
+
+/**
+ * Steps (1 to MAX_INTERVAL_STEPS) for a break interval of `length` (> 0, the component's unit): at most `maxStep`
+ * long and, with `maxStepTime_s`, at most that many seconds at `rate` (|d component / dt|).
+ */
+export function intervalSteps(length: number, maxStep: number, rate: number, maxStepTime_s?: number): number {
+  let n = Math.ceil(length / maxStep - 1e-9);
+  if (maxStepTime_s !== undefined) n = Math.max(n, Math.ceil(length / (Math.abs(rate) * maxStepTime_s) - 1e-9));
+  return n >= 1 ? Math.min(n, MAX_INTERVAL_STEPS) : 1;
+}
+
+/** Step ends from `from` to `to`: every break between them, each interval cut evenly into steps of at most `maxStep`. */
+export function monotoneStepEnds(from: number, to: number, breaks: readonly number[], maxStep: number): number[] {
   const ends: number[] = [];
   let a = from;
-  for (let k = 0; k < points.length; k++) {
-    const b = points[k]!;
-    if (k > 0 && b === points[k - 1]) continue;
-    const n = Math.max(1, Math.ceil(Math.abs(b - a) / maxStep - 1e-9));
+  for (const b of monotoneIntervalEnds(from, to, breaks)) {
+    const n = intervalSteps(Math.abs(b - a), maxStep, 0);
     for (let i = 1; i < n; i++) ends.push(a + ((b - a) * i) / n);
     ends.push(b);
     a = b;
@@ -132,11 +158,16 @@ export function integrateMonotone(
   const eventCount = others.length;
   for (let e = 0; e < eventCount; e++) if (others[e]!.g(y, ev.sample) >= 0) return timeIntegrator(y, false);
   sink(y, ev.sample);
-  const ends = monotoneStepEnds(start[c], plan.to, plan.breaks, plan.maxStep);
+  const intervals = monotoneIntervalEnds(start[c], plan.to, plan.breaks);
+  const intervalCount = intervals.length;
   const tmp = new Float64Array(STATE_SIZE) as StateVector;
   const k1 = new Float64Array(STATE_SIZE);
   const k2 = new Float64Array(STATE_SIZE);
   const k3 = new Float64Array(STATE_SIZE);
+  let a = start[c];
+  let b = intervals[0]!;
+  // Steps of the interval [a, b], from the rate at its start.
+  let n = intervalSteps(Math.abs(b - a), plan.maxStep, d[c]!, plan.maxStepTime_s);
   // The segment's own equations hold up to its ends, but the models there may already be those of the next
   // segment (the tropopause: the lapse rate changes at 11 km), so the last stage is taken a hair inside, NUDGE of
   // the step, and so is the first where the start lies on one of the plan's jumps (one extra evaluation); elsewhere
@@ -144,15 +175,18 @@ export function integrateMonotone(
   let f1: Float64Array = d;
   if (plan.jumps === undefined || plan.jumps.includes(start[c])) {
     const first = start.slice();
-    const firstStep = (ends[0] ?? plan.to) - start[c];
+    const firstStep = (n > 1 ? a + (b - a) / n : b) - start[c];
     first[c] = start[c] + NUDGE * firstStep;
     if (outside(domain, first)) return timeIntegrator(y, true);
     f1 = rhs(first);
   }
   let s0 = start[c];
-  const stepCount = ends.length;
-  for (let j = 0; j < stepCount; j++) {
-    const s1 = ends[j]!;
+  let interval = 0;
+  let i = 1;
+  for (let j = 0; ; j++) {
+    const lastOfInterval = i === n;
+    const s1 = lastOfInterval ? b : a + ((b - a) * i) / n;
+    const last = lastOfInterval && interval === intervalCount - 1;
     const h = s1 - s0;
     const half = 0.5 * h;
     const mid = s0 + half;
@@ -160,39 +194,39 @@ export function integrateMonotone(
     if (j > 0) f1 = d;
     const r1 = f1[c]!;
     if (!(direction * r1 >= minRate)) return timeIntegrator(y, true);
-    for (let i = 0; i < STATE_SIZE; i++) {
-      const f = f1[i]!;
-      k1[i] = f / r1;
-      tmp[i] = y[i] + (half * f) / r1;
+    for (let q = 0; q < STATE_SIZE; q++) {
+      const f = f1[q]!;
+      k1[q] = f / r1;
+      tmp[q] = y[q] + (half * f) / r1;
     }
     tmp[c] = mid;
     if (outside(domain, tmp)) return timeIntegrator(y, true);
     const f2 = rhs(tmp);
     const r2 = f2[c]!;
     if (!(direction * r2 >= minRate)) return timeIntegrator(y, true);
-    for (let i = 0; i < STATE_SIZE; i++) {
-      const k = f2[i]! / r2;
-      k2[i] = k;
-      tmp[i] = y[i] + half * k;
+    for (let q = 0; q < STATE_SIZE; q++) {
+      const k = f2[q]! / r2;
+      k2[q] = k;
+      tmp[q] = y[q] + half * k;
     }
     tmp[c] = mid;
     if (outside(domain, tmp)) return timeIntegrator(y, true);
     const f3 = rhs(tmp);
     const r3 = f3[c]!;
     if (!(direction * r3 >= minRate)) return timeIntegrator(y, true);
-    for (let i = 0; i < STATE_SIZE; i++) {
-      const k = f3[i]! / r3;
-      k3[i] = k;
-      tmp[i] = y[i] + h * k;
+    for (let q = 0; q < STATE_SIZE; q++) {
+      const k = f3[q]! / r3;
+      k3[q] = k;
+      tmp[q] = y[q] + h * k;
     }
-    tmp[c] = j === stepCount - 1 ? s1 - NUDGE * h : s1;
+    tmp[c] = last ? s1 - NUDGE * h : s1;
     if (outside(domain, tmp)) return timeIntegrator(y, true);
     const f4 = rhs(tmp);
     const r4 = f4[c]!;
     if (!(direction * r4 >= minRate)) return timeIntegrator(y, true);
     const next = new Float64Array(STATE_SIZE) as StateVector;
     const sixth = h / 6;
-    for (let i = 0; i < STATE_SIZE; i++) next[i] = y[i] + sixth * (k1[i]! + 2 * k2[i]! + 2 * k3[i]! + f4[i]! / r4);
+    for (let q = 0; q < STATE_SIZE; q++) next[q] = y[q] + sixth * (k1[q]! + 2 * k2[q]! + 2 * k3[q]! + f4[q]! / r4);
     next[c] = s1;
     if (outside(domain, next)) return timeIntegrator(y, true);
     const nextEv = segment.evaluate(next);
@@ -204,6 +238,16 @@ export function integrateMonotone(
     ev = nextEv;
     d = nd;
     s0 = s1;
+    if (last) break;
+    if (lastOfInterval) {
+      interval++;
+      a = b;
+      b = intervals[interval]!;
+      n = intervalSteps(Math.abs(b - a), plan.maxStep, d[c]!, plan.maxStepTime_s);
+      i = 1;
+    } else {
+      i++;
+    }
   }
   return { end: y, endSample: ev.sample, stop: plan.targetStop };
 }

@@ -6,6 +6,20 @@
  * for piecewise-linear tables).
  */
 import { transitionAltitude } from './missionAtmosphere';
+
+/**
+ * Longest steps of the climbs and descents (before `stepScale`; monotoneStepper.ts `MonotonePlan`): 1,600 m of
+ * altitude, and 145 s at the rate met at each break interval's start. Between breaks the RK4 error of an interval
+ * of duration t in n even steps goes as t^5 / n^4 (the fuel and time are quadratures of 1 / rate, whose fourth
+ * derivative grows as the rate falls), so the steps that give the least error for their number are equal in time,
+ * n proportional to t: measured on the demo (docs/mission.md, Speed, "Climb and descent steps, 3 December 2026"),
+ * 145 s gives the error of the 1,200 m steps before it with a fifth fewer steps, the steps moved from the fast
+ * climb and descent above 10,000 ft to the slow idle descent below it.
+ */
+export const BASE_ALTITUDE_STEP = {
+  altitude_m: 1600,
+  time_s: 145,
+} as const;
 import type { MissionInput } from './missionTypes';
 
 /**

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { integrateSegment, type StateDomain } from '../../../engine/mission/integrator';
-import { integrateMonotone, monotoneStepEnds } from '../../../engine/mission/monotoneStepper';
+import { integrateMonotone, intervalSteps, MAX_INTERVAL_STEPS, monotoneIntervalEnds, monotoneStepEnds } from '../../../engine/mission/monotoneStepper';
 import { S_ALT, S_GROUND, S_MASS, S_TAS, S_TIME, STATE_SIZE, type FlightSample, type Segment, type StateVector } from '../../../engine/mission/missionState';
 import { expectClose } from '../../support/assertInDelta';
 
@@ -48,6 +48,25 @@ describe('monotoneStepEnds', () => {
     expect(monotoneStepEnds(1000, 0, [250, 600], 500)).toEqual([600, 250, 0]);
     expect(monotoneStepEnds(0, 100, [], 1000)).toEqual([100]);
   });
+
+  it('monotoneIntervalEnds lists the breaks inside in flight order, each once, then the target', () => {
+    expect(monotoneIntervalEnds(0, 1000, [250, 1200, -5, 250, 600])).toEqual([250, 600, 1000]);
+    expect(monotoneIntervalEnds(1000, 0, [250, 600, 1000])).toEqual([600, 250, 0]);
+    expect(monotoneIntervalEnds(0, 0, [])).toEqual([0]);
+  });
+
+  it('intervalSteps takes the larger of the altitude and the time bound, from 1 to MAX_INTERVAL_STEPS', () => {
+    // 1,524 m at 5 m/s is 304.8 s: 3 steps of at most 145 s; at 50 m/s the 1,600 m bound gives 1, a 1,200 m bound 2.
+    expect(intervalSteps(1524, 1600, 5, 145)).toBe(3);
+    expect(intervalSteps(1524, 1600, -5, 145)).toBe(3);
+    expect(intervalSteps(1524, 1600, 50, 145)).toBe(1);
+    expect(intervalSteps(1524, 1200, 50, 145)).toBe(2);
+    expect(intervalSteps(1524, 1200, 50)).toBe(2);
+    // Exactly 2 x 145 s is 2 steps (the 1e-9 allowance), not 3.
+    expect(intervalSteps(1450, 1600, 5, 145)).toBe(2);
+    expect(intervalSteps(1524, 1600, 1e-6, 145)).toBe(MAX_INTERVAL_STEPS);
+    expect(intervalSteps(0, 1600, 5, 145)).toBe(1);
+  });
 });
 
 describe('integrateMonotone', () => {
@@ -68,6 +87,30 @@ describe('integrateMonotone', () => {
   it('integrateMonotone converges at fourth order as the altitude step halves (RK4, Hairer, Norsett & Wanner II.1)', () => {
     const err = (step: number) => Math.abs(integrateMonotone(linearCeilingClimb(a, b, q), start(10000), () => {}, plan(step)).end[S_TIME] - exactTime);
     const ratio = err(3000) / err(1500);
+    expect(ratio).toBeGreaterThan(12);
+    expect(ratio).toBeLessThan(20);
+  });
+
+  it('integrateMonotone cuts each break interval into ceil(L / (rate x maxStepTime_s)) steps, the rate at its start', () => {
+    // Rate a - b h: 20 m/s at 0 m, 16 m/s at 3,600 m, 12 m/s at 7,200 m (closed form of the linear-ceiling climb).
+    const seen: number[] = [];
+    const run = integrateMonotone(linearCeilingClimb(a, b, q), start(10000), (y) => seen.push(y[S_ALT]), {
+      ...plan(5000, [3600, 7200]),
+      maxStepTime_s: 60,
+    });
+    // 3,600 m / (20 x 60) = 3 steps; 3,600 / (16 x 60) = 3.75 -> 4; 1,800 / (12 x 60) = 2.5 -> 3.
+    expect(seen).toEqual([0, 1200, 2400, 3600, 4500, 5400, 6300, 7200, 7800, 8400, 9000]);
+    expect(run.stop).toBe('altitude_reached');
+    expectClose(run.end[S_TIME], exactTime, { rel: 1e-6 }, 'closed form ln(a / (a - b h)) / b, within the RK4 truncation of these steps');
+  });
+
+  it('integrateMonotone converges at fourth order as maxStepTime_s halves (RK4, Hairer, Norsett & Wanner II.1)', () => {
+    // Breaks every 450 m keep the intervals short, so the step counts follow the time bound: doubling them (from
+    // about 2.5 a step at 80 s) divides the error by about 16.
+    const breaks = Array.from({ length: 19 }, (_, k) => 450 * (k + 1));
+    const err = (time_s: number) =>
+      Math.abs(integrateMonotone(linearCeilingClimb(a, b, q), start(10000), () => {}, { ...plan(5000, breaks), maxStepTime_s: time_s }).end[S_TIME] - exactTime);
+    const ratio = err(40) / err(20);
     expect(ratio).toBeGreaterThan(12);
     expect(ratio).toBeLessThan(20);
   });
