@@ -43,6 +43,13 @@ export interface DragBreakdown {
 export interface AeroModel {
   readonly wingArea_m2: number;
   drag(query: DragQuery): DragBreakdown;
+  /**
+   * The drag force (N) of `drag` for a query given as its four numbers (pressure altitude m, Mach, mass kg, load
+   * factor), without the breakdown object: the same arithmetic, so the same bits as
+   * `drag({ altitude_m, mach, mass_kg, loadFactor }).drag_N`, and the same RangeErrors. For right-hand sides that
+   * read only the force (thousands of queries a mission). Optional: ask `drag` of a model without it.
+   */
+  dragForce_N?(altitude_m: number, mach: number, mass_kg: number, loadFactor: number): number;
   /** Machs (-) at which the drag has slope breaks (its tables' nodes), ascending; absent for a smooth polar. Mission climbs and descents end steps there. */
   readonly slopeBreakMachs?: readonly number[];
   /** Same polar with an extra parasite increment (drag counts / 1e4) added. */

@@ -15,7 +15,7 @@ import type { AeroModel, DragBreakdown, DragQuery } from './aeroModel';
 import { validatePolarSpec, type PolarIssue, type PolarSpec } from './polarSpec';
 import { g0, gamma } from './constants';
 import { atmosphere, isaPressureAt } from './standardAtmosphere';
-import { kornWaveDrag, type KornWing } from './waveDrag';
+import { kornTerms, kornWaveDrag, kornWaveDragOf, type KornTerms, type KornWing } from './waveDrag';
 
 /** Names used in `outsideTables` when a query leaves a table and is clamped. */
 export type PolarTableName = 'cd0' | 'induced' | 'compressibility' | 'buffetCl' | 'clMax';
@@ -27,7 +27,7 @@ export interface PolarTables {
   readonly induced: number | Table1d;
   readonly wave:
     | { readonly kind: 'none' }
-    | { readonly kind: 'korn'; readonly wing: KornWing }
+    | { readonly kind: 'korn'; readonly wing: KornWing; readonly terms: KornTerms }
     | { readonly kind: 'table'; readonly table: Table2d };
   readonly buffetCl: Table1d;
   readonly clMax: Table1d;
@@ -56,6 +56,10 @@ function lookup(table: Table1d, x: number, name: PolarTableName, outside: PolarT
   return r.value;
 }
 
+function kornWave(wing: KornWing): PolarTables['wave'] {
+  return { kind: 'korn', wing, terms: kornTerms(wing) };
+}
+
 function buildTables(spec: PolarSpec): PolarTables {
   const cd0 = expectOk(makeTable1d(spec.cd0.mach, spec.cd0.cd0, 'cd0'), 'validated cd0 table');
   const ind = spec.induced;
@@ -68,10 +72,7 @@ function buildTables(spec: PolarSpec): PolarTables {
     c.kind === 'none'
       ? { kind: 'none' }
       : c.kind === 'korn'
-        ? {
-            kind: 'korn',
-            wing: { sweep_rad: c.sweep_rad, thicknessRatio: c.thicknessRatio, kornTechnologyFactor: c.kornTechnologyFactor },
-          }
+        ? kornWave({ sweep_rad: c.sweep_rad, thicknessRatio: c.thicknessRatio, kornTechnologyFactor: c.kornTechnologyFactor })
         : { kind: 'table', table: expectOk(makeTable2d(c.mach, c.cl, c.cdWave, 'compressibility'), 'validated wave table') };
   return {
     cd0,
@@ -180,44 +181,69 @@ function newMachMemo(): MachMemo {
   return { mach: Number.NaN, cd0: 0, k: 0, buffetCl: 0, clMax: 0, outside: NONE_OUTSIDE };
 }
 
+/** True when every number of a drag query is finite and the Mach and mass are > 0 (x - x is 0 exactly when x is finite). */
+function usableQuery(altitude_m: number, mach: number, mass_kg: number, loadFactor: number): boolean {
+  return altitude_m - altitude_m === 0 && mass_kg - mass_kg === 0 && loadFactor - loadFactor === 0 && mach - mach === 0 && mach > 0 && mass_kg > 0;
+}
+
+/** Throws the RangeError of the first bad number of a drag query, in the order they are checked (caller bugs). */
+function refuseQuery(altitude_m: number, mach: number, mass_kg: number, loadFactor: number): never {
+  requireFinite(altitude_m, 'altitude_m');
+  requireFinite(mass_kg, 'mass_kg');
+  requireFinite(loadFactor, 'loadFactor');
+  requireFinite(mach, 'Mach');
+  if (!(mach > 0)) throw new RangeError(`drag polar: Mach is ${mach}, expected > 0 for a lifting query`);
+  throw new RangeError(`drag polar: mass_kg is ${mass_kg}, expected > 0`);
+}
+
+/** Throws the RangeError of an altitude outside the standard atmosphere (a caller bug). */
+function refuseAltitude(altitude_m: number): never {
+  const atm = atmosphere(altitude_m);
+  throw new RangeError(`drag polar: ${atm.ok ? `no pressure at ${altitude_m} m` : atm.error.message}`);
+}
+
+/** Reads the Mach tables into the memo for `mach` (and the tables left, unless they depend on CL). */
+function refreshMachMemo(t: PolarTables, memo: MachMemo, mach: number, cl: number): void {
+  memo.cd0 = clampedValue(t.cd0, mach);
+  memo.k = typeof t.induced === 'number' ? t.induced : clampedValue(t.induced, mach);
+  memo.buffetCl = clampedValue(t.buffetCl, mach);
+  memo.clMax = clampedValue(t.clMax, mach);
+  if (t.wave.kind !== 'table') memo.outside = outsideTablesAt(t, mach, cl);
+  memo.mach = mach;
+}
+
+/** CDwave (-) at a Mach and CL: Korn's equation, a CDwave(M, CL) table (clamped at its edges) or none. */
+function waveDragAt(wave: PolarTables['wave'], mach: number, cl: number): number {
+  if (wave.kind === 'korn') return kornWaveDragOf(wave.terms, mach, cl);
+  return wave.kind === 'table' ? expectOk(interp2d(wave.table, mach, cl, 'clamp'), 'polar table compressibility').value : 0;
+}
+
 /**
  * One drag query: the same arithmetic as polarCoefficients plus the buffet
  * and CLmax lookups, without intermediate result objects (the mission asks
  * thousands per solve). Only the pressure of the standard atmosphere is
- * needed (dynamic pressure 0.5 gamma p M^2).
+ * needed (dynamic pressure 0.5 gamma p M^2). Kept small, its rare paths in
+ * functions of their own, so that the optimising compiler can inline it
+ * into a caller that reads one field (the drag force) and drop the object.
  */
 function dragAt(model: DragPolarModel, memo: MachMemo, query: DragQuery): DragBreakdown {
-  requireFinite(query.altitude_m, 'altitude_m');
-  requireFinite(query.mass_kg, 'mass_kg');
-  requireFinite(query.loadFactor, 'loadFactor');
-  requireFinite(query.mach, 'Mach');
+  const altitude_m = query.altitude_m;
   const mach = query.mach;
-  if (!(mach > 0)) throw new RangeError(`drag polar: Mach is ${mach}, expected > 0 for a lifting query`);
-  if (!(query.mass_kg > 0)) throw new RangeError(`drag polar: mass_kg is ${query.mass_kg}, expected > 0`);
-  const pressure_Pa = isaPressureAt(query.altitude_m);
-  if (Number.isNaN(pressure_Pa)) {
-    const atm = atmosphere(query.altitude_m);
-    throw new RangeError(`drag polar: ${atm.ok ? `no pressure at ${query.altitude_m} m` : atm.error.message}`);
-  }
+  const mass_kg = query.mass_kg;
+  const loadFactor = query.loadFactor;
+  if (!usableQuery(altitude_m, mach, mass_kg, loadFactor)) refuseQuery(altitude_m, mach, mass_kg, loadFactor);
+  const pressure_Pa = isaPressureAt(altitude_m);
+  if (pressure_Pa !== pressure_Pa) refuseAltitude(altitude_m); // NaN: outside the atmosphere
   const q_Pa = 0.5 * gamma * pressure_Pa * mach * mach;
   const qS = q_Pa * model.wingArea_m2;
-  const weight_N = query.mass_kg * g0;
-  const cl = (query.loadFactor * weight_N) / qS;
+  const weight_N = mass_kg * g0;
+  const cl = (loadFactor * weight_N) / qS;
   const t = model.tables;
-  if (mach !== memo.mach) {
-    memo.cd0 = clampedValue(t.cd0, mach);
-    memo.k = typeof t.induced === 'number' ? t.induced : clampedValue(t.induced, mach);
-    memo.buffetCl = clampedValue(t.buffetCl, mach);
-    memo.clMax = clampedValue(t.clMax, mach);
-    if (t.wave.kind !== 'table') memo.outside = outsideTablesAt(t, mach, cl);
-    memo.mach = mach;
-  }
+  if (mach !== memo.mach) refreshMachMemo(t, memo, mach, cl);
   const cd0 = memo.cd0;
   const dcl = cl - model.spec.clMinDrag;
   const cdInduced = memo.k * dcl * dcl;
-  let cdWave = 0;
-  if (t.wave.kind === 'korn') cdWave = kornWaveDrag(t.wave.wing, mach, cl);
-  else if (t.wave.kind === 'table') cdWave = expectOk(interp2d(t.wave.table, mach, cl, 'clamp'), 'polar table compressibility').value;
+  const cdWave = waveDragAt(t.wave, mach, cl);
   const cdIncrement = model.spec.cdIncrement;
   const cd = cd0 + cdIncrement + cdInduced + cdWave;
   const buffetCl = memo.buffetCl;
@@ -240,6 +266,19 @@ function dragAt(model: DragPolarModel, memo: MachMemo, query: DragQuery): DragBr
   };
 }
 
+/** dragAt(...).drag_N without the breakdown: the same steps in the same order (drag polar model's dragForce_N). */
+function dragForceAt(model: DragPolarModel, memo: MachMemo, altitude_m: number, mach: number, mass_kg: number, loadFactor: number): number {
+  if (!usableQuery(altitude_m, mach, mass_kg, loadFactor)) refuseQuery(altitude_m, mach, mass_kg, loadFactor);
+  const pressure_Pa = isaPressureAt(altitude_m);
+  if (pressure_Pa !== pressure_Pa) refuseAltitude(altitude_m); // NaN: outside the atmosphere
+  const qS = 0.5 * gamma * pressure_Pa * mach * mach * model.wingArea_m2;
+  const cl = (loadFactor * (mass_kg * g0)) / qS;
+  const t = model.tables;
+  if (mach !== memo.mach) refreshMachMemo(t, memo, mach, cl);
+  const dcl = cl - model.spec.clMinDrag;
+  return qS * (memo.cd0 + model.spec.cdIncrement + memo.k * dcl * dcl + waveDragAt(t.wave, mach, cl));
+}
+
 /** The Mach nodes of the tables the drag reads (CD0, K(M), the wave-drag table), ascending. */
 function polarSlopeBreakMachs(tables: PolarTables): number[] {
   const machs = [...tables.cd0.x];
@@ -256,6 +295,7 @@ function assemble(spec: PolarSpec, tables: PolarTables, wingArea_m2: number): Dr
     wingArea_m2,
     slopeBreakMachs: polarSlopeBreakMachs(tables),
     drag: (query) => dragAt(model, memo, query),
+    dragForce_N: (altitude_m, mach, mass_kg, loadFactor) => dragForceAt(model, memo, altitude_m, mach, mass_kg, loadFactor),
     withIncrement: (deltaCd0) => {
       requireFinite(deltaCd0, 'deltaCd0');
       const cdIncrement = spec.cdIncrement + deltaCd0;

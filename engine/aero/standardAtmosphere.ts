@@ -133,19 +133,35 @@ export const MIN_PRESSURE_PA = isaPressure(MAX_PRESSURE_ALTITUDE_M, layerIndex(M
 // engine in a row, and the state is a pure function of them, read-only, so sharing it cannot change any answer.
 let memoAltitude_m = Number.NaN;
 let memoIsaDev_K = Number.NaN;
-let memoState: AtmosphereState | null = null;
 let memoResult: Result<AtmosphereState, AtmosphereError> | null = null;
+
+// A direct-mapped table of isaPressureAt's answers, keyed by the altitude's bits: the pressure is a pure function of
+// the altitude, so an entry read back is the very number isaPressure returns (no rounding of the key, no
+// interpolation). A mission asks a few dozen altitudes over and over (a climb's and a descent's altitude steps are
+// the same in every fuel pass and for every mass), each one a pow or exp; the drag asks it at every right-hand side.
+// -0 and 0 share an entry: both give the sea-level layer's pressure from h - 0 = +-0, the same bits.
+const PRESSURE_SLOT_BITS = 8;
+const PRESSURE_SLOTS = 1 << PRESSURE_SLOT_BITS;
+const pressureKeys = new Float64Array(PRESSURE_SLOTS).fill(Number.NaN);
+const pressureValues = new Float64Array(PRESSURE_SLOTS);
+const keyBits = new Float64Array(1);
+const keyWords = new Int32Array(keyBits.buffer);
 
 /**
  * Static pressure (Pa) of the standard atmosphere at a pressure altitude (m):
- * `atmosphere(h).pressure_Pa` (the same arithmetic) without the state
- * object, for hot paths (the memo's pressure when `atmosphere` was last asked
- * this altitude); NaN where `atmosphere` would refuse the altitude.
+ * `atmosphere(h).pressure_Pa` (the same arithmetic, the same bits) without the
+ * state object, for hot paths; NaN where `atmosphere` would refuse the altitude.
  */
 export function isaPressureAt(pressureAltitude_m: number): number {
-  if (memoState !== null && Object.is(pressureAltitude_m, memoAltitude_m)) return memoState.pressure_Pa;
+  keyBits[0] = pressureAltitude_m;
+  // Fibonacci hashing of the two 32-bit words (Knuth, TAOCP vol. 3, 6.4; the multiplier 2^32 / golden ratio).
+  const slot = Math.imul(keyWords[0]! ^ keyWords[1]!, 0x9e3779b1) >>> (32 - PRESSURE_SLOT_BITS);
+  if (pressureKeys[slot] === pressureAltitude_m) return pressureValues[slot]!;
   if (!(pressureAltitude_m >= MIN_PRESSURE_ALTITUDE_M && pressureAltitude_m <= MAX_PRESSURE_ALTITUDE_M)) return Number.NaN;
-  return isaPressure(pressureAltitude_m, layerIndex(pressureAltitude_m));
+  const pressure_Pa = isaPressure(pressureAltitude_m, layerIndex(pressureAltitude_m));
+  pressureKeys[slot] = pressureAltitude_m;
+  pressureValues[slot] = pressure_Pa;
+  return pressure_Pa;
 }
 
 
@@ -185,7 +201,7 @@ export function atmosphere(pressureAltitude_m: number, isaDev_K = 0): Result<Atm
   const i = layerIndex(pressureAltitude_m);
   const isaTemperature_K = isaTemperature(pressureAltitude_m, i);
   const temperature_K = isaTemperature_K + isaDev_K;
-  const pressure_Pa = isaPressure(pressureAltitude_m, i);
+  const pressure_Pa = isaPressureAt(pressureAltitude_m);
   const density_kg_m3 = pressure_Pa / (R_air * temperature_K);
   const state: AtmosphereState = {
     pressureAltitude_m,
@@ -201,7 +217,6 @@ export function atmosphere(pressureAltitude_m: number, isaDev_K = 0): Result<Atm
   };
   memoAltitude_m = pressureAltitude_m;
   memoIsaDev_K = isaDev_K;
-  memoState = state;
   memoResult = ok(state);
   return memoResult;
 }

@@ -94,9 +94,30 @@ export function heldCasMach(cas_m_s: number): (pressure_Pa: number) => number {
   };
 }
 
+// A direct-mapped table of casOfMach's answers keyed by both arguments' bits: a pure function, so an entry read back
+// is casFromMach's very number. Every sample asks it, and a mission's samples repeat their (Mach, pressure) pairs
+// from pass to pass (a climb's and a descent's altitude steps, a cruise's Mach and level): about 54 pairs among 389
+// calls in a converged demo solve. -0 and 0 may take different slots; either answer is the one casFromMach gives.
+const CAS_SLOT_BITS = 7;
+const casMachKeys = new Float64Array(1 << CAS_SLOT_BITS).fill(Number.NaN);
+const casPressureKeys = new Float64Array(1 << CAS_SLOT_BITS).fill(Number.NaN);
+const casValues = new Float64Array(1 << CAS_SLOT_BITS);
+const casKeyBits = new Float64Array(2);
+const casKeyWords = new Int32Array(casKeyBits.buffer);
+
 /** CAS (m/s) from Mach (-) at a static pressure (Pa); NACA Report 1135 (engine/aero/airspeeds.ts). */
 export function casOfMach(mach: number, pressure_Pa: number): number {
-  return casFromMach(mach, pressure_Pa);
+  casKeyBits[0] = mach;
+  casKeyBits[1] = pressure_Pa;
+  // Fibonacci hashing of the four 32-bit words (Knuth, TAOCP vol. 3, 6.4; the multiplier 2^32 / golden ratio).
+  const mixed = casKeyWords[0]! ^ casKeyWords[1]! ^ Math.imul(casKeyWords[2]! ^ casKeyWords[3]!, 0x85ebca6b);
+  const slot = Math.imul(mixed, 0x9e3779b1) >>> (32 - CAS_SLOT_BITS);
+  if (casMachKeys[slot] === mach && casPressureKeys[slot] === pressure_Pa) return casValues[slot]!;
+  const cas_m_s = casFromMach(mach, pressure_Pa);
+  casMachKeys[slot] = mach;
+  casPressureKeys[slot] = pressure_Pa;
+  casValues[slot] = cas_m_s;
+  return cas_m_s;
 }
 
 /**

@@ -119,7 +119,9 @@ export function appendSample(log: FlightLog, target: LegTarget, state: StateVect
   if (sample.idleAboveDrag && !log.cautions.has(cautionKey(IDLE_ABOVE_DRAG_ID, target))) {
     appendCaution(log, target, idleAboveDragCaution(sample.drag_N, sample.thrustUsed_N), t);
   }
-  for (const c of sample.propulsionCautions) {
+  const engineCautions = sample.propulsionCautions;
+  for (let i = 0; i < engineCautions.length; i++) {
+    const c = engineCautions[i]!;
     if (propulsionCautionShown(c, log.settings)) appendCaution(log, target, c, t);
   }
 }
@@ -128,20 +130,20 @@ export function appendSample(log: FlightLog, target: LegTarget, state: StateVect
 export function buildTimeHistory(log: FlightLog): TimeHistory {
   const c = log.columns;
   return {
-    time_s: Float64Array.from(c.time_s),
-    distance_m: Float64Array.from(c.distance_m),
-    altitude_m: Float64Array.from(c.altitude_m),
-    mach: Float64Array.from(c.mach),
-    cas_m_s: Float64Array.from(c.cas_m_s),
-    tas_m_s: Float64Array.from(c.tas_m_s),
-    mass_kg: Float64Array.from(c.mass_kg),
-    thrustAvailable_N: Float64Array.from(c.thrustAvailable_N),
-    thrustUsed_N: Float64Array.from(c.thrustUsed_N),
-    drag_N: Float64Array.from(c.drag_N),
-    fuelFlow_kg_s: Float64Array.from(c.fuelFlow_kg_s),
-    cl: Float64Array.from(c.cl),
-    liftToDrag: Float64Array.from(c.liftToDrag),
-    climbRate_m_s: Float64Array.from(c.climbRate_m_s),
-    legIndex: Int32Array.from(log.legIndex),
+    time_s: new Float64Array(c.time_s),
+    distance_m: new Float64Array(c.distance_m),
+    altitude_m: new Float64Array(c.altitude_m),
+    mach: new Float64Array(c.mach),
+    cas_m_s: new Float64Array(c.cas_m_s),
+    tas_m_s: new Float64Array(c.tas_m_s),
+    mass_kg: new Float64Array(c.mass_kg),
+    thrustAvailable_N: new Float64Array(c.thrustAvailable_N),
+    thrustUsed_N: new Float64Array(c.thrustUsed_N),
+    drag_N: new Float64Array(c.drag_N),
+    fuelFlow_kg_s: new Float64Array(c.fuelFlow_kg_s),
+    cl: new Float64Array(c.cl),
+    liftToDrag: new Float64Array(c.liftToDrag),
+    climbRate_m_s: new Float64Array(c.climbRate_m_s),
+    legIndex: new Int32Array(log.legIndex),
   };
 }

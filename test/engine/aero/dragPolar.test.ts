@@ -273,6 +273,17 @@ describe('AeroModel.drag', () => {
     expect(() => m.drag({ altitude_m: 10000, mach: 0, mass_kg: 60000, loadFactor: 1 })).toThrow(/Mach is 0/);
     expect(() => m.drag({ altitude_m: 10000, mach: 0.8, mass_kg: 0, loadFactor: 1 })).toThrow(/mass_kg is 0/);
     expect(() => m.drag({ altitude_m: Number.NaN, mach: 0.8, mass_kg: 1, loadFactor: 1 })).toThrow(/altitude_m is NaN/);
+    // dragForce_N refuses the same queries with the same messages.
+    for (const [h, mach, mass, n] of [[90000, 0.8, 60000, 1], [10000, 0, 60000, 1], [10000, 0.8, 0, 1], [Number.NaN, 0.8, 1, 1], [10000, 0.8, 1, Number.POSITIVE_INFINITY], [10000, -0.3, Number.NaN, 1]] as const) {
+      let message = '';
+      try {
+        m.drag({ altitude_m: h, mach, mass_kg: mass, loadFactor: n });
+      } catch (e) {
+        message = (e as Error).message;
+      }
+      expect(message).toMatch(/^drag polar: /);
+      expect(() => m.dragForce_N!(h, mach, mass, n)).toThrow(new RangeError(message));
+    }
   });
 
   it('drag on a descending CD0 Mach axis equals drag on the ascending one', () => {
@@ -329,6 +340,8 @@ describe('drag query without intermediate objects', () => {
             expect(d.cl).toBe(cl);
             expect([d.cd, d.cd0, d.cdInduced, d.cdWave, d.cdIncrement]).toEqual([c.cd, c.cd0, c.cdInduced, c.cdWave, c.cdIncrement]);
             expect(d.drag_N).toBe(q * 122 * c.cd);
+            expect(Object.is(m.dragForce_N!(alt, mach, mass, 1.1), d.drag_N)).toBe(true);
+            expect(Object.is(m.withIncrement(0.0013).dragForce_N!(alt, mach, mass, 1.1), m.withIncrement(0.0013).drag({ altitude_m: alt, mach, mass_kg: mass, loadFactor: 1.1 }).drag_N)).toBe(true);
             expect(d.buffetCl).toBe(buffetClAt(m, mach));
             expect(d.clMax).toBe(clMaxAt(m, mach));
             const expectedOutside = [...c.outsideTables];

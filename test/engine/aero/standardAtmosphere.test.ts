@@ -1,5 +1,5 @@
 import fc from 'fast-check';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { a0, p0, R_air, rho0, T0 } from '../../../engine/aero/constants';
 import {
   atmosphere,
@@ -277,5 +277,46 @@ describe('isaLapseRate_K_m', () => {
     expect(isaLapseRate_K_m(40000)).toBe(0.0028);
     expect(isaLapseRate_K_m(50000)).toBe(0);
     expect(isaLapseRate_K_m(60000)).toBe(-0.0028);
+  });
+});
+
+/** A deterministic sequence in [0, 1) (a linear congruential generator; Numerical Recipes' constants, from memory). */
+function lcg(seed: number): () => number {
+  let s = seed >>> 0;
+  return () => {
+    s = (Math.imul(s, 1664525) + 1013904223) >>> 0;
+    return s / 2 ** 32;
+  };
+}
+
+describe('isaPressureAt asked again (its table of answers)', () => {
+  it('gives, in any order of asking and with entries evicted, the bits a fresh module computes at its first ask', async () => {
+    // The reference is the pressure computed without the table: a fresh copy of the module asked each altitude
+    // once, in reverse order, every ask a miss. The asks here repeat altitudes, interleave far more altitudes than
+    // the table holds (so entries collide and are replaced) and include out-of-range ones (NaN, no entry).
+    const next = lcg(7);
+    const altitudes = [-0, 0, 11000, 20000, 32000, 47000, 51000, MIN_PRESSURE_ALTITUDE_M, MAX_PRESSURE_ALTITUDE_M, 12496.800000000001];
+    for (let i = 0; i < 1500; i++) altitudes.push(MIN_PRESSURE_ALTITUDE_M + next() * (MAX_PRESSURE_ALTITUDE_M - MIN_PRESSURE_ALTITUDE_M));
+    for (let i = 0; i < 200; i++) altitudes.push(Math.round(next() * 13000) * 0.3048);
+    const distinct = [...new Set(altitudes)];
+    vi.resetModules();
+    const fresh = await import('../../../engine/aero/standardAtmosphere');
+    const reference = new Map<number, number>();
+    for (const h of [...distinct].reverse()) reference.set(h, fresh.isaPressureAt(h));
+    expect(Object.is(fresh.isaPressureAt(-0), fresh.isaPressureAt(0))).toBe(true);
+    for (let round = 0; round < 3; round++) {
+      for (let i = 0; i < altitudes.length; i++) {
+        const h = altitudes[(i * (2 * round + 1) + round * 97) % altitudes.length]!;
+        expect(Object.is(isaPressureAt(h), reference.get(h))).toBe(true);
+        if (i % 5 === 0) {
+          expect(isaPressureAt(MAX_PRESSURE_ALTITUDE_M + 1)).toBeNaN();
+          expect(isaPressureAt(Number.NaN)).toBeNaN();
+          expect(isaPressureAt(MIN_PRESSURE_ALTITUDE_M - 1)).toBeNaN();
+        }
+      }
+    }
+    // And the answers are the 1976 standard's: ICAO Doc 7488 at 10,000 ft 696.82 hPa (from memory).
+    expectClose(isaPressureAt(10000 * 0.3048) / 100, 696.82, { abs: 0.005 }, 'ICAO Doc 7488');
+    expect(isaPressureAt(12496.800000000001)).toBe(at(12496.800000000001).pressure_Pa);
   });
 });

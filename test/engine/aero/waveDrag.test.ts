@@ -2,7 +2,9 @@ import { describe, expect, it } from 'vitest';
 import {
   kornCriticalMach,
   kornDragDivergenceMach,
+  kornTerms,
   kornWaveDrag,
+  kornWaveDragOf,
   LOCK_CRITICAL_OFFSET,
   lockWaveDrag,
   type KornWing,
@@ -82,5 +84,25 @@ describe('lockWaveDrag', () => {
     expect(lockWaveDrag(0.72, 0.72)).toBe(0);
     expectClose(lockWaveDrag(0.77, 0.72), 20 * 0.05 ** 4, { rel: 1e-10 }, 'Lock 20 (M - M_cr)^4');
     expectClose(lockWaveDrag(0.82, 0.72) / lockWaveDrag(0.77, 0.72), 16, { rel: 1e-10 }, 'fourth power: doubling dM gives 16x');
+  });
+});
+
+describe('kornWaveDragOf', () => {
+  it('kornWaveDragOf(kornTerms(wing)) gives kornWaveDrag(wing) to the bit on wings, Machs and CLs either side of M_crit', () => {
+    // The reference is kornWaveDrag itself (the published Korn-Lock form with its cosine per call); Object.is
+    // tells -0 from 0 and every bit of the result.
+    for (const w of [wing(0.95, 27, 0.11), wing(0.87, 0, 0.12), wing(0.9, 35, 0.09), wing(0.95, 40, 0.14)]) {
+      const terms = kornTerms(w);
+      for (let i = 0; i <= 60; i++) {
+        const mach = 0.5 + i * 0.0077;
+        for (const cl of [-0.6, -0.1, -0, 0, 0.05, 0.3317, 0.5, 0.8, 1.2]) {
+          expect(Object.is(kornWaveDragOf(terms, mach, cl), kornWaveDrag(w, mach, cl))).toBe(true);
+        }
+      }
+      // Below M_crit at M 0.5 and above it at M 0.95 on each of these wings (lowest M_crit at CL 0.5:
+      // 0.87 - 0.12 - 0.05 - 0.108 = 0.59 unswept, by hand), so both branches of Lock's rise are compared above.
+      expect(kornWaveDragOf(terms, 0.5, 0.5)).toBe(0);
+      expect(kornWaveDragOf(terms, 0.95, 0.5)).toBeGreaterThan(0);
+    }
   });
 });
