@@ -204,6 +204,14 @@ export function installDeckPointInto(
   s.bleedLoss_N = corrected.bleedLoss_N;
   s.extractionLoss_N = corrected.extractionLoss_N;
   if (s.airflow_kg_s !== null) {
+    const m = spillMemo;
+    if (m.ctx === ctx && Object.is(m.airflow_kg_s, s.airflow_kg_s) && Object.is(m.mach, mach) && Object.is(m.pressure_Pa, free.pressure_Pa) && Object.is(m.temperature_K, free.temperature_K)) {
+      s.massFlowRatio = m.massFlowRatio;
+      s.spillage_N = m.spillage_N;
+      s.lipSuction = m.lipSuction;
+      s.lipTableOutside = m.lipTableOutside;
+      return;
+    }
     const a0 = streamTubeArea(s.airflow_kg_s, free);
     s.massFlowRatio = Number.isFinite(a0) ? a0 / ctx.spillCapture_m2 : null;
     if (s.massFlowRatio !== null) {
@@ -216,8 +224,47 @@ export function installDeckPointInto(
       }
       s.spillage_N = spillageDrag(add_N, s.lipSuction);
     }
+    m.ctx = ctx;
+    m.airflow_kg_s = s.airflow_kg_s;
+    m.mach = mach;
+    m.pressure_Pa = free.pressure_Pa;
+    m.temperature_K = free.temperature_K;
+    m.massFlowRatio = s.massFlowRatio;
+    m.spillage_N = s.spillage_N;
+    m.lipSuction = s.lipSuction;
+    m.lipTableOutside = s.lipTableOutside;
   }
 }
+
+/**
+ * One-entry memo of installDeckPointInto's spillage step, whose answer (mass-flow ratio, spillage drag, lip suction
+ * and whether its table was left) is a pure function of the installation and the free stream (Mach, static pressure
+ * and temperature) and the corrected airflow, keyed by them (the context by identity, the numbers by Object.is).
+ * The part-power solve's root is where its last curve point was installed, so the full lookup that follows there
+ * finds the additive drag (a Newton solve for the capture Mach) and the lip suction instead of computing them again.
+ * Module-level (the engine is single-threaded per realm) so that every scratch shares it.
+ */
+const spillMemo: {
+  ctx: InstallationContext | null;
+  airflow_kg_s: number;
+  mach: number;
+  pressure_Pa: number;
+  temperature_K: number;
+  massFlowRatio: number | null;
+  spillage_N: number;
+  lipSuction: number;
+  lipTableOutside: boolean;
+} = {
+  ctx: null,
+  airflow_kg_s: Number.NaN,
+  mach: Number.NaN,
+  pressure_Pa: Number.NaN,
+  temperature_K: Number.NaN,
+  massFlowRatio: null,
+  spillage_N: 0,
+  lipSuction: 0,
+  lipTableOutside: false,
+};
 
 /**
  * Evaluates one engine at `power` into `s` through the full deck lookup. A

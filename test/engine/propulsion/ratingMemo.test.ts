@@ -175,6 +175,10 @@ describe('the installed model with its part-power memo', () => {
       expect(reused.forThrust(c, thrust_N, ceiling)).toStrictEqual(reference);
       expect(one.forThrust(c, thrust_N, ceiling)).toStrictEqual(reference);
       expect(two.forThrust(c, thrust_N, ceiling)).toStrictEqual(reference);
+      // The root's point is the full lookup's at its power on a model that has evaluated nothing before (so no memo
+      // of the spillage step, engineEvaluation.ts, can answer for it): the memos change no figure of it.
+      const { limit: _limit, thrustRequired_N: _asked, ...point } = reference;
+      expect(point).toStrictEqual(makeInstalledPropulsion(demoOptions(deck)).atPower(c, reference.power));
     }
     // The cases ran through every branch of the solve: the ceiling, idle and a root in between.
     expect([...limits].sort()).toStrictEqual(['above_rating', 'below_idle', 'within']);
