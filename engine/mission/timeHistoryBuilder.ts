@@ -126,24 +126,38 @@ export function appendSample(log: FlightLog, target: LegTarget, state: StateVect
   }
 }
 
-/** The time history as typed arrays. */
+/**
+ * The time history as typed arrays: views on one buffer (one backing store instead of fifteen, each of which costs
+ * an allocation outside the JavaScript heap), the columns in COLUMNS order and the leg index last.
+ */
 export function buildTimeHistory(log: FlightLog): TimeHistory {
   const c = log.columns;
+  const n = log.legIndex.length;
+  const buffer = new ArrayBuffer(n * (COLUMNS.length * Float64Array.BYTES_PER_ELEMENT + Int32Array.BYTES_PER_ELEMENT));
+  const legIndex = new Int32Array(buffer, n * COLUMNS.length * Float64Array.BYTES_PER_ELEMENT, n);
+  legIndex.set(log.legIndex);
+  let offset = 0;
+  const column = (values: readonly number[]): Float64Array<ArrayBuffer> => {
+    const view = new Float64Array(buffer, offset, n);
+    view.set(values);
+    offset += n * Float64Array.BYTES_PER_ELEMENT;
+    return view;
+  };
   return {
-    time_s: new Float64Array(c.time_s),
-    distance_m: new Float64Array(c.distance_m),
-    altitude_m: new Float64Array(c.altitude_m),
-    mach: new Float64Array(c.mach),
-    cas_m_s: new Float64Array(c.cas_m_s),
-    tas_m_s: new Float64Array(c.tas_m_s),
-    mass_kg: new Float64Array(c.mass_kg),
-    thrustAvailable_N: new Float64Array(c.thrustAvailable_N),
-    thrustUsed_N: new Float64Array(c.thrustUsed_N),
-    drag_N: new Float64Array(c.drag_N),
-    fuelFlow_kg_s: new Float64Array(c.fuelFlow_kg_s),
-    cl: new Float64Array(c.cl),
-    liftToDrag: new Float64Array(c.liftToDrag),
-    climbRate_m_s: new Float64Array(c.climbRate_m_s),
-    legIndex: new Int32Array(log.legIndex),
+    time_s: column(c.time_s),
+    distance_m: column(c.distance_m),
+    altitude_m: column(c.altitude_m),
+    mach: column(c.mach),
+    cas_m_s: column(c.cas_m_s),
+    tas_m_s: column(c.tas_m_s),
+    mass_kg: column(c.mass_kg),
+    thrustAvailable_N: column(c.thrustAvailable_N),
+    thrustUsed_N: column(c.thrustUsed_N),
+    drag_N: column(c.drag_N),
+    fuelFlow_kg_s: column(c.fuelFlow_kg_s),
+    cl: column(c.cl),
+    liftToDrag: column(c.liftToDrag),
+    climbRate_m_s: column(c.climbRate_m_s),
+    legIndex,
   };
 }

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { solveMission } from '../../../engine/mission/solveMission';
+import { buildTimeHistory, createFlightLog } from '../../../engine/mission/timeHistoryBuilder';
 import { DEFAULT_CAUTION_SETTINGS } from '../../../engine/cautions/cautionSettings';
 import type { Caution } from '../../../engine/cautions/caution';
 import type { Leg } from '../../../engine/mission/missionTypes';
@@ -79,5 +80,25 @@ describe('timeHistoryBuilder', () => {
     expect(r.cautions.find((c) => c.id === 'altitude_jump')).toMatchObject({ legName: 'cruise', severity: 'info' });
     const level = solveMission(missionInput({ legs: demoLegs(1_000_000), solve: { kind: 'takeoffWeight', takeoffMass_kg: 70000, payload_kg: 10000 } }));
     expect(level.cautions.some((c) => c.id === 'altitude_jump')).toBe(false);
+  });
+
+  it('buildTimeHistory gives each column the values the log holds, in columns that do not overlap', () => {
+    // The reference is the log's own arrays (what appendSample pushed); the columns share one buffer, so writing
+    // one column must leave every other as it was.
+    const log = createFlightLog(TEST_AIRFRAME, DEFAULT_CAUTION_SETTINGS);
+    const names = Object.keys(log.columns) as (keyof typeof log.columns)[];
+    for (let i = 0; i < 7; i++) {
+      names.forEach((name, j) => log.columns[name].push(i * 100 + j + 0.25));
+      log.legIndex.push(i === 0 ? 0 : i - 1);
+    }
+    const history = buildTimeHistory(log);
+    for (const name of names) expect(Array.from(history[name])).toEqual(log.columns[name]);
+    expect(Array.from(history.legIndex)).toEqual([0, 0, 1, 2, 3, 4, 5]);
+    history.time_s.fill(Number.NaN);
+    history.climbRate_m_s.fill(-1);
+    for (const name of names.filter((n) => n !== 'time_s' && n !== 'climbRate_m_s')) expect(Array.from(history[name])).toEqual(log.columns[name]);
+    expect(Array.from(history.legIndex)).toEqual([0, 0, 1, 2, 3, 4, 5]);
+    const empty = buildTimeHistory(createFlightLog(TEST_AIRFRAME, DEFAULT_CAUTION_SETTINGS));
+    for (const column of Object.values(empty)) expect(column.length).toBe(0);
   });
 });
