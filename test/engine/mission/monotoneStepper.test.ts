@@ -55,7 +55,7 @@ describe('monotoneStepEnds', () => {
     expect(monotoneIntervalEnds(0, 0, [])).toEqual([0]);
   });
 
-  it('intervalSteps takes the larger of the altitude and the time bound, from 1 to MAX_INTERVAL_STEPS', () => {
+  it('intervalSteps takes the larger of the altitude and the time bound, at least 1, the time bound at most MAX_INTERVAL_STEPS', () => {
     // 1,524 m at 5 m/s is 304.8 s: 3 steps of at most 145 s; at 50 m/s the 1,600 m bound gives 1, a 1,200 m bound 2.
     expect(intervalSteps(1524, 1600, 5, 145)).toBe(3);
     expect(intervalSteps(1524, 1600, -5, 145)).toBe(3);
@@ -65,6 +65,8 @@ describe('monotoneStepEnds', () => {
     // Exactly 2 x 145 s is 2 steps (the 1e-9 allowance), not 3.
     expect(intervalSteps(1450, 1600, 5, 145)).toBe(2);
     expect(intervalSteps(1524, 1600, 1e-6, 145)).toBe(MAX_INTERVAL_STEPS);
+    // The length bound alone is not capped (as monotoneStepEnds always cut it).
+    expect(intervalSteps(10000, 1, 1e-6, 145)).toBe(10000);
     expect(intervalSteps(0, 1600, 5, 145)).toBe(1);
   });
 });
