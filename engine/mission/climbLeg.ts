@@ -8,7 +8,7 @@
 import type { InstalledPoint, RatingName } from '../propulsion/propulsionModel';
 import type { SpeedSchedule } from './missionTypes';
 import { pressureAltitudeRate } from './energyShareFactor';
-import { airPointIn, fuelExhaustedEvents, makeSample, pathDerivative } from './flightPoint';
+import { airPointIn, dragForceAt, fuelExhaustedEvents, makeSample, pathDerivative } from './flightPoint';
 import { flyMonotoneSegment, missionDomain } from './flySegment';
 import { BASE_ALTITUDE_STEP, pathBreakAltitudes } from './stepBreaks';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
@@ -69,7 +69,7 @@ export function makeClimbSegment(
     const h = y[S_ALT];
     const m = y[S_MASS];
     prepare(h);
-    const drag_N = input.aero.drag({ altitude_m: h, mach, mass_kg: m, loadFactor: 1 }).drag_N;
+    const drag_N = dragForceAt(input, h, mach, m);
     const tas_m_s = mach * air!.speedOfSound_m_s;
     const rate = pressureAltitudeRate(th!.thrust_N, drag_N, tas_m_s, m, f, air!.temperature_K, air!.isaTemperature_K);
     return pathDerivative(rate, tas_m_s, air!, target.env.wind_m_s, th!.fuelFlow_kg_s);

@@ -9,7 +9,7 @@
 import type { InstalledPoint } from '../propulsion/propulsionModel';
 import type { SpeedSchedule } from './missionTypes';
 import { pressureAltitudeRate } from './energyShareFactor';
-import { airPointIn, fuelExhaustedEvents, makeSample, pathDerivative, ratingPoint, thrustPoint } from './flightPoint';
+import { airPointIn, dragForceAt, fuelExhaustedEvents, makeSample, pathDerivative, ratingPoint, thrustPoint } from './flightPoint';
 import { flyMonotoneSegment, missionDomain } from './flySegment';
 import { BASE_ALTITUDE_STEP, pathBreakAltitudes } from './stepBreaks';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
@@ -103,7 +103,7 @@ function makeDescentSegment(
     const m = y[S_MASS];
     prepare(h);
     const air = cachedAir!;
-    const drag_N = input.aero.drag({ altitude_m: h, mach: cachedMach, mass_kg: m, loadFactor: 1 }).drag_N;
+    const drag_N = dragForceAt(input, h, cachedMach, m);
     const tas_m_s = cachedMach * air.speedOfSound_m_s;
     const engine = cachedIdle!;
     const rate = pressureAltitudeRate(engine.thrust_N, drag_N, tas_m_s, m, cachedFactor, air.temperature_K, air.isaTemperature_K);
