@@ -7,7 +7,8 @@
  */
 import type { RatingName } from '../propulsion/propulsionModel';
 import type { PartPowerPoint } from '../propulsion/propulsionModel';
-import { airPoint, fuelExhaustedEvents, makeSample, ratingPoint, thrustPoint, type AirPoint } from './flightPoint';
+import { airPoint, dragForceAt, fuelExhaustedEvents, makeSample, ratingPoint, thrustPoint, type AirPoint } from './flightPoint';
+import { missionAir } from './missionAtmosphere';
 import { distanceIndex, type LegTarget, type MissionContext } from './missionContext';
 import { S_MASS, S_TIME, STATE_SIZE, type Evaluation, type Segment, type SegmentEvent, type StateVector } from './missionState';
 
@@ -56,10 +57,20 @@ export function makeLevelSegment(ctx: MissionContext, target: LegTarget, spec: L
       breakCoordinate: engine.power,
     };
   };
-  // RK4 stages need no sample, so no thrust-available query (a full rated-thrust lookup) and no sample object.
+  // RK4 stages need no sample, so no thrust-available query (a full rated-thrust lookup) and no sample object,
+  // and no air point or drag breakdown either: the same air data, drag force and part-power query as pointOf.
   const derivative = (y: StateVector): Evaluation['derivative'] => {
-    const { at, engine } = pointOf(y);
-    return derivativeOf(at, engine);
+    const m = y[S_MASS];
+    const h = spec.altitudeOf(m);
+    const mach = spec.machOf(h, m);
+    const tas_m_s = mach * missionAir(h, dev).speedOfSound_m_s;
+    const engine = input.propulsion.forThrust({ altitude_m: h, mach, isaDev_K: dev }, dragForceAt(input, h, mach, m), spec.ceiling);
+    const d = new Float64Array(STATE_SIZE);
+    d[0] = 1;
+    d[1] = tas_m_s;
+    d[2] = tas_m_s + target.env.wind_m_s;
+    d[S_MASS] = -engine.fuelFlow_kg_s;
+    return d;
   };
   const events: SegmentEvent[] = [{ stop: 'thrust_below_drag', g: (_y, s) => s.drag_N - s.thrustAvailable_N }];
   if (spec.endDistance_m !== null) {

@@ -5,7 +5,7 @@
  * performance text, e.g. Anderson, Aircraft Performance and Design, ch. 6).
  */
 import type { RatingName } from '../propulsion/propulsionModel';
-import { fuelExhaustedEvents, airPoint, makeSample, ratingPoint } from './flightPoint';
+import { dragForceAt, fuelExhaustedEvents, airPoint, makeSample, ratingPoint } from './flightPoint';
 import { flyMonotoneSegment, missionDomain } from './flySegment';
 import { speedBreaks } from './stepBreaks';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
@@ -50,8 +50,20 @@ export function flyLevelSpeedChange(
     const { d, at, th } = pointOf(y);
     return { derivative: d, sample: makeSample(at, th.thrust_N, th.thrust_N, th.fuelFlow_kg_s, 0, th) };
   };
-  // RK4 stages need no sample.
-  const derivative = (y: StateVector): Float64Array => pointOf(y).d;
+  // RK4 stages need no sample, so no air point or drag breakdown: the same drag force and rated point as pointOf.
+  const derivative = (y: StateVector): Float64Array => {
+    const m = y[S_MASS];
+    const mach = Math.max(y[S_TAS], 0) / a;
+    const tas_m_s = mach * a;
+    const th = input.propulsion.atRating({ altitude_m, mach, isaDev_K: dev }, rating);
+    const d = new Float64Array(STATE_SIZE);
+    d[0] = 1;
+    d[1] = tas_m_s;
+    d[2] = tas_m_s + target.env.wind_m_s;
+    d[S_MASS] = -th.fuelFlow_kg_s;
+    d[S_TAS] = m > 0 ? (th.thrust_N - dragForceAt(input, altitude_m, mach, m)) / m : 0;
+    return d;
+  };
   const events: SegmentEvent[] = [
     { stop: 'speed_reached', stateOnly: true, g: (y) => direction * (y[S_TAS] - vTarget) },
     {
