@@ -9,7 +9,7 @@
  * Speed is measured here, never in unit tests.
  */
 import { cpus } from 'node:os';
-import { formatTable, runCase } from './benchRunner';
+import { DEFAULT_TIMING, formatTable, runCase } from './benchRunner';
 import type { BenchResult } from './benchTypes';
 import { formatCliTiming, runCliTiming, type CliTiming } from './cliTiming';
 import { formatEqualAccuracy, runEqualAccuracy, type EqualAccuracy } from './equalAccuracy';
@@ -31,7 +31,8 @@ const results: BenchResult[] = [];
 for (const { file, section } of BENCH_SECTIONS) {
   const matches = filters.length === 0 || filters.some((f) => file.includes(f) || section.title.toLowerCase().includes(f));
   if (!matches) continue;
-  for (const bench of section.cases) results.push(runCase(section.title, bench));
+  const timing = section.timing === undefined ? DEFAULT_TIMING : { ...DEFAULT_TIMING, ...section.timing };
+  for (const bench of section.cases) results.push(runCase(section.title, bench, timing));
 }
 
 const cores = cpus().length;

@@ -28,6 +28,8 @@ const next = callCounter(8);
 
 export const section: BenchSection = {
   title: 'analyses (demo project)',
+  // Whole missions: each case warmed to the JIT's steady speed, then timed over 1.5 s (benchTypes.ts BenchSection.timing).
+  timing: { warmUp_s: 3, measure_s: 1.5 },
   cases: [
     { name: 'thrustDragCrossover (81 Machs)', run: () => thrustDragCrossover(models, { altitude_m: 9000 + 100 * next(), mass_kg: 14000, rating: 'maxCruise', isaDev_K: 0 }) },
     { name: 'specificRange (61 Machs)', run: () => specificRange(models, { altitude_m: 9000 + 100 * next(), mass_kg: 14000, isaDev_K: 0 }) },

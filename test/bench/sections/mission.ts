@@ -49,6 +49,8 @@ const analytic = missionInput({
 
 export const section: BenchSection = {
   title: 'mission solver',
+  // Whole missions: each case warmed to the JIT's steady speed, then timed over 1.5 s (benchTypes.ts BenchSection.timing).
+  timing: { warmUp_s: 3, measure_s: 1.5 },
   cases: [
     { name: `demo project, solve mode '${demo.solve.kind}' (deck + installation)`, run: () => solveMission(withPayload(demo, 10 * next())) },
     {
