@@ -37,7 +37,6 @@ export function airPointIn(input: MissionInput, air: MissionAir, altitude_m: num
   };
 }
 
-/** Installed thrust and fuel flow (all engines) at a rating. */
 /**
  * The drag force (N) at 1 g of `input.aero` at pressure altitude (m), Mach and mass (kg): the model's
  * dragForce_N where it has one (no breakdown object: the same bits), else drag(...).drag_N. For RK4 stages,
@@ -48,6 +47,7 @@ export function dragForceAt(input: MissionInput, altitude_m: number, mach: numbe
   return aero.dragForce_N !== undefined ? aero.dragForce_N(altitude_m, mach, mass_kg, 1) : aero.drag({ altitude_m, mach, mass_kg, loadFactor: 1 }).drag_N;
 }
 
+/** Installed thrust and fuel flow (all engines) at a rating. */
 export function ratingPoint(input: MissionInput, at: AirPoint, isaDev_K: number, rating: RatingName): InstalledPoint {
   return input.propulsion.atRating({ altitude_m: at.altitude_m, mach: at.mach, isaDev_K }, rating);
 }

@@ -34,12 +34,12 @@ export interface LevelFlightSpec {
 export function makeLevelSegment(ctx: MissionContext, target: LegTarget, spec: LevelFlightSpec): Segment {
   const input = ctx.input;
   const dev = target.env.isaDev_K;
-  const derivativeOf = (at: AirPoint, engine: PartPowerPoint): Evaluation['derivative'] => {
+  const derivativeOf = (tas_m_s: number, fuelFlow_kg_s: number): Evaluation['derivative'] => {
     const d = new Float64Array(STATE_SIZE);
     d[0] = 1;
-    d[1] = at.tas_m_s;
-    d[2] = at.tas_m_s + target.env.wind_m_s;
-    d[S_MASS] = -engine.fuelFlow_kg_s;
+    d[1] = tas_m_s;
+    d[2] = tas_m_s + target.env.wind_m_s;
+    d[S_MASS] = -fuelFlow_kg_s;
     return d;
   };
   const pointOf = (y: StateVector): { at: AirPoint; engine: PartPowerPoint } => {
@@ -52,7 +52,7 @@ export function makeLevelSegment(ctx: MissionContext, target: LegTarget, spec: L
     const { at, engine } = pointOf(y);
     const available = ratingPoint(input, at, dev, spec.ceiling).thrust_N;
     return {
-      derivative: derivativeOf(at, engine),
+      derivative: derivativeOf(at.tas_m_s, engine.fuelFlow_kg_s),
       sample: makeSample(at, available, engine.thrust_N, engine.fuelFlow_kg_s, 0, engine),
       breakCoordinate: engine.power,
     };
@@ -65,12 +65,7 @@ export function makeLevelSegment(ctx: MissionContext, target: LegTarget, spec: L
     const mach = spec.machOf(h, m);
     const tas_m_s = mach * missionAir(h, dev).speedOfSound_m_s;
     const engine = input.propulsion.forThrust({ altitude_m: h, mach, isaDev_K: dev }, dragForceAt(input, h, mach, m), spec.ceiling);
-    const d = new Float64Array(STATE_SIZE);
-    d[0] = 1;
-    d[1] = tas_m_s;
-    d[2] = tas_m_s + target.env.wind_m_s;
-    d[S_MASS] = -engine.fuelFlow_kg_s;
-    return d;
+    return derivativeOf(tas_m_s, engine.fuelFlow_kg_s);
   };
   const events: SegmentEvent[] = [{ stop: 'thrust_below_drag', g: (_y, s) => s.drag_N - s.thrustAvailable_N }];
   if (spec.endDistance_m !== null) {

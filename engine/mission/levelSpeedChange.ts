@@ -11,7 +11,7 @@ import { speedBreaks } from './stepBreaks';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
 import { BASE_MONOTONE_STEP, BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
 import { missionAir } from './missionAtmosphere';
-import { S_ALT, S_MASS, S_TAS, STATE_SIZE, type Segment, type SegmentEvent, type StateVector } from './missionState';
+import { S_ALT, S_MASS, S_TAS, STATE_SIZE, type Evaluation, type Segment, type SegmentEvent, type StateVector } from './missionState';
 import { msg, q } from '../units/messageParts';
 
 /** Least acceleration (m/s^2) for stepping a speed change in TAS; a slower change goes to the time integrator. */
@@ -34,35 +34,32 @@ export function flyLevelSpeedChange(
   const a = missionAir(altitude_m, dev).speedOfSound_m_s;
   const vTarget = toMach * a;
   const direction = vTarget >= start[S_TAS] ? 1 : -1;
+  const derivativeOf = (tas_m_s: number, mass_kg: number, thrust_N: number, fuelFlow_kg_s: number, drag_N: number): Evaluation['derivative'] => {
+    const d = new Float64Array(STATE_SIZE);
+    d[0] = 1;
+    d[1] = tas_m_s;
+    d[2] = tas_m_s + target.env.wind_m_s;
+    d[S_MASS] = -fuelFlow_kg_s;
+    d[S_TAS] = mass_kg > 0 ? (thrust_N - drag_N) / mass_kg : 0;
+    return d;
+  };
   const pointOf = (y: StateVector) => {
     const mach = Math.max(y[S_TAS], 0) / a;
     const at = airPoint(input, altitude_m, mach, y[S_MASS], dev);
     const th = ratingPoint(input, at, dev, rating);
-    const d = new Float64Array(STATE_SIZE);
-    d[0] = 1;
-    d[1] = at.tas_m_s;
-    d[2] = at.tas_m_s + target.env.wind_m_s;
-    d[S_MASS] = -th.fuelFlow_kg_s;
-    d[S_TAS] = y[S_MASS] > 0 ? (th.thrust_N - at.drag.drag_N) / y[S_MASS] : 0;
-    return { d, at, th };
+    return { d: derivativeOf(at.tas_m_s, y[S_MASS], th.thrust_N, th.fuelFlow_kg_s, at.drag.drag_N), at, th };
   };
   const evaluate: Segment['evaluate'] = (y) => {
     const { d, at, th } = pointOf(y);
     return { derivative: d, sample: makeSample(at, th.thrust_N, th.thrust_N, th.fuelFlow_kg_s, 0, th) };
   };
   // RK4 stages need no sample, so no air point or drag breakdown: the same drag force and rated point as pointOf.
-  const derivative = (y: StateVector): Float64Array => {
+  const derivative = (y: StateVector): Evaluation['derivative'] => {
     const m = y[S_MASS];
     const mach = Math.max(y[S_TAS], 0) / a;
     const tas_m_s = mach * a;
     const th = input.propulsion.atRating({ altitude_m, mach, isaDev_K: dev }, rating);
-    const d = new Float64Array(STATE_SIZE);
-    d[0] = 1;
-    d[1] = tas_m_s;
-    d[2] = tas_m_s + target.env.wind_m_s;
-    d[S_MASS] = -th.fuelFlow_kg_s;
-    d[S_TAS] = m > 0 ? (th.thrust_N - dragForceAt(input, altitude_m, mach, m)) / m : 0;
-    return d;
+    return derivativeOf(tas_m_s, m, th.thrust_N, th.fuelFlow_kg_s, m > 0 ? dragForceAt(input, altitude_m, mach, m) : 0);
   };
   const events: SegmentEvent[] = [
     { stop: 'speed_reached', stateOnly: true, g: (y) => direction * (y[S_TAS] - vTarget) },

@@ -26,8 +26,8 @@
  * (from memory); step ends on slope breaks - common practice for
  * piecewise-linear tables.
  */
-import { integrateSegment, UNBOUNDED_DOMAIN, type SampleSink, type SegmentRun, type StateDomain } from './integrator';
-import { S_ALT, S_GROUND, S_MASS, S_TAS, STATE_SIZE, type Segment, type SegmentStop, type StateVector } from './missionState';
+import { integrateSegment, notFiniteState, outsideDomain, UNBOUNDED_DOMAIN, type SampleSink, type SegmentRun, type StateDomain } from './integrator';
+import { S_GROUND, STATE_SIZE, type Segment, type SegmentStop, type StateVector } from './missionState';
 
 export interface MonotonePlan {
   /** State index stepped on (S_ALT or S_TAS). */
@@ -109,22 +109,6 @@ export function monotoneStepEnds(from: number, to: number, breaks: readonly numb
 const NUDGE = 1e-9;
 
 /**
- * Whether any component of `y` is NaN or infinite: 0 x a finite value is (+/-)0 and their sum is (+/-)0, while
- * 0 x NaN or 0 x Infinity is NaN (IEEE 754), so one sum replaces a Number.isFinite test per component.
- */
-function notFinite(y: Float64Array): boolean {
-  return y[0]! * 0 + y[1]! * 0 + y[2]! * 0 + y[3]! * 0 + y[4]! * 0 + y[5]! * 0 !== 0;
-}
-
-/** Whether `y` is outside `domain`: the same test as integrator.ts `domainExit(domain, y) !== null`, without the reason. */
-function outside(domain: StateDomain, y: StateVector): boolean {
-  if (notFinite(y)) return true;
-  const h = y[S_ALT];
-  const tas = y[S_TAS];
-  return h < domain.minAltitude_m || h > domain.maxAltitude_m || !(y[S_MASS] > domain.minMass_kg) || tas < 0 || tas > domain.maxTas_m_s;
-}
-
-/**
  * Integrates `segment` from `start` (not modified) to `plan.to` along
  * `plan.component`, handing each accepted point to `sink`; see the file
  * comment for when it hands over to the time integrator.
@@ -155,10 +139,10 @@ export function integrateMonotone(
       domain,
     );
   };
-  if (outside(domain, y)) return timeIntegrator(y, false);
+  if (outsideDomain(domain, y)) return timeIntegrator(y, false);
   let ev = segment.evaluate(y);
   let d = ev.derivative;
-  if (notFinite(d) || !(direction * d[c] >= minRate) || (groundProgress && !(d[S_GROUND] > 0))) return timeIntegrator(y, false);
+  if (notFiniteState(d) || !(direction * d[c] >= minRate) || (groundProgress && !(d[S_GROUND] > 0))) return timeIntegrator(y, false);
   const others = segment.events.filter((e) => e.stop !== plan.targetStop);
   const eventCount = others.length;
   for (let e = 0; e < eventCount; e++) if (others[e]!.g(y, ev.sample) >= 0) return timeIntegrator(y, false);
@@ -182,7 +166,7 @@ export function integrateMonotone(
     const first = start.slice();
     const firstStep = (n > 1 ? a + (b - a) / n : b) - start[c];
     first[c] = start[c] + NUDGE * firstStep;
-    if (outside(domain, first)) return timeIntegrator(y, true);
+    if (outsideDomain(domain, first)) return timeIntegrator(y, true);
     f1 = rhs(first);
   }
   let s0 = start[c];
@@ -205,7 +189,7 @@ export function integrateMonotone(
       tmp[q] = y[q] + (half * f) / r1;
     }
     tmp[c] = mid;
-    if (outside(domain, tmp)) return timeIntegrator(y, true);
+    if (outsideDomain(domain, tmp)) return timeIntegrator(y, true);
     const f2 = rhs(tmp);
     const r2 = f2[c]!;
     if (!(direction * r2 >= minRate)) return timeIntegrator(y, true);
@@ -215,7 +199,7 @@ export function integrateMonotone(
       tmp[q] = y[q] + half * k;
     }
     tmp[c] = mid;
-    if (outside(domain, tmp)) return timeIntegrator(y, true);
+    if (outsideDomain(domain, tmp)) return timeIntegrator(y, true);
     const f3 = rhs(tmp);
     const r3 = f3[c]!;
     if (!(direction * r3 >= minRate)) return timeIntegrator(y, true);
@@ -225,7 +209,7 @@ export function integrateMonotone(
       tmp[q] = y[q] + h * k;
     }
     tmp[c] = last ? s1 - NUDGE * h : s1;
-    if (outside(domain, tmp)) return timeIntegrator(y, true);
+    if (outsideDomain(domain, tmp)) return timeIntegrator(y, true);
     const f4 = rhs(tmp);
     const r4 = f4[c]!;
     if (!(direction * r4 >= minRate)) return timeIntegrator(y, true);
@@ -233,10 +217,10 @@ export function integrateMonotone(
     const sixth = h / 6;
     for (let q = 0; q < STATE_SIZE; q++) next[q] = y[q] + sixth * (k1[q]! + 2 * k2[q]! + 2 * k3[q]! + f4[q]! / r4);
     next[c] = s1;
-    if (outside(domain, next)) return timeIntegrator(y, true);
+    if (outsideDomain(domain, next)) return timeIntegrator(y, true);
     const nextEv = segment.evaluate(next);
     const nd = nextEv.derivative;
-    if (notFinite(nd) || !(direction * nd[c] >= minRate) || (groundProgress && !(nd[S_GROUND] > 0))) return timeIntegrator(y, true);
+    if (notFiniteState(nd) || !(direction * nd[c] >= minRate) || (groundProgress && !(nd[S_GROUND] > 0))) return timeIntegrator(y, true);
     for (let e = 0; e < eventCount; e++) if (others[e]!.g(next, nextEv.sample) >= 0) return timeIntegrator(y, true);
     sink(next, nextEv.sample);
     y = next;

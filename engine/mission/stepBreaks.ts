@@ -6,6 +6,7 @@
  * for piecewise-linear tables).
  */
 import { transitionAltitude } from './missionAtmosphere';
+import type { MissionInput } from './missionTypes';
 
 /**
  * Longest steps of the climbs and descents (before `stepScale`; monotoneStepper.ts `MonotonePlan`): 1,600 m of
@@ -20,7 +21,6 @@ export const BASE_ALTITUDE_STEP = {
   altitude_m: 1600,
   time_s: 145,
 } as const;
-import type { MissionInput } from './missionTypes';
 
 /**
  * Break Machs and the CAS/Mach break altitudes of each held CAS, per pair of models: a pure function of the

@@ -14,9 +14,11 @@ describe('equal-accuracy comparison and CLI timing text (no timing assertions)',
   });
 
   it('formatEqualAccuracy prints the peer tolerance chosen, its time and difference, and the ratio', () => {
+    const b = { medianMission_s: 0.002, blockFuel_kg: 5000.1, tightBlockFuel_kg: 5000, relativeDifference: 2e-5 };
     const text = formatEqualAccuracy({
       tolerance: 1e-4,
-      blockwise: { medianMission_s: 0.002, blockFuel_kg: 5000.1, tightBlockFuel_kg: 5000, relativeDifference: 2e-5 },
+      blockwise: b,
+      blockwiseLoosened: { ...b, stepScale: 1, tries: [] },
       peer: {
         tightBlockFuel_kg: 5001,
         tries: [
@@ -30,6 +32,7 @@ describe('equal-accuracy comparison and CLI timing text (no timing assertions)',
         repeat: 3,
       },
       ratio: 400,
+      ratioLoosened: null,
     });
     expect(text).toContain('within 0.01 %');
     expect(text).toContain('rtol 1e-3: block fuel 5003.000 kg, +0.0400 %, 500.00 ms  (outside)');
@@ -77,7 +80,7 @@ describe('equal-accuracy comparison and CLI timing text (no timing assertions)',
 
   it('formatEqualAccuracy and formatCliTiming say why a part did not run', () => {
     const b = { medianMission_s: 0.002, blockFuel_kg: 1, tightBlockFuel_kg: 1, relativeDifference: 0 };
-    expect(formatEqualAccuracy({ tolerance: 1e-4, blockwise: b, peer: { error: 'python3 could not be started: ENOENT' }, ratio: null })).toContain('not run (python3 could not be started');
+    expect(formatEqualAccuracy({ tolerance: 1e-4, blockwise: b, blockwiseLoosened: { ...b, stepScale: 1, tries: [] }, peer: { error: 'python3 could not be started: ENOENT' }, ratio: null, ratioLoosened: null })).toContain('not run (python3 could not be started');
     const t = formatCliTiming({ bundle: 'is not built', runs: 3, help_s: 0.1, fly_s: 0.2, nodeBare_s: 0.05, sweep: { error: 'boom' } });
     expect(t).toContain('NOT bundled: the bundle is not built');
     expect(t).toContain('blockwise --help 100 ms; blockwise fly <demo> 200 ms');

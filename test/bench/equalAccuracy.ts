@@ -56,15 +56,15 @@ export interface EqualAccuracy {
   readonly tolerance: number;
   /** At production steps (stepScale 1). */
   readonly blockwise: BlockwiseTiming;
-  /** At the loosest step scale tried that stays ok and within the tolerance (absent in reports made before it was added). */
-  readonly blockwiseLoosened?: BlockwiseTiming & { readonly stepScale: number; readonly tries: readonly BlockwiseTry[] };
+  /** At the loosest step scale tried that stays ok and within the tolerance (1, production, when none does). */
+  readonly blockwiseLoosened: BlockwiseTiming & { readonly stepScale: number; readonly tries: readonly BlockwiseTry[] };
   readonly peer:
     | { readonly tightBlockFuel_kg: number; readonly tries: readonly PeerTry[]; readonly rtol: number; readonly medianMission_s: number; readonly blockFuel_kg: number; readonly relativeDifference: number; readonly repeat: number }
     | { readonly error: string };
   /** Peer time / Blockwise time at equal accuracy (Blockwise at production steps). */
   readonly ratio: number | null;
   /** Peer time / Blockwise time, both at their loosest setting within the tolerance. */
-  readonly ratioLoosened?: number | null;
+  readonly ratioLoosened: number | null;
 }
 
 function runPeer(rtol: number, repeat: number): PeerReport | string {
@@ -118,7 +118,7 @@ export function runEqualAccuracy(blockwiseRuns = 31, peerRepeat = 3): EqualAccur
   const loose = loosenBlockwise(input, tight.blockFuel_kg);
   const blockwiseLoosened = { ...timing(loose.chosen), stepScale: loose.chosen, tries: loose.tries };
   const reference = runPeer(PEER_TIGHT_RTOL, 1);
-  if (typeof reference === 'string') return { tolerance: EQUAL_ACCURACY, blockwise, blockwiseLoosened, peer: { error: reference }, ratio: null };
+  if (typeof reference === 'string') return { tolerance: EQUAL_ACCURACY, blockwise, blockwiseLoosened, peer: { error: reference }, ratio: null, ratioLoosened: null };
   const tries: PeerTry[] = [];
   let chosen: PeerTry | null = null;
   for (const rtol of PEER_RTOLS) {
@@ -132,9 +132,9 @@ export function runEqualAccuracy(blockwiseRuns = 31, peerRepeat = 3): EqualAccur
     if (Math.abs(t.relativeDifference) > EQUAL_ACCURACY) break;
     chosen = t;
   }
-  if (chosen === null) return { tolerance: EQUAL_ACCURACY, blockwise, blockwiseLoosened, peer: { error: `no tolerance from ${PEER_RTOLS[0]} up kept the peer within ${EQUAL_ACCURACY * 100} %` }, ratio: null };
+  if (chosen === null) return { tolerance: EQUAL_ACCURACY, blockwise, blockwiseLoosened, peer: { error: `no tolerance from ${PEER_RTOLS[0]} up kept the peer within ${EQUAL_ACCURACY * 100} %` }, ratio: null, ratioLoosened: null };
   const timed = runPeer(chosen.rtol, peerRepeat);
-  if (typeof timed === 'string') return { tolerance: EQUAL_ACCURACY, blockwise, blockwiseLoosened, peer: { error: timed }, ratio: null };
+  if (typeof timed === 'string') return { tolerance: EQUAL_ACCURACY, blockwise, blockwiseLoosened, peer: { error: timed }, ratio: null, ratioLoosened: null };
   const peer = {
     tightBlockFuel_kg: reference.blockFuel_kg,
     tries,
@@ -171,10 +171,8 @@ export function formatEqualAccuracy(r: EqualAccuracy): string {
     `  Blockwise (production steps, median of the timed runs after ${BLOCKWISE_WARMUP} warm-up solves) ${ms(b.medianMission_s)}, block fuel ${b.blockFuel_kg.toFixed(3)} kg, ${pct(b.relativeDifference)} from its fine-step answer ${b.tightBlockFuel_kg.toFixed(3)} kg`,
   ];
   const l = r.blockwiseLoosened;
-  if (l !== undefined) {
-    for (const t of l.tries) lines.push(`    stepScale ${t.stepScale}: ${t.status === 'ok' ? `block fuel ${t.blockFuel_kg.toFixed(3)} kg, ${pct(t.relativeDifference)}` : t.status}${t.status !== 'ok' || Math.abs(t.relativeDifference) > r.tolerance ? '  (outside)' : ''}`);
-    lines.push(`  Blockwise loosened (stepScale ${l.stepScale}, the loosest within): ${ms(l.medianMission_s)}, block fuel ${l.blockFuel_kg.toFixed(3)} kg, ${pct(l.relativeDifference)} from its fine-step answer`);
-  }
+  for (const t of l.tries) lines.push(`    stepScale ${t.stepScale}: ${t.status === 'ok' ? `block fuel ${t.blockFuel_kg.toFixed(3)} kg, ${pct(t.relativeDifference)}` : t.status}${t.status !== 'ok' || Math.abs(t.relativeDifference) > r.tolerance ? '  (outside)' : ''}`);
+  lines.push(`  Blockwise loosened (stepScale ${l.stepScale}, the loosest within): ${ms(l.medianMission_s)}, block fuel ${l.blockFuel_kg.toFixed(3)} kg, ${pct(l.relativeDifference)} from its fine-step answer`);
   const p = r.peer;
   if ('error' in p) {
     lines.push(`  Python peer: not run (${p.error})`);
@@ -189,6 +187,6 @@ export function formatEqualAccuracy(r: EqualAccuracy): string {
     `  Python peer at rtol ${p.rtol.toExponential(0)} (median of ${p.repeat}): ${ms(p.medianMission_s)}, block fuel ${p.blockFuel_kg.toFixed(3)} kg, ${pct(p.relativeDifference)} from its tight answer`,
     `  Ratio at equal accuracy, peer / Blockwise: ${r.ratio === null ? 'n/a' : `${r.ratio.toFixed(0)} x`} (Blockwise at production steps)`,
   );
-  if (r.ratioLoosened !== undefined && r.ratioLoosened !== null) lines.push(`  Ratio with both sides at their loosest setting within ${(100 * r.tolerance).toFixed(2)} %: ${r.ratioLoosened.toFixed(0)} x`);
+  if (r.ratioLoosened !== null) lines.push(`  Ratio with both sides at their loosest setting within ${(100 * r.tolerance).toFixed(2)} %: ${r.ratioLoosened.toFixed(0)} x`);
   return lines.join('\n');
 }
