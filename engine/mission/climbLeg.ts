@@ -8,14 +8,14 @@
 import type { InstalledPoint, RatingName } from '../propulsion/propulsionModel';
 import type { SpeedSchedule } from './missionTypes';
 import { pressureAltitudeRate } from './energyShareFactor';
-import { airPointIn, dragForceAt, fuelExhaustedEvents, makeSample, pathDerivative } from './flightPoint';
+import { airPointIn, dragForceAt, fuelExhaustedEvents, makeSample, pathDerivative, writePathDerivative } from './flightPoint';
 import { flyMonotoneSegment, missionDomain } from './flySegment';
 import { BASE_ALTITUDE_STEP, pathBreakAltitudes } from './stepBreaks';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
 import { flyLevelSpeedChange } from './levelSpeedChange';
 import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
 import { LAPSE_JUMPS_M, type MissionAir } from './missionAtmosphere';
-import { S_ALT, S_MASS, S_TAS, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
+import { S_ALT, S_MASS, S_TAS, STATE_SIZE, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
 import { schedulePhases } from './speedSchedule';
 import { stageTrack } from './stageMemo';
 import { msg, q } from '../units/messageParts';
@@ -64,7 +64,9 @@ export function makeClimbSegment(
     const d = pathDerivative(rate, at.tas_m_s, air!, target.env.wind_m_s, th!.fuelFlow_kg_s);
     return { derivative: d, sample: makeSample(at, th!.thrust_N, th!.thrust_N, th!.fuelFlow_kg_s, rate, th!) };
   };
-  // RK4 stages need no sample, so no air point object either: the same drag query and TAS (M a) as airPointIn.
+  // RK4 stages need no sample, so no air point object either: the same drag query and TAS (M a) as airPointIn,
+  // written into one buffer the stages share (Segment.derivative).
+  const stage = new Float64Array(STATE_SIZE);
   const derivative = (y: StateVector): Evaluation['derivative'] => {
     const h = y[S_ALT];
     const m = y[S_MASS];
@@ -72,7 +74,7 @@ export function makeClimbSegment(
     const drag_N = dragForceAt(input, h, mach, m);
     const tas_m_s = mach * air!.speedOfSound_m_s;
     const rate = pressureAltitudeRate(th!.thrust_N, drag_N, tas_m_s, m, f, air!.temperature_K, air!.isaTemperature_K);
-    return pathDerivative(rate, tas_m_s, air!, target.env.wind_m_s, th!.fuelFlow_kg_s);
+    return writePathDerivative(stage, rate, tas_m_s, air!, target.env.wind_m_s, th!.fuelFlow_kg_s);
   };
   const events: SegmentEvent[] = [
     { stop: 'altitude_reached', stateOnly: true, g: (y) => y[S_ALT] - toAltitude_m },

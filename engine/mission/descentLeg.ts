@@ -9,14 +9,14 @@
 import type { InstalledPoint } from '../propulsion/propulsionModel';
 import type { SpeedSchedule } from './missionTypes';
 import { pressureAltitudeRate } from './energyShareFactor';
-import { airPointIn, dragForceAt, fuelExhaustedEvents, makeSample, pathDerivative, ratingPoint, thrustPoint } from './flightPoint';
+import { airPointIn, dragForceAt, fuelExhaustedEvents, makeSample, pathDerivative, ratingPoint, thrustPoint, writePathDerivative } from './flightPoint';
 import { flyMonotoneSegment, missionDomain } from './flySegment';
 import { BASE_ALTITUDE_STEP, pathBreakAltitudes } from './stepBreaks';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
 import { flyLevelSpeedChange } from './levelSpeedChange';
 import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
 import { G0_M_S2, LAPSE_JUMPS_M, missionAir, type MissionAir } from './missionAtmosphere';
-import { S_ALT, S_MASS, S_TAS, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
+import { S_ALT, S_MASS, S_TAS, STATE_SIZE, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
 import { schedulePhases } from './speedSchedule';
 import { stageTrack } from './stageMemo';
 import { appendCaution } from './timeHistoryBuilder';
@@ -97,7 +97,9 @@ function makeDescentSegment(
     const { derivative, sample } = pointOf(y, true);
     return { derivative, sample: sample! };
   };
-  // An idle RK4 stage (no sample): the same drag query, TAS (M a) and rate as pointOf, without its objects.
+  // An idle RK4 stage (no sample): the same drag query, TAS (M a) and rate as pointOf, without its objects, written
+  // into one buffer the stages share (Segment.derivative).
+  const stage = new Float64Array(STATE_SIZE);
   const idleStage = (y: StateVector): Evaluation['derivative'] => {
     const h = y[S_ALT];
     const m = y[S_MASS];
@@ -107,7 +109,7 @@ function makeDescentSegment(
     const tas_m_s = cachedMach * air.speedOfSound_m_s;
     const engine = cachedIdle!;
     const rate = pressureAltitudeRate(engine.thrust_N, drag_N, tas_m_s, m, cachedFactor, air.temperature_K, air.isaTemperature_K);
-    return pathDerivative(rate, tas_m_s, air, target.env.wind_m_s, engine.fuelFlow_kg_s);
+    return writePathDerivative(stage, rate, tas_m_s, air, target.env.wind_m_s, engine.fuelFlow_kg_s);
   };
   // RK4 stages need no sample.
   const derivative = (y: StateVector): Evaluation['derivative'] => (mode.kind === 'idle' ? idleStage(y) : pointOf(y, false).derivative);

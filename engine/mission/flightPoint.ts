@@ -117,9 +117,20 @@ export function pathDerivative(
   wind_m_s: number,
   fuelFlow_kg_s: number,
 ): Evaluation['derivative'] {
+  return writePathDerivative(new Float64Array(STATE_SIZE), pressureAltitudeRate_m_s, tas_m_s, air, wind_m_s, fuelFlow_kg_s);
+}
+
+/** pathDerivative written into `d` (STATE_SIZE entries, its TAS entry left as it is): an RK4 stage's reused buffer. */
+export function writePathDerivative(
+  d: Float64Array<ArrayBuffer>,
+  pressureAltitudeRate_m_s: number,
+  tas_m_s: number,
+  air: MissionAir,
+  wind_m_s: number,
+  fuelFlow_kg_s: number,
+): Float64Array<ArrayBuffer> {
   const geometric = (pressureAltitudeRate_m_s * air.temperature_K) / air.isaTemperature_K;
   const horizontal = Math.sqrt(Math.max(tas_m_s * tas_m_s - geometric * geometric, 0));
-  const d = new Float64Array(STATE_SIZE);
   d[0] = 1;
   d[1] = horizontal;
   d[2] = horizontal + wind_m_s;

@@ -103,17 +103,25 @@ function rk4Step(segment: Segment, domain: StateDomain, y: StateVector, k1: Floa
   for (let i = 0; i < STATE_SIZE; i++) tmp[i] = y[i] + 0.5 * h * k1[i];
   const e2 = domainExit(domain, tmp);
   if (e2 !== null) return e2;
+  // k1 + 2 k2 + 2 k3 summed as each stage arrives, in the same order (a stage's buffer may be the next one's).
+  const sum = new Float64Array(STATE_SIZE);
   const k2 = stageDerivative(segment, tmp);
-  for (let i = 0; i < STATE_SIZE; i++) tmp[i] = y[i] + 0.5 * h * k2[i];
+  for (let i = 0; i < STATE_SIZE; i++) {
+    sum[i] = k1[i] + 2 * k2[i];
+    tmp[i] = y[i] + 0.5 * h * k2[i];
+  }
   const e3 = domainExit(domain, tmp);
   if (e3 !== null) return e3;
   const k3 = stageDerivative(segment, tmp);
-  for (let i = 0; i < STATE_SIZE; i++) tmp[i] = y[i] + h * k3[i];
+  for (let i = 0; i < STATE_SIZE; i++) {
+    sum[i] += 2 * k3[i];
+    tmp[i] = y[i] + h * k3[i];
+  }
   const e4 = domainExit(domain, tmp);
   if (e4 !== null) return e4;
   const k4 = stageDerivative(segment, tmp);
   const out = new Float64Array(STATE_SIZE);
-  for (let i = 0; i < STATE_SIZE; i++) out[i] = y[i] + (h / 6) * (k1[i] + 2 * k2[i] + 2 * k3[i] + k4[i]);
+  for (let i = 0; i < STATE_SIZE; i++) out[i] = y[i] + (h / 6) * (sum[i] + k4[i]);
   return domainExit(domain, out) ?? out;
 }
 

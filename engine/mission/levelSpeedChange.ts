@@ -34,8 +34,7 @@ export function flyLevelSpeedChange(
   const a = missionAir(altitude_m, dev).speedOfSound_m_s;
   const vTarget = toMach * a;
   const direction = vTarget >= start[S_TAS] ? 1 : -1;
-  const derivativeOf = (tas_m_s: number, mass_kg: number, thrust_N: number, fuelFlow_kg_s: number, drag_N: number): Evaluation['derivative'] => {
-    const d = new Float64Array(STATE_SIZE);
+  const derivativeInto = (d: Float64Array<ArrayBuffer>, tas_m_s: number, mass_kg: number, thrust_N: number, fuelFlow_kg_s: number, drag_N: number): Evaluation['derivative'] => {
     d[0] = 1;
     d[1] = tas_m_s;
     d[2] = tas_m_s + target.env.wind_m_s;
@@ -47,19 +46,21 @@ export function flyLevelSpeedChange(
     const mach = Math.max(y[S_TAS], 0) / a;
     const at = airPoint(input, altitude_m, mach, y[S_MASS], dev);
     const th = ratingPoint(input, at, dev, rating);
-    return { d: derivativeOf(at.tas_m_s, y[S_MASS], th.thrust_N, th.fuelFlow_kg_s, at.drag.drag_N), at, th };
+    return { d: derivativeInto(new Float64Array(STATE_SIZE), at.tas_m_s, y[S_MASS], th.thrust_N, th.fuelFlow_kg_s, at.drag.drag_N), at, th };
   };
   const evaluate: Segment['evaluate'] = (y) => {
     const { d, at, th } = pointOf(y);
     return { derivative: d, sample: makeSample(at, th.thrust_N, th.thrust_N, th.fuelFlow_kg_s, 0, th) };
   };
-  // RK4 stages need no sample, so no air point or drag breakdown: the same drag force and rated point as pointOf.
+  // RK4 stages need no sample, so no air point or drag breakdown: the same drag force and rated point as pointOf,
+  // written into one buffer the stages share (Segment.derivative).
+  const stage = new Float64Array(STATE_SIZE);
   const derivative = (y: StateVector): Evaluation['derivative'] => {
     const m = y[S_MASS];
     const mach = Math.max(y[S_TAS], 0) / a;
     const tas_m_s = mach * a;
     const th = input.propulsion.atRating({ altitude_m, mach, isaDev_K: dev }, rating);
-    return derivativeOf(tas_m_s, m, th.thrust_N, th.fuelFlow_kg_s, m > 0 ? dragForceAt(input, altitude_m, mach, m) : 0);
+    return derivativeInto(stage, tas_m_s, m, th.thrust_N, th.fuelFlow_kg_s, m > 0 ? dragForceAt(input, altitude_m, mach, m) : 0);
   };
   const events: SegmentEvent[] = [
     { stop: 'speed_reached', stateOnly: true, g: (y) => direction * (y[S_TAS] - vTarget) },

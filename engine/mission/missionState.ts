@@ -87,8 +87,9 @@ export interface Segment {
   readonly step_s: number;
   evaluate(state: StateVector): Evaluation;
   /**
-   * Optional cheaper right-hand side for the RK4 stages, whose samples nobody reads: must return exactly
-   * `evaluate(state).derivative`.
+   * Optional cheaper right-hand side for the RK4 stages, whose samples nobody reads: must return exactly the values
+   * of `evaluate(state).derivative`, and may return the same buffer at every call (the integrators read a stage's
+   * derivative before they ask for the next one).
    */
   derivative?(state: StateVector): Float64Array;
   readonly events: readonly SegmentEvent[];
