@@ -56,18 +56,22 @@ export interface MonotonePlan {
   readonly jumps?: readonly number[];
 }
 
-const ascending = (a: number, b: number): number => a - b;
-const descending = (a: number, b: number): number => b - a;
-
 /** The breaks strictly between `from` and `to` in flight order, each once, then `to`: the ends of the break intervals. */
 export function monotoneIntervalEnds(from: number, to: number, breaks: readonly number[]): number[] {
   const up = to > from;
   const points: number[] = [];
+  // Insertion in flight order as they are found (a few dozen breaks at most: no sort's work array).
   for (let k = 0; k < breaks.length; k++) {
     const b = breaks[k]!;
-    if (up ? b > from && b < to : b < from && b > to) points.push(b);
+    if (!(up ? b > from && b < to : b < from && b > to)) continue;
+    let i = points.length;
+    points.push(b);
+    while (i > 0 && (up ? points[i - 1]! > b : points[i - 1]! < b)) {
+      points[i] = points[i - 1]!;
+      i--;
+    }
+    points[i] = b;
   }
-  if (points.length > 1) points.sort(up ? ascending : descending);
   points.push(to);
   const out: number[] = [];
   for (let k = 0; k < points.length; k++) if (k === 0 || points[k] !== points[k - 1]) out.push(points[k]!);

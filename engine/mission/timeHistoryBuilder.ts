@@ -44,6 +44,8 @@ export interface FlightLog {
   readonly columns: Record<Column, number[]>;
   readonly legIndex: number[];
   readonly cautions: Map<string, Caution>;
+  /** The caution ids raised per leg index (the has-check of every point's checks, without building a key). */
+  readonly raised: (Set<string> | undefined)[];
   readonly airframe: Airframe;
   readonly settings: CautionSettings;
   /** A quiet log (the reserves' trial flights) records neither history nor cautions. */
@@ -56,7 +58,7 @@ export interface FlightLog {
 export function createFlightLog(airframe: Airframe, settings: CautionSettings, quiet = false, history = true): FlightLog {
   const columns = {} as Record<Column, number[]>;
   for (const c of COLUMNS) columns[c] = [];
-  return { columns, legIndex: [], cautions: new Map(), airframe, settings, quiet, history };
+  return { columns, legIndex: [], cautions: new Map(), raised: [], airframe, settings, quiet, history };
 }
 
 /** A new empty log that records what `log` records (a fuel-iteration pass's own log). */
@@ -64,17 +66,19 @@ export function freshFlightLog(log: FlightLog): FlightLog {
   return createFlightLog(log.airframe, log.settings, log.quiet, log.history);
 }
 
-/** The key a caution is kept under: one per caution id and leg. */
-function cautionKey(id: string, target: LegTarget): string {
-  return `${id}|${target.legIndex}`;
+/** Whether a caution with this id was already raised on the target's leg. */
+function raisedOnLeg(log: FlightLog, id: string, target: LegTarget): boolean {
+  return log.raised[target.legIndex]?.has(id) === true;
 }
 
-/** Adds a caution unless one with the same id was already raised on the same leg. */
+/** Adds a caution unless one with the same id was already raised on the same leg (kept under `id|legIndex`). */
 export function appendCaution(log: FlightLog, target: LegTarget, drafted: CautionDraft | Caution | null, time_s: number): void {
   if (drafted === null || log.quiet) return;
-  const key = cautionKey(drafted.id, target);
-  if (log.cautions.has(key)) return;
-  log.cautions.set(key, { ...drafted, legIndex: target.legIndex, legName: target.legName, time_s });
+  const id = drafted.id;
+  if (raisedOnLeg(log, id, target)) return;
+  const leg = target.legIndex;
+  (log.raised[leg] ??= new Set()).add(id);
+  log.cautions.set(`${id}|${leg}`, { ...drafted, legIndex: leg, legName: target.legName, time_s });
 }
 
 /** Id of the caution idleAboveDragCaution drafts (its message is only written when the leg has not raised it yet). */
@@ -116,7 +120,7 @@ export function appendSample(log: FlightLog, target: LegTarget, state: StateVect
   appendCaution(log, target, checkThroatMach(sample.throatMach, log.settings.maxThroatMach), t);
   appendCaution(log, target, checkPolarClamped(sample.polarOutside), t);
   // The draft formats two forces into its message: written only for the leg's first such point (the one kept).
-  if (sample.idleAboveDrag && !log.cautions.has(cautionKey(IDLE_ABOVE_DRAG_ID, target))) {
+  if (sample.idleAboveDrag && !raisedOnLeg(log, IDLE_ABOVE_DRAG_ID, target)) {
     appendCaution(log, target, idleAboveDragCaution(sample.drag_N, sample.thrustUsed_N), t);
   }
   const engineCautions = sample.propulsionCautions;

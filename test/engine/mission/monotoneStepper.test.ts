@@ -55,6 +55,19 @@ describe('monotoneStepEnds', () => {
     expect(monotoneIntervalEnds(0, 0, [])).toEqual([0]);
   });
 
+  it('monotoneIntervalEnds orders unsorted breaks with repeats as the built-in sort does, both ways', () => {
+    // Reference: Array.prototype.sort on the breaks inside, then the repeats dropped (ECMAScript's sort, not ours).
+    let seed = 12345;
+    const next = () => (seed = (seed * 1103515245 + 12345) % 2147483648) / 2147483648;
+    for (let trial = 0; trial < 200; trial++) {
+      const breaks = Array.from({ length: Math.floor(next() * 30) }, () => Math.round(next() * 40) * 250 - 1000);
+      const [from, to] = trial % 2 === 0 ? [0, 9000] : [9000, 0];
+      const inside = breaks.filter((b) => b > Math.min(from, to) && b < Math.max(from, to));
+      const sorted = [...new Set(inside)].sort((a, b) => (to > from ? a - b : b - a));
+      expect(monotoneIntervalEnds(from, to, breaks)).toEqual([...sorted, to]);
+    }
+  });
+
   it('intervalSteps takes the larger of the altitude and the time bound, at least 1, the time bound at most MAX_INTERVAL_STEPS', () => {
     // 1,524 m at 5 m/s is 304.8 s: 3 steps of at most 145 s; at 50 m/s the 1,600 m bound gives 1, a 1,200 m bound 2.
     expect(intervalSteps(1524, 1600, 5, 145)).toBe(3);
