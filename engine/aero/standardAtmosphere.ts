@@ -5,6 +5,7 @@
  * Standard Atmosphere (Doc 7488/3) to 32 km; hydrostatic pressure per layer
  * (ibid., equations 33a and 33b).
  */
+import { sameNumber } from '../core/sameNumber';
 import { err, ok, type Result } from '../core/result';
 import { g0, gamma, M0_KG_KMOL, p0, r0_m, R_air, R_STAR_J_KMOL_K, rho0, T0 } from './constants';
 
@@ -197,7 +198,7 @@ export function atmosphere(pressureAltitude_m: number, isaDev_K = 0): Result<Atm
       message: `ISA deviation ${isaDev_K} K is outside ${MIN_ISA_DEV_K} K to +${MAX_ISA_DEV_K} K`,
     });
   }
-  if (memoResult !== null && Object.is(pressureAltitude_m, memoAltitude_m) && Object.is(isaDev_K, memoIsaDev_K)) return memoResult;
+  if (memoResult !== null && sameNumber(pressureAltitude_m, memoAltitude_m) && sameNumber(isaDev_K, memoIsaDev_K)) return memoResult;
   const i = layerIndex(pressureAltitude_m);
   const isaTemperature_K = isaTemperature(pressureAltitude_m, i);
   const temperature_K = isaTemperature_K + isaDev_K;

@@ -5,6 +5,7 @@
  * the level speed change at the low-altitude limit. Lift = weight (n = 1),
  * common practice for the energy method.
  */
+import { sameNumber } from '../core/sameNumber';
 import type { InstalledPoint, RatingName } from '../propulsion/propulsionModel';
 import type { SpeedSchedule } from './missionTypes';
 import { pressureAltitudeRate } from './energyShareFactor';
@@ -46,7 +47,7 @@ export function makeClimbSegment(
   let th: InstalledPoint | null = null;
   let f = 1;
   const prepare = (h: number): void => {
-    if (!cached || !Object.is(h, cachedAltitude_m)) {
+    if (!cached || !sameNumber(h, cachedAltitude_m)) {
       const stage = track.at(h);
       air = stage.air;
       mach = stage.mach;

@@ -6,6 +6,7 @@
  * the low-altitude speed limit is flown at idle. Energy method as in
  * climbLeg.ts (BADA 3 User Manual total-energy model, from memory).
  */
+import { sameNumber } from '../core/sameNumber';
 import type { InstalledPoint } from '../propulsion/propulsionModel';
 import type { SpeedSchedule } from './missionTypes';
 import { pressureAltitudeRate } from './energyShareFactor';
@@ -53,7 +54,7 @@ function makeDescentSegment(
   let cachedFactor = 1;
   let cachedIdle: InstalledPoint | null = null;
   const prepare = (h: number): void => {
-    if (!cached || !Object.is(h, cachedAltitude_m)) {
+    if (!cached || !sameNumber(h, cachedAltitude_m)) {
       const stage = track.at(h);
       cachedAir = stage.air;
       cachedMach = stage.mach;

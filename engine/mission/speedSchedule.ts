@@ -6,6 +6,7 @@
  * transition altitude. Phases are also split at the tropopause (11 km) so the
  * energy share factor is smooth inside each phase.
  */
+import { sameNumber } from '../core/sameNumber';
 import { machOfCas, missionAir, TROPOPAUSE_M, transitionAltitude } from './missionAtmosphere';
 import type { SpeedSchedule } from './missionTypes';
 
@@ -61,12 +62,12 @@ export function schedulePhases(schedule: SpeedSchedule, from_m: number, to_m: nu
     for (let i = 0; i < kept.length; i++) {
       const e = kept[i]!;
       if (
-        Object.is(e.from_m, from_m) &&
-        Object.is(e.to_m, to_m) &&
-        Object.is(e.lowCas_m_s, schedule.lowCas_m_s) &&
-        Object.is(e.lowAltitudeLimit_m, schedule.lowAltitudeLimit_m) &&
-        Object.is(e.cas_m_s, schedule.cas_m_s) &&
-        Object.is(e.mach, schedule.mach)
+        sameNumber(e.from_m, from_m) &&
+        sameNumber(e.to_m, to_m) &&
+        sameNumber(e.lowCas_m_s, schedule.lowCas_m_s) &&
+        sameNumber(e.lowAltitudeLimit_m, schedule.lowAltitudeLimit_m) &&
+        sameNumber(e.cas_m_s, schedule.cas_m_s) &&
+        sameNumber(e.mach, schedule.mach)
       ) {
         return e.phases;
       }

@@ -12,6 +12,7 @@
  * keeps at most MODEL_TRACKS tracks; the track that would pass it first forgets all of them (a segment that holds
  * one keeps using it, bounded as above).
  */
+import { sameNumber } from '../core/sameNumber';
 import type { InstalledPoint, PropulsionModel, RatingName } from '../propulsion/propulsionModel';
 import { energyShareFactor } from './energyShareFactor';
 import { heldCasMach, missionAir, type MissionAir } from './missionAtmosphere';
@@ -73,7 +74,7 @@ function makeTrack(
   let size = 0;
   function slotOf(h: number): number {
     let i = hashAltitude(h) & mask;
-    while (values[i] !== undefined && !Object.is(altitudes[i], h)) i = (i + 1) & mask;
+    while (values[i] !== undefined && !sameNumber(altitudes[i]!, h)) i = (i + 1) & mask;
     return i;
   }
   return {
