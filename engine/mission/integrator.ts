@@ -36,7 +36,7 @@ export interface SegmentRun {
   readonly domainExit?: DomainExit;
 }
 
-/** Receives every accepted point (including the segment's first). */
+/** Receives every accepted point (including the segment's first); the state is the integrator's buffer, valid during the call only (copy what is kept). */
 export type SampleSink = (state: StateVector, sample: FlightSample) => void;
 
 const MAX_STEPS = 20000;

@@ -157,6 +157,9 @@ export function integrateMonotone(
   const k1 = new Float64Array(STATE_SIZE);
   const k2 = new Float64Array(STATE_SIZE);
   const k3 = new Float64Array(STATE_SIZE);
+  // The accepted state and the next one alternate between `y` and `spare` (the sink and the events read a state
+  // when it is handed over and keep nothing of it).
+  let spare = new Float64Array(STATE_SIZE) as StateVector;
   let a = start[c];
   let b = intervals[0]!;
   // Steps of the interval [a, b], from the rate at its start.
@@ -217,7 +220,7 @@ export function integrateMonotone(
     const f4 = rhs(tmp);
     const r4 = f4[c]!;
     if (!(direction * r4 >= minRate)) return timeIntegrator(y, true);
-    const next = new Float64Array(STATE_SIZE) as StateVector;
+    const next = spare;
     const sixth = h / 6;
     for (let q = 0; q < STATE_SIZE; q++) next[q] = y[q] + sixth * (k1[q]! + 2 * k2[q]! + 2 * k3[q]! + f4[q]! / r4);
     next[c] = s1;
@@ -227,6 +230,7 @@ export function integrateMonotone(
     if (notFiniteState(nd) || !(direction * nd[c] >= minRate) || (groundProgress && !(nd[S_GROUND] > 0))) return timeIntegrator(y, true);
     for (let e = 0; e < eventCount; e++) if (others[e]!.g(next, nextEv.sample) >= 0) return timeIntegrator(y, true);
     sink(next, nextEv.sample);
+    spare = y;
     y = next;
     ev = nextEv;
     d = nd;
