@@ -56,8 +56,23 @@ export interface FlightLog {
 
 /** An empty flight log; a quiet one ignores samples and cautions, one without `history` keeps no time history. */
 export function createFlightLog(airframe: Airframe, settings: CautionSettings, quiet = false, history = true): FlightLog {
-  const columns = {} as Record<Column, number[]>;
-  for (const c of COLUMNS) columns[c] = [];
+  // A literal in COLUMNS order (one shape for every log; a keyed store per column would go megamorphic).
+  const columns: Record<Column, number[]> = {
+    time_s: [],
+    distance_m: [],
+    altitude_m: [],
+    mach: [],
+    cas_m_s: [],
+    tas_m_s: [],
+    mass_kg: [],
+    thrustAvailable_N: [],
+    thrustUsed_N: [],
+    drag_N: [],
+    fuelFlow_kg_s: [],
+    cl: [],
+    liftToDrag: [],
+    climbRate_m_s: [],
+  };
   return { columns, legIndex: [], cautions: new Map(), raised: [], airframe, settings, quiet, history };
 }
 
