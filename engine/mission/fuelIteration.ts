@@ -293,6 +293,28 @@ function powerLawSensitivity(ctx: MissionContext, e: MissionEvaluation, rampMass
   return plausibleRampSlope(slope) ? { slope, landingPerKg } : fallback;
 }
 
+/**
+ * `start` with its slopeFactor (the slope over the power-law slope of the converged pass, when plausible) read
+ * lazily: the power-law slope costs six specific-range points (about 1 % of a converged solve), and only a
+ * neighbour's solve reads the factor. An enumerable getter, worked out once at its first read (a spread, a
+ * structured clone and JSON read it too), undefined when not plausible; the value is a pure function of the pass.
+ */
+function withLazySlopeFactor(start: MissionStart, factorOf: () => number): MissionStart {
+  let known = false;
+  let value: number | undefined;
+  return Object.defineProperty(start, 'slopeFactor', {
+    enumerable: true,
+    get: (): number | undefined => {
+      if (!known) {
+        const factor = factorOf();
+        value = plausibleSlopeFactor(factor) ? factor : undefined;
+        known = true;
+      }
+      return value;
+    },
+  });
+}
+
 /** A pass this far (m) off the range after the first restarts the top-of-descent model from it. */
 const MODEL_MISS_M = 1000;
 
@@ -387,8 +409,12 @@ export function iterateRampMass(
   const bend = priorBend ?? 0;
   const converged = (x: number, e: MissionEvaluation, k: number, slope: number): IterationOutcome => {
     const curvature_per_kg = bendOfPasses();
-    const model = powerLawSensitivity(ctx, e, x).slope;
-    const slopeFactor = slope / model;
+    const warmStart: MissionStart = {
+      rampMass_kg: x,
+      slope,
+      afterSolvable: after.model(e.trip.solvableEndMass_kg),
+      ...(curvature_per_kg === undefined ? {} : { curvature_per_kg }),
+    };
     return {
       kind: 'converged',
       rampMass_kg: x,
@@ -396,10 +422,7 @@ export function iterateRampMass(
       iterations: k,
       residual_kg: e.residual_kg,
       pass: e,
-      warmStart: { rampMass_kg: x, slope, afterSolvable: after.model(e.trip.solvableEndMass_kg),
-        ...(curvature_per_kg === undefined ? {} : { curvature_per_kg }),
-        ...(plausibleSlopeFactor(slopeFactor) ? { slopeFactor } : {}),
-      },
+      warmStart: withLazySlopeFactor(warmStart, () => slope / powerLawSensitivity(ctx, e, x).slope),
     };
   };
   const warmSlope = plausibleRampSlope(start.slope);

@@ -60,6 +60,14 @@ describe('fuel iteration', () => {
     // as its ratio to the power-law slope, fuelIteration.ts).
     expect(solveMission(withPayload(demo, 20), { warmStart: neighbour.warmStart }).iterations).toBe(2);
     expect(solveMission(withRange(demo, 3050), { warmStart: neighbour.warmStart }).iterations).toBe(2);
+    // The slope factor is worked out at its first read and is the same through a copy, a structured clone
+    // (a worker's message) and JSON: the measured slope within a quarter of the power-law one (plausibleSlopeFactor).
+    const factor = neighbour.warmStart?.slopeFactor;
+    expect(factor).toBeGreaterThan(0.75);
+    expect(factor).toBeLessThan(1.25);
+    expect({ ...neighbour.warmStart }.slopeFactor).toBe(factor);
+    expect(structuredClone(neighbour.warmStart)?.slopeFactor).toBe(factor);
+    expect(JSON.parse(JSON.stringify(neighbour.warmStart)).slopeFactor).toBe(factor);
   });
 
   it('a warm start that is no use is ignored: same status and answer as the cold start', () => {
