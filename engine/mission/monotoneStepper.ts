@@ -27,7 +27,7 @@
  * piecewise-linear tables.
  */
 import { integrateSegment, notFiniteState, outsideDomain, UNBOUNDED_DOMAIN, type SampleSink, type SegmentRun, type StateDomain } from './integrator';
-import { S_GROUND, STATE_SIZE, type Segment, type SegmentStop, type StateVector } from './missionState';
+import { S_GROUND, STATE_SIZE, type Segment, type SegmentEvent, type SegmentStop, type StateVector } from './missionState';
 
 export interface MonotonePlan {
   /** State index stepped on (S_ALT or S_TAS). */
@@ -112,6 +112,26 @@ export function monotoneStepEnds(from: number, to: number, breaks: readonly numb
 /** Fraction of a step by which a segment's first and last stages are moved inside it. */
 const NUDGE = 1e-9;
 
+/** A stage's right-hand side: the segment's sample-free derivative when it has one. */
+function stageRate(segment: Segment, y: StateVector): Float64Array {
+  return segment.derivative !== undefined ? segment.derivative(y) : segment.evaluate(y).derivative;
+}
+
+/** The time integrator from `from` (integrator.ts), its first point handed to `sink` unless `skipFirst` (it was already). */
+function handOver(segment: Segment, from: StateVector, skipFirst: boolean, sink: SampleSink, domain: StateDomain): SegmentRun {
+  if (!skipFirst) return integrateSegment(segment, from, sink, domain);
+  let first = true;
+  return integrateSegment(
+    segment,
+    from,
+    (state, sample) => {
+      if (first) first = false;
+      else sink(state, sample);
+    },
+    domain,
+  );
+}
+
 /**
  * Integrates `segment` from `start` (not modified) to `plan.to` along
  * `plan.component`, handing each accepted point to `sink`; see the file
@@ -127,29 +147,16 @@ export function integrateMonotone(
   const c = plan.component;
   const direction = plan.to >= start[c] ? 1 : -1;
   const minRate = plan.minRate;
-  const sampleFree = segment.derivative !== undefined;
-  const rhs = (y: StateVector): Float64Array => (sampleFree ? segment.derivative!(y) : segment.evaluate(y).derivative);
   let y = start.slice();
   const groundProgress = domain.requireGroundProgress === true;
-  const timeIntegrator = (from: StateVector, skipFirst: boolean): SegmentRun => {
-    let first = skipFirst;
-    return integrateSegment(
-      segment,
-      from,
-      (state, sample) => {
-        if (first) first = false;
-        else sink(state, sample);
-      },
-      domain,
-    );
-  };
-  if (outsideDomain(domain, y)) return timeIntegrator(y, false);
+  if (outsideDomain(domain, y)) return handOver(segment, y, false, sink, domain);
   let ev = segment.evaluate(y);
   let d = ev.derivative;
-  if (notFiniteState(d) || !(direction * d[c] >= minRate) || (groundProgress && !(d[S_GROUND] > 0))) return timeIntegrator(y, false);
-  const others = segment.events.filter((e) => e.stop !== plan.targetStop);
+  if (notFiniteState(d) || !(direction * d[c] >= minRate) || (groundProgress && !(d[S_GROUND] > 0))) return handOver(segment, y, false, sink, domain);
+  const others: SegmentEvent[] = [];
+  for (let e = 0; e < segment.events.length; e++) if (segment.events[e]!.stop !== plan.targetStop) others.push(segment.events[e]!);
   const eventCount = others.length;
-  for (let e = 0; e < eventCount; e++) if (others[e]!.g(y, ev.sample) >= 0) return timeIntegrator(y, false);
+  for (let e = 0; e < eventCount; e++) if (others[e]!.g(y, ev.sample) >= 0) return handOver(segment, y, false, sink, domain);
   sink(y, ev.sample);
   const intervals = monotoneIntervalEnds(start[c], plan.to, plan.breaks);
   const intervalCount = intervals.length;
@@ -173,8 +180,8 @@ export function integrateMonotone(
     const first = start.slice();
     const firstStep = (n > 1 ? a + (b - a) / n : b) - start[c];
     first[c] = start[c] + NUDGE * firstStep;
-    if (outsideDomain(domain, first)) return timeIntegrator(y, true);
-    f1 = rhs(first);
+    if (outsideDomain(domain, first)) return handOver(segment, y, true, sink, domain);
+    f1 = stageRate(segment, first);
   }
   let s0 = start[c];
   let interval = 0;
@@ -189,46 +196,46 @@ export function integrateMonotone(
     // Stage slopes dy/ds = f / f_c; a stage below the least rate hands the step to the time integrator.
     if (j > 0) f1 = d;
     const r1 = f1[c]!;
-    if (!(direction * r1 >= minRate)) return timeIntegrator(y, true);
+    if (!(direction * r1 >= minRate)) return handOver(segment, y, true, sink, domain);
     for (let q = 0; q < STATE_SIZE; q++) {
       const f = f1[q]!;
       k1[q] = f / r1;
       tmp[q] = y[q] + (half * f) / r1;
     }
     tmp[c] = mid;
-    if (outsideDomain(domain, tmp)) return timeIntegrator(y, true);
-    const f2 = rhs(tmp);
+    if (outsideDomain(domain, tmp)) return handOver(segment, y, true, sink, domain);
+    const f2 = stageRate(segment, tmp);
     const r2 = f2[c]!;
-    if (!(direction * r2 >= minRate)) return timeIntegrator(y, true);
+    if (!(direction * r2 >= minRate)) return handOver(segment, y, true, sink, domain);
     for (let q = 0; q < STATE_SIZE; q++) {
       const k = f2[q]! / r2;
       k2[q] = k;
       tmp[q] = y[q] + half * k;
     }
     tmp[c] = mid;
-    if (outsideDomain(domain, tmp)) return timeIntegrator(y, true);
-    const f3 = rhs(tmp);
+    if (outsideDomain(domain, tmp)) return handOver(segment, y, true, sink, domain);
+    const f3 = stageRate(segment, tmp);
     const r3 = f3[c]!;
-    if (!(direction * r3 >= minRate)) return timeIntegrator(y, true);
+    if (!(direction * r3 >= minRate)) return handOver(segment, y, true, sink, domain);
     for (let q = 0; q < STATE_SIZE; q++) {
       const k = f3[q]! / r3;
       k3[q] = k;
       tmp[q] = y[q] + h * k;
     }
     tmp[c] = last ? s1 - NUDGE * h : s1;
-    if (outsideDomain(domain, tmp)) return timeIntegrator(y, true);
-    const f4 = rhs(tmp);
+    if (outsideDomain(domain, tmp)) return handOver(segment, y, true, sink, domain);
+    const f4 = stageRate(segment, tmp);
     const r4 = f4[c]!;
-    if (!(direction * r4 >= minRate)) return timeIntegrator(y, true);
+    if (!(direction * r4 >= minRate)) return handOver(segment, y, true, sink, domain);
     const next = spare;
     const sixth = h / 6;
     for (let q = 0; q < STATE_SIZE; q++) next[q] = y[q] + sixth * (k1[q]! + 2 * k2[q]! + 2 * k3[q]! + f4[q]! / r4);
     next[c] = s1;
-    if (outsideDomain(domain, next)) return timeIntegrator(y, true);
+    if (outsideDomain(domain, next)) return handOver(segment, y, true, sink, domain);
     const nextEv = segment.evaluate(next);
     const nd = nextEv.derivative;
-    if (notFiniteState(nd) || !(direction * nd[c] >= minRate) || (groundProgress && !(nd[S_GROUND] > 0))) return timeIntegrator(y, true);
-    for (let e = 0; e < eventCount; e++) if (others[e]!.g(next, nextEv.sample) >= 0) return timeIntegrator(y, true);
+    if (notFiniteState(nd) || !(direction * nd[c] >= minRate) || (groundProgress && !(nd[S_GROUND] > 0))) return handOver(segment, y, true, sink, domain);
+    for (let e = 0; e < eventCount; e++) if (others[e]!.g(next, nextEv.sample) >= 0) return handOver(segment, y, true, sink, domain);
     sink(next, nextEv.sample);
     spare = y;
     y = next;
