@@ -91,7 +91,7 @@ export function flyAllowance(
   const endAltitude_m = arriving ? arrivalElevation_m : start[S_ALT];
   const { fuel_kg, time_s, point } = allowanceFuel(ctx.input, leg, 0.5 * (startAltitude_m + endAltitude_m), target.env.isaDev_K);
   const flow = time_s > 0 ? fuel_kg / time_s : 0;
-  const state = Float64Array.from(start);
+  const state = start.slice();
   state[S_ALT] = startAltitude_m;
   appendSample(ctx.log, target, state, allowanceSample(startAltitude_m, flow, point));
   const floor_kg = ctx.options.allowNegativeFuel ? MASS_FLOOR_FRACTION * ctx.zeroFuelMass_kg : ctx.zeroFuelMass_kg;

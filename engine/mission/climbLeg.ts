@@ -94,7 +94,7 @@ export function flyClimb(
   schedule: SpeedSchedule,
   rating: RatingName,
 ): LegOutcome {
-  let state = Float64Array.from(start);
+  let state = start.slice();
   let last: FlightSample | null = null;
   if (toAltitude_m <= state[S_ALT]) return legOk(state, null);
   for (const phase of schedulePhases(schedule, state[S_ALT], toAltitude_m)) {

@@ -231,7 +231,7 @@ export function flyCruise(ctx: MissionContext, target: LegTarget, start: StateVe
   const endOf = spec.endDistanceOf;
   const endAir: number | ((mass_kg: number) => number) = endOf ? (m: number) => Math.max(endOf(m), start[k]) : fixedEnd;
   const endAt = (mass_kg: number) => (typeof endAir === 'number' ? endAir : endAir(mass_kg));
-  let state = Float64Array.from(start);
+  let state = start.slice();
   state[S_ALT] = spec.altitude_m;
   let last: FlightSample | null = null;
   const step_s = BASE_STEP_S.cruise * ctx.options.stepScale;

@@ -132,7 +132,7 @@ export function flyDescent(
   schedule: SpeedSchedule,
   mode: DescentMode,
 ): LegOutcome {
-  let state = Float64Array.from(start);
+  let state = start.slice();
   let last: FlightSample | null = null;
   if (toAltitude_m >= state[S_ALT]) return legOk(state, null);
   let belowIdle: { time_s: number; required: number; idle: number } | null = null;

@@ -156,7 +156,7 @@ function flyLegGuarded(ctx: MissionContext, index: number, state: StateVector, s
   } catch (e) {
     const leg = ctx.input.legs[index];
     const what = e instanceof Error ? e.message : String(e);
-    return legFailed(Float64Array.from(state), 'internal_error', `Internal error while flying leg ${index + 1} (${leg.kind} "${leg.name}"): ${what}. Please report it with the project file.`, null);
+    return legFailed(state.slice(), 'internal_error', `Internal error while flying leg ${index + 1} (${leg.kind} "${leg.name}"): ${what}. Please report it with the project file.`, null);
   }
 }
 
@@ -177,7 +177,7 @@ export function flyTrip(ctx: MissionContext, rampMass_kg: number, solvedDistance
   let solvableEndFuelFlow_kg_s = 0;
   const rows: LegRow[] = [];
   for (let i = 0; i < ctx.input.legs.length; i++) {
-    if (i === first) takeoff = Float64Array.from(state);
+    if (i === first) takeoff = state.slice();
     const start = state;
     const out = flyLegGuarded(ctx, i, state, solvedDistance, i === solvable);
     state = out.state;
@@ -203,10 +203,10 @@ export function flyTrip(ctx: MissionContext, rampMass_kg: number, solvedDistance
       solvableEndMass_kg = state[S_MASS];
       solvableFuel_kg = start[S_MASS] - state[S_MASS];
       solvableEndFuelPerMetre = endFuelPerMetre(ctx, i, out);
-      solvableEnd = Float64Array.from(state);
+      solvableEnd = state.slice();
       solvableEndFuelFlow_kg_s = out.lastSample !== null && out.lastSample.fuelFlow_kg_s > 0 ? out.lastSample.fuelFlow_kg_s : 0;
     }
-    if (i === last) landing = Float64Array.from(state);
+    if (i === last) landing = state.slice();
     if (out.status !== 'ok') {
       // A failed mission always names the leg, the time and the cause.
       const where = msg` (leg ${i + 1} "${ctx.input.legs[i].name}", ${q(state[S_TIME], 'time')} after block-out)`;
@@ -214,7 +214,7 @@ export function flyTrip(ctx: MissionContext, rampMass_kg: number, solvedDistance
       return { status: out.status, ...told, rows, end: state, takeoff, landing: state, solvableDistance_m, afterSolvable_m: 0, solvableEndMass_kg, solvableFuel_kg, solvableEndFuelPerMetre, solvableEndFuelFlow_kg_s, solvableEnd: null };
     }
   }
-  if (last < first) landing = Float64Array.from(state);
+  if (last < first) landing = state.slice();
   const afterSolvable_m = solvable >= 0 ? state[k] - solvableEnd_m : 0;
   return { status: 'ok', message: '', rows, end: state, takeoff, landing, solvableDistance_m, afterSolvable_m, solvableEndMass_kg, solvableFuel_kg, solvableEndFuelPerMetre, solvableEndFuelFlow_kg_s, solvableEnd };
 }
@@ -235,7 +235,7 @@ export function flyAfterSolvable(ctx: MissionContext, top: StateVector, mass_kg:
   if (solvable < 0) return null;
   const { last } = tripBounds(ctx.input);
   const k = distanceIndex(ctx.input);
-  let state = Float64Array.from(top);
+  let state = top.slice();
   state[S_MASS] = mass_kg;
   let landing_kg = mass_kg;
   for (let i = solvable + 1; i < ctx.input.legs.length; i++) {

@@ -350,7 +350,7 @@ function stepInside(segment: Segment, domain: StateDomain, y: StateVector, k1: F
  * 'step_limit' after 20,000 steps; never returns NaN silently.
  */
 export function integrateSegment(segment: Segment, start: StateVector, sink: SampleSink, domain: StateDomain = UNBOUNDED_DOMAIN): SegmentRun {
-  const y = Float64Array.from(start);
+  const y = start.slice();
   const outside = domainExit(domain, y);
   if (outside !== null) return { end: y, endSample: blankSample(y), stop: 'left_domain', domainExit: outside };
   let ev = accept(segment, y);

@@ -70,7 +70,7 @@ export function flyLevelSpeedChange(
     },
   ];
   events.push(...fuelExhaustedEvents(ctx));
-  const startState = Float64Array.from(start);
+  const startState = start.slice();
   startState[S_TAS] = start[S_TAS] > 0 ? start[S_TAS] : vTarget;
   if (Math.abs(startState[S_TAS] - vTarget) < 1e-9) return legOk(startState, null);
   const run = flyMonotoneSegment(ctx, target, { step_s: BASE_STEP_S.speedChange * ctx.options.stepScale, evaluate, derivative, events }, startState, {
