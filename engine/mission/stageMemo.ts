@@ -39,7 +39,17 @@ export const TRACK_ENTRIES = 512;
 /** Tracks a model keeps at most (a demo solve flies about 10: climbs, descents at each CAS and Mach, the alternate's). */
 export const MODEL_TRACKS = 64;
 
-const tracksOf = new WeakMap<PropulsionModel, Map<string, StageTrack>>();
+/** A model's track and the five it is the track of (compared exactly: the key's numbers by sameNumber). */
+interface KeptTrack {
+  readonly held: 'cas' | 'mach';
+  readonly value: number;
+  readonly isaDev_K: number;
+  readonly rating: RatingName | null;
+  readonly limit: number;
+  readonly track: StageTrack;
+}
+
+const tracksOf = new WeakMap<PropulsionModel, KeptTrack[]>();
 
 // Scratch view of one double's bits, for the hash (module-local; the engine is single-threaded per realm).
 const bits = new Float64Array(1);
@@ -50,11 +60,6 @@ function hashAltitude(x: number): number {
   let h = Math.imul(words[0]! ^ 0x2545f491, 0x9e3779b1);
   h = Math.imul(h ^ words[1]!, 0x85ebca77);
   return h ^ (h >>> 15);
-}
-
-/** A number as a key text that keeps -0 apart from 0 (String() is exact for every other double). */
-function keyOf(x: number): string {
-  return Object.is(x, -0) ? '-0' : String(x);
 }
 
 function makeTrack(
@@ -121,15 +126,16 @@ export function stageTrack(
 ): StageTrack {
   let tracks = tracksOf.get(propulsion);
   if (tracks === undefined) {
-    tracks = new Map();
+    tracks = [];
     tracksOf.set(propulsion, tracks);
   }
-  const key = `${held}|${keyOf(value)}|${keyOf(isaDev_K)}|${rating ?? ''}|${limit}`;
-  let track = tracks.get(key);
-  if (track === undefined) {
-    if (tracks.size >= MODEL_TRACKS) tracks.clear();
-    track = makeTrack(propulsion, held, value, isaDev_K, rating, limit);
-    tracks.set(key, track);
+  // A scan of at most MODEL_TRACKS exact compares (a key text per segment cost a number-to-text conversion each).
+  for (let i = 0; i < tracks.length; i++) {
+    const k = tracks[i]!;
+    if (k.held === held && sameNumber(k.value, value) && sameNumber(k.isaDev_K, isaDev_K) && k.rating === rating && k.limit === limit) return k.track;
   }
+  if (tracks.length >= MODEL_TRACKS) tracks.length = 0;
+  const track = makeTrack(propulsion, held, value, isaDev_K, rating, limit);
+  tracks.push({ held, value, isaDev_K, rating, limit, track });
   return track;
 }
