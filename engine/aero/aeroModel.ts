@@ -40,6 +40,21 @@ export interface DragBreakdown {
   readonly outsideTables: readonly string[];
 }
 
+/** The part of a DragBreakdown a flight sample reads, written into a record the caller keeps (AeroModel.dragSampleInto). */
+export interface DragSample {
+  drag_N: number;
+  cl: number;
+  clMax: number;
+  buffetLoadFactor: number;
+  liftToDrag: number;
+  outsideTables: readonly string[];
+}
+
+/** An empty DragSample record to write into. */
+export function newDragSample(): DragSample {
+  return { drag_N: 0, cl: 0, clMax: 0, buffetLoadFactor: 0, liftToDrag: 0, outsideTables: [] };
+}
+
 export interface AeroModel {
   readonly wingArea_m2: number;
   drag(query: DragQuery): DragBreakdown;
@@ -50,6 +65,12 @@ export interface AeroModel {
    * read only the force (thousands of queries a mission). Optional: ask `drag` of a model without it.
    */
   dragForce_N?(altitude_m: number, mach: number, mass_kg: number, loadFactor: number): number;
+  /**
+   * `drag`'s fields a flight sample reads (drag force, CL, CLmax, buffet load factor, L/D, tables left) for a query
+   * given as its four numbers, written into `out` instead of a new breakdown: the same arithmetic, so the same bits
+   * and the same RangeErrors. For the accepted points of the mission's climbs and descents. Optional.
+   */
+  dragSampleInto?(altitude_m: number, mach: number, mass_kg: number, loadFactor: number, out: DragSample): void;
   /** Machs (-) at which the drag has slope breaks (its tables' nodes), ascending; absent for a smooth polar. Mission climbs and descents end steps there. */
   readonly slopeBreakMachs?: readonly number[];
   /** Same polar with an extra parasite increment (drag counts / 1e4) added. */

@@ -11,7 +11,7 @@ import { expectOk } from '../core/result';
 import type { Result } from '../core/result';
 import { clampedValue, interp1d, makeTable1d, outsideAxis, type Table1d } from '../core/table1d';
 import { interp2d, makeTable2d, type Table2d } from '../core/table2d';
-import type { AeroModel, DragBreakdown, DragQuery } from './aeroModel';
+import type { AeroModel, DragBreakdown, DragQuery, DragSample } from './aeroModel';
 import { validatePolarSpec, type PolarIssue, type PolarSpec } from './polarSpec';
 import { g0, gamma } from './constants';
 import { atmosphere, isaPressureAt } from './standardAtmosphere';
@@ -266,6 +266,27 @@ function dragAt(model: DragPolarModel, memo: MachMemo, query: DragQuery): DragBr
   };
 }
 
+/** dragAt's fields of a flight sample written into `out`: the same steps in the same order (the model's dragSampleInto). */
+function dragSampleAt(model: DragPolarModel, memo: MachMemo, altitude_m: number, mach: number, mass_kg: number, loadFactor: number, out: DragSample): void {
+  if (!usableQuery(altitude_m, mach, mass_kg, loadFactor)) refuseQuery(altitude_m, mach, mass_kg, loadFactor);
+  const pressure_Pa = isaPressureAt(altitude_m);
+  if (pressure_Pa !== pressure_Pa) refuseAltitude(altitude_m); // NaN: outside the atmosphere
+  const q_Pa = 0.5 * gamma * pressure_Pa * mach * mach;
+  const qS = q_Pa * model.wingArea_m2;
+  const weight_N = mass_kg * g0;
+  const cl = (loadFactor * weight_N) / qS;
+  const t = model.tables;
+  if (mach !== memo.mach) refreshMachMemo(t, memo, mach, cl);
+  const dcl = cl - model.spec.clMinDrag;
+  const cd = memo.cd0 + model.spec.cdIncrement + memo.k * dcl * dcl + waveDragAt(t.wave, mach, cl);
+  out.drag_N = qS * cd;
+  out.cl = cl;
+  out.clMax = memo.clMax;
+  out.buffetLoadFactor = (memo.buffetCl * qS) / weight_N;
+  out.liftToDrag = cl / cd;
+  out.outsideTables = t.wave.kind === 'table' ? outsideTablesAt(t, mach, cl) : memo.outside;
+}
+
 /** dragAt(...).drag_N without the breakdown: the same steps in the same order (drag polar model's dragForce_N). */
 function dragForceAt(model: DragPolarModel, memo: MachMemo, altitude_m: number, mach: number, mass_kg: number, loadFactor: number): number {
   if (!usableQuery(altitude_m, mach, mass_kg, loadFactor)) refuseQuery(altitude_m, mach, mass_kg, loadFactor);
@@ -296,6 +317,7 @@ function assemble(spec: PolarSpec, tables: PolarTables, wingArea_m2: number): Dr
     slopeBreakMachs: polarSlopeBreakMachs(tables),
     drag: (query) => dragAt(model, memo, query),
     dragForce_N: (altitude_m, mach, mass_kg, loadFactor) => dragForceAt(model, memo, altitude_m, mach, mass_kg, loadFactor),
+    dragSampleInto: (altitude_m, mach, mass_kg, loadFactor, out) => dragSampleAt(model, memo, altitude_m, mach, mass_kg, loadFactor, out),
     withIncrement: (deltaCd0) => {
       requireFinite(deltaCd0, 'deltaCd0');
       const cdIncrement = spec.cdIncrement + deltaCd0;

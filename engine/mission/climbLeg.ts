@@ -9,7 +9,8 @@ import { sameNumber } from '../core/sameNumber';
 import type { InstalledPoint, RatingName } from '../propulsion/propulsionModel';
 import type { SpeedSchedule } from './missionTypes';
 import { pressureAltitudeRate } from './energyShareFactor';
-import { airPointIn, dragForceAt, fuelExhaustedEvents, makeSample, pathDerivative, writePathDerivative } from './flightPoint';
+import { newDragSample } from '../aero/aeroModel';
+import { dragForceAt, dragSampleAt, fuelExhaustedEvents, packSample, pathDerivative, writePathDerivative } from './flightPoint';
 import { flyMonotoneSegment, missionDomain } from './flySegment';
 import { BASE_ALTITUDE_STEP, pathBreakAltitudes } from './stepBreaks';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
@@ -57,13 +58,16 @@ export function makeClimbSegment(
       cached = true;
     }
   };
+  // Accepted points write their drag into one record (no air point or breakdown objects: the same bits as airPointIn).
+  const drag = newDragSample();
   const evaluate: Segment['evaluate'] = (y) => {
     const h = y[S_ALT];
     prepare(h);
-    const at = airPointIn(input, air!, h, mach, y[S_MASS]);
-    const rate = pressureAltitudeRate(th!.thrust_N, at.drag.drag_N, at.tas_m_s, y[S_MASS], f, air!.temperature_K, air!.isaTemperature_K);
-    const d = pathDerivative(rate, at.tas_m_s, air!, target.env.wind_m_s, th!.fuelFlow_kg_s);
-    return { derivative: d, sample: makeSample(at, th!.thrust_N, th!.thrust_N, th!.fuelFlow_kg_s, rate, th!) };
+    dragSampleAt(input, h, mach, y[S_MASS], drag);
+    const tas_m_s = mach * air!.speedOfSound_m_s;
+    const rate = pressureAltitudeRate(th!.thrust_N, drag.drag_N, tas_m_s, y[S_MASS], f, air!.temperature_K, air!.isaTemperature_K);
+    const d = pathDerivative(rate, tas_m_s, air!, target.env.wind_m_s, th!.fuelFlow_kg_s);
+    return { derivative: d, sample: packSample(h, mach, air!, tas_m_s, drag, th!.thrust_N, th!.thrust_N, th!.fuelFlow_kg_s, rate, th!) };
   };
   // RK4 stages need no sample, so no air point object either: the same drag query and TAS (M a) as airPointIn,
   // written into one buffer the stages share (Segment.derivative).

@@ -10,7 +10,8 @@ import { sameNumber } from '../core/sameNumber';
 import type { InstalledPoint } from '../propulsion/propulsionModel';
 import type { SpeedSchedule } from './missionTypes';
 import { pressureAltitudeRate } from './energyShareFactor';
-import { airPointIn, dragForceAt, fuelExhaustedEvents, makeSample, pathDerivative, ratingPoint, thrustPoint, writePathDerivative } from './flightPoint';
+import { newDragSample } from '../aero/aeroModel';
+import { dragForceAt, dragSampleAt, fuelExhaustedEvents, packSample, pathDerivative, writePathDerivative } from './flightPoint';
 import { flyMonotoneSegment, missionDomain } from './flySegment';
 import { BASE_ALTITUDE_STEP, pathBreakAltitudes } from './stepBreaks';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
@@ -64,12 +65,16 @@ function makeDescentSegment(
       cached = true;
     }
   };
+  // The drag of a point, written into one record (no air point or breakdown objects: the same bits as airPointIn).
+  const drag = newDragSample();
   const pointOf = (y: StateVector, withSample: boolean) => {
     const h = y[S_ALT];
     const m = y[S_MASS];
     prepare(h);
     const air = cachedAir!;
-    const at = airPointIn(input, air, h, cachedMach, m);
+    const mach = cachedMach;
+    dragSampleAt(input, h, mach, m, drag);
+    const tas_m_s = mach * air.speedOfSound_m_s;
     const f = cachedFactor;
     let rate: number;
     let thrust: number;
@@ -79,20 +84,20 @@ function makeDescentSegment(
       engine = cachedIdle!;
       thrust = engine.thrust_N;
       thrustAvailable = thrust;
-      rate = pressureAltitudeRate(thrust, at.drag.drag_N, at.tas_m_s, m, f, air.temperature_K, air.isaTemperature_K);
+      rate = pressureAltitudeRate(thrust, drag.drag_N, tas_m_s, m, f, air.temperature_K, air.isaTemperature_K);
     } else {
       rate = -Math.abs(mode.rate_m_s);
-      const denominator = at.tas_m_s * f;
-      const required =
-        denominator > 0 ? at.drag.drag_N + (m * G0_M_S2 * (air.temperature_K / air.isaTemperature_K) * rate) / denominator : at.drag.drag_N;
-      engine = thrustPoint(input, at, dev, required, 'maxClimb');
+      const denominator = tas_m_s * f;
+      const required = denominator > 0 ? drag.drag_N + (m * G0_M_S2 * (air.temperature_K / air.isaTemperature_K) * rate) / denominator : drag.drag_N;
+      const condition = { altitude_m: h, mach, isaDev_K: dev };
+      engine = input.propulsion.forThrust(condition, required, 'maxClimb');
       thrust = engine.thrust_N;
       // Thrust available is only for the sample (the RK4 stages skip it).
-      thrustAvailable = withSample ? ratingPoint(input, at, dev, 'maxClimb').thrust_N : Number.NaN;
+      thrustAvailable = withSample ? input.propulsion.atRating(condition, 'maxClimb').thrust_N : Number.NaN;
       if (engine.limit === 'below_idle') onBelowIdle(y[0], required, engine.thrust_N);
     }
-    const d = pathDerivative(rate, at.tas_m_s, air, target.env.wind_m_s, engine.fuelFlow_kg_s);
-    return { derivative: d, sample: withSample ? makeSample(at, thrustAvailable, thrust, engine.fuelFlow_kg_s, rate, engine) : null };
+    const d = pathDerivative(rate, tas_m_s, air, target.env.wind_m_s, engine.fuelFlow_kg_s);
+    return { derivative: d, sample: withSample ? packSample(h, mach, air, tas_m_s, drag, thrustAvailable, thrust, engine.fuelFlow_kg_s, rate, engine) : null };
   };
   const evaluate: Segment['evaluate'] = (y) => {
     const { derivative, sample } = pointOf(y, true);

@@ -2,7 +2,7 @@
  * Evaluates the airframe and the installed engines at one flight point and
  * packs the result as a FlightSample.
  */
-import type { DragBreakdown } from '../aero/aeroModel';
+import type { DragBreakdown, DragSample } from '../aero/aeroModel';
 import type { InstalledPoint, PartPowerPoint, RatingName } from '../propulsion/propulsionModel';
 import { casOfMach, missionAir, type MissionAir } from './missionAtmosphere';
 import type { MissionInput } from './missionTypes';
@@ -47,6 +47,27 @@ export function dragForceAt(input: MissionInput, altitude_m: number, mach: numbe
   return aero.dragForce_N !== undefined ? aero.dragForce_N(altitude_m, mach, mass_kg, 1) : aero.drag({ altitude_m, mach, mass_kg, loadFactor: 1 }).drag_N;
 }
 
+/**
+ * The drag at 1 g of `input.aero` at pressure altitude (m), Mach and mass (kg) as the fields a sample reads, written
+ * into `out` (the model's dragSampleInto, the same bits as its drag(); else copied from drag()). For accepted
+ * points that build a sample and no AirPoint: no breakdown object either.
+ */
+export function dragSampleAt(input: MissionInput, altitude_m: number, mach: number, mass_kg: number, out: DragSample): DragSample {
+  const aero = input.aero;
+  if (aero.dragSampleInto !== undefined) {
+    aero.dragSampleInto(altitude_m, mach, mass_kg, 1, out);
+    return out;
+  }
+  const d = aero.drag({ altitude_m, mach, mass_kg, loadFactor: 1 });
+  out.drag_N = d.drag_N;
+  out.cl = d.cl;
+  out.clMax = d.clMax;
+  out.buffetLoadFactor = d.buffetLoadFactor;
+  out.liftToDrag = d.liftToDrag;
+  out.outsideTables = d.outsideTables;
+  return out;
+}
+
 /** Installed thrust and fuel flow (all engines) at a rating. */
 export function ratingPoint(input: MissionInput, at: AirPoint, isaDev_K: number, rating: RatingName): InstalledPoint {
   return input.propulsion.atRating({ altitude_m: at.altitude_m, mach: at.mach, isaDev_K }, rating);
@@ -72,23 +93,39 @@ export function makeSample(
   climbRate_m_s: number,
   engine: InstalledPoint,
 ): FlightSample {
+  return packSample(at.altitude_m, at.mach, at.air, at.tas_m_s, at.drag, thrustAvailable_N, thrustUsed_N, fuelFlow_kg_s, climbRate_m_s, engine);
+}
+
+/** Packs a FlightSample from the point's numbers, its air data and its drag (a breakdown or a DragSample record). */
+export function packSample(
+  altitude_m: number,
+  mach: number,
+  air: MissionAir,
+  tas_m_s: number,
+  drag: DragSample | DragBreakdown,
+  thrustAvailable_N: number,
+  thrustUsed_N: number,
+  fuelFlow_kg_s: number,
+  climbRate_m_s: number,
+  engine: InstalledPoint,
+): FlightSample {
   return {
-    altitude_m: at.altitude_m,
-    mach: at.mach,
-    cas_m_s: casOfMach(at.mach, at.air.pressure_Pa),
-    tas_m_s: at.tas_m_s,
+    altitude_m,
+    mach,
+    cas_m_s: casOfMach(mach, air.pressure_Pa),
+    tas_m_s,
     thrustAvailable_N,
     thrustUsed_N,
-    drag_N: at.drag.drag_N,
+    drag_N: drag.drag_N,
     fuelFlow_kg_s,
-    cl: at.drag.cl,
-    clMax: at.drag.clMax,
-    buffetLoadFactor: at.drag.buffetLoadFactor,
-    liftToDrag: at.drag.liftToDrag,
+    cl: drag.cl,
+    clMax: drag.clMax,
+    buffetLoadFactor: drag.buffetLoadFactor,
+    liftToDrag: drag.liftToDrag,
     climbRate_m_s,
     throatMach: engine.perEngine.throatMach,
-    idleAboveDrag: 'limit' in engine && engine.limit === 'below_idle' && at.drag.drag_N < engine.thrust_N && climbRate_m_s === 0,
-    polarOutside: at.drag.outsideTables ?? [],
+    idleAboveDrag: 'limit' in engine && engine.limit === 'below_idle' && drag.drag_N < engine.thrust_N && climbRate_m_s === 0,
+    polarOutside: drag.outsideTables ?? [],
     propulsionCautions: engine.cautions,
   };
 }

@@ -7,6 +7,7 @@ import {
   polarCoefficients,
   type DragPolarModel,
 } from '../../../engine/aero/dragPolar';
+import { newDragSample } from '../../../engine/aero/aeroModel';
 import { dynamicPressure_Pa } from '../../../engine/aero/airspeeds';
 import { validatePolarSpec, type PolarSpec } from '../../../engine/aero/polarSpec';
 import { atmosphere } from '../../../engine/aero/standardAtmosphere';
@@ -283,6 +284,7 @@ describe('AeroModel.drag', () => {
       }
       expect(message).toMatch(/^drag polar: /);
       expect(() => m.dragForce_N!(h, mach, mass, n)).toThrow(new RangeError(message));
+      expect(() => m.dragSampleInto!(h, mach, mass, n, newDragSample())).toThrow(new RangeError(message));
     }
   });
 
@@ -342,6 +344,10 @@ describe('drag query without intermediate objects', () => {
             expect(d.drag_N).toBe(q * 122 * c.cd);
             expect(Object.is(m.dragForce_N!(alt, mach, mass, 1.1), d.drag_N)).toBe(true);
             expect(Object.is(m.withIncrement(0.0013).dragForce_N!(alt, mach, mass, 1.1), m.withIncrement(0.0013).drag({ altitude_m: alt, mach, mass_kg: mass, loadFactor: 1.1 }).drag_N)).toBe(true);
+            // dragSampleInto writes the very fields of the breakdown a flight sample reads.
+            const sample = newDragSample();
+            m.dragSampleInto!(alt, mach, mass, 1.1, sample);
+            expect(sample).toStrictEqual({ drag_N: d.drag_N, cl: d.cl, clMax: d.clMax, buffetLoadFactor: d.buffetLoadFactor, liftToDrag: d.liftToDrag, outsideTables: d.outsideTables });
             expect(d.buffetCl).toBe(buffetClAt(m, mach));
             expect(d.clMax).toBe(clMaxAt(m, mach));
             const expectedOutside = [...c.outsideTables];
