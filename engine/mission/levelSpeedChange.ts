@@ -5,7 +5,8 @@
  * performance text, e.g. Anderson, Aircraft Performance and Design, ch. 6).
  */
 import type { RatingName } from '../propulsion/propulsionModel';
-import { dragForceAt, fuelExhaustedEvents, airPoint, makeSample, ratingPoint } from './flightPoint';
+import { newDragSample } from '../aero/aeroModel';
+import { dragForceAt, dragSampleAt, fuelExhaustedEvents, packSample } from './flightPoint';
 import { flyMonotoneSegment, missionDomain } from './flySegment';
 import { speedBreaks } from './stepBreaks';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
@@ -42,15 +43,17 @@ export function flyLevelSpeedChange(
     d[S_TAS] = mass_kg > 0 ? (thrust_N - drag_N) / mass_kg : 0;
     return d;
   };
-  const pointOf = (y: StateVector) => {
-    const mach = Math.max(y[S_TAS], 0) / a;
-    const at = airPoint(input, altitude_m, mach, y[S_MASS], dev);
-    const th = ratingPoint(input, at, dev, rating);
-    return { d: derivativeInto(new Float64Array(STATE_SIZE), at.tas_m_s, y[S_MASS], th.thrust_N, th.fuelFlow_kg_s, at.drag.drag_N), at, th };
-  };
+  // Accepted points write their drag into one record (no air point or breakdown objects: the same bits as airPoint).
+  const air = missionAir(altitude_m, dev);
+  const drag = newDragSample();
   const evaluate: Segment['evaluate'] = (y) => {
-    const { d, at, th } = pointOf(y);
-    return { derivative: d, sample: makeSample(at, th.thrust_N, th.thrust_N, th.fuelFlow_kg_s, 0, th) };
+    const m = y[S_MASS];
+    const mach = Math.max(y[S_TAS], 0) / a;
+    dragSampleAt(input, altitude_m, mach, m, drag);
+    const tas_m_s = mach * air.speedOfSound_m_s;
+    const th = input.propulsion.atRating({ altitude_m, mach, isaDev_K: dev }, rating);
+    const d = derivativeInto(new Float64Array(STATE_SIZE), tas_m_s, m, th.thrust_N, th.fuelFlow_kg_s, drag.drag_N);
+    return { derivative: d, sample: packSample(altitude_m, mach, air, tas_m_s, drag, th.thrust_N, th.thrust_N, th.fuelFlow_kg_s, 0, th) };
   };
   // RK4 stages need no sample, so no air point or drag breakdown: the same drag force and rated point as pointOf,
   // written into one buffer the stages share (Segment.derivative).
