@@ -6,7 +6,6 @@
  * transition altitude. Phases are also split at the tropopause (11 km) so the
  * energy share factor is smooth inside each phase.
  */
-import { sameNumber } from '../core/sameNumber';
 import { machOfCas, missionAir, TROPOPAUSE_M, transitionAltitude } from './missionAtmosphere';
 import type { SpeedSchedule } from './missionTypes';
 
@@ -37,53 +36,8 @@ export function scheduleMach(schedule: SpeedSchedule, altitude_m: number, zoneAl
   return Math.min(machOfCas(zone.cas_m_s, missionAir(altitude_m, 0).pressure_Pa), schedule.mach);
 }
 
-/** Phase lists kept per schedule: its last PHASE_MEMO_ENTRIES (from, to) pairs, newest first. */
-interface PhaseMemoEntry {
-  readonly from_m: number;
-  readonly to_m: number;
-  /** The schedule's numbers the phases were made from (so a schedule changed in place is not answered stale). */
-  readonly lowCas_m_s: number;
-  readonly lowAltitudeLimit_m: number;
-  readonly cas_m_s: number;
-  readonly mach: number;
-  readonly phases: readonly SchedulePhase[];
-}
-const PHASE_MEMO_ENTRIES = 4;
-const phaseMemo = new WeakMap<SpeedSchedule, PhaseMemoEntry[]>();
-
-/**
- * Phases from `from_m` to `to_m` (climb when to > from, descent otherwise), in flight order. A pure function of the
- * schedule's numbers and the two altitudes, kept for the last few pairs of each schedule object (the trip's and the
- * alternate's climbs share one, and every fuel pass flies them again); schedules are read-only inputs.
- */
+/** Phases from `from_m` to `to_m` (climb when to > from, descent otherwise), in flight order. */
 export function schedulePhases(schedule: SpeedSchedule, from_m: number, to_m: number): readonly SchedulePhase[] {
-  let kept = phaseMemo.get(schedule);
-  if (kept !== undefined) {
-    for (let i = 0; i < kept.length; i++) {
-      const e = kept[i]!;
-      if (
-        sameNumber(e.from_m, from_m) &&
-        sameNumber(e.to_m, to_m) &&
-        sameNumber(e.lowCas_m_s, schedule.lowCas_m_s) &&
-        sameNumber(e.lowAltitudeLimit_m, schedule.lowAltitudeLimit_m) &&
-        sameNumber(e.cas_m_s, schedule.cas_m_s) &&
-        sameNumber(e.mach, schedule.mach)
-      ) {
-        return e.phases;
-      }
-    }
-  } else {
-    kept = [];
-    phaseMemo.set(schedule, kept);
-  }
-  const phases = computePhases(schedule, from_m, to_m);
-  if (kept.length >= PHASE_MEMO_ENTRIES) kept.pop();
-  const { lowCas_m_s, lowAltitudeLimit_m, cas_m_s, mach } = schedule;
-  kept.unshift({ from_m, to_m, lowCas_m_s, lowAltitudeLimit_m, cas_m_s, mach, phases });
-  return phases;
-}
-
-function computePhases(schedule: SpeedSchedule, from_m: number, to_m: number): readonly SchedulePhase[] {
   if (from_m === to_m) return [];
   const up = to_m > from_m;
   const lo = Math.min(from_m, to_m);
