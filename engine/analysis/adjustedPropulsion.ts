@@ -47,6 +47,8 @@ export function adjustPropulsion(base: PropulsionModel, adj: PropulsionAdjustmen
     };
   };
   const atPower = (c: FlightCondition, power: number) => adjust(base.atPower(c, power));
+  // Without a recovery change the part-power point is base's with its fuel flow scaled: so is its fuel flow alone.
+  const baseFuelFlow = adj.recoveryDelta === 0 ? base.fuelFlowForThrust?.bind(base) : undefined;
   return {
     engineCount: base.engineCount,
     label: base.label,
@@ -73,5 +75,8 @@ export function adjustPropulsion(base: PropulsionModel, adj: PropulsionAdjustmen
       }
       return { ...atPower(c, root.value.x), limit: 'within', thrustRequired_N: required };
     },
+    ...(baseFuelFlow === undefined
+      ? {}
+      : { fuelFlowForThrust: (c: FlightCondition, required: number, ceilingRating: RatingName = 'maxCruise') => baseFuelFlow(c, required, ceilingRating) * adj.fuelFlowScale }),
   };
 }

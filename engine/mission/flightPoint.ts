@@ -84,6 +84,19 @@ export function thrustPoint(
   return input.propulsion.forThrust({ altitude_m: at.altitude_m, mach: at.mach, isaDev_K }, thrust_N, ceiling);
 }
 
+/**
+ * The fuel flow (kg/s, all engines) of the part-power point giving `thrust_N` (all engines) at pressure altitude
+ * (m), Mach and ISA deviation (K), limited by `ceiling`: thrustPoint's fuel flow, to the bit, by the model's
+ * fuelFlowForThrust where it has one. For RK4 stages, which read the fuel flow alone.
+ */
+export function partPowerFuelFlow(input: MissionInput, altitude_m: number, mach: number, isaDev_K: number, thrust_N: number, ceiling: RatingName): number {
+  const propulsion = input.propulsion;
+  const condition = { altitude_m, mach, isaDev_K };
+  return propulsion.fuelFlowForThrust !== undefined
+    ? propulsion.fuelFlowForThrust(condition, thrust_N, ceiling)
+    : propulsion.forThrust(condition, thrust_N, ceiling).fuelFlow_kg_s;
+}
+
 /** Packs a FlightSample. */
 export function makeSample(
   at: AirPoint,

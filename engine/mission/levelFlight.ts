@@ -7,7 +7,7 @@
  */
 import type { RatingName } from '../propulsion/propulsionModel';
 import type { PartPowerPoint } from '../propulsion/propulsionModel';
-import { airPoint, dragForceAt, fuelExhaustedEvents, makeSample, ratingPoint, thrustPoint, type AirPoint } from './flightPoint';
+import { airPoint, dragForceAt, fuelExhaustedEvents, makeSample, partPowerFuelFlow, ratingPoint, thrustPoint, type AirPoint } from './flightPoint';
 import { missionAir } from './missionAtmosphere';
 import { distanceIndex, type LegTarget, type MissionContext } from './missionContext';
 import { S_MASS, S_TIME, STATE_SIZE, type Evaluation, type Segment, type SegmentEvent, type StateVector } from './missionState';
@@ -58,14 +58,14 @@ export function makeLevelSegment(ctx: MissionContext, target: LegTarget, spec: L
     };
   };
   // RK4 stages need no sample, so no thrust-available query (a full rated-thrust lookup) and no sample object,
-  // and no air point or drag breakdown either: the same air data, drag force and part-power query as pointOf.
+  // no air point or drag breakdown, and no part-power point either: the same air data, drag force and part-power
+  // solve as pointOf, and its fuel flow alone (the same bits).
   const derivative = (y: StateVector): Evaluation['derivative'] => {
     const m = y[S_MASS];
     const h = spec.altitudeOf(m);
     const mach = spec.machOf(h, m);
     const tas_m_s = mach * missionAir(h, dev).speedOfSound_m_s;
-    const engine = input.propulsion.forThrust({ altitude_m: h, mach, isaDev_K: dev }, dragForceAt(input, h, mach, m), spec.ceiling);
-    return derivativeOf(tas_m_s, engine.fuelFlow_kg_s);
+    return derivativeOf(tas_m_s, partPowerFuelFlow(input, h, mach, dev, dragForceAt(input, h, mach, m), spec.ceiling));
   };
   const events: SegmentEvent[] = [{ stop: 'thrust_below_drag', g: (_y, s) => s.drag_N - s.thrustAvailable_N }];
   if (spec.endDistance_m !== null) {

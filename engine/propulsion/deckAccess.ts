@@ -20,16 +20,19 @@ export interface AccessError {
 
 /**
  * Evaluator of the deck at one prepared condition: thrust (N) and airflow
- * (kg/s, NaN without airflow) into out[0], out[1], and for a deck with
+ * (kg/s, NaN without airflow) into out[0], out[1], for a deck with
  * sensitivities the nine of them (slot order of SENSITIVITY_FIELDS,
- * installationSensitivities.ts) into out[2..10], the three fuel-flow ones
- * as 0 (the part-power solve needs installed thrust only); `out` has
- * CURVE_VALUES entries. False where the deck refuses.
+ * installationSensitivities.ts) into out[2..10], and the fuel flow (kg/s)
+ * into out[CURVE_FUEL_FLOW]: each the value `lookup` returns at that power,
+ * to the bit; `out` has CURVE_VALUES entries. False where the deck refuses.
  */
 export type DeckCurve = (power: number, out: Float64Array) => boolean;
 
-/** Length of the buffer a DeckCurve writes: thrust, airflow and the nine sensitivities. */
-export const CURVE_VALUES = 2 + SENSITIVITY_STRIDE;
+/** Where a DeckCurve writes the fuel flow: after thrust, airflow and the nine sensitivities. */
+export const CURVE_FUEL_FLOW = 2 + SENSITIVITY_STRIDE;
+
+/** Length of the buffer a DeckCurve writes. */
+export const CURVE_VALUES = CURVE_FUEL_FLOW + 1;
 
 /** What the installed model needs from an uninstalled deck and the atmosphere. */
 export interface DeckAccess {
@@ -48,7 +51,7 @@ export interface DeckAccess {
   powerForThrust(condition: FlightCondition, thrust_N: number, ceilingPower: number): number | null;
   /**
    * Optional fast path for solves at one condition: prepares the deck at
-   * `condition` and returns its DeckCurve. Must agree with `lookup`. The
+   * `condition` and returns its DeckCurve. Must agree with `lookup` to the bit. The
    * evaluator may share buffers: it is valid until the next `curveAt` call.
    */
   curveAt?(condition: FlightCondition): DeckCurve;

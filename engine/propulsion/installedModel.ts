@@ -27,7 +27,7 @@ import { prepareInlet, type PreparedInlet } from './inletRecovery';
 import { createRatingMemo, RATING_MEMO_ENTRIES } from './ratingMemo';
 import { defaultInstallationMethod, type InstallationMethodId } from './installationMethod';
 import { validateInstallation, type InstallationSettings } from './installationCorrections';
-import { newPartPowerSolve, PART_POWER_MEMO_CONDITIONS, solvePartPower } from './partPowerSolve';
+import { newPartPowerSolve, PART_POWER_MEMO_CONDITIONS, solvedFuelFlow, solvePartPower, type PartPowerRoot } from './partPowerSolve';
 import { conditionKey, sameFlightCondition, type FlightCondition, type InstalledPoint, type PartPowerPoint, type PropulsionModel, type RatingName, type SlopeBreaks, type ThrustLimit } from './propulsionModel';
 
 export type { AccessError, DeckAccess, DeckPoint } from './deckAccess';
@@ -208,7 +208,8 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
     return point;
   }
 
-  function forThrust(condition: FlightCondition, thrustRequired_N: number, ceilingRating: RatingName = 'maxCruise'): PartPowerPoint {
+  /** The part-power root for forThrust and fuelFlowForThrust (same checks, same solve), with the rating fallbacks' cautions. */
+  function partPowerRoot(condition: FlightCondition, thrustRequired_N: number, ceilingRating: RatingName): { root: PartPowerRoot & { ok: true }; free: FreeStream; extra: readonly Caution[] } {
     checkCondition(condition);
     if (!Number.isFinite(thrustRequired_N)) {
       throw new RangeError(`installed propulsion: thrust required is ${thrustRequired_N}, expected a finite number`);
@@ -223,10 +224,20 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
       // Thrust is bracketed between idle and the ceiling, so only a non-monotone or broken deck lands here.
       throw new Error(`installed propulsion: forThrust could not solve for ${thrustRequired_N.toFixed(1)} N: ${root.error.message}`);
     }
+    return { root, free, extra };
+  }
+
+  function forThrust(condition: FlightCondition, thrustRequired_N: number, ceilingRating: RatingName = 'maxCruise'): PartPowerPoint {
+    const { root, free, extra } = partPowerRoot(condition, thrustRequired_N, ceilingRating);
     const point = pointAt(condition, free, root.power, extra) as InstalledPoint & { limit: ThrustLimit; thrustRequired_N: number };
     point.limit = root.limit;
     point.thrustRequired_N = thrustRequired_N;
     return point;
+  }
+
+  function fuelFlowForThrust(condition: FlightCondition, thrustRequired_N: number, ceilingRating: RatingName = 'maxCruise'): number {
+    const { root } = partPowerRoot(condition, thrustRequired_N, ceilingRating);
+    return solvedFuelFlow(solve, root.power) * ctx.engineCount;
   }
 
   return {
@@ -239,6 +250,7 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
     atRating,
     atPower,
     forThrust,
+    fuelFlowForThrust,
     withRecoveryOffset: (delta) => makeInstalledModel(access, { ...options, recoveryOffset: ctx.recoveryOffset + delta }),
   };
 }

@@ -13,7 +13,7 @@ import { temperatureFlowFactor } from './deckTemperature';
 import type { EngineDeck } from './engineDeck';
 import type { InletDesign } from './inletDesign';
 import type { InstallationSettings } from './installationCorrections';
-import type { DeckAccess } from './deckAccess';
+import { CURVE_FUEL_FLOW, type DeckAccess } from './deckAccess';
 import { scaleSensitivitiesInto } from './installationSensitivities';
 import { makeInstalledModel } from './installedModel';
 import { conditionKey, sameFlightCondition, type FlightCondition, type PropulsionModel } from './propulsionModel';
@@ -90,12 +90,14 @@ export function deckAccess(deck: EngineDeck): DeckAccess {
 /**
  * The deck at one condition as a function of power: `prepare(condition)`
  * finds the grid nodes and weights once, then `evaluate(power, out)` writes
- * thrust (N) and airflow (kg/s, NaN without an airflow column) into
- * out[0..1], and for a deck with sensitivities the nine of them into
- * out[2..10] (CURVE_VALUES entries; the fuel-flow ones 0: fuel flow is not
- * interpolated here), by the same weights and temperature
- * approximation as lookupDeck (deckGrid.ts, deckTemperature.ts), thrust and
- * airflow floored at zero like lookupDeck's extrapolations. `evaluate` returns false where
+ * thrust (N), airflow (kg/s, NaN without an airflow column), for a deck
+ * with sensitivities the nine of them, and the fuel flow (kg/s) into `out`
+ * (deckAccess.ts DeckCurve's layout, CURVE_VALUES entries), by the same
+ * weights, corrected-parameter factors and temperature approximation as
+ * lookupDeck and in the same order of operations (deckGrid.ts,
+ * deckLookup.ts finishLookup, deckTemperature.ts), so each equals
+ * lookupDeck's value to the bit; thrust, fuel flow and airflow floored at
+ * zero like lookupDeck's extrapolations. `evaluate` returns false where
  * lookupDeck would refuse. One prepared condition at a time (buffers reused).
  */
 export function deckCurve(
@@ -116,8 +118,10 @@ export function deckCurve(
   let preparedAt: FlightCondition | null = null;
   let conditionMask = 0;
   let filled = false;
-  let airflowFactor = 1;
+  // The corrected-parameter factors of thrust, fuel flow and airflow (1 for a raw deck: x * 1 is x to the bit).
   let thrustFactor = 1;
+  let fuelFlowFactor = 1;
+  let airflowFactor = 1;
   // The temperature factor sqrt(T/T_ISA) alone: the sensitivities are tabulated raw in a corrected deck too, so
   // they take it and not the corrected-parameter multiply-back (as in finishLookup).
   let temperatureFactor = 1;
@@ -127,24 +131,29 @@ export function deckCurve(
     filled = fillDeckNodes(deck.grid, deck.policy, condition.isaDev_K, condition.altitude_m, condition.mach, nodes);
     conditionMask = nodes.outsideMask;
     temperatureFactor = !deck.hasIsaDev && condition.isaDev_K !== 0 ? temperatureFlowFactor(condition.altitude_m, condition.isaDev_K) : 1;
-    airflowFactor = 1 / temperatureFactor;
     thrustFactor = 1;
+    fuelFlowFactor = 1;
+    airflowFactor = 1;
     if (deck.interpolation === 'corrected') {
       // queryCorrectionInto's factors, from the atmosphere at the deck's own ISA level.
       correctionFactorsOfAir(air(condition.altitude_m, deck.hasIsaDev ? condition.isaDev_K : 0), condition.mach, factors);
       thrustFactor = factors[0]!;
-      airflowFactor *= factors[2]!;
+      fuelFlowFactor = factors[1]!;
+      airflowFactor = factors[2]!;
     }
     preparedAt = conditionKey(condition);
   }
   return {
     prepare,
     evaluate(power, out) {
-      if (!filled || !evaluateDeckNodesInto(deck.grid, nodes, power, deck.policy.power, values, false)) return false;
-      // Floored at zero as lookupDeck floors them (the point finally evaluated carries its caution).
+      if (!filled || !evaluateDeckNodesInto(deck.grid, nodes, power, deck.policy.power, values)) return false;
+      // finishLookup's products in its order ((value x factor) x or / the temperature factor, which is 1 on an ISA
+      // axis or a standard day), floored at zero as lookupDeck floors them (the point finally evaluated carries its
+      // caution).
       out[0] = Math.max(values[0]! * thrustFactor, 0);
-      out[1] = deck.hasAirflow ? Math.max(values[2]! * airflowFactor, 0) : Number.NaN;
+      out[1] = deck.hasAirflow ? Math.max((values[2]! * airflowFactor) / temperatureFactor, 0) : Number.NaN;
       if (deck.hasSensitivities) scaleSensitivitiesInto(values, 3, deck.hasAirflow, temperatureFactor, out, 2);
+      out[CURVE_FUEL_FLOW] = Math.max(values[1]! * fuelFlowFactor * temperatureFactor, 0);
       return true;
     },
     breakAfter(after) {

@@ -3,24 +3,31 @@
  * where one engine's installed thrust equals the thrust asked for. With the
  * deck's fixed-condition curve, the root is first bracketed on one of the
  * deck's power segments (between two tabulated powers every deck column is
- * linear in power, so the installed thrust before spillage is too), then
- * refined on it by a bracketed secant (engine/core/rootFind.ts) whose first
- * step is the exact linear inversion on the segment and whose later steps
- * take out the spillage drag's curvature. Its state lives in one
+ * linear in power, so the installed thrust before spillage is too; the
+ * spillage drag bends it smoothly, except where the lip-suction table has a
+ * node), then on one of SEGMENT_DIVISIONS equal parts of the segment by
+ * interpolation search over its nodes, and the first guess is the inverse cubic
+ * interpolation through the four nodes around that part
+ * (core/inverseInterpolation.ts): on a smooth segment it meets the
+ * tolerance at once, so one curve evaluation checks it. Where it does not
+ * (a kink inside the part), a bracketed secant (engine/core/rootFind.ts)
+ * from the guess and the part's far node finishes. Its state lives in one
  * PartPowerSolve object per model (reused; a solve sets it at its start), so
  * the residual is one function made once, not a closure per call (forThrust
  * runs thousands of times per mission).
  *
  * What a solve needs of a condition that does not depend on the thrust asked (the installed thrusts at idle, the
- * ceiling and the deck's power nodes the bracket is narrowed on, and the curve's power breakpoints) is kept per
+ * ceiling and the deck's power nodes the bracket is narrowed on, at the nodes of the segments' parts, and the
+ * curve's power breakpoints) is kept per
  * condition in a bounded exact-key memo (conditionSlots.ts): a mission asks for a few hundred part-power points at
  * a few dozen conditions, and every fuel pass, the alternate and later missions on the model ask at the same ones.
  * Each value is a pure function of the condition (and the power), so the memo changes no answer, only how often a
  * value is computed.
  */
+import { inverseCubicZero } from '../core/inverseInterpolation';
 import { bracketedSecant } from '../core/rootFind';
 import { createConditionSlots, type ConditionSlots } from './conditionSlots';
-import { CURVE_VALUES, type DeckAccess, type DeckCurve } from './deckAccess';
+import { CURVE_FUEL_FLOW, CURVE_VALUES, type DeckAccess, type DeckCurve } from './deckAccess';
 import { emptySensitivities, readSensitivitiesInto, type MutableSensitivities } from './installationSensitivities';
 import {
   evaluateEngineInto,
@@ -68,6 +75,22 @@ export interface PartPowerSolve {
   readonly memoThrust: Float64Array;
   readonly memoDeck: Float64Array;
   readonly breaks: (Float64Array | null)[];
+  /**
+   * Per slot, the segments whose part nodes are kept (SEGMENTS_PER_CONDITION a slot, segmentCount[slot] used, the
+   * next to replace when all are segmentNext[slot]): their ends (power), and the installed thrust per engine at
+   * each node (N; NaN until computed; SEGMENT_NODES a segment, the ends included; the slot's array is made on its
+   * first segment solve, so a condition only ever asked at a limit holds none).
+   */
+  readonly segmentCount: Int32Array;
+  readonly segmentNext: Int32Array;
+  readonly segmentLo: Float64Array;
+  readonly segmentHi: Float64Array;
+  readonly nodeThrust: (Float64Array | null)[];
+  /** nodeThrust of the segment solve in progress. */
+  nodes: Float64Array;
+  /** The power solveThrustAt last evaluated in this solve (NaN: none yet), and whether on the curve (into `fast`). */
+  lastPower: number;
+  lastOnCurve: boolean;
   /** The slot of the solve in progress, and the condition it was found for (a copy: the caller's object may change). */
   slot: number;
   readonly slotCondition: { altitude_m: number; mach: number; isaDev_K: number };
@@ -77,6 +100,18 @@ export interface PartPowerSolve {
 
 /** Powers kept per condition: idle, the ceiling and the power nodes between them on any deck so far. */
 const MEMO_POWERS = 16;
+
+/**
+ * Equal parts a deck power segment is cut into for the first guess (a power of two, so each node's fraction of the
+ * segment is exact). On the demo deck the cubic through four equally spaced points of a whole segment is within
+ * about 1e-8 of the installed thrust; the error of a cubic falls with the fourth power of the spacing, so a part a
+ * 64th wide leaves the guess near or inside FOR_THRUST_TOLERANCE.
+ */
+export const SEGMENT_DIVISIONS = 64;
+
+/** Segments whose nodes a condition keeps (a level leg's roots at one condition lie in one or two). */
+const SEGMENTS_PER_CONDITION = 4;
+const SEGMENT_NODES = SEGMENT_DIVISIONS + 1;
 
 /**
  * Conditions a model's part-power memo holds by default: a converged demo solve asks at 21, and an analysis's
@@ -105,6 +140,14 @@ export function newPartPowerSolve(ctx: InstallationContext, access: DeckAccess, 
     memoThrust: new Float64Array(memoConditions * MEMO_POWERS),
     memoDeck: new Float64Array(memoConditions * MEMO_POWERS),
     breaks: new Array<Float64Array | null>(memoConditions).fill(null),
+    segmentCount: new Int32Array(memoConditions),
+    segmentNext: new Int32Array(memoConditions),
+    segmentLo: new Float64Array(memoConditions * SEGMENTS_PER_CONDITION),
+    segmentHi: new Float64Array(memoConditions * SEGMENTS_PER_CONDITION),
+    nodeThrust: new Array<Float64Array | null>(memoConditions).fill(null),
+    nodes: new Float64Array(0),
+    lastPower: Number.NaN,
+    lastOnCurve: false,
     slot: -1,
     slotCondition: { altitude_m: Number.NaN, mach: Number.NaN, isaDev_K: Number.NaN },
     lastDeck_N: 0,
@@ -122,6 +165,8 @@ function selectSlot(solve: PartPowerSolve, condition: FlightCondition): void {
     slot = solve.slots.add(condition);
     solve.memoCount[slot] = 0;
     solve.breaks[slot] = null;
+    solve.segmentCount[slot] = 0;
+    solve.segmentNext[slot] = 0;
   }
   solve.slot = slot;
   key.altitude_m = condition.altitude_m;
@@ -180,15 +225,133 @@ function nextBreak(list: Float64Array, after: number): number {
 
 /** Installed thrust per engine (N) at `power` for the solve in progress: the deck's fixed-condition curve when it offers one, else full lookups. */
 export function solveThrustAt(solve: PartPowerSolve, power: number): number {
+  solve.lastPower = power;
   if (solve.curve !== undefined && solve.curve(power, solve.curveOut)) {
-    const air = solve.curveOut[1]!;
+    const out = solve.curveOut;
+    const air = out[1]!;
     const hasAir = !Number.isNaN(air);
-    const sens = solve.access.hasSensitivities ? readSensitivitiesInto(solve.curveOut, 2, hasAir, 1, solve.curveSensitivities) : null;
-    installDeckPointInto(solve.fast, solve.ctx, solve.free, solve.curveOut[0]!, 0, hasAir ? air : null, sens);
+    const sens = solve.access.hasSensitivities ? readSensitivitiesInto(out, 2, hasAir, 1, solve.curveSensitivities) : null;
+    installDeckPointInto(solve.fast, solve.ctx, solve.free, out[0]!, out[CURVE_FUEL_FLOW]!, hasAir ? air : null, sens);
+    solve.lastOnCurve = true;
     return netThrustOf(solve.fast);
   }
   evaluateEngineInto(solve.full, solve.ctx, solve.access, solve.condition, solve.free, power);
+  solve.lastOnCurve = false;
   return netThrustOf(solve.full);
+}
+
+/**
+ * Installed fuel flow per engine (kg/s) at `power`, the root solvePartPower just returned, at its condition: the
+ * last evaluation's when it was at that power (the usual case), else one evaluation there. The curve carries
+ * lookupDeck's values to the bit, so this is the fuel flow of the full point at the root, to the bit.
+ */
+export function solvedFuelFlow(solve: PartPowerSolve, power: number): number {
+  if (!Object.is(solve.lastPower, power)) solveThrustAt(solve, power);
+  return solve.lastOnCurve ? solve.fast.fuelFlow_kg_s : solve.full.fuelFlow_kg_s;
+}
+
+/**
+ * Points solve.nodes at the slot's node array and returns the offset in it of the segment [lo, hi], taking one
+ * (the oldest when all are taken) if the slot has none.
+ */
+function segmentBase(solve: PartPowerSolve, lo: number, hi: number): number {
+  const slot = solve.slot;
+  const nodes = (solve.nodeThrust[slot] ??= new Float64Array(SEGMENTS_PER_CONDITION * SEGMENT_NODES));
+  solve.nodes = nodes;
+  const first = slot * SEGMENTS_PER_CONDITION;
+  const count = solve.segmentCount[slot]!;
+  for (let i = first; i < first + count; i++) {
+    if (Object.is(solve.segmentLo[i], lo) && Object.is(solve.segmentHi[i], hi)) return (i - first) * SEGMENT_NODES;
+  }
+  let i: number;
+  if (count < SEGMENTS_PER_CONDITION) {
+    i = first + count;
+    solve.segmentCount[slot] = count + 1;
+  } else {
+    i = first + solve.segmentNext[slot]!;
+    solve.segmentNext[slot] = (solve.segmentNext[slot]! + 1) % SEGMENTS_PER_CONDITION;
+  }
+  solve.segmentLo[i] = lo;
+  solve.segmentHi[i] = hi;
+  const base = (i - first) * SEGMENT_NODES;
+  nodes.fill(Number.NaN, base, base + SEGMENT_NODES);
+  return base;
+}
+
+/** Power of node `j` (0 .. SEGMENT_DIVISIONS) of the segment [lo, hi]: its ends exactly, else lo + (hi - lo) j / SEGMENT_DIVISIONS. */
+function nodePower(lo: number, hi: number, j: number): number {
+  return j === SEGMENT_DIVISIONS ? hi : lo + (hi - lo) * (j / SEGMENT_DIVISIONS);
+}
+
+/** Installed thrust per engine (N) at node `j` of the segment at `base` (kept; computed on first use). */
+function nodeThrustAt(solve: PartPowerSolve, base: number, lo: number, hi: number, j: number): number {
+  const kept = solve.nodes[base + j]!;
+  if (!Number.isNaN(kept)) return kept;
+  const thrust = solveThrustAt(solve, nodePower(lo, hi, j));
+  solve.nodes[base + j] = thrust;
+  return thrust;
+}
+
+/**
+ * The root on the deck power segment [lo, hi] (a bracket: installed thrust loThrust_N < required < hiThrust_N, no
+ * curve breakpoint inside): a search over the segment's nodes to the part holding the sign change, the inverse
+ * cubic through the four nodes around it as the first guess, then a bracketed secant on the part if the guess
+ * misses the tolerance.
+ */
+function solveOnSegment(solve: PartPowerSolve, lo: number, loThrust_N: number, hi: number, hiThrust_N: number, fTol: number): PartPowerRoot {
+  const required = solve.required_N;
+  const base = segmentBase(solve, lo, hi);
+  solve.nodes[base] = loThrust_N;
+  solve.nodes[base + SEGMENT_DIVISIONS] = hiThrust_N;
+  // Nodes a (thrust below the asked) and b (above), closed in on the part holding the root by interpolation search
+  // (the node just below the chord's root between them: on a nearly linear curve one or two probes), bisection
+  // after three probes.
+  let a = 0;
+  let fa = loThrust_N - required;
+  let b = SEGMENT_DIVISIONS;
+  let fb = hiThrust_N - required;
+  for (let probe = 0; b - a > 1; probe++) {
+    const m = probe < 3 ? Math.min(Math.max(Math.floor(a + ((b - a) * fa) / (fa - fb)), a + 1), b - 1) : (a + b) >> 1;
+    const f = nodeThrustAt(solve, base, lo, hi, m) - required;
+    if (Math.abs(f) <= fTol) return { ok: true, power: nodePower(lo, hi, m), limit: 'within' };
+    if (f < 0) {
+      a = m;
+      fa = f;
+    } else {
+      b = m;
+      fb = f;
+    }
+  }
+  const j = Math.min(Math.max(a - 1, 0), SEGMENT_DIVISIONS - 3);
+  const f0 = nodeThrustAt(solve, base, lo, hi, j) - required;
+  const f1 = nodeThrustAt(solve, base, lo, hi, j + 1) - required;
+  const f2 = nodeThrustAt(solve, base, lo, hi, j + 2) - required;
+  const f3 = nodeThrustAt(solve, base, lo, hi, j + 3) - required;
+  const xa = nodePower(lo, hi, a);
+  const xb = nodePower(lo, hi, b);
+  let guess = inverseCubicZero(nodePower(lo, hi, j), nodePower(lo, hi, j + 1), nodePower(lo, hi, j + 2), nodePower(lo, hi, j + 3), f0, f1, f2, f3);
+  if (!(guess > xa && guess < xb)) guess = xa - (fa * (xb - xa)) / (fb - fa);
+  let x0 = xa;
+  let fx0 = fa;
+  let x1 = xb;
+  let fx1 = fb;
+  if (guess > xa && guess < xb) {
+    const g = solve.residual(guess);
+    if (Math.abs(g) <= fTol) return { ok: true, power: guess, limit: 'within' };
+    if (g < 0) {
+      x0 = guess;
+      fx0 = g;
+    } else {
+      x1 = guess;
+      fx1 = g;
+    }
+  }
+  return finishRoot(bracketedSecant(solve.residual, x0, fx0, x1, fx1, { fTol, xTol: 0, maxIterations: 100 }));
+}
+
+function finishRoot(root: ReturnType<typeof bracketedSecant>): PartPowerRoot {
+  if (!root.ok) return { ok: false, error: { code: 'did_not_converge', message: root.error.message } };
+  return { ok: true, power: root.value.x, limit: 'within' };
 }
 
 /** The power found and where it sits against the limits. */
@@ -215,6 +378,7 @@ export function solvePartPower(
   solve.free = free;
   solve.curve = solve.access.curveAt?.(condition);
   solve.required_N = perEngineRequired_N;
+  solve.lastPower = Number.NaN;
   selectSlot(solve, condition);
   const curve = solve.curve;
   const hiThrust = memoThrustAt(solve, ceilingPower);
@@ -227,8 +391,10 @@ export function solvePartPower(
     return { ok: true, power: idlePower, limit: loThrust === perEngineRequired_N ? 'within' : 'below_idle' };
   }
   let lo = idlePower;
+  let loT = loThrust;
   let fLo = loThrust - perEngineRequired_N;
   let hi = ceilingPower;
+  let hiT = hiThrust;
   let fHi = hiThrust - perEngineRequired_N;
   const fTol = FOR_THRUST_TOLERANCE * Math.max(Math.abs(perEngineRequired_N), 10);
   const curveBreakAfter = curve ? solve.access.curveBreakAfter : undefined;
@@ -247,16 +413,20 @@ export function solvePartPower(
       }
       const above = q < hi ? q : Number.NaN;
       const at = Number.isNaN(below) ? above : Number.isNaN(above) || chord - below <= above - chord ? below : above;
-      const f = memoThrustAt(solve, at) - perEngineRequired_N;
+      const t = memoThrustAt(solve, at);
+      const f = t - perEngineRequired_N;
       if (Math.abs(f) <= fTol) return { ok: true, power: at, limit: 'within' };
       if (f < 0) {
         lo = at;
+        loT = t;
         fLo = f;
       } else {
         hi = at;
+        hiT = t;
         fHi = f;
       }
     }
+    return solveOnSegment(solve, lo, loT, hi, hiT, fTol);
   } else if (!curve) {
     const ratio = hiThrust > 0 ? hiDeck / hiThrust : 1;
     const guess = solve.access.powerForThrust(condition, perEngineRequired_N * ratio, ceilingPower);
@@ -272,11 +442,5 @@ export function solvePartPower(
       }
     }
   }
-  const root = bracketedSecant(solve.residual, lo, fLo, hi, fHi, {
-    fTol,
-    xTol: 0,
-    maxIterations: 100,
-  });
-  if (!root.ok) return { ok: false, error: { code: 'did_not_converge', message: root.error.message } };
-  return { ok: true, power: root.value.x, limit: 'within' };
+  return finishRoot(bracketedSecant(solve.residual, lo, fLo, hi, fHi, { fTol, xTol: 0, maxIterations: 100 }));
 }

@@ -159,6 +159,12 @@ export interface PropulsionModel {
     ceilingRating?: RatingName,
   ): PartPowerPoint;
   /**
+   * forThrust(condition, thrustRequired_N, ceilingRating).fuelFlow_kg_s (kg/s, all engines), to the bit, without
+   * building the point (no cautions, no full deck lookup where the deck's curve serves): for integrator stages that
+   * read the fuel flow alone. Absent: callers take forThrust's (flightPoint.ts partPowerFuelFlow).
+   */
+  fuelFlowForThrust?(condition: FlightCondition, thrustRequired_N: number, ceilingRating?: RatingName): number;
+  /**
    * The same propulsion with the inlet recovery raised by `delta` (-),
    * carried through the installation method (for trade factors); absent
    * when the model cannot rebuild itself.

@@ -12,7 +12,7 @@ import { checkThroatMach } from '../../../engine/cautions/checks';
 import { DEFAULT_CAUTION_SETTINGS } from '../../../engine/cautions/cautionSettings';
 import type { Caution } from '../../../engine/cautions/caution';
 import { err, ok } from '../../../engine/core/result';
-import type { DeckAccess } from '../../../engine/propulsion/deckAccess';
+import { CURVE_FUEL_FLOW, type DeckAccess } from '../../../engine/propulsion/deckAccess';
 import type { ReferenceRecovery } from '../../../engine/propulsion/engineDeck';
 import type { InletDesign } from '../../../engine/propulsion/inletDesign';
 import type { InstallationSettings } from '../../../engine/propulsion/installationCorrections';
@@ -56,6 +56,7 @@ function linearAccess(d: LinearDeck): DeckAccess {
     access.curveAt = () => (power, out) => {
       out[0] = T0 * power;
       out[1] = d.airflow_kg_s ?? Number.NaN;
+      out[CURVE_FUEL_FLOW] = F0 * power;
       return true;
     };
   }

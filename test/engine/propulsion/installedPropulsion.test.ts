@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_CAUTION_SETTINGS, type CautionSettings } from '../../../engine/cautions/cautionSettings';
 import { expectOk } from '../../../engine/core/result';
-import { CURVE_VALUES } from '../../../engine/propulsion/deckAccess';
+import { CURVE_FUEL_FLOW, CURVE_VALUES } from '../../../engine/propulsion/deckAccess';
 import { lookupDeck } from '../../../engine/propulsion/deckLookup';
 import { DEMO_ENGINE_SPEC } from '../../../engine/propulsion/deckDemoSpec';
 import type { EngineDeck } from '../../../engine/propulsion/engineDeck';
@@ -297,14 +297,16 @@ describe('atRating memo', () => {
 describe('deckCurve', () => {
   it('deckCurve evaluates exactly what lookupDeck returns, incl. off-table and ISA deviation', () => {
     const curve = deckCurve(deck);
-    const out = new Float64Array(2);
+    const out = new Float64Array(CURVE_VALUES);
     for (const condition of [CRUISE, { ...CRUISE, mach: 0.95 }, { altitude_m: 1500, mach: 0.25, isaDev_K: 15 }, { altitude_m: 13000, mach: 0.85, isaDev_K: -10 }]) {
       curve.prepare(condition);
       for (const power of [0.06, 0.2, 0.5, 0.88, 1]) {
         const d = expectOk(lookupDeck(deck, condition, power), 'deck');
         expect(curve.evaluate(power, out)).toBe(true);
-        expectClose(out[0]!, d.thrust_N, { rel: 1e-15 }, 'lookupDeck thrust');
-        expectClose(out[1]!, d.airflow_kg_s!, { rel: 1e-15 }, 'lookupDeck airflow');
+        // To the bit: the same weights, factors and order of operations (deckLookup.ts finishLookup).
+        expect(out[0]).toBe(d.thrust_N);
+        expect(out[1]).toBe(d.airflow_kg_s);
+        expect(out[CURVE_FUEL_FLOW]).toBe(d.fuelFlow_kg_s);
       }
     }
   });
