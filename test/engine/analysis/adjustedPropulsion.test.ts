@@ -1,6 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { adjustPropulsion } from '../../../engine/analysis/adjustedPropulsion';
 import { expectClose } from '../../support/assertInDelta';
+import { DEFAULT_CAUTION_SETTINGS } from '../../../engine/cautions/cautionSettings';
+import { DEMO_ENGINE_SPEC } from '../../../engine/propulsion/deckDemoSpec';
+import { makeInstalledPropulsion } from '../../../engine/propulsion/installedPropulsion';
+import { buildParametricDeck } from '../../../engine/propulsion/parametricDeck';
+import { LONG_PITOT } from '../propulsion/inletDesigns';
 import { analyticPropulsion } from './analyticModels';
 
 const engine = { thrust_N: 160e3, lapse: 'mattingly' as const, tsfc_kg_N_s: 1.6e-5 };
@@ -40,5 +45,23 @@ describe('adjustPropulsion', () => {
     expect(p.limit).toBe('above_rating');
     expect(p.thrustRequired_N).toBe(1e7);
     expect(adjusted.forThrust(cond, 1).limit).toBe('below_idle');
+  });
+
+  it('adjustPropulsion gives the fuel flow alone of its part-power point, to the bit, and offers it only without a recovery change', () => {
+    const base = makeInstalledPropulsion({
+      deck: buildParametricDeck(DEMO_ENGINE_SPEC),
+      engineCount: 2,
+      inlet: LONG_PITOT,
+      installation: { bleed: { kind: 'coreFraction', fraction: 0.02 }, powerExtraction_W: 60e3 },
+      cautionSettings: DEFAULT_CAUTION_SETTINGS,
+    });
+    const scaled = adjustPropulsion(base, { recoveryDelta: 0, cRam: 1.35, fuelFlowScale: 1.01 });
+    const top = base.atRating(cond, 'maxCruise').thrust_N;
+    for (const share of [0.3, 0.55, 0.8, 1.2]) {
+      expect(scaled.fuelFlowForThrust!(cond, share * top, 'maxCruise')).toBe(scaled.forThrust(cond, share * top, 'maxCruise').fuelFlow_kg_s);
+    }
+    // With a recovery change the root is re-solved on the adjusted thrust: callers take forThrust's fuel flow.
+    expect(adjustPropulsion(base, { recoveryDelta: 0.01, cRam: 1.35, fuelFlowScale: 1 }).fuelFlowForThrust).toBeUndefined();
+    expect(adjustPropulsion(analyticPropulsion(engine), { recoveryDelta: 0, cRam: 1.35, fuelFlowScale: 1 }).fuelFlowForThrust).toBeUndefined();
   });
 });
