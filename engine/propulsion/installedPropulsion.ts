@@ -97,7 +97,7 @@ export function deckAccess(deck: EngineDeck): DeckAccess {
  * lookupDeck and in the same order of operations (deckGrid.ts,
  * deckLookup.ts finishLookup, deckTemperature.ts), so each equals
  * lookupDeck's value to the bit; thrust, fuel flow and airflow floored at
- * zero like lookupDeck's extrapolations. `evaluate` returns false where
+ * zero off the table like lookupDeck's extrapolations. `evaluate` returns false where
  * lookupDeck would refuse. One prepared condition at a time (buffers reused).
  */
 export function deckCurve(
@@ -146,14 +146,22 @@ export function deckCurve(
   return {
     prepare,
     evaluate(power, out) {
-      if (!filled || !evaluateDeckNodesInto(deck.grid, nodes, power, deck.policy.power, values)) return false;
+      if (!filled) return false;
+      // As lookupFilledDeck: from the condition's own outside flags (a previous power may have left the power axis).
+      nodes.outsideMask = conditionMask;
+      nodes.refusedAxis = -1;
+      if (!evaluateDeckNodesInto(deck.grid, nodes, power, deck.policy.power, values)) return false;
       // finishLookup's products in its order ((value x factor) x or / the temperature factor, which is 1 on an ISA
-      // axis or a standard day), floored at zero as lookupDeck floors them (the point finally evaluated carries its
-      // caution).
-      out[0] = Math.max(values[0]! * thrustFactor, 0);
-      out[1] = deck.hasAirflow ? Math.max((values[2]! * airflowFactor) / temperatureFactor, 0) : Number.NaN;
+      // axis or a standard day), floored at zero off the table as lookupDeck floors them (the point finally
+      // evaluated carries the caution).
+      const off = nodes.outsideMask !== 0;
+      const thrust = values[0]! * thrustFactor;
+      const fuelFlow = values[1]! * fuelFlowFactor * temperatureFactor;
+      const airflow = (values[2]! * airflowFactor) / temperatureFactor;
+      out[0] = off && !(thrust >= 0) ? 0 : thrust;
+      out[1] = !deck.hasAirflow ? Number.NaN : off && !(airflow >= 0) ? 0 : airflow;
       if (deck.hasSensitivities) scaleSensitivitiesInto(values, 3, deck.hasAirflow, temperatureFactor, out, 2);
-      out[CURVE_FUEL_FLOW] = Math.max(values[1]! * fuelFlowFactor * temperatureFactor, 0);
+      out[CURVE_FUEL_FLOW] = off && !(fuelFlow >= 0) ? 0 : fuelFlow;
       return true;
     },
     breakAfter(after) {

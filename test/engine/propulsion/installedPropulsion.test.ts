@@ -295,20 +295,28 @@ describe('atRating memo', () => {
 });
 
 describe('deckCurve', () => {
-  it('deckCurve evaluates exactly what lookupDeck returns, incl. off-table and ISA deviation', () => {
-    const curve = deckCurve(deck);
+  it('deckCurve evaluates exactly what lookupDeck returns, incl. off-table, ISA deviation and negative tabulated thrust', () => {
+    // The parametric deck with 3 kN taken off every thrust: negative at idle inside the table (kept) and beyond it
+    // (floored at zero, as lookupDeck floors it).
+    const shifted: EngineDeck = { ...deck, grid: { ...deck.grid, thrust_N: deck.grid.thrust_N.map((t) => t - 3000) } };
     const out = new Float64Array(CURVE_VALUES);
-    for (const condition of [CRUISE, { ...CRUISE, mach: 0.95 }, { altitude_m: 1500, mach: 0.25, isaDev_K: 15 }, { altitude_m: 13000, mach: 0.85, isaDev_K: -10 }]) {
-      curve.prepare(condition);
-      for (const power of [0.06, 0.2, 0.5, 0.88, 1]) {
-        const d = expectOk(lookupDeck(deck, condition, power), 'deck');
-        expect(curve.evaluate(power, out)).toBe(true);
-        // To the bit: the same weights, factors and order of operations (deckLookup.ts finishLookup).
-        expect(out[0]).toBe(d.thrust_N);
-        expect(out[1]).toBe(d.airflow_kg_s);
-        expect(out[CURVE_FUEL_FLOW]).toBe(d.fuelFlow_kg_s);
+    let negative = 0;
+    for (const d0 of [deck, shifted]) {
+      const curve = deckCurve(d0);
+      for (const condition of [CRUISE, { ...CRUISE, mach: 0.95 }, { altitude_m: 1500, mach: 0.25, isaDev_K: 15 }, { altitude_m: 13000, mach: 0.85, isaDev_K: -10 }]) {
+        curve.prepare(condition);
+        for (const power of [0.06, 0.2, 0.5, 0.88, 1]) {
+          const d = expectOk(lookupDeck(d0, condition, power), 'deck');
+          if (d.thrust_N < 0 && d.outside.length === 0) negative++;
+          expect(curve.evaluate(power, out)).toBe(true);
+          // To the bit: the same weights, factors and order of operations (deckLookup.ts finishLookup).
+          expect(out[0]).toBe(d.thrust_N);
+          expect(out[1]).toBe(d.airflow_kg_s);
+          expect(out[CURVE_FUEL_FLOW]).toBe(d.fuelFlow_kg_s);
+        }
       }
     }
+    expect(negative).toBeGreaterThan(0);
   });
 
   it('the deck access keeps one prepared condition: its lookups equal lookupDeck whatever was asked before', () => {
