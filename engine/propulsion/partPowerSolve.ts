@@ -21,8 +21,10 @@
  * curve's power breakpoints) is kept per
  * condition in a bounded exact-key memo (conditionSlots.ts): a mission asks for a few hundred part-power points at
  * a few dozen conditions, and every fuel pass, the alternate and later missions on the model ask at the same ones.
- * Each value is a pure function of the condition (and the power), so the memo changes no answer, only how often a
- * value is computed.
+ * A condition is admitted when it is asked again among the last few new ones (PartPowerSolve.recent): a hold whose
+ * Mach follows the mass asks at a new condition every time, and those passed through a slot of their own instead of
+ * filling the memo (which emptied it every few solves). Each value is a pure function of the condition (and the
+ * power), so the memo changes no answer, only how often a value is computed.
  */
 import { inverseCubicZero } from '../core/inverseInterpolation';
 import { bracketedSecant } from '../core/rootFind';
@@ -96,7 +98,19 @@ export interface PartPowerSolve {
   readonly slotCondition: { altitude_m: number; mach: number; isaDev_K: number };
   /** Deck thrust per engine (N) at the power of the last memoThrustAt. */
   lastDeck_N: number;
+  /**
+   * Admission: a condition takes a slot of the memo only when it was asked within the last RECENT_CONDITIONS new
+   * conditions (a level leg asks at one condition again and again; a hold whose Mach follows the mass asks at a new
+   * one each time, and once admitted those filled the memo and emptied it every few solves). Until then it is
+   * solved in the passing slot (index `slots.limit`), emptied for each new condition. The recent conditions'
+   * numbers (3 a condition) and the next to overwrite.
+   */
+  readonly recent: Float64Array;
+  recentNext: number;
 }
+
+/** New conditions remembered for admission to the part-power memo (a condition asked twice among them is admitted). */
+const RECENT_CONDITIONS = 8;
 
 /** Powers kept per condition: idle, the ceiling and the power nodes between them on any deck so far. */
 const MEMO_POWERS = 16;
@@ -135,22 +149,24 @@ export function newPartPowerSolve(ctx: InstallationContext, access: DeckAccess, 
     curve: undefined,
     required_N: 0,
     slots: createConditionSlots(memoConditions),
-    memoCount: new Int32Array(memoConditions),
-    memoPower: new Float64Array(memoConditions * MEMO_POWERS),
-    memoThrust: new Float64Array(memoConditions * MEMO_POWERS),
-    memoDeck: new Float64Array(memoConditions * MEMO_POWERS),
-    breaks: new Array<Float64Array | null>(memoConditions).fill(null),
-    segmentCount: new Int32Array(memoConditions),
-    segmentNext: new Int32Array(memoConditions),
-    segmentLo: new Float64Array(memoConditions * SEGMENTS_PER_CONDITION),
-    segmentHi: new Float64Array(memoConditions * SEGMENTS_PER_CONDITION),
-    nodeThrust: new Array<Float64Array | null>(memoConditions).fill(null),
+    memoCount: new Int32Array(memoConditions + 1),
+    memoPower: new Float64Array((memoConditions + 1) * MEMO_POWERS),
+    memoThrust: new Float64Array((memoConditions + 1) * MEMO_POWERS),
+    memoDeck: new Float64Array((memoConditions + 1) * MEMO_POWERS),
+    breaks: new Array<Float64Array | null>(memoConditions + 1).fill(null),
+    segmentCount: new Int32Array(memoConditions + 1),
+    segmentNext: new Int32Array(memoConditions + 1),
+    segmentLo: new Float64Array((memoConditions + 1) * SEGMENTS_PER_CONDITION),
+    segmentHi: new Float64Array((memoConditions + 1) * SEGMENTS_PER_CONDITION),
+    nodeThrust: new Array<Float64Array | null>(memoConditions + 1).fill(null),
     nodes: new Float64Array(0),
     lastPower: Number.NaN,
     lastOnCurve: false,
     slot: -1,
     slotCondition: { altitude_m: Number.NaN, mach: Number.NaN, isaDev_K: Number.NaN },
     lastDeck_N: 0,
+    recent: new Float64Array(3 * RECENT_CONDITIONS).fill(Number.NaN),
+    recentNext: 0,
   };
   return solve;
 }
@@ -161,8 +177,9 @@ function selectSlot(solve: PartPowerSolve, condition: FlightCondition): void {
   if (solve.slot >= 0 && sameFlightCondition(key, condition)) return;
   let slot = solve.slots.find(condition);
   if (slot < 0) {
-    // A fresh slot (after an emptying, every slot is fresh again): forget what it held for another condition.
-    slot = solve.slots.add(condition);
+    // A fresh slot (after an emptying, every slot is fresh again) for a condition asked recently, else the passing
+    // slot: forget what it held for another condition.
+    slot = askedRecently(solve, condition) ? solve.slots.add(condition) : solve.slots.limit;
     solve.memoCount[slot] = 0;
     solve.breaks[slot] = null;
     solve.segmentCount[slot] = 0;
@@ -172,6 +189,20 @@ function selectSlot(solve: PartPowerSolve, condition: FlightCondition): void {
   key.altitude_m = condition.altitude_m;
   key.mach = condition.mach;
   key.isaDev_K = condition.isaDev_K;
+}
+
+/** Whether `condition` is among the recent new conditions (exact numbers); if not, it becomes the newest of them. */
+function askedRecently(solve: PartPowerSolve, condition: FlightCondition): boolean {
+  const r = solve.recent;
+  for (let i = 0; i < r.length; i += 3) {
+    if (Object.is(r[i], condition.altitude_m) && Object.is(r[i + 1], condition.mach) && Object.is(r[i + 2], condition.isaDev_K)) return true;
+  }
+  const at = 3 * solve.recentNext;
+  r[at] = condition.altitude_m;
+  r[at + 1] = condition.mach;
+  r[at + 2] = condition.isaDev_K;
+  solve.recentNext = (solve.recentNext + 1) % RECENT_CONDITIONS;
+  return false;
 }
 
 /** solveThrustAt at one of the solve's fixed powers, kept per condition (PartPowerSolve.memoPower); sets lastDeck_N. */

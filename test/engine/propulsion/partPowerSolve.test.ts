@@ -324,6 +324,27 @@ describe('part-power solve on a closed-form curve', () => {
     expect(counts(kinked, [0.6365, 0.6368])).toBeGreaterThan(1);
   });
 
+  it('conditions asked once (a hold whose Mach follows the mass) pass through without evicting one asked again and again', () => {
+    const c = closedFormAccess(cubic);
+    const m = closedFormModel(c.access, 4);
+    const fresh = (cond: FlightCondition, t: number) => closedFormModel(closedFormAccess(cubic).access).forThrust(cond, t, 'maxCruise');
+    const f = 1 - CRUISE.altitude_m / 40000;
+    const warm = [0.4537, 0.4538, 0.4539];
+    for (const p of warm) m.forThrust(CRUISE, 2 * f * cubic(p), 'maxCruise');
+    // Twenty one-off conditions, five times the memo's size; each answered as a fresh model answers it.
+    for (let i = 0; i < 20; i++) {
+      const once = { altitude_m: 450, mach: 0.3 + 0.001 * i, isaDev_K: 0 };
+      const t = 2 * (1 - once.altitude_m / 40000) * cubic(0.5 + 0.01 * i);
+      expect(m.forThrust(once, t, 'maxCruise')).toStrictEqual(fresh(once, t));
+      // The cruise condition asked between them: admitted when it comes back the first time (asked among the recent
+      // new conditions), then it keeps its nodes: one curve evaluation, the guess's check.
+      c.reset();
+      const t2 = 2 * f * cubic(0.45385);
+      expect(m.forThrust(CRUISE, t2, 'maxCruise')).toStrictEqual(fresh(CRUISE, t2));
+      if (i > 0) expect(c.count(), `after one-off condition ${i}`).toBe(1);
+    }
+  });
+
   it('at and beyond the limits: the ceiling or idle, the fuel flow alone the point\'s', () => {
     const m = closedFormModel(closedFormAccess(cubic).access);
     const f = 1 - CRUISE.altitude_m / 40000;
