@@ -5,9 +5,9 @@
  * variant takes its altitude algebraically from the mass and neglects the
  * slow climb's potential-energy term (flight-path angle about 1e-4 rad).
  */
+import { newDragSample } from '../aero/aeroModel';
 import type { RatingName } from '../propulsion/propulsionModel';
-import type { PartPowerPoint } from '../propulsion/propulsionModel';
-import { airPoint, dragForceAt, fuelExhaustedEvents, makeSample, partPowerFuelFlow, ratingPoint, thrustPoint, type AirPoint } from './flightPoint';
+import { dragForceAt, dragSampleAt, fuelExhaustedEvents, packSample, partPowerFuelFlow } from './flightPoint';
 import { missionAir } from './missionAtmosphere';
 import { distanceIndex, type LegTarget, type MissionContext } from './missionContext';
 import { S_MASS, S_TIME, STATE_SIZE, type Evaluation, type Segment, type SegmentEvent, type StateVector } from './missionState';
@@ -42,24 +42,27 @@ export function makeLevelSegment(ctx: MissionContext, target: LegTarget, spec: L
     d[S_MASS] = -fuelFlow_kg_s;
     return d;
   };
-  const pointOf = (y: StateVector): { at: AirPoint; engine: PartPowerPoint } => {
+  // Accepted points write their drag into one record (no air point or breakdown objects: the same bits as airPoint).
+  const drag = newDragSample();
+  const evaluate: Segment['evaluate'] = (y) => {
     const m = y[S_MASS];
     const h = spec.altitudeOf(m);
-    const at = airPoint(input, h, spec.machOf(h, m), m, dev);
-    return { at, engine: thrustPoint(input, at, dev, at.drag.drag_N, spec.ceiling) };
-  };
-  const evaluate: Segment['evaluate'] = (y) => {
-    const { at, engine } = pointOf(y);
-    const available = ratingPoint(input, at, dev, spec.ceiling).thrust_N;
+    const mach = spec.machOf(h, m);
+    const air = missionAir(h, dev);
+    dragSampleAt(input, h, mach, m, drag);
+    const tas_m_s = mach * air.speedOfSound_m_s;
+    const condition = { altitude_m: h, mach, isaDev_K: dev };
+    const engine = input.propulsion.forThrust(condition, drag.drag_N, spec.ceiling);
+    const available = input.propulsion.atRating(condition, spec.ceiling).thrust_N;
     return {
-      derivative: derivativeOf(at.tas_m_s, engine.fuelFlow_kg_s),
-      sample: makeSample(at, available, engine.thrust_N, engine.fuelFlow_kg_s, 0, engine),
+      derivative: derivativeOf(tas_m_s, engine.fuelFlow_kg_s),
+      sample: packSample(h, mach, air, tas_m_s, drag, available, engine.thrust_N, engine.fuelFlow_kg_s, 0, engine),
       breakCoordinate: engine.power,
     };
   };
   // RK4 stages need no sample, so no thrust-available query (a full rated-thrust lookup) and no sample object,
   // no air point or drag breakdown, and no part-power point either: the same air data, drag force and part-power
-  // solve as pointOf, and its fuel flow alone (the same bits).
+  // solve as evaluate, and its fuel flow alone (the same bits).
   const derivative = (y: StateVector): Evaluation['derivative'] => {
     const m = y[S_MASS];
     const h = spec.altitudeOf(m);
