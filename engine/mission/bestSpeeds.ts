@@ -7,7 +7,7 @@
  * Performance and Design, section 5.14).
  */
 import { goldenMaximum } from '../core/scalarMaximum';
-import { airPoint, thrustPoint } from './flightPoint';
+import { dragForceAt } from './flightPoint';
 import { machOfCas, missionAir } from './missionAtmosphere';
 import type { MissionInput } from './missionTypes';
 
@@ -28,10 +28,11 @@ export function maxSearchMach(input: MissionInput, altitude_m: number): number {
  * the rating cannot balance the drag or fuel flow is not positive.
  */
 export function specificRangeAt(input: MissionInput, altitude_m: number, mach: number, mass_kg: number, isaDev_K: number): number {
-  const at = airPoint(input, altitude_m, mach, mass_kg, isaDev_K);
-  const p = thrustPoint(input, at, isaDev_K, at.drag.drag_N, 'maxCruise');
+  // The drag force alone (dragForceAt: the same bits as the breakdown's drag_N) and the TAS as airPoint has it.
+  const tas_m_s = mach * missionAir(altitude_m, isaDev_K).speedOfSound_m_s;
+  const p = input.propulsion.forThrust({ altitude_m, mach, isaDev_K }, dragForceAt(input, altitude_m, mach, mass_kg), 'maxCruise');
   if (p.limit === 'above_rating' || !(p.fuelFlow_kg_s > 0)) return 0;
-  const sr = at.tas_m_s / p.fuelFlow_kg_s;
+  const sr = tas_m_s / p.fuelFlow_kg_s;
   return Number.isFinite(sr) ? sr : 0;
 }
 
@@ -72,10 +73,10 @@ export function longRangeMach(input: MissionInput, altitude_m: number, mass_kg: 
   return 0.5 * (lo + hi);
 }
 
-/** Minimum-drag (best-endurance) Mach (-) at altitude (m) and mass (kg). */
-export function minimumDragMach(input: MissionInput, altitude_m: number, mass_kg: number, isaDev_K: number): number {
+/** Minimum-drag (best-endurance) Mach (-) at altitude (m) and mass (kg), at any ISA deviation (the 1 g drag at a pressure altitude and Mach does not depend on it). */
+export function minimumDragMach(input: MissionInput, altitude_m: number, mass_kg: number, _isaDev_K: number): number {
   return goldenMaximum(
-    (m) => -airPoint(input, altitude_m, m, mass_kg, isaDev_K).drag.drag_N,
+    (m) => -dragForceAt(input, altitude_m, m, mass_kg),
     MIN_SEARCH_MACH,
     maxSearchMach(input, altitude_m),
   );

@@ -237,7 +237,8 @@ function reserveFigures(input: MissionInput, landing_kg: number): Figures['reser
   const policy = input.reserves;
   const destination = destinationElevation(input);
   const holdSpeed = reserveHoldSpeed(policy);
-  const cruiseTime = normalCruiseLaw(input, landing_kg);
+  // Normal cruise only where the policy flies it (the final reserve of 121.639, the en-route time of 121.645(b)).
+  const cruiseTime = policy.preset === 'cfr121_639' || policy.preset === 'cfr121_645' ? normalCruiseLaw(input, landing_kg) : null;
   const contingencyHold = policy.preset === 'icaoAnnex6' ? holdLaw(input, destination + HOLD_HEIGHT_M, holdSpeed, landing_kg) : null;
   const finalHold = policy.preset === 'cfr121_639' ? cruiseTime : holdLaw(input, (policy.alternate?.elevation_m ?? destination) + HOLD_HEIGHT_M, holdSpeed, landing_kg);
   if (finalHold === null || (policy.preset === 'cfr121_645' && cruiseTime === null) || (policy.preset === 'icaoAnnex6' && contingencyHold === null)) return null;

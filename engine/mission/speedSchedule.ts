@@ -30,14 +30,43 @@ function zoneAt(schedule: SpeedSchedule, altitude_m: number): Zone {
   return { cas_m_s: cas, transition_m: transitionAltitude(cas, schedule.mach) };
 }
 
-/** Mach (-) the schedule flies at a pressure altitude (m) in the zone of `zoneAltitude_m`. */
+/** Mach (-) the schedule flies at a pressure altitude (m) in the zone of `zoneAltitude_m` (the zone's CAS, capped by the Mach: no transition altitude needed). */
 export function scheduleMach(schedule: SpeedSchedule, altitude_m: number, zoneAltitude_m = altitude_m): number {
-  const zone = zoneAt(schedule, zoneAltitude_m);
-  return Math.min(machOfCas(zone.cas_m_s, missionAir(altitude_m, 0).pressure_Pa), schedule.mach);
+  const cas = zoneAltitude_m < schedule.lowAltitudeLimit_m ? schedule.lowCas_m_s : schedule.cas_m_s;
+  return Math.min(machOfCas(cas, missionAir(altitude_m, 0).pressure_Pa), schedule.mach);
 }
+
+/** Phase lists kept (schedulePhases' memo) before the memo is emptied. */
+const PHASE_MEMO_ENTRIES = 32;
+
+/** A memo entry: the schedule's four numbers, the two altitudes (m) and the phases between them. */
+interface PhaseMemoEntry {
+  readonly key: readonly [number, number, number, number, number, number];
+  readonly phases: readonly SchedulePhase[];
+}
+
+// Exact-key memo of schedulePhases (Object.is on the schedule's numbers and the altitudes, not the schedule object, so
+// a new object with the same numbers finds its entry): the phases are a pure function of them, asked again by every
+// fuel pass's climbs and descents (the same levels, the alternate's, the trials'). The entry that would pass
+// PHASE_MEMO_ENTRIES empties it first, so what it holds depends only on the queries since; the lists are shared (readonly).
+const phaseMemo: PhaseMemoEntry[] = [];
 
 /** Phases from `from_m` to `to_m` (climb when to > from, descent otherwise), in flight order. */
 export function schedulePhases(schedule: SpeedSchedule, from_m: number, to_m: number): readonly SchedulePhase[] {
+  const key = [schedule.lowCas_m_s, schedule.lowAltitudeLimit_m, schedule.cas_m_s, schedule.mach, from_m, to_m] as const;
+  for (const entry of phaseMemo) if (sameNumbers(entry.key, key)) return entry.phases;
+  const phases = Object.freeze(phasesBetween(schedule, from_m, to_m));
+  if (phaseMemo.length >= PHASE_MEMO_ENTRIES) phaseMemo.length = 0;
+  phaseMemo.push({ key, phases });
+  return phases;
+}
+
+function sameNumbers(a: readonly number[], b: readonly number[]): boolean {
+  for (let i = 0; i < a.length; i++) if (!Object.is(a[i], b[i])) return false;
+  return true;
+}
+
+function phasesBetween(schedule: SpeedSchedule, from_m: number, to_m: number): SchedulePhase[] {
   if (from_m === to_m) return [];
   const up = to_m > from_m;
   const lo = Math.min(from_m, to_m);
