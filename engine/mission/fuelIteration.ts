@@ -146,6 +146,8 @@ interface AfterPoint {
 class AfterSolvableModel {
   private readonly points: AfterPoint[] = [];
   private readonly prior: MissionStart['afterSolvable'];
+  /** The last pair read (its mass, kg), until a point is added or dropped; null when none. */
+  private pairFor: { readonly mass_kg: number; readonly pair: readonly [AfterPoint, AfterPoint] | null } | null = null;
 
   constructor(prior: MissionStart['afterSolvable']) {
     this.prior = prior && usable(prior.mass_kg, true) && usable(prior.distance_m) && usable(prior.perKg_m) ? prior : undefined;
@@ -156,6 +158,14 @@ class AfterSolvableModel {
    * altitude when one is (descents from two levels are two functions of the mass); null when there are none such.
    */
   private pair(mass_kg: number): readonly [AfterPoint, AfterPoint] | null {
+    // One-entry memo: the corrections read the pair at the same pass's top of descent again and again.
+    if (this.pairFor !== null && Object.is(this.pairFor.mass_kg, mass_kg)) return this.pairFor.pair;
+    const pair = this.pairOf(mass_kg);
+    this.pairFor = { mass_kg, pair };
+    return pair;
+  }
+
+  private pairOf(mass_kg: number): readonly [AfterPoint, AfterPoint] | null {
     const byDistance = [...this.points].sort((a, b) => Math.abs(a.mass_kg - mass_kg) - Math.abs(b.mass_kg - mass_kg));
     const first = byDistance[0];
     if (first === undefined) return null;
@@ -167,6 +177,7 @@ class AfterSolvableModel {
   /** Forgets every point but the last pass's (a pass whose prediction left the solvable leg no length short of the range). */
   keepOnly(mass_kg: number): void {
     const kept = this.points.filter((p) => Math.abs(p.mass_kg - mass_kg) < 1e-9 * mass_kg);
+    this.pairFor = null;
     this.points.length = 0;
     this.points.push(...kept);
   }
@@ -225,6 +236,7 @@ class AfterSolvableModel {
     if (!usable(mass_kg, true) || !usable(distance_m)) return;
     const same = this.points.findIndex((p) => Math.abs(p.mass_kg - mass_kg) < 1e-9 * mass_kg);
     const point = { mass_kg, distance_m, fuel_kg: Number.isFinite(fuel_kg) ? fuel_kg : Number.NaN, altitude_m: Number.isFinite(altitude_m) ? altitude_m : 0 };
+    this.pairFor = null;
     if (same >= 0) this.points[same] = point;
     else this.points.push(point);
   }

@@ -20,7 +20,7 @@ import { allowanceFuel, destinationElevation } from './allowanceLegs';
 import { basisSpecificRange, minimumDragMach, specificRangeAt } from './bestSpeeds';
 import { cruiseMach } from './cruiseLeg';
 import { energyShareFactor, pressureAltitudeRate } from './energyShareFactor';
-import { airPoint, ratingPoint } from './flightPoint';
+import { dragForceAt } from './flightPoint';
 import { solvableLegIndex } from './flyTrip';
 import { legEnvironment } from './missionContext';
 import { machOfCas, missionAir } from './missionAtmosphere';
@@ -142,26 +142,23 @@ function pathEstimate(input: MissionInput, from_m: number, to_m: number, schedul
     const h = from_m + i * dh;
     const mach = scheduleMach(schedule, h);
     const air = missionAir(h, env.isaDev_K);
-    const at = airPoint(input, h, mach, mass_kg, env.isaDev_K);
+    // The TAS and drag force as airPoint has them (dragForceAt: the breakdown's drag_N to the bit).
+    const tas_m_s = mach * air.speedOfSound_m_s;
+    const drag_N = dragForceAt(input, h, mach, mass_kg);
     const held = mach >= schedule.mach - 1e-9 ? 'mach' : 'cas';
     const share = energyShareFactor(held, mach, air.lapse_K_m, air.temperature_K, air.isaTemperature_K);
-    let rate: number;
-    let flow: number;
-    if ('rating' in how) {
-      const p = ratingPoint(input, at, env.isaDev_K, how.rating);
-      rate = pressureAltitudeRate(p.thrust_N, at.drag.drag_N, at.tas_m_s, mass_kg, share, air.temperature_K, air.isaTemperature_K);
-      flow = p.fuelFlow_kg_s;
-    } else {
-      const idle = ratingPoint(input, at, env.isaDev_K, 'flightIdle');
-      rate = how.descent.kind === 'rate' ? -how.descent.rate_m_s : pressureAltitudeRate(idle.thrust_N, at.drag.drag_N, at.tas_m_s, mass_kg, share, air.temperature_K, air.isaTemperature_K);
-      flow = idle.fuelFlow_kg_s;
-    }
+    const p = input.propulsion.atRating({ altitude_m: h, mach, isaDev_K: env.isaDev_K }, 'rating' in how ? how.rating : 'flightIdle');
+    const rate =
+      'descent' in how && how.descent.kind === 'rate'
+        ? -how.descent.rate_m_s
+        : pressureAltitudeRate(p.thrust_N, drag_N, tas_m_s, mass_kg, share, air.temperature_K, air.isaTemperature_K);
+    const flow = p.fuelFlow_kg_s;
     const perMetre = 1 / rate;
     if (!(perMetre * dh > 0) || !Number.isFinite(perMetre)) return null;
     const w = (i === 0 || i === n ? 1 : i % 2 === 1 ? 4 : 2) * (dh / 3) * perMetre;
     time += w;
     fuel += w * flow;
-    distance += w * (input.distanceBasis === 'stillAir' ? at.tas_m_s : at.tas_m_s + env.wind_m_s);
+    distance += w * (input.distanceBasis === 'stillAir' ? tas_m_s : tas_m_s + env.wind_m_s);
   }
   return Number.isFinite(time + fuel + distance) ? { fuel_kg: fuel, time_s: time, distance_m: distance } : null;
 }
