@@ -111,7 +111,8 @@ function flyAlternate(ctx: MissionContext, target: LegTarget, start: StateVector
   // ones flown (PassMemo.alternateDescent), read where the table brackets the mass (parabola through the three
   // nearest) or, for the first estimate only, lies within 10 kg of them (farther out a read misses by centimetres,
   // which move the second trial's mass and the alternate's fuel by 1e-4 kg).
-  const scratch: MissionContext = { ...ctx, log: createFlightLog(input.airframe, input.cautionSettings, true) };
+  // The trials' quiet log, made when a trial is flown (a pass that reads both from the table needs none).
+  let scratch: MissionContext | null = null;
   // Only from the alternate's cruise level: its descents from another level are another function of the mass.
   const table = ctx.options.allowNegativeFuel && Math.abs(climb.state[S_ALT] - top) <= 1 ? ctx.memo?.alternateDescent : undefined;
   const climbed = climb.state[k] - startAir;
@@ -120,6 +121,7 @@ function flyAlternate(ctx: MissionContext, target: LegTarget, start: StateVector
     if (known !== null) return { failure: null, distance_m: known };
     const from = Float64Array.from(climb.state);
     from[S_MASS] = mass_kg;
+    scratch ??= { ...ctx, log: createFlightLog(input.airframe, input.cautionSettings, true) };
     const trial = flyDescent(scratch, target, from, holdAltitude, descentSpec.schedule, descentSpec.mode);
     const distance_m = trial.state[k] - from[k];
     if (trial.status !== 'ok') return { failure: trial, distance_m };
