@@ -54,32 +54,40 @@ export interface InstallationContext {
   readonly idlePower: number | null;
 }
 
-/** Scratch of one engine evaluation (SI, per engine). Mutated only by the `...Into` functions below. */
+/**
+ * Scratch of one engine evaluation (SI, per engine). Mutated only by the `...Into` functions below. Its optional
+ * numbers (airflows, mass-flow ratio, throat and fan-face Mach) hold NaN for "none" and are never null: a field that
+ * ever holds null keeps every number stored in it as a heap number of its own (an allocation and a write barrier
+ * per store, thousands a mission), one that holds only numbers is updated in place. The NaN stays inside this
+ * module: assembleInstalledPoint and the cautions turn it back into null (`orNull`).
+ */
 export interface EngineScratch {
   /**
    * Uninstalled deck thrust (N), fuel flow (kg/s), the physical airflow at
-   * the inlet's recovery and the deck's own airflow (kg/s, null without an
+   * the inlet's recovery and the deck's own airflow (kg/s, NaN without an
    * airflow column), and the deck's sensitivities (null without them).
    */
   readonly deck: {
     thrust_N: number;
     fuelFlow_kg_s: number;
-    airflow_kg_s: number | null;
-    deckAirflow_kg_s: number | null;
+    airflow_kg_s: number;
+    deckAirflow_kg_s: number;
     sensitivities: InstallationSensitivities | null;
   };
   /** Inlet recovery pt2/pt0 (-) and the deck's reference recovery (-). */
   readonly inlet: { recovery: number; referenceRecovery: number; mach: number };
-  massFlowRatio: number | null;
-  throatMach: number | null;
-  fanFaceMach: number | null;
+  /** NaN when not computed (no airflow, or no throat and fan face for a recovery table). */
+  massFlowRatio: number;
+  throatMach: number;
+  fanFaceMach: number;
   throatChoked: boolean;
   fanFaceChoked: boolean;
   tableOutside: 'below' | 'above' | null;
   /** After the installation-correction step, before spillage (N, kg/s, kg/s). */
   correctedThrust_N: number;
   fuelFlow_kg_s: number;
-  airflow_kg_s: number | null;
+  /** NaN without an airflow column. */
+  airflow_kg_s: number;
   /** The method's thrust loss parts (N): recovery (negative: a gain), bleed, extraction. */
   recoveryLoss_N: number;
   bleedLoss_N: number;
@@ -102,17 +110,17 @@ export interface EngineScratch {
 
 export function newEngineScratch(): EngineScratch {
   return {
-    deck: { thrust_N: 0, fuelFlow_kg_s: 0, airflow_kg_s: null, deckAirflow_kg_s: null, sensitivities: null },
+    deck: { thrust_N: 0, fuelFlow_kg_s: 0, airflow_kg_s: Number.NaN, deckAirflow_kg_s: Number.NaN, sensitivities: null },
     inlet: { recovery: 1, referenceRecovery: 1, mach: 0 },
-    massFlowRatio: null,
-    throatMach: null,
-    fanFaceMach: null,
+    massFlowRatio: Number.NaN,
+    throatMach: Number.NaN,
+    fanFaceMach: Number.NaN,
     throatChoked: false,
     fanFaceChoked: false,
     tableOutside: null,
     correctedThrust_N: 0,
     fuelFlow_kg_s: 0,
-    airflow_kg_s: null,
+    airflow_kg_s: Number.NaN,
     recoveryLoss_N: 0,
     bleedLoss_N: 0,
     extractionLoss_N: 0,
@@ -122,7 +130,7 @@ export function newEngineScratch(): EngineScratch {
     deckError: null,
     outside: NO_AXES,
     deckCautions: NO_CAUTIONS,
-    corrected: { thrust_N: 0, fuelFlow_kg_s: 0, airflow_kg_s: null, method: 'raymerCorrections', recoveryLoss_N: 0, bleedLoss_N: 0, extractionLoss_N: 0 },
+    corrected: { thrust_N: 0, fuelFlow_kg_s: 0, airflow_kg_s: Number.NaN, method: 'raymerCorrections', recoveryLoss_N: 0, bleedLoss_N: 0, extractionLoss_N: 0 },
     lip: { factor: 0, outside: false },
     memoMach: Number.NaN,
     memoRecovery: 1,
@@ -149,9 +157,9 @@ export function installDeckPointInto(
   sensitivities: InstallationSensitivities | null,
 ): void {
   const mach = free.mach;
-  s.throatMach = null;
-  s.fanFaceMach = null;
-  s.massFlowRatio = null;
+  s.throatMach = Number.NaN;
+  s.fanFaceMach = Number.NaN;
+  s.massFlowRatio = Number.NaN;
   s.throatChoked = false;
   s.fanFaceChoked = false;
   s.tableOutside = null;
@@ -164,7 +172,7 @@ export function installDeckPointInto(
   inlet.mach = mach;
   deck.thrust_N = deckThrust_N;
   deck.fuelFlow_kg_s = deckFuelFlow_kg_s;
-  deck.deckAirflow_kg_s = deckAirflow_kg_s;
+  deck.deckAirflow_kg_s = deckAirflow_kg_s ?? Number.NaN;
   deck.sensitivities = sensitivities;
   const source = ctx.recoveryInlet.design.source;
   if (source.kind === 'geometry') {
@@ -179,7 +187,7 @@ export function installDeckPointInto(
     } else {
       // Without airflow only the shock part of the recovery is known.
       inlet.recovery = milE5008bRecovery(mach);
-      deck.airflow_kg_s = null;
+      deck.airflow_kg_s = Number.NaN;
     }
   } else {
     if (!Object.is(s.memoMach, mach)) {
@@ -190,20 +198,21 @@ export function installDeckPointInto(
     }
     inlet.recovery = s.memoRecovery;
     s.tableOutside = s.memoOutside;
-    deck.airflow_kg_s = deckAirflow_kg_s === null ? null : (deckAirflow_kg_s * s.memoRecovery) / inlet.referenceRecovery;
+    deck.airflow_kg_s = deckAirflow_kg_s === null ? Number.NaN : (deckAirflow_kg_s * s.memoRecovery) / inlet.referenceRecovery;
   }
   if (ctx.recoveryOffset !== 0) {
-    if (deck.airflow_kg_s !== null && inlet.recovery > 0) deck.airflow_kg_s *= (inlet.recovery + ctx.recoveryOffset) / inlet.recovery;
+    if (!Number.isNaN(deck.airflow_kg_s) && inlet.recovery > 0) deck.airflow_kg_s *= (inlet.recovery + ctx.recoveryOffset) / inlet.recovery;
     inlet.recovery += ctx.recoveryOffset;
   }
+  // The step reads a NaN airflow as none and passes it through (installationMethod.ts correctDeckPointInto).
   const corrected = correctDeckPointInto(s.corrected, ctx.method, deck, inlet, ctx.installation);
   s.correctedThrust_N = corrected.thrust_N;
   s.fuelFlow_kg_s = corrected.fuelFlow_kg_s;
-  s.airflow_kg_s = corrected.airflow_kg_s;
+  s.airflow_kg_s = corrected.airflow_kg_s ?? Number.NaN;
   s.recoveryLoss_N = corrected.recoveryLoss_N;
   s.bleedLoss_N = corrected.bleedLoss_N;
   s.extractionLoss_N = corrected.extractionLoss_N;
-  if (s.airflow_kg_s !== null) {
+  if (!Number.isNaN(s.airflow_kg_s)) {
     const m = spillMemo;
     if (m.ctx === ctx && Object.is(m.airflow_kg_s, s.airflow_kg_s) && Object.is(m.mach, mach) && Object.is(m.pressure_Pa, free.pressure_Pa) && Object.is(m.temperature_K, free.temperature_K)) {
       s.massFlowRatio = m.massFlowRatio;
@@ -213,8 +222,8 @@ export function installDeckPointInto(
       return;
     }
     const a0 = streamTubeArea(s.airflow_kg_s, free);
-    s.massFlowRatio = Number.isFinite(a0) ? a0 / ctx.spillCapture_m2 : null;
-    if (s.massFlowRatio !== null) {
+    s.massFlowRatio = Number.isFinite(a0) ? a0 / ctx.spillCapture_m2 : Number.NaN;
+    if (!Number.isNaN(s.massFlowRatio)) {
       const add_N = additiveDrag_N(mach, free.pressure_Pa, s.massFlowRatio, ctx.spillCapture_m2);
       if (ctx.spillLipTable !== null && add_N > 0) {
         const lip = s.lip;
@@ -250,7 +259,8 @@ const spillMemo: {
   mach: number;
   pressure_Pa: number;
   temperature_K: number;
-  massFlowRatio: number | null;
+  /** NaN when not computed. */
+  massFlowRatio: number;
   spillage_N: number;
   lipSuction: number;
   lipTableOutside: boolean;
@@ -260,7 +270,7 @@ const spillMemo: {
   mach: Number.NaN,
   pressure_Pa: Number.NaN,
   temperature_K: Number.NaN,
-  massFlowRatio: null,
+  massFlowRatio: Number.NaN,
   spillage_N: 0,
   lipSuction: 0,
   lipTableOutside: false,
@@ -300,6 +310,11 @@ export function evaluateEngineInto(
   installDeckPointInto(s, ctx, free, d.thrust_N, d.fuelFlow_kg_s, d.airflow_kg_s, d.sensitivities);
 }
 
+/** A scratch number as the points carry it: null for the scratch's NaN ("none"). */
+function orNull(x: number): number | null {
+  return Number.isNaN(x) ? null : x;
+}
+
 /** Installed net propulsive force of one engine in `s` (N): corrected thrust less spillage. */
 export function netThrustOf(s: EngineScratch): number {
   return s.correctedThrust_N - s.spillage_N;
@@ -315,14 +330,14 @@ export function engineCautions(s: EngineScratch, ctx: InstallationContext, extra
   for (const c of s.deckCautions) {
     if (propulsionCautionShown(c, settings)) (list ??= []).push(c);
   }
-  if (s.airflow_kg_s === null && !s.deckError) (list ??= []).push(noAirflowCaution(design.source.kind === 'geometry'));
+  if (Number.isNaN(s.airflow_kg_s) && !s.deckError) (list ??= []).push(noAirflowCaution(design.source.kind === 'geometry'));
   if (s.tableOutside !== null) (list ??= []).push(recoveryTableRangeCaution(s.tableOutside, design.name, s.inlet.recovery));
-  const throat = checkThroatMach(s.throatMach, settings.maxThroatMach);
+  const throat = checkThroatMach(orNull(s.throatMach), settings.maxThroatMach);
   if (throat !== null) (list ??= []).push(throat);
   if (s.throatChoked) (list ??= []).push(throatChokedCaution(design.name));
-  const fanFace = checkFanFaceMach(s.fanFaceMach, settings.minFanFaceMach, settings.maxFanFaceMach, s.fanFaceChoked);
+  const fanFace = checkFanFaceMach(orNull(s.fanFaceMach), settings.minFanFaceMach, settings.maxFanFaceMach, s.fanFaceChoked);
   if (fanFace !== null) (list ??= []).push(fanFace);
-  if (s.lipTableOutside) (list ??= []).push(lipSuctionTableRangeCaution(s.lipSuction, s.massFlowRatio ?? 0));
+  if (s.lipTableOutside) (list ??= []).push(lipSuctionTableRangeCaution(s.lipSuction, Number.isNaN(s.massFlowRatio) ? 0 : s.massFlowRatio));
   return list ?? extra;
 }
 
@@ -356,12 +371,12 @@ export function assembleInstalledPoint(
       spillageDrag_N: s.spillage_N,
       thrust_N: perEngineThrust_N,
       fuelFlow_kg_s: s.fuelFlow_kg_s,
-      airflow_kg_s: s.airflow_kg_s,
+      airflow_kg_s: orNull(s.airflow_kg_s),
       recovery: s.inlet.recovery,
       referenceRecovery: s.inlet.referenceRecovery,
-      massFlowRatio: s.massFlowRatio,
-      throatMach: s.throatMach,
-      fanFaceMach: s.fanFaceMach,
+      massFlowRatio: orNull(s.massFlowRatio),
+      throatMach: orNull(s.throatMach),
+      fanFaceMach: orNull(s.fanFaceMach),
       installationMethod: ctx.method,
       recoveryLoss_N: s.recoveryLoss_N,
       bleedLoss_N: s.bleedLoss_N,

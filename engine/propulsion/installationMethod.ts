@@ -97,18 +97,22 @@ export function correctDeckPoint(
 /** A writable CorrectedDeckPoint, for scratch use in hot loops. */
 export type MutableCorrectedDeckPoint = { -readonly [K in keyof CorrectedDeckPoint]: CorrectedDeckPoint[K] };
 
-// Scratch of the sensitivities case (never escapes correctDeckPointInto).
+// Scratch of the sensitivities case (never escapes correctDeckPointInto). Its airflow starts as a number, so that
+// the engine evaluation's NaN for none (engineEvaluation.ts EngineScratch) keeps the field a number in place.
 const sensitivityScratch: MutableSensitivityInstalledEngine = {
   thrust_N: 0,
   fuelFlow_kg_s: 0,
-  airflow_kg_s: null,
+  airflow_kg_s: Number.NaN,
   recoveryLoss_N: 0,
   bleedLoss_N: 0,
   extractionLoss_N: 0,
   extractionFuel_kg_s: 0,
 };
 
-/** As correctDeckPoint, into `out` (returned): no allocation for the deck-sensitivities method. */
+/**
+ * As correctDeckPoint, into `out` (returned): no allocation for the deck-sensitivities method. An airflow of NaN
+ * (the engine evaluation's scratch, engineEvaluation.ts) is read as none, as null is, and passed through as NaN.
+ */
 export function correctDeckPointInto(
   out: MutableCorrectedDeckPoint,
   method: InstallationMethodId,

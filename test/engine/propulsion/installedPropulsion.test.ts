@@ -242,8 +242,19 @@ describe('cautions', () => {
     expect(p.perEngine.spillageDrag_N).toBe(0);
     expect(p.perEngine.massFlowRatio).toBeNull();
     expect(p.perEngine.airflow_kg_s).toBeNull();
+    // A recovery table has no throat or fan face: null in the point (the evaluation's scratch holds NaN for none).
+    expect(p.perEngine.throatMach).toBeNull();
+    expect(p.perEngine.fanFaceMach).toBeNull();
     const c = p.cautions.find((x) => x.id === 'no_airflow_spillage_skipped')!;
     expect(c.severity).toBe('info');
+    // With airflow, after the point without it (the same scratch): numbers again, and no caution.
+    const withAir = makeInstalledPropulsion({ deck, engineCount: 2, inlet: TABLE_INLET, installation: NO_INSTALL, cautionSettings: DEFAULT_CAUTION_SETTINGS });
+    withAir.atRating(CRUISE, 'maxCruise');
+    const q = withAir.forThrust(CRUISE, 0.5 * withAir.atRating(CRUISE, 'maxCruise').thrust_N, 'maxCruise');
+    expect(q.perEngine.airflow_kg_s).toBeGreaterThan(0);
+    expect(q.perEngine.massFlowRatio).toBeGreaterThan(0);
+    expect(q.perEngine.throatMach).toBeNull();
+    expect(q.cautions.some((x) => x.id === 'no_airflow_spillage_skipped')).toBe(false);
   });
 
   it('deck extrapolation cautions pass through, unless the settings turn them off', () => {
