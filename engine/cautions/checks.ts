@@ -10,8 +10,23 @@ import { CAUTION_CATALOGUE, type MissionCautionId } from './cautionCatalogue';
 
 export type CautionDraft = Caution & { readonly id: MissionCautionId };
 
+/**
+ * A draft with its message text worked out at its first read (an enumerable getter, in the message's place among
+ * the keys: a spread, JSON and a structured clone read it as a field): a mission raises a caution on every fuel
+ * pass, and only the converged pass's are read; formatting the quantities in two unit systems is the costly part.
+ */
 function draft(id: MissionCautionId, parts: MessageParts, value: number, threshold: number): CautionDraft {
-  return { id, severity: CAUTION_CATALOGUE[id].severity, message: messageText(parts, 'both'), parts, value, threshold };
+  let text: string | undefined;
+  return {
+    id,
+    severity: CAUTION_CATALOGUE[id].severity,
+    get message(): string {
+      return (text ??= messageText(parts, 'both'));
+    },
+    parts,
+    value,
+    threshold,
+  };
 }
 
 /** CAS (m/s) above VMO less margin (m/s). */

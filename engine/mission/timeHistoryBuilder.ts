@@ -93,7 +93,24 @@ export function appendCaution(log: FlightLog, target: LegTarget, drafted: Cautio
   if (raisedOnLeg(log, id, target)) return;
   const leg = target.legIndex;
   (log.raised[leg] ??= new Set()).add(id);
-  log.cautions.set(`${id}|${leg}`, { ...drafted, legIndex: leg, legName: target.legName, time_s });
+  log.cautions.set(`${id}|${leg}`, placedCaution(drafted, leg, target.legName, time_s));
+}
+
+/**
+ * The caution `drafted` raised on a leg at a time: its fields copied in order, a lazily worked-out field (the
+ * message of checks.ts drafts) copied as the getter, not read (only the converged pass's cautions are read).
+ */
+function placedCaution(drafted: CautionDraft | Caution, legIndex: number, legName: string, time_s: number): Caution {
+  const out: Record<string, unknown> = {};
+  for (const key of Object.keys(drafted)) {
+    const field = Object.getOwnPropertyDescriptor(drafted, key)!;
+    if (field.get !== undefined) Object.defineProperty(out, key, { get: field.get, enumerable: true, configurable: true });
+    else out[key] = field.value;
+  }
+  out.legIndex = legIndex;
+  out.legName = legName;
+  out.time_s = time_s;
+  return out as unknown as Caution;
 }
 
 /** Id of the caution idleAboveDragCaution drafts (its message is only written when the leg has not raised it yet). */

@@ -16,6 +16,7 @@ import {
 } from '../../../engine/cautions/checks';
 import { CAUTION_CATALOGUE } from '../../../engine/cautions/cautionCatalogue';
 import { DEFAULT_CAUTION_SETTINGS } from '../../../engine/cautions/cautionSettings';
+import { messageText } from '../../../engine/units/messageParts';
 
 // Each limit fires strictly beyond its threshold: a hair over fires, exactly at and a hair under do not.
 const EPS = 1e-9;
@@ -57,6 +58,18 @@ describe('checks', () => {
     const c = checkVmo(180, 180, 2);
     expect(c).toMatchObject({ id: 'vmo_exceeded', value: 180, threshold: 178, severity: CAUTION_CATALOGUE.vmo_exceeded.severity });
     expect(c?.message).toMatch(/kt/);
+  });
+
+  it('a draft\'s message is its parts in both unit systems, the same text however it is read or copied', () => {
+    // The text is worked out at the first read (checks.ts draft); a spread, JSON and a structured clone read it too.
+    const c = checkVmo(180, 180, 2)!;
+    const text = messageText(c.parts!, 'both');
+    expect(Object.keys(c)).toEqual(['id', 'severity', 'message', 'parts', 'value', 'threshold']);
+    expect(c.message).toBe(text);
+    expect(c.message).toBe(text);
+    expect({ ...c }.message).toBe(text);
+    expect(JSON.parse(JSON.stringify(c)).message).toBe(text);
+    expect(structuredClone(c).message).toBe(text);
   });
 
   it('checkReserve scales the required reserve by the fraction', () => {
