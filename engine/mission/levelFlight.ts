@@ -34,8 +34,7 @@ export interface LevelFlightSpec {
 export function makeLevelSegment(ctx: MissionContext, target: LegTarget, spec: LevelFlightSpec): Segment {
   const input = ctx.input;
   const dev = target.env.isaDev_K;
-  const derivativeOf = (tas_m_s: number, fuelFlow_kg_s: number): Evaluation['derivative'] => {
-    const d = new Float64Array(STATE_SIZE);
+  const derivativeInto = (d: Float64Array<ArrayBuffer>, tas_m_s: number, fuelFlow_kg_s: number): Evaluation['derivative'] => {
     d[0] = 1;
     d[1] = tas_m_s;
     d[2] = tas_m_s + target.env.wind_m_s;
@@ -55,20 +54,21 @@ export function makeLevelSegment(ctx: MissionContext, target: LegTarget, spec: L
     const engine = input.propulsion.forThrust(condition, drag.drag_N, spec.ceiling);
     const available = input.propulsion.atRating(condition, spec.ceiling).thrust_N;
     return {
-      derivative: derivativeOf(tas_m_s, engine.fuelFlow_kg_s),
+      derivative: derivativeInto(new Float64Array(STATE_SIZE), tas_m_s, engine.fuelFlow_kg_s),
       sample: packSample(h, mach, air, tas_m_s, drag, available, engine.thrust_N, engine.fuelFlow_kg_s, 0, engine),
       breakCoordinate: engine.power,
     };
   };
   // RK4 stages need no sample, so no thrust-available query (a full rated-thrust lookup) and no sample object,
   // no air point or drag breakdown, and no part-power point either: the same air data, drag force and part-power
-  // solve as evaluate, and its fuel flow alone (the same bits).
+  // solve as evaluate, and its fuel flow alone (the same bits), written into one buffer the stages share.
+  const stage = new Float64Array(STATE_SIZE);
   const derivative = (y: StateVector): Evaluation['derivative'] => {
     const m = y[S_MASS];
     const h = spec.altitudeOf(m);
     const mach = spec.machOf(h, m);
     const tas_m_s = mach * missionAir(h, dev).speedOfSound_m_s;
-    return derivativeOf(tas_m_s, partPowerFuelFlow(input, h, mach, dev, dragForceAt(input, h, mach, m), spec.ceiling));
+    return derivativeInto(stage, tas_m_s, partPowerFuelFlow(input, h, mach, dev, dragForceAt(input, h, mach, m), spec.ceiling));
   };
   const events: SegmentEvent[] = [{ stop: 'thrust_below_drag', g: (_y, s) => s.drag_N - s.thrustAvailable_N }];
   if (spec.endDistance_m !== null) {

@@ -161,9 +161,8 @@ export function integrateMonotone(
   const intervals = monotoneIntervalEnds(start[c], plan.to, plan.breaks);
   const intervalCount = intervals.length;
   const tmp = new Float64Array(STATE_SIZE) as StateVector;
-  const k1 = new Float64Array(STATE_SIZE);
-  const k2 = new Float64Array(STATE_SIZE);
-  const k3 = new Float64Array(STATE_SIZE);
+  // The first three stage slopes in one array: k1 at [0, STATE_SIZE), k2 after it, then k3.
+  const ks = new Float64Array(3 * STATE_SIZE);
   // The accepted state and the next one alternate between `y` and `spare` (the sink and the events read a state
   // when it is handed over and keep nothing of it).
   let spare = new Float64Array(STATE_SIZE) as StateVector;
@@ -199,7 +198,7 @@ export function integrateMonotone(
     if (!(direction * r1 >= minRate)) return handOver(segment, y, true, sink, domain);
     for (let q = 0; q < STATE_SIZE; q++) {
       const f = f1[q]!;
-      k1[q] = f / r1;
+      ks[q] = f / r1;
       tmp[q] = y[q] + (half * f) / r1;
     }
     tmp[c] = mid;
@@ -209,7 +208,7 @@ export function integrateMonotone(
     if (!(direction * r2 >= minRate)) return handOver(segment, y, true, sink, domain);
     for (let q = 0; q < STATE_SIZE; q++) {
       const k = f2[q]! / r2;
-      k2[q] = k;
+      ks[STATE_SIZE + q] = k;
       tmp[q] = y[q] + half * k;
     }
     tmp[c] = mid;
@@ -219,7 +218,7 @@ export function integrateMonotone(
     if (!(direction * r3 >= minRate)) return handOver(segment, y, true, sink, domain);
     for (let q = 0; q < STATE_SIZE; q++) {
       const k = f3[q]! / r3;
-      k3[q] = k;
+      ks[2 * STATE_SIZE + q] = k;
       tmp[q] = y[q] + h * k;
     }
     tmp[c] = last ? s1 - NUDGE * h : s1;
@@ -229,7 +228,7 @@ export function integrateMonotone(
     if (!(direction * r4 >= minRate)) return handOver(segment, y, true, sink, domain);
     const next = spare;
     const sixth = h / 6;
-    for (let q = 0; q < STATE_SIZE; q++) next[q] = y[q] + sixth * (k1[q]! + 2 * k2[q]! + 2 * k3[q]! + f4[q]! / r4);
+    for (let q = 0; q < STATE_SIZE; q++) next[q] = y[q] + sixth * (ks[q]! + 2 * ks[STATE_SIZE + q]! + 2 * ks[2 * STATE_SIZE + q]! + f4[q]! / r4);
     next[c] = s1;
     if (outsideDomain(domain, next)) return handOver(segment, y, true, sink, domain);
     const nextEv = segment.evaluate(next);
