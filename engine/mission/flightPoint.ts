@@ -3,7 +3,7 @@
  * packs the result as a FlightSample.
  */
 import type { DragBreakdown, DragSample } from '../aero/aeroModel';
-import type { InstalledPoint, PartPowerPoint, RatingName } from '../propulsion/propulsionModel';
+import type { InstalledPoint, RatingName } from '../propulsion/propulsionModel';
 import { casOfMach, missionAir, type MissionAir } from './missionAtmosphere';
 import type { MissionInput } from './missionTypes';
 import type { MissionContext } from './missionContext';
@@ -73,17 +73,6 @@ export function ratingPoint(input: MissionInput, at: AirPoint, isaDev_K: number,
   return input.propulsion.atRating({ altitude_m: at.altitude_m, mach: at.mach, isaDev_K }, rating);
 }
 
-/** Part-power point giving `thrust_N` (all engines), limited by `ceiling`. */
-export function thrustPoint(
-  input: MissionInput,
-  at: AirPoint,
-  isaDev_K: number,
-  thrust_N: number,
-  ceiling: RatingName,
-): PartPowerPoint {
-  return input.propulsion.forThrust({ altitude_m: at.altitude_m, mach: at.mach, isaDev_K }, thrust_N, ceiling);
-}
-
 /**
  * The fuel flow (kg/s, all engines) of the part-power point giving `thrust_N` (all engines) at pressure altitude
  * (m), Mach and ISA deviation (K), limited by `ceiling`: thrustPoint's fuel flow, to the bit, by the model's
@@ -95,18 +84,6 @@ export function partPowerFuelFlow(input: MissionInput, altitude_m: number, mach:
   return propulsion.fuelFlowForThrust !== undefined
     ? propulsion.fuelFlowForThrust(condition, thrust_N, ceiling)
     : propulsion.forThrust(condition, thrust_N, ceiling).fuelFlow_kg_s;
-}
-
-/** Packs a FlightSample. */
-export function makeSample(
-  at: AirPoint,
-  thrustAvailable_N: number,
-  thrustUsed_N: number,
-  fuelFlow_kg_s: number,
-  climbRate_m_s: number,
-  engine: InstalledPoint,
-): FlightSample {
-  return packSample(at.altitude_m, at.mach, at.air, at.tas_m_s, at.drag, thrustAvailable_N, thrustUsed_N, fuelFlow_kg_s, climbRate_m_s, engine);
 }
 
 /** Packs a FlightSample from the point's numbers, its air data and its drag (a breakdown or a DragSample record). */
