@@ -54,24 +54,35 @@ export interface FlightLog {
   readonly history: boolean;
 }
 
+/**
+ * An empty column that holds doubles from the start: an empty array literal holds small integers until a fraction
+ * arrives, and a column whose first values are whole (a leg's first times and rates) then sends the optimised
+ * appendSample back to the interpreter ("lost precision") every time a later log's column meets its first fraction.
+ */
+function doubleColumn(): number[] {
+  const column = [0.5];
+  column.length = 0;
+  return column;
+}
+
 /** An empty flight log; a quiet one ignores samples and cautions, one without `history` keeps no time history. */
 export function createFlightLog(airframe: Airframe, settings: CautionSettings, quiet = false, history = true): FlightLog {
   // A literal in COLUMNS order (one shape for every log; a keyed store per column would go megamorphic).
   const columns: Record<Column, number[]> = {
-    time_s: [],
-    distance_m: [],
-    altitude_m: [],
-    mach: [],
-    cas_m_s: [],
-    tas_m_s: [],
-    mass_kg: [],
-    thrustAvailable_N: [],
-    thrustUsed_N: [],
-    drag_N: [],
-    fuelFlow_kg_s: [],
-    cl: [],
-    liftToDrag: [],
-    climbRate_m_s: [],
+    time_s: doubleColumn(),
+    distance_m: doubleColumn(),
+    altitude_m: doubleColumn(),
+    mach: doubleColumn(),
+    cas_m_s: doubleColumn(),
+    tas_m_s: doubleColumn(),
+    mass_kg: doubleColumn(),
+    thrustAvailable_N: doubleColumn(),
+    thrustUsed_N: doubleColumn(),
+    drag_N: doubleColumn(),
+    fuelFlow_kg_s: doubleColumn(),
+    cl: doubleColumn(),
+    liftToDrag: doubleColumn(),
+    climbRate_m_s: doubleColumn(),
   };
   return { columns, legIndex: [], cautions: new Map(), raised: [], airframe, settings, quiet, history };
 }
