@@ -75,7 +75,7 @@ export function ratingPoint(input: MissionInput, at: AirPoint, isaDev_K: number,
 
 /**
  * The fuel flow (kg/s, all engines) of the part-power point giving `thrust_N` (all engines) at pressure altitude
- * (m), Mach and ISA deviation (K), limited by `ceiling`: thrustPoint's fuel flow, to the bit, by the model's
+ * (m), Mach and ISA deviation (K), limited by `ceiling`: forThrust's fuel flow, to the bit, by the model's
  * fuelFlowForThrust where it has one. For RK4 stages, which read the fuel flow alone.
  */
 export function partPowerFuelFlow(input: MissionInput, altitude_m: number, mach: number, isaDev_K: number, thrust_N: number, ceiling: RatingName): number {

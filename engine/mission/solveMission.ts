@@ -340,7 +340,7 @@ function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult
   // The reserves are flown from the landing state; when the mission did not succeed and that flight would pass below
   // zero-fuel mass, its rows are left out (the breakdown still says what the reserve needs): no row shows negative fuel.
   const reservesShown = status === 'ok' || reserves.rows.every((row) => row.endMass_kg >= zfw);
-  const cautions: Caution[] = [...ctx.log.cautions.values()].sort((a, b) => (a.time_s ?? 0) - (b.time_s ?? 0));
+  const cautions: Caution[] = [...ctx.log.cautions].sort((a, b) => (a.time_s ?? 0) - (b.time_s ?? 0));
   return {
     status,
     statusMessage: messageText(statusParts, 'both'),

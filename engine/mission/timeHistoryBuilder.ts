@@ -43,8 +43,9 @@ type Column = (typeof COLUMNS)[number];
 export interface FlightLog {
   readonly columns: Record<Column, number[]>;
   readonly legIndex: number[];
-  readonly cautions: Map<string, Caution>;
-  /** The caution ids raised per leg index (the has-check of every point's checks, without building a key). */
+  /** The cautions raised, in the order raised: the first of each id on each leg. */
+  readonly cautions: Caution[];
+  /** The caution ids raised per leg index (the has-check of every point's checks). */
   readonly raised: (Set<string> | undefined)[];
   readonly airframe: Airframe;
   readonly settings: CautionSettings;
@@ -84,7 +85,7 @@ export function createFlightLog(airframe: Airframe, settings: CautionSettings, q
     liftToDrag: doubleColumn(),
     climbRate_m_s: doubleColumn(),
   };
-  return { columns, legIndex: [], cautions: new Map(), raised: [], airframe, settings, quiet, history };
+  return { columns, legIndex: [], cautions: [], raised: [], airframe, settings, quiet, history };
 }
 
 /** A new empty log that records what `log` records (a fuel-iteration pass's own log). */
@@ -97,14 +98,14 @@ function raisedOnLeg(log: FlightLog, id: string, target: LegTarget): boolean {
   return log.raised[target.legIndex]?.has(id) === true;
 }
 
-/** Adds a caution unless one with the same id was already raised on the same leg (kept under `id|legIndex`). */
+/** Adds a caution unless one with the same id was already raised on the same leg. */
 export function appendCaution(log: FlightLog, target: LegTarget, drafted: CautionDraft | Caution | null, time_s: number): void {
   if (drafted === null || log.quiet) return;
   const id = drafted.id;
   if (raisedOnLeg(log, id, target)) return;
   const leg = target.legIndex;
   (log.raised[leg] ??= new Set()).add(id);
-  log.cautions.set(`${id}|${leg}`, placedCaution(drafted, leg, target.legName, time_s));
+  log.cautions.push(placedCaution(drafted, leg, target.legName, time_s));
 }
 
 /**
