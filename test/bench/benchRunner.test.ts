@@ -15,6 +15,18 @@ describe('runCase', () => {
     expect(Number.isFinite(r.medianCall_s) && r.medianCall_s >= 0).toBe(true);
   });
 
+  it('calls prepare once, before the first call of the case', () => {
+    const order: string[] = [];
+    runCase(
+      'demo',
+      { name: 'prepared', prepare: () => order.push('prepare'), run: () => order.push('run') },
+      { warmUp_s: 0.001, measure_s: 0.001, minWarmUpCalls: 2, minBatches: 2 },
+    );
+    expect(order[0]).toBe('prepare');
+    expect(order.filter((x) => x === 'prepare')).toHaveLength(1);
+    expect(order.length).toBeGreaterThan(4);
+  });
+
   it('warms a slow case for at least minWarmUpCalls calls and measures at least minBatches batches', () => {
     let n = 0;
     const slow = () => {

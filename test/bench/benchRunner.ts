@@ -31,12 +31,13 @@ function resultOf(section: string, name: string, perCall: number[], calls: numbe
 }
 
 /**
- * Times one case: calls it for `warmUp_s` (and at least `minWarmUpCalls`
+ * Times one case: its `prepare` first (untimed), then calls it for `warmUp_s` (and at least `minWarmUpCalls`
  * times), then in batches sized to about a millisecond each for `measure_s`
  * (and at least `minBatches` batches). Reports total calls per second and the
  * median per-call time over batches.
  */
 export function runCase(section: string, bench: BenchCase, timing: BenchTiming = DEFAULT_TIMING): BenchResult {
+  bench.prepare?.();
   let batch = 1;
   const warmEnd = performance.now() + timing.warmUp_s * 1000;
   let warmCalls = 0;

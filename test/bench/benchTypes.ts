@@ -2,6 +2,8 @@
 export interface BenchCase {
   readonly name: string;
   readonly run: () => unknown;
+  /** Called once before the warm-up (runCase), untimed: work the case is to be timed after, in the same process. */
+  readonly prepare?: () => void;
 }
 
 /** A group of cases printed under one title; each file in test/bench/sections exports one as `section`. */

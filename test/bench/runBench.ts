@@ -3,22 +3,42 @@
  * each case (warm-up, then about 0.5 s) and prints one table; then the side
  * by side with the Python peer (sideBySide.ts), the peer at equal accuracy
  * (equalAccuracy.ts) and the command line's start-up and sweep throughput
- * (cliTiming.ts). Arguments: substrings of section file names or titles to
- * run only those (the comparisons then run only if named: "peer", "cli");
- * `--json` prints every figure as one JSON document instead of the text.
- * Speed is measured here, never in unit tests.
+ * (cliTiming.ts). Each section runs in a process of its own (sectionProcess.ts),
+ * so a row does not depend on which sections ran before it; `--same-process`
+ * runs them all in this one, in order, as before. Arguments: substrings of
+ * section file names or titles to run only those (the comparisons then run
+ * only if named: "peer", "cli"); `--json` prints every figure as one JSON
+ * document instead of the text. Speed is measured here, never in unit tests.
  */
 import { cpus } from 'node:os';
 import { DEFAULT_TIMING, formatTable, runCase } from './benchRunner';
 import type { BenchResult } from './benchTypes';
 import { formatCliTiming, runCliTiming, type CliTiming } from './cliTiming';
 import { formatEqualAccuracy, runEqualAccuracy, type EqualAccuracy } from './equalAccuracy';
+import { ONE_SECTION_FLAG, runSectionApart } from './sectionProcess';
 import { BENCH_SECTIONS } from './sections/index';
 import { formatSideBySide, runSideBySide, type SideBySide } from './sideBySide';
 
 const args = process.argv.slice(2);
+
+// A child run by sectionProcess.ts: one section, its results as JSON on stdout, nothing else.
+const oneAt = args.indexOf(ONE_SECTION_FLAG);
+if (oneAt >= 0) {
+  const file = args[oneAt + 1];
+  const entry = BENCH_SECTIONS.find((s) => s.file === file);
+  if (entry === undefined) {
+    process.stderr.write(`bench: no section file '${file ?? ''}' (sections: ${BENCH_SECTIONS.map((s) => s.file).join(', ')})\n`);
+    process.exit(2);
+  }
+  const timing = entry.section.timing === undefined ? DEFAULT_TIMING : { ...DEFAULT_TIMING, ...entry.section.timing };
+  const own = entry.section.cases.map((bench) => runCase(entry.section.title, bench, timing));
+  process.stdout.write(`${JSON.stringify(own)}\n`);
+  process.exit(0);
+}
+
 const json = args.includes('--json');
-const filters = args.filter((a) => a !== '--json').map((f) => f.toLowerCase());
+const sameProcess = args.includes('--same-process');
+const filters = args.filter((a) => a !== '--json' && a !== '--same-process').map((f) => f.toLowerCase());
 const wanted = (name: string) => filters.length === 0 || filters.some((f) => name.includes(f));
 const say = (text: string) => {
   if (!json) process.stdout.write(text);
@@ -28,15 +48,26 @@ const say = (text: string) => {
 const build = process.env.BLOCKWISE_BENCH_BUILD === 'bundle' ? 'bundled (esbuild, ES modules, as the CLI ships)' : 'TypeScript sources under tsx';
 
 const results: BenchResult[] = [];
+const failed: string[] = [];
 for (const { file, section } of BENCH_SECTIONS) {
   const matches = filters.length === 0 || filters.some((f) => file.includes(f) || section.title.toLowerCase().includes(f));
   if (!matches) continue;
-  const timing = section.timing === undefined ? DEFAULT_TIMING : { ...DEFAULT_TIMING, ...section.timing };
-  for (const bench of section.cases) results.push(runCase(section.title, bench, timing));
+  if (sameProcess) {
+    const timing = section.timing === undefined ? DEFAULT_TIMING : { ...DEFAULT_TIMING, ...section.timing };
+    for (const bench of section.cases) results.push(runCase(section.title, bench, timing));
+    continue;
+  }
+  const outcome = runSectionApart(file);
+  if (outcome.ok) results.push(...outcome.results);
+  else {
+    failed.push(file);
+    process.stderr.write(`bench: section '${file}' gave no figures: ${outcome.reason}\n`);
+  }
 }
 
 const cores = cpus().length;
-say(`Node ${process.version}, ${cores} cores, ${new Date().toISOString()}, ${results.length} cases, ${build}\n\n${formatTable(results)}\n`);
+const processes = sameProcess ? 'all sections in one process' : 'each section in a process of its own';
+say(`Node ${process.version}, ${cores} cores, ${new Date().toISOString()}, ${results.length} cases, ${build}, ${processes}\n\n${formatTable(results)}\n`);
 
 // Blockwise against the scripted Python peer: agreement at the peer's default tolerance, then both at equal accuracy.
 let sideBySide: SideBySide | null = null;
@@ -58,6 +89,8 @@ if (json) {
     node: process.version,
     cores,
     build,
+    sectionsApart: !sameProcess,
+    failedSections: failed,
     date: new Date().toISOString(),
     cases: results.map((r) => ({ section: r.section, name: r.name, medianCall_s: r.medianCall_s, callsPerSecond: r.opsPerSecond, calls: r.calls })),
     sideBySide,
@@ -66,3 +99,4 @@ if (json) {
   };
   process.stdout.write(`${JSON.stringify(doc, null, 2)}\n`);
 }
+if (failed.length > 0) process.exitCode = 1;
