@@ -28,7 +28,7 @@ import { createRatingMemo, RATING_MEMO_ENTRIES } from './ratingMemo';
 import { defaultInstallationMethod, type InstallationMethodId } from './installationMethod';
 import { validateInstallation, type InstallationSettings } from './installationCorrections';
 import { newPartPowerSolve, PART_POWER_MEMO_CONDITIONS, solvedFuelFlow, solvePartPower, type PartPowerRoot } from './partPowerSolve';
-import { conditionKey, sameFlightCondition, type FlightCondition, type InstalledPoint, type PartPowerPoint, type PropulsionModel, type RatingName, type SlopeBreaks, type ThrustLimit } from './propulsionModel';
+import { conditionKey, propulsionModelOf, sameFlightCondition, type FlightCondition, type InstalledPoint, type PartPowerPoint, type PropulsionModel, type RatingName, type SlopeBreaks, type ThrustLimit } from './propulsionModel';
 
 export type { AccessError, DeckAccess, DeckPoint } from './deckAccess';
 export { FOR_THRUST_TOLERANCE } from './partPowerSolve';
@@ -240,7 +240,7 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
     return solvedFuelFlow(solve, root.power) * ctx.engineCount;
   }
 
-  return {
+  return propulsionModelOf({
     engineCount: ctx.engineCount,
     label: access.title,
     parametric: access.parametric,
@@ -252,5 +252,5 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
     forThrust,
     fuelFlowForThrust,
     withRecoveryOffset: (delta) => makeInstalledModel(access, { ...options, recoveryOffset: ctx.recoveryOffset + delta }),
-  };
+  });
 }

@@ -171,3 +171,39 @@ export interface PropulsionModel {
    */
   withRecoveryOffset?(delta: number): PropulsionModel;
 }
+
+/**
+ * The one shape of every PropulsionModel the engine builds (makeInstalledModel, adjustPropulsion): the same keys in
+ * the same order, each optional member present (undefined when the model has none). A mission's call sites then
+ * meet one object shape whatever models ran before in the process (a second shape made them polymorphic).
+ */
+export interface PropulsionModelParts {
+  readonly engineCount: number;
+  readonly label: string;
+  readonly parametric: boolean;
+  readonly inletName: string;
+  readonly slopeBreaks: SlopeBreaks | undefined;
+  readonly installationMethod: InstallationMethodId;
+  readonly atRating: PropulsionModel['atRating'];
+  readonly atPower: PropulsionModel['atPower'];
+  readonly forThrust: PropulsionModel['forThrust'];
+  readonly fuelFlowForThrust: PropulsionModel['fuelFlowForThrust'] | undefined;
+  readonly withRecoveryOffset: PropulsionModel['withRecoveryOffset'] | undefined;
+}
+
+/** A PropulsionModel of `parts`, in the one key order (PropulsionModelParts). */
+export function propulsionModelOf(parts: PropulsionModelParts): PropulsionModel {
+  return {
+    engineCount: parts.engineCount,
+    label: parts.label,
+    parametric: parts.parametric,
+    inletName: parts.inletName,
+    slopeBreaks: parts.slopeBreaks,
+    installationMethod: parts.installationMethod,
+    atRating: parts.atRating,
+    atPower: parts.atPower,
+    forThrust: parts.forThrust,
+    fuelFlowForThrust: parts.fuelFlowForThrust,
+    withRecoveryOffset: parts.withRecoveryOffset,
+  };
+}

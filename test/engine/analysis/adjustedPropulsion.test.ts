@@ -7,6 +7,7 @@ import { makeInstalledPropulsion } from '../../../engine/propulsion/installedPro
 import { buildParametricDeck } from '../../../engine/propulsion/parametricDeck';
 import { LONG_PITOT } from '../propulsion/inletDesigns';
 import { analyticPropulsion } from './analyticModels';
+import { keyOutline } from '../../support/objectShape';
 
 const engine = { thrust_N: 160e3, lapse: 'mattingly' as const, tsfc_kg_N_s: 1.6e-5 };
 const cond = { altitude_m: 9000, mach: 0.78, isaDev_K: 0 };
@@ -63,5 +64,30 @@ describe('adjustPropulsion', () => {
     // With a recovery change the root is re-solved on the adjusted thrust: callers take forThrust's fuel flow.
     expect(adjustPropulsion(base, { recoveryDelta: 0.01, cRam: 1.35, fuelFlowScale: 1 }).fuelFlowForThrust).toBeUndefined();
     expect(adjustPropulsion(analyticPropulsion(engine), { recoveryDelta: 0, cRam: 1.35, fuelFlowScale: 1 }).fuelFlowForThrust).toBeUndefined();
+  });
+
+  it('adjustPropulsion builds its model and its points in the installed model\'s key order (one shape for the mission\'s reads)', () => {
+    const base = makeInstalledPropulsion({
+      deck: buildParametricDeck(DEMO_ENGINE_SPEC),
+      engineCount: 2,
+      inlet: LONG_PITOT,
+      installation: { bleed: { kind: 'coreFraction', fraction: 0.02 }, powerExtraction_W: 60e3 },
+      cautionSettings: DEFAULT_CAUTION_SETTINGS,
+    });
+    const scaled = adjustPropulsion(base, { recoveryDelta: 0, cRam: 1.35, fuelFlowScale: 1.01 });
+    const raised = adjustPropulsion(base, { recoveryDelta: 0.01, cRam: 1.35, fuelFlowScale: 1 });
+    const top = base.atRating(cond, 'maxCruise').thrust_N;
+    for (const model of [scaled, raised]) {
+      expect(Object.keys(model)).toEqual(Object.keys(base));
+      expect(keyOutline(model.atRating(cond, 'maxClimb'))).toEqual(keyOutline(base.atRating(cond, 'maxClimb')));
+      expect(keyOutline(model.atPower(cond, 0.6))).toEqual(keyOutline(base.atPower(cond, 0.6)));
+      // Within the range (the root), above the rating and below idle: each limit's point has the installed part-power shape.
+      for (const share of [0.5, 2, 0.001]) {
+        expect(keyOutline(model.forThrust(cond, share * top))).toEqual(keyOutline(base.forThrust(cond, 0.5 * top)));
+      }
+    }
+    // Same numbers as the spread copies before (Raymer's correction at zero recovery change is the base point).
+    expect(scaled.atRating(cond, 'maxClimb').thrust_N).toBe(base.atRating(cond, 'maxClimb').thrust_N);
+    expect(scaled.atRating(cond, 'maxClimb').perEngine.fuelFlow_kg_s).toBe(base.atRating(cond, 'maxClimb').perEngine.fuelFlow_kg_s * 1.01);
   });
 });
