@@ -4,7 +4,7 @@
  * differences at two step sizes with a convergence check.
  */
 import { err, ok, type Result } from '../core/result';
-import type { MissionInput, MissionResult } from '../mission/missionTypes';
+import type { Airframe, MissionInput, MissionResult } from '../mission/missionTypes';
 import type { PropulsionModel } from '../propulsion/propulsionModel';
 import { adjustPropulsion } from './adjustedPropulsion';
 import { describeInstallationMethod } from '../propulsion/installationMethod';
@@ -106,8 +106,26 @@ export function tradeMissionInput(design: MissionInput, factor: TradeFactorName 
     case 'tsfc':
       return { ...design, propulsion: adjustPropulsion(design.propulsion, { recoveryDelta: 0, cRam, fuelFlowScale: 1 + 0.01 * u }) };
     case 'oew':
-      return { ...design, airframe: { ...design.airframe, oew_kg: design.airframe.oew_kg + 100 * u } };
+      return { ...design, airframe: withOew(design.airframe, design.airframe.oew_kg + 100 * u) };
   }
+}
+
+/**
+ * `airframe` with another OEW, written key by key in the Airframe interface's order (as the project's builder,
+ * buildMissionInput.ts, writes it): a spread copy has a shape of its own, and the mission's reads of the airframe
+ * went polymorphic in a process that had flown the OEW factor.
+ */
+function withOew(airframe: Airframe, oew_kg: number): Airframe {
+  return {
+    oew_kg,
+    mzfw_kg: airframe.mzfw_kg,
+    mtow_kg: airframe.mtow_kg,
+    mlw_kg: airframe.mlw_kg,
+    maxFuel_kg: airframe.maxFuel_kg,
+    wingArea_m2: airframe.wingArea_m2,
+    vmo_m_s: airframe.vmo_m_s,
+    mmo: airframe.mmo,
+  };
 }
 
 const FACTOR_NAMES: readonly TradeFactorName[] = ['recovery', 'dragCount', 'tsfc', 'oew'];
