@@ -8,7 +8,7 @@ import { deckPlausibility } from './deckPlausibility';
 import { err, ok, type Result } from '../core/result';
 import { buildDeckGrid, type DeckGridPoint } from './deckGrid';
 import { deckFileError, type DeckFileError } from './deckFileError';
-import type { DeckPolicy, EngineDeck, ReferenceRecovery } from './engineDeck';
+import { engineDeckOf, type DeckPolicy, type EngineDeck, type ReferenceRecovery } from './engineDeck';
 import type { RatingName } from './propulsionModel';
 import { requiredSensitivityFields, SENSITIVITY_FIELDS, type SensitivityCsvName } from './installationSensitivities';
 
@@ -255,7 +255,7 @@ export function assembleDeck(input: DeckAssemblyInput): Result<EngineDeck, reado
   if (errors.length > 0) return err(errors);
   const ratings: Partial<Record<RatingName, number>> = {};
   for (const r of input.ratings) ratings[r.name] = r.value;
-  return ok({
+  return ok(engineDeckOf({
     title: input.title,
     parametric: input.parametric,
     referenceRecovery: input.referenceRecovery,
@@ -267,5 +267,6 @@ export function assembleDeck(input: DeckAssemblyInput): Result<EngineDeck, reado
     policy: input.policy,
     grid: buildDeckGrid(rows),
     warnings: deckPlausibility(rows, locate.line),
-  });
+    interpolation: undefined,
+  }));
 }

@@ -16,8 +16,8 @@
  */
 import { T0 } from '../aero/constants';
 import { atmosphere } from '../aero/standardAtmosphere';
-import type { DeckGrid } from './deckGrid';
-import type { EngineDeck } from './engineDeck';
+import { deckGridOf, type DeckGrid } from './deckGrid';
+import { engineDeckOf, type EngineDeck } from './engineDeck';
 
 /** What a deck's grid is interpolated in. */
 export type DeckInterpolation = 'raw' | 'corrected';
@@ -71,7 +71,7 @@ function correctedGrid(grid: DeckGrid): DeckGrid {
       }
     }
   }
-  return { ...grid, thrust_N: thrust, fuelFlow_kg_s: fuel, airflow_kg_s: air };
+  return deckGridOf({ ...grid, thrust_N: thrust, fuelFlow_kg_s: fuel, airflow_kg_s: air });
 }
 
 /**
@@ -86,7 +86,7 @@ export function deckForInterpolation(deck: EngineDeck, mode: DeckInterpolation):
   if (mode === 'raw') throw new Error('deckForInterpolation: a corrected deck has no raw copy here; keep the parsed deck');
   let c = corrected.get(deck);
   if (c === undefined) {
-    c = { ...deck, interpolation: 'corrected', grid: correctedGrid(deck.grid) };
+    c = engineDeckOf({ ...deck, warnings: deck.warnings, interpolation: 'corrected', grid: correctedGrid(deck.grid) });
     corrected.set(deck, c);
   }
   return c;

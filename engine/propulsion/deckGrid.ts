@@ -116,7 +116,7 @@ export function buildDeckGrid(points: readonly DeckGridPoint[]): DeckGrid {
   altitudeStart.push(altitudes.length);
   machStart.push(machs.length);
   pointStart.push(n);
-  return {
+  return deckGridOf({
     isaDevs_K: Float64Array.from(isaDevs),
     altitudeStart: Int32Array.from(altitudeStart),
     altitudes_m: Float64Array.from(altitudes),
@@ -128,6 +128,27 @@ export function buildDeckGrid(points: readonly DeckGridPoint[]): DeckGrid {
     fuelFlow_kg_s: fuelFlow,
     airflow_kg_s: airflow,
     sensitivities,
+  });
+}
+
+/**
+ * A DeckGrid of `parts` in the one key order of DeckGrid: every grid the engine builds (buildDeckGrid, the corrected
+ * copy of deckCorrection.ts) comes from here, so the grid reads of a lookup meet one object shape (a spread copy has
+ * a shape of its own).
+ */
+export function deckGridOf(parts: DeckGrid): DeckGrid {
+  return {
+    isaDevs_K: parts.isaDevs_K,
+    altitudeStart: parts.altitudeStart,
+    altitudes_m: parts.altitudes_m,
+    machStart: parts.machStart,
+    machs: parts.machs,
+    pointStart: parts.pointStart,
+    power: parts.power,
+    thrust_N: parts.thrust_N,
+    fuelFlow_kg_s: parts.fuelFlow_kg_s,
+    airflow_kg_s: parts.airflow_kg_s,
+    sensitivities: parts.sensitivities,
   };
 }
 

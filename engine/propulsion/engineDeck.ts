@@ -55,6 +55,31 @@ export interface EngineDeck {
   readonly interpolation?: 'raw' | 'corrected';
 }
 
+/** Every EngineDeck field, the optional ones present (undefined when absent): engineDeckOf's argument. */
+export type EngineDeckParts = { readonly [K in keyof Required<EngineDeck>]: EngineDeck[K] | (undefined extends EngineDeck[K] ? undefined : never) };
+
+/**
+ * An EngineDeck of `parts` in the one key order of EngineDeck, `warnings` and `interpolation` always present
+ * (undefined when the deck has none). Every deck the engine builds (file, parametric, cycle, corrected copy) comes
+ * from here, so the deck lookups of a mission meet one object shape whatever decks ran before in the process.
+ */
+export function engineDeckOf(parts: EngineDeckParts): EngineDeck {
+  return {
+    title: parts.title,
+    parametric: parts.parametric,
+    referenceRecovery: parts.referenceRecovery,
+    ratings: parts.ratings,
+    hasAirflow: parts.hasAirflow,
+    hasIsaDev: parts.hasIsaDev,
+    hasSensitivities: parts.hasSensitivities,
+    notes: parts.notes,
+    policy: parts.policy,
+    grid: parts.grid,
+    warnings: parts.warnings,
+    interpolation: parts.interpolation,
+  };
+}
+
 /**
  * The deck's reference inlet total-pressure recovery pt2/pt0 (-) at flight
  * Mach `mach` (>= 0): the stated constant, or the MIL-E-5008B standard curve.

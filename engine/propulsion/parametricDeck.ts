@@ -12,7 +12,7 @@
  */
 import { buildDeckGrid, type DeckGridPoint } from './deckGrid';
 import { isaPressureRatio, isaTemperature_K, ISA_SEA_LEVEL_TEMPERATURE_K } from './deckIsa';
-import { DEFAULT_DECK_POLICY, type EngineDeck } from './engineDeck';
+import { DEFAULT_DECK_POLICY, engineDeckOf, type EngineDeck } from './engineDeck';
 import type { RatingName } from './propulsionModel';
 
 export type ParametricEngineKind = 'highBypassTurbofan' | 'lowBypassTurbofan' | 'turbojet';
@@ -191,7 +191,7 @@ export function buildParametricDeck(spec: ParametricDeckSpec): EngineDeck {
   for (const [name, value] of Object.entries(ratings)) {
     check(value >= grid.powers[0]! && value <= grid.powers.at(-1)!, `rating ${name} = ${value} is outside the power grid`);
   }
-  return {
+  return engineDeckOf({
     title,
     parametric: true,
     referenceRecovery: { kind: 'milE5008b' },
@@ -207,5 +207,7 @@ export function buildParametricDeck(spec: ParametricDeckSpec): EngineDeck {
     ],
     policy: DEFAULT_DECK_POLICY,
     grid: buildDeckGrid(points),
-  };
+    warnings: undefined,
+    interpolation: undefined,
+  });
 }
