@@ -169,6 +169,9 @@ const NONE_OUTSIDE: readonly PolarTableName[] = Object.freeze([]);
  * stage and the accepted point) and level flight at one Mach throughout.
  */
 interface MachMemo {
+  /** The spec's CLmd and dCD0, copied here at the build: specs of other shapes (a literal, a spread copy) made the spec's reads polymorphic. */
+  readonly clMinDrag: number;
+  readonly cdIncrement: number;
   mach: number;
   cd0: number;
   k: number;
@@ -177,8 +180,8 @@ interface MachMemo {
   outside: readonly PolarTableName[];
 }
 
-function newMachMemo(): MachMemo {
-  return { mach: Number.NaN, cd0: 0, k: 0, buffetCl: 0, clMax: 0, outside: NONE_OUTSIDE };
+function newMachMemo(spec: PolarSpec): MachMemo {
+  return { clMinDrag: spec.clMinDrag, cdIncrement: spec.cdIncrement, mach: Number.NaN, cd0: 0, k: 0, buffetCl: 0, clMax: 0, outside: NONE_OUTSIDE };
 }
 
 /** True when every number of a drag query is finite and the Mach and mass are > 0 (x - x is 0 exactly when x is finite). */
@@ -241,10 +244,10 @@ function dragAt(model: DragPolarModel, memo: MachMemo, query: DragQuery): DragBr
   const t = model.tables;
   if (mach !== memo.mach) refreshMachMemo(t, memo, mach, cl);
   const cd0 = memo.cd0;
-  const dcl = cl - model.spec.clMinDrag;
+  const dcl = cl - memo.clMinDrag;
   const cdInduced = memo.k * dcl * dcl;
   const cdWave = waveDragAt(t.wave, mach, cl);
-  const cdIncrement = model.spec.cdIncrement;
+  const cdIncrement = memo.cdIncrement;
   const cd = cd0 + cdIncrement + cdInduced + cdWave;
   const buffetCl = memo.buffetCl;
   return {
@@ -277,8 +280,8 @@ function dragSampleAt(model: DragPolarModel, memo: MachMemo, altitude_m: number,
   const cl = (loadFactor * weight_N) / qS;
   const t = model.tables;
   if (mach !== memo.mach) refreshMachMemo(t, memo, mach, cl);
-  const dcl = cl - model.spec.clMinDrag;
-  const cd = memo.cd0 + model.spec.cdIncrement + memo.k * dcl * dcl + waveDragAt(t.wave, mach, cl);
+  const dcl = cl - memo.clMinDrag;
+  const cd = memo.cd0 + memo.cdIncrement + memo.k * dcl * dcl + waveDragAt(t.wave, mach, cl);
   out.drag_N = qS * cd;
   out.cl = cl;
   out.clMax = memo.clMax;
@@ -296,8 +299,8 @@ function dragForceAt(model: DragPolarModel, memo: MachMemo, altitude_m: number, 
   const cl = (loadFactor * (mass_kg * g0)) / qS;
   const t = model.tables;
   if (mach !== memo.mach) refreshMachMemo(t, memo, mach, cl);
-  const dcl = cl - model.spec.clMinDrag;
-  return qS * (memo.cd0 + model.spec.cdIncrement + memo.k * dcl * dcl + waveDragAt(t.wave, mach, cl));
+  const dcl = cl - memo.clMinDrag;
+  return qS * (memo.cd0 + memo.cdIncrement + memo.k * dcl * dcl + waveDragAt(t.wave, mach, cl));
 }
 
 /** The Mach nodes of the tables the drag reads (CD0, K(M), the wave-drag table), ascending. */
@@ -309,7 +312,7 @@ function polarSlopeBreakMachs(tables: PolarTables): number[] {
 }
 
 function assemble(spec: PolarSpec, tables: PolarTables, wingArea_m2: number): DragPolarModel {
-  const memo = newMachMemo();
+  const memo = newMachMemo(spec);
   const model: DragPolarModel = {
     spec,
     tables,
