@@ -89,8 +89,9 @@ export function installationOf(project: Project): InstallationSettings {
 export function cautionSettingsOf(project: Project): CautionSettings {
   const c = project.cautions;
   const d = DEFAULT_CAUTION_SETTINGS;
+  // Every field written, in the interface's order (as DEFAULT_CAUTION_SETTINGS): a spread copy has a shape of its own,
+  // and the installed model's caution reads went polymorphic in a process that had also used the defaults.
   return {
-    ...d,
     minResidualClimbRate_m_s: c.minResidualClimbRate ?? d.minResidualClimbRate_m_s,
     minBuffetLoadFactor: c.minBuffetLoadFactor ?? d.minBuffetLoadFactor,
     vmoMargin_m_s: c.vmoMargin ?? d.vmoMargin_m_s,
