@@ -85,6 +85,8 @@ export function makeLevelSegment(ctx: MissionContext, target: LegTarget, spec: L
   // The deck's tabulated powers are slope breaks of the part-power fuel flow: the time steps end where the
   // setting crosses one (integrator.ts), instead of straddling it at first order.
   const powers = input.propulsion.slopeBreaks?.powers;
-  return { step_s: spec.step_s, evaluate, derivative, events, algebraicAltitude: spec.algebraicAltitude, ...(powers === undefined ? {} : { breakValues: powers }) };
+  // breakValues always written (undefined: none) so that level segments have one shape whether or not the model states
+  // its powers (a wrapped model, adjustedPropulsion.ts, states none): two shapes made the integrator's reads polymorphic.
+  return { step_s: spec.step_s, evaluate, derivative, events, algebraicAltitude: spec.algebraicAltitude, breakValues: powers };
 }
 
