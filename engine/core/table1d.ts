@@ -98,7 +98,7 @@ export function checkAxis(
       });
     }
   }
-  if (axis.length === 1) return ok({ values: [...axis], reversed: false });
+  if (axis.length === 1) return ok({ values: doubleCopy(axis), reversed: false });
   const decreasing = axis[1]! < axis[0]!;
   for (let i = 1; i < axis.length; i++) {
     const step = axis[i]! - axis[i - 1]!;
@@ -115,7 +115,19 @@ export function checkAxis(
       });
     }
   }
-  return ok({ values: decreasing ? [...axis].reverse() : [...axis], reversed: decreasing });
+  return ok({ values: decreasing ? doubleCopy(axis).reverse() : doubleCopy(axis), reversed: decreasing });
+}
+
+/**
+ * A copy of `values` in an array that holds doubles whatever the values (an array of whole numbers holds small
+ * integers, one with a fraction doubles): every table's arrays then have one kind, and the lookups' reads of them
+ * stay monomorphic in a process that built tables of both kinds (common practice: V8's elements kinds).
+ */
+export function doubleCopy(values: readonly number[]): number[] {
+  const out = [0.5];
+  out.length = 0;
+  for (let i = 0; i < values.length; i++) out.push(values[i]!);
+  return out;
 }
 
 /** Fritsch–Carlson node slopes for monotone cubic Hermite interpolation. */
@@ -188,7 +200,7 @@ export function makeTable1d(
   const axis = checkAxis(x, name, 'x');
   if (!axis.ok) return axis;
   const xs = axis.value.values;
-  const ys = axis.value.reversed ? [...y].reverse() : [...y];
+  const ys = axis.value.reversed ? doubleCopy(y).reverse() : doubleCopy(y);
   for (let i = 1; i < xs.length; i++) {
     if (!Number.isFinite((ys[i]! - ys[i - 1]!) / (xs[i]! - xs[i - 1]!))) {
       const at = axis.value.reversed ? xs.length - 1 - i : i;

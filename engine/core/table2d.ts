@@ -8,6 +8,7 @@
 import { err, ok, type Result } from './result';
 import {
   checkAxis,
+  doubleCopy,
   lerp,
   locate,
   overflowCheck,
@@ -81,7 +82,7 @@ export function makeTable2d(
       }
     }
   }
-  let rows = z.map((r) => (ay.value.reversed ? [...r].reverse() : [...r]));
+  let rows = z.map((r) => (ay.value.reversed ? doubleCopy(r).reverse() : doubleCopy(r)));
   if (ax.value.reversed) rows = rows.reverse();
   return ok({ name, x: ax.value.values, y: ay.value.values, z: rows });
 }
