@@ -60,7 +60,7 @@ export type EngineDeckParts = { readonly [K in keyof Required<EngineDeck>]: Engi
 
 /**
  * An EngineDeck of `parts` in the one key order of EngineDeck, `warnings` and `interpolation` always present
- * (undefined when the deck has none). Every deck the engine builds (file, parametric, cycle, corrected copy) comes
+ * (undefined when the deck has none), the policy in DEFAULT_DECK_POLICY's key order. Every deck the engine builds (file, parametric, cycle, corrected copy) comes
  * from here, so the deck lookups of a mission meet one object shape whatever decks ran before in the process.
  */
 export function engineDeckOf(parts: EngineDeckParts): EngineDeck {
@@ -73,7 +73,8 @@ export function engineDeckOf(parts: EngineDeckParts): EngineDeck {
     hasIsaDev: parts.hasIsaDev,
     hasSensitivities: parts.hasSensitivities,
     notes: parts.notes,
-    policy: parts.policy,
+    // A fresh record in DEFAULT_DECK_POLICY's key order: the file readers' spread copies had a shape of their own.
+    policy: { altitude: parts.policy.altitude, mach: parts.policy.mach, power: parts.policy.power, isaDev: parts.policy.isaDev },
     grid: parts.grid,
     warnings: parts.warnings,
     interpolation: parts.interpolation,

@@ -5,6 +5,7 @@ import { expectOk } from '../../../engine/core/result';
 import { deckForInterpolation } from '../../../engine/propulsion/deckCorrection';
 import { parseDeckCsv } from '../../../engine/propulsion/deckCsv';
 import { DEMO_ENGINE_SPEC } from '../../../engine/propulsion/deckDemoSpec';
+import { DEFAULT_DECK_POLICY } from '../../../engine/propulsion/engineDeck';
 import { buildParametricDeck } from '../../../engine/propulsion/parametricDeck';
 import { keyOutline } from '../../support/objectShape';
 
@@ -20,6 +21,7 @@ describe('engineDeckOf', () => {
     expect(parametric.warnings).toBeUndefined();
     expect(parametric.interpolation).toBeUndefined();
     expect(corrected.interpolation).toBe('corrected');
+    for (const deck of [file, parametric, corrected]) expect(Object.keys(deck.policy)).toEqual(Object.keys(DEFAULT_DECK_POLICY));
     // The grids too (buildDeckGrid and the corrected copy both through deckGridOf).
     expect(keyOutline(corrected.grid)).toEqual(keyOutline(file.grid));
     expect(keyOutline(parametric.grid)).toEqual(keyOutline(file.grid));
