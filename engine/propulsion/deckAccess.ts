@@ -3,6 +3,7 @@
  * installed model asks of a deck and the atmosphere (installedPropulsion.ts
  * wires it to the engine deck and the standard atmosphere).
  */
+import type { Caution } from '../cautions/caution';
 import type { Result } from '../core/result';
 import type { DeckLookup } from './deckLookup';
 import type { ReferenceRecovery } from './engineDeck';
@@ -63,6 +64,11 @@ export interface DeckAccess {
    * root on one such segment.
    */
   curveBreakAfter?(after: number): number;
+  /**
+   * With `curveAt`: when the curve's last evaluation (at the condition last prepared) was inside the table on every
+   * axis, the cautions `lookup` gives there (its outside list is then empty); else null (`lookup` then builds them).
+   */
+  curveInsideCautions?(): readonly Caution[] | null;
   /** The deck's grid altitudes (m) and Machs (-), ascending: where its interpolated numbers have slope breaks. */
   readonly slopeBreaks?: SlopeBreaks;
   /** Free-stream static pressure (Pa) and temperature (K). */

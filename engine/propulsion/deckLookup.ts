@@ -52,6 +52,9 @@ export interface DeckLookupError {
 }
 
 const NOTHING: readonly never[] = Object.freeze([]);
+
+/** The outside list of a lookup inside the table on every axis (shared, frozen). */
+export const INSIDE_TABLE: readonly DeckAxis[] = NOTHING;
 const scratch = createDeckNodeSet();
 const values = new Float64Array(DECK_VALUES_WITH_SENSITIVITIES);
 const range = new Float64Array(2);
@@ -134,8 +137,7 @@ export function finishLookup(
   }
   const sensitivities = deck.hasSensitivities && v.length >= DECK_VALUES_WITH_SENSITIVITIES ? readSensitivities(v, 3, deck.hasAirflow, f) : null;
   if (s.outsideMask === 0) {
-    const cautions = approximateTemperature ? temperatureCautionList(deck.title, condition.isaDev_K) : NOTHING;
-    return { power, thrust_N: v[0]!, fuelFlow_kg_s: fuelFlow, airflow_kg_s: airflow, sensitivities, outside: NOTHING, cautions };
+    return { power, thrust_N: v[0]!, fuelFlow_kg_s: fuelFlow, airflow_kg_s: airflow, sensitivities, outside: INSIDE_TABLE, cautions: insideTableCautions(deck, condition.isaDev_K) };
   }
   const outside: DeckAxis[] = [];
   const cautions: Caution[] = [];
@@ -189,6 +191,14 @@ function temperatureCaution(title: string, isaDev_K: number): Caution {
 function temperatureCautionList(title: string, isaDev_K: number): readonly Caution[] {
   temperatureCaution(title, isaDev_K);
   return cachedList;
+}
+
+/**
+ * The cautions of a lookup of `deck` inside the table on every axis at an ISA deviation (K): the temperature
+ * approximation's on a deck without an ISA axis off a standard day, else none (finishLookup's, the same list).
+ */
+export function insideTableCautions(deck: EngineDeck, isaDev_K: number): readonly Caution[] {
+  return !deck.hasIsaDev && isaDev_K !== 0 ? temperatureCautionList(deck.title, isaDev_K) : NOTHING;
 }
 
 /** Describes the 'refuse' stop recorded in `s` as the `outside_deck` error. */

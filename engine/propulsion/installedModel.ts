@@ -27,7 +27,7 @@ import { prepareInlet, type PreparedInlet } from './inletRecovery';
 import { createRatingMemo, RATING_MEMO_ENTRIES } from './ratingMemo';
 import { defaultInstallationMethod, type InstallationMethodId } from './installationMethod';
 import { validateInstallation, type InstallationSettings } from './installationCorrections';
-import { newPartPowerSolve, PART_POWER_MEMO_CONDITIONS, solvedFuelFlow, solvePartPower, type PartPowerRoot } from './partPowerSolve';
+import { newPartPowerSolve, PART_POWER_MEMO_CONDITIONS, solvedFuelFlow, solvedScratch, solvePartPower, type PartPowerRoot } from './partPowerSolve';
 import { conditionKey, propulsionModelOf, sameFlightCondition, type FlightCondition, type InstalledPoint, type PartPowerPoint, type PropulsionModel, type RatingName, type SlopeBreaks, type ThrustLimit } from './propulsionModel';
 
 export type { AccessError, DeckAccess, DeckPoint } from './deckAccess';
@@ -229,7 +229,12 @@ export function makeInstalledModel(access: DeckAccess, options: InstalledModelOp
 
   function forThrust(condition: FlightCondition, thrustRequired_N: number, ceilingRating: RatingName = 'maxCruise'): PartPowerPoint {
     const { root, free, extra } = partPowerRoot(condition, thrustRequired_N, ceilingRating);
-    const point = pointAt(condition, free, root.power, extra) as InstalledPoint & { limit: ThrustLimit; thrustRequired_N: number };
+    // The solve's last curve evaluation at the root when it has one (the usual case), else a full one there.
+    const solved = solvedScratch(solve, root.power);
+    const point = (solved !== null ? assembleInstalledPoint(solved, ctx, condition, root.power, extra) : pointAt(condition, free, root.power, extra)) as InstalledPoint & {
+      limit: ThrustLimit;
+      thrustRequired_N: number;
+    };
     point.limit = root.limit;
     point.thrustRequired_N = thrustRequired_N;
     return point;

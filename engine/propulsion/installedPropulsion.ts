@@ -4,10 +4,11 @@
  * model (installedModel.ts). Also the airframe increments of an inlet.
  */
 import { atmosphere } from '../aero/standardAtmosphere';
+import type { Caution } from '../cautions/caution';
 import type { CautionSettings } from '../cautions/cautionSettings';
 import { createDeckNodeSet, DECK_VALUES_WITH_SENSITIVITIES, evaluateDeckNodesInto, fillDeckNodes, nextPowerBreakpoint } from './deckGrid';
 import { powerForThrust } from './deckInversion';
-import { lookupDeck, lookupFilledDeck, powerBounds, ratingPower } from './deckLookup';
+import { insideTableCautions, lookupDeck, lookupFilledDeck, powerBounds, ratingPower } from './deckLookup';
 import { correctionFactorsOfAir, deckForInterpolation } from './deckCorrection';
 import { temperatureFlowFactor } from './deckTemperature';
 import type { EngineDeck } from './engineDeck';
@@ -83,6 +84,7 @@ export function deckAccess(deck: EngineDeck): DeckAccess {
       return evaluate;
     },
     curveBreakAfter: curve.breakAfter,
+    curveInsideCautions: curve.insideCautions,
     ambient: (condition) => air(condition.altitude_m, condition.isaDev_K),
   };
 }
@@ -108,6 +110,8 @@ export function deckCurve(
   evaluate(power: number, out: Float64Array): boolean;
   /** The prepared condition's next power breakpoint strictly above `after` (Infinity when none; deckGrid's nextPowerBreakpoint). */
   breakAfter(after: number): number;
+  /** lookupDeck's cautions at the last evaluated power when it was inside the table on every axis, else null. */
+  insideCautions(): readonly Caution[] | null;
   /** lookupDeck at `condition` and `power` (the same answer to the bit), preparing the condition first. */
   lookup(condition: FlightCondition, power: number): ReturnType<typeof lookupDeck>;
 } {
@@ -118,6 +122,8 @@ export function deckCurve(
   let preparedAt: FlightCondition | null = null;
   let conditionMask = 0;
   let filled = false;
+  // Whether the last evaluate (since the last prepare) stayed inside the table on every axis.
+  let lastInside = false;
   // The corrected-parameter factors of thrust, fuel flow and airflow (1 for a raw deck: x * 1 is x to the bit).
   let thrustFactor = 1;
   let fuelFlowFactor = 1;
@@ -128,6 +134,7 @@ export function deckCurve(
   const factors = new Float64Array(3);
   function prepare(condition: FlightCondition): void {
     if (preparedAt !== null && sameFlightCondition(preparedAt, condition)) return;
+    lastInside = false;
     filled = fillDeckNodes(deck.grid, deck.policy, condition.isaDev_K, condition.altitude_m, condition.mach, nodes);
     conditionMask = nodes.outsideMask;
     temperatureFactor = !deck.hasIsaDev && condition.isaDev_K !== 0 ? temperatureFlowFactor(condition.altitude_m, condition.isaDev_K) : 1;
@@ -150,11 +157,13 @@ export function deckCurve(
       // As lookupFilledDeck: from the condition's own outside flags (a previous power may have left the power axis).
       nodes.outsideMask = conditionMask;
       nodes.refusedAxis = -1;
+      lastInside = false;
       if (!evaluateDeckNodesInto(deck.grid, nodes, power, deck.policy.power, values)) return false;
       // finishLookup's products in its order ((value x factor) x or / the temperature factor, which is 1 on an ISA
       // axis or a standard day), floored at zero off the table as lookupDeck floors them (the point finally
       // evaluated carries the caution).
       const off = nodes.outsideMask !== 0;
+      lastInside = !off;
       const thrust = values[0]! * thrustFactor;
       const fuelFlow = values[1]! * fuelFlowFactor * temperatureFactor;
       const airflow = (values[2]! * airflowFactor) / temperatureFactor;
@@ -166,6 +175,9 @@ export function deckCurve(
     },
     breakAfter(after) {
       return filled ? nextPowerBreakpoint(deck.grid, nodes, after) : Infinity;
+    },
+    insideCautions() {
+      return lastInside && preparedAt !== null ? insideTableCautions(deck, preparedAt.isaDev_K) : null;
     },
     lookup(condition, power) {
       if (!Number.isFinite(condition.altitude_m) || !Number.isFinite(condition.mach) || !Number.isFinite(condition.isaDev_K)) {

@@ -39,6 +39,7 @@ import {
   type EngineScratch,
   type InstallationContext,
 } from './engineEvaluation';
+import { INSIDE_TABLE } from './deckLookup';
 import type { FreeStream } from './inletFlow';
 import { sameFlightCondition, type FlightCondition, type ThrustLimit } from './propulsionModel';
 
@@ -279,6 +280,23 @@ export function solveThrustAt(solve: PartPowerSolve, power: number): number {
 export function solvedFuelFlow(solve: PartPowerSolve, power: number): number {
   if (!Object.is(solve.lastPower, power)) solveThrustAt(solve, power);
   return solve.lastOnCurve ? solve.fast.fuelFlow_kg_s : solve.full.fuelFlow_kg_s;
+}
+
+/**
+ * The scratch of the last evaluation when it was on the curve at `power` (the root solvePartPower just returned)
+ * and inside the deck's table there, completed with the lookup's outside list and cautions: then it holds what a
+ * full evaluation at that power would (the curve carries lookupDeck's values to the bit, and installDeckPointInto
+ * is the same step), so the root's point needs no second lookup. Null otherwise (the caller evaluates in full).
+ */
+export function solvedScratch(solve: PartPowerSolve, power: number): EngineScratch | null {
+  if (!solve.lastOnCurve || !Object.is(solve.lastPower, power)) return null;
+  const cautions = solve.access.curveInsideCautions?.() ?? null;
+  if (cautions === null) return null;
+  const s = solve.fast;
+  s.deckError = null;
+  s.outside = INSIDE_TABLE;
+  s.deckCautions = cautions;
+  return s;
 }
 
 /**

@@ -148,6 +148,40 @@ describe('part-power solve', () => {
     expect(below).toBeGreaterThan(10);
   });
 
+  it("forThrust's point is atPower's point at its power, field for field, inside and off the table", () => {
+    // The point is built from the solve's last curve evaluation when it was at the root inside the table, else from a
+    // full lookup; both must be the full lookup's point to the bit (cautions, breakdown, outside list), so the
+    // reference is atPower at the power found (the model's own full evaluation). Off the table (the synthetic deck's
+    // grid ends at 11,000 m and Mach 0.85) the cautions name the axes left; off ISA on a deck without an ISA axis they
+    // carry the temperature approximation's.
+    const offTable: Readonly<Record<string, readonly FlightCondition[]>> = {
+      [CASES[0]!.name]: [
+        { altitude_m: 11600, mach: 0.7, isaDev_K: 0 },
+        { altitude_m: 8000, mach: 0.9, isaDev_K: 6 },
+      ],
+    };
+    let inside = 0;
+    let outside = 0;
+    for (const c of CASES) {
+      const m = modelOf(c);
+      for (const condition of [...c.conditions, ...(offTable[c.name] ?? [])]) {
+        const idle = m.atRating(condition, 'flightIdle').thrust_N;
+        const top = m.atRating(condition, 'maxCruise').thrust_N;
+        for (let k = 1; k <= 11; k++) {
+          const p = m.forThrust(condition, idle + ((top - idle) * k) / 12, 'maxCruise');
+          const { limit, thrustRequired_N, ...point } = p;
+          const where = `${c.name}, ${condition.altitude_m} m, Mach ${condition.mach}, ${k}/12`;
+          expect([limit, thrustRequired_N], where).toEqual(['within', idle + ((top - idle) * k) / 12]);
+          expect(point, where).toStrictEqual(m.atPower(condition, p.power));
+          if (p.outsideTable.length === 0) inside++;
+          else outside++;
+        }
+      }
+    }
+    expect(inside).toBeGreaterThan(50);
+    expect(outside).toBeGreaterThan(10);
+  });
+
   it('forThrust brackets the root on one deck power segment and needs fewer than 7 deck evaluations a solve on average', () => {
     // Counted: the ceiling and idle evaluations, the segment ends and the refinement (Brent to 1e-7 took about 8.5 on the demo).
     let evaluations = 0;
