@@ -67,10 +67,10 @@ export interface PartPowerSolve {
   /** Per-engine thrust asked for (N). */
   required_N: number;
   /**
-   * The per-condition memo: its slots (one per condition held), and per slot the installed thrusts at the solve's
-   * fixed powers (idle, the ceiling, the deck's power nodes), by power, with the deck thrust of each (N per engine;
-   * MEMO_POWERS entries a slot, memoCount[slot] of them used), and the curve's power breakpoints in ascending order
-   * (null until the slot's first solve with a curve needs them).
+   * The per-condition memo: its slots (one per condition held), and per slot the installed thrusts at idle and the
+   * ceilings asked, by power, with the deck thrust of each (N per engine; MEMO_POWERS entries a slot, memoCount[slot]
+   * of them used), and the curve's power breakpoints in ascending order (null until the slot's first solve with a
+   * curve needs them).
    */
   readonly slots: ConditionSlots;
   readonly memoCount: Int32Array;
@@ -78,6 +78,8 @@ export interface PartPowerSolve {
   readonly memoThrust: Float64Array;
   readonly memoDeck: Float64Array;
   readonly breaks: (Float64Array | null)[];
+  /** Per slot, the installed thrust per engine at each of its breaks (N; NaN until computed; made with the breaks). */
+  readonly breakThrust: (Float64Array | null)[];
   /**
    * Per slot, the segments whose part nodes are kept (SEGMENTS_PER_CONDITION a slot, segmentCount[slot] used, the
    * next to replace when all are segmentNext[slot]): their ends (power), and the installed thrust per engine at
@@ -113,8 +115,8 @@ export interface PartPowerSolve {
 /** New conditions remembered for admission to the part-power memo (a condition asked twice among them is admitted). */
 const RECENT_CONDITIONS = 8;
 
-/** Powers kept per condition: idle, the ceiling and the power nodes between them on any deck so far. */
-const MEMO_POWERS = 16;
+/** Powers kept per condition in memoPower: idle and the ceilings asked (the curve's breakpoints have breakThrust). */
+const MEMO_POWERS = 8;
 
 /**
  * Equal parts a deck power segment is cut into for the first guess (a power of two, so each node's fraction of the
@@ -155,6 +157,7 @@ export function newPartPowerSolve(ctx: InstallationContext, access: DeckAccess, 
     memoThrust: new Float64Array((memoConditions + 1) * MEMO_POWERS),
     memoDeck: new Float64Array((memoConditions + 1) * MEMO_POWERS),
     breaks: new Array<Float64Array | null>(memoConditions + 1).fill(null),
+    breakThrust: new Array<Float64Array | null>(memoConditions + 1).fill(null),
     segmentCount: new Int32Array(memoConditions + 1),
     segmentNext: new Int32Array(memoConditions + 1),
     segmentLo: new Float64Array((memoConditions + 1) * SEGMENTS_PER_CONDITION),
@@ -183,6 +186,7 @@ function selectSlot(solve: PartPowerSolve, condition: FlightCondition): void {
     slot = askedRecently(solve, condition) ? solve.slots.add(condition) : solve.slots.limit;
     solve.memoCount[slot] = 0;
     solve.breaks[slot] = null;
+    solve.breakThrust[slot] = null;
     solve.segmentCount[slot] = 0;
     solve.segmentNext[slot] = 0;
   }
@@ -239,12 +243,13 @@ function breaksOf(solve: PartPowerSolve, breakAfter: (after: number) => number):
     for (let q = breakAfter(-Infinity); q < Infinity; q = breakAfter(q)) found.push(q);
     list = Float64Array.from(found);
     solve.breaks[solve.slot] = list;
+    solve.breakThrust[solve.slot] = new Float64Array(list.length).fill(Number.NaN);
   }
   return list;
 }
 
-/** The first of the ascending `list` strictly above `after`, Infinity when none (DeckAccess.curveBreakAfter's answer). */
-function nextBreak(list: Float64Array, after: number): number {
+/** Index of the first of the ascending `list` strictly above `after` (list.length when none: DeckAccess.curveBreakAfter's Infinity). */
+function firstBreakAbove(list: Float64Array, after: number): number {
   let l = 0;
   let h = list.length;
   while (l < h) {
@@ -252,7 +257,17 @@ function nextBreak(list: Float64Array, after: number): number {
     if (list[m]! <= after) l = m + 1;
     else h = m;
   }
-  return l < list.length ? list[l]! : Infinity;
+  return l;
+}
+
+/** Installed thrust per engine (N) at break `k` of the slot's breaks (kept; computed on first use). */
+function breakThrustAt(solve: PartPowerSolve, breaks: Float64Array, k: number): number {
+  const kept = solve.breakThrust[solve.slot]!;
+  const t = kept[k]!;
+  if (!Number.isNaN(t)) return t;
+  const thrust = solveThrustAt(solve, breaks[k]!);
+  kept[k] = thrust;
+  return thrust;
 }
 
 /** Installed thrust per engine (N) at `power` for the solve in progress: the deck's fixed-condition curve when it offers one, else full lookups. */
@@ -449,26 +464,32 @@ export function solvePartPower(
   const curveBreakAfter = curve ? solve.access.curveBreakAfter : undefined;
   if (curveBreakAfter !== undefined) {
     const breaks = breaksOf(solve, curveBreakAfter);
+    const n = breaks.length;
     // Narrow the bracket to one deck power segment: evaluate the breakpoint inside it nearest the chord's root
-    // until none is left inside (usually two evaluations, fewer when idle or the ceiling bounds the segment).
+    // until none is left inside (usually two evaluations, fewer when idle or the ceiling bounds the segment). By
+    // index in the strictly ascending breaks: `first` is the first above lo (the list's successor of a break is
+    // curveBreakAfter's answer there).
+    let first = firstBreakAbove(breaks, lo);
     for (;;) {
-      let below = Number.NaN;
-      let q = nextBreak(breaks, lo);
-      if (!(q < hi)) break;
+      if (!(first < n && breaks[first]! < hi)) break;
       const chord = lo - (fLo * (hi - lo)) / (fHi - fLo);
-      while (q < hi && q <= chord) {
-        below = q;
-        q = nextBreak(breaks, q);
+      let below = -1;
+      let k = first;
+      while (k < n && breaks[k]! < hi && breaks[k]! <= chord) {
+        below = k;
+        k++;
       }
-      const above = q < hi ? q : Number.NaN;
-      const at = Number.isNaN(below) ? above : Number.isNaN(above) || chord - below <= above - chord ? below : above;
-      const t = memoThrustAt(solve, at);
+      const above = k < n && breaks[k]! < hi ? k : -1;
+      const pick = below < 0 ? above : above < 0 || chord - breaks[below]! <= breaks[above]! - chord ? below : above;
+      const at = breaks[pick]!;
+      const t = breakThrustAt(solve, breaks, pick);
       const f = t - perEngineRequired_N;
       if (Math.abs(f) <= fTol) return { ok: true, power: at, limit: 'within' };
       if (f < 0) {
         lo = at;
         loT = t;
         fLo = f;
+        first = pick + 1;
       } else {
         hi = at;
         hiT = t;
