@@ -10,6 +10,7 @@
  */
 import { hashFlightCondition } from './ratingMemo';
 import type { FlightCondition } from './propulsionModel';
+import { sameNumber } from '../core/sameNumber';
 
 export interface ConditionSlots {
   /** The slot of `condition`, or -1 when it has none. */
@@ -38,7 +39,7 @@ export function createConditionSlots(limit: number): ConditionSlots {
     let i = hashFlightCondition(condition, 0) & mask;
     for (;;) {
       if (slotPlusOne[i] === 0) return i;
-      if (Object.is(altitude[i], condition.altitude_m) && Object.is(mach[i], condition.mach) && Object.is(isaDev[i], condition.isaDev_K)) return i;
+      if (sameNumber(altitude[i], condition.altitude_m) && sameNumber(mach[i], condition.mach) && sameNumber(isaDev[i], condition.isaDev_K)) return i;
       i = (i + 1) & mask;
     }
   }

@@ -30,6 +30,7 @@ import type { InstallationSettings } from './installationCorrections';
 import { milE5008bRecovery } from './milE5008b';
 import type { DeckAxis, FlightCondition, InstalledPoint } from './propulsionModel';
 import { additiveDrag_N, spillageDrag } from './spillageDrag';
+import { sameNumber } from '../core/sameNumber';
 
 export const NO_CAUTIONS: readonly Caution[] = Object.freeze([]);
 const NO_AXES: readonly DeckAxis[] = Object.freeze([]);
@@ -190,7 +191,7 @@ export function installDeckPointInto(
       deck.airflow_kg_s = Number.NaN;
     }
   } else {
-    if (!Object.is(s.memoMach, mach)) {
+    if (!sameNumber(s.memoMach, mach)) {
       const r = tableRecovery(ctx.recoveryInlet.table!, mach);
       s.memoMach = mach;
       s.memoRecovery = r.recovery;
@@ -214,7 +215,7 @@ export function installDeckPointInto(
   s.extractionLoss_N = corrected.extractionLoss_N;
   if (!Number.isNaN(s.airflow_kg_s)) {
     const m = spillMemo;
-    if (m.ctx === ctx && Object.is(m.airflow_kg_s, s.airflow_kg_s) && Object.is(m.mach, mach) && Object.is(m.pressure_Pa, free.pressure_Pa) && Object.is(m.temperature_K, free.temperature_K)) {
+    if (m.ctx === ctx && sameNumber(m.airflow_kg_s, s.airflow_kg_s) && sameNumber(m.mach, mach) && sameNumber(m.pressure_Pa, free.pressure_Pa) && sameNumber(m.temperature_K, free.temperature_K)) {
       s.massFlowRatio = m.massFlowRatio;
       s.spillage_N = m.spillage_N;
       s.lipSuction = m.lipSuction;

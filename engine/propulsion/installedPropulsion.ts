@@ -18,6 +18,7 @@ import { CURVE_FUEL_FLOW, type DeckAccess } from './deckAccess';
 import { scaleSensitivitiesInto } from './installationSensitivities';
 import { makeInstalledModel } from './installedModel';
 import { conditionKey, sameFlightCondition, type FlightCondition, type PropulsionModel } from './propulsionModel';
+import { sameNumber } from '../core/sameNumber';
 
 export { inletDragIncrementCd0, inletWeight } from './inletDesign';
 
@@ -53,7 +54,7 @@ export function deckAccess(deck: EngineDeck): DeckAccess {
   let airIsaDev_K = Number.NaN;
   let airValue: ReturnType<typeof atmosphere> | null = null;
   const air = (altitude_m: number, isaDev_K: number): ReturnType<typeof atmosphere> => {
-    if (airValue === null || !Object.is(altitude_m, airAltitude_m) || !Object.is(isaDev_K, airIsaDev_K)) {
+    if (airValue === null || !sameNumber(altitude_m, airAltitude_m) || !sameNumber(isaDev_K, airIsaDev_K)) {
       airValue = atmosphere(altitude_m, isaDev_K);
       airAltitude_m = altitude_m;
       airIsaDev_K = isaDev_K;

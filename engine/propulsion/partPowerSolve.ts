@@ -42,6 +42,7 @@ import {
 import { INSIDE_TABLE } from './deckLookup';
 import type { FreeStream } from './inletFlow';
 import { sameFlightCondition, type FlightCondition, type ThrustLimit } from './propulsionModel';
+import { sameNumber } from '../core/sameNumber';
 
 /**
  * Relative thrust tolerance of `forThrust` (-): |installed - required| <=
@@ -200,7 +201,7 @@ function selectSlot(solve: PartPowerSolve, condition: FlightCondition): void {
 function askedRecently(solve: PartPowerSolve, condition: FlightCondition): boolean {
   const r = solve.recent;
   for (let i = 0; i < r.length; i += 3) {
-    if (Object.is(r[i], condition.altitude_m) && Object.is(r[i + 1], condition.mach) && Object.is(r[i + 2], condition.isaDev_K)) return true;
+    if (sameNumber(r[i], condition.altitude_m) && sameNumber(r[i + 1], condition.mach) && sameNumber(r[i + 2], condition.isaDev_K)) return true;
   }
   const at = 3 * solve.recentNext;
   r[at] = condition.altitude_m;
@@ -215,7 +216,7 @@ function memoThrustAt(solve: PartPowerSolve, power: number): number {
   const base = solve.slot * MEMO_POWERS;
   const count = solve.memoCount[solve.slot]!;
   for (let i = base; i < base + count; i++) {
-    if (Object.is(solve.memoPower[i], power)) {
+    if (sameNumber(solve.memoPower[i], power)) {
       solve.lastDeck_N = solve.memoDeck[i]!;
       return solve.memoThrust[i]!;
     }
@@ -293,7 +294,7 @@ export function solveThrustAt(solve: PartPowerSolve, power: number): number {
  * lookupDeck's values to the bit, so this is the fuel flow of the full point at the root, to the bit.
  */
 export function solvedFuelFlow(solve: PartPowerSolve, power: number): number {
-  if (!Object.is(solve.lastPower, power)) solveThrustAt(solve, power);
+  if (!sameNumber(solve.lastPower, power)) solveThrustAt(solve, power);
   return solve.lastOnCurve ? solve.fast.fuelFlow_kg_s : solve.full.fuelFlow_kg_s;
 }
 
@@ -304,7 +305,7 @@ export function solvedFuelFlow(solve: PartPowerSolve, power: number): number {
  * is the same step), so the root's point needs no second lookup. Null otherwise (the caller evaluates in full).
  */
 export function solvedScratch(solve: PartPowerSolve, power: number): EngineScratch | null {
-  if (!solve.lastOnCurve || !Object.is(solve.lastPower, power)) return null;
+  if (!solve.lastOnCurve || !sameNumber(solve.lastPower, power)) return null;
   const cautions = solve.access.curveInsideCautions?.() ?? null;
   if (cautions === null) return null;
   const s = solve.fast;
@@ -325,7 +326,7 @@ function segmentBase(solve: PartPowerSolve, lo: number, hi: number): number {
   const first = slot * SEGMENTS_PER_CONDITION;
   const count = solve.segmentCount[slot]!;
   for (let i = first; i < first + count; i++) {
-    if (Object.is(solve.segmentLo[i], lo) && Object.is(solve.segmentHi[i], hi)) return (i - first) * SEGMENT_NODES;
+    if (sameNumber(solve.segmentLo[i], lo) && sameNumber(solve.segmentHi[i], hi)) return (i - first) * SEGMENT_NODES;
   }
   let i: number;
   if (count < SEGMENTS_PER_CONDITION) {

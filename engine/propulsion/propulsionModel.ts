@@ -12,6 +12,7 @@
  */
 import type { Caution } from '../cautions/caution';
 import type { InstallationMethodId } from './installationMethod';
+import { sameNumber } from '../core/sameNumber';
 
 export type RatingName = 'takeoff' | 'maxClimb' | 'maxCruise' | 'maxContinuous' | 'flightIdle';
 
@@ -48,7 +49,7 @@ export interface FlightCondition {
  * key of the installed model's one-entry memos (a point is a pure function of its condition).
  */
 export function sameFlightCondition(a: FlightCondition, b: FlightCondition): boolean {
-  return Object.is(a.altitude_m, b.altitude_m) && Object.is(a.mach, b.mach) && Object.is(a.isaDev_K, b.isaDev_K);
+  return sameNumber(a.altitude_m, b.altitude_m) && sameNumber(a.mach, b.mach) && sameNumber(a.isaDev_K, b.isaDev_K);
 }
 
 /** A copy of a condition's three numbers (a memo's key must not be the caller's object, which it may change). */

@@ -12,6 +12,7 @@
  * Points are shared, read-only (every field of InstalledPoint is readonly), as the one-entry memo shared them.
  */
 import { RATING_NAMES, type FlightCondition, type InstalledPoint, type RatingName } from './propulsionModel';
+import { sameNumber } from '../core/sameNumber';
 
 /** Entries a model's rating memo holds by default: a converged demo solve asks about 140 distinct, 15 varied ones about 250. */
 export const RATING_MEMO_ENTRIES = 1024;
@@ -69,9 +70,9 @@ export function createRatingMemo(limit: number = RATING_MEMO_ENTRIES): RatingMem
       if (u === 0) return i;
       if (
         u === r + 1 &&
-        Object.is(altitude[i], condition.altitude_m) &&
-        Object.is(mach[i], condition.mach) &&
-        Object.is(isaDev[i], condition.isaDev_K)
+        sameNumber(altitude[i], condition.altitude_m) &&
+        sameNumber(mach[i], condition.mach) &&
+        sameNumber(isaDev[i], condition.isaDev_K)
       ) {
         return i;
       }
