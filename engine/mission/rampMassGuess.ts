@@ -31,6 +31,7 @@ import { reserveArrival, reserveHoldSpeed } from './reserveRules';
 import { scheduleMach } from './speedSchedule';
 import type { RatingName } from '../propulsion/propulsionModel';
 import { FOOT_M } from '../units/unitTable';
+import { sameNumber } from '../core/sameNumber';
 
 type Env = { readonly isaDev_K: number; readonly wind_m_s: number };
 type CruiseLeg = Extract<Leg, { kind: 'cruise' }>;
@@ -126,6 +127,73 @@ interface PathEstimate {
   readonly distance_m: number;
 }
 
+/** Nodes of pathEstimate's Simpson's rule (an even number of intervals). */
+const PATH_INTERVALS = 4;
+
+/** Per node of a path: Mach, TAS (m/s), energy share factor, the rating's thrust (N) and fuel flow (kg/s), temperature and ISA temperature (K). */
+const NODE_VALUES = 7;
+
+/** Paths whose mass-free node values a model keeps (the trip's climbs and descents and the alternate's) before they are emptied. */
+const PATH_MEMO_ENTRIES = 16;
+
+interface PathNodes {
+  /** The schedule's four numbers, the two altitudes (m), the ISA deviation (K). */
+  readonly key: Float64Array;
+  readonly rating: RatingName;
+  readonly values: Float64Array;
+}
+
+// Per propulsion model (the payload cycles on one model, as the app and the analyses fly it): what each node of a
+// path needs that does not depend on the mass (the schedule's Mach, the air, the share factor, the rating's point),
+// keyed exactly by the numbers it is a pure function of (sameNumber) and the rating; so a path costs its drags
+// alone after its first estimate. The entry that would pass PATH_MEMO_ENTRIES empties the model's list first.
+const pathMemo = new WeakMap<MissionInput['propulsion'], PathNodes[]>();
+
+/** The mass-free node values of a path (PathNodes.values), kept per model. */
+function pathNodes(input: MissionInput, from_m: number, to_m: number, schedule: SpeedSchedule, rating: RatingName, isaDev_K: number): Float64Array {
+  let list = pathMemo.get(input.propulsion);
+  if (list === undefined) {
+    list = [];
+    pathMemo.set(input.propulsion, list);
+  }
+  for (const entry of list) {
+    const k = entry.key;
+    if (
+      entry.rating === rating &&
+      sameNumber(k[0]!, schedule.lowCas_m_s) &&
+      sameNumber(k[1]!, schedule.lowAltitudeLimit_m) &&
+      sameNumber(k[2]!, schedule.cas_m_s) &&
+      sameNumber(k[3]!, schedule.mach) &&
+      sameNumber(k[4]!, from_m) &&
+      sameNumber(k[5]!, to_m) &&
+      sameNumber(k[6]!, isaDev_K)
+    ) {
+      return entry.values;
+    }
+  }
+  const values = new Float64Array((PATH_INTERVALS + 1) * NODE_VALUES);
+  const dh = (to_m - from_m) / PATH_INTERVALS;
+  for (let i = 0; i <= PATH_INTERVALS; i++) {
+    const h = from_m + i * dh;
+    const mach = scheduleMach(schedule, h);
+    const air = missionAir(h, isaDev_K);
+    const held = mach >= schedule.mach - 1e-9 ? 'mach' : 'cas';
+    const p = input.propulsion.atRating({ altitude_m: h, mach, isaDev_K }, rating);
+    const v = i * NODE_VALUES;
+    // The TAS as airPoint has it.
+    values[v] = mach;
+    values[v + 1] = mach * air.speedOfSound_m_s;
+    values[v + 2] = energyShareFactor(held, mach, air.lapse_K_m, air.temperature_K, air.isaTemperature_K);
+    values[v + 3] = p.thrust_N;
+    values[v + 4] = p.fuelFlow_kg_s;
+    values[v + 5] = air.temperature_K;
+    values[v + 6] = air.isaTemperature_K;
+  }
+  if (list.length >= PATH_MEMO_ENTRIES) list.length = 0;
+  list.push({ key: Float64Array.of(schedule.lowCas_m_s, schedule.lowAltitudeLimit_m, schedule.cas_m_s, schedule.mach, from_m, to_m, isaDev_K), rating, values });
+  return values;
+}
+
 /**
  * A climb at a rating, or a descent at flight idle (or at a set rate), along a speed schedule between two altitudes
  * at a mass (kg): the energy method's rate at five altitudes, integrated by Simpson's rule; null when the rate is not
@@ -133,26 +201,24 @@ interface PathEstimate {
  */
 function pathEstimate(input: MissionInput, from_m: number, to_m: number, schedule: SpeedSchedule, how: { readonly rating: RatingName } | { readonly descent: DescentMode }, mass_kg: number, env: Env): PathEstimate | null {
   if (Math.abs(to_m - from_m) < 1) return { fuel_kg: 0, time_s: 0, distance_m: 0 };
-  const n = 4;
+  const n = PATH_INTERVALS;
   const dh = (to_m - from_m) / n;
+  const nodes = pathNodes(input, from_m, to_m, schedule, 'rating' in how ? how.rating : 'flightIdle', env.isaDev_K);
   let time = 0;
   let fuel = 0;
   let distance = 0;
   for (let i = 0; i <= n; i++) {
     const h = from_m + i * dh;
-    const mach = scheduleMach(schedule, h);
-    const air = missionAir(h, env.isaDev_K);
-    // The TAS and drag force as airPoint has them (dragForceAt: the breakdown's drag_N to the bit).
-    const tas_m_s = mach * air.speedOfSound_m_s;
+    const v = i * NODE_VALUES;
+    const mach = nodes[v]!;
+    const tas_m_s = nodes[v + 1]!;
+    // The drag force as airPoint has it (dragForceAt: the breakdown's drag_N to the bit).
     const drag_N = dragForceAt(input, h, mach, mass_kg);
-    const held = mach >= schedule.mach - 1e-9 ? 'mach' : 'cas';
-    const share = energyShareFactor(held, mach, air.lapse_K_m, air.temperature_K, air.isaTemperature_K);
-    const p = input.propulsion.atRating({ altitude_m: h, mach, isaDev_K: env.isaDev_K }, 'rating' in how ? how.rating : 'flightIdle');
     const rate =
       'descent' in how && how.descent.kind === 'rate'
         ? -how.descent.rate_m_s
-        : pressureAltitudeRate(p.thrust_N, drag_N, tas_m_s, mass_kg, share, air.temperature_K, air.isaTemperature_K);
-    const flow = p.fuelFlow_kg_s;
+        : pressureAltitudeRate(nodes[v + 3]!, drag_N, tas_m_s, mass_kg, nodes[v + 2]!, nodes[v + 5]!, nodes[v + 6]!);
+    const flow = nodes[v + 4]!;
     const perMetre = 1 / rate;
     if (!(perMetre * dh > 0) || !Number.isFinite(perMetre)) return null;
     const w = (i === 0 || i === n ? 1 : i % 2 === 1 ? 4 : 2) * (dh / 3) * perMetre;

@@ -83,6 +83,30 @@ describe('rampMassGuess', () => {
       expect(Math.abs(guess!.rampMass_kg - r.rampMass_kg) / r.rampMass_kg).toBeLessThan(0.01);
     }
   });
+
+  it('gives a fresh model its guess to the bit on a model that has estimated other payloads, air and ranges', () => {
+    // The climbs' and descents' mass-free node values are kept per model (a pure function of the schedule, the
+    // altitudes, the ISA deviation and the rating): they must change no answer. Each case on the warm model after
+    // the others, against the same case on a model built afresh (its memo empty).
+    const warm = demoMissionInput();
+    const cases = (base: MissionInput): MissionInput[] => [
+      { ...base, solve: { ...base.solve, payload_kg: base.solve.payload_kg + 70 } as MissionInput['solve'] },
+      { ...base, isaDev_K: 15 },
+      { ...base, wind_m_s: 30, solve: { ...base.solve, range_m: 1200 * NM } as MissionInput['solve'] },
+      base,
+    ];
+    const zfw = (input: MissionInput) => input.airframe.oew_kg + input.solve.payload_kg;
+    for (let round = 0; round < 2; round++) {
+      cases(warm).forEach((input, k) => {
+        const range_m = input.solve.kind === 'payloadRange' ? input.solve.range_m : 0;
+        const again = rampMassGuess(input, zfw(input), range_m, 1.3 * zfw(input));
+        const freshInput = cases(demoMissionInput())[k]!;
+        const fresh = rampMassGuess(freshInput, zfw(freshInput), range_m, 1.3 * zfw(freshInput));
+        expect(again, `case ${k}, round ${round}`).not.toBeNull();
+        expect(again, `case ${k}, round ${round}`).toStrictEqual(fresh);
+      });
+    }
+  });
 });
 
 describe('fuel iteration from the closed-form guess', () => {
