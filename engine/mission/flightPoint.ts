@@ -86,6 +86,77 @@ export function partPowerFuelFlow(input: MissionInput, altitude_m: number, mach:
     : propulsion.forThrust(condition, thrust_N, ceiling).fuelFlow_kg_s;
 }
 
+/** A FlightSample a segment writes each accepted point into (Segment.evaluate): a hot loop's own record. */
+export type SampleRecord = { -readonly [K in keyof FlightSample]: FlightSample[K] };
+
+/** A blank SampleRecord, its numbers NaN (doubles from the start, so that writing one allocates nothing). */
+export function newSampleRecord(): SampleRecord {
+  return {
+    altitude_m: Number.NaN,
+    mach: Number.NaN,
+    cas_m_s: Number.NaN,
+    tas_m_s: Number.NaN,
+    thrustAvailable_N: Number.NaN,
+    thrustUsed_N: Number.NaN,
+    drag_N: Number.NaN,
+    fuelFlow_kg_s: Number.NaN,
+    cl: Number.NaN,
+    clMax: Number.NaN,
+    buffetLoadFactor: Number.NaN,
+    liftToDrag: Number.NaN,
+    climbRate_m_s: Number.NaN,
+    throatMach: null,
+    idleAboveDrag: false,
+    polarOutside: [],
+    propulsionCautions: [],
+  };
+}
+
+/** Copies every field of `sample` into `out` and returns `out`. */
+export function copySampleInto(out: SampleRecord, sample: FlightSample): SampleRecord {
+  out.altitude_m = sample.altitude_m;
+  out.mach = sample.mach;
+  out.cas_m_s = sample.cas_m_s;
+  out.tas_m_s = sample.tas_m_s;
+  out.thrustAvailable_N = sample.thrustAvailable_N;
+  out.thrustUsed_N = sample.thrustUsed_N;
+  out.drag_N = sample.drag_N;
+  out.fuelFlow_kg_s = sample.fuelFlow_kg_s;
+  out.cl = sample.cl;
+  out.clMax = sample.clMax;
+  out.buffetLoadFactor = sample.buffetLoadFactor;
+  out.liftToDrag = sample.liftToDrag;
+  out.climbRate_m_s = sample.climbRate_m_s;
+  out.throatMach = sample.throatMach;
+  out.idleAboveDrag = sample.idleAboveDrag;
+  out.polarOutside = sample.polarOutside;
+  out.propulsionCautions = sample.propulsionCautions;
+  return out;
+}
+
+/** A sample of its own with the fields of `sample` (what an integrator returns of a record it will write again). */
+export function copyOfSample(sample: FlightSample): FlightSample {
+  return {
+    altitude_m: sample.altitude_m,
+    mach: sample.mach,
+    cas_m_s: sample.cas_m_s,
+    tas_m_s: sample.tas_m_s,
+    thrustAvailable_N: sample.thrustAvailable_N,
+    thrustUsed_N: sample.thrustUsed_N,
+    drag_N: sample.drag_N,
+    fuelFlow_kg_s: sample.fuelFlow_kg_s,
+    cl: sample.cl,
+    clMax: sample.clMax,
+    buffetLoadFactor: sample.buffetLoadFactor,
+    liftToDrag: sample.liftToDrag,
+    climbRate_m_s: sample.climbRate_m_s,
+    throatMach: sample.throatMach,
+    idleAboveDrag: sample.idleAboveDrag,
+    polarOutside: sample.polarOutside,
+    propulsionCautions: sample.propulsionCautions,
+  };
+}
+
 /** Packs a FlightSample from the point's numbers, its air data and its drag (a breakdown or a DragSample record). */
 export function packSample(
   altitude_m: number,
@@ -118,6 +189,40 @@ export function packSample(
     polarOutside: drag.outsideTables ?? [],
     propulsionCautions: engine.cautions,
   };
+}
+
+/** packSample written into `out` (a segment's own record, Segment.evaluate): the same fields from the same numbers. */
+export function packSampleInto(
+  out: SampleRecord,
+  altitude_m: number,
+  mach: number,
+  air: MissionAir,
+  tas_m_s: number,
+  drag: DragSample | DragBreakdown,
+  thrustAvailable_N: number,
+  thrustUsed_N: number,
+  fuelFlow_kg_s: number,
+  climbRate_m_s: number,
+  engine: InstalledPoint,
+): FlightSample {
+  out.altitude_m = altitude_m;
+  out.mach = mach;
+  out.cas_m_s = casOfMach(mach, air.pressure_Pa);
+  out.tas_m_s = tas_m_s;
+  out.thrustAvailable_N = thrustAvailable_N;
+  out.thrustUsed_N = thrustUsed_N;
+  out.drag_N = drag.drag_N;
+  out.fuelFlow_kg_s = fuelFlow_kg_s;
+  out.cl = drag.cl;
+  out.clMax = drag.clMax;
+  out.buffetLoadFactor = drag.buffetLoadFactor;
+  out.liftToDrag = drag.liftToDrag;
+  out.climbRate_m_s = climbRate_m_s;
+  out.throatMach = engine.perEngine.throatMach;
+  out.idleAboveDrag = 'limit' in engine && engine.limit === 'below_idle' && drag.drag_N < engine.thrust_N && climbRate_m_s === 0;
+  out.polarOutside = drag.outsideTables ?? [];
+  out.propulsionCautions = engine.cautions;
+  return out;
 }
 
 /** Fuel-exhaustion event function: >= 0 once the mass reaches zero-fuel mass. */

@@ -26,6 +26,7 @@ import {
   type SegmentStop,
   type StateVector,
 } from './missionState';
+import { copySampleInto, newSampleRecord, type SampleRecord } from './flightPoint';
 
 export interface SegmentRun {
   readonly end: StateVector;
@@ -36,7 +37,10 @@ export interface SegmentRun {
   readonly domainExit?: DomainExit;
 }
 
-/** Receives every accepted point (including the segment's first); the state is the integrator's buffer, valid during the call only (copy what is kept). */
+/**
+ * Receives every accepted point (including the segment's first); the state is the integrator's buffer and the sample
+ * may be the segment's record (Segment.evaluate), both valid during the call only (copy what is kept).
+ */
 export type SampleSink = (state: StateVector, sample: FlightSample) => void;
 
 const MAX_STEPS = 20000;
@@ -216,6 +220,28 @@ function accept(segment: Segment, y: StateVector): Evaluation {
   return ev;
 }
 
+/**
+ * An accepted point the time integrator keeps while it evaluates others: its own copies of the derivative and the
+ * sample, since a segment may write every evaluation into one buffer and one record (Segment.evaluate).
+ */
+interface HeldPoint {
+  readonly derivative: Float64Array<ArrayBuffer>;
+  readonly sample: SampleRecord;
+  breakCoordinate?: number;
+}
+
+function newHeldPoint(): HeldPoint {
+  return { derivative: new Float64Array(STATE_SIZE), sample: newSampleRecord(), breakCoordinate: Number.NaN };
+}
+
+/** Copies evaluation `ev` into `held` (valid until `held` is written again) and returns `held`. */
+function holdInto(held: HeldPoint, ev: Evaluation): HeldPoint {
+  held.derivative.set(ev.derivative);
+  copySampleInto(held.sample, ev.sample);
+  held.breakCoordinate = ev.breakCoordinate;
+  return held;
+}
+
 /** Cubic Hermite interpolant of the state at fraction theta of a step (dense output of order 3; Hairer, Norsett & Wanner, II.6). */
 function hermite(y0: StateVector, f0: Float64Array, y1: StateVector, f1: Float64Array, h: number, theta: number): StateVector {
   const t2 = theta * theta;
@@ -248,7 +274,8 @@ function locateEvent(
   h: number,
   index: number,
   gStart: number,
-  end: Evaluation & { readonly state: StateVector },
+  end: Evaluation,
+  endState: StateVector,
   trials: TrialSteps,
 ): number {
   const event = segment.events[index];
@@ -268,8 +295,8 @@ function locateEvent(
       const yt = trialStep(tau);
       return typeof yt === 'string' ? Number.NaN : event.g(yt, end.sample);
     };
-    const guess = illinois((tau) => event.g(hermite(y, k1, end.state, end.derivative, h, tau / h), end.sample), gStart, h, 0);
-    return refineOnStep(onStepState, guess, gStart, event.g(end.state, end.sample), h);
+    const guess = illinois((tau) => event.g(hermite(y, k1, endState, end.derivative, h, tau / h), end.sample), gStart, h, 0);
+    return refineOnStep(onStepState, guess, gStart, event.g(endState, end.sample), h);
   }
   return illinois(onStep, gStart, h, 0, event.timeTolerance_s ?? 0);
 }
@@ -353,8 +380,11 @@ export function integrateSegment(segment: Segment, start: StateVector, sink: Sam
   const y = start.slice();
   const outside = domainExit(domain, y);
   if (outside !== null) return { end: y, endSample: blankSample(y), stop: 'left_domain', domainExit: outside };
-  let ev = accept(segment, y);
+  // The accepted point and the next one alternate between two held copies (holdInto), the run's own: it returns
+  // one as its end sample.
+  let ev = holdInto(newHeldPoint(), accept(segment, y));
   if (notFiniteState(y) || notFiniteState(ev.derivative)) return { end: y, endSample: ev.sample, stop: 'numerical_failure' };
+  let spare = newHeldPoint();
   sink(y, ev.sample);
   if (noGroundProgress(domain, ev)) return { end: y, endSample: ev.sample, stop: 'no_ground_progress' };
   const gNow = segment.events.map((e) => e.g(y, ev.sample));
@@ -373,10 +403,11 @@ export function integrateSegment(segment: Segment, start: StateVector, sink: Sam
     }
     let h = inside.h;
     let next = inside.next;
-    let nextEv = accept(segment, next);
-    if (notFiniteState(next) || notFiniteState(nextEv.derivative)) {
+    const reached = accept(segment, next);
+    if (notFiniteState(next) || notFiniteState(reached.derivative)) {
       return { end: current, endSample: ev.sample, stop: 'numerical_failure' };
     }
+    const nextEv = holdInto(spare, reached);
     // A slope break of the right-hand side crossed well inside the step (none predicted, or the prediction missed):
     // the step is taken again to end there.
     const cut = breakFraction(segment, ev, current, nextEv, next, h);
@@ -387,7 +418,7 @@ export function integrateSegment(segment: Segment, start: StateVector, sink: Sam
         if (!notFiniteState(shorter) && !notFiniteState(shorterEv.derivative)) {
           h = cut * h;
           next = shorter;
-          nextEv = shorterEv;
+          holdInto(nextEv, shorterEv);
         }
       }
     }
@@ -402,7 +433,7 @@ export function integrateSegment(segment: Segment, start: StateVector, sink: Sam
         let tau = h;
         if (!(g === 0 && event.stateOnly)) {
           trials ??= new Map();
-          tau = locateEvent(segment, domain, current, ev.derivative, h, i, gNow[i], { ...nextEv, state: next }, trials);
+          tau = locateEvent(segment, domain, current, ev.derivative, h, i, gNow[i], nextEv, next, trials);
         }
         if (tau < firstTau) {
           firstTau = tau;
@@ -413,19 +444,21 @@ export function integrateSegment(segment: Segment, start: StateVector, sink: Sam
       }
     }
     if (firstIndex >= 0) {
+      let endSample: FlightSample = nextEv.sample;
       if (firstTau < h) {
         const located = trials?.get(firstTau) ?? rk4Step(segment, domain, current, ev.derivative, firstTau);
         if (typeof located === 'string') return { end: current, endSample: ev.sample, stop: 'left_domain', domainExit: located };
         next = located;
-        nextEv = accept(segment, next);
+        endSample = holdInto(nextEv, accept(segment, next)).sample;
       }
-      sink(next, nextEv.sample);
-      return { end: next, endSample: nextEv.sample, stop: segment.events[firstIndex].stop };
+      sink(next, endSample);
+      return { end: next, endSample, stop: segment.events[firstIndex].stop };
     }
     sink(next, nextEv.sample);
     if (noGroundProgress(domain, nextEv)) return { end: next, endSample: nextEv.sample, stop: 'no_ground_progress' };
     breakSlope = coordinateSlope(ev, current, nextEv, next);
     current = next;
+    spare = ev;
     ev = nextEv;
   }
   return { end: current, endSample: ev.sample, stop: 'step_limit' };

@@ -42,6 +42,11 @@ export interface FlightSample {
   readonly propulsionCautions: readonly Caution[];
 }
 
+/**
+ * What Segment.evaluate returns. A segment may write every evaluation into one derivative buffer and one sample
+ * record of its own: an evaluation is valid until the segment's next evaluate or derivative call, so an integrator
+ * copies what it keeps across them and returns a copy of its end sample.
+ */
 export interface Evaluation {
   /** d(state)/dt, STATE_SIZE entries. */
   readonly derivative: Float64Array<ArrayBuffer>;
@@ -85,6 +90,7 @@ export interface SegmentEvent {
 export interface Segment {
   /** Fixed step (s). */
   readonly step_s: number;
+  /** The derivative and sample at `state`; valid until the segment's next evaluate or derivative call (Evaluation). */
   evaluate(state: StateVector): Evaluation;
   /**
    * Optional cheaper right-hand side for the RK4 stages, whose samples nobody reads: must return exactly the values

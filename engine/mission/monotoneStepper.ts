@@ -27,6 +27,7 @@
  * piecewise-linear tables.
  */
 import { integrateSegment, notFiniteState, outsideDomain, UNBOUNDED_DOMAIN, type SampleSink, type SegmentRun, type StateDomain } from './integrator';
+import { copyOfSample } from './flightPoint';
 import { S_GROUND, STATE_SIZE, type Segment, type SegmentEvent, type SegmentStop, type StateVector } from './missionState';
 
 export interface MonotonePlan {
@@ -252,5 +253,6 @@ export function integrateMonotone(
       i++;
     }
   }
-  return { end: y, endSample: ev.sample, stop: plan.targetStop };
+  // The segment may write its next evaluation into the same record (Segment.evaluate): the run keeps a copy.
+  return { end: y, endSample: copyOfSample(ev.sample), stop: plan.targetStop };
 }

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { integrateSegment } from '../../../engine/mission/integrator';
 import { S_ALT, S_GROUND, S_MASS, STATE_SIZE, type FlightSample, type Segment } from '../../../engine/mission/missionState';
 import { expectClose } from '../../support/assertInDelta';
+import { recordingSink, reusingSegment } from '../../support/reusingSegment';
 
 const SAMPLE: FlightSample = {
   altitude_m: 0, mach: 0, cas_m_s: 0, tas_m_s: 0, thrustAvailable_N: 0, thrustUsed_N: 0, drag_N: 0, fuelFlow_kg_s: 0,
@@ -160,5 +161,56 @@ describe('integrator slope breaks', () => {
     // Straddling the break instead is a first-order error, far larger.
     const straddled = integrateSegment(kinked(), start(m0), () => {});
     expect(Math.abs(straddled.end[S_MASS] - exact)).toBeGreaterThan(10 * cutError);
+  });
+
+  it('integrateSegment cuts at the same breaks, bit for bit, when the segment writes every evaluation into one buffer and one record', () => {
+    const fresh = recordingSink();
+    const reused = recordingSink();
+    const a = integrateSegment(kinked([500, mStar, 1200]), start(m0), fresh.sink);
+    const b = integrateSegment(reusingSegment(kinked([500, mStar, 1200])), start(m0), reused.sink);
+    expectClose(a.end[S_MASS], exact, { abs: 3e-3 }, 'closed form across the break');
+    expect(b).toStrictEqual(a);
+    expect(reused.points).toStrictEqual(fresh.points);
+  });
+});
+
+describe('integrator and a segment that reuses its evaluation buffers', () => {
+  // dm/dt = -k m from 100 kg, the sample's drag standing for the mass: m(t) = 100 exp(-k t) (exact solution), so the
+  // sample event (drag below 60) fires at t = ln(100 / 60) / k = 51.08 s, and the state event (t = 52 s) in the
+  // same 7 s step: both are located, the sample event's trial points evaluated before the state event's search
+  // reads the step's end.
+  const k = 0.01;
+  const bothInOneStep = (): Segment => ({
+    step_s: 7,
+    evaluate: (y) => {
+      const d = new Float64Array(STATE_SIZE);
+      d[0] = 1;
+      d[S_MASS] = -k * y[S_MASS];
+      return { derivative: d, sample: { ...SAMPLE, drag_N: y[S_MASS], fuelFlow_kg_s: k * y[S_MASS] } };
+    },
+    events: [
+      { stop: 'thrust_below_drag', g: (_y, s) => 60 - s.drag_N },
+      { stop: 'time_reached', stateOnly: true, g: (y) => y[0] - 52 },
+    ],
+  });
+
+  it('integrateSegment gives the same run, bit for bit, when every evaluation and stage is written into one buffer and one record', () => {
+    const fresh = recordingSink();
+    const reused = recordingSink();
+    const a = integrateSegment(bothInOneStep(), start(100), fresh.sink);
+    const b = integrateSegment(reusingSegment(bothInOneStep()), start(100), reused.sink);
+    expect(a.stop).toBe('thrust_below_drag');
+    expectClose(a.end[0], Math.log(100 / 60) / k, { rel: 1e-6 }, 'exact: t = ln(100 / 60) / k');
+    expect(b).toStrictEqual(a);
+    expect(reused.points).toStrictEqual(fresh.points);
+  });
+
+  it('integrateSegment keeps its end sample when the segment is evaluated again after the run', () => {
+    const segment = reusingSegment(bothInOneStep());
+    const run = integrateSegment(segment, start(100), () => {});
+    const kept = { ...run.endSample };
+    segment.evaluate(start(1));
+    expect(run.endSample).toStrictEqual(kept);
+    expectClose(run.endSample.drag_N, 60, { abs: 1e-6 }, 'the event value: the drag stands for the mass, 60 kg at the event');
   });
 });

@@ -3,6 +3,7 @@ import { integrateSegment, type StateDomain } from '../../../engine/mission/inte
 import { integrateMonotone, intervalSteps, MAX_INTERVAL_STEPS, monotoneIntervalEnds, monotoneStepEnds } from '../../../engine/mission/monotoneStepper';
 import { S_ALT, S_GROUND, S_MASS, S_TAS, S_TIME, STATE_SIZE, type FlightSample, type Segment, type StateVector } from '../../../engine/mission/missionState';
 import { expectClose } from '../../support/assertInDelta';
+import { recordingSink, reusingSegment } from '../../support/reusingSegment';
 
 const SAMPLE: FlightSample = {
   altitude_m: 0, mach: 0, cas_m_s: 0, tas_m_s: 0, thrustAvailable_N: 0, thrustUsed_N: 0, drag_N: 0, fuelFlow_kg_s: 0,
@@ -134,6 +135,24 @@ describe('integrateMonotone', () => {
     const seen: number[] = [];
     integrateMonotone(linearCeilingClimb(a, b, q), start(10000), (y) => seen.push(y[S_ALT]), plan(5000, [1234.5]));
     expect(seen).toEqual([0, 1234.5, 5117.25, 9000]);
+  });
+
+  it('integrateMonotone gives the same run, bit for bit, when the segment writes every evaluation and stage into one buffer and one record', () => {
+    // A full climb over breaks, and one handed to the time integrator where the fuel runs out.
+    for (const zeroFuel_kg of [0, 9900]) {
+      const fresh = recordingSink();
+      const reused = recordingSink();
+      const freshRun = integrateMonotone(linearCeilingClimb(a, b, q, zeroFuel_kg), start(10000), fresh.sink, plan(600, [1234.5, 4000]));
+      const segment = reusingSegment(linearCeilingClimb(a, b, q, zeroFuel_kg));
+      const reusedRun = integrateMonotone(segment, start(10000), reused.sink, plan(600, [1234.5, 4000]));
+      expect(freshRun.stop).toBe(zeroFuel_kg > 0 ? 'fuel_exhausted' : 'altitude_reached');
+      expect(reusedRun).toStrictEqual(freshRun);
+      expect(reused.points).toStrictEqual(fresh.points);
+      // The run's end sample is its own: evaluating the segment again leaves it as it was.
+      segment.evaluate(start(1));
+      expect(reusedRun.endSample).toStrictEqual(freshRun.endSample);
+    }
+    expectClose(integrateMonotone(reusingSegment(linearCeilingClimb(a, b, q)), start(10000), () => {}, plan(600)).end[S_TIME], exactTime, { rel: 1e-7 }, 'closed form ln(a / (a - b h)) / b');
   });
 
   it('integrateMonotone hands a stalling climb to the time integrator, which stops it at the stall rate', () => {
