@@ -9,15 +9,15 @@ import { sameNumber } from '../core/sameNumber';
 import type { InstalledPoint, RatingName } from '../propulsion/propulsionModel';
 import type { SpeedSchedule } from './missionTypes';
 import { pressureAltitudeRate } from './energyShareFactor';
-import { newDragSample } from '../aero/aeroModel';
-import { dragForceAt, dragSampleAt, fuelExhaustedEvents, packSample, pathDerivative, writePathDerivative } from './flightPoint';
+import { dragForceAt, dragSampleAt, fuelExhaustedEvents, packSampleInto, writePathDerivative } from './flightPoint';
 import { flyMonotoneSegment, missionDomain } from './flySegment';
 import { BASE_ALTITUDE_STEP, pathBreakAltitudes } from './stepBreaks';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
 import { flyLevelSpeedChange } from './levelSpeedChange';
+import { segmentBuffers } from './segmentBuffers';
 import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
 import { LAPSE_JUMPS_M, type MissionAir } from './missionAtmosphere';
-import { S_ALT, S_MASS, S_TAS, STATE_SIZE, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
+import { S_ALT, S_MASS, S_TAS, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
 import { schedulePhases } from './speedSchedule';
 import { stageTrack } from './stageMemo';
 import { msg, q } from '../units/messageParts';
@@ -58,20 +58,20 @@ export function makeClimbSegment(
       cached = true;
     }
   };
-  // Accepted points write their drag into one record (no air point or breakdown objects: the same bits as airPointIn).
-  const drag = newDragSample();
+  // Accepted points write their drag into one record (no air point or breakdown objects: the same bits as airPointIn)
+  // and their derivative and sample into one buffer and one record (Segment.evaluate).
+  const { drag, rates, stage, point } = segmentBuffers(ctx);
   const evaluate: Segment['evaluate'] = (y) => {
     const h = y[S_ALT];
     prepare(h);
     dragSampleAt(input, h, mach, y[S_MASS], drag);
     const tas_m_s = mach * air!.speedOfSound_m_s;
     const rate = pressureAltitudeRate(th!.thrust_N, drag.drag_N, tas_m_s, y[S_MASS], f, air!.temperature_K, air!.isaTemperature_K);
-    const d = pathDerivative(rate, tas_m_s, air!, target.env.wind_m_s, th!.fuelFlow_kg_s);
-    return { derivative: d, sample: packSample(h, mach, air!, tas_m_s, drag, th!.thrust_N, th!.thrust_N, th!.fuelFlow_kg_s, rate, th!) };
+    const d = writePathDerivative(rates, rate, tas_m_s, air!, target.env.wind_m_s, th!.fuelFlow_kg_s);
+    return { derivative: d, sample: packSampleInto(point, h, mach, air!, tas_m_s, drag, th!.thrust_N, th!.thrust_N, th!.fuelFlow_kg_s, rate, th!) };
   };
   // RK4 stages need no sample, so no air point object either: the same drag query and TAS (M a) as airPointIn,
   // written into one buffer the stages share (Segment.derivative).
-  const stage = new Float64Array(STATE_SIZE);
   const derivative = (y: StateVector): Evaluation['derivative'] => {
     const h = y[S_ALT];
     const m = y[S_MASS];

@@ -10,15 +10,15 @@ import { sameNumber } from '../core/sameNumber';
 import type { InstalledPoint } from '../propulsion/propulsionModel';
 import type { SpeedSchedule } from './missionTypes';
 import { pressureAltitudeRate } from './energyShareFactor';
-import { newDragSample } from '../aero/aeroModel';
-import { dragForceAt, dragSampleAt, fuelExhaustedEvents, packSample, pathDerivative, writePathDerivative } from './flightPoint';
+import { dragForceAt, dragSampleAt, fuelExhaustedEvents, packSampleInto, writePathDerivative } from './flightPoint';
 import { flyMonotoneSegment, missionDomain } from './flySegment';
 import { BASE_ALTITUDE_STEP, pathBreakAltitudes } from './stepBreaks';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
 import { flyLevelSpeedChange } from './levelSpeedChange';
+import { segmentBuffers } from './segmentBuffers';
 import { BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
 import { G0_M_S2, LAPSE_JUMPS_M, missionAir, type MissionAir } from './missionAtmosphere';
-import { S_ALT, S_MASS, S_TAS, STATE_SIZE, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
+import { S_ALT, S_MASS, S_TAS, type Evaluation, type FlightSample, type Segment, type SegmentEvent, type StateVector } from './missionState';
 import { schedulePhases } from './speedSchedule';
 import { stageTrack } from './stageMemo';
 import { appendCaution } from './timeHistoryBuilder';
@@ -65,9 +65,10 @@ function makeDescentSegment(
       cached = true;
     }
   };
-  // The drag of a point, written into one record (no air point or breakdown objects: the same bits as airPointIn).
-  const drag = newDragSample();
-  const pointOf = (y: StateVector, withSample: boolean) => {
+  // The drag of a point, written into one record (no air point or breakdown objects: the same bits as airPointIn),
+  // and an accepted point's derivative and sample into one buffer and one record (Segment.evaluate).
+  const { drag, rates, stage, point } = segmentBuffers(ctx);
+  const pointOf = (y: StateVector, withSample: boolean, d: Float64Array<ArrayBuffer>) => {
     const h = y[S_ALT];
     const m = y[S_MASS];
     prepare(h);
@@ -96,16 +97,12 @@ function makeDescentSegment(
       thrustAvailable = withSample ? input.propulsion.atRating(condition, 'maxClimb').thrust_N : Number.NaN;
       if (engine.limit === 'below_idle') onBelowIdle(y[0], required, engine.thrust_N);
     }
-    const d = pathDerivative(rate, tas_m_s, air, target.env.wind_m_s, engine.fuelFlow_kg_s);
-    return { derivative: d, sample: withSample ? packSample(h, mach, air, tas_m_s, drag, thrustAvailable, thrust, engine.fuelFlow_kg_s, rate, engine) : null };
+    writePathDerivative(d, rate, tas_m_s, air, target.env.wind_m_s, engine.fuelFlow_kg_s);
+    return withSample ? packSampleInto(point, h, mach, air, tas_m_s, drag, thrustAvailable, thrust, engine.fuelFlow_kg_s, rate, engine) : null;
   };
-  const evaluate: Segment['evaluate'] = (y) => {
-    const { derivative, sample } = pointOf(y, true);
-    return { derivative, sample: sample! };
-  };
+  const evaluate: Segment['evaluate'] = (y) => ({ derivative: rates, sample: pointOf(y, true, rates)! });
   // An idle RK4 stage (no sample): the same drag query, TAS (M a) and rate as pointOf, without its objects, written
   // into one buffer the stages share (Segment.derivative).
-  const stage = new Float64Array(STATE_SIZE);
   const idleStage = (y: StateVector): Evaluation['derivative'] => {
     const h = y[S_ALT];
     const m = y[S_MASS];
@@ -118,7 +115,11 @@ function makeDescentSegment(
     return writePathDerivative(stage, rate, tas_m_s, air, target.env.wind_m_s, engine.fuelFlow_kg_s);
   };
   // RK4 stages need no sample.
-  const derivative = (y: StateVector): Evaluation['derivative'] => (mode.kind === 'idle' ? idleStage(y) : pointOf(y, false).derivative);
+  const derivative = (y: StateVector): Evaluation['derivative'] => {
+    if (mode.kind === 'idle') return idleStage(y);
+    pointOf(y, false, stage);
+    return stage;
+  };
 
   const events: SegmentEvent[] = [
     { stop: 'altitude_reached', stateOnly: true, g: (y) => toAltitude_m - y[S_ALT] },

@@ -7,7 +7,7 @@ import type { InstalledPoint, RatingName } from '../propulsion/propulsionModel';
 import { casOfMach, missionAir, type MissionAir } from './missionAtmosphere';
 import type { MissionInput } from './missionTypes';
 import type { MissionContext } from './missionContext';
-import { S_ALT, S_MASS, STATE_SIZE, type Evaluation, type FlightSample, type SegmentEvent } from './missionState';
+import { S_ALT, S_MASS, S_TAS, STATE_SIZE, type Evaluation, type FlightSample, type SegmentEvent } from './missionState';
 
 export interface AirPoint {
   readonly altitude_m: number;
@@ -252,7 +252,7 @@ export function pathDerivative(
   return writePathDerivative(new Float64Array(STATE_SIZE), pressureAltitudeRate_m_s, tas_m_s, air, wind_m_s, fuelFlow_kg_s);
 }
 
-/** pathDerivative written into `d` (STATE_SIZE entries, its TAS entry left as it is): an RK4 stage's reused buffer. */
+/** pathDerivative written into `d` (STATE_SIZE entries, every one written: the TAS holds): a reused buffer (segmentBuffers.ts). */
 export function writePathDerivative(
   d: Float64Array<ArrayBuffer>,
   pressureAltitudeRate_m_s: number,
@@ -268,5 +268,6 @@ export function writePathDerivative(
   d[2] = horizontal + wind_m_s;
   d[S_ALT] = pressureAltitudeRate_m_s;
   d[S_MASS] = -fuelFlow_kg_s;
+  d[S_TAS] = 0;
   return d;
 }

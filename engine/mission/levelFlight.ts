@@ -5,12 +5,12 @@
  * variant takes its altitude algebraically from the mass and neglects the
  * slow climb's potential-energy term (flight-path angle about 1e-4 rad).
  */
-import { newDragSample } from '../aero/aeroModel';
 import type { RatingName } from '../propulsion/propulsionModel';
-import { dragForceAt, dragSampleAt, fuelExhaustedEvents, packSample, partPowerFuelFlow } from './flightPoint';
+import { dragForceAt, dragSampleAt, fuelExhaustedEvents, packSampleInto, partPowerFuelFlow } from './flightPoint';
 import { missionAir } from './missionAtmosphere';
+import { segmentBuffers } from './segmentBuffers';
 import { distanceIndex, type LegTarget, type MissionContext } from './missionContext';
-import { S_MASS, S_TIME, STATE_SIZE, type Evaluation, type Segment, type SegmentEvent, type StateVector } from './missionState';
+import { S_ALT, S_MASS, S_TAS, S_TIME, type Evaluation, type Segment, type SegmentEvent, type StateVector } from './missionState';
 
 export interface LevelFlightSpec {
   /** Pressure altitude (m) as a function of mass (kg); constant for level flight. */
@@ -38,11 +38,14 @@ export function makeLevelSegment(ctx: MissionContext, target: LegTarget, spec: L
     d[0] = 1;
     d[1] = tas_m_s;
     d[2] = tas_m_s + target.env.wind_m_s;
+    d[S_ALT] = 0;
     d[S_MASS] = -fuelFlow_kg_s;
+    d[S_TAS] = 0;
     return d;
   };
-  // Accepted points write their drag into one record (no air point or breakdown objects: the same bits as airPoint).
-  const drag = newDragSample();
+  // Accepted points write their drag into one record (no air point or breakdown objects: the same bits as airPoint)
+  // and their derivative and sample into one buffer and one record (Segment.evaluate).
+  const { drag, rates, stage, point } = segmentBuffers(ctx);
   const evaluate: Segment['evaluate'] = (y) => {
     const m = y[S_MASS];
     const h = spec.altitudeOf(m);
@@ -54,15 +57,14 @@ export function makeLevelSegment(ctx: MissionContext, target: LegTarget, spec: L
     const engine = input.propulsion.forThrust(condition, drag.drag_N, spec.ceiling);
     const available = input.propulsion.atRating(condition, spec.ceiling).thrust_N;
     return {
-      derivative: derivativeInto(new Float64Array(STATE_SIZE), tas_m_s, engine.fuelFlow_kg_s),
-      sample: packSample(h, mach, air, tas_m_s, drag, available, engine.thrust_N, engine.fuelFlow_kg_s, 0, engine),
+      derivative: derivativeInto(rates, tas_m_s, engine.fuelFlow_kg_s),
+      sample: packSampleInto(point, h, mach, air, tas_m_s, drag, available, engine.thrust_N, engine.fuelFlow_kg_s, 0, engine),
       breakCoordinate: engine.power,
     };
   };
   // RK4 stages need no sample, so no thrust-available query (a full rated-thrust lookup) and no sample object,
   // no air point or drag breakdown, and no part-power point either: the same air data, drag force and part-power
   // solve as evaluate, and its fuel flow alone (the same bits), written into one buffer the stages share.
-  const stage = new Float64Array(STATE_SIZE);
   const derivative = (y: StateVector): Evaluation['derivative'] => {
     const m = y[S_MASS];
     const h = spec.altitudeOf(m);

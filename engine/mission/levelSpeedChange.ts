@@ -5,14 +5,14 @@
  * performance text, e.g. Anderson, Aircraft Performance and Design, ch. 6).
  */
 import type { RatingName } from '../propulsion/propulsionModel';
-import { newDragSample } from '../aero/aeroModel';
-import { dragForceAt, dragSampleAt, fuelExhaustedEvents, packSample } from './flightPoint';
+import { dragForceAt, dragSampleAt, fuelExhaustedEvents, packSampleInto } from './flightPoint';
 import { flyMonotoneSegment, missionDomain } from './flySegment';
 import { speedBreaks } from './stepBreaks';
 import { legFailed, legOk, segmentStopFailure, type LegOutcome } from './legOutcome';
+import { segmentBuffers } from './segmentBuffers';
 import { BASE_MONOTONE_STEP, BASE_STEP_S, type LegTarget, type MissionContext } from './missionContext';
 import { missionAir } from './missionAtmosphere';
-import { S_ALT, S_MASS, S_TAS, STATE_SIZE, type Evaluation, type Segment, type SegmentEvent, type StateVector } from './missionState';
+import { S_ALT, S_MASS, S_TAS, type Evaluation, type Segment, type SegmentEvent, type StateVector } from './missionState';
 import { msg, q } from '../units/messageParts';
 
 /** Least acceleration (m/s^2) for stepping a speed change in TAS; a slower change goes to the time integrator. */
@@ -39,25 +39,26 @@ export function flyLevelSpeedChange(
     d[0] = 1;
     d[1] = tas_m_s;
     d[2] = tas_m_s + target.env.wind_m_s;
+    d[S_ALT] = 0;
     d[S_MASS] = -fuelFlow_kg_s;
     d[S_TAS] = mass_kg > 0 ? (thrust_N - drag_N) / mass_kg : 0;
     return d;
   };
-  // Accepted points write their drag into one record (no air point or breakdown objects: the same bits as airPoint).
+  // Accepted points write their drag into one record (no air point or breakdown objects: the same bits as airPoint)
+  // and their derivative and sample into one buffer and one record (Segment.evaluate).
   const air = missionAir(altitude_m, dev);
-  const drag = newDragSample();
+  const { drag, rates, stage, point } = segmentBuffers(ctx);
   const evaluate: Segment['evaluate'] = (y) => {
     const m = y[S_MASS];
     const mach = Math.max(y[S_TAS], 0) / a;
     dragSampleAt(input, altitude_m, mach, m, drag);
     const tas_m_s = mach * air.speedOfSound_m_s;
     const th = input.propulsion.atRating({ altitude_m, mach, isaDev_K: dev }, rating);
-    const d = derivativeInto(new Float64Array(STATE_SIZE), tas_m_s, m, th.thrust_N, th.fuelFlow_kg_s, drag.drag_N);
-    return { derivative: d, sample: packSample(altitude_m, mach, air, tas_m_s, drag, th.thrust_N, th.thrust_N, th.fuelFlow_kg_s, 0, th) };
+    const d = derivativeInto(rates, tas_m_s, m, th.thrust_N, th.fuelFlow_kg_s, drag.drag_N);
+    return { derivative: d, sample: packSampleInto(point, altitude_m, mach, air, tas_m_s, drag, th.thrust_N, th.thrust_N, th.fuelFlow_kg_s, 0, th) };
   };
   // RK4 stages need no sample, so no air point or drag breakdown: the same drag force and rated point as pointOf,
   // written into one buffer the stages share (Segment.derivative).
-  const stage = new Float64Array(STATE_SIZE);
   const derivative = (y: StateVector): Evaluation['derivative'] => {
     const m = y[S_MASS];
     const mach = Math.max(y[S_TAS], 0) / a;

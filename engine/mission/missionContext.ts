@@ -6,6 +6,7 @@ import type { DistanceBasis, Leg, MissionInput } from './missionTypes';
 import { S_AIR, S_GROUND } from './missionState';
 import type { FlightLog } from './timeHistoryBuilder';
 import type { PassMemo } from './passMemo';
+import type { SegmentBuffers } from './segmentBuffers';
 
 export interface LegEnvironmentResolved {
   readonly isaDev_K: number;
@@ -26,6 +27,8 @@ export interface MissionContext {
   readonly log: FlightLog;
   /** What earlier passes of the same solve flew (passMemo.ts); read only while fuel may pass below zero-fuel mass (the iteration's passes). */
   readonly memo?: PassMemo;
+  /** The records the solve's segments write their evaluations into (segmentBuffers.ts); absent: each segment has its own. */
+  readonly buffers?: SegmentBuffers;
 }
 
 /** Where a leg's samples and cautions go. */

@@ -35,6 +35,7 @@ import { createPassMemo, type PassMemo } from './passMemo';
 import { S_AIR, S_GROUND, S_MASS, S_TIME } from './missionState';
 import type { MissionInput, MissionResult, MissionStart, MissionStatus, ReserveBreakdown } from './missionTypes';
 import { appendCaution, buildTimeHistory, createFlightLog, freshFlightLog } from './timeHistoryBuilder';
+import { newSegmentBuffers } from './segmentBuffers';
 import { messageText, msg, partsOf, q, withParts, type MessageParts } from '../units/messageParts';
 
 const NO_RESERVES: ReserveBreakdown = { contingency_kg: 0, alternate_kg: 0, missedApproach_kg: 0, alternateApproach_kg: 0, finalReserve_kg: 0, extra_kg: 0, total_kg: 0 };
@@ -249,7 +250,7 @@ function solveGuarded(input: MissionInput, options: SolveOptions): MissionResult
   const taxi = taxiOutFuel(input);
   const flightOptions: FlightOptions = { stepScale, allowNegativeFuel: false };
   const log = createFlightLog(input.airframe, input.cautionSettings, false, options.timeHistory !== false);
-  const base: MissionContext = { input, options: flightOptions, zeroFuelMass_kg: zfw, log, memo: options.passMemo ?? createPassMemo() };
+  const base: MissionContext = { input, options: flightOptions, zeroFuelMass_kg: zfw, log, memo: options.passMemo ?? createPassMemo(), buffers: newSegmentBuffers() };
   const solve = input.solve;
   const hasSolvable = solvableLegIndex(input) >= 0;
 
