@@ -41,5 +41,6 @@ export function flySegment(ctx: MissionContext, target: LegTarget, segment: Segm
 
 /** Integrates `segment` from `start` along a monotone component (monotoneStepper.ts), writing every accepted point to the flight log. */
 export function flyMonotoneSegment(ctx: MissionContext, target: LegTarget, segment: Segment, start: StateVector, plan: MonotonePlan): SegmentRun {
-  return integrateMonotone(segment, start, (state, sample) => appendSample(ctx.log, target, state, sample), plan, missionDomain(ctx, target));
+  // The solve's shared stage scratch where the context has one (segmentBuffers.ts), else the run's own.
+  return integrateMonotone(segment, start, (state, sample) => appendSample(ctx.log, target, state, sample), plan, missionDomain(ctx, target), ctx.buffers?.monotone);
 }

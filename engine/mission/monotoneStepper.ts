@@ -110,6 +110,19 @@ export function monotoneStepEnds(from: number, to: number, breaks: readonly numb
   return ends;
 }
 
+/**
+ * The stepper's stage point and its first three stage slopes (k1 at [0, STATE_SIZE), k2 after it, then k3): written
+ * and read within each step only, so runs flown one after another can share one (segmentBuffers.ts).
+ */
+export interface MonotoneScratch {
+  readonly stagePoint: StateVector;
+  readonly slopes: Float64Array<ArrayBuffer>;
+}
+
+export function newMonotoneScratch(): MonotoneScratch {
+  return { stagePoint: new Float64Array(STATE_SIZE), slopes: new Float64Array(3 * STATE_SIZE) };
+}
+
 /** Fraction of a step by which a segment's first and last stages are moved inside it. */
 const NUDGE = 1e-9;
 
@@ -136,7 +149,8 @@ function handOver(segment: Segment, from: StateVector, skipFirst: boolean, sink:
 /**
  * Integrates `segment` from `start` (not modified) to `plan.to` along
  * `plan.component`, handing each accepted point to `sink`; see the file
- * comment for when it hands over to the time integrator.
+ * comment for when it hands over to the time integrator. `scratch` holds the
+ * stage point and slopes (a run's own when not given).
  */
 export function integrateMonotone(
   segment: Segment,
@@ -144,6 +158,7 @@ export function integrateMonotone(
   sink: SampleSink,
   plan: MonotonePlan,
   domain: StateDomain = UNBOUNDED_DOMAIN,
+  scratch?: MonotoneScratch,
 ): SegmentRun {
   const c = plan.component;
   const direction = plan.to >= start[c] ? 1 : -1;
@@ -161,9 +176,9 @@ export function integrateMonotone(
   sink(y, ev.sample);
   const intervals = monotoneIntervalEnds(start[c], plan.to, plan.breaks);
   const intervalCount = intervals.length;
-  const tmp = new Float64Array(STATE_SIZE) as StateVector;
-  // The first three stage slopes in one array: k1 at [0, STATE_SIZE), k2 after it, then k3.
-  const ks = new Float64Array(3 * STATE_SIZE);
+  const stageScratch = scratch ?? newMonotoneScratch();
+  const tmp = stageScratch.stagePoint;
+  const ks = stageScratch.slopes;
   // The accepted state and the next one alternate between `y` and `spare` (the sink and the events read a state
   // when it is handed over and keep nothing of it).
   let spare = new Float64Array(STATE_SIZE) as StateVector;

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { integrateSegment, type StateDomain } from '../../../engine/mission/integrator';
-import { integrateMonotone, intervalSteps, MAX_INTERVAL_STEPS, monotoneIntervalEnds, monotoneStepEnds } from '../../../engine/mission/monotoneStepper';
+import { integrateMonotone, intervalSteps, MAX_INTERVAL_STEPS, monotoneIntervalEnds, monotoneStepEnds, newMonotoneScratch } from '../../../engine/mission/monotoneStepper';
 import { S_ALT, S_GROUND, S_MASS, S_TAS, S_TIME, STATE_SIZE, type FlightSample, type Segment, type StateVector } from '../../../engine/mission/missionState';
 import { expectClose } from '../../support/assertInDelta';
 import { recordingSink, reusingSegment } from '../../support/reusingSegment';
@@ -153,6 +153,18 @@ describe('integrateMonotone', () => {
       expect(reusedRun.endSample).toStrictEqual(freshRun.endSample);
     }
     expectClose(integrateMonotone(reusingSegment(linearCeilingClimb(a, b, q)), start(10000), () => {}, plan(600)).end[S_TIME], exactTime, { rel: 1e-7 }, 'closed form ln(a / (a - b h)) / b');
+  });
+
+  it('integrateMonotone writes its stage scratch before reading it: a scratch full of NaN, or one a run before used, gives the same run', () => {
+    const own = integrateMonotone(linearCeilingClimb(a, b, q), start(10000), () => {}, plan(600, [1234.5, 4000]));
+    const poisoned = newMonotoneScratch();
+    poisoned.stagePoint.fill(Number.NaN);
+    poisoned.slopes.fill(Number.NaN);
+    expect(integrateMonotone(linearCeilingClimb(a, b, q), start(10000), () => {}, plan(600, [1234.5, 4000]), undefined, poisoned)).toStrictEqual(own);
+    // The same scratch again, after a run that stalled in it.
+    integrateMonotone(linearCeilingClimb(20, 20 / 9450, q, 0, 9400), start(10000), () => {}, { ...plan(600), to: 9400 }, undefined, poisoned);
+    expect(integrateMonotone(linearCeilingClimb(a, b, q), start(10000), () => {}, plan(600, [1234.5, 4000]), undefined, poisoned)).toStrictEqual(own);
+    expectClose(own.end[S_TIME], exactTime, { rel: 1e-7 }, 'closed form ln(a / (a - b h)) / b');
   });
 
   it('integrateMonotone hands a stalling climb to the time integrator, which stops it at the stall rate', () => {
