@@ -157,41 +157,7 @@ export function copyOfSample(sample: FlightSample): FlightSample {
   };
 }
 
-/** Packs a FlightSample from the point's numbers, its air data and its drag (a breakdown or a DragSample record). */
-export function packSample(
-  altitude_m: number,
-  mach: number,
-  air: MissionAir,
-  tas_m_s: number,
-  drag: DragSample | DragBreakdown,
-  thrustAvailable_N: number,
-  thrustUsed_N: number,
-  fuelFlow_kg_s: number,
-  climbRate_m_s: number,
-  engine: InstalledPoint,
-): FlightSample {
-  return {
-    altitude_m,
-    mach,
-    cas_m_s: casOfMach(mach, air.pressure_Pa),
-    tas_m_s,
-    thrustAvailable_N,
-    thrustUsed_N,
-    drag_N: drag.drag_N,
-    fuelFlow_kg_s,
-    cl: drag.cl,
-    clMax: drag.clMax,
-    buffetLoadFactor: drag.buffetLoadFactor,
-    liftToDrag: drag.liftToDrag,
-    climbRate_m_s,
-    throatMach: engine.perEngine.throatMach,
-    idleAboveDrag: 'limit' in engine && engine.limit === 'below_idle' && drag.drag_N < engine.thrust_N && climbRate_m_s === 0,
-    polarOutside: drag.outsideTables ?? [],
-    propulsionCautions: engine.cautions,
-  };
-}
-
-/** packSample written into `out` (a segment's own record, Segment.evaluate): the same fields from the same numbers. */
+/** Writes a FlightSample into `out` (the solve's shared record, Segment.evaluate) from the point's numbers, its air data and its drag (a breakdown or a DragSample record). */
 export function packSampleInto(
   out: SampleRecord,
   altitude_m: number,

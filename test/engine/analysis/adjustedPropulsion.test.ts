@@ -12,6 +12,17 @@ import { keyOutline } from '../../support/objectShape';
 const engine = { thrust_N: 160e3, lapse: 'mattingly' as const, tsfc_kg_N_s: 1.6e-5 };
 const cond = { altitude_m: 9000, mach: 0.78, isaDev_K: 0 };
 
+/** The installed model on the invented parametric demo deck with the long pitot inlet. */
+function parametricInstalled() {
+  return makeInstalledPropulsion({
+    deck: buildParametricDeck(DEMO_ENGINE_SPEC),
+    engineCount: 2,
+    inlet: LONG_PITOT,
+    installation: { bleed: { kind: 'coreFraction', fraction: 0.02 }, powerExtraction_W: 60e3 },
+    cautionSettings: DEFAULT_CAUTION_SETTINGS,
+  });
+}
+
 describe('adjustPropulsion', () => {
   it('adjustPropulsion raises thrust by C_ram dEta of deck thrust at the same fuel flow (Raymer ram-recovery correction)', () => {
     // Raymer, Aircraft Design: A Conceptual Approach, installed thrust: % loss = C_ram (eta_ref - eta) x 100.
@@ -49,13 +60,7 @@ describe('adjustPropulsion', () => {
   });
 
   it('adjustPropulsion gives the fuel flow alone of its part-power point, to the bit, and offers it only without a recovery change', () => {
-    const base = makeInstalledPropulsion({
-      deck: buildParametricDeck(DEMO_ENGINE_SPEC),
-      engineCount: 2,
-      inlet: LONG_PITOT,
-      installation: { bleed: { kind: 'coreFraction', fraction: 0.02 }, powerExtraction_W: 60e3 },
-      cautionSettings: DEFAULT_CAUTION_SETTINGS,
-    });
+    const base = parametricInstalled();
     const scaled = adjustPropulsion(base, { recoveryDelta: 0, cRam: 1.35, fuelFlowScale: 1.01 });
     const top = base.atRating(cond, 'maxCruise').thrust_N;
     for (const share of [0.3, 0.55, 0.8, 1.2]) {
@@ -67,13 +72,7 @@ describe('adjustPropulsion', () => {
   });
 
   it('adjustPropulsion builds its model and its points in the installed model\'s key order (one shape for the mission\'s reads)', () => {
-    const base = makeInstalledPropulsion({
-      deck: buildParametricDeck(DEMO_ENGINE_SPEC),
-      engineCount: 2,
-      inlet: LONG_PITOT,
-      installation: { bleed: { kind: 'coreFraction', fraction: 0.02 }, powerExtraction_W: 60e3 },
-      cautionSettings: DEFAULT_CAUTION_SETTINGS,
-    });
+    const base = parametricInstalled();
     const scaled = adjustPropulsion(base, { recoveryDelta: 0, cRam: 1.35, fuelFlowScale: 1.01 });
     const raised = adjustPropulsion(base, { recoveryDelta: 0.01, cRam: 1.35, fuelFlowScale: 1 });
     const top = base.atRating(cond, 'maxCruise').thrust_N;
