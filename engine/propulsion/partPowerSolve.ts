@@ -396,25 +396,27 @@ function solveOnSegment(solve: PartPowerSolve, lo: number, loThrust_N: number, h
   const xb = nodePower(lo, hi, b);
   let guess = inverseCubicZero(nodePower(lo, hi, j), nodePower(lo, hi, j + 1), nodePower(lo, hi, j + 2), nodePower(lo, hi, j + 3), f0, f1, f2, f3);
   if (!(guess > xa && guess < xb)) guess = xa - (fa * (xb - xa)) / (fb - fa);
-  let x0 = xa;
-  let fx0 = fa;
-  let x1 = xb;
-  let fx1 = fb;
-  if (guess > xa && guess < xb) {
+  return rootFromGuess(solve, guess, xa, fa, xb, fb, fTol);
+}
+
+/**
+ * The root in the bracket [lo, hi] (residuals fLo < 0 < fHi): `guess` evaluated first when it lies strictly inside
+ * (NaN: no guess), returned when it meets the tolerance, else the side of the bracket it replaces; then a bracketed
+ * secant on what is left.
+ */
+function rootFromGuess(solve: PartPowerSolve, guess: number, lo: number, fLo: number, hi: number, fHi: number, fTol: number): PartPowerRoot {
+  if (guess > lo && guess < hi) {
     const g = solve.residual(guess);
     if (Math.abs(g) <= fTol) return { ok: true, power: guess, limit: 'within' };
     if (g < 0) {
-      x0 = guess;
-      fx0 = g;
+      lo = guess;
+      fLo = g;
     } else {
-      x1 = guess;
-      fx1 = g;
+      hi = guess;
+      fHi = g;
     }
   }
-  return finishRoot(bracketedSecant(solve.residual, x0, fx0, x1, fx1, { fTol, xTol: 0, maxIterations: 100 }));
-}
-
-function finishRoot(root: ReturnType<typeof bracketedSecant>): PartPowerRoot {
+  const root = bracketedSecant(solve.residual, lo, fLo, hi, fHi, { fTol, xTol: 0, maxIterations: 100 });
   if (!root.ok) return { ok: false, error: { code: 'did_not_converge', message: root.error.message } };
   return { ok: true, power: root.value.x, limit: 'within' };
 }
@@ -498,20 +500,9 @@ export function solvePartPower(
       }
     }
     return solveOnSegment(solve, lo, loT, hi, hiT, fTol);
-  } else if (!curve) {
-    const ratio = hiThrust > 0 ? hiDeck / hiThrust : 1;
-    const guess = solve.access.powerForThrust(condition, perEngineRequired_N * ratio, ceilingPower);
-    if (guess !== null && guess > lo && guess < hi) {
-      const g = solve.residual(guess);
-      if (Math.abs(g) <= fTol) return { ok: true, power: guess, limit: 'within' };
-      if (g > 0) {
-        hi = guess;
-        fHi = g;
-      } else {
-        lo = guess;
-        fLo = g;
-      }
-    }
   }
-  return finishRoot(bracketedSecant(solve.residual, lo, fLo, hi, fHi, { fTol, xTol: 0, maxIterations: 100 }));
+  // Without a curve, the deck's own inversion at the deck thrust scaled as the ceiling's is the first guess.
+  const ratio = hiThrust > 0 ? hiDeck / hiThrust : 1;
+  const guess = curve ? null : solve.access.powerForThrust(condition, perEngineRequired_N * ratio, ceilingPower);
+  return rootFromGuess(solve, guess ?? Number.NaN, lo, fLo, hi, fHi, fTol);
 }
