@@ -136,25 +136,7 @@ export function copySampleInto(out: SampleRecord, sample: FlightSample): SampleR
 
 /** A sample of its own with the fields of `sample` (what an integrator returns of a record it will write again). */
 export function copyOfSample(sample: FlightSample): FlightSample {
-  return {
-    altitude_m: sample.altitude_m,
-    mach: sample.mach,
-    cas_m_s: sample.cas_m_s,
-    tas_m_s: sample.tas_m_s,
-    thrustAvailable_N: sample.thrustAvailable_N,
-    thrustUsed_N: sample.thrustUsed_N,
-    drag_N: sample.drag_N,
-    fuelFlow_kg_s: sample.fuelFlow_kg_s,
-    cl: sample.cl,
-    clMax: sample.clMax,
-    buffetLoadFactor: sample.buffetLoadFactor,
-    liftToDrag: sample.liftToDrag,
-    climbRate_m_s: sample.climbRate_m_s,
-    throatMach: sample.throatMach,
-    idleAboveDrag: sample.idleAboveDrag,
-    polarOutside: sample.polarOutside,
-    propulsionCautions: sample.propulsionCautions,
-  };
+  return copySampleInto(newSampleRecord(), sample);
 }
 
 /** Writes a FlightSample into `out` (the solve's shared record, Segment.evaluate) from the point's numbers, its air data and its drag (a breakdown or a DragSample record). */
